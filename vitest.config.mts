@@ -1,0 +1,15 @@
+import { defineConfig } from 'vitest/config';
+import path from 'node:path';
+
+export default defineConfig({
+  resolve: { alias: { '@': path.resolve(__dirname) } },
+  test: {
+    include: ['tests/**/*.test.ts'],
+    exclude: ['tests/e2e/**', 'node_modules/**'],
+    environment: 'node',
+    // API tests share one database; running files one at a time keeps them independent.
+    fileParallelism: false,
+    testTimeout: 20000,
+    hookTimeout: 60000,
+  },
+});
