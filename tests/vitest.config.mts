@@ -2,7 +2,8 @@ import { defineConfig } from 'vitest/config';
 import path from 'node:path';
 
 export default defineConfig({
-  resolve: { alias: { '@': path.resolve(__dirname) } },
+  root: path.resolve(import.meta.dirname, '..'),
+  resolve: { alias: { '@': path.resolve(import.meta.dirname, '..'), 'server-only': path.resolve(import.meta.dirname, 'support/server-only-stub.ts') } },
   test: {
     include: ['tests/**/*.test.ts'],
     exclude: ['tests/e2e/**', 'node_modules/**'],

@@ -1,0 +1,107 @@
+import type { NextRequest } from 'next/server';
+import { NextResponse } from 'next/server';
+import type { z } from 'zod';
+import { userFromRequest } from '../auth/session';
+import type { SessionUser } from '../auth/users';
+import { AppError, forbidden, notFound, unauthenticated } from '../errors';
+import { can, type Permission } from '../permissions';
+import type { Role } from '../roles';
+import { parseOrThrow, readJsonBody } from './body';
+import { roleOnTeam } from './membership';
+import { errorResponse, json } from './respond';
+
+type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
+type Infer<S> = S extends z.ZodType ? z.output<S> : undefined;
+
+interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefined> {
+  /** Path parameters; a malformed id is refused before any database work. */
+  params?: P;
+  /** JSON body schema (strict objects: unknown fields are refused). */
+  body?: B;
+  /** Status for a successful plain-data result. @default 200 */
+  status?: number;
+}
+
+interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefined> extends BaseSpec<P, B> {
+  permission: Permission;
+  /** The team that owns the resource named by the params; null when it does not exist. */
+  teamOf: (params: Infer<P>) => Promise<string | null>;
+}
+
+export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
+export interface UserContext<P, B> extends PublicContext<P, B> { user: SessionUser }
+export interface TeamContext<P, B> extends UserContext<P, B> { teamId: string; role: Role }
+
+type Handler<C> = (ctx: C) => Promise<unknown>;
+
+async function respond(run: () => Promise<unknown>, status: number): Promise<NextResponse> {
+  try {
+    const result = await run();
+    if (result instanceof Response) return result as NextResponse;
+    if (result === undefined) return new NextResponse(null, { status: 204 });
+    return json(result, status);
+  } catch (error) {
+    return errorResponse(error);
+  }
+}
+
+async function parseParams<P extends z.ZodType | undefined>(schema: P, ctx: RouteContext): Promise<Infer<P>> {
+  const raw = (await ctx?.params) ?? {};
+  return (schema ? parseOrThrow(schema, raw, 'The address names something that cannot exist') : undefined) as Infer<P>;
+}
+
+async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest): Promise<Infer<B>> {
+  return (schema ? await readJsonBody(req, schema) : undefined) as Infer<B>;
+}
+
+/** A handler anyone may call (sign-up). Order: params -> body -> act. */
+export function publicRoute<P extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
+  spec: BaseSpec<P, B>,
+  handler: Handler<PublicContext<Infer<P>, Infer<B>>>,
+) {
+  return (req: NextRequest, ctx: RouteContext) =>
+    respond(async () => {
+      const params = (await parseParams(spec.params, ctx)) as Infer<P>;
+      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      return handler({ req, params, body });
+    }, spec.status ?? 200);
+}
+
+/** A handler for any signed-in user. Order: params -> session (401) -> body (400) -> act. */
+export function userRoute<P extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
+  spec: BaseSpec<P, B>,
+  handler: Handler<UserContext<Infer<P>, Infer<B>>>,
+) {
+  return (req: NextRequest, ctx: RouteContext) =>
+    respond(async () => {
+      const params = (await parseParams(spec.params, ctx)) as Infer<P>;
+      const user = await userFromRequest(req);
+      if (!user) throw unauthenticated();
+      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      return handler({ req, params, body, user });
+    }, spec.status ?? 200);
+}
+
+/**
+ * A handler on a team's resource. Order: params -> session (401) -> membership (404, so a
+ * non-member cannot learn the resource exists) -> role (403) -> body (400) -> act.
+ */
+export function teamRoute<P extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
+  spec: TeamSpec<P, B>,
+  handler: Handler<TeamContext<Infer<P>, Infer<B>>>,
+) {
+  return (req: NextRequest, ctx: RouteContext) =>
+    respond(async () => {
+      const params = (await parseParams(spec.params, ctx)) as Infer<P>;
+      const user = await userFromRequest(req);
+      if (!user) throw unauthenticated();
+      const teamId = await spec.teamOf(params);
+      const role = teamId ? await roleOnTeam(user.id, teamId) : null;
+      if (!teamId || !role) throw notFound();
+      if (!can(role, spec.permission)) throw forbidden();
+      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      return handler({ req, params, body, user, teamId, role });
+    }, spec.status ?? 200);
+}
+
+export { AppError };

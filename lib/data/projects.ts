@@ -1,0 +1,71 @@
+import 'server-only';
+import { models } from '../../models';
+import type { Project, UnitSystem } from '../../models/project';
+import type { UpdateProjectInput } from '../validations/projects';
+
+export interface ProjectSummary {
+  id: string;
+  teamId: string;
+  name: string;
+  description: string;
+  unitSystem: UnitSystem;
+  siteNotes: string;
+  archived: boolean;
+  createdAt: string;
+  updatedAt: string;
+}
+
+function toSummary(p: Project): ProjectSummary {
+  return {
+    id: p.id,
+    teamId: p.teamId,
+    name: p.name,
+    description: p.description,
+    unitSystem: p.unitSystem,
+    siteNotes: p.siteNotes,
+    archived: p.archivedAt != null,
+    createdAt: p.createdAt.toISOString(),
+    updatedAt: p.updatedAt.toISOString(),
+  };
+}
+
+export async function listProjects(teamId: string): Promise<ProjectSummary[]> {
+  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']] });
+  return rows.map(toSummary);
+}
+
+export async function getProject(projectId: string): Promise<ProjectSummary | null> {
+  const p = await models().Project.findByPk(projectId);
+  return p ? toSummary(p) : null;
+}
+
+export async function teamOfProject(projectId: string): Promise<string | null> {
+  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'] });
+  return p?.teamId ?? null;
+}
+
+export async function createProject(
+  teamId: string,
+  userId: string,
+  input: { name: string; description: string; unitSystem: UnitSystem; siteNotes: string },
+): Promise<ProjectSummary> {
+  const p = await models().Project.create({ ...input, teamId, createdBy: userId });
+  return toSummary(p);
+}
+
+export async function updateProject(projectId: string, input: UpdateProjectInput): Promise<ProjectSummary> {
+  const { Project: P, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const p = await P.findByPk(projectId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!p) throw new Error(`project ${projectId} vanished during update`);
+    const { archived, ...fields } = input;
+    p.set(fields);
+    if (archived !== undefined) p.archivedAt = archived ? (p.archivedAt ?? new Date()) : null;
+    await p.save({ transaction });
+    return toSummary(p);
+  });
+}
+
+export async function deleteProject(projectId: string): Promise<void> {
+  await models().Project.destroy({ where: { id: projectId } });
+}

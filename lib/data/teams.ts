@@ -1,0 +1,93 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import { models } from '../../models';
+import { AppError } from '../errors';
+import type { Role } from '../roles';
+
+export interface TeamSummary { id: string; name: string; role: Role }
+export interface MemberSummary { userId: string; name: string; email: string; role: Role; joinedAt: string }
+
+export async function listTeamsOf(userId: string): Promise<TeamSummary[]> {
+  const { Membership, Team } = models();
+  const rows = await Membership.findAll({ where: { userId }, include: [{ model: Team, as: 'team' }], order: [['createdAt', 'ASC']] });
+  return rows.map((m) => {
+    const team = (m as unknown as { team: InstanceType<typeof Team> }).team;
+    return { id: team.id, name: team.name, role: m.role };
+  });
+}
+
+export async function createTeam(userId: string, name: string): Promise<TeamSummary> {
+  const { Team, Membership, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const team = await Team.create({ name }, { transaction });
+    await Membership.create({ teamId: team.id, userId, role: 'owner' }, { transaction });
+    return { id: team.id, name: team.name, role: 'owner' as const };
+  });
+}
+
+export async function renameTeam(teamId: string, name: string): Promise<{ id: string; name: string }> {
+  const { Team } = models();
+  await Team.update({ name }, { where: { id: teamId } });
+  return { id: teamId, name };
+}
+
+export async function teamExists(teamId: string): Promise<string | null> {
+  const team = await models().Team.findByPk(teamId, { attributes: ['id'] });
+  return team?.id ?? null;
+}
+
+export async function getTeam(teamId: string): Promise<{ id: string; name: string } | null> {
+  const team = await models().Team.findByPk(teamId);
+  return team ? { id: team.id, name: team.name } : null;
+}
+
+export async function listMembers(teamId: string): Promise<MemberSummary[]> {
+  const { Membership, User } = models();
+  const rows = await Membership.findAll({ where: { teamId }, include: [{ model: User, as: 'user' }], order: [['createdAt', 'ASC']] });
+  return rows.map((m) => {
+    const user = (m as unknown as { user: InstanceType<typeof User> }).user;
+    return { userId: user.id, name: user.name, email: user.email, role: m.role, joinedAt: m.createdAt.toISOString() };
+  });
+}
+
+export async function addMember(teamId: string, email: string, role: Role): Promise<MemberSummary> {
+  const { User, Membership, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const user = await User.findOne({ where: { email }, transaction });
+    if (!user) throw new AppError('bad_request', 'No Runnel account uses this e-mail', { email: ['Ask them to sign up first, then add them'] });
+    const existing = await Membership.findOne({ where: { teamId, userId: user.id }, transaction });
+    if (existing) throw new AppError('conflict', 'Already a member of this team', { email: ['Already a member; change their role instead'] });
+    const m = await Membership.create({ teamId, userId: user.id, role }, { transaction });
+    return { userId: user.id, name: user.name, email: user.email, role, joinedAt: m.createdAt.toISOString() };
+  });
+}
+
+async function assertAnotherOwnerRemains(teamId: string, userId: string, transaction: import('sequelize').Transaction) {
+  const { Membership } = models();
+  // Lock the team's owner rows so two owners cannot demote each other at the same moment.
+  const owners = await Membership.findAll({ where: { teamId, role: 'owner', userId: { [Op.ne]: userId } }, transaction, lock: transaction.LOCK.UPDATE });
+  if (owners.length === 0) throw new AppError('conflict', 'A team needs at least one owner: make someone else owner first', { role: ['The last owner cannot be removed or demoted'] });
+}
+
+export async function changeRole(teamId: string, userId: string, role: Role): Promise<MemberSummary> {
+  const { Membership, User, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const m = await Membership.findOne({ where: { teamId, userId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!m) throw new AppError('not_found', 'Not a member of this team');
+    if (m.role === 'owner' && role !== 'owner') await assertAnotherOwnerRemains(teamId, userId, transaction);
+    m.role = role;
+    await m.save({ transaction });
+    const user = await User.findByPk(userId, { transaction });
+    return { userId, name: user!.name, email: user!.email, role, joinedAt: m.createdAt.toISOString() };
+  });
+}
+
+export async function removeMember(teamId: string, userId: string): Promise<void> {
+  const { Membership, sequelize } = models();
+  await sequelize.transaction(async (transaction) => {
+    const m = await Membership.findOne({ where: { teamId, userId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!m) throw new AppError('not_found', 'Not a member of this team');
+    if (m.role === 'owner') await assertAnotherOwnerRemains(teamId, userId, transaction);
+    await m.destroy({ transaction });
+  });
+}

@@ -1,0 +1,48 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { z } from 'zod';
+
+/**
+ * The environment, parsed once. Defaults work on a fresh clone: `npm start` runs PostgreSQL on
+ * 127.0.0.1:5488 and writes a session secret into .secrets/ when none is given.
+ */
+const EnvSchema = z.object({
+  DATABASE_URL: z.url().default('postgres://runnel@127.0.0.1:5488/runnel'),
+  NEXTAUTH_URL: z.url().default('http://127.0.0.1:3000'),
+  NEXTAUTH_SECRET: z.string().min(32, 'NEXTAUTH_SECRET must be at least 32 characters').optional(),
+  RUNNEL_ENV: z.enum(['development', 'test', 'production']).optional(),
+  /** Largest JSON body a route handler accepts, in bytes (413 above it). */
+  RUNNEL_MAX_JSON_BYTES: z.coerce.number().int().positive().default(1_000_000),
+  /** Failed sign-ins allowed per e-mail, and per IP, within the window below. */
+  RUNNEL_SIGNIN_MAX_FAILURES_PER_EMAIL: z.coerce.number().int().positive().default(5),
+  RUNNEL_SIGNIN_MAX_FAILURES_PER_IP: z.coerce.number().int().positive().default(30),
+  RUNNEL_SIGNIN_WINDOW_SECONDS: z.coerce.number().int().positive().default(900),
+});
+
+export type Env = z.infer<typeof EnvSchema> & { NEXTAUTH_SECRET: string };
+
+function readGeneratedSecret(): string | undefined {
+  const file = path.join(process.cwd(), '.secrets', 'session-secret');
+  return fs.existsSync(file) ? fs.readFileSync(file, 'utf8').trim() : undefined;
+}
+
+function loadEnv(): Env {
+  const parsed = EnvSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Runnel configuration is invalid: ${problems}`);
+  }
+  const secret = parsed.data.NEXTAUTH_SECRET ?? readGeneratedSecret();
+  if (!secret) {
+    throw new Error('No session secret: set NEXTAUTH_SECRET or run `npm start`, which generates .secrets/session-secret');
+  }
+  return { ...parsed.data, NEXTAUTH_SECRET: secret };
+}
+
+let cached: Env | undefined;
+
+/** The parsed environment (read on first use, so a build without a database still works). */
+export function env(): Env {
+  cached ??= loadEnv();
+  return cached;
+}

@@ -1,0 +1,47 @@
+/**
+ * Typed error codes and their HTTP status, in one place. Every API error leaves the server as
+ * `{ "error": { "code", "message", "fields"? } }`.
+ */
+export const ERROR_STATUS = {
+  bad_request: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
+  rate_limited: 429,
+  internal: 500,
+} as const;
+
+export type ErrorCode = keyof typeof ERROR_STATUS;
+/** Field path -> messages, e.g. `{ "name": ["Name is required"] }`. */
+export type FieldErrors = Record<string, string[]>;
+
+export interface ApiErrorBody {
+  error: { code: ErrorCode; message: string; fields?: FieldErrors };
+}
+
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly fields?: FieldErrors;
+
+  constructor(code: ErrorCode, message: string, fields?: FieldErrors) {
+    super(message);
+    this.name = 'AppError';
+    this.code = code;
+    this.fields = fields;
+  }
+
+  get status(): number {
+    return ERROR_STATUS[this.code];
+  }
+
+  toBody(): ApiErrorBody {
+    return { error: { code: this.code, message: this.message, ...(this.fields ? { fields: this.fields } : {}) } };
+  }
+}
+
+export const notFound = (what = 'Not found') => new AppError('not_found', what);
+export const forbidden = (message = 'Your role on this team does not allow this') => new AppError('forbidden', message);
+export const unauthenticated = () => new AppError('unauthenticated', 'Sign in first');

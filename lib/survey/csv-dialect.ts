@@ -1,0 +1,104 @@
+import Papa from 'papaparse';
+import { SurveyImportError } from './errors';
+
+export type CsvDelimiter = ',' | ';' | '\t' | '|';
+export type LineEnding = 'lf' | 'crlf' | 'cr' | 'mixed' | 'none';
+
+export interface CsvDialect {
+  delimiter: CsvDelimiter;
+  decimalComma: boolean;
+  hasHeader: boolean;
+  lineEnding: LineEnding;
+}
+
+/** Ties go to the delimiter listed first: a comma is the likeliest to be a decimal mark too. */
+const CANDIDATES: CsvDelimiter[] = ['\t', ';', '|', ','];
+const PREVIEW_LINES = 50;
+
+export function detectLineEnding(text: string): LineEnding {
+  const crlf = (text.match(/\r\n/g) ?? []).length;
+  const cr = (text.match(/\r(?!\n)/g) ?? []).length;
+  const lf = (text.match(/(?<!\r)\n/g) ?? []).length;
+  const kinds = [crlf > 0, cr > 0, lf > 0].filter(Boolean).length;
+  if (kinds === 0) return 'none';
+  if (kinds > 1) return 'mixed';
+  return crlf > 0 ? 'crlf' : cr > 0 ? 'cr' : 'lf';
+}
+
+/** One line ending throughout, so mixed files from edited exports parse like any other. */
+export function normaliseLineEndings(text: string): string {
+  return text.replace(/\r\n?/g, '\n');
+}
+
+function previewLines(text: string): string[] {
+  const lines: string[] = [];
+  let start = 0;
+  while (lines.length < PREVIEW_LINES && start < text.length) {
+    let end = text.indexOf('\n', start);
+    if (end < 0) end = text.length;
+    const line = text.slice(start, end);
+    if (line.trim() !== '') lines.push(line);
+    start = end + 1;
+  }
+  return lines;
+}
+
+export function splitRow(line: string, delimiter: CsvDelimiter): string[] {
+  return Papa.parse<string[]>(line, { delimiter }).data[0] ?? [];
+}
+
+function scoreDelimiter(lines: string[], delimiter: CsvDelimiter): { columns: number; agreement: number } {
+  const counts = lines.map((l) => splitRow(l, delimiter).length);
+  const tally = new Map<number, number>();
+  counts.forEach((c) => tally.set(c, (tally.get(c) ?? 0) + 1));
+  let columns = 1;
+  let best = 0;
+  tally.forEach((n, c) => {
+    if (n > best || (n === best && c > columns)) {
+      best = n;
+      columns = c;
+    }
+  });
+  return { columns, agreement: best / lines.length };
+}
+
+const PLAIN_NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
+const COMMA_DECIMAL = /^\s*[+-]?\d+,\d+\s*$/;
+
+function looksNumeric(cell: string, decimalComma: boolean): boolean {
+  return PLAIN_NUMBER.test(cell) || (decimalComma && COMMA_DECIMAL.test(cell));
+}
+
+/**
+ * Guesses delimiter, decimal mark and header row from the first lines. The delimiter is the one
+ * that splits most lines into the same number (≥ 2) of columns; a decimal comma is assumed only
+ * when the delimiter is not a comma and cells look like “512,4”; the first row is a header when
+ * it holds text where the rows below hold numbers.
+ */
+export function detectCsvDialect(rawText: string): CsvDialect {
+  const lineEnding = detectLineEnding(rawText);
+  const lines = previewLines(normaliseLineEndings(rawText));
+  if (lines.length === 0) throw new SurveyImportError('empty-file', 'the file has no rows');
+  let chosen: { delimiter: CsvDelimiter; columns: number; agreement: number } | undefined;
+  for (const delimiter of CANDIDATES) {
+    const s = scoreDelimiter(lines, delimiter);
+    if (s.columns < 2) continue;
+    if (!chosen || s.agreement > chosen.agreement + 1e-9) chosen = { delimiter, ...s };
+  }
+  if (!chosen) {
+    throw new SurveyImportError(
+      'no-delimiter',
+      'every row is a single column: the columns must be separated by commas, semicolons, tabs or bars',
+      { line: 1 },
+    );
+  }
+  const rows = lines.map((l) => splitRow(l, chosen.delimiter));
+  const dataCells = rows.slice(1).flat();
+  const decimalComma = chosen.delimiter !== ',' && dataCells.some((c) => COMMA_DECIMAL.test(c));
+  const first = rows[0];
+  const second = rows[1];
+  const hasHeader = first.some(
+    (cell, i) => cell.trim() !== '' && !looksNumeric(cell, decimalComma) && (second === undefined || looksNumeric(second[i] ?? '', decimalComma)),
+  ) || (second === undefined && first.some((c) => c.trim() !== '' && !looksNumeric(c, decimalComma)));
+  return { delimiter: chosen.delimiter, decimalComma, hasHeader, lineEnding };
+}

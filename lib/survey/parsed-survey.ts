@@ -1,0 +1,65 @@
+import { z } from 'zod';
+import { HEIGHT_SOURCES } from '../../hydraulics/survey/height-source';
+import { SurveyImportError } from './errors';
+
+export const HeightSourceSchema = z.enum(HEIGHT_SOURCES);
+
+export const SurveyPointSchema = z.object({
+  /** 0-based position along the route. */
+  order: z.number().int().nonnegative(),
+  lat: z.number().min(-90).max(90).optional(),
+  lon: z.number().min(-180).max(180).optional(),
+  /** Horizontal distance from the start of the route, metres. */
+  chainageM: z.number().nonnegative().finite(),
+  elevationM: z.number().finite(),
+  label: z.string().optional(),
+  heightSource: HeightSourceSchema,
+  /** Vertical uncertainty, metres. */
+  confidence: z.number().nonnegative().finite().optional(),
+  /** ISO 8601 time of the fix. */
+  time: z.iso.datetime({ offset: true }).optional(),
+});
+
+export const SurveyImportWarningSchema = z.object({
+  code: z.string(),
+  message: z.string(),
+  line: z.number().int().positive().optional(),
+  /** Index into `points` the warning is about. */
+  index: z.number().int().nonnegative().optional(),
+});
+
+export const SurveyFormatSchema = z.enum(['gps-csv', 'station-csv', 'gpx', 'inclinometer-csv', 'level-book-csv']);
+
+export const ParsedSurveySchema = z.object({
+  points: z.array(SurveyPointSchema).min(2),
+  warnings: z.array(SurveyImportWarningSchema),
+  stats: z.object({
+    format: SurveyFormatSchema,
+    pointCount: z.number().int().nonnegative(),
+    rowsRead: z.number().int().nonnegative(),
+    totalHorizontalLengthM: z.number().nonnegative(),
+    /** 3-D length (what pipe on the ground needs), metres. */
+    totalSlopeLengthM: z.number().nonnegative(),
+    minElevationM: z.number(),
+    maxElevationM: z.number(),
+    duplicateCount: z.number().int().nonnegative(),
+    /** Computed minus known closing level, metres (level books that close on a benchmark). */
+    closureErrorM: z.number().optional(),
+  }),
+});
+
+export type HeightSourceName = z.infer<typeof HeightSourceSchema>;
+export type SurveyPoint = z.infer<typeof SurveyPointSchema>;
+export type SurveyImportWarning = z.infer<typeof SurveyImportWarningSchema>;
+export type SurveyFormat = z.infer<typeof SurveyFormatSchema>;
+export type ParsedSurvey = z.infer<typeof ParsedSurveySchema>;
+
+/** Last gate before a result leaves the parser: a shape error here is a bug, reported plainly. */
+export function validateParsedSurvey(value: unknown): ParsedSurvey {
+  const r = ParsedSurveySchema.safeParse(value);
+  if (!r.success) {
+    const issue = r.error.issues[0];
+    throw new SurveyImportError('invalid-result', `the import produced an invalid survey at ${issue.path.join('.')}: ${issue.message}`);
+  }
+  return r.data;
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod';
+import { nameText, safeText, uuid } from './common';
+
+export const UNIT_SYSTEMS = ['metric', 'us'] as const;
+export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'Units must be "metric" or "us"' });
+
+export const ProjectParams = z.strictObject({ projectId: uuid('Project id') });
+
+export const CreateProjectSchema = z.strictObject({
+  name: nameText('Project name'),
+  description: safeText('Description', 2000).default(''),
+  unitSystem: unitSystem.default('metric'),
+  siteNotes: safeText('Site notes', 10000).default(''),
+});
+export type CreateProjectInput = z.input<typeof CreateProjectSchema>;
+
+export const UpdateProjectSchema = z
+  .strictObject({
+    name: nameText('Project name'),
+    description: safeText('Description', 2000),
+    unitSystem,
+    siteNotes: safeText('Site notes', 10000),
+    archived: z.boolean({ error: 'Archived must be true or false' }),
+  })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Send at least one field to change');
+export type UpdateProjectInput = z.infer<typeof UpdateProjectSchema>;

@@ -1,0 +1,34 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export type UnitSystem = 'metric' | 'us';
+
+export class Project extends Model<InferAttributes<Project>, InferCreationAttributes<Project>> {
+  declare id: CreationOptional<string>;
+  declare teamId: string;
+  declare name: string;
+  declare description: CreationOptional<string>;
+  declare unitSystem: CreationOptional<UnitSystem>;
+  declare siteNotes: CreationOptional<string>;
+  declare archivedAt: CreationOptional<Date | null>;
+  declare createdBy: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initialise(sequelize: Sequelize): void {
+    Project.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        teamId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        unitSystem: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'metric' },
+        siteNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        archivedAt: { type: DataTypes.DATE, allowNull: true },
+        createdBy: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'projects', underscored: true },
+    );
+  }
+}

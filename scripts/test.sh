@@ -1,0 +1,43 @@
+#!/usr/bin/env bash
+# `npm test`: the same set-up as `npm start` against a separate test cluster and database, then
+# type checking, lint, unit + integration tests (real PostgreSQL) and end-to-end tests (Playwright).
+source "$(dirname "$0")/common.sh"
+
+export RUNNEL_PG_PORT="${RUNNEL_TEST_PG_PORT:-5489}"
+export RUNNEL_DB_NAME="${RUNNEL_TEST_DB_NAME:-runnel_test}"
+export DATABASE_URL="postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT/$RUNNEL_DB_NAME"
+export PORT="${RUNNEL_TEST_PORT:-3100}"
+export NEXTAUTH_URL="http://127.0.0.1:$PORT"
+export RUNNEL_ENV=test
+PGDATA_DIR="$ROOT/.pgdata-test"
+
+ensure_node_packages
+ensure_postgres_binaries
+[ -x /usr/bin/chromium ] || apt_install chromium
+ensure_session_secret
+start_postgres "$PGDATA_DIR" "$RUNNEL_PG_PORT"
+cleanup() {
+  trap - INT TERM EXIT
+  bash scripts/fakes.sh stop || true
+  stop_postgres "$PGDATA_DIR"
+}
+trap cleanup INT TERM EXIT
+
+# A fresh test database every run, so tests never depend on leftovers.
+pg_run "$PG_BIN/dropdb" -h 127.0.0.1 -p "$RUNNEL_PG_PORT" -U runnel --if-exists "$RUNNEL_DB_NAME"
+ensure_database "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME"
+migrate_and_seed
+bash scripts/fakes.sh start
+
+step() { log "── $1"; }
+step "type check (tsc --noEmit)"
+npx tsc --noEmit
+step "lint (eslint)"
+npx eslint --max-warnings=0 -c scripts/config/eslint.config.mjs .
+step "unit and integration tests (vitest)"
+npx vitest run --config tests/vitest.config.mts
+step "build for end-to-end tests"
+NODE_ENV=production node node_modules/next/dist/bin/next build >/dev/null
+step "end-to-end tests (Playwright, Debian chromium)"
+npx playwright test --config tests/e2e/playwright.config.ts
+log "all tests passed"

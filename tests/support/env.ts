@@ -1,0 +1,3 @@
+// Integration tests talk to the test cluster `npm test` starts (scripts/test.sh sets these).
+process.env.DATABASE_URL ??= 'postgres://runnel@127.0.0.1:5489/runnel_test';
+process.env.NEXTAUTH_URL ??= 'http://127.0.0.1:3100';

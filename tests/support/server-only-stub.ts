@@ -1,0 +1,2 @@
+// Route modules import 'server-only'; under vitest they run on the server already.
+export {};
