@@ -10,7 +10,7 @@ export function toMetres(value: number, unit: LengthUnit): number {
 }
 
 export interface CellPlace {
-  line: number;
+  line?: number;
   column: string;
   field: string;
 }

@@ -28,11 +28,25 @@ export const SurveyImportWarningSchema = z.object({
   index: z.number().int().nonnegative().optional(),
 });
 
+/** A named place along the route (a GPX waypoint) snapped to the nearest chainage. */
+export const SurveyFeatureSchema = z.object({
+  label: z.string(),
+  chainageM: z.number().nonnegative().finite(),
+  /** How far the feature lay from the route line, metres. */
+  offsetM: z.number().nonnegative().finite(),
+  lat: z.number().min(-90).max(90).optional(),
+  lon: z.number().min(-180).max(180).optional(),
+  elevationM: z.number().finite().optional(),
+  line: z.number().int().positive().optional(),
+});
+
 export const SurveyFormatSchema = z.enum(['gps-csv', 'station-csv', 'gpx', 'inclinometer-csv', 'level-book-csv']);
 
 export const ParsedSurveySchema = z.object({
   points: z.array(SurveyPointSchema).min(2),
   warnings: z.array(SurveyImportWarningSchema),
+  /** Labelled features along the route; only GPX waypoints produce them so far. */
+  features: z.array(SurveyFeatureSchema).optional(),
   stats: z.object({
     format: SurveyFormatSchema,
     pointCount: z.number().int().nonnegative(),
@@ -51,6 +65,7 @@ export const ParsedSurveySchema = z.object({
 export type HeightSourceName = z.infer<typeof HeightSourceSchema>;
 export type SurveyPoint = z.infer<typeof SurveyPointSchema>;
 export type SurveyImportWarning = z.infer<typeof SurveyImportWarningSchema>;
+export type SurveyFeature = z.infer<typeof SurveyFeatureSchema>;
 export type SurveyFormat = z.infer<typeof SurveyFormatSchema>;
 export type ParsedSurvey = z.infer<typeof ParsedSurveySchema>;
 

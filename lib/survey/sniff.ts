@@ -46,7 +46,8 @@ export function sniffSurveyFile(bytes: Uint8Array, options: SniffOptions = {}): 
   }
   let text: string;
   try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+    // ignoreBOM keeps the mark in the text so we can report it; the default would drop it silently.
+    text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(bytes);
   } catch {
     text = new TextDecoder('windows-1252').decode(bytes);
   }

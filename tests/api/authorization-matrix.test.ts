@@ -20,7 +20,7 @@ async function load(file: string): Promise<Record<string, unknown>> {
 }
 
 describe('authorisation matrix', () => {
-  let exported: string[] = [];
+  const exported: string[] = [];
 
   beforeAll(async () => {
     for (const file of routeFiles()) {

@@ -1,0 +1,5 @@
+import { ProjectsTableSkeleton } from '@/components/projects/projects-table-skeleton';
+
+export default function Loading() {
+  return <ProjectsTableSkeleton />;
+}

@@ -1,0 +1,56 @@
+import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
+import type { Metadata } from 'next';
+import { MembersTable } from '@/components/team/members-table';
+import { AddMemberForm } from '@/components/team/add-member-form';
+import { Panel } from '@/components/ui/panel';
+import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { currentTeam } from '@/lib/current-team';
+import { listMembers } from '@/lib/data/teams';
+import { can } from '@/lib/permissions';
+import { memberKeys } from '@/lib/queries/members';
+import { getQueryClient } from '@/lib/queries/query-client';
+
+export const metadata: Metadata = { title: 'Team' };
+
+export default async function TeamPage() {
+  const user = await requireUser();
+  const { team } = await currentTeam(user.id);
+  if (!team) return <p>You do not belong to a team yet.</p>;
+  const role = await requireTeamRole(user, team.id, 'team.view');
+  const manage = can(role, 'team.manage');
+
+  const queryClient = getQueryClient();
+  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id) });
+
+  return (
+    <div className="space-y-6">
+      <div>
+        <h1 className="text-2xl font-semibold text-creek-900">{team.name}</h1>
+        <p className="text-sm text-creek-700">Who works on this team&apos;s projects, and in which role.</p>
+      </div>
+      {manage && (
+        <Panel title="Add a member">
+          <AddMemberForm teamId={team.id} />
+        </Panel>
+      )}
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
+      </HydrationBoundary>
+      <RoleGuide />
+    </div>
+  );
+}
+
+function RoleGuide() {
+  return (
+    <Panel title="What each role can do">
+      <ul className="grid gap-2 text-sm text-creek-800 sm:grid-cols-2">
+        <li><strong>Owner</strong>: everything, including members, roles and deleting projects.</li>
+        <li><strong>Designer</strong>: creates and edits projects, lines, pipes and demands; runs analyses; exports.</li>
+        <li><strong>Surveyor</strong>: creates and edits survey routes and points; uploads files and photos; views designs.</li>
+        <li><strong>Reviewer</strong>: views everything; comments; approves or asks for changes on a revision.</li>
+        <li><strong>Viewer (client)</strong>: views and exports approved designs.</li>
+      </ul>
+    </Panel>
+  );
+}

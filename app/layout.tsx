@@ -1,0 +1,29 @@
+import type { Metadata, Viewport } from 'next';
+import localFont from 'next/font/local';
+import type { ReactNode } from 'react';
+import { Providers } from '@/components/providers';
+import './globals.css';
+
+const runnelSans = localFont({
+  src: '../fonts/inter-latin-wght-normal.woff2',
+  variable: '--font-runnel',
+  display: 'swap',
+  weight: '100 900',
+});
+
+export const metadata: Metadata = {
+  title: { default: 'Runnel', template: '%s · Runnel' },
+  description: 'Plan gravity-fed and ram-pump water lines, from survey to upkeep.',
+};
+
+export const viewport: Viewport = { width: 'device-width', initialScale: 1 };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={runnelSans.variable}>
+      <body className="min-h-screen font-sans">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,42 @@
+/** A named benchmark: `run` is timed; `floor`, when given, is timed the same way for the ratio. */
+export interface Benchmark {
+  name: string;
+  /** Work to time. Its result is kept so the engine cannot drop the call. */
+  run: () => unknown;
+  /** A lower-bound loop over the same data; the printed ratio is run / floor. */
+  floor?: () => unknown;
+  /** Timed runs after warm-up. @default 15 */
+  runs?: number;
+  /** Untimed warm-up runs. @default 3 */
+  warmUps?: number;
+}
+
+// Results go to an exported sink so the engine cannot prove them dead and skip the work.
+export const benchSink: { last: unknown } = { last: undefined };
+
+/** Median wall time of `fn` in milliseconds. */
+export function medianMs(fn: () => unknown, runs: number, warmUps: number): number {
+  for (let i = 0; i < warmUps; i++) benchSink.last = fn();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    benchSink.last = fn();
+    times.push(performance.now() - start);
+  }
+  times.sort((a, b) => a - b);
+  const mid = times.length >> 1;
+  return times.length % 2 === 1 ? times[mid] : (times[mid - 1] + times[mid]) / 2;
+}
+
+/** Runs one benchmark and returns its `BENCH` line. */
+export function runBenchmark(benchmark: Benchmark): string {
+  const runs = benchmark.runs ?? 15;
+  const warmUps = benchmark.warmUps ?? 3;
+  const median = medianMs(benchmark.run, runs, warmUps);
+  let line = `BENCH ${benchmark.name} median_ms=${median.toFixed(3)}`;
+  if (benchmark.floor) {
+    const floor = medianMs(benchmark.floor, runs, warmUps);
+    line += ` ratio=${(median / floor).toFixed(1)}`;
+  }
+  return line;
+}

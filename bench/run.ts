@@ -1,0 +1,21 @@
+import { runBenchmark, type Benchmark } from './harness';
+
+/** The registry: name -> a loader, so running one benchmark builds only its own data. */
+const REGISTRY: Record<string, () => Promise<Benchmark>> = {
+  'profile-100k': async () => (await import('./profile-100k')).profile100k,
+  'profile-100k-dw': async () => (await import('./profile-100k')).profile100kDw,
+};
+
+async function main(): Promise<void> {
+  const wanted = process.argv.slice(2);
+  const unknown = wanted.filter((name) => !(name in REGISTRY));
+  if (unknown.length > 0) {
+    console.error(`Unknown benchmark: ${unknown.join(', ')}. Known: ${Object.keys(REGISTRY).join(', ')}`);
+    process.exitCode = 1;
+    return;
+  }
+  const names = wanted.length > 0 ? wanted : Object.keys(REGISTRY);
+  for (const name of names) console.log(runBenchmark(await REGISTRY[name]()));
+}
+
+void main();

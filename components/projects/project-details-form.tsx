@@ -1,0 +1,64 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { FormMessage } from '@/components/ui/form-message';
+import type { ProjectSummary } from '@/lib/data/projects';
+import type { FieldErrors } from '@/lib/errors';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { useUpdateProject } from '@/lib/queries/projects';
+import { fieldErrorsOf } from '@/lib/validations/common';
+import { UpdateProjectSchema } from '@/lib/validations/projects';
+
+export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
+  const router = useRouter();
+  const update = useUpdateProject(project.id);
+  const [fields, setFields] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
+
+  if (!editable) {
+    return (
+      <dl className="grid gap-3 text-sm sm:grid-cols-2">
+        <div><dt className="font-medium text-creek-800">Description</dt><dd className="text-creek-700">{project.description || '—'}</dd></div>
+        <div><dt className="font-medium text-creek-800">Units</dt><dd className="text-creek-700">{project.unitSystem === 'us' ? 'US customary' : 'Metric'}</dd></div>
+        <div className="sm:col-span-2"><dt className="font-medium text-creek-800">Site notes</dt><dd className="whitespace-pre-line text-creek-700">{project.siteNotes || '—'}</dd></div>
+      </dl>
+    );
+  }
+
+  async function onSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    const parsed = UpdateProjectSchema.safeParse({
+      name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem'), siteNotes: form.get('siteNotes'),
+    });
+    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
+    setFields({});
+    try {
+      await update.mutateAsync(parsed.data);
+      setMessage({ text: 'Saved.', tone: 'ok' });
+      router.refresh();
+    } catch (error) {
+      if (error instanceof ApiError) setFields(error.fields ?? {});
+      setMessage({ text: error instanceof Error ? error.message : 'Not saved.', tone: 'error' });
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2" noValidate>
+      <TextField id="name" label="Name" defaultValue={project.name} errors={fields.name} required />
+      <SelectField id="unitSystem" label="Units" defaultValue={project.unitSystem} errors={fields.unitSystem}>
+        <option value="metric">Metric (m, L/s, kPa and m of head)</option>
+        <option value="us">US customary (ft, gpm, psi and ft of head)</option>
+      </SelectField>
+      <div className="sm:col-span-2"><TextField id="description" label="Description" defaultValue={project.description} errors={fields.description} /></div>
+      <div className="sm:col-span-2"><TextAreaField id="siteNotes" label="Site notes" rows={4} defaultValue={project.siteNotes} errors={fields.siteNotes} /></div>
+      <div className="flex items-center gap-3 sm:col-span-2">
+        <Button type="submit" disabled={update.isPending}>{update.isPending ? 'Saving…' : 'Save details'}</Button>
+        <FormMessage message={message?.text} tone={message?.tone} />
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,84 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import Link from 'next/link';
+import { useState } from 'react';
+import { visibleProjects, type ProjectSortKey, type ProjectTableState } from '@/lib/projects-table';
+import { teamProjectsQuery } from '@/lib/queries/projects';
+
+const COLUMNS: { key: ProjectSortKey; label: string }[] = [
+  { key: 'name', label: 'Project' },
+  { key: 'unitSystem', label: 'Units' },
+  { key: 'updatedAt', label: 'Last changed' },
+];
+
+export function ProjectsTable({ teamId }: { teamId: string }) {
+  const { data: projects = [], isError, refetch } = useQuery(teamProjectsQuery(teamId));
+  const [state, setState] = useState<ProjectTableState>({ search: '', sort: 'updatedAt', descending: true, showArchived: false });
+  const rows = visibleProjects(projects, state);
+
+  function sortBy(key: ProjectSortKey) {
+    setState((s) => ({ ...s, sort: key, descending: s.sort === key ? !s.descending : key === 'updatedAt' }));
+  }
+
+  if (isError) {
+    return (
+      <p role="alert" className="text-sm text-clay-700">
+        Projects could not be loaded. <button className="underline" onClick={() => refetch()}>Try again</button>
+      </p>
+    );
+  }
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-end gap-4">
+        <label className="text-sm">
+          <span className="block font-medium text-creek-900">Search projects</span>
+          <input
+            type="search"
+            value={state.search}
+            onChange={(e) => setState((s) => ({ ...s, search: e.target.value }))}
+            className="mt-1 w-64 max-w-full rounded-md border border-creek-200 px-3 py-1.5"
+            placeholder="Name or description"
+          />
+        </label>
+        <label className="flex items-center gap-2 text-sm text-creek-800">
+          <input type="checkbox" checked={state.showArchived} onChange={(e) => setState((s) => ({ ...s, showArchived: e.target.checked }))} />
+          Show archived
+        </label>
+      </div>
+      <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+        <table className="w-full text-left text-sm">
+          <thead className="bg-creek-50 text-creek-800">
+            <tr>
+              {COLUMNS.map((c) => (
+                <th key={c.key} scope="col" className="px-4 py-2 font-medium" aria-sort={state.sort === c.key ? (state.descending ? 'descending' : 'ascending') : 'none'}>
+                  <button type="button" onClick={() => sortBy(c.key)} className="inline-flex items-center gap-1">
+                    {c.label}
+                    <span aria-hidden>{state.sort === c.key ? (state.descending ? '▾' : '▴') : '·'}</span>
+                  </button>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((p) => (
+              <tr key={p.id} className="border-t border-creek-50 hover:bg-creek-50/50">
+                <td className="px-4 py-2.5">
+                  <Link href={`/projects/${p.id}`} className="font-medium text-creek-700 underline-offset-2 hover:underline">{p.name}</Link>
+                  {p.archived && <span className="ml-2 rounded bg-stone-100 px-1.5 text-xs text-stone-600">archived</span>}
+                  {p.description && <p className="max-w-xl truncate text-xs text-creek-600">{p.description}</p>}
+                </td>
+                <td className="px-4 py-2.5">{p.unitSystem === 'us' ? 'US customary' : 'Metric'}</td>
+                <td className="tabular px-4 py-2.5 text-creek-700">{new Date(p.updatedAt).toISOString().slice(0, 10)}</td>
+              </tr>
+            ))}
+            {rows.length === 0 && (
+              <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet.' : 'No project matches.'}</td></tr>
+            )}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { FormMessage } from '@/components/ui/form-message';
+import { RoleBadge } from '@/components/ui/role-badge';
+import { teamMembersQuery, useChangeRole, useRemoveMember } from '@/lib/queries/members';
+import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
+
+interface Props { teamId: string; manage: boolean; selfId: string }
+
+export function MembersTable({ teamId, manage, selfId }: Props) {
+  const { data: members = [] } = useQuery(teamMembersQuery(teamId));
+  const changeRole = useChangeRole(teamId);
+  const remove = useRemoveMember(teamId);
+  const [error, setError] = useState<string | null>(null);
+
+  return (
+    <div className="space-y-2">
+      <FormMessage message={error} />
+      <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+        <table className="w-full text-left text-sm">
+          <thead className="bg-creek-50 text-creek-800">
+            <tr>
+              <th scope="col" className="px-4 py-2 font-medium">Name</th>
+              <th scope="col" className="px-4 py-2 font-medium">E-mail</th>
+              <th scope="col" className="px-4 py-2 font-medium">Role</th>
+              {manage && <th scope="col" className="px-4 py-2 font-medium"><span className="sr-only">Actions</span></th>}
+            </tr>
+          </thead>
+          <tbody>
+            {members.map((m) => (
+              <tr key={m.userId} className="border-t border-creek-50">
+                <td className="px-4 py-2.5 font-medium text-creek-900">{m.name}{m.userId === selfId && <span className="ml-1 text-xs text-creek-600">(you)</span>}</td>
+                <td className="px-4 py-2.5 text-creek-700">{m.email}</td>
+                <td className="px-4 py-2.5">
+                  {manage ? (
+                    <select
+                      aria-label={`Role of ${m.name}`}
+                      value={m.role}
+                      className="rounded-md border border-creek-200 px-2 py-1"
+                      onChange={(e) => {
+                        setError(null);
+                        changeRole.mutate({ userId: m.userId, role: e.target.value as Role }, { onError: (err) => setError(err.message) });
+                      }}
+                    >
+                      {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+                    </select>
+                  ) : (
+                    <RoleBadge role={m.role} />
+                  )}
+                </td>
+                {manage && (
+                  <td className="px-4 py-2.5 text-right">
+                    <button
+                      type="button"
+                      className="text-sm text-clay-600 underline"
+                      onClick={() => {
+                        if (!window.confirm(`Remove ${m.name} from the team?`)) return;
+                        setError(null);
+                        remove.mutate(m.userId, { onError: (err) => setError(err.message) });
+                      }}
+                    >
+                      Remove
+                    </button>
+                  </td>
+                )}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

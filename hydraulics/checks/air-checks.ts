@@ -1,0 +1,95 @@
+import { valueAtChainage } from '../profile/grid';
+import type { LineProfile } from '../profile/result-types';
+import type { LineDevice, LineDeviceKind } from '../profile/types';
+import { findTurningPoints } from './air-points';
+import type { LineWarning } from './types';
+import { chainage, metres } from './wording';
+
+interface Neighbourhood {
+  point: number;
+  /** Chainages of the turning points (or line ends) on either side. */
+  beforeM: number;
+  afterM: number;
+}
+
+/** Each turning point with the chainages of the turning points (or line ends) either side. */
+function neighbourhoods(points: readonly number[], others: readonly number[], chainageM: Float64Array): Neighbourhood[] {
+  const all = [...points, ...others].sort((a, b) => a - b);
+  const lastM = chainageM[chainageM.length - 1];
+  const rank = new Map(all.map((point, i) => [point, i]));
+  return points.map((point) => {
+    const i = rank.get(point) ?? 0;
+    return {
+      point,
+      beforeM: i > 0 ? chainageM[all[i - 1]] : chainageM[0],
+      afterM: i < all.length - 1 ? chainageM[all[i + 1]] : lastM,
+    };
+  });
+}
+
+/**
+ * A device covers a turning point when it lies between the neighbouring turning points and its
+ * pipe elevation is within the tolerance of the point's (so a valve a little off the exact summit
+ * on a flat top still counts).
+ */
+function isCovered(
+  spot: Neighbourhood,
+  devices: readonly LineDevice[],
+  kinds: readonly LineDeviceKind[],
+  profile: LineProfile,
+  summit: boolean,
+): boolean {
+  const { chainageM, pipeElevationM } = profile.points;
+  const z = pipeElevationM[spot.point];
+  const tolerance = profile.settings.airPointToleranceM;
+  return devices.some((device) => {
+    if (!kinds.includes(device.kind) || device.chainageM <= spot.beforeM || device.chainageM >= spot.afterM) return false;
+    const zDevice = valueAtChainage(chainageM, pipeElevationM, device.chainageM);
+    return summit ? zDevice >= z - tolerance : zDevice <= z + tolerance;
+  });
+}
+
+/**
+ * Air-release valves at summits and washouts at sags of the PIPE profile (Missouri NRCS,
+ * *Watering Systems for Serious Graziers* p.29 [R10]; air pockets cost head and can stop a
+ * gravity line, Wikipedia "Air lock" [R7]). Points already served by a device are skipped.
+ */
+export function airAndSedimentWarnings(profile: LineProfile, devices: readonly LineDevice[]): LineWarning[] {
+  const { chainageM, pipeElevationM, pressureHeadM } = profile.points;
+  const { highs, lows } = findTurningPoints(pipeElevationM, profile.settings.airPointToleranceM);
+  const warnings: LineWarning[] = [];
+  for (const spot of neighbourhoods(highs, lows, chainageM)) {
+    if (isCovered(spot, devices, ['air-release-valve', 'break-pressure-tank'], profile, true)) continue;
+    const c = chainageM[spot.point];
+    const suction = pressureHeadM[spot.point] < 0 && profile.flowM3s > 0;
+    warnings.push({
+      code: 'air-release-needed',
+      severity: 'warning',
+      at: { chainageM: c },
+      message: suction
+        ? `The pipe has a summit at ${chainage(c)} (${metres(pipeElevationM[spot.point])}) where the pressure is below ` +
+          'atmospheric while flowing: air gathers there, but an automatic air valve would let air IN and break the flow.'
+        : `The pipe has a summit at ${chainage(c)} (${metres(pipeElevationM[spot.point])}): air gathers at high points, ` +
+          'narrows the pipe and can stop a gravity line altogether.',
+      suggestedFix: suction
+        ? 'Lower the pipe at this summit so the grade line stays above it, then fit an air-release valve; until then use a manual vent that only releases air.'
+        : `Fit an air-release valve at ${chainage(c)}.`,
+      fixes: suction ? [] : [{ kind: 'add-device', device: 'air-release-valve', chainageM: c }],
+    });
+  }
+  for (const spot of neighbourhoods(lows, highs, chainageM)) {
+    if (isCovered(spot, devices, ['washout'], profile, false)) continue;
+    const c = chainageM[spot.point];
+    warnings.push({
+      code: 'washout-needed',
+      severity: 'info',
+      at: { chainageM: c },
+      message:
+        `The pipe has a sag at ${chainage(c)} (${metres(pipeElevationM[spot.point])}): silt and sand settle at low points, ` +
+        'and the line cannot be drained there for frost or repairs.',
+      suggestedFix: `Fit a washout (drain valve) at ${chainage(c)}.`,
+      fixes: [{ kind: 'add-device', device: 'washout', chainageM: c }],
+    });
+  }
+  return warnings;
+}

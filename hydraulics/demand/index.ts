@@ -1,0 +1,10 @@
+export * from './figures';
+export { PER_PERSON_DEMAND_FIGURES } from './per-person-figures';
+export { LIVESTOCK_DEMAND_FIGURES } from './livestock-figures';
+export { GARDEN_DEPTH_FIGURES } from './garden-figures';
+export { DEFAULT_DEMAND_FIGURES } from './default-figures';
+export * from './hourly-pattern';
+export type * from './use-types';
+export { resolveUseFigure, useQuantity, type UseFigure } from './use-figure';
+export { useDemand, type UseDemandOptions } from './use-demand';
+export { dailyDemand, type DailyDemandOptions, type DailyDemandResult } from './daily-demand';

@@ -1,0 +1,164 @@
+import { HydraulicsInputError } from '../errors';
+
+/** Input of `planBreakPressureTanks`: a static profile and the allowable head of its pipe. */
+export interface TankPlanInput {
+  /** Point chainages, m (strictly increasing). */
+  chainageM: ArrayLike<number>;
+  /** Ground elevation at each point, m (a new tank stands on the ground). */
+  groundElevationM: ArrayLike<number>;
+  /** Pipe elevation at each point, m (static pressure is measured at the pipe). */
+  pipeElevationM: ArrayLike<number>;
+  /** Allowable static pressure head, one value or one per piece (point j to j+1), m. */
+  allowableHeadM: number | ArrayLike<number>;
+  /** Static level at the first point planned (start level or the last tank's level), m. */
+  startLevelM: number;
+  /** Height of a new tank's water level above the ground at its site, m. @default 0 */
+  tankWaterAboveGroundM?: number;
+  /** First and last point to plan over. @default the whole profile */
+  fromPoint?: number;
+  toPoint?: number;
+}
+
+/** A planned break-pressure tank. */
+export interface PlannedTank {
+  chainageM: number;
+  /** Water level it resets the static line to, m. */
+  waterLevelM: number;
+}
+
+/** Result of a tank plan. */
+export interface TankPlan {
+  tanks: PlannedTank[];
+  /** False when no set of tanks can keep the pipe within its rating (see `problem`). */
+  feasible: boolean;
+  problem?: { chainageM: number; message: string };
+}
+
+const EPS_M = 1e-9;
+
+/** A position on the profile: piece index and a chainage inside it (or at its start). */
+interface Position {
+  piece: number;
+  chainageM: number;
+  pipeM: number;
+  groundM: number;
+}
+
+function lerp(a: number, b: number, t: number): number {
+  return a + t * (b - a);
+}
+
+/**
+ * The fewest break-pressure tanks that keep the static pressure within the allowable head while
+ * every tank stays high enough for the water to get over all the pipe downstream of it.
+ *
+ * Greedy: from each reset (the start, then each new tank) follow the static line to the first
+ * chainage where it passes the rating; the "window" is everything from the reset to that
+ * chainage. Put the next tank at the LOWEST usable site in the window (the latest one on a tie):
+ * a site is usable when its water level is below the arriving static level and not below the
+ * highest pipe anywhere downstream (tanks only ever lower the level, so a tank below a later
+ * summit would leave the water unable to pass it). With one rating, even cover and no summit
+ * ahead, that site is the window's end, "the last chainage where the static pressure is still
+ * within the rating".
+ *
+ * Why it is minimal: beyond the window, a tank's reach (how far its static line stays within the
+ * rating) depends only on its water level, and a lower level never reaches less far; usable
+ * levels only shrink along the line. So the greedy tank reaches at least as far as any tank a plan
+ * could put in the same window, and by induction after k tanks the greedy plan reaches at least
+ * as far as any feasible plan with k tanks: when some plan covers the line with m tanks, the
+ * greedy plan needs at most m. Checked against brute force in tests/hydraulics/design.
+ */
+export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
+  const { chainageM, groundElevationM, pipeElevationM, allowableHeadM } = input;
+  const from = input.fromPoint ?? 0;
+  const to = input.toPoint ?? chainageM.length - 1;
+  if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
+  const raise = input.tankWaterAboveGroundM ?? 0;
+  const allow = (piece: number): number =>
+    typeof allowableHeadM === 'number' ? allowableHeadM : allowableHeadM[piece];
+  // Highest pipe at or after each point (to the plan's end): the lowest level a tank there may have.
+  const highestAhead = new Float64Array(to + 1);
+  highestAhead[to] = pipeElevationM[to];
+  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k], highestAhead[k + 1]);
+  const tanks: PlannedTank[] = [];
+  let level = input.startLevelM;
+  let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
+  const fail = (chainage: number, message: string): TankPlan => ({ tanks, feasible: false, problem: { chainageM: chainage, message } });
+
+  // Every tank lowers the level by at least (rating - cover) > 0, so the loop ends; the cap only
+  // guards against a caller's NaN.
+  for (let guard = 0; guard < 1_000_000; guard++) {
+    const over = firstOverRating(input, at, level, to, allow);
+    if (over === null) return { tanks, feasible: true };
+    if (over.chainageM <= at.chainageM + EPS_M) {
+      return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
+    }
+    const pick: { best: Position | null } = { best: null };
+    const consider = (site: Position, floorM: number): void => {
+      const siteLevel = site.groundM + raise;
+      if (siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) return;
+      if (siteLevel - site.pipeM > allow(site.piece) + EPS_M) return;
+      if (pick.best === null || siteLevel <= pick.best.groundM + raise) pick.best = site;
+    };
+    for (let k = at.piece; k <= over.piece; k++) {
+      const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
+      if (k > at.piece) {
+        consider({ piece: k, chainageM: chainageM[k], pipeM: pipeElevationM[k], groundM: groundElevationM[k] }, highestAhead[k]);
+      }
+      // Where the ground inside this piece comes down to the highest pipe ahead: the lowest usable site.
+      const c0 = k === at.piece ? at.chainageM : chainageM[k];
+      const target = highestAhead[k + 1] - raise;
+      const g0 = k === at.piece ? at.groundM : groundElevationM[k];
+      const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
+      if ((g0 - target) * (g1 - target) < 0) {
+        const t = (g0 - target) / (g0 - g1);
+        const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
+        const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
+        consider({ piece: k, chainageM: lerp(c0, pieceEndM, t), pipeM: lerp(z0, z1, t), groundM: target }, highestAhead[k + 1]);
+      }
+    }
+    consider(over, Math.max(over.pipeM, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM));
+    const chosen = pick.best;
+    if (chosen === null) {
+      return fail(
+        over.chainageM,
+        'every tank site low enough to protect the pipe lies below a summit further on, which the water could not pass: use a higher pressure class',
+      );
+    }
+    tanks.push({ chainageM: chosen.chainageM, waterLevelM: chosen.groundM + raise });
+    level = chosen.groundM + raise;
+    at = chosen;
+  }
+  return fail(at.chainageM, 'tank planning did not converge');
+}
+
+/** First position at or after `at` where `level` minus the pipe passes the allowable head. */
+function firstOverRating(
+  input: TankPlanInput,
+  at: Position,
+  level: number,
+  to: number,
+  allow: (piece: number) => number,
+): Position | null {
+  const { chainageM, groundElevationM, pipeElevationM } = input;
+  for (let j = at.piece; j < to; j++) {
+    const limit = allow(j);
+    const c0 = j === at.piece ? at.chainageM : chainageM[j];
+    const z0 = j === at.piece ? at.pipeM : pipeElevationM[j];
+    const g0 = j === at.piece ? at.groundM : groundElevationM[j];
+    const startExcess = level - z0 - limit;
+    if (startExcess > EPS_M) return { piece: j, chainageM: c0, pipeM: z0, groundM: g0 };
+    const endExcess = level - pipeElevationM[j + 1] - limit;
+    if (endExcess > EPS_M) {
+      // Fraction of the way from c0 to the next point where the excess reaches zero.
+      const t = -startExcess / (endExcess - startExcess);
+      return {
+        piece: j,
+        chainageM: lerp(c0, chainageM[j + 1], t),
+        pipeM: lerp(z0, pipeElevationM[j + 1], t),
+        groundM: lerp(g0, groundElevationM[j + 1], t),
+      };
+    }
+  }
+  return null;
+}

@@ -1,0 +1,86 @@
+/** A chainage range where a quantity passes a limit, with exact (interpolated) ends. */
+export interface LimitRange {
+  /** Where the quantity first passes the limit, m. */
+  fromM: number;
+  /** Where it comes back inside the limit, m. */
+  toM: number;
+  /** Largest amount by which the limit is passed inside the range, m. */
+  worstExcessM: number;
+  /** Chainage of the largest excess, m. */
+  worstChainageM: number;
+}
+
+/** Arguments of `findLimitRanges`. */
+export interface LimitRangeArgs {
+  /** Point chainages, m (strictly increasing). */
+  chainageM: Float64Array;
+  /** Value just downstream of each point, m. */
+  valueM: Float64Array;
+  /** Value lost AT each point (upstream value = value + drop); null when the line has no steps. */
+  dropAtPointM: Float64Array | null;
+  /** A fixed limit, or one limit per piece (point j to j+1), or per stretch with `pieceStretch`. */
+  limitM: number | Float64Array;
+  /** When given, `limitM` is indexed by stretch and this maps each piece to its stretch. */
+  pieceStretch?: Int32Array;
+  /** `below`: the range where value < limit; `above`: where value > limit. */
+  side: 'below' | 'above';
+  /** Excess that still counts as within the limit (rounding of a value placed exactly on it), m. @default 1e-6 */
+  toleranceM?: number;
+}
+
+/**
+ * Ranges where a piecewise-linear quantity passes a limit. On each piece the excess is linear, so
+ * a crossing inside a piece is found exactly by linear interpolation; a step at a point (a tank
+ * reset, a fitting, a change of pipe rating) starts or ends a range at that point's chainage.
+ * One pass, no per-point allocation.
+ */
+export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
+  const { chainageM, valueM, dropAtPointM, limitM, side } = args;
+  const sign = side === 'below' ? -1 : 1;
+  const tolerance = args.toleranceM ?? 1e-6;
+  const ranges: LimitRange[] = [];
+  let open = false;
+  let fromM = 0;
+  let worstExcessM = 0;
+  let worstChainageM = 0;
+  const note = (excess: number, atM: number): void => {
+    if (excess > worstExcessM) {
+      worstExcessM = excess;
+      worstChainageM = atM;
+    }
+  };
+  // Ends stay exact; a range whose worst excess is within the tolerance is rounding, not a finding.
+  const close = (toM: number): void => {
+    if (toM > fromM && worstExcessM > tolerance) ranges.push({ fromM, toM, worstExcessM, worstChainageM });
+    open = false;
+  };
+  const n = chainageM.length;
+  const fixedLimit = typeof limitM === 'number' ? limitM : 0;
+  const limits = typeof limitM === 'number' ? null : limitM;
+  const pieceStretch = args.pieceStretch ?? null;
+  for (let j = 0; j < n - 1; j++) {
+    const limit = limits === null ? fixedLimit : limits[pieceStretch === null ? j : pieceStretch[j]];
+    const c0 = chainageM[j];
+    const c1 = chainageM[j + 1];
+    const a = sign * (valueM[j] - limit);
+    const b = sign * (valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]) - limit);
+    if (a > 0 && !open) {
+      open = true;
+      fromM = c0;
+      worstExcessM = 0;
+    } else if (a <= 0 && open) {
+      close(c0);
+    }
+    if (open) note(a, c0);
+    if (a > 0 && b <= 0) {
+      close(c0 + ((c1 - c0) * a) / (a - b));
+    } else if (a <= 0 && b > 0) {
+      open = true;
+      fromM = c0 + ((c1 - c0) * -a) / (b - a);
+      worstExcessM = 0;
+    }
+    if (open) note(b, c1);
+  }
+  if (open) close(chainageM[n - 1]);
+  return ranges;
+}

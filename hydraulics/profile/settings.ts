@@ -1,0 +1,58 @@
+import type { FrictionMethod, LineSettings } from './types';
+
+/** Settings with every default filled in (see `LineSettings` for meanings and sources). */
+export interface ResolvedLineSettings {
+  frictionMethod: FrictionMethod;
+  waterTemperatureC: number;
+  safetyFactor: number;
+  velocityMinMs: number;
+  velocityMaxMs: number;
+  minResidualHeadM: number;
+  airPointToleranceM: number;
+  /** Undefined until the profile supplies its highest ground elevation. */
+  siteAltitudeM: number | undefined;
+  siphonLimitHeadM: number;
+  defaultCoverM: number;
+  checkSurge: boolean;
+}
+
+/**
+ * Defaults. Velocity band: Jordan, *A Handbook of Gravity-Flow Water Systems*, p.53 (via ITACA) [R1].
+ * Residual head at an outlet: ">= 3 m at each tapstand", Akvopedia gravity water supply [R2].
+ * Siphon limit: "siphonage up to about 7.5 m negative head, where vaporisation may begin",
+ * Taylor & Francis/CRC hydraulics textbook, ch. 42 [R7].
+ * Safety factor 1: published pressure classes already contain the standard's design factor
+ * (ISO 4427 C >= 1.25, ASTM D2241 2.0) [R12][R13]; the user raises it for extra margin.
+ * Air-point tolerance 1 m and 20 C water: common practice, no source.
+ */
+export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM'>> = Object.freeze({
+  frictionMethod: 'hazen-williams',
+  waterTemperatureC: 20,
+  safetyFactor: 1,
+  velocityMinMs: 0.7,
+  velocityMaxMs: 3.0,
+  minResidualHeadM: 3,
+  airPointToleranceM: 1,
+  siphonLimitHeadM: 7.5,
+  defaultCoverM: 0,
+  checkSurge: true,
+});
+
+/** Fills the defaults in; does not validate (see `assertLineInput`). */
+export function resolveLineSettings(settings: LineSettings | undefined): ResolvedLineSettings {
+  const s = settings ?? {};
+  const d = DEFAULT_LINE_SETTINGS;
+  return {
+    frictionMethod: s.frictionMethod ?? d.frictionMethod,
+    waterTemperatureC: s.waterTemperatureC ?? d.waterTemperatureC,
+    safetyFactor: s.safetyFactor ?? d.safetyFactor,
+    velocityMinMs: s.velocityMinMs ?? d.velocityMinMs,
+    velocityMaxMs: s.velocityMaxMs ?? d.velocityMaxMs,
+    minResidualHeadM: s.minResidualHeadM ?? d.minResidualHeadM,
+    airPointToleranceM: s.airPointToleranceM ?? d.airPointToleranceM,
+    siteAltitudeM: s.siteAltitudeM,
+    siphonLimitHeadM: s.siphonLimitHeadM ?? d.siphonLimitHeadM,
+    defaultCoverM: s.defaultCoverM ?? d.defaultCoverM,
+    checkSurge: s.checkSurge ?? d.checkSurge,
+  };
+}

@@ -1,0 +1,14 @@
+import { isServer, QueryClient } from '@tanstack/react-query';
+
+function makeQueryClient(): QueryClient {
+  return new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, retry: 1 } } });
+}
+
+let browserClient: QueryClient | undefined;
+
+/** A new client per server request (no data shared between users); one client in the browser. */
+export function getQueryClient(): QueryClient {
+  if (isServer) return makeQueryClient();
+  browserClient ??= makeQueryClient();
+  return browserClient;
+}

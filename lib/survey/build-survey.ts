@@ -1,0 +1,109 @@
+import { chainageAlongTrack, slopeLengthOfProfile } from '../../hydraulics/survey/chainage';
+import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
+import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
+import { DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from '../../hydraulics/survey/height-source';
+import { SurveyImportError } from './errors';
+import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFormat, type SurveyImportWarning } from './parsed-survey';
+
+/** A row read from a file, before chainage and checks. `line` is where it came from. */
+export interface DraftPoint {
+  line?: number;
+  lat?: number;
+  lon?: number;
+  /** Known for station files and field books; computed from lat/lon otherwise. */
+  chainageM?: number;
+  elevationM: number;
+  label?: string;
+  confidence?: number;
+  time?: string;
+}
+
+export interface BuildSurveyInput {
+  format: SurveyFormat;
+  drafts: readonly DraftPoint[];
+  heightSource: HeightSourceName;
+  rowsRead: number;
+  warnings?: SurveyImportWarning[];
+  closureErrorM?: number;
+}
+
+/**
+ * Turns read rows into the one ParsedSurvey shape: chainage along the WGS84 ellipsoid for
+ * positioned points, default confidences per height source, duplicates and backward times
+ * flagged (never dropped), a loud note for consumer-GPS heights, and a final zod check.
+ */
+export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
+  const { drafts, heightSource } = input;
+  if (drafts.length < 2) {
+    throw new SurveyImportError('too-few-points', `a route needs at least two points; the file has ${drafts.length}`);
+  }
+  const warnings: SurveyImportWarning[] = [...(input.warnings ?? [])];
+  const positioned = drafts.every((d) => d.lat !== undefined && d.lon !== undefined);
+  let chainages: number[];
+  let totalSlopeLengthM: number;
+  if (drafts.every((d) => d.chainageM !== undefined)) {
+    chainages = drafts.map((d) => d.chainageM as number);
+    totalSlopeLengthM = slopeLengthOfProfile(drafts.map((d, i) => ({ chainageM: chainages[i], elevationM: d.elevationM })));
+  } else if (positioned) {
+    const track = chainageAlongTrack(drafts.map((d) => ({ latitudeDeg: d.lat as number, longitudeDeg: d.lon as number, elevationM: d.elevationM })));
+    chainages = track.horizontalChainageM;
+    totalSlopeLengthM = track.totalSlopeM;
+  } else {
+    throw new SurveyImportError('missing-column', 'each point needs either a chainage or a latitude and longitude');
+  }
+  const fallback = defaultVerticalUncertaintyM(heightSource);
+  const points = drafts.map((d, i) => {
+    const confidence = d.confidence ?? fallback;
+    return {
+    order: i,
+    ...(d.lat !== undefined ? { lat: d.lat } : {}),
+    ...(d.lon !== undefined ? { lon: d.lon } : {}),
+    chainageM: chainages[i],
+    elevationM: d.elevationM,
+    ...(d.label !== undefined && d.label !== '' ? { label: d.label } : {}),
+    heightSource,
+    ...(confidence !== undefined ? { confidence } : {}),
+    ...(d.time !== undefined ? { time: d.time } : {}),
+    };
+  });
+  const stations = drafts.map((d, i) => ({
+    chainageM: chainages[i],
+    elevationM: d.elevationM,
+    latitudeDeg: d.lat,
+    longitudeDeg: d.lon,
+    timeS: d.time === undefined ? undefined : Date.parse(d.time) / 1000,
+  }));
+  const duplicates = detectDuplicates(stations);
+  for (const c of [...duplicates, ...detectOutOfOrder(stations).filter((c) => c.kind === 'time-backwards')]) {
+    warnings.push({ code: c.kind === 'duplicate' ? 'duplicate-point' : c.kind, message: c.reason, line: drafts[c.index].line, index: c.index });
+  }
+  if (heightSource === 'gps') {
+    warnings.push({
+      code: 'consumer-gps-heights',
+      message:
+        `Heights come from a consumer GPS; their vertical error can reach ${DEFAULT_VERTICAL_UNCERTAINTY.gps.uncertaintyM} m ` +
+        '(GPS SPS Performance Standard). Do not choose pressure class, break-pressure tanks or pump lift on them without checking key heights by levelling.',
+    });
+  }
+  let min = Infinity;
+  let max = -Infinity;
+  for (const d of drafts) {
+    min = Math.min(min, d.elevationM);
+    max = Math.max(max, d.elevationM);
+  }
+  return validateParsedSurvey({
+    points,
+    warnings,
+    stats: {
+      format: input.format,
+      pointCount: points.length,
+      rowsRead: input.rowsRead,
+      totalHorizontalLengthM: chainages[chainages.length - 1] - chainages[0],
+      totalSlopeLengthM,
+      minElevationM: min,
+      maxElevationM: max,
+      duplicateCount: duplicates.length,
+      ...(input.closureErrorM !== undefined ? { closureErrorM: input.closureErrorM } : {}),
+    },
+  });
+}

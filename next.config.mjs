@@ -1,0 +1,8 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  poweredByHeader: false,
+  // Native and Node-only packages stay out of the bundle and load at run time.
+  serverExternalPackages: ['sequelize', 'pg', 'pg-hstore', 'argon2', 'pdfkit', 'svg-to-pdfkit'],
+};
+
+export default nextConfig;

@@ -1,0 +1,98 @@
+import { describe, expect, it } from 'vitest';
+import { analyzeLine, analyzeProfile, headMToPressurePa } from '../../../hydraulics/index';
+import { simpleLine } from './fixtures';
+
+function relative(actual: number, expected: number): number {
+  return Math.abs(actual - expected) / Math.abs(expected);
+}
+
+const FLAT_KM: readonly (readonly [number, number])[] = [
+  [0, 100],
+  [500, 100],
+  [1000, 100],
+];
+
+describe('line profile against published check values', () => {
+  it('REFERENCES §8.2 (Hazen-Williams): 1 km of 100 mm, C = 150, at 10 L/s loses 14.60 m', () => {
+    const profile = analyzeProfile(simpleLine(FLAT_KM, 150, 0.01));
+    // [C] 14.603 m with the 10.67 form, 14.629 m with the exact k = 0.849 form: ~1 % band.
+    expect(relative(profile.totals.frictionLossM, 14.6)).toBeLessThan(0.01);
+    expect(profile.points.frictionLossM[profile.points.frictionLossM.length - 1]).toBe(profile.totals.frictionLossM);
+  });
+
+  it('REFERENCES §8.2: the same line runs at 1.273 m/s, inside Jordan\'s 0.7-3.0 m/s band (no velocity warning)', () => {
+    const analysis = analyzeLine(simpleLine(FLAT_KM, 150, 0.01));
+    expect(analysis.points.velocityMs[0]).toBeCloseTo(1.273, 3);
+    expect(analysis.warnings.filter((w) => w.code.startsWith('velocity'))).toEqual([]);
+  });
+
+  it('REFERENCES §8.3 (Darcy-Weisbach, PVC e = 0.0015 mm, 20 C): the same line loses 14.235 m', () => {
+    const input = { ...simpleLine(FLAT_KM, 150, 0.01), settings: { frictionMethod: 'darcy-weisbach' as const } };
+    expect(relative(analyzeProfile(input).totals.frictionLossM, 14.235)).toBeLessThan(0.01);
+  });
+
+  it('REFERENCES §8.1: 46.2 m of static head is 452.2 kPa at 20 C', () => {
+    const profile = analyzeProfile(simpleLine(FLAT_KM, 146.2, 0));
+    const headM = profile.points.staticPressureHeadM[1];
+    expect(headM).toBeCloseTo(46.2, 10);
+    // Printed to 0.1 kPa with rho = 998.2 kg/m3; the core's 20 C density gives 452.25 kPa.
+    expect(Math.abs(headMToPressurePa(headM, 20) / 1000 - 452.2)).toBeLessThan(0.1);
+  });
+
+  it('REFERENCES §1.6 / [R7]: atmospheric head 10.34 m at sea level, 9.17 m at 1000 m, 8.62 m at 1500 m', () => {
+    const at = (siteAltitudeM: number) =>
+      analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0), settings: { siteAltitudeM } }).limits;
+    expect(at(0).atmosphericHeadM).toBeCloseTo(10.34, 1);
+    expect(Math.abs(at(1000).atmosphericHeadM - 9.17)).toBeLessThan(0.02);
+    // [R7] siphon article prints 8.63 m at 1500 m; the ISA check in §1.6 gives 8.62 m.
+    expect(Math.abs(at(1500).atmosphericHeadM - 8.62)).toBeLessThan(0.02);
+    // Vapour head of water at 20 C: 0.239 m (REFERENCES §1.6 [C], Buck/Tetens form).
+    expect(at(0).vapourHeadM).toBeCloseTo(0.239, 3);
+  });
+
+  it('defaults the site altitude to the highest ground of the line (lowest air pressure: the cautious choice)', () => {
+    const profile = analyzeProfile(simpleLine([[0, 1000], [100, 1500], [200, 1200]], 1600, 0));
+    expect(profile.limits.siteAltitudeM).toBe(1500);
+    expect(Math.abs(profile.limits.atmosphericHeadM - 8.62)).toBeLessThan(0.02);
+  });
+
+  it('siphon limits [R7]: a summit at -7.6 m (course note "usually -7.6 m") passes the 7.5 m practical limit; -7.4 m does not', () => {
+    const summit = (summitM: number) =>
+      analyzeProfile({ ...simpleLine([[0, 100], [500, summitM], [1000, 80]], 105, 0), settings: { siteAltitudeM: 0 } });
+    const deep = summit(112.6);
+    expect(deep.points.pressureHeadM[1]).toBeCloseTo(-7.6, 10);
+    const deepZone = deep.zones.find((zone) => zone.kind === 'siphon-limit');
+    expect(deepZone).toBeDefined();
+    // Pressure = 105 - z(x) is linear on each piece: -7.5 m where z = 112.5.
+    expect(deepZone!.fromM).toBeCloseTo((12.5 / 12.6) * 500, 4);
+    expect(deepZone!.toM).toBeCloseTo(500 + (0.1 / 32.6) * 500, 4);
+    expect(deep.zones.some((zone) => zone.kind === 'vapour-limit')).toBe(false);
+    const shallow = summit(112.4);
+    expect(shallow.zones.map((zone) => zone.kind)).toEqual(['negative-pressure']);
+  });
+
+  it('vapour limit at 3000 m: atmospheric 7.15 m (REFERENCES §1.6) less 0.24 m vapour head is passed by a -7 m summit', () => {
+    const profile = analyzeProfile({
+      ...simpleLine([[0, 3000], [500, 3012], [1000, 2980]], 3005, 0),
+      settings: { siteAltitudeM: 3000 },
+    });
+    expect(Math.abs(profile.limits.atmosphericHeadM - 7.15)).toBeLessThan(0.02);
+    expect(profile.limits.vapourLimitHeadM).toBeLessThan(7);
+    const zone = profile.zones.find((z) => z.kind === 'vapour-limit');
+    expect(zone).toBeDefined();
+    const limit = profile.limits.vapourLimitHeadM;
+    // 3005 - z(x) = -limit on the rising piece z = 3000 + 12 x / 500.
+    expect(zone!.fromM).toBeCloseTo(((5 + limit) / 12) * 500, 6);
+  });
+
+  it('Jordan p.52 via ITACA [R1] ("never negative"): the exact chainage where a flowing line goes below zero pressure', () => {
+    const profile = analyzeProfile(simpleLine([[0, 100], [1000, 100], [2000, 100]], 110, 0.01));
+    const gradient = profile.totals.frictionLossM / 2000;
+    const crossing = profile.crossings.find((c) => c.kind === 'negative-pressure');
+    expect(crossing?.entering).toBe(true);
+    // Between stations (not snapped to one): 110 - gradient * x = 100.
+    expect(crossing!.chainageM).toBeCloseTo(10 / gradient, 6);
+    expect(crossing!.chainageM).toBeGreaterThan(0);
+    expect(crossing!.chainageM).toBeLessThan(1000);
+  });
+});
