@@ -1,6 +1,9 @@
 import { db } from '../lib/db';
+import { Attachment } from './attachment';
 import { Membership } from './membership';
 import { Project } from './project';
+import { Route } from './route';
+import { RoutePoint } from './route-point';
 import { Team } from './team';
 import { User } from './user';
 
@@ -14,6 +17,9 @@ export function models() {
     Team.initialise(sequelize);
     Membership.initialise(sequelize);
     Project.initialise(sequelize);
+    Attachment.initialise(sequelize);
+    Route.initialise(sequelize);
+    RoutePoint.initialise(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -21,9 +27,14 @@ export function models() {
     Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
     Team.hasMany(Project, { foreignKey: 'teamId', as: 'projects' });
     Project.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
+    Project.hasMany(Route, { foreignKey: 'projectId', as: 'routes' });
+    Route.belongsTo(Project, { foreignKey: 'projectId', as: 'project' });
+    Route.hasMany(RoutePoint, { foreignKey: 'routeId', as: 'points' });
+    Project.hasMany(Attachment, { foreignKey: 'projectId', as: 'attachments' });
+    Route.belongsTo(Attachment, { foreignKey: 'sourceAttachmentId', as: 'sourceAttachment' });
     ready = true;
   }
-  return { User, Team, Membership, Project, sequelize: db() };
+  return { User, Team, Membership, Project, Attachment, Route, RoutePoint, sequelize: db() };
 }
 
-export { Membership, Project, Team, User };
+export { Attachment, Membership, Project, Route, RoutePoint, Team, User };
