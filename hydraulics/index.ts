@@ -174,3 +174,13 @@ export {
 export { suggestBreakPressureTanks } from './design/suggest-tanks';
 export { suggestPipeUpsize, nextSizeInSeries, type PipeUpsize } from './design/upsize';
 export { applyLineFixes } from './design/apply-fixes';
+
+// Survey geometry, field-book reduction and clean-up proposals
+export * from './survey/index';
+
+// Daily demand, ram pump planning, storage sizing, source yield and seasonal upkeep
+export * from './demand/index';
+export * from './ram/index';
+export * from './storage/index';
+export * from './yield/index';
+export * from './seasons/index';
