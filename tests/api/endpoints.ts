@@ -1,5 +1,6 @@
 import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
+import { referenceLine } from './analysis-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 type Expect = Record<Actor, number>;
@@ -35,6 +36,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'teams/[teamId]/projects/route.ts', method: 'POST', params: (f) => ({ teamId: f.teamId }), body: () => ({ name: 'Matrix project' }), expect: designers(201) },
   { file: 'projects/[projectId]/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
   { file: 'projects/[projectId]/route.ts', method: 'PATCH', params: (f) => ({ projectId: f.projectId }), body: () => ({ siteNotes: 'Checked the spring box.' }), expect: designers(200) },
+  { file: 'analysis/line/route.ts', method: 'POST', params: () => ({}), body: () => referenceLine(), expect: signedIn(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
 ];
 
