@@ -1,0 +1,92 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { POST as signOutEverywhere } from '@/app/api/accounts/sign-out-everywhere/route';
+import { GET as getProject } from '@/app/api/projects/[projectId]/route';
+import { DELETE as removeMember, PATCH as changeRole } from '@/app/api/teams/[teamId]/members/[userId]/route';
+import { GET as listTeams } from '@/app/api/teams/route';
+import { authOptions } from '@/lib/auth/options';
+import { resetSignInLimits } from '@/lib/auth/rate-limit';
+import { models } from '@/models';
+import { call, createTeamFixture, sessionCookie } from '../support/api';
+
+type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
+
+describe('sessions', () => {
+  let f: Fixture;
+  beforeEach(async () => {
+    f = await createTeamFixture();
+  });
+
+  it('"sign out everywhere" ends tokens issued before it', async () => {
+    const oldCookie = await sessionCookie(f.users.designer.id);
+    expect((await call(listTeams, { method: 'GET', path: '/api/teams', cookie: oldCookie })).status).toBe(200);
+    expect((await call(signOutEverywhere, { method: 'POST', path: '/api/accounts/sign-out-everywhere', cookie: oldCookie })).status).toBe(200);
+    expect((await call(listTeams, { method: 'GET', path: '/api/teams', cookie: oldCookie })).status).toBe(401);
+    expect((await call(listTeams, { method: 'GET', path: '/api/teams', userId: f.users.designer.id })).status).toBe(200);
+  });
+
+  it('a role change takes effect on the next request with the same token', async () => {
+    const cookie = await sessionCookie(f.users.extra.id);
+    const read = () => call(getProject, { method: 'GET', path: '/api/projects/x', params: { projectId: f.projectId }, cookie });
+    expect((await read()).status).toBe(200);
+    await call(removeMember, { method: 'DELETE', path: '/x', params: { teamId: f.teamId, userId: f.users.extra.id }, userId: f.users.owner.id });
+    expect((await read()).status).toBe(404);
+  });
+
+  it('a forged token signed with another secret is anonymous', async () => {
+    const { encode } = await import('next-auth/jwt');
+    const token = await encode({ token: { sub: f.users.owner.id, sv: 0 }, secret: 'another secret that is long enough to use' });
+    const res = await call(listTeams, { method: 'GET', path: '/api/teams', cookie: `next-auth.session-token=${token}` });
+    expect(res.status).toBe(401);
+  });
+});
+
+describe('sign-in', () => {
+  const credentials = authOptions().providers[0] as unknown as {
+    options: { authorize: (c: Record<string, string>, req: { headers: Record<string, string> }) => Promise<unknown> };
+  };
+  const authorize = (email: string, password: string, ip = '203.0.113.7') => credentials.options.authorize({ email, password }, { headers: { 'x-forwarded-for': ip } });
+
+  beforeEach(() => resetSignInLimits());
+
+  it('accepts the right password and refuses a wrong one or an unknown e-mail alike', async () => {
+    const user = await models().User.findOne({ where: { email: 'owner@example.test' } });
+    expect(await authorize('owner@example.test', 'tarnbeck-demo-2026')).toMatchObject({ id: user!.id });
+    expect(await authorize('owner@example.test', 'wrong password')).toBeNull();
+    expect(await authorize('nobody@example.test', 'wrong password')).toBeNull();
+  });
+
+  it('slows repeated failures per e-mail, before checking the password', async () => {
+    for (let i = 0; i < 5; i++) expect(await authorize('designer@example.test', `guess ${i}`)).toBeNull();
+    await expect(authorize('designer@example.test', 'tarnbeck-demo-2026')).rejects.toThrow('rate_limited');
+    await expect(authorize('designer@example.test', 'tarnbeck-demo-2026', '198.51.100.9')).rejects.toThrow('rate_limited');
+  });
+
+  it('slows repeated failures per IP across e-mails', async () => {
+    for (let i = 0; i < 30; i++) await authorize(`someone-${i}@example.test`, 'guess', '192.0.2.44');
+    await expect(authorize('reviewer@example.test', 'tarnbeck-demo-2026', '192.0.2.44')).rejects.toThrow('rate_limited');
+    expect(await authorize('reviewer@example.test', 'tarnbeck-demo-2026', '192.0.2.45')).not.toBeNull();
+  });
+});
+
+describe('teams', () => {
+  let f: Fixture;
+  beforeEach(async () => {
+    f = await createTeamFixture();
+  });
+
+  it('the last owner can be neither demoted nor removed', async () => {
+    const demote = await call(changeRole, { method: 'PATCH', path: '/x', params: { teamId: f.teamId, userId: f.users.owner.id }, body: { role: 'designer' }, userId: f.users.owner.id });
+    expect(demote.status).toBe(409);
+    const remove = await call(removeMember, { method: 'DELETE', path: '/x', params: { teamId: f.teamId, userId: f.users.owner.id }, userId: f.users.owner.id });
+    expect(remove.status).toBe(409);
+    const m = await models().Membership.findOne({ where: { teamId: f.teamId, userId: f.users.owner.id } });
+    expect(m!.role).toBe('owner');
+  });
+
+  it('an owner can step down once another owner exists', async () => {
+    await call(changeRole, { method: 'PATCH', path: '/x', params: { teamId: f.teamId, userId: f.users.designer.id }, body: { role: 'owner' }, userId: f.users.owner.id });
+    const demote = await call(changeRole, { method: 'PATCH', path: '/x', params: { teamId: f.teamId, userId: f.users.owner.id }, body: { role: 'viewer' }, userId: f.users.owner.id });
+    expect(demote.status).toBe(200);
+    expect(demote.json.member.role).toBe('viewer');
+  });
+});
