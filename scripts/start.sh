@@ -17,7 +17,10 @@ start_postgres "$PGDATA_DIR" "$RUNNEL_PG_PORT"
 
 APP_PID=""
 cleanup() {
-  trap - INT TERM EXIT
+  # Finish the clean-up even if the terminal or a pipe reading our output has already gone.
+  trap '' INT TERM PIPE
+  trap - EXIT
+  set +e
   if [ -n "$APP_PID" ] && kill -0 "$APP_PID" 2>/dev/null; then
     log "stopping the app"
     kill -TERM -- "-$APP_PID" 2>/dev/null || kill -TERM "$APP_PID" 2>/dev/null || true

@@ -46,3 +46,17 @@ test('the owner manages members and cannot demote the last owner', async ({ page
   await expect(page.getByRole('alert').filter({ hasText: 'at least one owner' })).toBeVisible();
   await expect(page.getByLabel('Role of Maren Holloway')).toHaveValue('owner');
 });
+
+test('signing out ends the session token, even if someone kept a copy of it', async ({ page, playwright, baseURL }) => {
+  await signIn(page, 'reviewer@example.test');
+  const token = (await page.context().cookies()).find((c) => c.name === 'next-auth.session-token');
+  expect(token).toBeDefined();
+  const copy = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { cookie: `next-auth.session-token=${token!.value}` } });
+  expect((await copy.get('/api/teams')).status()).toBe(200);
+
+  await page.getByRole('button', { name: 'Account menu' }).click();
+  await page.getByRole('button', { name: 'Sign out', exact: true }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  expect((await copy.get('/api/teams')).status()).toBe(401);
+  await copy.dispose();
+});

@@ -2,6 +2,7 @@ import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
 import { MembersTable } from '@/components/team/members-table';
 import { AddMemberForm } from '@/components/team/add-member-form';
+import { TeamSettings } from '@/components/team/team-settings';
 import { Panel } from '@/components/ui/panel';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { currentTeam } from '@/lib/current-team';
@@ -36,6 +37,9 @@ export default async function TeamPage() {
       <HydrationBoundary state={dehydrate(queryClient)}>
         <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
       </HydrationBoundary>
+      <Panel title="Teams">
+        <TeamSettings teamId={team.id} teamName={team.name} canRename={manage} />
+      </Panel>
       <RoleGuide />
     </div>
   );
