@@ -2,45 +2,33 @@
 
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import type { FieldErrors } from '@/lib/errors';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useSignUp } from '@/lib/queries/accounts';
 import { ApiError } from '@/lib/queries/fetch-json';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { SignUpSchema } from '@/lib/validations/auth';
 
 export function SignUpForm() {
   const router = useRouter();
   const signUp = useSignUp();
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    const parsed = SignUpSchema.safeParse({ name: form.get('name'), email: form.get('email'), password: form.get('password') });
-    if (!parsed.success) {
-      setFields(fieldErrorsOf(parsed.error));
-      return;
-    }
-    setFields({});
-    setMessage(null);
+    const input = check(SignUpSchema, { name: form.get('name'), email: form.get('email'), password: form.get('password') });
+    if (!input) return;
     try {
-      await signUp.mutateAsync(parsed.data);
-      const result = await signIn('credentials', { email: parsed.data.email, password: parsed.data.password, redirect: false });
+      await signUp.mutateAsync(input);
+      const result = await signIn('credentials', { email: input.email, password: input.password, redirect: false });
       if (result?.error) throw new Error('signed up, but signing in failed');
       router.push('/projects');
       router.refresh();
     } catch (error) {
-      if (error instanceof ApiError) {
-        setFields(error.fields ?? {});
-        setMessage(error.message);
-      } else {
-        setMessage('Your account was created but we could not sign you in. Try signing in.');
-      }
+      fail(error instanceof ApiError ? error : null, 'Your account was created but we could not sign you in. Try signing in.');
     }
   }
 

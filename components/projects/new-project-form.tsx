@@ -1,39 +1,31 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useCreateProject } from '@/lib/queries/projects';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { CreateProjectSchema } from '@/lib/validations/projects';
 
 export function NewProjectForm({ teamId }: { teamId: string }) {
   const router = useRouter();
   const create = useCreateProject(teamId);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const formElement = event.currentTarget;
     const form = new FormData(formElement);
-    const parsed = CreateProjectSchema.safeParse({ name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem') });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    setMessage(null);
+    const input = check(CreateProjectSchema, { name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem') });
+    if (!input) return;
     try {
-      const project = await create.mutateAsync(parsed.data);
+      const project = await create.mutateAsync(input);
       formElement.reset();
       router.push(`/projects/${project.id}`);
     } catch (error) {
-      if (error instanceof ApiError) {
-        setFields(error.fields ?? {});
-        setMessage(error.message);
-      } else setMessage('The project could not be saved. Try again.');
+      fail(error, 'The project could not be saved. Try again.');
     }
   }
 

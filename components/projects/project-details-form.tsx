@@ -6,17 +6,15 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { ProjectSummary } from '@/lib/data/projects';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useUpdateProject } from '@/lib/queries/projects';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { UpdateProjectSchema } from '@/lib/validations/projects';
 
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
   const router = useRouter();
   const update = useUpdateProject(project.id);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
+  const [saved, setSaved] = useState(false);
 
   if (!editable) {
     return (
@@ -31,18 +29,17 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    const parsed = UpdateProjectSchema.safeParse({
+    setSaved(false);
+    const input = check(UpdateProjectSchema, {
       name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem'), siteNotes: form.get('siteNotes'),
     });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
+    if (!input) return;
     try {
-      await update.mutateAsync(parsed.data);
-      setMessage({ text: 'Saved.', tone: 'ok' });
+      await update.mutateAsync(input);
+      setSaved(true);
       router.refresh();
     } catch (error) {
-      if (error instanceof ApiError) setFields(error.fields ?? {});
-      setMessage({ text: error instanceof Error ? error.message : 'Not saved.', tone: 'error' });
+      fail(error);
     }
   }
 
@@ -57,7 +54,8 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
       <div className="sm:col-span-2"><TextAreaField id="siteNotes" label="Site notes" rows={4} defaultValue={project.siteNotes} errors={fields.siteNotes} /></div>
       <div className="flex items-center gap-3 sm:col-span-2">
         <Button type="submit" disabled={update.isPending}>{update.isPending ? 'Saving…' : 'Save details'}</Button>
-        <FormMessage message={message?.text} tone={message?.tone} />
+        <FormMessage message={saved ? 'Saved.' : null} tone="ok" />
+        <FormMessage message={message} />
       </div>
     </form>
   );

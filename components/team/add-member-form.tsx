@@ -1,35 +1,29 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useAddMember } from '@/lib/queries/members';
 import { ROLE_LABELS, ROLES } from '@/lib/roles';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { AddMemberSchema } from '@/lib/validations/teams';
 
 export function AddMemberForm({ teamId }: { teamId: string }) {
   const add = useAddMember(teamId);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const formElement = event.currentTarget;
     const form = new FormData(formElement);
-    const parsed = AddMemberSchema.safeParse({ email: form.get('email'), role: form.get('role') });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    setMessage(null);
+    const input = check(AddMemberSchema, { email: form.get('email'), role: form.get('role') });
+    if (!input) return;
     try {
-      await add.mutateAsync(parsed.data);
+      await add.mutateAsync(input);
       formElement.reset();
     } catch (error) {
-      if (error instanceof ApiError) setFields(error.fields ?? {});
-      setMessage(error instanceof Error ? error.message : 'Not added.');
+      fail(error, 'Not added. Try again.');
     }
   }
 

@@ -1,0 +1,38 @@
+'use client';
+
+import { useState } from 'react';
+import type { z } from 'zod';
+import type { FieldErrors } from '../errors';
+import { ApiError } from '../queries/fetch-json';
+import { fieldErrorsOf } from '../validations/common';
+
+/**
+ * Errors of one form: `check` validates with the same zod schema the handler uses and shows the
+ * field errors at once; `fail` shows a refusal from the API beside the fields it names.
+ */
+export function useFormErrors() {
+  const [fields, setFields] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+
+  function check<S extends z.ZodType>(schema: S, data: unknown): z.output<S> | null {
+    const parsed = schema.safeParse(data);
+    setMessage(null);
+    if (!parsed.success) {
+      setFields(fieldErrorsOf(parsed.error));
+      return null;
+    }
+    setFields({});
+    return parsed.data;
+  }
+
+  function fail(error: unknown, fallback = 'Not saved. Try again.') {
+    if (error instanceof ApiError) {
+      setFields(error.fields ?? {});
+      setMessage(error.message);
+    } else {
+      setMessage(fallback);
+    }
+  }
+
+  return { fields, message, check, fail, setMessage };
+}
