@@ -47,7 +47,7 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
           Show archived
         </label>
       </div>
-      <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+      <div className="relative overflow-x-auto rounded-lg border border-creek-100 bg-white">
         <table className="w-full text-left text-sm">
           <thead className="bg-creek-50 text-creek-800">
             <tr>

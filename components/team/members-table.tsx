@@ -18,7 +18,7 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
   return (
     <div className="space-y-2">
       <FormMessage message={error} />
-      <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+      <div className="relative overflow-x-auto rounded-lg border border-creek-100 bg-white">
         <table className="w-full text-left text-sm">
           <thead className="bg-creek-50 text-creek-800">
             <tr>

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { notFound } from 'next/navigation';
 import { ProjectNav } from '@/components/projects/project-nav';
+import { RoleBadge } from '@/components/ui/role-badge';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { getProject } from '@/lib/data/projects';
 import { ProjectParams } from '@/lib/validations/projects';
@@ -10,13 +11,14 @@ export default async function ProjectLayout({ children, params }: { children: Re
   if (!parsed.success) notFound();
   const user = await requireUser();
   const project = await getProject(parsed.data.projectId);
-  await requireTeamRole(user, project?.teamId ?? null, 'project.view');
+  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
   if (!project) notFound();
   return (
     <div className="space-y-5">
-      <div>
-        <p className="text-xs uppercase tracking-wide text-creek-600">Project</p>
-        <p className="text-lg font-semibold text-creek-900">{project.name}</p>
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="text-2xl font-semibold text-creek-900">{project.name}</h1>
+        <RoleBadge role={role} />
+        {project.archived && <span className="rounded bg-stone-100 px-2 py-0.5 text-xs text-stone-700">Archived</span>}
       </div>
       <ProjectNav projectId={project.id} />
       {children}

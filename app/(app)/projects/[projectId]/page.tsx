@@ -4,7 +4,6 @@ import { ProjectDangerZone } from '@/components/projects/project-danger-zone';
 import { ProjectDetailsForm } from '@/components/projects/project-details-form';
 import { UpcomingSections } from '@/components/projects/upcoming-sections';
 import { Panel } from '@/components/ui/panel';
-import { RoleBadge } from '@/components/ui/role-badge';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { getProject } from '@/lib/data/projects';
 import { can } from '@/lib/permissions';
@@ -22,11 +21,6 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-center gap-3">
-        <h1 className="text-2xl font-semibold text-creek-900">{project.name}</h1>
-        <RoleBadge role={role} />
-        {project.archived && <span className="rounded bg-stone-100 px-2 py-0.5 text-xs text-stone-700">Archived</span>}
-      </div>
       <Panel title="Project details">
         <ProjectDetailsForm project={project} editable={can(role, 'project.edit')} />
       </Panel>
