@@ -17,6 +17,14 @@ export interface TankPlanInput {
   /** First and last point to plan over. @default the whole profile */
   fromPoint?: number;
   toPoint?: number;
+  /**
+   * Head lost to friction and fittings from the line's start to each point at the design flow, m
+   * (cumulative). A tank must sit high enough to push that flow over every summit after it.
+   * @default no flow (only the static level has to clear the summits)
+   */
+  headLossToPointM?: ArrayLike<number>;
+  /** Pressure head to keep above the pipe at summits after a tank while flowing, m. @default 0 */
+  summitClearanceM?: number;
 }
 
 /** A planned break-pressure tank. */
@@ -74,12 +82,22 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   const to = input.toPoint ?? chainageM.length - 1;
   if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
   const raise = input.tankWaterAboveGroundM ?? 0;
+  const clearance = input.summitClearanceM ?? 0;
   const allow = (piece: number): number =>
     typeof allowableHeadM === 'number' ? allowableHeadM : allowableHeadM[piece];
-  // Highest pipe at or after each point (to the plan's end): the lowest level a tank there may have.
+  const lossTo = input.headLossToPointM;
+  const lossAt = (piece: number, c: number): number => {
+    if (!lossTo) return 0;
+    const c0 = chainageM[piece];
+    const c1 = piece + 1 < chainageM.length ? chainageM[piece + 1] : c0;
+    return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
+  };
+  // Highest "pipe plus loss to reach it" at or after each point: a tank at point k must hold at
+  // least highestAhead[k] - loss(k) + clearance for the design flow to pass every summit ahead.
   const highestAhead = new Float64Array(to + 1);
-  highestAhead[to] = pipeElevationM[to];
-  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k], highestAhead[k + 1]);
+  highestAhead[to] = pipeElevationM[to] + (lossTo?.[to] ?? 0);
+  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo?.[k] ?? 0), highestAhead[k + 1]);
+  const floorAt = (ahead: number, piece: number, c: number): number => ahead - lossAt(piece, c) + clearance;
   const tanks: PlannedTank[] = [];
   let level = input.startLevelM;
   let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
@@ -103,21 +121,26 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     for (let k = at.piece; k <= over.piece; k++) {
       const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
       if (k > at.piece) {
-        consider({ piece: k, chainageM: chainageM[k], pipeM: pipeElevationM[k], groundM: groundElevationM[k] }, highestAhead[k]);
+        consider({ piece: k, chainageM: chainageM[k], pipeM: pipeElevationM[k], groundM: groundElevationM[k] }, floorAt(highestAhead[k], k, chainageM[k]));
       }
-      // Where the ground inside this piece comes down to the highest pipe ahead: the lowest usable site.
+      // Where the tank level on the ground inside this piece comes down to the floor set by the
+      // summits ahead (both vary linearly along the piece): the lowest usable site.
       const c0 = k === at.piece ? at.chainageM : chainageM[k];
-      const target = highestAhead[k + 1] - raise;
       const g0 = k === at.piece ? at.groundM : groundElevationM[k];
       const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
-      if ((g0 - target) * (g1 - target) < 0) {
-        const t = (g0 - target) / (g0 - g1);
+      const f0 = g0 + raise - floorAt(highestAhead[k + 1], k, c0);
+      const f1 = g1 + raise - floorAt(highestAhead[k + 1], k, pieceEndM);
+      if (f0 * f1 < 0) {
+        const t = f0 / (f0 - f1);
         const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
         const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
-        consider({ piece: k, chainageM: lerp(c0, pieceEndM, t), pipeM: lerp(z0, z1, t), groundM: target }, highestAhead[k + 1]);
+        const c = lerp(c0, pieceEndM, t);
+        consider({ piece: k, chainageM: c, pipeM: lerp(z0, z1, t), groundM: lerp(g0, g1, t) }, floorAt(highestAhead[k + 1], k, c));
       }
     }
-    consider(over, Math.max(over.pipeM, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM));
+    const overLoss = lossAt(over.piece, over.chainageM);
+    const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
+    consider(over, floorAt(aheadOfOver, over.piece, over.chainageM));
     const chosen = pick.best;
     if (chosen === null) {
       return fail(

@@ -6,13 +6,23 @@ import { planBreakPressureTanks, type PlannedTank, type TankPlan } from './break
  * Break-pressure tanks to add to an analysed line so no stretch's static pressure passes its
  * allowable head. Existing tanks stay: each reach between existing resets is planned on its own
  * (they reset the static line, so reaches are independent and the per-reach minimum is the
- * overall minimum for the line as it stands). New tanks stand on the ground.
+ * overall minimum for the line as it stands). New tanks stand on the ground, and high enough that
+ * the analysed flow still passes every summit after them with the minimum residual head to spare
+ * (never negative: Jordan p.52 via ITACA [R1]); when no such plan exists, the plan that only keeps
+ * the static level above the summits is offered and the negative-pressure check will say so.
  */
 export function suggestBreakPressureTanks(profile: LineProfile, tankWaterAboveGroundM = 0): TankPlan {
+  const withFlow = planAllReaches(profile, tankWaterAboveGroundM, true);
+  return withFlow.feasible ? withFlow : planAllReaches(profile, tankWaterAboveGroundM, false);
+}
+
+function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, keepFlowing: boolean): TankPlan {
   const { points } = profile;
   const n = points.chainageM.length;
   const allowableByPiece = new Float64Array(n - 1);
   for (let j = 0; j < n - 1; j++) allowableByPiece[j] = profile.stretches[points.stretchIndex[j]].allowableHeadM;
+  const lossToPoint = new Float64Array(n);
+  for (let j = 0; j < n; j++) lossToPoint[j] = points.frictionLossM[j] + points.minorLossM[j];
   const tanks: PlannedTank[] = [];
   for (const reach of profile.reaches) {
     const fromPoint = pointIndexAt(points.chainageM, reach.fromM);
@@ -27,6 +37,7 @@ export function suggestBreakPressureTanks(profile: LineProfile, tankWaterAboveGr
       tankWaterAboveGroundM,
       fromPoint,
       toPoint,
+      ...(keepFlowing ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM } : {}),
     });
     tanks.push(...plan.tanks);
     if (!plan.feasible) return { tanks, feasible: false, problem: plan.problem };
