@@ -23,8 +23,8 @@ export function LineToolbar({ onZoomIn, onZoomOut, onWhole, exaggeration, onExag
   return (
     <div className="flex flex-wrap items-end gap-2 text-sm">
       <div className="flex gap-1" role="group" aria-label="Zoom on chainage">
-        <Button tone="quiet" className="px-2 py-1" onClick={onZoomIn} aria-label="Zoom in">＋</Button>
-        <Button tone="quiet" className="px-2 py-1" onClick={onZoomOut} aria-label="Zoom out">－</Button>
+        <Button tone="quiet" className="px-2 py-1 text-xs" onClick={onZoomIn}>Zoom in</Button>
+        <Button tone="quiet" className="px-2 py-1 text-xs" onClick={onZoomOut}>Zoom out</Button>
         <Button tone="quiet" className="px-2 py-1 text-xs" onClick={onWhole}>Whole line</Button>
       </div>
       <label className="text-xs text-creek-900">

@@ -10,6 +10,7 @@ import { LINE_STATUS_LABELS } from '../validations/lines';
 import { displayUnits, type UnitSystem } from '../units/display';
 import { formatChainage, formatFlow, formatHeadPressure } from '../units/format';
 import { INK, labelGrid } from './pdf-table';
+import { pdfText } from './pdf-text';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
 export interface LineReportInput {
@@ -41,7 +42,7 @@ export async function lineReportPdf({ project, line, analysis, generatedAt }: Li
     doc.on('error', reject);
   });
 
-  doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(`${line.name}: line design report`);
+  doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(pdfText(`${line.name}: line design report`));
   doc.font('Helvetica').fontSize(9).fillColor('#215d75').text('Runnel \u00b7 gravity line design \u00b7 estimates for review, not a licensed design');
   doc.moveDown(0.5);
   labelGrid(doc, [
@@ -57,19 +58,19 @@ export async function lineReportPdf({ project, line, analysis, generatedAt }: Li
 
   const answers = lineAnswers(analysis);
   const t = analysis.settings.waterTemperatureC;
-  doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(
+  doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
     `Flow delivered: ${formatFlow(answers.flowM3s, u)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
       `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u, t)}). ` +
       `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u, t)} at ch. ${formatChainage(answers.worstStatic.chainageM, u)} ` +
       `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u, t)}). ` +
       `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice.`,
-  );
+  ));
   doc.moveDown(0.4);
 
   const scene = profileScene(analysis, { units: u, devices: line.design.devices, width: 1000 }, 'report');
   const scale = CONTENT_WIDTH / scene.frame.width;
   const top = doc.y;
-  SVGtoPDF(doc, svgToString(scene.root), PAGE.margin, top, {
+  SVGtoPDF(doc, pdfText(svgToString(scene.root)), PAGE.margin, top, {
     width: CONTENT_WIDTH,
     height: scene.frame.height * scale,
     fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica'),

@@ -1,4 +1,5 @@
 import type PDFDocument from 'pdfkit';
+import { pdfText } from './pdf-text';
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -20,12 +21,13 @@ export function ensureRoom(doc: Doc, needed: number): void {
 /** A section heading. */
 export function heading(doc: Doc, text: string): void {
   ensureRoom(doc, 60);
-  doc.moveDown(0.6).font('Helvetica-Bold').fontSize(12).fillColor(INK).text(text, doc.page.margins.left);
+  doc.moveDown(0.6).font('Helvetica-Bold').fontSize(12).fillColor(INK).text(pdfText(text), doc.page.margins.left);
   doc.moveDown(0.3);
 }
 
 /** A table that wraps cell text and repeats its header on each new page. */
-export function table(doc: Doc, columns: readonly PdfColumn[], rows: readonly string[][], fontSize = 8.5): void {
+export function table(doc: Doc, columns: readonly PdfColumn[], givenRows: readonly string[][], fontSize = 8.5): void {
+  const rows = givenRows.map((row) => row.map(pdfText));
   const left = doc.page.margins.left;
   const pad = 3;
   const drawHeader = () => {
@@ -35,7 +37,7 @@ export function table(doc: Doc, columns: readonly PdfColumn[], rows: readonly st
     let x = left;
     doc.font('Helvetica-Bold').fontSize(fontSize).fillColor(INK);
     for (const c of columns) {
-      doc.text(c.heading, x + pad, y + pad, { width: c.width - 2 * pad, align: c.align ?? 'left', lineBreak: false, ellipsis: true });
+      doc.text(pdfText(c.heading), x + pad, y + pad, { width: c.width - 2 * pad, align: c.align ?? 'left', lineBreak: false, ellipsis: true });
       x += c.width;
     }
     doc.y = y + h;
@@ -74,8 +76,9 @@ export function labelGrid(doc: Doc, cells: readonly [string, string][], columns:
     const x = left + (i % columns) * cellWidth;
     const y = top + Math.floor(i / columns) * rowHeight;
     doc.rect(x, y, cellWidth, rowHeight).lineWidth(0.7).strokeColor(INK).stroke();
-    doc.font('Helvetica').fontSize(7).fillColor('#215d75').text(label.toUpperCase(), x + 5, y + 4, { width: cellWidth - 10, lineBreak: false });
-    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(value, x + 5, y + 14, { width: cellWidth - 10, lineBreak: false, ellipsis: true });
+    doc.font('Helvetica').fontSize(7).fillColor('#215d75').text(pdfText(label.toUpperCase()), x + 5, y + 4, { width: cellWidth - 10, height: 9, ellipsis: true });
+    const fits = doc.font('Helvetica-Bold').fontSize(10).widthOfString(pdfText(value)) <= cellWidth - 10;
+    doc.fontSize(fits ? 10 : 8).fillColor(INK).text(pdfText(value), x + 5, y + (fits ? 14 : 13), { width: cellWidth - 10, height: fits ? 12 : 20, ellipsis: true });
   });
   doc.x = left;
   doc.y = top + Math.ceil(cells.length / columns) * rowHeight + 8;

@@ -6,6 +6,7 @@ import { placeWords, SEVERITY_WORDS, WARNING_TITLES } from '../lines/warning-wor
 import { toDisplay, type DisplayUnits } from '../units/display';
 import { fixed, formatChainage, formatFlow, formatHeadPressure, formatLength, formatPressure, formatTemperature, formatVelocity } from '../units/format';
 import { heading, INK, table } from './pdf-table';
+import { pdfText } from './pdf-text';
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -96,7 +97,7 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   table(
     doc,
     [{ heading: 'Pipe', width: 200 }, { heading: 'Hazen-Williams C', width: 80, align: 'right' }, { heading: 'Roughness', width: 80, align: 'right' }, { heading: 'Wave speed', width: 80, align: 'right' }, { heading: 'Source of figures', width: 322 }],
-    pipes.map((p) => [p.label, fixed(p.hazenWilliamsC, 0), `${fixed(toDisplay.diameter(p.roughnessM, u), u.diameter === 'mm' ? 4 : 5)} ${u.diameter}`, `${fixed(toDisplay.velocity(p.waveSpeedMs, u), 0)} ${u.velocityLabel}`, p.source]),
+    pipes.map((p) => [p.label, fixed(p.hazenWilliamsC, 0), `${Number(toDisplay.diameter(p.roughnessM, u).toPrecision(2))} ${u.diameter}`, `${fixed(toDisplay.velocity(p.waveSpeedMs, u), 0)} ${u.velocityLabel}`, p.source]),
   );
   doc.font('Helvetica').fontSize(8).fillColor(INK).text(
     `Defaults where the line sets none: velocity band ${DEFAULT_LINE_SETTINGS.velocityMinMs}-${DEFAULT_LINE_SETTINGS.velocityMaxMs} m/s (T.D. Jordan Jr., A Handbook of Gravity-Flow Water Systems, p.53); ` +
@@ -108,7 +109,7 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
 export function cautions(doc: Doc): void {
   heading(doc, 'Cautions');
   for (const c of LINE_CAUTIONS) {
-    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`${c.title}. `, { continued: true }).font('Helvetica').text(c.text);
+    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`${c.title}. `, { continued: true }).font('Helvetica').text(pdfText(c.text));
     doc.moveDown(0.3);
   }
 }

@@ -40,3 +40,10 @@ export function referenceLine(): LineInput {
     settings: { defaultCoverM: 0.75 },
   };
 }
+
+/** The reference line's design parts (everything but the stations), as the API stores them. */
+export function referenceDesignParts(): Omit<LineInput, 'stations'> {
+  const { stations, ...rest } = referenceLine();
+  void stations;
+  return rest;
+}
