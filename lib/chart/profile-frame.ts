@@ -1,5 +1,3 @@
-import { scaleLinear } from 'd3-scale';
-import { lengthFromM, lengthToM } from '../../hydraulics/index';
 import type { ProfileChartData, ProfileChartOptions, ProfileFrame } from './profile-types';
 
 export const PROFILE_LAYOUT = {
@@ -72,8 +70,6 @@ export function profileFrame(data: ProfileChartData, options: ProfileChartOption
   const height = pressureBottom + L.axisBelow + legendHeight;
 
   const u = options.units;
-  const toUnit = (m: number) => lengthFromM(m, u.length);
-  const xs = scaleLinear().domain([toUnit(fromM), toUnit(toM)]).range([plotLeft, plotRight]);
   const pxPerM = (plotRight - plotLeft) / Math.max(toM - fromM, 1e-9);
 
   const visible = rangeOf([points.groundElevationM, points.pipeElevationM, points.staticHeadM, points.hydraulicGradeM], firstIndex, lastIndex);
@@ -85,12 +81,20 @@ export function profileFrame(data: ProfileChartData, options: ProfileChartOption
     const mid = (visible[0] + visible[1]) / 2;
     elevationDomainM = [mid - spanM / 2, mid + spanM / 2];
   }
-  const ye = scaleLinear().domain(elevationDomainM.map(toUnit)).range([elevationBottom, elevationTop]);
-
   const pressureSeries = [points.pressureHeadM, points.staticPressureHeadM];
   const [pLo, pHi] = rangeOf(pressureSeries, firstIndex, lastIndex);
   const pressureDomainM = padded([Math.min(pLo, 0), Math.max(pHi, 1)], 0.1, 5);
-  const yp = scaleLinear().domain(pressureDomainM.map(toUnit)).range([pressureBottom, pressureTop]);
+
+  // Unit changes are linear, so the scales map metres straight to pixels (ticks in display units
+  // are laid out in profile-axes.ts); plain arithmetic keeps 100,000-point paths fast.
+  const linear = (d0: number, d1: number, r0: number, r1: number) => {
+    const k = (r1 - r0) / (d1 - d0);
+    return (v: number) => r0 + (v - d0) * k;
+  };
+  const x = linear(fromM, toM, plotLeft, plotRight);
+  const yElevation = linear(elevationDomainM[0], elevationDomainM[1], elevationBottom, elevationTop);
+  const yPressure = linear(pressureDomainM[0], pressureDomainM[1], pressureBottom, pressureTop);
+  const chainageAt = linear(plotLeft, plotRight, fromM, toM);
 
   return {
     width,
@@ -108,10 +112,10 @@ export function profileFrame(data: ProfileChartData, options: ProfileChartOption
     exaggeration,
     firstIndex,
     lastIndex,
-    x: (c) => xs(toUnit(c)),
-    chainageAt: (px) => lengthToM(xs.invert(px), u.length),
-    yElevation: (m) => ye(toUnit(m)),
-    yPressure: (m) => yp(toUnit(m)),
+    x,
+    chainageAt,
+    yElevation,
+    yPressure,
     units: u,
   };
 }

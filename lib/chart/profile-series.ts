@@ -1,20 +1,37 @@
-import { line } from 'd3-shape';
 import { indexAtOrBefore } from './profile-frame';
+import { polylinePath } from './polyline-path';
 import { PIPE_CLASS_COLOURS, PROFILE_COLOURS } from './profile-palette';
 import type { ProfileChartData, ProfileFrame } from './profile-types';
 import { el, type SvgNode } from './svg-node';
 
-type XY = [number, number];
-const path = line<XY>().digits(2);
 const r2 = (v: number) => Math.round(v * 100) / 100;
 
-function pathOf(points: XY[]): string {
-  return points.length >= 2 ? (path(points) ?? '') : '';
+/** First position in the ascending `indices` whose chainage is at least `c` (binary search). */
+function lowerBound(indices: readonly number[], chainageM: ArrayLike<number>, c: number): number {
+  let lo = 0;
+  let hi = indices.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (chainageM[indices[mid]] < c) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** Thinned indices lying in [fromM, toM] (inclusive). */
 function indicesIn(indices: readonly number[], chainageM: ArrayLike<number>, fromM: number, toM: number): number[] {
-  return indices.filter((i) => chainageM[i] >= fromM - 1e-9 && chainageM[i] <= toM + 1e-9);
+  return indices.slice(lowerBound(indices, chainageM, fromM - 1e-9), lowerBound(indices, chainageM, toM + 1e-9 + Number.EPSILON * Math.abs(toM)));
+}
+
+/** Path through the points `idx`, x from chainage, y from `y(i)`. */
+function seriesPath(idx: readonly number[], chainageM: ArrayLike<number>, x: (c: number) => number, y: (i: number) => number): string {
+  const xs = new Float64Array(idx.length);
+  const ys = new Float64Array(idx.length);
+  for (let k = 0; k < idx.length; k++) {
+    xs[k] = x(chainageM[idx[k]]);
+    ys[k] = y(idx[k]);
+  }
+  return polylinePath(xs, ys);
 }
 
 /** Static level of a reach: the value just downstream of its first point. */
@@ -25,11 +42,13 @@ function reachLevel(data: ProfileChartData, fromM: number): number {
 /** The ground line and the earth below it. */
 export function groundLayer(data: ProfileChartData, frame: ProfileFrame, indices: readonly number[]): SvgNode {
   const { chainageM, groundElevationM } = data.points;
-  const pts = indices.map((i): XY => [frame.x(chainageM[i]), frame.yElevation(groundElevationM[i])]);
-  const area = pts.length >= 2 ? `${pathOf(pts)}L${r2(pts[pts.length - 1][0])},${frame.elevationBottom}L${r2(pts[0][0])},${frame.elevationBottom}Z` : '';
+  const lineD = seriesPath(indices, chainageM, frame.x, (i) => frame.yElevation(groundElevationM[i]));
+  const firstX = r2(frame.x(chainageM[indices[0]]));
+  const lastX = r2(frame.x(chainageM[indices[indices.length - 1]]));
+  const area = indices.length >= 2 ? `${lineD}L${lastX},${frame.elevationBottom}L${firstX},${frame.elevationBottom}Z` : '';
   return el('g', { 'data-layer': 'ground' },
     el('path', { d: area, fill: PROFILE_COLOURS.groundFill, stroke: 'none', 'data-role': 'earth' }),
-    el('path', { d: pathOf(pts), fill: 'none', stroke: PROFILE_COLOURS.groundLine, 'stroke-width': 1.5, 'data-role': 'ground-line' }));
+    el('path', { d: lineD, fill: 'none', stroke: PROFILE_COLOURS.groundLine, 'stroke-width': 1.5, 'data-role': 'ground-line' }));
 }
 
 /** Colour and width of each stretch's pipe: colour by pressure class, width by bore. */
@@ -49,8 +68,8 @@ export function pipeLayer(data: ProfileChartData, frame: ProfileFrame, indices: 
   const styles = pipeStyles(data);
   return el('g', { 'data-layer': 'pipe', fill: 'none', 'stroke-linecap': 'butt' },
     ...data.stretches.map((s, k) => {
-      const pts = indicesIn(indices, chainageM, s.fromM, s.toM).map((i): XY => [frame.x(chainageM[i]), frame.yElevation(pipeElevationM[i])]);
-      return el('path', { d: pathOf(pts), stroke: styles[k].colour, 'stroke-width': styles[k].width, 'data-stretch': k, 'data-pipe': s.pipe.id });
+      const d = seriesPath(indicesIn(indices, chainageM, s.fromM, s.toM), chainageM, frame.x, (i) => frame.yElevation(pipeElevationM[i]));
+      return el('path', { d, stroke: styles[k].colour, 'stroke-width': styles[k].width, 'data-stretch': k, 'data-pipe': s.pipe.id });
     }));
 }
 
@@ -76,35 +95,36 @@ export function staticLayer(data: ProfileChartData, frame: ProfileFrame): SvgNod
  * Per-reach runs of a series. Each run's last point, at a tank, takes the value arriving from
  * upstream (`upstream`), because the analysis stores the value just downstream of a point.
  */
-function reachRuns(
+function reachPaths(
   data: ProfileChartData,
   indices: readonly number[],
-  value: (i: number) => number,
+  x: (c: number) => number,
+  y: (v: number) => number,
+  value: ArrayLike<number>,
   upstream: (r: number, i: number) => number,
-): { reach: number; points: { i: number; v: number }[] }[] {
+): { reach: number; d: string }[] {
   const { chainageM } = data.points;
   return data.reaches.map((reach, r) => {
-    const run = indicesIn(indices, chainageM, reach.fromM, reach.toM).map((i) => ({ i, v: value(i) }));
+    const run = indicesIn(indices, chainageM, reach.fromM, reach.toM);
     const last = run[run.length - 1];
-    if (r < data.reaches.length - 1 && last && Math.abs(chainageM[last.i] - reach.toM) < 1e-9) last.v = upstream(r, last.i);
-    return { reach: r, points: run };
+    const atTank = r < data.reaches.length - 1 && last !== undefined && Math.abs(chainageM[last] - reach.toM) < 1e-9;
+    const d = seriesPath(run, chainageM, x, (i) => y(atTank && i === last ? upstream(r, i) : value[i]));
+    return { reach: r, d };
   });
 }
 
 /** The hydraulic grade line while flowing, reset at each tank. */
 export function gradeLayer(data: ProfileChartData, frame: ProfileFrame, indices: readonly number[]): SvgNode {
-  const { chainageM, hydraulicGradeM } = data.points;
-  const runs = reachRuns(data, indices, (i) => hydraulicGradeM[i], (r) => data.reaches[r].arrivingHeadM);
+  const runs = reachPaths(data, indices, frame.x, frame.yElevation, data.points.hydraulicGradeM, (r) => data.reaches[r].arrivingHeadM);
   return el('g', { 'data-layer': 'grade', fill: 'none', stroke: PROFILE_COLOURS.gradeLine, 'stroke-width': 2 },
-    ...runs.map((run) => el('path', { d: pathOf(run.points.map(({ i, v }): XY => [frame.x(chainageM[i]), frame.yElevation(v)])), 'data-reach': run.reach })));
+    ...runs.map((run) => el('path', { d: run.d, 'data-reach': run.reach })));
 }
 
 /** Pressure panel: flowing and static pressure head per reach, allowable head per stretch, zero and siphon limit. */
 export function pressureLayer(data: ProfileChartData, frame: ProfileFrame, indices: readonly number[]): SvgNode {
-  const { chainageM, pressureHeadM, staticPressureHeadM, pipeElevationM } = data.points;
-  const flowing = reachRuns(data, indices, (i) => pressureHeadM[i], (r, i) => data.reaches[r].arrivingHeadM - pipeElevationM[i]);
-  const still = reachRuns(data, indices, (i) => staticPressureHeadM[i], (r, i) => reachLevel(data, data.reaches[r].fromM) - pipeElevationM[i]);
-  const toPath = (run: { points: { i: number; v: number }[] }) => pathOf(run.points.map(({ i, v }): XY => [frame.x(chainageM[i]), frame.yPressure(v)]));
+  const { pressureHeadM, staticPressureHeadM, pipeElevationM } = data.points;
+  const flowing = reachPaths(data, indices, frame.x, frame.yPressure, pressureHeadM, (r, i) => data.reaches[r].arrivingHeadM - pipeElevationM[i]);
+  const still = reachPaths(data, indices, frame.x, frame.yPressure, staticPressureHeadM, (r, i) => reachLevel(data, data.reaches[r].fromM) - pipeElevationM[i]);
   const [lo, hi] = frame.pressureDomainM;
   const flat = (headM: number) => `M${frame.plotLeft},${r2(frame.yPressure(headM))}L${frame.plotRight},${r2(frame.yPressure(headM))}`;
   const siphon = -data.limits.siphonLimitHeadM;
@@ -117,7 +137,7 @@ export function pressureLayer(data: ProfileChartData, frame: ProfileFrame, indic
         return el('path', { d: `M${r2(frame.x(s.fromM))},${y}L${r2(frame.x(s.toM))},${y}`, 'data-stretch': s.index, 'data-allowable-m': r2(s.allowableHeadM) });
       })),
     el('g', { 'data-role': 'static-pressure', stroke: PROFILE_COLOURS.staticPressure, 'stroke-width': 1.5, 'stroke-dasharray': '7 4' },
-      ...still.map((run) => el('path', { d: toPath(run), 'data-reach': run.reach }))),
+      ...still.map((run) => el('path', { d: run.d, 'data-reach': run.reach }))),
     el('g', { 'data-role': 'flowing-pressure', stroke: PROFILE_COLOURS.flowingPressure, 'stroke-width': 2 },
-      ...flowing.map((run) => el('path', { d: toPath(run), 'data-reach': run.reach }))));
+      ...flowing.map((run) => el('path', { d: run.d, 'data-reach': run.reach }))));
 }
