@@ -150,10 +150,10 @@ describe('demo lines (seeded scenario)', () => {
     const { Line } = models();
     const demo = await Line.findAll({ where: { projectId: '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001' } });
     if (demo.length === 0) return; // a database without the demo scenario
-    const owner = await models().User.findOne({ where: { email: 'designer@example.test' } });
+    const designer = await models().User.findOne({ where: { email: 'designer@example.test' } });
     const analyse = async (name: string) => {
       const line = demo.find((l) => l.name === name)!;
-      return (await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: line.id }, userId: owner!.id })).json.analysis;
+      return (await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: line.id }, userId: designer!.id })).json.analysis;
     };
     const pn8 = await analyse('Spring box to house');
     const codes = pn8.warnings.map((w: { code: string }) => w.code);
