@@ -26,7 +26,7 @@ export function LineEditor({ lineId, projectName, unitSystem, canEdit }: LineEdi
   }
   if (!line.data || !stations.data) return <LineEditorSkeleton />;
   if (stations.data.length < 2) {
-    return <p role="alert" className="text-sm text-clay-700">This line has no route with at least two stations any more. Survey the route again, or pick another route in the line details.</p>;
+    return <p role="alert" className="text-sm text-clay-700">This line has no route with at least two stations any more (the route was removed or emptied). Its design is kept: survey the route again, or start a new line on a surveyed route.</p>;
   }
   return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} />;
 }
