@@ -1,5 +1,6 @@
 import { db } from '../lib/db';
 import { Attachment } from './attachment';
+import { Line } from './line';
 import { Membership } from './membership';
 import { Project } from './project';
 import { Route } from './route';
@@ -20,6 +21,7 @@ export function models() {
     Attachment.initialise(sequelize);
     Route.initialise(sequelize);
     RoutePoint.initialise(sequelize);
+    Line.initialise(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -32,9 +34,12 @@ export function models() {
     Route.hasMany(RoutePoint, { foreignKey: 'routeId', as: 'points' });
     Project.hasMany(Attachment, { foreignKey: 'projectId', as: 'attachments' });
     Route.belongsTo(Attachment, { foreignKey: 'sourceAttachmentId', as: 'sourceAttachment' });
+    Project.hasMany(Line, { foreignKey: 'projectId', as: 'lines' });
+    Line.belongsTo(Project, { foreignKey: 'projectId', as: 'project' });
+    Line.belongsTo(Route, { foreignKey: 'routeId', as: 'route' });
     ready = true;
   }
-  return { User, Team, Membership, Project, Attachment, Route, RoutePoint, sequelize: db() };
+  return { User, Team, Membership, Project, Attachment, Route, RoutePoint, Line, sequelize: db() };
 }
 
-export { Attachment, Membership, Project, Route, RoutePoint, Team, User };
+export { Attachment, Line, Membership, Project, Route, RoutePoint, Team, User };

@@ -9,6 +9,7 @@ import { usePathname } from 'next/navigation';
  */
 export const PROJECT_SECTIONS: { path: string; label: string }[] = [
   { path: '', label: 'Overview' },
+  { path: '/lines', label: 'Lines' },
 ];
 
 export function ProjectNav({ projectId }: { projectId: string }) {

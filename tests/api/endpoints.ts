@@ -38,6 +38,14 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'projects/[projectId]/route.ts', method: 'PATCH', params: (f) => ({ projectId: f.projectId }), body: () => ({ siteNotes: 'Checked the spring box.' }), expect: designers(200) },
   { file: 'analysis/line/route.ts', method: 'POST', params: () => ({}), body: () => referenceLine(), expect: signedIn(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
+  { file: 'projects/[projectId]/lines/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.routeId }), expect: designers(201) },
+  { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/route.ts', method: 'PATCH', params: (f) => ({ lineId: f.lineId }), body: () => ({ notes: 'Trench walked.' }), expect: designers(200) },
+  { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
+  { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
 ];
 
 /** Library endpoints not built from lib/api/route.ts; exercised end to end by the Playwright sign-in tests. */

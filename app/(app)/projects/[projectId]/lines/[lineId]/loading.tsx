@@ -1,0 +1,5 @@
+import { LineEditorSkeleton } from '@/components/lines/line-editor';
+
+export default function Loading() {
+  return <LineEditorSkeleton />;
+}

@@ -1,0 +1,27 @@
+import { teamRoute } from '@/lib/api/route';
+import { analyseSavedLine } from '@/lib/data/line-analysis';
+import { teamOfLine } from '@/lib/data/lines';
+import { getProject } from '@/lib/data/projects';
+import { notFound } from '@/lib/errors';
+import { reportFileName } from '@/lib/lines/file-names';
+import { lineReportPdf } from '@/lib/report/line-report';
+import { LineParams } from '@/lib/validations/lines';
+
+/** The saved line's design report as a PDF download; anyone on the team may export it. */
+export const GET = teamRoute(
+  { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
+  async ({ params }) => {
+    const { line, analysis } = await analyseSavedLine(params.lineId);
+    const project = await getProject(line.projectId);
+    if (!project) throw notFound();
+    const pdf = await lineReportPdf({ project, line, analysis, generatedAt: new Date() });
+    return new Response(new Uint8Array(pdf), {
+      status: 200,
+      headers: {
+        'content-type': 'application/pdf',
+        'content-disposition': `attachment; filename="${reportFileName(line.name, line.revision, 'pdf')}"`,
+        'cache-control': 'no-store',
+      },
+    });
+  },
+);

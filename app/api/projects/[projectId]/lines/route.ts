@@ -1,0 +1,16 @@
+import { teamRoute } from '@/lib/api/route';
+import { createLine, listLines } from '@/lib/data/lines';
+import { teamOfProject } from '@/lib/data/projects';
+import { CreateLineSchema } from '@/lib/validations/lines';
+import { ProjectParams } from '@/lib/validations/projects';
+
+const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
+
+export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+  lines: await listLines(params.projectId),
+}));
+
+export const POST = teamRoute(
+  { params: ProjectParams, body: CreateLineSchema, permission: 'design.edit', teamOf, status: 201 },
+  async ({ params, user, body }) => ({ line: await createLine(params.projectId, user.id, body) }),
+);

@@ -1,0 +1,42 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { lineQuery, lineStationsQuery } from '@/lib/queries/lines';
+import type { UnitSystem } from '@/lib/units/display';
+import { Skeleton } from '@/components/ui/panel';
+import { LineWorkspace } from './line-workspace';
+
+export interface LineEditorProps {
+  lineId: string;
+  projectName: string;
+  unitSystem: UnitSystem;
+  canEdit: boolean;
+}
+
+/** Loads the line and its stations (prefetched on the server), then opens the workspace. */
+export function LineEditor({ lineId, projectName, unitSystem, canEdit }: LineEditorProps) {
+  const line = useQuery(lineQuery(lineId));
+  const stations = useQuery(lineStationsQuery(lineId));
+  if (line.isError || stations.isError) {
+    return (
+      <p role="alert" className="text-sm text-clay-700">
+        The line could not be loaded. <button className="underline" onClick={() => { void line.refetch(); void stations.refetch(); }}>Try again</button>
+      </p>
+    );
+  }
+  if (!line.data || !stations.data) return <LineEditorSkeleton />;
+  if (stations.data.length < 2) {
+    return <p role="alert" className="text-sm text-clay-700">This line has no route with at least two stations any more (the route was removed or emptied). Its design is kept: survey the route again, or start a new line on a surveyed route.</p>;
+  }
+  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} />;
+}
+
+export function LineEditorSkeleton() {
+  return (
+    <div className="space-y-4" aria-busy="true" aria-label="Loading the line">
+      <Skeleton className="h-8 w-80" />
+      <div className="grid gap-3 sm:grid-cols-4">{[0, 1, 2, 3].map((i) => <Skeleton key={i} className="h-20" />)}</div>
+      <Skeleton className="h-[520px] w-full" />
+    </div>
+  );
+}

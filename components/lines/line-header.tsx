@@ -1,0 +1,76 @@
+'use client';
+
+import type { LineAnalysis } from '@/hydraulics/index';
+import { profileScene } from '@/lib/chart/profile-scene';
+import { standaloneSvg } from '@/lib/chart/svg-node';
+import type { LineRecord } from '@/lib/data/lines';
+import { downloadText } from '@/lib/lines/download';
+import { reportFileName } from '@/lib/lines/file-names';
+import type { DisplayUnits } from '@/lib/units/display';
+import { formatChainage } from '@/lib/units/format';
+import { LINE_STATUS_LABELS } from '@/lib/validations/lines';
+import { Button } from '@/components/ui/button';
+import type { useLineDraft } from './use-line-draft';
+
+const SAVE_WORDS = {
+  saved: 'All changes saved',
+  pending: 'Changes not saved yet…',
+  saving: 'Saving…',
+  failed: 'Not saved',
+  conflict: 'Not saved: someone else changed this line',
+} as const;
+
+/** Title, revision, save state, undo and the exports. */
+export function LineHeader({ line, projectName, units, draft, analysis, canEdit }: {
+  line: LineRecord;
+  projectName: string;
+  units: DisplayUnits;
+  draft: ReturnType<typeof useLineDraft>;
+  analysis: LineAnalysis | null;
+  canEdit: boolean;
+}) {
+  const c = analysis?.points.chainageM;
+  const saved = draft.saveState === 'saved';
+
+  function exportSvg() {
+    if (!analysis) return;
+    const title = `${projectName}: ${line.name}, revision ${draft.revision}`;
+    const scene = profileScene(analysis, { units, devices: draft.design.devices, width: 1200, title }, 'export');
+    downloadText(standaloneSvg(scene.root), reportFileName(line.name, draft.revision, 'svg', 'profile'), 'image/svg+xml');
+  }
+
+  return (
+    <header className="space-y-3">
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <h1 className="text-2xl font-semibold text-creek-900">{line.name}</h1>
+          <p className="text-sm text-creek-700">
+            Along {line.routeName ?? 'a removed route'}{c ? `, ch. ${formatChainage(c[0], units)} to ${formatChainage(c[c.length - 1], units)}` : ''} ·
+            {' '}revision {draft.revision} · {LINE_STATUS_LABELS[line.status]}{line.checkedBy ? ` · checked by ${line.checkedBy}` : ''}
+          </p>
+        </div>
+        <div className="flex flex-wrap items-center gap-2">
+          {canEdit && (
+            <>
+              <span role="status" data-testid="save-state" data-state={draft.saveState} className={`text-xs ${draft.saveState === 'failed' || draft.saveState === 'conflict' ? 'font-medium text-clay-700' : 'text-creek-700'}`}>
+                {SAVE_WORDS[draft.saveState]}{draft.saveError && !saved ? `: ${draft.saveError}` : ''}
+              </span>
+              <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canUndo} onClick={draft.undo} title={draft.undoLabel ? `Undo: ${draft.undoLabel}` : undefined}>
+                Undo{draft.canUndo && draft.undoLabel ? `: ${draft.undoLabel}` : ''}
+              </Button>
+              <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canRedo} onClick={draft.redo}>Redo</Button>
+            </>
+          )}
+          <Button tone="quiet" className="py-1 text-xs" onClick={exportSvg} disabled={!analysis}>Profile as SVG</Button>
+          {saved ? (
+            <a href={`/api/lines/${line.id}/report`} download={reportFileName(line.name, draft.revision, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
+              PDF report
+            </a>
+          ) : (
+            <span className="inline-flex items-center rounded-md bg-creek-300 px-3.5 py-1 text-xs font-medium text-white" title="The report is made from the saved line">PDF report (saving…)</span>
+          )}
+        </div>
+      </div>
+    </header>
+  );
+}

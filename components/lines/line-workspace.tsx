@@ -1,0 +1,173 @@
+'use client';
+
+import { useMemo, useRef, useState } from 'react';
+import { applyLineFixes, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
+import { warningRange } from '@/lib/chart/profile-marks';
+import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
+import type { LineRecord } from '@/lib/data/lines';
+import { lineAnswers } from '@/lib/lines/answers';
+import { SHORT_CAUTION } from '@/lib/lines/cautions';
+import { addDevice } from '@/lib/lines/edit-design';
+import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
+import type { LineRouteStation } from '@/lib/lines/route-stations';
+import { fixWords } from '@/lib/lines/warning-words';
+import { displayUnits, type UnitSystem } from '@/lib/units/display';
+import { formatChainage } from '@/lib/units/format';
+import { Panel } from '@/components/ui/panel';
+import { DeviceTable } from './device-table';
+import { EndsForm } from './ends-form';
+import { FittingTable } from './fitting-table';
+import { LineAnswersStrip } from './line-answers';
+import { LineDetailsForm } from './line-details-form';
+import { LineHeader } from './line-header';
+import { LineToolbar } from './line-toolbar';
+import { PlanView } from './plan-view';
+import { nearestPoint, ProfileChart } from './profile-chart';
+import { ProfileReadout } from './profile-readout';
+import { ResultsTables } from './results-tables';
+import { SettingsForm } from './settings-form';
+import { StretchTable } from './stretch-table';
+import { useLineDraft } from './use-line-draft';
+import { WarningsPanel } from './warnings-panel';
+
+export interface LineWorkspaceProps {
+  line: LineRecord;
+  stations: LineRouteStation[];
+  projectName: string;
+  unitSystem: UnitSystem;
+  canEdit: boolean;
+}
+
+/** The designer's screen: answers first, warnings, the long profile beside the plan, then the design and the results. */
+export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit }: LineWorkspaceProps) {
+  const units = displayUnits(unitSystem);
+  const draft = useLineDraft(line, stations, canEdit);
+  const { design, result } = draft;
+  const firstM = stations[0].chainageM;
+  const lastM = stations[stations.length - 1].chainageM;
+  const [view, setView] = useState<ChainageView>({ fromM: firstM, toM: lastM });
+  const [exaggeration, setExaggeration] = useState<number | 'auto'>('auto');
+  const [hoverM, setHoverM] = useState<number | null>(null);
+  const [selected, setSelected] = useState<number | null>(null);
+  const [placing, setPlacing] = useState(false);
+  const [placeKind, setPlaceKind] = useState<LineDeviceKind>('air-release-valve');
+  const [note, setNote] = useState<string | null>(null);
+  const profileRef = useRef<HTMLDivElement>(null);
+
+  const analysis = 'analysis' in result ? result.analysis : null;
+  const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
+  const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;
+
+  function selectWarning(index: number) {
+    if (!analysis) return;
+    setSelected(index);
+    const range = warningRange(analysis.warnings[index]);
+    setView(viewAround(range.fromM, range.toM, firstM, lastM));
+    profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  }
+
+  function applyFix(w: LineWarning) {
+    const fixed = applyLineFixes(lineInputOf(design, stations), w.fixes);
+    const problem = draft.change(designWithInput(design, fixed), fixWords(w.fixes, units).replace(/^Add/, 'add').replace(/^Use/, 'use'));
+    setSelected(null);
+    setNote(problem ? `The fix could not be applied: ${problem}` : null);
+  }
+
+  function place(chainageM: number) {
+    const problem = draft.change(addDevice(design, { kind: placeKind, chainageM }), `place ${placeKind.replace(/-/g, ' ')} at ch. ${formatChainage(chainageM, units)}`);
+    setNote(problem);
+    setPlacing(false);
+  }
+
+  return (
+    <div className="space-y-5">
+      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} />
+      {'error' in result && (
+        <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-3 text-sm text-clay-700">
+          The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.
+        </p>
+      )}
+      {answers && analysis && <LineAnswersStrip answers={answers} units={units} temperatureC={analysis.settings.waterTemperatureC} />}
+      <p className="text-xs text-creek-700">{SHORT_CAUTION}</p>
+      {note && <p role="alert" className="text-sm text-clay-700">{note}</p>}
+
+      {analysis && (
+        <section aria-labelledby="warnings-heading" className="space-y-2">
+          <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({analysis.warnings.length})</h2>
+          <WarningsPanel warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
+        </section>
+      )}
+
+      {analysis && (
+        <section ref={profileRef} aria-labelledby="profile-heading" className="scroll-mt-4 space-y-3 rounded-lg border border-creek-100 bg-white p-4 shadow-sm">
+          <h2 id="profile-heading" className="text-base font-semibold text-creek-900">Long profile and plan</h2>
+          <LineToolbar
+            onZoomIn={() => setView(zoomView(view, 0.6, (view.fromM + view.toM) / 2, firstM, lastM))}
+            onZoomOut={() => setView(zoomView(view, 1 / 0.6, (view.fromM + view.toM) / 2, firstM, lastM))}
+            onWhole={() => setView({ fromM: firstM, toM: lastM })}
+            exaggeration={exaggeration}
+            onExaggeration={setExaggeration}
+            canEdit={canEdit}
+            placing={placing}
+            onPlacing={setPlacing}
+            placeKind={placeKind}
+            onPlaceKind={setPlaceKind}
+          />
+          <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
+          <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
+            <ProfileChart
+              data={analysis}
+              devices={design.devices}
+              units={units}
+              view={view}
+              onViewChange={setView}
+              exaggeration={exaggeration}
+              highlight={highlight}
+              hoverM={hoverM}
+              onHover={setHoverM}
+              onPick={placing ? place : undefined}
+              pickLabel={`place a ${placeKind.replace(/-/g, ' ')}`}
+            />
+            <div className="space-y-2">
+              <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} />
+              <p className="text-xs text-creek-600">Plan from the surveyed positions, north up. Point at either drawing to find the same place on the other.</p>
+              <div className="flex gap-1 text-xs">
+                <button type="button" className="underline" onClick={() => setView(panView(view, -(view.toM - view.fromM) / 2, firstM, lastM))}>◀ Back along the line</button>
+                <span aria-hidden>·</span>
+                <button type="button" className="underline" onClick={() => setView(panView(view, (view.toM - view.fromM) / 2, firstM, lastM))}>On along the line ▶</button>
+              </div>
+            </div>
+          </div>
+        </section>
+      )}
+
+      <Panel title="Ends and flow">
+        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} />
+      </Panel>
+      <Panel title="Pipe stretches">
+        <StretchTable design={design} results={analysis?.stretches ?? []} units={units} change={draft.change} canEdit={canEdit} temperatureC={analysis?.settings.waterTemperatureC ?? 20} />
+      </Panel>
+      <div className="grid gap-5 lg:grid-cols-2">
+        <Panel title="Devices">
+          <DeviceTable design={design} units={units} change={draft.change} canEdit={canEdit} tankLevels={analysis?.tanks ?? []} />
+        </Panel>
+        <Panel title="Fittings">
+          <FittingTable design={design} units={units} change={draft.change} canEdit={canEdit} />
+        </Panel>
+      </div>
+      <Panel title="Settings">
+        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} />
+      </Panel>
+      {analysis && (
+        <Panel title="Results">
+          <ResultsTables analysis={analysis} units={units} lineName={line.name} revision={draft.revision} onHover={setHoverM} />
+        </Panel>
+      )}
+      {canEdit && (
+        <Panel title="Line details (report title block)">
+          <LineDetailsForm line={line} baseRevision={() => draft.revisionRef.current} onSaved={draft.adoptRevision} />
+        </Panel>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,66 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { lengthToM } from '@/hydraulics/index';
+import type { RouteChoice } from '@/lib/data/line-routes';
+import type { FieldErrors } from '@/lib/errors';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { useCreateLine } from '@/lib/queries/lines';
+import { displayUnits, type UnitSystem } from '@/lib/units/display';
+import { formatChainage } from '@/lib/units/format';
+import { fieldErrorsOf } from '@/lib/validations/common';
+import { CreateLineSchema } from '@/lib/validations/lines';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { FormMessage } from '@/components/ui/form-message';
+
+/** Starts a line on a surveyed route (or a chainage window of it) with a first design to change. */
+export function NewLineForm({ projectId, routes, unitSystem }: { projectId: string; routes: RouteChoice[]; unitSystem: UnitSystem }) {
+  const router = useRouter();
+  const create = useCreateLine(projectId);
+  const units = displayUnits(unitSystem);
+  const [fields, setFields] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+
+  if (routes.length === 0) {
+    return <p className="text-sm text-creek-700">This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line follows a route.</p>;
+  }
+
+  async function onSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const f = new FormData(event.currentTarget);
+    const chainage = (name: string) => {
+      const text = String(f.get(name) ?? '').trim();
+      if (text === '') return undefined;
+      const v = Number(text);
+      return Number.isFinite(v) ? lengthToM(v, units.length) : Number.NaN;
+    };
+    const parsed = CreateLineSchema.safeParse({ name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
+    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
+    setFields({});
+    setMessage(null);
+    try {
+      const line = await create.mutateAsync(parsed.data);
+      router.push(`/projects/${projectId}/lines/${line.id}`);
+    } catch (error) {
+      if (error instanceof ApiError) {
+        setFields(error.fields ?? {});
+        setMessage(error.message);
+      } else setMessage('The line could not be saved. Try again.');
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto] lg:items-end" noValidate>
+      <TextField id="name" label="Line name" placeholder="e.g. Spring box to trough" errors={fields.name} required />
+      <SelectField id="routeId" label="Follows the route" errors={fields.routeId}>
+        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatChainage(r.firstChainageM, units)} to {formatChainage(r.lastChainageM, units)})</option>)}
+      </SelectField>
+      <TextField id="fromChainage" label={`From chainage (${units.length})`} inputMode="decimal" placeholder="route start" errors={fields.fromChainageM} />
+      <TextField id="toChainage" label={`To chainage (${units.length})`} inputMode="decimal" placeholder="route end" errors={fields.toChainageM} />
+      <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Starting…' : 'Start line'}</Button>
+      <div className="sm:col-span-2 lg:col-span-5"><FormMessage message={message} /></div>
+    </form>
+  );
+}

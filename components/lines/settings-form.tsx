@@ -1,0 +1,64 @@
+'use client';
+
+import { DEFAULT_LINE_SETTINGS, type LineSettings } from '@/hydraulics/index';
+import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units/display';
+import type { LineDesign } from '@/lib/validations/line-design';
+import { UnitNumberInput } from './unit-number-input';
+
+type Change = (next: LineDesign, label: string) => string | null;
+type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge'>;
+
+/** Analysis settings; an empty field falls back to the core's default (shown as the hint). */
+export function SettingsForm({ design, units, change, canEdit }: { design: LineDesign; units: DisplayUnits; change: Change; canEdit: boolean }) {
+  const s = design.settings;
+  const set = (patch: Partial<LineSettings>, label: string) => {
+    const settings: LineSettings = { ...s, ...patch };
+    for (const k of Object.keys(patch) as (keyof LineSettings)[]) if (patch[k] === undefined) delete settings[k];
+    return change({ ...design, settings }, label);
+  };
+  const field = (key: NumberKey, label: string, unit: string, toUnit: (si: number) => number, fromUnit: (v: number) => number, fallback: string) => (
+    <UnitNumberInput
+      id={`setting-${key}`}
+      label={label}
+      unit={unit}
+      optional
+      disabled={!canEdit}
+      value={s[key] === undefined ? undefined : toUnit(s[key] as number)}
+      hint={`Empty: ${fallback}`}
+      onCommit={(v) => set({ [key]: v === undefined ? undefined : fromUnit(v) }, `change ${label.toLowerCase()}`)}
+    />
+  );
+  const L = [(m: number) => toDisplay.length(m, units), (v: number) => fromDisplay.length(v, units)] as const;
+  const V = [(m: number) => toDisplay.velocity(m, units), (v: number) => fromDisplay.velocity(v, units)] as const;
+  const H = [(m: number) => toDisplay.head(m, units), (v: number) => fromDisplay.head(v, units)] as const;
+  const same = [(v: number) => v, (v: number) => v] as const;
+  const d = DEFAULT_LINE_SETTINGS;
+  const inUnits = (m: number, conv: readonly [(m: number) => number, unknown], unit: string) => `${Number(conv[0](m).toFixed(2))} ${unit}`;
+
+  return (
+    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+      <div>
+        <label htmlFor="setting-frictionMethod" className="block text-xs font-medium text-creek-900">Friction method</label>
+        <select id="setting-frictionMethod" disabled={!canEdit} value={s.frictionMethod ?? d.frictionMethod}
+          onChange={(e) => set({ frictionMethod: e.target.value as LineSettings['frictionMethod'] }, 'change the friction method')}
+          className="mt-1 block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50">
+          <option value="hazen-williams">Hazen-Williams</option>
+          <option value="darcy-weisbach">Darcy-Weisbach (Colebrook)</option>
+        </select>
+      </div>
+      {field('waterTemperatureC', 'Water temperature', '°C', ...same, `${d.waterTemperatureC} °C`)}
+      {field('safetyFactor', 'Safety factor on ratings', '×', ...same, `${d.safetyFactor}`)}
+      {field('defaultCoverM', 'Pipe cover', units.length, ...L, inUnits(d.defaultCoverM, L, units.length))}
+      {field('velocityMinMs', 'Lowest velocity', units.velocityLabel, ...V, inUnits(d.velocityMinMs, V, units.velocityLabel))}
+      {field('velocityMaxMs', 'Highest velocity', units.velocityLabel, ...V, inUnits(d.velocityMaxMs, V, units.velocityLabel))}
+      {field('minResidualHeadM', 'Minimum residual at outlets', units.head, ...H, inUnits(d.minResidualHeadM, H, units.head))}
+      {field('siphonLimitHeadM', 'Siphon limit', units.head, ...H, inUnits(d.siphonLimitHeadM, H, units.head))}
+      {field('airPointToleranceM', 'High/low point tolerance', units.length, ...L, inUnits(d.airPointToleranceM, L, units.length))}
+      {field('siteAltitudeM', 'Site altitude', units.length, ...L, 'highest ground of the line')}
+      <label className="flex items-center gap-2 self-center text-sm text-creek-900">
+        <input type="checkbox" disabled={!canEdit} checked={s.checkSurge ?? d.checkSurge} onChange={(e) => set({ checkSurge: e.target.checked }, 'switch the surge check')} />
+        Check sudden-stop surge
+      </label>
+    </div>
+  );
+}

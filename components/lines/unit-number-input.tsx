@@ -1,0 +1,74 @@
+'use client';
+
+import { useState } from 'react';
+
+export interface UnitNumberInputProps {
+  id: string;
+  label: string;
+  /** The value in display units (undefined = empty). */
+  value: number | undefined;
+  unit: string;
+  digits?: number;
+  /** Empty is allowed and commits undefined. */
+  optional?: boolean;
+  disabled?: boolean;
+  /** Commits a display-unit value; returns an error message to show, or null. */
+  onCommit: (value: number | undefined) => string | null;
+  hint?: string;
+  compact?: boolean;
+}
+
+const format = (v: number | undefined, digits: number) => (v === undefined ? '' : String(Number(v.toFixed(digits))));
+
+/** A number in the project's units that commits on Enter or leaving the field, with its error beside it. */
+export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, compact }: UnitNumberInputProps) {
+  const [text, setText] = useState(format(value, digits));
+  const [error, setError] = useState<string | null>(null);
+  // A new value from outside (undo, a fix, a save) replaces what is shown.
+  const [shown, setShown] = useState(value);
+  if (shown !== value) {
+    setShown(value);
+    setText(format(value, digits));
+  }
+
+  function commit() {
+    const trimmed = text.trim();
+    if (trimmed === format(value, digits)) return setError(null);
+    if (trimmed === '') {
+      if (!optional) return setError(`${label} is required`);
+      return setError(onCommit(undefined));
+    }
+    const n = Number(trimmed.replace(/,/g, ''));
+    if (!Number.isFinite(n)) return setError(`${label} must be a number in ${unit}`);
+    const problem = onCommit(n);
+    setError(problem);
+    if (problem) return;
+  }
+
+  return (
+    <div className={compact ? '' : 'min-w-36'}>
+      <label htmlFor={id} className={compact ? 'sr-only' : 'block text-xs font-medium text-creek-900'}>
+        {label} ({unit})
+      </label>
+      <input
+        id={id}
+        inputMode="decimal"
+        value={text}
+        disabled={disabled}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={commit}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') {
+            e.preventDefault();
+            commit();
+          }
+        }}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+        className={`tabular block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm text-creek-950 disabled:bg-creek-50 disabled:text-creek-700 aria-[invalid=true]:border-clay-500 ${compact ? '' : 'mt-1'}`}
+      />
+      {hint && !error && !compact && <p id={`${id}-hint`} className="mt-0.5 text-xs text-creek-600">{hint}</p>}
+      {error && <p id={`${id}-error`} role="alert" className="mt-0.5 text-xs font-medium text-clay-600">{error}</p>}
+    </div>
+  );
+}

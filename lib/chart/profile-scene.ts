@@ -1,0 +1,77 @@
+import { profileFrame, PROFILE_LAYOUT } from './profile-frame';
+import { axesLayer } from './profile-axes';
+import { legendLayer } from './profile-legend';
+import { devicesLayer, highlightLayer, zonesLayer } from './profile-marks';
+import { FONT_FAMILY, PROFILE_COLOURS } from './profile-palette';
+import { gradeLayer, groundLayer, pipeLayer, pressureLayer, staticLayer } from './profile-series';
+import type { ProfileChartData, ProfileChartOptions, ProfileFrame } from './profile-types';
+import { el, type SvgNode } from './svg-node';
+import { thinProfile } from './thin-profile';
+
+export interface ProfileScene {
+  root: SvgNode;
+  frame: ProfileFrame;
+  /** Profile points drawn (after thinning), ascending indices. */
+  drawnIndices: number[];
+}
+
+/** Points that must be drawn whatever the thinning: inserted points (stretch ends, fittings, tanks). */
+function insertedPoints(stationIndex: ArrayLike<number>, from: number, to: number): number[] {
+  const out: number[] = [];
+  for (let i = from; i <= to; i++) if (stationIndex[i] < 0) out.push(i);
+  return out;
+}
+
+/**
+ * The long profile as an SVG node tree: two panels on one chainage axis (elevation with ground,
+ * pipe by class, static line and hydraulic grade; pressure head with allowed head), warning
+ * ranges shaded, devices drawn, axes in the project's units and a legend. Each layer is a `<g>`
+ * with `data-layer` so exports and tests can find it. Long lines are thinned to about two
+ * points per pixel column, keeping every local high and low of the ground and the pipe.
+ */
+export function profileScene(data: ProfileChartData, options: ProfileChartOptions, idPrefix = 'profile'): ProfileScene {
+  const width = options.width ?? PROFILE_LAYOUT.width;
+  const legendProbe = legendLayer(data, options, width, PROFILE_LAYOUT.marginLeft, 0);
+  const frame = profileFrame(data, options, legendProbe.height);
+  const { points } = data;
+  const drawnIndices = thinProfile(points.chainageM, points.groundElevationM, {
+    targetPoints: Math.round(2 * (frame.plotRight - frame.plotLeft)),
+    guardSeries: [points.pipeElevationM],
+    keep: insertedPoints(points.stationIndex, frame.firstIndex, frame.lastIndex),
+    from: frame.firstIndex,
+    to: frame.lastIndex,
+  });
+  const legend = legendLayer(data, options, width, PROFILE_LAYOUT.marginLeft, frame.pressureBottom + PROFILE_LAYOUT.axisBelow);
+  const clip = (id: string, top: number, bottom: number) =>
+    el('clipPath', { id }, el('rect', { x: frame.plotLeft, y: top, width: frame.plotRight - frame.plotLeft, height: bottom - top }));
+  const elevationClip = `${idPrefix}-elevation-clip`;
+  const pressureClip = `${idPrefix}-pressure-clip`;
+  const root = el('svg', {
+    viewBox: `0 0 ${frame.width} ${frame.height}`,
+    width: frame.width,
+    height: frame.height,
+    role: 'img',
+    'aria-labelledby': `${idPrefix}-title`,
+    'font-family': FONT_FAMILY,
+    'data-from-m': frame.fromM,
+    'data-to-m': frame.toM,
+  },
+    el('title', { id: `${idPrefix}-title` }, options.title ?? 'Long profile of the line'),
+    el('defs', {}, clip(elevationClip, frame.elevationTop, frame.elevationBottom), clip(pressureClip, frame.pressureTop, frame.pressureBottom)),
+    el('rect', { x: 0, y: 0, width: frame.width, height: frame.height, fill: PROFILE_COLOURS.paper, 'data-layer': 'background' }),
+    options.title ? el('text', { x: frame.plotLeft, y: 22, 'font-size': 14, 'font-weight': 'bold', fill: PROFILE_COLOURS.ink }, options.title) : null,
+    zonesLayer(data, frame),
+    axesLayer(frame),
+    el('g', { 'clip-path': `url(#${elevationClip})`, 'data-panel': 'elevation', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.elevationBottom} ${frame.elevationTop}`, 'data-y-domain-m': frame.elevationDomainM.join(' ') },
+      groundLayer(data, frame, drawnIndices),
+      pipeLayer(data, frame, drawnIndices),
+      staticLayer(data, frame),
+      gradeLayer(data, frame, drawnIndices)),
+    el('g', { 'clip-path': `url(#${pressureClip})`, 'data-panel': 'pressure', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.pressureBottom} ${frame.pressureTop}`, 'data-y-domain-m': frame.pressureDomainM.join(' ') },
+      pressureLayer(data, frame, drawnIndices)),
+    devicesLayer(data, frame, options),
+    highlightLayer(frame, options),
+    legend.node,
+  );
+  return { root, frame, drawnIndices };
+}

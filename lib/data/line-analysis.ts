@@ -1,0 +1,21 @@
+import 'server-only';
+import { analyzeLine, type LineAnalysis } from '../../hydraulics/index';
+import { AppError, notFound } from '../errors';
+import { lineInputOf } from '../lines/line-input';
+import type { LineRouteStation } from '../lines/route-stations';
+import { getLine, stationsOfLine, type LineRecord } from './lines';
+
+export interface AnalysedLine {
+  line: LineRecord;
+  stations: LineRouteStation[];
+  analysis: LineAnalysis;
+}
+
+/** A saved line with its stations and its analysis, computed now (analyses are never stored). */
+export async function analyseSavedLine(lineId: string): Promise<AnalysedLine> {
+  const line = await getLine(lineId);
+  if (!line) throw notFound();
+  if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
+  const stations = await stationsOfLine(line.routeId, line);
+  return { line, stations, analysis: analyzeLine(lineInputOf(line.design, stations)) };
+}

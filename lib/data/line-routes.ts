@@ -1,0 +1,54 @@
+import 'server-only';
+import { models } from '../../models';
+import type { RouteColumns } from '../lines/route-stations';
+
+export interface RouteChoice {
+  id: string;
+  name: string;
+  pointCount: number;
+  lengthM: number;
+  /** First and last chainage of its stations, m. */
+  firstChainageM: number;
+  lastChainageM: number;
+}
+
+/** The routes of a project a line can follow (those with at least two stations). */
+export async function listRouteChoices(projectId: string): Promise<RouteChoice[]> {
+  const { Route, RoutePoint, sequelize } = models();
+  const routes = await Route.findAll({ where: { projectId }, order: [['name', 'ASC']] });
+  if (routes.length === 0) return [];
+  const ranges = (await RoutePoint.findAll({
+    attributes: ['routeId', [sequelize.fn('min', sequelize.col('chainage_m')), 'first'], [sequelize.fn('max', sequelize.col('chainage_m')), 'last'], [sequelize.fn('count', sequelize.col('seq')), 'n']],
+    where: { routeId: routes.map((r) => r.id) },
+    group: ['routeId'],
+    raw: true,
+  })) as unknown as { routeId: string; first: number; last: number; n: string }[];
+  const byRoute = new Map(ranges.map((r) => [r.routeId, r]));
+  return routes.flatMap((r) => {
+    const range = byRoute.get(r.id);
+    if (!range || Number(range.n) < 2) return [];
+    return [{ id: r.id, name: r.name, pointCount: Number(range.n), lengthM: r.lengthM, firstChainageM: Number(range.first), lastChainageM: Number(range.last) }];
+  });
+}
+
+/** The project a route belongs to and its name, or null. */
+export async function routeOwner(routeId: string): Promise<{ projectId: string; name: string } | null> {
+  const route = await models().Route.findByPk(routeId, { attributes: ['projectId', 'name'] });
+  return route ? { projectId: route.projectId, name: route.name } : null;
+}
+
+/** A route's stations in order, as columns. */
+export async function routeColumns(routeId: string): Promise<RouteColumns> {
+  const rows = (await models().RoutePoint.findAll({
+    attributes: ['chainageM', 'elevationM', 'latitude', 'longitude'],
+    where: { routeId },
+    order: [['seq', 'ASC']],
+    raw: true,
+  })) as unknown as { chainageM: number; elevationM: number; latitude: number | null; longitude: number | null }[];
+  return {
+    chainageM: rows.map((r) => r.chainageM),
+    elevationM: rows.map((r) => r.elevationM),
+    latitude: rows.map((r) => r.latitude),
+    longitude: rows.map((r) => r.longitude),
+  };
+}

@@ -1,0 +1,209 @@
+import 'server-only';
+import type { Transaction } from 'sequelize';
+import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
+import { models } from '../../models';
+import type { Line, LineStatus } from '../../models/line';
+import { AppError, notFound } from '../errors';
+import { startingDesign } from '../lines/default-design';
+import { lineInputOf } from '../lines/line-input';
+import { lineStationsOf, type ChainageWindow, type LineRouteStation } from '../lines/route-stations';
+import type { LineDesign } from '../validations/line-design';
+import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
+import { routeColumns, routeOwner } from './line-routes';
+
+/** A line as the API and pages see it (SI units; the design as the core reads it). */
+export interface LineRecord {
+  id: string;
+  projectId: string;
+  routeId: string | null;
+  routeName: string | null;
+  name: string;
+  notes: string;
+  fromChainageM: number | null;
+  toChainageM: number | null;
+  status: LineStatus;
+  checkedBy: string;
+  revision: number;
+  /** Name of whoever saved the current revision. */
+  preparedBy: string | null;
+  design: LineDesign;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export type LineSummary = Omit<LineRecord, 'design' | 'notes'> & { stretchCount: number; deviceCount: number };
+
+function designOf(line: Line): LineDesign {
+  return {
+    start: line.startCondition,
+    end: line.endCondition,
+    flow: line.flow,
+    stretches: line.stretches,
+    fittings: line.fittings,
+    devices: line.devices,
+    pipes: line.pipes,
+    settings: line.settings,
+  } as LineDesign;
+}
+
+function columnsOf(design: LineDesign) {
+  return {
+    startCondition: design.start,
+    endCondition: design.end,
+    flow: design.flow,
+    stretches: design.stretches,
+    fittings: design.fittings,
+    devices: design.devices,
+    pipes: design.pipes,
+    settings: design.settings,
+  } as Pick<Line, 'startCondition' | 'endCondition' | 'flow' | 'stretches' | 'fittings' | 'devices' | 'pipes' | 'settings'>;
+}
+
+async function names(ids: (string | null)[], transaction?: Transaction): Promise<Map<string, string>> {
+  const wanted = [...new Set(ids.filter((id): id is string => id != null))];
+  if (wanted.length === 0) return new Map();
+  const users = await models().User.findAll({ attributes: ['id', 'name'], where: { id: wanted }, transaction });
+  return new Map(users.map((u) => [u.id, u.name]));
+}
+
+async function routeNames(ids: (string | null)[], transaction?: Transaction): Promise<Map<string, string>> {
+  const wanted = [...new Set(ids.filter((id): id is string => id != null))];
+  if (wanted.length === 0) return new Map();
+  const routes = await models().Route.findAll({ attributes: ['id', 'name'], where: { id: wanted }, transaction });
+  return new Map(routes.map((r) => [r.id, r.name]));
+}
+
+function toRecord(line: Line, people: Map<string, string>, routes: Map<string, string>): LineRecord {
+  return {
+    id: line.id,
+    projectId: line.projectId,
+    routeId: line.routeId,
+    routeName: line.routeId ? (routes.get(line.routeId) ?? null) : null,
+    name: line.name,
+    notes: line.notes,
+    fromChainageM: line.fromChainageM,
+    toChainageM: line.toChainageM,
+    status: line.status,
+    checkedBy: line.checkedBy,
+    revision: line.revision,
+    preparedBy: line.updatedBy ? (people.get(line.updatedBy) ?? null) : null,
+    design: designOf(line),
+    createdAt: line.createdAt.toISOString(),
+    updatedAt: line.updatedAt.toISOString(),
+  };
+}
+
+async function recordOf(line: Line, transaction?: Transaction): Promise<LineRecord> {
+  return toRecord(line, await names([line.updatedBy], transaction), await routeNames([line.routeId], transaction));
+}
+
+export async function teamOfLine(lineId: string): Promise<string | null> {
+  const { Line: L, Project } = models();
+  const line = await L.findByPk(lineId, { attributes: ['projectId'] });
+  if (!line) return null;
+  const project = await Project.findByPk(line.projectId, { attributes: ['teamId'] });
+  return project?.teamId ?? null;
+}
+
+export async function listLines(projectId: string): Promise<LineSummary[]> {
+  const rows = await models().Line.findAll({ where: { projectId }, order: [['name', 'ASC']] });
+  const people = await names(rows.map((r) => r.updatedBy));
+  const routes = await routeNames(rows.map((r) => r.routeId));
+  return rows.map((row) => {
+    const record: Partial<LineRecord> = toRecord(row, people, routes);
+    const { design } = record as LineRecord;
+    delete record.design;
+    delete record.notes;
+    return { ...(record as Omit<LineRecord, 'design' | 'notes'>), stretchCount: design.stretches.length, deviceCount: design.devices.length };
+  });
+}
+
+export async function getLine(lineId: string): Promise<LineRecord | null> {
+  const line = await models().Line.findByPk(lineId);
+  return line ? recordOf(line) : null;
+}
+
+/** The stations a line follows (route cut to its window), with map positions where known. */
+export async function stationsOfLine(routeId: string, window: ChainageWindow): Promise<LineRouteStation[]> {
+  const columns = await routeColumns(routeId);
+  if (columns.chainageM.length < 2) throw new AppError('bad_request', 'The route has fewer than two stations', { routeId: ['Survey at least two stations on this route first'] });
+  const first = columns.chainageM[0];
+  const last = columns.chainageM[columns.chainageM.length - 1];
+  const from = window.fromChainageM ?? first;
+  const to = window.toChainageM ?? last;
+  if (from < first || to > last || from >= to) {
+    throw new AppError('bad_request', `The window must lie inside the route (${first} m to ${last} m)`, {
+      fromChainageM: [`Pick a window between ${first} m and ${last} m, start before end`],
+    });
+  }
+  return lineStationsOf(columns, window);
+}
+
+/** Runs the core's whole-line check; its complaint becomes a 400 naming the design field. */
+function assertDesignFits(design: LineDesign, stations: readonly LineRouteStation[]): void {
+  try {
+    assertLineInput(lineInputOf(design, stations));
+  } catch (error) {
+    if (!(error instanceof HydraulicsInputError)) throw error;
+    const field = `design.${error.field}${error.index === undefined ? '' : `.${error.index}`}`;
+    throw new AppError('bad_request', `The design does not fit the line: ${error.message}`, { [field]: [error.message] });
+  }
+}
+
+async function assertRouteInProject(routeId: string, projectId: string): Promise<void> {
+  const owner = await routeOwner(routeId);
+  if (!owner || owner.projectId !== projectId) {
+    throw new AppError('bad_request', 'That route is not part of this project', { routeId: ['Pick a route of this project'] });
+  }
+}
+
+export async function createLine(projectId: string, userId: string, input: CreateLineInput & { notes: string }): Promise<LineRecord> {
+  await assertRouteInProject(input.routeId, projectId);
+  const window = { fromChainageM: input.fromChainageM ?? null, toChainageM: input.toChainageM ?? null };
+  const stations = await stationsOfLine(input.routeId, window);
+  const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
+  assertDesignFits(design, stations);
+  const line = await models().Line.create({
+    projectId,
+    routeId: input.routeId,
+    name: input.name,
+    notes: input.notes,
+    ...window,
+    ...columnsOf(design),
+    createdBy: userId,
+    updatedBy: userId,
+  });
+  return recordOf(line);
+}
+
+export async function updateLine(lineId: string, userId: string, input: UpdateLineInput): Promise<LineRecord> {
+  const { Line: L, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!line) throw notFound();
+    if (input.baseRevision !== undefined && input.baseRevision !== line.revision) {
+      throw new AppError('conflict', `Someone saved revision ${line.revision} of this line after you opened revision ${input.baseRevision}; reload to see it`);
+    }
+    const fields: Partial<UpdateLineInput> = { ...input };
+    const design = fields.design;
+    delete fields.design;
+    delete fields.baseRevision;
+    if (fields.routeId !== undefined && fields.routeId !== line.routeId) await assertRouteInProject(fields.routeId, line.projectId);
+    line.set(fields as Partial<Line>);
+    if (design) line.set(columnsOf(design as LineDesign));
+    const geometryChanged = design !== undefined || fields.routeId !== undefined || fields.fromChainageM !== undefined || fields.toChainageM !== undefined;
+    if (geometryChanged) {
+      if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
+      const stations = await stationsOfLine(line.routeId, { fromChainageM: line.fromChainageM, toChainageM: line.toChainageM });
+      assertDesignFits(designOf(line), stations);
+    }
+    line.revision += 1;
+    line.updatedBy = userId;
+    await line.save({ transaction });
+    return recordOf(line, transaction);
+  });
+}
+
+export async function deleteLine(lineId: string): Promise<void> {
+  await models().Line.destroy({ where: { id: lineId } });
+}

@@ -1,0 +1,60 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import type { LineRecord, LineSummary } from '../data/lines';
+import type { LineRouteStation } from '../lines/route-stations';
+import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
+import { fetchJson } from './fetch-json';
+
+export const lineKeys = {
+  project: (projectId: string) => ['projects', projectId, 'lines'] as const,
+  one: (lineId: string) => ['lines', lineId] as const,
+  stations: (lineId: string) => ['lines', lineId, 'stations'] as const,
+};
+
+export const projectLinesQuery = (projectId: string) =>
+  queryOptions({
+    queryKey: lineKeys.project(projectId),
+    queryFn: async () => (await fetchJson<{ lines: LineSummary[] }>(`/api/projects/${projectId}/lines`)).lines,
+  });
+
+export const lineQuery = (lineId: string) =>
+  queryOptions({
+    queryKey: lineKeys.one(lineId),
+    queryFn: async () => (await fetchJson<{ line: LineRecord }>(`/api/lines/${lineId}`)).line,
+  });
+
+export const lineStationsQuery = (lineId: string) =>
+  queryOptions({
+    queryKey: lineKeys.stations(lineId),
+    queryFn: async () => (await fetchJson<{ stations: LineRouteStation[] }>(`/api/lines/${lineId}/stations`)).stations,
+    // A route changes through the survey screens, not while a line is being edited.
+    staleTime: 5 * 60_000,
+  });
+
+export function useCreateLine(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: CreateLineInput) =>
+      (await fetchJson<{ line: LineRecord }>(`/api/projects/${projectId}/lines`, { method: 'POST', body: input })).line,
+    onSuccess: () => client.invalidateQueries({ queryKey: lineKeys.project(projectId) }),
+  });
+}
+
+export function useUpdateLine(lineId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: UpdateLineInput) =>
+      (await fetchJson<{ line: LineRecord }>(`/api/lines/${lineId}`, { method: 'PATCH', body: input })).line,
+    onSuccess: (line) => {
+      client.setQueryData(lineKeys.one(lineId), line);
+      return client.invalidateQueries({ queryKey: lineKeys.project(line.projectId) });
+    },
+  });
+}
+
+export function useDeleteLine(lineId: string, projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => fetchJson<void>(`/api/lines/${lineId}`, { method: 'DELETE' }),
+    onSuccess: () => client.invalidateQueries({ queryKey: lineKeys.project(projectId) }),
+  });
+}

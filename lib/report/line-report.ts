@@ -1,0 +1,86 @@
+import 'server-only';
+import PDFDocument from 'pdfkit';
+import SVGtoPDF from 'svg-to-pdfkit';
+import type { LineAnalysis } from '../../hydraulics/index';
+import { profileScene } from '../chart/profile-scene';
+import { svgToString } from '../chart/svg-node';
+import type { LineRecord } from '../data/lines';
+import { lineAnswers } from '../lines/answers';
+import { LINE_STATUS_LABELS } from '../validations/lines';
+import { displayUnits, type UnitSystem } from '../units/display';
+import { formatChainage, formatFlow, formatHeadPressure } from '../units/format';
+import { INK, labelGrid } from './pdf-table';
+import { pdfText } from './pdf-text';
+import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
+
+export interface LineReportInput {
+  project: { name: string; unitSystem: UnitSystem };
+  line: LineRecord;
+  analysis: LineAnalysis;
+  generatedAt: Date;
+}
+
+const PAGE = { size: 'A4', layout: 'landscape', margin: 40 } as const;
+const CONTENT_WIDTH = 842 - 2 * PAGE.margin;
+
+function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType<typeof displayUnits>): string {
+  const c = analysis.points.chainageM;
+  return `${line.routeName ?? 'route removed'}, ch. ${formatChainage(c[0], units)} to ${formatChainage(c[c.length - 1], units)}`;
+}
+
+/**
+ * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
+ * the screen), stretch schedule, devices, warnings, assumptions and cautions. A4 landscape.
+ */
+export async function lineReportPdf({ project, line, analysis, generatedAt }: LineReportInput): Promise<Buffer> {
+  const u = displayUnits(project.unitSystem);
+  const doc = new PDFDocument({ ...PAGE, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel' } });
+  const chunks: Buffer[] = [];
+  doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+  const finished = new Promise<Buffer>((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+
+  doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(pdfText(`${line.name}: line design report`));
+  doc.font('Helvetica').fontSize(9).fillColor('#215d75').text('Runnel \u00b7 gravity line design \u00b7 estimates for review, not a licensed design');
+  doc.moveDown(0.5);
+  labelGrid(doc, [
+    ['Project', project.name],
+    ['Line', line.name],
+    ['Route', windowWords(line, analysis, u)],
+    ['Revision / date', `${line.revision} / ${generatedAt.toISOString().slice(0, 10)}`],
+    ['Prepared by', line.preparedBy ?? '\u2014'],
+    ['Checked by', line.checkedBy || 'not yet checked'],
+    ['Status', LINE_STATUS_LABELS[line.status]],
+    ['Units', u.system === 'us' ? 'US customary (ft, gpm, psi)' : 'Metric (m, L/s, kPa)'],
+  ], 4, CONTENT_WIDTH);
+
+  const answers = lineAnswers(analysis);
+  const t = analysis.settings.waterTemperatureC;
+  doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
+    `Flow delivered: ${formatFlow(answers.flowM3s, u)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
+      `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u, t)}). ` +
+      `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u, t)} at ch. ${formatChainage(answers.worstStatic.chainageM, u)} ` +
+      `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u, t)}). ` +
+      `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice.`,
+  ));
+  doc.moveDown(0.4);
+
+  const scene = profileScene(analysis, { units: u, devices: line.design.devices, width: 1000 }, 'report');
+  const scale = CONTENT_WIDTH / scene.frame.width;
+  const top = doc.y;
+  SVGtoPDF(doc, pdfText(svgToString(scene.root)), PAGE.margin, top, {
+    width: CONTENT_WIDTH,
+    height: scene.frame.height * scale,
+    fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica'),
+  });
+  doc.addPage();
+  stretchSchedule(doc, analysis, u);
+  deviceList(doc, analysis, line.design.devices, u);
+  warningList(doc, analysis, u);
+  assumptions(doc, analysis, u);
+  cautions(doc);
+  doc.end();
+  return finished;
+}

@@ -1,0 +1,115 @@
+import type PDFDocument from 'pdfkit';
+import { DEFAULT_LINE_SETTINGS, type LineAnalysis, type LineDevice } from '../../hydraulics/index';
+import { LINE_CAUTIONS } from '../lines/cautions';
+import { localiseWarningText } from '../lines/localise-text';
+import { placeWords, SEVERITY_WORDS, WARNING_TITLES } from '../lines/warning-words';
+import { toDisplay, type DisplayUnits } from '../units/display';
+import { fixed, formatChainage, formatFlow, formatHeadPressure, formatLength, formatPressure, formatTemperature, formatVelocity } from '../units/format';
+import { heading, INK, table } from './pdf-table';
+import { pdfText } from './pdf-text';
+
+type Doc = InstanceType<typeof PDFDocument>;
+
+const DEVICE_NAMES: Record<LineDevice['kind'], string> = {
+  'break-pressure-tank': 'Break-pressure tank',
+  'air-release-valve': 'Air-release valve',
+  washout: 'Washout',
+  'isolation-valve': 'Isolation valve',
+};
+
+export function stretchSchedule(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
+  heading(doc, 'Stretch schedule');
+  const t = a.settings.waterTemperatureC;
+  table(
+    doc,
+    [
+      { heading: 'No.', width: 30 }, { heading: 'From', width: 62, align: 'right' }, { heading: 'To', width: 62, align: 'right' },
+      { heading: 'Pipe length', width: 68, align: 'right' }, { heading: 'Pipe', width: 200 }, { heading: 'Class / rating', width: 100 },
+      { heading: 'Allowed', width: 120, align: 'right' }, { heading: 'Velocity', width: 60, align: 'right' }, { heading: 'Friction loss', width: 60, align: 'right' },
+    ],
+    a.stretches.map((s) => [
+      String(s.index + 1), formatChainage(s.fromM, u), formatChainage(s.toM, u), formatLength(s.slopeLengthM, u),
+      s.pipe.label, `${s.pipe.sdr ? `SDR ${s.pipe.sdr}` : s.pipe.sidr ? `SIDR ${s.pipe.sidr}` : s.pipe.material}, ${formatPressure(s.pipe.pressureRatingPa, u)}`,
+      formatHeadPressure(s.allowableHeadM, u, t), formatVelocity(s.velocityMs, u), formatLength(s.frictionLossM, u, 2),
+    ]),
+  );
+}
+
+export function deviceList(doc: Doc, a: LineAnalysis, devices: readonly LineDevice[], u: DisplayUnits): void {
+  heading(doc, 'Devices by chainage');
+  if (devices.length === 0) {
+    doc.font('Helvetica').fontSize(9).fillColor(INK).text('No devices placed on this line.');
+    return;
+  }
+  const { chainageM, pipeElevationM } = a.points;
+  const pipeAt = (c: number) => {
+    let i = 0;
+    while (i < chainageM.length - 1 && chainageM[i + 1] <= c) i++;
+    return pipeElevationM[i];
+  };
+  table(
+    doc,
+    [{ heading: 'Chainage', width: 90, align: 'right' }, { heading: 'Device', width: 160 }, { heading: 'Pipe elevation', width: 100, align: 'right' }, { heading: 'Notes', width: 412 }],
+    [...devices].sort((x, y) => x.chainageM - y.chainageM).map((d) => {
+      const tank = d.kind === 'break-pressure-tank' ? a.tanks.find((t) => Math.abs(t.chainageM - d.chainageM) < 1e-6) : undefined;
+      const notes = [tank ? `water level ${formatLength(tank.waterLevelM, u)}` : '', d.label ?? ''].filter(Boolean).join('; ');
+      return [formatChainage(d.chainageM, u), DEVICE_NAMES[d.kind], formatLength(pipeAt(d.chainageM), u), notes];
+    }),
+  );
+}
+
+export function warningList(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
+  heading(doc, `Warnings (${a.warnings.length})`);
+  if (a.warnings.length === 0) {
+    doc.font('Helvetica').fontSize(9).fillColor(INK).text('The checks found nothing to warn about on this line.');
+    return;
+  }
+  table(
+    doc,
+    [{ heading: 'Severity', width: 58 }, { heading: 'What and where', width: 150 }, { heading: 'Why', width: 330 }, { heading: 'Suggested fix', width: 224 }],
+    a.warnings.map((w) => [
+      SEVERITY_WORDS[w.severity],
+      `${WARNING_TITLES[w.code]}\n${placeWords(w.at, u)}`,
+      localiseWarningText(w.message, u),
+      localiseWarningText(w.suggestedFix, u),
+    ]),
+  );
+}
+
+export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
+  heading(doc, 'Assumptions');
+  const s = a.settings;
+  const method = s.frictionMethod === 'hazen-williams' ? 'Hazen-Williams (C per pipe below)' : 'Darcy-Weisbach with Colebrook friction factor (roughness per pipe below)';
+  const rows: [string, string][] = [
+    ['Friction method', method],
+    ['Water temperature', `${formatTemperature(s.waterTemperatureC, u)} (viscosity, vapour pressure and plastic pipe derating)`],
+    ['Safety factor on pipe ratings', `${fixed(s.safetyFactor, 2)} (allowed head = rating derated for temperature / safety factor)`],
+    ['Velocity band', `${formatVelocity(s.velocityMinMs, u)} to ${formatVelocity(s.velocityMaxMs, u)}`],
+    ['Residual pressure wanted at the end', formatHeadPressure(a.end.targetResidualHeadM, u, s.waterTemperatureC)],
+    ['Pipe cover where the survey gives none', formatLength(s.defaultCoverM, u, 2)],
+    ['High and low point tolerance', formatLength(s.airPointToleranceM, u, 2)],
+    ['Siphon limit / vapour limit', `${formatLength(a.limits.siphonLimitHeadM, u)} / ${formatLength(a.limits.vapourLimitHeadM, u)} of suction at ${formatLength(a.limits.siteAltitudeM, u, 0)} altitude`],
+    ['Surge check', s.checkSurge ? 'static pressure plus a sudden stop (Joukowsky) against the allowed head' : 'off'],
+    ['Flow analysed', `${formatFlow(a.flowM3s, u)} (${a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'})`],
+  ];
+  table(doc, [{ heading: 'Assumption', width: 200 }, { heading: 'Value', width: 562 }], rows.map(([k, v]) => [k, v]));
+  const pipes = [...new Map(a.stretches.map((st) => [st.pipe.id, st.pipe])).values()];
+  table(
+    doc,
+    [{ heading: 'Pipe', width: 200 }, { heading: 'Hazen-Williams C', width: 80, align: 'right' }, { heading: 'Roughness', width: 80, align: 'right' }, { heading: 'Wave speed', width: 80, align: 'right' }, { heading: 'Source of figures', width: 322 }],
+    pipes.map((p) => [p.label, fixed(p.hazenWilliamsC, 0), `${Number(toDisplay.diameter(p.roughnessM, u).toPrecision(2))} ${u.diameter}`, `${fixed(toDisplay.velocity(p.waveSpeedMs, u), 0)} ${u.velocityLabel}`, p.source]),
+  );
+  doc.font('Helvetica').fontSize(8).fillColor(INK).text(
+    `Defaults where the line sets none: velocity band ${DEFAULT_LINE_SETTINGS.velocityMinMs}-${DEFAULT_LINE_SETTINGS.velocityMaxMs} m/s (T.D. Jordan Jr., A Handbook of Gravity-Flow Water Systems, p.53); ` +
+      `residual at an outlet ${DEFAULT_LINE_SETTINGS.minResidualHeadM} m (Akvopedia, gravity-fed water supply); practical siphon limit ${DEFAULT_LINE_SETTINGS.siphonLimitHeadM} m ` +
+      '(Taylor & Francis/CRC hydraulics textbook, ch. 42). Pipe ratings are the standards\u2019 pressure classes, which already contain their design factors.',
+  );
+}
+
+export function cautions(doc: Doc): void {
+  heading(doc, 'Cautions');
+  for (const c of LINE_CAUTIONS) {
+    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`${c.title}. `, { continued: true }).font('Helvetica').text(pdfText(c.text));
+    doc.moveDown(0.3);
+  }
+}

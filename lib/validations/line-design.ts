@@ -1,0 +1,155 @@
+import { z } from 'zod';
+import { assertPipeSpec, HydraulicsInputError, WATER_TEMPERATURE_MAX_C, WATER_TEMPERATURE_MIN_C } from '../../hydraulics/index';
+import { safeText } from './common';
+
+/**
+ * The design of a line as the API stores it (SI units, the engineering core's own shapes). zod
+ * checks each part's shape and range here; the core's `assertLineInput` then checks the whole
+ * against the route's stations (stretches cover the line, devices lie on it) in lib/data.
+ */
+
+const LIMIT_M = 1e6;
+
+function metres(label: string) {
+  return z
+    .number({ error: `${label} must be a number (metres)` })
+    .min(-LIMIT_M, `${label} must be at least ${-LIMIT_M} m`)
+    .max(LIMIT_M, `${label} must be at most ${LIMIT_M} m`);
+}
+
+function atLeast(label: string, min: number, max: number, unit: string) {
+  return z
+    .number({ error: `${label} must be a number (${unit})` })
+    .min(min, `${label} must be at least ${min} ${unit}`)
+    .max(max, `${label} must be at most ${max} ${unit}`);
+}
+
+function positive(label: string, max: number, unit: string) {
+  return z
+    .number({ error: `${label} must be a number (${unit})` })
+    .positive(`${label} must be more than 0 ${unit}`)
+    .max(max, `${label} must be at most ${max} ${unit}`);
+}
+
+export const LineStartSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('water-level'), levelM: metres('Start water level') }),
+    z.strictObject({
+      kind: z.literal('pump'),
+      outletHeadM: metres('Pump outlet head'),
+      shutoffHeadM: metres('Pump shut-off head').optional(),
+    }),
+  ],
+  { error: 'Start must be a water level ("water-level") or a pump outlet ("pump")' },
+);
+
+export const LineEndSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({
+      kind: z.literal('outlet'),
+      elevationM: metres('Outlet elevation'),
+      residualHeadM: atLeast('Residual pressure wanted', 0, 1000, 'm of head').optional(),
+    }),
+    z.strictObject({ kind: z.literal('tank-inlet'), elevationM: metres('Tank inlet elevation') }),
+    z.strictObject({ kind: z.literal('free-discharge') }),
+  ],
+  { error: 'End must be an outlet, a tank inlet or free discharge' },
+);
+
+export const LineFlowSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('design'), flowM3s: atLeast('Design flow', 0, 10, 'm³/s') }),
+    z.strictObject({ kind: z.literal('find') }),
+  ],
+  { error: 'Flow must be a design flow ("design") or "find"' },
+);
+
+const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], { error: 'Material must be pvc, pe, steel or custom' });
+
+/** A user's own pipe: the shape here, the engineering limits from the core's `assertPipeSpec`. */
+export const CustomPipeSchema = z
+  .strictObject({
+    id: safeText('Pipe id', 80).pipe(z.string().min(1, 'Pipe id is required')),
+    label: safeText('Pipe label', 120).pipe(z.string().min(1, 'Pipe label is required')),
+    material: PipeMaterialSchema,
+    nominalSize: safeText('Nominal size', 40).pipe(z.string().min(1, 'Nominal size is required')),
+    outsideDiameterM: positive('Outside diameter', 5, 'm'),
+    insideDiameterM: positive('Inside diameter', 5, 'm'),
+    wallM: positive('Wall thickness', 1, 'm'),
+    pressureRatingPa: positive('Pressure rating', 1e9, 'Pa'),
+    hazenWilliamsC: positive('Hazen-Williams C', 1000, ''),
+    roughnessM: atLeast('Roughness', 0, 1, 'm'),
+    waveSpeedMs: positive('Wave speed', 10000, 'm/s'),
+    source: safeText('Pipe source', 300).pipe(z.string().min(1, 'Say where the pipe figures come from')),
+    sdr: positive('SDR', 1000, '').optional(),
+    sidr: positive('SIDR', 1000, '').optional(),
+  })
+  .superRefine((pipe, ctx) => {
+    try {
+      assertPipeSpec(pipe);
+    } catch (error) {
+      if (!(error instanceof HydraulicsInputError)) throw error;
+      ctx.addIssue({ code: 'custom', message: error.message, path: error.field.split('.').slice(1) });
+    }
+  });
+
+const pipeId = safeText('Pipe id', 80).pipe(z.string().min(1, 'Pick a pipe for the stretch'));
+
+export const LineStretchSchema = z
+  .strictObject({
+    fromM: metres('Stretch start chainage'),
+    toM: metres('Stretch end chainage'),
+    pipe: z.union([pipeId, CustomPipeSchema], { error: 'Pipe must be a catalogue id or a pipe spec' }),
+  })
+  .refine((s) => s.toM > s.fromM, { message: 'A stretch must end after it starts', path: ['toM'] });
+
+export const LineFittingSchema = z.strictObject({
+  chainageM: metres('Fitting chainage'),
+  k: atLeast('Loss coefficient K', 0, 1000, ''),
+  label: safeText('Fitting label', 80).optional(),
+});
+
+export const DEVICE_KINDS = ['break-pressure-tank', 'air-release-valve', 'washout', 'isolation-valve'] as const;
+
+export const LineDeviceSchema = z.strictObject({
+  kind: z.enum(DEVICE_KINDS, { error: `Device must be one of ${DEVICE_KINDS.join(', ')}` }),
+  chainageM: metres('Device chainage'),
+  waterLevelM: metres('Tank water level').optional(),
+  label: safeText('Device label', 80).optional(),
+});
+
+export const LineSettingsSchema = z
+  .strictObject({
+    frictionMethod: z.enum(['hazen-williams', 'darcy-weisbach'], { error: 'Friction method must be hazen-williams or darcy-weisbach' }).optional(),
+    waterTemperatureC: atLeast('Water temperature', WATER_TEMPERATURE_MIN_C, WATER_TEMPERATURE_MAX_C, '°C').optional(),
+    safetyFactor: atLeast('Safety factor', 1, 10, '').optional(),
+    velocityMinMs: atLeast('Lowest velocity', 0, 10, 'm/s').optional(),
+    velocityMaxMs: positive('Highest velocity', 20, 'm/s').optional(),
+    minResidualHeadM: atLeast('Minimum residual pressure', 0, 1000, 'm of head').optional(),
+    airPointToleranceM: atLeast('High/low point tolerance', 0, 100, 'm').optional(),
+    siteAltitudeM: atLeast('Site altitude', -500, 11000, 'm').optional(),
+    siphonLimitHeadM: positive('Siphon limit', 10.3, 'm of head').optional(),
+    defaultCoverM: atLeast('Pipe cover', 0, 10, 'm').optional(),
+    checkSurge: z.boolean({ error: 'Surge check must be true or false' }).optional(),
+  })
+  .refine((s) => (s.velocityMaxMs ?? 3) > (s.velocityMinMs ?? 0.7), {
+    message: 'The highest velocity must exceed the lowest',
+    path: ['velocityMaxMs'],
+  });
+
+export const LineDesignSchema = z.strictObject({
+  start: LineStartSchema,
+  end: LineEndSchema,
+  flow: LineFlowSchema,
+  stretches: z.array(LineStretchSchema, { error: 'Stretches must be a list' }).min(1, 'A line needs at least one stretch').max(500, 'At most 500 stretches'),
+  fittings: z.array(LineFittingSchema, { error: 'Fittings must be a list' }).max(1000, 'At most 1000 fittings').default([]),
+  devices: z.array(LineDeviceSchema, { error: 'Devices must be a list' }).max(1000, 'At most 1000 devices').default([]),
+  pipes: z.array(CustomPipeSchema, { error: 'Custom pipes must be a list' }).max(100, 'At most 100 custom pipes').default([]),
+  settings: LineSettingsSchema.default({}),
+});
+
+export type LineDesign = z.output<typeof LineDesignSchema>;
+export type LineDesignInput = z.input<typeof LineDesignSchema>;

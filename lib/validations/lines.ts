@@ -1,0 +1,55 @@
+import { z } from 'zod';
+import { nameText, safeText, uuid } from './common';
+import { LineDesignSchema } from './line-design';
+
+export const LINE_STATUSES = ['draft', 'for-checking', 'issued'] as const;
+export const LINE_STATUS_LABELS: Record<(typeof LINE_STATUSES)[number], string> = {
+  draft: 'Draft',
+  'for-checking': 'For checking',
+  issued: 'Issued for building',
+};
+
+export const LineParams = z.strictObject({ lineId: uuid('Line id') });
+
+const lineStatus = z.enum(LINE_STATUSES, { error: `Status must be one of ${LINE_STATUSES.join(', ')}` });
+const chainage = (label: string) => z.number({ error: `${label} must be a number (metres)` }).min(0, `${label} must be at least 0 m`).max(1e6, `${label} must be at most 1000 km`);
+
+/** A chainage window of the route: both ends or neither, the end after the start. */
+const window = {
+  fromChainageM: chainage('Window start').nullable().optional(),
+  toChainageM: chainage('Window end').nullable().optional(),
+};
+
+function windowIsOrdered(v: { fromChainageM?: number | null; toChainageM?: number | null }): boolean {
+  return v.fromChainageM == null || v.toChainageM == null || v.toChainageM > v.fromChainageM;
+}
+const windowMessage = { message: 'The window must end after it starts', path: ['toChainageM'] };
+
+/** New line: a name and a route; without a design, a starting design is drawn up from the route. */
+export const CreateLineSchema = z
+  .strictObject({
+    name: nameText('Line name'),
+    routeId: uuid('Route id'),
+    notes: safeText('Notes', 10000).default(''),
+    ...window,
+    design: LineDesignSchema.optional(),
+  })
+  .refine(windowIsOrdered, windowMessage);
+export type CreateLineInput = z.input<typeof CreateLineSchema>;
+
+export const UpdateLineSchema = z
+  .strictObject({
+    name: nameText('Line name'),
+    notes: safeText('Notes', 10000),
+    routeId: uuid('Route id'),
+    ...window,
+    status: lineStatus,
+    checkedBy: safeText('Checked by', 120).transform((s) => s.trim()),
+    design: LineDesignSchema,
+    /** The revision the editor started from; a newer saved revision answers 409 instead of being overwritten. */
+    baseRevision: z.number({ error: 'Base revision must be a whole number' }).int('Base revision must be a whole number').positive('Base revision must be at least 1'),
+  })
+  .partial()
+  .refine((v) => Object.keys(v).some((k) => k !== 'baseRevision'), 'Send at least one field to change')
+  .refine(windowIsOrdered, windowMessage);
+export type UpdateLineInput = z.input<typeof UpdateLineSchema>;

@@ -1,0 +1,61 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { PipeSpec } from '../hydraulics/catalogue/pipe-spec';
+import type { LineDevice, LineEnd, LineFitting, LineFlow, LineSettings, LineStart, LineStretch } from '../hydraulics/profile/types';
+
+export type LineStatus = 'draft' | 'for-checking' | 'issued';
+
+/** A pipeline laid along a survey route (or a chainage window of it). Its analysis is never stored. */
+export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<Line>> {
+  declare id: CreationOptional<string>;
+  declare projectId: string;
+  declare routeId: string | null;
+  declare name: string;
+  declare notes: CreationOptional<string>;
+  declare fromChainageM: number | null;
+  declare toChainageM: number | null;
+  declare startCondition: LineStart;
+  declare endCondition: LineEnd;
+  declare flow: LineFlow;
+  declare stretches: LineStretch[];
+  declare fittings: LineFitting[];
+  declare devices: LineDevice[];
+  declare pipes: PipeSpec[];
+  declare settings: LineSettings;
+  declare status: CreationOptional<LineStatus>;
+  declare checkedBy: CreationOptional<string>;
+  declare revision: CreationOptional<number>;
+  declare createdBy: string | null;
+  declare updatedBy: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initialise(sequelize: Sequelize): void {
+    Line.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        projectId: { type: DataTypes.UUID, allowNull: false },
+        routeId: { type: DataTypes.UUID, allowNull: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        fromChainageM: { type: DataTypes.DOUBLE, allowNull: true },
+        toChainageM: { type: DataTypes.DOUBLE, allowNull: true },
+        startCondition: { type: DataTypes.JSONB, allowNull: false },
+        endCondition: { type: DataTypes.JSONB, allowNull: false },
+        flow: { type: DataTypes.JSONB, allowNull: false },
+        stretches: { type: DataTypes.JSONB, allowNull: false },
+        fittings: { type: DataTypes.JSONB, allowNull: false },
+        devices: { type: DataTypes.JSONB, allowNull: false },
+        pipes: { type: DataTypes.JSONB, allowNull: false },
+        settings: { type: DataTypes.JSONB, allowNull: false },
+        status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'draft' },
+        checkedBy: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },
+        revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        createdBy: { type: DataTypes.UUID, allowNull: true },
+        updatedBy: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'lines', underscored: true },
+    );
+  }
+}

@@ -1,0 +1,91 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { localExtremeIndices } from '../../../lib/chart/local-extremes';
+import { thinProfile } from '../../../lib/chart/thin-profile';
+
+/**
+ * Every local high and low by the plainest reading of the definition, written apart from the code
+ * under test: a run of equal values whose neighbours are both lower, or both higher.
+ */
+function extremesByBruteForce(y: ArrayLike<number>): number[] {
+  const out: number[] = [];
+  let a = 0;
+  while (a < y.length) {
+    let b = a;
+    while (b + 1 < y.length && y[b + 1] === y[a]) b++;
+    if (a > 0 && b < y.length - 1) {
+      const left = y[a - 1];
+      const right = y[b + 1];
+      if ((left < y[a] && right < y[a]) || (left > y[a] && right > y[a])) out.push(...(a === b ? [a] : [a, b]));
+    }
+    a = b + 1;
+  }
+  return out;
+}
+
+/** A 100 000-point survey-like route: a random walk with flats, steps and noise, from a seed. */
+function route(seed: number, noise: number, n = 100_000): { x: Float64Array; y: Float64Array } {
+  let s = seed >>> 0;
+  const rand = () => ((s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 2 ** 32);
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  let z = 400;
+  let slope = 0;
+  for (let i = 0; i < n; i++) {
+    if (rand() < 0.002) slope = (rand() - 0.5) * 0.4;
+    z += slope + (rand() - 0.5) * noise;
+    x[i] = i * 0.5;
+    y[i] = Math.round(z * 10) / 10; // level-book rounding makes plateaus
+  }
+  return { x, y };
+}
+
+describe('thinning a long profile', () => {
+  it('the extreme finder agrees with the brute-force definition on small arrays', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: -3, max: 3 }), { minLength: 0, maxLength: 60 }), (values) => {
+        expect(localExtremeIndices(values)).toEqual(extremesByBruteForce(values));
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it('keeps every local high and low of a 100,000-point route, and both ends', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.constantFrom(0, 0.05, 0.6), fc.integer({ min: 200, max: 3000 }), (seed, noise, target) => {
+        const { x, y } = route(seed, noise);
+        const kept = thinProfile(x, y, { targetPoints: target });
+        const set = new Set(kept);
+        expect(kept[0]).toBe(0);
+        expect(kept[kept.length - 1]).toBe(y.length - 1);
+        for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
+        for (const i of extremesByBruteForce(y)) if (!set.has(i)) throw new Error(`extreme at index ${i} (${y[i]} m) was dropped`);
+      }),
+      { numRuns: 12 },
+    );
+  });
+
+  it('thins a smooth route to about the target, and keeps the guard series extremes and the indices asked for', () => {
+    const n = 100_000;
+    const x = Float64Array.from({ length: n }, (_, i) => i);
+    const y = Float64Array.from({ length: n }, (_, i) => 300 + 40 * Math.sin(i / 9000));
+    const guard = Float64Array.from({ length: n }, (_, i) => y[i] - (i === 5_000 ? 3 : 0.6));
+    const kept = thinProfile(x, y, { targetPoints: 1500, guardSeries: [guard], keep: [12_345] });
+    expect(kept.length).toBeLessThanOrEqual(1500 + extremesByBruteForce(y).length + extremesByBruteForce(guard).length + 1);
+    expect(kept.length).toBeGreaterThan(1000);
+    expect(kept).toContain(12_345);
+    for (const i of extremesByBruteForce(guard)) expect(kept).toContain(i);
+    for (const i of extremesByBruteForce(y)) expect(kept).toContain(i);
+  });
+
+  it('returns every index when the series is already short, and only the window asked for', () => {
+    const y = [1, 3, 2, 5, 4];
+    expect(thinProfile([0, 1, 2, 3, 4], y, { targetPoints: 10 })).toEqual([0, 1, 2, 3, 4]);
+    const x = Float64Array.from({ length: 1000 }, (_, i) => i);
+    const wave = Float64Array.from({ length: 1000 }, (_, i) => Math.sin(i / 30));
+    const kept = thinProfile(x, wave, { targetPoints: 20, from: 100, to: 300 });
+    expect(kept[0]).toBe(100);
+    expect(kept[kept.length - 1]).toBe(300);
+    expect(kept.every((i) => i >= 100 && i <= 300)).toBe(true);
+  });
+});

@@ -1,0 +1,35 @@
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { analyzeLine, FOOT_M } from '../../../hydraulics/index';
+import { stationColumns, stationRows, stretchColumns, tableCsv } from '../../../lib/lines/results-table';
+import { displayUnits } from '../../../lib/units/display';
+import { referenceLine } from '../../lines/reference-line';
+
+describe('results tables and their CSV files', () => {
+  const analysis = analyzeLine(referenceLine());
+
+  it('writes one row per analysed point with head and pressure side by side, and reads back the same numbers', () => {
+    const rows = stationRows(analysis);
+    const csv = tableCsv(stationColumns(displayUnits('metric'), 20), rows);
+    const parsed = Papa.parse<string[]>(csv.trim());
+    expect(parsed.errors).toEqual([]);
+    const [header, ...body] = parsed.data;
+    expect(header).toEqual([
+      'Chainage (m)', 'Ground (m)', 'Pipe (m)', 'Static head (m)', 'Hydraulic grade (m)', 'Static pressure head (m)',
+      'Static pressure (kPa)', 'Flowing pressure head (m)', 'Flowing pressure (kPa)', 'Velocity (m/s)', 'Stretch',
+    ]);
+    expect(body).toHaveLength(analysis.points.chainageM.length);
+    const sag = body.find((r) => r[0] === '650.0')!;
+    expect(Number(sag[5])).toBeCloseTo(112.75, 2); // static head 412 m over the pipe at 300 - 0.75 m
+    expect(Number(sag[4])).toBeCloseTo(analysis.points.hydraulicGradeM[rows.findIndex((r) => r.chainageM === 650)], 2);
+  });
+
+  it('states the stretch table in feet for a US project', () => {
+    const csv = tableCsv(stretchColumns(displayUnits('us'), 20), analysis.stretches);
+    const [header, first] = Papa.parse<string[]>(csv.trim()).data;
+    expect(header.slice(0, 4)).toEqual(['Stretch', 'From (ft)', 'To (ft)', 'Pipe length (ft)']);
+    // 300 m = 984.3 ft (1 ft = 0.3048 m exactly).
+    expect(Number(first[2])).toBeCloseTo(300 / FOOT_M, 1);
+    expect(first[4]).toBe('40 mm PE80 SDR 17 (PN 8)');
+  });
+});

@@ -1,0 +1,68 @@
+import { PDFParse } from 'pdf-parse';
+import { describe, expect, it } from 'vitest';
+import { analyzeLine, PRESSURE_CAUTION } from '../../../hydraulics/index';
+import type { LineRecord } from '../../../lib/data/lines';
+import { LINE_CAUTIONS } from '../../../lib/lines/cautions';
+import { localiseWarningText } from '../../../lib/lines/localise-text';
+import { WARNING_TITLES } from '../../../lib/lines/warning-words';
+import { lineReportPdf } from '../../../lib/report/line-report';
+import { displayUnits } from '../../../lib/units/display';
+import { LineDesignSchema } from '../../../lib/validations/line-design';
+import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
+
+const squash = (text: string) => text.replace(/\s+/g, ' ');
+
+async function reportText(unitSystem: 'metric' | 'us') {
+  const input = referenceLine();
+  const design = LineDesignSchema.parse(referenceDesignParts());
+  const line: LineRecord = {
+    id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
+    routeName: 'Spring line design profile', name: 'Spring box to house', notes: '', fromChainageM: null, toChainageM: null,
+    status: 'for-checking', checkedBy: 'Dara Okafor', revision: 7, preparedBy: 'Tobias Wren', design,
+    createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+  };
+  const analysis = analyzeLine(input);
+  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const parser = new PDFParse({ data: new Uint8Array(pdf) });
+  const result = await parser.getText();
+  await parser.destroy();
+  return { pdf, text: squash(result.text), pages: result.total, analysis };
+}
+
+describe('line design report (PDF)', () => {
+  it('parses, runs to several pages and carries the title block', async () => {
+    const { pdf, text, pages } = await reportText('metric');
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(pages).toBeGreaterThanOrEqual(2);
+    for (const words of ['Spring box to house: line design report', 'Kestrel Hollow spring line', 'Tobias Wren', 'Dara Okafor', 'For checking', '7 / 2026-12-01']) {
+      expect(text).toContain(words);
+    }
+  });
+
+  it('lists every warning with its words, the stretch schedule, the devices and the assumptions', async () => {
+    const { text, analysis } = await reportText('metric');
+    expect(analysis.warnings.length).toBeGreaterThan(3);
+    for (const w of analysis.warnings) {
+      expect(text).toContain(WARNING_TITLES[w.code]);
+      expect(text).toContain(squash(w.message).slice(0, 60));
+    }
+    for (const words of ['Stretch schedule', '40 mm PE80 SDR 17 (PN 8)', 'Devices by chainage', 'Air-release valve', 'Assumptions', 'Hazen-Williams', '20 °C']) {
+      expect(text).toContain(words);
+    }
+  });
+
+  it('carries the cautions: pressure, surge, trenching and drinking water', async () => {
+    const { text } = await reportText('metric');
+    expect(text).toContain(squash(PRESSURE_CAUTION));
+    for (const c of LINE_CAUTIONS) expect(text).toContain(squash(`${c.title}. ${c.text}`).slice(0, 120));
+  });
+
+  it('states figures in US units for a US project', async () => {
+    const { text, analysis } = await reportText('us');
+    expect(text).toContain('US customary');
+    expect(text).toContain('gpm');
+    expect(text).toContain('psi');
+    const over = analysis.warnings.find((w) => w.code === 'static-over-rating')!;
+    expect(text).toContain(squash(localiseWarningText(over.message, displayUnits('us'))).slice(0, 60));
+  });
+});
