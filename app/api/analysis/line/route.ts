@@ -1,5 +1,5 @@
 import { analyzeLine } from '@/hydraulics';
-import { analysisToJson } from '@/lib/analysis/to-json';
+import { analysisToJson } from '@/lib/lines/analysis-json';
 import { userRoute } from '@/lib/api/route';
 import { LineInputSchema } from '@/lib/validations/analysis';
 
