@@ -1,5 +1,6 @@
 import { db } from '../lib/db';
 import { Attachment } from './attachment';
+import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
 import { Membership } from './membership';
 import { Project } from './project';
 import { Route } from './route';
@@ -20,6 +21,7 @@ export function models() {
     Attachment.initialise(sequelize);
     Route.initialise(sequelize);
     RoutePoint.initialise(sequelize);
+    initialiseLiftModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -34,7 +36,12 @@ export function models() {
     Route.belongsTo(Attachment, { foreignKey: 'sourceAttachmentId', as: 'sourceAttachment' });
     ready = true;
   }
-  return { User, Team, Membership, Project, Attachment, Route, RoutePoint, sequelize: db() };
+  return {
+    User, Team, Membership, Project, Attachment, Route, RoutePoint,
+    WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
+    sequelize: db(),
+  };
 }
 
 export { Attachment, Membership, Project, Route, RoutePoint, Team, User };
+export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };

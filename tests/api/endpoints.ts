@@ -1,5 +1,6 @@
 import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
+import { LIFT_ENDPOINTS } from './lift-endpoints';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 type Expect = Record<Actor, number>;
@@ -8,7 +9,8 @@ export interface EndpointCase {
   /** Route file under app/api, e.g. `teams/[teamId]/route.ts`. */
   file: string;
   method: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
-  params: (f: Fixture) => Record<string, string>;
+  /** May create the nested resource the path names (a ram site, a reading...) before the call. */
+  params: (f: Fixture) => Record<string, string> | Promise<Record<string, string>>;
   body?: (f: Fixture, n: number) => unknown;
   expect: Expect;
 }
@@ -36,6 +38,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'projects/[projectId]/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
   { file: 'projects/[projectId]/route.ts', method: 'PATCH', params: (f) => ({ projectId: f.projectId }), body: () => ({ siteNotes: 'Checked the spring box.' }), expect: designers(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
+  ...LIFT_ENDPOINTS,
 ];
 
 /** Library endpoints not built from lib/api/route.ts; exercised end to end by the Playwright sign-in tests. */
