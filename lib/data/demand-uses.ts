@@ -1,5 +1,6 @@
 import 'server-only';
-import { useDemand } from '../../hydraulics/demand/use-demand';
+// The engine's name starts with "use"; renamed so the hooks lint rule does not mistake it for a React hook.
+import { useDemand as demandOfOneUse } from '../../hydraulics/demand/use-demand';
 import { models } from '../../models';
 import { notFound } from '../errors';
 import { toWaterUse } from '../lift/demand';
@@ -14,7 +15,7 @@ export async function listDemandUses(projectId: string): Promise<DemandUseRecord
 
 /** A use the demand engine would refuse is refused here (400) before it is stored. */
 function assertComputable(input: DemandUseInput): void {
-  useDemand({ use: toWaterUse(input) });
+  demandOfOneUse({ use: toWaterUse(input) });
 }
 
 export async function createDemandUse(projectId: string, input: DemandUseInput): Promise<DemandUseRecord> {
