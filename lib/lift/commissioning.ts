@@ -19,6 +19,15 @@ function measurement(volumeM3: number | null, seconds: number | null, flowM3s: n
   return { bucket: { volumeM3: volumeM3 ?? Number.NaN, seconds: seconds ?? Number.NaN } };
 }
 
+/** The form field a core input error is about (the core names its own nested fields). */
+function formField(coreField: string | undefined): string | undefined {
+  if (coreField === undefined) return undefined;
+  if (coreField.startsWith('reading.delivered')) return 'deliveredFlowM3s';
+  if (coreField.startsWith('reading.drive')) return 'driveFlowM3s';
+  if (coreField.startsWith('reading.')) return coreField.slice('reading.'.length);
+  return coreField;
+}
+
 /** Measured efficiency of one reading, compared with the plan (the table's efficiency, not an override). */
 export function commissioningOutcome(reading: CommissioningReadingInput, plan: RamPlanResult | null): Outcome<CommissioningView> {
   if (reading.driveMeasure === 'plan' && !plan) {
@@ -30,7 +39,7 @@ export function commissioningOutcome(reading: CommissioningReadingInput, plan: R
     reading.driveMeasure === 'waste'
       ? { wasteFlow: drivePart }
       : { driveFlow: reading.driveMeasure === 'drive' ? drivePart : { flowM3s: plan?.driveFlowUsedM3s ?? Number.NaN } };
-  return outcomeOf(() => {
+  const outcome = outcomeOf((): CommissioningView => {
     const result = commissioningResult({
       reading: {
         beatsPerMinute: reading.beatsPerMinute,
@@ -41,7 +50,8 @@ export function commissioningOutcome(reading: CommissioningReadingInput, plan: R
       },
       ...(plan && plan.efficiency > 0 ? { plannedEfficiency: plan.efficiency, plannedDeliveredFlowM3s: plan.deliveredFlowM3s } : {}),
     });
-    const driveBasis = reading.driveMeasure === 'drive' ? 'measured-drive' : reading.driveMeasure === 'waste' ? 'measured-waste' : 'planned';
+    const driveBasis: CommissioningView['driveBasis'] = reading.driveMeasure === 'drive' ? 'measured-drive' : reading.driveMeasure === 'waste' ? 'measured-waste' : 'planned';
     return { ...result, deliveryHeadM, driveBasis, plannedEfficiency: plan && plan.efficiency > 0 ? plan.efficiency : null };
   });
+  return outcome.ok ? outcome : { ...outcome, field: formField(outcome.field) };
 }

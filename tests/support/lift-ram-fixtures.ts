@@ -15,7 +15,7 @@ export const ramSiteBody = () => ({
   pumpCount: 1,
 });
 
-/** Readings at that ram: 60 beats, 10 L at the top in 4 min, 10 L at the waste valve in 40 s, gauge 11 m. */
+/** Readings at that ram: 60 beats, 10 L at the top in 4 min, 10 L at the waste valve in 30 s, gauge 11 m. */
 export const commissioningBody = () => ({
   measuredOn: '2026-09-12',
   beatsPerMinute: 60,
@@ -23,7 +23,7 @@ export const commissioningBody = () => ({
   deliveredBucketSeconds: 240,
   driveMeasure: 'waste',
   driveBucketVolumeM3: 0.01,
-  driveBucketSeconds: 40,
+  driveBucketSeconds: 30,
   supplyHeadM: 2,
   deliveryHeadM: 11,
   notes: 'after priming',
