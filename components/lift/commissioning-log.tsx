@@ -29,7 +29,7 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
         <p className="text-sm text-creek-700">No readings yet. Log the first one once the ram runs by itself.</p>
       ) : (
         <div className="overflow-x-auto">
-          <table className="tabular w-full text-left text-sm">
+          <table className="tabular w-full text-left text-sm [&_td]:align-top">
             <caption className="sr-only">Commissioning readings of {view.site.name}</caption>
             <thead className="text-xs uppercase tracking-wide text-creek-600">
               <tr><th className="py-1 pr-3">Date</th><th className="pr-3">Beats/min</th><th className="pr-3">Delivered</th><th className="pr-3">Drive</th><th className="pr-3">Heads (supply / delivery)</th><th className="pr-3">Measured efficiency</th><th className="pr-3">Against plan</th><th className="pr-3">Notes</th>{canEdit && <th />}</tr>
@@ -37,12 +37,12 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
             <tbody>
               {view.commissioning.map(({ reading, result }) => (
                 <tr key={reading.id} className="border-t border-creek-100 align-top">
-                  <td className="py-1.5 pr-3">{reading.measuredOn}</td>
+                  <td className="whitespace-nowrap py-1.5 pr-3">{reading.measuredOn}</td>
                   <td className="pr-3">{formatNumber(reading.beatsPerMinute, 0)}</td>
                   {result.ok ? (
                     <>
-                      <td className="pr-3">{formatQuantity('flow', result.value.deliveredFlowM3s, units)}</td>
-                      <td className="pr-3">{formatQuantity('flow', result.value.driveFlowM3s, units)} <span className="text-xs text-creek-600">({DRIVE_BASIS[result.value.driveBasis]})</span></td>
+                      <td className="whitespace-nowrap pr-3">{formatQuantity('flow', result.value.deliveredFlowM3s, units)}</td>
+                      <td className="pr-3"><span className="whitespace-nowrap">{formatQuantity('flow', result.value.driveFlowM3s, units)}</span> <span className="text-xs text-creek-600">({DRIVE_BASIS[result.value.driveBasis]})</span></td>
                       <td className="pr-3">{formatQuantity('head', reading.supplyHeadM, units)} / {formatQuantity('head', result.value.deliveryHeadM, units)}</td>
                       <td className="pr-3 font-semibold" data-testid="measured-efficiency">{formatPercent(result.value.measuredEfficiency)}</td>
                       <td className="pr-3">{result.value.plannedEfficiency === null ? '—' : `planned ${formatPercent(result.value.plannedEfficiency)} (${formatPercent(result.value.efficiencyRatioToPlan ?? 0)} of it)`}</td>
@@ -69,7 +69,12 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
           <FormMessage message={saveSite.error?.message} />
         </div>
       )}
-      {canEdit && <CommissioningForm projectId={projectId} siteId={view.site.id} units={units} />}
+      {canEdit && (
+        <div className="space-y-2 rounded-md border border-dashed border-creek-200 p-3">
+          <h4 className="text-sm font-semibold text-creek-900">Log a reading</h4>
+          <CommissioningForm projectId={projectId} siteId={view.site.id} units={units} />
+        </div>
+      )}
       <FieldNotes />
     </div>
   );
@@ -77,7 +82,7 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
 
 function FieldNotes() {
   return (
-    <div className="grid gap-4 text-sm md:grid-cols-2">
+    <div className="grid items-start gap-4 text-sm md:grid-cols-2">
       <details className="rounded-md border border-creek-100 p-3" open>
         <summary className="cursor-pointer font-semibold text-creek-900">Commissioning checklist</summary>
         <ol className="mt-2 list-decimal space-y-1 pl-5 text-creek-800">

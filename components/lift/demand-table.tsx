@@ -40,8 +40,8 @@ export function DemandTable({ projectId, view, units, canEdit }: { projectId: st
                       </span>
                     </td>
                     <td className="pr-3">{deliveryText(use)}</td>
-                    <td className="pr-3 text-right">{result ? formatQuantity('volume', result.dailyVolumeM3, units) : '—'}</td>
-                    <td className="pr-3 text-right">{result ? formatQuantity('flow', result.peakFlowM3s, units) : '—'}</td>
+                    <td className="whitespace-nowrap pr-3 text-right">{result ? formatQuantity('volume', result.dailyVolumeM3, units) : '—'}</td>
+                    <td className="whitespace-nowrap pr-3 text-right">{result ? formatQuantity('flow', result.peakFlowM3s, units) : '—'}</td>
                     {canEdit && (
                       <td className="whitespace-nowrap">
                         <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => setEditing(editing === use.id ? null : use.id)}>Edit</Button>{' '}
@@ -60,8 +60,8 @@ export function DemandTable({ projectId, view, units, canEdit }: { projectId: st
             <tfoot>
               <tr className="border-t-2 border-creek-200 font-semibold text-creek-900">
                 <td className="py-1.5 pr-3" colSpan={4}>All uses{total.peakMethod === 'sum-of-peaks' ? ' (peaks added: some uses have only a peak factor)' : ' (peak of the summed hourly profile)'}</td>
-                <td className="pr-3 text-right" data-testid="demand-total">{formatQuantity('volume', total.dailyVolumeM3, units)}</td>
-                <td className="pr-3 text-right">{formatQuantity('flow', total.peakFlowM3s, units)}</td>
+                <td className="whitespace-nowrap pr-3 text-right" data-testid="demand-total">{formatQuantity('volume', total.dailyVolumeM3, units)}</td>
+                <td className="whitespace-nowrap pr-3 text-right">{formatQuantity('flow', total.peakFlowM3s, units)}</td>
                 {canEdit && <td />}
               </tr>
             </tfoot>

@@ -52,9 +52,10 @@ export function LiftWorkspace({ projectId, units, canEdit, canLogYield }: LiftWo
           <RamSiteCard key={view.site.id} projectId={projectId} view={view} units={units} canEdit={canEdit} sources={sources} tanks={tanks} routes={lift.routes} />
         ))}
         {canEdit && (
-          <Panel title="Add a ram site">
-            <RamSiteForm projectId={projectId} units={units} site={null} sources={sources} tanks={tanks} routes={lift.routes} />
-          </Panel>
+          <details className="rounded-lg border border-creek-100 bg-white p-4 shadow-sm sm:p-5" open={lift.ramSites.length === 0}>
+            <summary className="cursor-pointer text-base font-semibold text-creek-900">{lift.ramSites.length === 0 ? 'Add a ram site' : 'Add another ram site'}</summary>
+            <div className="mt-4"><RamSiteForm projectId={projectId} units={units} site={null} sources={sources} tanks={tanks} routes={lift.routes} /></div>
+          </details>
         )}
       </section>
       <section id="yield"><Panel title="Source yield"><SourceYield projectId={projectId} views={lift.sources} units={units} canEdit={canEdit} canLog={canLogYield} /></Panel></section>

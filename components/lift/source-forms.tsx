@@ -103,7 +103,7 @@ export function YieldReadingForm({ projectId, sourceId, units }: { projectId: st
       {state.mode === 'bucket' ? (
         <div className="grid grid-cols-2 gap-2">
           <NumberField id={id('volume')} label="Bucket" unit={unitOf('volume', units)} value={state.volume} onChange={(value) => set('volume', value)} errors={form.fields.bucketVolumeM3} />
-          <NumberField id={id('seconds')} label="Seconds" unit="s" value={state.seconds} onChange={(value) => set('seconds', value)} errors={form.fields.bucketSeconds ?? form.fields.flowM3s} />
+          <NumberField id={id('seconds')} label="Time to fill" unit="s" value={state.seconds} onChange={(value) => set('seconds', value)} errors={form.fields.bucketSeconds ?? form.fields.flowM3s} />
         </div>
       ) : (
         <NumberField id={id('flow')} label="Flow" unit={unitOf('flow', units)} value={state.flow} onChange={(value) => set('flow', value)} errors={form.fields.flowM3s} />

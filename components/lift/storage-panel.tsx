@@ -97,7 +97,7 @@ function TankElevation({ view, units }: { view: TankView; units: UnitSystem }) {
     <p className="text-sm text-creek-800">
       Tank elevation needed: lowest working water level at least <strong className="tabular">{formatQuantity('elevation', required.minimumWaterLevelM, units)}</strong>, set by {governing?.label ?? 'an outlet'}
       {lowestWaterLevelM !== null && (
-        <> ; this tank&apos;s lowest working level is {formatQuantity('elevation', lowestWaterLevelM, units)}{shortfallM ? `, ${formatQuantity('head', shortfallM, units)} too low` : ', high enough'}.</>
+        <>; this tank&apos;s lowest working level is {formatQuantity('elevation', lowestWaterLevelM, units)}{shortfallM ? `, ${formatQuantity('head', shortfallM, units)} too low` : ', high enough'}.</>
       )}
     </p>
   );
