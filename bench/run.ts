@@ -4,6 +4,8 @@ import { runBenchmark, type Benchmark } from './harness';
 const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'profile-100k': async () => (await import('./profile-100k')).profile100k,
   'profile-100k-dw': async () => (await import('./profile-100k')).profile100kDw,
+  'lift-summary': async () => (await import('./lift-summary')).liftSummary,
+  'ram-plan-preview': async () => (await import('./lift-summary')).ramPlanPreview,
 };
 
 async function main(): Promise<void> {
