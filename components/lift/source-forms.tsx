@@ -78,6 +78,7 @@ export function YieldReadingForm({ projectId, sourceId, units }: { projectId: st
   const add = useAddYieldReading(projectId, sourceId);
   const form = useLiftForm(YieldReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
   const id = (name: string) => `yield-${sourceId.slice(0, 8)}-${name}`;
+  const exampleBucketM3 = fromDisplay('volume', units === 'us' ? 5 : 20, units);
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -113,7 +114,7 @@ export function YieldReadingForm({ projectId, sourceId, units }: { projectId: st
         <Button type="submit" disabled={add.isPending}>Log reading</Button>
       </div>
       <div className="sm:col-span-4"><FormMessage message={form.note?.text} tone={form.note?.tone} /></div>
-      <p className="text-xs text-creek-600 sm:col-span-4">Time a bucket of known size at the intake, three times, and enter the average. {formatQuantity('volume', 0.02, units)} in 10 s is {formatQuantity('flow', 0.002, units)}.</p>
+      <p className="text-xs text-creek-600 sm:col-span-4">Time a bucket of known size at the intake, three times, and enter the average: {formatQuantity('volume', exampleBucketM3, units)} in 10 s is {formatQuantity('flow', exampleBucketM3 / 10, units)}.</p>
     </form>
   );
 }

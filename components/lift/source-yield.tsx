@@ -70,7 +70,7 @@ function SourceCard({ projectId, view, units, canEdit, canLog }: { projectId: st
           <tbody>
             {view.readings.map((reading) => (
               <tr key={reading.id} className={`border-t border-creek-100 ${design.ok && design.value.readingId === reading.id ? 'bg-creek-50 font-medium' : ''}`}>
-                <td className="py-1.5">{reading.measuredOn}</td>
+                <td className="whitespace-nowrap py-1.5 pr-2">{reading.measuredOn}</td>
                 <td>{reading.season}</td>
                 <td>{reading.flowM3s !== null ? 'flow figure' : `${formatQuantity('volume', reading.bucketVolumeM3 ?? 0, units)} in ${reading.bucketSeconds} s`}</td>
                 <td>{formatQuantity('flow', reading.flowM3sMeasured, units)}{design.ok && design.value.readingId === reading.id ? ' (design)' : ''}</td>
