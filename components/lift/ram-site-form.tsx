@@ -33,18 +33,20 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   const form = useLiftForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.');
   const tankVolumeM3 = tanks.find((tank) => tank.id === state.tankId)?.volumeM3 ?? null;
   const preview = useMemo(() => {
-    const parsed = RamSiteSchema.safeParse(ramSiteInputFrom(state, units));
-    return parsed.success ? planRamSite(parsed.data, { routes, tankVolumeM3 }) : null;
+    if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;
+    // The name does not change the plan, so a site without one yet still gets its preview.
+    const parsed = RamSiteSchema.safeParse({ ...ramSiteInputFrom(state, units), name: state.name.trim() || 'preview' });
+    if (!parsed.success) return { ok: false as const, error: parsed.error.issues[0]?.message ?? 'check the fields' };
+    return planRamSite(parsed.data, { routes, tankVolumeM3 });
   }, [state, units, routes, tankVolumeM3]);
   const source = sources.find((candidate) => candidate.id === state.sourceId);
   const prefix = 'ram';
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    if ((await form.submit(ramSiteInputFrom(state, units))) && !site) {
-      setState(emptyRamSiteForm());
-      onDone?.();
-    } else if (site) onDone?.();
+    if (!(await form.submit(ramSiteInputFrom(state, units)))) return;
+    if (!site) setState(emptyRamSiteForm());
+    onDone?.();
   }
 
   return (

@@ -21,6 +21,8 @@ test('a designer enters a ram site, sees litres a day and the tank fill time, an
   await expect(page.getByRole('heading', { name })).toBeVisible();
   await page.getByRole('link', { name: 'Lift & storage' }).click();
   await expect(page.getByRole('heading', { name: 'Lift & storage' })).toBeVisible();
+  // The forms are React-controlled: wait for the page to hydrate before typing into them.
+  await page.waitForLoadState('networkidle');
 
   await page.getByText('Add a tank').click();
   const tankForm = page.getByRole('form', { name: 'Add a tank' });
@@ -96,4 +98,19 @@ test('a viewer sees the lift figures without edit controls, and a direct write i
   await page.reload();
   await expect(page.getByRole('heading', { name: 'Weir ram' })).toBeVisible();
   expect(errors).toEqual([]);
+});
+
+test('a lift below the fall is refused beside the field and the site stays as it was', async ({ page }) => {
+  await signIn(page, 'designer@example.test');
+  await page.goto(`/projects/${BRACKWATER}/lift`);
+  await page.waitForLoadState('networkidle');
+  await page.getByRole('button', { name: 'Edit site' }).click();
+  const form = page.getByRole('form', { name: 'Edit Weir ram' });
+  await expect(form.getByLabel('Lift, pump to delivery outlet (ft)')).toHaveValue('70');
+  await form.getByLabel('Lift, pump to delivery outlet (ft)').fill('3');
+  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet');
+  await form.getByRole('button', { name: 'Save ram site' }).click();
+  await expect(form.getByRole('alert').filter({ hasText: 'Lift must be above the fall' })).toBeVisible();
+  await page.reload();
+  await expect(page.getByText('Fall 6.00 ft, lift 70.0 ft')).toBeVisible();
 });
