@@ -7,6 +7,8 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'line-5k': async () => (await import('./line-5k')).line5k,
   'line-5k-draw': async () => (await import('./line-5k')).line5kDraw,
   'draw-100k': async () => (await import('./line-5k')).draw100k,
+  'lift-summary': async () => (await import('./lift-summary')).liftSummary,
+  'ram-plan-preview': async () => (await import('./lift-summary')).ramPlanPreview,
 };
 
 async function main(): Promise<void> {

@@ -15,6 +15,8 @@ export const PERMISSIONS = {
   'project.delete': ['owner'],
   'survey.edit': ['owner', 'designer', 'surveyor'],
   'design.edit': ['owner', 'designer'],
+  // Source yield readings are field measurements: surveyors log them as well as designers.
+  'yield.log': ['owner', 'designer', 'surveyor'],
   'analysis.run': ALL,
   'review.comment': ['owner', 'reviewer'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -1,6 +1,7 @@
 import { db } from '../lib/db';
 import { Attachment } from './attachment';
 import { Line } from './line';
+import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
 import { Membership } from './membership';
 import { Project } from './project';
 import { Route } from './route';
@@ -22,6 +23,7 @@ export function models() {
     Route.initialise(sequelize);
     RoutePoint.initialise(sequelize);
     Line.initialise(sequelize);
+    initialiseLiftModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -39,7 +41,12 @@ export function models() {
     Line.belongsTo(Route, { foreignKey: 'routeId', as: 'route' });
     ready = true;
   }
-  return { User, Team, Membership, Project, Attachment, Route, RoutePoint, Line, sequelize: db() };
+  return {
+    User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
+    WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
+    sequelize: db(),
+  };
 }
 
 export { Attachment, Line, Membership, Project, Route, RoutePoint, Team, User };
+export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };

@@ -10,6 +10,7 @@ import { usePathname } from 'next/navigation';
 export const PROJECT_SECTIONS: { path: string; label: string }[] = [
   { path: '', label: 'Overview' },
   { path: '/lines', label: 'Lines' },
+  { path: '/lift', label: 'Lift & storage' },
 ];
 
 export function ProjectNav({ projectId }: { projectId: string }) {

@@ -1,6 +1,5 @@
 const UPCOMING = [
   { title: 'Survey routes', text: 'Import walked GPS tracks and field-book readings, clean them and see the ground profile.' },
-  { title: 'Lift and storage', text: 'Ram pump output, source yield, daily demand and tank size.' },
   { title: 'Review and report', text: 'Comments on the profile, approval of a revision, bill of materials and the PDF report.' },
 ];
 

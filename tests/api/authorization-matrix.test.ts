@@ -50,7 +50,7 @@ describe('authorisation matrix', () => {
       const res = await call(handler, {
         method: endpoint.method,
         path: `/api/${endpoint.file}`,
-        params: endpoint.params(fixture),
+        params: await endpoint.params(fixture),
         body: endpoint.body?.(fixture, ACTORS.indexOf(actor)),
         userId,
       });

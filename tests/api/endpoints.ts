@@ -1,6 +1,7 @@
 import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
+import { LIFT_ENDPOINTS } from './lift-endpoints';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 type Expect = Record<Actor, number>;
@@ -9,7 +10,8 @@ export interface EndpointCase {
   /** Route file under app/api, e.g. `teams/[teamId]/route.ts`. */
   file: string;
   method: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
-  params: (f: Fixture) => Record<string, string>;
+  /** May create the nested resource the path names (a ram site, a reading...) before the call. */
+  params: (f: Fixture) => Record<string, string> | Promise<Record<string, string>>;
   body?: (f: Fixture, n: number) => unknown;
   expect: Expect;
 }
@@ -46,6 +48,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  ...LIFT_ENDPOINTS,
 ];
 
 /** Library endpoints not built from lib/api/route.ts; exercised end to end by the Playwright sign-in tests. */

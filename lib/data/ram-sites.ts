@@ -1,0 +1,129 @@
+import 'server-only';
+import type { Transaction } from 'sequelize';
+import { planRamPump, RAM_PLAN_CAUTION } from '../../hydraulics/ram/plan-ram';
+import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
+import { models } from '../../models';
+import { notFound } from '../errors';
+import { ramPlanOptions } from '../lift/ram-plan';
+import type { RamSiteRecord, RouteOption } from '../lift/records';
+import { buildLiftSummary } from '../lift/summary';
+import type { RamSiteInput } from '../validations/ram-sites';
+import { assertReferences } from './lift-ownership';
+import { ramSiteRecord } from './lift-records';
+import { loadLiftRecords } from './lift-summary';
+
+export async function planContext(projectId: string, input: RamSiteInput, transaction: Transaction) {
+  const { Route, Tank } = models();
+  const route = input.deliveryPipe.routeId ? await Route.findOne({ where: { id: input.deliveryPipe.routeId, projectId }, transaction }) : null;
+  const tank = input.tankId ? await Tank.findOne({ where: { id: input.tankId, projectId }, transaction }) : null;
+  const routes: RouteOption[] = route ? [{ id: route.id, name: route.name, lengthM: route.lengthM }] : [];
+  return { routes, tankVolumeM3: tank?.volumeM3 ?? null, routeLengthM: route?.lengthM ?? null };
+}
+
+function rowFields(input: RamSiteInput, deliveryLengthM: number) {
+  const { drivePipe, deliveryPipe } = input;
+  return {
+    name: input.name,
+    sourceId: input.sourceId,
+    tankId: input.tankId,
+    driveFlowM3s: input.driveFlowM3s,
+    fallM: input.fallM,
+    driveLengthM: drivePipe.lengthM,
+    driveInsideDiameterM: drivePipe.insideDiameterM,
+    driveMaterial: drivePipe.material,
+    driveRigid: drivePipe.rigid,
+    liftM: input.liftM,
+    deliveryLengthM,
+    deliveryRouteId: deliveryPipe.routeId,
+    deliveryPipeId: deliveryPipe.pipeId,
+    deliveryInsideDiameterM: deliveryPipe.pipeId ? null : deliveryPipe.insideDiameterM,
+    deliveryHazenC: deliveryPipe.pipeId ? null : deliveryPipe.hazenWilliamsC,
+    deliveryRatingPa: deliveryPipe.pipeId ? null : deliveryPipe.pressureRatingPa,
+    sizeClassId: input.sizeClassId,
+    pumpCount: input.pumpCount,
+    measuredEfficiency: input.measuredEfficiency,
+    notes: input.notes,
+  };
+}
+
+/** Checks references and plans the site before anything is written; a bad input throws a 400. */
+async function preparedFields(projectId: string, input: RamSiteInput, transaction: Transaction) {
+  await assertReferences(projectId, [
+    { field: 'sourceId', model: 'WaterSource', id: input.sourceId, label: 'The source' },
+    { field: 'tankId', model: 'Tank', id: input.tankId, label: 'The tank' },
+    { field: 'deliveryPipe.routeId', model: 'Route', id: input.deliveryPipe.routeId, label: 'The delivery route' },
+  ], transaction);
+  const context = await planContext(projectId, input, transaction);
+  const plan = planRamPump(ramPlanOptions(input, context));
+  return { fields: rowFields(input, context.routeLengthM ?? input.deliveryPipe.lengthM ?? 0), plan };
+}
+
+export interface SavedRamSite { ramSite: RamSiteRecord; plan: RamPlanResult }
+
+export async function listRamSites(projectId: string): Promise<RamSiteRecord[]> {
+  const rows = await models().RamSite.findAll({ where: { projectId }, order: [['createdAt', 'ASC']] });
+  return rows.map(ramSiteRecord);
+}
+
+export async function createRamSite(projectId: string, userId: string, input: RamSiteInput): Promise<SavedRamSite> {
+  const { RamSite, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const { fields, plan } = await preparedFields(projectId, input, transaction);
+    const row = await RamSite.create({ ...fields, projectId, createdBy: userId }, { transaction });
+    return { ramSite: ramSiteRecord(row), plan };
+  });
+}
+
+export async function updateRamSite(projectId: string, siteId: string, input: RamSiteInput): Promise<SavedRamSite> {
+  const { RamSite, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const row = await RamSite.findOne({ where: { id: siteId, projectId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!row) throw notFound('No such ram site in this project');
+    const { fields, plan } = await preparedFields(projectId, input, transaction);
+    await row.update(fields, { transaction });
+    return { ramSite: ramSiteRecord(row), plan };
+  });
+}
+
+export async function deleteRamSite(projectId: string, siteId: string): Promise<void> {
+  const removed = await models().RamSite.destroy({ where: { id: siteId, projectId } });
+  if (removed === 0) throw notFound('No such ram site in this project');
+}
+
+/** What the line designer needs from a ram site to start the delivery line at the pump outlet. */
+export interface PumpOutletHead {
+  ramSiteId: string;
+  name: string;
+  tankId: string | null;
+  /** Pressure head at the pump outlet while the ram delivers, m: lift plus delivery-pipe friction. */
+  workingHeadM: number;
+  liftM: number;
+  deliveryFrictionM: number;
+  deliveredFlowM3s: number;
+  /** Head the pump can build against a shut delivery line (fall + drive surge), m: rate the pipe near the pump for it. */
+  peakHeadAtPumpM: number;
+  caution: string;
+}
+
+/**
+ * The pump outlet head of each plannable ram site of a project, for the line designer: a delivery
+ * line that starts at a pump outlet takes `workingHeadM` above the pump as its start head.
+ */
+export async function pumpOutletHeadForProject(projectId: string): Promise<PumpOutletHead[]> {
+  const summary = buildLiftSummary(await loadLiftRecords(projectId));
+  return summary.ramSites.flatMap(({ site, plan }) =>
+    plan.ok
+      ? [{
+          ramSiteId: site.id,
+          name: site.name,
+          tankId: site.tankId,
+          workingHeadM: plan.value.deliveryHeadM,
+          liftM: site.liftM,
+          deliveryFrictionM: plan.value.deliveryFrictionM,
+          deliveredFlowM3s: plan.value.deliveredFlowM3s,
+          peakHeadAtPumpM: plan.value.surge.peakHeadAtPumpM,
+          caution: RAM_PLAN_CAUTION,
+        }]
+      : [],
+  );
+}
