@@ -19,7 +19,7 @@ export const RAM_DRIVE_WAVE_SPEEDS_MS: Readonly<Record<RamDriveMaterial, number>
 };
 
 export const RAM_DRIVE_WAVE_SPEED_SOURCE =
-  'REFERENCES.md §5 wave speeds, Korteweg thin-wall formula (computed): steel Sch 40 2-in 1386 m/s, PVC DR 21 369 m/s, HDPE DR 11 293 m/s';
+  'Korteweg thin-wall formula with pipe moduli from memory (computed): steel Sch 40 2-in 1386 m/s, PVC DR 21 369 m/s, HDPE DR 11 293 m/s';
 
 export interface DriveSurgeOptions {
   /** Drive flow through one pump, m³/s. */

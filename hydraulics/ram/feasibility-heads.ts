@@ -44,7 +44,7 @@ export function headRules(context: RamCheckContext): PlanCheck[] {
       severity: 'warning',
       message: `If the delivery line is shut while the ram runs, the pump can build about ${metres(context.peakHeadAtPumpM)} m (fall plus a·v/g of the drive column), above the delivery pipe's ${metres(rating)} m rating.`,
       fix: 'Never shut the delivery line while the ram runs (stop the ram first), fit a relief valve at the pump, or use a higher class near the pump.',
-      source: 'Joukowsky ΔH = a·ΔV/g (REFERENCES.md §5)',
+      source: 'Joukowsky ΔH = a·ΔV/g (J. Evans, "Water Hammer: What & Why", Pumps & Systems, Sept 2017)',
     });
   }
   return checks;

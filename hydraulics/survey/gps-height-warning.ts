@@ -64,6 +64,6 @@ export function consumerGpsHeightWarning(input: {
       'break-pressure tanks or pump lift, and follow local codes and licensed practice.',
     affected,
     verticalErrorM,
-    reference: 'REFERENCES.md §6.4; U.S. DoD, GPS Standard Positioning Service Performance Standard (2020 ed. §3.4) [R28]',
+    reference: 'U.S. DoD, GPS Standard Positioning Service Performance Standard (2020 ed., §3.4)',
   };
 }
