@@ -5,8 +5,8 @@ import { AppError } from '../errors';
 import { fieldErrorsOf } from '../validations/common';
 
 /** Reads a JSON body with a size cap (413) and validates it (400 with field errors). */
-export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S): Promise<z.output<S>> {
-  const max = env().RUNNEL_MAX_JSON_BYTES;
+export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number): Promise<z.output<S>> {
+  const max = maxBytes ?? env().RUNNEL_MAX_JSON_BYTES;
   const declared = Number(req.headers.get('content-length') ?? '0');
   if (declared > max) throw new AppError('payload_too_large', `Request body is larger than ${max} bytes`);
 

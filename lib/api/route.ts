@@ -20,6 +20,8 @@ interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   body?: B;
   /** Status for a successful plain-data result. @default 200 */
   status?: number;
+  /** Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default RUNNEL_MAX_JSON_BYTES */
+  maxBodyBytes?: number;
 }
 
 interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefined> extends BaseSpec<P, B> {
@@ -50,8 +52,8 @@ async function parseParams<P extends z.ZodType | undefined>(schema: P, ctx: Rout
   return (schema ? parseOrThrow(schema, raw, 'The address names something that cannot exist') : undefined) as Infer<P>;
 }
 
-async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest): Promise<Infer<B>> {
-  return (schema ? await readJsonBody(req, schema) : undefined) as Infer<B>;
+async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number): Promise<Infer<B>> {
+  return (schema ? await readJsonBody(req, schema, maxBytes) : undefined) as Infer<B>;
 }
 
 /** A handler anyone may call (sign-up). Order: params -> body -> act. */
@@ -62,7 +64,7 @@ export function publicRoute<P extends z.ZodType | undefined = undefined, B exten
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
       return handler({ req, params, body });
     }, spec.status ?? 200);
 }
@@ -77,7 +79,7 @@ export function userRoute<P extends z.ZodType | undefined = undefined, B extends
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
       const user = await userFromRequest(req);
       if (!user) throw unauthenticated();
-      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
       return handler({ req, params, body, user });
     }, spec.status ?? 200);
 }
@@ -99,7 +101,7 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
       const role = teamId ? await roleOnTeam(user.id, teamId) : null;
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
-      const body = (await parseBody(spec.body, req)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
       return handler({ req, params, body, user, teamId, role });
     }, spec.status ?? 200);
 }

@@ -5,6 +5,7 @@ import { NextRequest } from 'next/server';
 import { env } from '@/lib/env';
 import type { Role } from '@/lib/roles';
 import { models } from '@/models';
+import { createRouteFixtures } from './routes';
 
 // One argon2id hash reused by every fixture user: hashing per user would only slow the suite.
 const FIXTURE_HASH = '$argon2id$v=19$m=65536,t=3,p=4$ep57i7k5O57/C8UwlfRrPw$1xC2a4RhR8x32uTIA2yHhQXymRqQ+RHLaAHk6LuXN44';
@@ -35,7 +36,8 @@ export async function createTeamFixture() {
   const otherTeam = await Team.create({ name: 'Outsider team' });
   await Membership.create({ teamId: otherTeam.id, userId: users.outsider.id, role: 'owner' });
   const project = await Project.create({ teamId: team.id, name: 'Fixture project', description: '', siteNotes: '', unitSystem: 'metric' });
-  return { teamId: team.id, projectId: project.id, users };
+  const routes = await createRouteFixtures(project.id, users.surveyor.id);
+  return { teamId: team.id, projectId: project.id, users, ...routes };
 }
 
 /** A session cookie as next-auth would set it, carrying the user's current session version. */
@@ -54,20 +56,21 @@ export interface CallOptions {
   path: string;
   params?: Record<string, string>;
   body?: unknown;
-  rawBody?: string;
+  rawBody?: string | Uint8Array;
   userId?: string;
   cookie?: string;
   headers?: Record<string, string>;
 }
 
-export async function call(handler: RouteHandler, options: CallOptions): Promise<{ status: number; json: any }> {
+export async function call(handler: RouteHandler, options: CallOptions): Promise<{ status: number; json: any; text: string; headers: Headers }> {
   const headers: Record<string, string> = { ...(options.headers ?? {}) };
   const cookie = options.cookie ?? (options.userId ? await sessionCookie(options.userId) : undefined);
   if (cookie) headers.cookie = cookie;
   const bodyText = options.rawBody ?? (options.body === undefined ? undefined : JSON.stringify(options.body));
   if (bodyText !== undefined) headers['content-type'] ??= 'application/json';
-  const req = new NextRequest(new URL(options.path, 'http://127.0.0.1:3100'), { method: options.method, headers, body: bodyText });
+  const req = new NextRequest(new URL(options.path, 'http://127.0.0.1:3100'), { method: options.method, headers, body: bodyText as BodyInit | undefined });
   const res = await handler(req, { params: Promise.resolve(options.params ?? {}) });
   const text = await res.text();
-  return { status: res.status, json: text ? JSON.parse(text) : null };
+  const isJson = (res.headers.get('content-type') ?? '').includes('json');
+  return { status: res.status, json: text && isJson ? JSON.parse(text) : null, text, headers: res.headers };
 }
