@@ -1,7 +1,13 @@
-import type { ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
+import type { CleanupKind, ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
 import { RouteEditError } from './errors';
 import { DETECTED_KINDS } from './proposals';
 import type { RoutePointView } from './types';
+
+/**
+ * Both height checks question the same thing (is this height right?), so rejecting one finding
+ * at a point answers both; otherwise the other check would re-propose the height just kept.
+ */
+const HEIGHT_CHECKS: readonly CleanupKind[] = ['grade-spike', 'median-outlier'];
 
 /** Heights are compared to a tenth of a millimetre: JSON round trips keep far more. */
 const SAME_HEIGHT_M = 1e-4;
@@ -52,7 +58,9 @@ export function applyCleanupDecisions(points: readonly RoutePointView[], decisio
   }
   for (const c of decisions.reject) {
     const i = locate(c, 'reject');
-    if (DETECTED_KINDS.has(c.kind) && !out[i].dismissedChecks.includes(c.kind)) out[i].dismissedChecks.push(c.kind);
+    if (!DETECTED_KINDS.has(c.kind)) continue;
+    const kinds = HEIGHT_CHECKS.includes(c.kind) ? HEIGHT_CHECKS : [c.kind];
+    for (const k of kinds) if (!out[i].dismissedChecks.includes(k)) out[i].dismissedChecks.push(k);
   }
   return out;
 }

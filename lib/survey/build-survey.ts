@@ -74,6 +74,13 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
     timeS: d.time === undefined ? undefined : Date.parse(d.time) / 1000,
   }));
   const duplicates = detectDuplicates(stations);
+  if (drafts.length - duplicates.length < 2) {
+    throw new SurveyImportError(
+      'too-few-points',
+      `the file's ${drafts.length} points are all copies of one point (same place, height and time); a route needs at least two different points`,
+      { line: drafts[drafts.length - 1].line },
+    );
+  }
   for (const c of [...duplicates, ...detectOutOfOrder(stations).filter((c) => c.kind === 'time-backwards')]) {
     warnings.push({ code: c.kind === 'duplicate' ? 'duplicate-point' : c.kind, message: c.reason, line: drafts[c.index].line, index: c.index });
   }
