@@ -1,5 +1,4 @@
 const UPCOMING = [
-  { title: 'Survey routes', text: 'Import walked GPS tracks and field-book readings, clean them and see the ground profile.' },
   { title: 'Lines and long profile', text: 'Pipe, class and fittings per stretch; pressures, siphons, air valves and break-pressure tanks.' },
   { title: 'Lift and storage', text: 'Ram pump output, source yield, daily demand and tank size.' },
   { title: 'Review and report', text: 'Comments on the profile, approval of a revision, bill of materials and the PDF report.' },

@@ -4,7 +4,7 @@ import { models } from '../../models';
 import type { Route, RouteSourceFormat } from '../../models/route';
 import { AppError, notFound } from '../errors';
 import { applyCleanupDecisions } from '../routes/apply-cleanup';
-import type { PointRecord } from '../routes/edit-ops';
+import { recordOf, type PointRecord } from '../routes/edit-ops';
 import { RouteEditError } from '../routes/errors';
 import { computeRouteGeometry } from '../routes/geometry';
 import type { RouteDetail, RouteSummary } from '../routes/types';
@@ -110,7 +110,7 @@ export async function decideCleanup(routeId: string, input: CleanupDecision): Pr
       const route = await lockRoute(routeId, transaction);
       const points = await loadRoutePoints(routeId, transaction);
       const decided = applyCleanupDecisions(points, input);
-      await writeRoutePoints(route, decided.map(({ seq: _seq, ...r }) => r), transaction);
+      await writeRoutePoints(route, decided.map(recordOf), transaction);
     }),
   );
   return (await getRouteDetail(routeId)) as RouteDetail;

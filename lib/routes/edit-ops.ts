@@ -13,7 +13,8 @@ type Station = RouteStation & { record?: PointRecord };
 function toStations(points: readonly RoutePointView[]): Station[] {
   return points
     .filter((p) => !p.excluded)
-    .map(({ seq: _seq, ...record }) => ({
+    .map(recordOf)
+    .map((record) => ({
       chainageM: record.chainageM,
       elevationM: record.elevationM,
       latitudeDeg: record.latitude ?? undefined,
@@ -83,4 +84,11 @@ export interface JoinedPoints {
 export function joinPoints(first: readonly RoutePointView[], second: readonly RoutePointView[], gapM?: number): JoinedPoints {
   const r = joinRoutes(toStations(first), toStations(second), gapM === undefined ? {} : { gapM });
   return { points: toRecords(r.stations), gapM: r.gapM, heightStepM: r.heightStepM };
+}
+
+/** A point without its place in the order. */
+export function recordOf(point: RoutePointView): PointRecord {
+  const record: Partial<RoutePointView> = { ...point };
+  delete record.seq;
+  return record as PointRecord;
 }

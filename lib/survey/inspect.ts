@@ -36,11 +36,12 @@ function suggestCsvFormat(headers: readonly string[]): Exclude<SurveyFormat, 'gp
 
 /**
  * A first look at a survey file for the mapping screen: GPX or CSV, the CSV's dialect, headers,
- * first rows and the guessed column mappings. Throws SurveyImportError when nothing is readable.
+ * first rows and the guessed column mappings (a delimiter or header choice from the screen
+ * overrides what was detected). Throws SurveyImportError when nothing is readable.
  */
-export function inspectSurveyText(text: string): SurveyInspection {
+export function inspectSurveyText(text: string, override: Partial<CsvDialect> = {}): SurveyInspection {
   if (looksLikeGpx(text)) return { kind: 'gpx', suggestedFormat: 'gpx' };
-  const dialect = detectCsvDialect(text);
+  const dialect = { ...detectCsvDialect(text), ...override };
   const table = openCsvTable(text, dialect);
   const lines = normaliseLineEndings(text.slice(0, 65_536)).split('\n', SAMPLE_ROWS * 4 + 1);
   const sampleRows = lines
