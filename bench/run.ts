@@ -4,6 +4,7 @@ import { runBenchmark, type Benchmark } from './harness';
 const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'profile-100k': async () => (await import('./profile-100k')).profile100k,
   'profile-100k-dw': async () => (await import('./profile-100k')).profile100kDw,
+  'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
 };
 
 async function main(): Promise<void> {
@@ -15,7 +16,7 @@ async function main(): Promise<void> {
     return;
   }
   const names = wanted.length > 0 ? wanted : Object.keys(REGISTRY);
-  for (const name of names) console.log(runBenchmark(await REGISTRY[name]()));
+  for (const name of names) console.log(await runBenchmark(await REGISTRY[name]()));
 }
 
 void main();

@@ -19,6 +19,20 @@ FROM unnest($2::int[], $3::float8[], $4::float8[], $5::float8[], $6::float8[], $
 const arrayLiteral = (values: readonly string[]) => `{${values.join(',')}}`;
 
 /**
+ * PostgreSQL array literals built by hand: for 100 000 values this is several times faster than
+ * the driver's generic per-element conversion. Numbers print exactly (shortest round-trip form).
+ */
+function numberArray(values: readonly (number | null)[]): string {
+  return `{${values.map((v) => (v === null ? 'NULL' : String(v))).join(',')}}`;
+}
+
+function textArray(values: readonly (string | null)[]): string {
+  return `{${values.map((v) => (v === null ? 'NULL' : `"${v.replace(/\\/g, '\\\\').replace(/"/g, '\\"')}"`)).join(',')}}`;
+}
+
+const boolArray = (values: readonly boolean[]) => `{${values.map((v) => (v ? 't' : 'f')).join(',')}}`;
+
+/**
  * Bulk insert of a route's points, seq = position in `records`: one statement per chunk with
  * column arrays unnested server-side, far cheaper than a row of bound values per point.
  */
@@ -31,19 +45,19 @@ export async function insertRoutePoints(routeId: string, records: readonly Point
       type: QueryTypes.INSERT,
       bind: [
         routeId,
-        part.map((_, i) => start + i),
-        part.map((p) => p.latitude),
-        part.map((p) => p.longitude),
-        part.map((p) => p.chainageM),
-        part.map((p) => p.slopeChainageM),
-        part.map((p) => p.elevationM),
-        part.map((p) => p.rawElevationM),
-        part.map((p) => p.label),
-        part.map((p) => p.heightSource),
-        part.map((p) => p.confidenceM),
-        part.map((p) => p.recordedAt),
-        part.map((p) => p.excluded),
-        part.map((p) => arrayLiteral(p.dismissedChecks)),
+        numberArray(part.map((_, i) => start + i)),
+        numberArray(part.map((p) => p.latitude)),
+        numberArray(part.map((p) => p.longitude)),
+        numberArray(part.map((p) => p.chainageM)),
+        numberArray(part.map((p) => p.slopeChainageM)),
+        numberArray(part.map((p) => p.elevationM)),
+        numberArray(part.map((p) => p.rawElevationM)),
+        textArray(part.map((p) => p.label)),
+        textArray(part.map((p) => p.heightSource)),
+        numberArray(part.map((p) => p.confidenceM)),
+        textArray(part.map((p) => p.recordedAt)),
+        boolArray(part.map((p) => p.excluded)),
+        textArray(part.map((p) => arrayLiteral(p.dismissedChecks))),
       ],
     });
   }

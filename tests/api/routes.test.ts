@@ -172,8 +172,10 @@ describe('editing points', () => {
     expect(bad.status).toBe(400);
     expect(bad.json.error.message).toBe('point 3: chainage 80.00 m is less than 120.00 m at point 2; points must run in order along the route');
     expect((await readRoute(surveyor, id)).points).toEqual([]);
-    const ok = await putPoints(id, { points: [p(0, 300), p(80, 285), p(120, 290)] });
+    const awkward = 'Gate "B", {north} \\ NULL';
+    const ok = await putPoints(id, { points: [p(0, 300), { ...p(80, 285), label: awkward }, p(120, 290)] });
     expect(ok.status).toBe(200);
+    expect(ok.json.points.map((x: any) => x.label)).toEqual([null, awkward, null]);
     expect(ok.json.route).toMatchObject({ pointCount: 3, lengthM: 120, sourceFormat: 'sketch' });
     expect(ok.json.route.slopeLengthM).toBeCloseTo(Math.hypot(80, 15) + Math.hypot(40, 5), 9);
     const list = await call(listRoute.GET, { method: 'GET', path: 'x', params: { projectId: f.projectId }, userId: f.users.viewer.id });

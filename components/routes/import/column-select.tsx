@@ -10,8 +10,8 @@ export interface ColumnSelectProps {
 /** Picks which column of the file holds a value; “not in the file” for optional ones. */
 export function ColumnSelect({ id, label, headers, value, required, onChange }: ColumnSelectProps) {
   return (
-    <label htmlFor={id} className="block text-sm">
-      <span className="font-medium text-creek-900">{label}{required && <span className="text-clay-600"> *</span>}</span>
+    <div className="text-sm">
+      <label htmlFor={id} className="block font-medium text-creek-900">{label}{required && <span className="text-clay-600"> *</span>}</label>
       <select
         id={id}
         value={value === null ? '' : String(value)}
@@ -24,7 +24,7 @@ export function ColumnSelect({ id, label, headers, value, required, onChange }: 
           <option key={i} value={i}>{`${i + 1} · ${h}`}</option>
         ))}
       </select>
-    </label>
+    </div>
   );
 }
 

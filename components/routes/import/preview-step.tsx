@@ -18,6 +18,9 @@ export interface PreviewStepProps {
 export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewStepProps) {
   const s = preview.stats;
   const spikes = preview.proposals.length;
+  // The consumer-GPS note is the banner above; the list holds the rest.
+  const notes = preview.warnings.filter((w) => w.code !== 'consumer-gps-heights');
+  const noteCount = preview.warningCount - (preview.warnings.length - notes.length);
   return (
     <div className="space-y-4">
       {preview.gpsWarning && <GpsWarningBanner warning={preview.gpsWarning} />}
@@ -39,11 +42,11 @@ export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewS
           The clean-up checks found {spikes} point{spikes === 1 ? '' : 's'} to look at (spikes, outliers, duplicates). Nothing is changed on import: the route page lists each one for you to accept or reject.
         </p>
       )}
-      {preview.warnings.length > 0 && (
+      {notes.length > 0 && (
         <section aria-label="Import notes">
-          <h3 className="text-sm font-medium text-creek-900">Notes on the file ({preview.warningCount})</h3>
+          <h3 className="text-sm font-medium text-creek-900">Notes on the file ({noteCount})</h3>
           <ul className="mt-1 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5 text-sm text-creek-800">
-            {preview.warnings.filter((w) => w.code !== 'consumer-gps-heights').map((w, i) => (
+            {notes.map((w, i) => (
               <li key={i}>{w.line !== undefined ? `line ${w.line}: ` : ''}{w.message}</li>
             ))}
           </ul>

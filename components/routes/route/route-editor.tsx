@@ -17,6 +17,8 @@ export interface RouteEditorProps {
 export function RouteEditor({ routeId, units, editable }: RouteEditorProps) {
   const { data, isError, refetch } = useQuery(routeDetailQuery(routeId));
   const [sketchArea, setSketchArea] = useState({ lengthM: 1000, lowM: 0, highM: 100 });
+  // Kept here so the table stays on its page when a decision brings a new version of the route.
+  const [page, setPage] = useState(0);
   if (isError) {
     return (
       <p role="alert" className="text-sm text-clay-700">
@@ -25,5 +27,5 @@ export function RouteEditor({ routeId, units, editable }: RouteEditorProps) {
     );
   }
   if (!data) return <Skeleton className="h-96 w-full" />;
-  return <RouteWorkspace key={data.route.updatedAt} detail={data} units={units} editable={editable} sketchArea={sketchArea} onSketchArea={setSketchArea} />;
+  return <RouteWorkspace key={data.route.updatedAt} detail={data} units={units} editable={editable} sketchArea={sketchArea} onSketchArea={setSketchArea} page={page} onPage={setPage} />;
 }

@@ -24,12 +24,13 @@ export interface RouteWorkspaceProps {
   editable: boolean;
   sketchArea: SketchArea;
   onSketchArea: (a: SketchArea) => void;
+  page: number;
+  onPage: (page: number) => void;
 }
 
 /** One version of the route as the server has it, with the user's unsaved edits on top. */
-export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea }: RouteWorkspaceProps) {
+export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage }: RouteWorkspaceProps) {
   const [draft, dispatch] = useReducer(draftReducer, detail.points, draftFromPoints);
-  const [page, setPage] = useState(0);
   const [message, setMessage] = useState<string | null>(null);
   const save = useSavePoints(detail.route.projectId, detail.route.id);
   const positioned = detail.points.length > 0 && detail.points.every((p) => p.latitude !== null && p.longitude !== null);
@@ -47,7 +48,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
   function showPoint(seq: number) {
     const i = draft.points.findIndex((p) => p.sourceSeq === seq);
     if (i < 0) return;
-    setPage(Math.floor(i / PAGE_SIZE));
+    onPage(Math.floor(i / PAGE_SIZE));
     requestAnimationFrame(() => document.querySelector(`[data-point="${i + 1}"]`)?.scrollIntoView({ block: 'center', behavior: 'smooth' }));
   }
 
@@ -93,10 +94,10 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
           </div>
         )}
         <FormMessage message={message} />
-        <PointsTable points={draft.points} units={units} editable={editable} positioned={positioned} flagged={flagged} page={page} onPage={setPage} dispatch={dispatch} />
+        <PointsTable points={draft.points} units={units} editable={editable} positioned={positioned} flagged={flagged} page={page} onPage={onPage} dispatch={dispatch} />
       </Panel>
       {editable && detail.points.length > 0 && <RouteTools detail={detail} units={units} blocked={draft.dirty} />}
-      {detail.route.importNotes.length > 0 && (
+      {detail.route.importNotes.some((n) => n.code !== 'consumer-gps-heights') && (
         <Panel title="Notes from the import">
           <ul className="list-disc space-y-0.5 pl-5 text-sm text-creek-800">
             {detail.route.importNotes.filter((n) => n.code !== 'consumer-gps-heights').map((n, i) => <li key={i}>{n.line !== undefined ? `line ${n.line}: ` : ''}{n.message}</li>)}
