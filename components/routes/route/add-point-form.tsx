@@ -54,7 +54,7 @@ export function AddPointForm({ count, units, positioned, dispatch }: AddPointFor
   const input = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1 text-sm';
   return (
     <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3 text-sm" aria-label="Add a point" noValidate>
-      <label>After point<input name="after" defaultValue={count} inputMode="numeric" className={input} /></label>
+      <label>After point<input key={count} name="after" defaultValue={count} inputMode="numeric" className={input} /></label>
       {positioned ? (
         <>
           <label>Latitude<input name="lat" inputMode="decimal" className={input} /></label>

@@ -84,7 +84,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
         )}
       </Panel>
       {detail.points.length > 0 && <CleanupPanel detail={detail} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />}
-      <Panel title="Points" aside={positioned ? <span className="text-xs text-creek-600">Chainage is measured on the WGS84 ellipsoid from the positions when you save.</span> : undefined}>
+      <Panel title="Points" aside={positioned && editable ? <span className="text-xs text-creek-600">Chainage is measured on the WGS84 ellipsoid from the positions when you save.</span> : undefined}>
         {editable && draft.dirty && (
           <div className="mb-3 flex flex-wrap items-center gap-3 rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm" role="status">
             <span className="font-medium text-ochre-700">Unsaved changes</span>

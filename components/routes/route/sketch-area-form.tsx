@@ -19,7 +19,7 @@ export function SketchAreaForm({ area, units, onChange }: { area: SketchArea; un
   const box = 'mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1';
   return (
     <div className="flex flex-wrap items-end gap-3 text-sm" role="group" aria-label="Sketch area">
-      <label>Route about ({u}) long<input defaultValue={toDisplayLength(area.lengthM, units).toFixed(0)} onBlur={(e) => set('lengthM', e.target.value)} className={box} /></label>
+      <label>Chart length ({u})<input defaultValue={toDisplayLength(area.lengthM, units).toFixed(0)} onBlur={(e) => set('lengthM', e.target.value)} className={box} /></label>
       <label>Heights from ({u})<input defaultValue={toDisplayLength(area.lowM, units).toFixed(0)} onBlur={(e) => set('lowM', e.target.value)} className={box} /></label>
       <label>to ({u})<input defaultValue={toDisplayLength(area.highM, units).toFixed(0)} onBlur={(e) => set('highM', e.target.value)} className={box} /></label>
     </div>
