@@ -46,6 +46,7 @@ describe('importing survey files', () => {
     expect(detail.route.slopeLengthM).toBeGreaterThan(detail.route.lengthM);
     expect(detail.route.features.map((x: any) => x.label)).toEqual(['Alder Spring box', 'Gully crossing']);
     expect(detail.route.importNotes.map((n: any) => n.code)).toContain('gpx-segments-joined');
+    // Vertical ≤ 15 m (95 %): U.S. DoD, GPS SPS Performance Standard, 2020 ed. §3.4 (REFERENCES.md §6.4 [R28]).
     expect(detail.gpsWarning).toMatchObject({ severity: 'danger', verticalErrorM: 15 });
 
     const file = await models().Attachment.findOne({ where: { fileName: 'walked-route.gpx', projectId: f.projectId } });
@@ -65,7 +66,7 @@ describe('importing survey files', () => {
     });
     expect(res.status).toBe(201);
     const detail = await readRoute(surveyor, res.json.route.id);
-    // 2665.4 ft × 0.3048 m/ft (international foot, exact) = 812.41392 m
+    // 2665.4 ft × 0.3048 m/ft = 812.41392 m (international foot, exact by the 1959 international yard and pound agreement)
     expect(detail.points[0].elevationM).toBeCloseTo(812.41392, 5);
     expect(detail.points[0].latitude).toBeCloseTo(45.5012, 6);
   });
@@ -76,6 +77,7 @@ describe('importing survey files', () => {
     });
     expect(level.status).toBe(201);
     const lv = await readRoute(surveyor, level.json.route.id);
+    // Arithmetic check of the book: last RL = 40 + ΣBS − ΣFS = 40 + 16.624 − 13.741 = 42.883 m; closing mark 42.880 m.
     expect(lv.route.closureErrorM).toBeCloseTo(42.883 - 42.88, 6);
     expect(lv.points.map((p: any) => p.heightSource)).toEqual(Array(8).fill('level'));
     expect(lv.gpsWarning).toBeNull();
@@ -84,7 +86,7 @@ describe('importing survey files', () => {
     });
     expect(incl.status).toBe(201);
     const ic = await readRoute(surveyor, incl.json.route.id);
-    // First leg: 30 m at −4.5°: horizontal 30·cos 4.5° = 29.9075 m, drop 30·sin 4.5° = 2.3538 m.
+    // First leg: 30 m at −4.5°: horizontal 30·cos 4.5° = 29.9075 m, drop 30·sin 4.5° = 2.3538 m (closed form).
     expect(ic.points[1].chainageM).toBeCloseTo(29.9075, 3);
     expect(ic.points[1].elevationM).toBeCloseTo(812.4 - 2.3538, 3);
   });
