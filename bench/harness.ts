@@ -1,7 +1,7 @@
 /** A named benchmark: `run` is timed; `floor`, when given, is timed the same way for the ratio. */
 export interface Benchmark {
   name: string;
-  /** Work to time. Its result is kept so the engine cannot drop the call. */
+  /** Work to time (may be async: it is awaited inside the timing). Its result is kept so the engine cannot drop the call. */
   run: () => unknown;
   /** A lower-bound loop over the same data; the printed ratio is run / floor. */
   floor?: () => unknown;
@@ -9,18 +9,26 @@ export interface Benchmark {
   runs?: number;
   /** Untimed warm-up runs. @default 3 */
   warmUps?: number;
+  /** Cleans up what the benchmark made (database rows, servers), after the last run. */
+  teardown?: () => Promise<void> | void;
 }
 
 // Results go to an exported sink so the engine cannot prove them dead and skip the work.
 export const benchSink: { last: unknown } = { last: undefined };
 
-/** Median wall time of `fn` in milliseconds. */
-export function medianMs(fn: () => unknown, runs: number, warmUps: number): number {
-  for (let i = 0; i < warmUps; i++) benchSink.last = fn();
+const isThenable = (v: unknown): v is PromiseLike<unknown> => typeof (v as { then?: unknown } | null)?.then === 'function';
+
+/** Median wall time of `fn` in milliseconds (awaiting it when it returns a promise). */
+export async function medianMs(fn: () => unknown, runs: number, warmUps: number): Promise<number> {
+  const once = async () => {
+    const r = fn();
+    benchSink.last = isThenable(r) ? await r : r;
+  };
+  for (let i = 0; i < warmUps; i++) await once();
   const times: number[] = [];
   for (let i = 0; i < runs; i++) {
     const start = performance.now();
-    benchSink.last = fn();
+    await once();
     times.push(performance.now() - start);
   }
   times.sort((a, b) => a - b);
@@ -29,14 +37,18 @@ export function medianMs(fn: () => unknown, runs: number, warmUps: number): numb
 }
 
 /** Runs one benchmark and returns its `BENCH` line. */
-export function runBenchmark(benchmark: Benchmark): string {
+export async function runBenchmark(benchmark: Benchmark): Promise<string> {
   const runs = benchmark.runs ?? 15;
   const warmUps = benchmark.warmUps ?? 3;
-  const median = medianMs(benchmark.run, runs, warmUps);
-  let line = `BENCH ${benchmark.name} median_ms=${median.toFixed(3)}`;
-  if (benchmark.floor) {
-    const floor = medianMs(benchmark.floor, runs, warmUps);
-    line += ` ratio=${(median / floor).toFixed(1)}`;
+  try {
+    const median = await medianMs(benchmark.run, runs, warmUps);
+    let line = `BENCH ${benchmark.name} median_ms=${median.toFixed(3)}`;
+    if (benchmark.floor) {
+      const floor = await medianMs(benchmark.floor, runs, warmUps);
+      line += ` ratio=${(median / floor).toFixed(1)}`;
+    }
+    return line;
+  } finally {
+    await benchmark.teardown?.();
   }
-  return line;
 }

@@ -9,6 +9,7 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'draw-100k': async () => (await import('./line-5k')).draw100k,
   'lift-summary': async () => (await import('./lift-summary')).liftSummary,
   'ram-plan-preview': async () => (await import('./lift-summary')).ramPlanPreview,
+  'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
 };
 
 async function main(): Promise<void> {
@@ -20,7 +21,7 @@ async function main(): Promise<void> {
     return;
   }
   const names = wanted.length > 0 ? wanted : Object.keys(REGISTRY);
-  for (const name of names) console.log(runBenchmark(await REGISTRY[name]()));
+  for (const name of names) console.log(await runBenchmark(await REGISTRY[name]()));
 }
 
 void main();

@@ -17,6 +17,12 @@ const EnvSchema = z.object({
   RUNNEL_SIGNIN_MAX_FAILURES_PER_EMAIL: z.coerce.number().int().positive().default(5),
   RUNNEL_SIGNIN_MAX_FAILURES_PER_IP: z.coerce.number().int().positive().default(30),
   RUNNEL_SIGNIN_WINDOW_SECONDS: z.coerce.number().int().positive().default(900),
+  /** Object storage (S3 API). Locally the fake in scripts/fakes/s3.mjs; `npm test` runs its own on 9402. */
+  RUNNEL_S3_ENDPOINT: z.url().default('http://127.0.0.1:9401'),
+  RUNNEL_S3_REGION: z.string().min(1).default('us-east-1'),
+  RUNNEL_S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'RUNNEL_S3_BUCKET must be a valid bucket name').default('runnel-files'),
+  RUNNEL_S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
+  RUNNEL_S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
 });
 
 export type Env = z.infer<typeof EnvSchema> & { NEXTAUTH_SECRET: string };

@@ -1,4 +1,4 @@
-import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { HeightSource } from '../hydraulics/survey/height-source';
 
 /** One station of a route. `rawElevationM` is the surveyed value and is never overwritten. */
@@ -15,6 +15,10 @@ export class RoutePoint extends Model<InferAttributes<RoutePoint>, InferCreation
   declare heightSource: HeightSource;
   declare confidenceM: number | null;
   declare recordedAt: Date | null;
+  /** Taken out of the cleaned profile by an accepted clean-up; kept so the raw survey stays whole. */
+  declare excluded: CreationOptional<boolean>;
+  /** Clean-up checks the user rejected for this point, so they are not proposed again. */
+  declare dismissedChecks: CreationOptional<string[]>;
 
   static initialise(sequelize: Sequelize): void {
     RoutePoint.init(
@@ -31,6 +35,8 @@ export class RoutePoint extends Model<InferAttributes<RoutePoint>, InferCreation
         heightSource: { type: DataTypes.STRING(16), allowNull: false },
         confidenceM: { type: DataTypes.DOUBLE, allowNull: true },
         recordedAt: { type: DataTypes.DATE, allowNull: true },
+        excluded: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        dismissedChecks: { type: DataTypes.ARRAY(DataTypes.STRING(24)), allowNull: false, defaultValue: [] },
       },
       { sequelize, tableName: 'route_points', underscored: true, timestamps: false },
     );

@@ -15,5 +15,6 @@ await build({
   // Database drivers and the S3 client load at run time, as the app loads them.
   packages: 'external',
 });
-const result = spawnSync(process.execPath, ['.runtime/bench.cjs', ...process.argv.slice(2)], { stdio: 'inherit' });
+// react-server: the server-only data modules refuse to load under the default condition.
+const result = spawnSync(process.execPath, ['--conditions=react-server', '.runtime/bench.cjs', ...process.argv.slice(2)], { stdio: 'inherit' });
 process.exit(result.status ?? 1);

@@ -1,22 +1,24 @@
 #!/usr/bin/env bash
 # Local stand-ins for hosted services (mail, object storage), on loopback only.
 # `fakes.sh start` launches the ones the app uses; `fakes.sh stop` ends them.
+# Pid and log files go to $RUNNEL_RUNTIME_DIR, so `npm test` never stops the fakes of `npm start`.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-mkdir -p .runtime
+RUNTIME="${RUNNEL_RUNTIME_DIR:-.runtime}"
+mkdir -p "$RUNTIME"
 case "${1:-}" in
   start)
     for f in scripts/fakes/*.mjs; do
       [ -e "$f" ] || continue
       name="$(basename "$f" .mjs)"
-      pidfile=".runtime/$name.pid"
+      pidfile="$RUNTIME/$name.pid"
       if [ -f "$pidfile" ] && kill -0 "$(cat "$pidfile")" 2>/dev/null; then continue; fi
-      node "$f" > ".runtime/$name.log" 2>&1 &
+      node "$f" > "$RUNTIME/$name.log" 2>&1 &
       echo $! > "$pidfile"
     done
     ;;
   stop)
-    for pidfile in .runtime/*.pid; do
+    for pidfile in "$RUNTIME"/*.pid; do
       [ -e "$pidfile" ] || continue
       kill "$(cat "$pidfile")" 2>/dev/null || true
       rm -f "$pidfile"

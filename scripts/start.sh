@@ -8,6 +8,11 @@ export DATABASE_URL="${DATABASE_URL:-postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT
 export PORT="${PORT:-3000}"
 export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
 export NODE_ENV=production
+# Object storage: the local fake (scripts/fakes/s3.mjs) and the app agree on these.
+export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
+export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-.runtime/s3}"
+export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
+export RUNNEL_RUNTIME_DIR="${RUNNEL_RUNTIME_DIR:-.runtime}"
 PGDATA_DIR="$ROOT/.pgdata"
 
 ensure_node_packages

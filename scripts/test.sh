@@ -9,6 +9,12 @@ export DATABASE_URL="postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT/$RUNNEL_DB_NAME
 export PORT="${RUNNEL_TEST_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$PORT"
 export RUNNEL_ENV=test
+# Its own fake object storage (port, data folder, pid files), apart from `npm start`'s.
+export RUNNEL_S3_PORT="${RUNNEL_TEST_S3_PORT:-9402}"
+export RUNNEL_S3_DIR=".runtime/test/s3"
+export RUNNEL_S3_ENDPOINT="http://127.0.0.1:$RUNNEL_S3_PORT"
+export RUNNEL_RUNTIME_DIR=".runtime/test"
+rm -rf "$RUNNEL_S3_DIR"
 PGDATA_DIR="$ROOT/.pgdata-test"
 
 ensure_node_packages

@@ -9,6 +9,7 @@ import { usePathname } from 'next/navigation';
  */
 export const PROJECT_SECTIONS: { path: string; label: string }[] = [
   { path: '', label: 'Overview' },
+  { path: '/routes', label: 'Survey routes' },
   { path: '/lines', label: 'Lines' },
   { path: '/lift', label: 'Lift & storage' },
 ];

@@ -1,5 +1,4 @@
 const UPCOMING = [
-  { title: 'Survey routes', text: 'Import walked GPS tracks and field-book readings, clean them and see the ground profile.' },
   { title: 'Review and report', text: 'Comments on the profile, approval of a revision, bill of materials and the PDF report.' },
 ];
 

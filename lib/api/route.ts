@@ -20,7 +20,7 @@ interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   body?: B;
   /** Status for a successful plain-data result. @default 200 */
   status?: number;
-  /** Largest JSON body accepted, bytes. @default env RUNNEL_MAX_JSON_BYTES */
+  /** Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default RUNNEL_MAX_JSON_BYTES */
   maxBodyBytes?: number;
 }
 

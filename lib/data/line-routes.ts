@@ -19,7 +19,8 @@ export async function listRouteChoices(projectId: string): Promise<RouteChoice[]
   if (routes.length === 0) return [];
   const ranges = (await RoutePoint.findAll({
     attributes: ['routeId', [sequelize.fn('min', sequelize.col('chainage_m')), 'first'], [sequelize.fn('max', sequelize.col('chainage_m')), 'last'], [sequelize.fn('count', sequelize.col('seq')), 'n']],
-    where: { routeId: routes.map((r) => r.id) },
+    // Points a surveyor took out in clean-up are kept for the record but never designed on.
+    where: { routeId: routes.map((r) => r.id), excluded: false },
     group: ['routeId'],
     raw: true,
   })) as unknown as { routeId: string; first: number; last: number; n: string }[];
@@ -37,11 +38,11 @@ export async function routeOwner(routeId: string): Promise<{ projectId: string; 
   return route ? { projectId: route.projectId, name: route.name } : null;
 }
 
-/** A route's stations in order, as columns. */
+/** A route's kept stations in order, as columns. */
 export async function routeColumns(routeId: string): Promise<RouteColumns> {
   const rows = (await models().RoutePoint.findAll({
     attributes: ['chainageM', 'elevationM', 'latitude', 'longitude'],
-    where: { routeId },
+    where: { routeId, excluded: false },
     order: [['seq', 'ASC']],
     raw: true,
   })) as unknown as { chainageM: number; elevationM: number; latitude: number | null; longitude: number | null }[];

@@ -3,7 +3,7 @@ import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
 import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
 import { DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from '../../hydraulics/survey/height-source';
 import { SurveyImportError } from './errors';
-import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFormat, type SurveyImportWarning } from './parsed-survey';
+import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFormat, type SurveyImportWarning, type SurveyPoint } from './parsed-survey';
 
 /** A row read from a file, before chainage and checks. `line` is where it came from. */
 export interface DraftPoint {
@@ -52,19 +52,16 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
     throw new SurveyImportError('missing-column', 'each point needs either a chainage or a latitude and longitude');
   }
   const fallback = defaultVerticalUncertaintyM(heightSource);
+  // Built by assignment, not by spreading optional fields: this runs once per point on 100 000-point files.
   const points = drafts.map((d, i) => {
+    const point: SurveyPoint = { order: i, chainageM: chainages[i], elevationM: d.elevationM, heightSource };
+    if (d.lat !== undefined) point.lat = d.lat;
+    if (d.lon !== undefined) point.lon = d.lon;
+    if (d.label !== undefined && d.label !== '') point.label = d.label;
     const confidence = d.confidence ?? fallback;
-    return {
-    order: i,
-    ...(d.lat !== undefined ? { lat: d.lat } : {}),
-    ...(d.lon !== undefined ? { lon: d.lon } : {}),
-    chainageM: chainages[i],
-    elevationM: d.elevationM,
-    ...(d.label !== undefined && d.label !== '' ? { label: d.label } : {}),
-    heightSource,
-    ...(confidence !== undefined ? { confidence } : {}),
-    ...(d.time !== undefined ? { time: d.time } : {}),
-    };
+    if (confidence !== undefined) point.confidence = confidence;
+    if (d.time !== undefined) point.time = d.time;
+    return point;
   });
   const stations = drafts.map((d, i) => ({
     chainageM: chainages[i],
@@ -74,6 +71,13 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
     timeS: d.time === undefined ? undefined : Date.parse(d.time) / 1000,
   }));
   const duplicates = detectDuplicates(stations);
+  if (drafts.length - duplicates.length < 2) {
+    throw new SurveyImportError(
+      'too-few-points',
+      `the file's ${drafts.length} points are all copies of one point (same place, height and time); a route needs at least two different points`,
+      { line: drafts[drafts.length - 1].line },
+    );
+  }
   for (const c of [...duplicates, ...detectOutOfOrder(stations).filter((c) => c.kind === 'time-backwards')]) {
     warnings.push({ code: c.kind === 'duplicate' ? 'duplicate-point' : c.kind, message: c.reason, line: drafts[c.index].line, index: c.index });
   }

@@ -1,4 +1,5 @@
 import type { LengthUnit } from './cells';
+import { SurveyImportError } from './errors';
 
 /** Which column (0-based index) holds each value; null when the file has none. */
 export interface GpsColumnMapping {
@@ -95,4 +96,17 @@ export function guessStationColumnMapping(headers: readonly string[]): ColumnGue
     chainageUnit: guessElevationUnit(chainage === null ? undefined : headers[chainage]),
     accuracyIsVertical: true,
   };
+}
+
+/** A mapping chosen on screen may point past the file's last column; say which and how many there are. */
+export function assertMappingInRange(mapping: Readonly<Record<string, number | null>>, headers: readonly string[]): void {
+  for (const [field, index] of Object.entries(mapping)) {
+    if (index !== null && (index < 0 || index >= headers.length)) {
+      throw new SurveyImportError(
+        'missing-column',
+        `the ${field} column is set to column ${index + 1}, but the file has ${headers.length} columns (${headers.map((h) => `“${h}”`).join(', ')})`,
+        { field, line: 1 },
+      );
+    }
+  }
 }

@@ -16,9 +16,19 @@ const CANDIDATES: CsvDelimiter[] = ['\t', ';', '|', ','];
 const PREVIEW_LINES = 50;
 
 export function detectLineEnding(text: string): LineEnding {
-  const crlf = (text.match(/\r\n/g) ?? []).length;
-  const cr = (text.match(/\r(?!\n)/g) ?? []).length;
-  const lf = (text.match(/(?<!\r)\n/g) ?? []).length;
+  // Counted in one pass: regex match arrays would hold one string per line of a 100 000-line file.
+  let crlf = 0;
+  let cr = 0;
+  let lf = 0;
+  for (let i = 0; i < text.length; i += 1) {
+    const c = text.charCodeAt(i);
+    if (c === 13) {
+      if (text.charCodeAt(i + 1) === 10) {
+        crlf += 1;
+        i += 1;
+      } else cr += 1;
+    } else if (c === 10) lf += 1;
+  }
   const kinds = [crlf > 0, cr > 0, lf > 0].filter(Boolean).length;
   if (kinds === 0) return 'none';
   if (kinds > 1) return 'mixed';

@@ -24,6 +24,7 @@ export type SurveyImportErrorCode =
   | 'not-gpx'
   | 'gpx-no-track'
   | 'gpx-only-waypoints'
+  | 'format-mismatch'
   | 'invalid-result';
 
 export interface SurveyImportErrorDetails {

@@ -1,6 +1,6 @@
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, readOptionalNumberCell, readTimeCell, toMetres, type LengthUnit } from './cells';
-import { guessGpsColumnMapping, type GpsColumnMapping } from './column-mapping';
+import { assertMappingInRange, guessGpsColumnMapping, type GpsColumnMapping } from './column-mapping';
 import { detectCsvDialect, type CsvDialect } from './csv-dialect';
 import { openCsvTable } from './csv-rows';
 import { SurveyImportError } from './errors';
@@ -64,6 +64,7 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
   const mapping = options.mapping ?? guess.mapping;
   const elevationUnit = options.elevationUnit ?? guess.elevationUnit;
   const accuracyIsVertical = options.accuracyIsVertical ?? guess.accuracyIsVertical;
+  if (options.mapping) assertMappingInRange({ ...options.mapping }, table.headers);
   for (const key of ['latitude', 'longitude', 'elevation'] as const) {
     const index = mapping[key];
     if (index === null || index >= table.headers.length || index < 0) {

@@ -1,6 +1,6 @@
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, toMetres, type LengthUnit } from './cells';
-import { guessStationColumnMapping, type StationColumnMapping } from './column-mapping';
+import { assertMappingInRange, guessStationColumnMapping, type StationColumnMapping } from './column-mapping';
 import { detectCsvDialect, type CsvDialect } from './csv-dialect';
 import { openCsvTable } from './csv-rows';
 import { SurveyImportError } from './errors';
@@ -30,6 +30,7 @@ export function parseStationCsv(text: string, options: StationCsvOptions = {}): 
   const mapping = options.mapping ?? guess.mapping;
   const chainageUnit = options.chainageUnit ?? guess.chainageUnit;
   const elevationUnit = options.elevationUnit ?? guess.elevationUnit;
+  if (options.mapping) assertMappingInRange({ ...options.mapping }, table.headers);
   for (const key of ['chainage', 'elevation'] as const) {
     if (mapping[key] === null) {
       throw new SurveyImportError('missing-column', `no ${key} column found among ${table.headers.map((h) => `“${h}”`).join(', ')}`, { field: key });

@@ -47,11 +47,14 @@ describe('authorisation matrix', () => {
       const mod = await load(endpoint.file);
       const handler = mod[endpoint.method] as Parameters<typeof call>[0];
       const userId = actor === 'anonymous' ? undefined : fixture.users[actor].id;
+      const upload = endpoint.upload?.(fixture);
       const res = await call(handler, {
         method: endpoint.method,
         path: `/api/${endpoint.file}`,
         params: await endpoint.params(fixture),
         body: endpoint.body?.(fixture, ACTORS.indexOf(actor)),
+        rawBody: upload?.body,
+        headers: upload ? { 'content-type': upload.contentType } : undefined,
         userId,
       });
       expect({ actor, status: res.status, body: res.status >= 400 ? res.json : undefined }).toMatchObject({ actor, status: endpoint.expect[actor] });

@@ -2,6 +2,7 @@ import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
+import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 type Expect = Record<Actor, number>;
@@ -13,6 +14,8 @@ export interface EndpointCase {
   /** May create the nested resource the path names (a ram site, a reading...) before the call. */
   params: (f: Fixture) => Record<string, string> | Promise<Record<string, string>>;
   body?: (f: Fixture, n: number) => unknown;
+  /** A non-JSON body (a file upload) with its content type, instead of `body`. */
+  upload?: (f: Fixture) => { body: Uint8Array; contentType: string };
   expect: Expect;
 }
 
@@ -20,6 +23,7 @@ const anyMember = (ok: number): Expect => ({ anonymous: 401, outsider: 404, view
 const onlyOwner = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: 403, owner: ok });
 const designers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: ok, owner: ok });
 const signedIn = (ok: number): Expect => ({ anonymous: 401, outsider: ok, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
+const surveyEditors = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: ok, designer: ok, owner: ok });
 const everyone = (ok: number): Expect => ({ anonymous: ok, outsider: ok, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
 
 /** Every endpoint of the API with the status each kind of caller must get for a valid request. */
@@ -41,7 +45,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'analysis/line/route.ts', method: 'POST', params: () => ({}), body: () => referenceLine(), expect: signedIn(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
   { file: 'projects/[projectId]/lines/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
-  { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.routeId }), expect: designers(201) },
+  { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.lineRouteId }), expect: designers(201) },
   { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/route.ts', method: 'PATCH', params: (f) => ({ lineId: f.lineId }), body: () => ({ notes: 'Trench walked.' }), expect: designers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
@@ -49,6 +53,34 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   ...LIFT_ENDPOINTS,
+  // Survey routes: every member reads; surveyors, designers and owners import and edit.
+  { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: 'projects/[projectId]/routes/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Sketch of the lower field' }), expect: surveyEditors(201) },
+  {
+    file: 'projects/[projectId]/routes/import/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }),
+    upload: () => surveyUpload('walk.csv', 'lat,lon,ele\n54.1,-2.9,300\n54.1005,-2.9004,298\n54.101,-2.9008,296\n', {
+      format: 'gps-csv', name: 'Matrix walk', elevationUnit: 'm', mapping: { latitude: 0, longitude: 1, elevation: 2, time: null, name: null, accuracy: null },
+    }),
+    expect: surveyEditors(201),
+  },
+  { file: 'routes/[routeId]/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: anyMember(200) },
+  { file: 'routes/[routeId]/route.ts', method: 'PATCH', params: (f) => ({ routeId: f.routeId }), body: () => ({ notes: 'Walked again after the thaw.' }), expect: surveyEditors(200) },
+  { file: 'routes/[routeId]/route.ts', method: 'DELETE', params: (f) => ({ routeId: f.routeId }), expect: surveyEditors(204) },
+  {
+    file: 'routes/[routeId]/points/route.ts', method: 'PUT', params: (f) => ({ routeId: f.routeId }),
+    body: () => ({ points: [0, 50, 100].map((c, i) => ({ sourceSeq: null, latitude: null, longitude: null, chainageM: c, elevationM: 400 - i, label: null, heightSource: 'typed', confidenceM: null, excluded: false })) }),
+    expect: surveyEditors(200),
+  },
+  {
+    file: 'routes/[routeId]/cleanup/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }),
+    body: () => ({ reject: [{ kind: 'grade-spike', index: 2, field: 'elevationM', from: 431, to: 407.15 }] }),
+    expect: surveyEditors(200),
+  },
+  { file: 'routes/[routeId]/reverse/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), expect: surveyEditors(200) },
+  { file: 'routes/[routeId]/split/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ chainageM: 100 }), expect: surveyEditors(201) },
+  { file: 'routes/[routeId]/trim/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ fromChainageM: 40, toChainageM: 160 }), expect: surveyEditors(200) },
+  { file: 'routes/[routeId]/join/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: (f) => ({ otherRouteId: f.otherRouteId }), expect: surveyEditors(201) },
+  { file: 'routes/[routeId]/source/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: anyMember(200) },
 ];
 
 /** Library endpoints not built from lib/api/route.ts; exercised end to end by the Playwright sign-in tests. */

@@ -34,10 +34,10 @@ describe('lines API', () => {
   const read = (lineId: string, userId = f.users.viewer.id) => call(lineRoute.GET, { method: 'GET', path: '/api/x', params: { lineId }, userId });
 
   it('creates a line with a starting design drawn up from the route', async () => {
-    const res = await create({ name: '  Tank to trough  ', routeId: f.routeId });
+    const res = await create({ name: '  Tank to trough  ', routeId: f.lineRouteId });
     expect(res.status).toBe(201);
     const line = res.json.line;
-    expect(line).toMatchObject({ name: 'Tank to trough', routeId: f.routeId, routeName: 'Fixture route', revision: 1, status: 'draft', preparedBy: 'Fixture designer' });
+    expect(line).toMatchObject({ name: 'Tank to trough', routeId: f.lineRouteId, routeName: 'Fixture route', revision: 1, status: 'draft', preparedBy: 'Fixture designer' });
     // Source at the first station's ground (240 m), outlet at the last (200 m), one stretch end to end.
     expect(line.design.start).toEqual({ kind: 'water-level', levelM: 240 });
     expect(line.design.end).toEqual({ kind: 'outlet', elevationM: 200 });
@@ -47,7 +47,7 @@ describe('lines API', () => {
 
   it('creates a line on a chainage window with its own design and reads it back', async () => {
     const design = designOf({ stretches: [{ fromM: 100, toM: 300, pipe: 'pe100-iso4427-sdr11-50mm' }], devices: [] });
-    const res = await create({ name: 'Middle part', routeId: f.routeId, fromChainageM: 100, toChainageM: 300, design });
+    const res = await create({ name: 'Middle part', routeId: f.lineRouteId, fromChainageM: 100, toChainageM: 300, design });
     expect(res.status).toBe(201);
     const back = await read(res.json.line.id);
     expect(back.status).toBe(200);
@@ -59,21 +59,21 @@ describe('lines API', () => {
 
   it('refuses a design whose stretches leave a gap, naming the field', async () => {
     const design = designOf({ stretches: [{ fromM: 0, toM: 150, pipe: 'pe100-iso4427-sdr11-63mm' }, { fromM: 160, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }] });
-    const res = await create({ name: 'Gappy', routeId: f.routeId, design });
+    const res = await create({ name: 'Gappy', routeId: f.lineRouteId, design });
     expect(res.status).toBe(400);
     expect(res.json.error.fields).toHaveProperty(['design.stretches.fromM.1']);
     expect(res.json.error.message).toMatch(/gap of 10 m/);
   });
 
   it('refuses shapes zod can see: unknown pipe kind, negative flow, unknown fields, a device off the line', async () => {
-    const bad = await create({ name: 'Bad', routeId: f.routeId, design: designOf({ flow: { kind: 'design', flowM3s: -1 } }), colour: 'red' });
+    const bad = await create({ name: 'Bad', routeId: f.lineRouteId, design: designOf({ flow: { kind: 'design', flowM3s: -1 } }), colour: 'red' });
     expect(bad.status).toBe(400);
     expect(bad.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0 m³/s']);
     expect(bad.json.error.fields.colour).toEqual(['Unknown field "colour"']);
-    const off = await create({ name: 'Off', routeId: f.routeId, design: designOf({ devices: [{ kind: 'washout', chainageM: 900 }] }) });
+    const off = await create({ name: 'Off', routeId: f.lineRouteId, design: designOf({ devices: [{ kind: 'washout', chainageM: 900 }] }) });
     expect(off.status).toBe(400);
     expect(off.json.error.fields['design.devices.chainageM.0'][0]).toMatch(/outside the line/);
-    const unknownPipe = await create({ name: 'Pipe', routeId: f.routeId, design: designOf({ stretches: [{ fromM: 0, toM: 400, pipe: 'copper-99mm' }] }) });
+    const unknownPipe = await create({ name: 'Pipe', routeId: f.lineRouteId, design: designOf({ stretches: [{ fromM: 0, toM: 400, pipe: 'copper-99mm' }] }) });
     expect(unknownPipe.status).toBe(400);
     expect(unknownPipe.json.error.fields['design.stretches.pipe.0'][0]).toMatch(/unknown pipe id "copper-99mm"/);
   });
@@ -83,10 +83,10 @@ describe('lines API', () => {
       id: 'old-barn-pipe', label: 'Old barn pipe 40 mm', material: 'pe', nominalSize: '40 mm', outsideDiameterM: 0.04, insideDiameterM: 0.034,
       wallM: 0.003, pressureRatingPa: 6e5, hazenWilliamsC: 140, roughnessM: 7e-6, waveSpeedMs: 300, source: 'measured on site',
     };
-    const wrong = await create({ name: 'Custom', routeId: f.routeId, design: designOf({ pipes: [{ ...pipe, insideDiameterM: 0.05 }], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
+    const wrong = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [{ ...pipe, insideDiameterM: 0.05 }], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(wrong.status).toBe(400);
     expect(wrong.json.error.fields['design.pipes.0.insideDiameterM'][0]).toMatch(/must be less than outsideDiameterM/);
-    const ok = await create({ name: 'Custom', routeId: f.routeId, design: designOf({ pipes: [pipe], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
+    const ok = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [pipe], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(ok.status).toBe(201);
     const analysis = await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: ok.json.line.id }, userId: f.users.viewer.id });
     expect(analysis.status).toBe(200);
@@ -95,13 +95,13 @@ describe('lines API', () => {
 
   it('refuses a route of another project', async () => {
     const other = await createTeamFixture();
-    const res = await create({ name: 'Borrowed', routeId: other.routeId });
+    const res = await create({ name: 'Borrowed', routeId: other.lineRouteId });
     expect(res.status).toBe(400);
     expect(res.json.error.fields.routeId).toEqual(['Pick a route of this project']);
   });
 
   it('updates the design, counts revisions and refuses a stale editor with 409', async () => {
-    const made = await create({ name: 'Revised', routeId: f.routeId, design: designOf() });
+    const made = await create({ name: 'Revised', routeId: f.lineRouteId, design: designOf() });
     const id = made.json.line.id;
     const first = await patch(id, { design: designOf({ devices: [] }), baseRevision: 1, checkedBy: ' Dara Okafor ' });
     expect(first.status).toBe(200);
@@ -113,7 +113,7 @@ describe('lines API', () => {
   });
 
   it('an update that no longer fits the line is refused and changes nothing', async () => {
-    const made = await create({ name: 'Window', routeId: f.routeId, design: designOf() });
+    const made = await create({ name: 'Window', routeId: f.lineRouteId, design: designOf() });
     const res = await patch(made.json.line.id, { toChainageM: 300, fromChainageM: 0 });
     expect(res.status).toBe(400);
     expect(res.json.error.message).toMatch(/the last stretch runs past the end of the line/);
@@ -124,7 +124,7 @@ describe('lines API', () => {
   it('lets viewers read and analyse but not change or delete', async () => {
     const viewer = f.users.viewer.id;
     expect((await patch(f.lineId, { name: 'Taken over' }, viewer)).status).toBe(403);
-    expect((await create({ name: 'Mine', routeId: f.routeId }, viewer)).status).toBe(403);
+    expect((await create({ name: 'Mine', routeId: f.lineRouteId }, viewer)).status).toBe(403);
     const del = await call(lineRoute.DELETE, { method: 'DELETE', path: '/api/x', params: { lineId: f.lineId }, userId: viewer });
     expect(del.status).toBe(403);
     const list = await call(projectLines.GET, { method: 'GET', path: '/api/x', params: { projectId: f.projectId }, userId: viewer });

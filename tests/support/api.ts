@@ -6,6 +6,7 @@ import { env } from '@/lib/env';
 import type { Role } from '@/lib/roles';
 import { models } from '@/models';
 import { createLineFixture } from './line-fixture';
+import { createRouteFixtures } from './routes';
 
 // One argon2id hash reused by every fixture user: hashing per user would only slow the suite.
 const FIXTURE_HASH = '$argon2id$v=19$m=65536,t=3,p=4$ep57i7k5O57/C8UwlfRrPw$1xC2a4RhR8x32uTIA2yHhQXymRqQ+RHLaAHk6LuXN44';
@@ -36,8 +37,9 @@ export async function createTeamFixture() {
   const otherTeam = await Team.create({ name: 'Outsider team' });
   await Membership.create({ teamId: otherTeam.id, userId: users.outsider.id, role: 'owner' });
   const project = await Project.create({ teamId: team.id, name: 'Fixture project', description: '', siteNotes: '', unitSystem: 'metric' });
+  const routes = await createRouteFixtures(project.id, users.surveyor.id);
   const line = await createLineFixture(project.id);
-  return { teamId: team.id, projectId: project.id, users, ...line };
+  return { teamId: team.id, projectId: project.id, users, ...routes, lineRouteId: line.routeId, lineId: line.lineId };
 }
 
 /** A session cookie as next-auth would set it, carrying the user's current session version. */

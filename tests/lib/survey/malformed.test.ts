@@ -44,6 +44,7 @@ const CASES: [string, () => unknown, ExpectedError][] = [
   ['unreadable time', gps('lat,lon,ele,time\n45.5,11.8,800,yesterday noon\n45.6,11.9,790,\n'), { code: 'bad-time', line: 2, column: 'time' }],
   ['line number counts blank lines', gps('lat,lon,ele\n45.5,11.8,800\n\n\n45.6,x,790\n'), { code: 'not-a-number', line: 5, column: 'lon' }],
   ['1 point only', gps('lat,lon,ele\n45.5,11.8,800\n'), { code: 'too-few-points', message: /at least two points; the file has 1/ }],
+  ['duplicate points only (one place logged twice)', gps('lat,lon,ele\n45.5,11.8,800\n45.5,11.8,800\n'), { code: 'too-few-points', line: 3, message: /2 points are all copies of one point/ }],
   ['station CSV: negative chainage', station('chainage,elevation\n-5,100\n10,99\n'), { code: 'negative-chainage', line: 2, column: 'chainage' }],
   ['station CSV: non-increasing chainage', station('chainage,elevation\n0,100\n20,99\n15,98\n'), { code: 'chainage-not-increasing', line: 4, message: /not greater than 20 m on line 3/ }],
   ['station CSV: same chainage, two heights', station('chainage,elevation\n0,100\n20,99\n20,97\n'), { code: 'chainage-not-increasing', line: 4 }],

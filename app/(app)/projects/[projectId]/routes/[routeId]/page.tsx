@@ -1,0 +1,38 @@
+import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { RouteEditor } from '@/components/routes/route/route-editor';
+import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { getProject } from '@/lib/data/projects';
+import { getRouteDetail } from '@/lib/data/routes';
+import { can } from '@/lib/permissions';
+import { getQueryClient } from '@/lib/queries/query-client';
+import { routeKeys } from '@/lib/queries/routes';
+import { uuid } from '@/lib/validations/common';
+
+export const metadata: Metadata = { title: 'Survey route' };
+
+const Params = z.strictObject({ projectId: uuid('Project id'), routeId: uuid('Route id') });
+
+export default async function RoutePage({ params }: { params: Promise<{ projectId: string; routeId: string }> }) {
+  const parsed = Params.safeParse(await params);
+  if (!parsed.success) notFound();
+  const user = await requireUser();
+  const project = await getProject(parsed.data.projectId);
+  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
+  const detail = await getRouteDetail(parsed.data.routeId);
+  if (!project || !detail || detail.route.projectId !== project.id) notFound();
+  const queryClient = getQueryClient();
+  queryClient.setQueryData(routeKeys.one(detail.route.id), detail);
+
+  return (
+    <div className="space-y-4">
+      <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        <RouteEditor routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+      </HydrationBoundary>
+    </div>
+  );
+}

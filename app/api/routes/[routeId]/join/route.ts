@@ -1,0 +1,12 @@
+import { teamRoute } from '@/lib/api/route';
+import { teamOfRoute } from '@/lib/data/routes';
+import { joinRoutesById } from '@/lib/data/route-edits';
+import { JoinRoutesSchema, RouteParams } from '@/lib/validations/routes';
+
+const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
+
+/** A new route (201): this one with the other joined onto its end. */
+export const POST = teamRoute(
+  { params: RouteParams, body: JoinRoutesSchema, permission: 'survey.edit', teamOf, status: 201 },
+  async ({ params, body, user }) => ({ route: await joinRoutesById(params.routeId, user.id, body) }),
+);

@@ -1,0 +1,64 @@
+import { Button } from '@/components/ui/button';
+import { formatLength } from '@/lib/display-units';
+import type { ImportPreview } from '@/lib/import/protocol';
+import type { UnitSystem } from '@/models/project';
+import { FORMAT_LABELS } from '../format-labels';
+import { GpsWarningBanner } from '../gps-warning-banner';
+import { RouteProfile } from '../route-profile';
+
+export interface PreviewStepProps {
+  preview: ImportPreview;
+  units: UnitSystem;
+  saving: boolean;
+  onBack: () => void;
+  onSave: () => void;
+}
+
+/** What will be saved: the numbers, the profile, every warning, before anything is stored. */
+export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewStepProps) {
+  const s = preview.stats;
+  const spikes = preview.proposals.length;
+  // The consumer-GPS note is the banner above; the list holds the rest.
+  const notes = preview.warnings.filter((w) => w.code !== 'consumer-gps-heights');
+  const noteCount = preview.warningCount - (preview.warnings.length - notes.length);
+  return (
+    <div className="space-y-4">
+      {preview.gpsWarning && <GpsWarningBanner warning={preview.gpsWarning} />}
+      <dl className="grid gap-3 text-sm sm:grid-cols-4">
+        <div><dt className="text-creek-600">Read as</dt><dd className="font-medium">{FORMAT_LABELS[s.format]}</dd></div>
+        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{s.pointCount.toLocaleString('en-GB')}</dd></div>
+        <div><dt className="text-creek-600">Length (horizontal)</dt><dd className="tabular font-medium">{formatLength(s.totalHorizontalLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatLength(s.totalSlopeLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Lowest</dt><dd className="tabular font-medium">{formatLength(s.minElevationM, units)}</dd></div>
+        <div><dt className="text-creek-600">Highest</dt><dd className="tabular font-medium">{formatLength(s.maxElevationM, units)}</dd></div>
+        {s.closureErrorM !== undefined && (
+          <div><dt className="text-creek-600">Closure error</dt><dd className="tabular font-medium">{(s.closureErrorM * 1000).toFixed(0)} mm</dd></div>
+        )}
+        <div><dt className="text-creek-600">Exact duplicates</dt><dd className="tabular font-medium">{s.duplicateCount}</dd></div>
+      </dl>
+      <RouteProfile cleaned={preview.profile} units={units} title={`Ground profile of the file, ${s.pointCount} points`} markers={[]} />
+      {spikes > 0 && (
+        <p className="rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm text-ochre-700">
+          The clean-up checks found {spikes} point{spikes === 1 ? '' : 's'} to look at (spikes, outliers, duplicates). Nothing is changed on import: the route page lists each one for you to accept or reject.
+        </p>
+      )}
+      {notes.length > 0 && (
+        <section aria-label="Import notes">
+          <h3 className="text-sm font-medium text-creek-900">Notes on the file ({noteCount})</h3>
+          <ul className="mt-1 max-h-48 list-disc space-y-0.5 overflow-y-auto pl-5 text-sm text-creek-800">
+            {notes.map((w, i) => (
+              <li key={i}>{w.line !== undefined ? `line ${w.line}: ` : ''}{w.message}</li>
+            ))}
+          </ul>
+        </section>
+      )}
+      {preview.features.length > 0 && (
+        <p className="text-sm text-creek-700">Waypoints placed along the route: {preview.features.map((f) => `${f.label} (${formatLength(f.chainageM, units, 0)})`).join(', ')}.</p>
+      )}
+      <div className="flex flex-wrap gap-3">
+        <Button tone="quiet" onClick={onBack} disabled={saving}>Back to the mapping</Button>
+        <Button onClick={onSave} disabled={saving}>{saving ? 'Saving…' : 'Save route'}</Button>
+      </div>
+    </div>
+  );
+}

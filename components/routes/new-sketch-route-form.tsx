@@ -1,0 +1,44 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { FormMessage } from '@/components/ui/form-message';
+import type { FieldErrors } from '@/lib/errors';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { useCreateRoute } from '@/lib/queries/routes';
+import { fieldErrorsOf } from '@/lib/validations/common';
+import { CreateRouteSchema } from '@/lib/validations/routes';
+
+/** Starts an empty route to sketch on the profile or type in, for when no survey exists yet. */
+export function NewSketchRouteForm({ projectId }: { projectId: string }) {
+  const router = useRouter();
+  const create = useCreateRoute(projectId);
+  const [fields, setFields] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+
+  async function onSubmit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const parsed = CreateRouteSchema.safeParse({ name: new FormData(event.currentTarget).get('sketch-name') });
+    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
+    setFields({});
+    try {
+      const route = await create.mutateAsync(parsed.data);
+      router.push(`/projects/${projectId}/routes/${route.id}`);
+    } catch (error) {
+      if (error instanceof ApiError) setFields(error.fields ?? {});
+      setMessage(error instanceof Error ? error.message : 'Not created.');
+    }
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3" noValidate>
+      <div className="w-72 max-w-full">
+        <TextField id="sketch-name" label="Name of the new route" placeholder="e.g. Tank to lower trough" errors={fields.name} />
+      </div>
+      <Button type="submit" tone="quiet" disabled={create.isPending}>{create.isPending ? 'Creating…' : 'Start an empty route'}</Button>
+      <FormMessage message={message} />
+    </form>
+  );
+}

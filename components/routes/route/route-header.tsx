@@ -1,0 +1,74 @@
+'use client';
+
+import { useState, type FormEvent } from 'react';
+import { Button } from '@/components/ui/button';
+import { FormMessage } from '@/components/ui/form-message';
+import { formatLength } from '@/lib/display-units';
+import { routeSourceUrl, useUpdateRoute } from '@/lib/queries/routes';
+import type { RouteDetail } from '@/lib/routes/types';
+import type { UnitSystem } from '@/models/project';
+import { FORMAT_LABELS } from '../format-labels';
+
+const kb = (bytes: number) => (bytes < 1024 * 1024 ? `${(bytes / 1024).toFixed(0)} kB` : `${(bytes / (1024 * 1024)).toFixed(1)} MB`);
+
+/** Name, the route's numbers, and the original file to download again. */
+export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; units: UnitSystem; editable: boolean }) {
+  const r = detail.route;
+  const rename = useUpdateRoute(r.projectId, r.id);
+  const [editing, setEditing] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const kept = detail.points.filter((p) => !p.excluded);
+  const low = kept.reduce((m, p) => Math.min(m, p.elevationM), Infinity);
+  const high = kept.reduce((m, p) => Math.max(m, p.elevationM), -Infinity);
+
+  async function onRename(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    try {
+      await rename.mutateAsync({ name: String(new FormData(e.currentTarget).get('route-name') ?? '') });
+      setEditing(false);
+      setError(null);
+    } catch (err) {
+      setError(err instanceof Error ? err.message : 'Not renamed.');
+    }
+  }
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-center gap-3">
+        {editing ? (
+          <form onSubmit={onRename} className="flex items-center gap-2">
+            <input name="route-name" aria-label="Route name" defaultValue={r.name} className="rounded-md border border-creek-200 px-2 py-1 text-lg" />
+            <Button type="submit" disabled={rename.isPending}>Save name</Button>
+            <Button tone="quiet" onClick={() => setEditing(false)}>Cancel</Button>
+          </form>
+        ) : (
+          <>
+            <h1 className="text-2xl font-semibold text-creek-900">{r.name}</h1>
+            {editable && <button type="button" onClick={() => setEditing(true)} className="text-sm text-creek-600 underline">Rename</button>}
+          </>
+        )}
+      </div>
+      <FormMessage message={error} />
+      <dl className="grid gap-3 text-sm sm:grid-cols-5">
+        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{r.pointCount.toLocaleString('en-GB')}</dd></div>
+        <div><dt className="text-creek-600">Length</dt><dd className="tabular font-medium">{formatLength(r.lengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatLength(r.slopeLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Heights</dt><dd className="tabular font-medium">{kept.length > 0 ? `${formatLength(low, units)} – ${formatLength(high, units)}` : '—'}</dd></div>
+        <div>
+          <dt className="text-creek-600">From</dt>
+          <dd className="font-medium">
+            {r.sourceFormat ? FORMAT_LABELS[r.sourceFormat] : '—'}
+            {r.sourceFile && (
+              <a href={routeSourceUrl(r.id)} download={r.sourceFile.fileName} className="block text-xs font-normal text-creek-600 underline">
+                Download original ({r.sourceFile.fileName}, {kb(r.sourceFile.sizeBytes)})
+              </a>
+            )}
+          </dd>
+        </div>
+      </dl>
+      {r.closureErrorM !== null && (
+        <p className="text-sm text-creek-700">The level run closes {Math.abs(r.closureErrorM * 1000).toFixed(0)} mm {r.closureErrorM >= 0 ? 'above' : 'below'} the known closing level.</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,102 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { Button } from '@/components/ui/button';
+import { FormMessage } from '@/components/ui/form-message';
+import { Panel } from '@/components/ui/panel';
+import { formatLength, fromDisplayLength, lengthUnitOf, toDisplayLength } from '@/lib/display-units';
+import { projectRoutesQuery, useDeleteRoute, useJoinRoutes, useReverseRoute, useSplitRoute, useTrimRoute } from '@/lib/queries/routes';
+import type { RouteDetail } from '@/lib/routes/types';
+import type { UnitSystem } from '@/models/project';
+
+export interface RouteToolsProps {
+  detail: RouteDetail;
+  units: UnitSystem;
+  blocked: boolean;
+}
+
+const field = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1';
+const num = (form: FormData, name: string) => Number(String(form.get(name) ?? '').trim().replace(',', '.'));
+
+/** Reverse, split, trim, join and delete: each one transaction on the server. */
+export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
+  const router = useRouter();
+  const { id, projectId } = detail.route;
+  const routes = useQuery(projectRoutesQuery(projectId)).data ?? [];
+  const reverse = useReverseRoute(projectId, id);
+  const split = useSplitRoute(projectId, id);
+  const trim = useTrimRoute(projectId, id);
+  const join = useJoinRoutes(projectId, id);
+  const remove = useDeleteRoute(projectId, id);
+  const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
+  const u = lengthUnitOf(units);
+  const lengthShown = toDisplayLength(detail.route.lengthM, units);
+  const busy = blocked || reverse.isPending || split.isPending || trim.isPending || join.isPending || remove.isPending;
+
+  async function run(work: () => Promise<unknown>, done: string) {
+    setMessage(null);
+    try {
+      await work();
+      setMessage({ text: done, tone: 'ok' });
+    } catch (error) {
+      setMessage({ text: error instanceof Error ? error.message : 'Not done.', tone: 'error' });
+    }
+  }
+
+  const onSplit = (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault();
+    const c = num(new FormData(e.currentTarget), 'split-at');
+    return run(async () => {
+      const r = await split.mutateAsync({ chainageM: fromDisplayLength(c, units) });
+      router.push(`/projects/${projectId}/routes/${r.second.id}`);
+    }, 'Split. The second part is a new route.');
+  };
+  const onTrim = (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    return run(() => trim.mutateAsync({ fromChainageM: fromDisplayLength(num(form, 'trim-from'), units), toChainageM: fromDisplayLength(num(form, 'trim-to'), units) }), 'Trimmed.');
+  };
+  const onJoin = (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    const gap = String(form.get('join-gap') ?? '').trim();
+    return run(async () => {
+      const r = await join.mutateAsync({ otherRouteId: String(form.get('join-other')), ...(gap ? { gapM: fromDisplayLength(Number(gap), units) } : {}) });
+      router.push(`/projects/${projectId}/routes/${r.id}`);
+    }, 'Joined into a new route.');
+  };
+
+  return (
+    <Panel title="Route tools">
+      {blocked && <p className="mb-2 text-sm text-ochre-700">Save or discard your table edits first.</p>}
+      <div className="grid gap-4 text-sm md:grid-cols-2">
+        <div className="space-y-1">
+          <Button tone="quiet" disabled={busy || detail.points.length < 2} onClick={() => run(() => reverse.mutateAsync(), 'Reversed: the route now runs the other way.')}>Reverse the route</Button>
+          <p className="text-xs text-creek-600">For a walk recorded from the tank up to the spring.</p>
+        </div>
+        <form onSubmit={onSplit} className="flex flex-wrap items-end gap-2" aria-label="Split">
+          <label>Split at chainage ({u})<input name="split-at" inputMode="decimal" className={field} placeholder={(lengthShown / 2).toFixed(0)} /></label>
+          <Button type="submit" tone="quiet" disabled={busy || detail.points.length < 2}>Split</Button>
+        </form>
+        <form onSubmit={onTrim} className="flex flex-wrap items-end gap-2" aria-label="Trim">
+          <label>Keep from ({u})<input name="trim-from" inputMode="decimal" defaultValue="0" className={field} /></label>
+          <label>to ({u})<input name="trim-to" inputMode="decimal" defaultValue={lengthShown.toFixed(1)} className={field} /></label>
+          <Button type="submit" tone="quiet" disabled={busy || detail.points.length < 2}>Trim</Button>
+        </form>
+        <form onSubmit={onJoin} className="flex flex-wrap items-end gap-2" aria-label="Join">
+          <label>Join onto the end<select name="join-other" className="mt-1 block w-48 rounded-md border border-creek-200 px-2 py-1">
+            {routes.filter((r) => r.id !== id && r.pointCount >= 2).map((r) => <option key={r.id} value={r.id}>{r.name} ({formatLength(r.lengthM, units, 0)})</option>)}
+          </select></label>
+          <label>Gap ({u}, optional)<input name="join-gap" inputMode="decimal" className={field} placeholder="measured" /></label>
+          <Button type="submit" tone="quiet" disabled={busy || routes.length < 2 || detail.points.length < 2}>Join</Button>
+        </form>
+      </div>
+      <div className="mt-4 flex flex-wrap items-center gap-3 border-t border-creek-100 pt-3">
+        <Button tone="danger" disabled={busy} onClick={() => { if (window.confirm(`Delete the route “${detail.route.name}” and its points?`)) void run(async () => { await remove.mutateAsync(undefined); router.push(`/projects/${projectId}/routes`); }, 'Deleted.'); }}>Delete route</Button>
+        <FormMessage message={message?.text} tone={message?.tone} />
+      </div>
+    </Panel>
+  );
+}

@@ -1,0 +1,60 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import Link from 'next/link';
+import { formatDistance, formatLength } from '@/lib/display-units';
+import type { UnitSystem } from '@/models/project';
+import { projectRoutesQuery } from '@/lib/queries/routes';
+import { FORMAT_LABELS } from './format-labels';
+
+export interface RoutesListProps {
+  projectId: string;
+  unitSystem: UnitSystem;
+}
+
+/** The project's routes with their length, points and where they came from. */
+export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
+  const { data: routes = [], isError, refetch } = useQuery(projectRoutesQuery(projectId));
+  if (isError) {
+    return (
+      <p role="alert" className="text-sm text-clay-700">
+        Routes could not be loaded. <button className="underline" onClick={() => refetch()}>Try again</button>
+      </p>
+    );
+  }
+  return (
+    <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+      <table className="w-full text-left text-sm">
+        <thead className="bg-creek-50 text-creek-800">
+          <tr>
+            <th scope="col" className="px-4 py-2 font-medium">Route</th>
+            <th scope="col" className="px-4 py-2 font-medium">Length</th>
+            <th scope="col" className="px-4 py-2 font-medium">Along the ground</th>
+            <th scope="col" className="px-4 py-2 font-medium">Points</th>
+            <th scope="col" className="px-4 py-2 font-medium">From</th>
+          </tr>
+        </thead>
+        <tbody>
+          {routes.map((r) => (
+            <tr key={r.id} className="border-t border-creek-50 hover:bg-creek-50/50">
+              <td className="px-4 py-2.5">
+                <Link href={`/projects/${projectId}/routes/${r.id}`} className="font-medium text-creek-700 underline-offset-2 hover:underline">{r.name}</Link>
+                {r.notes && <p className="max-w-md truncate text-xs text-creek-600">{r.notes}</p>}
+              </td>
+              <td className="tabular px-4 py-2.5">{r.pointCount > 1 ? formatDistance(r.lengthM, unitSystem) : '—'}</td>
+              <td className="tabular px-4 py-2.5">{r.pointCount > 1 ? formatLength(r.slopeLengthM, unitSystem, 0) : '—'}</td>
+              <td className="tabular px-4 py-2.5">{r.pointCount.toLocaleString('en-GB')}</td>
+              <td className="px-4 py-2.5 text-creek-700">
+                {r.sourceFormat ? FORMAT_LABELS[r.sourceFormat] : '—'}
+                {r.sourceFile && <span className="block max-w-[14rem] truncate text-xs text-creek-600">{r.sourceFile.fileName}</span>}
+              </td>
+            </tr>
+          ))}
+          {routes.length === 0 && (
+            <tr><td colSpan={5} className="px-4 py-6 text-center text-creek-600">No routes yet. Import a walked track or field book, or sketch one.</td></tr>
+          )}
+        </tbody>
+      </table>
+    </div>
+  );
+}

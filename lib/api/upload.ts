@@ -1,0 +1,79 @@
+import type { NextRequest } from 'next/server';
+import { AppError } from '../errors';
+
+/** Room for the form's own bytes (boundaries, headers, the options field) around the file. */
+const FORM_OVERHEAD_BYTES = 1024 * 1024;
+
+export interface UploadedFile {
+  fileName: string;
+  contentType: string;
+  bytes: Uint8Array;
+  /** The form's other text fields by name. */
+  fields: Record<string, string>;
+}
+
+const mb = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB`;
+
+function tooLarge(bytes: number | null, maxFileBytes: number): AppError {
+  const size = bytes === null ? 'larger than the limit' : mb(bytes);
+  const message = `The upload is ${size}; a survey file may be at most ${mb(maxFileBytes)}`;
+  return new AppError('payload_too_large', message, { file: [message] });
+}
+
+/** Reads the body as a stream and stops as soon as it passes `limit`, so a huge upload is never buffered whole. */
+async function readCapped(req: NextRequest, limit: number, maxFileBytes: number): Promise<Uint8Array> {
+  if (!req.body) return new Uint8Array(0);
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel();
+      throw tooLarge(null, maxFileBytes);
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
+}
+
+/**
+ * Reads a multipart/form-data upload with one file field. Size is checked from the declared
+ * length first (413 before reading), then while streaming, then on the file itself.
+ */
+export async function readFileUpload(req: NextRequest, options: { fileField: string; maxFileBytes: number }): Promise<UploadedFile> {
+  const type = req.headers.get('content-type') ?? '';
+  if (!/^multipart\/form-data;\s*boundary=/i.test(type)) {
+    throw new AppError('unsupported_media_type', `Send the file as multipart/form-data with a “${options.fileField}” field`, {
+      [options.fileField]: ['Choose a file to upload'],
+    });
+  }
+  const limit = options.maxFileBytes + FORM_OVERHEAD_BYTES;
+  const declared = Number(req.headers.get('content-length') ?? '0');
+  if (declared > limit) throw tooLarge(declared, options.maxFileBytes);
+  const body = await readCapped(req, limit, options.maxFileBytes);
+  let form: FormData;
+  try {
+    form = await new Request('http://upload.local/', { method: 'POST', headers: { 'content-type': type }, body: body as BodyInit }).formData();
+  } catch {
+    throw new AppError('bad_request', 'The upload could not be read as a form; send it again', { [options.fileField]: ['The upload was incomplete or malformed'] });
+  }
+  const file = form.get(options.fileField);
+  if (!(file instanceof File)) {
+    throw new AppError('bad_request', `No file was sent in the “${options.fileField}” field`, { [options.fileField]: ['Choose a file to upload'] });
+  }
+  if (file.size > options.maxFileBytes) throw tooLarge(file.size, options.maxFileBytes);
+  const fields: Record<string, string> = {};
+  form.forEach((value, key) => {
+    if (typeof value === 'string') fields[key] = value;
+  });
+  return { fileName: file.name || 'upload', contentType: file.type || 'application/octet-stream', bytes: new Uint8Array(await file.arrayBuffer()), fields };
+}

@@ -1,0 +1,122 @@
+import 'server-only';
+import { createHash, randomUUID } from 'node:crypto';
+import { models } from '../../models';
+import type { PointRecord } from '../routes/edit-ops';
+import type { RouteSummary } from '../routes/types';
+import { deleteObject, putObject } from '../storage';
+import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
+import { parseSurveyText } from '../survey/run-import';
+import { sniffSurveyFile } from '../survey/sniff';
+import type { SurveyImportOptions } from '../validations/survey-import';
+import { refusingPlainly } from './route-errors';
+import { insertRoutePoints } from './route-points-store';
+import { toRouteSummary } from './routes';
+
+/** Notes kept on the route; a file with thousands of duplicates gets a count, not thousands of lines. */
+const MAX_STORED_NOTES = 200;
+
+export interface SurveyUpload {
+  projectId: string;
+  userId: string;
+  fileName: string;
+  contentType: string;
+  bytes: Uint8Array;
+  options: SurveyImportOptions;
+}
+
+export interface SurveyImportResult {
+  route: RouteSummary;
+  warnings: SurveyImportWarning[];
+}
+
+function storedContentType(fileName: string, declared: string): string {
+  if (/\.gpx$/i.test(fileName)) return 'application/gpx+xml';
+  if (/\.(csv|txt|tsv)$/i.test(fileName)) return 'text/csv';
+  return declared.startsWith('text/') ? declared : 'text/plain';
+}
+
+/** Survey points as stored: raw and cleaned heights equal, slope chainage summed leg by leg. */
+export function recordsOfSurvey(survey: ParsedSurvey): PointRecord[] {
+  let slopeM = 0;
+  return survey.points.map((p, i) => {
+    if (i > 0) {
+      const prev = survey.points[i - 1];
+      slopeM += Math.hypot(p.chainageM - prev.chainageM, p.elevationM - prev.elevationM);
+    }
+    return {
+      latitude: p.lat ?? null,
+      longitude: p.lon ?? null,
+      chainageM: p.chainageM,
+      slopeChainageM: slopeM,
+      elevationM: p.elevationM,
+      rawElevationM: p.elevationM,
+      label: p.label ?? null,
+      heightSource: p.heightSource,
+      confidenceM: p.confidence ?? null,
+      recordedAt: p.time ?? null,
+      excluded: false,
+      dismissedChecks: [],
+    };
+  });
+}
+
+function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[] {
+  if (warnings.length <= MAX_STORED_NOTES) return [...warnings];
+  const rest = warnings.length - MAX_STORED_NOTES + 1;
+  return [...warnings.slice(0, MAX_STORED_NOTES - 1), { code: 'more-notes', message: `…and ${rest} more notes like these` }];
+}
+
+/**
+ * Imports an uploaded survey file, all or nothing: the file is checked and parsed before anything
+ * is stored; then the original goes to object storage and the attachment, route and points are
+ * written in one transaction. If that transaction fails the stored object is removed again.
+ */
+export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportResult> {
+  const { text } = await refusingPlainly(async () => sniffSurveyFile(upload.bytes, { fileName: upload.fileName }));
+  const survey = await refusingPlainly(async () => parseSurveyText(text, upload.options), upload.fileName);
+  const records = recordsOfSurvey(survey);
+  const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
+  const storageKey = `projects/${upload.projectId}/survey-files/${randomUUID()}/${safeName}`;
+  const contentType = storedContentType(upload.fileName, upload.contentType);
+  await putObject(storageKey, upload.bytes, contentType);
+  const { Attachment, Route, sequelize } = models();
+  try {
+    const route = await sequelize.transaction(async (transaction) => {
+      const file = await Attachment.create(
+        {
+          projectId: upload.projectId,
+          kind: 'survey-file',
+          fileName: upload.fileName.slice(0, 255),
+          contentType,
+          sizeBytes: upload.bytes.byteLength,
+          sha256: createHash('sha256').update(upload.bytes).digest('hex'),
+          storageKey,
+          uploadedBy: upload.userId,
+        },
+        { transaction },
+      );
+      const r = await Route.create(
+        {
+          projectId: upload.projectId,
+          name: upload.options.name,
+          sourceAttachmentId: file.id,
+          sourceFormat: survey.stats.format,
+          createdBy: upload.userId,
+          pointCount: records.length,
+          lengthM: survey.stats.totalHorizontalLengthM,
+          slopeLengthM: records[records.length - 1].slopeChainageM ?? 0,
+          features: survey.features ?? [],
+          importNotes: notesOf(survey.warnings),
+          closureErrorM: survey.stats.closureErrorM ?? null,
+        },
+        { transaction },
+      );
+      await insertRoutePoints(r.id, records, transaction);
+      return toRouteSummary(r, file);
+    });
+    return { route, warnings: survey.warnings.slice(0, 50) };
+  } catch (error) {
+    await deleteObject(storageKey).catch((e) => console.error('[runnel] could not remove the stored file of a failed import', storageKey, e));
+    throw error;
+  }
+}

@@ -1,0 +1,41 @@
+import { routeGpsWarning } from '../routes/gps-warning';
+import { thinProfile } from '../routes/profile-series';
+import { detectRouteProposals } from '../routes/proposals';
+import type { RoutePointView } from '../routes/types';
+import type { ParsedSurvey } from '../survey/parsed-survey';
+import type { ImportPreview } from './protocol';
+
+/** Warnings sent to the screen; the rest are counted. */
+const SHOWN_WARNINGS = 100;
+
+/** The parsed survey as the route page will see it once saved (same checks, same warning). */
+export function pointViewsOf(survey: ParsedSurvey): RoutePointView[] {
+  return survey.points.map((p, i) => ({
+    seq: i,
+    latitude: p.lat ?? null,
+    longitude: p.lon ?? null,
+    chainageM: p.chainageM,
+    slopeChainageM: null,
+    elevationM: p.elevationM,
+    rawElevationM: p.elevationM,
+    label: p.label ?? null,
+    heightSource: p.heightSource,
+    confidenceM: p.confidence ?? null,
+    recordedAt: p.time ?? null,
+    excluded: false,
+    dismissedChecks: [],
+  }));
+}
+
+export function buildImportPreview(survey: ParsedSurvey): ImportPreview {
+  const points = pointViewsOf(survey);
+  return {
+    stats: survey.stats,
+    warnings: survey.warnings.slice(0, SHOWN_WARNINGS),
+    warningCount: survey.warnings.length,
+    features: survey.features ?? [],
+    profile: thinProfile(points.map((p) => ({ chainageM: p.chainageM, elevationM: p.elevationM }))),
+    proposals: detectRouteProposals(points),
+    gpsWarning: routeGpsWarning(points),
+  };
+}

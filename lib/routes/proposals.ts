@@ -1,0 +1,81 @@
+import type { CleanupKind, ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
+import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
+import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
+import { proposeBenchmarkOffset, proposeSmoothing } from '../../hydraulics/survey/cleanup/smoothing';
+import { detectGradeSpikes, detectMedianOutliers } from '../../hydraulics/survey/cleanup/spikes';
+import type { HeightSource } from '../../hydraulics/survey/height-source';
+import type { RouteStation } from '../../hydraulics/survey/types';
+import type { RoutePointView } from './types';
+
+/**
+ * Thresholds of the automatic checks. Common practice, no source: a ground grade steeper than
+ * 1 in 1 both into and out of a point, in opposite directions, is almost never real on a pipe
+ * route; 6 m off the median of 7 neighbours is about the scatter of a consumer GPS height.
+ */
+export const CHECK_SETTINGS = { gradeThreshold: 1.0, medianWindow: 7, medianToleranceM: 6 } as const;
+
+/** Heights whose scatter the moving-median check is meant for; level runs are not second-guessed by it. */
+const SCATTERED_SOURCES: ReadonlySet<HeightSource> = new Set<HeightSource>(['gps', 'altimeter', 'map']);
+
+/** When two checks flag one point, the stronger finding is shown (a duplicate beats a spike). */
+const PRIORITY: CleanupKind[] = ['duplicate', 'time-backwards', 'chainage-backwards', 'grade-spike', 'median-outlier'];
+
+/** The checks run by themselves; smoothing and benchmark offsets are only proposed on request. */
+export const DETECTED_KINDS: ReadonlySet<CleanupKind> = new Set(PRIORITY);
+
+function stationsOf(points: readonly RoutePointView[]): RouteStation[] {
+  return points.map((p) => ({
+    chainageM: p.chainageM,
+    elevationM: p.elevationM,
+    latitudeDeg: p.latitude ?? undefined,
+    longitudeDeg: p.longitude ?? undefined,
+    timeS: p.recordedAt === null ? undefined : Date.parse(p.recordedAt) / 1000,
+  }));
+}
+
+/** Re-keys proposals made on a subset of points from subset positions to the points' seq. */
+function toSeq(changes: readonly ProposedChange[], subset: readonly RoutePointView[]): ProposedChange[] {
+  return changes.map((c) => ({ ...c, index: subset[c.index].seq }));
+}
+
+/**
+ * Runs the automatic clean-up checks on the cleaned profile (kept points, current heights) and
+ * returns at most one proposal per point, leaving out checks the user already dismissed there.
+ */
+export function detectRouteProposals(points: readonly RoutePointView[]): ProposedChange[] {
+  const kept = points.filter((p) => !p.excluded);
+  if (kept.length < 3) return [];
+  const stations = stationsOf(kept);
+  const scattered = kept.filter((p) => SCATTERED_SOURCES.has(p.heightSource));
+  const all = [
+    ...toSeq(detectDuplicates(stations), kept),
+    ...toSeq(detectOutOfOrder(stations), kept),
+    ...toSeq(detectGradeSpikes(stations, { gradeThreshold: CHECK_SETTINGS.gradeThreshold }), kept),
+    ...(scattered.length >= 3
+      ? toSeq(detectMedianOutliers(stationsOf(scattered), { windowSize: CHECK_SETTINGS.medianWindow, toleranceM: CHECK_SETTINGS.medianToleranceM }), scattered)
+      : []),
+  ];
+  const bySeq = new Map(points.map((p) => [p.seq, p]));
+  const chosen = new Map<number, ProposedChange>();
+  for (const c of all) {
+    if (bySeq.get(c.index)?.dismissedChecks.includes(c.kind)) continue;
+    const current = chosen.get(c.index);
+    if (!current || PRIORITY.indexOf(c.kind) < PRIORITY.indexOf(current.kind)) chosen.set(c.index, c);
+  }
+  return [...chosen.values()].sort((a, b) => a.index - b.index);
+}
+
+/** Moving-median smoothing of the kept points' heights, keyed by seq. */
+export function smoothingProposals(points: readonly RoutePointView[], windowSize: number): ProposedChange[] {
+  const kept = points.filter((p) => !p.excluded);
+  if (kept.length === 0) return [];
+  return toSeq(proposeSmoothing(stationsOf(kept), { windowSize }), kept);
+}
+
+/** Shifts every kept height so the point `seq` takes the benchmark's known elevation. */
+export function benchmarkProposals(points: readonly RoutePointView[], seq: number, knownElevationM: number): ProposedChange[] {
+  const kept = points.filter((p) => !p.excluded);
+  const index = kept.findIndex((p) => p.seq === seq);
+  const label = kept[index]?.label ?? `point ${seq + 1}`;
+  return toSeq(proposeBenchmarkOffset(stationsOf(kept), { index, knownElevationM, benchmarkLabel: label }), kept);
+}

@@ -1,0 +1,16 @@
+// The local S3 stand-in ships no types; this is the part Runnel's fake and benchmark use.
+declare module 's3rver' {
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory?: string;
+    resetOnClose?: boolean;
+    configureBuckets?: { name: string; configs: (string | Buffer)[] }[];
+  }
+  export default class S3rver {
+    constructor(options?: S3rverOptions);
+    run(): Promise<{ address: string; family: string; port: number }>;
+    close(): Promise<void>;
+  }
+}
