@@ -14,7 +14,8 @@ ensure_node_packages() {
   if [ ! -d node_modules ] || [ ! -f node_modules/.package-lock.json ] \
      || [ package-lock.json -nt node_modules/.package-lock.json ]; then
     log "installing npm packages (npm ci)"
-    npm ci --no-audit --no-fund
+    # Dev dependencies too: the build (TypeScript, Tailwind) and migrations (sequelize-cli) need them.
+    npm ci --include=dev --no-audit --no-fund
   fi
 }
 

@@ -7,7 +7,6 @@ export RUNNEL_DB_NAME="${RUNNEL_DB_NAME:-runnel}"
 export DATABASE_URL="${DATABASE_URL:-postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT/$RUNNEL_DB_NAME}"
 export PORT="${PORT:-3000}"
 export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
-export NODE_ENV=production
 # Object storage: the local fake (scripts/fakes/s3.mjs) and the app agree on these.
 export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
 export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-.runtime/s3}"
@@ -42,13 +41,13 @@ bash scripts/fakes.sh start
 
 if [ "${RUNNEL_SKIP_BUILD:-0}" != "1" ] || [ ! -f .next/BUILD_ID ]; then
   log "building the app"
-  node node_modules/next/dist/bin/next build
+  NODE_ENV=production node node_modules/next/dist/bin/next build
 fi
 
 log "serving Runnel on http://127.0.0.1:$PORT (Ctrl-C stops the app and the database)"
 # Own process group, so Ctrl-C reaches next-server's children too.
 set -m
-node node_modules/next/dist/bin/next start --hostname 127.0.0.1 --port "$PORT" &
+NODE_ENV=production node node_modules/next/dist/bin/next start --hostname 127.0.0.1 --port "$PORT" &
 APP_PID=$!
 set +m
 wait "$APP_PID"
