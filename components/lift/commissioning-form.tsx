@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { useAddCommissioningReading } from '@/lib/queries/lift';
-import { fromDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units/quantities';
+import { fromDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { CommissioningReadingSchema } from '@/lib/validations/ram-sites';
 import { NumberField } from './number-field';
 import { numberFrom, numberOrNull, useLiftForm } from './use-lift-form';

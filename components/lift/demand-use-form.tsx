@@ -9,7 +9,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { publishedFigureOf } from '@/lib/lift/demand';
 import type { DemandUseRecord } from '@/lib/lift/records';
 import { useSaveDemandUse } from '@/lib/queries/lift';
-import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
 import { figureQuantity, PER_UNIT } from './demand-format';
 import { NumberField } from './number-field';

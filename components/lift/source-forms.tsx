@@ -6,7 +6,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { WaterSourceRecord, YieldReadingRecord } from '@/lib/lift/records';
 import { useAddYieldReading, useSaveSource } from '@/lib/queries/lift';
-import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { WaterSourceSchema, YieldReadingSchema } from '@/lib/validations/water-sources';
 import { NumberField } from './number-field';
 import { numberOrNull, useLiftForm } from './use-lift-form';

@@ -6,7 +6,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { TankRecord } from '@/lib/lift/records';
 import { useSaveTank } from '@/lib/queries/lift';
-import { fromDisplay, inputValue, unitOf, type Quantity, type UnitSystem } from '@/lib/units/quantities';
+import { fromDisplay, inputValue, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { TankSchema } from '@/lib/validations/tanks';
 import { NumberField } from './number-field';
 import { numberFrom, numberOrNull, useLiftForm } from './use-lift-form';

@@ -2,13 +2,11 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import { lengthToM } from '@/hydraulics/index';
 import type { RouteChoice } from '@/lib/data/line-routes';
 import type { FieldErrors } from '@/lib/errors';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useCreateLine } from '@/lib/queries/lines';
-import { displayUnits, type UnitSystem } from '@/lib/units/display';
-import { formatChainage } from '@/lib/units/format';
+import { displayUnits, formatQuantity, fromDisplay, type UnitSystem } from '@/lib/units';
 import { fieldErrorsOf } from '@/lib/validations/common';
 import { CreateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
@@ -34,7 +32,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
       const text = String(f.get(name) ?? '').trim();
       if (text === '') return undefined;
       const v = Number(text);
-      return Number.isFinite(v) ? lengthToM(v, units.length) : Number.NaN;
+      return Number.isFinite(v) ? fromDisplay('chainage', v, units.system) : Number.NaN;
     };
     const parsed = CreateLineSchema.safeParse({ name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
     if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
@@ -55,7 +53,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
     <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto] lg:items-end" noValidate>
       <TextField id="name" label="Line name" placeholder="e.g. Spring box to trough" errors={fields.name} required />
       <SelectField id="routeId" label="Follows the route" errors={fields.routeId}>
-        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatChainage(r.firstChainageM, units)} to {formatChainage(r.lastChainageM, units)})</option>)}
+        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatQuantity('chainage', r.firstChainageM, units.system)} to {formatQuantity('chainage', r.lastChainageM, units.system)})</option>)}
       </SelectField>
       <TextField id="fromChainage" label={`From chainage (${units.length})`} inputMode="decimal" placeholder="route start" errors={fields.fromChainageM} />
       <TextField id="toChainage" label={`To chainage (${units.length})`} inputMode="decimal" placeholder="route end" errors={fields.toChainageM} />
