@@ -1,7 +1,7 @@
 import { findPipe, PIPE_SERIES } from '@/hydraulics/catalogue/index';
 import type { RamSiteRecord } from '@/lib/lift/records';
 import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units';
-import { numberFrom, numberOrNull } from './use-lift-form';
+import { numberFrom, numberOrNull } from './typed-number';
 
 /** The ram form's boxes, as typed (project units). */
 export interface RamSiteFormState {

@@ -1,13 +1,11 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import type { RouteChoice } from '@/lib/data/line-routes';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useCreateLine } from '@/lib/queries/lines';
 import { displayUnits, formatQuantity, fromDisplay, type UnitSystem } from '@/lib/units';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { CreateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -18,8 +16,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   const router = useRouter();
   const create = useCreateLine(projectId);
   const units = displayUnits(unitSystem);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   if (routes.length === 0) {
     return <p className="text-sm text-creek-700">This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line follows a route.</p>;
@@ -34,18 +31,13 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
       const v = Number(text);
       return Number.isFinite(v) ? fromDisplay('chainage', v, units.system) : Number.NaN;
     };
-    const parsed = CreateLineSchema.safeParse({ name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    setMessage(null);
+    const input = check(CreateLineSchema, { name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
+    if (!input) return;
     try {
-      const line = await create.mutateAsync(parsed.data);
+      const line = await create.mutateAsync(input);
       router.push(`/projects/${projectId}/lines/${line.id}`);
     } catch (error) {
-      if (error instanceof ApiError) {
-        setFields(error.fields ?? {});
-        setMessage(error.message);
-      } else setMessage('The line could not be saved. Try again.');
+      fail(error, 'The line could not be saved. Try again.');
     }
   }
 
