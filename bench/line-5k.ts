@@ -1,6 +1,6 @@
 import { analyzeLine, type LineInput, type LineStation } from '../hydraulics/index';
 import { profileScene } from '../lib/chart/profile-scene';
-import { displayUnits } from '../lib/units/display';
+import { displayUnits } from '../lib/units/index';
 import type { Benchmark } from './harness';
 
 const STATIONS = 5_000;

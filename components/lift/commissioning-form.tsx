@@ -5,10 +5,11 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { useAddCommissioningReading } from '@/lib/queries/lift';
-import { fromDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units/quantities';
+import { fromDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { CommissioningReadingSchema } from '@/lib/validations/ram-sites';
 import { NumberField } from './number-field';
-import { numberFrom, numberOrNull, useLiftForm } from './use-lift-form';
+import { useSaveForm } from '@/lib/forms/use-save-form';
+import { numberFrom, numberOrNull } from './typed-number';
 
 const EMPTY = {
   measuredOn: '', beats: '', deliveredMode: 'bucket', deliveredVolume: '', deliveredSeconds: '', deliveredFlow: '',
@@ -50,7 +51,7 @@ export function CommissioningForm({ projectId, siteId, units }: { projectId: str
   const [state, setState] = useState<State>(EMPTY);
   const set = (key: keyof State, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const add = useAddCommissioningReading(projectId, siteId);
-  const form = useLiftForm(CommissioningReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
+  const form = useSaveForm(CommissioningReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
   const f = form.fields;
   const id = (name: string) => `comm-${siteId.slice(0, 8)}-${name}`;
 

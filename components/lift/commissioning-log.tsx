@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import type { RamSiteView } from '@/lib/lift/summary';
 import { useDeleteCommissioningReading, useSaveRamSite } from '@/lib/queries/lift';
-import { formatNumber, formatPercent, formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatNumber, formatPercent, formatQuantity, type UnitSystem } from '@/lib/units';
 import { CommissioningForm } from './commissioning-form';
 import { PlanChecks } from './plan-checks';
 

@@ -4,7 +4,7 @@ import { PIPE_SERIES, pipesOfSeries } from '@/hydraulics/catalogue/index';
 import { SelectField } from '@/components/ui/field';
 import type { FieldErrors } from '@/lib/errors';
 import type { RouteOption } from '@/lib/lift/records';
-import { formatQuantity, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, unitOf, type UnitSystem } from '@/lib/units';
 import { NumberField } from './number-field';
 import type { RamSiteFormState } from './ram-site-form-state';
 
@@ -39,7 +39,7 @@ export function DeliveryPipeFields({ state, set, fields, routes, units }: Delive
       </SelectField>
       {custom ? (
         <>
-          <NumberField id="ram-deliveryBore" label="Delivery pipe bore" unit={unitOf('bore', units)} value={state.deliveryBore} onChange={(value) => set('deliveryBore', value)} errors={fields['deliveryPipe.insideDiameterM']} />
+          <NumberField id="ram-deliveryBore" label="Delivery pipe bore" unit={unitOf('diameter', units)} value={state.deliveryBore} onChange={(value) => set('deliveryBore', value)} errors={fields['deliveryPipe.insideDiameterM']} />
           <NumberField id="ram-hazenC" label="Hazen-Williams C" value={state.hazenC} onChange={(value) => set('hazenC', value)} errors={fields['deliveryPipe.hazenWilliamsC']} hint="About 150 for PE and PVC, 120 for galvanised steel" />
           <NumberField id="ram-rating" label="Pressure rating" unit={unitOf('pressure', units)} value={state.rating} onChange={(value) => set('rating', value)} errors={fields['deliveryPipe.pressureRatingPa']} hint="From the pipe maker; leave blank if not known" />
         </>

@@ -1,6 +1,6 @@
 import type { DemandUseInput } from '@/lib/validations/demand-uses';
 import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/storage/daily-patterns';
-import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from '@/lib/units';
 
 /** The quantity a use's per-unit figure is shown in. */
 export function figureQuantity(kind: DemandUseInput['kind']): Quantity {

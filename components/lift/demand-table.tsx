@@ -4,7 +4,7 @@ import { Fragment, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import type { DemandView } from '@/lib/lift/demand';
 import { useDeleteDemandUse } from '@/lib/queries/lift';
-import { formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, type UnitSystem } from '@/lib/units';
 import { amountText, deliveryText, figureQuantity, PER_UNIT } from './demand-format';
 import { DemandUseForm } from './demand-use-form';
 

@@ -9,11 +9,12 @@ import { FormMessage } from '@/components/ui/form-message';
 import { publishedFigureOf } from '@/lib/lift/demand';
 import type { DemandUseRecord } from '@/lib/lift/records';
 import { useSaveDemandUse } from '@/lib/queries/lift';
-import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
 import { figureQuantity, PER_UNIT } from './demand-format';
 import { NumberField } from './number-field';
-import { numberFrom, numberOrNull, useLiftForm } from './use-lift-form';
+import { useSaveForm } from '@/lib/forms/use-save-form';
+import { numberFrom, numberOrNull } from './typed-number';
 
 const FIGURES = { people: DEFAULT_DEMAND_FIGURES.perPerson, livestock: DEFAULT_DEMAND_FIGURES.livestock, garden: DEFAULT_DEMAND_FIGURES.garden, fixed: [] };
 const DEFAULT_FIGURE = { people: 'most-needs', livestock: 'cow-calf-pair', garden: 'vegetables-inch-per-week', fixed: '' };
@@ -34,7 +35,7 @@ export function DemandUseForm({ projectId, units, use, onDone }: { projectId: st
   const [state, setState] = useState(() => initialState(use, units));
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveDemandUse(projectId);
-  const form = useLiftForm(DemandUseSchema, (input) => save.mutateAsync({ id: use?.id ?? null, input }), use ? 'Use saved.' : 'Use added.');
+  const form = useSaveForm(DemandUseSchema, (input) => save.mutateAsync({ id: use?.id ?? null, input }), use ? 'Use saved.' : 'Use added.');
   const kind = state.kind as Kind;
   const published = publishedFigureOf({ kind, figureId: state.figureId || null, season: state.season as 'winter' | 'summer' });
   const id = (name: string) => `use-${use?.id.slice(0, 8) ?? 'new'}-${name}`;

@@ -3,7 +3,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { Panel } from '@/components/ui/panel';
 import { liftSummaryQuery } from '@/lib/queries/lift';
-import type { UnitSystem } from '@/lib/units/quantities';
+import type { UnitSystem } from '@/lib/units';
 import { DemandTable } from './demand-table';
 import { LiftWorkspaceSkeleton } from './lift-workspace-skeleton';
 import { RamSiteCard } from './ram-site-card';

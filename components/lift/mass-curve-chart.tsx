@@ -2,7 +2,7 @@
 
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from '@visx/xychart';
 import { useEffect, useState } from 'react';
-import { formatNumber, toDisplay, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatNumber, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
 
 interface Point { hour: number; volume: number }
 

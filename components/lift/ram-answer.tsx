@@ -1,5 +1,5 @@
 import type { RamPlanResult } from '@/hydraulics/ram/plan-types';
-import { formatDuration, formatNumber, formatPercent, formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatDuration, formatNumber, formatPercent, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Caution, PlanChecks } from './plan-checks';
 import { Readout } from './readout';
 

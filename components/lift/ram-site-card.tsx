@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import type { RouteOption } from '@/lib/lift/records';
 import type { RamSiteView } from '@/lib/lift/summary';
 import { useDeleteRamSite } from '@/lib/queries/lift';
-import { formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, type UnitSystem } from '@/lib/units';
 import { CommissioningLog } from './commissioning-log';
 import { RamAnswer } from './ram-answer';
 import { RamSiteForm, type RamSiteFormProps } from './ram-site-form';
@@ -32,7 +32,7 @@ export function RamSiteCard({ projectId, view, units, canEdit, sources, tanks, r
           <h2 id={`ram-${site.id}`} className="text-lg font-semibold text-creek-900">{site.name}</h2>
           <p className="text-sm text-creek-700">
             Fall {formatQuantity('head', site.fallM, units)}, lift {formatQuantity('head', site.liftM, units)}, drive flow {formatQuantity('flow', site.driveFlowM3s, units)};
-            {' '}drive pipe {formatQuantity('length', site.drivePipe.lengthM, units)} of {formatQuantity('bore', site.drivePipe.insideDiameterM, units, 2)} {site.drivePipe.material};
+            {' '}drive pipe {formatQuantity('length', site.drivePipe.lengthM, units)} of {formatQuantity('diameter', site.drivePipe.insideDiameterM, units, 2)} {site.drivePipe.material};
             {' '}delivery pipe {formatQuantity('length', view.deliveryLengthM, units)}{view.routeName ? ` along ${view.routeName}` : ''}.
             {view.source ? ` Drive water from ${view.source.name}.` : ''}
           </p>

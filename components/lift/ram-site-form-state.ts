@@ -1,7 +1,7 @@
 import { findPipe, PIPE_SERIES } from '@/hydraulics/catalogue/index';
 import type { RamSiteRecord } from '@/lib/lift/records';
-import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units/quantities';
-import { numberFrom, numberOrNull } from './use-lift-form';
+import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units';
+import { numberFrom, numberOrNull } from './typed-number';
 
 /** The ram form's boxes, as typed (project units). */
 export interface RamSiteFormState {
@@ -50,7 +50,7 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
     driveFlow: inputValue('flow', site.driveFlowM3s, units),
     fall: inputValue('head', site.fallM, units),
     driveLength: inputValue('length', drivePipe.lengthM, units),
-    driveBore: inputValue('bore', drivePipe.insideDiameterM, units),
+    driveBore: inputValue('diameter', drivePipe.insideDiameterM, units),
     driveMaterial: drivePipe.material,
     driveRigid: drivePipe.rigid === null ? 'auto' : drivePipe.rigid ? 'yes' : 'no',
     lift: inputValue('head', site.liftM, units),
@@ -58,7 +58,7 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
     deliveryLength: inputValue('length', deliveryPipe.lengthM, units),
     pipeSeries: pipe ? (SERIES_OF_PIPE.get(pipe.id) ?? 'custom') : 'custom',
     pipeId: pipe?.id ?? '',
-    deliveryBore: inputValue('bore', deliveryPipe.insideDiameterM, units),
+    deliveryBore: inputValue('diameter', deliveryPipe.insideDiameterM, units),
     hazenC: deliveryPipe.hazenWilliamsC === null ? '150' : String(deliveryPipe.hazenWilliamsC),
     rating: inputValue('pressure', deliveryPipe.pressureRatingPa, units),
     sizeClassId: site.sizeClassId ?? '',
@@ -85,7 +85,7 @@ export function ramSiteInputFrom(state: RamSiteFormState, units: UnitSystem) {
     fallM: si('head', state.fall),
     drivePipe: {
       lengthM: si('length', state.driveLength),
-      insideDiameterM: si('bore', state.driveBore),
+      insideDiameterM: si('diameter', state.driveBore),
       material: state.driveMaterial,
       rigid: state.driveRigid === 'auto' ? null : state.driveRigid === 'yes',
     },
@@ -94,7 +94,7 @@ export function ramSiteInputFrom(state: RamSiteFormState, units: UnitSystem) {
       routeId: state.routeId || null,
       lengthM: state.routeId ? null : siOrNull('length', state.deliveryLength),
       pipeId: catalogue && state.pipeId ? state.pipeId : null,
-      insideDiameterM: catalogue ? null : siOrNull('bore', state.deliveryBore),
+      insideDiameterM: catalogue ? null : siOrNull('diameter', state.deliveryBore),
       hazenWilliamsC: catalogue ? null : numberOrNull(state.hazenC),
       pressureRatingPa: catalogue ? null : siOrNull('pressure', state.rating),
     },

@@ -8,12 +8,12 @@ import { FormMessage } from '@/components/ui/form-message';
 import { planRamSite } from '@/lib/lift/ram-plan';
 import type { RamSiteRecord, RouteOption } from '@/lib/lift/records';
 import { useSaveRamSite } from '@/lib/queries/lift';
-import { formatDuration, formatQuantity, inputValue, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatDuration, formatQuantity, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { RamSiteSchema } from '@/lib/validations/ram-sites';
 import { DeliveryPipeFields } from './delivery-pipe-fields';
 import { NumberField } from './number-field';
 import { emptyRamSiteForm, ramSiteFormFrom, ramSiteInputFrom, type RamSiteFormState } from './ram-site-form-state';
-import { useLiftForm } from './use-lift-form';
+import { useSaveForm } from '@/lib/forms/use-save-form';
 
 export interface RamSiteFormProps {
   projectId: string;
@@ -30,7 +30,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm()));
   const set = <K extends keyof RamSiteFormState>(key: K, value: RamSiteFormState[K]) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveRamSite(projectId);
-  const form = useLiftForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.');
+  const form = useSaveForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.');
   const tankVolumeM3 = tanks.find((tank) => tank.id === state.tankId)?.volumeM3 ?? null;
   const preview = useMemo(() => {
     if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;
@@ -70,7 +70,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
         />
         <NumberField id={`${prefix}-fall`} label="Fall, source water level to pump" unit={unitOf('head', units)} value={state.fall} onChange={(value) => set('fall', value)} errors={form.fields.fallM} />
         <NumberField id={`${prefix}-driveLength`} label="Drive pipe length" unit={unitOf('length', units)} value={state.driveLength} onChange={(value) => set('driveLength', value)} errors={form.fields['drivePipe.lengthM']} />
-        <NumberField id={`${prefix}-driveBore`} label="Drive pipe bore" unit={unitOf('bore', units)} value={state.driveBore} onChange={(value) => set('driveBore', value)} errors={form.fields['drivePipe.insideDiameterM']} />
+        <NumberField id={`${prefix}-driveBore`} label="Drive pipe bore" unit={unitOf('diameter', units)} value={state.driveBore} onChange={(value) => set('driveBore', value)} errors={form.fields['drivePipe.insideDiameterM']} />
         <SelectField id={`${prefix}-driveMaterial`} label="Drive pipe material" value={state.driveMaterial} onChange={(event) => set('driveMaterial', event.target.value)} errors={form.fields['drivePipe.material']}>
           <option value="steel">Galvanised steel</option>
           <option value="pvc">PVC</option>

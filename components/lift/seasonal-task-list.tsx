@@ -8,7 +8,8 @@ import type { SeasonalTaskRecord } from '@/lib/lift/records';
 import { useAddSeasonalTask, useDeleteSeasonalTask, useGenerateSeasonalTasks, useUpdateSeasonalTask } from '@/lib/queries/lift';
 import { GenerateSeasonalTasksSchema, SeasonalTaskSchema } from '@/lib/validations/seasonal-tasks';
 import { NumberField } from './number-field';
-import { numberFrom, useLiftForm } from './use-lift-form';
+import { useSaveForm } from '@/lib/forms/use-save-form';
+import { numberFrom } from './typed-number';
 
 const KIND_LABEL: Record<SeasonalTaskRecord['kind'], string> = {
   'drain-down': 'Drain-down', refill: 'Refill', 'silt-cleaning': 'Silt', 'intake-screen': 'Intake screen', 'valve-exercise': 'Valves', other: 'Other',
@@ -57,7 +58,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
 function GenerateTasksForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ year: String(new Date().getFullYear()), hemisphere: 'north', firstFrost: '10-15', lastFrost: '04-20', replace: false });
   const generate = useGenerateSeasonalTasks(projectId);
-  const form = useLiftForm(GenerateSeasonalTasksSchema, (input) => generate.mutateAsync(input), 'Tasks added for the year.');
+  const form = useSaveForm(GenerateSeasonalTasksSchema, (input) => generate.mutateAsync(input), 'Tasks added for the year.');
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     await form.submit({ year: numberFrom(state.year), hemisphere: state.hemisphere, firstFrost: state.firstFrost, lastFrost: state.lastFrost || null, replace: state.replace });
@@ -86,7 +87,7 @@ function GenerateTasksForm({ projectId }: { projectId: string }) {
 function AddTaskForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ title: '', dueOn: '', kind: 'other' });
   const add = useAddSeasonalTask(projectId);
-  const form = useLiftForm(SeasonalTaskSchema, (input) => add.mutateAsync(input), 'Task added.');
+  const form = useSaveForm(SeasonalTaskSchema, (input) => add.mutateAsync(input), 'Task added.');
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (await form.submit({ ...state })) setState({ title: '', dueOn: '', kind: 'other' });

@@ -6,10 +6,11 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { WaterSourceRecord, YieldReadingRecord } from '@/lib/lift/records';
 import { useAddYieldReading, useSaveSource } from '@/lib/queries/lift';
-import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { WaterSourceSchema, YieldReadingSchema } from '@/lib/validations/water-sources';
 import { NumberField } from './number-field';
-import { numberOrNull, useLiftForm } from './use-lift-form';
+import { useSaveForm } from '@/lib/forms/use-save-form';
+import { numberOrNull } from './typed-number';
 
 const siOrNull = (quantity: 'flow' | 'volume', text: string, units: UnitSystem) => {
   const value = numberOrNull(text);
@@ -26,7 +27,7 @@ export function SourceForm({ projectId, units, source, readings, onDone }: {
   });
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveSource(projectId);
-  const form = useLiftForm(WaterSourceSchema, (input) => save.mutateAsync({ id: source?.id ?? null, input }), source ? 'Source saved.' : 'Source added.');
+  const form = useSaveForm(WaterSourceSchema, (input) => save.mutateAsync({ id: source?.id ?? null, input }), source ? 'Source saved.' : 'Source added.');
   const id = (name: string) => `source-${source?.id.slice(0, 8) ?? 'new'}-${name}`;
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -76,7 +77,7 @@ export function YieldReadingForm({ projectId, sourceId, units }: { projectId: st
   const [state, setState] = useState(empty);
   const set = (key: keyof typeof empty, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const add = useAddYieldReading(projectId, sourceId);
-  const form = useLiftForm(YieldReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
+  const form = useSaveForm(YieldReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
   const id = (name: string) => `yield-${sourceId.slice(0, 8)}-${name}`;
   const exampleBucketM3 = fromDisplay('volume', units === 'us' ? 5 : 20, units);
 

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import type { SourceYieldView } from '@/lib/lift/source-yield';
 import { useDeleteSource, useDeleteYieldReading } from '@/lib/queries/lift';
-import { formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatQuantity, type UnitSystem } from '@/lib/units';
 import { PlanChecks } from './plan-checks';
 import { Readout } from './readout';
 import { SourceForm, YieldReadingForm } from './source-forms';

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import type { TankView } from '@/lib/lift/summary';
 import { useDeleteTank } from '@/lib/queries/lift';
-import { formatDuration, formatNumber, formatQuantity, type UnitSystem } from '@/lib/units/quantities';
+import { formatDuration, formatNumber, formatQuantity, type UnitSystem } from '@/lib/units';
 import { VolumeChart } from './mass-curve-chart';
 import { PlanChecks } from './plan-checks';
 import { Readout } from './readout';

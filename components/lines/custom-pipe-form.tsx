@@ -1,9 +1,8 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import { lengthToM, pressureToPa } from '@/hydraulics/index';
 import type { FieldErrors } from '@/lib/errors';
-import { fromDisplay, type DisplayUnits } from '@/lib/units/display';
+import { fromDisplay, type DisplayUnits } from '@/lib/units';
 import { fieldErrorsOf } from '@/lib/validations/common';
 import { CustomPipeSchema, type LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
@@ -23,7 +22,7 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
     const num = (name: string) => (String(f.get(name) ?? '').trim() === '' ? Number.NaN : Number(f.get(name)));
     // The unit converters refuse NaN; an empty or non-numeric field stays NaN for zod to name.
     const safe = (v: number, convert: (v: number) => number) => (Number.isFinite(v) ? convert(v) : Number.NaN);
-    const dia = (name: string) => safe(num(name), (v) => lengthToM(v, units.diameter));
+    const dia = (name: string) => safe(num(name), (v) => fromDisplay('diameter', v, units.system));
     const label = String(f.get('label') ?? '').trim();
     const id = `custom-${label.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'pipe'}`;
     const candidate = {
@@ -34,10 +33,10 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
       outsideDiameterM: dia('outside'),
       insideDiameterM: dia('inside'),
       wallM: (dia('outside') - dia('inside')) / 2,
-      pressureRatingPa: safe(num('rating'), (v) => pressureToPa(v, units.pressure)),
+      pressureRatingPa: safe(num('rating'), (v) => fromDisplay('pressure', v, units.system)),
       hazenWilliamsC: num('c'),
       roughnessM: dia('roughness'),
-      waveSpeedMs: safe(num('waveSpeed'), (v) => fromDisplay.velocity(v, units)),
+      waveSpeedMs: safe(num('waveSpeed'), (v) => fromDisplay('velocity', v, units.system)),
       source: String(f.get('source') ?? '').trim(),
     };
     const parsed = CustomPipeSchema.safeParse(candidate);
@@ -77,7 +76,7 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
         {field('rating', 'Pressure rating', ['pressureRatingPa'], units.pressure)}
         {field('c', 'Hazen-Williams C', ['hazenWilliamsC'])}
         {field('roughness', 'Roughness', ['roughnessM'], units.diameter)}
-        {field('waveSpeed', 'Wave speed', ['waveSpeedMs'], units.velocityLabel)}
+        {field('waveSpeed', 'Wave speed', ['waveSpeedMs'], units.velocity)}
         {field('source', 'Where the figures come from', ['source'])}
         <div className="flex items-end gap-3 sm:col-span-3 lg:col-span-5">
           <Button type="submit" tone="quiet">Add custom pipe</Button>

@@ -4,8 +4,7 @@ import { useState } from 'react';
 import type { LineDeviceKind } from '@/hydraulics/index';
 import { DEVICE_STYLE } from '@/lib/chart/profile-palette';
 import { addDevice, removeDevice } from '@/lib/lines/edit-design';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units/display';
-import { formatChainage, formatLength } from '@/lib/units/format';
+import { formatQuantity, fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { DEVICE_KINDS } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
@@ -34,7 +33,7 @@ export function DeviceTable({ design, units, change, canEdit, tankLevels }: {
             </select>
           </div>
           <UnitNumberInput id="new-device-chainage" label="at chainage" unit={units.length} value={undefined} optional
-            onCommit={(v) => (v === undefined ? null : change(addDevice(design, { kind, chainageM: fromDisplay.length(v, units) }), `add ${DEVICE_STYLE[kind].label.toLowerCase()}`))} />
+            onCommit={(v) => (v === undefined ? null : change(addDevice(design, { kind, chainageM: fromDisplay('length', v, units.system) }), `add ${DEVICE_STYLE[kind].label.toLowerCase()}`))} />
           <p className="pb-1 text-xs text-creek-600">Type a chainage and press Enter, or use “Place on the profile” above the chart.</p>
         </div>
       )}
@@ -50,15 +49,15 @@ export function DeviceTable({ design, units, change, canEdit, tankLevels }: {
               const tank = tankLevels.find((t) => Math.abs(t.chainageM - d.chainageM) < 1e-6);
               return (
                 <tr key={`${d.kind}-${d.chainageM}-${i}`} className="border-t border-creek-50">
-                  <td className="tabular px-2 py-1.5">{formatChainage(d.chainageM, units)}</td>
+                  <td className="tabular px-2 py-1.5">{formatQuantity('chainage', d.chainageM, units.system)}</td>
                   <td className="px-2 py-1.5">{DEVICE_STYLE[d.kind].label}</td>
                   <td className="tabular px-2 py-1.5">
                     {d.kind !== 'break-pressure-tank' ? '—' : canEdit ? (
                       <UnitNumberInput id={`tank-level-${i}`} label="Tank water level" unit={units.length} compact optional
-                        value={d.waterLevelM === undefined ? undefined : toDisplay.length(d.waterLevelM, units)}
-                        onCommit={(v) => change({ ...design, devices: design.devices.map((x, k) => (k === i ? (v === undefined ? { kind: x.kind, chainageM: x.chainageM, ...(x.label ? { label: x.label } : {}) } : { ...x, waterLevelM: fromDisplay.length(v, units) }) : x)) }, 'change a tank level')} />
-                    ) : tank ? formatLength(tank.waterLevelM, units) : 'ground level'}
-                    {d.kind === 'break-pressure-tank' && d.waterLevelM === undefined && tank && <span className="ml-1 text-creek-600">(ground: {formatLength(tank.waterLevelM, units)})</span>}
+                        value={d.waterLevelM === undefined ? undefined : toDisplay('length', d.waterLevelM, units.system)}
+                        onCommit={(v) => change({ ...design, devices: design.devices.map((x, k) => (k === i ? (v === undefined ? { kind: x.kind, chainageM: x.chainageM, ...(x.label ? { label: x.label } : {}) } : { ...x, waterLevelM: fromDisplay('length', v, units.system) }) : x)) }, 'change a tank level')} />
+                    ) : tank ? formatQuantity('length', tank.waterLevelM, units.system) : 'ground level'}
+                    {d.kind === 'break-pressure-tank' && d.waterLevelM === undefined && tank && <span className="ml-1 text-creek-600">(ground: {formatQuantity('length', tank.waterLevelM, units.system)})</span>}
                   </td>
                   <td className="px-2 py-1.5 text-creek-700">{d.label ?? ''}</td>
                   {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={() => change(removeDevice(design, i), `remove ${DEVICE_STYLE[d.kind].label.toLowerCase()}`)}>Remove</Button></td>}

@@ -1,7 +1,7 @@
 'use client';
 
 import type { LineEnd, LineFlow, LineStart } from '@/hydraulics/index';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units/display';
+import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
@@ -18,8 +18,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   firstGroundM: number;
   lastGroundM: number;
 }) {
-  const L = (m: number) => toDisplay.length(m, units);
-  const toM = (v: number) => fromDisplay.length(v, units);
+  const L = (m: number) => toDisplay('length', m, units.system);
+  const toM = (v: number) => fromDisplay('length', v, units.system);
   const setStart = (start: LineStart, label: string) => change({ ...design, start }, label);
   const setEnd = (end: LineEnd, label: string) => change({ ...design, end }, label);
   const setFlow = (flow: LineFlow, label: string) => change({ ...design, flow }, label);
@@ -67,8 +67,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
         )}
         {end.kind === 'outlet' && (
           <UnitNumberInput id="end-residual" label="Residual pressure wanted" unit={`${units.head} of head`} optional
-            value={end.residualHeadM === undefined ? undefined : toDisplay.head(end.residualHeadM, units)} disabled={!canEdit} hint="Empty: the settings' minimum"
-            onCommit={(v) => setEnd({ kind: 'outlet', elevationM: end.elevationM, ...(v === undefined ? {} : { residualHeadM: fromDisplay.head(v, units) }) }, 'change the residual wanted')} />
+            value={end.residualHeadM === undefined ? undefined : toDisplay('head', end.residualHeadM, units.system)} disabled={!canEdit} hint="Empty: the settings' minimum"
+            onCommit={(v) => setEnd({ kind: 'outlet', elevationM: end.elevationM, ...(v === undefined ? {} : { residualHeadM: fromDisplay('head', v, units.system) }) }, 'change the residual wanted')} />
         )}
       </fieldset>
 
@@ -79,8 +79,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
           <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'find'} onChange={() => setFlow({ kind: 'find' }, 'find the flow')} /> Find the flow the line carries by gravity</label>
         </div>
         {flow.kind === 'design' && (
-          <UnitNumberInput id="design-flow" label="Design flow" unit={units.flowLabel} digits={3} value={toDisplay.flow(flow.flowM3s, units)} disabled={!canEdit}
-            onCommit={(v) => (v! < 0 ? 'The flow cannot be negative' : setFlow({ kind: 'design', flowM3s: fromDisplay.flow(v!, units) }, 'change the design flow'))} />
+          <UnitNumberInput id="design-flow" label="Design flow" unit={units.flow} digits={3} value={toDisplay('designFlow', flow.flowM3s, units.system)} disabled={!canEdit}
+            onCommit={(v) => (v! < 0 ? 'The flow cannot be negative' : setFlow({ kind: 'design', flowM3s: fromDisplay('designFlow', v!, units.system) }, 'change the design flow'))} />
         )}
       </fieldset>
     </div>

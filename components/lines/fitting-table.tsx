@@ -3,8 +3,7 @@
 import { useState } from 'react';
 import { FITTING_LOSS_COEFFICIENTS, type FittingKind } from '@/hydraulics/index';
 import { addFitting, removeFitting } from '@/lib/lines/edit-design';
-import { fromDisplay, type DisplayUnits } from '@/lib/units/display';
-import { formatChainage } from '@/lib/units/format';
+import { formatQuantity, fromDisplay, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
 import { UnitNumberInput } from './unit-number-input';
@@ -27,7 +26,7 @@ export function FittingTable({ design, units, change, canEdit }: { design: LineD
             </select>
           </div>
           <UnitNumberInput id="new-fitting-chainage" label="at chainage" unit={units.length} value={undefined} optional
-            onCommit={(v) => (v === undefined ? null : change(addFitting(design, { chainageM: fromDisplay.length(v, units), k: entry.k, label: entry.description }), 'add a fitting'))} />
+            onCommit={(v) => (v === undefined ? null : change(addFitting(design, { chainageM: fromDisplay('length', v, units.system), k: entry.k, label: entry.description }), 'add a fitting'))} />
           <p className="max-w-md pb-1 text-xs text-creek-600">K from {entry.source}. K varies with make and size.</p>
         </div>
       )}
@@ -37,7 +36,7 @@ export function FittingTable({ design, units, change, canEdit }: { design: LineD
           <tbody>
             {design.fittings.map((f, i) => (
               <tr key={`${f.chainageM}-${i}`} className="border-t border-creek-50">
-                <td className="tabular px-2 py-1.5">{formatChainage(f.chainageM, units)}</td>
+                <td className="tabular px-2 py-1.5">{formatQuantity('chainage', f.chainageM, units.system)}</td>
                 <td className="px-2 py-1.5">{f.label ?? '—'}</td>
                 <td className="tabular px-2 py-1.5">{f.k}</td>
                 {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={() => change(removeFitting(design, i), 'remove a fitting')}>Remove</Button></td>}

@@ -1,6 +1,5 @@
 import type { LineAnswers } from '@/lib/lines/answers';
-import type { DisplayUnits } from '@/lib/units/display';
-import { formatChainage, formatFlow, formatHeadPressure } from '@/lib/units/format';
+import { formatHeadPressure, formatQuantity, type DisplayUnits } from '@/lib/units';
 
 function Card({ label, value, note, tone }: { label: string; value: string; note: string; tone: 'ok' | 'warn' | 'bad' }) {
   const colours = { ok: 'border-moss-100 bg-moss-50', warn: 'border-ochre-100 bg-ochre-50', bad: 'border-clay-100 bg-clay-50' }[tone];
@@ -21,9 +20,9 @@ export function LineAnswersStrip({ answers, units, temperatureC }: { answers: Li
   const warningsTone = a.counts.danger > 0 ? 'bad' : a.counts.warning > 0 ? 'warn' : 'ok';
   return (
     <section aria-label="Answers" className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4" data-testid="line-answers">
-      <Card label="Flow delivered" value={formatFlow(a.flowM3s, units)} note={a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
-      <Card label="Residual at the end" value={formatHeadPressure(a.endResidualHeadM, units, temperatureC)} note={`wanted ${formatHeadPressure(a.endTargetHeadM, units, temperatureC)}`} tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'} />
-      <Card label="Worst static pressure" value={formatHeadPressure(a.worstStatic.headM, units, temperatureC)} note={`at ch. ${formatChainage(a.worstStatic.chainageM, units)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units, temperatureC)}`} tone={staticOk ? 'ok' : 'bad'} />
+      <Card label="Flow delivered" value={formatQuantity('designFlow', a.flowM3s, units.system)} note={a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
+      <Card label="Residual at the end" value={formatHeadPressure(a.endResidualHeadM, units.system, temperatureC)} note={`wanted ${formatHeadPressure(a.endTargetHeadM, units.system, temperatureC)}`} tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'} />
+      <Card label="Worst static pressure" value={formatHeadPressure(a.worstStatic.headM, units.system, temperatureC)} note={`at ch. ${formatQuantity('chainage', a.worstStatic.chainageM, units.system)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units.system, temperatureC)}`} tone={staticOk ? 'ok' : 'bad'} />
       <Card label="Warnings" value={`${a.counts.danger} danger · ${a.counts.warning} warning`} note={`${a.counts.info} advice`} tone={warningsTone} />
     </section>
   );

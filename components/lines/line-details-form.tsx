@@ -1,11 +1,9 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import type { LineRecord } from '@/lib/data/lines';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useSaveForm } from '@/lib/forms/use-save-form';
 import { useUpdateLine } from '@/lib/queries/lines';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { LINE_STATUS_LABELS, LINE_STATUSES, UpdateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
@@ -14,23 +12,17 @@ import { FormMessage } from '@/components/ui/form-message';
 /** Name, status, checker and notes: the title block of the report. */
 export function LineDetailsForm({ line, baseRevision, onSaved }: { line: LineRecord; baseRevision: () => number; onSaved: (revision: number) => void }) {
   const update = useUpdateLine(line.id);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
+  const form = useSaveForm(UpdateLineSchema, async (input) => {
+    const saved = await update.mutateAsync(input);
+    onSaved(saved.revision);
+    return saved;
+  }, (saved) => `Saved as revision ${saved.revision}.`);
+  const { fields, note: message } = form;
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const f = new FormData(event.currentTarget);
-    const parsed = UpdateLineSchema.safeParse({ name: f.get('name'), status: f.get('status'), checkedBy: f.get('checkedBy'), notes: f.get('notes'), baseRevision: baseRevision() });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    try {
-      const saved = await update.mutateAsync(parsed.data);
-      onSaved(saved.revision);
-      setMessage({ text: `Saved as revision ${saved.revision}.`, tone: 'ok' });
-    } catch (error) {
-      if (error instanceof ApiError) setFields(error.fields ?? {});
-      setMessage({ text: error instanceof Error ? error.message : 'Not saved.', tone: 'error' });
-    }
+    await form.submit({ name: f.get('name'), status: f.get('status'), checkedBy: f.get('checkedBy'), notes: f.get('notes'), baseRevision: baseRevision() });
   }
 
   return (

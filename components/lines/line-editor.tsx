@@ -2,7 +2,7 @@
 
 import { useQuery } from '@tanstack/react-query';
 import { lineQuery, lineStationsQuery } from '@/lib/queries/lines';
-import type { UnitSystem } from '@/lib/units/display';
+import type { UnitSystem } from '@/lib/units';
 import { Skeleton } from '@/components/ui/panel';
 import { LineWorkspace } from './line-workspace';
 

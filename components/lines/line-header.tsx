@@ -6,8 +6,7 @@ import { standaloneSvg } from '@/lib/chart/svg-node';
 import type { LineRecord } from '@/lib/data/lines';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
-import type { DisplayUnits } from '@/lib/units/display';
-import { formatChainage } from '@/lib/units/format';
+import { formatQuantity, type DisplayUnits } from '@/lib/units';
 import { LINE_STATUS_LABELS } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
 import type { useLineDraft } from './use-line-draft';
@@ -45,7 +44,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
         <div>
           <h1 className="text-2xl font-semibold text-creek-900">{line.name}</h1>
           <p className="text-sm text-creek-700">
-            Along {line.routeName ?? 'a removed route'}{c ? `, ch. ${formatChainage(c[0], units)} to ${formatChainage(c[c.length - 1], units)}` : ''} ·
+            Along {line.routeName ?? 'a removed route'}{c ? `, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}` : ''} ·
             {' '}revision {draft.revision} · {LINE_STATUS_LABELS[line.status]}{line.checkedBy ? ` · checked by ${line.checkedBy}` : ''}
           </p>
         </div>

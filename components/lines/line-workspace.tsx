@@ -11,8 +11,7 @@ import { addDevice } from '@/lib/lines/edit-design';
 import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
-import { displayUnits, type UnitSystem } from '@/lib/units/display';
-import { formatChainage } from '@/lib/units/format';
+import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Panel } from '@/components/ui/panel';
 import { DeviceTable } from './device-table';
 import { EndsForm } from './ends-form';
@@ -74,7 +73,7 @@ export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit
   }
 
   function place(chainageM: number) {
-    const problem = draft.change(addDevice(design, { kind: placeKind, chainageM }), `place ${placeKind.replace(/-/g, ' ')} at ch. ${formatChainage(chainageM, units)}`);
+    const problem = draft.change(addDevice(design, { kind: placeKind, chainageM }), `place ${placeKind.replace(/-/g, ' ')} at ch. ${formatQuantity('chainage', chainageM, units.system)}`);
     setNote(problem);
     setPlacing(false);
   }

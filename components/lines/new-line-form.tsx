@@ -1,15 +1,11 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
-import { lengthToM } from '@/hydraulics/index';
+import type { FormEvent } from 'react';
 import type { RouteChoice } from '@/lib/data/line-routes';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useCreateLine } from '@/lib/queries/lines';
-import { displayUnits, type UnitSystem } from '@/lib/units/display';
-import { formatChainage } from '@/lib/units/format';
-import { fieldErrorsOf } from '@/lib/validations/common';
+import { displayUnits, formatQuantity, fromDisplay, type UnitSystem } from '@/lib/units';
 import { CreateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -20,8 +16,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   const router = useRouter();
   const create = useCreateLine(projectId);
   const units = displayUnits(unitSystem);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   if (routes.length === 0) {
     return <p className="text-sm text-creek-700">This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line follows a route.</p>;
@@ -34,20 +29,15 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
       const text = String(f.get(name) ?? '').trim();
       if (text === '') return undefined;
       const v = Number(text);
-      return Number.isFinite(v) ? lengthToM(v, units.length) : Number.NaN;
+      return Number.isFinite(v) ? fromDisplay('chainage', v, units.system) : Number.NaN;
     };
-    const parsed = CreateLineSchema.safeParse({ name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    setMessage(null);
+    const input = check(CreateLineSchema, { name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
+    if (!input) return;
     try {
-      const line = await create.mutateAsync(parsed.data);
+      const line = await create.mutateAsync(input);
       router.push(`/projects/${projectId}/lines/${line.id}`);
     } catch (error) {
-      if (error instanceof ApiError) {
-        setFields(error.fields ?? {});
-        setMessage(error.message);
-      } else setMessage('The line could not be saved. Try again.');
+      fail(error, 'The line could not be saved. Try again.');
     }
   }
 
@@ -55,7 +45,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
     <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto] lg:items-end" noValidate>
       <TextField id="name" label="Line name" placeholder="e.g. Spring box to trough" errors={fields.name} required />
       <SelectField id="routeId" label="Follows the route" errors={fields.routeId}>
-        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatChainage(r.firstChainageM, units)} to {formatChainage(r.lastChainageM, units)})</option>)}
+        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatQuantity('chainage', r.firstChainageM, units.system)} to {formatQuantity('chainage', r.lastChainageM, units.system)})</option>)}
       </SelectField>
       <TextField id="fromChainage" label={`From chainage (${units.length})`} inputMode="decimal" placeholder="route start" errors={fields.fromChainageM} />
       <TextField id="toChainage" label={`To chainage (${units.length})`} inputMode="decimal" placeholder="route end" errors={fields.toChainageM} />

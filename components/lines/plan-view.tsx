@@ -3,7 +3,7 @@
 import { useMemo, useRef } from 'react';
 import type { LineDevice, LineWarning } from '@/hydraulics/index';
 import { planScene, type PlanStation } from '@/lib/chart/plan-scene';
-import type { DisplayUnits } from '@/lib/units/display';
+import type { DisplayUnits } from '@/lib/units';
 import { SvgNodeView } from './svg-node-view';
 
 const SIZE = { width: 320, height: 320 };

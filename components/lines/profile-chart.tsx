@@ -6,7 +6,7 @@ import { indexAtOrBefore } from '@/lib/chart/profile-frame';
 import { profileScene } from '@/lib/chart/profile-scene';
 import type { ProfileChartData } from '@/lib/chart/profile-types';
 import { panView, zoomView, type ChainageView } from '@/lib/chart/profile-view';
-import type { DisplayUnits } from '@/lib/units/display';
+import type { DisplayUnits } from '@/lib/units';
 import { SvgNodeView } from './svg-node-view';
 
 export interface ProfileChartProps {

@@ -1,8 +1,7 @@
 'use client';
 
 import type { ProfileChartData } from '@/lib/chart/profile-types';
-import type { DisplayUnits } from '@/lib/units/display';
-import { formatChainage, formatHeadPressure, formatLength, formatVelocity } from '@/lib/units/format';
+import { formatHeadPressure, formatQuantity, type DisplayUnits } from '@/lib/units';
 
 /** Values at the point under the pointer, in the project's units (head and pressure together). */
 export function ProfileReadout({ data, index, units }: { data: ProfileChartData; index: number | null; units: DisplayUnits }) {
@@ -13,14 +12,14 @@ export function ProfileReadout({ data, index, units }: { data: ProfileChartData;
   const t = data.settings.waterTemperatureC;
   const stretch = data.stretches[p.stretchIndex[index]];
   const items: [string, string][] = [
-    ['Chainage', formatChainage(p.chainageM[index], units)],
-    ['Ground', formatLength(p.groundElevationM[index], units, 2)],
-    ['Pipe', formatLength(p.pipeElevationM[index], units, 2)],
-    ['Hydraulic grade', formatLength(p.hydraulicGradeM[index], units, 2)],
-    ['Static head', formatLength(p.staticHeadM[index], units, 2)],
-    ['Static pressure', formatHeadPressure(p.staticPressureHeadM[index], units, t)],
-    ['Flowing pressure', formatHeadPressure(p.pressureHeadM[index], units, t)],
-    ['Velocity', formatVelocity(p.velocityMs[index], units)],
+    ['Chainage', formatQuantity('chainage', p.chainageM[index], units.system)],
+    ['Ground', formatQuantity('length', p.groundElevationM[index], units.system, 2)],
+    ['Pipe', formatQuantity('length', p.pipeElevationM[index], units.system, 2)],
+    ['Hydraulic grade', formatQuantity('length', p.hydraulicGradeM[index], units.system, 2)],
+    ['Static head', formatQuantity('length', p.staticHeadM[index], units.system, 2)],
+    ['Static pressure', formatHeadPressure(p.staticPressureHeadM[index], units.system, t)],
+    ['Flowing pressure', formatHeadPressure(p.pressureHeadM[index], units.system, t)],
+    ['Velocity', formatQuantity('velocity', p.velocityMs[index], units.system)],
     ['Pipe here', stretch?.pipe.label ?? '—'],
   ];
   return (

@@ -5,7 +5,7 @@ import type { LineAnalysis } from '@/hydraulics/index';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
 import { cellText, stationColumns, stationRows, stretchColumns, tableCsv, type ResultColumn } from '@/lib/lines/results-table';
-import type { DisplayUnits } from '@/lib/units/display';
+import type { DisplayUnits } from '@/lib/units';
 import { Button } from '@/components/ui/button';
 
 const PAGE_ROWS = 50;

@@ -1,7 +1,7 @@
 'use client';
 
 import { DEFAULT_LINE_SETTINGS, type LineSettings } from '@/hydraulics/index';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units/display';
+import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
@@ -28,9 +28,9 @@ export function SettingsForm({ design, units, change, canEdit }: { design: LineD
       onCommit={(v) => set({ [key]: v === undefined ? undefined : fromUnit(v) }, `change ${label.toLowerCase()}`)}
     />
   );
-  const L = [(m: number) => toDisplay.length(m, units), (v: number) => fromDisplay.length(v, units)] as const;
-  const V = [(m: number) => toDisplay.velocity(m, units), (v: number) => fromDisplay.velocity(v, units)] as const;
-  const H = [(m: number) => toDisplay.head(m, units), (v: number) => fromDisplay.head(v, units)] as const;
+  const L = [(m: number) => toDisplay('length', m, units.system), (v: number) => fromDisplay('length', v, units.system)] as const;
+  const V = [(m: number) => toDisplay('velocity', m, units.system), (v: number) => fromDisplay('velocity', v, units.system)] as const;
+  const H = [(m: number) => toDisplay('head', m, units.system), (v: number) => fromDisplay('head', v, units.system)] as const;
   const same = [(v: number) => v, (v: number) => v] as const;
   const d = DEFAULT_LINE_SETTINGS;
   const inUnits = (m: number, conv: readonly [(m: number) => number, unknown], unit: string) => `${Number(conv[0](m).toFixed(2))} ${unit}`;
@@ -49,8 +49,8 @@ export function SettingsForm({ design, units, change, canEdit }: { design: LineD
       {field('waterTemperatureC', 'Water temperature', '°C', ...same, `${d.waterTemperatureC} °C`)}
       {field('safetyFactor', 'Safety factor on ratings', '×', ...same, `${d.safetyFactor}`)}
       {field('defaultCoverM', 'Pipe cover', units.length, ...L, inUnits(d.defaultCoverM, L, units.length))}
-      {field('velocityMinMs', 'Lowest velocity', units.velocityLabel, ...V, inUnits(d.velocityMinMs, V, units.velocityLabel))}
-      {field('velocityMaxMs', 'Highest velocity', units.velocityLabel, ...V, inUnits(d.velocityMaxMs, V, units.velocityLabel))}
+      {field('velocityMinMs', 'Lowest velocity', units.velocity, ...V, inUnits(d.velocityMinMs, V, units.velocity))}
+      {field('velocityMaxMs', 'Highest velocity', units.velocity, ...V, inUnits(d.velocityMaxMs, V, units.velocity))}
       {field('minResidualHeadM', 'Minimum residual at outlets', units.head, ...H, inUnits(d.minResidualHeadM, H, units.head))}
       {field('siphonLimitHeadM', 'Siphon limit', units.head, ...H, inUnits(d.siphonLimitHeadM, H, units.head))}
       {field('airPointToleranceM', 'High/low point tolerance', units.length, ...L, inUnits(d.airPointToleranceM, L, units.length))}

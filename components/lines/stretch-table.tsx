@@ -3,8 +3,7 @@
 import { useState } from 'react';
 import type { StretchResult } from '@/hydraulics/index';
 import { DesignEditError, mergeWithNext, moveJoint, setStretchPipe, splitStretch } from '@/lib/lines/edit-design';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units/display';
-import { formatChainage, formatHeadPressure, formatLength, formatVelocity } from '@/lib/units/format';
+import { formatHeadPressure, formatQuantity, fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
 import { CustomPipeForm } from './custom-pipe-form';
@@ -32,14 +31,14 @@ export function StretchTable({ design, results, units, change, canEdit, temperat
   temperatureC: number;
 }) {
   const [message, setMessage] = useState<string | null>(null);
-  const L = (m: number) => toDisplay.length(m, units);
-  const toM = (v: number) => fromDisplay.length(v, units);
+  const L = (m: number) => toDisplay('length', m, units.system);
+  const toM = (v: number) => fromDisplay('length', v, units.system);
   return (
     <div className="space-y-3">
       {canEdit && (
         <div className="flex flex-wrap items-end gap-3">
           <UnitNumberInput id="split-at" label="Split a stretch at chainage" unit={units.length} value={undefined} optional
-            onCommit={(v) => (v === undefined ? null : attempt(() => splitStretch(design, toM(v)), change, `split at ch. ${formatChainage(toM(v), units)}`))} />
+            onCommit={(v) => (v === undefined ? null : attempt(() => splitStretch(design, toM(v)), change, `split at ch. ${formatQuantity('chainage', toM(v), units.system)}`))} />
           <p className="pb-1 text-xs text-creek-600">Type a chainage and press Enter; each half keeps the pipe, then pick a new one.</p>
         </div>
       )}
@@ -65,20 +64,20 @@ export function StretchTable({ design, results, units, change, canEdit, temperat
               return (
                 <tr key={`${s.fromM}-${i}`} className="border-t border-creek-50 align-top" data-testid="stretch-row">
                   <td className="px-2 py-1.5">{i + 1}</td>
-                  <td className="tabular px-2 py-1.5">{formatChainage(s.fromM, units)}</td>
+                  <td className="tabular px-2 py-1.5">{formatQuantity('chainage', s.fromM, units.system)}</td>
                   <td className="tabular px-2 py-1.5">
                     {canEdit && i < design.stretches.length - 1 ? (
                       <UnitNumberInput id={`joint-${i}`} label={`End of stretch ${i + 1}`} unit={units.length} compact value={L(s.toM)} digits={1}
                         onCommit={(v) => attempt(() => moveJoint(design, i, toM(v!)), change, `move the joint after stretch ${i + 1}`)} />
-                    ) : formatChainage(s.toM, units)}
+                    ) : formatQuantity('chainage', s.toM, units.system)}
                   </td>
                   <td className="px-2 py-1.5">
                     <PipePicker id={`stretch-${i}`} pipeId={pipeId} custom={design.pipes} disabled={!canEdit}
                       onPick={(id) => setMessage(attempt(() => setStretchPipe(design, i, id), change, `change the pipe of stretch ${i + 1}`))} />
                   </td>
-                  <td className="tabular px-2 py-1.5">{r ? formatVelocity(r.velocityMs, units) : '—'}</td>
+                  <td className="tabular px-2 py-1.5">{r ? formatQuantity('velocity', r.velocityMs, units.system) : '—'}</td>
                   <td className={`tabular px-2 py-1.5 ${over ? 'font-semibold text-clay-700' : ''}`}>
-                    {r ? `${formatHeadPressure(r.maxStaticPressureHeadM, units, temperatureC)} / ${formatLength(r.allowableHeadM, units)}` : '—'}
+                    {r ? `${formatHeadPressure(r.maxStaticPressureHeadM, units.system, temperatureC)} / ${formatQuantity('length', r.allowableHeadM, units.system)}` : '—'}
                   </td>
                   {canEdit && (
                     <td className="px-2 py-1.5">

@@ -3,7 +3,7 @@
 import type { LineWarning } from '@/hydraulics/index';
 import { localiseWarningText } from '@/lib/lines/localise-text';
 import { fixWords, placeWords, SEVERITY_WORDS, WARNING_TITLES } from '@/lib/lines/warning-words';
-import type { DisplayUnits } from '@/lib/units/display';
+import type { DisplayUnits } from '@/lib/units';
 import { Button } from '@/components/ui/button';
 
 const CHIP = {

@@ -1,34 +1,29 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import type { FieldErrors } from '@/lib/errors';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useCreateRoute } from '@/lib/queries/routes';
-import { fieldErrorsOf } from '@/lib/validations/common';
 import { CreateRouteSchema } from '@/lib/validations/routes';
 
 /** Starts an empty route to sketch on the profile or type in, for when no survey exists yet. */
 export function NewSketchRouteForm({ projectId }: { projectId: string }) {
   const router = useRouter();
   const create = useCreateRoute(projectId);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, check, fail } = useFormErrors();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const parsed = CreateRouteSchema.safeParse({ name: new FormData(event.currentTarget).get('sketch-name') });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
+    const input = check(CreateRouteSchema, { name: new FormData(event.currentTarget).get('sketch-name') });
+    if (!input) return;
     try {
-      const route = await create.mutateAsync(parsed.data);
+      const route = await create.mutateAsync(input);
       router.push(`/projects/${projectId}/routes/${route.id}`);
     } catch (error) {
-      if (error instanceof ApiError) setFields(error.fields ?? {});
-      setMessage(error instanceof Error ? error.message : 'Not created.');
+      fail(error, 'Not created.');
     }
   }
 

@@ -3,7 +3,7 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { useRef, type MouseEvent } from 'react';
-import { fromDisplayLength, lengthUnitOf, toDisplayLength } from '@/lib/display-units';
+import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import type { ProfilePoint } from '@/lib/routes/profile-series';
 import type { UnitSystem } from '@/models/project';
 
@@ -36,28 +36,28 @@ type Pt = { x: number; y: number };
  */
 export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch }: RouteProfileProps) {
   const svgRef = useRef<SVGSVGElement>(null);
-  const d = (p: ProfilePoint): Pt => ({ x: toDisplayLength(p.chainageM, units), y: toDisplayLength(p.elevationM, units) });
+  const d = (p: ProfilePoint): Pt => ({ x: toDisplay('length', p.chainageM, units), y: toDisplay('length', p.elevationM, units) });
   const rawD = raw.map(d);
   const cleanD = cleaned.map(d);
   const all = [...rawD, ...cleanD];
   const xs = all.map((p) => p.x);
   const ys = all.map((p) => p.y);
   // A sketch keeps its area while points are added, so the chart does not jump under the pointer.
-  const xDomain: [number, number] = [Math.min(0, ...xs), Math.max(sketch ? toDisplayLength(sketch.lengthM, units) : 1, ...xs)];
-  const yLow = Math.min(...(sketch ? [toDisplayLength(sketch.lowM, units)] : []), ...ys);
-  const yHigh = Math.max(...(sketch ? [toDisplayLength(sketch.highM, units)] : []), ...ys);
+  const xDomain: [number, number] = [Math.min(0, ...xs), Math.max(sketch ? toDisplay('length', sketch.lengthM, units) : 1, ...xs)];
+  const yLow = Math.min(...(sketch ? [toDisplay('length', sketch.lowM, units)] : []), ...ys);
+  const yHigh = Math.max(...(sketch ? [toDisplay('length', sketch.highM, units)] : []), ...ys);
   const pad = Math.max(1, (yHigh - yLow) * 0.08);
   const x = scaleLinear().domain(xDomain).range([M.left, W - M.right]).nice();
   const y = scaleLinear().domain([yLow - pad, yHigh + pad]).range([H - M.bottom, M.top]).nice();
   const path = line<Pt>().x((p) => x(p.x)).y((p) => y(p.y));
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
 
   function onClick(e: MouseEvent<SVGRectElement>) {
     const svg = svgRef.current;
     const ctm = svg?.getScreenCTM();
     if (!svg || !ctm || !sketch) return;
     const pt = new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse());
-    sketch.onAdd(fromDisplayLength(x.invert(pt.x), units), fromDisplayLength(y.invert(pt.y), units));
+    sketch.onAdd(fromDisplay('length', x.invert(pt.x), units), fromDisplay('length', y.invert(pt.y), units));
   }
 
   return (

@@ -2,7 +2,7 @@
 
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
-import { formatDistance, formatLength } from '@/lib/display-units';
+import { formatDistance, formatNumber, formatQuantity } from '@/lib/units';
 import type { UnitSystem } from '@/models/project';
 import { projectRoutesQuery } from '@/lib/queries/routes';
 import { FORMAT_LABELS } from './format-labels';
@@ -42,8 +42,8 @@ export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
                 {r.notes && <p className="max-w-md truncate text-xs text-creek-600">{r.notes}</p>}
               </td>
               <td className="tabular px-4 py-2.5">{r.pointCount > 1 ? formatDistance(r.lengthM, unitSystem) : '—'}</td>
-              <td className="tabular px-4 py-2.5">{r.pointCount > 1 ? formatLength(r.slopeLengthM, unitSystem, 0) : '—'}</td>
-              <td className="tabular px-4 py-2.5">{r.pointCount.toLocaleString('en-GB')}</td>
+              <td className="tabular px-4 py-2.5">{r.pointCount > 1 ? formatQuantity('length', r.slopeLengthM, unitSystem, 0) : '—'}</td>
+              <td className="tabular px-4 py-2.5">{formatNumber(r.pointCount, 0)}</td>
               <td className="px-4 py-2.5 text-creek-700">
                 {r.sourceFormat ? FORMAT_LABELS[r.sourceFormat] : '—'}
                 {r.sourceFile && <span className="block max-w-[14rem] truncate text-xs text-creek-600">{r.sourceFile.fileName}</span>}

@@ -1,5 +1,5 @@
-import { lengthFromM, lengthToM, projectToLocalPlan, type LineDevice, type LineWarning } from '../../hydraulics/index';
-import type { DisplayUnits } from '../units/display';
+import { projectToLocalPlan, type LineDevice, type LineWarning } from '../../hydraulics/index';
+import { fromDisplay, toDisplay, type DisplayUnits } from '../units/index';
 import { DEVICE_STYLE, FONT_FAMILY, PROFILE_COLOURS, ZONE_FILLS } from './profile-palette';
 import { warningRange } from './profile-marks';
 import { el, type SvgNode } from './svg-node';
@@ -53,8 +53,8 @@ export function planScene(
     const { fromM, toM } = warningRange(w);
     return el('polyline', { points: polyline(fromM, toM), fill: 'none', stroke: ZONE_FILLS[w.severity]!.edge, 'stroke-width': 7, 'stroke-opacity': 0.45, 'stroke-linecap': 'round', 'data-code': w.code });
   });
-  const scaleUnits = niceLength(lengthFromM(metresPerPx * 80, u.length));
-  const scaleM = lengthToM(scaleUnits, u.length);
+  const scaleUnits = niceLength(toDisplay('length', metresPerPx * 80, u.system));
+  const scaleM = fromDisplay('length', scaleUnits, u.system);
   const root = el('svg', { viewBox: `0 0 ${size.width} ${size.height}`, width: size.width, height: size.height, role: 'img', 'aria-label': 'Plan of the route', 'font-family': FONT_FAMILY },
     el('rect', { x: 0, y: 0, width: size.width, height: size.height, fill: PROFILE_COLOURS.paper }),
     el('g', { 'data-layer': 'plan-zones' }, ...zones),

@@ -1,7 +1,5 @@
 import { scaleLinear } from 'd3-scale';
-import { lengthFromM } from '../../hydraulics/index';
-import { toDisplay } from '../units/display';
-import { fixed } from '../units/format';
+import { formatNumber, pressureOfHead, toDisplay } from '../units/index';
 import { FONT_FAMILY, PROFILE_COLOURS } from './profile-palette';
 import type { ProfileFrame } from './profile-types';
 import { el, type SvgNode } from './svg-node';
@@ -18,13 +16,13 @@ function tickDigits(ticks: number[]): number {
 /** Chainage ticks under both panels, elevation and head on the left, pressure on the right. */
 export function axesLayer(frame: ProfileFrame): SvgNode {
   const u = frame.units;
-  const unit = (m: number) => lengthFromM(m, u.length);
+  const unit = (m: number) => toDisplay('length', m, u.system);
   const xs = scaleLinear().domain([unit(frame.fromM), unit(frame.toM)]).range([frame.plotLeft, frame.plotRight]);
   const xTicks = xs.ticks(Math.max(Math.floor((frame.plotRight - frame.plotLeft) / 90), 2));
   const xd = tickDigits(xTicks);
   const ye = scaleLinear().domain(frame.elevationDomainM.map(unit)).range([frame.elevationBottom, frame.elevationTop]);
   const yp = scaleLinear().domain(frame.pressureDomainM.map(unit)).range([frame.pressureBottom, frame.pressureTop]);
-  const pressureOf = (headM: number) => toDisplay.pressureOfHead(headM, u);
+  const pressureOf = (headM: number) => pressureOfHead(headM, u.system);
   const pp = scaleLinear().domain(frame.pressureDomainM.map(pressureOf)).range([frame.pressureBottom, frame.pressureTop]);
   const eTicks = ye.ticks(6);
   const hTicks = yp.ticks(4);
@@ -33,13 +31,13 @@ export function axesLayer(frame: ProfileFrame): SvgNode {
     el('path', { d: `M${frame.plotLeft},${y}L${frame.plotRight},${y}`, stroke: PROFILE_COLOURS.ink, 'stroke-width': 1 }),
     ...xTicks.flatMap((t) => [
       el('path', { d: `M${r2(xs(t))},${y}L${r2(xs(t))},${y + 4}`, stroke: PROFILE_COLOURS.ink }),
-      labels && text(xs(t), y + 15, fixed(t, xd), 'middle'),
+      labels && text(xs(t), y + 15, formatNumber(t, xd), 'middle'),
     ]).filter((n): n is SvgNode => Boolean(n)),
   ];
   const grid = (ticks: number[], scale: (v: number) => number, role: string) =>
     ticks.map((t) => el('path', { d: `M${frame.plotLeft},${r2(scale(t))}L${frame.plotRight},${r2(scale(t))}`, stroke: PROFILE_COLOURS.gridline, 'stroke-width': 1, 'data-role': role }));
   const side = (ticks: number[], scale: (v: number) => number, x: number, anchor: 'start' | 'end') =>
-    ticks.map((t) => text(anchor === 'end' ? x - 6 : x + 6, scale(t) + 4, fixed(t, tickDigits(ticks)), anchor));
+    ticks.map((t) => text(anchor === 'end' ? x - 6 : x + 6, scale(t) + 4, formatNumber(t, tickDigits(ticks)), anchor));
   const midE = (frame.elevationTop + frame.elevationBottom) / 2;
   const midP = (frame.pressureTop + frame.pressureBottom) / 2;
   return el('g', { 'data-layer': 'axes', 'font-family': FONT_FAMILY },
@@ -53,6 +51,6 @@ export function axesLayer(frame: ProfileFrame): SvgNode {
     el('g', { 'data-role': 'pressure-axis' }, ...side(pTicks, pp, frame.plotRight, 'start'),
       text(frame.width - 14, midP, `Pressure (${u.pressure})`, 'middle', { transform: `rotate(90 ${r2(frame.width - 14)} ${r2(midP)})`, 'font-weight': 'bold' })),
     text(frame.plotLeft, frame.elevationTop - 8, 'Ground, pipe and grade lines', 'start', { 'font-weight': 'bold' }),
-    text(frame.plotRight, frame.elevationTop - 8, `Vertical exaggeration \u00d7${fixed(frame.exaggeration, frame.exaggeration < 10 ? 1 : 0)}`, 'end', { 'data-role': 'exaggeration' }),
+    text(frame.plotRight, frame.elevationTop - 8, `Vertical exaggeration \u00d7${formatNumber(frame.exaggeration, frame.exaggeration < 10 ? 1 : 0)}`, 'end', { 'data-role': 'exaggeration' }),
     text(frame.plotLeft, frame.pressureTop - 8, 'Pressure in the pipe', 'start', { 'font-weight': 'bold' }));
 }

@@ -1,5 +1,5 @@
 import type { LineWarning } from '../../hydraulics/index';
-import { formatChainage } from '../units/format';
+import { formatQuantity } from '../units/index';
 import { indexAtOrBefore } from './profile-frame';
 import { DEVICE_STYLE, PROFILE_COLOURS, ZONE_FILLS } from './profile-palette';
 import { deviceSymbol, outletSymbol, sourceSymbol } from './profile-symbols';
@@ -59,7 +59,7 @@ export function devicesLayer(data: ProfileChartData, frame: ProfileFrame, option
     const tank = d.kind === 'break-pressure-tank' ? data.tanks.find((t) => Math.abs(t.chainageM - d.chainageM) < 1e-6) : undefined;
     const y = frame.yElevation(tank ? tank.waterLevelM : valueAt(chainageM, pipeElevationM, d.chainageM));
     return el('g', { 'data-kind': d.kind, 'data-chainage-m': r2(d.chainageM) },
-      el('title', {}, `${DEVICE_STYLE[d.kind].label} at ${formatChainage(d.chainageM, u)}`),
+      el('title', {}, `${DEVICE_STYLE[d.kind].label} at ${formatQuantity('chainage', d.chainageM, u.system)}`),
       deviceSymbol(d.kind, frame.x(d.chainageM), y));
   });
   const n = chainageM.length;

@@ -1,5 +1,5 @@
 import type { LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
-import type { DisplayUnits } from '../units/display';
+import type { DisplayUnits } from '../units/index';
 
 /** What the profile drawing needs from a line analysis (typed arrays or plain arrays both do). */
 export interface ProfileChartData {

@@ -2,6 +2,7 @@ import 'server-only';
 import { createHash, randomUUID } from 'node:crypto';
 import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
+import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
 import { deleteObject, putObject } from '../storage';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
@@ -43,20 +44,7 @@ export function recordsOfSurvey(survey: ParsedSurvey): PointRecord[] {
       const prev = survey.points[i - 1];
       slopeM += Math.hypot(p.chainageM - prev.chainageM, p.elevationM - prev.elevationM);
     }
-    return {
-      latitude: p.lat ?? null,
-      longitude: p.lon ?? null,
-      chainageM: p.chainageM,
-      slopeChainageM: slopeM,
-      elevationM: p.elevationM,
-      rawElevationM: p.elevationM,
-      label: p.label ?? null,
-      heightSource: p.heightSource,
-      confidenceM: p.confidence ?? null,
-      recordedAt: p.time ?? null,
-      excluded: false,
-      dismissedChecks: [],
-    };
+    return surveyPointRecord(p, slopeM);
   });
 }
 

@@ -1,5 +1,5 @@
 import type { HeightSource } from '../../hydraulics/survey/height-source';
-import { fromDisplayLength } from '../display-units';
+import { fromDisplay } from '../units/index';
 import type { FieldErrors } from '../errors';
 import type { UnitSystem } from '../../models/project';
 import type { LengthUnit } from '../survey/cells';
@@ -67,7 +67,7 @@ export function withInspection(draft: MappingDraft, inspection: SurveyInspection
 /** A typed height in project units: metres, NaN when blank or not a number (zod then names the field). */
 function typedHeightM(text: string, units: UnitSystem): number {
   const value = Number(text.trim().replace(',', '.'));
-  return text.trim() === '' || !Number.isFinite(value) ? NaN : fromDisplayLength(value, units);
+  return text.trim() === '' || !Number.isFinite(value) ? NaN : fromDisplay('length', value, units);
 }
 
 /** The draft as import options, checked by the same zod schema the server uses. */

@@ -1,4 +1,5 @@
 import { routeGpsWarning } from '../routes/gps-warning';
+import { surveyPointRecord } from '../routes/new-point';
 import { thinProfile } from '../routes/profile-series';
 import { detectRouteProposals } from '../routes/proposals';
 import type { RoutePointView } from '../routes/types';
@@ -10,21 +11,7 @@ const SHOWN_WARNINGS = 100;
 
 /** The parsed survey as the route page will see it once saved (same checks, same warning). */
 export function pointViewsOf(survey: ParsedSurvey): RoutePointView[] {
-  return survey.points.map((p, i) => ({
-    seq: i,
-    latitude: p.lat ?? null,
-    longitude: p.lon ?? null,
-    chainageM: p.chainageM,
-    slopeChainageM: null,
-    elevationM: p.elevationM,
-    rawElevationM: p.elevationM,
-    label: p.label ?? null,
-    heightSource: p.heightSource,
-    confidenceM: p.confidence ?? null,
-    recordedAt: p.time ?? null,
-    excluded: false,
-    dismissedChecks: [],
-  }));
+  return survey.points.map((p, i) => ({ seq: i, ...surveyPointRecord(p, null) }));
 }
 
 export function buildImportPreview(survey: ParsedSurvey): ImportPreview {

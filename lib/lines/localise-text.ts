@@ -1,6 +1,4 @@
-import type { DisplayUnits } from '../units/display';
-import { toDisplay } from '../units/display';
-import { fixed } from '../units/format';
+import { formatNumber, formatPlainNumber, toDisplay, type DisplayUnits } from '../units/index';
 
 const NUMBER = String.raw`(-?\d+(?:\.\d+)?)`;
 
@@ -12,10 +10,10 @@ const NUMBER = String.raw`(-?\d+(?:\.\d+)?)`;
  */
 export function localiseWarningText(text: string, u: DisplayUnits): string {
   if (u.system === 'metric') return text;
-  const length = (m: string, digits: number) => fixed(toDisplay.length(Number(m), u), digits).replace(/,/g, '');
+  const length = (m: string, digits: number) => formatPlainNumber(toDisplay('length', Number(m), u.system), digits);
   return text
-    .replace(new RegExp(`${NUMBER} L/s`, 'g'), (_, v: string) => `${fixed(toDisplay.flow(Number(v) / 1000, u), 1)} ${u.flowLabel}`)
-    .replace(new RegExp(`${NUMBER} m/s`, 'g'), (_, v: string) => `${fixed(toDisplay.velocity(Number(v), u), 2)} ${u.velocityLabel}`)
+    .replace(new RegExp(`${NUMBER} L/s`, 'g'), (_, v: string) => `${formatNumber(toDisplay('designFlow', Number(v) / 1000, u.system), 1)} ${u.flow}`)
+    .replace(new RegExp(`${NUMBER} m/s`, 'g'), (_, v: string) => `${formatNumber(toDisplay('velocity', Number(v), u.system), 2)} ${u.velocity}`)
     .replace(new RegExp(`ch\\. ${NUMBER}\u2013${NUMBER} m\\b`, 'g'), (_, a: string, b: string) => `ch. ${length(a, 0)}\u2013${length(b, 0)} ${u.length}`)
     .replace(new RegExp(`ch\\. ${NUMBER} m\\b`, 'g'), (_, a: string) => `ch. ${length(a, 0)} ${u.length}`)
     .replace(new RegExp(`${NUMBER} m\\b(?!/)`, 'g'), (_, v: string) => `${length(v, 1)} ${u.length}`);

@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { profileRows, type LineProfile, type StretchResult } from '../../hydraulics/index';
-import { toDisplay, type DisplayUnits } from '../units/display';
+import { pressureOfHead, toDisplay, type DisplayUnits } from '../units/index';
 
 /** One column of a results table: heading with its unit and the value in display units. */
 export interface ResultColumn<R> {
@@ -14,38 +14,38 @@ type Row = ReturnType<typeof profileRows>[number];
 
 /** Columns of the per-station table (head and pressure side by side). */
 export function stationColumns(u: DisplayUnits, temperatureC: number): ResultColumn<Row>[] {
-  const L = (m: number) => toDisplay.length(m, u);
-  const P = (m: number) => toDisplay.pressureOfHead(m, u, temperatureC);
+  const L = (m: number) => toDisplay('length', m, u.system);
+  const P = (m: number) => pressureOfHead(m, u.system, temperatureC);
   return [
     { key: 'chainage', heading: `Chainage (${u.length})`, value: (r) => L(r.chainageM), digits: 1 },
     { key: 'ground', heading: `Ground (${u.length})`, value: (r) => L(r.groundElevationM), digits: 2 },
     { key: 'pipe', heading: `Pipe (${u.length})`, value: (r) => L(r.pipeElevationM), digits: 2 },
     { key: 'static', heading: `Static head (${u.length})`, value: (r) => L(r.staticHeadM), digits: 2 },
     { key: 'grade', heading: `Hydraulic grade (${u.length})`, value: (r) => L(r.hydraulicGradeM), digits: 2 },
-    { key: 'staticHead', heading: `Static pressure head (${u.head})`, value: (r) => toDisplay.head(r.staticPressureHeadM, u), digits: 2 },
+    { key: 'staticHead', heading: `Static pressure head (${u.head})`, value: (r) => toDisplay('head', r.staticPressureHeadM, u.system), digits: 2 },
     { key: 'staticPressure', heading: `Static pressure (${u.pressure})`, value: (r) => P(r.staticPressureHeadM), digits: 1 },
-    { key: 'flowingHead', heading: `Flowing pressure head (${u.head})`, value: (r) => toDisplay.head(r.pressureHeadM, u), digits: 2 },
+    { key: 'flowingHead', heading: `Flowing pressure head (${u.head})`, value: (r) => toDisplay('head', r.pressureHeadM, u.system), digits: 2 },
     { key: 'flowingPressure', heading: `Flowing pressure (${u.pressure})`, value: (r) => P(r.pressureHeadM), digits: 1 },
-    { key: 'velocity', heading: `Velocity (${u.velocityLabel})`, value: (r) => toDisplay.velocity(r.velocityMs, u), digits: 3 },
+    { key: 'velocity', heading: `Velocity (${u.velocity})`, value: (r) => toDisplay('velocity', r.velocityMs, u.system), digits: 3 },
     { key: 'stretch', heading: 'Stretch', value: (r) => r.stretchIndex + 1 },
   ];
 }
 
 /** Columns of the per-stretch table. */
 export function stretchColumns(u: DisplayUnits, temperatureC: number): ResultColumn<StretchResult>[] {
-  const L = (m: number) => toDisplay.length(m, u);
+  const L = (m: number) => toDisplay('length', m, u.system);
   return [
     { key: 'stretch', heading: 'Stretch', value: (s) => s.index + 1 },
     { key: 'from', heading: `From (${u.length})`, value: (s) => L(s.fromM), digits: 1 },
     { key: 'to', heading: `To (${u.length})`, value: (s) => L(s.toM), digits: 1 },
     { key: 'length', heading: `Pipe length (${u.length})`, value: (s) => L(s.slopeLengthM), digits: 1 },
     { key: 'pipe', heading: 'Pipe', value: (s) => s.pipe.label },
-    { key: 'velocity', heading: `Velocity (${u.velocityLabel})`, value: (s) => toDisplay.velocity(s.velocityMs, u), digits: 3 },
-    { key: 'friction', heading: `Friction loss (${u.head})`, value: (s) => toDisplay.head(s.frictionLossM, u), digits: 2 },
-    { key: 'maxStatic', heading: `Highest static head (${u.head})`, value: (s) => toDisplay.head(s.maxStaticPressureHeadM, u), digits: 1 },
-    { key: 'allowable', heading: `Allowed head (${u.head})`, value: (s) => toDisplay.head(s.allowableHeadM, u), digits: 1 },
-    { key: 'allowablePressure', heading: `Allowed pressure (${u.pressure})`, value: (s) => toDisplay.pressureOfHead(s.allowableHeadM, u, temperatureC), digits: 0 },
-    { key: 'surge', heading: `Sudden-stop surge (${u.head})`, value: (s) => toDisplay.head(s.surgeHeadM, u), digits: 1 },
+    { key: 'velocity', heading: `Velocity (${u.velocity})`, value: (s) => toDisplay('velocity', s.velocityMs, u.system), digits: 3 },
+    { key: 'friction', heading: `Friction loss (${u.head})`, value: (s) => toDisplay('head', s.frictionLossM, u.system), digits: 2 },
+    { key: 'maxStatic', heading: `Highest static head (${u.head})`, value: (s) => toDisplay('head', s.maxStaticPressureHeadM, u.system), digits: 1 },
+    { key: 'allowable', heading: `Allowed head (${u.head})`, value: (s) => toDisplay('head', s.allowableHeadM, u.system), digits: 1 },
+    { key: 'allowablePressure', heading: `Allowed pressure (${u.pressure})`, value: (s) => pressureOfHead(s.allowableHeadM, u.system, temperatureC), digits: 0 },
+    { key: 'surge', heading: `Sudden-stop surge (${u.head})`, value: (s) => toDisplay('head', s.surgeHeadM, u.system), digits: 1 },
   ];
 }
 

@@ -1,6 +1,5 @@
 import { findPipe, type LineFix, type WarningCode, type WarningSeverity } from '../../hydraulics/index';
-import type { DisplayUnits } from '../units/display';
-import { formatChainage } from '../units/format';
+import { formatQuantity, type DisplayUnits } from '../units/index';
 
 /** Runnel's short titles for the core's warning codes. */
 export const WARNING_TITLES: Record<WarningCode, string> = {
@@ -32,7 +31,7 @@ export function fixWords(fixes: readonly LineFix[], u: DisplayUnits): string {
   return fixes
     .map((fix) =>
       fix.kind === 'add-device'
-        ? `Add ${DEVICE_WORDS[fix.device]} at ch. ${formatChainage(fix.chainageM, u)}`
+        ? `Add ${DEVICE_WORDS[fix.device]} at ch. ${formatQuantity('chainage', fix.chainageM, u.system)}`
         : `Use ${findPipe(fix.pipeId)?.label ?? fix.pipeId} on stretch ${fix.stretchIndex + 1}`,
     )
     .join('; ');
@@ -40,5 +39,5 @@ export function fixWords(fixes: readonly LineFix[], u: DisplayUnits): string {
 
 /** Where a warning applies, in the project's units. */
 export function placeWords(at: { chainageM: number } | { fromM: number; toM: number }, u: DisplayUnits): string {
-  return 'chainageM' in at ? `ch. ${formatChainage(at.chainageM, u)}` : `ch. ${formatChainage(at.fromM, u)} to ${formatChainage(at.toM, u)}`;
+  return 'chainageM' in at ? `ch. ${formatQuantity('chainage', at.chainageM, u.system)}` : `ch. ${formatQuantity('chainage', at.fromM, u.system)} to ${formatQuantity('chainage', at.toM, u.system)}`;
 }

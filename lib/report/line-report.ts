@@ -7,8 +7,7 @@ import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
 import { lineAnswers } from '../lines/answers';
 import { LINE_STATUS_LABELS } from '../validations/lines';
-import { displayUnits, type UnitSystem } from '../units/display';
-import { formatChainage, formatFlow, formatHeadPressure } from '../units/format';
+import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
@@ -25,7 +24,7 @@ const CONTENT_WIDTH = 842 - 2 * PAGE.margin;
 
 function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType<typeof displayUnits>): string {
   const c = analysis.points.chainageM;
-  return `${line.routeName ?? 'route removed'}, ch. ${formatChainage(c[0], units)} to ${formatChainage(c[c.length - 1], units)}`;
+  return `${line.routeName ?? 'route removed'}, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}`;
 }
 
 /**
@@ -53,16 +52,16 @@ export async function lineReportPdf({ project, line, analysis, generatedAt }: Li
     ['Prepared by', line.preparedBy ?? '\u2014'],
     ['Checked by', line.checkedBy || 'not yet checked'],
     ['Status', LINE_STATUS_LABELS[line.status]],
-    ['Units', u.system === 'us' ? 'US customary (ft, gpm, psi)' : 'Metric (m, L/s, kPa)'],
+    ['Units', unitSystemName(u.system)],
   ], 4, CONTENT_WIDTH);
 
   const answers = lineAnswers(analysis);
   const t = analysis.settings.waterTemperatureC;
   doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
-    `Flow delivered: ${formatFlow(answers.flowM3s, u)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
-      `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u, t)}). ` +
-      `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u, t)} at ch. ${formatChainage(answers.worstStatic.chainageM, u)} ` +
-      `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u, t)}). ` +
+    `Flow delivered: ${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
+      `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
+      `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u.system, t)} at ch. ${formatQuantity('chainage', answers.worstStatic.chainageM, u.system)} ` +
+      `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u.system, t)}). ` +
       `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice.`,
   ));
   doc.moveDown(0.4);

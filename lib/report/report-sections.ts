@@ -3,8 +3,7 @@ import { DEFAULT_LINE_SETTINGS, type LineAnalysis, type LineDevice } from '../..
 import { LINE_CAUTIONS } from '../lines/cautions';
 import { localiseWarningText } from '../lines/localise-text';
 import { placeWords, SEVERITY_WORDS, WARNING_TITLES } from '../lines/warning-words';
-import { toDisplay, type DisplayUnits } from '../units/display';
-import { fixed, formatChainage, formatFlow, formatHeadPressure, formatLength, formatPressure, formatTemperature, formatVelocity } from '../units/format';
+import { formatHeadPressure, formatNumber, formatQuantity, formatTemperature, toDisplay, type DisplayUnits } from '../units/index';
 import { heading, INK, table } from './pdf-table';
 import { pdfText } from './pdf-text';
 
@@ -28,9 +27,9 @@ export function stretchSchedule(doc: Doc, a: LineAnalysis, u: DisplayUnits): voi
       { heading: 'Allowed', width: 120, align: 'right' }, { heading: 'Velocity', width: 60, align: 'right' }, { heading: 'Friction loss', width: 60, align: 'right' },
     ],
     a.stretches.map((s) => [
-      String(s.index + 1), formatChainage(s.fromM, u), formatChainage(s.toM, u), formatLength(s.slopeLengthM, u),
-      s.pipe.label, `${s.pipe.sdr ? `SDR ${s.pipe.sdr}` : s.pipe.sidr ? `SIDR ${s.pipe.sidr}` : s.pipe.material}, ${formatPressure(s.pipe.pressureRatingPa, u)}`,
-      formatHeadPressure(s.allowableHeadM, u, t), formatVelocity(s.velocityMs, u), formatLength(s.frictionLossM, u, 2),
+      String(s.index + 1), formatQuantity('chainage', s.fromM, u.system), formatQuantity('chainage', s.toM, u.system), formatQuantity('length', s.slopeLengthM, u.system),
+      s.pipe.label, `${s.pipe.sdr ? `SDR ${s.pipe.sdr}` : s.pipe.sidr ? `SIDR ${s.pipe.sidr}` : s.pipe.material}, ${formatQuantity('pressure', s.pipe.pressureRatingPa, u.system)}`,
+      formatHeadPressure(s.allowableHeadM, u.system, t), formatQuantity('velocity', s.velocityMs, u.system), formatQuantity('length', s.frictionLossM, u.system, 2),
     ]),
   );
 }
@@ -52,8 +51,8 @@ export function deviceList(doc: Doc, a: LineAnalysis, devices: readonly LineDevi
     [{ heading: 'Chainage', width: 90, align: 'right' }, { heading: 'Device', width: 160 }, { heading: 'Pipe elevation', width: 100, align: 'right' }, { heading: 'Notes', width: 412 }],
     [...devices].sort((x, y) => x.chainageM - y.chainageM).map((d) => {
       const tank = d.kind === 'break-pressure-tank' ? a.tanks.find((t) => Math.abs(t.chainageM - d.chainageM) < 1e-6) : undefined;
-      const notes = [tank ? `water level ${formatLength(tank.waterLevelM, u)}` : '', d.label ?? ''].filter(Boolean).join('; ');
-      return [formatChainage(d.chainageM, u), DEVICE_NAMES[d.kind], formatLength(pipeAt(d.chainageM), u), notes];
+      const notes = [tank ? `water level ${formatQuantity('length', tank.waterLevelM, u.system)}` : '', d.label ?? ''].filter(Boolean).join('; ');
+      return [formatQuantity('chainage', d.chainageM, u.system), DEVICE_NAMES[d.kind], formatQuantity('length', pipeAt(d.chainageM), u.system), notes];
     }),
   );
 }
@@ -82,22 +81,22 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   const method = s.frictionMethod === 'hazen-williams' ? 'Hazen-Williams (C per pipe below)' : 'Darcy-Weisbach with Colebrook friction factor (roughness per pipe below)';
   const rows: [string, string][] = [
     ['Friction method', method],
-    ['Water temperature', `${formatTemperature(s.waterTemperatureC, u)} (viscosity, vapour pressure and plastic pipe derating)`],
-    ['Safety factor on pipe ratings', `${fixed(s.safetyFactor, 2)} (allowed head = rating derated for temperature / safety factor)`],
-    ['Velocity band', `${formatVelocity(s.velocityMinMs, u)} to ${formatVelocity(s.velocityMaxMs, u)}`],
-    ['Residual pressure wanted at the end', formatHeadPressure(a.end.targetResidualHeadM, u, s.waterTemperatureC)],
-    ['Pipe cover where the survey gives none', formatLength(s.defaultCoverM, u, 2)],
-    ['High and low point tolerance', formatLength(s.airPointToleranceM, u, 2)],
-    ['Siphon limit / vapour limit', `${formatLength(a.limits.siphonLimitHeadM, u)} / ${formatLength(a.limits.vapourLimitHeadM, u)} of suction at ${formatLength(a.limits.siteAltitudeM, u, 0)} altitude`],
+    ['Water temperature', `${formatTemperature(s.waterTemperatureC, u.system)} (viscosity, vapour pressure and plastic pipe derating)`],
+    ['Safety factor on pipe ratings', `${formatNumber(s.safetyFactor, 2)} (allowed head = rating derated for temperature / safety factor)`],
+    ['Velocity band', `${formatQuantity('velocity', s.velocityMinMs, u.system)} to ${formatQuantity('velocity', s.velocityMaxMs, u.system)}`],
+    ['Residual pressure wanted at the end', formatHeadPressure(a.end.targetResidualHeadM, u.system, s.waterTemperatureC)],
+    ['Pipe cover where the survey gives none', formatQuantity('length', s.defaultCoverM, u.system, 2)],
+    ['High and low point tolerance', formatQuantity('length', s.airPointToleranceM, u.system, 2)],
+    ['Siphon limit / vapour limit', `${formatQuantity('length', a.limits.siphonLimitHeadM, u.system)} / ${formatQuantity('length', a.limits.vapourLimitHeadM, u.system)} of suction at ${formatQuantity('length', a.limits.siteAltitudeM, u.system, 0)} altitude`],
     ['Surge check', s.checkSurge ? 'static pressure plus a sudden stop (Joukowsky) against the allowed head' : 'off'],
-    ['Flow analysed', `${formatFlow(a.flowM3s, u)} (${a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'})`],
+    ['Flow analysed', `${formatQuantity('designFlow', a.flowM3s, u.system)} (${a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'})`],
   ];
   table(doc, [{ heading: 'Assumption', width: 200 }, { heading: 'Value', width: 562 }], rows.map(([k, v]) => [k, v]));
   const pipes = [...new Map(a.stretches.map((st) => [st.pipe.id, st.pipe])).values()];
   table(
     doc,
     [{ heading: 'Pipe', width: 200 }, { heading: 'Hazen-Williams C', width: 80, align: 'right' }, { heading: 'Roughness', width: 80, align: 'right' }, { heading: 'Wave speed', width: 80, align: 'right' }, { heading: 'Source of figures', width: 322 }],
-    pipes.map((p) => [p.label, fixed(p.hazenWilliamsC, 0), `${Number(toDisplay.diameter(p.roughnessM, u).toPrecision(2))} ${u.diameter}`, `${fixed(toDisplay.velocity(p.waveSpeedMs, u), 0)} ${u.velocityLabel}`, p.source]),
+    pipes.map((p) => [p.label, formatNumber(p.hazenWilliamsC, 0), `${Number(toDisplay('diameter', p.roughnessM, u.system).toPrecision(2))} ${u.diameter}`, `${formatNumber(toDisplay('velocity', p.waveSpeedMs, u.system), 0)} ${u.velocity}`, p.source]),
   );
   doc.font('Helvetica').fontSize(8).fillColor(INK).text(
     `Defaults where the line sets none: velocity band ${DEFAULT_LINE_SETTINGS.velocityMinMs}-${DEFAULT_LINE_SETTINGS.velocityMaxMs} m/s (T.D. Jordan Jr., A Handbook of Gravity-Flow Water Systems, p.53); ` +

@@ -3,6 +3,7 @@ import { reverseRoute } from '../../hydraulics/survey/route/reverse';
 import { splitRoute } from '../../hydraulics/survey/route/split';
 import { trimRoute } from '../../hydraulics/survey/route/trim';
 import type { RouteStation } from '../../hydraulics/survey/types';
+import { newPointRecord } from './new-point';
 import type { RoutePointView } from './types';
 
 /** A point as stored, without its place in the order (seq is given on write). */
@@ -35,20 +36,17 @@ function toRecords(stations: readonly Station[]): PointRecord[] {
       previous = s.record;
       return { ...s.record, chainageM: s.chainageM, latitude: s.latitudeDeg ?? null, longitude: s.longitudeDeg ?? null };
     }
-    return {
+    return newPointRecord({
       latitude: s.latitudeDeg ?? null,
       longitude: s.longitudeDeg ?? null,
       chainageM: s.chainageM,
       slopeChainageM: null,
       elevationM: s.elevationM,
-      rawElevationM: s.elevationM,
       label: null,
       heightSource: previous?.heightSource ?? 'typed',
       confidenceM: previous?.confidenceM ?? null,
       recordedAt: null,
-      excluded: false,
-      dismissedChecks: [],
-    };
+    });
   });
 }
 

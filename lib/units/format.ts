@@ -1,55 +1,54 @@
-import { toDisplay, type DisplayUnits } from './display';
+import { FOOT_M } from '../../hydraulics/constants';
+import { formatNumber } from './number';
+import { pressureOfHead, toDisplay, unitDef, unitOf, type Decimals, type Quantity, type UnitSystem } from './quantities';
 
-const grouped = (digits: number) => new Intl.NumberFormat('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits });
-const FORMATTERS = [0, 1, 2, 3].map(grouped);
-
-/** A number with a fixed count of decimals and thousands separators; "-0.0" shows as "0.0". */
-export function fixed(value: number, digits: number): string {
-  const text = FORMATTERS[Math.min(Math.max(digits, 0), 3)].format(value);
-  return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
+/** A stored SI value in the project's unit, with the unit and the quantity's decimals: "2.60 L/min", "1,234.5 m". */
+export function formatQuantity(quantity: Quantity, valueSi: number, system: UnitSystem, decimals?: Decimals): string {
+  const def = unitDef(quantity, system);
+  return `${formatNumber(toDisplay(quantity, valueSi, system), decimals ?? def.decimals)} ${def.symbol}`;
 }
 
-/** Chainage along the line, e.g. `1,234.5 m` or `4,050 ft`. */
-export function formatChainage(m: number, u: DisplayUnits): string {
-  return `${fixed(toDisplay.length(m, u), u.system === 'us' ? 0 : 1)} ${u.length}`;
-}
-
-/** An elevation or other length, e.g. `316.5 m` or `1,038.4 ft`. */
-export function formatLength(m: number, u: DisplayUnits, digits = 1): string {
-  return `${fixed(toDisplay.length(m, u), digits)} ${u.length}`;
-}
-
-/** A head of water alone, e.g. `42.1 m` or `138.1 ft`. */
-export function formatHead(m: number, u: DisplayUnits): string {
-  return `${fixed(toDisplay.head(m, u), 1)} ${u.head}`;
+/** A value for a form input in the project's unit (empty for null), rounded so it reads cleanly. */
+export function inputValue(quantity: Quantity, valueSi: number | null | undefined, system: UnitSystem): string {
+  if (valueSi === null || valueSi === undefined) return '';
+  return String(Number(toDisplay(quantity, valueSi, system).toPrecision(6)));
 }
 
 /** A pressure from a head of water, e.g. `413 kPa` or `59.9 psi`. */
-export function formatPressureOfHead(headM: number, u: DisplayUnits, temperatureC?: number): string {
-  return `${fixed(toDisplay.pressureOfHead(headM, u, temperatureC), u.pressure === 'psi' ? 1 : 0)} ${u.pressure}`;
+export function formatPressureOfHead(headM: number, system: UnitSystem, temperatureC?: number): string {
+  return `${formatNumber(pressureOfHead(headM, system, temperatureC), unitDef('pressure', system).decimals)} ${unitOf('pressure', system)}`;
 }
 
 /** Head and pressure together, the way the trade reads them: `42.1 m (413 kPa)`. */
-export function formatHeadPressure(headM: number, u: DisplayUnits, temperatureC?: number): string {
-  return `${formatHead(headM, u)} (${formatPressureOfHead(headM, u, temperatureC)})`;
+export function formatHeadPressure(headM: number, system: UnitSystem, temperatureC?: number): string {
+  return `${formatQuantity('head', headM, system)} (${formatPressureOfHead(headM, system, temperatureC)})`;
 }
 
-/** A flow, e.g. `1.00 L/s` or `15.9 gpm`. */
-export function formatFlow(m3s: number, u: DisplayUnits): string {
-  return `${fixed(toDisplay.flow(m3s, u), u.system === 'us' ? 1 : 2)} ${u.flowLabel}`;
+const KILOMETRE_M = 1000;
+/** The international mile, 5,280 ft of 0.3048 m. */
+const MILE_M = 5280 * FOOT_M;
+
+/** A length too long for metres on screen: "1.40 km" / "0.87 mi" from 1 km / 1 mi, else whole metres or feet. */
+export function formatDistance(lengthM: number, system: UnitSystem): string {
+  const [big, symbol] = system === 'us' ? [MILE_M, 'mi'] : [KILOMETRE_M, 'km'];
+  return lengthM >= big ? `${formatNumber(lengthM / big, 2)} ${symbol}` : formatQuantity('length', lengthM, system, 0);
 }
 
-/** A velocity, e.g. `0.77 m/s` or `2.51 ft/s`. */
-export function formatVelocity(ms: number, u: DisplayUnits): string {
-  return `${fixed(toDisplay.velocity(ms, u), 2)} ${u.velocityLabel}`;
+/** A water temperature in °C, with °F alongside for US projects. */
+export function formatTemperature(c: number, system: UnitSystem): string {
+  return system === 'us' ? `${formatNumber(c, 0)} °C (${formatNumber((c * 9) / 5 + 32, 0)} °F)` : `${formatNumber(c, 0)} °C`;
 }
 
-/** A pressure in pascals, e.g. `800 kPa` or `116.0 psi`. */
-export function formatPressure(pa: number, u: DisplayUnits): string {
-  return `${fixed(toDisplay.pressure(pa, u), u.pressure === 'psi' ? 1 : 0)} ${u.pressure}`;
+/** A duration for people: minutes under 2 h, hours under 3 days, then hours and days. */
+export function formatDuration(seconds: number): string {
+  if (!Number.isFinite(seconds)) return '—';
+  const hours = seconds / 3600;
+  if (hours < 2) return `${formatNumber(seconds / 60, 0)} min`;
+  if (hours < 72) return `${formatNumber(hours, 1)} h`;
+  return `${formatNumber(hours, 0)} h (about ${formatNumber(hours / 24, 1)} days)`;
 }
 
-/** A water temperature in C, with F alongside for US projects. */
-export function formatTemperature(c: number, u: DisplayUnits): string {
-  return u.system === 'us' ? `${fixed(c, 0)} °C (${fixed((c * 9) / 5 + 32, 0)} °F)` : `${fixed(c, 0)} °C`;
+/** A fraction as a percentage: 0.384 -> "38 %". */
+export function formatPercent(fraction: number, decimals: Decimals = 0): string {
+  return `${formatNumber(fraction * 100, decimals)} %`;
 }

@@ -1,16 +1,24 @@
-import { FOOT_M, INCH_M, PSI_PA, US_GALLON_M3 } from '../../hydraulics/constants';
+import { FOOT_M, INCH_M, SECONDS_PER_DAY, US_GALLON_M3 } from '../../hydraulics/constants';
+import { FLOW_UNITS_M3S, HEAD_UNITS_M, headMToPressurePa, LENGTH_UNITS_M, PRESSURE_UNITS_PA } from '../../hydraulics/units';
 
 /**
  * Project units at the edge: every figure is stored and computed in SI and shown (or typed) in the
- * project's unit system. One table, so each screen shows the same unit for the same quantity.
+ * project's unit system. One table, so every screen shows the same unit and the same decimals for
+ * the same quantity. Sizes come from the engineering core's unit tables (hydraulics/units.ts,
+ * hydraulics/constants.ts).
  */
 export type UnitSystem = 'metric' | 'us';
 
+export const UNIT_SYSTEMS: readonly UnitSystem[] = ['metric', 'us'];
+
 export type Quantity =
   | 'length'
+  | 'chainage'
   | 'elevation'
   | 'head'
-  | 'bore'
+  | 'diameter'
+  | 'velocity'
+  | 'designFlow'
   | 'flow'
   | 'flowPerHour'
   | 'flowPerDay'
@@ -20,45 +28,61 @@ export type Quantity =
   | 'depthPerDay'
   | 'volumePerDay';
 
-interface UnitDef {
+/** Fixed decimals, or 'auto': fewer decimals as the number grows (see formatNumber). */
+export type Decimals = number | 'auto';
+
+export interface UnitDef {
   symbol: string;
   /** Size of one display unit in SI. */
   si: number;
+  decimals: Decimals;
 }
 
-const DAY_S = 86_400;
-const L = 1e-3;
+const LITRE_M3 = 1e-3;
+const LITRE_PER_HOUR_M3S = LITRE_M3 / 3600;
 
 const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
   metric: {
-    length: { symbol: 'm', si: 1 },
-    elevation: { symbol: 'm', si: 1 },
-    head: { symbol: 'm', si: 1 },
-    bore: { symbol: 'mm', si: 1e-3 },
-    flow: { symbol: 'L/min', si: L / 60 },
-    flowPerHour: { symbol: 'L/h', si: L / 3600 },
-    flowPerDay: { symbol: 'L/day', si: L / DAY_S },
-    volume: { symbol: 'L', si: L },
-    pressure: { symbol: 'kPa', si: 1e3 },
-    area: { symbol: 'm²', si: 1 },
-    depthPerDay: { symbol: 'mm/day', si: 1e-3 },
-    volumePerDay: { symbol: 'L/day', si: L },
+    length: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
+    chainage: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
+    elevation: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
+    head: { symbol: 'm', si: HEAD_UNITS_M.m, decimals: 1 },
+    diameter: { symbol: 'mm', si: LENGTH_UNITS_M.mm, decimals: 'auto' },
+    velocity: { symbol: 'm/s', si: LENGTH_UNITS_M.m, decimals: 2 },
+    designFlow: { symbol: 'L/s', si: FLOW_UNITS_M3S['L/s'], decimals: 2 },
+    flow: { symbol: 'L/min', si: FLOW_UNITS_M3S['L/min'], decimals: 'auto' },
+    flowPerHour: { symbol: 'L/h', si: LITRE_PER_HOUR_M3S, decimals: 'auto' },
+    flowPerDay: { symbol: 'L/day', si: LITRE_M3 / SECONDS_PER_DAY, decimals: 'auto' },
+    volume: { symbol: 'L', si: LITRE_M3, decimals: 'auto' },
+    pressure: { symbol: 'kPa', si: PRESSURE_UNITS_PA.kPa, decimals: 0 },
+    area: { symbol: 'm²', si: 1, decimals: 'auto' },
+    depthPerDay: { symbol: 'mm/day', si: LENGTH_UNITS_M.mm, decimals: 'auto' },
+    volumePerDay: { symbol: 'L/day', si: LITRE_M3, decimals: 'auto' },
   },
   us: {
-    length: { symbol: 'ft', si: FOOT_M },
-    elevation: { symbol: 'ft', si: FOOT_M },
-    head: { symbol: 'ft', si: FOOT_M },
-    bore: { symbol: 'in', si: INCH_M },
-    flow: { symbol: 'US gpm', si: US_GALLON_M3 / 60 },
-    flowPerHour: { symbol: 'US gal/h', si: US_GALLON_M3 / 3600 },
-    flowPerDay: { symbol: 'US gal/day', si: US_GALLON_M3 / DAY_S },
-    volume: { symbol: 'US gal', si: US_GALLON_M3 },
-    pressure: { symbol: 'psi', si: PSI_PA },
-    area: { symbol: 'ft²', si: FOOT_M * FOOT_M },
-    depthPerDay: { symbol: 'in/week', si: INCH_M / 7 },
-    volumePerDay: { symbol: 'US gal/day', si: US_GALLON_M3 },
+    length: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 1 },
+    chainage: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 0 },
+    elevation: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 1 },
+    head: { symbol: 'ft', si: HEAD_UNITS_M.ft, decimals: 1 },
+    diameter: { symbol: 'in', si: LENGTH_UNITS_M.in, decimals: 'auto' },
+    velocity: { symbol: 'ft/s', si: LENGTH_UNITS_M.ft, decimals: 2 },
+    designFlow: { symbol: 'US gpm', si: FLOW_UNITS_M3S['US gpm'], decimals: 1 },
+    flow: { symbol: 'US gpm', si: FLOW_UNITS_M3S['US gpm'], decimals: 'auto' },
+    flowPerHour: { symbol: 'US gal/h', si: US_GALLON_M3 / 3600, decimals: 'auto' },
+    flowPerDay: { symbol: 'US gal/day', si: FLOW_UNITS_M3S['US gal/day'], decimals: 'auto' },
+    volume: { symbol: 'US gal', si: US_GALLON_M3, decimals: 'auto' },
+    pressure: { symbol: 'psi', si: PRESSURE_UNITS_PA.psi, decimals: 1 },
+    area: { symbol: 'ft²', si: FOOT_M * FOOT_M, decimals: 'auto' },
+    // Irrigation depth: a week is how US growers read it.
+    depthPerDay: { symbol: 'in/week', si: INCH_M / 7, decimals: 'auto' },
+    volumePerDay: { symbol: 'US gal/day', si: US_GALLON_M3, decimals: 'auto' },
   },
 };
+
+/** The unit, its size in SI and the decimals a quantity is shown with in one unit system. */
+export function unitDef(quantity: Quantity, system: UnitSystem): UnitDef {
+  return UNITS[system][quantity];
+}
 
 export function unitOf(quantity: Quantity, system: UnitSystem): string {
   return UNITS[system][quantity].symbol;
@@ -74,35 +98,7 @@ export function fromDisplay(quantity: Quantity, value: number, system: UnitSyste
   return value * UNITS[system][quantity].si;
 }
 
-/** A number for people: fewer decimals as it grows; fixed en-US grouping so server and browser agree. */
-export function formatNumber(value: number, digits?: number): string {
-  if (!Number.isFinite(value)) return '—';
-  const magnitude = Math.abs(value);
-  const decimals = digits ?? (magnitude >= 100 ? 0 : magnitude >= 10 ? 1 : magnitude >= 1 ? 2 : 3);
-  return value.toLocaleString('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
-}
-
-/** A stored SI value shown in the project's unit, with the unit: "2.63 L/min". */
-export function formatQuantity(quantity: Quantity, valueSi: number, system: UnitSystem, digits?: number): string {
-  return `${formatNumber(toDisplay(quantity, valueSi, system), digits)} ${unitOf(quantity, system)}`;
-}
-
-/** A value for a form input in the project's unit (empty for null), rounded so it reads cleanly. */
-export function inputValue(quantity: Quantity, valueSi: number | null | undefined, system: UnitSystem): string {
-  if (valueSi === null || valueSi === undefined) return '';
-  return String(Number(toDisplay(quantity, valueSi, system).toPrecision(6)));
-}
-
-/** A duration for people: minutes under 2 h, hours under 3 days, then days and hours. */
-export function formatDuration(seconds: number): string {
-  if (!Number.isFinite(seconds)) return '—';
-  const hours = seconds / 3600;
-  if (hours < 2) return `${formatNumber(seconds / 60, 0)} min`;
-  if (hours < 72) return `${formatNumber(hours, 1)} h`;
-  return `${formatNumber(hours, 0)} h (about ${formatNumber(hours / 24, 1)} days)`;
-}
-
-/** A fraction as a percentage: 0.384 -> "38 %". */
-export function formatPercent(fraction: number, digits = 0): string {
-  return `${formatNumber(fraction * 100, digits)} %`;
+/** The gauge pressure of a head of water at `temperatureC` (the core's density; 20 °C by default), in the project's unit. */
+export function pressureOfHead(headM: number, system: UnitSystem, temperatureC?: number): number {
+  return toDisplay('pressure', headMToPressurePa(headM, temperatureC), system);
 }

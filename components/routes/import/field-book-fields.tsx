@@ -1,5 +1,5 @@
 import { TextField } from '@/components/ui/field';
-import { lengthUnitOf } from '@/lib/display-units';
+import { unitOf } from '@/lib/units';
 import type { FieldErrors } from '@/lib/errors';
 import type { MappingDraft } from '@/lib/import/mapping-draft';
 import type { UnitSystem } from '@/models/project';
@@ -11,7 +11,7 @@ type Update = (change: (d: MappingDraft) => MappingDraft) => void;
 export function FieldBookFields({ draft, units, errors, update }: { draft: MappingDraft; units: UnitSystem; errors: FieldErrors; update: Update }) {
   const fb = draft.fieldBook;
   const set = (patch: Partial<MappingDraft['fieldBook']>) => update((d) => ({ ...d, fieldBook: { ...d.fieldBook, ...patch } }));
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
   const level = draft.format === 'level-book-csv';
   return (
     <div className="grid gap-3 sm:grid-cols-3">

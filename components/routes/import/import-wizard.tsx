@@ -15,6 +15,7 @@ import type { SurveyImportOptions } from '@/lib/validations/survey-import';
 import type { UnitSystem } from '@/models/project';
 import { MappingStep } from './mapping-step';
 import { PreviewStep } from './preview-step';
+import { formatNumber } from '@/lib/units';
 
 type Phase = 'pick' | 'mapping' | 'preview';
 interface Progress { label: string; detail: string; fraction: number }
@@ -90,7 +91,7 @@ export function ImportWizard({ projectId, units }: ImportWizardProps) {
       const result = await worker.parse(built.options, (fraction) => setProgress({ label, detail: 'Reading rows', fraction }));
       setOptions(built.options);
       setPreview(result);
-      setProgress({ label, detail: `Read ${result.stats.rowsRead.toLocaleString('en-GB')} rows`, fraction: 1 });
+      setProgress({ label, detail: `Read ${formatNumber(result.stats.rowsRead, 0)} rows`, fraction: 1 });
       setPhase('preview');
     } catch (error) {
       setProgress(null);

@@ -1,5 +1,5 @@
 import { Button } from '@/components/ui/button';
-import { formatLength } from '@/lib/display-units';
+import { formatNumber, formatQuantity } from '@/lib/units';
 import type { ImportPreview } from '@/lib/import/protocol';
 import type { UnitSystem } from '@/models/project';
 import { FORMAT_LABELS } from '../format-labels';
@@ -26,13 +26,13 @@ export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewS
       {preview.gpsWarning && <GpsWarningBanner warning={preview.gpsWarning} />}
       <dl className="grid gap-3 text-sm sm:grid-cols-4">
         <div><dt className="text-creek-600">Read as</dt><dd className="font-medium">{FORMAT_LABELS[s.format]}</dd></div>
-        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{s.pointCount.toLocaleString('en-GB')}</dd></div>
-        <div><dt className="text-creek-600">Length (horizontal)</dt><dd className="tabular font-medium">{formatLength(s.totalHorizontalLengthM, units)}</dd></div>
-        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatLength(s.totalSlopeLengthM, units)}</dd></div>
-        <div><dt className="text-creek-600">Lowest</dt><dd className="tabular font-medium">{formatLength(s.minElevationM, units)}</dd></div>
-        <div><dt className="text-creek-600">Highest</dt><dd className="tabular font-medium">{formatLength(s.maxElevationM, units)}</dd></div>
+        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{formatNumber(s.pointCount, 0)}</dd></div>
+        <div><dt className="text-creek-600">Length (horizontal)</dt><dd className="tabular font-medium">{formatQuantity('length', s.totalHorizontalLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatQuantity('length', s.totalSlopeLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Lowest</dt><dd className="tabular font-medium">{formatQuantity('elevation', s.minElevationM, units)}</dd></div>
+        <div><dt className="text-creek-600">Highest</dt><dd className="tabular font-medium">{formatQuantity('elevation', s.maxElevationM, units)}</dd></div>
         {s.closureErrorM !== undefined && (
-          <div><dt className="text-creek-600">Closure error</dt><dd className="tabular font-medium">{(s.closureErrorM * 1000).toFixed(0)} mm</dd></div>
+          <div><dt className="text-creek-600">Closure error</dt><dd className="tabular font-medium">{formatNumber(s.closureErrorM * 1000, 0)} mm</dd></div>
         )}
         <div><dt className="text-creek-600">Exact duplicates</dt><dd className="tabular font-medium">{s.duplicateCount}</dd></div>
       </dl>
@@ -53,7 +53,7 @@ export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewS
         </section>
       )}
       {preview.features.length > 0 && (
-        <p className="text-sm text-creek-700">Waypoints placed along the route: {preview.features.map((f) => `${f.label} (${formatLength(f.chainageM, units, 0)})`).join(', ')}.</p>
+        <p className="text-sm text-creek-700">Waypoints placed along the route: {preview.features.map((f) => `${f.label} (${formatQuantity('length', f.chainageM, units, 0)})`).join(', ')}.</p>
       )}
       <div className="flex flex-wrap gap-3">
         <Button tone="quiet" onClick={onBack} disabled={saving}>Back to the mapping</Button>

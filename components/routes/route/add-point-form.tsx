@@ -2,7 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
-import { fromDisplayLength, lengthUnitOf } from '@/lib/display-units';
+import { fromDisplay, unitOf } from '@/lib/units';
 import type { DraftAction } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/models/project';
 
@@ -21,7 +21,7 @@ const num = (v: FormDataEntryValue | null) => {
 /** Adds a station: by position on a walked route, by chainage on a station profile. */
 export function AddPointForm({ count, units, positioned, dispatch }: AddPointFormProps) {
   const [error, setError] = useState<string | null>(null);
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
   function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
@@ -41,8 +41,8 @@ export function AddPointForm({ count, units, positioned, dispatch }: AddPointFor
       point: {
         latitude: positioned ? lat : null,
         longitude: positioned ? lon : null,
-        chainageM: positioned ? null : fromDisplayLength(chainage, units),
-        elevationM: fromDisplayLength(elevation, units),
+        chainageM: positioned ? null : fromDisplay('length', chainage, units),
+        elevationM: fromDisplay('length', elevation, units),
         label: String(form.get('label') ?? '').trim() || null,
         heightSource: 'typed',
         confidenceM: null,

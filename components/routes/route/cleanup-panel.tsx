@@ -4,7 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
-import { fromDisplayLength, lengthUnitOf } from '@/lib/display-units';
+import { fromDisplay, unitOf } from '@/lib/units';
 import { useCleanupDecision } from '@/lib/queries/routes';
 import { benchmarkProposals, smoothingProposals } from '@/lib/routes/proposals';
 import type { RouteDetail, RouteProposal } from '@/lib/routes/types';
@@ -31,7 +31,7 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
   const [requested, setRequested] = useState<RouteProposal[]>([]);
   const [message, setMessage] = useState<string | null>(null);
   const chainage = new Map(detail.points.map((p) => [p.seq, p.chainageM]));
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
 
   async function send(accept: RouteProposal[], reject: RouteProposal[]) {
     setMessage(null);
@@ -49,7 +49,7 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
     const form = new FormData(e.currentTarget);
     try {
       if (kind === 'smoothing') setRequested(smoothingProposals(detail.points, Number(form.get('window'))));
-      else setRequested(benchmarkProposals(detail.points, Number(form.get('benchmark-point')) - 1, fromDisplayLength(Number(String(form.get('benchmark-elevation')).replace(',', '.')), units)));
+      else setRequested(benchmarkProposals(detail.points, Number(form.get('benchmark-point')) - 1, fromDisplay('length', Number(String(form.get('benchmark-elevation')).replace(',', '.')), units)));
       setMessage(null);
     } catch (error) {
       setMessage(error instanceof Error ? error.message.replace(/^[\w.]+(\[\d+\])?: /, '') : 'Could not propose that.');

@@ -1,7 +1,7 @@
 'use client';
 
 import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/survey/height-source';
-import { fromDisplayLength, toDisplayLength } from '@/lib/display-units';
+import { formatNumber, fromDisplay, toDisplay } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/models/project';
 import { HEIGHT_SOURCE_LABELS } from '../format-labels';
@@ -18,30 +18,30 @@ export interface PointRowProps {
   dispatch: (action: DraftAction) => void;
 }
 
-const show = (m: number | null, units: UnitSystem) => (m === null ? null : toDisplayLength(m, units));
+const show = (m: number | null, units: UnitSystem) => (m === null ? null : toDisplay('length', m, units));
 
 /** One station in the points table: read-only for readers, edit controls for surveyors. */
 export function PointRow({ point: p, index, count, units, editable, positioned, hasProposal, dispatch }: PointRowProps) {
   const n = index + 1;
   const changed = p.rawElevationM !== null && Math.abs(p.rawElevationM - p.elevationM) > 0.005;
   const edit = (patch: Extract<DraftAction, { type: 'edit' }>['patch']) => dispatch({ type: 'edit', key: p.key, patch });
-  const toM = (v: number | null) => (v === null ? null : fromDisplayLength(v, units));
+  const toM = (v: number | null) => (v === null ? null : fromDisplay('length', v, units));
   return (
     <tr className={`border-t border-creek-50 ${p.excluded ? 'text-creek-400 line-through' : ''} ${hasProposal ? 'bg-clay-50/60' : ''}`} data-point={n}>
       <td className="tabular px-2 py-1 text-creek-600">{n}</td>
       <td className="tabular px-2 py-1 text-right">
         {editable && !positioned ? (
           <NumberCell label={`Chainage of point ${n}`} value={show(p.chainageM, units)} digits={2} onCommit={(v) => edit({ chainageM: toM(v) })} />
-        ) : p.chainageM === null ? '—' : show(p.chainageM, units)?.toFixed(1)}
+        ) : p.chainageM === null ? '—' : formatNumber(toDisplay('length', p.chainageM, units), 1)}
       </td>
       <td className="tabular px-2 py-1 text-right">
         {editable ? (
-          <NumberCell label={`Elevation of point ${n}`} value={show(p.elevationM, units)} digits={2} onCommit={(v) => v !== null && edit({ elevationM: fromDisplayLength(v, units) })} />
+          <NumberCell label={`Elevation of point ${n}`} value={show(p.elevationM, units)} digits={2} onCommit={(v) => v !== null && edit({ elevationM: fromDisplay('length', v, units) })} />
         ) : (
-          <span className={changed ? 'font-semibold text-moss-700' : undefined}>{show(p.elevationM, units)?.toFixed(2)}</span>
+          <span className={changed ? 'font-semibold text-moss-700' : undefined}>{formatNumber(toDisplay('length', p.elevationM, units), 2)}</span>
         )}
       </td>
-      <td className={`tabular px-2 py-1 text-right ${changed ? 'text-ochre-700' : 'text-creek-500'}`}>{p.rawElevationM === null ? 'new' : show(p.rawElevationM, units)?.toFixed(2)}</td>
+      <td className={`tabular px-2 py-1 text-right ${changed ? 'text-ochre-700' : 'text-creek-500'}`}>{p.rawElevationM === null ? 'new' : formatNumber(toDisplay('length', p.rawElevationM, units), 2)}</td>
       <td className="px-2 py-1">
         {editable ? (
           <input aria-label={`Label of point ${n}`} defaultValue={p.label ?? ''} key={`${p.key}-${p.label}`} onBlur={(e) => e.target.value !== (p.label ?? '') && edit({ label: e.target.value || null })} className="w-36 rounded border border-creek-100 px-1.5 py-0.5 text-sm" />

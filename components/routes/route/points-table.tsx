@@ -1,6 +1,6 @@
 'use client';
 
-import { lengthUnitOf } from '@/lib/display-units';
+import { formatNumber, unitOf } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/models/project';
 import { AddPointForm } from './add-point-form';
@@ -25,7 +25,7 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
   const pages = Math.max(1, Math.ceil(points.length / PAGE_SIZE));
   const current = Math.min(page, pages - 1);
   const start = current * PAGE_SIZE;
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
   return (
     <div className="space-y-3">
       <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
@@ -66,7 +66,7 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
       {pages > 1 && (
         <nav aria-label="Pages of points" className="flex items-center gap-2 text-sm">
           <button type="button" onClick={() => onPage(current - 1)} disabled={current === 0} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Previous</button>
-          <span className="tabular">Points {start + 1}–{Math.min(points.length, start + PAGE_SIZE)} of {points.length.toLocaleString('en-GB')}</span>
+          <span className="tabular">Points {start + 1}–{Math.min(points.length, start + PAGE_SIZE)} of {formatNumber(points.length, 0)}</span>
           <button type="button" onClick={() => onPage(current + 1)} disabled={current >= pages - 1} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Next</button>
         </nav>
       )}

@@ -3,13 +3,13 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
-import { formatLength } from '@/lib/display-units';
+import { formatNumber, formatQuantity } from '@/lib/units';
 import { routeSourceUrl, useUpdateRoute } from '@/lib/queries/routes';
 import type { RouteDetail } from '@/lib/routes/types';
 import type { UnitSystem } from '@/models/project';
 import { FORMAT_LABELS } from '../format-labels';
 
-const kb = (bytes: number) => (bytes < 1024 * 1024 ? `${(bytes / 1024).toFixed(0)} kB` : `${(bytes / (1024 * 1024)).toFixed(1)} MB`);
+const kb = (bytes: number) => (bytes < 1024 * 1024 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / (1024 * 1024), 1)} MB`);
 
 /** Name, the route's numbers, and the original file to download again. */
 export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; units: UnitSystem; editable: boolean }) {
@@ -50,10 +50,10 @@ export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; 
       </div>
       <FormMessage message={error} />
       <dl className="grid gap-3 text-sm sm:grid-cols-5">
-        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{r.pointCount.toLocaleString('en-GB')}</dd></div>
-        <div><dt className="text-creek-600">Length</dt><dd className="tabular font-medium">{formatLength(r.lengthM, units)}</dd></div>
-        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatLength(r.slopeLengthM, units)}</dd></div>
-        <div><dt className="text-creek-600">Heights</dt><dd className="tabular font-medium">{kept.length > 0 ? `${formatLength(low, units)} – ${formatLength(high, units)}` : '—'}</dd></div>
+        <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{formatNumber(r.pointCount, 0)}</dd></div>
+        <div><dt className="text-creek-600">Length</dt><dd className="tabular font-medium">{formatQuantity('length', r.lengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatQuantity('length', r.slopeLengthM, units)}</dd></div>
+        <div><dt className="text-creek-600">Heights</dt><dd className="tabular font-medium">{kept.length > 0 ? `${formatQuantity('elevation', low, units)} – ${formatQuantity('elevation', high, units)}` : '—'}</dd></div>
         <div>
           <dt className="text-creek-600">From</dt>
           <dd className="font-medium">
@@ -67,7 +67,7 @@ export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; 
         </div>
       </dl>
       {r.closureErrorM !== null && (
-        <p className="text-sm text-creek-700">The level run closes {Math.abs(r.closureErrorM * 1000).toFixed(0)} mm {r.closureErrorM >= 0 ? 'above' : 'below'} the known closing level.</p>
+        <p className="text-sm text-creek-700">The level run closes {formatNumber(Math.abs(r.closureErrorM * 1000), 0)} mm {r.closureErrorM >= 0 ? 'above' : 'below'} the known closing level.</p>
       )}
     </div>
   );

@@ -6,7 +6,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
-import { formatLength, fromDisplayLength, lengthUnitOf, toDisplayLength } from '@/lib/display-units';
+import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import { projectRoutesQuery, useDeleteRoute, useJoinRoutes, useReverseRoute, useSplitRoute, useTrimRoute } from '@/lib/queries/routes';
 import type { RouteDetail } from '@/lib/routes/types';
 import type { UnitSystem } from '@/models/project';
@@ -31,8 +31,8 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
   const join = useJoinRoutes(projectId, id);
   const remove = useDeleteRoute(projectId, id);
   const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
-  const u = lengthUnitOf(units);
-  const lengthShown = toDisplayLength(detail.route.lengthM, units);
+  const u = unitOf('length', units);
+  const lengthShown = toDisplay('length', detail.route.lengthM, units);
   const busy = blocked || reverse.isPending || split.isPending || trim.isPending || join.isPending || remove.isPending;
 
   async function run(work: () => Promise<unknown>, done: string) {
@@ -49,21 +49,21 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
     e.preventDefault();
     const c = num(new FormData(e.currentTarget), 'split-at');
     return run(async () => {
-      const r = await split.mutateAsync({ chainageM: fromDisplayLength(c, units) });
+      const r = await split.mutateAsync({ chainageM: fromDisplay('length', c, units) });
       router.push(`/projects/${projectId}/routes/${r.second.id}`);
     }, 'Split. The second part is a new route.');
   };
   const onTrim = (e: FormEvent<HTMLFormElement>) => {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
-    return run(() => trim.mutateAsync({ fromChainageM: fromDisplayLength(num(form, 'trim-from'), units), toChainageM: fromDisplayLength(num(form, 'trim-to'), units) }), 'Trimmed.');
+    return run(() => trim.mutateAsync({ fromChainageM: fromDisplay('length', num(form, 'trim-from'), units), toChainageM: fromDisplay('length', num(form, 'trim-to'), units) }), 'Trimmed.');
   };
   const onJoin = (e: FormEvent<HTMLFormElement>) => {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const gap = String(form.get('join-gap') ?? '').trim();
     return run(async () => {
-      const r = await join.mutateAsync({ otherRouteId: String(form.get('join-other')), ...(gap ? { gapM: fromDisplayLength(Number(gap), units) } : {}) });
+      const r = await join.mutateAsync({ otherRouteId: String(form.get('join-other')), ...(gap ? { gapM: fromDisplay('length', Number(gap), units) } : {}) });
       router.push(`/projects/${projectId}/routes/${r.id}`);
     }, 'Joined into a new route.');
   };
@@ -87,7 +87,7 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
         </form>
         <form onSubmit={onJoin} className="flex flex-wrap items-end gap-2" aria-label="Join">
           <label>Join onto the end<select name="join-other" className="mt-1 block w-48 rounded-md border border-creek-200 px-2 py-1">
-            {routes.filter((r) => r.id !== id && r.pointCount >= 2).map((r) => <option key={r.id} value={r.id}>{r.name} ({formatLength(r.lengthM, units, 0)})</option>)}
+            {routes.filter((r) => r.id !== id && r.pointCount >= 2).map((r) => <option key={r.id} value={r.id}>{r.name} ({formatQuantity('length', r.lengthM, units, 0)})</option>)}
           </select></label>
           <label>Gap ({u}, optional)<input name="join-gap" inputMode="decimal" className={field} placeholder="measured" /></label>
           <Button type="submit" tone="quiet" disabled={busy || routes.length < 2 || detail.points.length < 2}>Join</Button>

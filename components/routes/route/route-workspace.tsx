@@ -4,7 +4,7 @@ import { useReducer, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
-import { formatLength } from '@/lib/display-units';
+import { formatQuantity } from '@/lib/units';
 import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
 import { thinProfile } from '@/lib/routes/profile-series';
@@ -80,7 +80,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
           <p className="text-sm text-creek-700">This route has no points yet.</p>
         )}
         {detail.route.features.length > 0 && (
-          <p className="mt-2 text-xs text-creek-700">Along the route: {detail.route.features.map((f) => `${f.label} at ${formatLength(f.chainageM, units, 0)}`).join(' · ')}</p>
+          <p className="mt-2 text-xs text-creek-700">Along the route: {detail.route.features.map((f) => `${f.label} at ${formatQuantity('length', f.chainageM, units, 0)}`).join(' · ')}</p>
         )}
       </Panel>
       {detail.points.length > 0 && <CleanupPanel detail={detail} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />}

@@ -1,6 +1,6 @@
 'use client';
 
-import { fromDisplayLength, lengthUnitOf, toDisplayLength } from '@/lib/display-units';
+import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import type { UnitSystem } from '@/models/project';
 
 export interface SketchArea {
@@ -11,17 +11,17 @@ export interface SketchArea {
 
 /** The size of the empty chart a route is sketched on, in the project's units. */
 export function SketchAreaForm({ area, units, onChange }: { area: SketchArea; units: UnitSystem; onChange: (a: SketchArea) => void }) {
-  const u = lengthUnitOf(units);
+  const u = unitOf('length', units);
   const set = (key: keyof SketchArea, text: string) => {
     const v = Number(text.replace(',', '.'));
-    if (text.trim() !== '' && Number.isFinite(v)) onChange({ ...area, [key]: fromDisplayLength(v, units) });
+    if (text.trim() !== '' && Number.isFinite(v)) onChange({ ...area, [key]: fromDisplay('length', v, units) });
   };
   const box = 'mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1';
   return (
     <div className="flex flex-wrap items-end gap-3 text-sm" role="group" aria-label="Sketch area">
-      <label>Chart length ({u})<input defaultValue={toDisplayLength(area.lengthM, units).toFixed(0)} onBlur={(e) => set('lengthM', e.target.value)} className={box} /></label>
-      <label>Heights from ({u})<input defaultValue={toDisplayLength(area.lowM, units).toFixed(0)} onBlur={(e) => set('lowM', e.target.value)} className={box} /></label>
-      <label>to ({u})<input defaultValue={toDisplayLength(area.highM, units).toFixed(0)} onBlur={(e) => set('highM', e.target.value)} className={box} /></label>
+      <label>Chart length ({u})<input defaultValue={toDisplay('length', area.lengthM, units).toFixed(0)} onBlur={(e) => set('lengthM', e.target.value)} className={box} /></label>
+      <label>Heights from ({u})<input defaultValue={toDisplay('length', area.lowM, units).toFixed(0)} onBlur={(e) => set('lowM', e.target.value)} className={box} /></label>
+      <label>to ({u})<input defaultValue={toDisplay('length', area.highM, units).toFixed(0)} onBlur={(e) => set('highM', e.target.value)} className={box} /></label>
     </div>
   );
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine, applyLineFixes, type LineAnalysis } from '../../../hydraulics/index';
 import { profileScene } from '../../../lib/chart/profile-scene';
 import { svgToString } from '../../../lib/chart/svg-node';
-import { displayUnits } from '../../../lib/units/display';
+import { displayUnits } from '../../../lib/units/index';
 import { referenceLine } from '../../lines/reference-line';
 import { findAll, layer, parseSvg, pathPoints, type XmlElement } from './svg-tree';
 

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine } from '../../../hydraulics/index';
 import { profileScene } from '../../../lib/chart/profile-scene';
 import { standaloneSvg } from '../../../lib/chart/svg-node';
-import { displayUnits } from '../../../lib/units/display';
+import { displayUnits } from '../../../lib/units/index';
 import { referenceLine } from '../../lines/reference-line';
 import { findAll, parseSvg } from './svg-tree';
 

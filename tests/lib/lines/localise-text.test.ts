@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine, FOOT_M, US_GALLON_M3 } from '../../../hydraulics/index';
 import { localiseWarningText } from '../../../lib/lines/localise-text';
 import { pdfText } from '../../../lib/report/pdf-text';
-import { displayUnits } from '../../../lib/units/display';
-import { formatHeadPressure } from '../../../lib/units/format';
+import { displayUnits } from '../../../lib/units/index';
 import { referenceLine } from '../../lines/reference-line';
 
 const us = displayUnits('us');
@@ -20,7 +19,7 @@ describe('warning words in the project units', () => {
     expect(FOOT_M).toBe(0.3048);
     const text = 'From ch. 530.4\u2013747.2 m the 40 mm PE80 pipe sees 81.7 m at ch. 650.0 m; 1.23 m/s at 1.20 L/s, down to -2.7 m.';
     const out = localiseWarningText(text, us);
-    expect(out).toBe(`From ch. 1740\u20132451 ft the 40 mm PE80 pipe sees 268.0 ft at ch. 2133 ft; 4.04 ft/s at ${(0.0012 / (US_GALLON_M3 / 60)).toFixed(1)} gpm, down to -8.9 ft.`);
+    expect(out).toBe(`From ch. 1740\u20132451 ft the 40 mm PE80 pipe sees 268.0 ft at ch. 2133 ft; 4.04 ft/s at ${(0.0012 / (US_GALLON_M3 / 60)).toFixed(1)} US gpm, down to -8.9 ft.`);
   });
 
   it('leaves no metre figure in any message of the reference line for a US project', () => {
@@ -29,14 +28,6 @@ describe('warning words in the project units', () => {
       expect(out).not.toMatch(/\d m\b(?!m)/);
       expect(out).not.toMatch(/m\/s|L\/s/);
     }
-  });
-});
-
-describe('head and pressure together', () => {
-  it('shows a head with its pressure: 10 m of 20 C water is 97.9 kPa (rho 998.2 kg/m3, g 9.80665)', () => {
-    // Density of water at 20 C 998.2 kg/m3: from memory (CRC Handbook of Chemistry and Physics table, rounded).
-    expect(formatHeadPressure(10, metric, 20)).toBe('10.0 m (98 kPa)');
-    expect(formatHeadPressure(10, us, 20)).toBe('32.8 ft (14.2 psi)');
   });
 });
 

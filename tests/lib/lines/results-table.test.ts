@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { analyzeLine, FOOT_M } from '../../../hydraulics/index';
 import { stationColumns, stationRows, stretchColumns, tableCsv } from '../../../lib/lines/results-table';
-import { displayUnits } from '../../../lib/units/display';
+import { displayUnits } from '../../../lib/units/index';
 import { referenceLine } from '../../lines/reference-line';
 
 describe('results tables and their CSV files', () => {

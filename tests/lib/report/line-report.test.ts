@@ -6,7 +6,7 @@ import { LINE_CAUTIONS } from '../../../lib/lines/cautions';
 import { localiseWarningText } from '../../../lib/lines/localise-text';
 import { WARNING_TITLES } from '../../../lib/lines/warning-words';
 import { lineReportPdf } from '../../../lib/report/line-report';
-import { displayUnits } from '../../../lib/units/display';
+import { displayUnits } from '../../../lib/units/index';
 import { LineDesignSchema } from '../../../lib/validations/line-design';
 import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
 

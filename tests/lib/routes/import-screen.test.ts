@@ -1,7 +1,6 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { formatDistance, formatLength, fromDisplayLength, toDisplayLength } from '../../../lib/display-units';
 import { buildImportPreview } from '../../../lib/import/preview';
 import { initialMappingDraft, mappingToOptions, routeNameFromFile } from '../../../lib/import/mapping-draft';
 import { inspectSurveyText } from '../../../lib/survey/inspect';
@@ -46,17 +45,5 @@ describe('the import screens’ logic', () => {
 
   it('route names come from file names', () => {
     expect(routeNameFromFile('.gpx')).toBe('Imported route');
-  });
-});
-
-describe('display units', () => {
-  it('shows metres or international feet (0.3048 m exactly) and converts typed values back', () => {
-    expect(formatLength(1402.6, 'metric')).toBe('1,402.6 m');
-    expect(formatLength(304.8, 'us', 0)).toBe('1,000 ft');
-    expect(toDisplayLength(0.3048, 'us')).toBeCloseTo(1, 12);
-    expect(fromDisplayLength(1000, 'us')).toBeCloseTo(304.8, 9);
-    expect(formatDistance(1400, 'metric')).toBe('1.40 km');
-    // 1 mile = 1609.344 m exactly
-    expect(formatDistance(1609.344 * 2, 'us')).toBe('2.00 mi');
   });
 });

@@ -1,18 +1,10 @@
 import type { ReactNode } from 'react';
-import { notFound } from 'next/navigation';
 import { ProjectNav } from '@/components/projects/project-nav';
 import { RoleBadge } from '@/components/ui/role-badge';
-import { requireTeamRole, requireUser } from '@/lib/auth/current';
-import { getProject } from '@/lib/data/projects';
-import { ProjectParams } from '@/lib/validations/projects';
+import { requireProjectPage } from '@/lib/auth/project-page';
 
 export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ projectId: string }> }) {
-  const parsed = ProjectParams.safeParse(await params);
-  if (!parsed.success) notFound();
-  const user = await requireUser();
-  const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
-  if (!project) notFound();
+  const { project, role } = await requireProjectPage(params);
   return (
     <div className="space-y-5">
       <div className="flex flex-wrap items-center gap-3">

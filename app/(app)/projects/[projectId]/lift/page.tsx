@@ -1,25 +1,17 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { LiftWorkspace } from '@/components/lift/lift-workspace';
 import { RoleBadge } from '@/components/ui/role-badge';
-import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { requireProjectPage } from '@/lib/auth/project-page';
 import { getLiftSummary } from '@/lib/data/lift-summary';
-import { getProject } from '@/lib/data/projects';
 import { can } from '@/lib/permissions';
 import { liftKeys } from '@/lib/queries/lift';
 import { getQueryClient } from '@/lib/queries/query-client';
-import { ProjectParams } from '@/lib/validations/projects';
 
 export const metadata: Metadata = { title: 'Lift & storage' };
 
 export default async function LiftPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const parsed = ProjectParams.safeParse(await params);
-  if (!parsed.success) notFound();
-  const user = await requireUser();
-  const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
-  if (!project) notFound();
+  const { project, role } = await requireProjectPage(params);
 
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: liftKeys.summary(project.id), queryFn: () => getLiftSummary(project.id) });

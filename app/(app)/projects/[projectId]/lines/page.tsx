@@ -1,27 +1,19 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { LinesTable } from '@/components/lines/lines-table';
 import { NewLineForm } from '@/components/lines/new-line-form';
 import { Panel } from '@/components/ui/panel';
-import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { requireProjectPage } from '@/lib/auth/project-page';
 import { listRouteChoices } from '@/lib/data/line-routes';
 import { listLines } from '@/lib/data/lines';
-import { getProject } from '@/lib/data/projects';
 import { can } from '@/lib/permissions';
 import { lineKeys } from '@/lib/queries/lines';
 import { getQueryClient } from '@/lib/queries/query-client';
-import { ProjectParams } from '@/lib/validations/projects';
 
 export const metadata: Metadata = { title: 'Lines' };
 
 export default async function LinesPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const parsed = ProjectParams.safeParse(await params);
-  if (!parsed.success) notFound();
-  const user = await requireUser();
-  const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
-  if (!project) notFound();
+  const { project, role } = await requireProjectPage(params);
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: lineKeys.project(project.id), queryFn: () => listLines(project.id) });
   const editable = can(role, 'design.edit');

@@ -1,27 +1,19 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { NewSketchRouteForm } from '@/components/routes/new-sketch-route-form';
 import { RoutesList } from '@/components/routes/routes-list';
 import { Panel } from '@/components/ui/panel';
-import { requireTeamRole, requireUser } from '@/lib/auth/current';
-import { getProject } from '@/lib/data/projects';
+import { requireProjectPage } from '@/lib/auth/project-page';
 import { listRoutes } from '@/lib/data/routes';
 import { can } from '@/lib/permissions';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { routeKeys } from '@/lib/queries/routes';
-import { ProjectParams } from '@/lib/validations/projects';
 
 export const metadata: Metadata = { title: 'Survey routes' };
 
 export default async function RoutesPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const parsed = ProjectParams.safeParse(await params);
-  if (!parsed.success) notFound();
-  const user = await requireUser();
-  const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
-  if (!project) notFound();
+  const { project, role } = await requireProjectPage(params);
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: routeKeys.project(project.id), queryFn: () => listRoutes(project.id) });
   const editable = can(role, 'survey.edit');

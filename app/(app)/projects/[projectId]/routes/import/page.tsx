@@ -1,23 +1,15 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { ImportWizard } from '@/components/routes/import/import-wizard';
 import { Panel } from '@/components/ui/panel';
-import { requireTeamRole, requireUser } from '@/lib/auth/current';
-import { getProject } from '@/lib/data/projects';
+import { requireProjectPage } from '@/lib/auth/project-page';
 import { can } from '@/lib/permissions';
 import { ROLE_LABELS } from '@/lib/roles';
-import { ProjectParams } from '@/lib/validations/projects';
 
 export const metadata: Metadata = { title: 'Import a survey' };
 
 export default async function ImportPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const parsed = ProjectParams.safeParse(await params);
-  if (!parsed.success) notFound();
-  const user = await requireUser();
-  const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
-  if (!project) notFound();
+  const { project, role } = await requireProjectPage(params);
 
   return (
     <div className="space-y-4">
