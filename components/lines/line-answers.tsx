@@ -14,14 +14,14 @@ function Card({ label, value, note, tone }: { label: string; value: string; note
 }
 
 /** The answer first: flow, end pressure, worst static pressure, warnings. */
-export function LineAnswersStrip({ answers, units, temperatureC }: { answers: LineAnswers; units: DisplayUnits; temperatureC: number }) {
+export function LineAnswersStrip({ answers, units, temperatureC, flowNote }: { answers: LineAnswers; units: DisplayUnits; temperatureC: number; flowNote?: string }) {
   const a = answers;
   const endOk = a.endResidualHeadM >= a.endTargetHeadM - 1e-6;
   const staticOk = a.worstStatic.headM <= a.worstStatic.allowableHeadM;
   const warningsTone = a.counts.danger > 0 ? 'bad' : a.counts.warning > 0 ? 'warn' : 'ok';
   return (
     <section aria-label="Answers" className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4" data-testid="line-answers">
-      <Card label="Flow delivered" value={formatFlow(a.flowM3s, units)} note={a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
+      <Card label="Flow delivered" value={formatFlow(a.flowM3s, units)} note={flowNote ?? (a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends')} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
       <Card label="Residual at the end" value={formatHeadPressure(a.endResidualHeadM, units, temperatureC)} note={`wanted ${formatHeadPressure(a.endTargetHeadM, units, temperatureC)}`} tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'} />
       <Card label="Worst static pressure" value={formatHeadPressure(a.worstStatic.headM, units, temperatureC)} note={`at ch. ${formatChainage(a.worstStatic.chainageM, units)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units, temperatureC)}`} tone={staticOk ? 'ok' : 'bad'} />
       <Card label="Warnings" value={`${a.counts.danger} danger · ${a.counts.warning} warning`} note={`${a.counts.info} advice`} tone={warningsTone} />

@@ -99,7 +99,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.
         </p>
       )}
-      {answers && analysis && <LineAnswersStrip answers={answers} units={units} temperatureC={analysis.settings.waterTemperatureC} />}
+      {answers && analysis && <LineAnswersStrip answers={answers} units={units} temperatureC={analysis.settings.waterTemperatureC} flowNote={ramFeed?.flowFromRam ? `what ${ramFeed.outlet.name} delivers` : undefined} />}
       {ramFeed && analysis && <RamFeedStrip feed={ramFeed} units={units} temperatureC={analysis.settings.waterTemperatureC} />}
       <p className="text-xs text-creek-700">{SHORT_CAUTION}</p>
       {note && <p role="alert" className="text-sm text-clay-700">{note}</p>}
@@ -107,6 +107,11 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       {analysis && (
         <section aria-labelledby="warnings-heading" className="space-y-2">
           <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({analysis.warnings.length})</h2>
+          {winter?.warning && (
+            <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-2 text-sm text-clay-700" data-testid="winter-alert">
+              Winter: the pipe lies shallower than the site&apos;s frost depth and the line is not drained. See <a className="underline" href="#winter">Winter</a> below for the fix.
+            </p>
+          )}
           <WarningsPanel warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
         </section>
       )}
@@ -159,6 +164,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       </Panel>
       {winter && (
         <Panel title="Winter">
+          <span id="winter" className="block scroll-mt-4" />
           <WinterPanel design={design} plan={winter} units={units} change={draft.change} canEdit={canEdit} onProblem={setNote} />
         </Panel>
       )}
