@@ -4,6 +4,16 @@ import type { LineDevice, LineEnd, LineFitting, LineFlow, LineSettings, LineStar
 
 export type LineStatus = 'draft' | 'for-checking' | 'issued';
 
+/** Where a line is fed: the core's own starts, or a ram site of the project whose plan gives the pump outlet head. */
+export type StoredLineStart = LineStart | { kind: 'ram-site'; ramSiteId: string };
+/** The core's flows, or what the feeding ram delivers. */
+export type StoredLineFlow = LineFlow | { kind: 'pump-delivery' };
+
+/** How a line is kept through winter, as the designer chose it. */
+export interface LineWinterSetting {
+  treatment: 'buried-below-frost' | 'drained-for-winter';
+}
+
 /** A pipeline laid along a survey route (or a chainage window of it). Its analysis is never stored. */
 export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<Line>> {
   declare id: CreationOptional<string>;
@@ -13,14 +23,15 @@ export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<L
   declare notes: CreationOptional<string>;
   declare fromChainageM: number | null;
   declare toChainageM: number | null;
-  declare startCondition: LineStart;
+  declare startCondition: StoredLineStart;
   declare endCondition: LineEnd;
-  declare flow: LineFlow;
+  declare flow: StoredLineFlow;
   declare stretches: LineStretch[];
   declare fittings: LineFitting[];
   declare devices: LineDevice[];
   declare pipes: PipeSpec[];
   declare settings: LineSettings;
+  declare winter: CreationOptional<LineWinterSetting | null>;
   declare status: CreationOptional<LineStatus>;
   declare checkedBy: CreationOptional<string>;
   declare revision: CreationOptional<number>;
@@ -47,6 +58,7 @@ export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<L
         devices: { type: DataTypes.JSONB, allowNull: false },
         pipes: { type: DataTypes.JSONB, allowNull: false },
         settings: { type: DataTypes.JSONB, allowNull: false },
+        winter: { type: DataTypes.JSONB, allowNull: true },
         status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'draft' },
         checkedBy: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },

@@ -9,6 +9,8 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare description: CreationOptional<string>;
   declare unitSystem: CreationOptional<UnitSystem>;
   declare siteNotes: CreationOptional<string>;
+  /** Depth frost reaches at the site, m (local code or records); null when not known. */
+  declare frostDepthM: CreationOptional<number | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -23,6 +25,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
         description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         unitSystem: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'metric' },
         siteNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        frostDepthM: { type: DataTypes.DOUBLE, allowNull: true },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,

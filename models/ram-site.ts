@@ -15,6 +15,8 @@ export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttrib
   declare driveMaterial: RamDriveMaterial;
   declare driveRigid: CreationOptional<boolean | null>;
   declare liftM: number;
+  /** Elevation of the pump, m above the survey datum (where a delivery line's head is measured from). */
+  declare pumpElevationM: CreationOptional<number | null>;
   declare deliveryLengthM: number;
   declare deliveryRouteId: CreationOptional<string | null>;
   declare deliveryPipeId: CreationOptional<string | null>;
@@ -44,6 +46,7 @@ export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttrib
         driveMaterial: { type: DataTypes.STRING(8), allowNull: false },
         driveRigid: { type: DataTypes.BOOLEAN, allowNull: true },
         liftM: { type: DataTypes.DOUBLE, allowNull: false },
+        pumpElevationM: { type: DataTypes.DOUBLE, allowNull: true },
         deliveryLengthM: { type: DataTypes.DOUBLE, allowNull: false },
         deliveryRouteId: { type: DataTypes.UUID, allowNull: true },
         deliveryPipeId: { type: DataTypes.STRING(80), allowNull: true },

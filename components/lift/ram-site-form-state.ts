@@ -15,6 +15,7 @@ export interface RamSiteFormState {
   driveMaterial: string;
   driveRigid: 'auto' | 'yes' | 'no';
   lift: string;
+  pumpElevation: string;
   routeId: string;
   deliveryLength: string;
   /** A catalogue series id, or "custom" for bore + C. */
@@ -32,7 +33,7 @@ export interface RamSiteFormState {
 export function emptyRamSiteForm(): RamSiteFormState {
   return {
     name: '', sourceId: '', tankId: '', driveFlow: '', fall: '', driveLength: '', driveBore: '', driveMaterial: 'steel', driveRigid: 'auto',
-    lift: '', routeId: '', deliveryLength: '', pipeSeries: 'custom', pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
+    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: 'custom', pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
     sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', notes: '',
   };
 }
@@ -54,6 +55,7 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
     driveMaterial: drivePipe.material,
     driveRigid: drivePipe.rigid === null ? 'auto' : drivePipe.rigid ? 'yes' : 'no',
     lift: inputValue('head', site.liftM, units),
+    pumpElevation: inputValue('elevation', site.pumpElevationM, units),
     routeId: deliveryPipe.routeId ?? '',
     deliveryLength: inputValue('length', deliveryPipe.lengthM, units),
     pipeSeries: pipe ? (SERIES_OF_PIPE.get(pipe.id) ?? 'custom') : 'custom',
@@ -90,6 +92,7 @@ export function ramSiteInputFrom(state: RamSiteFormState, units: UnitSystem) {
       rigid: state.driveRigid === 'auto' ? null : state.driveRigid === 'yes',
     },
     liftM: si('head', state.lift),
+    pumpElevationM: siOrNull('elevation', state.pumpElevation),
     deliveryPipe: {
       routeId: state.routeId || null,
       lengthM: state.routeId ? null : siOrNull('length', state.deliveryLength),

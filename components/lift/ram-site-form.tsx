@@ -91,6 +91,10 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
       <fieldset className="grid gap-3 rounded-md border border-creek-100 p-3 sm:grid-cols-3">
         <legend className="px-1 text-sm font-semibold text-creek-900">Lift and pump</legend>
         <NumberField id={`${prefix}-lift`} label="Lift, pump to delivery outlet" unit={unitOf('head', units)} value={state.lift} onChange={(value) => set('lift', value)} errors={form.fields.liftM} />
+        <NumberField
+          id={`${prefix}-pumpElevation`} label="Pump elevation" unit={unitOf('elevation', units)} value={state.pumpElevation} onChange={(value) => set('pumpElevation', value)}
+          errors={form.fields.pumpElevationM} hint="On the survey datum; a delivery line fed by this ram starts its head here"
+        />
         <SelectField id={`${prefix}-sizeClassId`} label="Pump size class" value={state.sizeClassId} onChange={(event) => set('sizeClassId', event.target.value)} errors={form.fields.sizeClassId}>
           <option value="">Suggest one from the drive flow</option>
           {RAM_SIZE_CLASSES.map((sizeClass) => (

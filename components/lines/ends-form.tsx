@@ -1,41 +1,82 @@
 'use client';
 
-import type { LineEnd, LineFlow, LineStart } from '@/hydraulics/index';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
+import type { LineEnd } from '@/hydraulics/index';
+import type { PumpOutletHead } from '@/lib/lift/pump-outlet';
+import { lineStartFromRam } from '@/lib/lines/ram-start';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
+import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay } from '@/lib/units';
 
 type Change = (next: LineDesign, label: string) => string | null;
 
 const SELECT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50';
 
 /** Start, end and flow of the line, in the project's units. */
-export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGroundM }: {
+export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGroundM, ramOutlets }: {
   design: LineDesign;
   units: DisplayUnits;
   change: Change;
   canEdit: boolean;
   firstGroundM: number;
   lastGroundM: number;
+  /** Planned ram sites of the project that can feed this line. */
+  ramOutlets: readonly PumpOutletHead[];
 }) {
   const L = (m: number) => toDisplay('length', m, units.system);
   const toM = (v: number) => fromDisplay('length', v, units.system);
-  const setStart = (start: LineStart, label: string) => change({ ...design, start }, label);
+  // Leaving the ram: the ram's flow becomes an ordinary design flow the designer can change.
+  const flowAwayFromRam = (): LineDesign['flow'] => {
+    if (design.flow.kind !== 'pump-delivery') return design.flow;
+    const fed = design.start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === (design.start as { ramSiteId: string }).ramSiteId) : undefined;
+    return { kind: 'design', flowM3s: fed?.deliveredFlowM3s ?? 0.001 };
+  };
+  const setStart = (start: LineDesign['start'], label: string) =>
+    change({ ...design, start, flow: start.kind === 'ram-site' ? design.flow : flowAwayFromRam() }, label);
+  const startAtRam = (ramSiteId: string, label: string) => change({ ...design, start: { kind: 'ram-site', ramSiteId }, flow: { kind: 'pump-delivery' } }, label);
   const setEnd = (end: LineEnd, label: string) => change({ ...design, end }, label);
-  const setFlow = (flow: LineFlow, label: string) => change({ ...design, flow }, label);
+  const setFlow = (flow: LineDesign['flow'], label: string) => change({ ...design, flow }, label);
   const { start, end, flow } = design;
+  const ram = start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === start.ramSiteId) : undefined;
+  const ramStart = ram ? lineStartFromRam(ram, firstGroundM) : null;
+
+  function pickStartKind(kind: string) {
+    if (kind === 'ram-site') return ramOutlets[0] ? startAtRam(ramOutlets[0].ramSiteId, 'start at the ram pump outlet') : 'No ram site with a workable plan in this project';
+    return setStart(kind === 'pump' ? { kind: 'pump', outletHeadM: firstGroundM + 30 } : { kind: 'water-level', levelM: firstGroundM }, 'change the start');
+  }
 
   return (
     <div className="grid gap-4 md:grid-cols-3">
       <fieldset className="space-y-2 rounded-md border border-creek-100 p-3">
         <legend className="px-1 text-sm font-semibold text-creek-900">Start</legend>
         <label className="block text-xs font-medium text-creek-900" htmlFor="start-kind">Fed from</label>
-        <select id="start-kind" className={SELECT} disabled={!canEdit} value={start.kind} onChange={(e) =>
-          setStart(e.target.value === 'pump' ? { kind: 'pump', outletHeadM: firstGroundM + 30 } : { kind: 'water-level', levelM: firstGroundM }, 'change the start')}>
+        <select id="start-kind" className={SELECT} disabled={!canEdit} value={start.kind} onChange={(e) => pickStartKind(e.target.value)}>
           <option value="water-level">Water surface (spring box, tank, break-pressure tank)</option>
-          <option value="pump">Pump outlet</option>
+          <option value="pump">Pump outlet (heads typed in)</option>
+          <option value="ram-site" disabled={ramOutlets.length === 0}>Ram pump outlet{ramOutlets.length === 0 ? ' (no planned ram site in this project)' : ''}</option>
         </select>
-        {start.kind === 'water-level' ? (
+        {start.kind === 'ram-site' ? (
+          <>
+            <label className="block text-xs font-medium text-creek-900" htmlFor="start-ram-site">Ram site</label>
+            <select id="start-ram-site" className={SELECT} disabled={!canEdit} value={start.ramSiteId} onChange={(e) => startAtRam(e.target.value, 'change the ram site')}>
+              {!ram && <option value={start.ramSiteId}>(ram site gone or not planned)</option>}
+              {ramOutlets.map((o) => <option key={o.ramSiteId} value={o.ramSiteId}>{o.name}</option>)}
+            </select>
+            {ramStart ? (
+              <dl className="space-y-0.5 text-xs text-creek-800" data-testid="ram-start-figures">
+                <div className="flex justify-between gap-2"><dt>Pump elevation</dt><dd className="tabular">{formatQuantity('length', ramStart.pumpElevationM, units.system)}</dd></div>
+                <div className="flex justify-between gap-2"><dt>Grade at the outlet, pumping</dt><dd className="tabular">{formatQuantity('length', ramStart.start.outletHeadM, units.system)}</dd></div>
+                <div className="flex justify-between gap-2"><dt>Grade with the line shut</dt><dd className="tabular">{formatQuantity('length', ramStart.start.shutoffHeadM ?? ramStart.start.outletHeadM, units.system)}</dd></div>
+                <p className="text-creek-600">
+                  {ramStart.pumpElevationFrom === 'ram-site'
+                    ? 'From the ram site\'s plan; a change there reaches this line at the next analysis.'
+                    : 'The ram site gives no pump elevation, so the ground at the line\'s first station is used: set the pump elevation on the Lift & storage page.'}
+                </p>
+              </dl>
+            ) : (
+              <p role="alert" className="text-xs text-clay-700">This ram site is gone or has no workable plan. Fix it on the Lift & storage page or pick another start.</p>
+            )}
+          </>
+        ) : start.kind === 'water-level' ? (
           <UnitNumberInput id="start-level" label="Water level" unit={units.length} value={L(start.levelM)} disabled={!canEdit}
             onCommit={(v) => setStart({ kind: 'water-level', levelM: toM(v!) }, 'change the start water level')} />
         ) : (
@@ -75,7 +116,10 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
       <fieldset className="space-y-2 rounded-md border border-creek-100 p-3">
         <legend className="px-1 text-sm font-semibold text-creek-900">Flow</legend>
         <div className="flex flex-col gap-1 text-sm">
-          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design'} onChange={() => setFlow({ kind: 'design', flowM3s: 0.001 }, 'use a design flow')} /> Design flow</label>
+          {start.kind === 'ram-site' && (
+            <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'pump-delivery'} onChange={() => setFlow({ kind: 'pump-delivery' }, 'use what the ram delivers')} /> What the ram delivers{ram ? ` (${formatQuantity('designFlow', ram.deliveredFlowM3s, units.system)})` : ''}</label>
+          )}
+          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design'} onChange={() => setFlow({ kind: 'design', flowM3s: ram?.deliveredFlowM3s ?? 0.001 }, 'use a design flow')} /> Design flow</label>
           <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'find'} onChange={() => setFlow({ kind: 'find' }, 'find the flow')} /> Find the flow the line carries by gravity</label>
         </div>
         {flow.kind === 'design' && (

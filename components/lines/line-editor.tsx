@@ -1,10 +1,10 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import { lineQuery, lineStationsQuery } from '@/lib/queries/lines';
-import type { UnitSystem } from '@/lib/units';
+import { lineQuery, lineSiteContextQuery, lineStationsQuery } from '@/lib/queries/lines';
 import { Skeleton } from '@/components/ui/panel';
 import { LineWorkspace } from './line-workspace';
+import { type UnitSystem } from '@/lib/units';
 
 export interface LineEditorProps {
   lineId: string;
@@ -17,18 +17,19 @@ export interface LineEditorProps {
 export function LineEditor({ lineId, projectName, unitSystem, canEdit }: LineEditorProps) {
   const line = useQuery(lineQuery(lineId));
   const stations = useQuery(lineStationsQuery(lineId));
-  if (line.isError || stations.isError) {
+  const context = useQuery(lineSiteContextQuery(lineId));
+  if (line.isError || stations.isError || context.isError) {
     return (
       <p role="alert" className="text-sm text-clay-700">
-        The line could not be loaded. <button className="underline" onClick={() => { void line.refetch(); void stations.refetch(); }}>Try again</button>
+        The line could not be loaded. <button className="underline" onClick={() => { void line.refetch(); void stations.refetch(); void context.refetch(); }}>Try again</button>
       </p>
     );
   }
-  if (!line.data || !stations.data) return <LineEditorSkeleton />;
+  if (!line.data || !stations.data || !context.data) return <LineEditorSkeleton />;
   if (stations.data.length < 2) {
     return <p role="alert" className="text-sm text-clay-700">This line has no route with at least two stations any more (the route was removed or emptied). Its design is kept: survey the route again, or start a new line on a surveyed route.</p>;
   }
-  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} />;
+  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} context={context.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} />;
 }
 
 export function LineEditorSkeleton() {

@@ -9,6 +9,9 @@ import { lineAnswers } from '@/lib/lines/answers';
 import { SHORT_CAUTION } from '@/lib/lines/cautions';
 import { addDevice } from '@/lib/lines/edit-design';
 import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
+import { ramFeedAnswers } from '@/lib/lines/ram-feed';
+import type { LineSiteContext } from '@/lib/lines/ram-start';
+import { lineWinterPlan } from '@/lib/lines/winter';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
@@ -23,24 +26,28 @@ import { LineToolbar } from './line-toolbar';
 import { PlanView } from './plan-view';
 import { nearestPoint, ProfileChart } from './profile-chart';
 import { ProfileReadout } from './profile-readout';
+import { RamFeedStrip } from './ram-feed-strip';
 import { ResultsTables } from './results-tables';
 import { SettingsForm } from './settings-form';
 import { StretchTable } from './stretch-table';
 import { useLineDraft } from './use-line-draft';
 import { WarningsPanel } from './warnings-panel';
+import { WinterPanel } from './winter-panel';
 
 export interface LineWorkspaceProps {
   line: LineRecord;
   stations: LineRouteStation[];
+  /** Ram sites that can feed the line and the site's frost depth. */
+  context: LineSiteContext;
   projectName: string;
   unitSystem: UnitSystem;
   canEdit: boolean;
 }
 
 /** The designer's screen: answers first, warnings, the long profile beside the plan, then the design and the results. */
-export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit }: LineWorkspaceProps) {
+export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit }: LineWorkspaceProps) {
   const units = displayUnits(unitSystem);
-  const draft = useLineDraft(line, stations, canEdit);
+  const draft = useLineDraft(line, stations, context, canEdit);
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
@@ -55,6 +62,11 @@ export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit
 
   const analysis = 'analysis' in result ? result.analysis : null;
   const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
+  const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
+  const winter = useMemo(
+    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
+    [analysis, design.winter, context.frostDepthM, stations],
+  );
   const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;
 
   function selectWarning(index: number) {
@@ -66,7 +78,7 @@ export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit
   }
 
   function applyFix(w: LineWarning) {
-    const fixed = applyLineFixes(lineInputOf(design, stations), w.fixes);
+    const fixed = applyLineFixes(lineInputOf(design, stations, context), w.fixes);
     const problem = draft.change(designWithInput(design, fixed), fixWords(w.fixes, units).replace(/^Add/, 'add').replace(/^Use/, 'use'));
     setSelected(null);
     setNote(problem ? `The fix could not be applied: ${problem}` : null);
@@ -86,13 +98,19 @@ export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit
           The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.
         </p>
       )}
-      {answers && analysis && <LineAnswersStrip answers={answers} units={units} temperatureC={analysis.settings.waterTemperatureC} />}
+      {answers && analysis && <LineAnswersStrip answers={answers} units={units} temperatureC={analysis.settings.waterTemperatureC} flowNote={ramFeed?.flowFromRam ? `what ${ramFeed.outlet.name} delivers` : undefined} />}
+      {ramFeed && analysis && <RamFeedStrip feed={ramFeed} units={units} temperatureC={analysis.settings.waterTemperatureC} />}
       <p className="text-xs text-creek-700">{SHORT_CAUTION}</p>
       {note && <p role="alert" className="text-sm text-clay-700">{note}</p>}
 
       {analysis && (
         <section aria-labelledby="warnings-heading" className="space-y-2">
           <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({analysis.warnings.length})</h2>
+          {winter?.warning && (
+            <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-2 text-sm text-clay-700" data-testid="winter-alert">
+              Winter: the pipe lies shallower than the site&apos;s frost depth and the line is not drained. See <a className="underline" href="#winter">Winter</a> below for the fix.
+            </p>
+          )}
           <WarningsPanel warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
         </section>
       )}
@@ -141,8 +159,14 @@ export function LineWorkspace({ line, stations, projectName, unitSystem, canEdit
       )}
 
       <Panel title="Ends and flow">
-        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} />
+        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} />
       </Panel>
+      {winter && (
+        <Panel title="Winter">
+          <span id="winter" className="block scroll-mt-4" />
+          <WinterPanel design={design} plan={winter} units={units} change={draft.change} canEdit={canEdit} onProblem={setNote} />
+        </Panel>
+      )}
       <Panel title="Pipe stretches">
         <StretchTable design={design} results={analysis?.stretches ?? []} units={units} change={draft.change} canEdit={canEdit} temperatureC={analysis?.settings.waterTemperatureC ?? 20} />
       </Panel>

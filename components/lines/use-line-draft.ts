@@ -5,6 +5,7 @@ import { analyzeLine, HydraulicsInputError, type LineAnalysis } from '@/hydrauli
 import type { LineRecord } from '@/lib/data/lines';
 import { record, redo, startHistory, undo, type History } from '@/lib/lines/history';
 import { lineInputOf } from '@/lib/lines/line-input';
+import type { LineSiteContext } from '@/lib/lines/ram-start';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useUpdateLine } from '@/lib/queries/lines';
@@ -13,9 +14,9 @@ import { LineDesignSchema, type LineDesign } from '@/lib/validations/line-design
 export type SaveState = 'saved' | 'pending' | 'saving' | 'failed' | 'conflict';
 const SAVE_DELAY_MS = 500;
 
-function analyse(design: LineDesign, stations: readonly LineRouteStation[]): { analysis: LineAnalysis } | { error: string } {
+function analyse(design: LineDesign, stations: readonly LineRouteStation[], context: LineSiteContext): { analysis: LineAnalysis } | { error: string } {
   try {
-    return { analysis: analyzeLine(lineInputOf(design, stations)) };
+    return { analysis: analyzeLine(lineInputOf(design, stations, context)) };
   } catch (error) {
     if (error instanceof HydraulicsInputError) return { error: error.message };
     throw error;
@@ -27,7 +28,7 @@ function analyse(design: LineDesign, stations: readonly LineRouteStation[]): { a
  * every change, saved through the API shortly after the last change. A change that the schema or
  * the core refuses is not taken; its reason is returned for the form to show.
  */
-export function useLineDraft(line: LineRecord, stations: readonly LineRouteStation[], canEdit: boolean) {
+export function useLineDraft(line: LineRecord, stations: readonly LineRouteStation[], context: LineSiteContext, canEdit: boolean) {
   const [history, setHistory] = useState<History<LineDesign>>(() => startHistory(line.design));
   const [saveState, setSaveState] = useState<SaveState>('saved');
   const [saveError, setSaveError] = useState<string | null>(null);
@@ -37,19 +38,19 @@ export function useLineDraft(line: LineRecord, stations: readonly LineRouteStati
   const update = useUpdateLine(line.id);
   const design = history.present;
 
-  const result = useMemo(() => analyse(design, stations), [design, stations]);
+  const result = useMemo(() => analyse(design, stations, context), [design, stations, context]);
 
   const change = useCallback(
     (next: LineDesign, label: string): string | null => {
       if (!canEdit) return 'Your role can view this line but not change it';
       const parsed = LineDesignSchema.safeParse(next);
       if (!parsed.success) return parsed.error.issues.map((i) => i.message).join('; ');
-      const checked = analyse(parsed.data, stations);
+      const checked = analyse(parsed.data, stations, context);
       if ('error' in checked) return checked.error;
       setHistory((h) => record(h, parsed.data, label));
       return null;
     },
-    [canEdit, stations],
+    [canEdit, stations, context],
   );
 
   useEffect(() => {

@@ -9,18 +9,28 @@ import type { ProjectSummary } from '@/lib/data/projects';
 import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useUpdateProject } from '@/lib/queries/projects';
 import { UpdateProjectSchema } from '@/lib/validations/projects';
+import { displayUnits, formatPlainNumber, fromDisplay, toDisplay } from '@/lib/units';
+
+/** The typed frost depth in SI: empty means not known; text that is not a number stays NaN for the schema to refuse. */
+function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSummary['unitSystem']): number | null {
+  const trimmed = String(text ?? '').trim();
+  return trimmed === '' ? null : fromDisplay('length', Number(trimmed), unitSystem);
+}
 
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
   const router = useRouter();
   const update = useUpdateProject(project.id);
   const { fields, message, check, fail } = useFormErrors();
   const [saved, setSaved] = useState(false);
+  const units = displayUnits(project.unitSystem);
+  const frostShown = project.frostDepthM === null ? '' : formatPlainNumber(toDisplay('length', project.frostDepthM, units.system), 2);
 
   if (!editable) {
     return (
       <dl className="grid gap-3 text-sm sm:grid-cols-2">
         <div><dt className="font-medium text-creek-800">Description</dt><dd className="text-creek-700">{project.description || '—'}</dd></div>
         <div><dt className="font-medium text-creek-800">Units</dt><dd className="text-creek-700">{project.unitSystem === 'us' ? 'US customary' : 'Metric'}</dd></div>
+        <div><dt className="font-medium text-creek-800">Frost depth</dt><dd className="text-creek-700">{frostShown ? `${frostShown} ${units.length}` : 'not set'}</dd></div>
         <div className="sm:col-span-2"><dt className="font-medium text-creek-800">Site notes</dt><dd className="whitespace-pre-line text-creek-700">{project.siteNotes || '—'}</dd></div>
       </dl>
     );
@@ -32,6 +42,7 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
     setSaved(false);
     const input = check(UpdateProjectSchema, {
       name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem'), siteNotes: form.get('siteNotes'),
+      frostDepthM: frostDepthFrom(form.get('frostDepthM'), project.unitSystem),
     });
     if (!input) return;
     try {
@@ -50,6 +61,8 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
         <option value="metric">Metric (m, L/s, kPa and m of head)</option>
         <option value="us">US customary (ft, gpm, psi and ft of head)</option>
       </SelectField>
+      <TextField id="frostDepthM" label={`Frost depth (${units.length})`} inputMode="decimal" defaultValue={frostShown} errors={fields.frostDepthM}
+        hint="How deep frost reaches at the site (local code or records); lines with less cover are drained for winter. Empty: not known." />
       <div className="sm:col-span-2"><TextField id="description" label="Description" defaultValue={project.description} errors={fields.description} /></div>
       <div className="sm:col-span-2"><TextAreaField id="siteNotes" label="Site notes" rows={4} defaultValue={project.siteNotes} errors={fields.siteNotes} /></div>
       <div className="flex items-center gap-3 sm:col-span-2">

@@ -48,6 +48,7 @@ export const ramSiteRecord = (row: RamSite): RamSiteRecord => ({
   fallM: row.fallM,
   drivePipe: { lengthM: row.driveLengthM, insideDiameterM: row.driveInsideDiameterM, material: row.driveMaterial, rigid: row.driveRigid },
   liftM: row.liftM,
+  pumpElevationM: row.pumpElevationM ?? null,
   deliveryPipe: {
     routeId: row.deliveryRouteId,
     lengthM: row.deliveryLengthM,

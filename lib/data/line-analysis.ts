@@ -2,13 +2,17 @@ import 'server-only';
 import { analyzeLine, type LineAnalysis } from '../../hydraulics/index';
 import { AppError, notFound } from '../errors';
 import { lineInputOf } from '../lines/line-input';
+import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
+import { lineSiteContext } from './line-context';
 import { getLine, stationsOfLine, type LineRecord } from './lines';
 
 export interface AnalysedLine {
   line: LineRecord;
   stations: LineRouteStation[];
   analysis: LineAnalysis;
+  /** The ram sites and frost depth the analysis read, as they are now. */
+  context: LineSiteContext;
 }
 
 /** A saved line with its stations and its analysis, computed now (analyses are never stored). */
@@ -17,5 +21,6 @@ export async function analyseSavedLine(lineId: string): Promise<AnalysedLine> {
   if (!line) throw notFound();
   if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
   const stations = await stationsOfLine(line.routeId, line);
-  return { line, stations, analysis: analyzeLine(lineInputOf(line.design, stations)) };
+  const context = await lineSiteContext(line.projectId);
+  return { line, stations, context, analysis: analyzeLine(lineInputOf(line.design, stations, context)) };
 }

@@ -6,9 +6,11 @@ import type { Line, LineStatus } from '../../models/line';
 import { AppError, notFound } from '../errors';
 import { startingDesign } from '../lines/default-design';
 import { lineInputOf } from '../lines/line-input';
+import type { LineSiteContext } from '../lines/ram-start';
 import { lineStationsOf, type ChainageWindow, type LineRouteStation } from '../lines/route-stations';
 import type { LineDesign } from '../validations/line-design';
 import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
+import { assertRamSiteInProject, lineSiteContext } from './line-context';
 import { routeColumns, routeOwner } from './line-routes';
 
 /** A line as the API and pages see it (SI units; the design as the core reads it). */
@@ -43,6 +45,7 @@ function designOf(line: Line): LineDesign {
     devices: line.devices,
     pipes: line.pipes,
     settings: line.settings,
+    ...(line.winter ? { winter: line.winter } : {}),
   } as LineDesign;
 }
 
@@ -56,7 +59,8 @@ function columnsOf(design: LineDesign) {
     devices: design.devices,
     pipes: design.pipes,
     settings: design.settings,
-  } as Pick<Line, 'startCondition' | 'endCondition' | 'flow' | 'stretches' | 'fittings' | 'devices' | 'pipes' | 'settings'>;
+    winter: design.winter ?? null,
+  } as Pick<Line, 'startCondition' | 'endCondition' | 'flow' | 'stretches' | 'fittings' | 'devices' | 'pipes' | 'settings' | 'winter'>;
 }
 
 async function names(ids: (string | null)[], transaction?: Transaction): Promise<Map<string, string>> {
@@ -140,9 +144,9 @@ export async function stationsOfLine(routeId: string, window: ChainageWindow): P
 }
 
 /** Runs the core's whole-line check; its complaint becomes a 400 naming the design field. */
-function assertDesignFits(design: LineDesign, stations: readonly LineRouteStation[]): void {
+function assertDesignFits(design: LineDesign, stations: readonly LineRouteStation[], context: LineSiteContext): void {
   try {
-    assertLineInput(lineInputOf(design, stations));
+    assertLineInput(lineInputOf(design, stations, context));
   } catch (error) {
     if (!(error instanceof HydraulicsInputError)) throw error;
     const field = `design.${error.field}${error.index === undefined ? '' : `.${error.index}`}`;
@@ -162,7 +166,8 @@ export async function createLine(projectId: string, userId: string, input: Creat
   const window = { fromChainageM: input.fromChainageM ?? null, toChainageM: input.toChainageM ?? null };
   const stations = await stationsOfLine(input.routeId, window);
   const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
-  assertDesignFits(design, stations);
+  await assertRamSiteInProject(design, projectId);
+  assertDesignFits(design, stations, await lineSiteContext(projectId));
   const line = await models().Line.create({
     projectId,
     routeId: input.routeId,
@@ -190,12 +195,15 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     delete fields.baseRevision;
     if (fields.routeId !== undefined && fields.routeId !== line.routeId) await assertRouteInProject(fields.routeId, line.projectId);
     line.set(fields as Partial<Line>);
-    if (design) line.set(columnsOf(design as LineDesign));
+    if (design) {
+      await assertRamSiteInProject(design as LineDesign, line.projectId);
+      line.set(columnsOf(design as LineDesign));
+    }
     const geometryChanged = design !== undefined || fields.routeId !== undefined || fields.fromChainageM !== undefined || fields.toChainageM !== undefined;
     if (geometryChanged) {
       if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
       const stations = await stationsOfLine(line.routeId, { fromChainageM: line.fromChainageM, toChainageM: line.toChainageM });
-      assertDesignFits(designOf(line), stations);
+      assertDesignFits(designOf(line), stations, await lineSiteContext(line.projectId));
     }
     line.revision += 1;
     line.updatedBy = userId;

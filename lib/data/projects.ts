@@ -10,6 +10,8 @@ export interface ProjectSummary {
   description: string;
   unitSystem: UnitSystem;
   siteNotes: string;
+  /** Depth frost reaches at the site, m; null when not known. */
+  frostDepthM: number | null;
   archived: boolean;
   createdAt: string;
   updatedAt: string;
@@ -23,6 +25,7 @@ function toSummary(p: Project): ProjectSummary {
     description: p.description,
     unitSystem: p.unitSystem,
     siteNotes: p.siteNotes,
+    frostDepthM: p.frostDepthM ?? null,
     archived: p.archivedAt != null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),

@@ -1,9 +1,10 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { planRamPump, RAM_PLAN_CAUTION } from '../../hydraulics/ram/plan-ram';
+import { planRamPump } from '../../hydraulics/ram/plan-ram';
 import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
 import { models } from '../../models';
 import { notFound } from '../errors';
+import { pumpOutletHeadOf, type PumpOutletHead } from '../lift/pump-outlet';
 import { ramPlanOptions } from '../lift/ram-plan';
 import type { RamSiteRecord, RouteOption } from '../lift/records';
 import { buildLiftSummary } from '../lift/summary';
@@ -33,6 +34,7 @@ function rowFields(input: RamSiteInput, deliveryLengthM: number) {
     driveMaterial: drivePipe.material,
     driveRigid: drivePipe.rigid,
     liftM: input.liftM,
+    pumpElevationM: input.pumpElevationM,
     deliveryLengthM,
     deliveryRouteId: deliveryPipe.routeId,
     deliveryPipeId: deliveryPipe.pipeId,
@@ -90,20 +92,7 @@ export async function deleteRamSite(projectId: string, siteId: string): Promise<
   if (removed === 0) throw notFound('No such ram site in this project');
 }
 
-/** What the line designer needs from a ram site to start the delivery line at the pump outlet. */
-export interface PumpOutletHead {
-  ramSiteId: string;
-  name: string;
-  tankId: string | null;
-  /** Pressure head at the pump outlet while the ram delivers, m: lift plus delivery-pipe friction. */
-  workingHeadM: number;
-  liftM: number;
-  deliveryFrictionM: number;
-  deliveredFlowM3s: number;
-  /** Head the pump can build against a shut delivery line (fall + drive surge), m: rate the pipe near the pump for it. */
-  peakHeadAtPumpM: number;
-  caution: string;
-}
+export type { PumpOutletHead };
 
 /**
  * The pump outlet head of each plannable ram site of a project, for the line designer: a delivery
@@ -111,19 +100,5 @@ export interface PumpOutletHead {
  */
 export async function pumpOutletHeadForProject(projectId: string): Promise<PumpOutletHead[]> {
   const summary = buildLiftSummary(await loadLiftRecords(projectId));
-  return summary.ramSites.flatMap(({ site, plan }) =>
-    plan.ok
-      ? [{
-          ramSiteId: site.id,
-          name: site.name,
-          tankId: site.tankId,
-          workingHeadM: plan.value.deliveryHeadM,
-          liftM: site.liftM,
-          deliveryFrictionM: plan.value.deliveryFrictionM,
-          deliveredFlowM3s: plan.value.deliveredFlowM3s,
-          peakHeadAtPumpM: plan.value.surge.peakHeadAtPumpM,
-          caution: RAM_PLAN_CAUTION,
-        }]
-      : [],
-  );
+  return summary.ramSites.flatMap(({ site, plan, tank }) => (plan.ok ? [pumpOutletHeadOf(site, tank, plan.value)] : []));
 }

@@ -4,8 +4,11 @@ import { seasonalTasks } from '../../hydraulics/seasons/seasonal-tasks';
 import { models } from '../../models';
 import { AppError, notFound } from '../errors';
 import type { SeasonalTaskRecord } from '../lift/records';
+import { drainPointsOf } from '../lines/winter';
 import type { GenerateSeasonalTasksInput, SeasonalTaskInput, UpdateSeasonalTaskInput } from '../validations/seasonal-tasks';
 import { seasonalTaskRecord } from './lift-records';
+import { lineWintersForProject, type ProjectLineWinter } from './line-winter';
+import { displayUnits, formatQuantity } from '../units';
 
 const today = (): string => new Date().toISOString().slice(0, 10);
 
@@ -39,8 +42,23 @@ export async function deleteSeasonalTask(projectId: string, taskId: string): Pro
  * Adds a year's upkeep tasks from the frost dates, all in one transaction. Refused (409) when the
  * year already has open tasks unless `replace` is set; tasks marked done are always kept.
  */
+/** Where to open each drained line, by chainage in the project's units, for the drain-down and refill tasks. */
+function drainWords(lines: readonly ProjectLineWinter[], drainedLabels: ReadonlySet<string>, unitSystem: 'metric' | 'us'): string {
+  const units = displayUnits(unitSystem);
+  return lines
+    .filter((line) => drainedLabels.has(line.name))
+    .map((line) => {
+      const drains = drainPointsOf(line.plan);
+      return `${line.name}: ${drains.length ? drains.map((d) => `ch. ${formatQuantity('chainage', d.chainageM, units.system)} (${d.place})`).join(', ') : 'no low point stands out; drain at the lower end'}.`;
+    })
+    .join(' ');
+}
+
 export async function generateSeasonalTasks(projectId: string, input: GenerateSeasonalTasksInput): Promise<SeasonalTaskRecord[]> {
+  const lines = await lineWintersForProject(projectId);
+  const project = await models().Project.findByPk(projectId, { attributes: ['unitSystem'] });
   const plan = seasonalTasks({
+    lines: lines.flatMap((line) => (line.winterLine ? [line.winterLine] : [])),
     year: input.year,
     hemisphere: input.hemisphere,
     firstFrost: input.firstFrost,
@@ -58,7 +76,11 @@ export async function generateSeasonalTasks(projectId: string, input: GenerateSe
     }
     if (open > 0) await SeasonalTask.destroy({ where: inYear, transaction });
     const rows = await SeasonalTask.bulkCreate(
-      plan.tasks.map((task) => ({ projectId, kind: task.kind, title: task.title, detail: task.detail, dueOn: task.date, source: task.source })),
+      plan.tasks.map((task) => {
+        const drained = new Set((task.lines ?? []).map((line) => line.label));
+        const where = drained.size ? ` Drain points: ${drainWords(lines, drained, project?.unitSystem ?? 'metric')}` : '';
+        return { projectId, kind: task.kind, title: task.title, detail: `${task.detail}${where}`, dueOn: task.date, source: task.source };
+      }),
       { transaction },
     );
     return rows.map(seasonalTaskRecord);

@@ -1,17 +1,23 @@
 import type { LineInput, LineStation } from '../../hydraulics/index';
 import type { LineDesign } from '../validations/line-design';
+import { EMPTY_SITE_CONTEXT, flowFromRam, ramStartOf, type LineSiteContext } from './ram-start';
 
-/** The engineering core's input for a saved design on its stations (map positions dropped). */
-export function lineInputOf(design: LineDesign, stations: readonly LineStation[]): LineInput {
+/**
+ * The engineering core's input for a saved design on its stations (map positions dropped). A line
+ * started at a ram site reads the ram's plan from `context` now, so a change to the ram site reaches
+ * the line at its next analysis.
+ */
+export function lineInputOf(design: LineDesign, stations: readonly LineStation[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineInput {
+  const ram = ramStartOf(design.start, context, stations[0]?.groundElevationM ?? 0);
   return {
     stations: stations.map((s) => (s.coverM === undefined ? { chainageM: s.chainageM, groundElevationM: s.groundElevationM } : { chainageM: s.chainageM, groundElevationM: s.groundElevationM, coverM: s.coverM })),
     stretches: design.stretches,
     fittings: design.fittings,
     devices: design.devices,
     pipes: design.pipes,
-    start: design.start,
+    start: ram ? ram.start : (design.start as LineInput['start']),
     end: design.end,
-    flow: design.flow,
+    flow: flowFromRam(design.flow, ram),
     settings: design.settings,
   };
 }

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LineRecord, LineSummary } from '../data/lines';
+import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
 import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
 import { fetchJson } from './fetch-json';
@@ -8,6 +9,7 @@ export const lineKeys = {
   project: (projectId: string) => ['projects', projectId, 'lines'] as const,
   one: (lineId: string) => ['lines', lineId] as const,
   stations: (lineId: string) => ['lines', lineId, 'stations'] as const,
+  siteContext: (lineId: string) => ['lines', lineId, 'site-context'] as const,
 };
 
 export const projectLinesQuery = (projectId: string) =>
@@ -28,6 +30,13 @@ export const lineStationsQuery = (lineId: string) =>
     queryFn: async () => (await fetchJson<{ stations: LineRouteStation[] }>(`/api/lines/${lineId}/stations`)).stations,
     // A route changes through the survey screens, not while a line is being edited.
     staleTime: 5 * 60_000,
+  });
+
+/** Ram sites that can feed the line and the frost depth, read again when the window regains focus (the lift page may have changed them). */
+export const lineSiteContextQuery = (lineId: string) =>
+  queryOptions({
+    queryKey: lineKeys.siteContext(lineId),
+    queryFn: () => fetchJson<LineSiteContext>(`/api/lines/${lineId}/site-context`),
   });
 
 export function useCreateLine(projectId: string) {

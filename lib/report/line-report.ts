@@ -6,16 +6,24 @@ import { profileScene } from '../chart/profile-scene';
 import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
 import { lineAnswers } from '../lines/answers';
+import { ramFeedAnswers } from '../lines/ram-feed';
+import { EMPTY_SITE_CONTEXT, type LineSiteContext } from '../lines/ram-start';
+import { lineWinterPlan } from '../lines/winter';
 import { LINE_STATUS_LABELS } from '../validations/lines';
 import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
+import { liftSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
 export interface LineReportInput {
   project: { name: string; unitSystem: UnitSystem };
   line: LineRecord;
   analysis: LineAnalysis;
+  /** The ram sites and frost depth the analysis read. @default none */
+  context?: LineSiteContext;
+  /** The line's first station ground, m (pump elevation when the ram site gives none). */
+  startGroundM?: number;
   generatedAt: Date;
 }
 
@@ -31,7 +39,7 @@ function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType
  * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
  * the screen), stretch schedule, devices, warnings, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, generatedAt }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, generatedAt }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
   const doc = new PDFDocument({ ...PAGE, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel' } });
   const chunks: Buffer[] = [];
@@ -75,9 +83,12 @@ export async function lineReportPdf({ project, line, analysis, generatedAt }: Li
     fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica'),
   });
   doc.addPage();
+  const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
+  if (feed) liftSection(doc, feed, u, t);
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, analysis, u);
+  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, line.design.winter, context.frostDepthM, false), u);
   assumptions(doc, analysis, u);
   cautions(doc);
   doc.end();

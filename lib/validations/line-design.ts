@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { assertPipeSpec, HydraulicsInputError, WATER_TEMPERATURE_MAX_C, WATER_TEMPERATURE_MIN_C } from '../../hydraulics/index';
-import { safeText } from './common';
+import { safeText, uuid } from './common';
 
 /**
  * The design of a line as the API stores it (SI units, the engineering core's own shapes). zod
@@ -40,8 +40,10 @@ export const LineStartSchema = z.discriminatedUnion(
       outletHeadM: metres('Pump outlet head'),
       shutoffHeadM: metres('Pump shut-off head').optional(),
     }),
+    /** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
+    z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') }),
   ],
-  { error: 'Start must be a water level ("water-level") or a pump outlet ("pump")' },
+  { error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")' },
 );
 
 export const LineEndSchema = z.discriminatedUnion(
@@ -63,8 +65,10 @@ export const LineFlowSchema = z.discriminatedUnion(
   [
     z.strictObject({ kind: z.literal('design'), flowM3s: atLeast('Design flow', 0, 10, 'm³/s') }),
     z.strictObject({ kind: z.literal('find') }),
+    /** What the feeding ram delivers (only with a ram-site start). */
+    z.strictObject({ kind: z.literal('pump-delivery') }),
   ],
-  { error: 'Flow must be a design flow ("design") or "find"' },
+  { error: 'Flow must be a design flow ("design"), "find" or the ram\'s delivery ("pump-delivery")' },
 );
 
 const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], { error: 'Material must be pvc, pe, steel or custom' });
@@ -140,6 +144,13 @@ export const LineSettingsSchema = z
     path: ['velocityMaxMs'],
   });
 
+export const WINTER_TREATMENTS = ['buried-below-frost', 'drained-for-winter'] as const;
+
+/** How the line is kept through winter. */
+export const LineWinterSchema = z.strictObject({
+  treatment: z.enum(WINTER_TREATMENTS, { error: 'Winter treatment must be buried-below-frost or drained-for-winter' }),
+});
+
 export const LineDesignSchema = z.strictObject({
   start: LineStartSchema,
   end: LineEndSchema,
@@ -149,6 +160,10 @@ export const LineDesignSchema = z.strictObject({
   devices: z.array(LineDeviceSchema, { error: 'Devices must be a list' }).max(1000, 'At most 1000 devices').default([]),
   pipes: z.array(CustomPipeSchema, { error: 'Custom pipes must be a list' }).max(100, 'At most 100 custom pipes').default([]),
   settings: LineSettingsSchema.default({}),
+  winter: LineWinterSchema.optional(),
+}).refine((d) => d.flow.kind !== 'pump-delivery' || d.start.kind === 'ram-site', {
+  message: 'The flow can come from the ram only when the line starts at a ram pump outlet',
+  path: ['flow', 'kind'],
 });
 
 export type LineDesign = z.output<typeof LineDesignSchema>;

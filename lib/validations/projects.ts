@@ -4,6 +4,13 @@ import { nameText, safeText, uuid } from './common';
 export const UNIT_SYSTEMS = ['metric', 'us'] as const;
 export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'Units must be "metric" or "us"' });
 
+/** Depth frost reaches at the site, m (local code or records). */
+export const frostDepth = z
+  .number({ error: 'Frost depth must be a number (metres)' })
+  .min(0, 'Frost depth must be at least 0 m')
+  .max(10, 'Frost depth must be at most 10 m')
+  .nullable();
+
 export const ProjectParams = z.strictObject({ projectId: uuid('Project id') });
 
 export const CreateProjectSchema = z.strictObject({
@@ -20,6 +27,7 @@ export const UpdateProjectSchema = z
     description: safeText('Description', 2000),
     unitSystem,
     siteNotes: safeText('Site notes', 10000),
+    frostDepthM: frostDepth,
     archived: z.boolean({ error: 'Archived must be true or false' }),
   })
   .partial()

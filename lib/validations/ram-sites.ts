@@ -44,6 +44,8 @@ export const RamSiteSchema = z
     fallM: positive('Fall'),
     drivePipe: DrivePipeSchema,
     liftM: positive('Lift'),
+    /** Elevation of the pump, m above the survey datum: a delivery line fed by this ram measures its head from here. */
+    pumpElevationM: finite('Pump elevation').min(-500, 'Pump elevation must be at least -500 m').max(9000, 'Pump elevation must be at most 9000 m').nullable().default(null),
     deliveryPipe: DeliveryPipeSchema,
     sizeClassId: z.enum(SIZE_CLASS_IDS, { error: `Size class must be one of ${SIZE_CLASS_IDS.join(', ')}` }).nullable().default(null),
     pumpCount: finite('Pumps in parallel').int('Pumps in parallel must be a whole number').min(1, 'At least one pump').max(20, 'At most 20 pumps in parallel').default(1),

@@ -113,5 +113,5 @@ test('a lift below the fall is refused beside the field and the site stays as it
   await expect(form.getByRole('alert').filter({ hasText: 'Lift must be above the fall' })).toBeVisible();
   await page.reload();
   // Heads print with one decimal on every screen (lib/units quantity table).
-  await expect(page.getByText('Fall 6.0 ft, lift 70.0 ft')).toBeVisible();
+  await expect(page.getByRole('region', { name: 'Ram pump' }).getByText('Fall 6.0 ft, lift 70.0 ft')).toBeVisible();
 });

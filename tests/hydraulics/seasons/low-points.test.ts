@@ -45,6 +45,12 @@ describe('winterTreatment', () => {
     expect(shallow.drainPoints.map((low) => low.chainageM)).toEqual([50, 250]);
   });
 
+  it('a line the designer drains is drained at its low points even when it is buried deep enough', () => {
+    const drained = winterTreatment({ label: 'Main', profile, coverDepthM: 1.2, frostDepthM: 0.9, drainForWinter: true });
+    expect(drained.treatment).toBe('drain-for-winter');
+    expect(drained.drainPoints.map((low) => low.chainageM)).toEqual([50, 250]);
+  });
+
   it('a bad profile is reported against its line', () => {
     try {
       winterTreatment({ label: 'x', profile: { chainageM: [0, 5], elevationM: [1, Number.NaN] }, coverDepthM: 0, frostDepthM: 1 }, 3);

@@ -11,10 +11,10 @@ import { LineParams } from '@/lib/validations/lines';
 export const GET = teamRoute(
   { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {
-    const { line, analysis } = await analyseSavedLine(params.lineId);
+    const { line, analysis, context, stations } = await analyseSavedLine(params.lineId);
     const project = await getProject(line.projectId);
     if (!project) throw notFound();
-    const pdf = await lineReportPdf({ project, line, analysis, generatedAt: new Date() });
+    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, generatedAt: new Date() });
     return new Response(new Uint8Array(pdf), {
       status: 200,
       headers: {

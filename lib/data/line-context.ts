@@ -1,0 +1,21 @@
+import 'server-only';
+import { models } from '../../models';
+import { AppError } from '../errors';
+import type { LineSiteContext } from '../lines/ram-start';
+import type { LineDesign } from '../validations/line-design';
+import { pumpOutletHeadForProject } from './ram-sites';
+
+/** What a line of this project reads from the rest of it at each analysis: ram sites that can feed it, the frost depth. */
+export async function lineSiteContext(projectId: string): Promise<LineSiteContext> {
+  const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM'] });
+  return { ramOutlets: await pumpOutletHeadForProject(projectId), frostDepthM: project?.frostDepthM ?? null };
+}
+
+/** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */
+export async function assertRamSiteInProject(design: LineDesign, projectId: string): Promise<void> {
+  if (design.start.kind !== 'ram-site') return;
+  const site = await models().RamSite.findOne({ where: { id: design.start.ramSiteId, projectId }, attributes: ['id'] });
+  if (!site) {
+    throw new AppError('bad_request', 'That ram site is not part of this project', { 'design.start.ramSiteId': ['Pick a ram site of this project'] });
+  }
+}

@@ -1,0 +1,91 @@
+import { findLowPoints, type LowPoint } from '../../hydraulics/seasons/low-points';
+import type { LineDesign } from '../validations/line-design';
+
+/** Extra cover below the frost depth a one-click "lay it deeper" fix asks for, m (common practice, no source). */
+export const FROST_COVER_MARGIN_M = 0.15;
+
+export type WinterTreatmentChoice = NonNullable<LineDesign['winter']>['treatment'];
+
+/** The pipe profile of an analysed line, as the winter plan reads it. */
+export interface WinterProfileInput {
+  points: { chainageM: ArrayLike<number>; groundElevationM: ArrayLike<number>; pipeElevationM: ArrayLike<number> };
+  /** Rise or fall that counts as a high or low point, m (the line's own setting, so drains sit where the washout check finds sags). */
+  airPointToleranceM: number;
+}
+
+export type WinterFix = { kind: 'drain-for-winter' } | { kind: 'deeper-cover'; coverM: number };
+
+export interface LineWinterPlan {
+  treatment: WinterTreatmentChoice;
+  /** False when the design does not say and the line is taken as buried. */
+  chosen: boolean;
+  frostDepthM: number | null;
+  /** Least cover over the pipe along the line and where, m. */
+  shallowestCoverM: number;
+  shallowestCoverAtM: number;
+  /** Low points of the pipe where the line is drained (interior sags, by chainage). */
+  drainPoints: LowPoint[];
+  /** Ends of the line lower than the pipe next to them: water gathers there too. */
+  lowEnds: LowPoint[];
+  /** Set when the pipe lies shallower than the frost depth and the line is not drained. */
+  warning: { message: string; fixes: WinterFix[] } | null;
+}
+
+function lowEndsOf(chainageM: ArrayLike<number>, pipeM: ArrayLike<number>): LowPoint[] {
+  const last = chainageM.length - 1;
+  const ends: LowPoint[] = [];
+  if (last >= 1 && pipeM[0] < pipeM[1]) ends.push({ index: 0, chainageM: chainageM[0], elevationM: pipeM[0] });
+  if (last >= 1 && pipeM[last] < pipeM[last - 1]) ends.push({ index: last, chainageM: chainageM[last], elevationM: pipeM[last] });
+  return ends;
+}
+
+/**
+ * How the line is kept through winter: the designer's choice, the least cover against the site's
+ * frost depth, and for a drained line its drain points (the low points of the pipe profile). A line
+ * shallower than the frost depth that is not drained is warned about, with the two fixes: drain it,
+ * or lay it deeper (only offered when `deeperCoverFixable`, i.e. the cover comes from the line's setting).
+ */
+export function lineWinterPlan(
+  profile: WinterProfileInput,
+  winter: LineDesign['winter'],
+  frostDepthM: number | null,
+  deeperCoverFixable: boolean,
+): LineWinterPlan {
+  const { chainageM, groundElevationM, pipeElevationM } = profile.points;
+  let shallowest = 0;
+  for (let i = 1; i < chainageM.length; i++) {
+    if (groundElevationM[i] - pipeElevationM[i] < groundElevationM[shallowest] - pipeElevationM[shallowest]) shallowest = i;
+  }
+  const shallowestCoverM = groundElevationM[shallowest] - pipeElevationM[shallowest];
+  const treatment: WinterTreatmentChoice = winter?.treatment ?? 'buried-below-frost';
+  const drained = treatment === 'drained-for-winter';
+  const tooShallow = frostDepthM !== null && shallowestCoverM <= frostDepthM;
+  const drainPoints = findLowPoints({ chainageM: Array.from(chainageM), elevationM: Array.from(pipeElevationM), prominenceM: profile.airPointToleranceM });
+  const fixes: WinterFix[] = [{ kind: 'drain-for-winter' }];
+  if (deeperCoverFixable && frostDepthM !== null) fixes.push({ kind: 'deeper-cover', coverM: Math.round((frostDepthM + FROST_COVER_MARGIN_M) * 100) / 100 });
+  return {
+    treatment,
+    chosen: winter !== undefined,
+    frostDepthM,
+    shallowestCoverM,
+    shallowestCoverAtM: chainageM[shallowest],
+    drainPoints,
+    lowEnds: lowEndsOf(chainageM, pipeElevationM),
+    warning: tooShallow && !drained
+      ? { message: 'The pipe lies no deeper than frost reaches: water left in it can freeze and split the pipe or its fittings.', fixes }
+      : null,
+  };
+}
+
+export interface DrainPoint {
+  chainageM: number;
+  elevationM: number;
+  place: 'low start' | 'low point' | 'low end';
+}
+
+/** Every place a drained line is opened, by chainage: a low start, the low points, a low end. */
+export function drainPointsOf(plan: Pick<LineWinterPlan, 'drainPoints' | 'lowEnds'>): DrainPoint[] {
+  const ends = plan.lowEnds.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: p.index === 0 ? 'low start' : 'low end' }));
+  const lows = plan.drainPoints.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: 'low point' }));
+  return [...ends, ...lows].sort((a, b) => a.chainageM - b.chainageM);
+}
