@@ -57,7 +57,10 @@ test('a designer sees the over-pressure, applies the suggested break-pressure ta
 test('hovering the profile reads the values there and marks the same place on the plan', async ({ page }) => {
   await signIn(page, 'designer@example.test');
   await page.goto(LINE_URL);
+  await page.waitForLoadState('networkidle');
   const capture = page.getByTestId('profile-capture');
+  // One chart once the page has settled (a second copy was seen for a moment while data arrived).
+  await expect(capture).toHaveCount(1);
   await capture.scrollIntoViewIfNeeded();
   const box = (await capture.boundingBox())!;
   await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
