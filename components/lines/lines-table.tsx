@@ -1,5 +1,7 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
+import { HeadCell, TableFrame } from '@/components/ui/table-frame';
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { projectLinesQuery } from '@/lib/queries/lines';
@@ -9,21 +11,10 @@ import { LINE_STATUS_LABELS } from '@/lib/validations/lines';
 export function LinesTable({ projectId }: { projectId: string }) {
   const { data: lines = [], isError, refetch } = useQuery(projectLinesQuery(projectId));
   if (isError) {
-    return <p role="alert" className="text-sm text-clay-700">Lines could not be loaded. <button className="underline" onClick={() => refetch()}>Try again</button></p>;
+    return <LoadError what="Lines" onRetry={() => void refetch()} />;
   }
   return (
-    <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
-      <table className="w-full text-left text-sm">
-        <thead className="bg-creek-50 text-creek-800">
-          <tr>
-            <th scope="col" className="px-4 py-2 font-medium">Line</th>
-            <th scope="col" className="px-4 py-2 font-medium">Route</th>
-            <th scope="col" className="px-4 py-2 font-medium">Stretches / devices</th>
-            <th scope="col" className="px-4 py-2 font-medium">Revision</th>
-            <th scope="col" className="px-4 py-2 font-medium">Status</th>
-          </tr>
-        </thead>
-        <tbody>
+    <TableFrame head={<><HeadCell>Line</HeadCell><HeadCell>Route</HeadCell><HeadCell>Stretches / devices</HeadCell><HeadCell>Revision</HeadCell><HeadCell>Status</HeadCell></>}>
           {lines.map((l) => (
             <tr key={l.id} className="border-t border-creek-50 hover:bg-creek-50/50">
               <td className="px-4 py-2.5"><Link href={`/projects/${projectId}/lines/${l.id}`} className="font-medium text-creek-700 underline-offset-2 hover:underline">{l.name}</Link></td>
@@ -34,8 +25,6 @@ export function LinesTable({ projectId }: { projectId: string }) {
             </tr>
           ))}
           {lines.length === 0 && <tr><td colSpan={5} className="px-4 py-6 text-center text-creek-600">No lines yet.</td></tr>}
-        </tbody>
-      </table>
-    </div>
+    </TableFrame>
   );
 }

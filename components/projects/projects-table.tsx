@@ -1,5 +1,7 @@
 'use client';
 
+import { TableFrame } from '@/components/ui/table-frame';
+import { LoadError } from '@/components/ui/load-error';
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useState } from 'react';
@@ -22,11 +24,7 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
   }
 
   if (isError) {
-    return (
-      <p role="alert" className="text-sm text-clay-700">
-        Projects could not be loaded. <button className="underline" onClick={() => refetch()}>Try again</button>
-      </p>
-    );
+    return <LoadError what="Projects" onRetry={() => void refetch()} />;
   }
 
   return (
@@ -47,10 +45,9 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
           Show archived
         </label>
       </div>
-      <div className="relative overflow-x-auto rounded-lg border border-creek-100 bg-white">
-        <table className="w-full text-left text-sm">
-          <thead className="bg-creek-50 text-creek-800">
-            <tr>
+      <TableFrame
+        head={
+          <>
               {COLUMNS.map((c) => (
                 <th key={c.key} scope="col" className="px-4 py-2 font-medium" aria-sort={state.sort === c.key ? (state.descending ? 'descending' : 'ascending') : 'none'}>
                   <button type="button" onClick={() => sortBy(c.key)} className="inline-flex items-center gap-1">
@@ -59,9 +56,9 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
                   </button>
                 </th>
               ))}
-            </tr>
-          </thead>
-          <tbody>
+          </>
+        }
+      >
             {rows.map((p) => (
               <tr key={p.id} className="border-t border-creek-50 hover:bg-creek-50/50">
                 <td className="px-4 py-2.5">
@@ -76,9 +73,7 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
             {rows.length === 0 && (
               <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet.' : 'No project matches.'}</td></tr>
             )}
-          </tbody>
-        </table>
-      </div>
+      </TableFrame>
     </div>
   );
 }

@@ -5,7 +5,7 @@ import { line } from 'd3-shape';
 import { useRef, type MouseEvent } from 'react';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import type { ProfilePoint } from '@/lib/routes/profile-series';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 
 const W = 800;
 const H = 260;

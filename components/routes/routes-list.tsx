@@ -1,9 +1,11 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
+import { HeadCell, TableFrame } from '@/components/ui/table-frame';
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { formatDistance, formatNumber, formatQuantity } from '@/lib/units';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { projectRoutesQuery } from '@/lib/queries/routes';
 import { FORMAT_LABELS } from './format-labels';
 
@@ -16,25 +18,10 @@ export interface RoutesListProps {
 export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
   const { data: routes = [], isError, refetch } = useQuery(projectRoutesQuery(projectId));
   if (isError) {
-    return (
-      <p role="alert" className="text-sm text-clay-700">
-        Routes could not be loaded. <button className="underline" onClick={() => refetch()}>Try again</button>
-      </p>
-    );
+    return <LoadError what="Routes" onRetry={() => void refetch()} />;
   }
   return (
-    <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
-      <table className="w-full text-left text-sm">
-        <thead className="bg-creek-50 text-creek-800">
-          <tr>
-            <th scope="col" className="px-4 py-2 font-medium">Route</th>
-            <th scope="col" className="px-4 py-2 font-medium">Length</th>
-            <th scope="col" className="px-4 py-2 font-medium">Along the ground</th>
-            <th scope="col" className="px-4 py-2 font-medium">Points</th>
-            <th scope="col" className="px-4 py-2 font-medium">From</th>
-          </tr>
-        </thead>
-        <tbody>
+    <TableFrame head={<><HeadCell>Route</HeadCell><HeadCell>Length</HeadCell><HeadCell>Along the ground</HeadCell><HeadCell>Points</HeadCell><HeadCell>From</HeadCell></>}>
           {routes.map((r) => (
             <tr key={r.id} className="border-t border-creek-50 hover:bg-creek-50/50">
               <td className="px-4 py-2.5">
@@ -53,8 +40,6 @@ export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
           {routes.length === 0 && (
             <tr><td colSpan={5} className="px-4 py-6 text-center text-creek-600">No routes yet. Import a walked track or field book, or sketch one.</td></tr>
           )}
-        </tbody>
-      </table>
-    </div>
+    </TableFrame>
   );
 }

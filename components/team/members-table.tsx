@@ -1,5 +1,6 @@
 'use client';
 
+import { TableFrame } from '@/components/ui/table-frame';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormMessage } from '@/components/ui/form-message';
@@ -18,17 +19,16 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
   return (
     <div className="space-y-2">
       <FormMessage message={error} />
-      <div className="relative overflow-x-auto rounded-lg border border-creek-100 bg-white">
-        <table className="w-full text-left text-sm">
-          <thead className="bg-creek-50 text-creek-800">
-            <tr>
+      <TableFrame
+        head={
+          <>
               <th scope="col" className="px-4 py-2 font-medium">Name</th>
               <th scope="col" className="px-4 py-2 font-medium">E-mail</th>
               <th scope="col" className="px-4 py-2 font-medium">Role</th>
               {manage && <th scope="col" className="px-4 py-2 font-medium"><span className="sr-only">Actions</span></th>}
-            </tr>
-          </thead>
-          <tbody>
+          </>
+        }
+      >
             {members.map((m) => (
               <tr key={m.userId} className="border-t border-creek-50">
                 <td className="px-4 py-2.5 font-medium text-creek-900">{m.name}{m.userId === selfId && <span className="ml-1 text-xs text-creek-600">(you)</span>}</td>
@@ -67,9 +67,7 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
                 )}
               </tr>
             ))}
-          </tbody>
-        </table>
-      </div>
+      </TableFrame>
     </div>
   );
 }

@@ -3,7 +3,7 @@ import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { userFromRequest } from '../auth/session';
 import type { SessionUser } from '../auth/users';
-import { AppError, forbidden, notFound, unauthenticated } from '../errors';
+import { forbidden, notFound, unauthenticated } from '../errors';
 import { can, type Permission } from '../permissions';
 import type { Role } from '../roles';
 import { parseOrThrow, readJsonBody } from './body';
@@ -56,6 +56,12 @@ async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRe
   return (schema ? await readJsonBody(req, schema, maxBytes) : undefined) as Infer<B>;
 }
 
+async function signedInUser(req: NextRequest): Promise<SessionUser> {
+  const user = await userFromRequest(req);
+  if (!user) throw unauthenticated();
+  return user;
+}
+
 /** A handler anyone may call (sign-up). Order: params -> body -> act. */
 export function publicRoute<P extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
   spec: BaseSpec<P, B>,
@@ -77,8 +83,7 @@ export function userRoute<P extends z.ZodType | undefined = undefined, B extends
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const user = await userFromRequest(req);
-      if (!user) throw unauthenticated();
+      const user = await signedInUser(req);
       const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
       return handler({ req, params, body, user });
     }, spec.status ?? 200);
@@ -95,8 +100,7 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const user = await userFromRequest(req);
-      if (!user) throw unauthenticated();
+      const user = await signedInUser(req);
       const teamId = await spec.teamOf(params);
       const role = teamId ? await roleOnTeam(user.id, teamId) : null;
       if (!teamId || !role) throw notFound();
@@ -106,4 +110,3 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
     }, spec.status ?? 200);
 }
 
-export { AppError };

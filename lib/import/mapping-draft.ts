@@ -1,7 +1,7 @@
 import type { HeightSource } from '../../hydraulics/survey/height-source';
 import { fromDisplay } from '../units/index';
 import type { FieldErrors } from '../errors';
-import type { UnitSystem } from '../../models/project';
+import type { UnitSystem } from '../units';
 import type { LengthUnit } from '../survey/cells';
 import type { GpsColumnMapping, StationColumnMapping } from '../survey/column-mapping';
 import type { CsvDelimiter } from '../survey/csv-dialect';

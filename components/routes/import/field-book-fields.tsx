@@ -2,7 +2,7 @@ import { TextField } from '@/components/ui/field';
 import { unitOf } from '@/lib/units';
 import type { FieldErrors } from '@/lib/errors';
 import type { MappingDraft } from '@/lib/import/mapping-draft';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { UnitToggle } from './column-select';
 
 type Update = (change: (d: MappingDraft) => MappingDraft) => void;

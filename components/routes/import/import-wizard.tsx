@@ -12,7 +12,7 @@ import { useImportSurvey } from '@/lib/queries/routes';
 import type { CsvDialect } from '@/lib/survey/csv-dialect';
 import type { SurveyInspection } from '@/lib/survey/inspect';
 import type { SurveyImportOptions } from '@/lib/validations/survey-import';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { MappingStep } from './mapping-step';
 import { PreviewStep } from './preview-step';
 import { formatNumber } from '@/lib/units';

@@ -6,7 +6,7 @@ import type { MappingDraft } from '@/lib/import/mapping-draft';
 import type { CsvDelimiter, CsvDialect } from '@/lib/survey/csv-dialect';
 import type { SurveyInspection } from '@/lib/survey/inspect';
 import type { SurveyFormat } from '@/lib/survey/parsed-survey';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { FORMAT_LABELS } from '../format-labels';
 import { columnRoles, GpsColumns, StationColumns } from './csv-columns';
 import { FieldBookFields } from './field-book-fields';

@@ -1,7 +1,7 @@
 import { Button } from '@/components/ui/button';
 import { formatNumber, formatQuantity } from '@/lib/units';
 import type { ImportPreview } from '@/lib/import/protocol';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { FORMAT_LABELS } from '../format-labels';
 import { GpsWarningBanner } from '../gps-warning-banner';
 import { RouteProfile } from '../route-profile';

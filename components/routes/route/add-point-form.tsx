@@ -4,7 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { fromDisplay, unitOf } from '@/lib/units';
 import type { DraftAction } from '@/lib/routes/draft';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 
 export interface AddPointFormProps {
   count: number;

@@ -8,7 +8,7 @@ import { fromDisplay, unitOf } from '@/lib/units';
 import { useCleanupDecision } from '@/lib/queries/routes';
 import { benchmarkProposals, smoothingProposals } from '@/lib/routes/proposals';
 import type { RouteDetail, RouteProposal } from '@/lib/routes/types';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { ProposalItem } from './proposal-item';
 
 export interface CleanupPanelProps {

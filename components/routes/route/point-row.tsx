@@ -3,7 +3,7 @@
 import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/survey/height-source';
 import { formatNumber, fromDisplay, toDisplay } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { HEIGHT_SOURCE_LABELS } from '../format-labels';
 import { NumberCell } from './number-cell';
 

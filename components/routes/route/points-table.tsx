@@ -2,7 +2,7 @@
 
 import { formatNumber, unitOf } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { AddPointForm } from './add-point-form';
 import { PointRow } from './point-row';
 

@@ -1,7 +1,7 @@
 import { Button } from '@/components/ui/button';
 import { formatQuantity } from '@/lib/units';
 import type { RouteProposal } from '@/lib/routes/types';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 
 const KIND_LABELS: Record<RouteProposal['kind'], string> = {
   'grade-spike': 'Spike',

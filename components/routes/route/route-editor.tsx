@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Skeleton } from '@/components/ui/panel';
 import { routeDetailQuery } from '@/lib/queries/routes';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { RouteWorkspace } from './route-workspace';
 
 export interface RouteEditorProps {

@@ -6,7 +6,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { formatNumber, formatQuantity } from '@/lib/units';
 import { routeSourceUrl, useUpdateRoute } from '@/lib/queries/routes';
 import type { RouteDetail } from '@/lib/routes/types';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { FORMAT_LABELS } from '../format-labels';
 
 const kb = (bytes: number) => (bytes < 1024 * 1024 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / (1024 * 1024), 1)} MB`);

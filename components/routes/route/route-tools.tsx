@@ -9,7 +9,7 @@ import { Panel } from '@/components/ui/panel';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import { projectRoutesQuery, useDeleteRoute, useJoinRoutes, useReverseRoute, useSplitRoute, useTrimRoute } from '@/lib/queries/routes';
 import type { RouteDetail } from '@/lib/routes/types';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 
 export interface RouteToolsProps {
   detail: RouteDetail;

@@ -9,7 +9,7 @@ import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
 import { thinProfile } from '@/lib/routes/profile-series';
 import type { RouteDetail } from '@/lib/routes/types';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 import { GpsWarningBanner } from '../gps-warning-banner';
 import { RouteProfile } from '../route-profile';
 import { CleanupPanel } from './cleanup-panel';

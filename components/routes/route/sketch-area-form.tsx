@@ -1,7 +1,7 @@
 'use client';
 
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
-import type { UnitSystem } from '@/models/project';
+import type { UnitSystem } from '@/lib/units';
 
 export interface SketchArea {
   lengthM: number;
