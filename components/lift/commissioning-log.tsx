@@ -60,7 +60,7 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
           </table>
         </div>
       )}
-      {latest?.result.ok && <PlanChecks checks={latest.result.value.checks} />}
+      {latest?.result.ok && <PlanChecks units={units} checks={latest.result.value.checks} />}
       {canEdit && latestEfficiency !== null && latestEfficiency <= 1 && (
         <div className="flex flex-wrap items-center gap-3">
           <Button tone="quiet" onClick={() => adoptEfficiency(latestEfficiency)} disabled={saveSite.isPending}>

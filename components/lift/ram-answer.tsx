@@ -51,7 +51,7 @@ export function RamAnswer({ plan, units, tank }: RamAnswerProps) {
       <SurgeCompare plan={plan} units={units} />
       <div>
         <h3 className="mb-2 text-sm font-semibold text-creek-900">Feasibility checks</h3>
-        <PlanChecks checks={plan.checks} emptyText="No check found a problem with this site." />
+        <PlanChecks units={units} checks={plan.checks} emptyText="No check found a problem with this site." />
       </div>
     </div>
   );

@@ -62,7 +62,7 @@ function SourceCard({ projectId, view, units, canEdit, canLog }: { projectId: st
         <Readout label="Design draw" value={formatQuantity('flow', view.drawM3s, units)} detail="ram drive flow plus other draw" />
         <Readout label="Lowest recent dry reading" value={design.ok && design.value.lowestRecentDryM3s !== null ? formatQuantity('flow', design.value.lowestRecentDryM3s, units) : '—'} />
       </div>
-      <PlanChecks checks={[...(design.ok ? design.value.checks : []), ...view.drawChecks]} />
+      <PlanChecks units={units} checks={[...(design.ok ? design.value.checks : []), ...view.drawChecks]} />
       {view.readings.length > 0 && (
         <table className="tabular w-full text-left text-sm">
           <caption className="sr-only">Yield readings of {view.source.name}</caption>

@@ -65,7 +65,7 @@ function TankCard({ projectId, view, sources, units, canEdit }: { projectId: str
             <Readout label="Overflow to route away" value={formatQuantity('flow', sizing.value.sizing.overflowFlowM3s, units)} detail={`${formatQuantity('volume', sizing.value.sizing.dailyOverflowM3, units)} a day once full`} />
           </div>
           <TankElevation view={view} units={units} />
-          <PlanChecks checks={sizing.value.checks} />
+          <PlanChecks units={units} checks={sizing.value.checks} />
           <div className="grid gap-3 lg:grid-cols-2">
             <VolumeChart
               title="Mass curve of a day"

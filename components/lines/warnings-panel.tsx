@@ -1,7 +1,7 @@
 'use client';
 
 import type { LineWarning } from '@/hydraulics/index';
-import { localiseWarningText } from '@/lib/lines/localise-text';
+import { localiseWarningText } from '@/lib/units/localise-text';
 import { fixWords, placeWords, SEVERITY_WORDS, WARNING_TITLES } from '@/lib/lines/warning-words';
 import type { DisplayUnits } from '@/lib/units';
 import { Button } from '@/components/ui/button';
@@ -40,8 +40,8 @@ export function WarningsPanel({ warnings, units, selected, onSelect, onApply, ca
               </Button>
             )}
           </div>
-          <p className="mt-1 text-sm text-creek-800">{localiseWarningText(w.message, units)}</p>
-          <p className="mt-1 text-sm text-creek-700"><span className="font-medium">Fix: </span>{localiseWarningText(w.suggestedFix, units)}</p>
+          <p className="mt-1 text-sm text-creek-800">{localiseWarningText(w.message, units.system)}</p>
+          <p className="mt-1 text-sm text-creek-700"><span className="font-medium">Fix: </span>{localiseWarningText(w.suggestedFix, units.system)}</p>
         </li>
       ))}
     </ol>

@@ -1,7 +1,7 @@
 import type PDFDocument from 'pdfkit';
 import { DEFAULT_LINE_SETTINGS, type LineAnalysis, type LineDevice } from '../../hydraulics/index';
 import { LINE_CAUTIONS } from '../lines/cautions';
-import { localiseWarningText } from '../lines/localise-text';
+import { localiseWarningText } from '../units/localise-text';
 import { placeWords, SEVERITY_WORDS, WARNING_TITLES } from '../lines/warning-words';
 import { formatHeadPressure, formatNumber, formatQuantity, formatTemperature, toDisplay, type DisplayUnits } from '../units/index';
 import { heading, INK, table } from './pdf-table';
@@ -69,8 +69,8 @@ export function warningList(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
     a.warnings.map((w) => [
       SEVERITY_WORDS[w.severity],
       `${WARNING_TITLES[w.code]}\n${placeWords(w.at, u)}`,
-      localiseWarningText(w.message, u),
-      localiseWarningText(w.suggestedFix, u),
+      localiseWarningText(w.message, u.system),
+      localiseWarningText(w.suggestedFix, u.system),
     ]),
   );
 }

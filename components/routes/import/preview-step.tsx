@@ -23,7 +23,7 @@ export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewS
   const noteCount = preview.warningCount - (preview.warnings.length - notes.length);
   return (
     <div className="space-y-4">
-      {preview.gpsWarning && <GpsWarningBanner warning={preview.gpsWarning} />}
+      {preview.gpsWarning && <GpsWarningBanner units={units} warning={preview.gpsWarning} />}
       <dl className="grid gap-3 text-sm sm:grid-cols-4">
         <div><dt className="text-creek-600">Read as</dt><dd className="font-medium">{FORMAT_LABELS[s.format]}</dd></div>
         <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{formatNumber(s.pointCount, 0)}</dd></div>

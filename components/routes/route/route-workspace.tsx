@@ -64,7 +64,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
   return (
     <div className="space-y-5">
       <RouteHeader detail={detail} units={units} editable={editable} />
-      {detail.gpsWarning && <GpsWarningBanner warning={detail.gpsWarning} />}
+      {detail.gpsWarning && <GpsWarningBanner units={units} warning={detail.gpsWarning} />}
       <Panel title="Ground profile">
         {sketching && <div className="mb-3"><SketchAreaForm area={sketchArea} units={units} onChange={onSketchArea} /></div>}
         {placed.length > 0 || sketching ? (

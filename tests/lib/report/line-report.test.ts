@@ -3,10 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine, PRESSURE_CAUTION } from '../../../hydraulics/index';
 import type { LineRecord } from '../../../lib/data/lines';
 import { LINE_CAUTIONS } from '../../../lib/lines/cautions';
-import { localiseWarningText } from '../../../lib/lines/localise-text';
+import { localiseWarningText } from '../../../lib/units/localise-text';
 import { WARNING_TITLES } from '../../../lib/lines/warning-words';
 import { lineReportPdf } from '../../../lib/report/line-report';
-import { displayUnits } from '../../../lib/units/index';
 import { LineDesignSchema } from '../../../lib/validations/line-design';
 import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
 
@@ -63,6 +62,6 @@ describe('line design report (PDF)', () => {
     expect(text).toContain('gpm');
     expect(text).toContain('psi');
     const over = analysis.warnings.find((w) => w.code === 'static-over-rating')!;
-    expect(text).toContain(squash(localiseWarningText(over.message, displayUnits('us'))).slice(0, 60));
+    expect(text).toContain(squash(localiseWarningText(over.message, 'us')).slice(0, 60));
   });
 });

@@ -1,12 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeLine, FOOT_M, US_GALLON_M3 } from '../../../hydraulics/index';
-import { localiseWarningText } from '../../../lib/lines/localise-text';
+import { localiseWarningText } from '../../../lib/units/localise-text';
 import { pdfText } from '../../../lib/report/pdf-text';
-import { displayUnits } from '../../../lib/units/index';
 import { referenceLine } from '../../lines/reference-line';
 
-const us = displayUnits('us');
-const metric = displayUnits('metric');
+const us = 'us' as const;
+const metric = 'metric' as const;
 
 describe('warning words in the project units', () => {
   it('leaves metric text as the core wrote it', () => {
@@ -36,5 +35,19 @@ describe('text for the PDF', () => {
     expect(pdfText('20 °C, 3 × 2 m, ch. 1\u20132 m, maker\u2019s data')).toBe('20 °C, 3 × 2 m, ch. 1\u20132 m, maker\u2019s data');
     expect(pdfText('PE80 σ = 6.3 MPa; f ≈ 0.02; x ≤ 1; −3 → 4')).toBe('PE80 sigma = 6.3 MPa; f ~ 0.02; x <= 1; -3 -> 4');
     expect(pdfText('日')).toBe('?');
+  });
+});
+
+describe('storage, ram and survey messages in the project units', () => {
+  it('restates cubic metres as US gallons and L/min as US gpm, before any metre rule can take them', () => {
+    // 1 US gal = 3.785411784 L exactly (NIST Handbook 44, App. C, from memory): 3.20 m³ = 845.4 US gal.
+    const out = localiseWarningText('The tank holds less than the daily cycle plus the reserve (3.20 m³); the ram gives 2.5 L/min.', us);
+    expect(out).toBe(`The tank holds less than the daily cycle plus the reserve (845 US gal); the ram gives ${(2.5 / 3.785411784).toFixed(2)} US gpm.`);
+    expect(out).not.toMatch(/m³|L\/min/);
+  });
+
+  it('leaves metric storage text alone', () => {
+    const text = 'the tank is 1.4 m too low (3.20 m³)';
+    expect(localiseWarningText(text, metric)).toBe(text);
   });
 });
