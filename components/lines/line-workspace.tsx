@@ -1,7 +1,7 @@
 'use client';
 
 import { useMemo, useRef, useState } from 'react';
-import { applyLineFixes, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
+import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
 import type { LineRecord } from '@/lib/data/lines';
@@ -64,7 +64,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
   const winter = useMemo(
-    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
+    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
     [analysis, design.winter, context.frostDepthM, stations],
   );
   const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;

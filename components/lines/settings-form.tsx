@@ -6,7 +6,7 @@ import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
 type Change = (next: LineDesign, label: string) => string | null;
-type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge'>;
+type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge' | 'heightScatterM'>;
 
 /** Analysis settings; an empty field falls back to the core's default (shown as the hint). */
 export function SettingsForm({ design, units, change, canEdit }: { design: LineDesign; units: DisplayUnits; change: Change; canEdit: boolean }) {

@@ -95,6 +95,7 @@ export function profileModel(input: LineInput): ProfileModel {
     allowableHeadM: Float64Array.from(stretches, (s) => s.allowableHeadM),
     surgeHeadM: Float64Array.from(stretches, (s) => (surgeOn ? s.surgeHeadM : 0)),
     limits,
+    heightScatterM: settings.heightScatterM,
   });
   const reachResults: ReachResult[] = reaches.map((reach, r) => ({
     fromM: grid.chainageM[reach.fromPoint],

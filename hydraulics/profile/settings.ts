@@ -9,6 +9,7 @@ export interface ResolvedLineSettings {
   velocityMaxMs: number;
   minResidualHeadM: number;
   airPointToleranceM: number;
+  heightScatterM: number;
   /** Undefined until the profile supplies its highest ground elevation. */
   siteAltitudeM: number | undefined;
   siphonLimitHeadM: number;
@@ -33,6 +34,7 @@ export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAlt
   velocityMaxMs: 3.0,
   minResidualHeadM: 3,
   airPointToleranceM: 1,
+  heightScatterM: 0,
   siphonLimitHeadM: 7.5,
   defaultCoverM: 0,
   checkSurge: true,
@@ -50,9 +52,19 @@ export function resolveLineSettings(settings: LineSettings | undefined): Resolve
     velocityMaxMs: s.velocityMaxMs ?? d.velocityMaxMs,
     minResidualHeadM: s.minResidualHeadM ?? d.minResidualHeadM,
     airPointToleranceM: s.airPointToleranceM ?? d.airPointToleranceM,
+    heightScatterM: s.heightScatterM ?? d.heightScatterM,
     siteAltitudeM: s.siteAltitudeM,
     siphonLimitHeadM: s.siphonLimitHeadM ?? d.siphonLimitHeadM,
     defaultCoverM: s.defaultCoverM ?? d.defaultCoverM,
     checkSurge: s.checkSurge ?? d.checkSurge,
   };
+}
+
+/**
+ * The one rule for how far a high or low point of the pipe must stand out to count (air-release
+ * valves, washouts, winter drain points): the line's tolerance, or the survey's height scatter
+ * when that is larger, because a bump smaller than the scatter cannot be told from it.
+ */
+export function highLowToleranceM(settings: Pick<ResolvedLineSettings, 'airPointToleranceM' | 'heightScatterM'>): number {
+  return Math.max(settings.airPointToleranceM, settings.heightScatterM);
 }
