@@ -76,4 +76,20 @@ function ridgeWalk() {
   return points;
 }
 
-module.exports = { ridgeWalk, smoothGroundAt, CONTROL, SPIKE, SPACING_M, LENGTH_M, STATED_ACCURACY_M };
+/**
+ * The demo's line on the walk (core shapes, SI): PE100 SDR 17 (PN 10) throughout, 50 mm to the
+ * ridge and 63 mm down to the tank, at 1.75 L/s. The Gill bottom is over the PN 10 rating with the
+ * line shut and the grade line passes under Cragend ridge, beyond the practical siphon limit.
+ */
+const WALK_LINE = {
+  start: { kind: 'water-level', levelM: 521 },
+  end: { kind: 'tank-inlet', elevationM: 453 },
+  flow: { kind: 'design', flowM3s: 0.00175 },
+  stretches: [
+    { fromM: 0, toM: 1650, pipe: 'pe100-iso4427-sdr17-50mm' },
+    { fromM: 1650, toM: 2400, pipe: 'pe100-iso4427-sdr17-63mm' },
+  ],
+  settings: { defaultCoverM: 0.75 },
+};
+
+module.exports = { ridgeWalk, WALK_LINE, smoothGroundAt, CONTROL, SPIKE, SPACING_M, LENGTH_M, STATED_ACCURACY_M };

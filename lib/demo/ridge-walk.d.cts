@@ -14,3 +14,10 @@ export const SPIKE: { seq: number; offsetM: number };
 export const SPACING_M: number;
 export const LENGTH_M: number;
 export const STATED_ACCURACY_M: number;
+export const WALK_LINE: {
+  start: { kind: 'water-level'; levelM: number };
+  end: { kind: 'tank-inlet'; elevationM: number };
+  flow: { kind: 'design'; flowM3s: number };
+  stretches: { fromM: number; toM: number; pipe: string }[];
+  settings: { defaultCoverM: number };
+};
