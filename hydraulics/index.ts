@@ -158,6 +158,7 @@ export { findTurningPoints, type TurningPoints } from './checks/air-points';
 export { PRESSURE_CAUTION } from './checks/wording';
 export type {
   LineWarning,
+  WarningValues,
   LineFix,
   WarningCode,
   WarningSeverity,
