@@ -36,7 +36,7 @@ describe('useDemand', () => {
     expect(result.hourlyShapeNominal).toBe(true);
   });
 
-  it('garden: 1 inch over 1 ft² is 0.6234 US gal (REFERENCES.md §3.7, bchill guide prints 0.62)', () => {
+  it('garden: 1 inch over 1 ft² is 0.6234 US gal (core.md §3.7, bchill guide prints 0.62)', () => {
     const result = useDemand({ use: { kind: 'garden', areaM2: SQUARE_FOOT_M2, depthMPerDay: INCH_M, delivery: { kind: 'delivery-hours', hours: 1 } } });
     expect(result.dailyVolumeM3 / US_GALLON_M3).toBeCloseTo(0.6234, 4);
   });
