@@ -40,7 +40,7 @@ const FAKE_S3_KEY = 'S3RVER';
  * What production must be given rather than defaulted: a session secret, a database with a
  * password, real object storage and mail. Each problem names the variable.
  */
-export function productionProblems(raw: NodeJS.ProcessEnv): string[] {
+export function productionProblems(raw: Record<string, string | undefined>): string[] {
   const problems: string[] = [];
   const required = ['NEXTAUTH_SECRET', 'NEXTAUTH_URL', 'DATABASE_URL', 'RUNNEL_S3_ENDPOINT', 'RUNNEL_S3_BUCKET', 'RUNNEL_S3_ACCESS_KEY_ID', 'RUNNEL_S3_SECRET_ACCESS_KEY', 'RUNNEL_SMTP_HOST', 'RUNNEL_MAIL_FROM'];
   for (const name of required) {

@@ -60,6 +60,16 @@ runnel_state_dir() {
   fi
 }
 
+# The local set-up of `npm start` in development: its PostgreSQL port and database, its fake S3.
+development_settings() {
+  export RUNNEL_PG_PORT="${RUNNEL_PG_PORT:-5488}"
+  export RUNNEL_DB_NAME="${RUNNEL_DB_NAME:-runnel}"
+  export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
+  export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-$(runnel_state_dir)/s3}"
+  export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
+  export RUNNEL_RUNTIME_DIR="${RUNNEL_RUNTIME_DIR:-.runtime}"
+}
+
 # ── Secrets ───────────────────────────────────────────────────────────────────────────────────
 # Generated once into the git-ignored .secrets/ folder (mode 700, files mode 600), unless given.
 SECRETS_DIR="$ROOT/.secrets"
@@ -101,7 +111,8 @@ pg_run() {
     if ! id "${PG_OS_USER:=postgres}" >/dev/null 2>&1; then
       useradd --system --no-create-home --shell /usr/sbin/nologin postgres
     fi
-    runuser -u "$PG_OS_USER" -- "$@"
+    # From / : the clone's own folder may be closed to that user (a clone under /root).
+    (cd / && runuser -u "$PG_OS_USER" -- "$@")
   else
     "$@"
   fi
@@ -156,6 +167,8 @@ start_postgres() {
     die "cannot sign in to PostgreSQL on 127.0.0.1:$port with the password in .secrets/pg-password; if that file was replaced, remove $PGDATA_DIR to start afresh"
   fi
 }
+
+postgres_running() { pg_run "$PG_BIN/pg_ctl" -D "$1" status >/dev/null 2>&1; }
 
 stop_postgres() {
   local data="$1"

@@ -20,11 +20,7 @@ case "$RUNNEL_ENV" in
     ;;
   development)
     export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
-    export RUNNEL_PG_PORT="${RUNNEL_PG_PORT:-5488}"
-    export RUNNEL_DB_NAME="${RUNNEL_DB_NAME:-runnel}"
-    export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
-    export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-$(runnel_state_dir)/s3}"
-    export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
+    development_settings
     ensure_postgres_binaries
     ensure_session_secret
     start_postgres "${RUNNEL_PG_CLUSTER:-dev}" "$RUNNEL_PG_PORT"
