@@ -113,7 +113,10 @@ export interface LineSettings {
   heightScatterM?: number;
   /** Altitude of the site for atmospheric pressure, m. @default the highest ground elevation of the line */
   siteAltitudeM?: number;
-  /** Practical limit of negative pressure head in a siphon, m (positive number). @default 7.5 ([R7]) */
+  /**
+   * Practical limit of negative pressure head in a siphon, m (positive number).
+   * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
+   */
   siphonLimitHeadM?: number;
   /** Cover used for stations that give none, m. @default 0 */
   defaultCoverM?: number;

@@ -101,7 +101,7 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   doc.font('Helvetica').fontSize(8).fillColor(INK).text(
     `Defaults where the line sets none: velocity band ${DEFAULT_LINE_SETTINGS.velocityMinMs}-${DEFAULT_LINE_SETTINGS.velocityMaxMs} m/s (T.D. Jordan Jr., A Handbook of Gravity-Flow Water Systems, p.53); ` +
       `residual at an outlet ${DEFAULT_LINE_SETTINGS.minResidualHeadM} m (Akvopedia, gravity-fed water supply); practical siphon limit ${DEFAULT_LINE_SETTINGS.siphonLimitHeadM} m ` +
-      '(Taylor & Francis/CRC hydraulics textbook, ch. 42). Pipe ratings are the standards\u2019 pressure classes, which already contain their design factors.',
+      'at sea level (Taylor & Francis/CRC hydraulics textbook, ch. 42), kept as the same share of the site\u2019s atmospheric head at altitude. Pipe ratings are the standards\u2019 pressure classes, which already contain their design factors.',
   );
 }
 

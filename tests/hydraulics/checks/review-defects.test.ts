@@ -77,3 +77,49 @@ describe('findLimitRanges: ranges the survey cannot resolve merge (issue 13)', (
     expect(ranges[0].worstChainageM).toBe(30);
   });
 });
+
+describe('the static pressure arriving at a break-pressure tank counts (review defect, issue 13)', () => {
+  // Falls 100 m to a tank at ch. 200 whose water stands at the ground: the pipe just above the tank
+  // holds the full 101 m of static head (hydrostatics: static head = water level above the pipe).
+  const input: LineInput = {
+    stations: [[0, 200], [100, 150], [200, 100], [300, 90], [400, 80]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }],
+    devices: [{ kind: 'break-pressure-tank', chainageM: 200 }],
+    start: { kind: 'water-level', levelM: 201 },
+    end: { kind: 'free-discharge' },
+    flow: { kind: 'design', flowM3s: 0.0005 },
+    settings: { defaultCoverM: 0 },
+  };
+
+  it('the stretch\'s highest static head is the 101 m arriving at the tank, not the 51 m upstream', () => {
+    expect(analyzeLine(input).stretches[0].maxStaticPressureHeadM).toBeCloseTo(101, 9);
+  });
+});
+
+describe('the practical siphon limit scales with the site\'s atmospheric head (review defect, issue 13)', () => {
+  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (REFERENCES §1.6).
+  const atSite = (siteAltitudeM: number) =>
+    analyzeLine({
+      stations: [[0, 100], [100, 104], [200, 90]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+      stretches: [{ fromM: 0, toM: 200, pipe: 'pe100-iso4427-sdr11-50mm' }],
+      start: { kind: 'water-level', levelM: 99.5 },
+      end: { kind: 'free-discharge' },
+      flow: { kind: 'design', flowM3s: 0.0005 },
+      settings: { siteAltitudeM, defaultCoverM: 0 },
+    });
+
+  it('is 7.5 m at sea level', () => {
+    expect(atSite(0).limits.siphonLimitHeadM).toBeCloseTo(7.5, 9);
+  });
+
+  it('at 3,000 m keeps the same share of the atmosphere (p/p0 = 0.692 by ISA) and stays below the vapour limit', () => {
+    const { limits } = atSite(3000);
+    expect(limits.siphonLimitHeadM).toBeCloseTo(7.5 * Math.pow(1 - 2.25577e-5 * 3000, 5.25588), 2);
+    expect(limits.siphonLimitHeadM).toBeLessThan(limits.vapourLimitHeadM);
+  });
+
+  it('so a 4.5 m suction at 4,000 m is beyond the siphon limit (a fixed 7.5 m gave no warning above about 2,300 m)', () => {
+    const codes = atSite(4000).warnings.map((w) => w.code);
+    expect(codes).toContain('siphon-limit');
+  });
+});
