@@ -118,7 +118,7 @@ export interface LineSettings {
    * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
    */
   siphonLimitHeadM?: number;
-  /** Cover used for stations that give none, m. @default 0 */
+  /** Cover used for stations that give none, m. @default 0.75 (common burial practice, no source; see settings.ts) */
   defaultCoverM?: number;
   /** Check static pressure plus a sudden-stop surge against the ratings. @default true */
   checkSurge?: boolean;

@@ -97,7 +97,7 @@ describe('the static pressure arriving at a break-pressure tank counts (review d
 });
 
 describe('the practical siphon limit scales with the site\'s atmospheric head (review defect, issue 13)', () => {
-  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (REFERENCES §1.6).
+  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (docs/references/core.md §1.6).
   const atSite = (siteAltitudeM: number) =>
     analyzeLine({
       stations: [[0, 100], [100, 104], [200, 90]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
@@ -121,5 +121,19 @@ describe('the practical siphon limit scales with the site\'s atmospheric head (r
   it('so a 4.5 m suction at 4,000 m is beyond the siphon limit (a fixed 7.5 m gave no warning above about 2,300 m)', () => {
     const codes = atSite(4000).warnings.map((w) => w.code);
     expect(codes).toContain('siphon-limit');
+  });
+});
+
+describe('default pipe cover is common burial practice, not 0 m (review defect, issue 13)', () => {
+  it('a station without cover puts the pipe 0.75 m below ground (common practice, no source)', () => {
+    const analysis = analyzeLine({
+      stations: [{ chainageM: 0, groundElevationM: 100 }, { chainageM: 100, groundElevationM: 90 }],
+      stretches: [{ fromM: 0, toM: 100, pipe: 'pe100-iso4427-sdr11-50mm' }],
+      start: { kind: 'water-level', levelM: 101 },
+      end: { kind: 'free-discharge' },
+      flow: { kind: 'design', flowM3s: 0.0005 },
+    });
+    expect(analysis.settings.defaultCoverM).toBe(0.75);
+    expect(analysis.points.pipeElevationM[1]).toBeCloseTo(89.25, 12);
   });
 });
