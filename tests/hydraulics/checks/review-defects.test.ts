@@ -137,3 +137,31 @@ describe('default pipe cover is common burial practice, not 0 m (review defect, 
     expect(analysis.points.pipeElevationM[1]).toBeCloseTo(89.25, 12);
   });
 });
+
+describe('a summit above the source\'s water level is a true siphon (review defect, issue 13)', () => {
+  // BC Factsheet 590.304-5 "Water Flow, Air Locks and Siphons" [R10]: a pipe above the hydraulic
+  // (static) line only runs as a siphon, must be primed and loses its prime as air collects.
+  const line = (flowM3s: number): LineInput => ({
+    stations: [[0, 100], [100, 103], [200, 80]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stretches: [{ fromM: 0, toM: 200, pipe: 'pe100-iso4427-sdr11-50mm' }],
+    start: { kind: 'water-level', levelM: 101 },
+    end: { kind: 'free-discharge' },
+    flow: { kind: 'design', flowM3s },
+    settings: { defaultCoverM: 0 },
+  });
+
+  it('is reported as a danger with its range and height above the source, even with no flow', () => {
+    const still = analyzeLine(line(0)).warnings;
+    const siphon = still.find((w) => w.code === 'true-siphon')!;
+    expect(siphon.severity).toBe('danger');
+    expect(siphon.values.headM).toBeCloseTo(2, 9);
+    expect(siphon.values.worstChainageM).toBe(100);
+    expect(siphon.message).toContain('must be primed');
+    // No "while flowing" suction when nothing flows.
+    expect(still.map((w) => w.code)).not.toContain('negative-pressure');
+  });
+
+  it('and while flowing too', () => {
+    expect(analyzeLine(line(0.0005)).warnings.map((w) => w.code)).toContain('true-siphon');
+  });
+});
