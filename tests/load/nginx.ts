@@ -32,6 +32,8 @@ ${upstreamPorts.map((p) => `    server 127.0.0.1:${p} max_fails=1 fail_timeout=2
   }
   server {
     listen 127.0.0.1:${listenPort};
+    # A client connection is never closed under a waiting request by a per-connection limit.
+    keepalive_requests 1000000;
     client_max_body_size 50m;
     location / {
       proxy_pass http://runnel;
