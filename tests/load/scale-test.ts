@@ -1,8 +1,7 @@
 // `npm run test:scale` (scripts/scale.sh sets up the database and the build first): two stateless
 // instances behind nginx share PostgreSQL; 50 connections of mixed reads and writes for 30 s; one
 // instance is drained and stopped at 10 s (SIGTERM: it stops listening, so nginx sends new
-// connections to the other, and answers what it already accepted; lib/server/) and started
-// again at 20 s. Passes with 0 errors (no
+// requests to the other, and answers the ones in flight; see nginx.ts) and started again at 20 s. Passes with 0 errors (no
 // refused, reset or timed-out request, no answer outside 2xx) and 0 lost writes (every write
 // answered 201 is in the database).
 import os from 'node:os';
