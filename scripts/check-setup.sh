@@ -7,7 +7,10 @@ ensure_postgres_binaries
 PORT_CHECK="${RUNNEL_SETUP_CHECK_PG_PORT:-$(( ${RUNNEL_PG_PORT:-5489} + 20 ))}"
 CLUSTER=setup-check
 setup_once() {
-  env -u DATABASE_URL RUNNEL_ENV=development RUNNEL_SETUP_ONLY=1 RUNNEL_PG_CLUSTER="$CLUSTER" \
+  # Its own runtime folder and ports: the start script's clean-up must never stop the fakes of the
+  # test run that called it.
+  env -u DATABASE_URL -u RUNNEL_S3_PORT -u RUNNEL_S3_DIR -u RUNNEL_S3_ENDPOINT \
+    RUNNEL_RUNTIME_DIR=.runtime/setup-check RUNNEL_ENV=development RUNNEL_SETUP_ONLY=1 RUNNEL_PG_CLUSTER="$CLUSTER" \
     RUNNEL_PG_PORT="$PORT_CHECK" RUNNEL_DB_NAME=runnel bash scripts/start.sh >/dev/null
 }
 sql() { pg_client "$PG_BIN/psql" -h 127.0.0.1 -p "$PORT_CHECK" -U runnel -d runnel -tAc "$1"; }

@@ -35,10 +35,10 @@ step() { log "── $1"; }
 pg_client "$PG_BIN/dropdb" -h 127.0.0.1 -p "$RUNNEL_PG_PORT" -U runnel --if-exists "$RUNNEL_DB_NAME"
 ensure_database "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME"
 migrate_and_seed
-bash scripts/fakes.sh start
 
 step "set-up: a second npm start keeps the first one's data"
 bash scripts/check-setup.sh
+bash scripts/fakes.sh start
 step "type check (tsc --noEmit)"
 npx tsc --noEmit
 step "lint (eslint)"
