@@ -10,6 +10,8 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'lift-summary': async () => (await import('./lift-summary')).liftSummary,
   'ram-plan-preview': async () => (await import('./lift-summary')).ramPlanPreview,
   'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
+  'api-capacity-50': async () => (await import('./api-load')).apiCapacity50,
+  'api-latency-50u': async () => (await import('./api-load')).apiLatency50u,
 };
 
 async function main(): Promise<void> {
