@@ -1,7 +1,9 @@
 import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { models } from '../../models';
+import { AppError } from '../errors';
 import type { PointRecord } from '../routes/edit-ops';
+import { MAX_ROUTE_POINTS } from '../validations/routes';
 import type { RoutePointView } from '../routes/types';
 
 /** Rows per INSERT: large enough that a 100 000-point walk is four statements. */
@@ -37,6 +39,11 @@ const boolArray = (values: readonly boolean[]) => `{${values.map((v) => (v ? 't'
  * column arrays unnested server-side, far cheaper than a row of bound values per point.
  */
 export async function insertRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+  // Every way a route gets points (import, save, join, split, clean-up) ends here, so the cap holds for all of them.
+  if (records.length > MAX_ROUTE_POINTS) {
+    const message = `A route can hold at most ${MAX_ROUTE_POINTS.toLocaleString('en-US')} points; this one would have ${records.length.toLocaleString('en-US')}`;
+    throw new AppError('bad_request', message, { points: [message] });
+  }
   const { sequelize } = models();
   for (let start = 0; start < records.length; start += CHUNK) {
     const part = records.slice(start, start + CHUNK);
