@@ -68,6 +68,11 @@ export async function forget(spec: LimitSpec, key: string): Promise<void> {
   await limiter(spec).delete(key);
 }
 
+/** Gives back uses of `key` (a successful sign-in is not held against its client address). */
+export async function refund(spec: LimitSpec, key: string, points = 1): Promise<void> {
+  await limiter(spec).reward(key, points);
+}
+
 /** Throws 429 with Retry-After when `key` is over its limit. */
 export async function enforce(spec: LimitSpec, key: string, message: string): Promise<void> {
   const outcome = await consume(spec, key);

@@ -1,7 +1,7 @@
 import 'server-only';
 import { createHash, createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import { env } from '../env';
-import { consume, forget, type LimitSpec } from '../rate-limits';
+import { consume, forget, refund, type LimitSpec } from '../rate-limits';
 
 /**
  * Sign-in attempts are counted in PostgreSQL (lib/rate-limits.ts) BEFORE the password is checked,
@@ -68,10 +68,11 @@ export async function admitSignIn(attempt: SignInAttempt): Promise<Admission> {
   return { allowed: false, retryAfterSeconds: Math.max(...refused.map((o) => o.retryAfterSeconds)) };
 }
 
-/** A correct password: the account's failures (and this device's) are forgotten. */
+/** A correct password: the account's failures (and this device's) are forgotten; the address gets its attempt back. */
 export async function signInSucceeded(attempt: SignInAttempt): Promise<void> {
   const l = limits();
   const account = accountKey(attempt.email);
   await forget(l.account, account);
+  await refund(l.address, attempt.address);
   if (attempt.knownDevice) await forget(l.device, `${account}:${attempt.knownDevice}`);
 }

@@ -72,3 +72,14 @@ describe('the client address', () => {
     expect(clientAddress('127.0.0.1', 0)).toBe('127.0.0.1');
   });
 });
+
+describe('successful sign-ins from one address (an office behind one router)', () => {
+  it('are not counted against the address', async () => {
+    const from = `office-${unique()}`;
+    for (let i = 0; i < 40; i += 1) {
+      const a = attempt(email(), { address: from });
+      expect((await admitSignIn(a)).allowed).toBe(true);
+      await signInSucceeded(a);
+    }
+  });
+});
