@@ -31,6 +31,8 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(201) },
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },
+  { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
+  { file: 'ready/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'teams/route.ts', method: 'GET', params: () => ({}), expect: signedIn(200) },
   { file: 'teams/route.ts', method: 'POST', params: () => ({}), body: () => ({ name: 'Another team' }), expect: signedIn(201) },
   { file: 'teams/[teamId]/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
