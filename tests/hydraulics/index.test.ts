@@ -165,6 +165,7 @@ const EXPORTED_NAMES = [
   'seasonalTasks',
   'seriesCriticalClosureTimeS',
   'simulateTank',
+  'sizeNetwork',
   'sizeStorage',
   'slopeLengthOfProfile',
   'smallestPipeForFlow',
