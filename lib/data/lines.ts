@@ -2,7 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
-import type { Line, LineStatus } from '../../models/line';
+import type { Line } from '../../models/line';
 import { AppError, notFound } from '../errors';
 import { startingDesign } from '../lines/default-design';
 import { lineInputOf } from '../lines/line-input';
@@ -23,10 +23,9 @@ export interface LineRecord {
   notes: string;
   fromChainageM: number | null;
   toChainageM: number | null;
-  status: LineStatus;
-  checkedBy: string;
+  /** Save counter of the working copy (409 on a stale save); review revisions are in lib/data/revisions.ts. */
   revision: number;
-  /** Name of whoever saved the current revision. */
+  /** Name of whoever saved last. */
   preparedBy: string | null;
   design: LineDesign;
   createdAt: string;
@@ -87,8 +86,6 @@ function toRecord(line: Line, people: Map<string, string>, routes: Map<string, s
     notes: line.notes,
     fromChainageM: line.fromChainageM,
     toChainageM: line.toChainageM,
-    status: line.status,
-    checkedBy: line.checkedBy,
     revision: line.revision,
     preparedBy: line.updatedBy ? (people.get(line.updatedBy) ?? null) : null,
     design: designOf(line),
