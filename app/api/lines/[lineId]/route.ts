@@ -16,6 +16,6 @@ export const PATCH = teamRoute(
   async ({ params, user, body }) => ({ line: await updateLine(params.lineId, user.id, body) }),
 );
 
-export const DELETE = teamRoute({ params: LineParams, permission: 'design.edit', teamOf }, async ({ params }) => {
-  await deleteLine(params.lineId);
+export const DELETE = teamRoute({ params: LineParams, permission: 'design.edit', teamOf }, async ({ params, user }) => {
+  await deleteLine(params.lineId, user.id);
 });
