@@ -194,7 +194,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       </Panel>
       {analysis && (
         <Panel title="Results">
-          <ResultsTables analysis={analysis} units={units} lineName={line.name} revision={draft.revision} onHover={setHoverM} />
+          <ResultsTables analysis={analysis} units={units} lineName={line.name} onHover={setHoverM} />
         </Panel>
       )}
       {canEdit && (
