@@ -3,6 +3,7 @@ import { Attachment } from './attachment';
 import { Line } from './line';
 import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
 import { Membership } from './membership';
+import { initialiseNetworkModels, NetworkJob, NetworkLink, NetworkNode, PriceListItem } from './network';
 import { Project } from './project';
 import { Route } from './route';
 import { RoutePoint } from './route-point';
@@ -24,6 +25,7 @@ export function models() {
     RoutePoint.initialise(sequelize);
     Line.initialise(sequelize);
     initialiseLiftModels(sequelize);
+    initialiseNetworkModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -44,9 +46,11 @@ export function models() {
   return {
     User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
     WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
+    NetworkNode, NetworkLink, PriceListItem, NetworkJob,
     sequelize: db(),
   };
 }
 
 export { Attachment, Line, Membership, Project, Route, RoutePoint, Team, User };
 export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };
+export { NetworkJob, NetworkLink, NetworkNode, PriceListItem };
