@@ -12,7 +12,7 @@ export class NetworkJob extends Model<InferAttributes<NetworkJob>, InferCreation
   declare progress: CreationOptional<number>;
   declare stage: CreationOptional<string>;
   declare options: CreationOptional<Record<string, unknown>>;
-  declare result: CreationOptional<unknown>;
+  declare result: CreationOptional<object | null>;
   declare error: CreationOptional<{ message: string; element?: string } | null>;
   declare createdBy: CreationOptional<string | null>;
   declare startedAt: CreationOptional<Date | null>;

@@ -1,5 +1,7 @@
 import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
+import type { NetworkContext } from '../network/context';
+import { solveNetworkRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
 import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -18,6 +20,8 @@ export const TASKS = {
   },
   /** Analyses a whole line (the core's analyzeLine). */
   'line.analyse': (input: LineInput) => analyzeLine(input),
+  /** Solves a project's network at the peak hour (lib/network). */
+  'network.solve': (input: NetworkContext) => solveNetworkRun(input),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
   'test.spin': (input: { ms: number; answer: number }) => {
     const end = Date.now() + input.ms;

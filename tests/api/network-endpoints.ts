@@ -1,3 +1,4 @@
+import { models } from '../../models';
 import type { Actor } from '../support/api';
 import { createDemandUseFixture } from '../support/lift-fixtures';
 import { createNodeFixture, createPipeNetworkFixture, outletNodeBody, pipeLinkBody, sourceNodeBody } from '../support/network-fixtures';
@@ -59,6 +60,17 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
       return { projectId: f.projectId, useId: (await createDemandUseFixture(f.projectId)).id };
     },
     body: (f) => ({ outletNodeId: madeFor.get(f)!.from }),
+  },
+  {
+    file: `${P}/runs/route.ts`, method: 'POST', expect: anyMember(202), body: () => ({ kind: 'solve' }),
+    params: async (f) => {
+      await createPipeNetworkFixture(f.projectId);
+      return { projectId: f.projectId };
+    },
+  },
+  {
+    file: `${P}/runs/[jobId]/route.ts`, method: 'GET', expect: anyMember(200),
+    params: async (f) => ({ projectId: f.projectId, jobId: (await models().NetworkJob.create({ projectId: f.projectId, kind: 'solve' })).id }),
   },
   { file: 'teams/[teamId]/price-list/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
   {
