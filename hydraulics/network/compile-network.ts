@@ -1,5 +1,6 @@
 import { waterKinematicViscosityM2s } from '../water';
-import { minorLossCoefficient, type LinkLaw } from './link-loss';
+import { pipeAreaM2 } from '../friction/pipe-flow';
+import { LINEAR_BELOW_VELOCITY_MS, minorLossCoefficient, type LinkLaw } from './link-loss';
 import { resolveNetworkSettings, type ResolvedNetworkSettings } from './settings';
 import type { NetworkInput, NetworkLinkStatus, NetworkNode, NetworkPipe } from './types';
 import { assertNetworkInput, hasFixedHead, resolveNetworkPipe } from './validate-network';
@@ -32,6 +33,8 @@ export interface CompiledNetwork {
   /** Minor-loss coefficient m of m·Q|Q|, m per (m³/s)². */
   minor: Float64Array;
   diameterM: Float64Array;
+  /** Flow below which the link's loss is linear (see `LINEAR_BELOW_VELOCITY_MS`), m³/s. */
+  linearBelowM3s: Float64Array;
   pipes: NetworkPipe[];
   status: NetworkLinkStatus[];
   /** Hydraulic grade a PRV holds at its `to` node, m; NaN for other links. */
@@ -136,6 +139,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     laws,
     minor,
     diameterM,
+    linearBelowM3s: Float64Array.from(diameterM, (d) => LINEAR_BELOW_VELOCITY_MS * pipeAreaM2(d)),
     pipes,
     status,
     setHeadM,

@@ -23,6 +23,8 @@ const STATE_FLOW_TOLERANCE_M3S = 1e-12;
 const PINNED_HEAD_WEIGHT = 1e12;
 /** Valve states are re-examined at most this many times before the run gives up. */
 const MAX_STATE_ROUNDS = 40;
+/** Flow change per link that is rounding noise, not progress, m³/s (far below the 1e-9 continuity aim). */
+const STILL_FLOW_M3S = 1e-13;
 /** Starting velocity for every link, m/s: a typical design velocity. */
 const START_VELOCITY_MS = 0.3;
 
@@ -117,7 +119,7 @@ export class GradientSolver {
    */
   solve(startFlows?: Float64Array, startStates?: Uint8Array): GradientResult {
     const { net } = this;
-    const { linkCount, nodeCount, from, to, fixedHeadM, netDemandM3s, laws, minor, setHeadM, settings } = net;
+    const { linkCount, nodeCount, from, to, fixedHeadM, netDemandM3s, laws, minor, setHeadM, settings, linearBelowM3s } = net;
     const unknownOf = this.unknownOf;
     const states = startStates ? startStates.slice() : this.initialStates();
     const flow = startFlows ? startFlows.slice() : this.initialFlows();
@@ -166,7 +168,7 @@ export class GradientSolver {
             p[k] = 1 / CLOSED_LINK_RESISTANCE;
             y[k] = flow[k];
           } else {
-            const { lossM, gradient } = lossAndGradient(laws[k], minor[k], flow[k]);
+            const { lossM, gradient } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
             p[k] = 1 / gradient;
             y[k] = lossM / gradient;
           }
@@ -207,8 +209,10 @@ export class GradientSolver {
           flowSum += Math.abs(updated);
           flow[k] = updated;
         }
-        relativeChange = flowSum > 0 ? changeSum / flowSum : changeSum;
-        if (relativeChange < settings.flowTolerance && this.maxHeadBalanceError(flow, head, states) < settings.headTolerance) {
+        relativeChange = flowSum > 0 ? changeSum / flowSum : 0;
+        // A still network (no demand anywhere) has no scale for a relative change: an absolute floor.
+        const settled = changeSum <= settings.flowTolerance * flowSum + STILL_FLOW_M3S * linkCount;
+        if (settled && this.maxHeadBalanceError(flow, head, states) < settings.headTolerance) {
           converged = true;
           break;
         }
@@ -255,11 +259,11 @@ export class GradientSolver {
   }
 
   private maxHeadBalanceError(flow: Float64Array, head: Float64Array, states: Uint8Array): number {
-    const { linkCount, laws, minor, from, to } = this.net;
+    const { linkCount, laws, minor, from, to, linearBelowM3s } = this.net;
     let worst = 0;
     for (let k = 0; k < linkCount; k++) {
       if (states[k] !== LinkState.Open) continue;
-      const { lossM } = lossAndGradient(laws[k], minor[k], flow[k]);
+      const { lossM } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
       worst = Math.max(worst, Math.abs(lossM - (head[from[k]] - head[to[k]])));
     }
     return worst;

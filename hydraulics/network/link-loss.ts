@@ -3,11 +3,17 @@ import { darcyFrictionFactorUnchecked } from '../friction/darcy-weisbach';
 import { pipeAreaM2 } from '../friction/pipe-flow';
 
 /**
- * Below this slope of the head-loss curve (m per m³/s) a link is treated as linear, so a link with
- * no flow still has a finite conductance in the gradient method. The same device as the small-flow
- * linearisation of Rossman, "EPANET 2 Users Manual" (EPA/600/R-00/057, 2000), Appendix D.
+ * Slope floor of any link's loss, m per m³/s: a link with no friction and no fittings (a bare valve)
+ * still loses 1 mm of head at 1 m³/s, so the system stays well conditioned. Common practice, no
+ * source (the gradient method needs some floor; Rossman, EPANET 2 Users Manual, 2000, App. D).
  */
-export const MIN_LOSS_GRADIENT = 1e-7;
+export const MIN_LOSS_GRADIENT = 1e-3;
+/**
+ * Below this mean velocity a link's loss is taken as linear in the flow (the chord of the real law
+ * at this velocity), so a link with next to no flow keeps a finite, well-scaled conductance and
+ * the iteration does not chase rounding noise. The loss there is below 1e-9 m on any real pipe.
+ */
+export const LINEAR_BELOW_VELOCITY_MS = 1e-6;
 /** Resistance of a shut valve, m per m³/s: a closed link passes ~1e-12 m³/s per m of head. */
 export const CLOSED_LINK_RESISTANCE = 1e12;
 
@@ -42,20 +48,27 @@ export function frictionLossM(law: LinkLaw, q: number): number {
   return (Math.sign(q) * f * law.lengthM * velocity * velocity) / (law.diameterM * 2 * GRAVITY_MS2);
 }
 
-/**
- * Loss and slope of a link (friction plus minor loss `minor`·Q|Q|). Hazen-Williams has the exact
- * slope n·r·|Q|^(n-1); for Darcy-Weisbach the friction factor is held for the step (slope 2h/Q,
- * h/Q when laminar), as the gradient method allows (Todini & Pilati 1988).
- */
-export function lossAndGradient(law: LinkLaw, minor: number, q: number): LossAndGradient {
+function rawLossAndGradient(law: LinkLaw, minor: number, q: number): LossAndGradient {
   const magnitude = Math.abs(q);
   const friction = frictionLossM(law, q);
   let gradient: number;
-  if (magnitude === 0) gradient = 0;
-  else if (law.kind === 'hazen-williams') gradient = law.exponent * law.resistance * magnitude ** (law.exponent - 1);
-  else gradient = (2 * Math.abs(friction)) / magnitude;
-  gradient += 2 * minor * magnitude;
-  const lossM = friction + minor * q * magnitude;
-  if (gradient < MIN_LOSS_GRADIENT) return { lossM: MIN_LOSS_GRADIENT * q, gradient: MIN_LOSS_GRADIENT };
-  return { lossM, gradient };
+  if (law.kind === 'hazen-williams') gradient = magnitude === 0 ? 0 : law.exponent * law.resistance * magnitude ** (law.exponent - 1);
+  else gradient = magnitude === 0 ? 0 : (2 * Math.abs(friction)) / magnitude;
+  return { lossM: friction + minor * q * magnitude, gradient: gradient + 2 * minor * magnitude };
+}
+
+/**
+ * Loss and slope of a link (friction plus minor loss `minor`·Q|Q|). Hazen-Williams has the exact
+ * slope n·r·|Q|^(n-1); for Darcy-Weisbach the friction factor is held for the step (slope 2h/Q), as
+ * the gradient method allows (Todini & Pilati 1988). Below `linearBelowM3s` the loss is linear
+ * (see {@link LINEAR_BELOW_VELOCITY_MS}); the slope never falls below {@link MIN_LOSS_GRADIENT}.
+ */
+export function lossAndGradient(law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
+  if (Math.abs(q) < linearBelowM3s) {
+    const chord = Math.max(rawLossAndGradient(law, minor, linearBelowM3s).lossM / linearBelowM3s, MIN_LOSS_GRADIENT);
+    return { lossM: chord * q, gradient: chord };
+  }
+  const raw = rawLossAndGradient(law, minor, q);
+  if (raw.gradient < MIN_LOSS_GRADIENT) return { lossM: MIN_LOSS_GRADIENT * q, gradient: MIN_LOSS_GRADIENT };
+  return raw;
 }

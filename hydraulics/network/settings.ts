@@ -24,7 +24,7 @@ export const DEFAULT_NETWORK_SETTINGS: ResolvedNetworkSettings = {
   hazenWilliamsFlowExponent: HAZEN_WILLIAMS_FLOW_EXPONENT,
   hazenWilliamsDiameterExponent: HAZEN_WILLIAMS_DIAMETER_EXPONENT,
   waterTemperatureC: DEFAULT_WATER_TEMPERATURE_C,
-  flowTolerance: 1e-10,
+  flowTolerance: 1e-9,
   headTolerance: 1e-6,
   maxIterations: 100,
 };

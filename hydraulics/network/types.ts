@@ -87,7 +87,7 @@ export interface NetworkSettings {
   hazenWilliamsDiameterExponent?: number;
   /** Water temperature for Darcy-Weisbach viscosity, °C. @default 20 */
   waterTemperatureC?: number;
-  /** Stop when the largest flow change is below this share of the total flow. @default 1e-10 */
+  /** Stop when the largest flow change is below this share of the total flow. @default 1e-9 */
   flowTolerance?: number;
   /** Stop only when every link's head balance is within this, m. @default 1e-6 */
   headTolerance?: number;
