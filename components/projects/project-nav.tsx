@@ -12,6 +12,7 @@ export const PROJECT_SECTIONS: { path: string; label: string }[] = [
   { path: '/routes', label: 'Survey routes' },
   { path: '/lines', label: 'Lines' },
   { path: '/lift', label: 'Lift & storage' },
+  { path: '/network', label: 'Network' },
 ];
 
 export function ProjectNav({ projectId }: { projectId: string }) {
