@@ -36,6 +36,8 @@ export interface BuiltNetwork {
   pieces: Record<string, CorePiece>;
   /** Core node ids that are record nodes (the rest are pipe changes inside a line). */
   recordNodeIds: string[];
+  /** Names of the record nodes and links by id, and of each line piece by its core id (for wording findings). */
+  names: Record<string, string>;
   /** Findings made while building (assumed figures), on the record that caused them. */
   notes: { nodeId?: string; linkId?: string; message: string }[];
 }
@@ -250,5 +252,8 @@ export function buildNetworkInput(context: NetworkContext): BuiltNetwork {
     pieces[link.id] = { linkId: link.id, fromChainageM: null, toChainageM: null, pipeId: pipe.id, pipeLabel: pipe.label };
     links.push({ id: link.id, from: link.fromNodeId, to: link.toNodeId, lengthM, pipe: pipe.pipe, minorK: link.data.minorK ?? 0, ...valve });
   }
-  return { input: { nodes: [...nodes, ...extraNodes], links }, pieces, recordNodeIds: records.nodes.map((n) => n.id), notes };
+  const names: Record<string, string> = {};
+  for (const record of [...records.nodes, ...records.links]) names[record.id] = record.name;
+  for (const [coreId, piece] of Object.entries(pieces)) names[coreId] ??= names[piece.linkId];
+  return { input: { nodes: [...nodes, ...extraNodes], links }, pieces, recordNodeIds: records.nodes.map((n) => n.id), names, notes };
 }

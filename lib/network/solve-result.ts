@@ -5,7 +5,9 @@ import type { LinkResult, NetworkRunWarning, NodeResult, SolveRunResult } from '
 
 /** A core finding placed on the record it is about (a line piece -> its line link and chainage). */
 export function recordWarning(built: BuiltNetwork, warning: NetworkWarning): NetworkRunWarning {
-  const base = { code: warning.code, severity: warning.severity, message: warning.message };
+  // The core names elements by id; people read them by name.
+  const message = warning.message.replace(/"([^"]+)"/g, (quoted, key: string) => (built.names[key] ? `"${built.names[key]}"` : quoted));
+  const base = { code: warning.code, severity: warning.severity, message };
   const id = warning.elementId;
   if (!id) return base;
   const piece = built.pieces[id];
