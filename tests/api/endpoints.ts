@@ -53,6 +53,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
   { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/site-context/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/network-flows/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   ...LIFT_ENDPOINTS,
