@@ -33,6 +33,7 @@ import { StretchTable } from './stretch-table';
 import { useLineDraft } from './use-line-draft';
 import { reportFileName } from '@/lib/lines/file-names';
 import { WarningsPanel } from './warnings-panel';
+import { NetworkFlowsStrip } from './network-flows-strip';
 import { WinterPanel } from './winter-panel';
 
 export interface LineWorkspaceProps {
@@ -142,6 +143,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
             onPlaceKind={setPlaceKind}
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
+          <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
           <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
@@ -194,7 +196,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       </Panel>
       {analysis && (
         <Panel title="Results">
-          <ResultsTables analysis={analysis} units={units} lineName={line.name} revision={draft.revision} onHover={setHoverM} />
+          <ResultsTables analysis={analysis} units={units} lineName={line.name} onHover={setHoverM} />
         </Panel>
       )}
       {canEdit && (

@@ -4,6 +4,7 @@ import type { PipeSpec } from '../catalogue/pipe-spec';
 import { buildProfileGrid, type ProfileGrid } from './grid';
 import { eventChainages, pointEvents, tanksOf } from './line-events';
 import { pressureLimits } from './pressure-limits';
+import { pumpShutoffGradeM } from './pump-shutoff';
 import { findGravityFlow } from './find-flow';
 import { buildReaches, type Reach } from './reaches';
 import { resolveStretchPipes } from './resolve-pipes';
@@ -15,9 +16,9 @@ import type { LineEnd, LineInput, LineStart } from './types';
 import { assertLineInput } from './validate-line';
 import { computeZones, zoneCrossings } from './zones';
 
-function startHeads(start: LineStart): { flowingM: number; staticM: number } {
+function startHeads(start: LineStart, pumpPipeElevationM: number): { flowingM: number; staticM: number } {
   if (start.kind === 'water-level') return { flowingM: start.levelM, staticM: start.levelM };
-  return { flowingM: start.outletHeadM, staticM: start.shutoffHeadM ?? start.outletHeadM };
+  return { flowingM: start.outletHeadM, staticM: pumpShutoffGradeM(start, pumpPipeElevationM) };
 }
 
 function endTarget(end: LineEnd, lastPipeElevationM: number, defaultResidualM: number) {
@@ -57,7 +58,7 @@ export function profileModel(input: LineInput): ProfileModel {
   const grid = buildProfileGrid(input.stations, input.stretches, eventChainages(input, declaredTanks), settings.defaultCoverM);
   const n = grid.chainageM.length;
   const { events, tanks } = pointEvents(grid, input, declaredTanks);
-  const heads = startHeads(input.start);
+  const heads = startHeads(input.start, grid.pipeElevationM[0]);
   const target = endTarget(input.end, grid.pipeElevationM[n - 1], settings.minResidualHeadM);
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);
   const gravity = findGravityFlow(reaches, pipes, method, temperatureC);

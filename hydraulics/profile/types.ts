@@ -68,7 +68,8 @@ export type LineStart =
   /**
    * A pump delivering into the line: `outletHeadM` is the hydraulic grade (m above datum) at the
    * pump outlet while delivering the flow; `shutoffHeadM` the grade with the line shut
-   * (the static line). @default shutoffHeadM = outletHeadM
+   * (the static line), never below `outletHeadM`. @default the pipe at the pump plus 1.25 × the
+   * pump's head above it (DEFAULT_SHUTOFF_TO_DUTY_HEAD)
    */
   | { kind: 'pump'; outletHeadM: number; shutoffHeadM?: number };
 
