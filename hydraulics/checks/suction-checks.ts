@@ -106,7 +106,7 @@ export function suctionWarnings(profile: LineProfile): LineWarning[] {
  * Pipe above the static line (the source's water level, or a tank's): a true siphon. It does not
  * fill or start by itself, must be primed, and loses its prime as air comes out of the water and
  * gathers at the summit; an automatic air valve there lets air in and stops it (BC Factsheet
- * 590.304-5 "Water Flow, Air Locks and Siphons" [R10]; [R7]). Reported whether or not water flows.
+ * 590.304-5 "Water Flow, Air Locks and Siphons" [R10]; [R7]; profile-and-checks.md §2.2). Reported whether or not water flows.
  */
 export function trueSiphonWarnings(profile: LineProfile): LineWarning[] {
   const { chainageM, staticPressureHeadM, pipeElevationM } = profile.points;

@@ -138,7 +138,7 @@ describe('default pipe cover is common burial practice, not 0 m (review defect, 
   });
 });
 
-describe('a summit above the source\'s water level is a true siphon (review defect, issue 13)', () => {
+describe('a summit above the source\'s water level is a true siphon (review defect, issue 13; profile-and-checks.md §2.2)', () => {
   // BC Factsheet 590.304-5 "Water Flow, Air Locks and Siphons" [R10]: a pipe above the hydraulic
   // (static) line only runs as a siphon, must be primed and loses its prime as air collects.
   const line = (flowM3s: number): LineInput => ({
