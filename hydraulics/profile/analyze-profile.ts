@@ -84,7 +84,7 @@ export function profileModel(input: LineInput): ProfileModel {
     velocityMs[j] = hydraulics.velocityMs[stretchIndex[j]];
   }
   const stretches = stretchResults(
-    input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor,
+    input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor, lines.staticDropAtPointM,
   );
   const limits = pressureLimits(settings, grid.groundElevationM);
   const surgeOn = settings.checkSurge && flowM3s > 0;
@@ -96,6 +96,7 @@ export function profileModel(input: LineInput): ProfileModel {
     allowableHeadM: Float64Array.from(stretches, (s) => s.allowableHeadM),
     surgeHeadM: Float64Array.from(stretches, (s) => (surgeOn ? s.surgeHeadM : 0)),
     limits,
+    heightScatterM: settings.heightScatterM,
   });
   const reachResults: ReachResult[] = reaches.map((reach, r) => ({
     fromM: grid.chainageM[reach.fromPoint],
@@ -148,7 +149,7 @@ export function profileModel(input: LineInput): ProfileModel {
     zones,
     crossings: zoneCrossings(zones, grid.chainageM[0], grid.chainageM[n - 1]),
     tanks,
-    settings: { ...settings, siteAltitudeM: limits.siteAltitudeM },
+    settings: { ...settings, siteAltitudeM: limits.siteAltitudeM, siphonLimitHeadM: limits.siphonLimitHeadM },
   };
   return { profile, grid, reaches, pipes };
 }

@@ -105,9 +105,19 @@ export interface LineSettings {
   minResidualHeadM?: number;
   /** Smallest rise/fall of the pipe profile that counts as a high or low point, m. @default 1 */
   airPointToleranceM?: number;
+  /**
+   * How far the surveyed heights along this line scatter about the real ground, m (see
+   * `surveyHeightScatterM`). High and low points must stand out by more than this, limit zones
+   * closer than it can resolve merge, and results within it of their limit say so.
+   * @default 0 (heights taken as exact: a level book or hose level)
+   */
+  heightScatterM?: number;
   /** Altitude of the site for atmospheric pressure, m. @default the highest ground elevation of the line */
   siteAltitudeM?: number;
-  /** Practical limit of negative pressure head in a siphon, m (positive number). @default 7.5 ([R7]) */
+  /**
+   * Practical limit of negative pressure head in a siphon, m (positive number).
+   * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
+   */
   siphonLimitHeadM?: number;
   /** Cover used for stations that give none, m. @default 0 */
   defaultCoverM?: number;
