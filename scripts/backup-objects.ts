@@ -17,12 +17,23 @@ interface ManifestEntry {
 
 const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
 
+/** Some S3-compatible stores answer a read of a key deleted after the listing with a server error,
+ *  not "no such key": a read that fails is skipped only when the key is gone from a new listing. */
+async function readIfStillThere(key: string): ReturnType<typeof getObject> {
+  try {
+    return await getObject(key);
+  } catch (error) {
+    if (!(await listKeys(key)).includes(key)) return null;
+    throw error;
+  }
+}
+
 async function save(folder: string): Promise<void> {
   const dir = path.join(folder, 'objects');
   fs.mkdirSync(dir, { recursive: true, mode: 0o700 });
   const entries: ManifestEntry[] = [];
   for (const key of await listKeys('')) {
-    const object = await getObject(key);
+    const object = await readIfStillThere(key);
     // Deleted between the listing and the read: a live store changes while it is copied.
     if (!object) continue;
     const file = `${String(entries.length + 1).padStart(6, '0')}.bin`;
