@@ -43,6 +43,7 @@ function rowFields(input: RamSiteInput, deliveryLengthM: number) {
     sizeClassId: input.sizeClassId,
     pumpCount: input.pumpCount,
     measuredEfficiency: input.measuredEfficiency,
+    efficiencyTableId: input.efficiencyTableId,
     notes: input.notes,
   };
 }

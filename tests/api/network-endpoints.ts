@@ -6,6 +6,8 @@ import type { EndpointCase } from './endpoints';
 
 type Expect = Record<Actor, number>;
 const anyMember = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
+// The working copy's network is not the client's to see (a viewer sees approved revisions).
+const teamWorkers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
 const designers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: ok, owner: ok });
 
 const P = 'projects/[projectId]/network';
@@ -14,7 +16,7 @@ const madeFor = new WeakMap<object, { from: string; to: string }>();
 
 /** The network endpoints and the team price list, with the status each caller must get. */
 export const NETWORK_ENDPOINTS: EndpointCase[] = [
-  { file: `${P}/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/nodes/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: sourceNodeBody, expect: designers(201) },
   {
     file: `${P}/nodes/[nodeId]/route.ts`, method: 'PUT', body: () => ({ ...outletNodeBody(), name: 'Renamed tap' }), expect: designers(200),
@@ -62,14 +64,14 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     body: (f) => ({ outletNodeId: madeFor.get(f)!.from }),
   },
   {
-    file: `${P}/runs/route.ts`, method: 'POST', expect: anyMember(202), body: () => ({ kind: 'solve' }),
+    file: `${P}/runs/route.ts`, method: 'POST', expect: teamWorkers(202), body: () => ({ kind: 'solve' }),
     params: async (f) => {
       await createPipeNetworkFixture(f.projectId);
       return { projectId: f.projectId };
     },
   },
   {
-    file: `${P}/runs/[jobId]/route.ts`, method: 'GET', expect: anyMember(200),
+    file: `${P}/runs/[jobId]/route.ts`, method: 'GET', expect: teamWorkers(200),
     params: async (f) => ({ projectId: f.projectId, jobId: (await models().NetworkJob.create({ projectId: f.projectId, kind: 'solve' })).id }),
   },
   { file: 'teams/[teamId]/price-list/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },

@@ -11,7 +11,7 @@ import { getQueryClient } from '@/lib/queries/query-client';
 export const metadata: Metadata = { title: 'Network' };
 
 export default async function NetworkPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const { project, role } = await requireProjectPage(params);
+  const { project, role } = await requireProjectPage(params, 'design.view');
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: networkKeys.view(project.id), queryFn: () => networkView(project.id) });
   return (

@@ -5,6 +5,6 @@ import { LineParams } from '@/lib/validations/lines';
 
 /** The flow of each piece of the line (it drops at every take-off), from a solve of the project's network. */
 export const GET = teamRoute(
-  { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
+  { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => ({ flows: await networkFlowsOfLine(params.lineId) }),
 );

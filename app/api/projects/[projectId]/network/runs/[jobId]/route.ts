@@ -5,6 +5,6 @@ import { NetworkJobParams } from '@/lib/validations/network';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: NetworkJobParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: NetworkJobParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   run: await getNetworkRun(params.projectId, params.jobId),
 }));
