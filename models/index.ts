@@ -5,6 +5,7 @@ import { Comment } from './comment';
 import { Line } from './line';
 import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
 import { Membership } from './membership';
+import { initialiseNetworkModels, NetworkJob, NetworkLink, NetworkNode, PriceListItem } from './network';
 import { Project } from './project';
 import { Revision } from './revision';
 import { Route } from './route';
@@ -30,6 +31,7 @@ export function models() {
     Revision.initialise(sequelize);
     Comment.initialise(sequelize);
     Activity.initialise(sequelize);
+    initialiseNetworkModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -51,9 +53,11 @@ export function models() {
     User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
     Revision, Comment, Activity,
     WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
+    NetworkNode, NetworkLink, PriceListItem, NetworkJob,
     sequelize: db(),
   };
 }
 
 export { Activity, Attachment, Comment, Line, Revision, Membership, Project, Route, RoutePoint, Team, User };
 export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };
+export { NetworkJob, NetworkLink, NetworkNode, PriceListItem };

@@ -14,6 +14,7 @@ export const PROJECT_SECTIONS: { path: string; label: string; needs?: Permission
   { path: '/routes', label: 'Survey routes', needs: 'design.view' },
   { path: '/lines', label: 'Lines', needs: 'design.view' },
   { path: '/lift', label: 'Lift & storage', needs: 'design.view' },
+  { path: '/network', label: 'Network', needs: 'design.view' },
   { path: '/reviews', label: 'Reviews' },
   { path: '/activity', label: 'Activity', needs: 'design.view' },
 ];

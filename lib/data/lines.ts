@@ -1,4 +1,5 @@
 import 'server-only';
+import { linkLineIntoNetwork } from '../../migrations/support/network-from-records.cjs';
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
@@ -166,17 +167,14 @@ export async function createLine(projectId: string, userId: string, input: Creat
   const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
   await assertRamSiteInProject(design, projectId);
   assertDesignFits(design, stations, await lineSiteContext(projectId));
-  return models().sequelize.transaction(async (transaction) => {
-    const line = await models().Line.create({
-      projectId,
-      routeId: input.routeId,
-      name: input.name,
-      notes: input.notes,
-      ...window,
-      ...columnsOf(design),
-      createdBy: userId,
-      updatedBy: userId,
-    }, { transaction });
+  const { Line: L, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const line = await L.create(
+      { projectId, routeId: input.routeId, name: input.name, notes: input.notes, ...window, ...columnsOf(design), createdBy: userId, updatedBy: userId },
+      { transaction },
+    );
+    // Every line is a link of its project's network from the moment it exists.
+    await linkLineIntoNetwork(sequelize, transaction, line.id);
     await recordActivity(transaction, { projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: line.id, summary: `Started line "${line.name}"` });
     return recordOf(line, transaction);
   });

@@ -1,7 +1,7 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
-import type { LineAnalysis } from '../../hydraulics/index';
+import { highLowToleranceM, type LineAnalysis } from '../../hydraulics/index';
 import { profileScene } from '../chart/profile-scene';
 import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
@@ -90,7 +90,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, analysis, u);
-  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, line.design.winter, context.frostDepthM, false), u);
+  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, line.design.winter, context.frostDepthM, false), u);
   assumptions(doc, analysis, u);
   cautions(doc);
   markEveryPage(doc, stamp);

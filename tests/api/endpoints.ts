@@ -3,6 +3,7 @@ import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
 import { REVIEW_ENDPOINTS } from './review-endpoints';
+import { NETWORK_ENDPOINTS } from './network-endpoints';
 import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -34,6 +35,8 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(201) },
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },
+  { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
+  { file: 'ready/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'teams/route.ts', method: 'GET', params: () => ({}), expect: signedIn(200) },
   { file: 'teams/route.ts', method: 'POST', params: () => ({}), body: () => ({ name: 'Another team' }), expect: signedIn(201) },
   { file: 'teams/[teamId]/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
@@ -58,7 +61,9 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...LIFT_ENDPOINTS,
+  { file: 'lines/[lineId]/network-flows/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...REVIEW_ENDPOINTS,
+  ...NETWORK_ENDPOINTS,
   // Survey routes: every member reads; surveyors, designers and owners import and edit.
   { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'projects/[projectId]/routes/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Sketch of the lower field' }), expect: surveyEditors(201) },

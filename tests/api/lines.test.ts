@@ -166,3 +166,22 @@ describe('demo lines (seeded scenario)', () => {
     expect(pn16.warnings.filter((w: { severity: string }) => w.severity !== 'info')).toEqual([]);
   });
 });
+
+describe('demo walked route (seeded scenario)', () => {
+  it('the phone walk is read no finer than its stated accuracy: a short list, not one item per wiggle', async () => {
+    const line = await models().Line.findByPk('6f1c1e52-3a57-4c38-9b0e-0d5b1c7a4601');
+    if (!line) return; // a database without the demo scenario
+    const designer = await models().User.findOne({ where: { email: 'designer@example.test' } });
+    const res = await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: line.id }, userId: designer!.id });
+    expect(res.status).toBe(200);
+    const { analysis } = res.json;
+    expect(analysis.settings.heightScatterM).toBe(4); // the phone's stated vertical accuracy (lib/demo/ridge-walk.cjs)
+    const count = (code: string) => analysis.warnings.filter((w: { code: string }) => w.code === code).length;
+    // Worked out from the smooth ground (tests/hydraulics/checks/walked-route.test.ts): 3 summits, 3 sags.
+    expect(count('air-release-needed')).toBe(3);
+    expect(count('washout-needed')).toBe(3);
+    expect(count('siphon-limit')).toBe(1);
+    expect(count('static-over-rating')).toBe(1);
+    expect(analysis.warnings.length).toBeLessThan(15);
+  });
+});

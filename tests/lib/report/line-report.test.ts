@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine, PRESSURE_CAUTION } from '../../../hydraulics/index';
 import type { LineRecord } from '../../../lib/data/lines';
 import { LINE_CAUTIONS } from '../../../lib/lines/cautions';
-import { localiseWarningText } from '../../../lib/units/localise-text';
+import { warningText } from '../../../lib/lines/warning-words';
+import { displayUnits } from '../../../lib/units';
 import { WARNING_TITLES } from '../../../lib/lines/warning-words';
 import { revisionStamp } from '../../../lib/review/stamp';
 import { lineReportPdf } from '../../../lib/report/line-report';
@@ -44,7 +45,8 @@ describe('line design report (PDF)', () => {
     expect(analysis.warnings.length).toBeGreaterThan(3);
     for (const w of analysis.warnings) {
       expect(text).toContain(WARNING_TITLES[w.code]);
-      expect(text).toContain(squash(w.message).slice(0, 60));
+      // The report words each warning from its code and values, as the screen does.
+      expect(text).toContain(squash(warningText(w, displayUnits('metric')).message).slice(0, 60));
     }
     for (const words of ['Stretch schedule', '40 mm PE80 SDR 17 (PN 8)', 'Devices by chainage', 'Air-release valve', 'Assumptions', 'Hazen-Williams', '20 °C']) {
       expect(text).toContain(words);
@@ -63,6 +65,9 @@ describe('line design report (PDF)', () => {
     expect(text).toContain('gpm');
     expect(text).toContain('psi');
     const over = analysis.warnings.find((w) => w.code === 'static-over-rating')!;
-    expect(text).toContain(squash(localiseWarningText(over.message, 'us')).slice(0, 60));
+    const words = warningText(over, displayUnits('us')).message;
+    expect(words).toMatch(/ ft /);
+    expect(words).not.toMatch(/\d m\b/);
+    expect(text).toContain(squash(words).slice(0, 60));
   });
 });
