@@ -9,6 +9,8 @@ import * as requestChangesRoute from '@/app/api/revisions/[revisionId]/request-c
 import * as revisionRoute from '@/app/api/revisions/[revisionId]/route';
 import * as submitRoute from '@/app/api/revisions/[revisionId]/submit/route';
 import * as lineRoute from '@/app/api/lines/[lineId]/route';
+import * as membersRoute from '@/app/api/teams/[teamId]/members/route';
+import * as sourceFileRoute from '@/app/api/routes/[routeId]/source/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
 import { createPipeNetworkFixture } from '../support/network-fixtures';
@@ -152,5 +154,15 @@ describe('revisions and the review cycle', () => {
     const draftPages = await pagesOf(draftPdf.bytes);
     expect(draftPages.length).toBeGreaterThan(1);
     for (const page of draftPages) expect(page).toContain('NOT FOR CONSTRUCTION');
+  });
+
+  it('a client sees no other member\'s e-mail address and cannot download raw survey files', async () => {
+    const members = await call(membersRoute.GET, { method: 'GET', path: '/api/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    expect(members.status).toBe(200);
+    for (const m of members.json.members) expect(m.email).toBe(m.userId === f.users.viewer.id ? f.users.viewer.email : null);
+    const forTeam = await call(membersRoute.GET, { method: 'GET', path: '/api/x', params: { teamId: f.teamId }, userId: f.users.reviewer.id });
+    expect(forTeam.json.members.every((m: { email: string | null }) => typeof m.email === 'string')).toBe(true);
+    const raw = await call(sourceFileRoute.GET, { method: 'GET', path: '/api/x', params: { routeId: f.routeId }, userId: f.users.viewer.id });
+    expect(raw.status).toBe(403);
   });
 });
