@@ -12,6 +12,10 @@ export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
 export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-.runtime/s3}"
 export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
 export RUNNEL_RUNTIME_DIR="${RUNNEL_RUNTIME_DIR:-.runtime}"
+# Mail: the local fake SMTP server (scripts/fakes/mail.mjs) and its reading page.
+export RUNNEL_SMTP_PORT="${RUNNEL_SMTP_PORT:-2525}"
+export RUNNEL_MAIL_WEB_PORT="${RUNNEL_MAIL_WEB_PORT:-1080}"
+export RUNNEL_MAIL_DIR="${RUNNEL_MAIL_DIR:-.runtime/mail}"
 PGDATA_DIR="$ROOT/.pgdata"
 
 ensure_node_packages

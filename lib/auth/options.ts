@@ -34,7 +34,8 @@ export function authOptions(): NextAuthOptions {
 
           const user = await models().User.findOne({ where: { email } });
           const ok = await verifyPassword(user?.passwordHash ?? null, password);
-          if (!user || !ok) {
+          // An address never confirmed cannot sign in (accounts are made verified; this guards old rows).
+          if (!user || !ok || !user.emailVerifiedAt) {
             recordSignInFailure(email, ip);
             return null;
           }

@@ -1,6 +1,7 @@
 import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
+import { ACCOUNT_MAIL_ENDPOINTS } from './account-mail-endpoints';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
 import { surveyUpload } from '../support/multipart';
 
@@ -28,14 +29,14 @@ const everyone = (ok: number): Expect => ({ anonymous: ok, outsider: ok, viewer:
 
 /** Every endpoint of the API with the status each kind of caller must get for a valid request. */
 export const ENDPOINTS: EndpointCase[] = [
-  { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(201) },
+  { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(202) },
+  ...ACCOUNT_MAIL_ENDPOINTS,
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },
   { file: 'teams/route.ts', method: 'GET', params: () => ({}), expect: signedIn(200) },
   { file: 'teams/route.ts', method: 'POST', params: () => ({}), body: () => ({ name: 'Another team' }), expect: signedIn(201) },
   { file: 'teams/[teamId]/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
   { file: 'teams/[teamId]/route.ts', method: 'PATCH', params: (f) => ({ teamId: f.teamId }), body: () => ({ name: 'Renamed team' }), expect: onlyOwner(200) },
   { file: 'teams/[teamId]/members/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
-  { file: 'teams/[teamId]/members/route.ts', method: 'POST', params: (f) => ({ teamId: f.teamId }), body: (f) => ({ email: f.users.outsider.email, role: 'viewer' }), expect: onlyOwner(201) },
   { file: 'teams/[teamId]/members/[userId]/route.ts', method: 'PATCH', params: (f) => ({ teamId: f.teamId, userId: f.users.extra.id }), body: () => ({ role: 'reviewer' }), expect: onlyOwner(200) },
   { file: 'teams/[teamId]/members/[userId]/route.ts', method: 'DELETE', params: (f) => ({ teamId: f.teamId, userId: f.users.extra.id }), expect: onlyOwner(204) },
   { file: 'teams/[teamId]/projects/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
