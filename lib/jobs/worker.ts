@@ -1,5 +1,5 @@
 import 'server-only';
-import { run, runOnce, type Runner } from 'graphile-worker';
+import { Logger, run, runOnce, type Runner } from 'graphile-worker';
 import { env } from '../env';
 import { JOB_TASKS } from './tasks';
 
@@ -20,7 +20,9 @@ export function startJobWorker(): Promise<Runner> {
   return holder.runnelJobRunner;
 }
 
+const silent = new Logger(() => () => {});
+
 /** Runs every job that is due now, then returns (tests, and a one-off drain from a script). */
-export async function runDueJobs(): Promise<void> {
-  await runOnce({ connectionString: env().DATABASE_URL, taskList: JOB_TASKS });
+export async function runDueJobs(options: { quiet?: boolean } = {}): Promise<void> {
+  await runOnce({ connectionString: env().DATABASE_URL, taskList: JOB_TASKS, ...(options.quiet ? { logger: silent } : {}) });
 }
