@@ -184,3 +184,6 @@ export * from './ram/index';
 export * from './storage/index';
 export * from './yield/index';
 export * from './seasons/index';
+
+// Networks: one model of the system (sources, tanks, take-offs, outlets, pipes and valves), solved
+export * from './network/index';

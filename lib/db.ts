@@ -1,24 +1,9 @@
 import pg from 'pg';
 import { Sequelize } from 'sequelize';
+import { RETRYABLE_CONNECTION_ERRORS } from './db-availability';
 import { env } from './env';
 
-/**
- * Errors that mean "the connection went away", not "the query is wrong". Sequelize's default
- * retry list matches nothing PostgreSQL raises, so a restarted database would fail requests.
- */
-export const RETRYABLE_CONNECTION_ERRORS: RegExp[] = [
-  /SequelizeConnectionError/,
-  /SequelizeConnectionRefusedError/,
-  /SequelizeConnectionAcquireTimeoutError/,
-  /ECONNREFUSED/,
-  /ECONNRESET/,
-  /EPIPE/,
-  /Connection terminated/i,
-  /terminating connection/i,
-  /the database system is (starting up|shutting down)/i,
-  /Client has encountered a connection error/i,
-  /not queryable/i,
-];
+export { RETRYABLE_CONNECTION_ERRORS };
 
 function createSequelize(): Sequelize {
   return new Sequelize(env().DATABASE_URL, {
@@ -26,7 +11,8 @@ function createSequelize(): Sequelize {
     dialectModule: pg,
     logging: false,
     pool: { max: 10, min: 0, idle: 10_000, acquire: 20_000 },
-    retry: { max: 6, match: RETRYABLE_CONNECTION_ERRORS, backoffBase: 200, backoffExponent: 1.5 },
+    // About 10 s of retries in all: a database restart or a short outage is waited out, not answered with an error.
+    retry: { max: 8, match: RETRYABLE_CONNECTION_ERRORS, backoffBase: 200, backoffExponent: 1.5 },
     define: { underscored: true },
   });
 }

@@ -10,8 +10,10 @@ export const ERROR_STATUS = {
   conflict: 409,
   payload_too_large: 413,
   unsupported_media_type: 415,
+  unprocessable: 422,
   rate_limited: 429,
   internal: 500,
+  service_unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
@@ -22,15 +24,22 @@ export interface ApiErrorBody {
   error: { code: ErrorCode; message: string; fields?: FieldErrors };
 }
 
+export interface AppErrorOptions {
+  /** Sent as Retry-After (429, 503): when trying again can succeed. */
+  retryAfterSeconds?: number;
+}
+
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly fields?: FieldErrors;
+  readonly retryAfterSeconds?: number;
 
-  constructor(code: ErrorCode, message: string, fields?: FieldErrors) {
+  constructor(code: ErrorCode, message: string, fields?: FieldErrors, options: AppErrorOptions = {}) {
     super(message);
     this.name = 'AppError';
     this.code = code;
     this.fields = fields;
+    this.retryAfterSeconds = options.retryAfterSeconds;
   }
 
   get status(): number {

@@ -7,7 +7,7 @@ import type { PipeSpec } from './pipe-spec';
  *
  * Factors vs water temperature for PVC, ASTM D2241 appendix / PPFA, as listed by homesteady.com
  * "ASTM D2241 PVC pipe specifications" [R13]: 73 °F 1.00 … 140 °F 0.22 (the 140 °F value is
- * published there; the others are from memory, REFERENCES §2.1 [M]). Linear between points.
+ * published there; the others are from memory, core.md §2.1 [M]). Linear between points.
  *
  * PE uses the same table: Utah State Univ., Sprinkle & Trickle Irrigation Lectures, Lecture 21 [R13]:
  * "at about 43 °C the PVC rating drops to one-half …, almost the same for PE". ISO 13761 factors for

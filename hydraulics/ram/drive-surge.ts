@@ -6,7 +6,7 @@ import { joukowskyHeadRise } from '../surge/joukowsky';
 export type RamDriveMaterial = 'steel' | 'pvc' | 'pe' | 'custom';
 
 /**
- * Documented wave speeds used when the caller gives none (REFERENCES.md §5, Korteweg thin-wall
+ * Documented wave speeds used when the caller gives none (core.md §5, Korteweg thin-wall
  * formula, computed regression values [C]): galvanised steel Sch 40 2-in (E = 207 GPa) 1386 m/s,
  * PVC DR 21 (E = 2.76 GPa) 369 m/s, HDPE DR 11 (E = 0.8 GPa) 293 m/s. A custom pipe uses the steel
  * value, the highest and so the safe side for surge.
@@ -36,7 +36,7 @@ export interface DriveSurgeResult {
 }
 
 /**
- * Head rise from stopping the drive column at once (Joukowsky ΔH = a·ΔV/g, REFERENCES.md §5).
+ * Head rise from stopping the drive column at once (Joukowsky ΔH = a·ΔV/g, core.md §5).
  * The waste valve slams shut in far less than 2L/a, so the full rise applies: this is the head
  * the ram can build against a shut delivery line.
  */

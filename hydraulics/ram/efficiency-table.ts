@@ -8,7 +8,7 @@ export interface RamEfficiencyTable {
   note?: string;
 }
 
-/** Efficiency against lift/fall (REFERENCES.md §4.1). */
+/** Efficiency against lift/fall (core.md §4.1). */
 export const RAM_EFFICIENCY_TABLE: RamEfficiencyTable = {
   source: 'Building Trades Pocketbook (International Textbook Co., c.1905), "The Hydraulic Ram"',
   points: [

@@ -3,7 +3,9 @@ import type { z } from 'zod';
 import { currentUser } from '../auth/current';
 import type { SessionUser } from '../auth/users';
 import { AppError, type FieldErrors } from '../errors';
+import { log } from '../log';
 import { fieldErrorsOf } from '../validations/common';
+import { appErrorOf } from './respond';
 
 /** What every server action returns: data, or a message with errors per field. */
 export type ActionResult<T> = { ok: true; data: T } | { ok: false; code: string; message: string; fields?: FieldErrors };
@@ -22,8 +24,10 @@ export function userAction<S extends z.ZodType, T>(schema: S, act: (input: z.out
       return { ok: true, data: await act(parsed.data, user) };
     } catch (error) {
       if (error instanceof AppError) return { ok: false, code: error.code, message: error.message, fields: error.fields };
-      console.error('[runnel] unexpected error in a server action:', error);
-      return { ok: false, code: 'internal', message: 'Something went wrong on our side. Nothing was changed; try again.' };
+      const refusal = appErrorOf(error);
+      if (refusal.code === 'internal') log().error({ err: error }, 'unexpected error in a server action');
+      else log().warn({ err: error }, 'database unavailable during a server action');
+      return { ok: false, code: refusal.code, message: refusal.message };
     }
   };
 }

@@ -4,15 +4,57 @@ import { env } from '../env';
 import { AppError } from '../errors';
 import { fieldErrorsOf } from '../validations/common';
 
-/** Reads a JSON body with a size cap (413) and validates it (400 with field errors). */
+/**
+ * Reads a request body as a stream and stops as soon as it passes `limit` bytes, so a body sent
+ * without (or with a false) Content-Length is never buffered whole. A declared length above the
+ * limit is refused before reading.
+ */
+export async function readBodyCapped(req: Request, limit: number, tooLarge: () => AppError): Promise<Uint8Array> {
+  const declared = Number(req.headers.get('content-length') ?? '0');
+  if (declared > limit) throw tooLarge();
+  if (!req.body) return new Uint8Array(0);
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
+}
+
+// A form post from another site cannot send this type without the browser asking first.
+function isJsonContentType(type: string | null): boolean {
+  const mediaType = (type ?? '').split(';')[0]!.trim().toLowerCase();
+  return mediaType === 'application/json' || /^application\/[a-z0-9.+-]{1,60}\+json$/.test(mediaType);
+}
+
+/** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
 export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number): Promise<z.output<S>> {
   const max = maxBytes ?? env().RUNNEL_MAX_JSON_BYTES;
-  const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > max) throw new AppError('payload_too_large', `Request body is larger than ${max} bytes`);
+  const bytes = await readBodyCapped(req, max, () => new AppError('payload_too_large', `Request body is larger than ${max} bytes`));
+  let raw: string;
+  try {
+    raw = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    throw new AppError('bad_request', 'Request body is not valid UTF-8 text', { _: ['Send a JSON object in UTF-8'] });
+  }
 
-  const raw = await req.text();
-  if (Buffer.byteLength(raw, 'utf8') > max) throw new AppError('payload_too_large', `Request body is larger than ${max} bytes`);
-
+  if (raw.trim() !== '' && !isJsonContentType(req.headers.get('content-type'))) {
+    throw new AppError('unsupported_media_type', 'Send the body as JSON with Content-Type: application/json', { _: ['Send a JSON object'] });
+  }
   let data: unknown;
   try {
     data = raw.trim() === '' ? undefined : JSON.parse(raw);

@@ -1,20 +1,41 @@
 import { NextResponse } from 'next/server';
 import { HydraulicsInputError } from '../../hydraulics/errors';
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from '../db-availability';
 import { AppError, type ApiErrorBody } from '../errors';
+import { log } from '../log';
+
+/** API answers are per user and change with every write: never stored by a browser or a proxy. */
+export const API_CACHE_CONTROL = 'no-store';
+
+function withHeaders<T>(res: NextResponse<T>, retryAfterSeconds?: number): NextResponse<T> {
+  res.headers.set('Cache-Control', API_CACHE_CONTROL);
+  if (retryAfterSeconds !== undefined) res.headers.set('Retry-After', String(Math.max(1, Math.ceil(retryAfterSeconds))));
+  return res;
+}
+
+/** Turns a refusal or a failure into the API's one error shape (no logging: see errorResponse). */
+export function appErrorOf(error: unknown): AppError {
+  if (error instanceof AppError) return error;
+  if (error instanceof HydraulicsInputError) {
+    const field = error.index === undefined ? error.field : `${error.field}.${error.index}`;
+    return new AppError('bad_request', error.message, { [field]: [error.message] });
+  }
+  if (isDatabaseUnavailable(error)) {
+    return new AppError('service_unavailable', 'The database cannot be reached just now; nothing was changed. Try again in a few seconds.', undefined, {
+      retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
+    });
+  }
+  return new AppError('internal', 'Something went wrong on our side. Nothing was changed; try again.');
+}
 
 /** Any thrown value -> the API's one error shape. Unexpected errors are logged, never shown. */
 export function errorResponse(error: unknown): NextResponse<ApiErrorBody> {
-  if (error instanceof AppError) return NextResponse.json(error.toBody(), { status: error.status });
-  if (error instanceof HydraulicsInputError) {
-    const field = error.index === undefined ? error.field : `${error.field}.${error.index}`;
-    const body = new AppError('bad_request', error.message, { [field]: [error.message] }).toBody();
-    return NextResponse.json(body, { status: 400 });
-  }
-  console.error('[runnel] unexpected error in a request handler:', error);
-  const body = new AppError('internal', 'Something went wrong on our side. Nothing was changed; try again.').toBody();
-  return NextResponse.json(body, { status: 500 });
+  const appError = appErrorOf(error);
+  if (appError.code === 'internal') log().error({ err: error }, 'unexpected error in a request handler');
+  if (appError.code === 'service_unavailable' && !(error instanceof AppError)) log().warn({ err: error }, 'database unavailable during a request');
+  return withHeaders(NextResponse.json(appError.toBody(), { status: appError.status }), appError.retryAfterSeconds);
 }
 
 export function json<T>(data: T, status = 200): NextResponse<T> {
-  return NextResponse.json(data, { status });
+  return withHeaders(NextResponse.json(data, { status }));
 }

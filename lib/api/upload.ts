@@ -1,5 +1,6 @@
 import type { NextRequest } from 'next/server';
 import { AppError } from '../errors';
+import { readBodyCapped } from './body';
 
 /** Room for the form's own bytes (boundaries, headers, the options field) around the file. */
 const FORM_OVERHEAD_BYTES = 1024 * 1024;
@@ -20,31 +21,6 @@ function tooLarge(bytes: number | null, maxFileBytes: number): AppError {
   return new AppError('payload_too_large', message, { file: [message] });
 }
 
-/** Reads the body as a stream and stops as soon as it passes `limit`, so a huge upload is never buffered whole. */
-async function readCapped(req: NextRequest, limit: number, maxFileBytes: number): Promise<Uint8Array> {
-  if (!req.body) return new Uint8Array(0);
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel();
-      throw tooLarge(null, maxFileBytes);
-    }
-    chunks.push(value);
-  }
-  const out = new Uint8Array(total);
-  let at = 0;
-  for (const c of chunks) {
-    out.set(c, at);
-    at += c.byteLength;
-  }
-  return out;
-}
-
 /**
  * Reads a multipart/form-data upload with one file field. Size is checked from the declared
  * length first (413 before reading), then while streaming, then on the file itself.
@@ -58,8 +34,7 @@ export async function readFileUpload(req: NextRequest, options: { fileField: str
   }
   const limit = options.maxFileBytes + FORM_OVERHEAD_BYTES;
   const declared = Number(req.headers.get('content-length') ?? '0');
-  if (declared > limit) throw tooLarge(declared, options.maxFileBytes);
-  const body = await readCapped(req, limit, options.maxFileBytes);
+  const body = await readBodyCapped(req, limit, () => tooLarge(declared > limit ? declared : null, options.maxFileBytes));
   let form: FormData;
   try {
     form = await new Request('http://upload.local/', { method: 'POST', headers: { 'content-type': type }, body: body as BodyInit }).formData();

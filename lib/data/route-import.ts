@@ -4,6 +4,7 @@ import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
 import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
+import { log } from '../log';
 import { deleteObject, putObject } from '../storage';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
 import { parseSurveyText } from '../survey/run-import';
@@ -104,7 +105,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
     });
     return { route, warnings: survey.warnings.slice(0, 50) };
   } catch (error) {
-    await deleteObject(storageKey).catch((e) => console.error('[runnel] could not remove the stored file of a failed import', storageKey, e));
+    await deleteObject(storageKey).catch((err: unknown) => log().error({ err, storageKey }, 'could not remove the stored file of a failed import'));
     throw error;
   }
 }

@@ -8,6 +8,7 @@ import { recordOf, type PointRecord } from '../routes/edit-ops';
 import { RouteEditError } from '../routes/errors';
 import { computeRouteGeometry } from '../routes/geometry';
 import type { RouteDetail, RouteSummary } from '../routes/types';
+import { log } from '../log';
 import { deleteObject } from '../storage';
 import type { CleanupDecision, CreateRouteInput, SavePointsInput, UpdateRouteInput } from '../validations/routes';
 import { refusingPlainly } from './route-errors';
@@ -63,7 +64,7 @@ export async function deleteRoute(routeId: string): Promise<void> {
     return file?.storageKey ?? null;
   });
   // After the commit: a failed object delete leaves an orphan object, never a dangling row.
-  if (orphanKey) await deleteObject(orphanKey).catch((e) => console.error('[runnel] could not delete stored file', orphanKey, e));
+  if (orphanKey) await deleteObject(orphanKey).catch((err: unknown) => log().error({ err, storageKey: orphanKey }, 'could not delete a stored file'));
 }
 
 /** Saves an edited route whole. Raw heights are taken from the stored points, never from the client. */

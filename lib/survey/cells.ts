@@ -15,8 +15,21 @@ export interface CellPlace {
   field: string;
 }
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-const COMMA_NUMBER = /^[+-]?(\d+,?\d*|,\d+)$/;
+/**
+ * Longest cell read as a number. No survey reading needs more digits; a longer cell is refused
+ * before any pattern runs, so a hostile file cannot make the check slow.
+ */
+export const MAX_NUMBER_CELL_CHARS = 64;
+
+// Each pattern has one way to match any text (no nested or adjacent repeats over the same
+// characters), so a failing cell is rejected in one pass instead of backtracking.
+export const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+const COMMA_NUMBER = /^[+-]?(?:\d+(?:,\d*)?|,\d+)$/;
+
+/** A cell as quoted back in a message: long cells are cut so an error never echoes a whole file. */
+export function quoteCell(cell: string): string {
+  return cell.length > 40 ? `${cell.slice(0, 40)}…` : cell;
+}
 
 /**
  * Reads a number from a cell. Accepts a decimal comma when the file uses one; rejects text,
@@ -27,9 +40,12 @@ export function readNumberCell(raw: string | undefined, decimalComma: boolean, p
   if (cell === '') {
     throw new SurveyImportError('missing-value', `no ${place.field} given`, place);
   }
+  if (cell.length > MAX_NUMBER_CELL_CHARS) {
+    throw new SurveyImportError('not-a-number', `“${quoteCell(cell)}” is ${cell.length} characters long, too long to be a number (expected the ${place.field})`, place);
+  }
   const normalised = decimalComma && COMMA_NUMBER.test(cell) ? cell.replace(',', '.') : cell;
   if (!NUMBER.test(normalised)) {
-    throw new SurveyImportError('not-a-number', `“${cell}” is not a number (expected the ${place.field})`, place);
+    throw new SurveyImportError('not-a-number', `“${quoteCell(cell)}” is not a number (expected the ${place.field})`, place);
   }
   return Number(normalised);
 }
@@ -46,15 +62,18 @@ export function readOptionalNumberCell(raw: string | undefined, decimalComma: bo
 export function readTimeCell(raw: string | undefined, place: CellPlace): string | undefined {
   const cell = (raw ?? '').trim();
   if (cell === '') return undefined;
+  if (cell.length > MAX_NUMBER_CELL_CHARS) {
+    throw new SurveyImportError('bad-time', `“${quoteCell(cell)}” is too long to be a date and time`, place);
+  }
   let ms: number;
-  if (/^\d+(\.\d+)?$/.test(cell)) {
+  if (/^\d+(?:\.\d+)?$/.test(cell)) {
     const n = Number(cell);
     ms = n > 1e11 ? n : n * 1000;
   } else {
     ms = Date.parse(cell);
   }
   if (!Number.isFinite(ms)) {
-    throw new SurveyImportError('bad-time', `“${cell}” is not a date and time this importer can read (use ISO 8601, e.g. 2024-05-01T07:30:00Z)`, place);
+    throw new SurveyImportError('bad-time', `“${quoteCell(cell)}” is not a date and time this importer can read (use ISO 8601, e.g. 2024-05-01T07:30:00Z)`, place);
   }
   return new Date(ms).toISOString();
 }

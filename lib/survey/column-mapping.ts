@@ -35,9 +35,13 @@ const SYNONYMS: Record<keyof GpsColumnMapping | 'chainage', string[]> = {
   chainage: ['chainage', 'ch', 'station', 'sta', 'distance', 'dist', 'km', 'offset', 'along', 'chainagem', 'distancem'],
 };
 
+/** No column name is longer; a longer header cell is cut before the patterns below run on it. */
+const MAX_HEADER_CHARS = 120;
+
 /** “Altitude (ft)” → “altitude”; “Lat.” → “lat”; “Höhe” → “hohe”. */
 export function normaliseHeader(header: string): string {
   return header
+    .slice(0, MAX_HEADER_CHARS)
     .normalize('NFD')
     .replace(/[\u0300-\u036f]/g, '')
     .toLowerCase()
@@ -60,7 +64,7 @@ function find(headers: readonly string[], key: keyof typeof SYNONYMS, taken: Set
 /** Elevation in feet when its header says so (“ele_ft”, “Altitude (feet)”, “elev [ft]”). */
 export function guessElevationUnit(header: string | undefined): LengthUnit {
   if (!header) return 'm';
-  return /(\bft\b|feet|foot|_ft\b|\(ft\)|\[ft\])/i.test(header) ? 'ft' : 'm';
+  return /(\bft\b|feet|foot|_ft\b|\(ft\)|\[ft\])/i.test(header.slice(0, MAX_HEADER_CHARS)) ? 'ft' : 'm';
 }
 
 /**

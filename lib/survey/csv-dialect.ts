@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { MAX_NUMBER_CELL_CHARS, NUMBER } from './cells';
 import { SurveyImportError } from './errors';
 
 export type CsvDelimiter = ',' | ';' | '\t' | '|';
@@ -72,11 +73,23 @@ function scoreDelimiter(lines: string[], delimiter: CsvDelimiter): { columns: nu
   return { columns, agreement: best / lines.length };
 }
 
-const PLAIN_NUMBER = /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?\s*$/;
-const COMMA_DECIMAL = /^\s*[+-]?\d+,\d+\s*$/;
+// Linear patterns (one way to match any text) on trimmed cells no longer than a number can be:
+// see lib/survey/cells.ts.
+const COMMA_DECIMAL = /^[+-]?\d+,\d+$/;
+
+function numericCandidate(cell: string): string | undefined {
+  const trimmed = cell.trim();
+  return trimmed.length > 0 && trimmed.length <= MAX_NUMBER_CELL_CHARS ? trimmed : undefined;
+}
+
+function isCommaDecimal(cell: string): boolean {
+  const c = numericCandidate(cell);
+  return c !== undefined && COMMA_DECIMAL.test(c);
+}
 
 function looksNumeric(cell: string, decimalComma: boolean): boolean {
-  return PLAIN_NUMBER.test(cell) || (decimalComma && COMMA_DECIMAL.test(cell));
+  const c = numericCandidate(cell);
+  return c !== undefined && (NUMBER.test(c) || (decimalComma && COMMA_DECIMAL.test(c)));
 }
 
 /**
@@ -104,7 +117,7 @@ export function detectCsvDialect(rawText: string): CsvDialect {
   }
   const rows = lines.map((l) => splitRow(l, chosen.delimiter));
   const dataCells = rows.slice(1).flat();
-  const decimalComma = chosen.delimiter !== ',' && dataCells.some((c) => COMMA_DECIMAL.test(c));
+  const decimalComma = chosen.delimiter !== ',' && dataCells.some(isCommaDecimal);
   const first = rows[0];
   const second = rows[1];
   const hasHeader = first.some(

@@ -29,6 +29,7 @@ const everyone = (ok: number): Expect => ({ anonymous: ok, outsider: ok, viewer:
 
 /** Every endpoint of the API with the status each kind of caller must get for a valid request. */
 export const ENDPOINTS: EndpointCase[] = [
+  { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(202) },
   ...ACCOUNT_MAIL_ENDPOINTS,
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },

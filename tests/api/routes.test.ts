@@ -46,7 +46,7 @@ describe('importing survey files', () => {
     expect(detail.route.slopeLengthM).toBeGreaterThan(detail.route.lengthM);
     expect(detail.route.features.map((x: any) => x.label)).toEqual(['Alder Spring box', 'Gully crossing']);
     expect(detail.route.importNotes.map((n: any) => n.code)).toContain('gpx-segments-joined');
-    // Vertical ≤ 15 m (95 %): U.S. DoD, GPS SPS Performance Standard, 2020 ed. §3.4 (REFERENCES.md §6.4 [R28]).
+    // Vertical ≤ 15 m (95 %): U.S. DoD, GPS SPS Performance Standard, 2020 ed. §3.4 (core.md §6.4 [R28]).
     expect(detail.gpsWarning).toMatchObject({ severity: 'danger', verticalErrorM: 15 });
 
     const file = await models().Attachment.findOne({ where: { fileName: 'walked-route.gpx', projectId: f.projectId } });

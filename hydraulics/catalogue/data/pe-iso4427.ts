@@ -2,7 +2,7 @@
  * Metric polyethylene pressure pipe, ISO 4427-2 / EN 12201-2.
  *
  * Minimum wall thickness e (mm) by outside diameter and SDR, as printed in the standard's table and
- * reproduced in the VESBO PE100 brochure p.3 [R12] (REFERENCES §2.4). Stored, not recomputed: the
+ * reproduced in the VESBO PE100 brochure p.3 [R12] (core.md §2.4). Stored, not recomputed: the
  * standard's walls come from the ISO 4065 table and its rounding rules, so OD/SDR rounded up gives
  * different numbers (110 mm SDR 17: 6.6 mm printed, 6.5 mm computed). `null` = not listed.
  * The walls depend only on OD and SDR (pipe series S), so PE80 uses the same table (from memory).

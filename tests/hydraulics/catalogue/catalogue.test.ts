@@ -53,7 +53,7 @@ describe('ASTM D2241 PVC dimensions', () => {
     expect(inches(findPipe('pvc-d2241-sdr13.5-0.5in')!.outsideDiameterM)).toBeCloseTo(0.84, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-2in')!.outsideDiameterM)).toBeCloseTo(2.375, 10);
   });
-  it('minimum walls = OD/SDR with a 0.060 in floor (REFERENCES §2.2 [C], regression)', () => {
+  it('minimum walls = OD/SDR with a 0.060 in floor (core.md §2.2 [C], regression)', () => {
     expect(inches(findPipe('pvc-d2241-sdr21-3/4in'.replace('3/4', '0.75'))!.wallM)).toBeCloseTo(0.06, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-1in')!.wallM)).toBeCloseTo(0.063, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-2in')!.wallM)).toBeCloseTo(0.113, 10);
@@ -90,7 +90,7 @@ describe('ASTM D2239 PE (controlled ID)', () => {
       expect(inches(findPipe(`pe-d2239-sidr${sidr}-2in`)!.insideDiameterM)).toBeCloseTo(2.067, 10);
     }
   });
-  it('1 in SIDR 15: wall 0.070 in, OD 1.189 in (REFERENCES §2.3 [C], regression); rated 100 psi (Qualpol [R13])', () => {
+  it('1 in SIDR 15: wall 0.070 in, OD 1.189 in (core.md §2.3 [C], regression); rated 100 psi (Qualpol [R13])', () => {
     const pipe = findPipe('pe-d2239-sidr15-1in')!;
     expect(inches(pipe.wallM)).toBeCloseTo(0.07, 10);
     expect(inches(pipe.outsideDiameterM)).toBeCloseTo(1.189, 10);

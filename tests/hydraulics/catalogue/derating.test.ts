@@ -16,7 +16,7 @@ describe('plastic pipe temperature derating', () => {
   it('about 43 °C → one-half (Utah State Univ., Sprinkle & Trickle Irrigation Lectures, Lecture 21 [R13]); "about" → ±0.03', () => {
     expect(Math.abs(plasticDeratingFactor({ temperatureC: 43 }) - 0.5)).toBeLessThan(0.03);
   });
-  it('interpolates linearly between table points (100 °F 0.62, 110 °F 0.50: from memory, REFERENCES §2.1)', () => {
+  it('interpolates linearly between table points (100 °F 0.62, 110 °F 0.50: from memory, core.md §2.1)', () => {
     expect(plasticDeratingFactor({ temperatureC: tableF(105) })).toBeCloseTo(0.56, 10);
   });
   it('never increases with temperature', () => {

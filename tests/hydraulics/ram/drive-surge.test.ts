@@ -11,7 +11,7 @@ describe('driveColumnSurge (Joukowsky a·v/g)', () => {
     expect(surge.surgeHeadM).toBeCloseTo(153, 0);
   });
 
-  it('REFERENCES.md §5 regression: a = 300 m/s, ΔV = 1 m/s -> 30.6 m', () => {
+  it('core.md §5 regression: a = 300 m/s, ΔV = 1 m/s -> 30.6 m', () => {
     const surge = driveColumnSurge({ driveFlowM3s: areaOf(0.04), drivePipeInsideDiameterM: 0.04, waveSpeedMs: 300 });
     expect(surge.surgeHeadM).toBeCloseTo(30.6, 1);
   });

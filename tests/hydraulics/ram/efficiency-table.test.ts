@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { RAM_EFFICIENCY_TABLE, ramEfficiencyForRatio } from '../../../hydraulics/ram/efficiency-table';
 
-// Building Trades Pocketbook (International Textbook Co., c.1905), "The Hydraulic Ram" (REFERENCES.md §4.1).
+// Building Trades Pocketbook (International Textbook Co., c.1905), "The Hydraulic Ram" (core.md §4.1).
 describe('ram efficiency table', () => {
   it.each([
     [4, 0.72], [6, 0.61], [8, 0.52], [10, 0.44], [12, 0.37], [14, 0.31],

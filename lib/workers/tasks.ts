@@ -1,0 +1,37 @@
+import { analyzeLine } from '../../hydraulics/index';
+import type { LineInput } from '../../hydraulics/index';
+import { parseSurveyText } from '../survey/run-import';
+import { sniffSurveyFile } from '../survey/sniff';
+import type { SurveyImportOptions } from '../validations/survey-import';
+
+/**
+ * The CPU-heavy jobs that run in the worker pool (lib/workers/pool.ts), by name. Each takes and
+ * returns plain structured-cloneable data. To add one: write a pure function here, add it to
+ * TASKS; callers use `runInWorker('<name>', input)`. Keep imports free of `server-only` and of
+ * models or the database: a worker thread has neither.
+ */
+export const TASKS = {
+  /** Sniffs and parses an uploaded survey file with the chosen import options. */
+  'survey.parse': (input: { bytes: Uint8Array; fileName: string; options: SurveyImportOptions }) => {
+    const { text } = sniffSurveyFile(input.bytes, { fileName: input.fileName });
+    return parseSurveyText(text, input.options);
+  },
+  /** Analyses a whole line (the core's analyzeLine). */
+  'line.analyse': (input: LineInput) => analyzeLine(input),
+  /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
+  'test.spin': (input: { ms: number; answer: number }) => {
+    const end = Date.now() + input.ms;
+    while (Date.now() < end) {
+      // busy on purpose: a stand-in for a slow parse
+    }
+    return input.answer;
+  },
+  /** For the pool's own tests: throws the error named. */
+  'test.fail': (input: { message: string }) => {
+    throw new Error(input.message);
+  },
+} as const;
+
+export type TaskName = keyof typeof TASKS;
+export type TaskInput<K extends TaskName> = Parameters<(typeof TASKS)[K]>[0];
+export type TaskOutput<K extends TaskName> = ReturnType<(typeof TASKS)[K]>;
