@@ -123,6 +123,7 @@ const EXPORTED_NAMES = [
   'kortewegWaveSpeedMs',
   'lengthFromM',
   'lengthToM',
+  'locateOnRoute',
   'massCurveStorage',
   'meanVelocityMs',
   'measuredFlowM3s',
