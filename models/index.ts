@@ -6,7 +6,7 @@ import { Membership } from './membership';
 import { Project } from './project';
 import { Route } from './route';
 import { RoutePoint } from './route-point';
-import { AccountToken, initialiseTeamMailModels, Invitation, MailOutbox, NotificationPreference } from './team-mail';
+import { AccountToken, initialiseTeamMailModels, Invitation, MailOutbox, NotificationPreference, SitePhoto } from './team-mail';
 import { Team } from './team';
 import { User } from './user';
 
@@ -46,11 +46,11 @@ export function models() {
   return {
     User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
     WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
-    AccountToken, Invitation, MailOutbox, NotificationPreference,
+    AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto,
     sequelize: db(),
   };
 }
 
 export { Attachment, Line, Membership, Project, Route, RoutePoint, Team, User };
 export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };
-export { AccountToken, Invitation, MailOutbox, NotificationPreference };
+export { AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto };

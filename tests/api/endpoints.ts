@@ -3,6 +3,7 @@ import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
 import { ACCOUNT_MAIL_ENDPOINTS } from './account-mail-endpoints';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
+import { PHOTO_ENDPOINTS } from './photo-endpoints';
 import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -56,6 +57,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
   ...LIFT_ENDPOINTS,
+  ...PHOTO_ENDPOINTS,
   // Survey routes: every member reads; surveyors, designers and owners import and edit.
   { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
   { file: 'projects/[projectId]/routes/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Sketch of the lower field' }), expect: surveyEditors(201) },
