@@ -57,10 +57,10 @@ describe('site photos', () => {
 
   it('the image served carries no metadata, though position and time are kept in Runnel', async () => {
     const res = await upload(await jpegWithPosition(54.006, -2.9), 'crossing.jpg');
-    const served = await call(image, { method: 'GET', path: `/api/photos/x/image`, params: { photoId: res.json.photo.id }, userId: f.users.viewer.id });
+    const served = await call(image, { method: 'GET', path: `/api/photos/x/image`, params: { photoId: res.json.photo.id }, userId: f.users.reviewer.id });
     expect(served.status).toBe(200);
     expect(served.headers.get('content-type')).toBe('image/jpeg');
-    const thumb = await call(image, { method: 'GET', path: '/api/photos/x/image?size=thumbnail', params: { photoId: res.json.photo.id }, userId: f.users.viewer.id });
+    const thumb = await call(image, { method: 'GET', path: '/api/photos/x/image?size=thumbnail', params: { photoId: res.json.photo.id }, userId: f.users.reviewer.id });
     expect(thumb.status).toBe(200);
     expect(thumb.headers.get('content-type')).toBe('image/jpeg');
     const stored = await models().SitePhoto.findByPk(res.json.photo.id);

@@ -24,7 +24,7 @@ export default async function TeamPage() {
   const manage = can(role, 'team.manage');
 
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id) });
+  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id, { userId: user.id, role }) });
   if (manage) await queryClient.prefetchQuery({ queryKey: invitationKeys.team(team.id), queryFn: () => listOpenInvitations(team.id) });
 
   return (

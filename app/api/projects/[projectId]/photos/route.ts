@@ -9,7 +9,7 @@ import { ProjectParams } from '@/lib/validations/projects';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params, req }) => {
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params, req }) => {
   const routeId = req.nextUrl.searchParams.get('routeId') ?? undefined;
   return { photos: await listPhotos(params.projectId, routeId && /^[0-9a-f-]{36}$/i.test(routeId) ? routeId : undefined) };
 });

@@ -5,6 +5,6 @@ import { TeamParams } from '@/lib/validations/teams';
 const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
 
 // Members join only by accepting an invitation (../invitations), never by being added directly.
-export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId }) => ({
-  members: await listMembers(teamId),
+export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId, user, role }) => ({
+  members: await listMembers(teamId, { userId: user.id, role }),
 }));
