@@ -129,6 +129,7 @@ const EXPORTED_NAMES = [
   'kortewegWaveSpeedMs',
   'lengthFromM',
   'lengthToM',
+  'locateOnRoute',
   'massCurveStorage',
   'meanVelocityMs',
   'measuredFlowM3s',
