@@ -125,6 +125,7 @@ const EXPORTED_NAMES = [
   'kortewegWaveSpeedMs',
   'lengthFromM',
   'lengthToM',
+  'lineFlowSchedule',
   'massCurveStorage',
   'meanVelocityMs',
   'measuredFlowM3s',
