@@ -14,6 +14,11 @@ export interface Benchmark {
   runs?: number;
   /** Untimed warm-up runs. @default 3 */
   warmUps?: number;
+  /**
+   * For a benchmark that measures itself (a load run): returns its figures, printed after the name
+   * in order (`median_ms` first); `run` and `floor` are then not timed.
+   */
+  measure?: () => Promise<Record<string, number>>;
   /** Cleans up what the benchmark made (database rows, servers), after the last run. */
   teardown?: () => Promise<void> | void;
 }
@@ -43,6 +48,14 @@ export async function medianMs(fn: () => unknown, runs: number, warmUps: number)
 
 /** Runs one benchmark and returns its `BENCH` line. */
 export async function runBenchmark(benchmark: Benchmark): Promise<string> {
+  if (benchmark.measure) {
+    try {
+      const figures = await benchmark.measure();
+      return `BENCH ${benchmark.name} ${Object.entries(figures).map(([k, v]) => `${k}=${Number.isInteger(v) ? v : v.toFixed(3)}`).join(' ')}`;
+    } finally {
+      await benchmark.teardown?.();
+    }
+  }
   const runs = benchmark.runs ?? 15;
   const warmUps = benchmark.warmUps ?? 3;
   try {

@@ -31,6 +31,7 @@ type Context = { n?: number; note?: string };
  */
 function mixedRequests(fixture: LoadFixture, writeEvery: number, ackedWrites: string[]): autocannon.Request[] {
   const read: autocannon.Request = { method: 'GET', path: `/api/teams/${fixture.teamId}/projects` };
+  if (writeEvery <= 0) return [read];
   let serial = 0;
   const write: autocannon.Request = {
     method: 'POST',
@@ -94,7 +95,10 @@ function summarise(collected: Collected, results: autocannon.Result[], durationS
 
 const headers = (fixture: LoadFixture) => ({ cookie: fixture.cookie, 'content-type': 'application/json', accept: 'application/json' });
 
-/** `connections` closed-loop connections (each sends its next request when the last is answered) for `durationS`. */
+/**
+ * `connections` closed-loop connections (each sends its next request when the last is answered) for
+ * `durationS`; every `writeEvery`-th request is a write (0: reads only). @default writeEvery 4
+ */
 export async function closedLoop(baseUrl: string, fixture: LoadFixture, options: { connections: number; durationS: number; writeEvery?: number }): Promise<LoadResult> {
   const ackedWrites: string[] = [];
   const collected: Collected = { latencies: [], non2xx: {}, errors: 0, timeouts: 0 };

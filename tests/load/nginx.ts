@@ -9,10 +9,12 @@ export interface LoadBalancer {
 }
 
 /**
- * The load balancer in front of the instances: nginx, round robin, no keep-alive to the upstreams
- * (each proxied request opens its own connection, so a draining instance never has an idle
- * connection closed under a request). A refused connection is retried on the next instance
- * (`proxy_next_upstream error`, which nginx allows for POST too, since nothing was sent).
+ * The load balancer in front of the instances: nginx, round robin, HTTP/1.1 keep-alive to the
+ * instances. Keep-alive matters for draining: on SIGTERM an instance (Next.js, then Node's
+ * `server.close()`) stops listening, closes its idle connections and answers the requests in
+ * flight; over HTTP/1.0 (nginx's default to upstreams) Node counts a request in flight as idle and
+ * resets it. A refused connection is retried on the next instance (`proxy_next_upstream error`,
+ * which nginx allows for POST too, since nothing was sent).
  */
 export function nginxConfig(dir: string, listenPort: number, upstreamPorts: number[]): string {
   return `worker_processes 1;
@@ -29,12 +31,17 @@ http {
   scgi_temp_path ${dir}/scgi;
   upstream runnel {
 ${upstreamPorts.map((p) => `    server 127.0.0.1:${p} max_fails=1 fail_timeout=2s;`).join('\n')}
+    keepalive 64;
   }
   server {
     listen 127.0.0.1:${listenPort};
+    # A client connection is never closed under a waiting request by a per-connection limit.
+    keepalive_requests 1000000;
     client_max_body_size 50m;
     location / {
       proxy_pass http://runnel;
+      proxy_http_version 1.1;
+      proxy_set_header Connection "";
       proxy_next_upstream error timeout;
       proxy_next_upstream_tries ${upstreamPorts.length + 1};
       proxy_connect_timeout 2s;

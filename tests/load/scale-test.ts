@@ -1,6 +1,7 @@
 // `npm run test:scale` (scripts/scale.sh sets up the database and the build first): two stateless
 // instances behind nginx share PostgreSQL; 50 connections of mixed reads and writes for 30 s; one
-// instance is drained and stopped at 10 s and started again at 20 s. Passes with 0 errors (no
+// instance is drained and stopped at 10 s (SIGTERM: it stops listening, so nginx sends new
+// requests to the other, and answers the ones in flight; see nginx.ts) and started again at 20 s. Passes with 0 errors (no
 // refused, reset or timed-out request, no answer outside 2xx) and 0 lost writes (every write
 // answered 201 is in the database).
 import os from 'node:os';
@@ -49,7 +50,7 @@ async function main(): Promise<number> {
     const load = closedLoop(lb.url, fixture, { connections: CONNECTIONS, durationS: DURATION_S });
     const events = (async () => {
       await sleepUntil(t0, DURATION_S / 3);
-      say(`t=${((performance.now() - t0) / 1000).toFixed(1)} s: draining and stopping instance A`);
+      say(`t=${((performance.now() - t0) / 1000).toFixed(1)} s: draining and stopping instance A (SIGTERM)`);
       await a!.drainAndStop();
       say(`t=${((performance.now() - t0) / 1000).toFixed(1)} s: instance A stopped`);
       await sleepUntil(t0, (2 * DURATION_S) / 3);
