@@ -18,7 +18,7 @@ const PIPE = 'pe100-iso4427-sdr11-32mm';
 
 async function waitForRun(f: Fixture, run: NetworkJobView): Promise<NetworkJobView> {
   for (let i = 0; i < 200; i++) {
-    const res = await call(RunOne.GET, { method: 'GET', path: '/run', params: { projectId: f.projectId, jobId: run.id }, userId: f.users.viewer.id });
+    const res = await call(RunOne.GET, { method: 'GET', path: '/run', params: { projectId: f.projectId, jobId: run.id }, userId: f.users.reviewer.id });
     const polled = res.json.run as NetworkJobView;
     if (polled.status === 'done' || polled.status === 'failed') return polled;
     await new Promise((resolve) => setTimeout(resolve, 100));
@@ -68,7 +68,7 @@ describe('network API', () => {
     await addPipe('branch A', 'tee', 'tap A', 150);
     await addPipe('branch B', 'tee', 'tap B', 200);
 
-    const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: f.projectId }, body: { kind: 'solve' }, userId: f.users.viewer.id });
+    const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: f.projectId }, body: { kind: 'solve' }, userId: f.users.reviewer.id });
     expect(started.status).toBe(202);
     expect(started.json.run.status).toBe('running');
     const run = await waitForRun(f, started.json.run);
@@ -88,7 +88,7 @@ describe('network API', () => {
     expect(Math.abs(120 - tee.headM! - loss)).toBeLessThan(0.01 * loss);
     expect(tee.pressureHeadM!).toBeCloseTo(tee.headM! - 105, 9);
 
-    const view = await call(Network.GET, { method: 'GET', path: '/network', params: { projectId: f.projectId }, userId: f.users.viewer.id });
+    const view = await call(Network.GET, { method: 'GET', path: '/network', params: { projectId: f.projectId }, userId: f.users.reviewer.id });
     expect((view.json.network as NetworkView).runs.solve?.id).toBe(run.id);
   });
 
