@@ -97,7 +97,7 @@ describe('the static pressure arriving at a break-pressure tank counts (review d
 });
 
 describe('the practical siphon limit scales with the site\'s atmospheric head (review defect, issue 13)', () => {
-  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (REFERENCES §1.6).
+  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (docs/references/core.md §1.6).
   const atSite = (siteAltitudeM: number) =>
     analyzeLine({
       stations: [[0, 100], [100, 104], [200, 90]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
