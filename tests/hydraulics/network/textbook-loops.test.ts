@@ -2,19 +2,19 @@ import { describe, expect, it } from 'vitest';
 import { solveNetwork, waterKinematicViscosityM2s, type NetworkInput, type NetworkLink, type NetworkSolution } from '../../../hydraulics/index';
 
 /**
- * Two looped networks from the example decks of Jeppson's pipe-network manual [NET-JE74]
+ * Three looped networks from the example decks of Jeppson's pipe-network manual [NET-JE74]
  * (docs/references/network.md). The decks are in US units; they are converted here with the exact
- * definitions of the foot and the inch. Both decks fix every inflow and outflow, so the flows
- * depend only on the pipes' relative resistances (any constant in the loss law cancels around a
- * loop): a pure test of the loop balance the solver reaches.
+ * definitions of the foot, the inch and the US gallon. Every deck fixes all inflows and outflows,
+ * so the flows depend only on the pipes' relative resistances (any constant in the loss law
+ * cancels around a loop): a test of the loop balance the solver reaches.
  *
  * What is compared, and why the tolerances: the reference numbers are an independent program's
  * output on the same decks, printed to 5 significant figures ([NET-JE74] says which, and that the
  * manual's own printed tables were not read). A flow agrees when it is within 1e-4 (example 1,
  * converged to a loop deviation of 3e-7 ft) or 2e-4 (example 2, a Hardy Cross run stopped at
  * 1e-4 cfs) of the printed value, relative: half a unit of the 5th figure is at most 5e-5, so the
- * margins cover rounding and the stop rule and nothing more. Published hand solutions would earn
- * 1-3 %; these do not need it.
+ * margins cover rounding and the stop rule and little more. Example 3 is looser, for the reasons
+ * given beside it. Published hand solutions would earn 1-3 %; these do not need it.
  */
 
 const FOOT_M = 0.3048; // exact, international foot
@@ -190,5 +190,74 @@ describe('solveNetwork: Jeppson manual, chapter 7 deck (Darcy-Weisbach, Hardy Cr
     });
     const worst = Math.max(...Object.entries(EXAMPLE_2_FLOWS_CFS).map(([id, flowCfs]) => relativeError(wrong.flowsM3s[id] / CFS_M3S, flowCfs)));
     expect(worst).toBeGreaterThan(2e-4);
+  });
+});
+
+// Example 3 [NET-JE74], chapter 5 deck: Darcy-Weisbach with Colebrook, roughness 0.0102 in,
+// ν = 1.217e-5 ft²/s; 2000 gpm in at J1 and at J6, out 1500 at J3, 1000 at J4 and 1500 at J5.
+const US_GALLON_M3 = 0.003785411784; // exact
+const GPM_M3S = US_GALLON_M3 / 60;
+const EXAMPLE_3_PIPES: readonly (readonly [string, string, string, number, number])[] = [
+  ['1', 'J1', 'J2', 8, 1106],
+  ['2', 'J3', 'J2', 12, 751],
+  ['3', 'J4', 'J3', 10, 1000],
+  ['4', 'J1', 'J4', 12, 500],
+  ['5', 'J2', 'J5', 10, 1200],
+  ['6', 'J6', 'J5', 6, 600],
+  ['7', 'J6', 'J3', 8, 800],
+];
+const EXAMPLE_3_FLOWS_GPM: Record<string, number> = { '1': 463.45, '2': 294.2, '3': 536.55, '4': 1536.5, '5': 757.65, '6': 742.35, '7': 1257.7 };
+const EXAMPLE_3_LOSSES_FT: Record<string, number> = { '1': 5.0945, '2': 0.18879, '3': 1.9568, '4': 2.9497, '5': 4.565, '6': 30.637, '7': 25.885 };
+
+function example3(): NetworkInput {
+  return {
+    nodes: [
+      { id: 'J1', kind: 'source', elevationM: 0, waterLevelM: 100 },
+      { id: 'J2', kind: 'junction', elevationM: 0 },
+      { id: 'J3', kind: 'junction', elevationM: 0, demandM3s: 1500 * GPM_M3S },
+      { id: 'J4', kind: 'junction', elevationM: 0, demandM3s: 1000 * GPM_M3S },
+      { id: 'J5', kind: 'junction', elevationM: 0, demandM3s: 1500 * GPM_M3S },
+      { id: 'J6', kind: 'ram-outlet', elevationM: 0, inflowM3s: 2000 * GPM_M3S },
+    ],
+    links: EXAMPLE_3_PIPES.map(([id, from, to, diameterIn, lengthFt]): NetworkLink => ({
+      id,
+      from,
+      to,
+      lengthM: lengthFt * FOOT_M,
+      pipe: { id: `p${id}`, insideDiameterM: diameterIn * INCH_M, roughnessM: 0.0102 * INCH_M },
+    })),
+    settings: { frictionMethod: 'darcy-weisbach', waterTemperatureC: DECK_TEMPERATURE_C },
+  };
+}
+
+describe('solveNetwork: Jeppson manual, chapter 5 deck (Darcy-Weisbach, six junctions, two inflows) [NET-JE74]', () => {
+  const solution = solveNetwork(example3());
+
+  it('converges and keeps continuity', () => {
+    expect(solution.converged).toBe(true);
+    expect(solution.maxContinuityErrorM3s).toBeLessThan(1e-9);
+  });
+
+  it('reproduces the printed flows of all seven pipes to 1e-3 relative', () => {
+    // Jeppson [NET-JE74] chapter 5 deck. That run stopped when its last two iterates still
+    // differed by up to 2.4e-4 relative (pipe 2), and its losses differ from this core's (next
+    // test), so 1e-3: the flows here agree to 6e-4 or better.
+    for (const [id, flowGpm] of Object.entries(EXAMPLE_3_FLOWS_GPM)) {
+      expect(relativeError(solution.flowsM3s[id] / GPM_M3S, flowGpm), `pipe ${id}`).toBeLessThan(1e-3);
+    }
+  });
+
+  it('reproduces the printed head losses to 3 % relative', () => {
+    // Jeppson [NET-JE74] chapter 5 deck. The printed losses run 0.5-2.6 % above this core's
+    // Colebrook losses at nearly the same flows; the cause was not traced (see the reference entry).
+    for (const [id, lossFt] of Object.entries(EXAMPLE_3_LOSSES_FT)) {
+      expect(relativeError(solution.headLossesM[id] / FOOT_M, lossFt), `pipe ${id}`).toBeLessThan(0.03);
+    }
+  });
+
+  it('closes the head around both loops', () => {
+    // Loops as the deck lists them: (1, -2, -3, -4) and (5, -6, 7, 2).
+    expect(Math.abs(loopHeadSumM(solution, [['1', 1], ['2', -1], ['3', -1], ['4', -1]]))).toBeLessThan(1e-6);
+    expect(Math.abs(loopHeadSumM(solution, [['5', 1], ['6', -1], ['7', 1], ['2', 1]]))).toBeLessThan(1e-6);
   });
 });
