@@ -129,6 +129,7 @@ const EXPORTED_NAMES = [
   'kortewegWaveSpeedMs',
   'lengthFromM',
   'lengthToM',
+  'lineFlowSchedule',
   'locateOnRoute',
   'massCurveStorage',
   'meanVelocityMs',
