@@ -55,7 +55,7 @@ test('a designer submits, a reviewer pins a comment and sends it back, the desig
   const thread = reviewer.page.getByTestId('comment-thread').filter({ visible: true }).filter({ hasText: 'over its rating in the sag' });
   await expect(thread).toBeVisible();
   await expect(thread).toContainText('Mentions: Tobias Wren');
-  await expect(reviewer.page.locator('[data-layer="comment-pins"] [data-comment-id]')).toHaveCount(1);
+  await expect(reviewer.page.locator('[data-layer="comment-pins"] [data-comment-id]').filter({ visible: true })).toHaveCount(1);
   await reviewer.page.screenshot({ path: 'test-results/review-reviewer-pin.png', fullPage: true });
   await reviewer.page.getByRole('button', { name: 'Request changes' }).click();
   await expect(reviewer.page.getByTestId('revision-status').filter({ visible: true })).toHaveAttribute('data-status', 'changes-requested');
@@ -81,7 +81,7 @@ test('a designer submits, a reviewer pins a comment and sends it back, the desig
   await designer.page.goto(REVIEWS);
   const firstNumber = first.split('/').pop()!;
   const secondNumber = second.split('/').pop()!;
-  for (const id of [firstNumber, secondNumber]) await designer.page.locator(`[data-testid="revision-row"]:has(a[href$="${id}"]) input[type="checkbox"]`).check();
+  for (const id of [firstNumber, secondNumber]) await designer.page.locator(`[data-testid="revision-row"]:has(a[href$="${id}"]) input[type="checkbox"]`).filter({ visible: true }).check();
   await designer.page.getByRole('link', { name: 'Compare the two picked' }).click();
   await expect(designer.page.getByTestId('compare-table').filter({ visible: true })).toBeVisible();
   await expect(designer.page.locator('[data-layer="earlier-grade"]').first()).toBeAttached();
