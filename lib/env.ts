@@ -17,7 +17,12 @@ const EnvSchema = z.object({
   /** Failed sign-ins allowed per e-mail, and per IP, within the window below. */
   RUNNEL_SIGNIN_MAX_FAILURES_PER_EMAIL: z.coerce.number().int().positive().default(5),
   RUNNEL_SIGNIN_MAX_FAILURES_PER_IP: z.coerce.number().int().positive().default(30),
-  RUNNEL_SIGNIN_WINDOW_SECONDS: z.coerce.number().int().positive().default(900),
+  /** Sign-in attempts allowed per e-mail from a device that has signed in to that account before. */
+  RUNNEL_SIGNIN_MAX_ATTEMPTS_PER_KNOWN_DEVICE: z.coerce.number().int().positive().default(10),
+  /** Window for the counts above; also the cool-down of a locked account. */
+  RUNNEL_SIGNIN_WINDOW_SECONDS: z.coerce.number().int().positive().default(300),
+  /** Proxies (load balancers) in front of the app that append to X-Forwarded-For; the client address is read behind them. */
+  RUNNEL_TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
   /** Object storage (S3 API). Locally the fake in scripts/fakes/s3.mjs; `npm test` runs its own on 9402. */
   RUNNEL_S3_ENDPOINT: z.url().default('http://127.0.0.1:9401'),
   RUNNEL_S3_REGION: z.string().min(1).default('us-east-1'),

@@ -33,6 +33,8 @@ export interface CompiledNetwork {
   /** Minor-loss coefficient m of m·Q|Q|, m per (m³/s)². */
   minor: Float64Array;
   diameterM: Float64Array;
+  /** Length of each link, m (0 for the hidden float valves). */
+  lengthM: Float64Array;
   /** Flow below which the link's loss is linear (see `LINEAR_BELOW_VELOCITY_MS`), m³/s. */
   linearBelowM3s: Float64Array;
   pipes: NetworkPipe[];
@@ -88,6 +90,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
   const to = new Int32Array(linkCount);
   const minor = new Float64Array(linkCount);
   const diameterM = new Float64Array(linkCount);
+  const lengthM = new Float64Array(linkCount);
   const setHeadM = new Float64Array(linkCount).fill(Number.NaN);
   const shutByFullTank = new Uint8Array(linkCount);
   const laws: LinkLaw[] = [];
@@ -102,6 +105,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     laws.push(lawFor(pipe, link.lengthM, settings, viscosity));
     minor[index] = minorLossCoefficient(link.minorK ?? 0, pipe.insideDiameterM);
     diameterM[index] = pipe.insideDiameterM;
+    lengthM[index] = link.lengthM;
     pipes.push(pipe);
     linkIds.push(link.id);
     const linkStatus = link.status ?? 'open';
@@ -139,6 +143,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     laws,
     minor,
     diameterM,
+    lengthM,
     linearBelowM3s: Float64Array.from(diameterM, (d) => LINEAR_BELOW_VELOCITY_MS * pipeAreaM2(d)),
     pipes,
     status,

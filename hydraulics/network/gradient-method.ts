@@ -42,11 +42,35 @@ export interface GradientResult {
   lastRelativeChange: number;
 }
 
+/** Working arrays of one step. */
+interface StepArrays {
+  flow: Float64Array;
+  head: Float64Array;
+  states: Uint8Array;
+  p: Float64Array;
+  y: Float64Array;
+  diagonal: Float64Array;
+  edgeValue: Float64Array;
+  rhs: Float64Array;
+}
+
+/** The symmetric positive definite system of one step, for benchmarks and checks. */
+export interface HeadSystem {
+  size: number;
+  diagonal: Float64Array;
+  edgeA: Int32Array;
+  edgeB: Int32Array;
+  edgeValue: Float64Array;
+  rhs: Float64Array;
+}
+
 /** Reusable solver state for one network structure (a day run solves the same structure 24 times). */
 export class GradientSolver {
   private readonly unknownOf: Int32Array;
   private readonly cholesky: SparseCholesky;
   private readonly edgeOfLink: Int32Array;
+  private readonly edgeA: Int32Array;
+  private readonly edgeB: Int32Array;
   private readonly incidentStart: Int32Array;
   private readonly incidentLink: Int32Array;
 
@@ -72,7 +96,9 @@ export class GradientSolver {
         edgeB.push(b);
       }
     }
-    this.cholesky = new SparseCholesky(unknowns, Int32Array.from(edgeA), Int32Array.from(edgeB));
+    this.edgeA = Int32Array.from(edgeA);
+    this.edgeB = Int32Array.from(edgeB);
+    this.cholesky = new SparseCholesky(unknowns, this.edgeA, this.edgeB);
     const count = new Int32Array(nodeCount + 1);
     for (let k = 0; k < linkCount; k++) {
       count[from[k] + 1]++;
@@ -119,7 +145,7 @@ export class GradientSolver {
    */
   solve(startFlows?: Float64Array, startStates?: Uint8Array): GradientResult {
     const { net } = this;
-    const { linkCount, nodeCount, from, to, fixedHeadM, netDemandM3s, laws, minor, setHeadM, settings, linearBelowM3s } = net;
+    const { linkCount, nodeCount, from, to, fixedHeadM, settings } = net;
     const unknownOf = this.unknownOf;
     const states = startStates ? startStates.slice() : this.initialStates();
     const flow = startFlows ? startFlows.slice() : this.initialFlows();
@@ -129,7 +155,7 @@ export class GradientSolver {
     const diagonal = new Float64Array(unknownCount);
     const rhs = new Float64Array(unknownCount);
     const solved = new Float64Array(unknownCount);
-    const edgeValue = new Float64Array(Math.max(1, this.edgeOfLink.reduce((n, e) => (e >= 0 ? n + 1 : n), 0)));
+    const edgeValue = new Float64Array(this.edgeA.length);
     const p = new Float64Array(linkCount);
     const y = new Float64Array(linkCount);
     let iterations = 0;
@@ -140,52 +166,7 @@ export class GradientSolver {
       converged = false;
       while (iterations < settings.maxIterations) {
         iterations++;
-        diagonal.fill(0);
-        edgeValue.fill(0);
-        for (let v = 0; v < nodeCount; v++) {
-          const u = unknownOf[v];
-          if (u >= 0) rhs[u] = -netDemandM3s[v];
-        }
-        for (let k = 0; k < linkCount; k++) {
-          const state = states[k];
-          if (state === LinkState.Shut) continue;
-          const i = from[k];
-          const j = to[k];
-          const ui = unknownOf[i];
-          const uj = unknownOf[j];
-          if (state === LinkState.Active) {
-            // The PRV's flow is carried as a known draw at its upstream node; its downstream head is pinned.
-            if (ui >= 0) rhs[ui] -= flow[k];
-            if (uj >= 0) {
-              diagonal[uj] += PINNED_HEAD_WEIGHT;
-              rhs[uj] += PINNED_HEAD_WEIGHT * setHeadM[k];
-            }
-            p[k] = 0;
-            y[k] = 0;
-            continue;
-          }
-          if (state === LinkState.Closed) {
-            p[k] = 1 / CLOSED_LINK_RESISTANCE;
-            y[k] = flow[k];
-          } else {
-            const { lossM, gradient } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
-            p[k] = 1 / gradient;
-            y[k] = lossM / gradient;
-          }
-          const carried = flow[k] - y[k];
-          if (ui >= 0) {
-            rhs[ui] -= carried;
-            diagonal[ui] += p[k];
-            if (uj < 0) rhs[ui] += p[k] * head[j];
-          }
-          if (uj >= 0) {
-            rhs[uj] += carried;
-            diagonal[uj] += p[k];
-            if (ui < 0) rhs[uj] += p[k] * head[i];
-          }
-          const e = this.edgeOfLink[k];
-          if (e >= 0) edgeValue[e] -= p[k];
-        }
+        this.assemble({ flow, head, states, p, y, diagonal, edgeValue, rhs });
         this.cholesky.factor(diagonal, edgeValue);
         this.cholesky.solve(rhs, solved);
         for (let v = 0; v < nodeCount; v++) {
@@ -234,6 +215,82 @@ export class GradientSolver {
       maxHeadBalanceErrorM: this.maxHeadBalanceError(flow, head, states),
       lastRelativeChange: relativeChange,
     };
+  }
+
+  /** The head system of the first step from the starting flows (what each iteration factorises). */
+  headSystem(): HeadSystem {
+    const size = this.cholesky.size;
+    const edges = this.edgeA.length;
+    const arrays: StepArrays = {
+      flow: this.initialFlows(),
+      head: Float64Array.from(this.net.fixedHeadM, (h) => (Number.isNaN(h) ? 0 : h)),
+      states: this.initialStates(),
+      p: new Float64Array(this.net.linkCount),
+      y: new Float64Array(this.net.linkCount),
+      diagonal: new Float64Array(size),
+      edgeValue: new Float64Array(edges),
+      rhs: new Float64Array(size),
+    };
+    this.assemble(arrays);
+    return { size, diagonal: arrays.diagonal, edgeA: this.edgeA, edgeB: this.edgeB, edgeValue: arrays.edgeValue, rhs: arrays.rhs };
+  }
+
+  /** Solves one head system with this solver's factorisation (for benchmarks and checks). */
+  solveHeadSystem(system: HeadSystem): Float64Array {
+    this.cholesky.factor(system.diagonal, system.edgeValue);
+    return this.cholesky.solve(system.rhs);
+  }
+
+  /** Builds the linear system for the heads about the current flows (one gradient-method step). */
+  private assemble({ flow, head, states, p, y, diagonal, edgeValue, rhs }: StepArrays): void {
+    const { linkCount, nodeCount, from, to, netDemandM3s, laws, minor, setHeadM, linearBelowM3s } = this.net;
+    const unknownOf = this.unknownOf;
+    diagonal.fill(0);
+    edgeValue.fill(0);
+    for (let v = 0; v < nodeCount; v++) {
+      const u = unknownOf[v];
+      if (u >= 0) rhs[u] = -netDemandM3s[v];
+    }
+    for (let k = 0; k < linkCount; k++) {
+      const state = states[k];
+      if (state === LinkState.Shut) continue;
+      const i = from[k];
+      const j = to[k];
+      const ui = unknownOf[i];
+      const uj = unknownOf[j];
+      if (state === LinkState.Active) {
+        // The PRV's flow is carried as a known draw at its upstream node; its downstream head is pinned.
+        if (ui >= 0) rhs[ui] -= flow[k];
+        if (uj >= 0) {
+          diagonal[uj] += PINNED_HEAD_WEIGHT;
+          rhs[uj] += PINNED_HEAD_WEIGHT * setHeadM[k];
+        }
+        p[k] = 0;
+        y[k] = 0;
+        continue;
+      }
+      if (state === LinkState.Closed) {
+        p[k] = 1 / CLOSED_LINK_RESISTANCE;
+        y[k] = flow[k];
+      } else {
+        const { lossM, gradient } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
+        p[k] = 1 / gradient;
+        y[k] = lossM / gradient;
+      }
+      const carried = flow[k] - y[k];
+      if (ui >= 0) {
+        rhs[ui] -= carried;
+        diagonal[ui] += p[k];
+        if (uj < 0) rhs[ui] += p[k] * head[j];
+      }
+      if (uj >= 0) {
+        rhs[uj] += carried;
+        diagonal[uj] += p[k];
+        if (ui < 0) rhs[uj] += p[k] * head[i];
+      }
+      const e = this.edgeOfLink[k];
+      if (e >= 0) edgeValue[e] -= p[k];
+    }
   }
 
   /** Flow node `node` needs through link `via` so that continuity holds there. */

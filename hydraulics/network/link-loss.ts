@@ -50,11 +50,15 @@ export function frictionLossM(law: LinkLaw, q: number): number {
 
 function rawLossAndGradient(law: LinkLaw, minor: number, q: number): LossAndGradient {
   const magnitude = Math.abs(q);
+  if (magnitude === 0) return { lossM: 0, gradient: 0 };
+  const minorGradient = 2 * minor * magnitude;
+  if (law.kind === 'hazen-williams') {
+    // One power per call: r·|Q|^(n-1) gives both the loss (× Q) and the slope (× n).
+    const perFlow = law.resistance * magnitude ** (law.exponent - 1);
+    return { lossM: (perFlow + minor * magnitude) * q, gradient: law.exponent * perFlow + minorGradient };
+  }
   const friction = frictionLossM(law, q);
-  let gradient: number;
-  if (law.kind === 'hazen-williams') gradient = magnitude === 0 ? 0 : law.exponent * law.resistance * magnitude ** (law.exponent - 1);
-  else gradient = magnitude === 0 ? 0 : (2 * Math.abs(friction)) / magnitude;
-  return { lossM: friction + minor * q * magnitude, gradient: gradient + 2 * minor * magnitude };
+  return { lossM: friction + minor * q * magnitude, gradient: (2 * Math.abs(friction)) / magnitude + minorGradient };
 }
 
 /**

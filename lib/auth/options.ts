@@ -1,20 +1,16 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { models } from '../../models';
+import { isDatabaseUnavailable } from '../db-availability';
 import { env } from '../env';
+import { log } from '../log';
 import { SignInSchema } from '../validations/auth';
 import { verifyPassword } from './password';
-import { clearSignInFailures, recordSignInFailure, signInBlocked } from './rate-limit';
 import { bumpSessionVersion } from './users';
 
-export const SIGN_IN_RATE_LIMITED = 'rate_limited';
 
-function clientIp(headers: Record<string, unknown> | undefined): string {
-  const forwarded = headers?.['x-forwarded-for'];
-  if (typeof forwarded === 'string' && forwarded.length > 0) return forwarded.split(',')[0]!.trim();
-  const real = headers?.['x-real-ip'];
-  return typeof real === 'string' && real.length > 0 ? real : 'local';
-}
+/** The sign-in error code while the database cannot be reached. */
+export const SIGN_IN_UNAVAILABLE = 'unavailable';
 
 export function authOptions(): NextAuthOptions {
   return {
@@ -25,20 +21,24 @@ export function authOptions(): NextAuthOptions {
       CredentialsProvider({
         name: 'E-mail and password',
         credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
-        async authorize(credentials, req) {
+        // Attempts are counted before this runs (lib/auth/sign-in-route.ts). An unknown e-mail is
+        // checked against a decoy hash, so both refusals take the same time and look the same.
+        async authorize(credentials) {
           const parsed = SignInSchema.safeParse({ email: credentials?.email, password: credentials?.password });
           if (!parsed.success) return null;
           const { email, password } = parsed.data;
-          const ip = clientIp(req?.headers as Record<string, unknown> | undefined);
-          if (signInBlocked(email, ip)) throw new Error(SIGN_IN_RATE_LIMITED);
-
-          const user = await models().User.findOne({ where: { email } });
-          const ok = await verifyPassword(user?.passwordHash ?? null, password);
-          if (!user || !ok) {
-            recordSignInFailure(email, ip);
-            return null;
+          let user;
+          let ok;
+          try {
+            user = await models().User.findOne({ where: { email } });
+            ok = await verifyPassword(user?.passwordHash ?? null, password);
+          } catch (error) {
+            // next-auth puts a thrown message in the sign-in URL: give it a code, never the driver's text.
+            const unavailable = isDatabaseUnavailable(error);
+            log()[unavailable ? 'warn' : 'error']({ err: error }, 'sign-in could not check the password');
+            throw new Error(unavailable ? SIGN_IN_UNAVAILABLE : 'internal');
           }
-          clearSignInFailures(email);
+          if (!user || !ok) return null;
           return { id: user.id, email: user.email, name: user.name, sessionVersion: user.sessionVersion };
         },
       }),

@@ -1,9 +1,10 @@
 import 'server-only';
-import { analyzeLine, type LineAnalysis } from '../../hydraulics/index';
+import type { LineAnalysis } from '../../hydraulics/index';
 import { AppError, notFound } from '../errors';
 import { lineInputOf } from '../lines/line-input';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
+import { runInWorker } from '../workers/pool';
 import { lineSiteContext } from './line-context';
 import { getLine, stationsOfLine, type LineRecord } from './lines';
 
@@ -22,5 +23,6 @@ export async function analyseSavedLine(lineId: string): Promise<AnalysedLine> {
   if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
   const stations = await stationsOfLine(line.routeId, line);
   const context = await lineSiteContext(line.projectId);
-  return { line, stations, context, analysis: analyzeLine(lineInputOf(line.design, stations, context)) };
+  // On the worker pool: a long line's analysis must not hold the request thread.
+  return { line, stations, context, analysis: await runInWorker('line.analyse', { line: lineInputOf(line.design, stations, context) }) };
 }

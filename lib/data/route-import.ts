@@ -1,4 +1,5 @@
 import 'server-only';
+import { recordActivity } from '../activity/record';
 import { createHash, randomUUID } from 'node:crypto';
 import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
@@ -6,13 +7,15 @@ import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
 import { log } from '../log';
 import { deleteObject, putObject } from '../storage';
+import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
-import { parseSurveyText } from '../survey/run-import';
-import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
-import { refusingPlainly } from './route-errors';
+import { runInWorker } from '../workers/pool';
+import { asAppError } from './route-errors';
 import { insertRoutePoints } from './route-points-store';
 import { toRouteSummary } from './routes';
+
+const SNIFF_CODES = new Set<SurveyImportErrorCode>(['file-too-large', 'empty-file', 'binary-content', 'not-text']);
 
 /** Notes kept on the route; a file with thousands of duplicates gets a count, not thousands of lines. */
 const MAX_STORED_NOTES = 200;
@@ -61,8 +64,12 @@ function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[
  * written in one transaction. If that transaction fails the stored object is removed again.
  */
 export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportResult> {
-  const { text } = await refusingPlainly(async () => sniffSurveyFile(upload.bytes, { fileName: upload.fileName }));
-  const survey = await refusingPlainly(async () => parseSurveyText(text, upload.options), upload.fileName);
+  // Sniffing and parsing run on the worker pool: a large or hostile file never holds the request thread.
+  const survey = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options }).catch((error: unknown) => {
+    // The sniff's refusals already name the file; the parsers' do not.
+    const namesFile = error instanceof SurveyImportError && SNIFF_CODES.has(error.code);
+    throw asAppError(error, namesFile ? undefined : upload.fileName);
+  });
   const records = recordsOfSurvey(survey);
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
   const storageKey = `projects/${upload.projectId}/survey-files/${randomUUID()}/${safeName}`;
@@ -101,6 +108,10 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
         { transaction },
       );
       await insertRoutePoints(r.id, records, transaction);
+      await recordActivity(transaction, {
+        projectId: upload.projectId, actorUserId: upload.userId, kind: 'survey.imported', subjectType: 'route', subjectId: r.id,
+        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${records.length} points)`, data: { fileName: upload.fileName, points: records.length },
+      });
       return toRouteSummary(r, file);
     });
     return { route, warnings: survey.warnings.slice(0, 50) };

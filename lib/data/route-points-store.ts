@@ -5,7 +5,9 @@ import type pg from 'pg';
 import { from as copyFrom } from 'pg-copy-streams';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { models } from '../../models';
+import { AppError } from '../errors';
 import type { PointRecord } from '../routes/edit-ops';
+import { MAX_ROUTE_POINTS } from '../validations/routes';
 import type { RoutePointView } from '../routes/types';
 
 const COPY_SQL = `COPY route_points (route_id, seq, latitude, longitude, chainage_m, slope_chainage_m, elevation_m,
@@ -59,6 +61,11 @@ function* copyPieces(routeId: string, records: readonly PointRecord[]): Generato
  * rows go out as one text stream, with no statement, parameters or array literals per chunk.
  */
 export async function insertRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+  // Every way a route gets points (import, save, join, split, clean-up) ends here, so the cap holds for all of them.
+  if (records.length > MAX_ROUTE_POINTS) {
+    const message = `A route can hold at most ${MAX_ROUTE_POINTS.toLocaleString('en-US')} points; this one would have ${records.length.toLocaleString('en-US')}`;
+    throw new AppError('bad_request', message, { points: [message] });
+  }
   if (records.length === 0) return;
   // Sequelize keeps the transaction's pg client here (not in its typings).
   const client = (transaction as unknown as { connection: pg.ClientBase }).connection;

@@ -55,9 +55,19 @@ export function cellText<R>(column: ResultColumn<R>, row: R): string {
   return typeof v === 'number' && column.digits !== undefined ? v.toFixed(column.digits) : String(v);
 }
 
-/** Rows as CSV text (papaparse), headings with units. */
+/**
+ * Text a spreadsheet would run as a formula (=, +, -, @, tab, carriage return first) gets a leading
+ * apostrophe, so a pipe named "=HYPERLINK(…)" stays text (OWASP, "CSV Injection"). Numbers are
+ * written as they are: a negative pressure must stay a number.
+ */
+export function csvSafeText(text: string): string {
+  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+}
+
+/** Rows as CSV text (papaparse), headings with units; user text escaped against formula injection. */
 export function tableCsv<R>(columns: readonly ResultColumn<R>[], rows: readonly R[]): string {
-  return Papa.unparse({ fields: columns.map((c) => c.heading), data: rows.map((r) => columns.map((c) => cellText(c, r))) });
+  const cell = (c: ResultColumn<R>, r: R) => (typeof c.value(r) === 'string' ? csvSafeText(cellText(c, r)) : cellText(c, r));
+  return Papa.unparse({ fields: columns.map((c) => csvSafeText(c.heading)), data: rows.map((r) => columns.map((c) => cell(c, r))) });
 }
 
 /** Station rows of an analysis (every profile point, inserted ones included). */

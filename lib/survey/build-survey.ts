@@ -1,4 +1,5 @@
 import { chainageAlongTrack, slopeLengthOfProfile } from '../../hydraulics/survey/chainage';
+import { MAX_ROUTE_POINTS } from '../validations/routes';
 import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
 import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
 import { DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from '../../hydraulics/survey/height-source';
@@ -34,6 +35,12 @@ export interface BuildSurveyInput {
  */
 export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
   const { drafts, heightSource } = input;
+  if (drafts.length > MAX_ROUTE_POINTS) {
+    throw new SurveyImportError(
+      'too-many-points',
+      `the file has ${drafts.length.toLocaleString('en-US')} points; a route can hold at most ${MAX_ROUTE_POINTS.toLocaleString('en-US')} (split the file, or thin the track on the receiver)`,
+    );
+  }
   if (drafts.length < 2) {
     throw new SurveyImportError('too-few-points', `a route needs at least two points; the file has ${drafts.length}`);
   }

@@ -14,6 +14,7 @@ export type SurveyImportErrorCode =
   | 'longitude-out-of-range'
   | 'bad-time'
   | 'too-few-points'
+  | 'too-many-points'
   | 'negative-chainage'
   | 'chainage-not-increasing'
   | 'angle-out-of-range'

@@ -5,6 +5,9 @@ import { SurveyImportError } from './errors';
 import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFeature, type SurveyImportWarning } from './parsed-survey';
 import { snapToRoute } from './snap';
 
+/** Waypoints placed along one route as features: far more than any walk marks. */
+export const MAX_ROUTE_FEATURES = 20_000;
+
 export interface GpxOptions {
   /** @default 'gps' */
   heightSource?: HeightSourceName;
@@ -102,6 +105,12 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
   }
   const survey = buildParsedSurvey({ format: 'gpx', drafts, heightSource: options.heightSource ?? 'gps', rowsRead: drafts.length, warnings });
   progress(0.9);
+  if (!routeFromWaypoints && waypoints.length > MAX_ROUTE_FEATURES) {
+    throw new SurveyImportError(
+      'too-many-points',
+      `the GPX file has ${waypoints.length.toLocaleString('en-US')} waypoints besides its track; at most ${MAX_ROUTE_FEATURES.toLocaleString('en-US')} can be placed along a route`,
+    );
+  }
   if (!routeFromWaypoints && waypoints.length > 0) {
     const flagM = options.waypointFlagDistanceM ?? 50;
     const wpts = waypoints.map((p, i) => readPoint(p, wptLines[i], 'wpt', false));

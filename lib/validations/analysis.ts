@@ -8,6 +8,17 @@ const positive = (label: string) => finite(label).positive(`${label} must be gre
 const nonNegative = (label: string) => finite(label).nonnegative(`${label} must not be negative`);
 
 export const MAX_ANALYSIS_STATIONS = 200_000;
+/** The stateless analysis endpoint takes smaller lines than a saved line may have (it is open to every account). */
+export const MAX_STATELESS_ANALYSIS_STATIONS = 20_000;
+/** Its largest body, bytes: 20 000 stations at about 100 bytes each, with room for stretches and devices. */
+export const MAX_STATELESS_ANALYSIS_BYTES = 4_000_000;
+/** Stateless analyses per user per minute (common practice, no source: well above what an editor sends). */
+export const ANALYSIS_LIMIT = { name: 'analysis-user', points: 30, durationSeconds: 60 };
+
+/** `?profilePoints=N`: thin the returned profile to about N points (it keeps every high and low). */
+export const AnalysisQuerySchema = z.strictObject({
+  profilePoints: z.coerce.number({ error: 'profilePoints must be a whole number' }).int('profilePoints must be a whole number').min(50, 'profilePoints must be at least 50').max(20_000, 'profilePoints must be at most 20000').optional(),
+});
 
 export const PipeSpecSchema = z.strictObject({
   id: safeText('Pipe id', 120).pipe(z.string().min(1, 'Pipe id is required')),

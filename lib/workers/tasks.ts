@@ -1,5 +1,8 @@
 import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
+import { thinAnalysis } from '../lines/thin-analysis';
+import type { NetworkContext } from '../network/context';
+import { solveNetworkRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
 import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -16,8 +19,13 @@ export const TASKS = {
     const { text } = sniffSurveyFile(input.bytes, { fileName: input.fileName });
     return parseSurveyText(text, input.options);
   },
-  /** Analyses a whole line (the core's analyzeLine). */
-  'line.analyse': (input: LineInput) => analyzeLine(input),
+  /** Analyses a whole line (the core's analyzeLine); `profilePoints` thins the profile for drawing. */
+  'line.analyse': (input: { line: LineInput; profilePoints?: number }) => {
+    const analysis = analyzeLine(input.line);
+    return input.profilePoints === undefined ? analysis : thinAnalysis(analysis, input.profilePoints);
+  },
+  /** Solves a project's network at the peak hour (lib/network). */
+  'network.solve': (input: NetworkContext) => solveNetworkRun(input),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
   'test.spin': (input: { ms: number; answer: number }) => {
     const end = Date.now() + input.ms;

@@ -4,7 +4,6 @@ import { GET as getProject } from '@/app/api/projects/[projectId]/route';
 import { DELETE as removeMember, PATCH as changeRole } from '@/app/api/teams/[teamId]/members/[userId]/route';
 import { GET as listTeams } from '@/app/api/teams/route';
 import { authOptions } from '@/lib/auth/options';
-import { recordSignInFailure, resetSignInLimits } from '@/lib/auth/rate-limit';
 import { models } from '@/models';
 import { call, createTeamFixture, sessionCookie } from '../support/api';
 
@@ -44,29 +43,13 @@ describe('sign-in', () => {
   const credentials = authOptions().providers[0] as unknown as {
     options: { authorize: (c: Record<string, string>, req: { headers: Record<string, string> }) => Promise<unknown> };
   };
-  const authorize = (email: string, password: string, ip = '203.0.113.7') => credentials.options.authorize({ email, password }, { headers: { 'x-forwarded-for': ip } });
-
-  beforeEach(() => resetSignInLimits());
+  const authorize = (email: string, password: string) => credentials.options.authorize({ email, password }, { headers: {} });
 
   it('accepts the right password and refuses a wrong one or an unknown e-mail alike', async () => {
     const user = await models().User.findOne({ where: { email: 'owner@example.test' } });
     expect(await authorize('owner@example.test', 'tarnbeck-demo-2026')).toMatchObject({ id: user!.id });
     expect(await authorize('owner@example.test', 'wrong password')).toBeNull();
     expect(await authorize('nobody@example.test', 'wrong password')).toBeNull();
-  });
-
-  it('slows repeated failures per e-mail, before checking the password', async () => {
-    for (let i = 0; i < 5; i++) expect(await authorize('designer@example.test', `guess ${i}`)).toBeNull();
-    await expect(authorize('designer@example.test', 'tarnbeck-demo-2026')).rejects.toThrow('rate_limited');
-    await expect(authorize('designer@example.test', 'tarnbeck-demo-2026', '198.51.100.9')).rejects.toThrow('rate_limited');
-  });
-
-  it('slows repeated failures per IP across e-mails', async () => {
-    // 29 failures counted directly (hashing each would only slow the suite), the 30th through sign-in.
-    for (let i = 0; i < 29; i++) recordSignInFailure(`someone-${i}@example.test`, '192.0.2.44');
-    expect(await authorize('someone-29@example.test', 'guess', '192.0.2.44')).toBeNull();
-    await expect(authorize('reviewer@example.test', 'tarnbeck-demo-2026', '192.0.2.44')).rejects.toThrow('rate_limited');
-    expect(await authorize('reviewer@example.test', 'tarnbeck-demo-2026', '192.0.2.45')).not.toBeNull();
   });
 });
 

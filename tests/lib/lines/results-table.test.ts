@@ -33,3 +33,17 @@ describe('results tables and their CSV files', () => {
     expect(first[4]).toBe('40 mm PE80 SDR 17 (PN 8)');
   });
 });
+
+describe('results CSV and formula injection', () => {
+  it('writes user text that starts like a formula as text, and negative numbers as numbers', async () => {
+    const { tableCsv } = await import('@/lib/lines/results-table');
+    const columns = [
+      { key: 'pipe', heading: 'Pipe', value: (r: { label: string; head: number }) => r.label },
+      { key: 'head', heading: 'Head (m)', value: (r: { label: string; head: number }) => r.head, digits: 2 },
+    ];
+    const rows = ['=HYPERLINK("http://x.test","y")', '+1+1', '-2+3', '@SUM(A1)', '\tTAB', 'PE 32 PN 8'].map((label, i) => ({ label, head: -1.5 * i }));
+    const parsed = (await import('papaparse')).default.parse<string[]>(tableCsv(columns, rows)).data.slice(1);
+    expect(parsed.map((r) => r[0])).toEqual(["'=HYPERLINK(\"http://x.test\",\"y\")", "'+1+1", "'-2+3", "'@SUM(A1)", "'\tTAB", 'PE 32 PN 8']);
+    expect(parsed.map((r) => r[1])).toEqual(['0.00', '-1.50', '-3.00', '-4.50', '-6.00', '-7.50']);
+  });
+});

@@ -91,3 +91,12 @@ describe('dialect and header guessing stay fast on hostile first lines', () => {
     expect(() => parseGpsCsv(text, { mapping, elevationUnit: 'm', heightSource: 'gps' } as never)).toThrow(SurveyImportError);
   });
 });
+
+describe('imports have a point cap', () => {
+  it('refuses a file with more points than a route can hold, saying how many', async () => {
+    const { buildParsedSurvey } = await import('@/lib/survey/build-survey');
+    const { MAX_ROUTE_POINTS } = await import('@/lib/validations/routes');
+    const drafts = Array.from({ length: MAX_ROUTE_POINTS + 1 }, (_, i) => ({ chainageM: i, elevationM: 100 }));
+    expect(() => buildParsedSurvey({ format: 'station-csv', drafts, heightSource: 'typed', rowsRead: drafts.length })).toThrow(/200,001 points; a route can hold at most 200,000/);
+  });
+});

@@ -1,12 +1,24 @@
-import { analyzeLine } from '@/hydraulics';
-import { analysisToJson } from '@/lib/lines/analysis-json';
 import { userRoute } from '@/lib/api/route';
-import { LineInputSchema } from '@/lib/validations/analysis';
+import { AppError } from '@/lib/errors';
+import { enforce } from '@/lib/rate-limits';
+import { analysisToJson } from '@/lib/lines/analysis-json';
+import { ANALYSIS_LIMIT, AnalysisQuerySchema, LineInputSchema, MAX_STATELESS_ANALYSIS_BYTES, MAX_STATELESS_ANALYSIS_STATIONS } from '@/lib/validations/analysis';
+import { parseOrThrow } from '@/lib/api/body';
+import { runInWorker } from '@/lib/workers/pool';
 
 /**
  * Analyses a line given whole in the request (stations, stretches, ends, flow, settings; SI units)
- * and returns the profile and its warnings. Pure computation: nothing is stored.
+ * and returns the profile and its warnings. Pure computation: nothing is stored. Open to every
+ * account, so it is limited per user, capped in stations, run on the worker pool, and its profile
+ * is thinned when the caller asks (`?profilePoints=N`).
  */
-export const POST = userRoute({ body: LineInputSchema, maxBodyBytes: 25_000_000 }, async ({ body }) => ({
-  analysis: analysisToJson(analyzeLine(body)),
-}));
+export const POST = userRoute({ body: LineInputSchema, maxBodyBytes: MAX_STATELESS_ANALYSIS_BYTES }, async ({ req, body, user }) => {
+  const query = parseOrThrow(AnalysisQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+  if (body.stations.length > MAX_STATELESS_ANALYSIS_STATIONS) {
+    const message = `At most ${MAX_STATELESS_ANALYSIS_STATIONS.toLocaleString('en-US')} stations can be analysed here; save the line and analyse it from its page`;
+    throw new AppError('bad_request', message, { stations: [message] });
+  }
+  await enforce(ANALYSIS_LIMIT, `user:${user.id}`, 'Too many analyses in a short time; wait a little and try again');
+  const analysis = await runInWorker('line.analyse', { line: body, profilePoints: query.profilePoints });
+  return { analysis: analysisToJson(analysis) };
+});
