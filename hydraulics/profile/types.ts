@@ -104,7 +104,10 @@ export type LineFlow =
 
 /** Settings of one analysis. Every field is optional; defaults are listed with their sources. */
 export interface LineSettings {
-  /** @default 'hazen-williams' */
+  /**
+   * @default 'darcy-weisbach' (Colebrook friction factor from each pipe's roughness): Hazen-Williams
+   * with C = 150 predicts less friction than a smooth pipe in small bores (profile-and-checks.md §5.1)
+   */
   frictionMethod?: FrictionMethod;
   /** Water temperature, C; used for viscosity, density, vapour pressure and pipe derating. @default 20 */
   waterTemperatureC?: number;
@@ -134,6 +137,12 @@ export interface LineSettings {
   siphonLimitHeadM?: number;
   /** Cover used for stations that give none, m. @default 0.75 (common burial practice, no source; see settings.ts) */
   defaultCoverM?: number;
+  /**
+   * Loss coefficient K of the pipe entrance where water leaves a free surface (the source at a water
+   * level, each break-pressure tank). The velocity head v²/2g itself is always taken there as well.
+   * @default 0.5 (sharp-edged entrance; profile-and-checks.md §5.2)
+   */
+  entranceLossK?: number;
   /** Check static pressure plus a sudden-stop surge against the ratings. @default true */
   checkSurge?: boolean;
 }

@@ -89,6 +89,7 @@ export const LineSettingsSchema = z.strictObject({
   siteAltitudeM: finite('Site altitude').optional(),
   siphonLimitHeadM: positive('Siphon limit').optional(),
   defaultCoverM: nonNegative('Default cover').optional(),
+  entranceLossK: nonNegative('Entrance loss coefficient').optional(),
   checkSurge: z.boolean().optional(),
 });
 
