@@ -192,7 +192,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </Panel>
       </div>
       <Panel title="Settings">
-        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} />
+        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} assumedDatum={analysis?.settings.heightDatum === 'assumed'} />
       </Panel>
       {analysis && (
         <Panel title="Results">

@@ -17,7 +17,8 @@ export type WarningCode =
   | 'air-release-needed'
   | 'washout-needed'
   | 'velocity-low'
-  | 'velocity-high';
+  | 'velocity-high'
+  | 'site-altitude-assumed';
 
 /** A change one click could apply to the line input (see `applyLineFixes`). */
 export type LineFix =

@@ -12,6 +12,7 @@ export interface ResolvedLineSettings {
   heightScatterM: number;
   /** Undefined until the profile supplies its highest ground elevation. */
   siteAltitudeM: number | undefined;
+  heightDatum: 'geodetic' | 'assumed';
   /** Undefined until the profile scales the sea-level default to the site (see `pressureLimits`). */
   siphonLimitHeadM: number | undefined;
   defaultCoverM: number;
@@ -48,6 +49,7 @@ export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAlt
   siphonLimitHeadM: 7.5,
   defaultCoverM: 0.75,
   entranceLossK: 0.5,
+  heightDatum: 'geodetic',
   checkSurge: true,
 });
 
@@ -65,6 +67,7 @@ export function resolveLineSettings(settings: LineSettings | undefined): Resolve
     airPointToleranceM: s.airPointToleranceM ?? d.airPointToleranceM,
     heightScatterM: s.heightScatterM ?? d.heightScatterM,
     siteAltitudeM: s.siteAltitudeM,
+    heightDatum: s.heightDatum ?? 'geodetic',
     siphonLimitHeadM: s.siphonLimitHeadM,
     defaultCoverM: s.defaultCoverM ?? d.defaultCoverM,
     entranceLossK: s.entranceLossK ?? d.entranceLossK,

@@ -128,8 +128,18 @@ export interface LineSettings {
    * @default 0 (heights taken as exact: a level book or hose level)
    */
   heightScatterM?: number;
-  /** Altitude of the site for atmospheric pressure, m. @default the highest ground elevation of the line */
+  /**
+   * Altitude of the site above sea level for atmospheric pressure, m.
+   * @default the highest ground elevation of the line (only right when `heightDatum` is 'geodetic')
+   */
   siteAltitudeM?: number;
+  /**
+   * Whether the stations' heights are above sea level ('geodetic': GPS, map) or on a datum the
+   * surveyor chose ('assumed': a level book started at 100 m). On an assumed datum the highest ground
+   * says nothing about the altitude, and the analysis warns until `siteAltitudeM` is given.
+   * @default 'geodetic'
+   */
+  heightDatum?: 'geodetic' | 'assumed';
   /**
    * Practical limit of negative pressure head in a siphon, m (positive number).
    * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)

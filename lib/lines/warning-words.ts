@@ -18,6 +18,7 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   'washout-needed': 'Silt trap at a sag',
   'velocity-low': 'Slow water',
   'velocity-high': 'Fast water',
+  'site-altitude-assumed': 'Site altitude not known',
 };
 
 export const SEVERITY_WORDS: Record<WarningSeverity, string> = { danger: 'Danger', warning: 'Warning', info: 'Advice' };
@@ -140,6 +141,12 @@ const WORDING: Record<WarningCode, Wording> = {
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, below the self-cleaning ${f.speed(v.limitVelocityMs)}: silt settles and air bubbles are not carried through.`,
     'Use a smaller pipe if the head allows it, and fit washouts at the low points of this stretch.',
   ],
+  'site-altitude-assumed': (v, f) => [
+  `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
+    v.headM !== undefined ? ` where the line has suction (down to ${f.length(v.headM)} at ${f.ch(v.chainageM)})` : ''
+  }.`,
+  "Enter the site's altitude above sea level (from a map or a phone) under Settings, Site altitude.",
+],
   'velocity-high': (v, f) => [
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, above ${f.speed(v.limitVelocityMs)}: suspended sand wears the pipe and fittings, and a sudden stop gives a larger pressure surge.`,
     v.toPipeLabel ? `Use the next size up, ${v.toPipeLabel}.` : 'Use a larger pipe for this stretch.',
