@@ -18,7 +18,10 @@ export type WarningCode =
   | 'washout-needed'
   | 'velocity-low'
   | 'velocity-high'
-  | 'site-altitude-assumed';
+  | 'site-altitude-assumed'
+  | 'winter-frost'
+  | 'winter-cover-contradiction'
+  | 'drain-down-overdue';
 
 /** A change one click could apply to the line input (see `applyLineFixes`). */
 export type LineFix =
@@ -82,6 +85,11 @@ export interface WarningValues {
   memberCount?: number;
   /** The worst figure lies within the survey's height scatter of its limit. */
   withinScatter?: boolean;
+  /** Cover over the pipe and the site's frost depth, m (winter items). */
+  coverM?: number;
+  frostDepthM?: number;
+  /** A task's due date, ISO yyyy-mm-dd (winter items). */
+  dueOn?: string;
   /** No gravity fix exists (break-pressure tanks cannot solve it): the reason, in SI words. */
   problem?: string;
 }

@@ -19,6 +19,9 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   'velocity-low': 'Slow water',
   'velocity-high': 'Fast water',
   'site-altitude-assumed': 'Site altitude not known',
+  'winter-frost': 'Shallower than frost',
+  'winter-cover-contradiction': 'Buried below frost, yet no cover',
+  'drain-down-overdue': 'Drain-down overdue',
 };
 
 export const SEVERITY_WORDS: Record<WarningSeverity, string> = { danger: 'Danger', warning: 'Warning', info: 'Advice' };
@@ -140,6 +143,18 @@ const WORDING: Record<WarningCode, Wording> = {
   'velocity-low': (v, f) => [
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, below the self-cleaning ${f.speed(v.limitVelocityMs)}: silt settles and air bubbles are not carried through.`,
     'Use a smaller pipe if the head allows it, and fit washouts at the low points of this stretch.',
+  ],
+  'winter-frost': (v, f) => [
+    `The pipe lies ${f.length(v.coverM)} deep at ${f.ch(v.chainageM)}, no deeper than the site's frost depth of ${f.length(v.frostDepthM)}, and the line is not drained: water left in it can freeze and split the pipe or its fittings.`,
+    'Drain the line for winter, or lay it deeper (see Winter below).',
+  ],
+  'winter-cover-contradiction': (v, f) => [
+    `The line is taken as buried below frost depth, but the pipe lies on the surface (cover ${f.length(v.coverM)}) at ${f.ch(v.chainageM)}: both cannot be true.`,
+    'Give the survey stations their cover, or choose to drain the line for winter (see Winter below).',
+  ],
+  'drain-down-overdue': (v) => [
+    `The drain-down task due on ${v.dueOn} is not done, and this line needs draining before frost: water left in it can freeze.`,
+    'Open the drains at the low points, then tick the task done on the lift page.',
   ],
   'site-altitude-assumed': (v, f) => [
   `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
