@@ -21,7 +21,8 @@ export type WarningCode =
   | 'site-altitude-assumed'
   | 'winter-frost'
   | 'winter-cover-contradiction'
-  | 'drain-down-overdue';
+  | 'drain-down-overdue'
+  | 'device-misplaced';
 
 /** A change one click could apply to the line input (see `applyLineFixes`). */
 export type LineFix =
@@ -85,6 +86,10 @@ export interface WarningValues {
   memberCount?: number;
   /** The worst figure lies within the survey's height scatter of its limit. */
   withinScatter?: boolean;
+  /** A second chainage: where a misplaced device's point really is, m. */
+  otherChainageM?: number;
+  /** The device a warning is about. */
+  deviceKind?: LineDeviceKind;
   /** Cover over the pipe and the site's frost depth, m (winter items). */
   coverM?: number;
   frostDepthM?: number;

@@ -22,6 +22,7 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   'winter-frost': 'Shallower than frost',
   'winter-cover-contradiction': 'Buried below frost, yet no cover',
   'drain-down-overdue': 'Drain-down overdue',
+  'device-misplaced': 'Device at the wrong kind of point',
 };
 
 export const SEVERITY_WORDS: Record<WarningSeverity, string> = { danger: 'Danger', warning: 'Warning', info: 'Advice' };
@@ -156,6 +157,15 @@ const WORDING: Record<WarningCode, Wording> = {
     `The drain-down task due on ${v.dueOn} is not done, and this line needs draining before frost: water left in it can freeze.`,
     'Open the drains at the low points, then tick the task done on the lift page.',
   ],
+  'device-misplaced': (v, f) => v.deviceKind === 'air-release-valve'
+    ? [
+      `The air-release valve at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a low point of the pipe: air rises to the summits, so it vents nothing, and it may draw dirty water or air in.`,
+      `Move it to a summit; fit a washout here at ${f.ch(v.otherChainageM)} instead.`,
+    ]
+    : [
+      `The washout at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a high point of the pipe: silt settles at the sags, so it drains and flushes nothing.`,
+      `Move it to a sag; fit an air-release valve here at ${f.ch(v.otherChainageM)} instead.`,
+    ],
   'site-altitude-assumed': (v, f) => [
   `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
     v.headM !== undefined ? ` where the line has suction (down to ${f.length(v.headM)} at ${f.ch(v.chainageM)})` : ''
