@@ -15,6 +15,7 @@ const runnelSans = localFont({
 export const metadata: Metadata = {
   title: { default: 'Runnel', template: '%s · Runnel' },
   description: 'Plan gravity-fed and ram-pump water lines, from survey to upkeep.',
+  manifest: '/manifest.webmanifest',
 };
 
 export const viewport: Viewport = { width: 'device-width', initialScale: 1 };

@@ -10,7 +10,7 @@ function ramSite(index: number, sourceId: string, tankId: string): RamSiteRecord
     id: `ram-${index}`, name: `Ram ${index}`, sourceId, tankId, driveFlowM3s: (20 + index) * L_PER_MIN, fallM: 2 + index * 0.2,
     drivePipe: { lengthM: 14 + index, insideDiameterM: 0.03505, material: 'steel', rigid: null }, liftM: 10.7 + index * 2, pumpElevationM: null,
     deliveryPipe: { routeId: null, lengthM: 107 + index * 10, pipeId: 'pe-d2239-sidr9-1in', insideDiameterM: null, hazenWilliamsC: null, pressureRatingPa: null },
-    sizeClassId: null, pumpCount: 1, measuredEfficiency: null, notes: '',
+    sizeClassId: null, pumpCount: 1, measuredEfficiency: null, efficiencyTableId: 'trade-pocketbook', notes: '',
   };
 }
 

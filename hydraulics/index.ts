@@ -124,7 +124,7 @@ export { seriesCriticalClosureTimeS, type SurgePipeRun } from './surge/series-cl
 // Line profile
 export { analyzeProfile } from './profile/analyze-profile';
 export { assertLineInput } from './profile/validate-line';
-export { DEFAULT_LINE_SETTINGS, resolveLineSettings, type ResolvedLineSettings } from './profile/settings';
+export { DEFAULT_LINE_SETTINGS, highLowToleranceM, resolveLineSettings, type ResolvedLineSettings } from './profile/settings';
 export { profileRows, type ProfileRow } from './profile/rows';
 export { findLimitRanges, type LimitRange, type LimitRangeArgs } from './profile/limit-zones';
 export type {
@@ -158,6 +158,7 @@ export { findTurningPoints, type TurningPoints } from './checks/air-points';
 export { PRESSURE_CAUTION } from './checks/wording';
 export type {
   LineWarning,
+  WarningValues,
   LineFix,
   WarningCode,
   WarningSeverity,
@@ -184,3 +185,6 @@ export * from './ram/index';
 export * from './storage/index';
 export * from './yield/index';
 export * from './seasons/index';
+
+// Networks: one model of the system (sources, tanks, take-offs, outlets, pipes and valves), solved
+export * from './network/index';

@@ -67,12 +67,19 @@ export async function deleteObject(key: string): Promise<void> {
   await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }
 
-/** Keys under a prefix (tests use it to prove a refused upload left nothing behind). */
+/** Keys under a prefix (tests use it to prove a refused upload left nothing behind; backups list the whole store). */
 export async function listKeys(prefix: string): Promise<string[]> {
   const keys: string[] = [];
   let token: string | undefined;
   do {
-    const res = await s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }));
+    let res;
+    try {
+      res = await s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }));
+    } catch (error) {
+      // A store that has never been written to has no bucket yet, and so no keys.
+      if (isMissingBucket(error)) return keys;
+      throw error;
+    }
     for (const o of res.Contents ?? []) if (o.Key) keys.push(o.Key);
     token = res.IsTruncated ? res.NextContinuationToken : undefined;
   } while (token);

@@ -22,6 +22,8 @@ export class DemandUse extends Model<InferAttributes<DemandUse>, InferCreationAt
   declare peakFactor: CreationOptional<number | null>;
   declare deliveryHours: CreationOptional<number | null>;
   declare startHour: CreationOptional<number | null>;
+  /** The network outlet this use is drawn at; null = not tied yet. */
+  declare outletNodeId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -44,6 +46,7 @@ export class DemandUse extends Model<InferAttributes<DemandUse>, InferCreationAt
         peakFactor: { type: DataTypes.DOUBLE, allowNull: true },
         deliveryHours: { type: DataTypes.DOUBLE, allowNull: true },
         startHour: { type: DataTypes.INTEGER, allowNull: true },
+        outletNodeId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

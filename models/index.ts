@@ -1,9 +1,13 @@
 import { db } from '../lib/db';
+import { Activity } from './activity';
 import { Attachment } from './attachment';
+import { Comment } from './comment';
 import { Line } from './line';
 import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
 import { Membership } from './membership';
+import { initialiseNetworkModels, NetworkJob, NetworkLink, NetworkNode, PriceListItem } from './network';
 import { Project } from './project';
+import { Revision } from './revision';
 import { Route } from './route';
 import { RoutePoint } from './route-point';
 import { Team } from './team';
@@ -24,6 +28,10 @@ export function models() {
     RoutePoint.initialise(sequelize);
     Line.initialise(sequelize);
     initialiseLiftModels(sequelize);
+    Revision.initialise(sequelize);
+    Comment.initialise(sequelize);
+    Activity.initialise(sequelize);
+    initialiseNetworkModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -43,10 +51,13 @@ export function models() {
   }
   return {
     User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
+    Revision, Comment, Activity,
     WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
+    NetworkNode, NetworkLink, PriceListItem, NetworkJob,
     sequelize: db(),
   };
 }
 
-export { Attachment, Line, Membership, Project, Route, RoutePoint, Team, User };
+export { Activity, Attachment, Comment, Line, Revision, Membership, Project, Route, RoutePoint, Team, User };
 export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };
+export { NetworkJob, NetworkLink, NetworkNode, PriceListItem };

@@ -2,8 +2,6 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { PipeSpec } from '../hydraulics/catalogue/pipe-spec';
 import type { LineDevice, LineEnd, LineFitting, LineFlow, LineSettings, LineStart, LineStretch } from '../hydraulics/profile/types';
 
-export type LineStatus = 'draft' | 'for-checking' | 'issued';
-
 /** Where a line is fed: the core's own starts, or a ram site of the project whose plan gives the pump outlet head. */
 export type StoredLineStart = LineStart | { kind: 'ram-site'; ramSiteId: string };
 /** The core's flows, or what the feeding ram delivers. */
@@ -32,8 +30,7 @@ export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<L
   declare pipes: PipeSpec[];
   declare settings: LineSettings;
   declare winter: CreationOptional<LineWinterSetting | null>;
-  declare status: CreationOptional<LineStatus>;
-  declare checkedBy: CreationOptional<string>;
+  /** Counts saves of the working copy (a stale editor gets 409); not a review revision. */
   declare revision: CreationOptional<number>;
   declare createdBy: string | null;
   declare updatedBy: string | null;
@@ -59,8 +56,6 @@ export class Line extends Model<InferAttributes<Line>, InferCreationAttributes<L
         pipes: { type: DataTypes.JSONB, allowNull: false },
         settings: { type: DataTypes.JSONB, allowNull: false },
         winter: { type: DataTypes.JSONB, allowNull: true },
-        status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'draft' },
-        checkedBy: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         updatedBy: { type: DataTypes.UUID, allowNull: true },

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { RamDriveMaterial } from '../hydraulics/ram/drive-surge';
+import type { RamEfficiencyTableId } from '../hydraulics/ram/efficiency-table';
 
 /** A hydraulic ram site: fall, drive pipe, lift and delivery pipe, all in SI. */
 export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttributes<RamSite>> {
@@ -26,6 +27,7 @@ export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttrib
   declare sizeClassId: CreationOptional<string | null>;
   declare pumpCount: CreationOptional<number>;
   declare measuredEfficiency: CreationOptional<number | null>;
+  declare efficiencyTableId: CreationOptional<RamEfficiencyTableId>;
   declare notes: CreationOptional<string>;
   declare createdBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -56,6 +58,7 @@ export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttrib
         sizeClassId: { type: DataTypes.STRING(32), allowNull: true },
         pumpCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         measuredEfficiency: { type: DataTypes.DOUBLE, allowNull: true },
+        efficiencyTableId: { type: DataTypes.STRING(32), allowNull: false, defaultValue: 'trade-pocketbook' },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,

@@ -1,23 +1,33 @@
 #!/usr/bin/env bash
-# `npm start`: set everything up on this machine and serve Runnel on http://127.0.0.1:3000.
+# `npm start`: set everything up on this machine and serve Runnel on http://127.0.0.1:$PORT.
+#   RUNNEL_ENV=development (default): PostgreSQL run here, demo data, local fakes for S3 and mail.
+#   RUNNEL_ENV=production: the database, object storage and mail given in the environment; no demo,
+#   no fakes; refuses to start while any of them (or the session secret) is missing.
+#   RUNNEL_SETUP_ONLY=1: set up (database, migrations, seed), then stop what was started and exit.
 source "$(dirname "$0")/common.sh"
 
-export RUNNEL_PG_PORT="${RUNNEL_PG_PORT:-5488}"
-export RUNNEL_DB_NAME="${RUNNEL_DB_NAME:-runnel}"
-export DATABASE_URL="${DATABASE_URL:-postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT/$RUNNEL_DB_NAME}"
+export RUNNEL_ENV="${RUNNEL_ENV:-development}"
 export PORT="${PORT:-3000}"
-export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
-# Object storage: the local fake (scripts/fakes/s3.mjs) and the app agree on these.
-export RUNNEL_S3_PORT="${RUNNEL_S3_PORT:-9401}"
-export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-.runtime/s3}"
-export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
 export RUNNEL_RUNTIME_DIR="${RUNNEL_RUNTIME_DIR:-.runtime}"
-PGDATA_DIR="$ROOT/.pgdata"
+PGDATA_DIR=""
 
 ensure_node_packages
-ensure_postgres_binaries
-ensure_session_secret
-start_postgres "$PGDATA_DIR" "$RUNNEL_PG_PORT"
+
+case "$RUNNEL_ENV" in
+  production)
+    # Checked by the app's own rules (lib/env.ts) before anything is touched.
+    node --import tsx scripts/check-env.ts || die "not starting: fix the settings above (see README, \"Environments\")"
+    ;;
+  development)
+    export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
+    development_settings
+    ensure_postgres_binaries
+    ensure_session_secret
+    start_postgres "${RUNNEL_PG_CLUSTER:-dev}" "$RUNNEL_PG_PORT"
+    export DATABASE_URL="${DATABASE_URL:-$(database_url "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME")}"
+    ;;
+  *) die "RUNNEL_ENV must be development or production (got '$RUNNEL_ENV')" ;;
+esac
 
 APP_PID=""
 cleanup() {
@@ -30,24 +40,31 @@ cleanup() {
     kill -TERM -- "-$APP_PID" 2>/dev/null || kill -TERM "$APP_PID" 2>/dev/null || true
     wait "$APP_PID" 2>/dev/null || true
   fi
-  bash scripts/fakes.sh stop || true
-  stop_postgres "$PGDATA_DIR"
+  if [ "$RUNNEL_ENV" = development ]; then
+    bash scripts/fakes.sh stop || true
+    stop_postgres "$PGDATA_DIR"
+  fi
 }
 trap cleanup INT TERM EXIT
 
-ensure_database "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME"
-migrate_and_seed
-bash scripts/fakes.sh start
+if [ "$RUNNEL_ENV" = development ]; then
+  ensure_database "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME"
+  migrate_and_seed
+else
+  migrate
+fi
+[ "${RUNNEL_SETUP_ONLY:-0}" = "1" ] && { log "set-up done (RUNNEL_SETUP_ONLY=1): stopping"; exit 0; }
+[ "$RUNNEL_ENV" = development ] && bash scripts/fakes.sh start
 
 if [ "${RUNNEL_SKIP_BUILD:-0}" != "1" ] || [ ! -f .next/BUILD_ID ]; then
   log "building the app"
   NODE_ENV=production node node_modules/next/dist/bin/next build
 fi
 
-log "serving Runnel on http://127.0.0.1:$PORT (Ctrl-C stops the app and the database)"
+log "serving Runnel ($RUNNEL_ENV) on http://127.0.0.1:$PORT (Ctrl-C stops what npm start started)"
 # Own process group, so Ctrl-C reaches next-server's children too.
 set -m
-NODE_ENV=production node node_modules/next/dist/bin/next start --hostname 127.0.0.1 --port "$PORT" &
+NODE_ENV=production node node_modules/next/dist/bin/next start --hostname "${RUNNEL_HOST:-127.0.0.1}" --port "$PORT" &
 APP_PID=$!
 set +m
 wait "$APP_PID"

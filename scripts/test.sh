@@ -5,37 +5,40 @@ source "$(dirname "$0")/common.sh"
 
 export RUNNEL_PG_PORT="${RUNNEL_TEST_PG_PORT:-5489}"
 export RUNNEL_DB_NAME="${RUNNEL_TEST_DB_NAME:-runnel_test}"
-export DATABASE_URL="postgres://runnel@127.0.0.1:$RUNNEL_PG_PORT/$RUNNEL_DB_NAME"
 export PORT="${RUNNEL_TEST_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$PORT"
 export RUNNEL_ENV=test
 # Its own fake object storage (port, data folder, pid files), apart from `npm start`'s.
 export RUNNEL_S3_PORT="${RUNNEL_TEST_S3_PORT:-9402}"
-export RUNNEL_S3_DIR=".runtime/test/s3"
+export RUNNEL_S3_DIR="$(runnel_state_dir)/s3-test"
 export RUNNEL_S3_ENDPOINT="http://127.0.0.1:$RUNNEL_S3_PORT"
 export RUNNEL_RUNTIME_DIR=".runtime/test"
 rm -rf "$RUNNEL_S3_DIR"
-PGDATA_DIR="$ROOT/.pgdata-test"
 
 ensure_node_packages
 ensure_postgres_binaries
 [ -x /usr/bin/chromium ] || apt_install chromium
 ensure_session_secret
-start_postgres "$PGDATA_DIR" "$RUNNEL_PG_PORT"
+start_postgres test "$RUNNEL_PG_PORT"
+export DATABASE_URL="$(database_url "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME")"
+TEST_PGDATA_DIR="$PGDATA_DIR"
 cleanup() {
   trap - INT TERM EXIT
   bash scripts/fakes.sh stop || true
-  stop_postgres "$PGDATA_DIR"
+  stop_postgres "$TEST_PGDATA_DIR"
 }
 trap cleanup INT TERM EXIT
 
+step() { log "── $1"; }
+
 # A fresh test database every run, so tests never depend on leftovers.
-pg_run "$PG_BIN/dropdb" -h 127.0.0.1 -p "$RUNNEL_PG_PORT" -U runnel --if-exists "$RUNNEL_DB_NAME"
+pg_client "$PG_BIN/dropdb" -h 127.0.0.1 -p "$RUNNEL_PG_PORT" -U runnel --if-exists "$RUNNEL_DB_NAME"
 ensure_database "$RUNNEL_PG_PORT" "$RUNNEL_DB_NAME"
 migrate_and_seed
-bash scripts/fakes.sh start
 
-step() { log "── $1"; }
+step "set-up: a second npm start keeps the first one's data"
+bash scripts/check-setup.sh
+bash scripts/fakes.sh start
 step "type check (tsc --noEmit)"
 npx tsc --noEmit
 step "lint (eslint)"

@@ -87,7 +87,7 @@ module.exports = {
         pipes: JSON.stringify([]),
         settings: JSON.stringify({ defaultCoverM: 3 * FT, waterTemperatureC: 10 }),
         winter: null,
-        status: 'draft', checked_by: '', revision: 1,
+        revision: 1,
         created_by: DESIGNER_ID, updated_by: DESIGNER_ID, created_at: now, updated_at: now,
       }], { transaction });
     });

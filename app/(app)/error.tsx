@@ -1,11 +1,7 @@
 'use client';
 
+import { SegmentError } from '@/components/ui/segment-error';
+
 export default function AppError({ reset }: { error: Error; reset: () => void }) {
-  return (
-    <div role="alert" className="rounded-lg border border-clay-100 bg-clay-50 p-6">
-      <h1 className="text-lg font-semibold text-clay-700">This page could not be loaded</h1>
-      <p className="mt-1 text-sm text-clay-700">Nothing was changed. It may be a passing problem with the server.</p>
-      <button type="button" onClick={reset} className="mt-3 rounded-md bg-clay-600 px-3 py-1.5 text-sm text-white">Try again</button>
-    </div>
-  );
+  return <SegmentError what="This page" reset={reset} />;
 }

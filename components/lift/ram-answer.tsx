@@ -66,7 +66,9 @@ function SurgeCompare({ plan, units }: { plan: RamPlanResult; units: UnitSystem 
       <h3 className="font-semibold text-creek-900">Surge at the pump</h3>
       <p className="text-creek-800">
         Each beat stops the drive column: about {formatQuantity('head', surge.surgeHeadM, units)} of surge (a·v/g with a ={' '}
-        {formatNumber(surge.waveSpeedMs, 0)} m/s, v = {formatNumber(surge.driveVelocityMs, 2)} m/s). Against a shut delivery line the pump can build about{' '}
+        {formatNumber(surge.waveSpeedMs, 0)} m/s and v = {formatQuantity('velocity', surge.driveVelocityMs, units)}, the drive velocity when the waste valve shuts; the beat&apos;s mean is{' '}
+        {formatQuantity('velocity', surge.meanDriveVelocityMs, units)}). The drive pipe loses{' '}
+        {formatQuantity('head', surge.driveFrictionM, units)} of the fall to friction. Against a shut delivery line the pump can build about{' '}
         <strong className="tabular">{formatQuantity('head', surge.peakHeadAtPumpM, units)}</strong>
         {rating !== null ? (
           <> against a delivery pipe rated for <strong className="tabular">{formatQuantity('head', rating, units)}</strong>{over ? ': above its rating.' : '.'}</>

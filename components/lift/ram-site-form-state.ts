@@ -1,4 +1,5 @@
 import { findPipe, PIPE_SERIES } from '@/hydraulics/catalogue/index';
+import type { RamEfficiencyTableId } from '@/hydraulics/ram/efficiency-table';
 import type { RamSiteRecord } from '@/lib/lift/records';
 import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units';
 import { numberFrom, numberOrNull } from './typed-number';
@@ -27,6 +28,7 @@ export interface RamSiteFormState {
   sizeClassId: string;
   pumpCount: string;
   measuredEfficiencyPercent: string;
+  efficiencyTableId: RamEfficiencyTableId;
   notes: string;
 }
 
@@ -34,7 +36,7 @@ export function emptyRamSiteForm(): RamSiteFormState {
   return {
     name: '', sourceId: '', tankId: '', driveFlow: '', fall: '', driveLength: '', driveBore: '', driveMaterial: 'steel', driveRigid: 'auto',
     lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: 'custom', pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
-    sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', notes: '',
+    sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', efficiencyTableId: 'trade-pocketbook', notes: '',
   };
 }
 
@@ -66,6 +68,7 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
     sizeClassId: site.sizeClassId ?? '',
     pumpCount: String(site.pumpCount),
     measuredEfficiencyPercent: site.measuredEfficiency === null ? '' : String(Number((site.measuredEfficiency * 100).toPrecision(4))),
+    efficiencyTableId: site.efficiencyTableId,
     notes: site.notes,
   };
 }
@@ -104,6 +107,7 @@ export function ramSiteInputFrom(state: RamSiteFormState, units: UnitSystem) {
     sizeClassId: state.sizeClassId || null,
     pumpCount: numberFrom(state.pumpCount),
     measuredEfficiency: efficiency === null ? null : efficiency / 100,
+    efficiencyTableId: state.efficiencyTableId,
     notes: state.notes,
   };
 }

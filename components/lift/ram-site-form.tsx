@@ -1,6 +1,7 @@
 'use client';
 
 import { useMemo, useState, type FormEvent } from 'react';
+import { RAM_EFFICIENCY_TABLES } from '@/hydraulics/ram/efficiency-table';
 import { RAM_SIZE_CLASSES } from '@/hydraulics/ram/size-classes';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
@@ -108,6 +109,12 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
           id={`${prefix}-efficiency`} label="Measured efficiency" unit="%" value={state.measuredEfficiencyPercent} onChange={(value) => set('measuredEfficiencyPercent', value)}
           errors={form.fields.measuredEfficiency} hint="Leave blank to use the published table"
         />
+        <SelectField
+          id={`${prefix}-efficiencyTable`} label="Efficiency table" value={state.efficiencyTableId}
+          onChange={(event) => set('efficiencyTableId', event.target.value as RamSiteFormState['efficiencyTableId'])} errors={form.fields.efficiencyTableId}
+        >
+          {Object.values(RAM_EFFICIENCY_TABLES).map((table) => <option key={table.id} value={table.id}>{table.label}</option>)}
+        </SelectField>
       </fieldset>
       <DeliveryPipeFields state={state} set={set} fields={form.fields} routes={routes} units={units} />
       <TextAreaField id={`${prefix}-notes`} label="Notes" rows={2} value={state.notes} onChange={(event) => set('notes', event.target.value)} errors={form.fields.notes} />

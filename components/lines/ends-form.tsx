@@ -84,7 +84,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
             <UnitNumberInput id="start-outlet" label="Grade at the pump outlet, pumping" unit={units.length} value={L(start.outletHeadM)} disabled={!canEdit}
               onCommit={(v) => setStart({ ...start, outletHeadM: toM(v!) }, 'change the pump outlet head')} />
             <UnitNumberInput id="start-shutoff" label="Grade with the line shut" unit={units.length} optional value={start.shutoffHeadM === undefined ? undefined : L(start.shutoffHeadM)} disabled={!canEdit}
-              hint="Empty: same as pumping"
+              hint="Empty: 1.25 × the pump's head above the pipe (common practice); enter the shut-off head from the pump curve"
               onCommit={(v) => setStart({ kind: 'pump', outletHeadM: start.outletHeadM, ...(v === undefined ? {} : { shutoffHeadM: toM(v) }) }, 'change the pump shut-off head')} />
           </>
         )}

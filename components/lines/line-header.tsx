@@ -6,8 +6,8 @@ import { standaloneSvg } from '@/lib/chart/svg-node';
 import type { LineRecord } from '@/lib/data/lines';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
+import { workingCopyStamp } from '@/lib/review/stamp';
 import { formatQuantity, type DisplayUnits } from '@/lib/units';
-import { LINE_STATUS_LABELS } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
 import type { useLineDraft } from './use-line-draft';
 
@@ -33,9 +33,9 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
 
   function exportSvg() {
     if (!analysis) return;
-    const title = `${projectName}: ${line.name}, revision ${draft.revision}`;
-    const scene = profileScene(analysis, { units, devices: draft.design.devices, width: 1200, title }, 'export');
-    downloadText(standaloneSvg(scene.root), reportFileName(line.name, draft.revision, 'svg', 'profile'), 'image/svg+xml');
+    const title = `${projectName}: ${line.name}, working copy`;
+    const scene = profileScene(analysis, { units, devices: draft.design.devices, width: 1200, title, stamp: workingCopyStamp(line.preparedBy) }, 'export');
+    downloadText(standaloneSvg(scene.root), reportFileName(line.name, null, 'svg', 'profile'), 'image/svg+xml');
   }
 
   return (
@@ -45,7 +45,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
           <h1 className="text-2xl font-semibold text-creek-900">{line.name}</h1>
           <p className="text-sm text-creek-700">
             Along {line.routeName ?? 'a removed route'}{c ? `, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}` : ''} ·
-            {' '}revision {draft.revision} · {LINE_STATUS_LABELS[line.status]}{line.checkedBy ? ` · checked by ${line.checkedBy}` : ''}
+            {' '}working copy, save {draft.revision} · review and approval are on the project&apos;s <a className="underline" href={`/projects/${line.projectId}/reviews`}>Reviews</a> page
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
@@ -62,7 +62,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
           )}
           <Button tone="quiet" className="py-1 text-xs" onClick={exportSvg} disabled={!analysis}>Profile as SVG</Button>
           {saved ? (
-            <a href={`/api/lines/${line.id}/report`} download={reportFileName(line.name, draft.revision, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
+            <a href={`/api/lines/${line.id}/report`} download={reportFileName(line.name, null, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
               PDF report
             </a>
           ) : (

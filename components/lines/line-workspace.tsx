@@ -1,7 +1,7 @@
 'use client';
 
 import { useMemo, useRef, useState } from 'react';
-import { applyLineFixes, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
+import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
 import type { LineRecord } from '@/lib/data/lines';
@@ -31,7 +31,9 @@ import { ResultsTables } from './results-tables';
 import { SettingsForm } from './settings-form';
 import { StretchTable } from './stretch-table';
 import { useLineDraft } from './use-line-draft';
+import { reportFileName } from '@/lib/lines/file-names';
 import { WarningsPanel } from './warnings-panel';
+import { NetworkFlowsStrip } from './network-flows-strip';
 import { WinterPanel } from './winter-panel';
 
 export interface LineWorkspaceProps {
@@ -64,7 +66,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
   const winter = useMemo(
-    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
+    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
     [analysis, design.winter, context.frostDepthM, stations],
   );
   const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;
@@ -72,8 +74,13 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   function selectWarning(index: number) {
     if (!analysis) return;
     setSelected(index);
-    const range = warningRange(analysis.warnings[index]);
-    setView(viewAround(range.fromM, range.toM, firstM, lastM));
+    const w = analysis.warnings[index];
+    const range = warningRange(w);
+    // A grouped item shows all its small highs or lows, not only the real one.
+    const members = w.memberChainagesM ?? [];
+    const fromM = Math.min(range.fromM, ...members);
+    const toM = Math.max(range.toM, ...members);
+    setView(viewAround(fromM, toM, firstM, lastM));
     profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
   }
 
@@ -111,7 +118,12 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               Winter: the pipe lies shallower than the site&apos;s frost depth and the line is not drained. See <a className="underline" href="#winter">Winter</a> below for the fix.
             </p>
           )}
-          <WarningsPanel warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
+          {analysis.settings.heightScatterM > 0.1 && (
+            <p className="text-sm text-creek-700" data-testid="survey-scatter-note">
+              Heights on this route scatter by about {formatQuantity('length', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
+            </p>
+          )}
+          <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
         </section>
       )}
 
@@ -131,6 +143,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
             onPlaceKind={setPlaceKind}
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
+          <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
           <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
@@ -183,7 +196,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       </Panel>
       {analysis && (
         <Panel title="Results">
-          <ResultsTables analysis={analysis} units={units} lineName={line.name} revision={draft.revision} onHover={setHoverM} />
+          <ResultsTables analysis={analysis} units={units} lineName={line.name} onHover={setHoverM} />
         </Panel>
       )}
       {canEdit && (

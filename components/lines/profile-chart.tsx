@@ -4,7 +4,7 @@ import { useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointer
 import type { LineDevice } from '@/hydraulics/index';
 import { indexAtOrBefore } from '@/lib/chart/profile-frame';
 import { profileScene } from '@/lib/chart/profile-scene';
-import type { ProfileChartData } from '@/lib/chart/profile-types';
+import type { ProfileChartData, ProfileChartOptions, ProfilePin } from '@/lib/chart/profile-types';
 import { panView, zoomView, type ChainageView } from '@/lib/chart/profile-view';
 import type { DisplayUnits } from '@/lib/units';
 import { SvgNodeView } from './svg-node-view';
@@ -22,13 +22,17 @@ export interface ProfileChartProps {
   /** Called with the chainage clicked (placing a device), when set. */
   onPick?: (chainageM: number) => void;
   pickLabel?: string;
+  /** Review comments pinned at chainages (a layer of the same drawing). */
+  pins?: readonly ProfilePin[];
+  /** An earlier revision's grade line, drawn dashed beside this one. */
+  earlierGrade?: ProfileChartOptions['earlierGrade'];
 }
 
 /**
  * The long profile on screen: the pure drawing from lib/chart plus a pointer layer for hover,
  * click-to-place, drag to pan and wheel to zoom on chainage.
  */
-export function ProfileChart({ data, devices, units, view, onViewChange, exaggeration, highlight, hoverM, onHover, onPick, pickLabel }: ProfileChartProps) {
+export function ProfileChart({ data, devices, units, view, onViewChange, exaggeration, highlight, hoverM, onHover, onPick, pickLabel, pins, earlierGrade }: ProfileChartProps) {
   const boxRef = useRef<HTMLDivElement>(null);
   const svgRef = useRef<HTMLDivElement>(null);
   const captureRef = useRef<SVGRectElement>(null);
@@ -47,7 +51,10 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
     return () => observer.disconnect();
   }, []);
 
-  const scene = useMemo(() => profileScene(data, { units, devices, width, view, exaggeration, highlight }, 'screen'), [data, units, devices, width, view, exaggeration, highlight]);
+  const scene = useMemo(
+    () => profileScene(data, { units, devices, width, view, exaggeration, highlight, pins, earlierGrade }, 'screen'),
+    [data, units, devices, width, view, exaggeration, highlight, pins, earlierGrade],
+  );
   const { frame } = scene;
 
   const chainageAtEvent = (clientX: number) => {

@@ -31,7 +31,7 @@ function Table<R>({ caption, columns, rows, rowKey, onRowHover }: { caption: str
 }
 
 /** Results per station and per stretch: the accessible reading of the chart, with CSV files. */
-export function ResultsTables({ analysis, units, lineName, revision, onHover }: { analysis: LineAnalysis; units: DisplayUnits; lineName: string; revision: number; onHover: (chainageM: number | null) => void }) {
+export function ResultsTables({ analysis, units, lineName, onHover }: { analysis: LineAnalysis; units: DisplayUnits; lineName: string; onHover: (chainageM: number | null) => void }) {
   const t = analysis.settings.waterTemperatureC;
   const [page, setPage] = useState(0);
   const stations = useMemo(() => stationRows(analysis), [analysis]);
@@ -46,14 +46,14 @@ export function ResultsTables({ analysis, units, lineName, revision, onHover }: 
       <div className="space-y-2">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h3 className="text-sm font-semibold text-creek-900">Per stretch</h3>
-          <Button tone="quiet" className="py-1 text-xs" onClick={() => downloadText(tableCsv(rCols, analysis.stretches), reportFileName(lineName, revision, 'csv', 'stretches'), 'text/csv')}>Download stretches CSV</Button>
+          <Button tone="quiet" className="py-1 text-xs" onClick={() => downloadText(tableCsv(rCols, analysis.stretches), reportFileName(lineName, null, 'csv', 'stretches'), 'text/csv')}>Download stretches CSV</Button>
         </div>
         <Table caption="Results per stretch" columns={rCols} rows={analysis.stretches} rowKey={(s) => String(s.index)} />
       </div>
       <div className="space-y-2">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h3 className="text-sm font-semibold text-creek-900">Per station ({stations.length} points, stations and inserted points)</h3>
-          <Button tone="quiet" className="py-1 text-xs" onClick={() => downloadText(tableCsv(sCols, stations), reportFileName(lineName, revision, 'csv', 'stations'), 'text/csv')} data-testid="stations-csv">Download stations CSV</Button>
+          <Button tone="quiet" className="py-1 text-xs" onClick={() => downloadText(tableCsv(sCols, stations), reportFileName(lineName, null, 'csv', 'stations'), 'text/csv')} data-testid="stations-csv">Download stations CSV</Button>
         </div>
         <Table caption="Results per station" columns={sCols} rows={shown} rowKey={(r, i) => `${r.chainageM}-${i}`} onRowHover={(r) => onHover(r ? r.chainageM : null)} />
         {pages > 1 && (

@@ -6,7 +6,7 @@ import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
 type Change = (next: LineDesign, label: string) => string | null;
-type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge'>;
+type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge' | 'heightScatterM'>;
 
 /** Analysis settings; an empty field falls back to the core's default (shown as the hint). */
 export function SettingsForm({ design, units, change, canEdit }: { design: LineDesign; units: DisplayUnits; change: Change; canEdit: boolean }) {
@@ -52,7 +52,7 @@ export function SettingsForm({ design, units, change, canEdit }: { design: LineD
       {field('velocityMinMs', 'Lowest velocity', units.velocity, ...V, inUnits(d.velocityMinMs, V, units.velocity))}
       {field('velocityMaxMs', 'Highest velocity', units.velocity, ...V, inUnits(d.velocityMaxMs, V, units.velocity))}
       {field('minResidualHeadM', 'Minimum residual at outlets', units.head, ...H, inUnits(d.minResidualHeadM, H, units.head))}
-      {field('siphonLimitHeadM', 'Siphon limit', units.head, ...H, inUnits(d.siphonLimitHeadM, H, units.head))}
+      {field('siphonLimitHeadM', 'Siphon limit', units.head, ...H, `${inUnits(d.siphonLimitHeadM, H, units.head)} at sea level, scaled to the site's air pressure`)}
       {field('airPointToleranceM', 'High/low point tolerance', units.length, ...L, inUnits(d.airPointToleranceM, L, units.length))}
       {field('siteAltitudeM', 'Site altitude', units.length, ...L, 'highest ground of the line')}
       <label className="flex items-center gap-2 self-center text-sm text-creek-900">

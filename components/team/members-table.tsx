@@ -32,7 +32,7 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
             {members.map((m) => (
               <tr key={m.userId} className="border-t border-creek-50">
                 <td className="px-4 py-2.5 font-medium text-creek-900">{m.name}{m.userId === selfId && <span className="ml-1 text-xs text-creek-600">(you)</span>}</td>
-                <td className="px-4 py-2.5 text-creek-700">{m.email}</td>
+                <td className="px-4 py-2.5 text-creek-700">{m.email ?? <span className="text-creek-500">not shown to clients</span>}</td>
                 <td className="px-4 py-2.5">
                   {manage ? (
                     <select

@@ -5,6 +5,8 @@ import {
   PE_ISO4427_ROWS,
   PE_ISO4427_SDRS,
   PE_ISO4427_SOURCE,
+  isoMeanBoreMm,
+  isoWallToleranceMm,
 } from './data/pe-iso4427';
 import {
   PVC_D2241_HDS_PSI,
@@ -110,7 +112,9 @@ export function buildPeIso4427Series(grade: 'pe100' | 'pe80', sdr: (typeof PE_IS
   for (const row of PE_ISO4427_ROWS) {
     const wallMm = row.wallMm[column];
     if (wallMm === null) continue;
-    const insideDiameterM = (row.outsideDiameterMm - 2 * wallMm) / 1000;
+    // Flow bore from the mean diameter and mean wall; the printed minimum wall stays the pipe's wall.
+    const insideDiameterM = isoMeanBoreMm(row.outsideDiameterMm, row.outsideToleranceMm, wallMm) / 1000;
+    const meanWallM = (wallMm + isoWallToleranceMm(wallMm) / 2) / 1000;
     const wallM = wallMm / 1000;
     pipes.push({
       id: `${id}-${row.outsideDiameterMm}mm`,
@@ -120,7 +124,7 @@ export function buildPeIso4427Series(grade: 'pe100' | 'pe80', sdr: (typeof PE_IS
       insideDiameterM,
       wallM,
       pressureRatingPa: pn * BAR_PA,
-      ...materialFields(grade, insideDiameterM, wallM),
+      ...materialFields(grade, insideDiameterM, meanWallM),
       source: `${PE_ISO4427_SOURCE}; ${gradeLabel} σ = ${PE_ISO4427_DESIGN_STRESS_MPA[grade]} MPa`,
       sdr,
     });

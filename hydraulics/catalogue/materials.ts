@@ -13,7 +13,7 @@ export interface MaterialProperties {
 }
 
 const SMOOTH_PIPE_ROUGHNESS_SOURCE =
-  'Hydraulic Institute, Engineering Data Book: smooth pipe ε ≤ 0.000005 ft (1.5 µm), as quoted in REFERENCES §1.5 [R19]';
+  'Hydraulic Institute, Engineering Data Book: smooth pipe ε ≤ 0.000005 ft (1.5 µm), as quoted in core.md §1.5 [R19]';
 
 /** Material grades used by the catalogue series. */
 export const MATERIAL_GRADES = {
@@ -25,7 +25,7 @@ export const MATERIAL_GRADES = {
     sources: {
       hazenWilliamsC: 'hydro-canada technical data: "C = 150 for PVC and CPVC" [R19]',
       roughnessM: SMOOTH_PIPE_ROUGHNESS_SOURCE,
-      elasticModulusPa: '400,000 psi (2.76 GPa), from memory (REFERENCES §5 [M])',
+      elasticModulusPa: '400,000 psi (2.76 GPa), from memory (core.md §5 [M])',
     },
   },
   'pe-astm': {
@@ -34,9 +34,9 @@ export const MATERIAL_GRADES = {
     roughnessM: 1.5e-6,
     elasticModulusPa: 0.9e9,
     sources: {
-      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (REFERENCES §1.4 [R19])',
+      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (core.md §1.4 [R19])',
       roughnessM: SMOOTH_PIPE_ROUGHNESS_SOURCE,
-      elasticModulusPa: '130,000 psi (≈0.9 GPa) for PE3408, from memory (REFERENCES §5 [M])',
+      elasticModulusPa: '130,000 psi (≈0.9 GPa) for PE3408, from memory (core.md §5 [M])',
     },
   },
   pe100: {
@@ -45,7 +45,7 @@ export const MATERIAL_GRADES = {
     roughnessM: 1.5e-6,
     elasticModulusPa: 1.0e9,
     sources: {
-      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (REFERENCES §1.4 [R19])',
+      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (core.md §1.4 [R19])',
       roughnessM: SMOOTH_PIPE_ROUGHNESS_SOURCE,
       elasticModulusPa: 'VESBO PE100 brochure p.3: E 750-1250 MPa [R12]; midpoint 1.0 GPa taken',
     },
@@ -56,9 +56,9 @@ export const MATERIAL_GRADES = {
     roughnessM: 1.5e-6,
     elasticModulusPa: 0.8e9,
     sources: {
-      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (REFERENCES §1.4 [R19])',
+      hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (core.md §1.4 [R19])',
       roughnessM: SMOOTH_PIPE_ROUGHNESS_SOURCE,
-      elasticModulusPa: '0.8 GPa, from memory (REFERENCES §5 [M])',
+      elasticModulusPa: '0.8 GPa, from memory (core.md §5 [M])',
     },
   },
   'steel-galvanized': {
@@ -69,7 +69,7 @@ export const MATERIAL_GRADES = {
     sources: {
       hazenWilliamsC: 'Boesch Engineering C-factor table: galvanized iron 110 [R19] (120 is often quoted; the lower value is kept)',
       roughnessM: 'Idelchik, Handbook of Hydraulic Resistance, 4th ed.: ordinary galvanization 0.10-0.15 mm (via fluids [R16]); upper value',
-      elasticModulusPa: '207 GPa, from memory (REFERENCES §5 [M])',
+      elasticModulusPa: '207 GPa, from memory (core.md §5 [M])',
     },
   },
 } as const satisfies Record<string, MaterialProperties>;

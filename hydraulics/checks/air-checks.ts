@@ -1,9 +1,10 @@
 import { valueAtChainage } from '../profile/grid';
 import type { LineProfile } from '../profile/result-types';
+import { highLowToleranceM } from '../profile/settings';
 import type { LineDevice, LineDeviceKind } from '../profile/types';
 import { findTurningPoints } from './air-points';
 import type { LineWarning } from './types';
-import { chainage, metres } from './wording';
+import { chainage, chainageRange, metres } from './wording';
 
 interface Neighbourhood {
   point: number;
@@ -30,7 +31,7 @@ function neighbourhoods(points: readonly number[], others: readonly number[], ch
 /**
  * A device covers a turning point when it lies between the neighbouring turning points and its
  * pipe elevation is within the tolerance of the point's (so a valve a little off the exact summit
- * on a flat top still counts).
+ * on a flat top, or anywhere within the survey's scatter of it, still counts).
  */
 function isCovered(
   spot: Neighbourhood,
@@ -38,38 +39,69 @@ function isCovered(
   kinds: readonly LineDeviceKind[],
   profile: LineProfile,
   summit: boolean,
+  toleranceM: number,
 ): boolean {
   const { chainageM, pipeElevationM } = profile.points;
   const z = pipeElevationM[spot.point];
-  const tolerance = profile.settings.airPointToleranceM;
   return devices.some((device) => {
     if (!kinds.includes(device.kind) || device.chainageM <= spot.beforeM || device.chainageM >= spot.afterM) return false;
     const zDevice = valueAtChainage(chainageM, pipeElevationM, device.chainageM);
-    return summit ? zDevice >= z - tolerance : zDevice <= z + tolerance;
+    return summit ? zDevice >= z - toleranceM : zDevice <= z + toleranceM;
   });
+}
+
+/** The small turning points (base tolerance) inside a real one's neighbourhood, as chainages. */
+function membersOf(spot: Neighbourhood, small: readonly number[], chainageM: Float64Array): number[] {
+  return small.map((i) => chainageM[i]).filter((c) => c > spot.beforeM && c < spot.afterM);
+}
+
+function groupWords(kind: 'highs' | 'lows', members: readonly number[], scatterM: number): string {
+  if (members.length < 2) return '';
+  return (
+    `${members.length} small ${kind} between ${chainageRange(members[0], members[members.length - 1])} lie within ` +
+    `the survey's height scatter of ${metres(scatterM)}; `
+  );
 }
 
 /**
  * Air-release valves at summits and washouts at sags of the PIPE profile (Missouri NRCS,
  * *Watering Systems for Serious Graziers* p.29 [R10]; air pockets cost head and can stop a
  * gravity line, Wikipedia "Air lock" [R7]). Points already served by a device are skipped.
+ * A point counts only where it stands out by more than `highLowToleranceM` (the survey's height
+ * scatter on a walked route); the smaller wiggles around it become members of its one item.
  */
 export function airAndSedimentWarnings(profile: LineProfile, devices: readonly LineDevice[]): LineWarning[] {
   const { chainageM, pipeElevationM, pressureHeadM } = profile.points;
-  const { highs, lows } = findTurningPoints(pipeElevationM, profile.settings.airPointToleranceM);
+  const toleranceM = highLowToleranceM(profile.settings);
+  const scatterM = profile.settings.heightScatterM;
+  const { highs, lows } = findTurningPoints(pipeElevationM, toleranceM);
+  const small = toleranceM > profile.settings.airPointToleranceM ? findTurningPoints(pipeElevationM, profile.settings.airPointToleranceM) : { highs, lows };
   const warnings: LineWarning[] = [];
   for (const spot of neighbourhoods(highs, lows, chainageM)) {
-    if (isCovered(spot, devices, ['air-release-valve', 'break-pressure-tank'], profile, true)) continue;
+    if (isCovered(spot, devices, ['air-release-valve', 'break-pressure-tank'], profile, true, toleranceM)) continue;
     const c = chainageM[spot.point];
+    const z = pipeElevationM[spot.point];
+    const members = membersOf(spot, small.highs, chainageM);
+    const group = groupWords('highs', members, scatterM);
     const suction = pressureHeadM[spot.point] < 0 && profile.flowM3s > 0;
+    const summit = group ? `the real summit is at ${chainage(c)} (${metres(z)})` : `The pipe has a summit at ${chainage(c)} (${metres(z)})`;
     warnings.push({
       code: 'air-release-needed',
       severity: 'warning',
       at: { chainageM: c },
+      values: {
+        chainageM: c,
+        elevationM: z,
+        underSuction: suction,
+        scatterM,
+        memberCount: members.length,
+        ...(members.length > 1 ? { fromM: members[0], toM: members[members.length - 1] } : {}),
+      },
+      ...(members.length > 1 ? { memberChainagesM: members } : {}),
       message: suction
-        ? `The pipe has a summit at ${chainage(c)} (${metres(pipeElevationM[spot.point])}) where the pressure is below ` +
+        ? `${group}${summit} where the pressure is below ` +
           'atmospheric while flowing: air gathers there, but an automatic air valve would let air IN and break the flow.'
-        : `The pipe has a summit at ${chainage(c)} (${metres(pipeElevationM[spot.point])}): air gathers at high points, ` +
+        : `${group}${summit}: air gathers at high points, ` +
           'narrows the pipe and can stop a gravity line altogether.',
       suggestedFix: suction
         ? 'Lower the pipe at this summit so the grade line stays above it, then fit an air-release valve; until then use a manual vent that only releases air.'
@@ -78,15 +110,26 @@ export function airAndSedimentWarnings(profile: LineProfile, devices: readonly L
     });
   }
   for (const spot of neighbourhoods(lows, highs, chainageM)) {
-    if (isCovered(spot, devices, ['washout'], profile, false)) continue;
+    if (isCovered(spot, devices, ['washout'], profile, false, toleranceM)) continue;
     const c = chainageM[spot.point];
+    const z = pipeElevationM[spot.point];
+    const members = membersOf(spot, small.lows, chainageM);
+    const group = groupWords('lows', members, scatterM);
     warnings.push({
       code: 'washout-needed',
       severity: 'info',
       at: { chainageM: c },
+      values: {
+        chainageM: c,
+        elevationM: z,
+        scatterM,
+        memberCount: members.length,
+        ...(members.length > 1 ? { fromM: members[0], toM: members[members.length - 1] } : {}),
+      },
+      ...(members.length > 1 ? { memberChainagesM: members } : {}),
       message:
-        `The pipe has a sag at ${chainage(c)} (${metres(pipeElevationM[spot.point])}): silt and sand settle at low points, ` +
-        'and the line cannot be drained there for frost or repairs.',
+        `${group}${group ? `the real sag is at ${chainage(c)} (${metres(z)})` : `The pipe has a sag at ${chainage(c)} (${metres(z)})`}: ` +
+        'silt and sand settle at low points, and the line cannot be drained there for frost or repairs.',
       suggestedFix: `Fit a washout (drain valve) at ${chainage(c)}.`,
       fixes: [{ kind: 'add-device', device: 'washout', chainageM: c }],
     });

@@ -15,21 +15,40 @@ function residualWarning(model: ProfileModel): LineWarning[] {
   const capacity = Math.min(...profile.reaches.map((reach) => reach.capacityM3s));
   const upsize = smallestUpsizeForResidual(model);
   const lastChainageM = profile.points.chainageM[profile.points.chainageM.length - 1];
+  const stretch = upsize ? profile.stretches[upsize.stretchIndex] : undefined;
+  const toLabel = upsize ? (findPipe(upsize.toPipeId)?.label ?? upsize.toPipeId) : undefined;
   let suggestedFix =
     `No single pipe change is enough: use larger pipe over several stretches, lower the design flow ` +
     `(the line carries ${litresPerSecond(capacity)} by gravity to this outlet), or set the outlet lower.`;
-  if (upsize) {
-    const stretch = profile.stretches[upsize.stretchIndex];
-    const label = findPipe(upsize.toPipeId)?.label ?? upsize.toPipeId;
+  if (upsize && stretch) {
     suggestedFix =
       `Change stretch ${upsize.stretchIndex + 1} (${chainageRange(stretch.fromM, stretch.toM)}) from ` +
-      `${stretch.pipe.label} to ${label}: the outlet then has ${metres(upsize.residualHeadM)}.`;
+      `${stretch.pipe.label} to ${toLabel}: the outlet then has ${metres(upsize.residualHeadM)}.`;
   }
   return [
     {
       code: 'residual-below-target',
       severity: end.residualHeadM < 0 ? 'danger' : 'warning',
       at: { chainageM: lastChainageM },
+      values: {
+        chainageM: lastChainageM,
+        flowM3s: profile.flowM3s,
+        capacityM3s: capacity,
+        headM: end.residualHeadM,
+        limitHeadM: end.targetResidualHeadM,
+        ...(upsize && stretch
+          ? {
+              stretchIndex: upsize.stretchIndex,
+              fromM: stretch.fromM,
+              toM: stretch.toM,
+              pipeId: stretch.pipe.id,
+              pipeLabel: stretch.pipe.label,
+              toPipeId: upsize.toPipeId,
+              toPipeLabel: toLabel,
+              fixedHeadM: upsize.residualHeadM,
+            }
+          : {}),
+      },
       message:
         `At the design flow of ${litresPerSecond(profile.flowM3s)} the outlet has ${metres(end.residualHeadM)} of ` +
         `pressure, below the ${metres(end.targetResidualHeadM)} it needs: friction and fittings use up too much ` +
@@ -49,6 +68,7 @@ function noFlowWarning(profile: LineProfile): LineWarning[] {
       code: 'no-gravity-flow',
       severity: 'danger',
       at: { fromM: reach.fromM, toM: reach.toM },
+      values: { fromM: reach.fromM, toM: reach.toM, otherHeadM: reach.startHeadM, limitHeadM: reach.requiredEndHeadM },
       message:
         `From ${chainageRange(reach.fromM, reach.toM)} the water starts at ${metres(reach.startHeadM)} but must ` +
         `arrive at ${metres(reach.requiredEndHeadM)} or more: there is no head left to drive a flow by gravity.`,
@@ -68,6 +88,13 @@ function tankWarnings(profile: LineProfile): LineWarning[] {
         code: 'tank-not-reached',
         severity: 'danger',
         at: { chainageM: reach.toM },
+        values: {
+          chainageM: reach.toM,
+          flowM3s: profile.flowM3s,
+          headM: reach.arrivingHeadM,
+          limitHeadM: reach.requiredEndHeadM,
+          capacityM3s: reach.capacityM3s,
+        },
         message:
           `At ${litresPerSecond(profile.flowM3s)} the grade reaches the break-pressure tank at ${chainage(reach.toM)} ` +
           `at ${metres(reach.arrivingHeadM)}, below its water level of ${metres(reach.requiredEndHeadM)}: the tank ` +

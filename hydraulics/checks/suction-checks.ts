@@ -1,9 +1,29 @@
 import type { LimitZone, LineProfile } from '../profile/result-types';
-import type { LineWarning } from './types';
+import type { LineWarning, WarningValues } from './types';
 import { chainage, chainageRange, metres, PRESSURE_CAUTION } from './wording';
 
 function zonesOf(profile: LineProfile, kind: LimitZone['kind']): LimitZone[] {
   return profile.zones.filter((zone) => zone.kind === kind);
+}
+
+/** The figures every zone warning carries; `withinScatter` when the worst excess is inside the survey's scatter. */
+export function zoneValues(zone: LimitZone, profile: LineProfile): WarningValues {
+  const scatterM = profile.settings.heightScatterM;
+  return {
+    fromM: zone.fromM,
+    toM: zone.toM,
+    worstChainageM: zone.worstChainageM,
+    scatterM,
+    withinScatter: scatterM > 0 && zone.worstExcessM <= scatterM,
+  };
+}
+
+/** A sentence for a result that the survey cannot tell from its limit, or ''. */
+export function scatterWords(values: WarningValues): string {
+  return values.withinScatter
+    ? `The worst figure lies within the survey's height scatter of ${metres(values.scatterM ?? 0)} of the limit: ` +
+        'it may or may not be passed; check the heights here with a level before deciding. '
+    : '';
 }
 
 /**
@@ -14,45 +34,63 @@ function zonesOf(profile: LineProfile, kind: LimitZone['kind']): LimitZone[] {
  */
 export function suctionWarnings(profile: LineProfile): LineWarning[] {
   const { limits } = profile;
-  const warnings: LineWarning[] = zonesOf(profile, 'negative-pressure').map((zone) => ({
-    code: 'negative-pressure',
-    severity: 'warning',
-    at: { fromM: zone.fromM, toM: zone.toM },
-    message:
-      `While flowing, the pressure falls below atmospheric from ${chainageRange(zone.fromM, zone.toM)} ` +
-      `(down to -${metres(zone.worstExcessM)} at ${chainage(zone.worstChainageM)}): the pipe runs above the ` +
-      `hydraulic grade line. Suction can draw dirty water in at joints and lets air come out of the water ` +
-      `and block the line. ${PRESSURE_CAUTION}`,
-    suggestedFix:
-      'Lay the pipe lower through this range or route it below the grade line; or use a larger pipe ' +
-      'upstream so less head is lost before it.',
-    fixes: [],
-  }));
+  const warnings: LineWarning[] = zonesOf(profile, 'negative-pressure').map((zone) => {
+    const values: WarningValues = { ...zoneValues(zone, profile), headM: -zone.worstExcessM, limitHeadM: 0 };
+    return {
+      code: 'negative-pressure',
+      severity: 'warning',
+      at: { fromM: zone.fromM, toM: zone.toM },
+      values,
+      message:
+        `While flowing, the pressure falls below atmospheric from ${chainageRange(zone.fromM, zone.toM)} ` +
+        `(down to -${metres(zone.worstExcessM)} at ${chainage(zone.worstChainageM)}): the pipe runs above the ` +
+        `hydraulic grade line. Suction can draw dirty water in at joints and lets air come out of the water ` +
+        `and block the line. ${scatterWords(values)}${PRESSURE_CAUTION}`,
+      suggestedFix:
+        'Lay the pipe lower through this range or route it below the grade line; or use a larger pipe ' +
+        'upstream so less head is lost before it.',
+      fixes: [],
+    };
+  });
   if (limits.siphonLimitHeadM < limits.vapourLimitHeadM) {
     for (const zone of zonesOf(profile, 'siphon-limit')) {
+      const values: WarningValues = {
+        ...zoneValues(zone, profile),
+        headM: -(limits.siphonLimitHeadM + zone.worstExcessM),
+        limitHeadM: limits.siphonLimitHeadM,
+      };
       warnings.push({
         code: 'siphon-limit',
         severity: 'danger',
         at: { fromM: zone.fromM, toM: zone.toM },
+        values,
         message:
           `Suction passes the practical siphon limit of ${metres(limits.siphonLimitHeadM)} from ` +
           `${chainageRange(zone.fromM, zone.toM)}: water may start to vaporise there and the flow can break. ` +
-          PRESSURE_CAUTION,
+          `${scatterWords(values)}${PRESSURE_CAUTION}`,
         suggestedFix: 'Lower the pipe through this range or choose a route that stays below the grade line.',
         fixes: [],
       });
     }
   }
   for (const zone of zonesOf(profile, 'vapour-limit')) {
+    const values: WarningValues = {
+      ...zoneValues(zone, profile),
+      headM: -(limits.vapourLimitHeadM + zone.worstExcessM),
+      limitHeadM: limits.vapourLimitHeadM,
+      atmosphericHeadM: limits.atmosphericHeadM,
+      siteAltitudeM: limits.siteAltitudeM,
+    };
     warnings.push({
       code: 'vapour-limit',
       severity: 'danger',
       at: { fromM: zone.fromM, toM: zone.toM },
+      values,
       message:
         `Suction would pass the vapour limit of ${metres(limits.vapourLimitHeadM)} (atmospheric head ` +
         `${metres(limits.atmosphericHeadM)} at ${metres(limits.siteAltitudeM)} altitude less the vapour head) from ` +
         `${chainageRange(zone.fromM, zone.toM)}: the water boils, the column breaks and the computed flow ` +
-        `cannot happen. ${PRESSURE_CAUTION}`,
+        `cannot happen. ${scatterWords(values)}${PRESSURE_CAUTION}`,
       suggestedFix: 'Lower the pipe through this range, route around the rise, or pump instead of siphoning.',
       fixes: [],
     });

@@ -14,12 +14,14 @@ export function velocityWarnings(profile: LineProfile): LineWarning[] {
   for (const stretch of profile.stretches) {
     const v = Math.abs(stretch.velocityMs);
     const at = { fromM: stretch.fromM, toM: stretch.toM };
+    const base = { ...at, velocityMs: v, stretchIndex: stretch.index, pipeId: stretch.pipe.id, pipeLabel: stretch.pipe.label };
     const where = chainageRange(stretch.fromM, stretch.toM);
     if (v < velocityMinMs) {
       warnings.push({
         code: 'velocity-low',
         severity: 'info',
         at,
+        values: { ...base, limitVelocityMs: velocityMinMs },
         message:
           `Water moves at ${speed(v)} in ${stretch.pipe.label} from ${where}, below the self-cleaning ` +
           `${speed(velocityMinMs)}: silt settles and air bubbles are not carried through.`,
@@ -32,6 +34,7 @@ export function velocityWarnings(profile: LineProfile): LineWarning[] {
         code: 'velocity-high',
         severity: 'warning',
         at,
+        values: { ...base, limitVelocityMs: velocityMaxMs, ...(next ? { toPipeId: next.id, toPipeLabel: next.label } : {}) },
         message:
           `Water moves at ${speed(v)} in ${stretch.pipe.label} from ${where}, above ${speed(velocityMaxMs)}: ` +
           'suspended sand wears the pipe and fittings, and a sudden stop gives a larger pressure surge.',

@@ -1,5 +1,6 @@
 import { DEFAULT_DEMAND_FIGURES } from './default-figures';
 import type { DemandFigures } from './figures';
+import { peakOfSummedFlows, useFlowIntervals } from './flow-timeline';
 import { assertArray } from './guards';
 import { HOURS_PER_DAY } from './hourly-pattern';
 import { useDemand } from './use-demand';
@@ -19,7 +20,8 @@ export interface DailyDemandResult {
   /** Peak flow of all uses together, m³/s. */
   peakFlowM3s: number;
   /**
-   * `coincident-hourly` when every use has an hourly shape (peak of the summed profile);
+   * `coincident-hourly` when every use has a time of day (peak of the summed flow rates, never
+   * below any single use's peak);
    * `sum-of-peaks` when any use has only a peak factor, so peaks are assumed to coincide (safe side).
    */
   peakMethod: 'coincident-hourly' | 'sum-of-peaks';
@@ -36,9 +38,11 @@ export function dailyDemand({ uses, figures = DEFAULT_DEMAND_FIGURES }: DailyDem
     });
   }
   const anyNominal = results.some((result) => result.hourlyShapeNominal);
+  // Peaks from the summed rates, not the hourly volumes: a 30-minute window's rate is twice its hour's mean.
+  const largestSingle = Math.max(0, ...results.map((result) => result.peakFlowM3s));
   const peakFlowM3s = anyNominal
     ? results.reduce((sum, result) => sum + result.peakFlowM3s, 0)
-    : Math.max(0, ...hourlyVolumeM3) / 3600;
+    : Math.max(largestSingle, peakOfSummedFlows(uses.flatMap((use, i) => useFlowIntervals(use.delivery, results[i].dailyVolumeM3))));
   return {
     uses: results,
     dailyVolumeM3: results.reduce((sum, result) => sum + result.dailyVolumeM3, 0),

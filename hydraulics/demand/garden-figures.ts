@@ -1,7 +1,7 @@
 import { INCH_M } from '../constants';
 import type { GardenDepthFigure } from './figures';
 
-/** Published garden water depths (REFERENCES.md §3.7). */
+/** Published garden water depths (core.md §3.7). */
 export const GARDEN_DEPTH_FIGURES: readonly GardenDepthFigure[] = [
   {
     id: 'vegetables-inch-per-week',

@@ -86,3 +86,34 @@ export function assertHourOfDay(value: unknown, field: string, index?: number): 
   assertNonNegativeInteger(value, field, index);
   if (value >= HOURS_PER_DAY) throw new HydraulicsInputError(field, `must be an hour from 0 to 23, got ${value}`, index);
 }
+
+/**
+ * Multipliers of the mean flow for each hour (fraction × 24), so a steady draw `q` becomes
+ * `q × multiplier[h]` in hour h and the day's volume is unchanged. Checks the pattern first.
+ */
+export function hourlyMultipliers(hourlyFractions: readonly number[], field = 'hourlyFractions'): number[] {
+  assertHourlyPattern(hourlyFractions, field);
+  return hourlyFractions.map((fraction) => fraction * HOURS_PER_DAY);
+}
+
+/** A day's draw as a mean flow and the share of it in each hour, e.g. for an outlet of a network. */
+export interface DrawPattern {
+  /** Mean flow over the day, m³/s. */
+  meanFlowM3s: number;
+  /** 24 hourly fractions summing to 1 (even when the day's volume is zero). */
+  hourlyFractions: number[];
+}
+
+/** Mean flow and hourly shape of 24 hourly volumes (m³), as `dailyDemand` gives them. */
+export function drawPatternOf(hourlyVolumeM3: readonly number[]): DrawPattern {
+  if (hourlyVolumeM3.length !== HOURS_PER_DAY) throw new HydraulicsInputError('hourlyVolumeM3', `needs ${HOURS_PER_DAY} hourly volumes, got ${hourlyVolumeM3.length}`);
+  hourlyVolumeM3.forEach((volume, hour) => {
+    assertFiniteNumber(volume, 'hourlyVolumeM3', hour);
+    if (volume < 0) throw new HydraulicsInputError('hourlyVolumeM3', `hour ${hour} is negative (${volume})`, hour);
+  });
+  const daily = hourlyVolumeM3.reduce((sum, volume) => sum + volume, 0);
+  return {
+    meanFlowM3s: daily / (HOURS_PER_DAY * 3600),
+    hourlyFractions: daily > 0 ? hourlyVolumeM3.map((volume) => volume / daily) : uniformPattern(),
+  };
+}

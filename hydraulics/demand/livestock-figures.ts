@@ -45,7 +45,7 @@ const ROWS: readonly Row[] = [
 ];
 
 /**
- * Per-head daily water for range livestock (REFERENCES.md §3.6). The source is Canadian and
+ * Per-head daily water for range livestock (core.md §3.6). The source is Canadian and
  * prints **imperial** gallons (4.546 L), not US gallons.
  */
 export const LIVESTOCK_DEMAND_FIGURES: readonly LivestockDemandFigure[] = ROWS.map((row) => ({

@@ -7,7 +7,7 @@ const WHO_TN9 = 'WHO Technical Notes for Emergencies No. 9';
 const UNDP = 'UNDP HDR 2006 (via digital-campus)';
 const RAM_NOTE = 'Water for the World, Technical Note RWS.4.D.5 Designing a Hydraulic Ram Pump (USAID)';
 
-/** Published per-person daily figures (REFERENCES.md §3.5). */
+/** Published per-person daily figures (core.md §3.5). */
 export const PER_PERSON_DEMAND_FIGURES: readonly PerPersonDemandFigure[] = [
   {
     id: 'survival-minimum',

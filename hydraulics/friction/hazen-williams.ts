@@ -3,7 +3,7 @@ import { pipeAreaM2 } from './pipe-flow';
 
 /**
  * Hazen-Williams friction loss, SI, in the exact form implied by the velocity equation
- * V = k · C · R^0.63 · S^0.54 with k = 0.849 (m, s) and R = D/4 (REFERENCES §1.1: "Water Transmission
+ * V = k · C · R^0.63 · S^0.54 with k = 0.849 (m, s) and R = D/4 (core.md §1.1: "Water Transmission
  * and Distribution Systems" slides [R18]). Solved for head loss this is
  *   h = 10.6742 · L · Q^1.85185 / (C^1.85185 · D^4.87037),
  * i.e. exponents 1/0.54 and 2.63/0.54. The rounded textbook form 10.67/1.852/4.8704 differs by

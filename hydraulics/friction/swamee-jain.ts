@@ -20,7 +20,7 @@ export function assertFrictionFactorOptions({ reynolds, relativeRoughness }: Fri
 /**
  * Swamee-Jain (1976, J. Hydraul. Div. 102(5):657-664) explicit Darcy friction factor:
  * f = 0.25 / [log10(ε/(3.7D) + 5.74/Re^0.9)]². Stated range 5e3 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2,
- * within about ±1 % of Colebrook there (REFERENCES §1.3). Used as the Colebrook starting guess.
+ * within about ±1 % of Colebrook there (core.md §1.3). Used as the Colebrook starting guess.
  */
 export function swameeJainFrictionFactor(options: FrictionFactorOptions): number {
   assertFrictionFactorOptions(options);

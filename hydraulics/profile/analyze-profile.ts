@@ -4,6 +4,7 @@ import type { PipeSpec } from '../catalogue/pipe-spec';
 import { buildProfileGrid, type ProfileGrid } from './grid';
 import { eventChainages, pointEvents, tanksOf } from './line-events';
 import { pressureLimits } from './pressure-limits';
+import { pumpShutoffGradeM } from './pump-shutoff';
 import { findGravityFlow } from './find-flow';
 import { buildReaches, type Reach } from './reaches';
 import { resolveStretchPipes } from './resolve-pipes';
@@ -15,9 +16,9 @@ import type { LineEnd, LineInput, LineStart } from './types';
 import { assertLineInput } from './validate-line';
 import { computeZones, zoneCrossings } from './zones';
 
-function startHeads(start: LineStart): { flowingM: number; staticM: number } {
+function startHeads(start: LineStart, pumpPipeElevationM: number): { flowingM: number; staticM: number } {
   if (start.kind === 'water-level') return { flowingM: start.levelM, staticM: start.levelM };
-  return { flowingM: start.outletHeadM, staticM: start.shutoffHeadM ?? start.outletHeadM };
+  return { flowingM: start.outletHeadM, staticM: pumpShutoffGradeM(start, pumpPipeElevationM) };
 }
 
 function endTarget(end: LineEnd, lastPipeElevationM: number, defaultResidualM: number) {
@@ -57,7 +58,7 @@ export function profileModel(input: LineInput): ProfileModel {
   const grid = buildProfileGrid(input.stations, input.stretches, eventChainages(input, declaredTanks), settings.defaultCoverM);
   const n = grid.chainageM.length;
   const { events, tanks } = pointEvents(grid, input, declaredTanks);
-  const heads = startHeads(input.start);
+  const heads = startHeads(input.start, grid.pipeElevationM[0]);
   const target = endTarget(input.end, grid.pipeElevationM[n - 1], settings.minResidualHeadM);
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);
   const gravity = findGravityFlow(reaches, pipes, method, temperatureC);
@@ -83,7 +84,7 @@ export function profileModel(input: LineInput): ProfileModel {
     velocityMs[j] = hydraulics.velocityMs[stretchIndex[j]];
   }
   const stretches = stretchResults(
-    input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor,
+    input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor, lines.staticDropAtPointM,
   );
   const limits = pressureLimits(settings, grid.groundElevationM);
   const surgeOn = settings.checkSurge && flowM3s > 0;
@@ -95,6 +96,7 @@ export function profileModel(input: LineInput): ProfileModel {
     allowableHeadM: Float64Array.from(stretches, (s) => s.allowableHeadM),
     surgeHeadM: Float64Array.from(stretches, (s) => (surgeOn ? s.surgeHeadM : 0)),
     limits,
+    heightScatterM: settings.heightScatterM,
   });
   const reachResults: ReachResult[] = reaches.map((reach, r) => ({
     fromM: grid.chainageM[reach.fromPoint],
@@ -147,7 +149,7 @@ export function profileModel(input: LineInput): ProfileModel {
     zones,
     crossings: zoneCrossings(zones, grid.chainageM[0], grid.chainageM[n - 1]),
     tanks,
-    settings: { ...settings, siteAltitudeM: limits.siteAltitudeM },
+    settings: { ...settings, siteAltitudeM: limits.siteAltitudeM, siphonLimitHeadM: limits.siphonLimitHeadM },
   };
   return { profile, grid, reaches, pipes };
 }

@@ -26,6 +26,12 @@ export interface LimitRangeArgs {
   side: 'below' | 'above';
   /** Excess that still counts as within the limit (rounding of a value placed exactly on it), m. @default 1e-6 */
   toleranceM?: number;
+  /**
+   * Hysteresis, m: a range only ends once the value comes back inside the limit by more than
+   * this; ranges separated by a smaller return merge into one with its worst point (the survey
+   * cannot resolve the gap). @default 0
+   */
+  mergeWithinM?: number;
 }
 
 /**
@@ -38,11 +44,15 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
   const { chainageM, valueM, dropAtPointM, limitM, side } = args;
   const sign = side === 'below' ? -1 : 1;
   const tolerance = args.toleranceM ?? 1e-6;
+  const mergeWithinM = Math.max(args.mergeWithinM ?? 0, 0);
   const ranges: LimitRange[] = [];
   let open = false;
   let fromM = 0;
   let worstExcessM = 0;
   let worstChainageM = 0;
+  // A closed range waits here until the value has come back inside by more than mergeWithinM.
+  let pending: LimitRange | null = null;
+  let recoveryM = 0;
   const note = (excess: number, atM: number): void => {
     if (excess > worstExcessM) {
       worstExcessM = excess;
@@ -50,9 +60,31 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
     }
   };
   // Ends stay exact; a range whose worst excess is within the tolerance is rounding, not a finding.
+  const flush = (): void => {
+    if (pending !== null && pending.worstExcessM > tolerance) ranges.push(pending);
+    pending = null;
+  };
   const close = (toM: number): void => {
-    if (toM > fromM && worstExcessM > tolerance) ranges.push({ fromM, toM, worstExcessM, worstChainageM });
     open = false;
+    if (!(toM > fromM)) return;
+    pending = { fromM, toM, worstExcessM, worstChainageM };
+    recoveryM = 0;
+    if (mergeWithinM === 0) flush();
+  };
+  const openAt = (atM: number): void => {
+    open = true;
+    if (pending !== null) {
+      ({ fromM, worstExcessM, worstChainageM } = pending);
+      pending = null;
+    } else {
+      fromM = atM;
+      worstExcessM = 0;
+    }
+  };
+  const inside = (byM: number): void => {
+    if (pending === null) return;
+    recoveryM = Math.max(recoveryM, byM);
+    if (recoveryM > mergeWithinM) flush();
   };
   const n = chainageM.length;
   const fixedLimit = typeof limitM === 'number' ? limitM : 0;
@@ -64,23 +96,21 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
     const c1 = chainageM[j + 1];
     const a = sign * (valueM[j] - limit);
     const b = sign * (valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]) - limit);
-    if (a > 0 && !open) {
-      open = true;
-      fromM = c0;
-      worstExcessM = 0;
-    } else if (a <= 0 && open) {
-      close(c0);
-    }
+    if (a > 0 && !open) openAt(c0);
+    else if (a <= 0 && open) close(c0);
+    if (a <= 0) inside(-a);
     if (open) note(a, c0);
     if (a > 0 && b <= 0) {
       close(c0 + ((c1 - c0) * a) / (a - b));
+      inside(-b);
     } else if (a <= 0 && b > 0) {
-      open = true;
-      fromM = c0 + ((c1 - c0) * -a) / (b - a);
-      worstExcessM = 0;
+      openAt(c0 + ((c1 - c0) * -a) / (b - a));
+    } else if (b <= 0) {
+      inside(-b);
     }
     if (open) note(b, c1);
   }
   if (open) close(chainageM[n - 1]);
+  flush();
   return ranges;
 }

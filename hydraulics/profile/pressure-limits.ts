@@ -1,7 +1,20 @@
 import { atmosphericHeadM, vapourHeadM } from '../water';
 import { SITE_ALTITUDE_RANGE_M } from './validate/settings';
 import type { PressureLimits } from './result-types';
-import type { ResolvedLineSettings } from './settings';
+import { DEFAULT_LINE_SETTINGS, type ResolvedLineSettings } from './settings';
+
+/**
+ * The practical siphon limit at a site, m of suction: the textbook's 7.5 m at sea level (where the
+ * atmosphere is 10.33 m of water, [R7]: "siphonage up to about 7.5 m negative head, where
+ * vaporisation may begin"; the course note in [R7] gives -7.6 m against 1 atm = 10.33 m) kept as
+ * the same share of the local atmospheric head (ISA, hydraulics/water.ts). Scaling by that share
+ * is common practice, no source; it keeps a margin below the vapour limit at any altitude, where a
+ * fixed 7.5 m passes the vapour limit above about 2,300 m.
+ */
+export function practicalSiphonLimitHeadM(siteAtmosphericHeadM: number, temperatureC: number): number {
+  const seaLevel = atmosphericHeadM({ altitudeM: 0, temperatureC });
+  return DEFAULT_LINE_SETTINGS.siphonLimitHeadM * (siteAtmosphericHeadM / seaLevel);
+}
 
 /**
  * Suction limits at the site: atmospheric head (ISA, hydraulics/water.ts) minus the vapour head is
@@ -21,6 +34,6 @@ export function pressureLimits(settings: ResolvedLineSettings, groundElevationM:
     atmosphericHeadM: atmospheric,
     vapourHeadM: vapour,
     vapourLimitHeadM: atmospheric - vapour,
-    siphonLimitHeadM: settings.siphonLimitHeadM,
+    siphonLimitHeadM: settings.siphonLimitHeadM ?? practicalSiphonLimitHeadM(atmospheric, settings.waterTemperatureC),
   };
 }

@@ -144,5 +144,5 @@ export interface LineProfile {
   /** Chainages and water levels of the break-pressure tanks used, in order. */
   tanks: { chainageM: number; waterLevelM: number }[];
   /** Settings with defaults filled in. */
-  settings: ResolvedLineSettings & { siteAltitudeM: number };
+  settings: ResolvedLineSettings & { siteAltitudeM: number; siphonLimitHeadM: number };
 }

@@ -9,9 +9,11 @@ export interface ResolvedLineSettings {
   velocityMaxMs: number;
   minResidualHeadM: number;
   airPointToleranceM: number;
+  heightScatterM: number;
   /** Undefined until the profile supplies its highest ground elevation. */
   siteAltitudeM: number | undefined;
-  siphonLimitHeadM: number;
+  /** Undefined until the profile scales the sea-level default to the site (see `pressureLimits`). */
+  siphonLimitHeadM: number | undefined;
   defaultCoverM: number;
   checkSurge: boolean;
 }
@@ -20,12 +22,13 @@ export interface ResolvedLineSettings {
  * Defaults. Velocity band: Jordan, *A Handbook of Gravity-Flow Water Systems*, p.53 (via ITACA) [R1].
  * Residual head at an outlet: ">= 3 m at each tapstand", Akvopedia gravity water supply [R2].
  * Siphon limit: "siphonage up to about 7.5 m negative head, where vaporisation may begin",
- * Taylor & Francis/CRC hydraulics textbook, ch. 42 [R7].
+ * Taylor & Francis/CRC hydraulics textbook, ch. 42 [R7], at sea level (1 atm = 10.33 m); the
+ * analysis scales it to the site's atmospheric head (see `practicalSiphonLimitHeadM`).
  * Safety factor 1: published pressure classes already contain the standard's design factor
  * (ISO 4427 C >= 1.25, ASTM D2241 2.0) [R12][R13]; the user raises it for extra margin.
  * Air-point tolerance 1 m and 20 C water: common practice, no source.
  */
-export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM'>> = Object.freeze({
+export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM' | 'siphonLimitHeadM'> & { siphonLimitHeadM: number }> = Object.freeze({
   frictionMethod: 'hazen-williams',
   waterTemperatureC: 20,
   safetyFactor: 1,
@@ -33,6 +36,7 @@ export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAlt
   velocityMaxMs: 3.0,
   minResidualHeadM: 3,
   airPointToleranceM: 1,
+  heightScatterM: 0,
   siphonLimitHeadM: 7.5,
   defaultCoverM: 0,
   checkSurge: true,
@@ -50,9 +54,19 @@ export function resolveLineSettings(settings: LineSettings | undefined): Resolve
     velocityMaxMs: s.velocityMaxMs ?? d.velocityMaxMs,
     minResidualHeadM: s.minResidualHeadM ?? d.minResidualHeadM,
     airPointToleranceM: s.airPointToleranceM ?? d.airPointToleranceM,
+    heightScatterM: s.heightScatterM ?? d.heightScatterM,
     siteAltitudeM: s.siteAltitudeM,
-    siphonLimitHeadM: s.siphonLimitHeadM ?? d.siphonLimitHeadM,
+    siphonLimitHeadM: s.siphonLimitHeadM,
     defaultCoverM: s.defaultCoverM ?? d.defaultCoverM,
     checkSurge: s.checkSurge ?? d.checkSurge,
   };
+}
+
+/**
+ * The one rule for how far a high or low point of the pipe must stand out to count (air-release
+ * valves, washouts, winter drain points): the line's tolerance, or the survey's height scatter
+ * when that is larger, because a bump smaller than the scatter cannot be told from it.
+ */
+export function highLowToleranceM(settings: Pick<ResolvedLineSettings, 'airPointToleranceM' | 'heightScatterM'>): number {
+  return Math.max(settings.airPointToleranceM, settings.heightScatterM);
 }

@@ -15,7 +15,11 @@ export function allowableHeadM(pipe: PipeSpec, temperatureC: number, safetyFacto
   return pressurePaToHeadM(deratedPressureRatingPa(pipe, temperatureC) / safetyFactor, temperatureC);
 }
 
-/** Per-stretch lengths, losses, ratings, surge and highest static pressure. */
+/**
+ * Per-stretch lengths, losses, ratings, surge and highest static pressure. The highest static
+ * pressure counts the head ARRIVING at a break-pressure tank (value + drop at the point), which is
+ * the highest the pipe above the tank sees; the tank's reset only acts downstream of it.
+ */
 export function stretchResults(
   stretches: readonly LineStretch[],
   pipes: readonly PipeSpec[],
@@ -24,6 +28,7 @@ export function stretchResults(
   staticPressureHeadM: Float64Array,
   temperatureC: number,
   safetyFactor: number,
+  staticDropAtPointM: Float64Array | null = null,
 ): StretchResult[] {
   const count = stretches.length;
   const slopeLengthM = new Float64Array(count);
@@ -31,7 +36,8 @@ export function stretchResults(
   for (let j = 0; j < grid.pieceStretch.length; j++) {
     const s = grid.pieceStretch[j];
     slopeLengthM[s] += grid.pieceSlopeLengthM[j];
-    const high = Math.max(staticPressureHeadM[j], staticPressureHeadM[j + 1]);
+    const arriving = staticPressureHeadM[j + 1] + (staticDropAtPointM === null ? 0 : staticDropAtPointM[j + 1]);
+    const high = Math.max(staticPressureHeadM[j], arriving);
     if (high > maxStatic[s]) maxStatic[s] = high;
   }
   return stretches.map((stretch, s) => ({

@@ -68,7 +68,8 @@ export type LineStart =
   /**
    * A pump delivering into the line: `outletHeadM` is the hydraulic grade (m above datum) at the
    * pump outlet while delivering the flow; `shutoffHeadM` the grade with the line shut
-   * (the static line). @default shutoffHeadM = outletHeadM
+   * (the static line), never below `outletHeadM`. @default the pipe at the pump plus 1.25 × the
+   * pump's head above it (DEFAULT_SHUTOFF_TO_DUTY_HEAD)
    */
   | { kind: 'pump'; outletHeadM: number; shutoffHeadM?: number };
 
@@ -104,9 +105,19 @@ export interface LineSettings {
   minResidualHeadM?: number;
   /** Smallest rise/fall of the pipe profile that counts as a high or low point, m. @default 1 */
   airPointToleranceM?: number;
+  /**
+   * How far the surveyed heights along this line scatter about the real ground, m (see
+   * `surveyHeightScatterM`). High and low points must stand out by more than this, limit zones
+   * closer than it can resolve merge, and results within it of their limit say so.
+   * @default 0 (heights taken as exact: a level book or hose level)
+   */
+  heightScatterM?: number;
   /** Altitude of the site for atmospheric pressure, m. @default the highest ground elevation of the line */
   siteAltitudeM?: number;
-  /** Practical limit of negative pressure head in a siphon, m (positive number). @default 7.5 ([R7]) */
+  /**
+   * Practical limit of negative pressure head in a siphon, m (positive number).
+   * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
+   */
   siphonLimitHeadM?: number;
   /** Cover used for stations that give none, m. @default 0 */
   defaultCoverM?: number;

@@ -14,6 +14,8 @@ export interface ZoneInputs {
   /** Sudden-stop surge head per stretch, m (all zero to skip the surge zones). */
   surgeHeadM: Float64Array;
   limits: PressureLimits;
+  /** Survey height scatter, m: zones closer than it can resolve merge (see `findLimitRanges`). @default 0 */
+  heightScatterM?: number;
 }
 
 /**
@@ -24,8 +26,9 @@ export interface ZoneInputs {
 export function computeZones(z: ZoneInputs): LimitZone[] {
   const { grid, lines } = z;
   const chainageM = grid.chainageM;
-  const flowing = { chainageM, valueM: z.pressureHeadM, dropAtPointM: lines.hydraulicDropAtPointM };
-  const still = { chainageM, valueM: z.staticPressureHeadM, dropAtPointM: lines.staticDropAtPointM };
+  const mergeWithinM = z.heightScatterM ?? 0;
+  const flowing = { chainageM, valueM: z.pressureHeadM, dropAtPointM: lines.hydraulicDropAtPointM, mergeWithinM };
+  const still = { chainageM, valueM: z.staticPressureHeadM, dropAtPointM: lines.staticDropAtPointM, mergeWithinM };
   const tag = (kind: LimitKind) => (range: Omit<LimitZone, 'kind'>): LimitZone => ({ kind, ...range });
   const zones: LimitZone[] = [
     ...findLimitRanges({ ...flowing, limitM: 0, side: 'below' }).map(tag('negative-pressure')),

@@ -1,4 +1,4 @@
-import type { RamEfficiencyTable } from './efficiency-table';
+import { RAM_EFFICIENCY_TABLES, type RamEfficiencyTable } from './efficiency-table';
 import { headRules } from './feasibility-heads';
 import { CLEMSON, metres, NO_SOURCE, USDA_BULLETIN, WATER_FOR_THE_WORLD } from './rule-sources';
 import type { PlanCheck } from './plan-check';
@@ -38,12 +38,19 @@ function efficiencyRules(context: RamCheckContext): PlanCheck[] {
   const first = points[0].liftToFallRatio;
   const last = points[points.length - 1].liftToFallRatio;
   const ratio = context.effectiveLiftToFallRatio;
-  if (ratio >= last) {
+  if (ratio > last) {
+    const lastEfficiency = points[points.length - 1].efficiency;
+    const held = lastEfficiency > 0
+      ? `its last efficiency (${Math.round(lastEfficiency * 100)} %) is held, not extrapolated`
+      : 'it delivers nothing there';
+    const wider = Object.values(RAM_EFFICIENCY_TABLES).find((table) => table.points[table.points.length - 1].liftToFallRatio >= ratio);
     return [{
       code: 'lift-ratio-beyond-table',
-      severity: context.measuredEfficiency ? 'warning' : 'error',
-      message: `Delivery head is ${ratio.toFixed(1)} times the fall; the efficiency table ends at ${last} with nothing delivered.`,
-      fix: 'Gain fall (set the pump lower or take the drive water from higher up), lower the tank, or lift in two stages.',
+      severity: 'warning',
+      message: `Delivery head is ${ratio.toFixed(1)} times the fall, beyond the end of the table in use ("${context.efficiencyTable.label}", up to ${last}); ${held}.`,
+      fix: wider && wider.id !== context.efficiencyTable.id && !context.measuredEfficiency
+        ? `Choose the "${wider.label}" table, which reaches ${wider.points[wider.points.length - 1].liftToFallRatio}:1, or measure the efficiency at commissioning; gaining fall or lifting in two stages also helps.`
+        : 'Gain fall (set the pump lower or take the drive water from higher up), lower the tank, lift in two stages, or measure the efficiency at commissioning.',
       source,
     }];
   }

@@ -1,5 +1,13 @@
 export { type PlanCheck, type PlanCheckSeverity, passesChecks } from './plan-check';
-export { RAM_EFFICIENCY_TABLE, ramEfficiencyForRatio, type RamEfficiencyTable, type RamEfficiencyLookup } from './efficiency-table';
+export {
+  BLAKE_RAM_EFFICIENCY_TABLE,
+  RAM_EFFICIENCY_TABLE,
+  RAM_EFFICIENCY_TABLES,
+  ramEfficiencyForRatio,
+  type RamEfficiencyLookup,
+  type RamEfficiencyTable,
+  type RamEfficiencyTableId,
+} from './efficiency-table';
 export { RAM_SIZE_CLASSES, suggestRamSizeClass, type RamSizeClass } from './size-classes';
 export {
   ramDeliveredFlowM3s,

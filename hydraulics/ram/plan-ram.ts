@@ -3,7 +3,7 @@ import { assertFraction, assertPositive, assertPositiveInteger } from '../demand
 import { tankFillTimeS } from '../storage/tank-fill';
 import { deliveryPipeHydraulics } from './delivery-pipe';
 import { ramDeliveredFlowM3s } from './delivery-formula';
-import { driveColumnSurge, RAM_DRIVE_WAVE_SPEED_SOURCE, RAM_DRIVE_WAVE_SPEEDS_MS } from './drive-surge';
+import { driveColumnSurge, RAM_DRIVE_ROUGHNESS_M, RAM_DRIVE_WAVE_SPEED_SOURCE, RAM_DRIVE_WAVE_SPEEDS_MS } from './drive-surge';
 import { RAM_EFFICIENCY_TABLE, ramEfficiencyForRatio } from './efficiency-table';
 import { ramFeasibilityChecks } from './feasibility';
 import { passesChecks } from './plan-check';
@@ -48,24 +48,39 @@ export function planRamPump(options: RamPlanOptions): RamPlanResult {
   const availablePerPump = driveFlowM3s / pumpCount;
   const driveFlowPerPumpM3s = sizeClass ? Math.min(availablePerPump, sizeClass.maxDriveFlowM3s) : availablePerPump;
   const driveFlowUsedM3s = driveFlowPerPumpM3s * pumpCount;
+  const waveSpeedMs = drivePipe.waveSpeedMs ?? RAM_DRIVE_WAVE_SPEEDS_MS[drivePipe.material];
+  const surge = driveColumnSurge({
+    driveFlowM3s: driveFlowPerPumpM3s,
+    drivePipeInsideDiameterM: drivePipe.insideDiameterM,
+    drivePipeLengthM: drivePipe.lengthM,
+    fallM,
+    waveSpeedMs,
+    roughnessM: RAM_DRIVE_ROUGHNESS_M[drivePipe.material],
+  });
+  if (surge.netFallM <= 0) {
+    throw new HydraulicsInputError(
+      'drivePipe.insideDiameterM',
+      `the drive pipe loses the whole fall (${fallM} m) to friction at this drive flow (${surge.driveFrictionM.toFixed(1)} m): use a wider drive pipe or less drive flow`,
+    );
+  }
+  // The ram is driven by the fall less what the drive pipe loses on the way down.
+  const drivingFallM = surge.netFallM;
   const efficiencyAt = (deliveryHeadM: number): number =>
-    measuredEfficiency ?? ramEfficiencyForRatio(deliveryHeadM / fallM, efficiencyTable).efficiency;
+    measuredEfficiency ?? ramEfficiencyForRatio(deliveryHeadM / drivingFallM, efficiencyTable).efficiency;
   const pipe = deliveryPipeHydraulics(options.deliveryPipe);
   const solved = solveDeliveredFlow({
     liftM,
     frictionM: pipe.frictionM,
     deliveredAtHeadM3s: (deliveryHeadM) =>
-      ramDeliveredFlowM3s({ driveFlowM3s: driveFlowUsedM3s, fallM, deliveryHeadM, efficiency: efficiencyAt(deliveryHeadM) }),
+      ramDeliveredFlowM3s({ driveFlowM3s: driveFlowUsedM3s, fallM: drivingFallM, deliveryHeadM, efficiency: efficiencyAt(deliveryHeadM) }),
   });
   const deliveredFlowM3s = solved.deliveredFlowM3s;
   const deliveryHeadM = liftM + solved.deliveryFrictionM;
-  const waveSpeedMs = drivePipe.waveSpeedMs ?? RAM_DRIVE_WAVE_SPEEDS_MS[drivePipe.material];
-  const surge = driveColumnSurge({ driveFlowM3s: driveFlowPerPumpM3s, drivePipeInsideDiameterM: drivePipe.insideDiameterM, waveSpeedMs });
   const peakHeadAtPumpM = fallM + surge.surgeHeadM;
   const checks = ramFeasibilityChecks({
     fallM,
     liftM,
-    effectiveLiftToFallRatio: deliveryHeadM / fallM,
+    effectiveLiftToFallRatio: deliveryHeadM / drivingFallM,
     measuredEfficiency: measuredEfficiency !== undefined,
     efficiencyTable,
     sizeClass,
@@ -93,7 +108,7 @@ export function planRamPump(options: RamPlanOptions): RamPlanResult {
     efficiencyBasis: measuredEfficiency === undefined ? 'table' : 'measured',
     efficiencySource: measuredEfficiency === undefined ? efficiencyTable.source : 'measured at commissioning',
     liftToFallRatio: liftM / fallM,
-    effectiveLiftToFallRatio: deliveryHeadM / fallM,
+    effectiveLiftToFallRatio: deliveryHeadM / drivingFallM,
     deliveryFrictionM: solved.deliveryFrictionM,
     deliveryHeadM,
     tankFill:

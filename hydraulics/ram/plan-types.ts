@@ -60,14 +60,23 @@ export interface RamPlanResult {
   efficiencySource: string;
   /** Static lift over fall. */
   liftToFallRatio: number;
-  /** (Lift + delivery friction) over fall: the ratio the efficiency is read at. */
+  /** (Lift + delivery friction) over the fall less drive friction: the ratio the efficiency is read at. */
   effectiveLiftToFallRatio: number;
   deliveryFrictionM: number;
   /** Lift plus delivery-pipe friction at the delivered flow, m. */
   deliveryHeadM: number;
   tankFill: { volumeM3: number; fillTimeS: number } | null;
   surge: {
+    /** Mean drive velocity over the beat, m/s. */
+    meanDriveVelocityMs: number;
+    /** Drive velocity when the waste valve shuts, m/s: the surge is worked out from it. */
     driveVelocityMs: number;
+    /** Velocity with the waste valve held open, m/s (the cap on the closing velocity). */
+    freeFlowVelocityMs: number;
+    /** Drive-pipe friction at the mean drive flow, m. */
+    driveFrictionM: number;
+    /** Fall less the drive-pipe friction, m: the head that drives the ram. */
+    netFallM: number;
     waveSpeedMs: number;
     waveSpeedSource: string;
     surgeHeadM: number;

@@ -24,7 +24,7 @@ const ROWS: readonly [number, number, number][] = [
   [100, 235, 360],
 ];
 
-/** Drive-pipe size classes with their usual drive-flow ranges (REFERENCES.md §4.2). */
+/** Drive-pipe size classes with their usual drive-flow ranges (core.md §4.2). */
 export const RAM_SIZE_CLASSES: readonly RamSizeClass[] = ROWS.map(([mm, min, max]) => ({
   id: `drive-${mm}mm`,
   drivePipeNominalMm: mm,

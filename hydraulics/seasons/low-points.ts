@@ -1,6 +1,7 @@
 import { assertArray, assertFiniteNumber, assertNonNegative } from '../demand/guards';
 import { findTurningPoints } from '../checks/air-points';
 import { HydraulicsInputError } from '../errors';
+import { DEFAULT_LINE_SETTINGS } from '../profile/settings';
 
 export interface PipeProfile {
   /** Distance along the pipe, m, strictly increasing. */
@@ -10,7 +11,11 @@ export interface PipeProfile {
 }
 
 export interface LowPointOptions extends PipeProfile {
-  /** A sag must stand out by more than this on both sides to count (filters survey noise), m. @default 0.5 */
+  /**
+   * A sag must stand out by more than this on both sides to count (filters survey noise), m.
+   * @default DEFAULT_LINE_SETTINGS.airPointToleranceM (1 m): the same rule as the washout check, so
+   * a winter drain point and a washout are found at the same sags
+   */
   prominenceM?: number;
 }
 
@@ -41,7 +46,7 @@ export function assertPipeProfile({ chainageM, elevationM }: PipeProfile): void 
  * (`findTurningPoints`, which needs a sag to stand out by more than the prominence on both sides and
  * never reports the ends, which are the source and the outlet).
  */
-export function findLowPoints({ chainageM, elevationM, prominenceM = 0.5 }: LowPointOptions): LowPoint[] {
+export function findLowPoints({ chainageM, elevationM, prominenceM = DEFAULT_LINE_SETTINGS.airPointToleranceM }: LowPointOptions): LowPoint[] {
   assertPipeProfile({ chainageM, elevationM });
   assertNonNegative(prominenceM, 'prominenceM');
   return findTurningPoints(elevationM, prominenceM).lows.map((index) => ({

@@ -10,7 +10,7 @@ export interface WinterLine {
   coverDepthM: number;
   /** Depth frost reaches at the site, m (local code or records). */
   frostDepthM: number;
-  /** Prominence for low points, m. @default 0.5 */
+  /** Prominence for low points, m. @default 1 (the washout rule, see `findLowPoints`) */
   prominenceM?: number;
   /** The designer drains this line for winter whatever its cover (a shallow line is drained in any case). @default false */
   drainForWinter?: boolean;

@@ -10,7 +10,7 @@ export interface VerticalUncertaintyDefault {
 
 /**
  * Default vertical uncertainty per height source, used when the file gives none. Values with a
- * published figure name it (REFERENCES.md §6.4, [R28]); the rest are marked as common practice.
+ * published figure name it (core.md §6.4, [R28]); the rest are marked as common practice.
  */
 export const DEFAULT_VERTICAL_UNCERTAINTY: Readonly<Record<HeightSource, VerticalUncertaintyDefault>> = {
   gps: {

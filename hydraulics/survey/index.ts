@@ -18,6 +18,8 @@ export { reduceLevelBook, assertLevelBook } from './fieldbook/level-book';
 export type { LevelBookReading, LevelBookInput, LevelBookResult, LevelBookMethod, ReducedLevel } from './fieldbook/level-book';
 export { HEIGHT_SOURCES, DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from './height-source';
 export type { HeightSource, VerticalUncertaintyDefault } from './height-source';
+export { surveyHeightScatterM, WALKED_SCATTER_CAP_M } from './height-scatter';
+export type { HeightConfidence } from './height-scatter';
 export { consumerGpsHeightWarning } from './gps-height-warning';
 export type { HeightDecision, GpsHeightWarning } from './gps-height-warning';
 export { applyAcceptedChanges } from './cleanup/proposed-change';

@@ -2,6 +2,7 @@ import { profileFrame, PROFILE_LAYOUT } from './profile-frame';
 import { axesLayer } from './profile-axes';
 import { legendLayer } from './profile-legend';
 import { devicesLayer, highlightLayer, zonesLayer } from './profile-marks';
+import { commentPinsLayer, earlierGradeLayer, stampLayer } from './profile-review';
 import { FONT_FAMILY, PROFILE_COLOURS } from './profile-palette';
 import { gradeLayer, groundLayer, pipeLayer, pressureLayer, staticLayer } from './profile-series';
 import type { ProfileChartData, ProfileChartOptions, ProfileFrame } from './profile-types';
@@ -66,11 +67,14 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
       groundLayer(data, frame, drawnIndices),
       pipeLayer(data, frame, drawnIndices),
       staticLayer(data, frame),
+      earlierGradeLayer(frame, options),
       gradeLayer(data, frame, drawnIndices)),
     el('g', { 'clip-path': `url(#${pressureClip})`, 'data-panel': 'pressure', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.pressureBottom} ${frame.pressureTop}`, 'data-y-domain-m': frame.pressureDomainM.join(' ') },
       pressureLayer(data, frame, drawnIndices)),
     devicesLayer(data, frame, options),
     highlightLayer(frame, options),
+    commentPinsLayer(frame, options),
+    stampLayer(frame, options.stamp),
     legend.node,
   );
   return { root, frame, drawnIndices };

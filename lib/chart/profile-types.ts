@@ -1,4 +1,5 @@
 import type { LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
+import type { ReviewStamp } from '../review/stamp';
 import type { DisplayUnits } from '../units/index';
 
 /** What the profile drawing needs from a line analysis (typed arrays or plain arrays both do). */
@@ -27,6 +28,21 @@ export interface ProfileChartOptions {
   highlight?: { fromM: number; toM: number } | null;
   /** Title drawn at the top (exports carry it; the screen has its own heading). */
   title?: string;
+  /** Review words under the title and the "not for construction" mark (exports of a revision or the working copy). */
+  stamp?: ReviewStamp;
+  /** Review comments pinned at chainages. */
+  pins?: readonly ProfilePin[];
+  /** The hydraulic grade line of an earlier revision, drawn dashed beside this one. */
+  earlierGrade?: { label: string; chainageM: ArrayLike<number>; gradeM: ArrayLike<number> } | null;
+}
+
+export interface ProfilePin {
+  id: string;
+  chainageM: number;
+  /** Short label drawn in the pin (its number in the list). */
+  label: string;
+  resolved: boolean;
+  selected?: boolean;
 }
 
 /** Where everything sits on the drawing; the interactive layer uses it to map pointer to chainage. */

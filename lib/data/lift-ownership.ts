@@ -3,7 +3,7 @@ import type { Model, ModelStatic, Transaction } from 'sequelize';
 import { models } from '../../models';
 import { AppError } from '../errors';
 
-type Owned = 'WaterSource' | 'Tank' | 'RamSite' | 'Route' | 'DemandUse' | 'SeasonalTask';
+type Owned = 'WaterSource' | 'Tank' | 'RamSite' | 'Route' | 'DemandUse' | 'SeasonalTask' | 'Line' | 'NetworkNode';
 
 /** Whether a row of a project-owned table exists and belongs to the project. */
 export async function existsInProject(model: Owned, id: string, projectId: string, transaction?: Transaction): Promise<boolean> {

@@ -60,6 +60,7 @@ export const ramSiteRecord = (row: RamSite): RamSiteRecord => ({
   sizeClassId: row.sizeClassId,
   pumpCount: row.pumpCount,
   measuredEfficiency: row.measuredEfficiency,
+  efficiencyTableId: row.efficiencyTableId ?? 'trade-pocketbook',
   notes: row.notes,
 });
 

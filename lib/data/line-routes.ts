@@ -1,5 +1,6 @@
 import 'server-only';
 import { models } from '../../models';
+import type { HeightSource } from '../../hydraulics/index';
 import type { RouteColumns } from '../lines/route-stations';
 
 export interface RouteChoice {
@@ -41,15 +42,17 @@ export async function routeOwner(routeId: string): Promise<{ projectId: string; 
 /** A route's kept stations in order, as columns. */
 export async function routeColumns(routeId: string): Promise<RouteColumns> {
   const rows = (await models().RoutePoint.findAll({
-    attributes: ['chainageM', 'elevationM', 'latitude', 'longitude'],
+    attributes: ['chainageM', 'elevationM', 'latitude', 'longitude', 'heightSource', 'confidenceM'],
     where: { routeId, excluded: false },
     order: [['seq', 'ASC']],
     raw: true,
-  })) as unknown as { chainageM: number; elevationM: number; latitude: number | null; longitude: number | null }[];
+  })) as unknown as { chainageM: number; elevationM: number; latitude: number | null; longitude: number | null; heightSource: HeightSource; confidenceM: number | null }[];
   return {
     chainageM: rows.map((r) => r.chainageM),
     elevationM: rows.map((r) => r.elevationM),
     latitude: rows.map((r) => r.latitude),
     longitude: rows.map((r) => r.longitude),
+    heightSource: rows.map((r) => r.heightSource),
+    confidenceM: rows.map((r) => r.confidenceM),
   };
 }

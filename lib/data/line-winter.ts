@@ -1,5 +1,5 @@
 import 'server-only';
-import { analyzeLine, HydraulicsInputError } from '../../hydraulics/index';
+import { analyzeLine, highLowToleranceM, HydraulicsInputError } from '../../hydraulics/index';
 import type { WinterLine } from '../../hydraulics/seasons/winter-treatment';
 import { models } from '../../models';
 import { AppError } from '../errors';
@@ -32,7 +32,7 @@ export async function lineWintersForProject(projectId: string): Promise<ProjectL
       const stations = await stationsOfLine(line.routeId, line);
       const analysis = analyzeLine(lineInputOf(line.design, stations, context));
       const plan = lineWinterPlan(
-        { points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM },
+        { points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) },
         line.design.winter,
         context.frostDepthM,
         stations.every((s) => s.coverM === undefined),
@@ -43,7 +43,7 @@ export async function lineWintersForProject(projectId: string): Promise<ProjectL
         profile: { chainageM: Array.from(analysis.points.chainageM), elevationM: Array.from(analysis.points.pipeElevationM) },
         coverDepthM: plan.shallowestCoverM,
         frostDepthM: context.frostDepthM ?? 0,
-        prominenceM: analysis.settings.airPointToleranceM,
+        prominenceM: highLowToleranceM(analysis.settings),
         drainForWinter: drainedByChoice,
       };
       winters.push({ lineId: line.id, name: line.name, plan, winterLine });

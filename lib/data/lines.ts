@@ -1,8 +1,10 @@
 import 'server-only';
+import { linkLineIntoNetwork } from '../../migrations/support/network-from-records.cjs';
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
-import type { Line, LineStatus } from '../../models/line';
+import { recordActivity } from '../activity/record';
+import type { Line } from '../../models/line';
 import { AppError, notFound } from '../errors';
 import { startingDesign } from '../lines/default-design';
 import { lineInputOf } from '../lines/line-input';
@@ -23,10 +25,9 @@ export interface LineRecord {
   notes: string;
   fromChainageM: number | null;
   toChainageM: number | null;
-  status: LineStatus;
-  checkedBy: string;
+  /** Save counter of the working copy (409 on a stale save); review revisions are in lib/data/revisions.ts. */
   revision: number;
-  /** Name of whoever saved the current revision. */
+  /** Name of whoever saved last. */
   preparedBy: string | null;
   design: LineDesign;
   createdAt: string;
@@ -87,8 +88,6 @@ function toRecord(line: Line, people: Map<string, string>, routes: Map<string, s
     notes: line.notes,
     fromChainageM: line.fromChainageM,
     toChainageM: line.toChainageM,
-    status: line.status,
-    checkedBy: line.checkedBy,
     revision: line.revision,
     preparedBy: line.updatedBy ? (people.get(line.updatedBy) ?? null) : null,
     design: designOf(line),
@@ -168,17 +167,17 @@ export async function createLine(projectId: string, userId: string, input: Creat
   const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
   await assertRamSiteInProject(design, projectId);
   assertDesignFits(design, stations, await lineSiteContext(projectId));
-  const line = await models().Line.create({
-    projectId,
-    routeId: input.routeId,
-    name: input.name,
-    notes: input.notes,
-    ...window,
-    ...columnsOf(design),
-    createdBy: userId,
-    updatedBy: userId,
+  const { Line: L, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const line = await L.create(
+      { projectId, routeId: input.routeId, name: input.name, notes: input.notes, ...window, ...columnsOf(design), createdBy: userId, updatedBy: userId },
+      { transaction },
+    );
+    // Every line is a link of its project's network from the moment it exists.
+    await linkLineIntoNetwork(sequelize, transaction, line.id);
+    await recordActivity(transaction, { projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: line.id, summary: `Started line "${line.name}"` });
+    return recordOf(line, transaction);
   });
-  return recordOf(line);
 }
 
 export async function updateLine(lineId: string, userId: string, input: UpdateLineInput): Promise<LineRecord> {
@@ -208,10 +207,16 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     line.revision += 1;
     line.updatedBy = userId;
     await line.save({ transaction });
+    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary: `Edited line "${line.name}"` });
     return recordOf(line, transaction);
   });
 }
 
-export async function deleteLine(lineId: string): Promise<void> {
-  await models().Line.destroy({ where: { id: lineId } });
+export async function deleteLine(lineId: string, userId: string): Promise<void> {
+  await models().sequelize.transaction(async (transaction) => {
+    const line = await models().Line.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!line) throw notFound();
+    await line.destroy({ transaction });
+    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.deleted', subjectType: 'line', subjectId: line.id, summary: `Removed line "${line.name}"`, data: { name: line.name } });
+  });
 }

@@ -4,14 +4,13 @@ import { planRamPump } from '../../hydraulics/ram/plan-ram';
 import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
 import { models } from '../../models';
 import { notFound } from '../errors';
-import { pumpOutletHeadOf, type PumpOutletHead } from '../lift/pump-outlet';
+import type { PumpOutletHead } from '../lift/pump-outlet';
 import { ramPlanOptions } from '../lift/ram-plan';
 import type { RamSiteRecord, RouteOption } from '../lift/records';
-import { buildLiftSummary } from '../lift/summary';
 import type { RamSiteInput } from '../validations/ram-sites';
+import { ramOutletsOf } from '../lift/ram-outlets';
 import { assertReferences } from './lift-ownership';
-import { ramSiteRecord } from './lift-records';
-import { loadLiftRecords } from './lift-summary';
+import { ramSiteRecord, tankRecord } from './lift-records';
 
 export async function planContext(projectId: string, input: RamSiteInput, transaction: Transaction) {
   const { Route, Tank } = models();
@@ -44,6 +43,7 @@ function rowFields(input: RamSiteInput, deliveryLengthM: number) {
     sizeClassId: input.sizeClassId,
     pumpCount: input.pumpCount,
     measuredEfficiency: input.measuredEfficiency,
+    efficiencyTableId: input.efficiencyTableId,
     notes: input.notes,
   };
 }
@@ -95,10 +95,21 @@ export async function deleteRamSite(projectId: string, siteId: string): Promise<
 export type { PumpOutletHead };
 
 /**
- * The pump outlet head of each plannable ram site of a project, for the line designer: a delivery
- * line that starts at a pump outlet takes `workingHeadM` above the pump as its start head.
+ * The pump outlet head of each plannable ram site of a project, for the line designer and the
+ * network's ram-outlet nodes: plans the ram sites only (their tanks and routes), not the whole
+ * lift summary. A delivery line that starts at a pump outlet takes `workingHeadM` above the pump.
  */
 export async function pumpOutletHeadForProject(projectId: string): Promise<PumpOutletHead[]> {
-  const summary = buildLiftSummary(await loadLiftRecords(projectId));
-  return summary.ramSites.flatMap(({ site, plan, tank }) => (plan.ok ? [pumpOutletHeadOf(site, tank, plan.value)] : []));
+  const m = models();
+  const where = { projectId };
+  const [ramSites, tanks, routes] = await Promise.all([
+    m.RamSite.findAll({ where, order: [['createdAt', 'ASC']] }),
+    m.Tank.findAll({ where, order: [['createdAt', 'ASC']] }),
+    m.Route.findAll({ where, attributes: ['id', 'name', 'lengthM'] }),
+  ]);
+  return ramOutletsOf({
+    ramSites: ramSites.map(ramSiteRecord),
+    tanks: tanks.map(tankRecord),
+    routes: routes.map((route) => ({ id: route.id, name: route.name, lengthM: route.lengthM })),
+  });
 }

@@ -1,4 +1,5 @@
 import 'server-only';
+import { recordActivity } from '../activity/record';
 import { createHash, randomUUID } from 'node:crypto';
 import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
@@ -107,6 +108,10 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
         { transaction },
       );
       await insertRoutePoints(r.id, records, transaction);
+      await recordActivity(transaction, {
+        projectId: upload.projectId, actorUserId: upload.userId, kind: 'survey.imported', subjectType: 'route', subjectId: r.id,
+        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${records.length} points)`, data: { fileName: upload.fileName, points: records.length },
+      });
       return toRouteSummary(r, file);
     });
     return { route, warnings: survey.warnings.slice(0, 50) };

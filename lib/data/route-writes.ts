@@ -1,4 +1,5 @@
 import 'server-only';
+import { recordActivity } from '../activity/record';
 import type { Transaction } from 'sequelize';
 import { models } from '../../models';
 import type { Route, RouteSourceFormat } from '../../models/route';
@@ -105,13 +106,19 @@ export async function saveRoutePoints(routeId: string, input: SavePointsInput): 
 }
 
 /** Accepts and rejects clean-up proposals in one transaction. */
-export async function decideCleanup(routeId: string, input: CleanupDecision): Promise<RouteDetail> {
+export async function decideCleanup(routeId: string, input: CleanupDecision, actorUserId: string | null = null): Promise<RouteDetail> {
   await refusingPlainly(() =>
     models().sequelize.transaction(async (transaction) => {
       const route = await lockRoute(routeId, transaction);
       const points = await loadRoutePoints(routeId, transaction);
       const decided = applyCleanupDecisions(points, input);
       await writeRoutePoints(route, decided.map(recordOf), transaction);
+      const accepted = input.accept?.length ?? 0;
+      const rejected = input.reject?.length ?? 0;
+      await recordActivity(transaction, {
+        projectId: route.projectId, actorUserId, kind: 'route.cleaned', subjectType: 'route', subjectId: route.id,
+        summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`, data: { accepted, rejected },
+      });
     }),
   );
   return (await getRouteDetail(routeId)) as RouteDetail;

@@ -2,10 +2,12 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { models } from '../../models';
 import { AppError } from '../errors';
+import { can } from '../permissions';
 import type { Role } from '../roles';
 
 export interface TeamSummary { id: string; name: string; role: Role }
-export interface MemberSummary { userId: string; name: string; email: string; role: Role; joinedAt: string }
+/** `email` is null where the caller may not see it (a client sees only their own). */
+export interface MemberSummary { userId: string; name: string; email: string | null; role: Role; joinedAt: string }
 
 export async function listTeamsOf(userId: string): Promise<TeamSummary[]> {
   const { Membership, Team } = models();
@@ -41,12 +43,14 @@ export async function getTeam(teamId: string): Promise<{ id: string; name: strin
   return team ? { id: team.id, name: team.name } : null;
 }
 
-export async function listMembers(teamId: string): Promise<MemberSummary[]> {
+/** The team's members; `viewer` given without `members.contact` sees only their own e-mail address. */
+export async function listMembers(teamId: string, viewer?: { userId: string; role: Role }): Promise<MemberSummary[]> {
+  const showEmail = (userId: string) => !viewer || can(viewer.role, 'members.contact') || viewer.userId === userId;
   const { Membership, User } = models();
   const rows = await Membership.findAll({ where: { teamId }, include: [{ model: User, as: 'user' }], order: [['createdAt', 'ASC']] });
   return rows.map((m) => {
     const user = (m as unknown as { user: InstanceType<typeof User> }).user;
-    return { userId: user.id, name: user.name, email: user.email, role: m.role, joinedAt: m.createdAt.toISOString() };
+    return { userId: user.id, name: user.name, email: showEmail(user.id) ? user.email : null, role: m.role, joinedAt: m.createdAt.toISOString() };
   });
 }
 

@@ -1,4 +1,5 @@
 import { findPipe } from '../../hydraulics/catalogue/index';
+import { RAM_EFFICIENCY_TABLES } from '../../hydraulics/ram/efficiency-table';
 import { planRamPump } from '../../hydraulics/ram/plan-ram';
 import type { RamDeliveryPipe, RamPlanOptions, RamPlanResult } from '../../hydraulics/ram/plan-types';
 import type { RamSiteInput } from '../validations/ram-sites';
@@ -46,6 +47,7 @@ export function ramPlanOptions(site: RamSiteInput, context: RamPlanContext, over
     deliveryPipe: deliveryPipeOf(site, deliveryLengthM(site, context.routes)),
     ...(site.sizeClassId ? { sizeClassId: site.sizeClassId } : {}),
     pumpCount: site.pumpCount,
+    efficiencyTable: RAM_EFFICIENCY_TABLES[site.efficiencyTableId],
     ...(site.measuredEfficiency !== null && !overrides.ignoreMeasuredEfficiency ? { measuredEfficiency: site.measuredEfficiency } : {}),
     ...(context.tankVolumeM3 !== null ? { tankVolumeM3: context.tankVolumeM3 } : {}),
   };

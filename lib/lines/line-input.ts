@@ -1,13 +1,15 @@
-import type { LineInput, LineStation } from '../../hydraulics/index';
+import { surveyHeightScatterM, type HeightConfidence, type LineInput, type LineStation } from '../../hydraulics/index';
 import type { LineDesign } from '../validations/line-design';
 import { EMPTY_SITE_CONTEXT, flowFromRam, ramStartOf, type LineSiteContext } from './ram-start';
 
 /**
  * The engineering core's input for a saved design on its stations (map positions dropped). A line
  * started at a ram site reads the ram's plan from `context` now, so a change to the ram site reaches
- * the line at its next analysis.
+ * the line at its next analysis. The route's height confidence becomes the analysis's height
+ * scatter (see `surveyHeightScatterM`), so a walked GPS route is read no finer than it was surveyed.
  */
-export function lineInputOf(design: LineDesign, stations: readonly LineStation[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineInput {
+export function lineInputOf(design: LineDesign, stations: readonly (LineStation & HeightConfidence)[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineInput {
+  const heightScatterM = surveyHeightScatterM(stations);
   const ram = ramStartOf(design.start, context, stations[0]?.groundElevationM ?? 0);
   return {
     stations: stations.map((s) => (s.coverM === undefined ? { chainageM: s.chainageM, groundElevationM: s.groundElevationM } : { chainageM: s.chainageM, groundElevationM: s.groundElevationM, coverM: s.coverM })),
@@ -18,7 +20,8 @@ export function lineInputOf(design: LineDesign, stations: readonly LineStation[]
     start: ram ? ram.start : (design.start as LineInput['start']),
     end: design.end,
     flow: flowFromRam(design.flow, ram),
-    settings: design.settings,
+    // The survey's scatter comes with the route, not from the designer: it is what the heights are worth.
+    settings: heightScatterM > 0 ? { ...design.settings, heightScatterM } : design.settings,
   };
 }
 

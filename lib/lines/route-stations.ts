@@ -1,4 +1,4 @@
-import { trimRoute, type LineStation, type RouteStation } from '../../hydraulics/index';
+import { trimRoute, type HeightSource, type LineStation, type RouteStation } from '../../hydraulics/index';
 
 /** A route's stations as columns (compact JSON for long routes). Coordinates are null where not surveyed. */
 export interface RouteColumns {
@@ -6,6 +6,9 @@ export interface RouteColumns {
   elevationM: number[];
   latitude: (number | null)[];
   longitude: (number | null)[];
+  /** Where each height came from and its stated vertical uncertainty, m (absent on old callers). */
+  heightSource?: HeightSource[];
+  confidenceM?: (number | null)[];
 }
 
 /** The part of a route a line follows; null ends mean the route's own ends. */
@@ -18,6 +21,21 @@ export interface ChainageWindow {
 export interface LineRouteStation extends LineStation {
   latitudeDeg?: number;
   longitudeDeg?: number;
+  /** The height's source and stated vertical uncertainty, m (from the nearest surveyed point). */
+  heightSource?: HeightSource;
+  confidenceM?: number | null;
+}
+
+/** Index of the surveyed point nearest `chainageM` (columns in chainage order). */
+function nearestIndex(chainageM: readonly number[], c: number): number {
+  let lo = 0;
+  let hi = chainageM.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (chainageM[mid] <= c) lo = mid;
+    else hi = mid;
+  }
+  return Math.abs(chainageM[hi] - c) < Math.abs(chainageM[lo] - c) ? hi : lo;
 }
 
 function routeStationsOf(columns: RouteColumns): RouteStation[] {
@@ -54,6 +72,11 @@ export function lineStationsOf(columns: RouteColumns, window: ChainageWindow): L
     if (p.latitudeDeg !== undefined && p.longitudeDeg !== undefined) {
       station.latitudeDeg = p.latitudeDeg;
       station.longitudeDeg = p.longitudeDeg;
+    }
+    if (columns.heightSource && columns.chainageM.length > 0) {
+      const k = nearestIndex(columns.chainageM, p.chainageM);
+      station.heightSource = columns.heightSource[k];
+      station.confidenceM = columns.confidenceM?.[k] ?? null;
     }
     stations.push(station);
   }

@@ -9,7 +9,7 @@ export type WinterTreatmentChoice = NonNullable<LineDesign['winter']>['treatment
 /** The pipe profile of an analysed line, as the winter plan reads it. */
 export interface WinterProfileInput {
   points: { chainageM: ArrayLike<number>; groundElevationM: ArrayLike<number>; pipeElevationM: ArrayLike<number> };
-  /** Rise or fall that counts as a high or low point, m (the line's own setting, so drains sit where the washout check finds sags). */
+  /** Rise or fall that counts as a high or low point, m (`highLowToleranceM` of the analysis, so drains sit where the washout check finds sags). */
   airPointToleranceM: number;
 }
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
-import type { LineAnalysis } from '../../hydraulics/index';
+import { highLowToleranceM, type LineAnalysis } from '../../hydraulics/index';
 import { profileScene } from '../chart/profile-scene';
 import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
@@ -9,10 +9,11 @@ import { lineAnswers } from '../lines/answers';
 import { ramFeedAnswers } from '../lines/ram-feed';
 import { EMPTY_SITE_CONTEXT, type LineSiteContext } from '../lines/ram-start';
 import { lineWinterPlan } from '../lines/winter';
-import { LINE_STATUS_LABELS } from '../validations/lines';
+import { stampRows, type ReviewStamp } from '../review/stamp';
 import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
+import { markEveryPage } from './review-mark';
 import { liftSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
@@ -24,6 +25,9 @@ export interface LineReportInput {
   context?: LineSiteContext;
   /** The line's first station ground, m (pump elevation when the ram site gives none). */
   startGroundM?: number;
+  /** Which revision (or the working copy), its status, designer, reviewer and approval. */
+  stamp: ReviewStamp;
+  /** Printed as the date and written as the file's creation date; a revision passes its own date so its PDF never changes. */
   generatedAt: Date;
 }
 
@@ -39,9 +43,9 @@ function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType
  * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
  * the screen), stretch schedule, devices, warnings, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, generatedAt }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
-  const doc = new PDFDocument({ ...PAGE, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel' } });
+  const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
   const finished = new Promise<Buffer>((resolve, reject) => {
@@ -56,12 +60,10 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
     ['Project', project.name],
     ['Line', line.name],
     ['Route', windowWords(line, analysis, u)],
-    ['Revision / date', `${line.revision} / ${generatedAt.toISOString().slice(0, 10)}`],
-    ['Prepared by', line.preparedBy ?? '\u2014'],
-    ['Checked by', line.checkedBy || 'not yet checked'],
-    ['Status', LINE_STATUS_LABELS[line.status]],
+    ...stampRows(stamp),
+    ['Date', generatedAt.toISOString().slice(0, 10)],
     ['Units', unitSystemName(u.system)],
-  ], 4, CONTENT_WIDTH);
+  ], 5, CONTENT_WIDTH);
 
   const answers = lineAnswers(analysis);
   const t = analysis.settings.waterTemperatureC;
@@ -88,9 +90,10 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, analysis, u);
-  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: analysis.settings.airPointToleranceM }, line.design.winter, context.frostDepthM, false), u);
+  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, line.design.winter, context.frostDepthM, false), u);
   assumptions(doc, analysis, u);
   cautions(doc);
+  markEveryPage(doc, stamp);
   doc.end();
   return finished;
 }

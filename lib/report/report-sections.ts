@@ -1,8 +1,7 @@
 import type PDFDocument from 'pdfkit';
 import { DEFAULT_LINE_SETTINGS, type LineAnalysis, type LineDevice } from '../../hydraulics/index';
 import { LINE_CAUTIONS } from '../lines/cautions';
-import { localiseWarningText } from '../units/localise-text';
-import { placeWords, SEVERITY_WORDS, WARNING_TITLES } from '../lines/warning-words';
+import { placeWords, SEVERITY_WORDS, warningText } from '../lines/warning-words';
 import { formatHeadPressure, formatNumber, formatQuantity, formatTemperature, toDisplay, type DisplayUnits } from '../units/index';
 import { heading, INK, table } from './pdf-table';
 import { pdfText } from './pdf-text';
@@ -66,12 +65,10 @@ export function warningList(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   table(
     doc,
     [{ heading: 'Severity', width: 58 }, { heading: 'What and where', width: 150 }, { heading: 'Why', width: 330 }, { heading: 'Suggested fix', width: 224 }],
-    a.warnings.map((w) => [
-      SEVERITY_WORDS[w.severity],
-      `${WARNING_TITLES[w.code]}\n${placeWords(w.at, u)}`,
-      localiseWarningText(w.message, u.system),
-      localiseWarningText(w.suggestedFix, u.system),
-    ]),
+    a.warnings.map((w) => {
+      const text = warningText(w, u);
+      return [SEVERITY_WORDS[w.severity], `${text.title}\n${placeWords(w.at, u)}`, text.message, text.fix];
+    }),
   );
 }
 
@@ -87,6 +84,9 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
     ['Residual pressure wanted at the end', formatHeadPressure(a.end.targetResidualHeadM, u.system, s.waterTemperatureC)],
     ['Pipe cover where the survey gives none', formatQuantity('length', s.defaultCoverM, u.system, 2)],
     ['High and low point tolerance', formatQuantity('length', s.airPointToleranceM, u.system, 2)],
+    ...(s.heightScatterM > 0
+      ? [['Survey height scatter', `${formatQuantity('length', s.heightScatterM, u.system, 2)} (the route's stated height accuracy): highs, lows and limit ranges are read no finer than this`] as [string, string]]
+      : []),
     ['Siphon limit / vapour limit', `${formatQuantity('length', a.limits.siphonLimitHeadM, u.system)} / ${formatQuantity('length', a.limits.vapourLimitHeadM, u.system)} of suction at ${formatQuantity('length', a.limits.siteAltitudeM, u.system, 0)} altitude`],
     ['Surge check', s.checkSurge ? 'static pressure plus a sudden stop (Joukowsky) against the allowed head' : 'off'],
     ['Flow analysed', `${formatQuantity('designFlow', a.flowM3s, u.system)} (${a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'})`],
@@ -101,7 +101,7 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   doc.font('Helvetica').fontSize(8).fillColor(INK).text(
     `Defaults where the line sets none: velocity band ${DEFAULT_LINE_SETTINGS.velocityMinMs}-${DEFAULT_LINE_SETTINGS.velocityMaxMs} m/s (T.D. Jordan Jr., A Handbook of Gravity-Flow Water Systems, p.53); ` +
       `residual at an outlet ${DEFAULT_LINE_SETTINGS.minResidualHeadM} m (Akvopedia, gravity-fed water supply); practical siphon limit ${DEFAULT_LINE_SETTINGS.siphonLimitHeadM} m ` +
-      '(Taylor & Francis/CRC hydraulics textbook, ch. 42). Pipe ratings are the standards\u2019 pressure classes, which already contain their design factors.',
+      'at sea level (Taylor & Francis/CRC hydraulics textbook, ch. 42), kept as the same share of the site\u2019s atmospheric head at altitude. Pipe ratings are the standards\u2019 pressure classes, which already contain their design factors.',
   );
 }
 

@@ -22,7 +22,7 @@ export interface GpsCsvOptions {
 
 /**
  * Consumer receivers' vertical error is about 1.5× their horizontal figure (blackboxcamera
- * “GPS limits” note, REFERENCES.md §6.4 [R28], low authority): used only when a file gives a
+ * “GPS limits” note, core.md §6.4 [R28], low authority): used only when a file gives a
  * horizontal accuracy and no vertical one.
  */
 const VERTICAL_PER_HORIZONTAL = 1.5;

@@ -2,16 +2,8 @@ import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
 import { LineDesignSchema } from './line-design';
 
-export const LINE_STATUSES = ['draft', 'for-checking', 'issued'] as const;
-export const LINE_STATUS_LABELS: Record<(typeof LINE_STATUSES)[number], string> = {
-  draft: 'Draft',
-  'for-checking': 'For checking',
-  issued: 'Issued for building',
-};
-
 export const LineParams = z.strictObject({ lineId: uuid('Line id') });
 
-const lineStatus = z.enum(LINE_STATUSES, { error: `Status must be one of ${LINE_STATUSES.join(', ')}` });
 const chainage = (label: string) => z.number({ error: `${label} must be a number (metres)` }).min(0, `${label} must be at least 0 m`).max(1e6, `${label} must be at most 1000 km`);
 
 /** A chainage window of the route: both ends or neither, the end after the start. */
@@ -43,8 +35,6 @@ export const UpdateLineSchema = z
     notes: safeText('Notes', 10000),
     routeId: uuid('Route id'),
     ...window,
-    status: lineStatus,
-    checkedBy: safeText('Checked by', 120).transform((s) => s.trim()),
     design: LineDesignSchema,
     /** The revision the editor started from; a newer saved revision answers 409 instead of being overwritten. */
     baseRevision: z.number({ error: 'Base revision must be a whole number' }).int('Base revision must be a whole number').positive('Base revision must be at least 1'),

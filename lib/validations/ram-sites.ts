@@ -1,10 +1,12 @@
 import { z } from 'zod';
 import { findPipe } from '../../hydraulics/catalogue/index';
+import { RAM_EFFICIENCY_TABLES, type RamEfficiencyTableId } from '../../hydraulics/ram/efficiency-table';
 import { RAM_SIZE_CLASSES } from '../../hydraulics/ram/size-classes';
 import { nameText, safeText, uuid } from './common';
 import { finite, fraction, isoDate, issueAt, nonNegative, positive } from './lift-common';
 
 export const DRIVE_MATERIALS = ['steel', 'pvc', 'pe', 'custom'] as const;
+const EFFICIENCY_TABLE_IDS = Object.keys(RAM_EFFICIENCY_TABLES) as [RamEfficiencyTableId, ...RamEfficiencyTableId[]];
 const SIZE_CLASS_IDS = RAM_SIZE_CLASSES.map((sizeClass) => sizeClass.id) as [string, ...string[]];
 
 const DrivePipeSchema = z.strictObject({
@@ -50,6 +52,8 @@ export const RamSiteSchema = z
     sizeClassId: z.enum(SIZE_CLASS_IDS, { error: `Size class must be one of ${SIZE_CLASS_IDS.join(', ')}` }).nullable().default(null),
     pumpCount: finite('Pumps in parallel').int('Pumps in parallel must be a whole number').min(1, 'At least one pump').max(20, 'At most 20 pumps in parallel').default(1),
     measuredEfficiency: fraction('Measured efficiency').nullable().default(null),
+    /** Published efficiency table the plan reads (shown with every plan). */
+    efficiencyTableId: z.enum(EFFICIENCY_TABLE_IDS, { error: `Efficiency table must be one of ${EFFICIENCY_TABLE_IDS.join(', ')}` }).default('trade-pocketbook'),
     notes: safeText('Notes', 4000).default(''),
   })
   .superRefine((value, ctx) => {

@@ -1,6 +1,8 @@
 import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
 import { thinAnalysis } from '../lines/thin-analysis';
+import type { NetworkContext } from '../network/context';
+import { solveNetworkRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
 import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -22,6 +24,8 @@ export const TASKS = {
     const analysis = analyzeLine(input.line);
     return input.profilePoints === undefined ? analysis : thinAnalysis(analysis, input.profilePoints);
   },
+  /** Solves a project's network at the peak hour (lib/network). */
+  'network.solve': (input: NetworkContext) => solveNetworkRun(input),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
   'test.spin': (input: { ms: number; answer: number }) => {
     const end = Date.now() + input.ms;

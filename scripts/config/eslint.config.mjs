@@ -5,7 +5,7 @@ const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
   {
-    ignores: ['node_modules/**', '.next/**', '.pgdata/**', '.pgdata-test/**', '.runtime/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'],
+    ignores: ['node_modules/**', '.next/**', '.runtime/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'],
   },
   {
     files: ['**/*.cjs'],

@@ -1,4 +1,4 @@
-/** A flat 1 km line of 100 mm bore, C = 150, carrying 10 L/s (REFERENCES §8.2 quick cross-check). */
+/** A flat 1 km line of 100 mm bore, C = 150, carrying 10 L/s (core.md §8.2 quick cross-check). */
 export const REFERENCE_PIPE = {
   id: 'test-100mm-c150',
   label: '100 mm test pipe',

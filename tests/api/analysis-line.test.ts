@@ -16,7 +16,7 @@ describe('POST /api/analysis/line', () => {
     const { analysis } = res.json;
     expect(Array.isArray(analysis.points.chainageM)).toBe(true);
     expect(analysis.points.chainageM).toEqual([0, 500, 1000]);
-    // REFERENCES §8.2: 10 L/s in D = 100 mm, C = 150 over 1 km loses 14.60 m (10.67 form); the exact
+    // core.md §8.2: 10 L/s in D = 100 mm, C = 150 over 1 km loses 14.60 m (10.67 form); the exact
     // k = 0.849 form gives 14.629 m [C]; 0.5 % covers the choice of constant.
     const loss = 30 - analysis.points.hydraulicGradeM[2];
     expect(Math.abs(loss - 14.6) / 14.6).toBeLessThan(0.005);

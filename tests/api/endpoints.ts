@@ -2,6 +2,8 @@ import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
+import { REVIEW_ENDPOINTS } from './review-endpoints';
+import { NETWORK_ENDPOINTS } from './network-endpoints';
 import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -20,6 +22,8 @@ export interface EndpointCase {
 }
 
 const anyMember = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
+// The working copy, drafts and raw survey files: the whole team but not the client (viewer).
+const teamWorkers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
 const onlyOwner = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: 403, owner: ok });
 const designers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: ok, owner: ok });
 const signedIn = (ok: number): Expect => ({ anonymous: 401, outsider: ok, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
@@ -28,6 +32,7 @@ const everyone = (ok: number): Expect => ({ anonymous: ok, outsider: ok, viewer:
 
 /** Every endpoint of the API with the status each kind of caller must get for a valid request. */
 export const ENDPOINTS: EndpointCase[] = [
+  { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(201) },
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },
   { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
@@ -46,18 +51,21 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'projects/[projectId]/route.ts', method: 'PATCH', params: (f) => ({ projectId: f.projectId }), body: () => ({ siteNotes: 'Checked the spring box.' }), expect: designers(200) },
   { file: 'analysis/line/route.ts', method: 'POST', params: () => ({}), body: () => referenceLine(), expect: signedIn(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
-  { file: 'projects/[projectId]/lines/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: 'projects/[projectId]/lines/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.lineRouteId }), expect: designers(201) },
-  { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'PATCH', params: (f) => ({ lineId: f.lineId }), body: () => ({ notes: 'Trench walked.' }), expect: designers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
-  { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
-  { file: 'lines/[lineId]/site-context/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
-  { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
-  { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: anyMember(200) },
+  { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
+  { file: 'lines/[lineId]/site-context/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
+  { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
+  { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...LIFT_ENDPOINTS,
+  { file: 'lines/[lineId]/network-flows/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
+  ...REVIEW_ENDPOINTS,
+  ...NETWORK_ENDPOINTS,
   // Survey routes: every member reads; surveyors, designers and owners import and edit.
-  { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'projects/[projectId]/routes/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Sketch of the lower field' }), expect: surveyEditors(201) },
   {
     file: 'projects/[projectId]/routes/import/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }),
@@ -66,7 +74,7 @@ export const ENDPOINTS: EndpointCase[] = [
     }),
     expect: surveyEditors(201),
   },
-  { file: 'routes/[routeId]/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: anyMember(200) },
+  { file: 'routes/[routeId]/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
   { file: 'routes/[routeId]/route.ts', method: 'PATCH', params: (f) => ({ routeId: f.routeId }), body: () => ({ notes: 'Walked again after the thaw.' }), expect: surveyEditors(200) },
   { file: 'routes/[routeId]/route.ts', method: 'DELETE', params: (f) => ({ routeId: f.routeId }), expect: surveyEditors(204) },
   {
@@ -83,7 +91,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'routes/[routeId]/split/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ chainageM: 100 }), expect: surveyEditors(201) },
   { file: 'routes/[routeId]/trim/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ fromChainageM: 40, toChainageM: 160 }), expect: surveyEditors(200) },
   { file: 'routes/[routeId]/join/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: (f) => ({ otherRouteId: f.otherRouteId }), expect: surveyEditors(201) },
-  { file: 'routes/[routeId]/source/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: anyMember(200) },
+  { file: 'routes/[routeId]/source/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
 ];
 
 /** Library endpoints not built from lib/api/route.ts; exercised end to end by the Playwright sign-in tests. */

@@ -24,7 +24,7 @@ describe('demand uses', () => {
     expect((await postUse(demandUseBody(), fixture)).status).toBe(201);
     const cattle = { kind: 'livestock', count: 12, figureId: 'cow-calf-pair', season: 'summer', deliveryKind: 'delivery-hours', deliveryHours: 4, startHour: 6 };
     expect((await postUse(cattle, fixture)).status).toBe(201);
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.viewer.id });
+    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
     const { uses, total } = res.json.lift.demand;
     // J. Renewable Energy (Hindawi) 2017 art. 8504283 Table 1: 50 US gal/person/day for a rural home.
     expect(uses[0].published.value).toBeCloseTo(50 * US_GALLON_M3, 12);

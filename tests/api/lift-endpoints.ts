@@ -18,8 +18,9 @@ import {
 import type { EndpointCase } from './endpoints';
 
 type Expect = Record<Actor, number>;
-const anyMember = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: ok, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
 const designers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: 403, surveyor: 403, designer: ok, owner: ok });
+// The working copy: the whole team but not the client (viewer).
+const teamWorkers = (ok: number): Expect => ({ anonymous: 401, outsider: 404, viewer: 403, reviewer: ok, surveyor: ok, designer: ok, owner: ok });
 /** Yield readings are field work: surveyors log them too. */
 const fieldLoggers = (ok: number): Expect => ({ ...designers(ok), surveyor: ok });
 
@@ -27,8 +28,8 @@ const P = 'projects/[projectId]';
 
 /** The lift, storage, yield, demand and seasonal-task endpoints, with the status each caller must get. */
 export const LIFT_ENDPOINTS: EndpointCase[] = [
-  { file: `${P}/lift/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
-  { file: `${P}/ram-sites/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/lift/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
+  { file: `${P}/ram-sites/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/ram-sites/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: ramSiteBody, expect: designers(201) },
   {
     file: `${P}/ram-sites/[siteId]/route.ts`, method: 'PUT', body: () => ({ ...ramSiteBody(), liftM: 12 }), expect: designers(200),
@@ -49,7 +50,7 @@ export const LIFT_ENDPOINTS: EndpointCase[] = [
       return { projectId: f.projectId, siteId: site.id, readingId: reading.id };
     },
   },
-  { file: `${P}/sources/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/sources/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/sources/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: sourceBody, expect: designers(201) },
   {
     file: `${P}/sources/[sourceId]/route.ts`, method: 'PUT', body: () => ({ ...sourceBody(), name: 'Renamed creek' }), expect: designers(200),
@@ -70,7 +71,7 @@ export const LIFT_ENDPOINTS: EndpointCase[] = [
       return { projectId: f.projectId, sourceId: source.id, readingId: reading.id };
     },
   },
-  { file: `${P}/tanks/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/tanks/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/tanks/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: tankBody, expect: designers(201) },
   {
     file: `${P}/tanks/[tankId]/route.ts`, method: 'PUT', body: () => ({ ...tankBody(), volumeM3: 6 }), expect: designers(200),
@@ -80,7 +81,7 @@ export const LIFT_ENDPOINTS: EndpointCase[] = [
     file: `${P}/tanks/[tankId]/route.ts`, method: 'DELETE', expect: designers(204),
     params: async (f) => ({ projectId: f.projectId, tankId: (await createTankFixture(f.projectId, f.users.owner.id)).id }),
   },
-  { file: `${P}/demand-uses/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/demand-uses/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/demand-uses/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: demandUseBody, expect: designers(201) },
   {
     file: `${P}/demand-uses/[useId]/route.ts`, method: 'PUT', body: () => ({ ...demandUseBody(), count: 5 }), expect: designers(200),
@@ -90,7 +91,7 @@ export const LIFT_ENDPOINTS: EndpointCase[] = [
     file: `${P}/demand-uses/[useId]/route.ts`, method: 'DELETE', expect: designers(204),
     params: async (f) => ({ projectId: f.projectId, useId: (await createDemandUseFixture(f.projectId)).id }),
   },
-  { file: `${P}/seasonal-tasks/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
+  { file: `${P}/seasonal-tasks/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/seasonal-tasks/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), body: seasonalTaskBody, expect: designers(201) },
   {
     file: `${P}/seasonal-tasks/generate/route.ts`, method: 'POST', params: (f) => ({ projectId: f.projectId }), expect: designers(201),

@@ -136,7 +136,7 @@ describe('GET lift', () => {
     await call(commissioningRoute.POST, {
       method: 'POST', path: 'x', params: { projectId: fixture.projectId, siteId: site.id }, body: commissioningBody(), userId: fixture.users.owner.id,
     });
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.viewer.id });
+    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
     expect(res.status).toBe(200);
     const [view] = res.json.lift.ramSites;
     expect(view.plan.ok).toBe(true);

@@ -35,7 +35,7 @@ describe('source yield log', () => {
     const ram = { ...ramSiteBody(), sourceId, driveFlowM3s: 30 * L_PER_MIN };
     expect((await call(sitesRoute.POST, { method: 'POST', path: 'x', params: { projectId: fixture.projectId }, body: ram, userId: fixture.users.owner.id })).status).toBe(201);
 
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.viewer.id });
+    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
     const [view] = res.json.lift.sources;
     expect(view.design.value.basis).toBe('lowest-recent-dry');
     expect(view.design.value.designYieldM3s).toBeCloseTo(25 * L_PER_MIN, 12);

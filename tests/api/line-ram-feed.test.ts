@@ -34,8 +34,8 @@ describe('a delivery line fed by a ram site', () => {
   });
 
   const patch = (body: unknown) => call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, body, userId: f.users.designer.id });
-  const analyse = async () => (await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.viewer.id })).json.analysis;
-  const siteContext = async () => (await call(siteContextRoute.GET, { method: 'GET', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.viewer.id })).json;
+  const analyse = async () => (await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.reviewer.id })).json.analysis;
+  const siteContext = async () => (await call(siteContextRoute.GET, { method: 'GET', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.reviewer.id })).json;
   const putRam = (body: unknown) =>
     call(ramSiteRoute.PUT, { method: 'PUT', path: '/api/x', params: { projectId: f.projectId, siteId: ramSiteId }, body, userId: f.users.designer.id });
 

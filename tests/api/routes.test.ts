@@ -37,7 +37,7 @@ describe('importing survey files', () => {
     const res = await importFile(surveyor, f.projectId, 'walked-route.gpx', text, { format: 'gpx', name: 'Alder Spring to Long Meadow' });
     expect(res.status).toBe(201);
     expect(res.json.route).toMatchObject({ name: 'Alder Spring to Long Meadow', sourceFormat: 'gpx', sourceFile: { fileName: 'walked-route.gpx', contentType: 'application/gpx+xml' } });
-    const detail = await readRoute(f.users.viewer.id, res.json.route.id);
+    const detail = await readRoute(f.users.reviewer.id, res.json.route.id);
     expect(detail.points.length).toBe(res.json.route.pointCount);
     expect(detail.points[0]).toMatchObject({ seq: 0, chainageM: 0, elevationM: 812.4, rawElevationM: 812.4, heightSource: 'gps', excluded: false });
     const chainages = detail.points.map((p: any) => p.chainageM);
@@ -46,7 +46,7 @@ describe('importing survey files', () => {
     expect(detail.route.slopeLengthM).toBeGreaterThan(detail.route.lengthM);
     expect(detail.route.features.map((x: any) => x.label)).toEqual(['Alder Spring box', 'Gully crossing']);
     expect(detail.route.importNotes.map((n: any) => n.code)).toContain('gpx-segments-joined');
-    // Vertical ≤ 15 m (95 %): U.S. DoD, GPS SPS Performance Standard, 2020 ed. §3.4 (REFERENCES.md §6.4 [R28]).
+    // Vertical ≤ 15 m (95 %): U.S. DoD, GPS SPS Performance Standard, 2020 ed. §3.4 (core.md §6.4 [R28]).
     expect(detail.gpsWarning).toMatchObject({ severity: 'danger', verticalErrorM: 15 });
 
     const file = await models().Attachment.findOne({ where: { fileName: 'walked-route.gpx', projectId: f.projectId } });
@@ -180,7 +180,7 @@ describe('editing points', () => {
     expect(ok.json.points.map((x: any) => x.label)).toEqual([null, awkward, null]);
     expect(ok.json.route).toMatchObject({ pointCount: 3, lengthM: 120, sourceFormat: 'sketch' });
     expect(ok.json.route.slopeLengthM).toBeCloseTo(Math.hypot(80, 15) + Math.hypot(40, 5), 9);
-    const list = await call(listRoute.GET, { method: 'GET', path: 'x', params: { projectId: f.projectId }, userId: f.users.viewer.id });
+    const list = await call(listRoute.GET, { method: 'GET', path: 'x', params: { projectId: f.projectId }, userId: f.users.reviewer.id });
     expect(list.json.routes.map((r: any) => r.name)).toContain('Sketch to the trough');
   });
 

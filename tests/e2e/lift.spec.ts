@@ -73,9 +73,10 @@ test('a designer enters a ram site, sees litres a day and the tank fill time, an
   expect(errors).toEqual([]);
 });
 
-test('a viewer sees the lift figures without edit controls, and a direct write is refused', async ({ page }) => {
+// The client (viewer) sees approved revisions only; a reviewer reads the working copy without edit controls.
+test('a reviewer sees the lift figures without edit controls, and a direct write is refused', async ({ page }) => {
   const errors = watchConsole(page);
-  await signIn(page, 'viewer@example.test');
+  await signIn(page, 'reviewer@example.test');
   await page.goto(`/projects/${BRACKWATER}/lift`);
   await expect(page.getByRole('heading', { name: 'Weir ram' })).toBeVisible();
   await expect(page.getByTestId('ram-answer')).toContainText('US gal/day');

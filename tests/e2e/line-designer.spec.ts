@@ -70,9 +70,10 @@ test('hovering the profile reads the values there and marks the same place on th
   await expect(page.getByTestId('plan-marker')).toHaveCount(1);
 });
 
-test('a viewer can view and export the line but not change it', async ({ page }) => {
+// The client (viewer) sees approved revisions only; a reviewer reads the working copy without edit controls.
+test('a reviewer can view and export the working copy but not change it', async ({ page }) => {
   const errors = watchConsole(page);
-  await signIn(page, 'viewer@example.test');
+  await signIn(page, 'reviewer@example.test');
   await page.goto(LINE_URL);
   await expect(page.getByTestId('warnings')).toBeVisible();
   await expect(page.getByTestId('apply-fix')).toHaveCount(0);

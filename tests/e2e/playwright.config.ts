@@ -13,7 +13,10 @@ export default defineConfig({
   workers: 1,
   retries: 0,
   reporter: [['list']],
-  timeout: 60_000,
+  timeout: 90_000,
+  // A shared 2-core machine can take longer than the default 5 s for a save or a first worker start;
+  // waiting longer changes no assertion.
+  expect: { timeout: 15_000 },
   use: {
     baseURL: process.env.E2E_BASE_URL ?? `http://127.0.0.1:${port}`,
     launchOptions: {

@@ -32,7 +32,7 @@ describe('flows', () => {
   it('imperial gallon = 4.546 09 L exactly (from memory)', () => {
     expect(flowToM3s(1, 'imp gpm') * 60).toBeCloseTo(4.54609e-3, 15);
   });
-  it('1 ft³/s = 448.831 US gpm (REFERENCES §7 [C], regression)', () => {
+  it('1 ft³/s = 448.831 US gpm (core.md §7 [C], regression)', () => {
     expect(flowFromM3s(0.3048 ** 3, 'US gpm')).toBeCloseTo(448.831, 3);
   });
   it('converts L/s, L/min, m³/day and US gal/day', () => {
@@ -49,7 +49,7 @@ describe('flows', () => {
 });
 
 describe('pressures', () => {
-  it('1 psi = 6894.757 Pa (REFERENCES §7 [C] from exact lb, g_n, in)', () => {
+  it('1 psi = 6894.757 Pa (core.md §7 [C] from exact lb, g_n, in)', () => {
     expect(pressureToPa(1, 'psi')).toBeCloseTo(6894.757293168, 6);
     expect(pressureFromPa(1e5, 'bar')).toBe(1);
     expect(pressureFromPa(2500, 'kPa')).toBe(2.5);
@@ -71,7 +71,7 @@ describe('head and pressure through the density of water', () => {
     expect(Math.abs(100 * psiPerFoot(SIXTY_F_IN_C) - 43.31)).toBeLessThan(0.01);
     expect(Math.abs(135 * psiPerFoot(SIXTY_F_IN_C) - 58.48)).toBeLessThan(0.02);
   });
-  it('46.2 m static head = 452.2 kPa at 20 °C (REFERENCES §8.1 [C], regression)', () => {
+  it('46.2 m static head = 452.2 kPa at 20 °C (core.md §8.1 [C], regression)', () => {
     // printed to 0.1 kPa (truncated): 46.2 × 9.80665 × 998.2 = 452.25
     expect(Math.abs(headMToPressurePa(46.2, 20) / 1000 - 452.2)).toBeLessThan(0.1);
   });

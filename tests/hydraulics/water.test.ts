@@ -46,7 +46,7 @@ describe('viscosity of water', () => {
     const nu = waterKinematicViscosityM2s(temperatureC) / MM2S;
     expect(Math.abs(nu - published) / published).toBeLessThan(0.003);
   });
-  it('matches the Landolt-Börnstein regression values of REFERENCES §1.6 [C]', () => {
+  it('matches the Landolt-Börnstein regression values of core.md §1.6 [C]', () => {
     expect(waterKinematicViscosityM2s(15) / MM2S).toBeCloseTo(1.1392, 4);
     expect(waterKinematicViscosityM2s(25) / MM2S).toBeCloseTo(0.8929, 4);
   });
@@ -60,7 +60,7 @@ describe('viscosity of water', () => {
 });
 
 describe('vapour pressure and the siphon limit', () => {
-  it('Buck form values of REFERENCES §1.6 [C], regression', () => {
+  it('Buck form values of core.md §1.6 [C], regression', () => {
     expect(waterVapourPressurePa(0)).toBeCloseTo(611.21, 2);
     expect(Math.round(waterVapourPressurePa(10))).toBe(1228);
     expect(Math.round(waterVapourPressurePa(20))).toBe(2338);
@@ -79,7 +79,7 @@ describe('vapour pressure and the siphon limit', () => {
   );
   it('ISA pressure: 101 325 Pa at sea level, falling with altitude', () => {
     expect(atmosphericPressurePa(0)).toBe(101325);
-    expect(atmosphericHeadM({ altitudeM: 3000, temperatureC: 10 })).toBeCloseTo(7.15, 2); // REFERENCES §1.6 [C]
+    expect(atmosphericHeadM({ altitudeM: 3000, temperatureC: 10 })).toBeCloseTo(7.15, 2); // core.md §1.6 [C]
   });
 });
 

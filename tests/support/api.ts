@@ -64,7 +64,7 @@ export interface CallOptions {
   headers?: Record<string, string>;
 }
 
-export async function call(handler: RouteHandler, options: CallOptions): Promise<{ status: number; json: any; text: string; headers: Headers }> {
+export async function call(handler: RouteHandler, options: CallOptions): Promise<{ status: number; json: any; text: string; bytes: Buffer; headers: Headers }> {
   const headers: Record<string, string> = { ...(options.headers ?? {}) };
   const cookie = options.cookie ?? (options.userId ? await sessionCookie(options.userId) : undefined);
   if (cookie) headers.cookie = cookie;
@@ -72,7 +72,8 @@ export async function call(handler: RouteHandler, options: CallOptions): Promise
   if (bodyText !== undefined) headers['content-type'] ??= 'application/json';
   const req = new NextRequest(new URL(options.path, 'http://127.0.0.1:3100'), { method: options.method, headers, body: bodyText as BodyInit | undefined });
   const res = await handler(req, { params: Promise.resolve(options.params ?? {}) });
+  const bytes = Buffer.from(await res.clone().arrayBuffer());
   const text = await res.text();
   const isJson = (res.headers.get('content-type') ?? '').includes('json');
-  return { status: res.status, json: text && isJson ? JSON.parse(text) : null, text, headers: res.headers };
+  return { status: res.status, json: text && isJson ? JSON.parse(text) : null, text, bytes, headers: res.headers };
 }

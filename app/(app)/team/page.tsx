@@ -21,7 +21,7 @@ export default async function TeamPage() {
   const manage = can(role, 'team.manage');
 
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id) });
+  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id, { userId: user.id, role }) });
 
   return (
     <div className="space-y-6">

@@ -3,7 +3,7 @@
  *
  * The inside diameters are the Schedule 40 IDs, the same for every SIDR of a size (engineerfix,
  * Qualpol [R13]); the Schedule 40 ID values are from memory, confirmed for 1-2 in by a Sch 40 table
- * (REFERENCES §2.3). Minimum wall = ID / SIDR with a 0.060 in floor (floor from memory), applied by
+ * (core.md §2.3). Minimum wall = ID / SIDR with a 0.060 in floor (floor from memory), applied by
  * the builder.
  */
 export const PE_D2239_SOURCE = 'ASTM D2239 (PE3408, HDS 800 psi); Schedule 40 inside diameters';

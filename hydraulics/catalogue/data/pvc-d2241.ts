@@ -4,12 +4,12 @@
  * Outside diameters: ASTM D2241-09 Table 1 excerpt (½ in = 0.840 in) and the Available Plastics Inc.
  * PVC dimension table [R13]. Average walls (used for the flow diameter) and the sizes made in each
  * SDR: the same Available Plastics table [R13]. Minimum walls are not stored: the standard sets them
- * as OD/SDR with a 0.060 in floor (REFERENCES §2.2, floor from memory) and the builder applies it.
+ * as OD/SDR with a 0.060 in floor (core.md §2.2, floor from memory) and the builder applies it.
  * SDR 13.5 is listed for ½ in only (availability from memory; no average wall published there).
  */
 export const PVC_D2241_SOURCE = 'ASTM D2241 (PVC1120, HDS 2000 psi); OD per D2241-09 Table 1; average walls per Available Plastics Inc. table';
 
-/** Hydrostatic design stress of PVC1120 / PVC1220 for water at 23 °C, psi (REFERENCES §2.1). */
+/** Hydrostatic design stress of PVC1120 / PVC1220 for water at 23 °C, psi (core.md §2.1). */
 export const PVC_D2241_HDS_PSI = 2000;
 
 export interface PvcD2241Row {

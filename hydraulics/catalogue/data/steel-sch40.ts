@@ -1,5 +1,5 @@
 /**
- * Steel pipe, Schedule 40, ASME B36.10M (REFERENCES §2.5: from memory, inside diameters confirmed
+ * Steel pipe, Schedule 40, ASME B36.10M (core.md §2.5: from memory, inside diameters confirmed
  * for 1-2 in by a Schedule 40 table [R13]).
  */
 export const STEEL_SCH40_SOURCE = 'ASME B36.10M Schedule 40 (dimensions from memory; ID confirmed 1-2 in)';

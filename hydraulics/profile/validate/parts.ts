@@ -49,7 +49,15 @@ export function assertStart(start: unknown): void {
     assertFinite(start.levelM, 'start.levelM');
   } else {
     assertFinite(start.outletHeadM, 'start.outletHeadM');
-    if (start.shutoffHeadM !== undefined) assertFinite(start.shutoffHeadM, 'start.shutoffHeadM');
+    if (start.shutoffHeadM !== undefined) {
+      assertFinite(start.shutoffHeadM, 'start.shutoffHeadM');
+      if (start.shutoffHeadM < start.outletHeadM) {
+        throw new HydraulicsInputError(
+          'start.shutoffHeadM',
+          `the grade with the line shut (${start.shutoffHeadM} m) is below the grade while pumping (${start.outletHeadM} m): a pump builds more head against a shut line, not less`,
+        );
+      }
+    }
   }
 }
 

@@ -26,6 +26,7 @@ export function assertSettings(settings: unknown): void {
   optional(s.velocityMaxMs, assertPositive, 'settings.velocityMaxMs');
   optional(s.minResidualHeadM, assertNonNegative, 'settings.minResidualHeadM');
   optional(s.airPointToleranceM, assertNonNegative, 'settings.airPointToleranceM');
+  optional(s.heightScatterM, assertNonNegative, 'settings.heightScatterM');
   if (s.siteAltitudeM !== undefined) {
     const { min, max } = SITE_ALTITUDE_RANGE_M;
     assertInRange(s.siteAltitudeM, 'settings.siteAltitudeM', min, max, 'm');

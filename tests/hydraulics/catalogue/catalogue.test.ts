@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { isoWallToleranceMm } from '../../../hydraulics/catalogue/data/pe-iso4427';
 import {
   assertPipeSpec,
   findPipe,
@@ -53,7 +54,7 @@ describe('ASTM D2241 PVC dimensions', () => {
     expect(inches(findPipe('pvc-d2241-sdr13.5-0.5in')!.outsideDiameterM)).toBeCloseTo(0.84, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-2in')!.outsideDiameterM)).toBeCloseTo(2.375, 10);
   });
-  it('minimum walls = OD/SDR with a 0.060 in floor (REFERENCES §2.2 [C], regression)', () => {
+  it('minimum walls = OD/SDR with a 0.060 in floor (core.md §2.2 [C], regression)', () => {
     expect(inches(findPipe('pvc-d2241-sdr21-3/4in'.replace('3/4', '0.75'))!.wallM)).toBeCloseTo(0.06, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-1in')!.wallM)).toBeCloseTo(0.063, 10);
     expect(inches(findPipe('pvc-d2241-sdr21-2in')!.wallM)).toBeCloseTo(0.113, 10);
@@ -90,7 +91,7 @@ describe('ASTM D2239 PE (controlled ID)', () => {
       expect(inches(findPipe(`pe-d2239-sidr${sidr}-2in`)!.insideDiameterM)).toBeCloseTo(2.067, 10);
     }
   });
-  it('1 in SIDR 15: wall 0.070 in, OD 1.189 in (REFERENCES §2.3 [C], regression); rated 100 psi (Qualpol [R13])', () => {
+  it('1 in SIDR 15: wall 0.070 in, OD 1.189 in (core.md §2.3 [C], regression); rated 100 psi (Qualpol [R13])', () => {
     const pipe = findPipe('pe-d2239-sidr15-1in')!;
     expect(inches(pipe.wallM)).toBeCloseTo(0.07, 10);
     expect(inches(pipe.outsideDiameterM)).toBeCloseTo(1.189, 10);
@@ -104,7 +105,21 @@ describe('ISO 4427 / EN 12201 metric PE', () => {
     expect(findPipe('pe100-iso4427-sdr17-110mm')!.wallM).toBeCloseTo(0.0066, 12);
     expect(findPipe('pe100-iso4427-sdr17-90mm')!.wallM).toBeCloseTo(0.0054, 12);
     expect(findPipe('pe100-iso4427-sdr11-75mm')!.wallM).toBeCloseTo(0.0068, 12);
-    expect(findPipe('pe100-iso4427-sdr11-110mm')!.insideDiameterM).toBeCloseTo(0.09, 12);
+  });
+  it('bores use the mean outside diameter and the mean wall, not the minimum wall (core.md §2.7 [C]): 110 SDR 17 → 96.35 mm, not 96.8', () => {
+    // Mean OD 110 + 0.7/2; wall 6.6 + (0.1·6.6 + 0.1 → 0.8)/2 = 7.0 (tolerances of ISO 11922-1 grades B and V, from memory).
+    expect(findPipe('pe100-iso4427-sdr17-110mm')!.insideDiameterM * 1000).toBeCloseTo(96.35, 9);
+    expect(findPipe('pe100-iso4427-sdr11-110mm')!.insideDiameterM * 1000).toBeCloseTo(110.35 - 2 * (10 + 1.1 / 2), 9);
+    for (const id of ['pe100-iso4427-sdr11-20mm', 'pe100-iso4427-sdr17-160mm', 'pe80-iso4427-sdr7.4-63mm']) {
+      const pipe = findPipe(id)!;
+      expect(pipe.insideDiameterM).toBeLessThan(pipe.outsideDiameterM - 2 * pipe.wallM);
+    }
+  });
+  it('wall tolerance 0.1·e + 0.1 mm rounded up to 0.1 mm (grade V; neutrium ISO 11922 module: max = 1.1 × min + 0.1 [R30])', () => {
+    expect(isoWallToleranceMm(2.0)).toBeCloseTo(0.3, 12);
+    expect(isoWallToleranceMm(6.6)).toBeCloseTo(0.8, 12);
+    expect(isoWallToleranceMm(10.0)).toBeCloseTo(1.1, 12);
+    expect(isoWallToleranceMm(3.0)).toBeCloseTo(0.4, 12);
   });
   it('rates PE100 by the printed PN column (VESBO p.3 [R12]) and PE80 SDR 11 at PN 12.5 (veryfocus [R12])', () => {
     const pn = (id: string) => findPipe(id)!.pressureRatingPa / 1e5;

@@ -21,7 +21,7 @@ describe('SDR rating formula P = 2S/(SDR − 1) against printed classes', () => 
     expect(bar).toBeCloseTo(12.6, 10); // formula
     expect(nominalPressureClass({ computed: bar, classes: ISO_PRESSURE_CLASSES_BAR, maxRoundUp: 0.02 })).toBe(12.5);
   });
-  // Printed ASTM D2241 classes (homesteady.com; veryfocus.net; REFERENCES §2.1 marketed classes [R13]).
+  // Printed ASTM D2241 classes (homesteady.com; veryfocus.net; core.md §2.1 marketed classes [R13]).
   it.each([
     [13.5, 315],
     [17, 250],
@@ -42,7 +42,7 @@ describe('SIDR rating formula P = 2S/(SIDR + 1)', () => {
     expect(pressureRatingFromSidr({ sidr: 15, designStressPa: 800 })).toBe(100);
     expect(pressureRatingFromSidr({ sidr: 19, designStressPa: 800 })).toBe(80);
   });
-  it('SIDR 11.5 → 128 psi, sold as 125 (REFERENCES §2.1 [C])', () => {
+  it('SIDR 11.5 → 128 psi, sold as 125 (core.md §2.1 [C])', () => {
     const computed = pressureRatingFromSidr({ sidr: 11.5, designStressPa: 800 });
     expect(computed).toBeCloseTo(128, 0);
     expect(nominalPressureClass({ computed, classes: ASTM_PRESSURE_CLASSES_PSI })).toBe(125);

@@ -36,7 +36,7 @@ describe('useDemand', () => {
     expect(result.hourlyShapeNominal).toBe(true);
   });
 
-  it('garden: 1 inch over 1 ft² is 0.6234 US gal (REFERENCES.md §3.7, bchill guide prints 0.62)', () => {
+  it('garden: 1 inch over 1 ft² is 0.6234 US gal (core.md §3.7, bchill guide prints 0.62)', () => {
     const result = useDemand({ use: { kind: 'garden', areaM2: SQUARE_FOOT_M2, depthMPerDay: INCH_M, delivery: { kind: 'delivery-hours', hours: 1 } } });
     expect(result.dailyVolumeM3 / US_GALLON_M3).toBeCloseTo(0.6234, 4);
   });
@@ -89,6 +89,25 @@ describe('dailyDemand', () => {
   it('the total peak is never below any single use\'s peak', () => {
     const result = dailyDemand({ uses });
     for (const use of result.uses) expect(result.peakFlowM3s).toBeGreaterThanOrEqual(use.peakFlowM3s - 1e-15);
+  });
+
+  it('a window under an hour keeps its own rate in the total: 0.5 m³ in 30 min is 0.5/1800 m³/s, not 0.5/3600 (mean flow = volume / time, exact)', () => {
+    const trough = { kind: 'fixed', volumeM3PerDay: 0.5, delivery: { kind: 'delivery-hours', hours: 0.5, startHour: 7 } } as const;
+    const alone = dailyDemand({ uses: [trough] });
+    expect(alone.peakFlowM3s).toBeCloseTo(0.5 / 1800, 15);
+    // With a house on the Jordan pattern (7:00-8:00 is 15 % of the day, Tanzania DCOM Table C.1, core.md §3.4)
+    // the two rates add for the half hour they overlap.
+    const withHouse = dailyDemand({ uses: [trough, { kind: 'fixed', volumeM3PerDay: 1, delivery: jordan }] });
+    expect(withHouse.peakFlowM3s).toBeCloseTo(0.5 / 1800 + (1 * 0.15) / 3600, 15);
+  });
+
+  it('a window past midnight adds to an early window it overlaps; windows apart do not add', () => {
+    const half = (startHour: number, hours = 0.5) => ({ kind: 'fixed', volumeM3PerDay: 0.9, delivery: { kind: 'delivery-hours', hours, startHour } }) as const;
+    // 23:00 + 1.5 h wraps past midnight to 00:30.
+    const wrapped = dailyDemand({ uses: [half(23, 1.5), half(0)] });
+    expect(wrapped.peakFlowM3s).toBeCloseTo(0.9 / 5400 + 0.9 / 1800, 15);
+    const apart = dailyDemand({ uses: [half(3), half(9)] });
+    expect(apart.peakFlowM3s).toBeCloseTo(0.9 / 1800, 15);
   });
 
   it('a delivery window pattern and delivery hours give the same peak', () => {

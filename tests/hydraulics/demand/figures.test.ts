@@ -7,7 +7,7 @@ import { PER_PERSON_DEMAND_FIGURES } from '../../../hydraulics/demand/per-person
 const perPerson = (id: string) => PER_PERSON_DEMAND_FIGURES.find((figure) => figure.id === id)!;
 const stock = (id: string) => LIVESTOCK_DEMAND_FIGURES.find((figure) => figure.id === id)!;
 
-describe('per-person demand defaults (REFERENCES.md §3.5)', () => {
+describe('per-person demand defaults (core.md §3.5)', () => {
   it.each([
     // [id, litres per person per day, source named in the data]
     ['survival-minimum', 7.5, 'Sphere Project 2011 (via OpenLearn Create, Table 14.1)'],
@@ -33,7 +33,7 @@ describe('per-person demand defaults (REFERENCES.md §3.5)', () => {
   });
 });
 
-describe('livestock defaults (AAFC / PFRA Stockman\'s Guide, REFERENCES.md §3.6, imperial gallons)', () => {
+describe('livestock defaults (AAFC / PFRA Stockman\'s Guide, core.md §3.6, imperial gallons)', () => {
   it.each([
     // [id, winter L, summer L, winter imp gal, summer imp gal] as printed
     ['lactating-cow', 77, 95, 17, 21],
@@ -68,7 +68,7 @@ describe('livestock defaults (AAFC / PFRA Stockman\'s Guide, REFERENCES.md §3.6
   });
 });
 
-describe('garden depth defaults (REFERENCES.md §3.7)', () => {
+describe('garden depth defaults (core.md §3.7)', () => {
   it('vegetables: 1 inch a week (NC State guidance via 98905.com) = 3.63 mm/day', () => {
     const figure = GARDEN_DEPTH_FIGURES.find((entry) => entry.id === 'vegetables-inch-per-week')!;
     expect(figure.published).toEqual({ value: 1, unit: 'in/week' });

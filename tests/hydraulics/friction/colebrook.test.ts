@@ -4,7 +4,7 @@ import { colebrookFrictionFactor, colebrookResidual } from '../../../hydraulics/
 
 
 describe('Colebrook-White', () => {
-  // Moody-chart spot values, Colebrook solved to 1e-15 (REFERENCES §1.3 [C], regression; printed to
+  // Moody-chart spot values, Colebrook solved to 1e-15 (core.md §1.3 [C], regression; printed to
   // 5 decimals, so the tolerance is half a unit in the last place).
   it.each([
     [4e3, 0, 0.03991],
@@ -17,10 +17,10 @@ describe('Colebrook-White', () => {
   ])('Re %d, ε/D %d → f = %d', (reynolds, relativeRoughness, expected) => {
     expect(Math.abs(colebrookFrictionFactor({ reynolds, relativeRoughness }) - expected)).toBeLessThanOrEqual(5e-6);
   });
-  it('Re 1e5, ε/D 0.0015 → 0.023736 (REFERENCES §1.3 [C], the Swamee-Jain example pipe)', () => {
+  it('Re 1e5, ε/D 0.0015 → 0.023736 (core.md §1.3 [C], the Swamee-Jain example pipe)', () => {
     expect(colebrookFrictionFactor({ reynolds: 1e5, relativeRoughness: 0.0015 })).toBeCloseTo(0.023736, 6);
   });
-  it('tends to the fully-rough limit [2 log10(3.7 D/ε)]⁻² (REFERENCES §1.3 [C])', () => {
+  it('tends to the fully-rough limit [2 log10(3.7 D/ε)]⁻² (core.md §1.3 [C])', () => {
     expect(colebrookFrictionFactor({ reynolds: 1e12, relativeRoughness: 1e-3 })).toBeCloseTo(0.019635, 6);
   });
   it('property: residual below 1e-12 across the chart', () => {

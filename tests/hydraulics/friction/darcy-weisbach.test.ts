@@ -20,7 +20,7 @@ describe('darcyFrictionFactor regimes', () => {
 });
 
 describe('darcyWeisbachHeadLoss', () => {
-  it('REFERENCES §8.3 [C]: 10 L/s, D 100 mm, ε 0.0015 mm, ν 1.004e-6, 1 km → 14.235 m (f 0.017222)', () => {
+  it('core.md §8.3 [C]: 10 L/s, D 100 mm, ε 0.0015 mm, ν 1.004e-6, 1 km → 14.235 m (f 0.017222)', () => {
     const loss = darcyWeisbachHeadLoss({
       flowM3s: 0.01,
       lengthM: 1000,

@@ -13,11 +13,11 @@ const CFS = FT ** 3;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe('Hazen-Williams, exact SI form from k = 0.849', () => {
-  it('uses exponents 1/0.54 = 1.85185 and 2.63/0.54 = 4.87037 (REFERENCES §1.1 [C])', () => {
+  it('uses exponents 1/0.54 = 1.85185 and 2.63/0.54 = 4.87037 (core.md §1.1 [C])', () => {
     expect(HAZEN_WILLIAMS_FLOW_EXPONENT).toBeCloseTo(1.85185, 5);
     expect(HAZEN_WILLIAMS_DIAMETER_EXPONENT).toBeCloseTo(4.87037, 5);
   });
-  it('implies the SI constant 10.6742 (REFERENCES §1.1 [C]); PipingDesigner prints 10.7 (±0.5 %) [R19]', () => {
+  it('implies the SI constant 10.6742 (core.md §1.1 [C]); PipingDesigner prints 10.7 (±0.5 %) [R19]', () => {
     const constant = hazenWilliamsHeadLoss({ flowM3s: 1, lengthM: 1, diameterM: 1, c: 1 });
     expect(constant).toBeCloseTo(10.6742, 3);
     expect(rel(constant, 10.7)).toBeLessThan(0.005);
@@ -39,7 +39,7 @@ describe('Hazen-Williams, exact SI form from k = 0.849', () => {
   });
   it('h per 100 ft = 0.2083·(100/C)^1.852·q^1.852/d^4.8655 at q = 1 gpm, d = 1 in, C = 100 (Engineering ToolBox [R20]; ±1 %)', () => {
     // The printed US forms carry their own rounded constants and exponents (1.852, 4.8655); they
-    // differ from the exact SI form by up to ~1 % (REFERENCES §1.1 lists 10.44 vs implied 10.447).
+    // differ from the exact SI form by up to ~1 % (core.md §1.1 lists 10.44 vs implied 10.447).
     const perHundredFt = hazenWilliamsHeadLoss({ flowM3s: GPM, lengthM: 100 * FT, diameterM: IN, c: 100 }) / FT;
     expect(rel(perHundredFt, 0.2083)).toBeLessThan(0.01);
   });
@@ -50,15 +50,15 @@ describe('Hazen-Williams, exact SI form from k = 0.849', () => {
     expect(rel(perHundredFt, 9)).toBeLessThan(0.02);
     expect(rel(thirtyFt, 2.7)).toBeLessThan(0.02);
   });
-  it('SI regression values of REFERENCES §1.2 #6 [C]: 14.629 m (exact form); 6.006 m with 10.67 form, ±0.3 % here', () => {
+  it('SI regression values of core.md §1.2 #6 [C]: 14.629 m (exact form); 6.006 m with 10.67 form, ±0.3 % here', () => {
     expect(hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1000, diameterM: 0.1, c: 150 })).toBeCloseTo(14.629, 3);
     expect(rel(hazenWilliamsHeadLoss({ flowM3s: 0.001, lengthM: 1000, diameterM: 0.05, c: 150 }), 6.006)).toBeLessThan(0.003);
   });
-  it('hydrauliclearning exercise inputs (700 gpm, 8500 ft, 8 in, C 150) → 61.5 ft (REFERENCES §1.2 #5 [C], 4.727 form)', () => {
+  it('hydrauliclearning exercise inputs (700 gpm, 8500 ft, 8 in, C 150) → 61.5 ft (core.md §1.2 #5 [C], 4.727 form)', () => {
     const feet = hazenWilliamsHeadLoss({ flowM3s: 700 * GPM, lengthM: 8500 * FT, diameterM: 8 * IN, c: 150 }) / FT;
     expect(feet).toBeCloseTo(61.5, 0);
   });
-  it('the 600 m siphon article figures are wrong by ~10×: 2 L/s in 41.9 mm, C 150 → 30.7 m, not 3.2 m (REFERENCES §11 [C])', () => {
+  it('the 600 m siphon article figures are wrong by ~10×: 2 L/s in 41.9 mm, C 150 → 30.7 m, not 3.2 m (core.md §11 [C])', () => {
     const loss = hazenWilliamsHeadLoss({ flowM3s: 0.002, lengthM: 600, diameterM: 0.0419, c: 150 });
     expect(rel(loss, 30.7)).toBeLessThan(0.005);
     expect(loss).toBeGreaterThan(5 * 3.2);

@@ -28,7 +28,7 @@ describe('pipeHeadLossM', () => {
     // Colder water is more viscous: more friction in a smooth pipe.
     expect(cold).toBeGreaterThan(pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.002, lengthM: 500, pipe, temperatureC: 30 }));
   });
-  it('Darcy-Weisbach and Hazen-Williams (C 150) agree within 2.5 % for 10 L/s in 100 mm smooth pipe (REFERENCES §8.3 [C])', () => {
+  it('Darcy-Weisbach and Hazen-Williams (C 150) agree within 2.5 % for 10 L/s in 100 mm smooth pipe (core.md §8.3 [C])', () => {
     const smooth = { insideDiameterM: 0.1, hazenWilliamsC: 150, roughnessM: 1.5e-6 };
     const dw = pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.01, lengthM: 1000, pipe: smooth, temperatureC: 20 });
     const hw = pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.01, lengthM: 1000, pipe: smooth });

@@ -6,7 +6,7 @@ describe('Swamee-Jain', () => {
   it('calculatorlib.com worked example: ε/D = 0.0015, Re = 1e5 → f = 0.02394 [R19] (printed to 4 figures)', () => {
     expect(swameeJainFrictionFactor({ reynolds: 1e5, relativeRoughness: 0.0015 })).toBeCloseTo(0.02394, 5);
   });
-  it('stays within the stated ±1 % of Colebrook inside its range except near Re = 5000 (REFERENCES §1.3: −0.7…+3.1 %)', () => {
+  it('stays within the stated ±1 % of Colebrook inside its range except near Re = 5000 (core.md §1.3: −0.7…+3.1 %)', () => {
     for (const reynolds of [1e5, 1e6, 1e7]) {
       for (const relativeRoughness of [1e-5, 1e-4, 1e-3, 1e-2]) {
         const ratio =

@@ -84,6 +84,19 @@ describe('analyzeProfile behaviour', () => {
     expect(profile.end.hydraulicGradeM).toBeCloseTo(180 - profile.totals.frictionLossM, 12);
   });
 
+  it('a pump without a shut-off head is not taken to shut off at its duty head: 1.25 × its head above the pipe (common practice, no source)', () => {
+    const line = simpleLine([[0, 100], [1000, 150]], 0, 0.003);
+    const profile = analyzeProfile({ ...line, start: { kind: 'pump', outletHeadM: 180 } });
+    const pipeAtPump = profile.points.pipeElevationM[0];
+    expect(profile.points.staticHeadM[0]).toBeCloseTo(pipeAtPump + 1.25 * (180 - pipeAtPump), 9);
+    expect(profile.points.staticHeadM[0]).toBeGreaterThan(180);
+  });
+
+  it('a shut-off head below the pumping head is refused on start.shutoffHeadM', () => {
+    const line = simpleLine([[0, 100], [1000, 150]], 0, 0.003);
+    expect(() => analyzeProfile({ ...line, start: { kind: 'pump', outletHeadM: 180, shutoffHeadM: 170 } })).toThrow(/start\.shutoffHeadM.*below the grade while pumping/);
+  });
+
   it('an outlet end reports its residual head against its target (default 3 m, Akvopedia [R2])', () => {
     const profile = analyzeProfile({
       ...simpleLine([[0, 100], [1000, 60]], 101, 0.002),

@@ -13,25 +13,25 @@ const FLAT_KM: readonly (readonly [number, number])[] = [
 ];
 
 describe('line profile against published check values', () => {
-  it('REFERENCES §8.2 (Hazen-Williams): 1 km of 100 mm, C = 150, at 10 L/s loses 14.60 m', () => {
+  it('core.md §8.2 (Hazen-Williams): 1 km of 100 mm, C = 150, at 10 L/s loses 14.60 m', () => {
     const profile = analyzeProfile(simpleLine(FLAT_KM, 150, 0.01));
     // [C] 14.603 m with the 10.67 form, 14.629 m with the exact k = 0.849 form: ~1 % band.
     expect(relative(profile.totals.frictionLossM, 14.6)).toBeLessThan(0.01);
     expect(profile.points.frictionLossM[profile.points.frictionLossM.length - 1]).toBe(profile.totals.frictionLossM);
   });
 
-  it('REFERENCES §8.2: the same line runs at 1.273 m/s, inside Jordan\'s 0.7-3.0 m/s band (no velocity warning)', () => {
+  it('core.md §8.2: the same line runs at 1.273 m/s, inside Jordan\'s 0.7-3.0 m/s band (no velocity warning)', () => {
     const analysis = analyzeLine(simpleLine(FLAT_KM, 150, 0.01));
     expect(analysis.points.velocityMs[0]).toBeCloseTo(1.273, 3);
     expect(analysis.warnings.filter((w) => w.code.startsWith('velocity'))).toEqual([]);
   });
 
-  it('REFERENCES §8.3 (Darcy-Weisbach, PVC e = 0.0015 mm, 20 C): the same line loses 14.235 m', () => {
+  it('core.md §8.3 (Darcy-Weisbach, PVC e = 0.0015 mm, 20 C): the same line loses 14.235 m', () => {
     const input = { ...simpleLine(FLAT_KM, 150, 0.01), settings: { frictionMethod: 'darcy-weisbach' as const } };
     expect(relative(analyzeProfile(input).totals.frictionLossM, 14.235)).toBeLessThan(0.01);
   });
 
-  it('REFERENCES §8.1: 46.2 m of static head is 452.2 kPa at 20 C', () => {
+  it('core.md §8.1: 46.2 m of static head is 452.2 kPa at 20 C', () => {
     const profile = analyzeProfile(simpleLine(FLAT_KM, 146.2, 0));
     const headM = profile.points.staticPressureHeadM[1];
     expect(headM).toBeCloseTo(46.2, 10);
@@ -39,14 +39,14 @@ describe('line profile against published check values', () => {
     expect(Math.abs(headMToPressurePa(headM, 20) / 1000 - 452.2)).toBeLessThan(0.1);
   });
 
-  it('REFERENCES §1.6 / [R7]: atmospheric head 10.34 m at sea level, 9.17 m at 1000 m, 8.62 m at 1500 m', () => {
+  it('core.md §1.6 / [R7]: atmospheric head 10.34 m at sea level, 9.17 m at 1000 m, 8.62 m at 1500 m', () => {
     const at = (siteAltitudeM: number) =>
       analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0), settings: { siteAltitudeM } }).limits;
     expect(at(0).atmosphericHeadM).toBeCloseTo(10.34, 1);
     expect(Math.abs(at(1000).atmosphericHeadM - 9.17)).toBeLessThan(0.02);
-    // [R7] siphon article prints 8.63 m at 1500 m; the ISA check in §1.6 gives 8.62 m.
+    // [R7] siphon article prints 8.63 m at 1500 m; the ISA check in core.md §1.6 gives 8.62 m.
     expect(Math.abs(at(1500).atmosphericHeadM - 8.62)).toBeLessThan(0.02);
-    // Vapour head of water at 20 C: 0.239 m (REFERENCES §1.6 [C], Buck/Tetens form).
+    // Vapour head of water at 20 C: 0.239 m (core.md §1.6 [C], Buck/Tetens form).
     expect(at(0).vapourHeadM).toBeCloseTo(0.239, 3);
   });
 
@@ -71,7 +71,7 @@ describe('line profile against published check values', () => {
     expect(shallow.zones.map((zone) => zone.kind)).toEqual(['negative-pressure']);
   });
 
-  it('vapour limit at 3000 m: atmospheric 7.15 m (REFERENCES §1.6) less 0.24 m vapour head is passed by a -7 m summit', () => {
+  it('vapour limit at 3000 m: atmospheric 7.15 m (core.md §1.6) less 0.24 m vapour head is passed by a -7 m summit', () => {
     const profile = analyzeProfile({
       ...simpleLine([[0, 3000], [500, 3012], [1000, 2980]], 3005, 0),
       settings: { siteAltitudeM: 3000 },

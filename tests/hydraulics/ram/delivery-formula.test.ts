@@ -24,7 +24,7 @@ describe('ramDeliveredFlowM3s (q = e·Q·H/h; Water for the World D = S·F·E/L)
     expect(delivered * 3600 * 1000).toBeCloseTo(315, 6);
   });
 
-  it('REFERENCES.md §4.2 regression: Q = 20 L/min, H = 3 m, h = 30 m, e = 0.6 -> 1.2 L/min = 1728 L/day', () => {
+  it('core.md §4.2 regression: Q = 20 L/min, H = 3 m, h = 30 m, e = 0.6 -> 1.2 L/min = 1728 L/day', () => {
     const delivered = ramDeliveredFlowM3s({ driveFlowM3s: 20 * L_PER_MIN, fallM: 3, deliveryHeadM: 30, efficiency: 0.6 });
     expect(delivered / L_PER_MIN).toBeCloseTo(1.2, 12);
     expect(perDayL(delivered)).toBeCloseTo(1728, 6);
@@ -37,7 +37,7 @@ describe('ramDeliveredFlowM3s (q = e·Q·H/h; Water for the World D = S·F·E/L)
 });
 
 describe("D'Aubuisson efficiency from the Water for the World / Blake table (L/day delivered per L/min supplied)", () => {
-  // Implied efficiency = D·L / (1440·F) (REFERENCES.md §4.1, computed from the published table).
+  // Implied efficiency = D·L / (1440·F) (core.md §4.1, computed from the published table).
   it.each([
     [1, 5, 144, 0.5],
     [1, 40, 12.5, 0.347],

@@ -7,7 +7,7 @@ import {
   WATER_MISSION_PATTERN_AS_PRINTED,
 } from '../../../hydraulics/storage/daily-patterns';
 
-// Tanzania DCOM Manual Vol. I, App. C, Table C.1, "data from Jordan" (REFERENCES.md §3.4).
+// Tanzania DCOM Manual Vol. I, App. C, Table C.1, "data from Jordan" (core.md §3.4).
 describe('published daily use patterns', () => {
   it('Jordan morning/evening peak sums to 100 % with 15 % at 6, 7, 16 and 17 h', () => {
     expect(JORDAN_MORNING_EVENING_PATTERN.sumPercent).toBe(100);

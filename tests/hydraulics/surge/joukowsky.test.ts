@@ -27,7 +27,7 @@ describe('joukowskyHeadRise', () => {
     expect(relative(headFt / FT_PER_PSI, 657)).toBeLessThan(0.01);
   });
 
-  it('reproduces the REFERENCES §5 [C] regressions (dH = a dV / g, g = 9.80665)', () => {
+  it('reproduces the core.md §5 [C] regressions (dH = a dV / g, g = 9.80665)', () => {
     expect(joukowskyHeadRise({ waveSpeedMs: 300, velocityChangeMs: 1 })).toBeCloseTo(30.6, 1);
     expect(joukowskyHeadRise({ waveSpeedMs: 1000, velocityChangeMs: 1.5 })).toBeCloseTo(153.0, 1);
     expect(joukowskyHeadRise({ waveSpeedMs: 1400, velocityChangeMs: 1 })).toBeCloseTo(142.8, 1);
@@ -54,7 +54,7 @@ describe('joukowskyHeadRise', () => {
 });
 
 describe('critical closure time 2L/a', () => {
-  it('reproduces the REFERENCES §5 [C] values: 1000 m at 400 m/s -> 5.0 s; 500 m at 1200 m/s -> 0.833 s', () => {
+  it('reproduces the core.md §5 [C] values: 1000 m at 400 m/s -> 5.0 s; 500 m at 1200 m/s -> 0.833 s', () => {
     expect(criticalClosureTimeS({ lengthM: 1000, waveSpeedMs: 400 })).toBeCloseTo(5.0, 10);
     expect(criticalClosureTimeS({ lengthM: 500, waveSpeedMs: 1200 })).toBeCloseTo(0.8333, 4);
   });

@@ -4,7 +4,7 @@ import { projectToLocalPlan, MEAN_EARTH_RADIUS_M } from '../../../hydraulics/sur
 
 describe('chainageAlongTrack', () => {
   it('keeps horizontal (ellipsoidal) and slope (3-D) chainage separately', () => {
-    // Legs from REFERENCES.md §6.3 [C]: 45°N Δlon 0.01° = 788.468 m; 45°N → 45.01°N = 1111.319 m.
+    // Legs from core.md §6.3 [C]: 45°N Δlon 0.01° = 788.468 m; 45°N → 45.01°N = 1111.319 m.
     const t = chainageAlongTrack([
       { latitudeDeg: 45, longitudeDeg: 0, elevationM: 100 },
       { latitudeDeg: 45, longitudeDeg: 0.01, elevationM: 160 },
@@ -40,7 +40,7 @@ describe('chainageAlongTrack', () => {
 });
 
 describe('projectToLocalPlan (equirectangular about the route centre)', () => {
-  it('0.01° of latitude is R₁·0.01·π/180 = 1111.951 m north (REFERENCES.md §6.3 haversine column [C])', () => {
+  it('0.01° of latitude is R₁·0.01·π/180 = 1111.951 m north (core.md §6.3 haversine column [C])', () => {
     const plan = projectToLocalPlan([
       { latitudeDeg: 45, longitudeDeg: 0 },
       { latitudeDeg: 45.01, longitudeDeg: 0 },

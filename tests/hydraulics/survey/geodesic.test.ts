@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { geodesicDirect, geodesicInverse, geodesicInterpolate } from '../../../hydraulics/survey/geodesic';
 import { HydraulicsInputError } from '../../../hydraulics/errors';
 
-// Source for every [P] value below: REFERENCES.md §6.2, [R27] C.F.F. Karney, GeographicLib
+// Source for every [P] value below: core.md §6.2, [R27] C.F.F. Karney, GeographicLib
 // documentation examples (JS geographiclib-geodesic README, Python/Ruby docs), values repeated in
 // unit tests of independent ports (SwiftyGeographicLib, pygeodesy). The library is exact to
 // round-off, so published digits are compared to within the last digit shown.
@@ -26,12 +26,12 @@ describe('geodesicInverse on WGS84', () => {
   });
 
   it.each([
-    // REFERENCES.md §6.3 [C]: ellipsoid (Vincenty) column, computed values, compared to 1 mm.
+    // core.md §6.3 [C]: ellipsoid (Vincenty) column, computed values, compared to 1 mm.
     ['45°N, Δlon 0.01°', 45, 0, 45, 0.01, 788.468],
     ['45°N → 45.01°N', 45, 0, 45.01, 0, 1111.319],
     ['equator, Δlon 0.01°', 0, 0, 0, 0.01, 1113.195],
     ['(−1.0, 36.0) → (−1.009, 36.009)', -1, 36, -1.009, 36.009, 1412.025],
-  ])('short leg %s matches the §6.3 ellipsoidal value [C]', (_name, la1, lo1, la2, lo2, expected) => {
+  ])('short leg %s matches the core.md §6.3 ellipsoidal value [C]', (_name, la1, lo1, la2, lo2, expected) => {
     const r = geodesicInverse({ latitude1Deg: la1, longitude1Deg: lo1, latitude2Deg: la2, longitude2Deg: lo2 });
     expect(Math.abs(r.distanceM - expected)).toBeLessThan(0.0006);
   });

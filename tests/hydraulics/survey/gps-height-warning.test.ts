@@ -36,7 +36,7 @@ describe('consumerGpsHeightWarning', () => {
 });
 
 describe('default vertical uncertainty per height source', () => {
-  it('GPS is 15 m (SPS PS 2020 §3.4, 95 %) and RTK GNSS 2 cm (REFERENCES.md §6.4 [R28])', () => {
+  it('GPS is 15 m (SPS PS 2020 §3.4, 95 %) and RTK GNSS 2 cm (core.md §6.4 [R28])', () => {
     expect(defaultVerticalUncertaintyM('gps')).toBe(15);
     expect(defaultVerticalUncertaintyM('gnss')).toBe(0.02);
     expect(DEFAULT_VERTICAL_UNCERTAINTY.gps.source).toMatch(/Performance Standard 2020 §3\.4/);

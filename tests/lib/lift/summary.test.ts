@@ -9,7 +9,7 @@ const site = (id: string, patch: Partial<RamSiteRecord> = {}): RamSiteRecord => 
   id, name: id, sourceId: null, tankId: 'tank', driveFlowM3s: 20 * L_PER_MIN, fallM: 2,
   drivePipe: { lengthM: 14, insideDiameterM: 0.03505, material: 'steel', rigid: null }, liftM: 10.7, pumpElevationM: null,
   deliveryPipe: { routeId: null, lengthM: 107, pipeId: null, insideDiameterM: 0.02093, hazenWilliamsC: 150, pressureRatingPa: 689_476 },
-  sizeClassId: null, pumpCount: 1, measuredEfficiency: null, notes: '', ...patch,
+  sizeClassId: null, pumpCount: 1, measuredEfficiency: null, efficiencyTableId: 'trade-pocketbook', notes: '', ...patch,
 });
 const tank: TankRecord = {
   id: 'tank', name: 'Tank', volumeM3: 1.25, baseElevationM: null, lowLevelM: 0, overflowLevelM: null, supplyKind: 'ram-sites', supplySourceId: null,

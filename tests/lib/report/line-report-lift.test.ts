@@ -5,6 +5,7 @@ import type { LineRecord } from '../../../lib/data/lines';
 import type { PumpOutletHead } from '../../../lib/lift/pump-outlet';
 import { lineInputOf } from '../../../lib/lines/line-input';
 import type { LineSiteContext } from '../../../lib/lines/ram-start';
+import { workingCopyStamp } from '../../../lib/review/stamp';
 import { lineReportPdf } from '../../../lib/report/line-report';
 import { LineDesignSchema, type LineDesignInput } from '../../../lib/validations/line-design';
 
@@ -30,11 +31,11 @@ async function reportText(designParts: LineDesignInput, context: LineSiteContext
   const line: LineRecord = {
     id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
     routeName: 'Test delivery route', name: 'Ram delivery', notes: '', fromChainageM: null, toChainageM: null,
-    status: 'draft', checkedBy: '', revision: 3, preparedBy: 'Test designer', design,
+    revision: 3, preparedBy: 'Test designer', design,
     createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
   };
   const analysis = analyzeLine(lineInputOf(design, stations, context));
-  const pdf = await lineReportPdf({ project: { name: 'Test project', unitSystem: 'us' }, line, analysis, context, startGroundM: 99, generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const pdf = await lineReportPdf({ project: { name: 'Test project', unitSystem: 'us' }, line, analysis, context, startGroundM: 99, stamp: workingCopyStamp('Test designer'), generatedAt: new Date('2026-12-01T12:00:00Z') });
   const parser = new PDFParse({ data: new Uint8Array(pdf) });
   const result = await parser.getText();
   await parser.destroy();

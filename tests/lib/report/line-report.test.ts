@@ -3,8 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { analyzeLine, PRESSURE_CAUTION } from '../../../hydraulics/index';
 import type { LineRecord } from '../../../lib/data/lines';
 import { LINE_CAUTIONS } from '../../../lib/lines/cautions';
-import { localiseWarningText } from '../../../lib/units/localise-text';
+import { warningText } from '../../../lib/lines/warning-words';
+import { displayUnits } from '../../../lib/units';
 import { WARNING_TITLES } from '../../../lib/lines/warning-words';
+import { revisionStamp } from '../../../lib/review/stamp';
 import { lineReportPdf } from '../../../lib/report/line-report';
 import { LineDesignSchema } from '../../../lib/validations/line-design';
 import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
@@ -17,11 +19,11 @@ async function reportText(unitSystem: 'metric' | 'us') {
   const line: LineRecord = {
     id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
     routeName: 'Spring line design profile', name: 'Spring box to house', notes: '', fromChainageM: null, toChainageM: null,
-    status: 'for-checking', checkedBy: 'Dara Okafor', revision: 7, preparedBy: 'Tobias Wren', design,
+    revision: 40, preparedBy: 'Tobias Wren', design,
     createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
   };
   const analysis = analyzeLine(input);
-  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, stamp: revisionStamp({ number: 7, status: 'approved', designerName: 'Tobias Wren', reviewerName: 'Dara Okafor', reviewedAt: '2026-11-30T15:20:00.000Z' }), generatedAt: new Date('2026-12-01T12:00:00Z') });
   const parser = new PDFParse({ data: new Uint8Array(pdf) });
   const result = await parser.getText();
   await parser.destroy();
@@ -33,7 +35,7 @@ describe('line design report (PDF)', () => {
     const { pdf, text, pages } = await reportText('metric');
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     expect(pages).toBeGreaterThanOrEqual(2);
-    for (const words of ['Spring box to house: line design report', 'Kestrel Hollow spring line', 'Tobias Wren', 'Dara Okafor', 'For checking', '7 / 2026-12-01']) {
+    for (const words of ['Spring box to house: line design report', 'Kestrel Hollow spring line', 'Tobias Wren', 'Dara Okafor', 'Revision 7', 'Approved', '2026-11-30', '2026-12-01']) {
       expect(text).toContain(words);
     }
   });
@@ -43,7 +45,8 @@ describe('line design report (PDF)', () => {
     expect(analysis.warnings.length).toBeGreaterThan(3);
     for (const w of analysis.warnings) {
       expect(text).toContain(WARNING_TITLES[w.code]);
-      expect(text).toContain(squash(w.message).slice(0, 60));
+      // The report words each warning from its code and values, as the screen does.
+      expect(text).toContain(squash(warningText(w, displayUnits('metric')).message).slice(0, 60));
     }
     for (const words of ['Stretch schedule', '40 mm PE80 SDR 17 (PN 8)', 'Devices by chainage', 'Air-release valve', 'Assumptions', 'Hazen-Williams', '20 °C']) {
       expect(text).toContain(words);
@@ -62,6 +65,9 @@ describe('line design report (PDF)', () => {
     expect(text).toContain('gpm');
     expect(text).toContain('psi');
     const over = analysis.warnings.find((w) => w.code === 'static-over-rating')!;
-    expect(text).toContain(squash(localiseWarningText(over.message, 'us')).slice(0, 60));
+    const words = warningText(over, displayUnits('us')).message;
+    expect(words).toMatch(/ ft /);
+    expect(words).not.toMatch(/\d m\b/);
+    expect(text).toContain(squash(words).slice(0, 60));
   });
 });

@@ -67,7 +67,7 @@ describe('parseGpsCsv', () => {
     expect(ParsedSurveySchema.safeParse(s).success).toBe(true);
     expect(s.points).toHaveLength(8);
     expect(s.points[0]).toMatchObject({ order: 0, lat: 45.5012, lon: 11.8024, chainageM: 0, elevationM: 812.4, label: 'Alder Spring intake', heightSource: 'gps', time: '2024-05-04T07:10:00.000Z' });
-    // Horizontal accuracy 3.9 m × 1.5 (consumer vertical/horizontal ratio, REFERENCES.md §6.4 [R28], low authority).
+    // Horizontal accuracy 3.9 m × 1.5 (consumer vertical/horizontal ratio, core.md §6.4 [R28], low authority).
     expect(s.points[0].confidence).toBeCloseTo(5.85, 12);
     const track = chainageAlongTrack(s.points.map((p) => ({ latitudeDeg: p.lat as number, longitudeDeg: p.lon as number, elevationM: p.elevationM })));
     expect(s.points[7].chainageM).toBeCloseTo(track.totalHorizontalM, 9);

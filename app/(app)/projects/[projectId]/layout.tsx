@@ -12,7 +12,7 @@ export default async function ProjectLayout({ children, params }: { children: Re
         <RoleBadge role={role} />
         {project.archived && <span className="rounded bg-stone-100 px-2 py-0.5 text-xs text-stone-700">Archived</span>}
       </div>
-      <ProjectNav projectId={project.id} />
+      <ProjectNav projectId={project.id} role={role} />
       {children}
     </div>
   );

@@ -5,7 +5,7 @@ import { LineParams, UpdateLineSchema } from '@/lib/validations/lines';
 
 const teamOf = ({ lineId }: { lineId: string }) => teamOfLine(lineId);
 
-export const GET = teamRoute({ params: LineParams, permission: 'project.view', teamOf }, async ({ params }) => {
+export const GET = teamRoute({ params: LineParams, permission: 'design.view', teamOf }, async ({ params }) => {
   const line = await getLine(params.lineId);
   if (!line) throw notFound();
   return { line };
@@ -16,6 +16,6 @@ export const PATCH = teamRoute(
   async ({ params, user, body }) => ({ line: await updateLine(params.lineId, user.id, body) }),
 );
 
-export const DELETE = teamRoute({ params: LineParams, permission: 'design.edit', teamOf }, async ({ params }) => {
-  await deleteLine(params.lineId);
+export const DELETE = teamRoute({ params: LineParams, permission: 'design.edit', teamOf }, async ({ params, user }) => {
+  await deleteLine(params.lineId, user.id);
 });

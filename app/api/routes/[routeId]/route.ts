@@ -6,7 +6,7 @@ import { RouteParams, UpdateRouteSchema } from '@/lib/validations/routes';
 
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
-export const GET = teamRoute({ params: RouteParams, permission: 'project.view', teamOf }, async ({ params }) => {
+export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ params }) => {
   const detail = await getRouteDetail(params.routeId);
   if (!detail) throw notFound('Route not found');
   return detail;

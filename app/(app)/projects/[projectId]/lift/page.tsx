@@ -11,7 +11,7 @@ import { getQueryClient } from '@/lib/queries/query-client';
 export const metadata: Metadata = { title: 'Lift & storage' };
 
 export default async function LiftPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const { project, role } = await requireProjectPage(params);
+  const { project, role } = await requireProjectPage(params, 'design.view');
 
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: liftKeys.summary(project.id), queryFn: () => getLiftSummary(project.id) });

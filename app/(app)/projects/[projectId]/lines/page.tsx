@@ -13,7 +13,7 @@ import { getQueryClient } from '@/lib/queries/query-client';
 export const metadata: Metadata = { title: 'Lines' };
 
 export default async function LinesPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const { project, role } = await requireProjectPage(params);
+  const { project, role } = await requireProjectPage(params, 'design.view');
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: lineKeys.project(project.id), queryFn: () => listLines(project.id) });
   const editable = can(role, 'design.edit');

@@ -13,7 +13,7 @@ import { routeKeys } from '@/lib/queries/routes';
 export const metadata: Metadata = { title: 'Survey routes' };
 
 export default async function RoutesPage({ params }: { params: Promise<{ projectId: string }> }) {
-  const { project, role } = await requireProjectPage(params);
+  const { project, role } = await requireProjectPage(params, 'design.view');
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: routeKeys.project(project.id), queryFn: () => listRoutes(project.id) });
   const editable = can(role, 'survey.edit');

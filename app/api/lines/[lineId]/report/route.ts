@@ -5,21 +5,22 @@ import { getProject } from '@/lib/data/projects';
 import { notFound } from '@/lib/errors';
 import { reportFileName } from '@/lib/lines/file-names';
 import { lineReportPdf } from '@/lib/report/line-report';
+import { workingCopyStamp } from '@/lib/review/stamp';
 import { LineParams } from '@/lib/validations/lines';
 
-/** The saved line's design report as a PDF download; anyone on the team may export it. */
+/** The working copy's design report as a PDF, marked not for construction; the team (not the client) may export it. */
 export const GET = teamRoute(
-  { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
+  { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {
     const { line, analysis, context, stations } = await analyseSavedLine(params.lineId);
     const project = await getProject(line.projectId);
     if (!project) throw notFound();
-    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, generatedAt: new Date() });
+    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date() });
     return new Response(new Uint8Array(pdf), {
       status: 200,
       headers: {
         'content-type': 'application/pdf',
-        'content-disposition': `attachment; filename="${reportFileName(line.name, line.revision, 'pdf')}"`,
+        'content-disposition': `attachment; filename="${reportFileName(line.name, null, 'pdf')}"`,
         'cache-control': 'no-store',
       },
     });

@@ -6,7 +6,7 @@ import { LineParams } from '@/lib/validations/lines';
 
 /** What the line reads from the rest of its project: the planned ram sites that can feed it and the site's frost depth. */
 export const GET = teamRoute(
-  { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
+  { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {
     const line = await getLine(params.lineId);
     if (!line) throw notFound();

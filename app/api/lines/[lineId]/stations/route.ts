@@ -5,7 +5,7 @@ import { LineParams } from '@/lib/validations/lines';
 
 /** The stations the line follows: its route cut to the line's window, with map positions. */
 export const GET = teamRoute(
-  { params: LineParams, permission: 'project.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
+  { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {
     const line = await getLine(params.lineId);
     if (!line) throw notFound();

@@ -5,6 +5,6 @@ import { ProjectParams } from '@/lib/validations/projects';
 
 /** Plans, yields, demand, storage and seasonal tasks of a project, computed from its stored rows. */
 export const GET = teamRoute(
-  { params: ProjectParams, permission: 'project.view', teamOf: ({ projectId }) => teamOfProject(projectId) },
+  { params: ProjectParams, permission: 'design.view', teamOf: ({ projectId }) => teamOfProject(projectId) },
   async ({ params }) => ({ lift: await getLiftSummary(params.projectId) }),
 );

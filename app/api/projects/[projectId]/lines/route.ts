@@ -6,7 +6,7 @@ import { ProjectParams } from '@/lib/validations/projects';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   lines: await listLines(params.projectId),
 }));
 

@@ -6,7 +6,7 @@ import { RamSiteSchema } from '@/lib/validations/ram-sites';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   ramSites: await listRamSites(params.projectId),
 }));
 

@@ -7,7 +7,7 @@ import { CreateRouteSchema } from '@/lib/validations/routes';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   routes: await listRoutes(params.projectId),
 }));
 

@@ -6,7 +6,7 @@ import { SeasonalTaskSchema } from '@/lib/validations/seasonal-tasks';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   tasks: await listSeasonalTasks(params.projectId),
 }));
 

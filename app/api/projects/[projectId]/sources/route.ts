@@ -6,7 +6,7 @@ import { WaterSourceSchema } from '@/lib/validations/water-sources';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   sources: await listSources(params.projectId),
 }));
 

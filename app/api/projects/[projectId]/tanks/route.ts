@@ -6,7 +6,7 @@ import { TankSchema } from '@/lib/validations/tanks';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params }) => ({
+export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params }) => ({
   tanks: await listTanks(params.projectId),
 }));
 

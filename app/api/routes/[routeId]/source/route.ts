@@ -7,7 +7,7 @@ import { RouteParams } from '@/lib/validations/routes';
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 /** The original uploaded survey file, byte for byte. */
-export const GET = teamRoute({ params: RouteParams, permission: 'project.view', teamOf }, async ({ params }) => {
+export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ params }) => {
   const file = await sourceFileOf(params.routeId);
   if (!file) throw notFound('This route has no uploaded file (it was sketched, typed or made by an edit)');
   const stored = await getObject(file.storageKey);

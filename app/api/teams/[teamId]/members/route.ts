@@ -4,8 +4,8 @@ import { AddMemberSchema, TeamParams } from '@/lib/validations/teams';
 
 const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
 
-export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId }) => ({
-  members: await listMembers(teamId),
+export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId, user, role }) => ({
+  members: await listMembers(teamId, { userId: user.id, role }),
 }));
 
 export const POST = teamRoute(

@@ -21,7 +21,7 @@ export default async function LinePage({ params }: { params: Promise<{ projectId
   if (!parsed.success) notFound();
   const user = await requireUser();
   const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
+  const role = await requireTeamRole(user, project?.teamId ?? null, 'design.view');
   const line = await getLine(parsed.data.lineId);
   if (!project || !line || line.projectId !== project.id) notFound();
 

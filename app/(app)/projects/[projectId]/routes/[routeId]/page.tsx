@@ -21,7 +21,7 @@ export default async function RoutePage({ params }: { params: Promise<{ projectI
   if (!parsed.success) notFound();
   const user = await requireUser();
   const project = await getProject(parsed.data.projectId);
-  const role = await requireTeamRole(user, project?.teamId ?? null, 'project.view');
+  const role = await requireTeamRole(user, project?.teamId ?? null, 'design.view');
   const detail = await getRouteDetail(parsed.data.routeId);
   if (!project || !detail || detail.route.projectId !== project.id) notFound();
   const queryClient = getQueryClient();

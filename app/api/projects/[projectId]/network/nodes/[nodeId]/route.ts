@@ -1,0 +1,15 @@
+import { teamRoute } from '@/lib/api/route';
+import { deleteNetworkNode, updateNetworkNode } from '@/lib/data/network';
+import { teamOfProject } from '@/lib/data/projects';
+import { NetworkNodeParams, NetworkNodeSchema } from '@/lib/validations/network';
+
+const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
+
+export const PUT = teamRoute(
+  { params: NetworkNodeParams, body: NetworkNodeSchema, permission: 'design.edit', teamOf },
+  async ({ params, body }) => ({ node: await updateNetworkNode(params.projectId, params.nodeId, body) }),
+);
+
+export const DELETE = teamRoute({ params: NetworkNodeParams, permission: 'design.edit', teamOf }, async ({ params }) => {
+  await deleteNetworkNode(params.projectId, params.nodeId);
+});

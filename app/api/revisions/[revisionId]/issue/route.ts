@@ -1,0 +1,3 @@
+import { revisionActionRoute } from '@/lib/api/revision-action-route';
+
+export const POST = revisionActionRoute('issue');

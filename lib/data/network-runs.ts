@@ -1,0 +1,77 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import { assertNetworkInput } from '../../hydraulics/index';
+import { models } from '../../models';
+import { notFound } from '../errors';
+import { log } from '../log';
+import type { NetworkJobView, NetworkRunKind } from '../network/jobs';
+import { buildNetworkInput } from '../network/network-input';
+import { explainCoreError } from '../network/solve-result';
+import type { NetworkRunInput } from '../validations/network';
+import { runInWorker } from '../workers/pool';
+import { loadNetworkContext } from './network-context';
+import { networkJobView } from './network-view';
+
+/** A run still "running" after this long was lost with its server process; it is reported as failed. */
+const STALE_AFTER_MS = 10 * 60 * 1000;
+
+const STAGE: Record<NetworkRunKind, string> = {
+  solve: 'Solving the network on a worker thread',
+  day: 'Running the 24-hour day on a worker thread',
+  size: 'Choosing pipe sizes for least cost on a worker thread',
+};
+
+async function runTask(kind: NetworkRunKind, context: Awaited<ReturnType<typeof loadNetworkContext>>, input: NetworkRunInput) {
+  switch (kind) {
+    case 'solve':
+      return runInWorker('network.solve', context, { timeLimitMs: 60_000 });
+    default:
+      return runInWorker('network.solve', context, { timeLimitMs: (input.timeLimitS + 30) * 1000 });
+  }
+}
+
+/**
+ * Starts a run of the project's network. The network is built and checked here (linear in its size),
+ * so a bad network is a 400 naming the node or link; the work itself runs on the worker pool and
+ * its progress and result are kept in `network_jobs`, so any app instance can answer the poll. One
+ * run of a kind at a time per project: asking again while one runs returns that run.
+ */
+export async function startNetworkRun(projectId: string, userId: string, input: NetworkRunInput): Promise<NetworkJobView> {
+  const { NetworkJob } = models();
+  const running = await NetworkJob.findOne({
+    where: { projectId, kind: input.kind, status: { [Op.in]: ['queued', 'running'] }, updatedAt: { [Op.gt]: new Date(Date.now() - STALE_AFTER_MS) } },
+    order: [['createdAt', 'DESC']],
+  });
+  if (running) return networkJobView(running);
+  const context = await loadNetworkContext(projectId);
+  const built = buildNetworkInput(context);
+  try {
+    assertNetworkInput(built.input);
+  } catch (error) {
+    throw explainCoreError(built, context.records, error);
+  }
+  const job = await NetworkJob.create({
+    projectId, kind: input.kind, status: 'running', progress: 0.1, stage: STAGE[input.kind],
+    options: { ...input }, createdBy: userId, startedAt: new Date(),
+  });
+  void runTask(input.kind, context, input)
+    .then((result) => job.update({ status: 'done', progress: 1, stage: 'Done', result: result as unknown as object, finishedAt: new Date() }))
+    .catch(async (error: unknown) => {
+      const element = error instanceof Error && 'field' in error ? String((error as { field: unknown }).field) : undefined;
+      const message = error instanceof Error ? error.message : 'The run failed';
+      if (!element) log().error({ err: error }, 'network run failed');
+      await job.update({ status: 'failed', stage: 'Failed', error: { message, ...(element ? { element } : {}) }, finishedAt: new Date() }).catch(() => undefined);
+    });
+  return networkJobView(job);
+}
+
+/** One run of a project's network, as the page polls it. */
+export async function getNetworkRun(projectId: string, jobId: string): Promise<NetworkJobView> {
+  const row = await models().NetworkJob.findOne({ where: { id: jobId, projectId } });
+  if (!row) throw notFound('No such run of this network');
+  const view = networkJobView(row);
+  if ((view.status === 'running' || view.status === 'queued') && Date.now() - row.updatedAt.getTime() > STALE_AFTER_MS) {
+    return { ...view, status: 'failed', error: { message: 'The run was lost (the server restarted); start it again' } };
+  }
+  return view;
+}

@@ -1,0 +1,119 @@
+import type { LineAnalysis, LineDevice } from '../../hydraulics/index';
+import { lineAnswers } from '../lines/answers';
+import { analyseSnapshotLine } from './snapshot-analysis';
+import type { DesignSnapshot, SnapshotLine } from './snapshot-types';
+
+/** One chainage range whose pipe differs between the two revisions (size, class or material). */
+export interface PipeChange {
+  fromM: number;
+  toM: number;
+  before: string | null;
+  after: string | null;
+}
+
+export interface DeviceChange {
+  kind: LineDevice['kind'];
+  chainageM: number;
+  change: 'added' | 'removed';
+}
+
+export interface LineComparison {
+  lineId: string;
+  name: string;
+  change: 'added' | 'removed' | 'changed' | 'unchanged';
+  pipes: PipeChange[];
+  devices: DeviceChange[];
+  /** Residual pressure head at the end of the line (the outlet), m; null when that side could not be analysed. */
+  outletHeadM: { before: number | null; after: number | null };
+  flowM3s: { before: number | null; after: number | null };
+}
+
+export interface RevisionComparison {
+  lines: LineComparison[];
+  tanks: { added: string[]; removed: string[]; changed: string[] };
+  ramSites: { added: string[]; removed: string[]; changed: string[] };
+  demandUses: { added: string[]; removed: string[]; changed: string[] };
+}
+
+const KEY_DECIMALS = 100;
+const sameNumber = (a: number | null, b: number | null) => (a === null || b === null ? a === b : Math.abs(a - b) < 1e-6);
+
+function pipeRuns(a: LineAnalysis | null): { fromM: number; toM: number; label: string }[] {
+  return a ? a.stretches.map((s) => ({ fromM: s.fromM, toM: s.toM, label: s.pipe.label })) : [];
+}
+
+/** Ranges where the pipe laid differs, merged where neighbouring ranges changed the same way. */
+export function pipeChanges(before: LineAnalysis | null, after: LineAnalysis | null): PipeChange[] {
+  const a = pipeRuns(before);
+  const b = pipeRuns(after);
+  const cuts = [...new Set([...a, ...b].flatMap((r) => [r.fromM, r.toM]))].sort((x, y) => x - y);
+  const at = (runs: typeof a, c: number) => runs.find((r) => r.fromM <= c && c < r.toM)?.label ?? null;
+  const out: PipeChange[] = [];
+  for (let i = 0; i < cuts.length - 1; i++) {
+    const mid = (cuts[i] + cuts[i + 1]) / 2;
+    const was = at(a, mid);
+    const now = at(b, mid);
+    if (was === now) continue;
+    const last = out[out.length - 1];
+    if (last && last.toM === cuts[i] && last.before === was && last.after === now) last.toM = cuts[i + 1];
+    else out.push({ fromM: cuts[i], toM: cuts[i + 1], before: was, after: now });
+  }
+  return out;
+}
+
+function deviceKey(d: LineDevice): string {
+  return `${d.kind}@${Math.round(d.chainageM * KEY_DECIMALS)}`;
+}
+
+export function deviceChanges(before: readonly LineDevice[], after: readonly LineDevice[]): DeviceChange[] {
+  const was = new Set(before.map(deviceKey));
+  const now = new Set(after.map(deviceKey));
+  return [
+    ...before.filter((d) => !now.has(deviceKey(d))).map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'removed' as const })),
+    ...after.filter((d) => !was.has(deviceKey(d))).map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'added' as const })),
+  ].sort((x, y) => x.chainageM - y.chainageM);
+}
+
+function compareLine(before: SnapshotLine | null, after: SnapshotLine | null): LineComparison {
+  const ab = before ? analyseSnapshotLine(before) : null;
+  const aa = after ? analyseSnapshotLine(after) : null;
+  const outlet = (a: LineAnalysis | null) => (a ? lineAnswers(a).endResidualHeadM : null);
+  const result: LineComparison = {
+    lineId: (after ?? before)!.id,
+    name: (after ?? before)!.name,
+    change: !before ? 'added' : !after ? 'removed' : 'unchanged',
+    pipes: pipeChanges(ab, aa),
+    devices: deviceChanges(before?.design.devices ?? [], after?.design.devices ?? []),
+    outletHeadM: { before: outlet(ab), after: outlet(aa) },
+    flowM3s: { before: ab?.flowM3s ?? null, after: aa?.flowM3s ?? null },
+  };
+  if (result.change === 'unchanged') {
+    const designMoved = JSON.stringify(before!.design) !== JSON.stringify(after!.design) || JSON.stringify(before!.stations) !== JSON.stringify(after!.stations);
+    const figuresMoved = !sameNumber(result.outletHeadM.before, result.outletHeadM.after) || !sameNumber(result.flowM3s.before, result.flowM3s.after);
+    if (designMoved || figuresMoved || result.pipes.length > 0 || result.devices.length > 0) result.change = 'changed';
+  }
+  return result;
+}
+
+function compareNamed<T extends { id: string; name?: string; label?: string }>(before: readonly T[], after: readonly T[]) {
+  const name = (x: T) => x.name ?? x.label ?? x.id;
+  const was = new Map(before.map((x) => [x.id, x]));
+  const now = new Map(after.map((x) => [x.id, x]));
+  return {
+    added: after.filter((x) => !was.has(x.id)).map(name),
+    removed: before.filter((x) => !now.has(x.id)).map(name),
+    changed: after.filter((x) => was.has(x.id) && JSON.stringify(was.get(x.id)) !== JSON.stringify(x)).map(name),
+  };
+}
+
+/** What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram sites and demand. */
+export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot): RevisionComparison {
+  const ids = [...new Set([...before.lines.map((l) => l.id), ...after.lines.map((l) => l.id)])];
+  const find = (s: DesignSnapshot, id: string) => s.lines.find((l) => l.id === id) ?? null;
+  return {
+    lines: ids.map((id) => compareLine(find(before, id), find(after, id))),
+    tanks: compareNamed(before.lift.tanks, after.lift.tanks),
+    ramSites: compareNamed(before.lift.ramSites, after.lift.ramSites),
+    demandUses: compareNamed(before.lift.demandUses, after.lift.demandUses),
+  };
+}

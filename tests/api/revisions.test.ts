@@ -1,0 +1,152 @@
+import { PDFParse } from 'pdf-parse';
+import { beforeAll, describe, expect, it } from 'vitest';
+import * as commentsRoute from '@/app/api/projects/[projectId]/comments/route';
+import * as revisionsRoute from '@/app/api/projects/[projectId]/revisions/route';
+import * as approveRoute from '@/app/api/revisions/[revisionId]/approve/route';
+import * as issueRoute from '@/app/api/revisions/[revisionId]/issue/route';
+import * as reportRoute from '@/app/api/revisions/[revisionId]/lines/[lineId]/report/route';
+import * as requestChangesRoute from '@/app/api/revisions/[revisionId]/request-changes/route';
+import * as revisionRoute from '@/app/api/revisions/[revisionId]/route';
+import * as submitRoute from '@/app/api/revisions/[revisionId]/submit/route';
+import * as lineRoute from '@/app/api/lines/[lineId]/route';
+import { models } from '@/models';
+import { call, createTeamFixture } from '../support/api';
+
+type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
+
+async function pagesOf(bytes: Buffer): Promise<string[]> {
+  const parser = new PDFParse({ data: new Uint8Array(bytes) });
+  const result = await parser.getText();
+  await parser.destroy();
+  return result.pages.map((p: { text: string }) => p.text.replace(/\s+/g, ' '));
+}
+
+describe('revisions and the review cycle', () => {
+  let f: Fixture;
+  beforeAll(async () => {
+    f = await createTeamFixture();
+  });
+
+  const make = (userId: string, body: unknown = { note: 'First layout' }) =>
+    call(revisionsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, body, userId });
+  const step = (route: { POST: Parameters<typeof call>[0] }, revisionId: string, userId: string, body?: unknown) =>
+    call(route.POST, { method: 'POST', path: '/api/x', params: { revisionId }, body, userId });
+  const pdf = async (revisionId: string, userId: string) => {
+    const res = await call(reportRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId, lineId: f.lineId }, userId });
+    expect(res.status).toBe(200);
+    return res.bytes;
+  };
+  const statusOf = async (id: string) => (await models().Revision.findByPk(id))!.status;
+
+  it('numbers revisions and freezes the whole design: lines with their route stations, the project settings', async () => {
+    const first = await make(f.users.designer.id);
+    expect(first.status).toBe(201);
+    const second = await make(f.users.designer.id, { note: 'Second', submit: true });
+    expect(second.json.revision).toMatchObject({ number: first.json.revision.number + 1, status: 'submitted', createdBy: { name: 'Fixture designer' } });
+    const read = await call(revisionRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: first.json.revision.id }, userId: f.users.reviewer.id });
+    const snap = read.json.revision.snapshot;
+    expect(snap.project).toMatchObject({ name: 'Fixture project', unitSystem: 'metric' });
+    const line = snap.lines.find((l: { id: string }) => l.id === f.lineId);
+    expect(line.stations.map((s: { chainageM: number }) => s.chainageM)).toEqual([0, 100, 200, 300, 400]);
+    expect(line.design.stretches).toEqual([{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }]);
+  });
+
+  it('an edit after a revision changes only the working copy: the revision PDF stays byte-for-byte the same', async () => {
+    const made = await make(f.users.designer.id, { note: 'Before the edit' });
+    const id = made.json.revision.id;
+    const before = await pdf(id, f.users.reviewer.id);
+    const real = await call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.designer.id, body: { name: 'Renamed after the revision', notes: 'Moved on' } });
+    expect(real.status).toBe(200);
+    await models().Line.update({ stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr17-50mm' }] }, { where: { id: f.lineId } });
+    const after = await pdf(id, f.users.reviewer.id);
+    expect(after.equals(before)).toBe(true);
+    const later = await make(f.users.designer.id, { note: 'After the edit' });
+    const laterPdf = await pdf(later.json.revision.id, f.users.reviewer.id);
+    expect(laterPdf.equals(before)).toBe(false);
+    const frozen = (await call(revisionRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: id }, userId: f.users.reviewer.id })).json.revision.snapshot;
+    expect(frozen.lines[0].name).not.toBe('Renamed after the revision');
+  });
+
+  it('runs the cycle by role: designer submits, reviewer sends back or approves, designer issues; the earlier issue is superseded', async () => {
+    const a = (await make(f.users.designer.id)).json.revision.id;
+    expect((await step(submitRoute, a, f.users.reviewer.id)).status).toBe(403);
+    expect((await step(submitRoute, a, f.users.designer.id)).status).toBe(200);
+    expect((await step(approveRoute, a, f.users.designer.id)).status).toBe(403);
+    expect((await step(approveRoute, a, f.users.surveyor.id)).status).toBe(403);
+    expect((await step(approveRoute, a, f.users.viewer.id)).status).toBe(403);
+    const back = await step(requestChangesRoute, a, f.users.reviewer.id, { note: 'Washout at the sag' });
+    expect(back.json.revision).toMatchObject({ status: 'changes-requested', reviewedBy: { name: 'Fixture reviewer' } });
+    expect((await step(approveRoute, a, f.users.reviewer.id)).status).toBe(409);
+
+    const b = (await make(f.users.designer.id, { note: 'Answered', submit: true })).json.revision.id;
+    const ok = await step(approveRoute, b, f.users.reviewer.id);
+    expect(ok.status).toBe(200);
+    expect(ok.json.revision.reviewedBy.name).toBe('Fixture reviewer');
+    expect(Date.now() - Date.parse(ok.json.revision.reviewedAt)).toBeLessThan(60_000);
+    expect((await step(issueRoute, b, f.users.reviewer.id)).status).toBe(403);
+    expect((await step(issueRoute, b, f.users.designer.id)).json.revision.status).toBe('issued');
+
+    const c = (await make(f.users.designer.id, { submit: true })).json.revision.id;
+    await step(approveRoute, c, f.users.owner.id);
+    await step(issueRoute, c, f.users.designer.id);
+    expect(await statusOf(b)).toBe('superseded');
+    expect(await statusOf(c)).toBe('issued');
+  });
+
+  it('nobody approves their own revision, owners included', async () => {
+    const mine = (await make(f.users.owner.id, { submit: true })).json.revision.id;
+    const res = await step(approveRoute, mine, f.users.owner.id);
+    expect(res.status).toBe(403);
+    expect(res.json.error.message).toMatch(/someone else must review it/);
+    expect(await statusOf(mine)).toBe('submitted');
+    expect((await step(approveRoute, mine, f.users.reviewer.id)).status).toBe(200);
+  });
+
+  it('two reviewers racing: one approval lands, the other gets 409', async () => {
+    const id = (await make(f.users.designer.id, { submit: true })).json.revision.id;
+    const results = await Promise.all([step(approveRoute, id, f.users.reviewer.id), step(requestChangesRoute, id, f.users.owner.id)]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+  });
+
+  it('a forged "approved" in any body is refused and changes nothing', async () => {
+    const count = await models().Revision.count({ where: { projectId: f.projectId } });
+    const forgedNew = await make(f.users.designer.id, { note: 'sneaky', status: 'approved', reviewedBy: f.users.reviewer.id });
+    expect(forgedNew.status).toBe(400);
+    expect(await models().Revision.count({ where: { projectId: f.projectId } })).toBe(count);
+    const id = (await make(f.users.designer.id, { submit: true })).json.revision.id;
+    for (const route of [submitRoute, approveRoute, requestChangesRoute, issueRoute]) {
+      const res = await step(route, id, f.users.owner.id, { status: 'approved' });
+      expect(res.status).toBe(400);
+    }
+    expect(await statusOf(id)).toBe('submitted');
+    const line = await call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.designer.id, body: { status: 'issued', checkedBy: 'Anyone' } });
+    expect(line.status).toBe(400);
+    const comment = await call(commentsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { body: 'ok', revisionId: id, status: 'approved' } });
+    expect(comment.status).toBe(400);
+    expect(await statusOf(id)).toBe('submitted');
+  });
+
+  it('a client sees approved and issued revisions only, and their PDFs carry the reviewer and date without the mark', async () => {
+    const g = await createTeamFixture();
+    const mk = (body: unknown) => call(revisionsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: g.projectId }, body, userId: g.users.designer.id });
+    const draft = (await mk({ note: 'draft' })).json.revision.id;
+    const approved = (await mk({ note: 'to approve', submit: true })).json.revision.id;
+    await call(approveRoute.POST, { method: 'POST', path: '/api/x', params: { revisionId: approved }, userId: g.users.reviewer.id });
+    const list = await call(revisionsRoute.GET, { method: 'GET', path: '/api/x', params: { projectId: g.projectId }, userId: g.users.viewer.id });
+    expect(list.json.revisions.map((r: { id: string }) => r.id)).toEqual([approved]);
+    expect((await call(revisionRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: draft }, userId: g.users.viewer.id })).status).toBe(404);
+    const report = await call(reportRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: draft, lineId: g.lineId }, userId: g.users.viewer.id });
+    expect(report.status).toBe(404);
+    const ok = await call(reportRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: approved, lineId: g.lineId }, userId: g.users.viewer.id });
+    expect(ok.status).toBe(200);
+    expect(ok.headers.get('content-disposition')).toMatch(/-rev-2\.pdf/);
+    const approvedPages = await pagesOf(ok.bytes);
+    expect(approvedPages[0]).toContain('Fixture reviewer');
+    expect(approvedPages[0]).toContain(new Date().toISOString().slice(0, 10));
+    expect(approvedPages.join(' ')).not.toContain('NOT FOR CONSTRUCTION');
+    const draftPdf = await call(reportRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: draft, lineId: g.lineId }, userId: g.users.reviewer.id });
+    const draftPages = await pagesOf(draftPdf.bytes);
+    expect(draftPages.length).toBeGreaterThan(1);
+    for (const page of draftPages) expect(page).toContain('NOT FOR CONSTRUCTION');
+  });
+});
