@@ -12,7 +12,7 @@ const HSTS_HEADER = { key: 'Strict-Transport-Security', value: 'max-age=31536000
 const nextConfig = {
   poweredByHeader: false,
   // Native and Node-only packages stay out of the bundle and load at run time.
-  serverExternalPackages: ['sequelize', 'pg', 'pg-hstore', 'argon2', 'pdfkit', 'svg-to-pdfkit', 'piscina', 'esbuild', 'pino', 'rate-limiter-flexible'],
+  serverExternalPackages: ['sequelize', 'pg', 'pg-hstore', 'argon2', 'pdfkit', 'svg-to-pdfkit', 'piscina', 'esbuild', 'pino', 'rate-limiter-flexible', 'graphile-worker', 'nodemailer', 'sharp', 'exifr'],
   async headers() {
     return [
       { source: '/:path*', headers: COMMON_SECURITY_HEADERS },

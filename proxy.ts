@@ -3,7 +3,7 @@ import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server
 import { contentSecurityPolicy, newNonce } from './lib/http/security-headers';
 
 // Areas that need a session: the proxy only redirects there; every page, handler and action checks the session itself.
-const SIGNED_IN_AREAS = ['/projects', '/team'];
+const SIGNED_IN_AREAS = ['/projects', '/team', '/account'];
 
 function needsSession(path: string): boolean {
   return SIGNED_IN_AREAS.some((area) => path === area || path.startsWith(`${area}/`));

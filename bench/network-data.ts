@@ -12,7 +12,7 @@ export function seededRandom(seed: number): () => number {
  * a tank at the far corner. Demands 0.02-0.1 L/s per node; each pipe sized for about 1 m/s at the
  * flow its branch of the tree carries.
  */
-export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7): NetworkInput {
+export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7, withTank = true): NetworkInput {
   const random = seededRandom(seed);
   const side = Math.ceil(Math.sqrt(nodeCount));
   const nodes: NetworkNode[] = [];
@@ -21,7 +21,7 @@ export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7): 
     const y = Math.floor(v / side);
     const elevationM = 100 - 0.5 * (x + y) * (100 / side) + 3 * random();
     if (v === 0) nodes.push({ id: 'n0', kind: 'source', elevationM: 160, waterLevelM: 160 });
-    else if (v === nodeCount - 1) nodes.push({ id: `n${v}`, kind: 'tank', elevationM: 60, waterLevelM: 62, tank: { overflowLevelM: 63, areaM2: 50 } });
+    else if (withTank && v === nodeCount - 1) nodes.push({ id: `n${v}`, kind: 'tank', elevationM: 60, waterLevelM: 62, tank: { overflowLevelM: 63, areaM2: 50 } });
     else nodes.push({ id: `n${v}`, kind: 'junction', elevationM, demandM3s: 0.00002 + 0.00008 * random(), minPressureHeadM: 10 });
   }
   const candidates: [number, number, number][] = [];

@@ -9,6 +9,8 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'draw-100k': async () => (await import('./line-5k')).draw100k,
   'lift-summary': async () => (await import('./lift-summary')).liftSummary,
   'ram-plan-preview': async () => (await import('./lift-summary')).ramPlanPreview,
+  'sizing-500': async () => (await import('./network-sizing')).sizing500,
+  'day-1k': async () => (await import('./network-sizing')).day1k,
   'network-10k': async () => (await import('./network-10k')).network10k,
   'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
   'api-capacity-50': async () => (await import('./api-load')).apiCapacity50,

@@ -136,6 +136,7 @@ export type {
   LineStart,
   LineEnd,
   LineFlow,
+  LineFlowPiece,
   LineSettings,
   LineInput,
 } from './profile/types';

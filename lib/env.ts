@@ -29,6 +29,18 @@ const EnvSchema = z.object({
   RUNNEL_S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'RUNNEL_S3_BUCKET must be a valid bucket name').default('runnel-files'),
   RUNNEL_S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
   RUNNEL_S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
+  /** Outgoing mail (SMTP). Locally the fake in scripts/fakes/mail.mjs; `npm test` runs its own. */
+  RUNNEL_SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  RUNNEL_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  /** `true` for implicit TLS (port 465); otherwise STARTTLS is used when the server offers it. */
+  RUNNEL_SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  RUNNEL_SMTP_USER: z.string().min(1).optional(),
+  RUNNEL_SMTP_PASSWORD: z.string().min(1).optional(),
+  RUNNEL_MAIL_FROM: z.string().min(3).default('Runnel <mail@runnel.localhost>'),
+  /** `off` keeps the job worker out of this server process (e.g. when a separate worker runs). */
+  RUNNEL_JOB_WORKER: z.enum(['on', 'off']).default('on'),
+  /** Largest site photo accepted, in bytes (413 above it). */
+  RUNNEL_PHOTO_MAX_BYTES: z.coerce.number().int().positive().default(25 * 1024 * 1024),
 });
 
 export type Env = z.infer<typeof EnvSchema> & { NEXTAUTH_SECRET: string };

@@ -10,6 +10,7 @@ import { Project } from './project';
 import { Revision } from './revision';
 import { Route } from './route';
 import { RoutePoint } from './route-point';
+import { AccountToken, initialiseTeamMailModels, Invitation, MailOutbox, NotificationPreference, SitePhoto } from './team-mail';
 import { Team } from './team';
 import { User } from './user';
 
@@ -32,6 +33,7 @@ export function models() {
     Comment.initialise(sequelize);
     Activity.initialise(sequelize);
     initialiseNetworkModels(sequelize);
+    initialiseTeamMailModels(sequelize);
 
     Team.hasMany(Membership, { foreignKey: 'teamId', as: 'memberships' });
     Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -54,6 +56,7 @@ export function models() {
     Revision, Comment, Activity,
     WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
     NetworkNode, NetworkLink, PriceListItem, NetworkJob,
+    AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto,
     sequelize: db(),
   };
 }
@@ -61,3 +64,4 @@ export function models() {
 export { Activity, Attachment, Comment, Line, Revision, Membership, Project, Route, RoutePoint, Team, User };
 export { DemandUse, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow };
 export { NetworkJob, NetworkLink, NetworkNode, PriceListItem };
+export { AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto };

@@ -12,6 +12,8 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare siteNotes: CreationOptional<string>;
   /** Depth frost reaches at the site, m (local code or records); null when not known. */
   declare frostDepthM: CreationOptional<number | null>;
+  /** How people on this project write decimals in number boxes; null = the browser's locale. */
+  declare decimalMark: CreationOptional<'.' | ',' | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -27,6 +29,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
         unitSystem: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'metric' },
         siteNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         frostDepthM: { type: DataTypes.DOUBLE, allowNull: true },
+        decimalMark: { type: DataTypes.STRING(1), allowNull: true },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,

@@ -6,6 +6,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare passwordHash: string;
   declare sessionVersion: CreationOptional<number>;
+  /** When the holder proved the address (a sign-up link or an invitation link); null for none yet. */
+  declare emailVerifiedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -17,6 +19,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         name: { type: DataTypes.STRING(120), allowNull: false },
         passwordHash: { type: DataTypes.STRING(255), allowNull: false },
         sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

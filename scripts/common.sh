@@ -60,7 +60,7 @@ runnel_state_dir() {
   fi
 }
 
-# The local set-up of `npm start` in development: its PostgreSQL port and database, its fake S3.
+# The local set-up of `npm start` in development: its PostgreSQL port and database, its fake S3 and mail.
 development_settings() {
   export RUNNEL_PG_PORT="${RUNNEL_PG_PORT:-5488}"
   export RUNNEL_DB_NAME="${RUNNEL_DB_NAME:-runnel}"
@@ -68,6 +68,10 @@ development_settings() {
   export RUNNEL_S3_DIR="${RUNNEL_S3_DIR:-$(runnel_state_dir)/s3}"
   export RUNNEL_S3_ENDPOINT="${RUNNEL_S3_ENDPOINT:-http://127.0.0.1:$RUNNEL_S3_PORT}"
   export RUNNEL_RUNTIME_DIR="${RUNNEL_RUNTIME_DIR:-.runtime}"
+  # Mail: the local fake SMTP server (scripts/fakes/mail.mjs) and its reading page.
+  export RUNNEL_SMTP_PORT="${RUNNEL_SMTP_PORT:-2525}"
+  export RUNNEL_MAIL_WEB_PORT="${RUNNEL_MAIL_WEB_PORT:-1080}"
+  export RUNNEL_MAIL_DIR="${RUNNEL_MAIL_DIR:-$(runnel_state_dir)/mail}"
 }
 
 # ── Secrets ───────────────────────────────────────────────────────────────────────────────────

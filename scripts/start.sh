@@ -30,6 +30,7 @@ case "$RUNNEL_ENV" in
 esac
 
 APP_PID=""
+FAKES_STARTED=""
 cleanup() {
   # Finish the clean-up even if the terminal or a pipe reading our output has already gone.
   trap '' INT TERM PIPE
@@ -40,10 +41,10 @@ cleanup() {
     kill -TERM -- "-$APP_PID" 2>/dev/null || kill -TERM "$APP_PID" 2>/dev/null || true
     wait "$APP_PID" 2>/dev/null || true
   fi
-  if [ "$RUNNEL_ENV" = development ]; then
-    bash scripts/fakes.sh stop || true
-    stop_postgres "$PGDATA_DIR"
-  fi
+  # Only what this run started: a set-up-only run never stops fakes another run owns.
+  [ -n "$FAKES_STARTED" ] && { bash scripts/fakes.sh stop || true; }
+  [ "$RUNNEL_ENV" = development ] && stop_postgres "$PGDATA_DIR"
+  true
 }
 trap cleanup INT TERM EXIT
 
@@ -54,7 +55,10 @@ else
   migrate
 fi
 [ "${RUNNEL_SETUP_ONLY:-0}" = "1" ] && { log "set-up done (RUNNEL_SETUP_ONLY=1): stopping"; exit 0; }
-[ "$RUNNEL_ENV" = development ] && bash scripts/fakes.sh start
+if [ "$RUNNEL_ENV" = development ]; then
+  FAKES_STARTED=1
+  bash scripts/fakes.sh start
+fi
 
 if [ "${RUNNEL_SKIP_BUILD:-0}" != "1" ] || [ ! -f .next/BUILD_ID ]; then
   log "building the app"

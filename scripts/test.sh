@@ -13,6 +13,11 @@ export RUNNEL_S3_PORT="${RUNNEL_TEST_S3_PORT:-9402}"
 export RUNNEL_S3_DIR="$(runnel_state_dir)/s3-test"
 export RUNNEL_S3_ENDPOINT="http://127.0.0.1:$RUNNEL_S3_PORT"
 export RUNNEL_RUNTIME_DIR=".runtime/test"
+# Its own fake mail server; Playwright reads the messages from its web port.
+export RUNNEL_SMTP_PORT="${RUNNEL_TEST_SMTP_PORT:-2526}"
+export RUNNEL_MAIL_WEB_PORT="${RUNNEL_TEST_MAIL_WEB_PORT:-1081}"
+export RUNNEL_MAIL_DIR="$(runnel_state_dir)/mail-test"
+rm -rf "$RUNNEL_MAIL_DIR"
 rm -rf "$RUNNEL_S3_DIR"
 
 ensure_node_packages

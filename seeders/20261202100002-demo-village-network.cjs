@@ -108,7 +108,7 @@ module.exports = {
         id: lineId, project_id: PROJECT_ID, route_id: routeId, name, notes: '', from_chainage_m: null, to_chainage_m: null,
         start_condition: JSON.stringify(start), end_condition: JSON.stringify(end), flow: JSON.stringify(flow),
         stretches: JSON.stringify([{ fromM: 0, toM: length, pipe }]), fittings: JSON.stringify([]), devices: JSON.stringify([]), pipes: JSON.stringify([]),
-        settings: JSON.stringify({ defaultCoverM: 0.6, waterTemperatureC: 10 }), status: 'draft', checked_by: '', revision: 1,
+        settings: JSON.stringify({ defaultCoverM: 0.6, waterTemperatureC: 10 }), revision: 1,
         created_by: DESIGNER_ID, updated_by: DESIGNER_ID, ...stamp,
       });
       await insert('lines', [

@@ -90,8 +90,6 @@ module.exports = {
         devices: JSON.stringify([]),
         pipes: JSON.stringify([]),
         settings: JSON.stringify(WALK_LINE.settings),
-        status: 'draft',
-        checked_by: '',
         revision: 1,
         created_by: DESIGNER_ID,
         updated_by: DESIGNER_ID,

@@ -1,19 +1,18 @@
 'use client';
 
-import { signIn } from 'next-auth/react';
-import { useRouter } from 'next/navigation';
-import type { FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useSignUp } from '@/lib/queries/accounts';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { SignUpSchema } from '@/lib/validations/auth';
+import { CheckYourMail } from './check-your-mail';
 
+/** Sign-up asks for the address to be confirmed by mail before the account exists. */
 export function SignUpForm() {
-  const router = useRouter();
   const signUp = useSignUp();
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const { fields, message, check, fail } = useFormErrors();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -22,15 +21,14 @@ export function SignUpForm() {
     const input = check(SignUpSchema, { name: form.get('name'), email: form.get('email'), password: form.get('password') });
     if (!input) return;
     try {
-      await signUp.mutateAsync(input);
-      const result = await signIn('credentials', { email: input.email, password: input.password, redirect: false });
-      if (result?.error) throw new Error('signed up, but signing in failed');
-      router.push('/projects');
-      router.refresh();
+      const answer = await signUp.mutateAsync(input);
+      setSentTo(answer.email);
     } catch (error) {
-      fail(error instanceof ApiError ? error : null, 'Your account was created but we could not sign you in. Try signing in.');
+      fail(error, 'Your account could not be started. Try again.');
     }
   }
+
+  if (sentTo) return <CheckYourMail email={sentTo} what="confirm your address and finish creating your account" />;
 
   return (
     <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>

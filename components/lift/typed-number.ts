@@ -1,7 +1,8 @@
-/** Text typed in a number box -> a number; blank or not a number -> NaN (the schema then names the field). */
+import { typedNumber } from '@/lib/units/decimal-mark-store';
+
+/** Text typed in a number box -> a number with the project's decimal mark; blank or not a number -> NaN (the schema then names the field). */
 export function numberFrom(text: string): number {
-  const trimmed = text.trim().replace(/,/g, '');
-  return trimmed === '' ? Number.NaN : Number(trimmed);
+  return typedNumber(text);
 }
 
 /** Like numberFrom, but a blank box means "not given". */

@@ -1,6 +1,8 @@
 'use client';
 
 import { useState } from 'react';
+import { useDecimalMark } from '@/components/ui/decimal-mark';
+import { formatTypedNumber, parseTypedNumber, type DecimalMark } from '@/lib/units/typed-number';
 
 export interface UnitNumberInputProps {
   id: string;
@@ -18,29 +20,30 @@ export interface UnitNumberInputProps {
   compact?: boolean;
 }
 
-const format = (v: number | undefined, digits: number) => (v === undefined ? '' : String(Number(v.toFixed(digits))));
+const format = (v: number | undefined, digits: number, mark: DecimalMark) => (v === undefined ? '' : formatTypedNumber(Number(v.toFixed(digits)), mark));
 
 /** A number in the project's units that commits on Enter or leaving the field, with its error beside it. */
 export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, compact }: UnitNumberInputProps) {
-  const [text, setText] = useState(format(value, digits));
+  const mark = useDecimalMark();
+  const [text, setText] = useState(format(value, digits, mark));
   const [error, setError] = useState<string | null>(null);
   // A new value from outside (undo, a fix, a save) replaces what is shown.
-  const [shown, setShown] = useState(value);
-  if (shown !== value) {
-    setShown(value);
-    setText(format(value, digits));
+  const [shown, setShown] = useState({ value, mark });
+  if (shown.value !== value || shown.mark !== mark) {
+    setShown({ value, mark });
+    setText(format(value, digits, mark));
   }
 
   function commit() {
     const trimmed = text.trim();
-    if (trimmed === format(value, digits)) return setError(null);
-    if (trimmed === '') {
+    if (trimmed === format(value, digits, mark)) return setError(null);
+    const read = parseTypedNumber(trimmed, mark);
+    if (!read.ok) return setError(`${label}: ${read.error} in ${unit}`);
+    if (read.value === null) {
       if (!optional) return setError(`${label} is required`);
       return setError(onCommit(undefined));
     }
-    const n = Number(trimmed.replace(/,/g, ''));
-    if (!Number.isFinite(n)) return setError(`${label} must be a number in ${unit}`);
-    const problem = onCommit(n);
+    const problem = onCommit(read.value);
     setError(problem);
     if (problem) return;
   }

@@ -10,11 +10,12 @@ import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useUpdateProject } from '@/lib/queries/projects';
 import { UpdateProjectSchema } from '@/lib/validations/projects';
 import { displayUnits, formatPlainNumber, fromDisplay, toDisplay } from '@/lib/units';
+import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 /** The typed frost depth in SI: empty means not known; text that is not a number stays NaN for the schema to refuse. */
 function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSummary['unitSystem']): number | null {
   const trimmed = String(text ?? '').trim();
-  return trimmed === '' ? null : fromDisplay('length', Number(trimmed), unitSystem);
+  return trimmed === '' ? null : fromDisplay('length', typedNumber(trimmed), unitSystem);
 }
 
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
@@ -43,6 +44,7 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
     const input = check(UpdateProjectSchema, {
       name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem'), siteNotes: form.get('siteNotes'),
       frostDepthM: frostDepthFrom(form.get('frostDepthM'), project.unitSystem),
+      decimalMark: form.get('decimalMark') || null,
     });
     if (!input) return;
     try {
@@ -60,6 +62,12 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
       <SelectField id="unitSystem" label="Units" defaultValue={project.unitSystem} errors={fields.unitSystem}>
         <option value="metric">Metric (m, L/s, kPa and m of head)</option>
         <option value="us">US customary (ft, gpm, psi and ft of head)</option>
+      </SelectField>
+      <SelectField id="decimalMark" label="Decimal mark in number boxes" defaultValue={project.decimalMark ?? ''} errors={fields.decimalMark}
+        hint="How people on this project type decimals: 1.5 or 1,5. Shown figures, the PDF and CSV files keep the point.">
+        <option value="">As the browser&apos;s language writes it</option>
+        <option value=".">Point (1.5; 1,500 groups thousands)</option>
+        <option value=",">Comma (1,5; 1.500,5 groups thousands)</option>
       </SelectField>
       <TextField id="frostDepthM" label={`Frost depth (${units.length})`} inputMode="decimal" defaultValue={frostShown} errors={fields.frostDepthM}
         hint="How deep frost reaches at the site (local code or records); lines with less cover are drained for winter. Empty: not known." />

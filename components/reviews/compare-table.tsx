@@ -35,9 +35,9 @@ export function CompareTable({ comparison, system, beforeLabel, afterLabel }: { 
         </section>
       ))}
       <section className="rounded-md border border-creek-100 bg-white p-3 text-sm">
-        <h3 className="font-semibold text-creek-900">Storage, rams and demand</h3>
+        <h3 className="font-semibold text-creek-900">Storage, rams, demand and the network</h3>
         <ul className="mt-1 list-inside list-disc text-creek-800">
-          {([['Tanks', comparison.tanks], ['Ram sites', comparison.ramSites], ['Demand uses', comparison.demandUses]] as const).map(([name, c]) => (
+          {([['Tanks', comparison.tanks], ['Ram sites', comparison.ramSites], ['Demand uses', comparison.demandUses], ['Network nodes (take-offs, outlets)', comparison.networkNodes], ['Network links', comparison.networkLinks]] as const).map(([name, c]) => (
             <li key={name}>{name}: {c.added.length + c.removed.length + c.changed.length === 0 ? 'no change' : [c.added.length ? `added ${c.added.join(', ')}` : '', c.removed.length ? `removed ${c.removed.join(', ')}` : '', c.changed.length ? `changed ${c.changed.join(', ')}` : ''].filter(Boolean).join('; ')}</li>
           ))}
         </ul>

@@ -68,7 +68,7 @@ function groupWords(kind: 'highs' | 'lows', members: readonly number[], scatterM
  * *Watering Systems for Serious Graziers* p.29 [R10]; air pockets cost head and can stop a
  * gravity line, Wikipedia "Air lock" [R7]). Points already served by a device are skipped.
  * A point counts only where it stands out by more than `highLowToleranceM` (the survey's height
- * scatter on a walked route); the smaller wiggles around it become members of its one item.
+ * scatter on a walked route); the smaller wiggles around it become members of its one item (profile-and-checks.md §1.2).
  */
 export function airAndSedimentWarnings(profile: LineProfile, devices: readonly LineDevice[]): LineWarning[] {
   const { chainageM, pipeElevationM, pressureHeadM } = profile.points;

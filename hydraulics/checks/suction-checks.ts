@@ -1,3 +1,4 @@
+import { findLimitRanges } from '../profile/limit-zones';
 import type { LimitZone, LineProfile } from '../profile/result-types';
 import type { LineWarning, WarningValues } from './types';
 import { chainage, chainageRange, metres, PRESSURE_CAUTION } from './wording';
@@ -34,7 +35,10 @@ export function scatterWords(values: WarningValues): string {
  */
 export function suctionWarnings(profile: LineProfile): LineWarning[] {
   const { limits } = profile;
-  const warnings: LineWarning[] = zonesOf(profile, 'negative-pressure').map((zone) => {
+  const warnings: LineWarning[] = trueSiphonWarnings(profile);
+  // With no flow the flowing grade is the static line: suction there is the true siphon above, not "while flowing".
+  const flowingSuction = profile.flowM3s > 0 ? zonesOf(profile, 'negative-pressure') : [];
+  warnings.push(...flowingSuction.map((zone): LineWarning => {
     const values: WarningValues = { ...zoneValues(zone, profile), headM: -zone.worstExcessM, limitHeadM: 0 };
     return {
       code: 'negative-pressure',
@@ -51,7 +55,7 @@ export function suctionWarnings(profile: LineProfile): LineWarning[] {
         'upstream so less head is lost before it.',
       fixes: [],
     };
-  });
+  }));
   if (limits.siphonLimitHeadM < limits.vapourLimitHeadM) {
     for (const zone of zonesOf(profile, 'siphon-limit')) {
       const values: WarningValues = {
@@ -96,4 +100,35 @@ export function suctionWarnings(profile: LineProfile): LineWarning[] {
     });
   }
   return warnings;
+}
+
+/**
+ * Pipe above the static line (the source's water level, or a tank's): a true siphon. It does not
+ * fill or start by itself, must be primed, and loses its prime as air comes out of the water and
+ * gathers at the summit; an automatic air valve there lets air in and stops it (BC Factsheet
+ * 590.304-5 "Water Flow, Air Locks and Siphons" [R10]; [R7]; profile-and-checks.md §2.2). Reported whether or not water flows.
+ */
+export function trueSiphonWarnings(profile: LineProfile): LineWarning[] {
+  const { chainageM, staticPressureHeadM, pipeElevationM } = profile.points;
+  const ranges = findLimitRanges({ chainageM, valueM: staticPressureHeadM, dropAtPointM: null, limitM: 0, side: 'below', mergeWithinM: profile.settings.heightScatterM });
+  return ranges.map((range) => {
+    const zone: LimitZone = { kind: 'negative-pressure', ...range };
+    let top = 0;
+    for (let i = 0; i < chainageM.length; i++) if (Math.abs(chainageM[i] - range.worstChainageM) < Math.abs(chainageM[top] - range.worstChainageM)) top = i;
+    const values: WarningValues = { ...zoneValues(zone, profile), headM: range.worstExcessM, chainageM: range.worstChainageM, elevationM: pipeElevationM[top] };
+    return {
+      code: 'true-siphon',
+      severity: 'danger',
+      at: { fromM: range.fromM, toM: range.toM },
+      values,
+      message:
+        `From ${chainageRange(range.fromM, range.toM)} the pipe rises above the water level that feeds it (up to ` +
+        `${metres(range.worstExcessM)} above it at ${chainage(range.worstChainageM)}): this is a true siphon. It will not fill ` +
+        'or start by itself, must be primed, and loses its prime as air gathers at the summit; an automatic air valve ' +
+        `there would let air in and stop it. ${scatterWords(values)}${PRESSURE_CAUTION}`,
+      suggestedFix:
+        'Route the pipe below the source level, or lower the summit by trenching; if a siphon cannot be avoided, fit a priming point and a manual air release at the summit and plan to re-prime it.',
+      fixes: [],
+    };
+  });
 }

@@ -6,6 +6,7 @@ export type WarningSeverity = 'danger' | 'warning' | 'info';
 /** Stable codes of the line checks (the app maps them to its own labels). */
 export type WarningCode =
   | 'negative-pressure'
+  | 'true-siphon'
   | 'siphon-limit'
   | 'vapour-limit'
   | 'residual-below-target'

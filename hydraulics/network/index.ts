@@ -8,3 +8,4 @@ export { runNetworkDay, tankAreaM2 } from './day/run-network-day';
 export { servedOutletsByTank, type ServedOutlet } from './day/served-outlets';
 export { sizeTankStorage, type TankStorageOptions, type TankStorageResult } from './day/tank-storage';
 export type { NetworkDayOptions, NetworkDayResult, NetworkDayStep } from './day/types';
+export { lineFlowSchedule, type LinePieceLink } from './line-schedule';

@@ -11,6 +11,7 @@ import { resolveStretchPipes } from './resolve-pipes';
 import type { LineProfile, ReachResult } from './result-types';
 import { resolveLineSettings } from './settings';
 import { stretchHydraulics } from './stretch-hydraulics';
+import { flowAtChainage, scheduledHydraulics } from './flow-schedule';
 import { stretchResults } from './stretch-results';
 import type { LineEnd, LineInput, LineStart } from './types';
 import { assertLineInput } from './validate-line';
@@ -63,14 +64,24 @@ export function profileModel(input: LineInput): ProfileModel {
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);
   const gravity = findGravityFlow(reaches, pipes, method, temperatureC);
   const capacities = gravity.reachCapacityM3s;
-  const flowM3s = input.flow.kind === 'design' ? input.flow.flowM3s : gravity.flowM3s;
-  const hydraulics = stretchHydraulics(pipes, flowM3s, method, temperatureC);
+  const schedule = input.flow.kind === 'schedule' ? scheduledHydraulics(grid, pipes, input.flow.pieces, method, temperatureC) : undefined;
+  const flowM3s =
+    input.flow.kind === 'design'
+      ? input.flow.flowM3s
+      : input.flow.kind === 'schedule'
+        ? flowAtChainage(input.flow.pieces, grid.chainageM[0])
+        : gravity.flowM3s;
+  const anyFlowM3s = schedule ? schedule.maxFlowM3s : flowM3s;
+  const hydraulics = schedule ? schedule.stretches : stretchHydraulics(pipes, flowM3s, method, temperatureC);
+  // With a schedule the losses are per segment (a stretch within one piece of the schedule).
+  const lossGrid = schedule ? { ...grid, pieceStretch: schedule.pieceSegment } : grid;
+  const lossHydraulics = schedule ? schedule.segments : hydraulics;
   const lines = computeGradeLines(
-    grid,
+    lossGrid,
     events,
-    hydraulics.frictionGradient,
-    hydraulics.velocityHeadM,
-    flowM3s === 0 ? heads.staticM : heads.flowingM,
+    lossHydraulics.frictionGradient,
+    lossHydraulics.velocityHeadM,
+    anyFlowM3s === 0 ? heads.staticM : heads.flowingM,
     heads.staticM,
   );
   const pressureHeadM = new Float64Array(n);
@@ -81,13 +92,13 @@ export function profileModel(input: LineInput): ProfileModel {
     stretchIndex[j] = grid.pieceStretch[j < n - 1 ? j : n - 2];
     pressureHeadM[j] = lines.hydraulicGradeM[j] - grid.pipeElevationM[j];
     staticPressureHeadM[j] = lines.staticHeadM[j] - grid.pipeElevationM[j];
-    velocityMs[j] = hydraulics.velocityMs[stretchIndex[j]];
+    velocityMs[j] = schedule ? schedule.segments.velocityMs[schedule.pieceSegment[j < n - 1 ? j : n - 2]] : hydraulics.velocityMs[stretchIndex[j]];
   }
   const stretches = stretchResults(
     input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor, lines.staticDropAtPointM,
   );
   const limits = pressureLimits(settings, grid.groundElevationM);
-  const surgeOn = settings.checkSurge && flowM3s > 0;
+  const surgeOn = settings.checkSurge && anyFlowM3s > 0;
   const zones = computeZones({
     grid,
     lines,
@@ -115,7 +126,8 @@ export function profileModel(input: LineInput): ProfileModel {
   const endGrade = lines.hydraulicGradeM[n - 1];
   const profile: LineProfile = {
     flowM3s,
-    flowSource: input.flow.kind === 'design' ? 'design' : 'found',
+    flowSource: input.flow.kind === 'find' ? 'found' : 'design',
+    ...(input.flow.kind === 'schedule' ? { flowSchedule: input.flow.pieces.map((piece) => ({ ...piece })) } : {}),
     points: {
       chainageM: grid.chainageM,
       groundElevationM: grid.groundElevationM,

@@ -29,7 +29,7 @@ export interface LimitRangeArgs {
   /**
    * Hysteresis, m: a range only ends once the value comes back inside the limit by more than
    * this; ranges separated by a smaller return merge into one with its worst point (the survey
-   * cannot resolve the gap). @default 0
+   * cannot resolve the gap; profile-and-checks.md §1.3). @default 0
    */
   mergeWithinM?: number;
 }

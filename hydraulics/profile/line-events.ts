@@ -23,6 +23,12 @@ export function eventChainages(input: LineInput, tanks: readonly PlacedTank[]): 
   for (let s = 0; s < input.stretches.length - 1; s++) out.push(input.stretches[s].toM);
   for (const fitting of input.fittings ?? []) out.push(fitting.chainageM);
   for (const tank of tanks) out.push(tank.chainageM);
+  // Flow changes (take-offs) are profile points, so no piece of the grid straddles two flows.
+  if (input.flow.kind === 'schedule') {
+    const first = input.stations[0].chainageM;
+    const last = input.stations[input.stations.length - 1].chainageM;
+    for (const piece of input.flow.pieces) if (piece.fromM > first && piece.fromM < last) out.push(piece.fromM);
+  }
   return out;
 }
 

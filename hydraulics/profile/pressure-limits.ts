@@ -11,6 +11,7 @@ import { DEFAULT_LINE_SETTINGS, type ResolvedLineSettings } from './settings';
  * is common practice, no source; it keeps a margin below the vapour limit at any altitude, where a
  * fixed 7.5 m passes the vapour limit above about 2,300 m.
  */
+// Rule and check values: profile-and-checks.md §2.1.
 export function practicalSiphonLimitHeadM(siteAtmosphericHeadM: number, temperatureC: number): number {
   const seaLevel = atmosphericHeadM({ altitudeM: 0, temperatureC });
   return DEFAULT_LINE_SETTINGS.siphonLimitHeadM * (siteAtmosphericHeadM / seaLevel);

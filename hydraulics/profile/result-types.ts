@@ -1,6 +1,7 @@
 import type { PipeSpec } from '../catalogue/pipe-spec';
 import type { LimitRange } from './limit-zones';
 import type { ResolvedLineSettings } from './settings';
+import type { LineFlowPiece } from './types';
 
 /**
  * Column arrays, one entry per profile point (survey stations plus inserted points, see
@@ -131,8 +132,10 @@ export interface LimitCrossing {
 export interface LineProfile {
   /** Flow analysed, m3/s. */
   flowM3s: number;
-  /** `design` when given, `found` when solved by gravity. */
+  /** `design` when given (a single flow or a schedule), `found` when solved by gravity. */
   flowSource: 'design' | 'found';
+  /** The flow per piece when the line was analysed with a schedule (`flowM3s` is then the flow at its start). */
+  flowSchedule?: LineFlowPiece[];
   points: ProfilePoints;
   stretches: StretchResult[];
   reaches: ReachResult[];

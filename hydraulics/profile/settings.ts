@@ -27,6 +27,9 @@ export interface ResolvedLineSettings {
  * Safety factor 1: published pressure classes already contain the standard's design factor
  * (ISO 4427 C >= 1.25, ASTM D2241 2.0) [R12][R13]; the user raises it for extra margin.
  * Air-point tolerance 1 m and 20 C water: common practice, no source.
+ * Pipe cover 0.75 m where the survey gives none: common burial practice for water mains in
+ * frost-mild ground (common practice, no source; from memory, UK water-fittings guidance asks
+ * 750 mm); a pipe on the surface (0 m) is not a design default. Frost depth may ask for more.
  */
 export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM' | 'siphonLimitHeadM'> & { siphonLimitHeadM: number }> = Object.freeze({
   frictionMethod: 'hazen-williams',
@@ -38,7 +41,7 @@ export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAlt
   airPointToleranceM: 1,
   heightScatterM: 0,
   siphonLimitHeadM: 7.5,
-  defaultCoverM: 0,
+  defaultCoverM: 0.75,
   checkSurge: true,
 });
 

@@ -18,7 +18,8 @@ export function allowableHeadM(pipe: PipeSpec, temperatureC: number, safetyFacto
 /**
  * Per-stretch lengths, losses, ratings, surge and highest static pressure. The highest static
  * pressure counts the head ARRIVING at a break-pressure tank (value + drop at the point), which is
- * the highest the pipe above the tank sees; the tank's reset only acts downstream of it.
+ * the highest the pipe above the tank sees; the tank's reset only acts downstream of it
+ * (profile-and-checks.md §3.1).
  */
 export function stretchResults(
   stretches: readonly LineStretch[],

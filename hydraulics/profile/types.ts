@@ -82,10 +82,23 @@ export type LineEnd =
   /** The pipe simply runs out at the last station's pipe elevation. */
   | { kind: 'free-discharge' };
 
+/** The flow from one chainage onwards, until the next piece (e.g. between two take-offs). */
+export interface LineFlowPiece {
+  /** Chainage where this flow starts, m (before the first piece the first flow applies). */
+  fromM: number;
+  /** Flow along the line from here, m3/s (>= 0). */
+  flowM3s: number;
+}
+
 /** What flow to analyse. */
 export type LineFlow =
   /** A chosen design flow, m3/s (>= 0). */
   | { kind: 'design'; flowM3s: number }
+  /**
+   * A flow per piece of the line, as a network gives it: the flow drops at every take-off. Pieces in
+   * increasing `fromM`; every check runs with the flow of each piece.
+   */
+  | { kind: 'schedule'; pieces: readonly LineFlowPiece[] }
   /** The flow the line carries by gravity between its fixed ends. */
   | { kind: 'find' };
 
@@ -119,7 +132,7 @@ export interface LineSettings {
    * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
    */
   siphonLimitHeadM?: number;
-  /** Cover used for stations that give none, m. @default 0 */
+  /** Cover used for stations that give none, m. @default 0.75 (common burial practice, no source; see settings.ts) */
   defaultCoverM?: number;
   /** Check static pressure plus a sudden-stop surge against the ratings. @default true */
   checkSurge?: boolean;

@@ -37,4 +37,6 @@ export { joinRoutes } from './route/join';
 export type { JoinRouteResult } from './route/join';
 export { trimRoute } from './route/trim';
 export { interpolateStation, elevationAtChainage } from './route/interpolate';
+export { locateOnRoute } from './locate-on-route';
+export type { LocatableStation, RouteLocation } from './locate-on-route';
 export { assertOrderedStations } from './route/ordered-stations';

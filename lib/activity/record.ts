@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { models } from '../../models';
+import { notifyForActivity } from '../notifications/from-activity';
 import type { ActivityKind } from './kinds';
 
 export type { ActivityKind } from './kinds';
@@ -48,4 +49,6 @@ export async function recordActivity(transaction: Transaction, input: ActivityIn
     summary: input.summary,
     data: { saves: input.kind === 'line.edited' ? 1 : undefined, ...input.data },
   }, { transaction });
+  // Reviews and mentions reach people by mail, queued in this same transaction.
+  await notifyForActivity(transaction, input);
 }

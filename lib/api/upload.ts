@@ -15,9 +15,9 @@ export interface UploadedFile {
 
 const mb = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB`;
 
-function tooLarge(bytes: number | null, maxFileBytes: number): AppError {
+function tooLarge(bytes: number | null, maxFileBytes: number, what = 'a survey file'): AppError {
   const size = bytes === null ? 'larger than the limit' : mb(bytes);
-  const message = `The upload is ${size}; a survey file may be at most ${mb(maxFileBytes)}`;
+  const message = `The upload is ${size}; ${what} may be at most ${mb(maxFileBytes)}`;
   return new AppError('payload_too_large', message, { file: [message] });
 }
 
@@ -25,7 +25,7 @@ function tooLarge(bytes: number | null, maxFileBytes: number): AppError {
  * Reads a multipart/form-data upload with one file field. Size is checked from the declared
  * length first (413 before reading), then while streaming, then on the file itself.
  */
-export async function readFileUpload(req: NextRequest, options: { fileField: string; maxFileBytes: number }): Promise<UploadedFile> {
+export async function readFileUpload(req: NextRequest, options: { fileField: string; maxFileBytes: number; /** How the size refusal names the file. @default 'a survey file' */ what?: string }): Promise<UploadedFile> {
   const type = req.headers.get('content-type') ?? '';
   if (!/^multipart\/form-data;\s*boundary=/i.test(type)) {
     throw new AppError('unsupported_media_type', `Send the file as multipart/form-data with a “${options.fileField}” field`, {
@@ -45,7 +45,7 @@ export async function readFileUpload(req: NextRequest, options: { fileField: str
   if (!(file instanceof File)) {
     throw new AppError('bad_request', `No file was sent in the “${options.fileField}” field`, { [options.fileField]: ['Choose a file to upload'] });
   }
-  if (file.size > options.maxFileBytes) throw tooLarge(file.size, options.maxFileBytes);
+  if (file.size > options.maxFileBytes) throw tooLarge(file.size, options.maxFileBytes, options.what);
   const fields: Record<string, string> = {};
   form.forEach((value, key) => {
     if (typeof value === 'string') fields[key] = value;

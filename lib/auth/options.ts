@@ -38,7 +38,8 @@ export function authOptions(): NextAuthOptions {
             log()[unavailable ? 'warn' : 'error']({ err: error }, 'sign-in could not check the password');
             throw new Error(unavailable ? SIGN_IN_UNAVAILABLE : 'internal');
           }
-          if (!user || !ok) return null;
+          // An address never confirmed cannot sign in (accounts are made verified; this guards older rows).
+          if (!user || !ok || !user.emailVerifiedAt) return null;
           return { id: user.id, email: user.email, name: user.name, sessionVersion: user.sessionVersion };
         },
       }),

@@ -128,7 +128,8 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
     el('text', { x: 460, y: 4, 'font-size': 10, fill: PROFILE_COLOURS.ink }, solve ? 'Line width grows with pipe size; arrows show flow direction' : 'Solve to see sizes, flows and pressures'),
   );
 
-  return el('svg', { viewBox: `0 0 ${width} ${height}`, width: '100%', role: 'img', 'aria-label': 'Network schematic', 'data-scene': 'network', style: `background:${PROFILE_COLOURS.paper}` },
+  return el('svg', { viewBox: `0 0 ${width} ${height}`, width: '100%', role: 'img', 'aria-label': 'Network schematic', 'data-scene': 'network' },
+    el('rect', { x: 0, y: 0, width, height, fill: PROFILE_COLOURS.paper }),
     el('g', { 'data-layer': 'links' }, ...linkLayer),
     el('g', { 'data-layer': 'link-labels' }, ...linkLabels),
     el('g', { 'data-layer': 'nodes' }, ...nodeLayer),

@@ -21,6 +21,7 @@ function legendItems(data: ProfileChartData, options: ProfileChartOptions): Lege
   const severities = new Set(data.warnings.filter((w) => !('chainageM' in w.at)).map((w) => w.severity));
   return [
     { key: 'ground', label: 'Ground', swatch: { kind: 'line', colour: PROFILE_COLOURS.groundLine, width: 1.5 } },
+    ...((data.settings.heightScatterM ?? 0) > 0.1 ? [{ key: 'ground-band', label: 'Survey height scatter (±)', swatch: { kind: 'box' as const, colour: '#e5d7bb' } }] : []),
     ...pipes.values(),
     { key: 'static', label: 'Static head (line shut)', swatch: { kind: 'line', colour: PROFILE_COLOURS.staticLine, width: 1.5, dash: '7 4' } },
     { key: 'grade', label: 'Hydraulic grade (flowing)', swatch: { kind: 'line', colour: PROFILE_COLOURS.gradeLine, width: 2 } },

@@ -39,7 +39,21 @@ function reachLevel(data: ProfileChartData, fromM: number): number {
   return data.points.staticHeadM[indexAtOrBefore(data.points.chainageM, fromM)];
 }
 
-/** The ground line and the earth below it. */
+/**
+ * The band of the ground's uncertainty, ± the survey's height scatter: on a walked GPS route the
+ * real ground lies somewhere in it, so a line drawn close to a limit inside it is not a finding.
+ */
+function groundBand(data: ProfileChartData, frame: ProfileFrame, indices: readonly number[]): SvgNode | null {
+  const scatterM = data.settings.heightScatterM ?? 0;
+  if (!(scatterM > 0.1) || indices.length < 2) return null;
+  const { chainageM, groundElevationM } = data.points;
+  const upper = seriesPath(indices, chainageM, frame.x, (i) => frame.yElevation(groundElevationM[i] + scatterM));
+  const back = [...indices].reverse();
+  const lower = seriesPath(back, chainageM, frame.x, (i) => frame.yElevation(groundElevationM[i] - scatterM)).replace(/^M/, 'L');
+  return el('path', { d: `${upper}${lower}Z`, fill: PROFILE_COLOURS.groundLine, 'fill-opacity': 0.14, stroke: 'none', 'data-role': 'ground-band', 'data-scatter-m': r2(scatterM) });
+}
+
+/** The ground line and the earth below it, with its uncertainty band when the survey scatters. */
 export function groundLayer(data: ProfileChartData, frame: ProfileFrame, indices: readonly number[]): SvgNode {
   const { chainageM, groundElevationM } = data.points;
   const lineD = seriesPath(indices, chainageM, frame.x, (i) => frame.yElevation(groundElevationM[i]));
@@ -48,6 +62,7 @@ export function groundLayer(data: ProfileChartData, frame: ProfileFrame, indices
   const area = indices.length >= 2 ? `${lineD}L${lastX},${frame.elevationBottom}L${firstX},${frame.elevationBottom}Z` : '';
   return el('g', { 'data-layer': 'ground' },
     el('path', { d: area, fill: PROFILE_COLOURS.groundFill, stroke: 'none', 'data-role': 'earth' }),
+    groundBand(data, frame, indices),
     el('path', { d: lineD, fill: 'none', stroke: PROFILE_COLOURS.groundLine, 'stroke-width': 1.5, 'data-role': 'ground-line' }));
 }
 

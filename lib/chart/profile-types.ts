@@ -9,7 +9,8 @@ export interface ProfileChartData {
   reaches: readonly ReachResult[];
   tanks: readonly { chainageM: number; waterLevelM: number }[];
   warnings: readonly LineWarning[];
-  settings: { waterTemperatureC: number };
+  /** `heightScatterM`: the survey's height scatter, m; the ground is drawn with a band of ± that. */
+  settings: { waterTemperatureC: number; heightScatterM?: number };
   limits: { siphonLimitHeadM: number };
   flowM3s: number;
 }

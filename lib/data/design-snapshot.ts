@@ -5,6 +5,7 @@ import type { DesignSnapshot, SnapshotLine } from '../review/snapshot-types';
 import { lineSiteContext } from './line-context';
 import { getLine, stationsOfLine } from './lines';
 import { loadLiftRecords } from './lift-summary';
+import { readNetworkRecords } from './network-records';
 
 type PartGatherer<K extends keyof DesignSnapshot> = (projectId: string, transaction: Transaction) => Promise<DesignSnapshot[K]>;
 
@@ -48,18 +49,20 @@ async function liftPart(projectId: string): Promise<DesignSnapshot['lift']> {
  * The design parts a revision freezes, one gatherer each. To freeze another part of the design
  * (the network), add its gatherer here and its key to DesignSnapshot: nothing else changes.
  */
-const DESIGN_PARTS: { [K in Exclude<keyof DesignSnapshot, 'format' | 'network'>]: PartGatherer<K> } = {
+const DESIGN_PARTS: { [K in Exclude<keyof DesignSnapshot, 'format'>]-?: PartGatherer<K> } = {
   project: projectPart,
   lines: linesPart,
   lift: liftPart,
+  network: (projectId, transaction) => readNetworkRecords(projectId, transaction),
 };
 
 /** The whole project's design as it is now, read inside `transaction`. */
 export async function takeDesignSnapshot(projectId: string, transaction: Transaction): Promise<DesignSnapshot> {
-  const [project, lines, lift] = await Promise.all([
+  const [project, lines, lift, network] = await Promise.all([
     DESIGN_PARTS.project(projectId, transaction),
     DESIGN_PARTS.lines(projectId, transaction),
     DESIGN_PARTS.lift(projectId, transaction),
+    DESIGN_PARTS.network(projectId, transaction),
   ]);
-  return { format: 1, project, lines, lift };
+  return { format: 1, project, lines, lift, network };
 }

@@ -4,6 +4,7 @@ import { assertNetworkInput } from '../../hydraulics/index';
 import { models } from '../../models';
 import { notFound } from '../errors';
 import { log } from '../log';
+import type { NetworkContext } from '../network/context';
 import type { NetworkJobView, NetworkRunKind } from '../network/jobs';
 import { buildNetworkInput } from '../network/network-input';
 import { explainCoreError } from '../network/solve-result';
@@ -21,12 +22,15 @@ const STAGE: Record<NetworkRunKind, string> = {
   size: 'Choosing pipe sizes for least cost on a worker thread',
 };
 
-async function runTask(kind: NetworkRunKind, context: Awaited<ReturnType<typeof loadNetworkContext>>, input: NetworkRunInput) {
+async function runTask(kind: NetworkRunKind, context: NetworkContext, input: NetworkRunInput) {
   switch (kind) {
     case 'solve':
       return runInWorker('network.solve', context, { timeLimitMs: 60_000 });
-    default:
-      return runInWorker('network.solve', context, { timeLimitMs: (input.timeLimitS + 30) * 1000 });
+    case 'day':
+      return runInWorker('network.day', context, { timeLimitMs: 120_000 });
+    case 'size':
+      // The optimiser's own limit, plus time to load it and to check the answer.
+      return runInWorker('network.size', { context, onePipePerLink: input.onePipePerLink, timeLimitS: input.timeLimitS }, { timeLimitMs: (input.timeLimitS + 60) * 1000 });
   }
 }
 
@@ -44,7 +48,7 @@ export async function startNetworkRun(projectId: string, userId: string, input: 
   });
   if (running) return networkJobView(running);
   const context = await loadNetworkContext(projectId);
-  const built = buildNetworkInput(context);
+  const built = buildNetworkInput(context, input.kind === 'day' ? 'day' : 'peak');
   try {
     assertNetworkInput(built.input);
   } catch (error) {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { models } from '../../models';
 import type { Project, UnitSystem } from '../../models/project';
+import type { DecimalMark } from '../units/typed-number';
 import type { UpdateProjectInput } from '../validations/projects';
 
 export interface ProjectSummary {
@@ -12,6 +13,8 @@ export interface ProjectSummary {
   siteNotes: string;
   /** Depth frost reaches at the site, m; null when not known. */
   frostDepthM: number | null;
+  /** Decimal mark for number boxes; null = the browser's locale. */
+  decimalMark: DecimalMark | null;
   archived: boolean;
   createdAt: string;
   updatedAt: string;
@@ -26,6 +29,7 @@ function toSummary(p: Project): ProjectSummary {
     unitSystem: p.unitSystem,
     siteNotes: p.siteNotes,
     frostDepthM: p.frostDepthM ?? null,
+    decimalMark: p.decimalMark ?? null,
     archived: p.archivedAt != null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),

@@ -54,18 +54,6 @@ export async function listMembers(teamId: string, viewer?: { userId: string; rol
   });
 }
 
-export async function addMember(teamId: string, email: string, role: Role): Promise<MemberSummary> {
-  const { User, Membership, sequelize } = models();
-  return sequelize.transaction(async (transaction) => {
-    const user = await User.findOne({ where: { email }, transaction });
-    if (!user) throw new AppError('bad_request', 'No Runnel account uses this e-mail', { email: ['Ask them to sign up first, then add them'] });
-    const existing = await Membership.findOne({ where: { teamId, userId: user.id }, transaction });
-    if (existing) throw new AppError('conflict', 'Already a member of this team', { email: ['Already a member; change their role instead'] });
-    const m = await Membership.create({ teamId, userId: user.id, role }, { transaction });
-    return { userId: user.id, name: user.name, email: user.email, role, joinedAt: m.createdAt.toISOString() };
-  });
-}
-
 async function assertAnotherOwnerRemains(teamId: string, userId: string, transaction: import('sequelize').Transaction) {
   const { Membership } = models();
   // Lock the team's owner rows so two owners cannot demote each other at the same moment.

@@ -9,6 +9,7 @@ import type { SurveyInspection } from '../survey/inspect';
 import type { SurveyFormat } from '../survey/parsed-survey';
 import { fieldErrorsOf } from '../validations/common';
 import { SurveyImportOptionsSchema, type SurveyImportOptions } from '../validations/survey-import';
+import { typedNumber } from '../units/decimal-mark-store';
 
 /** Everything the mapping screen lets the user set; turned into import options on submit. */
 export interface MappingDraft {
@@ -66,8 +67,8 @@ export function withInspection(draft: MappingDraft, inspection: SurveyInspection
 
 /** A typed height in project units: metres, NaN when blank or not a number (zod then names the field). */
 function typedHeightM(text: string, units: UnitSystem): number {
-  const value = Number(text.trim().replace(',', '.'));
-  return text.trim() === '' || !Number.isFinite(value) ? NaN : fromDisplay('length', value, units);
+  const value = typedNumber(text);
+  return Number.isFinite(value) ? fromDisplay('length', value, units) : NaN;
 }
 
 /** The draft as import options, checked by the same zod schema the server uses. */

@@ -8,6 +8,7 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   'static-over-rating': 'Over-pressure with the line shut',
   'surge-over-rating': 'Surge could pass the pipe rating',
   'negative-pressure': 'Suction while flowing (siphon stretch)',
+  'true-siphon': 'True siphon: pipe above the water that feeds it',
   'siphon-limit': 'Beyond the practical siphon limit',
   'vapour-limit': 'Water would boil in the pipe',
   'residual-below-target': 'Too little pressure at the end',
@@ -87,6 +88,10 @@ const WORDING: Record<WarningCode, Wording> = {
     `While flowing, the pressure falls below atmospheric from ${f.range(v.fromM, v.toM)} (down to ${f.length(v.headM)} at ${f.ch(v.worstChainageM)}): the pipe runs above the hydraulic grade line. Suction can draw dirty water in at joints and lets air come out of the water and block the line.${scatterSentence(v, f)}`,
     'Lay the pipe lower through this range or route it below the grade line; or use a larger pipe upstream so less head is lost before it.',
   ],
+  'true-siphon': (v, f) => [
+    `From ${f.range(v.fromM, v.toM)} the pipe rises above the water level that feeds it (up to ${f.length(v.headM)} above it at ${f.ch(v.worstChainageM)}): this is a true siphon. It will not fill or start by itself, must be primed, and loses its prime as air gathers at the summit; an automatic air valve there would let air in and stop it.${scatterSentence(v, f)}`,
+    'Route the pipe below the source level, or lower the summit by trenching; if a siphon cannot be avoided, fit a priming point and a manual air release at the summit and plan to re-prime it.',
+  ],
   'siphon-limit': (v, f) => [
     `Suction passes the practical siphon limit of ${f.length(v.limitHeadM)} from ${f.range(v.fromM, v.toM)} (down to ${f.length(v.headM)} at ${f.ch(v.worstChainageM)}): water may start to vaporise there and the flow can break.${scatterSentence(v, f)}`,
     'Lower the pipe through this range or choose a route that stays below the grade line.',
@@ -142,7 +147,7 @@ const WORDING: Record<WarningCode, Wording> = {
 };
 
 const PRESSURE_CODES: ReadonlySet<WarningCode> = new Set<WarningCode>([
-  'negative-pressure', 'siphon-limit', 'vapour-limit', 'static-over-rating', 'surge-over-rating', 'residual-below-target',
+  'negative-pressure', 'true-siphon', 'siphon-limit', 'vapour-limit', 'static-over-rating', 'surge-over-rating', 'residual-below-target',
 ]);
 
 /**

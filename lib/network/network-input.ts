@@ -21,6 +21,9 @@ import type { NetworkLinkRecord, NetworkNodeRecord } from './records';
  * levels, a ram's delivered flow, a source's design yield, the demand of the uses tied to an outlet).
  */
 
+/** Outlets draw their peak (steady solve, sizing) or their mean flow with its hourly pattern (day run). */
+export type DemandMode = 'peak' | 'day';
+
 /** Where a core link came from: a record link, and for a line the chainage window of the piece. */
 export interface CorePiece {
   linkId: string;
@@ -122,7 +125,7 @@ function lineStartingAt(context: NetworkContext, nodeId: string): NetworkLineCon
   return link ? context.lines.find((line) => line.id === link.lineId) : undefined;
 }
 
-function outletDemand(node: NetworkNodeRecord, context: NetworkContext): { demandM3s: number; hourlyFractions?: number[] } {
+function outletDemand(node: NetworkNodeRecord, context: NetworkContext, mode: DemandMode): { demandM3s: number; hourlyFractions?: number[] } {
   const tied = new Set(context.records.demandUseTies.filter((t) => t.outletNodeId === node.id).map((t) => t.demandUseId));
   const uses = context.demandUses.filter((use) => tied.has(use.id));
   const from = node.data.demandFrom ?? (uses.length > 0 ? 'uses' : 'fixed');
@@ -142,13 +145,12 @@ function outletDemand(node: NetworkNodeRecord, context: NetworkContext): { deman
     throw error;
   }
   const total = demand.dailyVolumeM3;
-  return {
-    demandM3s: demand.peakFlowM3s,
-    ...(total > 0 ? { hourlyFractions: demand.hourlyVolumeM3.map((v) => v / total) } : {}),
-  };
+  // The steady solve draws the peak; the day run draws the mean flow shaped by the uses' hours.
+  if (mode === 'peak' || total <= 0) return { demandM3s: demand.peakFlowM3s };
+  return { demandM3s: total / 86_400, hourlyFractions: demand.hourlyVolumeM3.map((v) => v / total) };
 }
 
-function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: BuiltNetwork['notes']): NetworkNode {
+function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: BuiltNetwork['notes'], mode: DemandMode): NetworkNode {
   const needElevation = (fallback: number | null | undefined): number => {
     const value = node.elevationM ?? fallback;
     if (value === null || value === undefined) throw elementError('nodes', node, 'elevationM', 'has no elevation; enter one');
@@ -171,8 +173,10 @@ function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: Built
         overflowDepth = tank.lowLevelM + ASSUMED_TANK_DEPTH_M;
         notes.push({ nodeId: node.id, message: `"${tank.name}" has no overflow level; taken as ${ASSUMED_TANK_DEPTH_M} m above its lowest working level` });
       }
-      // The peak-hour solve holds the tank at its lowest working level: the outlets' worst case.
-      return { id: node.id, kind: 'tank', elevationM: floor, waterLevelM: floor + tank.lowLevelM, tank: { overflowLevelM: floor + overflowDepth, volumeM3: tank.volumeM3 } };
+      // The peak-hour solve holds the tank at its lowest working level (the outlets' worst case); the
+      // day starts half full between that level and the overflow (common practice, no source).
+      const level = mode === 'day' ? floor + (tank.lowLevelM + overflowDepth) / 2 : floor + tank.lowLevelM;
+      return { id: node.id, kind: 'tank', elevationM: floor, waterLevelM: level, tank: { overflowLevelM: floor + overflowDepth, volumeM3: tank.volumeM3 } };
     }
     case 'ram-outlet': {
       const outlet = context.ramOutlets.find((o) => o.ramSiteId === node.ramSiteId);
@@ -193,7 +197,7 @@ function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: Built
       const line = lineEndingAt(context, node.id);
       const lastGround = line ? line.stations[line.stations.length - 1]?.groundElevationM : undefined;
       const residual = node.data.residualHeadM ?? (node.data.outletKind === 'tank-inlet' || node.data.outletKind === 'free' ? 0 : line?.design.settings.minResidualHeadM ?? DEFAULT_LINE_SETTINGS.minResidualHeadM);
-      const demand = outletDemand(node, context);
+      const demand = outletDemand(node, context, mode);
       return { id: node.id, kind: 'outlet', elevationM: needElevation(lastGround), minPressureHeadM: residual, ...demand };
     }
   }
@@ -227,12 +231,12 @@ function lineLinks(link: NetworkLinkRecord, line: NetworkLineContext, takeOffs: 
 }
 
 /** The network's core input from its records and what they read. Throws `HydraulicsInputError` naming the record. */
-export function buildNetworkInput(context: NetworkContext): BuiltNetwork {
+export function buildNetworkInput(context: NetworkContext, mode: DemandMode = 'peak'): BuiltNetwork {
   const { records } = context;
   const notes: BuiltNetwork['notes'] = [];
   const pieces: BuiltNetwork['pieces'] = {};
   const extraNodes: NetworkNode[] = [];
-  const nodes = records.nodes.map((node) => coreNode(node, context, notes));
+  const nodes = records.nodes.map((node) => coreNode(node, context, notes, mode));
   const tankWithFloat = new Set(records.nodes.filter((n) => n.kind === 'tank' && n.data.inletFloatValve !== false).map((n) => n.id));
   const links: NetworkLink[] = [];
   for (const link of records.links) {

@@ -1,8 +1,8 @@
-import { solveNetwork } from '../../hydraulics/index';
+import { findPipe, runNetworkDay, sizeNetwork, solveNetwork, type SizingCandidate } from '../../hydraulics/index';
 import type { NetworkContext } from './context';
-import { buildNetworkInput } from './network-input';
-import type { SolveRunResult } from './run-result';
-import { explainCoreError, solveRunResult } from './solve-result';
+import { buildNetworkInput, type BuiltNetwork } from './network-input';
+import type { DayRunResult, SizeRunResult, SolveRunResult } from './run-result';
+import { explainCoreError, recordWarning, solveRunResult } from './solve-result';
 
 /** One steady solve of the network at the peak hour (every outlet drawing its peak, tanks at their lowest working level). */
 export function solveNetworkRun(context: NetworkContext): SolveRunResult {
@@ -12,4 +12,73 @@ export function solveNetworkRun(context: NetworkContext): SolveRunResult {
   } catch (error) {
     throw explainCoreError(built, context.records, error);
   }
+}
+
+/** The team's priced pipes as sizing candidates (prices of pipes no longer in the catalogue are skipped). */
+export function sizingCandidates(context: NetworkContext): SizingCandidate[] {
+  return context.prices.flatMap(({ pipeId, costPerM }) => {
+    const pipe = findPipe(pipeId);
+    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
+  });
+}
+
+/** The built network with each link's pipe replaced by the one sizing chose. */
+function withChosenPipes(built: BuiltNetwork, pipeByLink: Record<string, string>): BuiltNetwork {
+  const pieces = Object.fromEntries(Object.entries(built.pieces).map(([coreId, piece]) => {
+    const chosen = pipeByLink[coreId] ? findPipe(pipeByLink[coreId]) : undefined;
+    return [coreId, chosen ? { ...piece, pipeId: chosen.id, pipeLabel: chosen.label } : piece];
+  }));
+  const links = built.input.links.map((link) => {
+    const chosen = pipeByLink[link.id] ? findPipe(pipeByLink[link.id]) : undefined;
+    return chosen ? { ...link, pipe: chosen } : link;
+  });
+  return { ...built, pieces, input: { ...built.input, links } };
+}
+
+/**
+ * Least-cost sizes from the team's price list: every outlet its residual at the peak hour, velocities
+ * in band, static pressure within each class's rating (the core's sizing), compared with one size everywhere.
+ */
+export async function sizeNetworkRun(context: NetworkContext, options: { onePipePerLink: boolean; timeLimitS: number }): Promise<SizeRunResult> {
+  const built = buildNetworkInput(context);
+  const candidates = sizingCandidates(context);
+  if (candidates.length === 0) {
+    return { kind: 'size', feasible: false, cost: null, uniform: null, solution: null, warnings: [{ code: 'network.no-prices', severity: 'warning', message: "The team's price list is empty: price some pipes first" }] };
+  }
+  let result;
+  try {
+    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS });
+  } catch (error) {
+    throw explainCoreError(built, context.records, error);
+  }
+  const sized = withChosenPipes(built, result.pipeByLink);
+  const single = result.singleSize.pipeId ? findPipe(result.singleSize.pipeId) : undefined;
+  return {
+    kind: 'size',
+    feasible: result.feasible,
+    cost: result.feasible ? result.cost : null,
+    uniform: single && result.singleSize.cost !== undefined ? { pipeId: single.id, pipeLabel: single.label, cost: result.singleSize.cost, feasible: result.singleSize.feasible } : null,
+    solution: solveRunResult(sized, result.solution),
+    warnings: result.warnings.map((warning) => recordWarning(built, warning)),
+  };
+}
+
+/** A 24-hour day in hourly steps: tank levels, the source draw and the flags the core raises. */
+export function dayNetworkRun(context: NetworkContext): DayRunResult {
+  const built = buildNetworkInput(context, 'day');
+  let day;
+  try {
+    day = runNetworkDay(built.input, { keepSolutions: false });
+  } catch (error) {
+    throw explainCoreError(built, context.records, error);
+  }
+  const tanks = built.input.nodes.filter((n) => n.kind === 'tank' && n.tank);
+  const sources = built.input.nodes.filter((n) => n.kind === 'source' || n.kind === 'ram-outlet');
+  return {
+    kind: 'day',
+    hours: day.steps.map((step) => step.hour),
+    tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: null })),
+    sources: sources.map((source) => ({ nodeId: source.id, drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0), yieldM3s: source.yieldM3s ?? null })),
+    warnings: day.warnings.map((warning) => recordWarning(built, warning)),
+  };
 }

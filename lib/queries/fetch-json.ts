@@ -9,11 +9,11 @@ export class ApiError extends Error {
 }
 
 /** The one fetch helper of the client: JSON in, JSON out, refusals thrown as ApiError. */
-export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+export async function fetchJson<T>(url: string, init: { method?: string; body?: unknown; /** A file upload, sent as multipart/form-data instead of `body`. */ form?: FormData } = {}): Promise<T> {
   const res = await fetch(url, {
     method: init.method ?? 'GET',
     headers: init.body === undefined ? undefined : { 'content-type': 'application/json' },
-    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    body: init.form ?? (init.body === undefined ? undefined : JSON.stringify(init.body)),
     credentials: 'same-origin',
   });
   if (res.status === 204) return undefined as T;

@@ -11,15 +11,6 @@ export const teamMembersQuery = (teamId: string) =>
     queryFn: async () => (await fetchJson<{ members: MemberSummary[] }>(`/api/teams/${teamId}/members`)).members,
   });
 
-export function useAddMember(teamId: string) {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: (input: { email: string; role: Role }) =>
-      fetchJson<{ member: MemberSummary }>(`/api/teams/${teamId}/members`, { method: 'POST', body: input }),
-    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.team(teamId) }),
-  });
-}
-
 export function useChangeRole(teamId: string) {
   const client = useQueryClient();
   return useMutation({

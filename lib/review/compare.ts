@@ -33,6 +33,9 @@ export interface RevisionComparison {
   tanks: { added: string[]; removed: string[]; changed: string[] };
   ramSites: { added: string[]; removed: string[]; changed: string[] };
   demandUses: { added: string[]; removed: string[]; changed: string[] };
+  /** Network nodes (take-offs, outlets, tanks...) and links; empty when neither revision froze a network. */
+  networkNodes: { added: string[]; removed: string[]; changed: string[] };
+  networkLinks: { added: string[]; removed: string[]; changed: string[] };
 }
 
 const KEY_DECIMALS = 100;
@@ -106,6 +109,11 @@ function compareNamed<T extends { id: string; name?: string; label?: string }>(b
   };
 }
 
+/** A network part under a name a person reads: "take-off T1 (junction)". */
+function named<T extends { id: string; name: string; kind: string }>(part: T): T {
+  return { ...part, name: `${part.name} (${part.kind})` };
+}
+
 /** What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram sites and demand. */
 export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot): RevisionComparison {
   const ids = [...new Set([...before.lines.map((l) => l.id), ...after.lines.map((l) => l.id)])];
@@ -115,5 +123,7 @@ export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot):
     tanks: compareNamed(before.lift.tanks, after.lift.tanks),
     ramSites: compareNamed(before.lift.ramSites, after.lift.ramSites),
     demandUses: compareNamed(before.lift.demandUses, after.lift.demandUses),
+    networkNodes: compareNamed((before.network?.nodes ?? []).map(named), (after.network?.nodes ?? []).map(named)),
+    networkLinks: compareNamed((before.network?.links ?? []).map(named), (after.network?.links ?? []).map(named)),
   };
 }

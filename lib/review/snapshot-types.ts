@@ -1,5 +1,6 @@
 import type { LiftRecords } from '../lift/records';
 import type { LineSiteContext } from '../lines/ram-start';
+import type { NetworkRecords } from '../network/records';
 import type { LineRouteStation } from '../lines/route-stations';
 import type { LineDesign } from '../validations/line-design';
 import type { UnitSystem } from '../units/index';
@@ -29,6 +30,6 @@ export interface DesignSnapshot {
   project: { name: string; description: string; unitSystem: UnitSystem; siteNotes: string; frostDepthM: number | null };
   lines: SnapshotLine[];
   lift: Pick<LiftRecords, 'sources' | 'yieldReadings' | 'ramSites' | 'tanks' | 'demandUses'>;
-  /** The network (nodes, links) when the project has one; absent in revisions made before it existed. */
-  network?: unknown;
+  /** The network (nodes, links, which outlet each demand use feeds); absent in revisions made before it existed. */
+  network?: NetworkRecords;
 }

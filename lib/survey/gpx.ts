@@ -1,4 +1,5 @@
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import { SaxesParser } from 'saxes';
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, readTimeCell } from './cells';
 import { SurveyImportError } from './errors';
@@ -28,16 +29,19 @@ interface GpxPoint {
 
 const LISTS = new Set(['trk', 'trkseg', 'trkpt', 'rte', 'rtept', 'wpt']);
 
-/** Line of each occurrence of an element, in document order (the XML parser drops positions). */
-function elementLines(text: string, tag: string): number[] {
-  const lines: number[] = [];
-  const re = new RegExp(`<(?:[\\w.-]+:)?${tag}[\\s>/]`, 'g');
-  let line = 1;
-  let scanned = 0;
-  for (let m = re.exec(text); m; m = re.exec(text)) {
-    for (; scanned < m.index; scanned += 1) if (text.charCodeAt(scanned) === 10) line += 1;
-    lines.push(line);
-  }
+/**
+ * Line of each <trkpt>, <rtept> and <wpt> in document order, from a SAX pass of the XML parser
+ * (comments, CDATA and processing instructions cannot shift them, as a text scan would).
+ */
+function pointLines(text: string): Record<'trkpt' | 'rtept' | 'wpt', number[]> {
+  const lines = { trkpt: [] as number[], rtept: [] as number[], wpt: [] as number[] };
+  const parser = new SaxesParser();
+  parser.on('opentagstart', (tag) => {
+    const local = tag.name.slice(tag.name.indexOf(':') + 1);
+    // The event comes after the character ending the name; a line break there belongs to the tag's line.
+    if (local === 'trkpt' || local === 'rtept' || local === 'wpt') lines[local].push(parser.columnIndex === 0 ? parser.line - 1 : parser.line);
+  });
+  parser.write(text).close();
   return lines;
 }
 
@@ -77,9 +81,7 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
 
   const warnings: SurveyImportWarning[] = [];
   const segments = (gpx.trk ?? []).flatMap((t) => t.trkseg ?? []).filter((s) => (s.trkpt ?? []).length > 0);
-  const trkLines = elementLines(text, 'trkpt');
-  const rteLines = elementLines(text, 'rtept');
-  const wptLines = elementLines(text, 'wpt');
+  const { trkpt: trkLines, rtept: rteLines, wpt: wptLines } = pointLines(text);
   const waypoints = gpx.wpt ?? [];
   let drafts: DraftPoint[];
   let routeFromWaypoints = false;

@@ -22,10 +22,19 @@ export interface SniffedText {
   hadByteOrderMark: boolean;
 }
 
+/** UTF-16 by its byte-order mark (FF FE little-endian, FE FF big-endian), or null. */
+function utf16Encoding(bytes: Uint8Array): 'utf-16le' | 'utf-16be' | null {
+  if (bytes.byteLength < 2) return null;
+  if (bytes[0] === 0xff && bytes[1] === 0xfe) return 'utf-16le';
+  if (bytes[0] === 0xfe && bytes[1] === 0xff) return 'utf-16be';
+  return null;
+}
+
 /**
  * Checks an uploaded file before any parsing: size first (so a huge file is never decoded),
- * then known binary signatures and NUL bytes, then UTF-8 text (Windows-1252 as a fallback for
- * older receivers' exports). Returns the text with any byte-order mark removed.
+ * then known binary signatures, UTF-16 with a byte-order mark (a spreadsheet's "Unicode text"
+ * export), NUL bytes, then UTF-8 text (Windows-1252 as a fallback for older receivers' exports).
+ * Returns the text with any byte-order mark removed.
  */
 export function sniffSurveyFile(bytes: Uint8Array, options: SniffOptions = {}): SniffedText {
   const maxBytes = options.maxBytes ?? MAX_SURVEY_FILE_BYTES;
@@ -39,6 +48,16 @@ export function sniffSurveyFile(bytes: Uint8Array, options: SniffOptions = {}): 
     if (m.bytes.every((b, i) => bytes[i] === b)) {
       throw new SurveyImportError('binary-content', `the file ${name}is ${m.name}, not a survey text file (CSV or GPX)`);
     }
+  }
+  const utf16 = utf16Encoding(bytes);
+  if (utf16) {
+    // A spreadsheet's "Unicode text" export: UTF-16 with a byte-order mark, full of NUL bytes that are not binary.
+    const text = new TextDecoder(utf16, { fatal: false }).decode(bytes);
+    if (text.includes('\ufffd')) {
+      throw new SurveyImportError('binary-content', `the file ${name}starts like UTF-16 text but holds bytes that are not text`);
+    }
+    if (text.trim() === '') throw new SurveyImportError('empty-file', `the file ${name}holds no text`);
+    return { text, hadByteOrderMark: true };
   }
   const nul = bytes.indexOf(0);
   if (nul >= 0) {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DECIMAL_MARKS } from '../units/typed-number';
 import { nameText, safeText, uuid } from './common';
 
 export const UNIT_SYSTEMS = ['metric', 'us'] as const;
@@ -28,6 +29,7 @@ export const UpdateProjectSchema = z
     unitSystem,
     siteNotes: safeText('Site notes', 10000),
     frostDepthM: frostDepth,
+    decimalMark: z.enum(DECIMAL_MARKS, { error: 'Decimal mark must be "." or ","' }).nullable(),
     archived: z.boolean({ error: 'Archived must be true or false' }),
   })
   .partial()

@@ -9,8 +9,10 @@ export const MemberParams = z.strictObject({ teamId: uuid('Team id'), userId: uu
 
 export const CreateTeamSchema = z.strictObject({ name: nameText('Team name') });
 export const RenameTeamSchema = CreateTeamSchema;
-export const AddMemberSchema = z.strictObject({ email, role });
+/** An owner's invitation: the only way into a team. */
+export const InviteMemberSchema = z.strictObject({ email, role });
+export const InvitationParams = z.strictObject({ teamId: uuid('Team id'), invitationId: uuid('Invitation id') });
 export const ChangeRoleSchema = z.strictObject({ role });
 
-export type AddMemberInput = z.infer<typeof AddMemberSchema>;
+export type InviteMemberInput = z.infer<typeof InviteMemberSchema>;
 export type ChangeRoleInput = z.infer<typeof ChangeRoleSchema>;

@@ -2,7 +2,7 @@ import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
 import { thinAnalysis } from '../lines/thin-analysis';
 import type { NetworkContext } from '../network/context';
-import { solveNetworkRun } from '../network/run-network';
+import { dayNetworkRun, sizeNetworkRun, solveNetworkRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
 import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -26,6 +26,10 @@ export const TASKS = {
   },
   /** Solves a project's network at the peak hour (lib/network). */
   'network.solve': (input: NetworkContext) => solveNetworkRun(input),
+  /** A 24-hour day of the network in hourly steps. */
+  'network.day': (input: NetworkContext) => dayNetworkRun(input),
+  /** Least-cost pipe sizes from the team's price list (HiGHS, loaded in the worker). */
+  'network.size': (input: { context: NetworkContext; onePipePerLink: boolean; timeLimitS: number }) => sizeNetworkRun(input.context, input),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
   'test.spin': (input: { ms: number; answer: number }) => {
     const end = Date.now() + input.ms;

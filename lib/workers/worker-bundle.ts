@@ -28,6 +28,9 @@ async function build(): Promise<string> {
     // Bundled CommonJS packages call require(); give the ES module one.
     banner: { js: "import { createRequire as __runnelRequire } from 'node:module'; const require = __runnelRequire(import.meta.url);" },
   });
+  // The sizing optimiser (highs) loads its WebAssembly from beside the script that runs it.
+  const wasm = path.join(process.cwd(), 'node_modules', 'highs', 'build', 'highs.wasm');
+  if (fs.existsSync(wasm)) fs.copyFileSync(wasm, path.join(dir, 'highs.wasm'));
   return outfile;
 }
 

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { POST as createAccount } from '@/app/api/accounts/route';
 import { PATCH as patchProject } from '@/app/api/projects/[projectId]/route';
-import { POST as addMember } from '@/app/api/teams/[teamId]/members/route';
+import { POST as invite } from '@/app/api/teams/[teamId]/invitations/route';
 import { GET as listProjects, POST as createProject } from '@/app/api/teams/[teamId]/projects/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
@@ -61,8 +61,8 @@ describe('bad input is refused with 400 and field errors, and nothing is written
   });
 
   it('an array where one id belongs is refused', async () => {
-    const res = await call(addMember, {
-      method: 'POST', path: '/api/teams/x/members', params: { teamId: f.teamId },
+    const res = await call(invite, {
+      method: 'POST', path: '/api/teams/x/invitations', params: { teamId: f.teamId },
       body: { email: [f.users.outsider.email, 'x@example.test'], role: 'viewer' }, userId: f.users.owner.id,
     });
     expect(res.status).toBe(400);
@@ -85,10 +85,10 @@ describe('bad input is refused with 400 and field errors, and nothing is written
     expect(await models().User.count({ where: { email } })).toBe(0);
   });
 
-  it('sign-up: a taken e-mail is a 409 and the existing account is untouched', async () => {
+  it('sign-up: a taken e-mail gets the usual answer (no enumeration) and the existing account is untouched', async () => {
     const res = await call(createAccount, { method: 'POST', path: '/api/accounts', body: { name: 'Copy', email: f.users.owner.email, password: 'a long enough passphrase' } });
-    expect(res.status).toBe(409);
-    expect(res.json.error.fields.email).toBeDefined();
+    expect(res.status).toBe(202);
+    expect(res.json).toEqual({ status: 'check-your-mail', email: f.users.owner.email });
     const user = await models().User.findOne({ where: { email: f.users.owner.email } });
     expect(user!.name).toBe('Fixture owner');
   });

@@ -1,9 +1,11 @@
 import type { Actor } from '../support/api';
 import { createTeamFixture } from '../support/api';
 import { referenceLine } from './analysis-fixtures';
+import { ACCOUNT_MAIL_ENDPOINTS } from './account-mail-endpoints';
 import { LIFT_ENDPOINTS } from './lift-endpoints';
 import { REVIEW_ENDPOINTS } from './review-endpoints';
 import { NETWORK_ENDPOINTS } from './network-endpoints';
+import { PHOTO_ENDPOINTS } from './photo-endpoints';
 import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -32,8 +34,8 @@ const everyone = (ok: number): Expect => ({ anonymous: ok, outsider: ok, viewer:
 
 /** Every endpoint of the API with the status each kind of caller must get for a valid request. */
 export const ENDPOINTS: EndpointCase[] = [
-  { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
-  { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(201) },
+  { file: 'accounts/route.ts', method: 'POST', params: () => ({}), body: (_f, n) => ({ name: 'New Person', email: `new-${Date.now()}-${n}@fixture.test`, password: 'a long enough passphrase' }), expect: everyone(202) },
+  ...ACCOUNT_MAIL_ENDPOINTS,
   { file: 'accounts/sign-out-everywhere/route.ts', method: 'POST', params: () => ({}), expect: signedIn(200) },
   { file: 'health/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
   { file: 'ready/route.ts', method: 'GET', params: () => ({}), expect: everyone(200) },
@@ -42,7 +44,6 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'teams/[teamId]/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
   { file: 'teams/[teamId]/route.ts', method: 'PATCH', params: (f) => ({ teamId: f.teamId }), body: () => ({ name: 'Renamed team' }), expect: onlyOwner(200) },
   { file: 'teams/[teamId]/members/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
-  { file: 'teams/[teamId]/members/route.ts', method: 'POST', params: (f) => ({ teamId: f.teamId }), body: (f) => ({ email: f.users.outsider.email, role: 'viewer' }), expect: onlyOwner(201) },
   { file: 'teams/[teamId]/members/[userId]/route.ts', method: 'PATCH', params: (f) => ({ teamId: f.teamId, userId: f.users.extra.id }), body: () => ({ role: 'reviewer' }), expect: onlyOwner(200) },
   { file: 'teams/[teamId]/members/[userId]/route.ts', method: 'DELETE', params: (f) => ({ teamId: f.teamId, userId: f.users.extra.id }), expect: onlyOwner(204) },
   { file: 'teams/[teamId]/projects/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
@@ -61,6 +62,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/report/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...LIFT_ENDPOINTS,
+  ...PHOTO_ENDPOINTS,
   { file: 'lines/[lineId]/network-flows/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...REVIEW_ENDPOINTS,
   ...NETWORK_ENDPOINTS,

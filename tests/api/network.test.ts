@@ -7,8 +7,9 @@ import * as NodeOne from '../../app/api/projects/[projectId]/network/nodes/[node
 import * as Runs from '../../app/api/projects/[projectId]/network/runs/route';
 import * as RunOne from '../../app/api/projects/[projectId]/network/runs/[jobId]/route';
 import * as TakeOffs from '../../app/api/projects/[projectId]/network/take-offs/route';
+import * as PriceList from '../../app/api/teams/[teamId]/price-list/route';
 import type { NetworkJobView } from '../../lib/network/jobs';
-import type { SolveRunResult } from '../../lib/network/run-result';
+import type { SizeRunResult, SolveRunResult } from '../../lib/network/run-result';
 import type { NetworkView } from '../../lib/network/view';
 import { call, createTeamFixture } from '../support/api';
 import { outletNodeBody, sourceNodeBody } from '../support/network-fixtures';
@@ -18,7 +19,7 @@ const PIPE = 'pe100-iso4427-sdr11-32mm';
 
 async function waitForRun(f: Fixture, run: NetworkJobView): Promise<NetworkJobView> {
   for (let i = 0; i < 200; i++) {
-    const res = await call(RunOne.GET, { method: 'GET', path: '/run', params: { projectId: f.projectId, jobId: run.id }, userId: f.users.viewer.id });
+    const res = await call(RunOne.GET, { method: 'GET', path: '/run', params: { projectId: f.projectId, jobId: run.id }, userId: f.users.reviewer.id });
     const polled = res.json.run as NetworkJobView;
     if (polled.status === 'done' || polled.status === 'failed') return polled;
     await new Promise((resolve) => setTimeout(resolve, 100));
@@ -68,7 +69,7 @@ describe('network API', () => {
     await addPipe('branch A', 'tee', 'tap A', 150);
     await addPipe('branch B', 'tee', 'tap B', 200);
 
-    const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: f.projectId }, body: { kind: 'solve' }, userId: f.users.viewer.id });
+    const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: f.projectId }, body: { kind: 'solve' }, userId: f.users.reviewer.id });
     expect(started.status).toBe(202);
     expect(started.json.run.status).toBe('running');
     const run = await waitForRun(f, started.json.run);
@@ -88,8 +89,33 @@ describe('network API', () => {
     expect(Math.abs(120 - tee.headM! - loss)).toBeLessThan(0.01 * loss);
     expect(tee.pressureHeadM!).toBeCloseTo(tee.headM! - 105, 9);
 
-    const view = await call(Network.GET, { method: 'GET', path: '/network', params: { projectId: f.projectId }, userId: f.users.viewer.id });
+    const view = await call(Network.GET, { method: 'GET', path: '/network', params: { projectId: f.projectId }, userId: f.users.reviewer.id });
     expect((view.json.network as NetworkView).runs.solve?.id).toBe(run.id);
+  });
+
+  it('sizes for least cost from the team price list on the worker pool, cheaper than one size everywhere', async () => {
+    const prices = [['pe100-iso4427-sdr11-20mm', 0.6], ['pe100-iso4427-sdr11-25mm', 0.9], ['pe100-iso4427-sdr11-32mm', 1.4], ['pe100-iso4427-sdr11-40mm', 2.2]];
+    const put = await call(PriceList.PUT, {
+      method: 'PUT', path: '/p', params: { teamId: f.teamId }, userId: f.users.designer.id,
+      body: { items: prices.map(([pipeId, costPerM]) => ({ pipeId, costPerM })) },
+    });
+    expect(put.status).toBe(200);
+    const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: f.projectId }, body: { kind: 'size', timeLimitS: 10 }, userId: f.users.designer.id });
+    expect(started.status).toBe(202);
+    const run = await waitForRun(f, started.json.run);
+    expect(run.error).toBeNull();
+    const sized = run.result as SizeRunResult;
+    expect(sized.feasible).toBe(true);
+    // Every outlet gets its residual at the peak hour with the chosen sizes.
+    for (const node of sized.solution!.nodes.filter((n) => n.minPressureHeadM !== null && n.demandM3s > 0)) {
+      expect(node.pressureHeadM!).toBeGreaterThanOrEqual(node.minPressureHeadM! - 1e-3);
+    }
+    // The cost is the chosen pipes priced per metre (400 + 150 + 200 m).
+    const price = Object.fromEntries(prices) as Record<string, number>;
+    const length: Record<string, number> = { [ids.main]: 400, [ids['branch A']]: 150, [ids['branch B']]: 200 };
+    const total = sized.solution!.links.reduce((sum, link) => sum + price[link.pieces[0].pipeId] * length[link.linkId], 0);
+    expect(sized.cost!).toBeCloseTo(total, 6);
+    if (sized.uniform) expect(sized.uniform.cost).toBeGreaterThanOrEqual(sized.cost! - 1e-6);
   });
 
   it('answers a bad network with 400 naming the element, and starts no run', async () => {

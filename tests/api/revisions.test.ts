@@ -9,8 +9,11 @@ import * as requestChangesRoute from '@/app/api/revisions/[revisionId]/request-c
 import * as revisionRoute from '@/app/api/revisions/[revisionId]/route';
 import * as submitRoute from '@/app/api/revisions/[revisionId]/submit/route';
 import * as lineRoute from '@/app/api/lines/[lineId]/route';
+import * as membersRoute from '@/app/api/teams/[teamId]/members/route';
+import * as sourceFileRoute from '@/app/api/routes/[routeId]/source/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
+import { createPipeNetworkFixture } from '../support/network-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 
@@ -38,7 +41,8 @@ describe('revisions and the review cycle', () => {
   };
   const statusOf = async (id: string) => (await models().Revision.findByPk(id))!.status;
 
-  it('numbers revisions and freezes the whole design: lines with their route stations, the project settings', async () => {
+  it('numbers revisions and freezes the whole design: lines with their route stations, the network, the project settings', async () => {
+    const network = await createPipeNetworkFixture(f.projectId);
     const first = await make(f.users.designer.id);
     expect(first.status).toBe(201);
     const second = await make(f.users.designer.id, { note: 'Second', submit: true });
@@ -49,6 +53,8 @@ describe('revisions and the review cycle', () => {
     const line = snap.lines.find((l: { id: string }) => l.id === f.lineId);
     expect(line.stations.map((s: { chainageM: number }) => s.chainageM)).toEqual([0, 100, 200, 300, 400]);
     expect(line.design.stretches).toEqual([{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }]);
+    expect(snap.network.nodes.map((n: { id: string }) => n.id).sort()).toEqual([network.source.id, network.outlet.id].sort());
+    expect(snap.network.links).toMatchObject([{ id: network.link.id, fromNodeId: network.source.id, toNodeId: network.outlet.id }]);
   });
 
   it('an edit after a revision changes only the working copy: the revision PDF stays byte-for-byte the same', async () => {
@@ -148,5 +154,15 @@ describe('revisions and the review cycle', () => {
     const draftPages = await pagesOf(draftPdf.bytes);
     expect(draftPages.length).toBeGreaterThan(1);
     for (const page of draftPages) expect(page).toContain('NOT FOR CONSTRUCTION');
+  });
+
+  it('a client sees no other member\'s e-mail address and cannot download raw survey files', async () => {
+    const members = await call(membersRoute.GET, { method: 'GET', path: '/api/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    expect(members.status).toBe(200);
+    for (const m of members.json.members) expect(m.email).toBe(m.userId === f.users.viewer.id ? f.users.viewer.email : null);
+    const forTeam = await call(membersRoute.GET, { method: 'GET', path: '/api/x', params: { teamId: f.teamId }, userId: f.users.reviewer.id });
+    expect(forTeam.json.members.every((m: { email: string | null }) => typeof m.email === 'string')).toBe(true);
+    const raw = await call(sourceFileRoute.GET, { method: 'GET', path: '/api/x', params: { routeId: f.routeId }, userId: f.users.viewer.id });
+    expect(raw.status).toBe(403);
   });
 });

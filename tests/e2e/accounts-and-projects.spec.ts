@@ -1,7 +1,8 @@
 import { expect, test } from '@playwright/test';
 import { signIn, watchConsole } from './fixtures';
+import { waitForMail } from './mail';
 
-test('a newcomer signs up, signs out, signs in, creates a project and finds it in the table', async ({ page }) => {
+test('a newcomer signs up, confirms the address from the mail, signs in, creates a project and finds it in the table', async ({ page }) => {
   const errors = watchConsole(page);
   const email = `newcomer-${Date.now()}@example.test`;
   const password = 'a long passphrase for the spring';
@@ -14,12 +15,14 @@ test('a newcomer signs up, signs out, signs in, creates a project and finds it i
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Create account' }).click();
-  await expect(page).toHaveURL(/\/projects$/);
-  await expect(page.getByText("Water systems of Wren Alder's team.")).toBeVisible();
+  await expect(page.getByRole('status')).toContainText('Check your mail');
 
-  await page.getByRole('button', { name: 'Account menu' }).click();
-  await page.getByRole('button', { name: 'Sign out', exact: true }).click();
-  await expect(page).toHaveURL(/\/sign-in/);
+  // The account exists only once the address is confirmed from the mailed link.
+  const mail = await waitForMail(email, /Confirm your e-mail address/);
+  await page.goto(mail.link);
+  await page.getByRole('button', { name: 'Confirm my address' }).click();
+  await expect(page).toHaveURL(/\/sign-in\?confirmed=/);
+  await expect(page.getByRole('status')).toHaveText('Your address is confirmed and your account is ready: sign in.');
 
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('not the passphrase');
@@ -27,6 +30,7 @@ test('a newcomer signs up, signs out, signs in, creates a project and finds it i
   await expect(page.getByRole('alert').filter({ hasText: 'do not match' })).toHaveText('That e-mail and password do not match an account.');
 
   await signIn(page, email, password);
+  await expect(page.getByText("Water systems of Wren Alder's team.")).toBeVisible();
   await page.getByLabel('Name').fill('Lower meadow trough line');
   await page.getByLabel('Description').fill('Spring box to the meadow trough');
   await page.getByRole('button', { name: 'Create project' }).click();

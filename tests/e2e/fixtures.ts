@@ -8,7 +8,8 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/projects$/);
+  // Sign-in hashes the password (argon2id): on a loaded machine it can take several seconds.
+  await expect(page).toHaveURL(/\/projects$/, { timeout: 20_000 });
 }
 
 /** Fails the test on any console error or uncaught page error (a favicon 404 included). */

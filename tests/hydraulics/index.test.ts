@@ -129,6 +129,8 @@ const EXPORTED_NAMES = [
   'kortewegWaveSpeedMs',
   'lengthFromM',
   'lengthToM',
+  'lineFlowSchedule',
+  'locateOnRoute',
   'massCurveStorage',
   'meanVelocityMs',
   'measuredFlowM3s',

@@ -10,11 +10,10 @@ export interface LoadBalancer {
 
 /**
  * The load balancer in front of the instances: nginx, round robin, HTTP/1.1 keep-alive to the
- * instances. Keep-alive matters for draining: on SIGTERM an instance (Next.js, then Node's
- * `server.close()`) stops listening, closes its idle connections and answers the requests in
- * flight; over HTTP/1.0 (nginx's default to upstreams) Node counts a request in flight as idle and
- * resets it. A refused connection is retried on the next instance (`proxy_next_upstream error`,
- * which nginx allows for POST too, since nothing was sent).
+ * instances, idle connections closed by nginx first. On SIGTERM an instance stops listening and
+ * ends each connection after the request it carries (lib/server/close-keep-alive-on-stop.ts); a
+ * refused connection is retried on the next instance (`proxy_next_upstream error`, which nginx
+ * allows for POST too, since nothing was sent).
  */
 export function nginxConfig(dir: string, listenPort: number, upstreamPorts: number[]): string {
   return `worker_processes 1;
@@ -32,6 +31,9 @@ http {
   upstream runnel {
 ${upstreamPorts.map((p) => `    server 127.0.0.1:${p} max_fails=1 fail_timeout=2s;`).join('\n')}
     keepalive 64;
+    # Below Node's 5 s keep-alive timeout: the balancer, not the instance, closes an idle connection,
+    # so it never sends a request down a connection the instance is closing.
+    keepalive_timeout 4s;
   }
   server {
     listen 127.0.0.1:${listenPort};

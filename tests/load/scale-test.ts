@@ -20,7 +20,7 @@ const runtime = process.env.RUNNEL_RUNTIME_DIR ?? '.runtime/scale';
 const databaseUrl = process.env.DATABASE_URL!;
 const secret = process.env.NEXTAUTH_SECRET!;
 
-const say = (message: string) => console.log(`[scale] ${message}`);
+const say = (message: string) => console.log(`[scale] ${new Date().toISOString().slice(11, 19)} ${message}`);
 const sleepUntil = (t0: number, seconds: number) => new Promise((resolve) => setTimeout(resolve, Math.max(0, t0 + seconds * 1000 - performance.now())));
 
 async function storedNotes(prefix: string): Promise<Set<string>> {

@@ -18,7 +18,7 @@ type RouteHandler = (req: NextRequest, ctx: { params: Promise<Record<string, str
 
 export async function createUser(label: string): Promise<{ id: string; email: string }> {
   const email = `${label}-${randomUUID().slice(0, 8)}@fixture.test`;
-  const user = await models().User.create({ email, name: `Fixture ${label}`, passwordHash: FIXTURE_HASH });
+  const user = await models().User.create({ email, name: `Fixture ${label}`, passwordHash: FIXTURE_HASH, emailVerifiedAt: new Date() });
   return { id: user.id, email };
 }
 

@@ -1,13 +1,16 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
 import { MembersTable } from '@/components/team/members-table';
-import { AddMemberForm } from '@/components/team/add-member-form';
+import { InvitationsTable } from '@/components/team/invitations-table';
+import { InviteForm } from '@/components/team/invite-form';
 import { TeamSettings } from '@/components/team/team-settings';
 import { Panel } from '@/components/ui/panel';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { currentTeam } from '@/lib/current-team';
+import { listOpenInvitations } from '@/lib/data/invitations';
 import { listMembers } from '@/lib/data/teams';
 import { can } from '@/lib/permissions';
+import { invitationKeys } from '@/lib/queries/invitations';
 import { memberKeys } from '@/lib/queries/members';
 import { getQueryClient } from '@/lib/queries/query-client';
 
@@ -22,6 +25,7 @@ export default async function TeamPage() {
 
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id, { userId: user.id, role }) });
+  if (manage) await queryClient.prefetchQuery({ queryKey: invitationKeys.team(team.id), queryFn: () => listOpenInvitations(team.id) });
 
   return (
     <div className="space-y-6">
@@ -29,12 +33,15 @@ export default async function TeamPage() {
         <h1 className="text-2xl font-semibold text-creek-900">{team.name}</h1>
         <p className="text-sm text-creek-700">Who works on this team&apos;s projects, and in which role.</p>
       </div>
-      {manage && (
-        <Panel title="Add a member">
-          <AddMemberForm teamId={team.id} />
-        </Panel>
-      )}
       <HydrationBoundary state={dehydrate(queryClient)}>
+        {manage && (
+          <Panel title="Invite someone">
+            <p className="mb-3 text-sm text-creek-700">People join only through an invitation: we mail them a link that works once, for 7 days.</p>
+            <InviteForm teamId={team.id} />
+            <h3 className="mb-2 mt-5 text-sm font-semibold text-creek-900">Waiting for an answer</h3>
+            <InvitationsTable teamId={team.id} />
+          </Panel>
+        )}
         <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
       </HydrationBoundary>
       <Panel title="Teams">

@@ -1,9 +1,12 @@
 import { publicRoute } from '@/lib/api/route';
-import { createAccount } from '@/lib/auth/users';
+import { requestSignUp } from '@/lib/accounts/sign-up';
 import { SignUpSchema } from '@/lib/validations/auth';
 
-/** Sign up: a new account with a team of its own. */
-export const POST = publicRoute({ body: SignUpSchema, status: 201 }, async ({ body }) => {
-  const user = await createAccount(body);
-  return { user: { id: user.id, email: user.email, name: user.name } };
+/**
+ * Sign up: mails a confirmation link; the account (and its own team) is made when the link is
+ * used. The answer is the same whether or not the address already has an account.
+ */
+export const POST = publicRoute({ body: SignUpSchema, status: 202 }, async ({ body }) => {
+  await requestSignUp(body);
+  return { status: 'check-your-mail', email: body.email };
 });

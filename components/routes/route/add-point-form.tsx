@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { fromDisplay, unitOf } from '@/lib/units';
 import type { DraftAction } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/lib/units';
+import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface AddPointFormProps {
   count: number;
@@ -13,10 +14,7 @@ export interface AddPointFormProps {
   dispatch: (action: DraftAction) => void;
 }
 
-const num = (v: FormDataEntryValue | null) => {
-  const s = String(v ?? '').trim().replace(',', '.');
-  return s === '' ? NaN : Number(s);
-};
+const num = (v: FormDataEntryValue | null) => typedNumber(String(v ?? ''));
 
 /** Adds a station: by position on a walked route, by chainage on a station profile. */
 export function AddPointForm({ count, units, positioned, dispatch }: AddPointFormProps) {

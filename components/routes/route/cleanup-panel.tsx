@@ -10,6 +10,7 @@ import { benchmarkProposals, smoothingProposals } from '@/lib/routes/proposals';
 import type { RouteDetail, RouteProposal } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
 import { ProposalItem } from './proposal-item';
+import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface CleanupPanelProps {
   detail: RouteDetail;
@@ -49,7 +50,7 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
     const form = new FormData(e.currentTarget);
     try {
       if (kind === 'smoothing') setRequested(smoothingProposals(detail.points, Number(form.get('window'))));
-      else setRequested(benchmarkProposals(detail.points, Number(form.get('benchmark-point')) - 1, fromDisplay('length', Number(String(form.get('benchmark-elevation')).replace(',', '.')), units)));
+      else setRequested(benchmarkProposals(detail.points, Number(form.get('benchmark-point')) - 1, fromDisplay('length', typedNumber(String(form.get('benchmark-elevation'))), units)));
       setMessage(null);
     } catch (error) {
       setMessage(error instanceof Error ? error.message.replace(/^[\w.]+(\[\d+\])?: /, '') : 'Could not propose that.');

@@ -1,6 +1,8 @@
 'use client';
 
 import { useState } from 'react';
+import { useDecimalMark } from '@/components/ui/decimal-mark';
+import { parseTypedNumber } from '@/lib/units/typed-number';
 
 export interface NumberCellProps {
   label: string;
@@ -16,7 +18,8 @@ export interface NumberCellProps {
  * Text that is not a number is refused on the spot with a message.
  */
 export function NumberCell({ label, value, digits, allowEmpty = false, onCommit }: NumberCellProps) {
-  const shown = value === null ? '' : value.toFixed(digits);
+  const mark = useDecimalMark();
+  const shown = value === null ? '' : mark === ',' ? value.toFixed(digits).replace('.', ',') : value.toFixed(digits);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   const [last, setLast] = useState(shown);
@@ -26,16 +29,17 @@ export function NumberCell({ label, value, digits, allowEmpty = false, onCommit 
     setText(shown);
   }
   function commit() {
-    const trimmed = text.trim().replace(',', '.');
+    const trimmed = text.trim();
     if (trimmed === shown) return setError(null);
-    if (trimmed === '' && allowEmpty) {
+    const read = parseTypedNumber(trimmed, mark);
+    if (!read.ok) return setError(`${label}: ${read.error}`);
+    if (read.value === null) {
+      if (!allowEmpty) return setError(`${label} must be a number`);
       setError(null);
       return onCommit(null);
     }
-    const n = Number(trimmed);
-    if (trimmed === '' || !Number.isFinite(n)) return setError(`${label} must be a number`);
     setError(null);
-    onCommit(n);
+    onCommit(read.value);
   }
   return (
     <span className="block">

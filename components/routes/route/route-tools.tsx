@@ -10,6 +10,7 @@ import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import { projectRoutesQuery, useDeleteRoute, useJoinRoutes, useReverseRoute, useSplitRoute, useTrimRoute } from '@/lib/queries/routes';
 import type { RouteDetail } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
+import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface RouteToolsProps {
   detail: RouteDetail;
@@ -18,7 +19,7 @@ export interface RouteToolsProps {
 }
 
 const field = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1';
-const num = (form: FormData, name: string) => Number(String(form.get(name) ?? '').trim().replace(',', '.'));
+const num = (form: FormData, name: string) => typedNumber(String(form.get(name) ?? ''));
 
 /** Reverse, split, trim, join and delete: each one transaction on the server. */
 export function RouteTools({ detail, units, blocked }: RouteToolsProps) {

@@ -2,6 +2,7 @@
 
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import type { UnitSystem } from '@/lib/units';
+import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface SketchArea {
   lengthM: number;
@@ -13,7 +14,7 @@ export interface SketchArea {
 export function SketchAreaForm({ area, units, onChange }: { area: SketchArea; units: UnitSystem; onChange: (a: SketchArea) => void }) {
   const u = unitOf('length', units);
   const set = (key: keyof SketchArea, text: string) => {
-    const v = Number(text.replace(',', '.'));
+    const v = typedNumber(text);
     if (text.trim() !== '' && Number.isFinite(v)) onChange({ ...area, [key]: fromDisplay('length', v, units) });
   };
   const box = 'mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1';

@@ -69,9 +69,21 @@ export function assertEnd(end: unknown): void {
   if (end.kind === 'outlet') assertOptionalNonNegative(end.residualHeadM, 'end.residualHeadM');
 }
 
-/** Flow: a design flow >= 0, or "find". */
+/** Flow: a design flow >= 0, "find", or a schedule of flows >= 0 by increasing chainage. */
 export function assertFlow(flow: unknown): void {
   assertRecord(flow, 'flow');
-  assertOneOf(flow.kind, ['design', 'find'] as const, 'flow.kind');
+  assertOneOf(flow.kind, ['design', 'find', 'schedule'] as const, 'flow.kind');
   if (flow.kind === 'design') assertNonNegative(flow.flowM3s, 'flow.flowM3s');
+  if (flow.kind === 'schedule') {
+    const pieces = flow.pieces;
+    if (!Array.isArray(pieces) || pieces.length === 0) throw new HydraulicsInputError('flow.pieces', 'needs at least one piece');
+    pieces.forEach((piece: unknown, index: number) => {
+      assertRecord(piece, 'flow.pieces');
+      assertFinite(piece.fromM, 'flow.pieces.fromM', index);
+      assertNonNegative(piece.flowM3s, 'flow.pieces.flowM3s', index);
+      if (index > 0 && !((piece.fromM as number) > (pieces[index - 1] as { fromM: number }).fromM)) {
+        throw new HydraulicsInputError('flow.pieces.fromM', 'must increase from piece to piece', index);
+      }
+    });
+  }
 }

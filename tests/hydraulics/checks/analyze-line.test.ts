@@ -56,13 +56,15 @@ describe('analyzeLine checks', () => {
     expect(surge?.message).toMatch(/2L\/a = \d/);
   });
 
-  it('negative pressure while flowing is a warning with its exact range; the practical siphon limit is danger', () => {
+  it('a summit above the source with no flow is a true siphon with its exact range; the practical siphon limit is danger', () => {
     const analysis = analyzeLine({
       ...simpleLine([[0, 100], [500, 112.6], [1000, 80]], 105, 0),
       settings: { siteAltitudeM: 0 },
     });
-    const negative = analysis.warnings.find((w) => w.code === 'negative-pressure');
-    expect(negative?.severity).toBe('warning');
+    // Issue 13: with nothing flowing this is not "suction while flowing" but a true siphon (BC Factsheet 590.304-5 [R10]).
+    expect(analysis.warnings.map((w) => w.code)).not.toContain('negative-pressure');
+    const negative = analysis.warnings.find((w) => w.code === 'true-siphon');
+    expect(negative?.severity).toBe('danger');
     expect(negative && 'fromM' in negative.at ? negative.at.fromM : NaN).toBeCloseTo((5 / 12.6) * 500, 6);
     expect(analysis.warnings.find((w) => w.code === 'siphon-limit')?.severity).toBe('danger');
   });

@@ -97,7 +97,7 @@ describe('the static pressure arriving at a break-pressure tank counts (review d
 });
 
 describe('the practical siphon limit scales with the site\'s atmospheric head (review defect, issue 13)', () => {
-  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (REFERENCES §1.6).
+  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (docs/references/core.md §1.6).
   const atSite = (siteAltitudeM: number) =>
     analyzeLine({
       stations: [[0, 100], [100, 104], [200, 90]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
@@ -121,5 +121,47 @@ describe('the practical siphon limit scales with the site\'s atmospheric head (r
   it('so a 4.5 m suction at 4,000 m is beyond the siphon limit (a fixed 7.5 m gave no warning above about 2,300 m)', () => {
     const codes = atSite(4000).warnings.map((w) => w.code);
     expect(codes).toContain('siphon-limit');
+  });
+});
+
+describe('default pipe cover is common burial practice, not 0 m (review defect, issue 13)', () => {
+  it('a station without cover puts the pipe 0.75 m below ground (common practice, no source)', () => {
+    const analysis = analyzeLine({
+      stations: [{ chainageM: 0, groundElevationM: 100 }, { chainageM: 100, groundElevationM: 90 }],
+      stretches: [{ fromM: 0, toM: 100, pipe: 'pe100-iso4427-sdr11-50mm' }],
+      start: { kind: 'water-level', levelM: 101 },
+      end: { kind: 'free-discharge' },
+      flow: { kind: 'design', flowM3s: 0.0005 },
+    });
+    expect(analysis.settings.defaultCoverM).toBe(0.75);
+    expect(analysis.points.pipeElevationM[1]).toBeCloseTo(89.25, 12);
+  });
+});
+
+describe('a summit above the source\'s water level is a true siphon (review defect, issue 13; profile-and-checks.md §2.2)', () => {
+  // BC Factsheet 590.304-5 "Water Flow, Air Locks and Siphons" [R10]: a pipe above the hydraulic
+  // (static) line only runs as a siphon, must be primed and loses its prime as air collects.
+  const line = (flowM3s: number): LineInput => ({
+    stations: [[0, 100], [100, 103], [200, 80]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stretches: [{ fromM: 0, toM: 200, pipe: 'pe100-iso4427-sdr11-50mm' }],
+    start: { kind: 'water-level', levelM: 101 },
+    end: { kind: 'free-discharge' },
+    flow: { kind: 'design', flowM3s },
+    settings: { defaultCoverM: 0 },
+  });
+
+  it('is reported as a danger with its range and height above the source, even with no flow', () => {
+    const still = analyzeLine(line(0)).warnings;
+    const siphon = still.find((w) => w.code === 'true-siphon')!;
+    expect(siphon.severity).toBe('danger');
+    expect(siphon.values.headM).toBeCloseTo(2, 9);
+    expect(siphon.values.worstChainageM).toBe(100);
+    expect(siphon.message).toContain('must be primed');
+    // No "while flowing" suction when nothing flows.
+    expect(still.map((w) => w.code)).not.toContain('negative-pressure');
+  });
+
+  it('and while flowing too', () => {
+    expect(analyzeLine(line(0.0005)).warnings.map((w) => w.code)).toContain('true-siphon');
   });
 });

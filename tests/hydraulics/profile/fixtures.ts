@@ -26,14 +26,14 @@ export function stationsOf(points: readonly (readonly [number, number])[], cover
   );
 }
 
-/** A one-pipe line from a water level to free discharge at a design flow. */
+/** A one-pipe line from a water level to free discharge at a design flow, the pipe laid on the ground (cover 0) so heads read straight from the levels. */
 export function simpleLine(
   points: readonly (readonly [number, number])[],
   levelM: number,
   flowM3s: number,
   pipe: PipeSpec = testPipe(),
 ): LineInput {
-  const stations = stationsOf(points);
+  const stations = stationsOf(points, 0);
   return {
     stations,
     stretches: [{ fromM: stations[0].chainageM, toM: stations[stations.length - 1].chainageM, pipe }],

@@ -17,7 +17,10 @@ describe('line profile against published check values', () => {
     const profile = analyzeProfile(simpleLine(FLAT_KM, 150, 0.01));
     // [C] 14.603 m with the 10.67 form, 14.629 m with the exact k = 0.849 form: ~1 % band.
     expect(relative(profile.totals.frictionLossM, 14.6)).toBeLessThan(0.01);
-    expect(profile.points.frictionLossM[profile.points.frictionLossM.length - 1]).toBe(profile.totals.frictionLossM);
+    // Independently of the core: the exact k = 0.849 form (constant 10.6742, exponents 1.85185 / 4.87037,
+    // core.md §1.1 [C]) over the first 500 m gives the loss the profile reports at the middle station.
+    const halfLossM = (10.6742 * 500 * 0.01 ** (1 / 0.54)) / (150 ** (1 / 0.54) * 0.1 ** (2.63 / 0.54));
+    expect(relative(profile.points.frictionLossM[1], halfLossM)).toBeLessThan(1e-4);
   });
 
   it('core.md §8.2: the same line runs at 1.273 m/s, inside Jordan\'s 0.7-3.0 m/s band (no velocity warning)', () => {
@@ -39,13 +42,16 @@ describe('line profile against published check values', () => {
     expect(Math.abs(headMToPressurePa(headM, 20) / 1000 - 452.2)).toBeLessThan(0.1);
   });
 
-  it('core.md §1.6 / [R7]: atmospheric head 10.34 m at sea level, 9.17 m at 1000 m, 8.62 m at 1500 m', () => {
-    const at = (siteAltitudeM: number) =>
-      analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0), settings: { siteAltitudeM } }).limits;
-    expect(at(0).atmosphericHeadM).toBeCloseTo(10.34, 1);
-    expect(Math.abs(at(1000).atmosphericHeadM - 9.17)).toBeLessThan(0.02);
-    // [R7] siphon article prints 8.63 m at 1500 m; the ISA check in core.md §1.6 gives 8.62 m.
-    expect(Math.abs(at(1500).atmosphericHeadM - 8.62)).toBeLessThan(0.02);
+  it('core.md §1.6: atmospheric head of 20 °C water 10.351 m at sea level, 9.181 m at 1000 m, 8.638 m at 1500 m (ISA, ρ = 998.2 [C])', () => {
+    const at = (siteAltitudeM: number, waterTemperatureC?: number) =>
+      analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0), settings: { siteAltitudeM, ...(waterTemperatureC === undefined ? {} : { waterTemperatureC }) } }).limits;
+    expect(at(0).atmosphericHeadM).toBeCloseTo(10.351, 3);
+    expect(at(1000).atmosphericHeadM).toBeCloseTo(9.181, 3);
+    expect(at(1500).atmosphericHeadM).toBeCloseTo(8.638, 3);
+    // The published 10.34 / 9.17 / 8.62 m (siphon article [R7], printed 8.63 at 1500 m) are the same air
+    // pressure over colder, denser water (ρ = 999.7, 10 °C): 10.335 / 9.167 / 8.625 m [C].
+    expect(at(0, 10).atmosphericHeadM).toBeCloseTo(10.335, 2);
+    expect(at(1000, 10).atmosphericHeadM).toBeCloseTo(9.167, 2);
     // Vapour head of water at 20 C: 0.239 m (core.md §1.6 [C], Buck/Tetens form).
     expect(at(0).vapourHeadM).toBeCloseTo(0.239, 3);
   });
@@ -53,7 +59,7 @@ describe('line profile against published check values', () => {
   it('defaults the site altitude to the highest ground of the line (lowest air pressure: the cautious choice)', () => {
     const profile = analyzeProfile(simpleLine([[0, 1000], [100, 1500], [200, 1200]], 1600, 0));
     expect(profile.limits.siteAltitudeM).toBe(1500);
-    expect(Math.abs(profile.limits.atmosphericHeadM - 8.62)).toBeLessThan(0.02);
+    expect(profile.limits.atmosphericHeadM).toBeCloseTo(8.638, 3);
   });
 
   it('siphon limits [R7]: a summit at -7.6 m (course note "usually -7.6 m") passes the 7.5 m practical limit; -7.4 m does not', () => {
@@ -76,7 +82,7 @@ describe('line profile against published check values', () => {
       ...simpleLine([[0, 3000], [500, 3012], [1000, 2980]], 3005, 0),
       settings: { siteAltitudeM: 3000 },
     });
-    expect(Math.abs(profile.limits.atmosphericHeadM - 7.15)).toBeLessThan(0.02);
+    expect(profile.limits.atmosphericHeadM).toBeCloseTo(7.162, 3); // core.md §1.6 [C], 20 °C water
     expect(profile.limits.vapourLimitHeadM).toBeLessThan(7);
     const zone = profile.zones.find((z) => z.kind === 'vapour-limit');
     expect(zone).toBeDefined();

@@ -168,3 +168,20 @@ describe('zoom and thinning of a long line', () => {
     expect(zoomed.drawnIndices.length - inside.length).toBeLessThanOrEqual(2); // one neighbour each side at most
   });
 });
+
+describe('ground uncertainty band (issue 13: a walked route shows how far its ground can be trusted)', () => {
+  it('draws a band of ± the survey scatter round the ground on a scattered survey, and none on a levelled one', () => {
+    const levelled = analyzeLine(referenceLine());
+    const walked = analyzeLine({ ...referenceLine(), settings: { ...referenceLine().settings, heightScatterM: 4 } });
+    expect(findAll(drawn(levelled).svg, (e) => e.attrs['data-role'] === 'ground-band')).toHaveLength(0);
+    const { svg } = drawn(walked);
+    const band = findAll(svg, (e) => e.attrs['data-role'] === 'ground-band');
+    expect(band).toHaveLength(1);
+    expect(band[0].attrs['data-scatter-m']).toBe('4');
+    // Its top edge at the first point sits 4 m above the ground, in the chart's own mapping.
+    const s = scales(svg, 'elevation');
+    const [firstX, firstY] = pathPoints(band[0].attrs.d)[0];
+    expect(s.chainageOf(firstX)).toBeCloseTo(0, 6);
+    expect(firstY).toBeCloseTo(s.y(walked.points.groundElevationM[0] + 4), 1);
+  });
+});

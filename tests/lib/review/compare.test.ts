@@ -59,6 +59,12 @@ describe('revision compare', () => {
     expect(same.lines[0]).toMatchObject({ change: 'unchanged', pipes: [], devices: [] });
   });
 
+  it('names network parts added between revisions (a take-off junction)', () => {
+    const node = { id: '00000000-0000-4000-8000-0000000000c1', kind: 'junction', name: 'Take-off T1' };
+    const withNode = { ...after, network: { projectId: 'p', nodes: [node], links: [], demandUseTies: [] } } as unknown as DesignSnapshot;
+    expect(compareSnapshots(before, withNode).networkNodes).toEqual({ added: ['Take-off T1 (junction)'], removed: [], changed: [] });
+  });
+
   it('reports a line only in the later revision as added, and one only in the earlier as removed', () => {
     const empty: DesignSnapshot = { ...before, lines: [] };
     expect(compareSnapshots(empty, after).lines[0].change).toBe('added');

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { buildImportPreview } from '../../../lib/import/preview';
 import { initialMappingDraft, mappingToOptions, routeNameFromFile } from '../../../lib/import/mapping-draft';
+import { setProjectDecimalMark } from '../../../lib/units/decimal-mark-store';
 import { inspectSurveyText } from '../../../lib/survey/inspect';
 import { parseSurveyText } from '../../../lib/survey/run-import';
 
@@ -33,9 +34,15 @@ describe('the import screens’ logic', () => {
     expect(inspectSurveyText(fixture('walked-route.gpx')).kind).toBe('gpx');
     const draft = initialMappingDraft(level, 'book.csv');
     expect(mappingToOptions(draft, 'us')).toEqual({ errors: { startElevationM: ['Reduced level of the first station must be a number'] } });
+    // Typed with the project's decimal mark: "131,234" in a comma project, "131.234" in a point project.
+    setProjectDecimalMark(',');
     const typed = mappingToOptions({ ...draft, fieldBook: { ...draft.fieldBook, startElevation: '131,234' } }, 'us');
+    setProjectDecimalMark('.');
+    const pointTyped = mappingToOptions({ ...draft, fieldBook: { ...draft.fieldBook, startElevation: '131.234' } }, 'us');
+    setProjectDecimalMark(null);
     // 131.234 ft × 0.3048 m/ft = 40.0001232 m
     expect('options' in typed && typed.options.format === 'level-book-csv' && typed.options.startElevationM).toBeCloseTo(40.0001232, 7);
+    expect('options' in pointTyped && pointTyped.options.format === 'level-book-csv' && pointTyped.options.startElevationM).toBeCloseTo(40.0001232, 7);
   });
 
   it('a delimiter chosen on screen overrides the detected one', () => {

@@ -34,4 +34,19 @@ describe('closeKeepAliveOnStop', () => {
     await closed;
     agent.destroy();
   });
+
+  it('leaves an idle keep-alive connection open when closing: a request sent down it is answered, then it ends', async () => {
+    closeKeepAliveOnStop();
+    const server = http.createServer((_req, res) => res.end('ok'));
+    await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+    const { port } = server.address() as net.AddressInfo;
+    const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+    expect(await get(port, agent)).toBe('keep-alive');
+
+    const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+    // The balancer's side of the race: a request on the pooled connection just after close().
+    expect(await get(port, agent)).toBe('close');
+    await closed;
+    agent.destroy();
+  });
 });

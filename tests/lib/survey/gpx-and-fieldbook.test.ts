@@ -30,6 +30,27 @@ describe('parseGpx (GPX 1.1)', () => {
     expect(s.warnings.some((w) => w.code === 'waypoint-far-from-route')).toBe(false);
   });
 
+  it('gives the line of a bad point from the XML parser: a commented-out point or a <trkpt in a comment does not shift it', () => {
+    const gpx = [
+      '<?xml version="1.0"?>',
+      '<gpx version="1.1" creator="test" xmlns="http://www.topografix.com/GPX/1/1">',
+      '<!-- <trkpt lat="1" lon="1"><ele>1</ele></trkpt>',
+      '     <trkpt lat="2" lon="2"><ele>2</ele></trkpt> -->',
+      '<trk><trkseg>',
+      '<trkpt lat="45.5" lon="11.8"><ele>800</ele></trkpt>',
+      '<trkpt',
+      '   lat="95" lon="11.9"><ele>790</ele></trkpt>',
+      '</trkseg></trk></gpx>',
+    ].join('\n');
+    let caught: unknown;
+    try {
+      parseGpx(gpx);
+    } catch (error) {
+      caught = error;
+    }
+    expect(caught).toMatchObject({ code: 'latitude-out-of-range', line: 7 });
+  });
+
   it('a waypoints-only file becomes a route when the user says so', () => {
     const s = parseGpx(fixture('waypoints-only.gpx'), { useWaypointsAsRoute: true });
     expect(s.points.map((p) => p.label)).toEqual(['Intake', 'Bend', 'Trough']);

@@ -19,4 +19,21 @@ describe('sniffSurveyFile', () => {
     const { text } = sniffSurveyFile(new TextEncoder().encode('\ufefflat,lon,ele\r\n45.5,11.8,800\r\n45.6,11.9,790\r\n'));
     expect(parseGpsCsv(text).points).toHaveLength(2);
   });
+  it('reads a spreadsheet\'s "Unicode text" export (UTF-16 LE with a byte-order mark, tab separated) instead of refusing it as binary', () => {
+    const text = 'lat\tlon\tele\r\n45.5\t11.8\t800\r\n45.6\t11.9\t790\r\n';
+    const le = new Uint8Array(2 + text.length * 2);
+    le.set([0xff, 0xfe]);
+    for (let i = 0; i < text.length; i += 1) le.set([text.charCodeAt(i) & 0xff, text.charCodeAt(i) >> 8], 2 + i * 2);
+    const r = sniffSurveyFile(le);
+    expect(r).toEqual({ text, hadByteOrderMark: true });
+    expect(parseGpsCsv(r.text).points).toHaveLength(2);
+  });
+  it('reads UTF-16 big-endian too, and still refuses NUL bytes without a byte-order mark', () => {
+    const text = 'lat,lon,ele\n45.5,11.8,800\n';
+    const be = new Uint8Array(2 + text.length * 2);
+    be.set([0xfe, 0xff]);
+    for (let i = 0; i < text.length; i += 1) be.set([text.charCodeAt(i) >> 8, text.charCodeAt(i) & 0xff], 2 + i * 2);
+    expect(sniffSurveyFile(be).text).toBe(text);
+    expect(() => sniffSurveyFile(be.slice(2))).toThrow(/NUL byte/);
+  });
 });

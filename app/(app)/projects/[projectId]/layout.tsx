@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { ProjectNav } from '@/components/projects/project-nav';
+import { DecimalMarkScope } from '@/components/ui/decimal-mark';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { requireProjectPage } from '@/lib/auth/project-page';
 
@@ -13,7 +14,7 @@ export default async function ProjectLayout({ children, params }: { children: Re
         {project.archived && <span className="rounded bg-stone-100 px-2 py-0.5 text-xs text-stone-700">Archived</span>}
       </div>
       <ProjectNav projectId={project.id} role={role} />
-      {children}
+      <DecimalMarkScope mark={project.decimalMark}>{children}</DecimalMarkScope>
     </div>
   );
 }

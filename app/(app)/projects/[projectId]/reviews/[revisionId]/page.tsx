@@ -24,7 +24,7 @@ const Params = z.strictObject({ projectId: uuid('Project id'), revisionId: uuid(
 export default async function RevisionPage({ params, searchParams }: { params: Promise<{ projectId: string; revisionId: string }>; searchParams: Promise<{ line?: string }> }) {
   const parsed = Params.safeParse(await params);
   if (!parsed.success) notFound();
-  const { project, role, user } = await requireProjectPage(params);
+  const { project, role, user } = await requireProjectPage(Promise.resolve({ projectId: parsed.data.projectId }));
   const revision = await getRevision(parsed.data.revisionId, role).catch((error) => {
     if (error instanceof AppError && error.code === 'not_found') notFound();
     throw error;

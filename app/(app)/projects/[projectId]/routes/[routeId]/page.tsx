@@ -3,11 +3,14 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
+import { RoutePhotos } from '@/components/photos/route-photos';
 import { RouteEditor } from '@/components/routes/route/route-editor';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { getProject } from '@/lib/data/projects';
+import { listPhotos } from '@/lib/data/photos';
 import { getRouteDetail } from '@/lib/data/routes';
 import { can } from '@/lib/permissions';
+import { photoKeys } from '@/lib/queries/photos';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { routeKeys } from '@/lib/queries/routes';
 import { uuid } from '@/lib/validations/common';
@@ -26,12 +29,14 @@ export default async function RoutePage({ params }: { params: Promise<{ projectI
   if (!project || !detail || detail.route.projectId !== project.id) notFound();
   const queryClient = getQueryClient();
   queryClient.setQueryData(routeKeys.one(detail.route.id), detail);
+  await queryClient.prefetchQuery({ queryKey: photoKeys.project(project.id), queryFn: () => listPhotos(project.id) });
 
   return (
     <div className="space-y-4">
       <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <RouteEditor routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+        <RoutePhotos projectId={project.id} routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
       </HydrationBoundary>
     </div>
   );

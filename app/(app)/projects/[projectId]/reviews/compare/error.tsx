@@ -1,0 +1,7 @@
+'use client';
+
+import { SegmentError } from '@/components/ui/segment-error';
+
+export default function RevisionCompareError({ reset }: { error: Error; reset: () => void }) {
+  return <SegmentError what="The revision comparison" reset={reset} />;
+}

@@ -1,0 +1,12 @@
+import 'server-only';
+import type { TaskList } from 'graphile-worker';
+import { deliverOutboxMessage } from '../mail/deliver';
+import type { JobPayloads } from './enqueue';
+
+/** What the worker runs for each job name. */
+export const JOB_TASKS: TaskList = {
+  'send-mail': async (payload) => {
+    const { outboxId } = payload as JobPayloads['send-mail'];
+    await deliverOutboxMessage(outboxId);
+  },
+};

@@ -1,0 +1,51 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import type { PhotoSummary } from '../data/photos';
+import { fetchJson } from './fetch-json';
+
+export const photoKeys = { project: (projectId: string) => ['projects', projectId, 'photos'] as const };
+
+export const projectPhotosQuery = (projectId: string) =>
+  queryOptions({
+    queryKey: photoKeys.project(projectId),
+    queryFn: async () => (await fetchJson<{ photos: PhotoSummary[] }>(`/api/projects/${projectId}/photos`)).photos,
+  });
+
+export const photoImageUrl = (photoId: string, size: 'full' | 'thumbnail' = 'full') => `/api/photos/${photoId}/image${size === 'thumbnail' ? '?size=thumbnail' : ''}`;
+
+export interface PhotoUploadInput {
+  file: File;
+  routeId?: string;
+  /** Metres; used for a photo that carries no position. */
+  chainageM?: number;
+}
+
+export function useUploadPhoto(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ file, routeId, chainageM }: PhotoUploadInput) => {
+      const form = new FormData();
+      form.append('file', file, file.name);
+      if (routeId) form.append('routeId', routeId);
+      if (chainageM !== undefined) form.append('chainageM', String(chainageM));
+      return (await fetchJson<{ photo: PhotoSummary }>(`/api/projects/${projectId}/photos`, { method: 'POST', form })).photo;
+    },
+    onSuccess: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
+  });
+}
+
+export function useUpdatePhoto(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ photoId, ...changes }: { photoId: string; caption?: string; inReport?: boolean; routeId?: string; chainageM?: number }) =>
+      fetchJson<{ photo: PhotoSummary }>(`/api/photos/${photoId}`, { method: 'PATCH', body: changes }),
+    onSettled: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
+  });
+}
+
+export function useDeletePhoto(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (photoId: string) => fetchJson<void>(`/api/photos/${photoId}`, { method: 'DELETE' }),
+    onSettled: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
+  });
+}
