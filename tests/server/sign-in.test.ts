@@ -10,7 +10,7 @@ let passwordHash = '';
 
 async function account(): Promise<string> {
   const email = `live-${unique()}@fixture.test`;
-  await models().User.create({ email, name: 'Live fixture', passwordHash });
+  await models().User.create({ email, name: 'Live fixture', passwordHash, emailVerifiedAt: new Date() });
   return email;
 }
 
