@@ -1,24 +1,23 @@
 'use client';
 
-import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { profileScene } from '@/lib/chart/profile-scene';
 import { standaloneSvg } from '@/lib/chart/svg-node';
-import type { ChainageView } from '@/lib/chart/profile-view';
+import { viewAround, type ChainageView } from '@/lib/chart/profile-view';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
-import { WARNING_TITLES } from '@/lib/lines/warning-words';
-import { projectCommentsQuery } from '@/lib/queries/reviews';
+import { lineAnchorChoices } from '@/lib/review/anchor-choices';
 import type { CommentRecord } from '@/lib/review/comment-types';
 import type { RevisionRecord } from '@/lib/review/revision-types';
-import { analyseSnapshotLine } from '@/lib/review/snapshot-analysis';
+import { analyseSnapshotLine, snapshotPartNames } from '@/lib/review/snapshot-analysis';
 import type { ReviewStamp } from '@/lib/review/stamp';
-import { pinChainage, pinsOf, threadsOf } from '@/lib/review/threads';
+import { pinChainage, pinsOf } from '@/lib/review/threads';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Button } from '@/components/ui/button';
 import { Panel } from '@/components/ui/panel';
 import { ProfileChart } from '@/components/lines/profile-chart';
-import { CommentsPanel, type AnchorChoice } from './comments-panel';
+import { CommentsPanel } from './comments-panel';
+import { useCommentThreads } from './use-comment-threads';
 
 export interface RevisionWorkspaceProps {
   revision: RevisionRecord;
@@ -34,34 +33,22 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
   const units = useMemo(() => displayUnits(system), [system]);
   const line = revision.snapshot.lines.find((l) => l.id === lineId) ?? null;
   const analysis = useMemo(() => (line ? analyseSnapshotLine(line) : null), [line]);
-  const { data: comments = [] } = useQuery(projectCommentsQuery(revision.projectId));
   const [view, setView] = useState<ChainageView | null>(null);
   const [hoverM, setHoverM] = useState<number | null>(null);
   const [pickedM, setPickedM] = useState<number | null>(null);
-  const [selectedId, setSelectedId] = useState<string | null>(null);
-  const threads = useMemo(() => threadsOf(comments, revision.id, lineId), [comments, revision.id, lineId]);
-  const pins = useMemo(() => pinsOf(threads, lineId, selectedId), [threads, lineId, selectedId]);
-  const lineNames = useMemo(() => new Map(revision.snapshot.lines.map((l) => [l.id, l.name])), [revision.snapshot.lines]);
+  const { threads, selectedId, setSelectedId } = useCommentThreads(revision.projectId, revision.id, lineId ? [{ kind: 'line', lineId }] : [], true);
+  const pins = useMemo(() => pinsOf(threads, (c) => pinChainage(c, lineId), selectedId), [threads, lineId, selectedId]);
+  const partNames = useMemo(() => snapshotPartNames(revision.snapshot), [revision.snapshot]);
   const c = analysis?.points.chainageM;
   const fullView = c ? { fromM: c[0], toM: c[c.length - 1] } : null;
 
-  const anchors: AnchorChoice[] = [
-    ...(line && pickedM !== null ? [{ key: 'picked', label: `${line.name}, ch. ${formatQuantity('chainage', pickedM, system)} (picked on the profile)`, anchor: { kind: 'line-chainage' as const, lineId: line.id, chainageM: Math.round(pickedM * 100) / 100 } }] : []),
-    { key: 'project', label: 'Whole project', anchor: { kind: 'project' } },
-    ...(line && analysis ? analysis.warnings.map((w, i) => {
-      const at = 'chainageM' in w.at ? w.at.chainageM : w.at.fromM;
-      return { key: `warning-${i}`, label: `${WARNING_TITLES[w.code]}, ch. ${formatQuantity('chainage', at, system)}`, anchor: { kind: 'warning' as const, lineId: line.id, code: w.code, chainageM: at } };
-    }) : []),
-  ];
+  const anchors = lineAnchorChoices(line, pickedM, analysis?.warnings ?? [], system);
 
   function jump(comment: CommentRecord) {
     setSelectedId(comment.id);
     const at = pinChainage(comment, lineId);
     if (at === null || !fullView) return;
-    const current = view ?? fullView;
-    const half = (current.toM - current.fromM) / 2;
-    const from = Math.max(fullView.fromM, Math.min(at - half, fullView.toM - 2 * half));
-    setView({ fromM: from, toM: from + 2 * half });
+    setView(viewAround(at, at, fullView.fromM, fullView.toM));
   }
 
   function exportSvg() {
@@ -113,7 +100,7 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
           canComment={canComment}
           members={members}
           anchors={anchors}
-          lineNames={lineNames}
+          partNames={partNames}
           unitSystem={system}
           selectedId={selectedId}
           onJump={jump}
