@@ -1,6 +1,6 @@
 'use client';
 
-import { useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
@@ -61,7 +61,13 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
-  const [view, setView] = useState<ChainageView>({ fromM: firstM, toM: lastM });
+  const comments = useCommentThreads(line.projectId, null, [{ kind: 'line', lineId: line.id }, { kind: 'project' }]);
+  // A thread picked by the address opens with the profile round its pin.
+  const [view, setView] = useState<ChainageView>(() => {
+    const at = comments.threads.find((t) => t.thread.id === comments.selectedId)?.thread;
+    const pinnedAt = at ? pinChainage(at, line.id) : null;
+    return pinnedAt === null ? { fromM: firstM, toM: lastM } : viewAround(pinnedAt, pinnedAt, firstM, lastM);
+  });
   const [exaggeration, setExaggeration] = useState<number | 'auto'>('auto');
   const [hoverM, setHoverM] = useState<number | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
@@ -69,8 +75,11 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const [placeKind, setPlaceKind] = useState<LineDeviceKind>('air-release-valve');
   const [note, setNote] = useState<string | null>(null);
   const profileRef = useRef<HTMLDivElement>(null);
+  const openedWithComment = useRef(comments.selectedId !== null);
+  useEffect(() => {
+    if (openedWithComment.current) profileRef.current?.scrollIntoView({ block: 'start' });
+  }, []);
   const [pickedM, setPickedM] = useState<number | null>(null);
-  const comments = useCommentThreads(line.projectId, null, [{ kind: 'line', lineId: line.id }]);
   const pins = useMemo(() => pinsOf(comments.threads, (c) => pinChainage(c, line.id), comments.selectedId), [comments.threads, comments.selectedId, line.id]);
   const partNames = useMemo(() => new Map([[line.id, line.name]]), [line.id, line.name]);
 
@@ -198,7 +207,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </section>
       )}
 
-      <Panel title={`Comments on this line (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
+      <Panel title={`Comments on this line and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
         <span id="line-comments" className="block scroll-mt-4" />
         {comments.isError ? (
           <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void comments.refetch()}>Try again</button></p>

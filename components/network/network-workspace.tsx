@@ -33,10 +33,14 @@ export interface NetworkWorkspaceProps {
 /** The network page: runs, the schematic with comment pins, the parts' tables, adding and joining parts, demand per outlet, comments. */
 export function NetworkWorkspace({ projectId, units, canEdit, canComment, members }: NetworkWorkspaceProps) {
   const { data: view, error, refetch } = useQuery(networkQuery(projectId));
-  const [selectedId, setSelectedId] = useState<string | null>(null);
+  const comments = useCommentThreads(projectId, null, [{ kind: 'network' }, { kind: 'project' }]);
+  // A thread picked by the address opens with its part picked.
+  const [selectedId, setSelectedId] = useState<string | null>(() => {
+    const opened = comments.threads.find((t) => t.thread.id === comments.selectedId);
+    return opened ? (networkPart(opened.thread)?.partId ?? null) : null;
+  });
   const [showing, setShowing] = useState<'solve' | 'size'>('solve');
   const layout = useMemo(() => (view ? layoutNetwork(view) : null), [view]);
-  const comments = useCommentThreads(projectId, null, [{ kind: 'network' }]);
   const schematicRef = useRef<HTMLDivElement>(null);
   const partNames = useMemo(() => new Map([...(view?.records.nodes ?? []), ...(view?.records.links ?? [])].map((p) => [p.id, p.name])), [view]);
   if (error) return <LoadError what="The network" onRetry={() => void refetch()} />;
@@ -112,7 +116,7 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
       <Panel title="Demand per outlet">
         <DemandEditor projectId={projectId} view={view} units={units} canEdit={canEdit} />
       </Panel>
-      <Panel title={`Comments on the network (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
+      <Panel title={`Comments on the network and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
         <span id="network-comments" className="block scroll-mt-4" />
         <CommentsPanel
           projectId={projectId}

@@ -83,7 +83,7 @@ export function CommentsPanel({ projectId, revisionId, threads, canComment, memb
       {threads.length === 0 && <p className="text-sm text-creek-700">No comments here yet.</p>}
       <ol className="space-y-3">
         {threads.map(({ thread, replies, pin }) => (
-          <li key={thread.id} data-testid="comment-thread" data-resolved={thread.resolved ? 'yes' : 'no'} className={`rounded-md border p-3 text-sm ${thread.id === selectedId ? 'border-creek-700 ring-1 ring-creek-700' : 'border-creek-100'} ${thread.resolved ? 'bg-stone-50' : 'bg-white'}`}>
+          <li key={thread.id} data-testid="comment-thread" data-comment-id={thread.id} data-resolved={thread.resolved ? 'yes' : 'no'} className={`rounded-md border p-3 text-sm ${thread.id === selectedId ? 'border-creek-700 ring-1 ring-creek-700' : 'border-creek-100'} ${thread.resolved ? 'bg-stone-50' : 'bg-white'}`}>
             <div className="flex flex-wrap items-center justify-between gap-2">
               <button type="button" onClick={() => onJump(thread)} className="text-left font-medium text-creek-700 underline-offset-2 hover:underline">
                 {pin && <span className="mr-1 inline-block rounded-full bg-clay-600 px-1.5 text-xs text-white">{pin}</span>}

@@ -1,4 +1,5 @@
 import type { NetworkContext } from '../network/context';
+import { lineSummaryOf, type NetworkLineSummary, type NetworkView } from '../network/view';
 import type { DesignSnapshot } from './snapshot-types';
 
 /**
@@ -19,5 +20,26 @@ export function networkContextOfSnapshot(snapshot: DesignSnapshot): NetworkConte
     tanks: snapshot.lift.tanks,
     demandUses: snapshot.lift.demandUses,
     ...networkBasis,
+  };
+}
+
+/**
+ * What the schematic draws for a revision: its frozen network records and its lines' courses, with
+ * no runs (a revision's solve is the frozen one). Null when the revision has no network.
+ */
+export function snapshotNetworkView(snapshot: DesignSnapshot): NetworkView | null {
+  const network = snapshot.network;
+  if (!network || network.nodes.length === 0) return null;
+  const linked = new Set(network.links.flatMap((link) => (link.lineId ? [link.lineId] : [])));
+  return {
+    projectId: network.projectId,
+    unitSystem: snapshot.project.unitSystem,
+    records: network,
+    lines: snapshot.lines.filter((line) => linked.has(line.id)).map((line) => lineSummaryOf(line, line.stations)).filter((line): line is NetworkLineSummary => line !== null),
+    tanks: snapshot.lift.tanks.map(({ id, name }) => ({ id, name })),
+    ramSites: snapshot.lift.ramSites.map(({ id, name }) => ({ id, name })),
+    waterSources: snapshot.lift.sources.map(({ id, name }) => ({ id, name })),
+    demandUses: [],
+    runs: { solve: null, day: null, size: null },
   };
 }

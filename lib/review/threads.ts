@@ -9,8 +9,11 @@ export interface CommentThread {
   pin: string | null;
 }
 
-/** Where a screen draws pins: on one line's profile, one route's profile, or the network schematic. */
-export type ThreadScope = { kind: 'line'; lineId: string } | { kind: 'route'; routeId: string } | { kind: 'network' };
+/**
+ * What a screen lists: threads pinned on one line's profile, one route's profile or the network
+ * schematic (these get numbered pins), and threads on the whole project (listed, never pinned).
+ */
+export type ThreadScope = { kind: 'line'; lineId: string } | { kind: 'route'; routeId: string } | { kind: 'network' } | { kind: 'project' };
 
 /** Chainage a comment is pinned at on `lineId`, or null. */
 export function pinChainage(comment: Pick<CommentRecord, 'anchor'>, lineId: string | null): number | null {
@@ -38,24 +41,28 @@ function pinned(anchor: CommentAnchor, scope: ThreadScope): boolean {
       return anchor.kind === 'route-chainage' && anchor.routeId === scope.routeId;
     case 'network':
       return anchor.kind === 'network';
+    case 'project':
+      return anchor.kind === 'project';
   }
 }
 
 /**
  * The comments of one revision (null: the working copy) grouped into threads, pins numbered in the
  * order the threads were made. A thread pinned in one of `scopes` (a line, a route, the network)
- * gets a number; `listAll` keeps the other threads too (project-wide ones, other lines), unnumbered.
+ * gets a number, one on the whole project is listed unnumbered when the project scope is asked for;
+ * `listAll` keeps every other thread too (other lines, routes), unnumbered.
  */
 export function threadsOf(comments: readonly CommentRecord[], revisionId: string | null, scopes: readonly ThreadScope[], listAll = false): CommentThread[] {
   const mine = comments.filter((c) => c.revisionId === revisionId);
-  const inScope = (c: CommentRecord) => scopes.some((scope) => pinned(c.anchor, scope));
+  const listed = (c: CommentRecord) => scopes.some((scope) => pinned(c.anchor, scope));
+  const hasPin = (c: CommentRecord) => scopes.some((scope) => scope.kind !== 'project' && pinned(c.anchor, scope));
   let n = 0;
   return mine
-    .filter((c) => !c.parentId && (listAll || inScope(c)))
+    .filter((c) => !c.parentId && (listAll || listed(c)))
     .map((thread) => ({
       thread,
       replies: mine.filter((c) => c.parentId === thread.id),
-      pin: inScope(thread) ? String(++n) : null,
+      pin: hasPin(thread) ? String(++n) : null,
     }));
 }
 

@@ -31,7 +31,7 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
   // Kept here so the table stays on its page when a decision brings a new version of the route.
   const [page, setPage] = useState(0);
   const [pickedM, setPickedM] = useState<number | null>(null);
-  const comments = useCommentThreads(projectId, null, [{ kind: 'route', routeId }]);
+  const comments = useCommentThreads(projectId, null, [{ kind: 'route', routeId }, { kind: 'project' }]);
   const pins = useMemo(() => pinsOf(comments.threads, (c) => routePinChainage(c, routeId), comments.selectedId), [comments.threads, comments.selectedId, routeId]);
   const topRef = useRef<HTMLDivElement>(null);
   if (isError) {
@@ -63,7 +63,7 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
         pins={pins}
         onPick={canComment ? setPickedM : undefined}
       />
-      <Panel title={`Comments on this route (${comments.threads.length})`}>
+      <Panel title={`Comments on this route and the project (${comments.threads.length})`}>
         <span id="route-comments" className="block scroll-mt-4" />
         {canComment && (
           <p className="mb-2 text-xs text-creek-700" role="status" data-testid="picked-chainage">

@@ -47,6 +47,9 @@ describe('comment threads by where they are pinned', () => {
       { id: onLine.id, chainageM: 420, label: '1', resolved: false, selected: false },
       { id: onWarning.id, chainageM: 650, label: '2', resolved: true, selected: true },
     ]);
+    // With the project asked for too, project-wide threads are listed, without a pin number.
+    const withProject = threadsOf(all, null, [{ kind: 'line', lineId: LINE }, { kind: 'project' }]);
+    expect(withProject.map((t) => [t.thread.id, t.pin])).toEqual([[onLine.id, '1'], [onWarning.id, '2'], [onProject.id, null]]);
   });
 
   it('a revision page lists every thread of that revision but numbers only those pinned on the line shown', () => {
