@@ -48,7 +48,7 @@ test('a reviewer pins a comment on the working copy\'s long profile; the designe
   const pinnedAt = Number(await pin.getAttribute('data-chainage-m'));
   expect(pinnedAt).toBeGreaterThan(200);
   expect(pinnedAt).toBeLessThan(1000);
-  await reviewer.page.screenshot({ path: 'test-results/working-copy-reviewer-pin.png', fullPage: true });
+  await reviewer.page.locator('section[aria-labelledby="profile-heading"]').filter({ visible: true }).screenshot({ path: 'test-results/working-copy-reviewer-pin.png' });
 
   // The designer sees the same pin, jumps to it from the list, answers and resolves the thread.
   const designer = await as(browser, 'designer@example.test');
@@ -71,7 +71,8 @@ test('a reviewer pins a comment on the working copy\'s long profile; the designe
   await expect(designerThread).toHaveAttribute('data-resolved', 'yes');
   await expect(designerThread).toContainText('Resolved by Tobias Wren');
   await expect(designerPin).toHaveAttribute('data-resolved', 'yes');
-  await designer.page.screenshot({ path: 'test-results/working-copy-designer-resolved.png', fullPage: true });
+  await designer.page.locator('section[aria-labelledby="profile-heading"]').filter({ visible: true }).screenshot({ path: 'test-results/working-copy-designer-profile.png' });
+  await designerThread.screenshot({ path: 'test-results/working-copy-designer-resolved.png' });
 
   // The reviewer reopens it; the activity feed has the comment with its mention.
   await reviewer.page.reload();
@@ -84,9 +85,10 @@ test('a reviewer pins a comment on the working copy\'s long profile; the designe
 
   // The client cannot open the working copy at all.
   const viewer = await as(browser, 'viewer@example.test');
-  const response = await viewer.page.goto(LINE_PAGE);
-  expect(response!.status()).toBeGreaterThanOrEqual(400);
+  await viewer.page.goto(LINE_PAGE);
+  await expect(viewer.page.getByRole('heading', { name: 'No such line' }).filter({ visible: true })).toBeVisible();
   await expect(viewer.page.getByTestId('profile-chart')).toHaveCount(0);
+  await expect(viewer.page.getByTestId('comments-panel')).toHaveCount(0);
   expect((await viewer.page.request.get(`/api/projects/${PROJECT}/comments`)).status()).toBe(200);
   const seen = (await (await viewer.page.request.get(`/api/projects/${PROJECT}/comments`)).json()).comments as { id: string }[];
   expect(seen.map((c) => c.id)).not.toContain(commentId);
@@ -101,7 +103,8 @@ test('a reviewer pins a comment on a part of the network schematic; a surveyor p
   const reviewer = await as(browser, 'reviewer@example.test');
   await reviewer.page.goto(NETWORK_PAGE);
   const node = reviewer.page.locator('[data-scene="network"] [data-node-id][data-kind="outlet"]').filter({ visible: true }).first();
-  await node.click();
+  // Two outlets can sit on one spot (both lines end at the house): click the one picked, whatever is drawn over it.
+  await node.dispatchEvent('click');
   await expect(reviewer.page.getByTestId('picked-part').filter({ visible: true })).toContainText('Picked');
   const nodeId = (await node.getAttribute('data-node-id'))!;
   const thread = await postComment(reviewer.page, `Is the house outlet pressure enough? (${run})`);
@@ -110,11 +113,12 @@ test('a reviewer pins a comment on a part of the network schematic; a surveyor p
   const pin = reviewer.page.locator(`[data-scene="network"] [data-layer="comment-pins"] [data-comment-id="${commentId}"]`).filter({ visible: true });
   await expect(pin).toHaveAttribute('data-part-id', nodeId);
   // The list jumps to the part: the node is picked (ringed) again after picking something else.
-  await reviewer.page.locator('[data-scene="network"] [data-link-id]').filter({ visible: true }).first().click({ force: true });
+  await reviewer.page.locator('[data-scene="network"] [data-link-id]').filter({ visible: true }).first().dispatchEvent('click');
   await thread.getByRole('button', { name: /network node/ }).click();
   await expect(reviewer.page.getByTestId('picked-part').filter({ visible: true })).toContainText('Picked');
   await expect(node.locator('circle[stroke="#c98d12"]')).toHaveCount(1);
-  await reviewer.page.screenshot({ path: 'test-results/working-copy-network-pin.png', fullPage: true });
+  await reviewer.page.locator('[data-scene="network"]').filter({ visible: true }).screenshot({ path: 'test-results/working-copy-network-pin.png' });
+  await reviewer.page.screenshot({ path: 'test-results/working-copy-network-page.png', fullPage: true });
 
   const surveyor = await as(browser, 'surveyor@example.test');
   await surveyor.page.goto(ROUTE_PAGE);
@@ -125,7 +129,7 @@ test('a reviewer pins a comment on a part of the network schematic; a surveyor p
   const routeThread = await postComment(surveyor.page, `Peg 14 was moved by the tractor (${run})`);
   const routeCommentId = (await routeThread.getAttribute('data-comment-id'))!;
   await expect(surveyor.page.locator(`[data-testid="route-profile"] [data-comment-id="${routeCommentId}"]`)).toHaveCount(1);
-  await surveyor.page.screenshot({ path: 'test-results/working-copy-route-pin.png', fullPage: true });
+  await surveyor.page.getByTestId('route-profile').filter({ visible: true }).screenshot({ path: 'test-results/working-copy-route-pin.png' });
   // On a line a surveyor reads the comments but has no form to add one.
   await surveyor.page.goto(LINE_PAGE);
   await expect(surveyor.page.getByRole('heading', { name: /Comments on this line/ }).filter({ visible: true })).toBeVisible();

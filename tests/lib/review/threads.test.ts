@@ -5,6 +5,7 @@ import { layoutNetwork } from '../../../lib/network/layout';
 import type { NetworkView } from '../../../lib/network/view';
 import type { CommentAnchor } from '../../../lib/review/anchors';
 import type { CommentRecord } from '../../../lib/review/comment-types';
+import { commentPlaceHref } from '../../../lib/review/comment-place';
 import { networkPinsOf, pinChainage, pinsOf, routePinChainage, threadsOf } from '../../../lib/review/threads';
 import { NetworkLinkSchema, NetworkNodeSchema } from '../../../lib/validations/network';
 import { outletNodeBody, pipeLinkBody, sourceNodeBody } from '../../support/network-fixtures';
@@ -101,5 +102,15 @@ describe('comment pins on the network schematic', () => {
     expect(tipX(marks[1])).toBeLessThan(outletX - 100);
     const bare = svgToString(buildNetworkScene({ view, layout, solve: null, units: 'metric', width: 960, height: 540 }));
     expect(bare).not.toContain('comment-pins');
+  });
+});
+
+describe('where the list of all comments sends you', () => {
+  it('links a thread to the page its pin is on, with the thread picked; none for the whole project or a gone anchor', () => {
+    expect(commentPlaceHref('p', onWarning)).toBe(`/projects/p/lines/${LINE}?comment=${onWarning.id}`);
+    expect(commentPlaceHref('p', onRoute)).toBe(`/projects/p/routes/${ROUTE}?comment=${onRoute.id}`);
+    expect(commentPlaceHref('p', onPipe)).toBe(`/projects/p/network?comment=${onPipe.id}`);
+    expect(commentPlaceHref('p', onProject)).toBeNull();
+    expect(commentPlaceHref('p', { ...onLine, anchorNow: { state: 'gone', words: 'the line is no longer in the working copy' } })).toBeNull();
   });
 });
