@@ -1,5 +1,6 @@
 import 'server-only';
 import { models } from '../../models';
+import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
 import type { UpdateProjectInput } from '../validations/projects';
@@ -73,6 +74,14 @@ export async function updateProject(projectId: string, input: UpdateProjectInput
   });
 }
 
+/**
+ * Deletes the project and everything in it. Its stored files go by a job queued in the same
+ * transaction: the job exists exactly when the delete committed, and retries until the files are gone.
+ */
 export async function deleteProject(projectId: string): Promise<void> {
-  await models().Project.destroy({ where: { id: projectId } });
+  const { Project, sequelize } = models();
+  await sequelize.transaction(async (transaction) => {
+    await Project.destroy({ where: { id: projectId }, transaction });
+    await enqueueJob(transaction, 'delete-project-files', { projectId });
+  });
 }
