@@ -104,14 +104,14 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
     }
   }
 
-  async function onSave() {
+  async function onSave(smooth: boolean) {
     if (!file || !options) return;
     setProblem(null);
     const label = 'Uploading';
     setProgress({ label, detail: 'Uploading and saving', fraction: 0 });
     try {
       const result = await upload.mutateAsync({ file, options, onProgress: (fraction) => setProgress({ label, detail: 'Uploading and saving', fraction }) });
-      router.push(`/projects/${projectId}/routes/${result.route.id}`);
+      router.push(`/projects/${projectId}/routes/${result.route.id}${smooth ? '?propose=smoothing' : ''}`);
     } catch (error) {
       setProgress(null);
       report(error);
