@@ -122,7 +122,9 @@ const WORDING: Record<WarningCode, Wording> = {
   'residual-below-target': (v, f) => [
     `At the design flow of ${f.flow(v.flowM3s)} the outlet has ${f.head(v.headM)} of pressure, below the ${f.head(v.limitHeadM)} it needs: friction and fittings use up too much of the available head.`,
     v.toPipeLabel
-      ? `Change stretch ${(v.stretchIndex ?? 0) + 1} (${f.range(v.fromM, v.toM)}) from ${v.pipeLabel} to ${v.toPipeLabel}: the outlet then has ${f.head(v.fixedHeadM)}.`
+      ? `Change stretch ${(v.stretchIndex ?? 0) + 1} (${f.range(v.fromM, v.toM)}) from ${v.pipeLabel} to ${v.toPipeLabel}: the outlet then has ${f.head(v.fixedHeadM)}${
+        (v.alsoClears ?? []).length > 0 ? `, and the ${(v.alsoClears ?? []).map((c) => WARNING_TITLES[c].toLowerCase()).join(', ')} this flow causes clear with it` : ''
+      }.`
       : `No single pipe change is enough: use larger pipe over several stretches, lower the design flow (the line carries ${f.flow(v.capacityM3s)} by gravity to this outlet), or set the outlet lower.`,
   ],
   'no-gravity-flow': (v, f) => [
