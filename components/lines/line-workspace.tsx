@@ -149,7 +149,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
           <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
-          <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
               devices={design.devices}
