@@ -48,7 +48,8 @@ test('import asks the date order and the time zone, and offers smoothing for a G
 
   const preview = page.getByRole('region', { name: 'Preview' });
   const offer = preview.getByTestId('offer-smoothing');
-  await expect(offer.getByRole('checkbox')).toBeChecked();
+  await expect(offer.getByRole('checkbox')).not.toBeChecked();
+  await offer.getByRole('checkbox').check();
   await page.screenshot({ path: test.info().outputPath('import-offer-smoothing.png'), fullPage: true });
   await preview.getByRole('button', { name: 'Save route' }).click();
 

@@ -11,8 +11,8 @@ test('the flow card never shows a flow the line cannot carry, and names the fric
   const { line } = await (await page.request.get(`/api/lines/${DEMO_LINE}`)).json();
   const original = line.design;
   try {
-    // Ask for half as much again as this gravity line carries (about 2 L/s).
-    const patch = await page.request.patch(`/api/lines/${DEMO_LINE}`, { data: { design: { ...original, devices: [], flow: { kind: 'design', flowM3s: 0.003 } } } });
+    // Ask for a fifth more than this gravity line carries (about 2 L/s).
+    const patch = await page.request.patch(`/api/lines/${DEMO_LINE}`, { data: { design: { ...original, devices: [], flow: { kind: 'design', flowM3s: 0.0024 } } } });
     expect(patch.ok()).toBe(true);
     await page.goto(LINE_URL);
     const answers = page.getByTestId('line-answers').filter({ visible: true });

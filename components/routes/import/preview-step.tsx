@@ -18,8 +18,8 @@ export interface PreviewStepProps {
 
 /** What will be saved: the numbers, the profile, every warning, before anything is stored. */
 export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewStepProps) {
-  // A consumer-GPS walk is offered smoothing; a levelled route is not.
-  const [smooth, setSmooth] = useState(preview.gpsWarning !== null);
+  // A consumer-GPS walk is offered smoothing (the user ticks it); a levelled route is not offered it.
+  const [smooth, setSmooth] = useState(false);
   const s = preview.stats;
   const spikes = preview.proposals.length;
   // The consumer-GPS note is the banner above; the list holds the rest.
