@@ -105,11 +105,11 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
           );
         })}
         {!sketch && onPick && (
-          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onPickClick} aria-label="Ground profile: click to pin a comment at that chainage" data-testid="route-profile-capture" />
+          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onPickClick} data-testid="route-profile-capture" />
         )}
         {pinMarks.length > 0 && <g data-layer="comment-pins" pointerEvents="none"><SvgNodes nodes={pinMarks} /></g>}
         {sketch && (
-          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} aria-label="Sketch area: click to add a station" data-testid="sketch-area" />
+          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} data-testid="sketch-area" />
         )}
       </svg>
       <figcaption className="flex flex-wrap gap-4 text-xs text-creek-700">

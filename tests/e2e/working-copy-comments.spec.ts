@@ -129,6 +129,11 @@ test('a reviewer pins a comment on a part of the network schematic; a surveyor p
   const routeThread = await postComment(surveyor.page, `Peg 14 was moved by the tractor (${run})`);
   const routeCommentId = (await routeThread.getAttribute('data-comment-id'))!;
   await expect(surveyor.page.locator(`[data-testid="route-profile"] [data-comment-id="${routeCommentId}"]`)).toHaveCount(1);
+  // Without a pointer: a typed chainage picks the place as well.
+  const typed = surveyor.page.getByLabel('Pin at chainage').filter({ visible: true });
+  await typed.fill('120');
+  await typed.press('Enter');
+  await expect(surveyor.page.getByTestId('picked-chainage').filter({ visible: true })).toContainText('Picked ch. 120');
   await surveyor.page.getByTestId('route-profile').filter({ visible: true }).screenshot({ path: 'test-results/working-copy-route-pin.png' });
   // On a line a surveyor reads the comments but has no form to add one.
   await surveyor.page.goto(LINE_PAGE);

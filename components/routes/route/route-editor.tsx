@@ -9,7 +9,8 @@ import { routeDetailQuery } from '@/lib/queries/routes';
 import { routeAnchorChoices } from '@/lib/review/anchor-choices';
 import type { CommentRecord } from '@/lib/review/comment-types';
 import { pinsOf, routePinChainage } from '@/lib/review/threads';
-import { formatQuantity, type UnitSystem } from '@/lib/units';
+import { formatQuantity, fromDisplay, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
+import { UnitNumberInput } from '@/components/lines/unit-number-input';
 import { RouteWorkspace } from './route-workspace';
 
 export interface RouteEditorProps {
@@ -66,9 +67,30 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
       <Panel title={`Comments on this route and the project (${comments.threads.length})`}>
         <span id="route-comments" className="block scroll-mt-4" />
         {canComment && (
-          <p className="mb-2 text-xs text-creek-700" role="status" data-testid="picked-chainage">
-            {pickedM === null ? 'Click the ground profile to pin a comment at a chainage of the route.' : `Picked ch. ${formatQuantity('chainage', pickedM, units)}.`}
-          </p>
+          <div className="mb-2 flex flex-wrap items-end gap-3">
+            <p className="text-xs text-creek-700" role="status" data-testid="picked-chainage">
+              {pickedM === null ? 'Click the ground profile, or type a chainage, to pin a comment on the route.' : `Picked ch. ${formatQuantity('chainage', pickedM, units)}.`}
+            </p>
+            <UnitNumberInput
+              id="route-comment-chainage"
+              label="Pin at chainage"
+              compact
+              optional
+              unit={unitOf('length', units)}
+              value={pickedM === null ? undefined : toDisplay('length', pickedM, units)}
+              onCommit={(v) => {
+                if (v === undefined) {
+                  setPickedM(null);
+                  return null;
+                }
+                const metres = fromDisplay('length', v, units);
+                const lengthM = data.route.lengthM ?? Infinity;
+                if (metres < 0 || metres > lengthM + 1e-6) return `The route runs from 0 to ${formatQuantity('chainage', lengthM, units)}`;
+                setPickedM(metres);
+                return null;
+              }}
+            />
+          </div>
         )}
         <CommentsPanel
           projectId={projectId}
