@@ -2,10 +2,10 @@
 
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { HourChart } from '@/components/ui/hour-chart';
 import type { TankView } from '@/lib/lift/summary';
 import { useDeleteTank } from '@/lib/queries/lift';
 import { formatDuration, formatNumber, formatQuantity, type UnitSystem } from '@/lib/units';
-import { VolumeChart } from './mass-curve-chart';
 import { PlanChecks } from './plan-checks';
 import { Readout } from './readout';
 import { TankForm } from './tank-form';
@@ -67,18 +67,18 @@ function TankCard({ projectId, view, sources, units, canEdit }: { projectId: str
           <TankElevation view={view} units={units} />
           <PlanChecks units={units} checks={sizing.value.checks} />
           <div className="grid gap-3 lg:grid-cols-2">
-            <VolumeChart
+            <HourChart
               title="Mass curve of a day"
               units={units}
               hours={24}
-              lines={[{ key: 'Supply, cumulative', valuesM3: sizing.value.cumulativeSupplyM3 }, { key: 'Demand, cumulative', valuesM3: sizing.value.cumulativeDemandM3 }]}
+              lines={[{ key: 'Supply, cumulative', values: sizing.value.cumulativeSupplyM3 }, { key: 'Demand, cumulative', values: sizing.value.cumulativeDemandM3 }]}
               summary={`Over a day the supply adds ${formatQuantity('volume', sizing.value.sizing.massCurve.dailySupplyM3, units)} and the uses take ${formatQuantity('volume', sizing.value.sizing.massCurve.dailyDemandM3, units)}; the widest gap the tank must bridge is ${formatQuantity('volume', sizing.value.sizing.cycleStorageM3, units)}.`}
             />
-            <VolumeChart
+            <HourChart
               title="Water in this tank over three days, starting full"
               units={units}
               hours={72}
-              lines={[{ key: 'Water in the tank', valuesM3: sizing.value.levelOverThreeDaysM3 }]}
+              lines={[{ key: 'Water in the tank', values: sizing.value.levelOverThreeDaysM3 }]}
               summary={`The tank's lowest level over three days is ${formatQuantity('volume', Math.min(...sizing.value.levelOverThreeDaysM3), units)}.`}
             />
           </div>

@@ -11,6 +11,8 @@ import type { SizeRunResult, SolveRunResult } from '@/lib/network/run-result';
 import { networkQuery } from '@/lib/queries/network';
 import type { UnitSystem } from '@/lib/units';
 import { AddLinkForm, AddNodeForm } from './network-forms';
+import { DayView } from './day-view';
+import { EditPart } from './edit-part';
 import { DemandEditor } from './demand-editor';
 import { LinkTable, NodeTable } from './network-tables';
 import { NetworkRunPanel } from './network-run-panel';
@@ -32,7 +34,7 @@ export function NetworkWorkspace({ projectId, units, canEdit }: { projectId: str
 
   return (
     <div className="space-y-5">
-      <NetworkRunPanel projectId={projectId} view={view} units={units} showing={showing} onShow={setShowing} />
+      <NetworkRunPanel projectId={projectId} view={view} units={units} showing={showing} onShow={setShowing} canEdit={canEdit} />
       <Panel title="Schematic" aside={<span className="text-xs text-creek-600">{shown ? (showing === 'size' ? 'Showing the least-cost sizes' : 'Showing the peak-hour solve') : 'Not solved yet'}</span>}>
         {view.records.nodes.length === 0 ? (
           <p className="text-sm text-creek-700">This project has no network yet. Add a line on the Lines page, or add a source and an outlet below and join them.</p>
@@ -48,6 +50,7 @@ export function NetworkWorkspace({ projectId, units, canEdit }: { projectId: str
           </div>
         )}
       </Panel>
+      <DayView view={view} units={units} />
       <div className="grid gap-5 xl:grid-cols-2">
         <Panel title="Nodes">
           <NodeTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
@@ -56,6 +59,11 @@ export function NetworkWorkspace({ projectId, units, canEdit }: { projectId: str
           <LinkTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
         </Panel>
       </div>
+      {canEdit && (
+        <Panel title="Change the picked part">
+          <EditPart projectId={projectId} view={view} units={units} selectedId={selectedId} />
+        </Panel>
+      )}
       {canEdit && (
         <div className="grid gap-5 xl:grid-cols-2">
           <Panel title="Add a part">
