@@ -143,7 +143,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
             onPlaceKind={setPlaceKind}
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
-          <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
+          <NetworkFlowsStrip flows={context.network} projectId={line.projectId} units={unitSystem} />
           <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}

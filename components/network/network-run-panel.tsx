@@ -78,6 +78,10 @@ export function NetworkRunPanel({ projectId, view, units, showing, onShow, canEd
       )}
       {apply.error && <div className="mt-3"><FormMessage message={apply.error.message} /></div>}
       <NetworkFindings view={view} warnings={warnings} units={units} label="Network findings" />
+      <p className="mt-3 text-sm">
+        <a className="underline" href={`/api/projects/${projectId}/network/report`} download>Download the network report (PDF)</a>
+        <span className="text-xs text-creek-600"> — the schematic, heads and pressures, flows and velocities, the last sizes and cost, and the last day run.</span>
+      </p>
       <p className="mt-3 text-xs text-creek-600">
         Caution: flows and pressures are estimates from published friction formulas. Pipe ratings, surge and drinking-water rules are for
         local codes and licensed practice to confirm before anything is built.

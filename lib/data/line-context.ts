@@ -3,12 +3,22 @@ import { models } from '../../models';
 import { AppError } from '../errors';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineDesign } from '../validations/line-design';
+import { networkFlowsOfLine } from './line-network-flows';
 import { pumpOutletHeadForProject } from './ram-sites';
 
 /** What a line of this project reads from the rest of it at each analysis: ram sites that can feed it, the frost depth. */
 export async function lineSiteContext(projectId: string): Promise<LineSiteContext> {
   const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM'] });
   return { ramOutlets: await pumpOutletHeadForProject(projectId), frostDepthM: project?.frostDepthM ?? null };
+}
+
+/**
+ * The site context of one line with the network's word on it (its feed and solved flow per piece),
+ * solved now on the worker pool: what the line page, the line's analysis and its report read.
+ */
+export async function lineFeedContext(projectId: string, lineId: string): Promise<LineSiteContext> {
+  const [site, network] = await Promise.all([lineSiteContext(projectId), networkFlowsOfLine(lineId)]);
+  return { ...site, network };
 }
 
 /** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */

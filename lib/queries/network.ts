@@ -1,7 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ProjectTankStorage } from '../data/network-tank-storage';
 import type { NetworkJobView } from '../network/jobs';
-import type { LineNetworkFlows } from '../network/line-flows';
 import type { NetworkView } from '../network/view';
 import type { NetworkLinkInput, NetworkNodeInput, NetworkRunInput } from '../validations/network';
 import { fetchJson } from './fetch-json';
@@ -84,10 +83,3 @@ export function useNetworkRun(projectId: string, runId: string | null) {
     refetchInterval: (query) => (query.state.data && (query.state.data.status === 'done' || query.state.data.status === 'failed') ? false : 500),
   });
 }
-
-/** The network's flows along one line, for the line page. */
-export const lineNetworkFlowsQuery = (lineId: string) =>
-  queryOptions({
-    queryKey: ['lines', lineId, 'network-flows'] as const,
-    queryFn: async () => (await fetchJson<{ flows: LineNetworkFlows }>(`/api/lines/${lineId}/network-flows`)).flows,
-  });

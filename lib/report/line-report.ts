@@ -14,7 +14,7 @@ import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type 
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { markEveryPage } from './review-mark';
-import { liftSection, winterSection } from './feed-sections';
+import { liftSection, networkFeedSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
 export interface LineReportInput {
@@ -87,6 +87,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   doc.addPage();
   const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
   if (feed) liftSection(doc, feed, u, t);
+  if (context.network) networkFeedSection(doc, context.network, u);
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, analysis, u);

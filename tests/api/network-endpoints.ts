@@ -78,6 +78,7 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     file: `${P}/runs/[jobId]/apply/route.ts`, method: 'POST', expect: designers(200),
     params: async (f) => ({ projectId: f.projectId, jobId: (await createSizedJobFixture(f.projectId)).id }),
   },
+  { file: `${P}/report/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: `${P}/tank-storage/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'teams/[teamId]/price-list/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
   {

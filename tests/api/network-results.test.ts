@@ -1,3 +1,4 @@
+import { PDFParse } from 'pdf-parse';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { linkLineIntoNetwork } from '../../migrations/support/network-from-records.cjs';
 import * as Links from '../../app/api/projects/[projectId]/network/links/route';
@@ -5,6 +6,7 @@ import * as Nodes from '../../app/api/projects/[projectId]/network/nodes/route';
 import * as Runs from '../../app/api/projects/[projectId]/network/runs/route';
 import * as RunOne from '../../app/api/projects/[projectId]/network/runs/[jobId]/route';
 import * as Apply from '../../app/api/projects/[projectId]/network/runs/[jobId]/apply/route';
+import * as NetworkReport from '../../app/api/projects/[projectId]/network/report/route';
 import * as TankStorage from '../../app/api/projects/[projectId]/network/tank-storage/route';
 import * as PriceList from '../../app/api/teams/[teamId]/price-list/route';
 import * as LineOne from '../../app/api/lines/[lineId]/route';
@@ -14,6 +16,12 @@ import type { DayRunResult, SizeRunResult } from '../../lib/network/run-result';
 import type { ProjectTankStorage } from '../../lib/data/network-tank-storage';
 import { call, createTeamFixture } from '../support/api';
 import { createTankFixture } from '../support/lift-fixtures';
+import { createLineFixture } from '../support/line-fixture';
+import * as TakeOffs from '../../app/api/projects/[projectId]/network/take-offs/route';
+import * as NodeOne from '../../app/api/projects/[projectId]/network/nodes/[nodeId]/route';
+import * as Analysis from '../../app/api/lines/[lineId]/analysis/route';
+import * as Report from '../../app/api/lines/[lineId]/report/route';
+import { readNetworkRecords } from '../../lib/data/network-records';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 const PRICES: [string, number][] = [['pe100-iso4427-sdr11-20mm', 0.6], ['pe100-iso4427-sdr11-25mm', 0.9], ['pe100-iso4427-sdr11-32mm', 1.4], ['pe100-iso4427-sdr11-40mm', 2.2], ['pe100-iso4427-sdr11-50mm', 3.1]];
@@ -113,6 +121,17 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
       const row = await models().NetworkLink.findByPk(link.linkId);
       expect(row!.data.pipe).toBe(link.pieces[0].pipeId);
     }
+    // The network report carries the schematic, the heads and pressures, flows and velocities, the sizes and the cost.
+    const report = await call(NetworkReport.GET, { method: 'GET', path: '/r', params: { projectId: pipes }, userId: f.users.reviewer.id });
+    expect(report.status).toBe(200);
+    expect(report.headers.get('content-type')).toBe('application/pdf');
+    const text = (await new PDFParse({ data: new Uint8Array(report.bytes) }).getText()).text.replace(/\s+/g, ' ');
+    for (const words of ['Schematic at the peak hour', 'Nodes at the peak hour', 'Links at the peak hour', 'Least-cost sizes', 'Pressure head', 'Velocity', 'Tap one', 'Branch two', 'NOT FOR CONSTRUCTION']) {
+      expect(text, words).toContain(words);
+    }
+    // The main carries both taps' peak: 0.3 + 0.2 L/s; the cost is the sizing's, to the unit.
+    expect(text).toContain('0.50 L/s');
+    expect(text).toContain(`Material cost of the chosen pipes: ${Math.round(sized.cost!).toLocaleString('en-US')}`);
     // A reviewer may not write sizes.
     const refused = await call(Apply.POST, { method: 'POST', path: '/a', params: { projectId: pipes, jobId: job.id }, userId: f.users.reviewer.id });
     expect(refused.status).toBe(403);
@@ -151,5 +170,49 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
     expect(res.status).toBe(400);
     expect(res.json.error.message).toMatch(/^Nothing to size: the network has only one part/);
     expect(await models().NetworkJob.count({ where: { projectId: lonely } })).toBe(0);
+  });
+});
+
+describe("a line's own analysis reads what feeds it from the network", () => {
+  it('takes its start from the source node and its flow per piece from the solve (the flow drops at the take-off)', async () => {
+    const f = await createTeamFixture();
+    const projectId = await newProject(f, 'Line in a network');
+    // Invented: the fixture line (400 m, 240 m down to 200 m, 0.001 m³/s to its house) with a take-off
+    // at chainage 200 m feeding a trough that draws 0.4 L/s.
+    const { lineId } = await createLineFixture(projectId);
+    await models().sequelize.transaction((transaction) => linkLineIntoNetwork(models().sequelize, transaction, lineId));
+    const records = await readNetworkRecords(projectId);
+    const sourceNode = records.nodes.find((n) => n.id === records.links.find((l) => l.lineId === lineId)!.fromNodeId)!;
+    const asDesigner = { userId: f.users.designer.id };
+    const tee = await call(TakeOffs.POST, { method: 'POST', path: '/t', params: { projectId }, body: { lineId, chainageM: 200, name: 'Trough tee' }, ...asDesigner });
+    expect(tee.status).toBe(201);
+    const trough = await call(Nodes.POST, { method: 'POST', path: '/n', params: { projectId }, body: { kind: 'outlet', name: 'Trough', elevationM: 215, data: { outletKind: 'trough', residualHeadM: 2, demandFrom: 'fixed', fixedDemandM3s: 0.0004 } }, ...asDesigner });
+    const branch = await call(Links.POST, { method: 'POST', path: '/l', params: { projectId }, body: { kind: 'pipe', name: 'Trough pipe', fromNodeId: tee.json.node.id, toNodeId: trough.json.node.id, data: { lengthM: 60, pipe: 'pe100-iso4427-sdr11-32mm' } }, ...asDesigner });
+    expect(branch.status).toBe(201);
+    // The network's source is raised to 245 m: the line's own saved start (241 m) is no longer read.
+    const sourceBody = { ...sourceNode, id: undefined };
+    const raised = await call(NodeOne.PUT, { method: 'PUT', path: '/n', params: { projectId, nodeId: sourceNode.id }, body: { ...sourceBody, elevationM: 245, data: { ...sourceBody.data, waterLevelM: 245 } }, ...asDesigner });
+    expect(raised.status).toBe(200);
+
+    const res = await call(Analysis.POST, { method: 'POST', path: '/a', params: { lineId }, ...asDesigner });
+    expect(res.status).toBe(200);
+    const profile = res.json.analysis;
+    expect(profile.flowSchedule).toHaveLength(2);
+    expect(profile.flowSchedule[0]).toMatchObject({ fromM: 0 });
+    // By continuity: 0.001 m³/s to the house plus 0.0004 m³/s to the trough before the tee, 0.001 after it.
+    expect(profile.flowSchedule[0].flowM3s).toBeCloseTo(0.0014, 9);
+    expect(profile.flowSchedule[1]).toMatchObject({ fromM: 200 });
+    expect(profile.flowSchedule[1].flowM3s).toBeCloseTo(0.001, 9);
+    expect(profile.flowM3s).toBeCloseTo(0.0014, 9);
+    expect(profile.points.hydraulicGradeM[0]).toBeCloseTo(245, 1);
+
+    // The report is drawn from the same analysis, and says where its flows came from.
+    const pdf = await call(Report.GET, { method: 'GET', path: '/r', params: { lineId }, ...asDesigner });
+    expect(pdf.status).toBe(200);
+    const text = (await new PDFParse({ data: new Uint8Array(pdf.bytes) }).getText()).text.replace(/\s+/g, ' ');
+    expect(text).toContain('In the network');
+    expect(text).toContain('The profile starts at the water level of');
+    expect(text).toContain('Trough tee');
+    expect(text).toContain('1.40 L/s');
   });
 });
