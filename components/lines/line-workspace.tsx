@@ -172,7 +172,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       )}
 
       <Panel title="Ends and flow">
-        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} />
+        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} networkStart={context.network?.start ? context.network.startFrom : null} />
       </Panel>
       {winter && (
         <Panel title="Winter">

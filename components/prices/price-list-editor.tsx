@@ -21,7 +21,7 @@ export function PriceListEditor({ teamId, canEdit }: { teamId: string; canEdit: 
   const { data, error, refetch } = useQuery(priceListQuery(teamId));
   if (error) return <LoadError what="The price list" onRetry={() => void refetch()} />;
   if (!data) return null;
-  return <PriceTable key={data.map((i) => `${i.pipeId}:${i.costPerM}:${i.notes}`).join('|')} teamId={teamId} initial={draftRowsOf(data)} canEdit={canEdit} />;
+  return <PriceTable teamId={teamId} initial={draftRowsOf(data)} canEdit={canEdit} />;
 }
 
 function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: PriceRowDraft[]; canEdit: boolean }) {
@@ -39,7 +39,11 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
     if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
     setErrors({});
     save.mutate(parsed.data, {
-      onSuccess: (items) => setDone(`Saved ${items.length} priced ${items.length === 1 ? 'pipe' : 'pipes'}`),
+      onSuccess: (items) => {
+        // The saved list, as the server keeps it (sorted), becomes the rows being edited.
+        setRows(draftRowsOf(items));
+        setDone(`Saved ${items.length} priced ${items.length === 1 ? 'pipe' : 'pipes'}`);
+      },
       onError: (error) => setErrors(error instanceof ApiError && error.fields ? error.fields : {}),
     });
   }
