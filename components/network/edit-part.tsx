@@ -12,7 +12,7 @@ import type { NetworkLinkRecord, NetworkNodeRecord } from '@/lib/network/records
 import type { NetworkView } from '@/lib/network/view';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
-import { fromDisplay, toDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
+import { formatQuantity, fromDisplay, toDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { fieldErrorsOf } from '@/lib/validations/common';
 import { NetworkLinkSchema, NetworkNodeSchema, VALVE_KINDS } from '@/lib/validations/network';
 
@@ -91,6 +91,14 @@ function NodeFigures({ projectId, record, units }: { projectId: string; record: 
         <Button type="submit" disabled={save.isPending}>Save {record.name}</Button>
         <FormMessage message={save.error && !Object.keys(errors).length ? save.error.message : save.isSuccess ? 'Saved.' : null} tone={save.error ? 'error' : 'ok'} />
       </div>
+      <p className="text-xs text-creek-600 sm:col-span-2" data-testid="part-as-saved">
+        As saved: {[
+          record.elevationM !== null ? `elevation ${formatQuantity('elevation', record.elevationM, units)}` : null,
+          record.data.waterLevelM != null ? `water level ${formatQuantity('elevation', record.data.waterLevelM, units)}` : null,
+          record.kind === 'outlet' ? (record.data.residualHeadM != null ? `wants ${formatQuantity('head', record.data.residualHeadM, units)}` : "wants the line's residual") : null,
+          record.kind === 'outlet' && record.data.demandFrom === 'fixed' && record.data.fixedDemandM3s != null ? `draws ${formatQuantity('designFlow', record.data.fixedDemandM3s, units)} at peak` : null,
+        ].filter(Boolean).join(', ')}.
+      </p>
     </form>
   );
 }
