@@ -1,4 +1,4 @@
-import { surveyHeightScatterM, type HeightConfidence, type LineFlow, type LineInput, type LineStart, type LineStation } from '../../hydraulics/index';
+import { heightDatumOf, surveyHeightScatterM, type HeightConfidence, type LineFlow, type LineInput, type LineStart, type LineStation } from '../../hydraulics/index';
 import type { LineDesign } from '../validations/line-design';
 import { EMPTY_SITE_CONTEXT, flowFromRam, ramStartOf, type LineSiteContext } from './ram-start';
 
@@ -35,6 +35,7 @@ export function lineFeedOf(design: LineDesign, stations: readonly LineStation[],
  */
 export function lineInputOf(design: LineDesign, stations: readonly (LineStation & HeightConfidence)[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineInput {
   const heightScatterM = surveyHeightScatterM(stations);
+  const heightDatum = stations.some((s) => s.heightSource !== undefined) ? heightDatumOf(stations.map((s) => s.heightSource)) : 'geodetic';
   const feed = lineFeedOf(design, stations, context);
   return {
     stations: stations.map((s) => (s.coverM === undefined ? { chainageM: s.chainageM, groundElevationM: s.groundElevationM } : { chainageM: s.chainageM, groundElevationM: s.groundElevationM, coverM: s.coverM })),
@@ -45,8 +46,8 @@ export function lineInputOf(design: LineDesign, stations: readonly (LineStation 
     start: feed.start,
     end: design.end,
     flow: feed.flow,
-    // The survey's scatter comes with the route, not from the designer: it is what the heights are worth.
-    settings: heightScatterM > 0 ? { ...design.settings, heightScatterM } : design.settings,
+    // The survey's scatter and datum come with the route, not from the designer: they are what the heights are worth.
+    settings: { ...design.settings, ...(heightScatterM > 0 ? { heightScatterM } : {}), ...(heightDatum === 'assumed' ? { heightDatum } : {}) },
   };
 }
 

@@ -10,11 +10,13 @@ export interface LineSiteContext {
   ramOutlets: PumpOutletHead[];
   /** Depth frost reaches at the site, m; null when the project does not say. */
   frostDepthM: number | null;
+  /** Due date of the earliest open drain-down task that is past due, ISO date; null when none. */
+  overdueDrainDownOn?: string | null;
   /** The network's word on this line, when it was asked (the line page, its analysis and report). */
   network?: LineNetworkFlows | null;
 }
 
-export const EMPTY_SITE_CONTEXT: LineSiteContext = { ramOutlets: [], frostDepthM: null };
+export const EMPTY_SITE_CONTEXT: LineSiteContext = { ramOutlets: [], frostDepthM: null, overdueDrainDownOn: null };
 
 /** A ram plan turned into the core's pump start. */
 export interface RamLineStart {
