@@ -204,7 +204,9 @@ describe("a line's own analysis reads what feeds it from the network", () => {
     expect(profile.flowSchedule[1]).toMatchObject({ fromM: 200 });
     expect(profile.flowSchedule[1].flowM3s).toBeCloseTo(0.001, 9);
     expect(profile.flowM3s).toBeCloseTo(0.0014, 9);
-    expect(profile.points.hydraulicGradeM[0]).toBeCloseTo(245, 1);
+    // The grade starts at the network's 245 m less the entrance loss (1 + 0.5) v²/2g of a few centimetres, far from the saved 241 m.
+    expect(profile.points.hydraulicGradeM[0]).toBeGreaterThan(244.8);
+    expect(profile.points.hydraulicGradeM[0]).toBeLessThanOrEqual(245);
 
     // The report is drawn from the same analysis, and says where its flows came from.
     const pdf = await call(Report.GET, { method: 'GET', path: '/r', params: { lineId }, ...asDesigner });
