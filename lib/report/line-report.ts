@@ -68,7 +68,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   const answers = lineAnswers(analysis);
   const t = analysis.settings.waterTemperatureC;
   doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
-    `Flow delivered: ${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
+    `Flow delivered: ${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.scheduled ? "at the start, from the network's solve; it drops at each take-off" : answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
       `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
       `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u.system, t)} at ch. ${formatQuantity('chainage', answers.worstStatic.chainageM, u.system)} ` +
       `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u.system, t)}). ` +
