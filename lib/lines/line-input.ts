@@ -11,20 +11,22 @@ export interface LineFeed {
 }
 
 /**
- * The one place that says what feeds a line. When the network knows the node at the line's start,
- * its level or head is the start (the line's own saved start is not read); when the network is
- * solved, each piece's solved flow is the flow. Otherwise the design's start (a ram site's plan, a
- * typed level or pump head) and flow.
+ * The one place that says what feeds a line. A line that names its ram site reads the ram's plan.
+ * Otherwise, when the network knows the node at the line's start, its level or head is the start
+ * (the line's own saved level or typed heads are not read), and when the network is solved each
+ * piece's solved flow is the flow. Otherwise the design's start and flow.
  */
 export function lineFeedOf(design: LineDesign, stations: readonly LineStation[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineFeed {
-  const network = context.network ?? null;
-  const schedule = network?.schedule && network.schedule.length > 0 ? network.schedule : null;
-  const ram = network?.start ? null : ramStartOf(design.start, context, stations[0]?.groundElevationM ?? 0);
-  const start: LineStart = network?.start ?? (ram ? ram.start : (design.start as LineStart));
-  const flow: LineFlow = schedule ? { kind: 'schedule', pieces: schedule } : design.flow.kind === 'pump-delivery' && !ram
-    ? flowFromRam(design.flow, ramStartOf(design.start, context, stations[0]?.groundElevationM ?? 0))
-    : flowFromRam(design.flow, ram);
-  return { start, flow, startFrom: network?.start ? 'network' : 'design', flowFrom: schedule ? 'network' : 'design' };
+  const groundM = stations[0]?.groundElevationM ?? 0;
+  // A line that names its ram site reads that ram's plan (the same plan the network's ram outlet reads),
+  // so switching a delivery line to its ram takes effect at once, before the network is re-joined.
+  const ram = ramStartOf(design.start, context, groundM);
+  const network = ram ? null : context.network ?? null;
+  const pieces = context.network?.schedule;
+  const schedule = design.flow.kind !== 'pump-delivery' && pieces && pieces.length > 0 ? pieces : null;
+  const start: LineStart = ram ? ram.start : network?.start ?? (design.start as LineStart);
+  const flow: LineFlow = schedule ? { kind: 'schedule', pieces: schedule } : flowFromRam(design.flow, ram);
+  return { start, flow, startFrom: !ram && network?.start ? 'network' : 'design', flowFrom: schedule ? 'network' : 'design' };
 }
 
 /**

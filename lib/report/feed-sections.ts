@@ -56,10 +56,10 @@ export function winterSection(doc: Doc, plan: LineWinterPlan, u: DisplayUnits): 
 }
 
 /** What feeds the line in the network and the flow of each piece the analysis used (it drops at every take-off). */
-export function networkFeedSection(doc: Doc, flows: LineNetworkFlows, u: DisplayUnits): void {
+export function networkFeedSection(doc: Doc, flows: LineNetworkFlows, used: { start: boolean; flow: boolean }, u: DisplayUnits): void {
   heading(doc, 'In the network');
-  const start = flows.startFrom ? `The profile starts at ${flows.startFrom}${flows.feed ? ` (${flows.feed.name})` : ''}.` : "The network does not say what feeds this line; the line's own start is used.";
-  const flow = flows.schedule ? ' Every check above ran with the solved flow of each piece below (peak hour).' : ` Not solved: ${flows.reason ?? 'no flow for this line'}; the line's own design flow is used.`;
+  const start = !used.start ? 'The line names its ram site: its start is the ram plan (see Lift).' : flows.startFrom ? `The profile starts at ${flows.startFrom}${flows.feed ? ` (${flows.feed.name})` : ''}.` : "The network does not say what feeds this line; the line's own start is used.";
+  const flow = flows.schedule && !used.flow ? " The analysis uses the ram's delivered flow; the network's flows are below for comparison." : flows.schedule ? ' Every check above ran with the solved flow of each piece below (peak hour).' : ` Not solved: ${flows.reason ?? 'no flow for this line'}; the line's own design flow is used.`;
   doc.font('Helvetica').fontSize(9).fillColor(INK).text(pdfText(start + flow));
   if (!flows.schedule) return;
   doc.moveDown(0.3);

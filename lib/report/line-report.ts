@@ -87,7 +87,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   doc.addPage();
   const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
   if (feed) liftSection(doc, feed, u, t);
-  if (context.network) networkFeedSection(doc, context.network, u);
+  if (context.network) networkFeedSection(doc, context.network, { start: line.design.start.kind !== 'ram-site', flow: analysis.flowSchedule !== undefined }, u);
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, analysis, u);
