@@ -11,7 +11,7 @@ export interface NetworkNodeData {
   /** Source or break-pressure tank: free water level, m above datum. */
   waterLevelM?: number | null;
   /** A source made from a line that started at typed pump heads. */
-  typedPumpHead?: { outletHeadM: number; shutoffHeadM: number };
+  typedPumpHead?: { outletHeadM: number; shutoffHeadM?: number };
   /** Tank: whether a float valve shuts the inlet when the tank is full. */
   inletFloatValve?: boolean;
   /** Outlet: what it is. */

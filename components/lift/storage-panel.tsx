@@ -1,11 +1,16 @@
 'use client';
 
+import { useQuery } from '@tanstack/react-query';
+import Link from 'next/link';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { HourChart } from '@/components/ui/hour-chart';
 import type { TankView } from '@/lib/lift/summary';
+import type { ProjectTankStorage } from '@/lib/data/network-tank-storage';
+import type { TankStorageView } from '@/lib/network/run-result';
 import { useDeleteTank } from '@/lib/queries/lift';
+import { tankStorageQuery } from '@/lib/queries/network';
 import { formatDuration, formatNumber, formatQuantity, type UnitSystem } from '@/lib/units';
-import { VolumeChart } from './mass-curve-chart';
 import { PlanChecks } from './plan-checks';
 import { Readout } from './readout';
 import { TankForm } from './tank-form';
@@ -20,10 +25,20 @@ export interface StoragePanelProps {
 
 /** Per tank: the size that never runs dry, reserve, fill time, overflow, and the elevation the outlets need. */
 export function StoragePanel({ projectId, tanks, sources, units, canEdit }: StoragePanelProps) {
+  // Each tank sized from the outlets it serves in the network; a tank outside the network keeps the project-wide figure.
+  const network = useQuery({ ...tankStorageQuery(projectId), enabled: tanks.length > 0 });
   return (
     <div className="space-y-5">
       {tanks.length === 0 && <p className="text-sm text-creek-700">No tank yet. Add the tank the ram fills to size it against the daily demand.</p>}
-      {tanks.map((view) => <TankCard key={view.tank.id} projectId={projectId} view={view} sources={sources} units={units} canEdit={canEdit} />)}
+      {network.data?.reason && tanks.length > 0 && (
+        <p className="text-sm text-ochre-700" data-testid="tank-storage-reason">
+          Storage per tank from the <Link className="underline" href={`/projects/${projectId}/network`}>network</Link> is not available: {network.data.reason}. Tanks below are sized against the whole project&apos;s demand.
+        </p>
+      )}
+      {tanks.map((view) => (
+        <TankCard key={view.tank.id} projectId={projectId} view={view} sources={sources} units={units} canEdit={canEdit}
+          network={network.data} fromNetwork={network.data?.tanks.find((t) => t.tankId === view.tank.id) ?? null} />
+      ))}
       {canEdit && (
         <details className="rounded-md border border-dashed border-creek-200 p-3">
           <summary className="cursor-pointer text-sm font-semibold text-creek-900">Add a tank</summary>
@@ -34,7 +49,10 @@ export function StoragePanel({ projectId, tanks, sources, units, canEdit }: Stor
   );
 }
 
-function TankCard({ projectId, view, sources, units, canEdit }: { projectId: string; view: TankView; sources: StoragePanelProps['sources']; units: UnitSystem; canEdit: boolean }) {
+function TankCard({ projectId, view, sources, units, canEdit, network, fromNetwork }: {
+  projectId: string; view: TankView; sources: StoragePanelProps['sources']; units: UnitSystem; canEdit: boolean;
+  network: ProjectTankStorage | undefined; fromNetwork: TankStorageView | null;
+}) {
   const [editing, setEditing] = useState(false);
   const remove = useDeleteTank(projectId);
   const { tank, supply, sizing } = view;
@@ -53,7 +71,12 @@ function TankCard({ projectId, view, sources, units, canEdit }: { projectId: str
       <p className="text-sm text-creek-700">
         Supply: {supply.flowM3s !== null ? `${formatQuantity('flow', supply.flowM3s, units)} for ${formatNumber(tank.supplyHoursPerDay, 1)} h a day. ` : ''}{supply.note}
       </p>
-      {!sizing.ok ? (
+      {fromNetwork ? (
+        <>
+          <NetworkStorage projectId={projectId} tank={fromNetwork} outletNames={network?.outletNames ?? {}} units={units} />
+          <TankElevation view={view} units={units} />
+        </>
+      ) : !sizing.ok ? (
         <p role="alert" className="text-sm text-clay-700">Cannot size this tank: {sizing.error}</p>
       ) : (
         <>
@@ -67,24 +90,50 @@ function TankCard({ projectId, view, sources, units, canEdit }: { projectId: str
           <TankElevation view={view} units={units} />
           <PlanChecks units={units} checks={sizing.value.checks} />
           <div className="grid gap-3 lg:grid-cols-2">
-            <VolumeChart
+            <HourChart
               title="Mass curve of a day"
               units={units}
               hours={24}
-              lines={[{ key: 'Supply, cumulative', valuesM3: sizing.value.cumulativeSupplyM3 }, { key: 'Demand, cumulative', valuesM3: sizing.value.cumulativeDemandM3 }]}
+              lines={[{ key: 'Supply, cumulative', values: sizing.value.cumulativeSupplyM3 }, { key: 'Demand, cumulative', values: sizing.value.cumulativeDemandM3 }]}
               summary={`Over a day the supply adds ${formatQuantity('volume', sizing.value.sizing.massCurve.dailySupplyM3, units)} and the uses take ${formatQuantity('volume', sizing.value.sizing.massCurve.dailyDemandM3, units)}; the widest gap the tank must bridge is ${formatQuantity('volume', sizing.value.sizing.cycleStorageM3, units)}.`}
             />
-            <VolumeChart
+            <HourChart
               title="Water in this tank over three days, starting full"
               units={units}
               hours={72}
-              lines={[{ key: 'Water in the tank', valuesM3: sizing.value.levelOverThreeDaysM3 }]}
+              lines={[{ key: 'Water in the tank', values: sizing.value.levelOverThreeDaysM3 }]}
               summary={`The tank's lowest level over three days is ${formatQuantity('volume', Math.min(...sizing.value.levelOverThreeDaysM3), units)}.`}
             />
           </div>
         </>
       )}
     </article>
+  );
+}
+
+/** The tank's storage from the outlets it serves in the network (replaces the project-wide figure for a tank in the network). */
+function NetworkStorage({ projectId, tank, outletNames, units }: { projectId: string; tank: TankStorageView; outletNames: Record<string, string>; units: UnitSystem }) {
+  return (
+    <div className="space-y-3" data-testid="tank-network-storage">
+      <p className="text-sm text-creek-800">
+        Serves, in the <Link className="underline" href={`/projects/${projectId}/network`}>network</Link>:{' '}
+        {tank.servedOutlets.length === 0 ? 'no outlet' : tank.servedOutlets.map((o) => `${outletNames[o.nodeId] ?? 'an outlet'}${o.share < 0.999 ? ` (${formatNumber(o.share * 100, 0)} % of its water)` : ''}`).join(', ')}.
+        {' '}Its outlets draw {formatQuantity('volume', tank.dailyDemandM3, units)} a day; the network fills it at {formatQuantity('flow', tank.supplyM3s, units)}.
+      </p>
+      {tank.problem || tank.totalStorageM3 === null ? (
+        <p role="alert" className="text-sm text-clay-700">Cannot size this tank: {tank.problem ?? 'no supply'}</p>
+      ) : (
+        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+          <Readout emphasis label="Tank its outlets need" value={formatQuantity('volume', tank.totalStorageM3, units)}
+            detail={`${formatQuantity('volume', tank.cycleStorageM3 ?? 0, units)} for the daily cycle + ${formatQuantity('volume', tank.reserveStorageM3 ?? 0, units)} of reserve`} />
+          <Readout label="Fill time from empty" value={tank.fillTimeFromEmptyS === null ? '—' : formatDuration(tank.fillTimeFromEmptyS)} detail="at the network's inflow, outlets shut" />
+          <Readout label="Drawn from this tank" value={`${formatQuantity('volume', tank.dailyDemandM3, units)} a day`} detail={`by ${tank.servedOutlets.length} ${tank.servedOutlets.length === 1 ? 'outlet' : 'outlets'}`} />
+        </div>
+      )}
+      <HourChart title="What its outlets draw from this tank, hour by hour" units={units} hours={24}
+        lines={[{ key: 'Drawn from the tank', values: tank.demandHourlyM3 }]}
+        summary={`Over a day the outlets this tank serves draw ${formatQuantity('volume', tank.dailyDemandM3, units)}.`} />
+    </div>
   );
 }
 

@@ -12,7 +12,7 @@ type Change = (next: LineDesign, label: string) => string | null;
 const SELECT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50';
 
 /** Start, end and flow of the line, in the project's units. */
-export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGroundM, ramOutlets }: {
+export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGroundM, ramOutlets, networkStart }: {
   design: LineDesign;
   units: DisplayUnits;
   change: Change;
@@ -21,6 +21,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   lastGroundM: number;
   /** Planned ram sites of the project that can feed this line. */
   ramOutlets: readonly PumpOutletHead[];
+  /** Where the network says the line starts, when it does (it then sets the start the analysis uses). */
+  networkStart?: string | null;
 }) {
   const L = (m: number) => toDisplay('length', m, units.system);
   const toM = (v: number) => fromDisplay('length', v, units.system);
@@ -48,6 +50,11 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
     <div className="grid gap-4 md:grid-cols-3">
       <fieldset className="space-y-2 rounded-md border border-creek-100 p-3">
         <legend className="px-1 text-sm font-semibold text-creek-900">Start</legend>
+        {networkStart && (
+          <p className="rounded bg-creek-50 px-2 py-1 text-xs text-creek-800" data-testid="start-from-network">
+            The network sets this line&apos;s start: {networkStart}. The start below is used only if the line leaves the network.
+          </p>
+        )}
         <label className="block text-xs font-medium text-creek-900" htmlFor="start-kind">Fed from</label>
         <select id="start-kind" className={SELECT} disabled={!canEdit} value={start.kind} onChange={(e) => pickStartKind(e.target.value)}>
           <option value="water-level">Water surface (spring box, tank, break-pressure tank)</option>

@@ -28,7 +28,7 @@ export function LineAnswersStrip({ answers, units, temperatureC, flowNote }: { a
           tone="bad"
         />
       ) : (
-        <Card label="Flow delivered" value={formatQuantity('designFlow', a.flowM3s, units.system)} note={flowNote ?? (a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends')} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
+        <Card label="Flow delivered" value={formatQuantity('designFlow', a.flowM3s, units.system)} note={flowNote ?? (a.scheduled ? "at the start, from the network's solve; it drops at each take-off" : a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends')} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
       )}
       <Card label="Residual at the end" value={formatHeadPressure(a.endResidualHeadM, units.system, temperatureC)} note={`wanted ${formatHeadPressure(a.endTargetHeadM, units.system, temperatureC)}`} tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'} />
       <Card label="Worst static pressure" value={formatHeadPressure(a.worstStatic.headM, units.system, temperatureC)} note={`at ch. ${formatQuantity('chainage', a.worstStatic.chainageM, units.system)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units.system, temperatureC)}`} tone={staticOk ? 'ok' : 'bad'} />

@@ -11,7 +11,7 @@ import type { LineRecord } from '@/lib/data/lines';
 import { lineAnswers } from '@/lib/lines/answers';
 import { SHORT_CAUTION } from '@/lib/lines/cautions';
 import { addDevice } from '@/lib/lines/edit-design';
-import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
+import { designWithInput, lineFeedOf, lineInputOf } from '@/lib/lines/line-input';
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
 import { lineWinterPlan, winterWarnings } from '@/lib/lines/winter';
@@ -84,6 +84,14 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const partNames = useMemo(() => new Map([[line.id, line.name]]), [line.id, line.name]);
 
   const analysis = 'analysis' in result ? result.analysis : null;
+  // Where the analysis took its start and flow from (the network or the design); a ram site that is gone leaves it unknown.
+  const feed = useMemo(() => {
+    try {
+      return lineFeedOf(design, stations, context);
+    } catch {
+      return null;
+    }
+  }, [design, stations, context]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
   const winter = useMemo(
     () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
@@ -178,7 +186,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
             onPlaceKind={setPlaceKind}
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
-          <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
+          <NetworkFlowsStrip flows={context.network} projectId={line.projectId} units={unitSystem} startUsed={feed?.startFrom === 'network'} flowUsed={feed?.flowFrom === 'network'} />
           <div className="grid grid-cols-[minmax(0,1fr)] gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
@@ -233,7 +241,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       </Panel>
 
       <Panel title="Ends and flow">
-        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} />
+        <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} networkStart={feed?.startFrom === 'network' ? context.network?.startFrom ?? null : null} />
       </Panel>
       {winter && (
         <Panel title="Winter">

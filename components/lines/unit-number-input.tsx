@@ -18,15 +18,18 @@ export interface UnitNumberInputProps {
   onCommit: (value: number | undefined) => string | null;
   hint?: string;
   compact?: boolean;
+  /** Errors found on the value elsewhere (a form's schema, the server), shown beside the box like its own. */
+  errors?: readonly string[];
 }
 
 const format = (v: number | undefined, digits: number, mark: DecimalMark) => (v === undefined ? '' : formatTypedNumber(Number(v.toFixed(digits)), mark));
 
 /** A number in the project's units that commits on Enter or leaving the field, with its error beside it. */
-export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, compact }: UnitNumberInputProps) {
+export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, compact, errors }: UnitNumberInputProps) {
   const mark = useDecimalMark();
   const [text, setText] = useState(format(value, digits, mark));
-  const [error, setError] = useState<string | null>(null);
+  const [ownError, setError] = useState<string | null>(null);
+  const error = ownError ?? (errors && errors.length > 0 ? errors.join(' ') : null);
   // A new value from outside (undo, a fix, a save) replaces what is shown.
   const [shown, setShown] = useState({ value, mark });
   if (shown.value !== value || shown.mark !== mark) {

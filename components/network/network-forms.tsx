@@ -1,6 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
+import { numberOrNull } from '@/components/lift/typed-number';
 import { PipePicker } from '@/components/lines/pipe-picker';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
@@ -13,7 +14,8 @@ import { NetworkLinkSchema, NetworkNodeSchema, OUTLET_KINDS, VALVE_KINDS } from 
 import { fieldErrorsOf } from '@/lib/validations/common';
 
 type Errors = Record<string, string[]>;
-const num = (text: string) => (text.trim() === '' ? null : Number(text));
+// Typed numbers read with the project's decimal mark (the one parser); unreadable -> NaN, which the schema names.
+const num = numberOrNull;
 const DEFAULT_PIPE = 'pe100-iso4427-sdr11-32mm';
 
 function errorsOf(error: unknown): Errors {

@@ -1,29 +1,24 @@
 'use client';
 
+import Link from 'next/link';
 import { useEffect, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { ProgressBar } from '@/components/ui/progress-bar';
 import type { NetworkRunKind } from '@/lib/network/jobs';
-import type { NetworkRunWarning, SizeRunResult, SolveRunResult } from '@/lib/network/run-result';
+import type { SizeRunResult, SolveRunResult } from '@/lib/network/run-result';
 import type { NetworkView } from '@/lib/network/view';
-import { useNetworkRun, useStartNetworkRun } from '@/lib/queries/network';
-import { formatNumber, formatQuantity, type UnitSystem } from '@/lib/units';
+import { useApplySizes, useNetworkRun, useStartNetworkRun } from '@/lib/queries/network';
+import { formatNumber, type UnitSystem } from '@/lib/units';
+import { NetworkFindings } from './network-findings';
 
-const SEVERITY_WORDS = { danger: 'Danger', warning: 'Warning', info: 'Note' } as const;
-
-function nameOf(view: NetworkView, warning: NetworkRunWarning): string | null {
-  if (warning.nodeId) return view.records.nodes.find((n) => n.id === warning.nodeId)?.name ?? null;
-  if (warning.linkId) return view.records.links.find((l) => l.id === warning.linkId)?.name ?? null;
-  return null;
-}
-
-/** Solve and size buttons, the running job's progress, and what the last runs found. */
-export function NetworkRunPanel({ projectId, view, units, showing, onShow }: {
-  projectId: string; view: NetworkView; units: UnitSystem; showing: 'solve' | 'size'; onShow: (kind: 'solve' | 'size') => void;
+/** Solve, size and day buttons, the running job's progress, and what the last runs found. */
+export function NetworkRunPanel({ projectId, view, units, showing, onShow, canEdit }: {
+  projectId: string; view: NetworkView; units: UnitSystem; showing: 'solve' | 'size'; onShow: (kind: 'solve' | 'size') => void; canEdit: boolean;
 }) {
   const start = useStartNetworkRun(projectId);
+  const apply = useApplySizes(projectId);
   const [runId, setRunId] = useState<string | null>(null);
   const run = useNetworkRun(projectId, runId);
   const working = start.isPending || run.data?.status === 'running' || run.data?.status === 'queued';
@@ -42,6 +37,7 @@ export function NetworkRunPanel({ projectId, view, units, showing, onShow }: {
       <div className="flex flex-wrap items-center gap-2">
         <Button onClick={() => go('solve')} disabled={working}>Solve at the peak hour</Button>
         <Button tone="quiet" onClick={() => go('size')} disabled={working}>Size for least cost</Button>
+        <Button tone="quiet" onClick={() => go('day')} disabled={working}>Run a 24-hour day</Button>
         {solved && sized && (
           <span className="ml-2 text-sm text-creek-700">
             Show:{' '}
@@ -63,6 +59,7 @@ export function NetworkRunPanel({ projectId, view, units, showing, onShow }: {
           <dt className="text-creek-600">Least-cost sizes</dt>
           <dd data-testid="size-summary">
             {sized ? (sized.feasible && sized.cost !== null ? `Material cost ${formatNumber(sized.cost, 0)} (team price list)` : 'No set of sizes in the price list meets every limit') : 'Not run yet'}
+            {' · '}<Link className="underline" href="/team/prices">pipe prices</Link>
           </dd>
         </div>
         <div>
@@ -72,17 +69,19 @@ export function NetworkRunPanel({ projectId, view, units, showing, onShow }: {
           </dd>
         </div>
       </dl>
-      {warnings.length > 0 && (
-        <ul className="mt-3 space-y-1 text-sm" aria-label="Network findings">
-          {warnings.map((w, i) => (
-            <li key={i} className={w.severity === 'danger' ? 'text-clay-700' : w.severity === 'warning' ? 'text-ochre-700' : 'text-creek-700'}>
-              <strong>{SEVERITY_WORDS[w.severity]}</strong>
-              {nameOf(view, w) ? ` — ${nameOf(view, w)}` : ''}
-              {w.chainageM !== undefined ? ` at chainage ${formatQuantity('chainage', w.chainageM, units)}` : ''}: {w.message}
-            </li>
-          ))}
-        </ul>
+      {canEdit && sized?.feasible && view.runs.size && (
+        <div className="mt-3 flex flex-wrap items-center gap-3 rounded-md border border-moss-100 bg-moss-50/50 p-2 text-sm">
+          <span className="text-creek-800">Write the chosen pipes to the network&apos;s pipes and lines (each line&apos;s stretches follow the sizes; one change, all or nothing).</span>
+          <Button onClick={() => apply.mutate(view.runs.size!.id)} disabled={apply.isPending || working}>Apply the chosen sizes</Button>
+          {apply.data && <span role="status" data-testid="applied-sizes">Applied to {apply.data.pipes} {apply.data.pipes === 1 ? 'pipe' : 'pipes'} and {apply.data.lines} {apply.data.lines === 1 ? 'line' : 'lines'}.</span>}
+        </div>
       )}
+      {apply.error && <div className="mt-3"><FormMessage message={apply.error.message} /></div>}
+      <NetworkFindings view={view} warnings={warnings} units={units} label="Network findings" />
+      <p className="mt-3 text-sm">
+        <a className="underline" href={`/api/projects/${projectId}/network/report`} download>Download the network report (PDF)</a>
+        <span className="text-xs text-creek-600"> — the schematic, heads and pressures, flows and velocities, the last sizes and cost, and the last day run.</span>
+      </p>
       <p className="mt-3 text-xs text-creek-600">
         Caution: flows and pressures are estimates from published friction formulas. Pipe ratings, surge and drinking-water rules are for
         local codes and licensed practice to confirm before anything is built.

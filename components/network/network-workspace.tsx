@@ -16,6 +16,8 @@ import type { CommentRecord } from '@/lib/review/comment-types';
 import { networkPart, networkPinsOf } from '@/lib/review/threads';
 import type { UnitSystem } from '@/lib/units';
 import { AddLinkForm, AddNodeForm } from './network-forms';
+import { DayView } from './day-view';
+import { EditPart } from './edit-part';
 import { DemandEditor } from './demand-editor';
 import { LinkTable, NodeTable } from './network-tables';
 import { NetworkRunPanel } from './network-run-panel';
@@ -65,7 +67,7 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
 
   return (
     <div className="space-y-5">
-      <NetworkRunPanel projectId={projectId} view={view} units={units} showing={showing} onShow={setShowing} />
+      <NetworkRunPanel projectId={projectId} view={view} units={units} showing={showing} onShow={setShowing} canEdit={canEdit} />
       <div ref={schematicRef} className="scroll-mt-4" />
       <Panel title="Schematic" aside={<span className="text-xs text-creek-600">{shown ? (showing === 'size' ? 'Showing the least-cost sizes' : 'Showing the peak-hour solve') : 'Not solved yet'}</span>}>
         {view.records.nodes.length === 0 ? (
@@ -90,6 +92,7 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
           </p>
         )}
       </Panel>
+      <DayView view={view} units={units} />
       <div className="grid gap-5 xl:grid-cols-2">
         <Panel title="Nodes">
           <NodeTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
@@ -98,6 +101,11 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
           <LinkTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
         </Panel>
       </div>
+      {canEdit && (
+        <Panel title="Change the picked part">
+          <EditPart projectId={projectId} view={view} units={units} selectedId={selectedId} />
+        </Panel>
+      )}
       {canEdit && (
         <div className="grid gap-5 xl:grid-cols-2">
           <Panel title="Add a part">

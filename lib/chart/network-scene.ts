@@ -67,6 +67,33 @@ function midCourse(course: readonly { x: number; y: number }[]): { x: number; y:
   return course[Math.floor(half)];
 }
 
+/** Label text lines are this far apart, px; labels closer than a box of this size would overlap. */
+const LABEL_LINE_PX = 12;
+const LABEL_WIDTH_PX = 140;
+
+/**
+ * Where along its course a link's label goes: the middle, unless another label is already there (two
+ * lines on one route share a course), then a third or two thirds along, and failing that stacked
+ * below the labels in the way. Records the place taken.
+ */
+function labelIndex(course: readonly { x: number; y: number }[], placed: { x: number; y: number; lines: number }[], lines: number): { index: number; dy: number } {
+  const clash = (p: { x: number; y: number }, dy: number) =>
+    placed.find((q) => Math.abs(q.x - p.x) < LABEL_WIDTH_PX && p.y + dy < q.y + q.lines * LABEL_LINE_PX && q.y < p.y + dy + lines * LABEL_LINE_PX);
+  const last = course.length - 1;
+  const candidates = [0.5, 1 / 3, 2 / 3, 0.2, 0.8].map((f) => Math.round(last * f));
+  for (const index of candidates) {
+    if (!clash(course[index], 0)) {
+      placed.push({ ...course[index], lines });
+      return { index, dy: 0 };
+    }
+  }
+  const index = candidates[0];
+  let dy = 0;
+  for (let other = clash(course[index], dy); other; other = clash(course[index], dy)) dy = other.y + other.lines * LABEL_LINE_PX + 2 - course[index].y;
+  placed.push({ x: course[index].x, y: course[index].y + dy, lines });
+  return { index, dy };
+}
+
 export function buildNetworkScene({ view, layout, solve, units, width, height, selectedId, pins = [] }: NetworkSceneOptions): SvgNode {
   const points = Object.values(layout.nodes).concat(Object.values(layout.courses).flat().map((p) => ({ ...p, from: 'route' as const })));
   const xs = points.map((p) => p.x);
@@ -86,6 +113,7 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
 
   const linkLayer: SvgNode[] = [];
   const linkLabels: SvgNode[] = [];
+  const placedLabels: { x: number; y: number; lines: number }[] = [];
   for (const link of view.records.links) {
     const course = layout.courses[link.id] ?? [];
     if (course.length < 2) continue;
@@ -97,20 +125,27 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
       d: path(course) ?? '', fill: 'none', stroke: LINK_STROKE[link.kind], 'stroke-width': selected ? strokeWidth + 2 : strokeWidth,
       'stroke-dasharray': link.kind === 'valve' ? '6 3' : undefined, 'data-link-id': link.id, 'data-kind': link.kind,
     }));
-    const mid = midCourse(course);
-    const before = course[Math.max(0, Math.floor(course.length / 2) - 1)];
-    const after = course[Math.min(course.length - 1, Math.floor(course.length / 2) + 1)];
+    const words = [link.name];
+    if (result) words.push('', '');
+    // A straight link has only its two ends: give it points a third, half and two thirds along, so its
+    // label can sit halfway (or step aside for another label) rather than on an end node.
+    const along = course.length === 2
+      ? [0, 1 / 3, 1 / 2, 2 / 3, 1].map((f) => ({ x: course[0].x + f * (course[1].x - course[0].x), y: course[0].y + f * (course[1].y - course[0].y) }))
+      : course;
+    const at = labelIndex(along.map((p) => ({ x: xOf(p.x), y: yOf(p.y) })), placedLabels, words.length);
+    const mid = along[at.index];
+    const before = along[Math.max(0, at.index - 1)];
+    const after = along[Math.min(along.length - 1, at.index + 1)];
     const forward = !result || result.flowM3s >= 0;
     const angle = (Math.atan2(yOf(after.y) - yOf(before.y), xOf(after.x) - xOf(before.x)) * 180) / Math.PI + (forward ? 0 : 180);
-    const words = [link.name];
     if (result) {
       const sizes = [...new Set(result.pieces.map((p) => p.pipeLabel))];
-      words.push(`${sizes.join(' / ')}`);
-      words.push(`${formatQuantity('designFlow', Math.abs(result.flowM3s), units)} ${forward ? '→' : '←'}`);
+      words[1] = sizes.join(' / ');
+      words[2] = `${formatQuantity('designFlow', Math.abs(result.flowM3s), units)} ${forward ? '→' : '←'}`;
     }
     linkLabels.push(el('g', { 'data-link-label': link.id },
       result ? el('path', { d: 'M-6,-4 L6,0 L-6,4 Z', fill: PROFILE_COLOURS.ink, transform: `translate(${xOf(mid.x)},${yOf(mid.y)}) rotate(${angle})` }) : null,
-      ...words.map((w, i) => el('text', { x: xOf(mid.x) + 8, y: yOf(mid.y) - 6 + i * 12, 'font-size': 10, fill: PROFILE_COLOURS.ink, 'paint-order': 'stroke', stroke: '#fbfaf6', 'stroke-width': 3 }, w)),
+      ...words.map((w, i) => el('text', { x: xOf(mid.x) + 8, y: yOf(mid.y) - 6 + at.dy + i * 12, 'font-size': 10, fill: PROFILE_COLOURS.ink, 'paint-order': 'stroke', stroke: '#fbfaf6', 'stroke-width': 3 }, w)),
     ));
   }
 
@@ -125,7 +160,9 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
       selectedId === node.id ? el('circle', { cx: px, cy: py, r: 15, fill: 'none', stroke: '#c98d12', 'stroke-width': 2 }) : null,
       nodeShape(node.kind, px, py, NODE_FILL[node.kind] ?? '#fff')));
     const pressure = pressureWords(nodeResult.get(node.id), units);
-    nodeLabels.push(el('g', { 'data-node-label': node.id },
+    // Two nodes at one place (two lines from one spring box) stack their labels rather than print over each other.
+    const { dy } = labelIndex([{ x: px, y: py + 4 }], placedLabels, 2);
+    nodeLabels.push(el('g', { 'data-node-label': node.id, transform: dy ? `translate(0, ${dy})` : undefined },
       el('text', { x: px + 12, y: py + 14, 'font-size': 11, 'font-weight': 600, fill: PROFILE_COLOURS.ink, 'paint-order': 'stroke', stroke: '#fbfaf6', 'stroke-width': 3 }, `${node.name}`),
       el('text', { x: px + 12, y: py + 26, 'font-size': 10, fill: '#4b5a60', 'paint-order': 'stroke', stroke: '#fbfaf6', 'stroke-width': 3 }, [KIND_WORDS[node.kind], pressure].filter(Boolean).join(' · ')),
     ));

@@ -5,7 +5,7 @@ import { lineInputOf } from '../lines/line-input';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
 import { runInWorker } from '../workers/pool';
-import { lineSiteContext } from './line-context';
+import { lineFeedContext } from './line-context';
 import { getLine, stationsOfLine, type LineRecord } from './lines';
 
 export interface AnalysedLine {
@@ -22,7 +22,8 @@ export async function analyseSavedLine(lineId: string): Promise<AnalysedLine> {
   if (!line) throw notFound();
   if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
   const stations = await stationsOfLine(line.routeId, line);
-  const context = await lineSiteContext(line.projectId);
+  // What feeds the line comes from the network when it knows (lineFeedOf): start level or head, flow per piece.
+  const context = await lineFeedContext(line.projectId, line.id);
   // On the worker pool: a long line's analysis must not hold the request thread.
   return { line, stations, context, analysis: await runInWorker('line.analyse', { line: lineInputOf(line.design, stations, context) }) };
 }

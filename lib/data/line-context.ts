@@ -4,6 +4,7 @@ import { models } from '../../models';
 import { AppError } from '../errors';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineDesign } from '../validations/line-design';
+import { networkFlowsOfLine } from './line-network-flows';
 import { pumpOutletHeadForProject } from './ram-sites';
 
 /**
@@ -23,6 +24,15 @@ export async function lineSiteContext(projectId: string, today: string = new Dat
     overdueDrainDownOn: overdue?.dueOn ?? null,
     unitSystem: project?.unitSystem ?? 'metric',
   };
+}
+
+/**
+ * The site context of one line with the network's word on it (its feed and solved flow per piece),
+ * solved now on the worker pool: what the line page, the line's analysis and its report read.
+ */
+export async function lineFeedContext(projectId: string, lineId: string): Promise<LineSiteContext> {
+  const [site, network] = await Promise.all([lineSiteContext(projectId), networkFlowsOfLine(lineId)]);
+  return { ...site, network };
 }
 
 /** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */

@@ -17,9 +17,9 @@ export async function networkFlowsOfLine(lineId: string): Promise<LineNetworkFlo
   const context = await loadNetworkContext(line.projectId);
   try {
     const solve = await runInWorker('network.solve', context, { timeLimitMs: 30_000 });
-    return lineNetworkFlows(context.records, lineId, solve, null);
+    return lineNetworkFlows(context, lineId, solve, null);
   } catch (error) {
-    if (error instanceof HydraulicsInputError) return lineNetworkFlows(context.records, lineId, null, error.message);
+    if (error instanceof HydraulicsInputError) return lineNetworkFlows(context, lineId, null, error.message);
     throw error;
   }
 }

@@ -214,6 +214,25 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
   });
 }
 
+/**
+ * Replaces a line's pipe stretches inside the caller's transaction (least-cost sizes applied from
+ * the network): the line is locked, the new design checked against its stations like any edit,
+ * its revision counted and the edit recorded. A design that no longer fits is a 400 naming the field.
+ */
+export async function setLineStretches(transaction: Transaction, lineId: string, userId: string, stretches: LineDesign['stretches'], summary: string): Promise<void> {
+  const line = await models().Line.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!line) throw notFound('A line of the network is gone; size the network again');
+  if (!line.routeId) throw new AppError('bad_request', `The line "${line.name}" has lost its route; pick a route first`, { routeId: ['Pick a route'] });
+  const design = { ...designOf(line), stretches };
+  const stations = await stationsOfLine(line.routeId, { fromChainageM: line.fromChainageM, toChainageM: line.toChainageM });
+  assertDesignFits(design, stations, await lineSiteContext(line.projectId));
+  line.set(columnsOf(design));
+  line.revision += 1;
+  line.updatedBy = userId;
+  await line.save({ transaction });
+  await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary });
+}
+
 export async function deleteLine(lineId: string, userId: string): Promise<void> {
   await models().sequelize.transaction(async (transaction) => {
     const line = await models().Line.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });

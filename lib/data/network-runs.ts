@@ -2,7 +2,7 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { assertNetworkInput } from '../../hydraulics/index';
 import { models } from '../../models';
-import { notFound } from '../errors';
+import { AppError, notFound } from '../errors';
 import { log } from '../log';
 import type { NetworkContext } from '../network/context';
 import type { NetworkJobView, NetworkRunKind } from '../network/jobs';
@@ -35,6 +35,19 @@ async function runTask(kind: NetworkRunKind, context: NetworkContext, input: Net
 }
 
 /**
+ * Sizing needs at least one pipe or line to choose a size for; a network of one node, or of valves
+ * only, is a 400 that says so rather than an empty "least-cost" answer.
+ */
+function assertSomethingToSize(records: NetworkContext['records']): void {
+  const sizable = records.links.filter((link) => link.kind !== 'valve');
+  if (sizable.length > 0) return;
+  const why = records.nodes.length < 2
+    ? `the network has ${records.nodes.length === 0 ? 'no parts' : 'only one part'}, so there is no pipe to size`
+    : 'no two parts are joined by a pipe or a line (valves keep their own size)';
+  throw new AppError('bad_request', `Nothing to size: ${why}. Join parts with a pipe or a line first.`, { links: ['Join parts with a pipe or a line to size'] });
+}
+
+/**
  * Starts a run of the project's network. The network is built and checked here (linear in its size),
  * so a bad network is a 400 naming the node or link; the work itself runs on the worker pool and
  * its progress and result are kept in `network_jobs`, so any app instance can answer the poll. One
@@ -48,6 +61,7 @@ export async function startNetworkRun(projectId: string, userId: string, input: 
   });
   if (running) return networkJobView(running);
   const context = await loadNetworkContext(projectId);
+  if (input.kind === 'size') assertSomethingToSize(context.records);
   const built = buildNetworkInput(context, input.kind === 'day' ? 'day' : 'peak');
   try {
     assertNetworkInput(built.input);

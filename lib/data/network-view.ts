@@ -50,7 +50,7 @@ export async function networkView(projectId: string): Promise<NetworkView> {
     unitSystem: project?.unitSystem ?? 'metric',
     records,
     lines: lines.filter((line): line is NetworkLineSummary => line !== null),
-    tanks: lift.tanks.map(({ id, name }) => ({ id, name })),
+    tanks: lift.tanks,
     ramSites: lift.ramSites.map(({ id, name }) => ({ id, name })),
     waterSources: lift.sources.map(({ id, name }) => ({ id, name })),
     demandUses: lift.demandUses.map((use) => {

@@ -12,6 +12,8 @@ export interface LineAnswers {
   capacityM3s: number;
   /** The design flow is more than the line can carry. */
   overCapacity: boolean;
+  /** The flow is a schedule per piece (the network's): `flowM3s` is the flow at the start, dropping at each take-off. */
+  scheduled: boolean;
   /** The friction formula every figure was computed with. */
   frictionMethod: FrictionMethod | undefined;
   endResidualHeadM: number;
@@ -23,6 +25,7 @@ export interface LineAnswers {
 
 type AnswerInput = ProfileChartData & {
   flowSource: 'design' | 'found';
+  flowSchedule?: readonly unknown[];
   end: { residualHeadM: number; targetResidualHeadM: number };
   warnings: readonly LineWarning[];
 };
@@ -45,12 +48,16 @@ export function lineAnswers(a: AnswerInput): LineAnswers {
   const stretch = a.stretches[stretchIndex[worst]];
   const counts: Record<WarningSeverity, number> = { danger: 0, warning: 0, info: 0 };
   for (const w of a.warnings) counts[w.severity] += 1;
+  const scheduled = (a.flowSchedule?.length ?? 0) > 1;
   const capacityM3s = a.reaches.length > 0 ? Math.min(...a.reaches.map((reach) => reach.capacityM3s)) : a.flowM3s;
   return {
     flowM3s: a.flowM3s,
     flowSource: a.flowSource,
     capacityM3s,
-    overCapacity: a.flowSource === 'design' && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
+    // A reach's capacity is for one flow through the whole line; with a schedule the flow drops at each
+    // take-off, so whether the water gets there is the end residual's answer, not this comparison.
+    overCapacity: !scheduled && a.flowSource === 'design' && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
+    scheduled,
     frictionMethod: a.settings.frictionMethod,
     endResidualHeadM: a.end.residualHeadM,
     endTargetHeadM: a.end.targetResidualHeadM,

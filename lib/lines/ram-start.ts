@@ -1,7 +1,11 @@
 import { HydraulicsInputError, type LineFlow, type LineStart } from '../../hydraulics/index';
 import type { PumpOutletHead } from '../lift/pump-outlet';
+import type { LineNetworkFlows } from '../network/line-flows';
 
-/** What a line reads from the rest of its project at each analysis: the ram sites that can feed it and the site's frost depth. */
+/**
+ * What a line reads from the rest of its project at each analysis: the ram sites that can feed it,
+ * the site's frost depth, and what the network says feeds it (its start and flow per piece).
+ */
 export interface LineSiteContext {
   ramOutlets: PumpOutletHead[];
   /** Depth frost reaches at the site, m; null when the project does not say. */
@@ -10,6 +14,8 @@ export interface LineSiteContext {
   unitSystem?: 'metric' | 'us';
   /** Due date of the earliest open drain-down task that is past due, ISO date; null when none. */
   overdueDrainDownOn?: string | null;
+  /** The network's word on this line, when it was asked (the line page, its analysis and report). */
+  network?: LineNetworkFlows | null;
 }
 
 export const EMPTY_SITE_CONTEXT: LineSiteContext = { ramOutlets: [], frostDepthM: null, overdueDrainDownOn: null };

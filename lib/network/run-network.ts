@@ -1,7 +1,7 @@
-import { findPipe, runNetworkDay, sizeNetwork, solveNetwork, type SizingCandidate } from '../../hydraulics/index';
+import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, type SizingCandidate } from '../../hydraulics/index';
 import type { NetworkContext } from './context';
 import { buildNetworkInput, type BuiltNetwork } from './network-input';
-import type { DayRunResult, SizeRunResult, SolveRunResult } from './run-result';
+import type { DayRunResult, SizeRunResult, SolveRunResult, TankStorageView } from './run-result';
 import { explainCoreError, recordWarning, solveRunResult } from './solve-result';
 
 /** One steady solve of the network at the peak hour (every outlet drawing its peak, tanks at their lowest working level). */
@@ -63,7 +63,44 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
   };
 }
 
-/** A 24-hour day in hourly steps: tank levels, the source draw and the flags the core raises. */
+/**
+ * Each tank's storage sized from the outlets it actually serves (traced along the flows solved at
+ * the mean draw), with the reserve days of its tank record; keyed by the record nodes.
+ */
+export function tankStorageRun(context: NetworkContext, built: BuiltNetwork = buildNetworkInput(context, 'day')): TankStorageView[] {
+  const reserveDays: Record<string, number> = {};
+  for (const node of context.records.nodes) {
+    const tank = node.kind === 'tank' ? context.tanks.find((t) => t.id === node.tankId) : undefined;
+    if (tank) reserveDays[node.id] = tank.reserveDays;
+  }
+  let results;
+  try {
+    results = sizeTankStorage(built.input, { reserveDays: 0 });
+  } catch (error) {
+    throw explainCoreError(built, context.records, error);
+  }
+  const tankIdOf = new Map(context.records.nodes.map((n) => [n.id, n.tankId]));
+  return results.map((result) => {
+    const dailyDemandM3 = result.demandHourlyM3.reduce((sum, v) => sum + v, 0);
+    const reserve = (reserveDays[result.tankId] ?? 0) * dailyDemandM3;
+    const storage = result.storage;
+    return {
+      nodeId: result.tankId,
+      tankId: tankIdOf.get(result.tankId) ?? null,
+      servedOutlets: result.servedOutlets.map((o) => ({ nodeId: o.outletId, share: o.share, demandM3s: o.demandM3s })),
+      dailyDemandM3,
+      demandHourlyM3: result.demandHourlyM3,
+      supplyM3s: result.supply.flowM3s,
+      cycleStorageM3: storage ? storage.cycleStorageM3 : null,
+      reserveStorageM3: storage ? reserve : null,
+      totalStorageM3: storage ? storage.cycleStorageM3 + reserve : null,
+      fillTimeFromEmptyS: storage ? storage.fillTimeFromEmptyS : null,
+      problem: result.problem ? result.problem.replace(/"([^"]+)"/g, (quoted, key: string) => (built.names[key] ? `"${built.names[key]}"` : quoted)) : null,
+    };
+  });
+}
+
+/** A 24-hour day in hourly steps: tank levels, the source draw, outlet pressures and the flags the core raises. */
 export function dayNetworkRun(context: NetworkContext): DayRunResult {
   const built = buildNetworkInput(context, 'day');
   let day;
@@ -74,11 +111,25 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
   }
   const tanks = built.input.nodes.filter((n) => n.kind === 'tank' && n.tank);
   const sources = built.input.nodes.filter((n) => n.kind === 'source' || n.kind === 'ram-outlet');
+  const outlets = built.input.nodes.filter((n) => n.kind === 'outlet');
+  // A network whose tanks serve nothing still has its day; storage is then simply not sized.
+  const storage = new Map<string, number | null>();
+  try {
+    for (const tank of tankStorageRun(context, built)) storage.set(tank.nodeId, tank.totalStorageM3);
+  } catch {
+    // The day's own flags say what is wrong with such a network.
+  }
   return {
     kind: 'day',
     hours: day.steps.map((step) => step.hour),
-    tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: null })),
+    tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: storage.get(tank.id) ?? null })),
     sources: sources.map((source) => ({ nodeId: source.id, drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0), yieldM3s: source.yieldM3s ?? null })),
+    outlets: outlets.map((outlet) => ({
+      nodeId: outlet.id,
+      pressureHeadsM: day.steps.map((step) => step.outletPressureHeadsM[outlet.id] ?? null),
+      minPressureHeadM: outlet.minPressureHeadM ?? null,
+      lowest: day.outletLowestPressureHeadM[outlet.id] ?? null,
+    })),
     warnings: day.warnings.map((warning) => recordWarning(built, warning)),
   };
 }

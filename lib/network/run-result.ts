@@ -59,6 +59,8 @@ export interface DayRunResult {
   hours: number[];
   tanks: { nodeId: string; levelsM: number[]; floorM: number; overflowM: number; storageNeededM3: number | null }[];
   sources: { nodeId: string; drawM3s: number[]; yieldM3s: number | null }[];
+  /** Pressure head at each outlet in every step, and the lowest it saw against what it wants. */
+  outlets: { nodeId: string; pressureHeadsM: (number | null)[]; minPressureHeadM: number | null; lowest: { pressureHeadM: number; hour: number } | null }[];
   warnings: NetworkRunWarning[];
 }
 
@@ -71,6 +73,24 @@ export interface SizeRunResult {
   /** The solve with the chosen pipes. */
   solution: SolveRunResult | null;
   warnings: NetworkRunWarning[];
+}
+
+/** Storage for one tank of the network, sized from the outlets it serves (keyed by the records). */
+export interface TankStorageView {
+  nodeId: string;
+  /** The tank record (Lift & storage) the node stands for. */
+  tankId: string | null;
+  servedOutlets: { nodeId: string; share: number; demandM3s: number }[];
+  /** What its outlets draw from it over a day, m³. */
+  dailyDemandM3: number;
+  demandHourlyM3: number[];
+  supplyM3s: number;
+  cycleStorageM3: number | null;
+  reserveStorageM3: number | null;
+  totalStorageM3: number | null;
+  fillTimeFromEmptyS: number | null;
+  /** Why it could not be sized, when it could not. */
+  problem: string | null;
 }
 
 export type NetworkRunResult = SolveRunResult | DayRunResult | SizeRunResult;

@@ -1,4 +1,5 @@
 import type { LineRouteStation } from '../lines/route-stations';
+import type { TankRecord } from '../lift/records';
 import type { UnitSystem } from '../units';
 import type { NetworkJobView } from './jobs';
 import type { NetworkRecords } from './records';
@@ -29,7 +30,8 @@ export interface NetworkView {
   unitSystem: UnitSystem;
   records: NetworkRecords;
   lines: NetworkLineSummary[];
-  tanks: { id: string; name: string }[];
+  /** The tank records (Lift & storage) a tank node stands for: size, levels, floor. */
+  tanks: TankRecord[];
   ramSites: { id: string; name: string }[];
   waterSources: { id: string; name: string }[];
   demandUses: NetworkDemandUse[];

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ProjectTankStorage } from '../data/network-tank-storage';
 import type { NetworkJobView } from '../network/jobs';
-import type { LineNetworkFlows } from '../network/line-flows';
 import type { NetworkView } from '../network/view';
 import type { NetworkLinkInput, NetworkNodeInput, NetworkRunInput } from '../validations/network';
 import { fetchJson } from './fetch-json';
@@ -41,6 +41,26 @@ export const usePlaceTakeOff = (projectId: string) =>
 export const useTieDemandUse = (projectId: string) =>
   useNetworkWrite(projectId, ({ useId, outletNodeId }: { useId: string; outletNodeId: string | null }) => ({ url: `/demand-uses/${useId}/outlet`, method: 'PUT', body: { outletNodeId } }));
 
+/** Writes the pipes a finished sizing run chose to the network's pipes and lines (the line pages then show them). */
+export function useApplySizes(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (jobId: string) =>
+      (await fetchJson<{ applied: { pipes: number; lines: number } }>(`/api/projects/${projectId}/network/runs/${jobId}/apply`, { method: 'POST' })).applied,
+    onSuccess: async () => {
+      await client.invalidateQueries({ queryKey: networkKeys.view(projectId) });
+      await client.invalidateQueries({ queryKey: ['lines'] });
+    },
+  });
+}
+
+/** Each tank's storage from the outlets it serves in the network, for the Lift & storage page. */
+export const tankStorageQuery = (projectId: string) =>
+  queryOptions({
+    queryKey: ['projects', projectId, 'network', 'tank-storage'] as const,
+    queryFn: async () => (await fetchJson<{ storage: ProjectTankStorage }>(`/api/projects/${projectId}/network/tank-storage`)).storage,
+  });
+
 /** Starts a run; the page then polls it until it is done. */
 export function useStartNetworkRun(projectId: string) {
   return useMutation({
@@ -63,10 +83,3 @@ export function useNetworkRun(projectId: string, runId: string | null) {
     refetchInterval: (query) => (query.state.data && (query.state.data.status === 'done' || query.state.data.status === 'failed') ? false : 500),
   });
 }
-
-/** The network's flows along one line, for the line page. */
-export const lineNetworkFlowsQuery = (lineId: string) =>
-  queryOptions({
-    queryKey: ['lines', lineId, 'network-flows'] as const,
-    queryFn: async () => (await fetchJson<{ flows: LineNetworkFlows }>(`/api/lines/${lineId}/network-flows`)).flows,
-  });

@@ -1,5 +1,6 @@
 import type PDFDocument from 'pdfkit';
 import type { RamFeedAnswers } from '../lines/ram-feed';
+import type { LineNetworkFlows } from '../network/line-flows';
 import { drainPointsOf, type LineWinterPlan } from '../lines/winter';
 import { heading, INK, table } from './pdf-table';
 import { pdfText } from './pdf-text';
@@ -52,4 +53,22 @@ export function winterSection(doc: Doc, plan: LineWinterPlan, u: DisplayUnits): 
     [{ heading: 'Drain point', width: 120, align: 'right' }, { heading: 'Where', width: 160 }, { heading: 'Pipe elevation', width: 120, align: 'right' }],
     drains.map((d) => [`ch. ${formatQuantity('chainage', d.chainageM, u.system)}`, d.place, formatQuantity('length', d.elevationM, u.system)]),
   );
+}
+
+/** What feeds the line in the network and the flow of each piece the analysis used (it drops at every take-off). */
+export function networkFeedSection(doc: Doc, flows: LineNetworkFlows, used: { start: boolean; flow: boolean }, u: DisplayUnits): void {
+  heading(doc, 'In the network');
+  const start = !used.start ? 'The line names its ram site: its start is the ram plan (see Lift).' : flows.startFrom ? `The profile starts at ${flows.startFrom}${flows.feed ? ` (${flows.feed.name})` : ''}.` : "The network does not say what feeds this line; the line's own start is used.";
+  const flow = flows.schedule && !used.flow ? " The analysis uses the ram's delivered flow; the network's flows are below for comparison." : flows.schedule ? ' Every check above ran with the solved flow of each piece below (peak hour).' : ` Not solved: ${flows.reason ?? 'no flow for this line'}; the line's own design flow is used.`;
+  doc.font('Helvetica').fontSize(9).fillColor(INK).text(pdfText(start + flow));
+  if (!flows.schedule) return;
+  doc.moveDown(0.3);
+  table(doc, [{ heading: 'From ch.', width: 110, align: 'right' }, { heading: 'To ch.', width: 110, align: 'right' }, { heading: 'After', width: 170 }, { heading: 'Flow', width: 120, align: 'right' }, { heading: 'Pipe', width: 252 }],
+    flows.pieces.map((piece) => [
+      formatQuantity('chainage', piece.fromChainageM ?? 0, u.system),
+      formatQuantity('chainage', piece.toChainageM ?? 0, u.system),
+      flows.takeOffs.find((t) => Math.abs(t.chainageM - (piece.fromChainageM ?? -1)) < 1e-6)?.name ?? '',
+      formatQuantity('designFlow', piece.flowM3s, u.system),
+      piece.pipeLabel,
+    ]));
 }

@@ -15,7 +15,7 @@ import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type 
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { markEveryPage } from './review-mark';
-import { liftSection, winterSection } from './feed-sections';
+import { liftSection, networkFeedSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
 export interface LineReportInput {
@@ -73,7 +73,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   const t = analysis.settings.waterTemperatureC;
   const flowWords = answers.overCapacity
     ? `at most ${formatQuantity('designFlow', answers.capacityM3s, u.system)} (the design flow of ${formatQuantity('designFlow', answers.flowM3s, u.system)} is more than the line carries by gravity)`
-    : `${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'})`;
+    : `${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.scheduled ? "at the start, from the network's solve; it drops at each take-off" : answers.flowSource === 'design' ? 'design flow' : 'found by gravity'})`;
   doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
     `Flow delivered: ${flowWords}. ` +
       `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
@@ -95,6 +95,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   doc.addPage();
   const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
   if (feed) liftSection(doc, feed, u, t);
+  if (context.network) networkFeedSection(doc, context.network, { start: line.design.start.kind !== 'ram-site', flow: analysis.flowSchedule !== undefined }, u);
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, withWinter, u);

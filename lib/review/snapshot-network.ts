@@ -36,7 +36,7 @@ export function snapshotNetworkView(snapshot: DesignSnapshot): NetworkView | nul
     unitSystem: snapshot.project.unitSystem,
     records: network,
     lines: snapshot.lines.filter((line) => linked.has(line.id)).map((line) => lineSummaryOf(line, line.stations)).filter((line): line is NetworkLineSummary => line !== null),
-    tanks: snapshot.lift.tanks.map(({ id, name }) => ({ id, name })),
+    tanks: snapshot.lift.tanks,
     ramSites: snapshot.lift.ramSites.map(({ id, name }) => ({ id, name })),
     waterSources: snapshot.lift.sources.map(({ id, name }) => ({ id, name })),
     demandUses: [],

@@ -16,7 +16,7 @@ export const DEMAND_FROM = ['uses', 'fixed', 'line'] as const;
 
 const NodeDataSchema = z.strictObject({
   waterLevelM: finite('Water level').nullable().optional(),
-  typedPumpHead: z.strictObject({ outletHeadM: finite('Pump outlet head'), shutoffHeadM: finite('Pump shut-off head') }).optional(),
+  typedPumpHead: z.strictObject({ outletHeadM: finite('Pump outlet head'), shutoffHeadM: finite('Pump shut-off head').optional() }).optional(),
   inletFloatValve: z.boolean({ error: 'Float valve must be true or false' }).optional(),
   outletKind: z.enum(OUTLET_KINDS, { error: `Outlet must be one of ${OUTLET_KINDS.join(', ')}` }).optional(),
   residualHeadM: nonNegative('Residual head wanted').max(200, 'Residual head wanted must be at most 200 m').nullable().optional(),

@@ -2,7 +2,7 @@ import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
 import { thinAnalysis } from '../lines/thin-analysis';
 import type { NetworkContext } from '../network/context';
-import { dayNetworkRun, sizeNetworkRun, solveNetworkRun } from '../network/run-network';
+import { dayNetworkRun, sizeNetworkRun, solveNetworkRun, tankStorageRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
 import { sniffSurveyFile } from '../survey/sniff';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -28,6 +28,8 @@ export const TASKS = {
   'network.solve': (input: NetworkContext) => solveNetworkRun(input),
   /** A 24-hour day of the network in hourly steps. */
   'network.day': (input: NetworkContext) => dayNetworkRun(input),
+  /** Each tank's storage from the outlets it serves (the Lift & storage page). */
+  'network.tank-storage': (input: NetworkContext) => tankStorageRun(input),
   /** Least-cost pipe sizes from the team's price list (HiGHS, loaded in the worker). */
   'network.size': (input: { context: NetworkContext; onePipePerLink: boolean; timeLimitS: number }) => sizeNetworkRun(input.context, input),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */

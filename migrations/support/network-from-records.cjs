@@ -59,7 +59,8 @@ async function startNodeOf(sequelize, transaction, line) {
     return {
       id: await insertNode(sequelize, transaction, {
         projectId: line.project_id, kind: 'source', name: `${line.name}: pump outlet`, elevationM: start.outletHeadM,
-        data: { waterLevelM: start.outletHeadM, typedPumpHead: { outletHeadM: start.outletHeadM, shutoffHeadM: start.shutoffHeadM ?? start.outletHeadM } },
+        data: { waterLevelM: start.outletHeadM, // No shut-off head typed: the line analysis's own default applies (it is not the outlet head).
+        typedPumpHead: { outletHeadM: start.outletHeadM, ...(start.shutoffHeadM !== undefined ? { shutoffHeadM: start.shutoffHeadM } : {}) } },
         notes: 'Typed pump heads taken from the line. Point the line at its ram site to read the heads from the ram plan.',
       }),
       ramSiteId: null,

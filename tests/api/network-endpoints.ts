@@ -1,7 +1,7 @@
 import { models } from '../../models';
 import type { Actor } from '../support/api';
 import { createDemandUseFixture } from '../support/lift-fixtures';
-import { createNodeFixture, createPipeNetworkFixture, outletNodeBody, pipeLinkBody, sourceNodeBody } from '../support/network-fixtures';
+import { createNodeFixture, createPipeNetworkFixture, createSizedJobFixture, outletNodeBody, pipeLinkBody, sourceNodeBody } from '../support/network-fixtures';
 import type { EndpointCase } from './endpoints';
 
 type Expect = Record<Actor, number>;
@@ -74,6 +74,12 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     file: `${P}/runs/[jobId]/route.ts`, method: 'GET', expect: teamWorkers(200),
     params: async (f) => ({ projectId: f.projectId, jobId: (await models().NetworkJob.create({ projectId: f.projectId, kind: 'solve' })).id }),
   },
+  {
+    file: `${P}/runs/[jobId]/apply/route.ts`, method: 'POST', expect: designers(200),
+    params: async (f) => ({ projectId: f.projectId, jobId: (await createSizedJobFixture(f.projectId)).id }),
+  },
+  { file: `${P}/report/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
+  { file: `${P}/tank-storage/route.ts`, method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'teams/[teamId]/price-list/route.ts', method: 'GET', params: (f) => ({ teamId: f.teamId }), expect: anyMember(200) },
   {
     file: 'teams/[teamId]/price-list/route.ts', method: 'PUT', params: (f) => ({ teamId: f.teamId }), expect: designers(200),

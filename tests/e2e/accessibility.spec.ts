@@ -54,6 +54,9 @@ test('no serious accessibility findings on any page an owner reaches, and a skip
     ...(revisionPage ? [revisionPage] : []),
     `/projects/${PROJECT}/activity`,
     '/team',
+    '/team/prices',
+    // The village network: its day view and sizes (when run) are on the page too.
+    '/projects/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2003/network',
     '/account',
   ];
   const findings: Record<string, string[]> = {};

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { MembersTable } from '@/components/team/members-table';
 import { InvitationsTable } from '@/components/team/invitations-table';
 import { InviteForm } from '@/components/team/invite-form';
@@ -44,6 +45,11 @@ export default async function TeamPage() {
         )}
         <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
       </HydrationBoundary>
+      <Panel title="Pipe prices">
+        <p className="text-sm text-creek-700">
+          Least-cost sizing chooses among the pipes the team has priced. <Link className="underline" href="/team/prices">Edit the price list</Link>
+        </p>
+      </Panel>
       <Panel title="Teams">
         <TeamSettings teamId={team.id} teamName={team.name} canRename={manage} />
       </Panel>

@@ -220,7 +220,9 @@ export async function searchLooped(context: SizingContext): Promise<LoopedOutcom
     }
     return found;
   };
-  const largest = evaluate(Int32Array.from(context.ratedByLink, (rated) => rated[rated.length - 1]));
+  // The widest bore, not the dearest: a price list may price a small pipe above a large one.
+  const widest = (rated: number[]) => rated.reduce((best, c) => (context.candidates[c].pipe.insideDiameterM > context.candidates[best].pipe.insideDiameterM ? c : best), rated[rated.length - 1]);
+  const largest = evaluate(Int32Array.from(context.ratedByLink, widest));
   if (!largest.feasible) {
     warnings.push({ code: 'no-feasible-design', severity: 'danger', message: 'Even the largest candidate on every link leaves an outlet short of its residual or a pipe outside the velocity band: add larger candidates, lower the residual wanted, or raise the source.', values: { worstShortfallM: largest.worstShortfallM } });
     return { best: undefined, warnings, evaluations: seen.size };

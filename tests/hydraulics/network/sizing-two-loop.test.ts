@@ -20,4 +20,11 @@ describe('sizeNetwork: the two-loop benchmark [NET-AS77]', () => {
     expect(result.singleSize.feasible).toBe(true);
     expect(result.singleSize.cost as number).toBeGreaterThan(result.cost);
   }, 120_000);
+
+  it('starts its search from the widest pipes even when a small pipe is priced above every large one (invented price)', async () => {
+    const dearSmall = { pipe: { ...inchPipe(0.5), id: 'dear-half-inch' }, costPerM: 10_000 };
+    const result = await sizeNetwork(twoLoopNetwork(new Array(8).fill(24)), { candidates: [...candidates, dearSmall], minPressureHeadM: 30, timeLimitS: 5 });
+    expect(result.feasible).toBe(true);
+    expect(Object.values(result.pipeByLink)).not.toContain('dear-half-inch');
+  }, 120_000);
 });

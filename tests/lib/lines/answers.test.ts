@@ -29,6 +29,17 @@ describe('the flow-delivered answer never shows a flow the line cannot carry', (
     expect(lineAnswers(found).overCapacity).toBe(false);
   });
 
+  it("a network's flow that drops at a take-off is judged by the end residual, not by the start flow against one-flow capacity", () => {
+    const found = analyzeLine({ ...line(0), flow: { kind: 'find' } });
+    // Twice the gravity flow for the first 50 m (a take-off there draws most of it), then well below it.
+    const scheduled = analyzeLine({ ...line(0), flow: { kind: 'schedule', pieces: [{ fromM: 0, flowM3s: found.flowM3s * 2 }, { fromM: 50, flowM3s: found.flowM3s * 0.5 }] } });
+    const answers = lineAnswers(scheduled);
+    expect(answers.scheduled).toBe(true);
+    expect(answers.overCapacity).toBe(false);
+    expect(answers.endResidualHeadM).toBeGreaterThan(5);
+    expect(answers.flowM3s).toBeCloseTo(found.flowM3s * 2, 12);
+  });
+
   it('names the friction formula the figures came from', () => {
     const answers = lineAnswers(analyzeLine(line(0.0002)));
     expect(answers.frictionMethod).toBe('darcy-weisbach');

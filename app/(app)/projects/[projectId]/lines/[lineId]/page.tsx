@@ -5,7 +5,7 @@ import { z } from 'zod';
 import { LineEditor } from '@/components/lines/line-editor';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { listComments, mentionableMembers } from '@/lib/data/comments';
-import { lineSiteContext } from '@/lib/data/line-context';
+import { lineFeedContext } from '@/lib/data/line-context';
 import { getLine, stationsOfLine } from '@/lib/data/lines';
 import { getProject } from '@/lib/data/projects';
 import { can } from '@/lib/permissions';
@@ -29,7 +29,7 @@ export default async function LinePage({ params }: { params: Promise<{ projectId
 
   const queryClient = getQueryClient();
   queryClient.setQueryData(lineKeys.one(line.id), line);
-  queryClient.setQueryData(lineKeys.siteContext(line.id), await lineSiteContext(project.id));
+  queryClient.setQueryData(lineKeys.siteContext(line.id), await lineFeedContext(project.id, line.id));
   if (line.routeId) {
     const stations = await stationsOfLine(line.routeId, line).catch(() => []);
     queryClient.setQueryData(lineKeys.stations(line.id), stations);

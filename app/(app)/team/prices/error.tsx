@@ -1,0 +1,7 @@
+'use client';
+
+import { SegmentError } from '@/components/ui/segment-error';
+
+export default function PricesError({ reset }: { error: Error; reset: () => void }) {
+  return <SegmentError what="The price list" reset={reset} />;
+}
