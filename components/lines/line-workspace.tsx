@@ -1,9 +1,12 @@
 'use client';
 
-import { useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
+import { lineAnchorChoices } from '@/lib/review/anchor-choices';
+import type { CommentRecord } from '@/lib/review/comment-types';
+import { pinChainage, pinsOf } from '@/lib/review/threads';
 import type { LineRecord } from '@/lib/data/lines';
 import { lineAnswers } from '@/lib/lines/answers';
 import { SHORT_CAUTION } from '@/lib/lines/cautions';
@@ -11,11 +14,13 @@ import { addDevice } from '@/lib/lines/edit-design';
 import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
-import { lineWinterPlan } from '@/lib/lines/winter';
+import { lineWinterPlan, winterWarnings } from '@/lib/lines/winter';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Panel } from '@/components/ui/panel';
+import { CommentsPanel } from '@/components/reviews/comments-panel';
+import { useCommentThreads } from '@/components/reviews/use-comment-threads';
 import { DeviceTable } from './device-table';
 import { EndsForm } from './ends-form';
 import { FittingTable } from './fitting-table';
@@ -44,16 +49,25 @@ export interface LineWorkspaceProps {
   projectName: string;
   unitSystem: UnitSystem;
   canEdit: boolean;
+  /** May pin comments on the working copy's profile (owners, designers, reviewers). */
+  canComment: boolean;
+  members: { id: string; name: string }[];
 }
 
 /** The designer's screen: answers first, warnings, the long profile beside the plan, then the design and the results. */
-export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit }: LineWorkspaceProps) {
+export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit, canComment, members }: LineWorkspaceProps) {
   const units = displayUnits(unitSystem);
   const draft = useLineDraft(line, stations, context, canEdit);
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
-  const [view, setView] = useState<ChainageView>({ fromM: firstM, toM: lastM });
+  const comments = useCommentThreads(line.projectId, null, [{ kind: 'line', lineId: line.id }, { kind: 'project' }]);
+  // A thread picked by the address opens with the profile round its pin.
+  const [view, setView] = useState<ChainageView>(() => {
+    const at = comments.threads.find((t) => t.thread.id === comments.selectedId)?.thread;
+    const pinnedAt = at ? pinChainage(at, line.id) : null;
+    return pinnedAt === null ? { fromM: firstM, toM: lastM } : viewAround(pinnedAt, pinnedAt, firstM, lastM);
+  });
   const [exaggeration, setExaggeration] = useState<number | 'auto'>('auto');
   const [hoverM, setHoverM] = useState<number | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
@@ -61,26 +75,47 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const [placeKind, setPlaceKind] = useState<LineDeviceKind>('air-release-valve');
   const [note, setNote] = useState<string | null>(null);
   const profileRef = useRef<HTMLDivElement>(null);
+  const openedWithComment = useRef(comments.selectedId !== null);
+  useEffect(() => {
+    if (openedWithComment.current) profileRef.current?.scrollIntoView({ block: 'start' });
+  }, []);
+  const [pickedM, setPickedM] = useState<number | null>(null);
+  const pins = useMemo(() => pinsOf(comments.threads, (c) => pinChainage(c, line.id), comments.selectedId), [comments.threads, comments.selectedId, line.id]);
+  const partNames = useMemo(() => new Map([[line.id, line.name]]), [line.id, line.name]);
 
   const analysis = 'analysis' in result ? result.analysis : null;
-  const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
   const winter = useMemo(
     () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
     [analysis, design.winter, context.frostDepthM, stations],
   );
-  const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;
+  // The winter findings stand with the line's other items: counted in the answers and listed under "What to fix".
+  const warnings = useMemo(
+    () => (analysis ? [...analysis.warnings, ...(winter ? winterWarnings(winter, context.overdueDrainDownOn ?? null) : [])] : []),
+    [analysis, winter, context.overdueDrainDownOn],
+  );
+  const answers = useMemo(() => (analysis ? lineAnswers({ ...analysis, warnings }) : null), [analysis, warnings]);
+  const highlight = analysis && selected !== null && warnings[selected] ? warningRange(warnings[selected]) : null;
 
   function selectWarning(index: number) {
     if (!analysis) return;
     setSelected(index);
-    const w = analysis.warnings[index];
+    const w = warnings[index];
     const range = warningRange(w);
     // A grouped item shows all its small highs or lows, not only the real one.
     const members = w.memberChainagesM ?? [];
     const fromM = Math.min(range.fromM, ...members);
     const toM = Math.max(range.toM, ...members);
     setView(viewAround(fromM, toM, firstM, lastM));
+    profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  }
+
+  function jumpToComment(comment: CommentRecord) {
+    comments.setSelectedId(comment.id);
+    const at = pinChainage(comment, line.id);
+    if (at === null) return;
+    setView(viewAround(at, at, firstM, lastM));
+    setHoverM(at);
     profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
   }
 
@@ -112,7 +147,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
 
       {analysis && (
         <section aria-labelledby="warnings-heading" className="space-y-2">
-          <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({analysis.warnings.length})</h2>
+          <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({warnings.length})</h2>
           {winter?.warning && (
             <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-2 text-sm text-clay-700" data-testid="winter-alert">
               Winter: the pipe lies shallower than the site&apos;s frost depth and the line is not drained. See <a className="underline" href="#winter">Winter</a> below for the fix.
@@ -123,7 +158,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               Heights on this route scatter by about {formatQuantity('length', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
             </p>
           )}
-          <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
+          <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
         </section>
       )}
 
@@ -144,7 +179,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
           <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
-          <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
               devices={design.devices}
@@ -155,10 +190,16 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               highlight={highlight}
               hoverM={hoverM}
               onHover={setHoverM}
-              onPick={placing ? place : undefined}
-              pickLabel={`place a ${placeKind.replace(/-/g, ' ')}`}
+              onPick={placing ? place : canComment ? setPickedM : undefined}
+              pickLabel={placing ? `place a ${placeKind.replace(/-/g, ' ')}` : 'pin a comment'}
+              pins={pins}
             />
             <div className="space-y-2">
+              {canComment && !placing && (
+                <p className="text-xs text-creek-700" role="status" data-testid="picked-chainage">
+                  {pickedM === null ? 'Click the profile to pin a comment at a chainage.' : <>Picked ch. {formatQuantity('chainage', pickedM, units.system)}: write the comment under <a className="underline" href="#line-comments">Comments</a>.</>}
+                </p>
+              )}
               <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} />
               <p className="text-xs text-creek-600">Plan from the surveyed positions, north up. Point at either drawing to find the same place on the other.</p>
               <div className="flex gap-1 text-xs">
@@ -170,6 +211,26 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           </div>
         </section>
       )}
+
+      <Panel title={`Comments on this line and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
+        <span id="line-comments" className="block scroll-mt-4" />
+        {comments.isError ? (
+          <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void comments.refetch()}>Try again</button></p>
+        ) : (
+          <CommentsPanel
+            projectId={line.projectId}
+            revisionId={null}
+            threads={comments.threads}
+            canComment={canComment}
+            members={members}
+            anchors={lineAnchorChoices(line, pickedM, analysis?.warnings ?? [], unitSystem)}
+            partNames={partNames}
+            unitSystem={unitSystem}
+            selectedId={comments.selectedId}
+            onJump={jumpToComment}
+          />
+        )}
+      </Panel>
 
       <Panel title="Ends and flow">
         <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} />
@@ -192,7 +253,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </Panel>
       </div>
       <Panel title="Settings">
-        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} />
+        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} assumedDatum={analysis?.settings.heightDatum === 'assumed'} />
       </Panel>
       {analysis && (
         <Panel title="Results">

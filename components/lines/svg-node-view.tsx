@@ -28,3 +28,8 @@ const SceneBody = memo(function SceneBody({ node }: { node: SvgNode }) {
 export function SvgNodeView({ node, children }: { node: SvgNode; children?: ReactNode }) {
   return createElement('svg', propsOf(node), <SceneBody key="scene" node={node} />, children);
 }
+
+/** Draws nodes of a pure drawing inside an SVG that React draws (a layer added to a hand-made chart). */
+export function SvgNodes({ nodes }: { nodes: readonly SvgNode[] }) {
+  return createElement(Fragment, null, ...nodes.map(render));
+}

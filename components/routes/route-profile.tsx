@@ -3,7 +3,10 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { useRef, type MouseEvent } from 'react';
+import { chainagePinMark } from '@/lib/chart/profile-review';
+import type { ProfilePin } from '@/lib/chart/profile-types';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
+import { SvgNodes } from '../lines/svg-node-view';
 import type { ProfilePoint } from '@/lib/routes/profile-series';
 import type { UnitSystem } from '@/lib/units';
 
@@ -26,6 +29,10 @@ export interface RouteProfileProps {
   title: string;
   /** Sketch mode: the area shown when there are no points yet, metres, and what a click does. */
   sketch?: { lengthM: number; lowM: number; highM: number; onAdd: (chainageM: number, elevationM: number) => void };
+  /** Review comments pinned at chainages of the route. */
+  pins?: readonly ProfilePin[];
+  /** Called with the chainage clicked (pinning a comment), when set and not sketching. */
+  onPick?: (chainageM: number) => void;
 }
 
 type Pt = { x: number; y: number };
@@ -34,7 +41,7 @@ type Pt = { x: number; y: number };
  * A small long-section: raw heights dashed, cleaned heights solid, side by side, in the project's
  * units. In sketch mode a click on the chart adds a station at that chainage and height.
  */
-export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch }: RouteProfileProps) {
+export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch, pins = [], onPick }: RouteProfileProps) {
   const svgRef = useRef<SVGSVGElement>(null);
   const d = (p: ProfilePoint): Pt => ({ x: toDisplay('length', p.chainageM, units), y: toDisplay('length', p.elevationM, units) });
   const rawD = raw.map(d);
@@ -52,13 +59,24 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
   const path = line<Pt>().x((p) => x(p.x)).y((p) => y(p.y));
   const u = unitOf('length', units);
 
+  function pointAt(e: MouseEvent<SVGRectElement>) {
+    const ctm = svgRef.current?.getScreenCTM();
+    return ctm ? new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse()) : null;
+  }
+
   function onClick(e: MouseEvent<SVGRectElement>) {
-    const svg = svgRef.current;
-    const ctm = svg?.getScreenCTM();
-    if (!svg || !ctm || !sketch) return;
-    const pt = new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse());
+    const pt = pointAt(e);
+    if (!pt || !sketch) return;
     sketch.onAdd(fromDisplay('length', x.invert(pt.x), units), fromDisplay('length', y.invert(pt.y), units));
   }
+
+  function onPickClick(e: MouseEvent<SVGRectElement>) {
+    const pt = pointAt(e);
+    if (!pt || !onPick) return;
+    const lastM = Math.max(0, ...cleaned.map((p) => p.chainageM), ...raw.map((p) => p.chainageM));
+    onPick(Math.min(Math.max(fromDisplay('length', x.invert(pt.x), units), 0), lastM));
+  }
+  const pinMarks = pins.map((p) => chainagePinMark(p, x(toDisplay('length', p.chainageM, units)), M.top - 4, H - M.bottom, units));
 
   return (
     <figure className="space-y-1">
@@ -86,6 +104,10 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
             </circle>
           );
         })}
+        {!sketch && onPick && (
+          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onPickClick} aria-label="Ground profile: click to pin a comment at that chainage" data-testid="route-profile-capture" />
+        )}
+        {pinMarks.length > 0 && <g data-layer="comment-pins" pointerEvents="none"><SvgNodes nodes={pinMarks} /></g>}
         {sketch && (
           <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} aria-label="Sketch area: click to add a station" data-testid="sketch-area" />
         )}

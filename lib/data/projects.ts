@@ -16,6 +16,8 @@ export interface ProjectSummary {
   frostDepthM: number | null;
   /** Decimal mark for number boxes; null = the browser's locale. */
   decimalMark: DecimalMark | null;
+  /** IANA time zone survey times without an offset are read in; null = UTC. */
+  timeZone: string | null;
   archived: boolean;
   createdAt: string;
   updatedAt: string;
@@ -31,6 +33,7 @@ function toSummary(p: Project): ProjectSummary {
     siteNotes: p.siteNotes,
     frostDepthM: p.frostDepthM ?? null,
     decimalMark: p.decimalMark ?? null,
+    timeZone: p.timeZone ?? null,
     archived: p.archivedAt != null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
