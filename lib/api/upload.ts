@@ -41,6 +41,10 @@ export async function readFileUpload(req: NextRequest, options: { fileField: str
   } catch {
     throw new AppError('bad_request', 'The upload could not be read as a form; send it again', { [options.fileField]: ['The upload was incomplete or malformed'] });
   }
+  // One file per upload: a second part of the same name would be silently dropped, so it is refused.
+  if (form.getAll(options.fileField).length > 1) {
+    throw new AppError('bad_request', `Send one file in the “${options.fileField}” field, not several`, { [options.fileField]: ['Send one file at a time'] });
+  }
   const file = form.get(options.fileField);
   if (!(file instanceof File)) {
     throw new AppError('bad_request', `No file was sent in the “${options.fileField}” field`, { [options.fileField]: ['Choose a file to upload'] });

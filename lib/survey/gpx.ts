@@ -30,6 +30,21 @@ interface GpxPoint {
 const LISTS = new Set(['trk', 'trkseg', 'trkpt', 'rte', 'rtept', 'wpt']);
 
 /**
+ * Runs an XML read. The parsers refuse entity declarations, external entities and extreme nesting
+ * (so nothing is expanded or fetched) by throwing plain errors: those become the import's own
+ * "not well-formed" refusal rather than a server error.
+ */
+function readXml<T>(read: () => T): T {
+  try {
+    return read();
+  } catch (error) {
+    if (error instanceof SurveyImportError) throw error;
+    const reason = error instanceof Error ? error.message.slice(0, 160) : 'unreadable';
+    throw new SurveyImportError('broken-xml', `the GPX file uses XML Runnel does not read (entity declarations, external entities or nesting too deep): ${reason}`);
+  }
+}
+
+/**
  * Line of each <trkpt>, <rtept> and <wpt> in document order, from a SAX pass of the XML parser
  * (comments, CDATA and processing instructions cannot shift them, as a text scan would).
  */
@@ -67,21 +82,21 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
     throw new SurveyImportError('broken-xml', `the GPX file is not well-formed XML: ${valid.err.msg}`, { line: valid.err.line, column: `character ${valid.err.col}` });
   }
   progress(0.3);
-  const doc = new XMLParser({
+  const doc = readXml(() => new XMLParser({
     ignoreAttributes: false,
     attributeNamePrefix: '',
     removeNSPrefix: true,
     parseTagValue: false,
     parseAttributeValue: false,
     isArray: (name) => LISTS.has(name),
-  }).parse(text) as { gpx?: { trk?: { trkseg?: { trkpt?: GpxPoint[] }[] }[]; rte?: { rtept?: GpxPoint[] }[]; wpt?: GpxPoint[] } };
+  }).parse(text)) as { gpx?: { trk?: { trkseg?: { trkpt?: GpxPoint[] }[] }[]; rte?: { rtept?: GpxPoint[] }[]; wpt?: GpxPoint[] } };
   const gpx = doc.gpx;
   if (!gpx || typeof gpx !== 'object') throw new SurveyImportError('not-gpx', 'the XML file has no <gpx> root element, so it is not a GPX file');
   progress(0.6);
 
   const warnings: SurveyImportWarning[] = [];
   const segments = (gpx.trk ?? []).flatMap((t) => t.trkseg ?? []).filter((s) => (s.trkpt ?? []).length > 0);
-  const { trkpt: trkLines, rtept: rteLines, wpt: wptLines } = pointLines(text);
+  const { trkpt: trkLines, rtept: rteLines, wpt: wptLines } = readXml(() => pointLines(text));
   const waypoints = gpx.wpt ?? [];
   let drafts: DraftPoint[];
   let routeFromWaypoints = false;

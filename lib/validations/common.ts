@@ -27,16 +27,18 @@ export const email = z
 
 /** zod issues -> `{ "field.path": [messages] }` for the API error shape and for forms. */
 export function fieldErrorsOf(error: z.ZodError): FieldErrors {
-  const fields: FieldErrors = {};
+  // Field names come from the request: a Map, so "constructor" or "__proto__" is a key like any other.
+  const fields = new Map<string, string[]>();
+  const add = (key: string, message: string) => fields.set(key, [...(fields.get(key) ?? []), message]);
   for (const issue of error.issues) {
     const key = issue.path.length > 0 ? issue.path.map(String).join('.') : '_';
     if (issue.code === 'unrecognized_keys') {
-      for (const k of issue.keys) (fields[key === '_' ? k : `${key}.${k}`] ??= []).push(`Unknown field "${k}"`);
+      for (const k of issue.keys) add(key === '_' ? k : `${key}.${k}`, `Unknown field "${k}"`);
       continue;
     }
-    (fields[key] ??= []).push(issue.message);
+    add(key, issue.message);
   }
-  return fields;
+  return Object.fromEntries(fields);
 }
 
 /** An IANA time zone name the platform knows, e.g. "America/Denver" or "UTC". */

@@ -1,5 +1,6 @@
 import { defineConfig } from 'vitest/config';
 import path from 'node:path';
+import LogsLastSequencer from './sequencer';
 
 // Tests against a real `next start` on loopback (started by global-setup.ts after `next build`).
 export default defineConfig({
@@ -9,6 +10,8 @@ export default defineConfig({
     include: ['tests/server/**/*.test.ts'],
     environment: 'node',
     fileParallelism: false,
+    // The log check reads what every other file made the server write: it runs last.
+    sequence: { sequencer: LogsLastSequencer },
     globalSetup: [path.resolve(import.meta.dirname, 'global-setup.ts')],
     testTimeout: 60_000,
     hookTimeout: 120_000,
