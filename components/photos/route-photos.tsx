@@ -60,8 +60,8 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
       {editable && (
         <form onSubmit={onSubmit} className="mb-4 grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-end" noValidate>
           <div>
-            <label htmlFor="photos" className="block text-sm font-medium text-creek-900">Photos (JPEG or PNG)</label>
-            <input id="photos" name="photos" type="file" multiple accept="image/jpeg,image/png,.jpg,.jpeg,.png,.heic" className="mt-1 block w-full text-sm" />
+            <label htmlFor="photos" className="block text-sm font-medium text-creek-900">Photos (JPEG, PNG or HEIC)</label>
+            <input id="photos" name="photos" type="file" multiple accept="image/jpeg,image/png,image/heic,image/heif,.jpg,.jpeg,.png,.heic,.heif" className="mt-1 block w-full text-sm" />
             <p className="mt-1 text-xs text-creek-600">Photos with a GPS position land at the nearest chainage; only position and time are kept from the file.</p>
           </div>
           <div>
