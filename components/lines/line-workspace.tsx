@@ -12,6 +12,7 @@ import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
 import { lineWinterPlan } from '@/lib/lines/winter';
+import { useRoutePhotos } from '@/lib/queries/photos';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
@@ -61,6 +62,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const [placeKind, setPlaceKind] = useState<LineDeviceKind>('air-release-valve');
   const [note, setNote] = useState<string | null>(null);
   const profileRef = useRef<HTMLDivElement>(null);
+  const photos = useRoutePhotos(line.projectId, line.routeId);
 
   const analysis = 'analysis' in result ? result.analysis : null;
   const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
@@ -157,9 +159,10 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               onHover={setHoverM}
               onPick={placing ? place : undefined}
               pickLabel={`place a ${placeKind.replace(/-/g, ' ')}`}
+              photos={photos}
             />
             <div className="space-y-2">
-              <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} />
+              <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} photos={photos} />
               <p className="text-xs text-creek-600">Plan from the surveyed positions, north up. Point at either drawing to find the same place on the other.</p>
               <div className="flex gap-1 text-xs">
                 <button type="button" className="underline" onClick={() => setView(panView(view, -(view.toM - view.fromM) / 2, firstM, lastM))}>◀ Back along the line</button>

@@ -28,3 +28,8 @@ const SceneBody = memo(function SceneBody({ node }: { node: SvgNode }) {
 export function SvgNodeView({ node, children }: { node: SvgNode; children?: ReactNode }) {
   return createElement('svg', propsOf(node), <SceneBody key="scene" node={node} />, children);
 }
+
+/** One node of a drawing (a layer) inside an SVG drawn elsewhere. */
+export function SvgNodePart({ node }: { node: SvgNode }) {
+  return render(node, 0);
+}
