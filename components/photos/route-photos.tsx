@@ -58,7 +58,8 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
         await upload.mutateAsync({ file, routeId, chainageM });
         placed += 1;
       } catch (error) {
-        failed.push(`${file.name}: ${error instanceof ApiError ? error.message : 'not uploaded, try again'}`);
+        const why = error instanceof ApiError ? error.message : 'not uploaded, try again';
+        failed.push(why.includes(file.name) ? why : `${file.name}: ${why}`);
       }
     }
     setProblems(failed);

@@ -46,10 +46,23 @@ export function useUploadPhoto(projectId: string) {
 
 export function useUpdatePhoto(projectId: string) {
   const client = useQueryClient();
+  const key = photoKeys.project(projectId);
   return useMutation({
     mutationFn: ({ photoId, ...changes }: { photoId: string; caption?: string; inReport?: boolean; routeId?: string; chainageM?: number }) =>
       fetchJson<{ photo: PhotoSummary }>(`/api/photos/${photoId}`, { method: 'PATCH', body: changes }),
-    onSettled: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
+    // The report box and caption change at once on screen; the server's answer then replaces the list (or the old one comes back on an error).
+    onMutate: async ({ photoId, caption, inReport }) => {
+      await client.cancelQueries({ queryKey: key });
+      const before = client.getQueryData<PhotoSummary[]>(key);
+      if (before) {
+        client.setQueryData<PhotoSummary[]>(key, before.map((p) => (p.id === photoId ? { ...p, ...(caption !== undefined ? { caption } : {}), ...(inReport !== undefined ? { inReport } : {}) } : p)));
+      }
+      return { before };
+    },
+    onError: (_error, _changes, context) => {
+      if (context?.before) client.setQueryData(key, context.before);
+    },
+    onSettled: () => client.invalidateQueries({ queryKey: key }),
   });
 }
 

@@ -97,7 +97,7 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await expect(field.getByRole('status').filter({ hasText: '3 photos added.' })).toBeVisible({ timeout: 30_000 });
   // The refusal sits beside the file field, which points to it.
   const problems = field.getByTestId('photo-upload-problems');
-  await expect(problems).toContainText('notes.jpg: “notes.jpg” is not a JPEG, PNG or HEIC image');
+  await expect(problems).toHaveText('“notes.jpg” is not a JPEG, PNG or HEIC image');
   await expect(field.getByLabel('Photos (JPEG, PNG or HEIC)')).toHaveAttribute('aria-describedby', 'photos-problems');
   await expect(field.getByTestId('photo-row')).toHaveCount(3);
 
@@ -141,6 +141,26 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
   await context.close();
   expect(errors.filter((e) => !e.includes('415 (Unsupported Media Type)'))).toEqual([]);
+
+  // A line laid along the walk shows the same photos on its long profile and its plan.
+  await page.goto('/projects/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001/lines');
+  await page.getByLabel('Line name').fill(`Beck line ${run}`);
+  const routeChoice = await page.getByLabel('Follows the route').locator('option', { hasText: ROUTE }).getAttribute('value');
+  await page.getByLabel('Follows the route').selectOption(routeChoice!);
+  await page.getByRole('button', { name: 'Start line' }).click();
+  await expect(page).toHaveURL(/\/lines\/[0-9a-f-]{36}$/);
+  const lineId = page.url().split('/').pop()!;
+  const lineMarks = '[data-testid="profile-chart"] [data-layer="photos"] [data-photo-id]';
+  await expect(page.locator(lineMarks).filter({ visible: true })).toHaveCount(3);
+  const onLine = await page.locator(lineMarks).filter({ visible: true }).evaluateAll((marks) => marks.map((m) => Number(m.getAttribute('data-chainage-m'))));
+  expect(onLine).toEqual(onProfile);
+  await expect(page.locator('[data-testid="plan-view"] [data-layer="plan-photos"] [data-photo-id]').filter({ visible: true })).toHaveCount(3);
+  await page.getByTestId('profile-chart').filter({ visible: true }).getByRole('button', { name: 'Photo 3: crossing.jpg' }).click();
+  await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText(`Photo 3 · ${crossingM.toFixed(1)} m`);
+  await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText('0.0 m off the line');
+  await page.screenshot({ path: 'test-results/site-photos-line.png', fullPage: true });
+  // The line was only for looking: removed, so the demo's revisions stay as they were.
+  expect((await page.request.delete(`/api/lines/${lineId}`)).status()).toBe(204);
   expect(ownerErrors).toEqual([]);
 });
 
