@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from 'next';
 import localFont from 'next/font/local';
+import { headers } from 'next/headers';
 import type { ReactNode } from 'react';
 import { Providers } from '@/components/providers';
 import './globals.css';
@@ -19,7 +20,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: 'device-width', initialScale: 1 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Pages render per request: the Content Security Policy nonce (proxy.ts) is new every time, and a
+// prerendered page would carry scripts without it.
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await headers();
   return (
     <html lang="en" className={runnelSans.variable}>
       <body className="min-h-screen font-sans">

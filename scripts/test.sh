@@ -52,6 +52,8 @@ step "unit and integration tests (vitest)"
 npx vitest run --config tests/vitest.config.mts
 step "build for end-to-end tests"
 NODE_ENV=production node node_modules/next/dist/bin/next build >/dev/null
+step "tests against next start (security headers, sign-in, authorisation matrix)"
+RUNNEL_SERVER_PORT="$PORT" npx vitest run --config tests/server/vitest.config.mts
 step "end-to-end tests (Playwright, Debian chromium)"
 npx playwright test --config tests/e2e/playwright.config.ts
 log "all tests passed"

@@ -6,7 +6,7 @@ export default defineConfig({
   resolve: { alias: { '@': path.resolve(import.meta.dirname, '..'), 'server-only': path.resolve(import.meta.dirname, 'support/server-only-stub.ts') } },
   test: {
     include: ['tests/**/*.test.ts'],
-    exclude: ['tests/e2e/**', 'node_modules/**'],
+    exclude: ['tests/e2e/**', 'tests/server/**', 'node_modules/**'],
     environment: 'node',
     // API tests share one database; running files one at a time keeps them independent.
     fileParallelism: false,

@@ -1,6 +1,6 @@
 import type { PlanCheck } from '@/hydraulics/ram/plan-check';
 import type { UnitSystem } from '@/lib/units';
-import { localiseWarningText } from '@/lib/units/localise-text';
+import { planCheckText } from '@/lib/lift/check-words';
 
 const SEVERITY = {
   error: { label: 'Will not work', className: 'border-clay-100 bg-clay-50 text-clay-700' },
@@ -13,13 +13,16 @@ export function PlanChecks({ checks, emptyText, units }: { checks: readonly Plan
   if (checks.length === 0) return emptyText ? <p className="text-sm text-moss-700">{emptyText}</p> : null;
   return (
     <ul className="space-y-2" aria-label="Checks">
-      {checks.map((check) => (
-        <li key={`${check.code}-${check.message}`} className={`rounded-md border px-3 py-2 text-sm ${SEVERITY[check.severity].className}`}>
-          <p><span className="font-semibold">{SEVERITY[check.severity].label}:</span> {localiseWarningText(check.message, units)}</p>
-          {check.fix && <p className="mt-1"><span className="font-medium">Fix:</span> {localiseWarningText(check.fix, units)}</p>}
-          <p className="mt-1 text-xs opacity-80">Basis: {check.source}</p>
-        </li>
-      ))}
+      {checks.map((check) => {
+        const text = planCheckText(check, units);
+        return (
+          <li key={`${check.code}-${check.message}`} data-code={check.code} className={`rounded-md border px-3 py-2 text-sm ${SEVERITY[check.severity].className}`}>
+            <p><span className="font-semibold">{SEVERITY[check.severity].label}:</span> {text.message}</p>
+            {text.fix && <p className="mt-1"><span className="font-medium">Fix:</span> {text.fix}</p>}
+            <p className="mt-1 text-xs opacity-80">Basis: {check.source}</p>
+          </li>
+        );
+      })}
     </ul>
   );
 }

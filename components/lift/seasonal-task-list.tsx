@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { SeasonalTaskRecord } from '@/lib/lift/records';
+import { isOverdue, todayIn } from '@/lib/lift/task-due';
 import { useAddSeasonalTask, useDeleteSeasonalTask, useGenerateSeasonalTasks, useUpdateSeasonalTask } from '@/lib/queries/lift';
 import { GenerateSeasonalTasksSchema, SeasonalTaskSchema } from '@/lib/validations/seasonal-tasks';
 import { NumberField } from './number-field';
@@ -18,6 +19,7 @@ const KIND_LABEL: Record<SeasonalTaskRecord['kind'], string> = {
 /** The project's dated upkeep through the year, with done flags. */
 export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: string; tasks: readonly SeasonalTaskRecord[]; canEdit: boolean }) {
   const update = useUpdateSeasonalTask(projectId);
+  const today = todayIn(undefined);
   const remove = useDeleteSeasonalTask(projectId);
   return (
     <div className="space-y-4">
@@ -29,6 +31,11 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
             <li key={task.id} className="flex flex-wrap items-start gap-3 py-2">
               <span className="tabular w-24 shrink-0 font-medium text-creek-900">{task.dueOn}</span>
               <span className="w-24 shrink-0 rounded bg-creek-50 px-2 py-0.5 text-center text-xs text-creek-800">{KIND_LABEL[task.kind]}</span>
+              {isOverdue(task, today) && (
+                <span className={`rounded px-2 py-0.5 text-xs font-semibold ${task.kind === 'drain-down' ? 'bg-clay-600 text-white' : 'bg-ochre-500 text-white'}`} data-testid="task-overdue">
+                  {task.kind === 'drain-down' ? 'Overdue: drain before frost' : 'Overdue'}
+                </span>
+              )}
               <div className="min-w-0 flex-1">
                 <p className={task.done ? 'text-creek-500 line-through' : 'font-medium text-creek-900'}>{task.title}</p>
                 {task.detail && <p className="text-creek-700">{task.detail}</p>}

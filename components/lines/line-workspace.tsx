@@ -11,7 +11,7 @@ import { addDevice } from '@/lib/lines/edit-design';
 import { designWithInput, lineInputOf } from '@/lib/lines/line-input';
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
-import { lineWinterPlan } from '@/lib/lines/winter';
+import { lineWinterPlan, winterWarnings } from '@/lib/lines/winter';
 import { useRoutePhotos } from '@/lib/queries/photos';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
@@ -65,18 +65,23 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const photos = useRoutePhotos(line.projectId, line.routeId);
 
   const analysis = 'analysis' in result ? result.analysis : null;
-  const answers = useMemo(() => (analysis ? lineAnswers(analysis) : null), [analysis]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
   const winter = useMemo(
     () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
     [analysis, design.winter, context.frostDepthM, stations],
   );
-  const highlight = analysis && selected !== null && analysis.warnings[selected] ? warningRange(analysis.warnings[selected]) : null;
+  // The winter findings stand with the line's other items: counted in the answers and listed under "What to fix".
+  const warnings = useMemo(
+    () => (analysis ? [...analysis.warnings, ...(winter ? winterWarnings(winter, context.overdueDrainDownOn ?? null) : [])] : []),
+    [analysis, winter, context.overdueDrainDownOn],
+  );
+  const answers = useMemo(() => (analysis ? lineAnswers({ ...analysis, warnings }) : null), [analysis, warnings]);
+  const highlight = analysis && selected !== null && warnings[selected] ? warningRange(warnings[selected]) : null;
 
   function selectWarning(index: number) {
     if (!analysis) return;
     setSelected(index);
-    const w = analysis.warnings[index];
+    const w = warnings[index];
     const range = warningRange(w);
     // A grouped item shows all its small highs or lows, not only the real one.
     const members = w.memberChainagesM ?? [];
@@ -114,7 +119,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
 
       {analysis && (
         <section aria-labelledby="warnings-heading" className="space-y-2">
-          <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({analysis.warnings.length})</h2>
+          <h2 id="warnings-heading" className="text-base font-semibold text-creek-900">What to fix ({warnings.length})</h2>
           {winter?.warning && (
             <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-2 text-sm text-clay-700" data-testid="winter-alert">
               Winter: the pipe lies shallower than the site&apos;s frost depth and the line is not drained. See <a className="underline" href="#winter">Winter</a> below for the fix.
@@ -125,7 +130,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               Heights on this route scatter by about {formatQuantity('length', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
             </p>
           )}
-          <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={analysis.warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
+          <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />
         </section>
       )}
 
@@ -146,7 +151,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           />
           <ProfileReadout data={analysis} index={hoverM === null ? null : nearestPoint(analysis, hoverM)} units={units} />
           <NetworkFlowsStrip lineId={line.id} projectId={line.projectId} units={unitSystem} />
-          <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-3 xl:grid-cols-[minmax(0,1fr)_322px]">
             <ProfileChart
               data={analysis}
               devices={design.devices}
@@ -195,7 +200,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </Panel>
       </div>
       <Panel title="Settings">
-        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} />
+        <SettingsForm design={design} units={units} change={draft.change} canEdit={canEdit} assumedDatum={analysis?.settings.heightDatum === 'assumed'} />
       </Panel>
       {analysis && (
         <Panel title="Results">

@@ -7,12 +7,13 @@ import { reportFileName } from '@/lib/lines/file-names';
 import { cellText, stationColumns, stationRows, stretchColumns, tableCsv, type ResultColumn } from '@/lib/lines/results-table';
 import type { DisplayUnits } from '@/lib/units';
 import { Button } from '@/components/ui/button';
+import { ScrollFrame } from '@/components/ui/table-frame';
 
 const PAGE_ROWS = 50;
 
 function Table<R>({ caption, columns, rows, rowKey, onRowHover }: { caption: string; columns: ResultColumn<R>[]; rows: readonly R[]; rowKey: (r: R, i: number) => string; onRowHover?: (r: R | null) => void }) {
   return (
-    <div className="overflow-x-auto rounded-md border border-creek-100">
+    <ScrollFrame label={caption} dense>
       <table className="w-full text-right text-xs">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-creek-50 text-creek-800">
@@ -26,7 +27,7 @@ function Table<R>({ caption, columns, rows, rowKey, onRowHover }: { caption: str
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollFrame>
   );
 }
 

@@ -6,10 +6,14 @@ import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
 type Change = (next: LineDesign, label: string) => string | null;
-type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge' | 'heightScatterM'>;
+type NumberKey = Exclude<keyof LineSettings, 'frictionMethod' | 'checkSurge' | 'heightScatterM' | 'heightDatum'>;
 
-/** Analysis settings; an empty field falls back to the core's default (shown as the hint). */
-export function SettingsForm({ design, units, change, canEdit }: { design: LineDesign; units: DisplayUnits; change: Change; canEdit: boolean }) {
+/**
+ * Analysis settings; an empty field falls back to the core's default (shown as the hint). When the
+ * route's heights are on an assumed datum, the site altitude is asked for: the highest ground of a
+ * level book started at 100 m is no altitude (profile-and-checks.md §6).
+ */
+export function SettingsForm({ design, units, change, canEdit, assumedDatum = false }: { design: LineDesign; units: DisplayUnits; change: Change; canEdit: boolean; assumedDatum?: boolean }) {
   const s = design.settings;
   const set = (patch: Partial<LineSettings>, label: string) => {
     const settings: LineSettings = { ...s, ...patch };
@@ -35,8 +39,16 @@ export function SettingsForm({ design, units, change, canEdit }: { design: LineD
   const d = DEFAULT_LINE_SETTINGS;
   const inUnits = (m: number, conv: readonly [(m: number) => number, unknown], unit: string) => `${Number(conv[0](m).toFixed(2))} ${unit}`;
 
+  const askAltitude = assumedDatum && s.siteAltitudeM === undefined;
   return (
     <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+      {askAltitude && (
+        <p role="note" data-testid="ask-site-altitude" className="rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm text-ochre-700 sm:col-span-2 lg:col-span-4">
+          The heights of this route are on an assumed datum (a level book, hose level or typed heights), so they say nothing about the
+          site&apos;s altitude. Enter the altitude above sea level (from a map or a phone) under Site altitude: the siphon and vapour
+          limits depend on it.
+        </p>
+      )}
       <div>
         <label htmlFor="setting-frictionMethod" className="block text-xs font-medium text-creek-900">Friction method</label>
         <select id="setting-frictionMethod" disabled={!canEdit} value={s.frictionMethod ?? d.frictionMethod}
@@ -54,7 +66,8 @@ export function SettingsForm({ design, units, change, canEdit }: { design: LineD
       {field('minResidualHeadM', 'Minimum residual at outlets', units.head, ...H, inUnits(d.minResidualHeadM, H, units.head))}
       {field('siphonLimitHeadM', 'Siphon limit', units.head, ...H, `${inUnits(d.siphonLimitHeadM, H, units.head)} at sea level, scaled to the site's air pressure`)}
       {field('airPointToleranceM', 'High/low point tolerance', units.length, ...L, inUnits(d.airPointToleranceM, L, units.length))}
-      {field('siteAltitudeM', 'Site altitude', units.length, ...L, 'highest ground of the line')}
+      {field('siteAltitudeM', 'Site altitude', units.length, ...L, assumedDatum ? 'highest ground in the route\'s own datum (a guess: enter it)' : 'highest ground of the line')}
+      {field('entranceLossK', 'Entrance loss K at tanks', 'K', ...same, `${d.entranceLossK} (sharp-edged), plus the velocity head`)}
       <label className="flex items-center gap-2 self-center text-sm text-creek-900">
         <input type="checkbox" disabled={!canEdit} checked={s.checkSurge ?? d.checkSurge} onChange={(e) => set({ checkSurge: e.target.checked }, 'switch the surge check')} />
         Check sudden-stop surge

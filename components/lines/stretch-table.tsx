@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { CustomPipeForm } from './custom-pipe-form';
 import { PipePicker } from './pipe-picker';
 import { UnitNumberInput } from './unit-number-input';
+import { ScrollFrame } from '@/components/ui/table-frame';
 
 type Change = (next: LineDesign, label: string) => string | null;
 
@@ -43,7 +44,7 @@ export function StretchTable({ design, results, units, change, canEdit, temperat
         </div>
       )}
       {message && <p role="alert" className="text-xs font-medium text-clay-600">{message}</p>}
-      <div className="overflow-x-auto rounded-md border border-creek-100">
+      <ScrollFrame label="Stretches of the line" dense>
         <table className="w-full text-left text-xs">
           <thead className="bg-creek-50 text-creek-800">
             <tr>
@@ -93,7 +94,7 @@ export function StretchTable({ design, results, units, change, canEdit, temperat
             })}
           </tbody>
         </table>
-      </div>
+      </ScrollFrame>
       {canEdit && <CustomPipeForm design={design} units={units} change={change} />}
     </div>
   );

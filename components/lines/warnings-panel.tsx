@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 
 const CHIP = {
   danger: 'bg-clay-600 text-white',
-  warning: 'bg-ochre-500 text-white',
+  warning: 'bg-ochre-700 text-white',
   info: 'bg-creek-100 text-creek-800',
 } as const;
 

@@ -71,7 +71,7 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
   }
 
   return (
-    <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_24rem]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-5 xl:grid-cols-[minmax(0,1fr)_24rem]">
       <Panel
         title={line ? `${line.name}: long profile` : 'Long profile'}
         aside={line && (

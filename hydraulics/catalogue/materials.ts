@@ -47,7 +47,7 @@ export const MATERIAL_GRADES = {
     sources: {
       hazenWilliamsC: 'design-coefficient table, plastic/PE typical design C = 150 (core.md §1.4 [R19])',
       roughnessM: SMOOTH_PIPE_ROUGHNESS_SOURCE,
-      elasticModulusPa: 'VESBO PE100 brochure p.3: E 750-1250 MPa [R12]; midpoint 1.0 GPa taken',
+      elasticModulusPa: 'PE100 material data: short-term E 750-1250 MPa [R12]; midpoint 1.0 GPa taken',
     },
   },
   pe80: {

@@ -134,5 +134,44 @@ export function airAndSedimentWarnings(profile: LineProfile, devices: readonly L
       fixes: [{ kind: 'add-device', device: 'washout', chainageM: c }],
     });
   }
-  return warnings;
+  return [...warnings, ...misplacedDevices(profile, devices, neighbourhoods(highs, lows, chainageM), neighbourhoods(lows, highs, chainageM), toleranceM)];
+}
+
+/**
+ * An air-release valve standing at a low point vents no air (air rises to the summits) and a
+ * washout at a high point drains nothing: both are placed where the other belongs
+ * (profile-and-checks.md §1.2, [R10]). Found with the same rule that decides where each is needed.
+ */
+function misplacedDevices(
+  profile: LineProfile,
+  devices: readonly LineDevice[],
+  highSpots: readonly Neighbourhood[],
+  lowSpots: readonly Neighbourhood[],
+  toleranceM: number,
+): LineWarning[] {
+  const { chainageM, pipeElevationM } = profile.points;
+  const out: LineWarning[] = [];
+  for (const device of devices) {
+    const atLow = device.kind === 'air-release-valve' && lowSpots.find((spot) => isCovered(spot, [device], ['air-release-valve'], profile, false, toleranceM));
+    const atHigh = device.kind === 'washout' && highSpots.find((spot) => isCovered(spot, [device], ['washout'], profile, true, toleranceM));
+    const spot = atLow || atHigh;
+    if (!spot) continue;
+    const c = device.chainageM;
+    const z = valueAtChainage(chainageM, pipeElevationM, c);
+    const right = chainageM[spot.point];
+    out.push({
+      code: 'device-misplaced',
+      severity: 'warning',
+      at: { chainageM: c },
+      values: { chainageM: c, elevationM: z, otherChainageM: right, deviceKind: device.kind },
+      message: atLow
+        ? `The air-release valve at ${chainage(c)} (${metres(z)}) stands at a low point of the pipe: air rises to the summits, so it vents nothing, and it may draw dirty water or air in.`
+        : `The washout at ${chainage(c)} (${metres(z)}) stands at a high point of the pipe: silt settles at the sags, so it drains and flushes nothing.`,
+      suggestedFix: atLow
+        ? `Move it to a summit; fit a washout here at ${chainage(right)} instead.`
+        : `Move it to a sag; fit an air-release valve here at ${chainage(right)} instead.`,
+      fixes: [],
+    });
+  }
+  return out;
 }

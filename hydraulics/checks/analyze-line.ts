@@ -4,7 +4,7 @@ import type { LineInput } from '../profile/types';
 import { airAndSedimentWarnings } from './air-checks';
 import { deliveryWarnings } from './delivery-checks';
 import { ratingWarnings } from './rating-checks';
-import { suctionWarnings } from './suction-checks';
+import { siteAltitudeWarnings, suctionWarnings } from './suction-checks';
 import type { LineWarning, WarningSeverity } from './types';
 import { velocityWarnings } from './velocity-checks';
 
@@ -32,6 +32,7 @@ export function analyzeLine(input: LineInput): LineAnalysis {
   const warnings = [
     ...deliveryWarnings(model),
     ...suctionWarnings(profile),
+    ...siteAltitudeWarnings(profile),
     ...ratingWarnings(profile),
     ...airAndSedimentWarnings(profile, input.devices ?? []),
     ...velocityWarnings(profile),

@@ -132,3 +132,31 @@ export function trueSiphonWarnings(profile: LineProfile): LineWarning[] {
     };
   });
 }
+
+/**
+ * On an assumed datum (a level book started at 100 m) the highest ground says nothing about the
+ * site's altitude, so the suction limits taken from it may be far off: say so until the altitude is
+ * given; a warning where the line has suction (the limits matter there), advice otherwise
+ * (profile-and-checks.md §6).
+ */
+export function siteAltitudeWarnings(profile: LineProfile): LineWarning[] {
+  const { limits, settings, points } = profile;
+  if (settings.heightDatum !== 'assumed' || limits.siteAltitudeBasis !== 'highest-ground') return [];
+  let worst = 0;
+  for (let i = 1; i < points.chainageM.length; i++) {
+    if (Math.min(points.pressureHeadM[i], points.staticPressureHeadM[i]) < Math.min(points.pressureHeadM[worst], points.staticPressureHeadM[worst])) worst = i;
+  }
+  const deepestM = Math.min(points.pressureHeadM[worst], points.staticPressureHeadM[worst]);
+  const suction = deepestM < 0;
+  return [{
+    code: 'site-altitude-assumed',
+    severity: suction ? 'warning' : 'info',
+    at: { chainageM: points.chainageM[suction ? worst : 0] },
+    values: { siteAltitudeM: limits.siteAltitudeM, ...(suction ? { headM: deepestM, chainageM: points.chainageM[worst] } : {}) },
+    message:
+      `The heights of this route are on an assumed datum, so the site altitude (${metres(limits.siteAltitudeM)} m, the highest ground in that datum) ` +
+      `is a guess, and the siphon and vapour limits that depend on it may be wrong${suction ? ` where the line has suction (down to ${metres(deepestM)} m at ${chainage(points.chainageM[worst])})` : ''}.`,
+    suggestedFix: "Enter the site's altitude above sea level (from a map or a phone) in the line's settings.",
+    fixes: [],
+  }];
+}

@@ -17,7 +17,12 @@ export type WarningCode =
   | 'air-release-needed'
   | 'washout-needed'
   | 'velocity-low'
-  | 'velocity-high';
+  | 'velocity-high'
+  | 'site-altitude-assumed'
+  | 'winter-frost'
+  | 'winter-cover-contradiction'
+  | 'drain-down-overdue'
+  | 'device-misplaced';
 
 /** A change one click could apply to the line input (see `applyLineFixes`). */
 export type LineFix =
@@ -81,6 +86,15 @@ export interface WarningValues {
   memberCount?: number;
   /** The worst figure lies within the survey's height scatter of its limit. */
   withinScatter?: boolean;
+  /** A second chainage: where a misplaced device's point really is, m. */
+  otherChainageM?: number;
+  /** The device a warning is about. */
+  deviceKind?: LineDeviceKind;
+  /** Cover over the pipe and the site's frost depth, m (winter items). */
+  coverM?: number;
+  frostDepthM?: number;
+  /** A task's due date, ISO yyyy-mm-dd (winter items). */
+  dueOn?: string;
   /** No gravity fix exists (break-pressure tanks cannot solve it): the reason, in SI words. */
   problem?: string;
 }

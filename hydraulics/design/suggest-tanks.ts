@@ -1,3 +1,4 @@
+import { GRAVITY_MS2 } from '../constants';
 import { pointIndexAt } from '../profile/grid';
 import type { LineProfile } from '../profile/result-types';
 import { planBreakPressureTanks, type PlannedTank, type TankPlan } from './break-pressure-tanks';
@@ -28,6 +29,11 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
     const fromPoint = pointIndexAt(points.chainageM, reach.fromM);
     const toPoint = pointIndexAt(points.chainageM, reach.toM);
     if (toPoint <= fromPoint) continue;
+    // A new tank's outlet loses the velocity head and the entrance loss (profile-and-checks.md §5.2):
+    // keep that much more above the summits, at the fastest water of the reach (on the safe side).
+    let fastestMs = 0;
+    for (let j = fromPoint; j < toPoint; j++) fastestMs = Math.max(fastestMs, points.velocityMs[j]);
+    const entranceM = ((1 + profile.settings.entranceLossK) * fastestMs * fastestMs) / (2 * GRAVITY_MS2);
     const plan = planBreakPressureTanks({
       chainageM: points.chainageM,
       groundElevationM: points.groundElevationM,
@@ -37,7 +43,7 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
       tankWaterAboveGroundM,
       fromPoint,
       toPoint,
-      ...(keepFlowing ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM } : {}),
+      ...(keepFlowing ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM + entranceM } : {}),
     });
     tanks.push(...plan.tanks);
     if (!plan.feasible) return { tanks, feasible: false, problem: plan.problem };

@@ -12,7 +12,7 @@ export interface FittingLossCoefficient {
 const MUNSON_TABLE_8_2 =
   'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Table 8.2 "Loss coefficients for pipe components" (stored copy p. 422)';
 const MUNSON_FIG_8_25 = 'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.25 exit loss (stored copy p. 419)';
-const SHARP_ENTRANCE = 'fluids.fittings docs, entrance_sharp: 0.5 per Crane (2009), Idelchik, Blevins, Swamee & Sharma';
+const SHARP_ENTRANCE = 'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.22 sharp-edged entrance (from memory)';
 
 /** Loss coefficients for common fittings and valves, fully turbulent flow. K varies ±20-50 % with make and size. */
 export const FITTING_LOSS_COEFFICIENTS = {

@@ -22,6 +22,22 @@ function startHeads(start: LineStart, pumpPipeElevationM: number): { flowingM: n
   return { flowingM: start.outletHeadM, staticM: pumpShutoffGradeM(start, pumpPipeElevationM) };
 }
 
+/**
+ * Where water leaves a free surface (a source at a water level, each break-pressure tank) the
+ * hydraulic grade in the pipe lies one velocity head below that surface, plus the entrance loss:
+ * K = 1 + K_entrance on the pipe leaving the point. The grade at the far end then matches the
+ * water level or the pipe outlet, so the velocity head lost in a free jet or in the receiving tank
+ * (exit loss K = 1) is counted once. Energy equation between two free surfaces:
+ * Δz = (K_entrance + f·L/D + ΣK + 1)·v²/2g (profile-and-checks.md §5.2).
+ */
+function addFreeSurfaceEntrances(events: { kAtPoint: Float64Array; tankLevelAtPoint: Float64Array }, start: LineStart, entranceLossK: number): void {
+  const k = 1 + entranceLossK;
+  if (start.kind === 'water-level') events.kAtPoint[0] += k;
+  for (let j = 1; j < events.tankLevelAtPoint.length - 1; j++) {
+    if (events.tankLevelAtPoint[j] === events.tankLevelAtPoint[j]) events.kAtPoint[j] += k;
+  }
+}
+
 function endTarget(end: LineEnd, lastPipeElevationM: number, defaultResidualM: number) {
   if (end.kind === 'outlet') return { elevationM: end.elevationM, residualM: end.residualHeadM ?? defaultResidualM };
   if (end.kind === 'tank-inlet') return { elevationM: end.elevationM, residualM: 0 };
@@ -59,6 +75,7 @@ export function profileModel(input: LineInput): ProfileModel {
   const grid = buildProfileGrid(input.stations, input.stretches, eventChainages(input, declaredTanks), settings.defaultCoverM);
   const n = grid.chainageM.length;
   const { events, tanks } = pointEvents(grid, input, declaredTanks);
+  addFreeSurfaceEntrances(events, input.start, settings.entranceLossK);
   const heads = startHeads(input.start, grid.pipeElevationM[0]);
   const target = endTarget(input.end, grid.pipeElevationM[n - 1], settings.minResidualHeadM);
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);

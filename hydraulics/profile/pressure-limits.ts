@@ -32,6 +32,7 @@ export function pressureLimits(settings: ResolvedLineSettings, groundElevationM:
   const vapour = vapourHeadM(settings.waterTemperatureC);
   return {
     siteAltitudeM,
+    siteAltitudeBasis: settings.siteAltitudeM === undefined ? 'highest-ground' : 'stated',
     atmosphericHeadM: atmospheric,
     vapourHeadM: vapour,
     vapourLimitHeadM: atmospheric - vapour,

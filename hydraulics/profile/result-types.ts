@@ -99,6 +99,8 @@ export interface LineTotals {
 /** Atmospheric limits used for suction checks, all as positive heads of water, m. */
 export interface PressureLimits {
   siteAltitudeM: number;
+  /** Where the altitude came from: stated in the settings, or taken from the line's highest ground. */
+  siteAltitudeBasis: 'stated' | 'highest-ground';
   atmosphericHeadM: number;
   vapourHeadM: number;
   /** Deepest suction before the water boils: atmospheric minus vapour head, m. */

@@ -12,9 +12,11 @@ export interface ResolvedLineSettings {
   heightScatterM: number;
   /** Undefined until the profile supplies its highest ground elevation. */
   siteAltitudeM: number | undefined;
+  heightDatum: 'geodetic' | 'assumed';
   /** Undefined until the profile scales the sea-level default to the site (see `pressureLimits`). */
   siphonLimitHeadM: number | undefined;
   defaultCoverM: number;
+  entranceLossK: number;
   checkSurge: boolean;
 }
 
@@ -24,6 +26,10 @@ export interface ResolvedLineSettings {
  * Siphon limit: "siphonage up to about 7.5 m negative head, where vaporisation may begin",
  * Taylor & Francis/CRC hydraulics textbook, ch. 42 [R7], at sea level (1 atm = 10.33 m); the
  * analysis scales it to the site's atmospheric head (see `practicalSiphonLimitHeadM`).
+ * Friction: Darcy-Weisbach with the Colebrook friction factor by default; Hazen-Williams with
+ * C = 150 gives less loss than a smooth pipe in 15-40 mm bores (profile-and-checks.md §5.1).
+ * Entrance: K = 0.5 (sharp-edged) plus the velocity head where the water leaves a free surface
+ * (profile-and-checks.md §5.2, core.md Munson Table 8.2 / Fig. 8.25 figures in minor-losses.ts).
  * Safety factor 1: published pressure classes already contain the standard's design factor
  * (ISO 4427 C >= 1.25, ASTM D2241 2.0) [R12][R13]; the user raises it for extra margin.
  * Air-point tolerance 1 m and 20 C water: common practice, no source.
@@ -32,7 +38,7 @@ export interface ResolvedLineSettings {
  * 750 mm); a pipe on the surface (0 m) is not a design default. Frost depth may ask for more.
  */
 export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM' | 'siphonLimitHeadM'> & { siphonLimitHeadM: number }> = Object.freeze({
-  frictionMethod: 'hazen-williams',
+  frictionMethod: 'darcy-weisbach',
   waterTemperatureC: 20,
   safetyFactor: 1,
   velocityMinMs: 0.7,
@@ -42,6 +48,8 @@ export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAlt
   heightScatterM: 0,
   siphonLimitHeadM: 7.5,
   defaultCoverM: 0.75,
+  entranceLossK: 0.5,
+  heightDatum: 'geodetic',
   checkSurge: true,
 });
 
@@ -59,8 +67,10 @@ export function resolveLineSettings(settings: LineSettings | undefined): Resolve
     airPointToleranceM: s.airPointToleranceM ?? d.airPointToleranceM,
     heightScatterM: s.heightScatterM ?? d.heightScatterM,
     siteAltitudeM: s.siteAltitudeM,
+    heightDatum: s.heightDatum ?? 'geodetic',
     siphonLimitHeadM: s.siphonLimitHeadM,
     defaultCoverM: s.defaultCoverM ?? d.defaultCoverM,
+    entranceLossK: s.entranceLossK ?? d.entranceLossK,
     checkSurge: s.checkSurge ?? d.checkSurge,
   };
 }

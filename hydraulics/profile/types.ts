@@ -104,7 +104,10 @@ export type LineFlow =
 
 /** Settings of one analysis. Every field is optional; defaults are listed with their sources. */
 export interface LineSettings {
-  /** @default 'hazen-williams' */
+  /**
+   * @default 'darcy-weisbach' (Colebrook friction factor from each pipe's roughness): Hazen-Williams
+   * with C = 150 predicts less friction than a smooth pipe in small bores (profile-and-checks.md §5.1)
+   */
   frictionMethod?: FrictionMethod;
   /** Water temperature, C; used for viscosity, density, vapour pressure and pipe derating. @default 20 */
   waterTemperatureC?: number;
@@ -125,8 +128,18 @@ export interface LineSettings {
    * @default 0 (heights taken as exact: a level book or hose level)
    */
   heightScatterM?: number;
-  /** Altitude of the site for atmospheric pressure, m. @default the highest ground elevation of the line */
+  /**
+   * Altitude of the site above sea level for atmospheric pressure, m.
+   * @default the highest ground elevation of the line (only right when `heightDatum` is 'geodetic')
+   */
   siteAltitudeM?: number;
+  /**
+   * Whether the stations' heights are above sea level ('geodetic': GPS, map) or on a datum the
+   * surveyor chose ('assumed': a level book started at 100 m). On an assumed datum the highest ground
+   * says nothing about the altitude, and the analysis warns until `siteAltitudeM` is given.
+   * @default 'geodetic'
+   */
+  heightDatum?: 'geodetic' | 'assumed';
   /**
    * Practical limit of negative pressure head in a siphon, m (positive number).
    * @default 7.5 m at sea level ([R7]) scaled to the site's atmospheric head (`practicalSiphonLimitHeadM`)
@@ -134,6 +147,12 @@ export interface LineSettings {
   siphonLimitHeadM?: number;
   /** Cover used for stations that give none, m. @default 0.75 (common burial practice, no source; see settings.ts) */
   defaultCoverM?: number;
+  /**
+   * Loss coefficient K of the pipe entrance where water leaves a free surface (the source at a water
+   * level, each break-pressure tank). The velocity head v²/2g itself is always taken there as well.
+   * @default 0.5 (sharp-edged entrance; profile-and-checks.md §5.2)
+   */
+  entranceLossK?: number;
   /** Check static pressure plus a sudden-stop surge against the ratings. @default true */
   checkSurge?: boolean;
 }

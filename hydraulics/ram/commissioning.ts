@@ -70,6 +70,7 @@ export function commissioningResult({ reading, plannedEfficiency, plannedDeliver
     checks.push({
       code: 'below-planned-efficiency',
       severity: 'warning',
+      values: { efficiency: measuredEfficiency, plannedEfficiency },
       message: `Measured efficiency ${(measuredEfficiency * 100).toFixed(0)} % is well below the planned ${(plannedEfficiency * 100).toFixed(0)} %.`,
       fix: 'Look for air in the drive pipe, silt in the valves, a leaking delivery line, or a waste-valve stroke set too long or short.',
       source: NO_SOURCE,
@@ -79,6 +80,7 @@ export function commissioningResult({ reading, plannedEfficiency, plannedDeliver
     checks.push({
       code: 'unusual-beat-rate',
       severity: 'info',
+      values: { beatsPerMinute: reading.beatsPerMinute, typicalBeatsPerMinute: TYPICAL_RAM_BEATS_PER_MINUTE },
       message: `${reading.beatsPerMinute} beats a minute; an ordinary small ram beats about ${TYPICAL_RAM_BEATS_PER_MINUTE}.`,
       fix: 'Adjust the waste-valve stroke or weight and measure again.',
       source: USDA_BULLETIN,

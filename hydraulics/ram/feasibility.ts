@@ -44,11 +44,19 @@ function efficiencyRules(context: RamCheckContext): PlanCheck[] {
       ? `its last efficiency (${Math.round(lastEfficiency * 100)} %) is held, not extrapolated`
       : 'it delivers nothing there';
     const wider = Object.values(RAM_EFFICIENCY_TABLES).find((table) => table.points[table.points.length - 1].liftToFallRatio >= ratio);
+    const offerWider = wider !== undefined && wider.id !== context.efficiencyTable.id && !context.measuredEfficiency;
     return [{
       code: 'lift-ratio-beyond-table',
       severity: 'warning',
+      values: {
+        ratio,
+        tableLabel: context.efficiencyTable.label,
+        tableEndRatio: last,
+        tableEndEfficiency: lastEfficiency,
+        ...(offerWider ? { widerTableLabel: wider.label, widerTableEndRatio: wider.points[wider.points.length - 1].liftToFallRatio } : {}),
+      },
       message: `Delivery head is ${ratio.toFixed(1)} times the fall, beyond the end of the table in use ("${context.efficiencyTable.label}", up to ${last}); ${held}.`,
-      fix: wider && wider.id !== context.efficiencyTable.id && !context.measuredEfficiency
+      fix: offerWider
         ? `Choose the "${wider.label}" table, which reaches ${wider.points[wider.points.length - 1].liftToFallRatio}:1, or measure the efficiency at commissioning; gaining fall or lifting in two stages also helps.`
         : 'Gain fall (set the pump lower or take the drive water from higher up), lower the tank, lift in two stages, or measure the efficiency at commissioning.',
       source,
@@ -58,6 +66,7 @@ function efficiencyRules(context: RamCheckContext): PlanCheck[] {
     return [{
       code: 'lift-ratio-below-table',
       severity: 'info',
+      values: { ratio, tableLabel: context.efficiencyTable.label, tableStartRatio: first },
       message: `Delivery head is only ${ratio.toFixed(1)} times the fall; the table starts at ${first}, so its first efficiency is used rather than extrapolated.`,
       source,
     }];
@@ -73,6 +82,7 @@ function driveFlowRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'drive-flow-below-class',
       severity: 'error',
+      values: { flowM3s: perPump, limitFlowM3s: sizeClass.minDriveFlowM3s, drivePipeNominalMm: sizeClass.drivePipeNominalMm },
       message: `Each pump gets ${lPerMin(perPump)} L/min; a ${sizeClass.drivePipeNominalMm} mm ram needs at least ${sizeClass.published.minLPerMin} L/min.`,
       fix: 'Choose a smaller size class or fewer pumps in parallel.',
       source: sizeClass.source,
@@ -82,6 +92,7 @@ function driveFlowRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'drive-flow-above-class',
       severity: 'warning',
+      values: { flowM3s: perPump, limitFlowM3s: sizeClass.maxDriveFlowM3s, drivePipeNominalMm: sizeClass.drivePipeNominalMm },
       message: `Each pump could have ${lPerMin(perPump)} L/min but a ${sizeClass.drivePipeNominalMm} mm ram uses at most ${sizeClass.published.maxLPerMin} L/min; the rest is not used.`,
       fix: 'Add a pump in parallel or choose the next size class.',
       source: sizeClass.source,
@@ -91,6 +102,7 @@ function driveFlowRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'no-size-class',
       severity: 'info',
+      values: { flowM3s: perPump, ...(context.suggestedClass ? { drivePipeNominalMm: context.suggestedClass.drivePipeNominalMm } : {}) },
       message: context.suggestedClass
         ? `No size class chosen; ${lPerMin(perPump)} L/min per pump suits a ${context.suggestedClass.drivePipeNominalMm} mm ram.`
         : `No size class chosen, and ${lPerMin(perPump)} L/min per pump is outside every class in the table.`,
@@ -101,6 +113,7 @@ function driveFlowRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'supply-below-7x-delivered',
       severity: 'warning',
+      values: { ratio: context.driveFlowAvailableM3s / context.deliveredFlowM3s, minRatio: MIN_SUPPLY_TO_DELIVERY_RATIO, flowM3s: context.driveFlowAvailableM3s },
       message: `The source gives ${(context.driveFlowAvailableM3s / context.deliveredFlowM3s).toFixed(1)} times the delivered flow; plan on at least ${MIN_SUPPLY_TO_DELIVERY_RATIO} times, so the delivered figure is optimistic.`,
       fix: 'Plan for less delivered water, or find more drive flow.',
       source: WATER_FOR_THE_WORLD,
@@ -119,6 +132,7 @@ function drivePipeRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'drive-length-vs-fall',
       severity: 'warning',
+      values: { ratio: lengthToFall, minRatio: DRIVE_LENGTH_TO_FALL_RANGE.min, maxRatio: DRIVE_LENGTH_TO_FALL_RANGE.max, tooLong },
       message: `Drive pipe is ${lengthToFall.toFixed(1)} times the fall; the usual range is ${DRIVE_LENGTH_TO_FALL_RANGE.min}-${DRIVE_LENGTH_TO_FALL_RANGE.max} (about 7).`,
       fix: tooLong ? `${standpipeFix} (${CLEMSON})` : 'Lengthen the drive pipe, or take the drive water from closer to the pump with less fall.',
       source: USDA_BULLETIN,
@@ -130,6 +144,7 @@ function drivePipeRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'drive-length-vs-diameter',
       severity: 'warning',
+      values: { ratio: lengthToDiameter, minRatio: DRIVE_LENGTH_TO_DIAMETER_RANGE.min, maxRatio: DRIVE_LENGTH_TO_DIAMETER_RANGE.max, tooLong },
       message: `Drive pipe length is ${Math.round(lengthToDiameter)} bores; the usual range is ${DRIVE_LENGTH_TO_DIAMETER_RANGE.min}-${DRIVE_LENGTH_TO_DIAMETER_RANGE.max}.`,
       fix: tooLong ? standpipeFix : 'Lengthen the drive pipe or use a smaller bore.',
       source: 'from memory (Calvert; later work calls it a traditional rule of thumb)',
@@ -139,6 +154,7 @@ function drivePipeRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'drive-pipe-not-rigid',
       severity: 'warning',
+      values: {},
       message: 'The drive pipe is not rigid: a flexible pipe swells with each beat, softens the surge and wastes the drive energy.',
       fix: 'Use rigid pipe (galvanised steel) for the drive pipe, firmly anchored and straight.',
       source: NO_SOURCE,
@@ -148,6 +164,7 @@ function drivePipeRules(context: RamCheckContext): PlanCheck[] {
     checks.push({
       code: 'fall-too-small',
       severity: 'error',
+      values: { headM: context.fallM, limitHeadM: MIN_FALL_M },
       message: `The fall is ${metres(context.fallM)} m; the pump must sit at least ${MIN_FALL_M} m below the source.`,
       fix: 'Move the pump further downstream to gain fall.',
       source: WATER_FOR_THE_WORLD,

@@ -60,6 +60,7 @@ export function seasonalTasks({ year, hemisphere, firstFrost, lastFrost, drainDo
     checks.push({
       code: 'frost-date-unusual-for-hemisphere',
       severity: 'info',
+      values: { monthDay: firstFrost, hemisphere },
       message: `A first frost on ${firstFrost} is unusual for the ${hemisphere}ern hemisphere; check the hemisphere and the date.`,
       source: NO_SOURCE,
     });

@@ -47,10 +47,10 @@ export const JORDAN_MIDDAY_PATTERN = preset(
   [5, 5, 10, 5, 5, 5, 20, 15, 5, 5, 5, 5, 5, 5],
 );
 
-/** The "Water Mission" column of the same table: printed values sum to 95 %, so it is flagged. */
-export const WATER_MISSION_PATTERN_AS_PRINTED = preset(
-  'water-mission-as-printed',
-  'Water Mission column (as printed)',
+/** The third column of the same table (three peaks): printed values sum to 95 %, so it is flagged. */
+export const THREE_PEAKS_PATTERN_AS_PRINTED = preset(
+  'three-peaks-as-printed',
+  'Village taps, three peaks (as printed)',
   [5, 5, 10, 10, 5, 10, 5, 5, 5, 5, 10, 10, 5, 5],
   'The printed percentages sum to 95 %, not 100 %: one value is missing or misprinted. Not usable until corrected.',
 );
@@ -59,5 +59,5 @@ export const WATER_MISSION_PATTERN_AS_PRINTED = preset(
 export const DAILY_USE_PATTERN_PRESETS: readonly DailyUsePatternPreset[] = [
   JORDAN_MORNING_EVENING_PATTERN,
   JORDAN_MIDDAY_PATTERN,
-  WATER_MISSION_PATTERN_AS_PRINTED,
+  THREE_PEAKS_PATTERN_AS_PRINTED,
 ];

@@ -55,6 +55,7 @@ export function sizeStorage({ supply, demand, reserveDays = 0 }: StorageSizingOp
     checks.push({
       code: 'supply-below-demand',
       severity: 'error',
+      values: { supplyVolumeM3: massCurve.dailySupplyM3, demandVolumeM3: massCurve.dailyDemandM3, volumeM3: -massCurve.dailyBalanceM3 },
       message: `The supply gives ${massCurve.dailySupplyM3.toFixed(2)} m³ a day but the uses take ${massCurve.dailyDemandM3.toFixed(2)} m³: the tank loses ${(-massCurve.dailyBalanceM3).toFixed(2)} m³ every day and no size of tank keeps up.`,
       fix: 'Increase the supply (longer hours, more drive flow, another source) or reduce the demand.',
       source: 'mass balance of the daily cycle',
@@ -64,6 +65,7 @@ export function sizeStorage({ supply, demand, reserveDays = 0 }: StorageSizingOp
     checks.push({
       code: 'no-reserve',
       severity: 'info',
+      values: {},
       message: 'No reserve days are held: the tank only carries the daily cycle, so any stop in supply leaves the outlets dry within hours.',
       fix: 'Hold a reserve equal to the interval between checks of the system (3-4 days if checked every 3-4 days).',
       source: 'Alberta Agriculture (McNaughton) in Western Producer 2002',

@@ -33,3 +33,24 @@ export const DEFAULT_VERTICAL_UNCERTAINTY: Readonly<Record<HeightSource, Vertica
 export function defaultVerticalUncertaintyM(source: HeightSource): number | undefined {
   return DEFAULT_VERTICAL_UNCERTAINTY[source].uncertaintyM;
 }
+
+/** Whether a route's heights are above sea level, or on a datum the surveyor set (a level book started at 100 m). */
+export type HeightDatum = 'geodetic' | 'assumed';
+
+/**
+ * Sources whose heights are above sea level (satellite, barometric, map). A level, hose level or
+ * clinometer only gives differences, hung on a start height the surveyor chose; typed heights may
+ * be either, so they count as assumed (profile-and-checks.md §6).
+ */
+const GEODETIC_SOURCES: ReadonlySet<HeightSource> = new Set<HeightSource>(['gps', 'gnss', 'altimeter', 'map']);
+
+/** The datum of a route's heights: geodetic only when every point with a known source is on one. */
+export function heightDatumOf(sources: readonly (HeightSource | undefined)[]): HeightDatum {
+  let known = 0;
+  for (const source of sources) {
+    if (source === undefined) continue;
+    known += 1;
+    if (!GEODETIC_SOURCES.has(source)) return 'assumed';
+  }
+  return known > 0 ? 'geodetic' : 'assumed';
+}

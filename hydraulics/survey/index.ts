@@ -16,8 +16,8 @@ export type {
 } from './fieldbook/inclinometer';
 export { reduceLevelBook, assertLevelBook } from './fieldbook/level-book';
 export type { LevelBookReading, LevelBookInput, LevelBookResult, LevelBookMethod, ReducedLevel } from './fieldbook/level-book';
-export { HEIGHT_SOURCES, DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from './height-source';
-export type { HeightSource, VerticalUncertaintyDefault } from './height-source';
+export { HEIGHT_SOURCES, DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM, heightDatumOf } from './height-source';
+export type { HeightDatum, HeightSource, VerticalUncertaintyDefault } from './height-source';
 export { surveyHeightScatterM, WALKED_SCATTER_CAP_M } from './height-scatter';
 export type { HeightConfidence } from './height-scatter';
 export { consumerGpsHeightWarning } from './gps-height-warning';

@@ -79,6 +79,7 @@ export function designYield({ readings, asOfDate, recentDays = 1096, choice = { 
       checks.push({
         code: 'design-yield-above-dry-season',
         severity: 'warning',
+        values: { flowM3s: designYieldM3s, limitFlowM3s: lowestRecentDryM3s },
         message: `The chosen design yield is above the lowest recent dry-season reading (${(lowestRecentDryM3s * 60_000).toFixed(1)} L/min).`,
         fix: 'Design on the dry-season figure unless storage carries the system through the dry season.',
         source: SAFE_YIELD_SOURCE,
@@ -95,6 +96,7 @@ export function designYield({ readings, asOfDate, recentDays = 1096, choice = { 
   checks.push({
     code: 'no-dry-season-reading',
     severity: 'warning',
+    values: {},
     message: 'No recent dry-season reading: the lowest recent reading of any season is used, and the dry-season flow may be lower.',
     fix: 'Measure the source in the driest weeks of the year.',
     source: SAFE_YIELD_SOURCE,
@@ -110,6 +112,7 @@ export function yieldDrawChecks({ designYieldM3s, designDrawM3s }: { designYield
   return [{
     code: 'draw-exceeds-yield',
     severity: 'warning',
+    values: { flowM3s: designDrawM3s, limitFlowM3s: designYieldM3s },
     message: `The design draw (${(designDrawM3s * 60_000).toFixed(1)} L/min) exceeds the design yield (${(designYieldM3s * 60_000).toFixed(1)} L/min): the intake will run dry and draw air.`,
     fix: 'Draw less (smaller ram, fewer pumps, shorter delivery hours) or add storage and another source.',
     source: SAFE_YIELD_SOURCE,

@@ -1,4 +1,4 @@
-import type { LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
+import type { FrictionMethod, LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
 import type { ReviewStamp } from '../review/stamp';
 import type { ChartPhoto } from './photo-marks';
 import type { DisplayUnits } from '../units/index';
@@ -11,7 +11,7 @@ export interface ProfileChartData {
   tanks: readonly { chainageM: number; waterLevelM: number }[];
   warnings: readonly LineWarning[];
   /** `heightScatterM`: the survey's height scatter, m; the ground is drawn with a band of ± that. */
-  settings: { waterTemperatureC: number; heightScatterM?: number };
+  settings: { waterTemperatureC: number; heightScatterM?: number; frictionMethod?: FrictionMethod };
   limits: { siphonLimitHeadM: number };
   flowM3s: number;
 }

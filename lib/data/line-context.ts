@@ -1,14 +1,23 @@
 import 'server-only';
+import { Op } from 'sequelize';
 import { models } from '../../models';
 import { AppError } from '../errors';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineDesign } from '../validations/line-design';
 import { pumpOutletHeadForProject } from './ram-sites';
 
-/** What a line of this project reads from the rest of it at each analysis: ram sites that can feed it, the frost depth. */
-export async function lineSiteContext(projectId: string): Promise<LineSiteContext> {
+/**
+ * What a line of this project reads from the rest of it at each analysis: ram sites that can feed
+ * it, the frost depth, and an open drain-down task already past its date (`today`, ISO date).
+ */
+export async function lineSiteContext(projectId: string, today: string = new Date().toISOString().slice(0, 10)): Promise<LineSiteContext> {
   const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM'] });
-  return { ramOutlets: await pumpOutletHeadForProject(projectId), frostDepthM: project?.frostDepthM ?? null };
+  const overdue = await models().SeasonalTask.findOne({
+    where: { projectId, kind: 'drain-down', done: false, dueOn: { [Op.lt]: today } },
+    attributes: ['dueOn'],
+    order: [['dueOn', 'ASC']],
+  });
+  return { ramOutlets: await pumpOutletHeadForProject(projectId), frostDepthM: project?.frostDepthM ?? null, overdueDrainDownOn: overdue?.dueOn ?? null };
 }
 
 /** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */

@@ -53,6 +53,7 @@ function tankChecks(tank: TankRecord, view: Omit<TankSizingView, 'checks'>): Pla
     checks.push({
       code: 'tank-smaller-than-needed',
       severity: 'warning',
+      values: { volumeM3: view.sizing.totalStorageM3 },
       message: `The tank holds less than the daily cycle plus the reserve wanted (${view.sizing.totalStorageM3.toFixed(2)} m³).`,
       fix: 'Fit a larger tank, add a second one, or hold fewer reserve days.',
       source: 'mass curve of the daily cycle',
@@ -62,6 +63,7 @@ function tankChecks(tank: TankRecord, view: Omit<TankSizingView, 'checks'>): Pla
     checks.push({
       code: 'tank-too-low',
       severity: 'warning',
+      values: { headM: view.elevation.shortfallM },
       message: `At its lowest working level the tank is ${view.elevation.shortfallM.toFixed(1)} m too low to give every outlet its residual head.`,
       fix: 'Set the tank higher, lower the residual head wanted, or use larger pipe to cut friction.',
       source: 'energy balance: outlet elevation + residual head + friction loss',

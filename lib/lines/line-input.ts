@@ -1,4 +1,4 @@
-import { surveyHeightScatterM, type HeightConfidence, type LineInput, type LineStation } from '../../hydraulics/index';
+import { heightDatumOf, surveyHeightScatterM, type HeightConfidence, type LineInput, type LineStation } from '../../hydraulics/index';
 import type { LineDesign } from '../validations/line-design';
 import { EMPTY_SITE_CONTEXT, flowFromRam, ramStartOf, type LineSiteContext } from './ram-start';
 
@@ -10,6 +10,7 @@ import { EMPTY_SITE_CONTEXT, flowFromRam, ramStartOf, type LineSiteContext } fro
  */
 export function lineInputOf(design: LineDesign, stations: readonly (LineStation & HeightConfidence)[], context: LineSiteContext = EMPTY_SITE_CONTEXT): LineInput {
   const heightScatterM = surveyHeightScatterM(stations);
+  const heightDatum = stations.some((s) => s.heightSource !== undefined) ? heightDatumOf(stations.map((s) => s.heightSource)) : 'geodetic';
   const ram = ramStartOf(design.start, context, stations[0]?.groundElevationM ?? 0);
   return {
     stations: stations.map((s) => (s.coverM === undefined ? { chainageM: s.chainageM, groundElevationM: s.groundElevationM } : { chainageM: s.chainageM, groundElevationM: s.groundElevationM, coverM: s.coverM })),
@@ -20,8 +21,8 @@ export function lineInputOf(design: LineDesign, stations: readonly (LineStation 
     start: ram ? ram.start : (design.start as LineInput['start']),
     end: design.end,
     flow: flowFromRam(design.flow, ram),
-    // The survey's scatter comes with the route, not from the designer: it is what the heights are worth.
-    settings: heightScatterM > 0 ? { ...design.settings, heightScatterM } : design.settings,
+    // The survey's scatter and datum come with the route, not from the designer: they are what the heights are worth.
+    settings: { ...design.settings, ...(heightScatterM > 0 ? { heightScatterM } : {}), ...(heightDatum === 'assumed' ? { heightDatum } : {}) },
   };
 }
 

@@ -6,9 +6,11 @@ export interface LineSiteContext {
   ramOutlets: PumpOutletHead[];
   /** Depth frost reaches at the site, m; null when the project does not say. */
   frostDepthM: number | null;
+  /** Due date of the earliest open drain-down task that is past due, ISO date; null when none. */
+  overdueDrainDownOn?: string | null;
 }
 
-export const EMPTY_SITE_CONTEXT: LineSiteContext = { ramOutlets: [], frostDepthM: null };
+export const EMPTY_SITE_CONTEXT: LineSiteContext = { ramOutlets: [], frostDepthM: null, overdueDrainDownOn: null };
 
 /** A ram plan turned into the core's pump start. */
 export interface RamLineStart {

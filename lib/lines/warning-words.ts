@@ -18,6 +18,11 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   'washout-needed': 'Silt trap at a sag',
   'velocity-low': 'Slow water',
   'velocity-high': 'Fast water',
+  'site-altitude-assumed': 'Site altitude not known',
+  'winter-frost': 'Shallower than frost',
+  'winter-cover-contradiction': 'Buried below frost, yet no cover',
+  'drain-down-overdue': 'Drain-down overdue',
+  'device-misplaced': 'Device at the wrong kind of point',
 };
 
 export const SEVERITY_WORDS: Record<WarningSeverity, string> = { danger: 'Danger', warning: 'Warning', info: 'Advice' };
@@ -140,6 +145,33 @@ const WORDING: Record<WarningCode, Wording> = {
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, below the self-cleaning ${f.speed(v.limitVelocityMs)}: silt settles and air bubbles are not carried through.`,
     'Use a smaller pipe if the head allows it, and fit washouts at the low points of this stretch.',
   ],
+  'winter-frost': (v, f) => [
+    `The pipe lies ${f.length(v.coverM)} deep at ${f.ch(v.chainageM)}, no deeper than the site's frost depth of ${f.length(v.frostDepthM)}, and the line is not drained: water left in it can freeze and split the pipe or its fittings.`,
+    'Drain the line for winter, or lay it deeper (see Winter below).',
+  ],
+  'winter-cover-contradiction': (v, f) => [
+    `The line is taken as buried below frost depth, but the pipe lies on the surface (cover ${f.length(v.coverM)}) at ${f.ch(v.chainageM)}: both cannot be true.`,
+    'Give the survey stations their cover, or choose to drain the line for winter (see Winter below).',
+  ],
+  'drain-down-overdue': (v) => [
+    `The drain-down task due on ${v.dueOn} is not done, and this line needs draining before frost: water left in it can freeze.`,
+    'Open the drains at the low points, then tick the task done on the lift page.',
+  ],
+  'device-misplaced': (v, f) => v.deviceKind === 'air-release-valve'
+    ? [
+      `The air-release valve at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a low point of the pipe: air rises to the summits, so it vents nothing, and it may draw dirty water or air in.`,
+      `Move it to a summit; fit a washout here at ${f.ch(v.otherChainageM)} instead.`,
+    ]
+    : [
+      `The washout at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a high point of the pipe: silt settles at the sags, so it drains and flushes nothing.`,
+      `Move it to a sag; fit an air-release valve here at ${f.ch(v.otherChainageM)} instead.`,
+    ],
+  'site-altitude-assumed': (v, f) => [
+  `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
+    v.headM !== undefined ? ` where the line has suction (down to ${f.length(v.headM)} at ${f.ch(v.chainageM)})` : ''
+  }.`,
+  "Enter the site's altitude above sea level (from a map or a phone) under Settings, Site altitude.",
+],
   'velocity-high': (v, f) => [
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, above ${f.speed(v.limitVelocityMs)}: suspended sand wears the pipe and fittings, and a sudden stop gives a larger pressure surge.`,
     v.toPipeLabel ? `Use the next size up, ${v.toPipeLabel}.` : 'Use a larger pipe for this stretch.',

@@ -1,3 +1,4 @@
+import type { LineWarning } from '../../hydraulics/index';
 import { findLowPoints, type LowPoint } from '../../hydraulics/seasons/low-points';
 import type { LineDesign } from '../validations/line-design';
 
@@ -88,4 +89,41 @@ export function drainPointsOf(plan: Pick<LineWinterPlan, 'drainPoints' | 'lowEnd
   const ends = plan.lowEnds.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: p.index === 0 ? 'low start' : 'low end' }));
   const lows = plan.drainPoints.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: 'low point' }));
   return [...ends, ...lows].sort((a, b) => a.chainageM - b.chainageM);
+}
+
+/**
+ * The winter findings as line warnings, so they count in the answers and stand in "What to fix"
+ * with the line's other items: a pipe shallower than frost on a line that is not drained; a line
+ * taken as buried below frost whose pipe lies on the surface (0 cover: a contradiction, whatever the
+ * frost depth); a drain-down task past its date on a line that needs draining. The fixes live in
+ * the Winter panel, so these carry no one-click fix.
+ */
+export function winterWarnings(plan: LineWinterPlan, overdueDrainDownOn: string | null = null): LineWarning[] {
+  const out: LineWarning[] = [];
+  const at = { chainageM: plan.shallowestCoverAtM };
+  if (plan.warning) {
+    out.push({
+      code: 'winter-frost', severity: 'warning', at,
+      values: { chainageM: plan.shallowestCoverAtM, coverM: plan.shallowestCoverM, frostDepthM: plan.frostDepthM ?? undefined },
+      message: plan.warning.message, suggestedFix: 'Drain the line for winter, or lay it deeper (Winter panel).', fixes: [],
+    });
+  }
+  if (plan.treatment === 'buried-below-frost' && plan.shallowestCoverM <= 1e-9) {
+    out.push({
+      code: 'winter-cover-contradiction', severity: 'warning', at,
+      values: { chainageM: plan.shallowestCoverAtM, coverM: plan.shallowestCoverM },
+      message: 'The line is taken as buried below frost depth, but the pipe lies on the surface (no cover) here.',
+      suggestedFix: 'Give the stations their cover, or choose to drain the line for winter.', fixes: [],
+    });
+  }
+  const needsDraining = plan.treatment === 'drained-for-winter' || plan.warning !== null;
+  if (overdueDrainDownOn && needsDraining) {
+    out.push({
+      code: 'drain-down-overdue', severity: 'warning', at: { chainageM: plan.drainPoints[0]?.chainageM ?? plan.shallowestCoverAtM },
+      values: { dueOn: overdueDrainDownOn },
+      message: `The drain-down task due on ${overdueDrainDownOn} is not done: water left in this line can freeze.`,
+      suggestedFix: 'Open the drains at the low points and tick the task done on the lift page.', fixes: [],
+    });
+  }
+  return out;
 }

@@ -43,16 +43,17 @@ function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType
   return `${line.routeName ?? 'route removed'}, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}`;
 }
 
-/**
- * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
- * the screen), stretch schedule, devices, warnings, assumptions and cautions. A4 landscape.
- */
 /** The report's profile: the screen's drawing at report width, with the chosen photos marked. */
 export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = []) {
   const marks: ChartPhoto[] = photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName }));
   return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, photos: marks }, 'report');
 }
 
+/**
+ * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
+ * the screen, with the site photos chosen for it marked), stretch schedule, devices, warnings, the
+ * chosen photos, assumptions and cautions. A4 landscape.
+ */
 export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [] }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
   const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });

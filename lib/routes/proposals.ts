@@ -4,6 +4,8 @@ import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
 import { proposeBenchmarkOffset, proposeSmoothing } from '../../hydraulics/survey/cleanup/smoothing';
 import { detectGradeSpikes, detectMedianOutliers } from '../../hydraulics/survey/cleanup/spikes';
 import type { HeightSource } from '../../hydraulics/survey/height-source';
+import { surveyHeightScatterM } from '../../hydraulics/survey/height-scatter';
+import { DEFAULT_LINE_SETTINGS } from '../../hydraulics/profile/settings';
 import type { RouteStation } from '../../hydraulics/survey/types';
 import type { RoutePointView } from './types';
 
@@ -65,11 +67,15 @@ export function detectRouteProposals(points: readonly RoutePointView[]): Propose
   return [...chosen.values()].sort((a, b) => a.index - b.index);
 }
 
-/** Moving-median smoothing of the kept points' heights, keyed by seq. */
+/**
+ * Moving-median smoothing of the kept points' heights, keyed by seq. The highs and lows that stand
+ * out of the route's height scatter keep their heights (the same rule the line checks use).
+ */
 export function smoothingProposals(points: readonly RoutePointView[], windowSize: number): ProposedChange[] {
   const kept = points.filter((p) => !p.excluded);
   if (kept.length === 0) return [];
-  return toSeq(proposeSmoothing(stationsOf(kept), { windowSize }), kept);
+  const keepTurningPointsM = Math.max(DEFAULT_LINE_SETTINGS.airPointToleranceM, surveyHeightScatterM(kept));
+  return toSeq(proposeSmoothing(stationsOf(kept), { windowSize, keepTurningPointsM }), kept);
 }
 
 /** Shifts every kept height so the point `seq` takes the benchmark's known elevation. */

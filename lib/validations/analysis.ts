@@ -89,6 +89,8 @@ export const LineSettingsSchema = z.strictObject({
   siteAltitudeM: finite('Site altitude').optional(),
   siphonLimitHeadM: positive('Siphon limit').optional(),
   defaultCoverM: nonNegative('Default cover').optional(),
+  entranceLossK: nonNegative('Entrance loss coefficient').optional(),
+  heightDatum: z.enum(['geodetic', 'assumed'], { error: 'Height datum must be geodetic or assumed' }).optional(),
   checkSurge: z.boolean().optional(),
 });
 

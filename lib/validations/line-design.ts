@@ -137,6 +137,7 @@ export const LineSettingsSchema = z
     siteAltitudeM: atLeast('Site altitude', -500, 11000, 'm').optional(),
     siphonLimitHeadM: positive('Siphon limit', 10.3, 'm of head').optional(),
     defaultCoverM: atLeast('Pipe cover', 0, 10, 'm').optional(),
+    entranceLossK: atLeast('Entrance loss coefficient', 0, 10, '').optional(),
     checkSurge: z.boolean({ error: 'Surge check must be true or false' }).optional(),
   })
   .refine((s) => (s.velocityMaxMs ?? 3) > (s.velocityMinMs ?? 0.7), {

@@ -11,14 +11,16 @@ describe('POST /api/analysis/line', () => {
   const post = (body: unknown) => call(POST, { method: 'POST', path: '/api/analysis/line', body, userId });
 
   it('analyses a reference line and returns plain JSON arrays', async () => {
-    const res = await post(referenceLine());
+    const res = await post({ ...referenceLine(), settings: { ...referenceLine().settings, frictionMethod: 'hazen-williams', entranceLossK: 0 } });
     expect(res.status).toBe(200);
     const { analysis } = res.json;
+    expect(analysis.settings.frictionMethod).toBe('hazen-williams');
     expect(Array.isArray(analysis.points.chainageM)).toBe(true);
     expect(analysis.points.chainageM).toEqual([0, 500, 1000]);
     // core.md §8.2: 10 L/s in D = 100 mm, C = 150 over 1 km loses 14.60 m (10.67 form); the exact
     // k = 0.849 form gives 14.629 m [C]; 0.5 % covers the choice of constant.
-    const loss = 30 - analysis.points.hydraulicGradeM[2];
+    // Friction only: the velocity head taken at the entrance (1 × v²/2g, profile-and-checks.md §5.2) is set apart.
+    const loss = 30 - analysis.points.hydraulicGradeM[2] - analysis.points.minorLossM[2];
     expect(Math.abs(loss - 14.6) / 14.6).toBeLessThan(0.005);
     // Same source: velocity 1.273 m/s.
     expect(analysis.points.velocityMs[1]).toBeCloseTo(1.273, 3);

@@ -41,7 +41,7 @@ describe('demand uses', () => {
     ['an unknown published figure', { figureId: 'astronaut' }, 'figureId'],
     ['livestock with no season', { kind: 'livestock', figureId: 'horse', season: null }, 'season'],
     ['a peak factor below 1', { peakFactor: 0.5 }, 'peakFactor'],
-    ['a pattern whose printed percentages sum to 95 %', { deliveryKind: 'pattern', patternPresetId: 'water-mission-as-printed' }, 'patternPresetId'],
+    ['a pattern whose printed percentages sum to 95 %', { deliveryKind: 'pattern', patternPresetId: 'three-peaks-as-printed' }, 'patternPresetId'],
     ['hourly fractions summing to 90 %', { deliveryKind: 'pattern', hourlyFractions: new Array(24).fill(0.9 / 24) }, 'hourlyFractions'],
     ['23 hourly fractions', { deliveryKind: 'pattern', hourlyFractions: new Array(23).fill(1 / 23) }, 'hourlyFractions'],
   ];

@@ -88,6 +88,8 @@ test('password reset by mail: the new password works, the old one and other sess
 
   await page.goto('/sign-in');
   await page.getByRole('link', { name: 'Forgot your password?' }).click();
+  // The link moves to another page with its own E-mail field: wait for it, not the sign-in one.
+  await expect(page.getByRole('heading', { name: 'Reset your password' })).toBeVisible();
   await page.getByLabel('E-mail').fill(surveyor);
   await page.getByRole('button', { name: 'Send me a reset link' }).click();
   await expect(page.getByRole('status')).toContainText('Check your mail');

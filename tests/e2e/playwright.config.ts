@@ -8,6 +8,11 @@ const root = path.resolve(__dirname, '../..');
 export default defineConfig({
   testDir: '.',
   testMatch: '**/*.spec.ts',
+  // Desktop for every spec; the phone project (390 px wide, touch) runs the phone-width checks.
+  projects: [
+    { name: 'desktop', testIgnore: '**/phone.spec.ts' },
+    { name: 'phone', testMatch: '**/phone.spec.ts', use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true } },
+  ],
   outputDir: path.join(root, 'test-results'),
   fullyParallel: false,
   workers: 1,

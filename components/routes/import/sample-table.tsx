@@ -1,3 +1,4 @@
+import { ScrollFrame } from '@/components/ui/table-frame';
 export interface SampleTableProps {
   headers: string[];
   rows: string[][];
@@ -8,7 +9,7 @@ export interface SampleTableProps {
 /** The first rows of the file under its headers, with the chosen meaning of each column. */
 export function SampleTable({ headers, rows, roles }: SampleTableProps) {
   return (
-    <div className="overflow-x-auto rounded-md border border-creek-100">
+    <ScrollFrame label="First rows of the file" dense>
       <table className="w-full text-left text-xs" aria-label="First rows of the file">
         <thead className="bg-creek-50 text-creek-800">
           <tr>
@@ -30,6 +31,6 @@ export function SampleTable({ headers, rows, roles }: SampleTableProps) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollFrame>
   );
 }

@@ -5,6 +5,7 @@ import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/lib/units';
 import { AddPointForm } from './add-point-form';
 import { PointRow } from './point-row';
+import { ScrollFrame } from '@/components/ui/table-frame';
 
 export const PAGE_SIZE = 50;
 
@@ -28,7 +29,7 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
   const u = unitOf('length', units);
   return (
     <div className="space-y-3">
-      <div className="overflow-x-auto rounded-lg border border-creek-100 bg-white">
+      <ScrollFrame label="Route points">
         <table className="w-full text-left text-sm" aria-label="Route points">
           <thead className="bg-creek-50 text-xs text-creek-800">
             <tr>
@@ -62,7 +63,7 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
             )}
           </tbody>
         </table>
-      </div>
+      </ScrollFrame>
       {pages > 1 && (
         <nav aria-label="Pages of points" className="flex items-center gap-2 text-sm">
           <button type="button" onClick={() => onPage(current - 1)} disabled={current === 0} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Previous</button>

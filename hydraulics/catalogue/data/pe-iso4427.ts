@@ -1,13 +1,14 @@
 /**
  * Metric polyethylene pressure pipe, ISO 4427-2 / EN 12201-2.
  *
- * Minimum wall thickness e (mm) by outside diameter and SDR, as printed in the standard's table and
- * reproduced in the VESBO PE100 brochure p.3 [R12] (core.md §2.4). Stored, not recomputed: the
- * standard's walls come from the ISO 4065 table and its rounding rules, so OD/SDR rounded up gives
- * different numbers (110 mm SDR 17: 6.6 mm printed, 6.5 mm computed). `null` = not listed.
+ * Minimum wall thickness e (mm) by outside diameter and SDR, as in the standards' wall tables (ISO 4427-2 /
+ * EN 12201-2, walls from the ISO 4065 thickness table) (core.md §2.4 [R32]). Stored, not recomputed: ISO 4065
+ * takes S from the exact Renard series, so the nominal OD/SDR rounded up gives different numbers (110 mm
+ * SDR 17: 6.6 mm in the table, 6.5 mm from 110/17); tests/hydraulics/catalogue/standard-walls.test.ts checks
+ * every wall against the ISO 4065 rule. `null` = not listed.
  * The walls depend only on OD and SDR (pipe series S), so PE80 uses the same table (from memory).
  */
-export const PE_ISO4427_SOURCE = 'ISO 4427-2 / EN 12201-2 wall table (VESBO PE100 brochure p.3)';
+export const PE_ISO4427_SOURCE = 'ISO 4427-2 / EN 12201-2 wall table (walls per ISO 4065)';
 
 export type IsoSdr = 17 | 13.6 | 11 | 9 | 7.4;
 export const PE_ISO4427_SDRS: readonly IsoSdr[] = [17, 13.6, 11, 9, 7.4];

@@ -1,13 +1,14 @@
 /**
  * PVC pressure-rated pipe, SDR series, ASTM D2241 (IPS outside diameters).
  *
- * Outside diameters: ASTM D2241-09 Table 1 excerpt (½ in = 0.840 in) and the Available Plastics Inc.
- * PVC dimension table [R13]. Average walls (used for the flow diameter) and the sizes made in each
- * SDR: the same Available Plastics table [R13]. Minimum walls are not stored: the standard sets them
- * as OD/SDR with a 0.060 in floor (core.md §2.2, floor from memory) and the builder applies it.
+ * Outside diameters: ASTM D2241 Table 1 (IPS sizes; ½ in = 0.840 in) (core.md §2.2 [R13]). Average walls
+ * (used for the flow diameter) are the standard's minimum wall plus half its wall tolerance: minimum wall
+ * OD/SDR, not below 0.060 in; tolerance +12 % of the minimum, not below 0.020 in (ASTM D2241, core.md
+ * §2.2 [R32]); tests/hydraulics/catalogue/standard-walls.test.ts checks every stored average against it.
+ * Minimum walls are not stored: the builder applies the same rule.
  * SDR 13.5 is listed for ½ in only (availability from memory; no average wall published there).
  */
-export const PVC_D2241_SOURCE = 'ASTM D2241 (PVC1120, HDS 2000 psi); OD per D2241-09 Table 1; average walls per Available Plastics Inc. table';
+export const PVC_D2241_SOURCE = 'ASTM D2241 (PVC1120, HDS 2000 psi); OD per Table 1; average wall = minimum wall + half the wall tolerance';
 
 /** Hydrostatic design stress of PVC1120 / PVC1220 for water at 23 °C, psi (core.md §2.1). */
 export const PVC_D2241_HDS_PSI = 2000;

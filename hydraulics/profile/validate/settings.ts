@@ -33,6 +33,8 @@ export function assertSettings(settings: unknown): void {
   }
   optional(s.siphonLimitHeadM, assertPositive, 'settings.siphonLimitHeadM');
   optional(s.defaultCoverM, assertNonNegative, 'settings.defaultCoverM');
+  optional(s.entranceLossK, assertNonNegative, 'settings.entranceLossK');
+  if (s.heightDatum !== undefined) assertOneOf(s.heightDatum, ['geodetic', 'assumed'] as const, 'settings.heightDatum');
   if (s.checkSurge !== undefined && typeof s.checkSurge !== 'boolean') {
     throw new HydraulicsInputError('settings.checkSurge', 'must be true or false');
   }

@@ -1,15 +1,31 @@
 import type { ProposedChange } from './proposed-change';
 import { movingMedian } from './moving-median';
+import { findTurningPoints } from '../../checks/air-points';
+import { DEFAULT_LINE_SETTINGS } from '../../profile/settings';
 import type { RouteStation } from '../types';
 import { HydraulicsInputError } from '../../errors';
 import { assertFiniteNumber } from '../guards';
 
-/** Moving-median smoothing of heights, one proposal per height that would change. */
-export function proposeSmoothing(points: readonly RouteStation[], options: { windowSize: number }): ProposedChange[] {
-  const smoothed = movingMedian(points.map((p) => p.elevationM), options.windowSize);
+/**
+ * Moving-median smoothing of heights, one proposal per height that would change. A median flattens
+ * a narrow summit or sag, and those decide air valves and washouts: a high or low that stands out by
+ * more than `keepTurningPointsM` (the high/low rule of the line checks, with the survey's scatter;
+ * profile-and-checks.md §1.2) and that the smoothed profile still shows within a window of it is
+ * real ground, and keeps its height, as the route's ends do. A lone spike leaves no high in the
+ * smoothed profile and is smoothed away.
+ */
+export function proposeSmoothing(points: readonly RouteStation[], options: { windowSize: number; keepTurningPointsM?: number }): ProposedChange[] {
+  const heights = points.map((p) => p.elevationM);
+  const smoothed = movingMedian(heights, options.windowSize);
+  const toleranceM = options.keepTurningPointsM ?? DEFAULT_LINE_SETTINGS.airPointToleranceM;
+  const raw = findTurningPoints(heights, toleranceM);
+  const still = findTurningPoints(smoothed, toleranceM);
+  const half = (options.windowSize - 1) / 2;
+  const near = (candidates: readonly number[], i: number) => candidates.some((j) => Math.abs(j - i) <= half);
+  const kept = new Set([...raw.highs.filter((i) => near(still.highs, i)), ...raw.lows.filter((i) => near(still.lows, i))]);
   const changes: ProposedChange[] = [];
   points.forEach((p, i) => {
-    if (smoothed[i] !== p.elevationM) {
+    if (smoothed[i] !== p.elevationM && !kept.has(i)) {
       changes.push({
         kind: 'smoothing',
         index: i,

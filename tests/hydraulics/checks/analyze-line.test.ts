@@ -81,7 +81,7 @@ describe('analyzeLine checks', () => {
         { fromM: 300, toM: 1500, pipe: 'pvc-d2241-sdr21-1.5in' },
       ],
       start: { kind: 'water-level', levelM: 101 },
-      end: { kind: 'outlet', elevationM: 70, residualHeadM: 10 },
+      end: { kind: 'outlet', elevationM: 70, residualHeadM: 9 },
       flow: { kind: 'design', flowM3s: 0.0016 },
     };
     const analysis = analyzeLine(input);
@@ -89,10 +89,10 @@ describe('analyzeLine checks', () => {
     expect(residual).toBeDefined();
     expect(residual?.fixes).toEqual([{ kind: 'change-pipe', stretchIndex: 1, pipeId: 'pvc-d2241-sdr21-2in' }]);
     const fixed = analyzeLine(applyLineFixes(input, residual!.fixes));
-    expect(fixed.end.residualHeadM).toBeGreaterThanOrEqual(10);
+    expect(fixed.end.residualHeadM).toBeGreaterThanOrEqual(9);
     // The short stretch alone would not do: upsizing it leaves the outlet short.
     const other = analyzeLine(applyLineFixes(input, [{ kind: 'change-pipe', stretchIndex: 0, pipeId: 'pvc-d2241-sdr21-2in' }]));
-    expect(other.end.residualHeadM).toBeLessThan(10);
+    expect(other.end.residualHeadM).toBeLessThan(9);
   });
 
   it('"find the flow" with no head to spare is danger; a tank the design flow cannot fill is danger', () => {

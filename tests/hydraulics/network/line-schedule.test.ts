@@ -11,6 +11,8 @@ function line(flow: LineInput['flow']): LineInput {
     start: { kind: 'water-level', levelM: 201 },
     end: { kind: 'outlet', elevationM: 140, residualHeadM: 5 },
     flow,
+    // The network solver's formula; the line takes the velocity head and sharp entrance at the spring (K 1.5).
+    settings: { frictionMethod: 'hazen-williams' },
   };
 }
 
@@ -33,7 +35,8 @@ describe('analyzeLine with a flow schedule', () => {
     const lower = pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.0008, lengthM: 700 * slope, pipe: spec });
     expect(scheduled.totals.frictionLossM).toBeCloseTo(upper + lower, 9);
     const atTakeOff = Array.from(scheduled.points.chainageM).indexOf(500);
-    expect(scheduled.points.hydraulicGradeM[atTakeOff]).toBeCloseTo(201 - upper, 9);
+    const entranceM = 1.5 * scheduled.points.velocityMs[0] ** 2 / (2 * 9.80665);
+    expect(scheduled.points.hydraulicGradeM[atTakeOff]).toBeCloseTo(201 - entranceM - upper, 9);
     expect(scheduled.points.velocityMs[atTakeOff - 1]).toBeGreaterThan(scheduled.points.velocityMs[atTakeOff + 1]);
   });
 
@@ -47,7 +50,7 @@ describe('analyzeLine with a flow schedule', () => {
         { id: 'trough', kind: 'outlet', elevationM: 140, demandM3s: 0.0008 },
       ],
       links: [
-        { id: 'upper', from: 'spring', to: 'take-off', lengthM: 500 * slope, pipe: PIPE },
+        { id: 'upper', from: 'spring', to: 'take-off', lengthM: 500 * slope, pipe: PIPE, minorK: 1.5 },
         { id: 'lower', from: 'take-off', to: 'trough', lengthM: 700 * slope, pipe: PIPE },
       ],
     };

@@ -4,7 +4,7 @@ import { simpleLine, testPipe } from './fixtures';
 
 describe('analyzeProfile behaviour', () => {
   it('computes friction on the 3-D slope length of the pipe (a 300 m run rising 400 m is 500 m of pipe)', () => {
-    const profile = analyzeProfile(simpleLine([[0, 0], [300, 400]], 500, 0.005));
+    const profile = analyzeProfile({ ...simpleLine([[0, 0], [300, 400]], 500, 0.005), settings: { frictionMethod: 'hazen-williams' } });
     expect(profile.totals.horizontalLengthM).toBe(300);
     expect(profile.totals.slopeLengthM).toBeCloseTo(500, 12);
     const expected = hazenWilliamsHeadLoss({ flowM3s: 0.005, lengthM: 500, diameterM: 0.1, c: 150 });
@@ -39,7 +39,10 @@ describe('analyzeProfile behaviour', () => {
     expect(p.groundElevationM[1]).toBeCloseTo(92, 12);
     const v = 0.002 / (Math.PI * 0.025 * 0.025);
     expect(p.velocityMs[2]).toBeCloseTo(v, 12);
-    expect(p.minorLossM[2]).toBeCloseTo(minorLossHeadM({ kTotal: 2, velocityMs: v }), 12);
+    // Velocity head and sharp entrance at the source in the 100 mm pipe (profile-and-checks.md §5.2), then K = 2 at the fitting.
+    const entryM = minorLossHeadM({ kTotal: 1.5, velocityMs: 0.002 / (Math.PI * 0.05 * 0.05) });
+    expect(p.minorLossM[0]).toBeCloseTo(entryM, 12);
+    expect(p.minorLossM[2] - p.minorLossM[0]).toBeCloseTo(minorLossHeadM({ kTotal: 2, velocityMs: v }), 12);
     expect(profile.totals.minorLossM).toBeCloseTo(p.minorLossM[2], 15);
     expect(profileRows(profile, true).map((row) => row.chainageM)).toEqual([0, 1000]);
     expect(profileRows(profile)).toHaveLength(4);
@@ -53,7 +56,8 @@ describe('analyzeProfile behaviour', () => {
     const p = profile.points;
     expect(p.staticHeadM[0]).toBe(301);
     expect(p.staticHeadM[1]).toBe(200);
-    expect(p.hydraulicGradeM[1]).toBe(200);
+    // The tank's level less the velocity head and entrance loss of the pipe leaving it (§5.2).
+    expect(p.hydraulicGradeM[1]).toBeCloseTo(200 - 1.5 * p.velocityMs[1] ** 2 / (2 * 9.80665), 12);
     expect(p.staticPressureHeadM[2]).toBeCloseTo(100, 12);
     expect(profile.tanks).toEqual([{ chainageM: 500, waterLevelM: 200 }]);
     expect(profile.reaches).toHaveLength(2);

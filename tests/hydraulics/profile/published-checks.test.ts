@@ -14,7 +14,7 @@ const FLAT_KM: readonly (readonly [number, number])[] = [
 
 describe('line profile against published check values', () => {
   it('core.md §8.2 (Hazen-Williams): 1 km of 100 mm, C = 150, at 10 L/s loses 14.60 m', () => {
-    const profile = analyzeProfile(simpleLine(FLAT_KM, 150, 0.01));
+    const profile = analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0.01), settings: { frictionMethod: 'hazen-williams' } });
     // [C] 14.603 m with the 10.67 form, 14.629 m with the exact k = 0.849 form: ~1 % band.
     expect(relative(profile.totals.frictionLossM, 14.6)).toBeLessThan(0.01);
     // Independently of the core: the exact k = 0.849 form (constant 10.6742, exponents 1.85185 / 4.87037,
@@ -96,8 +96,11 @@ describe('line profile against published check values', () => {
     const gradient = profile.totals.frictionLossM / 2000;
     const crossing = profile.crossings.find((c) => c.kind === 'negative-pressure');
     expect(crossing?.entering).toBe(true);
-    // Between stations (not snapped to one): 110 - gradient * x = 100.
-    expect(crossing!.chainageM).toBeCloseTo(10 / gradient, 6);
+    // Between stations (not snapped to one): 110 - (1 + 0.5)·v²/2g at the entrance - gradient * x = 100
+    // (velocity head and sharp entrance, profile-and-checks.md §5.2).
+    const entranceM = profile.points.minorLossM[0];
+    expect(entranceM).toBeCloseTo(1.5 * profile.points.velocityMs[0] ** 2 / (2 * 9.80665), 12);
+    expect(crossing!.chainageM).toBeCloseTo((10 - entranceM) / gradient, 6);
     expect(crossing!.chainageM).toBeGreaterThan(0);
     expect(crossing!.chainageM).toBeLessThan(1000);
   });

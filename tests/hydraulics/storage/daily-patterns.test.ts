@@ -4,7 +4,7 @@ import {
   DAILY_USE_PATTERN_PRESETS,
   JORDAN_MIDDAY_PATTERN,
   JORDAN_MORNING_EVENING_PATTERN,
-  WATER_MISSION_PATTERN_AS_PRINTED,
+  THREE_PEAKS_PATTERN_AS_PRINTED,
 } from '../../../hydraulics/storage/daily-patterns';
 
 // Tanzania DCOM Manual Vol. I, App. C, Table C.1, "data from Jordan" (core.md §3.4).
@@ -25,10 +25,10 @@ describe('published daily use patterns', () => {
     expect(JORDAN_MIDDAY_PATTERN.hourlyFractions[11]).toBe(0.2);
   });
 
-  it('the Water Mission column sums to 95 % as printed: flagged, and rejected as a pattern', () => {
-    expect(WATER_MISSION_PATTERN_AS_PRINTED.sumPercent).toBe(95);
-    expect(WATER_MISSION_PATTERN_AS_PRINTED.flag).toMatch(/95 %/);
-    expect(() => assertHourlyPattern(WATER_MISSION_PATTERN_AS_PRINTED.hourlyFractions)).toThrow(/5 % is missing/);
+  it('the three-peaks column sums to 95 % as printed: flagged, and rejected as a pattern', () => {
+    expect(THREE_PEAKS_PATTERN_AS_PRINTED.sumPercent).toBe(95);
+    expect(THREE_PEAKS_PATTERN_AS_PRINTED.flag).toMatch(/95 %/);
+    expect(() => assertHourlyPattern(THREE_PEAKS_PATTERN_AS_PRINTED.hourlyFractions)).toThrow(/5 % is missing/);
   });
 
   it('every preset names the DCOM manual and is used 5:00-18:00 only', () => {

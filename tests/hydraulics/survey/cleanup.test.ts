@@ -151,3 +151,27 @@ describe('properties (fast-check)', () => {
     );
   });
 });
+
+describe('smoothing keeps the real summits and sags (profile-and-checks.md §1.2)', () => {
+  it('a narrow true summit keeps its height; the median alone would cut it by 3 m', () => {
+    const heights = [0, 3, 6, 9, 6, 3, 0, -3, -6, -3, 0];
+    expect(movingMedian(heights, 5)[3]).toBe(6);
+    const changes = proposeSmoothing(profile(heights), { windowSize: 5 });
+    expect(changes.find((c) => c.index === 3)).toBeUndefined();
+    // The sag at index 8 keeps its height too.
+    expect(changes.find((c) => c.index === 8)).toBeUndefined();
+  });
+
+  it('a lone spike is still smoothed away (it leaves no high in the smoothed profile)', () => {
+    const changes = proposeSmoothing(profile([1, 2, 30, 4, 5]), { windowSize: 3 });
+    expect(changes.find((c) => c.index === 2)?.to).toBe(4);
+  });
+
+  it('bumps within the survey scatter are smoothed; a summit standing out of it is kept', () => {
+    // Ridge of 12 m with ±1.5 m wiggles on its flanks (invented); scatter 2 m.
+    const heights = [100, 103, 101.5, 106, 104.5, 109, 112, 109, 104.5, 106, 101.5, 103, 100];
+    const changes = proposeSmoothing(profile(heights), { windowSize: 3, keepTurningPointsM: 2 });
+    expect(changes.find((c) => c.index === 6)).toBeUndefined();
+    expect(changes.some((c) => c.index === 2 || c.index === 4)).toBe(true);
+  });
+});

@@ -149,7 +149,11 @@ describe('long profile with a break-pressure tank', () => {
     expect(grades).toHaveLength(2);
     const firstReach = pathPoints(grades[0].attrs.d);
     expect(firstReach[firstReach.length - 1][1]).toBeCloseTo(e.y(analysis.reaches[0].arrivingHeadM), 1);
-    expect(pathPoints(grades[1].attrs.d)[0][1]).toBeCloseTo(e.y(tank.waterLevelM), 1);
+    // Below the tank the grade starts at its water level less the velocity head and entrance loss (profile-and-checks.md §5.2).
+    const tankPoint = Array.from(analysis.points.chainageM).findIndex((c) => Math.abs(c - tank.chainageM) < 1e-9);
+    const entranceM = tank.waterLevelM - analysis.points.hydraulicGradeM[tankPoint];
+    expect(entranceM).toBeCloseTo(1.5 * analysis.points.velocityMs[tankPoint] ** 2 / (2 * 9.80665), 9);
+    expect(pathPoints(grades[1].attrs.d)[0][1]).toBeCloseTo(e.y(analysis.points.hydraulicGradeM[tankPoint]), 1);
     const symbol = layer(svg, 'devices').children.find((g) => g.attrs['data-kind'] === 'break-pressure-tank');
     expect(Number(symbol!.attrs['data-chainage-m'])).toBeCloseTo(tank.chainageM, 2);
   });
