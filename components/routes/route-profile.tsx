@@ -86,7 +86,7 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
 
   return (
     <figure className="relative space-y-1">
-      <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full rounded-md border border-creek-100 bg-white" data-testid="route-profile">
+      <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} role={photoPlaces.length > 0 ? 'group' : 'img'} aria-label={title} className="w-full rounded-md border border-creek-100 bg-white" data-testid="route-profile">
         <title>{title}</title>
         {y.ticks(5).map((t) => (
           <g key={`y${t}`}>

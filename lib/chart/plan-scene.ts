@@ -76,7 +76,7 @@ export function planScene(
   });
   const scaleUnits = niceLength(toDisplay('length', metresPerPx * 80, u.system));
   const scaleM = fromDisplay('length', scaleUnits, u.system);
-  const root = el('svg', { viewBox: `0 0 ${size.width} ${size.height}`, width: size.width, height: size.height, role: 'img', 'aria-label': 'Plan of the route', 'font-family': FONT_FAMILY },
+  const root = el('svg', { viewBox: `0 0 ${size.width} ${size.height}`, width: size.width, height: size.height, role: photoPlaces.length > 0 ? 'group' : 'img', 'aria-label': 'Plan of the route', 'font-family': FONT_FAMILY },
     el('rect', { x: 0, y: 0, width: size.width, height: size.height, fill: PROFILE_COLOURS.paper }),
     el('g', { 'data-layer': 'plan-zones' }, ...zones),
     el('polyline', { points: polyline(-Infinity, Infinity), fill: 'none', stroke: PROFILE_COLOURS.gradeLine, 'stroke-width': 2.5, 'stroke-linejoin': 'round', 'data-layer': 'plan-route' }),

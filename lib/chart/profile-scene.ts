@@ -61,13 +61,15 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
   const clip = (id: string, top: number, bottom: number) =>
     el('clipPath', { id }, el('rect', { x: frame.plotLeft, y: top, width: frame.plotRight - frame.plotLeft, height: bottom - top }));
   const photosFrame = photoFrame(data, frame);
+  const photoPlaces = options.photos ? photoMarkPlaces(options.photos, photosFrame) : [];
   const elevationClip = `${idPrefix}-elevation-clip`;
   const pressureClip = `${idPrefix}-pressure-clip`;
   const root = el('svg', {
     viewBox: `0 0 ${frame.width} ${frame.height}`,
     width: frame.width,
     height: frame.height,
-    role: 'img',
+    // With photo marks to point at (focusable on screen) it is a labelled group, not a flat image.
+    role: photoPlaces.length > 0 ? 'group' : 'img',
     'aria-labelledby': `${idPrefix}-title`,
     'font-family': FONT_FAMILY,
     'data-from-m': frame.fromM,
@@ -94,5 +96,5 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
     stampLayer(frame, options.stamp),
     legend.node,
   );
-  return { root, frame, drawnIndices, photos: options.photos ? photoMarkPlaces(options.photos, photosFrame) : [] };
+  return { root, frame, drawnIndices, photos: photoPlaces };
 }

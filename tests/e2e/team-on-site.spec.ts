@@ -3,6 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
 import { jpegWithPosition, plainJpeg } from '../support/photo-bytes';
+import { seriousFindings } from './axe';
 import { signIn, watchConsole } from './fixtures';
 import { waitForMail } from './mail';
 
@@ -129,6 +130,8 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await expect(card.getByRole('img')).toHaveJSProperty('complete', true);
   expect(await card.getByRole('img').evaluate((img: HTMLImageElement) => img.naturalWidth)).toBeGreaterThan(0);
   await field.screenshot({ path: 'test-results/site-photos-route.png', fullPage: true });
+  // The marks, the card and the photo table pass the accessibility checks every page passes.
+  expect(await seriousFindings(field)).toEqual([]);
 
   // The one without a position is listed at the chainage typed, picked by hand.
   const trough = field.getByTestId('photo-row').filter({ hasText: 'trough.jpg' });
@@ -159,6 +162,7 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText(`Photo 3 · ${crossingM.toFixed(1)} m`);
   await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText('0.0 m off the line');
   await page.screenshot({ path: 'test-results/site-photos-line.png', fullPage: true });
+  expect(await seriousFindings(page)).toEqual([]);
   // The line was only for looking: removed, so the demo's revisions stay as they were.
   expect((await page.request.delete(`/api/lines/${lineId}`)).status()).toBe(204);
   expect(ownerErrors).toEqual([]);

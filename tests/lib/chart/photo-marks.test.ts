@@ -49,6 +49,9 @@ describe('site photos on the long profile', () => {
     }
     expect(svgToString(drawn().scene.root)).toContain('<title>Photo 2 at 812.5 m: Creek crossing</title>');
     expect(findAll(layer(svg, 'legend'), (e) => e.attrs['data-legend'] === 'photos')).toHaveLength(1);
+    // Marks a person can point at make the drawing a labelled group; without them it stays an image.
+    expect(svg.attrs.role).toBe('group');
+    expect(parseSvg(svgToString(profileScene(analysis, { units: metric, devices: [], width: 1000 }).root)).attrs.role).toBe('img');
   });
 
   it('draws only the photos inside the chainage window shown', () => {
