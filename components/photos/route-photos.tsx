@@ -111,7 +111,7 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
       {photos.length === 0 ? (
         <p className="text-sm text-creek-600">No photos on this route yet.</p>
       ) : (
-        <TableFrame head={<><HeadCell>No.</HeadCell><HeadCell><span className="sr-only">Photo</span></HeadCell><HeadCell>Chainage</HeadCell><HeadCell>Off the line</HeadCell><HeadCell>Taken</HeadCell><HeadCell>File</HeadCell><HeadCell>In the report</HeadCell>{editable && <HeadCell><span className="sr-only">Remove</span></HeadCell>}</>}>
+        <TableFrame head={<><HeadCell>No.</HeadCell><HeadCell><span className="sr-only">Photo</span></HeadCell><HeadCell>Chainage</HeadCell><HeadCell>Off the line</HeadCell><HeadCell>Taken</HeadCell><HeadCell>Caption and file</HeadCell><HeadCell>In the report</HeadCell>{editable && <HeadCell><span className="sr-only">Remove</span></HeadCell>}</>}>
           {photos.map((p) => (
             <tr key={p.id} className="border-t border-creek-50 align-middle" data-testid="photo-row" data-photo-id={p.id}>
               <td className="px-4 py-2 font-semibold text-creek-900">{numbers.get(p.id) ?? '—'}</td>
@@ -137,7 +137,23 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
               </td>
               <td className="px-4 py-2 text-creek-700">{p.offsetM === null ? '—' : formatQuantity('length', p.offsetM, units)}<span className="sr-only"> ({offLineWords(p, units)})</span></td>
               <td className="px-4 py-2 text-creek-700">{p.takenAt ? takenWords(p.takenAt) : '—'}</td>
-              <td className="px-4 py-2 text-creek-700">{p.fileName}</td>
+              <td className="px-4 py-2 text-creek-700">
+                {editable ? (
+                  <input
+                    aria-label={`Caption of ${p.fileName}`}
+                    defaultValue={p.caption}
+                    maxLength={500}
+                    placeholder="What it shows"
+                    className="block w-full min-w-40 rounded-md border border-creek-200 px-2 py-1 text-sm"
+                    onBlur={(e) => {
+                      const caption = e.currentTarget.value.trim();
+                      if (caption !== p.caption) update.mutate({ photoId: p.id, caption }, { onError: (err) => setRowProblem(`${p.fileName}: ${err.message}`) });
+                    }}
+                    onKeyDown={(e) => { if (e.key === 'Enter') e.currentTarget.blur(); }}
+                  />
+                ) : p.caption && <span className="block text-creek-900">{p.caption}</span>}
+                <span className="block text-xs">{p.fileName}</span>
+              </td>
               <td className="px-4 py-2">
                 <input
                   type="checkbox"

@@ -137,11 +137,16 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   const trough = field.getByTestId('photo-row').filter({ hasText: 'trough.jpg' });
   await expect(trough).toContainText('picked by hand');
   await expect(trough.getByLabel('Chainage of trough.jpg')).toHaveValue('420');
-  // Chosen for the report, it stays chosen.
+  // Captioned and chosen for the report, it stays so.
+  await field.getByLabel('Caption of spring-box.jpg').fill('Spring box lid, moss on the north side');
+  await field.getByLabel('Caption of spring-box.jpg').press('Enter');
   await field.getByLabel('Show spring-box.jpg in the report').check();
   await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
   await field.reload();
   await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
+  await expect(field.getByLabel('Caption of spring-box.jpg')).toHaveValue('Spring box lid, moss on the north side');
+  await field.getByTestId('route-profile').getByRole('button', { name: 'Photo 1: Spring box lid, moss on the north side' }).hover();
+  await expect(field.getByTestId('photo-card')).toContainText('Spring box lid, moss on the north side');
   await context.close();
   expect(errors.filter((e) => !e.includes('415 (Unsupported Media Type)'))).toEqual([]);
 
