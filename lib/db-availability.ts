@@ -39,3 +39,17 @@ export function isDatabaseUnavailable(error: unknown, depth = 0): boolean {
   const inner = (error as { original?: unknown; parent?: unknown }).original ?? (error as { parent?: unknown }).parent ?? error.cause;
   return isDatabaseUnavailable(inner, depth + 1);
 }
+
+// Two requests that changed the same thing at the same moment: unique key taken by the other,
+// a deadlock the database broke, a serialisation failure. The loser's transaction rolled back whole.
+const CONCURRENT_WRITE_CODES = new Set(['23505', '40P01', '40001']);
+
+/** True when `error` (or its cause) is a write that lost a race with another request's write. */
+export function isConcurrentWriteConflict(error: unknown, depth = 0): boolean {
+  if (!(error instanceof Error) || depth > 4) return false;
+  if (error.name === 'SequelizeUniqueConstraintError') return true;
+  const code = (error as { code?: unknown }).code;
+  if (typeof code === 'string' && CONCURRENT_WRITE_CODES.has(code)) return true;
+  const inner = (error as { original?: unknown; parent?: unknown }).original ?? (error as { parent?: unknown }).parent ?? error.cause;
+  return isConcurrentWriteConflict(inner, depth + 1);
+}

@@ -14,6 +14,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare frostDepthM: CreationOptional<number | null>;
   /** How people on this project write decimals in number boxes; null = the browser's locale. */
   declare decimalMark: CreationOptional<'.' | ',' | null>;
+  declare timeZone: CreationOptional<string | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -30,6 +31,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
         siteNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         frostDepthM: { type: DataTypes.DOUBLE, allowNull: true },
         decimalMark: { type: DataTypes.STRING(1), allowNull: true },
+        timeZone: { type: DataTypes.STRING(64), allowNull: true },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,

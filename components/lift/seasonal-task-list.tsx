@@ -32,7 +32,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
               <span className="tabular w-24 shrink-0 font-medium text-creek-900">{task.dueOn}</span>
               <span className="w-24 shrink-0 rounded bg-creek-50 px-2 py-0.5 text-center text-xs text-creek-800">{KIND_LABEL[task.kind]}</span>
               {isOverdue(task, today) && (
-                <span className={`rounded px-2 py-0.5 text-xs font-semibold ${task.kind === 'drain-down' ? 'bg-clay-600 text-white' : 'bg-ochre-500 text-white'}`} data-testid="task-overdue">
+                <span className={`rounded px-2 py-0.5 text-xs font-semibold ${task.kind === 'drain-down' ? 'bg-clay-600 text-white' : 'bg-ochre-700 text-white'}`} data-testid="task-overdue">
                   {task.kind === 'drain-down' ? 'Overdue: drain before frost' : 'Overdue'}
                 </span>
               )}

@@ -11,10 +11,14 @@ export interface LineEditorProps {
   projectName: string;
   unitSystem: UnitSystem;
   canEdit: boolean;
+  /** May comment on the working copy (pins on the profile). */
+  canComment: boolean;
+  /** Team members the comment form can mention. */
+  members: { id: string; name: string }[];
 }
 
 /** Loads the line and its stations (prefetched on the server), then opens the workspace. */
-export function LineEditor({ lineId, projectName, unitSystem, canEdit }: LineEditorProps) {
+export function LineEditor({ lineId, projectName, unitSystem, canEdit, canComment, members }: LineEditorProps) {
   const line = useQuery(lineQuery(lineId));
   const stations = useQuery(lineStationsQuery(lineId));
   const context = useQuery(lineSiteContextQuery(lineId));
@@ -29,7 +33,7 @@ export function LineEditor({ lineId, projectName, unitSystem, canEdit }: LineEdi
   if (stations.data.length < 2) {
     return <p role="alert" className="text-sm text-clay-700">This line has no route with at least two stations any more (the route was removed or emptied). Its design is kept: survey the route again, or start a new line on a surveyed route.</p>;
   }
-  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} context={context.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} />;
+  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} context={context.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} canComment={canComment} members={members} />;
 }
 
 export function LineEditorSkeleton() {

@@ -1,9 +1,12 @@
 'use client';
 
-import { useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
+import { lineAnchorChoices } from '@/lib/review/anchor-choices';
+import type { CommentRecord } from '@/lib/review/comment-types';
+import { pinChainage, pinsOf } from '@/lib/review/threads';
 import type { LineRecord } from '@/lib/data/lines';
 import { lineAnswers } from '@/lib/lines/answers';
 import { SHORT_CAUTION } from '@/lib/lines/cautions';
@@ -17,6 +20,8 @@ import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Panel } from '@/components/ui/panel';
+import { CommentsPanel } from '@/components/reviews/comments-panel';
+import { useCommentThreads } from '@/components/reviews/use-comment-threads';
 import { DeviceTable } from './device-table';
 import { EndsForm } from './ends-form';
 import { FittingTable } from './fitting-table';
@@ -45,16 +50,25 @@ export interface LineWorkspaceProps {
   projectName: string;
   unitSystem: UnitSystem;
   canEdit: boolean;
+  /** May pin comments on the working copy's profile (owners, designers, reviewers). */
+  canComment: boolean;
+  members: { id: string; name: string }[];
 }
 
 /** The designer's screen: answers first, warnings, the long profile beside the plan, then the design and the results. */
-export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit }: LineWorkspaceProps) {
+export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit, canComment, members }: LineWorkspaceProps) {
   const units = displayUnits(unitSystem);
   const draft = useLineDraft(line, stations, context, canEdit);
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
-  const [view, setView] = useState<ChainageView>({ fromM: firstM, toM: lastM });
+  const comments = useCommentThreads(line.projectId, null, [{ kind: 'line', lineId: line.id }, { kind: 'project' }]);
+  // A thread picked by the address opens with the profile round its pin.
+  const [view, setView] = useState<ChainageView>(() => {
+    const at = comments.threads.find((t) => t.thread.id === comments.selectedId)?.thread;
+    const pinnedAt = at ? pinChainage(at, line.id) : null;
+    return pinnedAt === null ? { fromM: firstM, toM: lastM } : viewAround(pinnedAt, pinnedAt, firstM, lastM);
+  });
   const [exaggeration, setExaggeration] = useState<number | 'auto'>('auto');
   const [hoverM, setHoverM] = useState<number | null>(null);
   const [selected, setSelected] = useState<number | null>(null);
@@ -63,6 +77,13 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const [note, setNote] = useState<string | null>(null);
   const profileRef = useRef<HTMLDivElement>(null);
   const photos = useRoutePhotos(line.projectId, line.routeId);
+  const openedWithComment = useRef(comments.selectedId !== null);
+  useEffect(() => {
+    if (openedWithComment.current) profileRef.current?.scrollIntoView({ block: 'start' });
+  }, []);
+  const [pickedM, setPickedM] = useState<number | null>(null);
+  const pins = useMemo(() => pinsOf(comments.threads, (c) => pinChainage(c, line.id), comments.selectedId), [comments.threads, comments.selectedId, line.id]);
+  const partNames = useMemo(() => new Map([[line.id, line.name]]), [line.id, line.name]);
 
   const analysis = 'analysis' in result ? result.analysis : null;
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
@@ -88,6 +109,15 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
     const fromM = Math.min(range.fromM, ...members);
     const toM = Math.max(range.toM, ...members);
     setView(viewAround(fromM, toM, firstM, lastM));
+    profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  }
+
+  function jumpToComment(comment: CommentRecord) {
+    comments.setSelectedId(comment.id);
+    const at = pinChainage(comment, line.id);
+    if (at === null) return;
+    setView(viewAround(at, at, firstM, lastM));
+    setHoverM(at);
     profileRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
   }
 
@@ -162,11 +192,17 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               highlight={highlight}
               hoverM={hoverM}
               onHover={setHoverM}
-              onPick={placing ? place : undefined}
-              pickLabel={`place a ${placeKind.replace(/-/g, ' ')}`}
+              onPick={placing ? place : canComment ? setPickedM : undefined}
+              pickLabel={placing ? `place a ${placeKind.replace(/-/g, ' ')}` : 'pin a comment'}
+              pins={pins}
               photos={photos}
             />
             <div className="space-y-2">
+              {canComment && !placing && (
+                <p className="text-xs text-creek-700" role="status" data-testid="picked-chainage">
+                  {pickedM === null ? 'Click the profile to pin a comment at a chainage.' : <>Picked ch. {formatQuantity('chainage', pickedM, units.system)}: write the comment under <a className="underline" href="#line-comments">Comments</a>.</>}
+                </p>
+              )}
               <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} photos={photos} />
               <p className="text-xs text-creek-600">Plan from the surveyed positions, north up. Point at either drawing to find the same place on the other.</p>
               <div className="flex gap-1 text-xs">
@@ -178,6 +214,26 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           </div>
         </section>
       )}
+
+      <Panel title={`Comments on this line and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
+        <span id="line-comments" className="block scroll-mt-4" />
+        {comments.isError ? (
+          <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void comments.refetch()}>Try again</button></p>
+        ) : (
+          <CommentsPanel
+            projectId={line.projectId}
+            revisionId={null}
+            threads={comments.threads}
+            canComment={canComment}
+            members={members}
+            anchors={lineAnchorChoices(line, pickedM, analysis?.warnings ?? [], unitSystem)}
+            partNames={partNames}
+            unitSystem={unitSystem}
+            selectedId={comments.selectedId}
+            onJump={jumpToComment}
+          />
+        )}
+      </Panel>
 
       <Panel title="Ends and flow">
         <EndsForm design={design} units={units} change={draft.change} canEdit={canEdit} firstGroundM={stations[0].groundElevationM} lastGroundM={stations[stations.length - 1].groundElevationM} ramOutlets={context.ramOutlets} />

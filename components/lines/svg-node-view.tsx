@@ -29,7 +29,7 @@ export function SvgNodeView({ node, children }: { node: SvgNode; children?: Reac
   return createElement('svg', propsOf(node), <SceneBody key="scene" node={node} />, children);
 }
 
-/** One node of a drawing (a layer) inside an SVG drawn elsewhere. */
-export function SvgNodePart({ node }: { node: SvgNode }) {
-  return render(node, 0);
+/** Draws nodes of a pure drawing inside an SVG that React draws (a layer added to a hand-made chart). */
+export function SvgNodes({ nodes }: { nodes: readonly SvgNode[] }) {
+  return createElement(Fragment, null, ...nodes.map(render));
 }

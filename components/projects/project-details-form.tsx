@@ -12,6 +12,8 @@ import { UpdateProjectSchema } from '@/lib/validations/projects';
 import { displayUnits, formatPlainNumber, fromDisplay, toDisplay } from '@/lib/units';
 import { typedNumber } from '@/lib/units/decimal-mark-store';
 
+const TIME_ZONES: readonly string[] = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
+
 /** The typed frost depth in SI: empty means not known; text that is not a number stays NaN for the schema to refuse. */
 function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSummary['unitSystem']): number | null {
   const trimmed = String(text ?? '').trim();
@@ -45,6 +47,7 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
       name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem'), siteNotes: form.get('siteNotes'),
       frostDepthM: frostDepthFrom(form.get('frostDepthM'), project.unitSystem),
       decimalMark: form.get('decimalMark') || null,
+      timeZone: form.get('timeZone') || null,
     });
     if (!input) return;
     try {
@@ -68,6 +71,11 @@ export function ProjectDetailsForm({ project, editable }: { project: ProjectSumm
         <option value="">As the browser&apos;s language writes it</option>
         <option value=".">Point (1.5; 1,500 groups thousands)</option>
         <option value=",">Comma (1,5; 1.500,5 groups thousands)</option>
+      </SelectField>
+      <SelectField id="timeZone" label="Time zone" defaultValue={project.timeZone ?? ''} errors={fields.timeZone}
+        hint="Survey times written without an offset are read in this zone, in the import preview and the import alike.">
+        <option value="">UTC (not set)</option>
+        {TIME_ZONES.map((zone) => <option key={zone} value={zone}>{zone}</option>)}
       </SelectField>
       <TextField id="frostDepthM" label={`Frost depth (${units.length})`} inputMode="decimal" defaultValue={frostShown} errors={fields.frostDepthM}
         hint="How deep frost reaches at the site (local code or records); lines with less cover are drained for winter. Empty: not known." />

@@ -2,18 +2,12 @@
 
 import { useState, type FormEvent } from 'react';
 import { useCreateComment, useResolveComment } from '@/lib/queries/reviews';
-import type { CommentAnchor } from '@/lib/review/anchors';
+import type { AnchorChoice } from '@/lib/review/anchor-choices';
 import type { CommentRecord } from '@/lib/review/comment-types';
 import type { UnitSystem } from '@/lib/units';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { anchorWords } from './comment-anchor-words';
-
-export interface AnchorChoice {
-  key: string;
-  label: string;
-  anchor: CommentAnchor;
-}
 
 export interface CommentsPanelProps {
   projectId: string;
@@ -23,21 +17,22 @@ export interface CommentsPanelProps {
   threads: { thread: CommentRecord; replies: CommentRecord[]; pin: string | null }[];
   canComment: boolean;
   members: { id: string; name: string }[];
-  /** Where a new comment can be pinned; the first is the default (a chainage picked on the profile comes first). */
+  /** Where a new comment can be pinned; the first is the default (a chainage picked on the profile comes first). None: no new comment until a place is picked. */
   anchors: AnchorChoice[];
-  lineNames: ReadonlyMap<string, string>;
+  /** Names of the lines, routes and network parts anchors point at, by id. */
+  partNames: ReadonlyMap<string, string>;
   unitSystem: UnitSystem;
   selectedId: string | null;
   onJump: (comment: CommentRecord) => void;
 }
 
 /** Threads with replies, resolve and reopen, and the form for a new comment with its pin and mentions. */
-export function CommentsPanel({ projectId, revisionId, threads, canComment, members, anchors, lineNames, unitSystem, selectedId, onJump }: CommentsPanelProps) {
+export function CommentsPanel({ projectId, revisionId, threads, canComment, members, anchors, partNames, unitSystem, selectedId, onJump }: CommentsPanelProps) {
   const create = useCreateComment(projectId);
   const resolve = useResolveComment(projectId);
   const [anchorKey, setAnchorKey] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const anchor = anchors.find((a) => a.key === anchorKey) ?? anchors[0];
+  const anchor: AnchorChoice | undefined = anchors.find((a) => a.key === anchorKey) ?? anchors[0];
 
   async function submit(event: FormEvent<HTMLFormElement>, parentId: string | null) {
     event.preventDefault();
@@ -49,7 +44,7 @@ export function CommentsPanel({ projectId, revisionId, threads, canComment, memb
         body: String(data.get('body') ?? ''),
         revisionId,
         parentId,
-        ...(parentId ? {} : { anchor: anchor.anchor }),
+        ...(parentId || !anchor ? {} : { anchor: anchor.anchor }),
         mentions: data.getAll('mentions').map(String),
       });
       form.reset();
@@ -61,7 +56,7 @@ export function CommentsPanel({ projectId, revisionId, threads, canComment, memb
 
   return (
     <div className="space-y-4" data-testid="comments-panel">
-      {canComment && (
+      {canComment && anchor && (
         <form onSubmit={(e) => void submit(e, null)} className="space-y-2 rounded-md border border-creek-100 bg-creek-50/40 p-3" aria-label="New comment">
           <label className="block text-sm font-medium text-creek-900">
             Pin to
@@ -88,11 +83,11 @@ export function CommentsPanel({ projectId, revisionId, threads, canComment, memb
       {threads.length === 0 && <p className="text-sm text-creek-700">No comments here yet.</p>}
       <ol className="space-y-3">
         {threads.map(({ thread, replies, pin }) => (
-          <li key={thread.id} data-testid="comment-thread" data-resolved={thread.resolved ? 'yes' : 'no'} className={`rounded-md border p-3 text-sm ${thread.id === selectedId ? 'border-creek-700 ring-1 ring-creek-700' : 'border-creek-100'} ${thread.resolved ? 'bg-stone-50' : 'bg-white'}`}>
+          <li key={thread.id} data-testid="comment-thread" data-comment-id={thread.id} data-resolved={thread.resolved ? 'yes' : 'no'} className={`rounded-md border p-3 text-sm ${thread.id === selectedId ? 'border-creek-700 ring-1 ring-creek-700' : 'border-creek-100'} ${thread.resolved ? 'bg-stone-50' : 'bg-white'}`}>
             <div className="flex flex-wrap items-center justify-between gap-2">
               <button type="button" onClick={() => onJump(thread)} className="text-left font-medium text-creek-700 underline-offset-2 hover:underline">
                 {pin && <span className="mr-1 inline-block rounded-full bg-clay-600 px-1.5 text-xs text-white">{pin}</span>}
-                {anchorWords(thread.anchor, unitSystem, lineNames)}
+                {anchorWords(thread.anchor, unitSystem, partNames)}
               </button>
               <span className="text-xs text-creek-600">{thread.author?.name ?? 'a former member'} · {thread.createdAt.slice(0, 16).replace('T', ' ')}{thread.revisionNumber ? ` · on revision ${thread.revisionNumber}` : revisionId ? '' : ' · on the working copy'}</span>
             </div>

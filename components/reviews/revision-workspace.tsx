@@ -1,24 +1,25 @@
 'use client';
 
-import { useQuery } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { profileScene } from '@/lib/chart/profile-scene';
 import { standaloneSvg } from '@/lib/chart/svg-node';
-import type { ChainageView } from '@/lib/chart/profile-view';
+import { viewAround, type ChainageView } from '@/lib/chart/profile-view';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
-import { WARNING_TITLES } from '@/lib/lines/warning-words';
-import { projectCommentsQuery } from '@/lib/queries/reviews';
+import { lineAnchorChoices, networkAnchorChoices } from '@/lib/review/anchor-choices';
+import { snapshotNetworkView } from '@/lib/review/snapshot-network';
 import type { CommentRecord } from '@/lib/review/comment-types';
 import type { RevisionRecord } from '@/lib/review/revision-types';
-import { analyseSnapshotLine } from '@/lib/review/snapshot-analysis';
+import { analyseSnapshotLine, snapshotPartNames } from '@/lib/review/snapshot-analysis';
 import type { ReviewStamp } from '@/lib/review/stamp';
-import { pinChainage, pinsOf, threadsOf } from '@/lib/review/threads';
+import { networkPart, networkPinsOf, pinChainage, pinsOf, type ThreadScope } from '@/lib/review/threads';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Button } from '@/components/ui/button';
 import { Panel } from '@/components/ui/panel';
 import { ProfileChart } from '@/components/lines/profile-chart';
-import { CommentsPanel, type AnchorChoice } from './comments-panel';
+import { CommentsPanel } from './comments-panel';
+import { RevisionSchematic } from './revision-schematic';
+import { useCommentThreads } from './use-comment-threads';
 
 export interface RevisionWorkspaceProps {
   revision: RevisionRecord;
@@ -34,34 +35,39 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
   const units = useMemo(() => displayUnits(system), [system]);
   const line = revision.snapshot.lines.find((l) => l.id === lineId) ?? null;
   const analysis = useMemo(() => (line ? analyseSnapshotLine(line) : null), [line]);
-  const { data: comments = [] } = useQuery(projectCommentsQuery(revision.projectId));
   const [view, setView] = useState<ChainageView | null>(null);
   const [hoverM, setHoverM] = useState<number | null>(null);
   const [pickedM, setPickedM] = useState<number | null>(null);
-  const [selectedId, setSelectedId] = useState<string | null>(null);
-  const threads = useMemo(() => threadsOf(comments, revision.id, lineId), [comments, revision.id, lineId]);
-  const pins = useMemo(() => pinsOf(threads, lineId, selectedId), [threads, lineId, selectedId]);
-  const lineNames = useMemo(() => new Map(revision.snapshot.lines.map((l) => [l.id, l.name])), [revision.snapshot.lines]);
+  const networkView = useMemo(() => snapshotNetworkView(revision.snapshot), [revision.snapshot]);
+  const frozenSolve = revision.snapshot.networkSolve?.ok ? revision.snapshot.networkSolve.result : null;
+  const scopes: ThreadScope[] = [...(lineId ? [{ kind: 'line' as const, lineId }] : []), ...(networkView ? [{ kind: 'network' as const }] : [])];
+  const { threads, selectedId, setSelectedId } = useCommentThreads(revision.projectId, revision.id, scopes, true);
+  const pins = useMemo(() => pinsOf(threads, (c) => pinChainage(c, lineId), selectedId), [threads, lineId, selectedId]);
+  const networkPins = useMemo(() => networkPinsOf(threads, selectedId), [threads, selectedId]);
+  const [pickedPartId, setPickedPartId] = useState<string | null>(null);
+  const [lastPick, setLastPick] = useState<'chainage' | 'part'>('chainage');
+  const schematicRef = useRef<HTMLDivElement>(null);
+  const partNames = useMemo(() => snapshotPartNames(revision.snapshot), [revision.snapshot]);
   const c = analysis?.points.chainageM;
   const fullView = c ? { fromM: c[0], toM: c[c.length - 1] } : null;
 
-  const anchors: AnchorChoice[] = [
-    ...(line && pickedM !== null ? [{ key: 'picked', label: `${line.name}, ch. ${formatQuantity('chainage', pickedM, system)} (picked on the profile)`, anchor: { kind: 'line-chainage' as const, lineId: line.id, chainageM: Math.round(pickedM * 100) / 100 } }] : []),
-    { key: 'project', label: 'Whole project', anchor: { kind: 'project' } },
-    ...(line && analysis ? analysis.warnings.map((w, i) => {
-      const at = 'chainageM' in w.at ? w.at.chainageM : w.at.fromM;
-      return { key: `warning-${i}`, label: `${WARNING_TITLES[w.code]}, ch. ${formatQuantity('chainage', at, system)}`, anchor: { kind: 'warning' as const, lineId: line.id, code: w.code, chainageM: at } };
-    }) : []),
-  ];
+  const pickedPart = [...(networkView?.records.nodes ?? []).map((n) => ({ part: 'node' as const, id: n.id, name: n.name })), ...(networkView?.records.links ?? []).map((l) => ({ part: 'link' as const, id: l.id, name: l.name }))].find((p) => p.id === pickedPartId) ?? null;
+  const partChoices = networkAnchorChoices(pickedPart).filter((c) => c.anchor.kind === 'network');
+  const lineChoices = lineAnchorChoices(line, pickedM, analysis?.warnings ?? [], system);
+  // Whatever was picked last (a chainage on the profile or a part on the schematic) is offered first.
+  const anchors = lastPick === 'part' ? [...partChoices, ...lineChoices] : [...lineChoices, ...partChoices];
 
   function jump(comment: CommentRecord) {
     setSelectedId(comment.id);
+    const part = networkPart(comment);
+    if (part) {
+      setPickedPartId(part.partId);
+      schematicRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+      return;
+    }
     const at = pinChainage(comment, lineId);
     if (at === null || !fullView) return;
-    const current = view ?? fullView;
-    const half = (current.toM - current.fromM) / 2;
-    const from = Math.max(fullView.fromM, Math.min(at - half, fullView.toM - 2 * half));
-    setView({ fromM: from, toM: from + 2 * half });
+    setView(viewAround(at, at, fullView.fromM, fullView.toM));
   }
 
   function exportSvg() {
@@ -72,6 +78,7 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
 
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-5 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="min-w-0 space-y-5">
       <Panel
         title={line ? `${line.name}: long profile` : 'Long profile'}
         aside={line && (
@@ -95,7 +102,7 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
               highlight={null}
               hoverM={hoverM}
               onHover={setHoverM}
-              onPick={canComment ? (m) => setPickedM(m) : undefined}
+              onPick={canComment ? (m) => { setPickedM(m); setLastPick('chainage'); } : undefined}
               pickLabel="pin a comment"
               pins={pins}
             />
@@ -105,6 +112,23 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
           </>
         )}
       </Panel>
+      {networkView && (
+        <div ref={schematicRef} className="scroll-mt-4">
+          <Panel title="Network schematic, as frozen" aside={<span className="text-xs text-creek-600">{frozenSolve ? 'Peak-hour solve kept with the revision' : 'No solve kept with this revision'}</span>}>
+            <RevisionSchematic
+              view={networkView}
+              solve={frozenSolve}
+              units={system}
+              pins={networkPins}
+              selectedPartId={pickedPartId}
+              onPickPart={(id) => { setPickedPartId(id); if (id) setLastPick('part'); }}
+              onPickPin={(id) => { const t = threads.find((x) => x.thread.id === id); if (t) jump(t.thread); }}
+            />
+            {canComment && <p className="mt-2 text-xs text-creek-700" role="status" data-testid="picked-part">{pickedPart ? `Picked ${pickedPart.name}: write the comment beside the profile.` : 'Click a node or link to pin a comment on it.'}</p>}
+          </Panel>
+        </div>
+      )}
+      </div>
       <Panel title={`Comments (${threads.length})`}>
         <CommentsPanel
           projectId={revision.projectId}
@@ -113,7 +137,7 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
           canComment={canComment}
           members={members}
           anchors={anchors}
-          lineNames={lineNames}
+          partNames={partNames}
           unitSystem={system}
           selectedId={selectedId}
           onJump={jump}

@@ -3,12 +3,14 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { useRef, type MouseEvent } from 'react';
-import { SvgNodePart } from '@/components/lines/svg-node-view';
 import { PhotoCardOverlay, PhotoTargets, usePhotoCard } from '@/components/photos/photo-targets';
 import { photoMarkPlaces, photoMarksLayer, PHOTO_MARK_COLOUR } from '@/lib/chart/photo-marks';
 import { valueAt } from '@/lib/chart/profile-marks';
 import type { NumberedPhoto } from '@/lib/queries/photos';
+import { chainagePinMark } from '@/lib/chart/profile-review';
+import type { ProfilePin } from '@/lib/chart/profile-types';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
+import { SvgNodes } from '../lines/svg-node-view';
 import type { ProfilePoint } from '@/lib/routes/profile-series';
 import type { UnitSystem } from '@/lib/units';
 
@@ -33,6 +35,10 @@ export interface RouteProfileProps {
   photos?: readonly NumberedPhoto[];
   /** Sketch mode: the area shown when there are no points yet, metres, and what a click does. */
   sketch?: { lengthM: number; lowM: number; highM: number; onAdd: (chainageM: number, elevationM: number) => void };
+  /** Review comments pinned at chainages of the route. */
+  pins?: readonly ProfilePin[];
+  /** Called with the chainage clicked (pinning a comment), when set and not sketching. */
+  onPick?: (chainageM: number) => void;
 }
 
 type Pt = { x: number; y: number };
@@ -41,7 +47,7 @@ type Pt = { x: number; y: number };
  * A small long-section: raw heights dashed, cleaned heights solid, side by side, in the project's
  * units. In sketch mode a click on the chart adds a station at that chainage and height.
  */
-export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch, photos = [] }: RouteProfileProps) {
+export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch, pins = [], onPick, photos = [] }: RouteProfileProps) {
   const svgRef = useRef<SVGSVGElement>(null);
   const card = usePhotoCard();
   const d = (p: ProfilePoint): Pt => ({ x: toDisplay('length', p.chainageM, units), y: toDisplay('length', p.elevationM, units) });
@@ -76,13 +82,24 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
     return photo ? [{ photo, x: place.x, y: place.y }] : [];
   });
 
+  function pointAt(e: MouseEvent<SVGRectElement>) {
+    const ctm = svgRef.current?.getScreenCTM();
+    return ctm ? new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse()) : null;
+  }
+
   function onClick(e: MouseEvent<SVGRectElement>) {
-    const svg = svgRef.current;
-    const ctm = svg?.getScreenCTM();
-    if (!svg || !ctm || !sketch) return;
-    const pt = new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse());
+    const pt = pointAt(e);
+    if (!pt || !sketch) return;
     sketch.onAdd(fromDisplay('length', x.invert(pt.x), units), fromDisplay('length', y.invert(pt.y), units));
   }
+
+  function onPickClick(e: MouseEvent<SVGRectElement>) {
+    const pt = pointAt(e);
+    if (!pt || !onPick) return;
+    const lastM = Math.max(0, ...cleaned.map((p) => p.chainageM), ...raw.map((p) => p.chainageM));
+    onPick(Math.min(Math.max(fromDisplay('length', x.invert(pt.x), units), 0), lastM));
+  }
+  const pinMarks = pins.map((p) => chainagePinMark(p, x(toDisplay('length', p.chainageM, units)), M.top - 4, H - M.bottom, units));
 
   return (
     <figure className="relative space-y-1">
@@ -110,10 +127,14 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
             </circle>
           );
         })}
-        {photoLayer && <SvgNodePart node={photoLayer} />}
+        {!sketch && onPick && (
+          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onPickClick} data-testid="route-profile-capture" />
+        )}
+        {pinMarks.length > 0 && <g data-layer="comment-pins" pointerEvents="none"><SvgNodes nodes={pinMarks} /></g>}
+        {photoLayer && <SvgNodes nodes={[photoLayer]} />}
         <PhotoTargets places={photoPlaces} card={card} />
         {sketch && (
-          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} aria-label="Sketch area: click to add a station" data-testid="sketch-area" />
+          <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} data-testid="sketch-area" />
         )}
       </svg>
       <PhotoCardOverlay places={photoPlaces} card={card} units={units} width={W} height={H} />

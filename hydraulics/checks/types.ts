@@ -86,6 +86,8 @@ export interface WarningValues {
   memberCount?: number;
   /** The worst figure lies within the survey's height scatter of its limit. */
   withinScatter?: boolean;
+  /** Items the same one-click fix clears, folded into this one (one cause, one item). */
+  alsoClears?: WarningCode[];
   /** A second chainage: where a misplaced device's point really is, m. */
   otherChainageM?: number;
   /** The device a warning is about. */

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { HydraulicsInputError } from '../../hydraulics/errors';
-import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from '../db-availability';
+import { DATABASE_RETRY_AFTER_SECONDS, isConcurrentWriteConflict, isDatabaseUnavailable } from '../db-availability';
 import { AppError, type ApiErrorBody } from '../errors';
 import { log } from '../log';
 
@@ -24,6 +24,9 @@ export function appErrorOf(error: unknown): AppError {
     return new AppError('service_unavailable', 'The database cannot be reached just now; nothing was changed. Try again in a few seconds.', undefined, {
       retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
     });
+  }
+  if (isConcurrentWriteConflict(error)) {
+    return new AppError('conflict', 'Someone else changed this at the same moment, so nothing was changed. Reload and try again.');
   }
   return new AppError('internal', 'Something went wrong on our side. Nothing was changed; try again.');
 }

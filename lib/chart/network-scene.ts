@@ -3,8 +3,10 @@ import { line as d3line } from 'd3-shape';
 import type { NetworkLayout } from '../network/layout';
 import type { NodeResult, SolveRunResult } from '../network/run-result';
 import type { NetworkView } from '../network/view';
+import type { NetworkPin } from '../review/threads';
 import { formatQuantity, type UnitSystem } from '../units';
 import { PROFILE_COLOURS } from './profile-palette';
+import { PIN_COLOURS, pinFlag } from './profile-review';
 import { el, type SvgNode } from './svg-node';
 
 /**
@@ -22,6 +24,8 @@ export interface NetworkSceneOptions {
   width: number;
   height: number;
   selectedId?: string | null;
+  /** Review comments pinned to nodes and links (a layer above the nodes). */
+  pins?: readonly NetworkPin[];
 }
 
 const KIND_WORDS: Record<string, string> = {
@@ -56,7 +60,14 @@ function pressureWords(result: NodeResult | undefined, units: UnitSystem): strin
   return `${formatQuantity('head', result.pressureHeadM, units)} head${short ? ' (short)' : ''}`;
 }
 
-export function buildNetworkScene({ view, layout, solve, units, width, height, selectedId }: NetworkSceneOptions): SvgNode {
+/** The middle of a course by its points: halfway along a straight link, the middle point of a line's route. */
+function midCourse(course: readonly { x: number; y: number }[]): { x: number; y: number } {
+  const half = course.length / 2;
+  if (Number.isInteger(half)) return { x: (course[half - 1].x + course[half].x) / 2, y: (course[half - 1].y + course[half].y) / 2 };
+  return course[Math.floor(half)];
+}
+
+export function buildNetworkScene({ view, layout, solve, units, width, height, selectedId, pins = [] }: NetworkSceneOptions): SvgNode {
   const points = Object.values(layout.nodes).concat(Object.values(layout.courses).flat().map((p) => ({ ...p, from: 'route' as const })));
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y);
@@ -86,7 +97,7 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
       d: path(course) ?? '', fill: 'none', stroke: LINK_STROKE[link.kind], 'stroke-width': selected ? strokeWidth + 2 : strokeWidth,
       'stroke-dasharray': link.kind === 'valve' ? '6 3' : undefined, 'data-link-id': link.id, 'data-kind': link.kind,
     }));
-    const mid = course[Math.floor(course.length / 2)];
+    const mid = midCourse(course);
     const before = course[Math.max(0, Math.floor(course.length / 2) - 1)];
     const after = course[Math.min(course.length - 1, Math.floor(course.length / 2) + 1)];
     const forward = !result || result.flowM3s >= 0;
@@ -120,6 +131,24 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
     ));
   }
 
+  // A pin stands above its node, or on the middle of its link's course; several on one part stand side by side.
+  const pinsByPart = new Map<string, NetworkPin[]>();
+  for (const pin of pins) pinsByPart.set(pin.partId, [...(pinsByPart.get(pin.partId) ?? []), pin]);
+  const pinLayer: SvgNode[] = [];
+  for (const [partId, partPins] of pinsByPart) {
+    const course = layout.courses[partId];
+    const at = partPins[0].part === 'node' ? layout.nodes[partId] : course && course.length > 0 ? midCourse(course) : undefined;
+    if (!at) continue;
+    partPins.forEach((pin, i) => {
+      const x = xOf(at.x) + i * 17;
+      const tipY = yOf(at.y) - (pin.part === 'node' ? 10 : 2);
+      const colour = pin.selected ? PIN_COLOURS.selected : pin.resolved ? PIN_COLOURS.resolved : PIN_COLOURS.open;
+      pinLayer.push(el('g', { 'data-comment-id': pin.id, 'data-part-id': partId, 'data-resolved': pin.resolved ? 'yes' : 'no' },
+        el('title', {}, `Comment ${pin.label}${pin.resolved ? ' (resolved)' : ''}`),
+        ...pinFlag(x, tipY, pin.label, colour)));
+    });
+  }
+
   const legend = el('g', { 'data-layer': 'legend', transform: `translate(12, ${height - 24})` },
     ...(['source', 'tank', 'junction', 'outlet'] as const).flatMap((kind, i) => [
       nodeShape(kind, 10 + i * 110, 0, NODE_FILL[kind]),
@@ -134,6 +163,7 @@ export function buildNetworkScene({ view, layout, solve, units, width, height, s
     el('g', { 'data-layer': 'link-labels' }, ...linkLabels),
     el('g', { 'data-layer': 'nodes' }, ...nodeLayer),
     el('g', { 'data-layer': 'node-labels' }, ...nodeLabels),
+    pinLayer.length ? el('g', { 'data-layer': 'comment-pins' }, ...pinLayer) : null,
     legend,
   );
 }

@@ -1,12 +1,22 @@
 import { NOT_FOR_CONSTRUCTION, type ReviewStamp } from '../review/stamp';
-import { formatQuantity } from '../units/index';
+import { formatQuantity, type UnitSystem } from '../units/index';
 import { polylinePath } from './polyline-path';
 import { PROFILE_COLOURS } from './profile-palette';
-import type { ProfileChartOptions, ProfileFrame } from './profile-types';
+import type { ProfileChartOptions, ProfileFrame, ProfilePin } from './profile-types';
 import { el, type SvgNode } from './svg-node';
 
 const r2 = (v: number) => Math.round(v * 100) / 100;
-const PIN = { open: '#b9462f', resolved: '#8a8f91', selected: '#122e3a' } as const;
+/** Comment pins: open, resolved, and the one picked in the list (profile and schematic alike). */
+export const PIN_COLOURS = { open: '#b9462f', resolved: '#8a8f91', selected: '#122e3a' } as const;
+const PIN = PIN_COLOURS;
+
+/** A numbered flag whose tip is at (x, tipY): the mark a comment pin leaves on any drawing. */
+export function pinFlag(x: number, tipY: number, label: string, colour: string): SvgNode[] {
+  return [
+    el('path', { d: `M${r2(x)},${r2(tipY)}L${r2(x - 7)},${r2(tipY - 9)}A8,8 0 1 1 ${r2(x + 7)},${r2(tipY - 9)}Z`, fill: colour }),
+    el('text', { x: r2(x), y: r2(tipY - 8), 'font-size': 9, 'font-weight': 'bold', fill: '#fff', 'text-anchor': 'middle' }, label),
+  ];
+}
 const MARK = '#b9462f';
 
 /** Review words under the title, and a boxed "not for construction" mark plus a faint diagonal one when the drawing may not be built from. */
@@ -25,20 +35,22 @@ export function stampLayer(frame: ProfileFrame, stamp: ReviewStamp | undefined):
   );
 }
 
-/** A comment pinned at a chainage: a numbered flag above the elevation panel and a thin line down through both panels. */
+/** One comment pinned at a chainage: a numbered flag at `top` and a thin line down to `bottom` (any chart with a chainage axis). */
+export function chainagePinMark(pin: ProfilePin, x: number, top: number, bottom: number, system: UnitSystem): SvgNode {
+  const colour = pin.selected ? PIN.selected : pin.resolved ? PIN.resolved : PIN.open;
+  return el('g', { 'data-comment-id': pin.id, 'data-chainage-m': r2(pin.chainageM), 'data-resolved': pin.resolved ? 'yes' : 'no' },
+    el('title', {}, `Comment ${pin.label} at ${formatQuantity('chainage', pin.chainageM, system)}${pin.resolved ? ' (resolved)' : ''}`),
+    el('line', { x1: r2(x), y1: r2(top + 14), x2: r2(x), y2: r2(bottom), stroke: colour, 'stroke-width': pin.selected ? 2 : 1, 'stroke-dasharray': '1 3' }),
+    ...pinFlag(x, top + 18, pin.label, colour));
+}
+
+/** Comments pinned at chainages: a numbered flag above the elevation panel and a thin line down through both panels. */
 export function commentPinsLayer(frame: ProfileFrame, options: ProfileChartOptions): SvgNode | null {
   const pins = options.pins ?? [];
   if (pins.length === 0) return null;
-  const marks = pins.filter((p) => p.chainageM >= frame.fromM - 1e-9 && p.chainageM <= frame.toM + 1e-9).map((p) => {
-    const x = r2(frame.x(p.chainageM));
-    const colour = p.selected ? PIN.selected : p.resolved ? PIN.resolved : PIN.open;
-    const top = frame.elevationTop + 1;
-    return el('g', { 'data-comment-id': p.id, 'data-chainage-m': r2(p.chainageM), 'data-resolved': p.resolved ? 'yes' : 'no' },
-      el('title', {}, `Comment ${p.label} at ${formatQuantity('chainage', p.chainageM, options.units.system)}${p.resolved ? ' (resolved)' : ''}`),
-      el('line', { x1: x, y1: top + 14, x2: x, y2: frame.pressureBottom, stroke: colour, 'stroke-width': p.selected ? 2 : 1, 'stroke-dasharray': '1 3' }),
-      el('path', { d: `M${x},${top + 18}L${r2(x - 7)},${top + 9}A8,8 0 1 1 ${r2(x + 7)},${top + 9}Z`, fill: colour }),
-      el('text', { x, y: top + 10, 'font-size': 9, 'font-weight': 'bold', fill: '#fff', 'text-anchor': 'middle' }, p.label));
-  });
+  const marks = pins
+    .filter((p) => p.chainageM >= frame.fromM - 1e-9 && p.chainageM <= frame.toM + 1e-9)
+    .map((p) => chainagePinMark(p, frame.x(p.chainageM), frame.elevationTop + 1, frame.pressureBottom, options.units.system));
   return el('g', { 'data-layer': 'comment-pins' }, ...marks);
 }
 

@@ -12,19 +12,27 @@ import type { DesignSnapshot } from '../review/snapshot-types';
 import { CLIENT_VISIBLE_STATUSES } from '../review/statuses';
 import type { Role } from '../roles';
 import type { CreateCommentInput } from '../validations/comments';
+import { listMembers } from './teams';
 
 interface WorkingCopyIndex {
   lines: Map<string, { name: string; fromM: number; toM: number }>;
   routes: Map<string, { name: string; lengthM: number }>;
+  networkParts: Map<string, { name: string; part: 'node' | 'link' }>;
 }
 
 async function workingCopyIndex(projectId: string): Promise<WorkingCopyIndex> {
-  const { Line, Route } = models();
+  const { Line, Route, NetworkNode, NetworkLink } = models();
   const routes = await Route.findAll({ where: { projectId }, attributes: ['id', 'name', 'lengthM'] });
+  const nodes = await NetworkNode.findAll({ where: { projectId }, attributes: ['id', 'name'] });
+  const links = await NetworkLink.findAll({ where: { projectId }, attributes: ['id', 'name'] });
   const routeMap = new Map(routes.map((r) => [r.id, { name: r.name, lengthM: r.lengthM ?? 0 }]));
   const lines = await Line.findAll({ where: { projectId }, attributes: ['id', 'name', 'routeId', 'fromChainageM', 'toChainageM'] });
   return {
     routes: routeMap,
+    networkParts: new Map<string, { name: string; part: 'node' | 'link' }>([
+      ...nodes.map((n): [string, { name: string; part: 'node' }] => [n.id, { name: n.name, part: 'node' }]),
+      ...links.map((l): [string, { name: string; part: 'link' }] => [l.id, { name: l.name, part: 'link' }]),
+    ]),
     lines: new Map(lines.map((l) => [l.id, {
       name: l.name,
       fromM: l.fromChainageM ?? 0,
@@ -52,8 +60,11 @@ export function anchorNow(anchor: CommentAnchor, index: WorkingCopyIndex): Ancho
       if (anchor.chainageM > route.lengthM + EPS) return { state: 'gone', words: `the chainage is now past the end of route "${route.name}"` };
       return { state: 'present', words: `on route "${route.name}"` };
     }
-    case 'network':
-      return { state: 'gone', words: 'network parts are not part of this working copy yet' };
+    case 'network': {
+      const part = index.networkParts.get(anchor.partId);
+      if (!part || part.part !== anchor.part) return { state: 'gone', words: `the network ${anchor.part} is no longer in the working copy` };
+      return { state: 'present', words: `network ${anchor.part} "${part.name}"` };
+    }
   }
 }
 
@@ -106,6 +117,13 @@ async function assertAnchorExists(projectId: string, anchor: CommentAnchor, snap
   if (anchor.kind === 'line-chainage' || anchor.kind === 'warning') {
     const there = snapshot ? snapshot.lines.some((l) => l.id === anchor.lineId) : (await Line.count({ where: { id: anchor.lineId, projectId } })) > 0;
     if (!there) throw new AppError('bad_request', 'That line is not part of what you are commenting on', { 'anchor.lineId': ['Pick a line of this revision or working copy'] });
+  }
+  if (anchor.kind === 'network') {
+    const parts = snapshot ? (anchor.part === 'node' ? snapshot.network?.nodes : snapshot.network?.links) ?? [] : null;
+    const where = { id: anchor.partId, projectId };
+    const inWorkingCopy = async () => (anchor.part === 'node' ? await models().NetworkNode.count({ where }) : await models().NetworkLink.count({ where })) > 0;
+    const there = parts ? parts.some((p) => p.id === anchor.partId) : await inWorkingCopy();
+    if (!there) throw new AppError('bad_request', `That network ${anchor.part} is not part of what you are commenting on`, { 'anchor.partId': [`Pick a ${anchor.part} of this revision or working copy`] });
   }
   if (anchor.kind === 'route-chainage' && (await Route.count({ where: { id: anchor.routeId, projectId } })) === 0) {
     throw new AppError('bad_request', 'That route is not part of this project', { 'anchor.routeId': ['Pick a route of this project'] });
@@ -164,4 +182,10 @@ export async function setCommentResolved(commentId: string, user: SessionUser, r
     });
     return { id: row.id, resolved };
   });
+}
+
+/** The people a member can mention in a comment: the rest of the team (none for someone who may not comment). */
+export async function mentionableMembers(teamId: string, user: SessionUser, role: Role): Promise<{ id: string; name: string }[]> {
+  if (!can(role, 'review.comment') && !can(role, 'comment.route')) return [];
+  return (await listMembers(teamId, { userId: user.id, role })).filter((m) => m.userId !== user.id).map((m) => ({ id: m.userId, name: m.name }));
 }

@@ -1,12 +1,17 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { models } from '../../models';
-import type { DesignSnapshot, SnapshotLine } from '../review/snapshot-types';
+import { AppError } from '../errors';
+import { networkContextOfSnapshot } from '../review/snapshot-network';
+import type { DesignSnapshot, FrozenNetworkSolve, SnapshotLine } from '../review/snapshot-types';
+import { runInWorker } from '../workers/pool';
 import { lineSiteContext } from './line-context';
 import { getLine, stationsOfLine } from './lines';
 import { loadLiftRecords } from './lift-summary';
+import { loadNetworkBasis } from './network-context';
 import { readNetworkRecords } from './network-records';
 
+type GatheredPart = Exclude<keyof DesignSnapshot, 'format' | 'networkSolve'>;
 type PartGatherer<K extends keyof DesignSnapshot> = (projectId: string, transaction: Transaction) => Promise<DesignSnapshot[K]>;
 
 async function projectPart(projectId: string, transaction: Transaction): Promise<DesignSnapshot['project']> {
@@ -49,20 +54,44 @@ async function liftPart(projectId: string): Promise<DesignSnapshot['lift']> {
  * The design parts a revision freezes, one gatherer each. To freeze another part of the design
  * (the network), add its gatherer here and its key to DesignSnapshot: nothing else changes.
  */
-const DESIGN_PARTS: { [K in Exclude<keyof DesignSnapshot, 'format'>]-?: PartGatherer<K> } = {
+const DESIGN_PARTS: { [K in GatheredPart]-?: PartGatherer<K> } = {
   project: projectPart,
   lines: linesPart,
   lift: liftPart,
   network: (projectId, transaction) => readNetworkRecords(projectId, transaction),
+  networkBasis: async (projectId) => loadNetworkBasis(projectId, await loadLiftRecords(projectId)),
 };
 
-/** The whole project's design as it is now, read inside `transaction`. */
+/** A solve this long is stopped and the revision records that it did not finish. */
+const FROZEN_SOLVE_LIMIT_MS = 60_000;
+
+/**
+ * Solves the snapshot's own network at the peak hour on a worker thread, so the revision keeps its
+ * outlet pressures as they were. A network that does not build or solve is recorded with the reason;
+ * a busy server is an error (the revision is not made, rather than made without its solve).
+ */
+export async function solveFrozenNetwork(snapshot: DesignSnapshot): Promise<FrozenNetworkSolve | null> {
+  const context = networkContextOfSnapshot(snapshot);
+  if (!context) return null;
+  try {
+    return { ok: true, result: await runInWorker('network.solve', context, { timeLimitMs: FROZEN_SOLVE_LIMIT_MS }) };
+  } catch (error) {
+    if (error instanceof AppError && error.code === 'service_unavailable') throw error;
+    // A network that cannot be built or does not solve (HydraulicsInputError naming the part, a time-out) is recorded, not fatal.
+    if (error instanceof Error) return { ok: false, problem: error.message };
+    throw error;
+  }
+}
+
+/** The whole project's design as it is now, read inside `transaction`, with its network solved as it stands. */
 export async function takeDesignSnapshot(projectId: string, transaction: Transaction): Promise<DesignSnapshot> {
-  const [project, lines, lift, network] = await Promise.all([
+  const [project, lines, lift, network, networkBasis] = await Promise.all([
     DESIGN_PARTS.project(projectId, transaction),
     DESIGN_PARTS.lines(projectId, transaction),
     DESIGN_PARTS.lift(projectId, transaction),
     DESIGN_PARTS.network(projectId, transaction),
+    DESIGN_PARTS.networkBasis(projectId, transaction),
   ]);
-  return { format: 1, project, lines, lift, network };
+  const snapshot: DesignSnapshot = { format: 1, project, lines, lift, network, networkBasis };
+  return { ...snapshot, networkSolve: await solveFrozenNetwork(snapshot) };
 }

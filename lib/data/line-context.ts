@@ -11,13 +11,18 @@ import { pumpOutletHeadForProject } from './ram-sites';
  * it, the frost depth, and an open drain-down task already past its date (`today`, ISO date).
  */
 export async function lineSiteContext(projectId: string, today: string = new Date().toISOString().slice(0, 10)): Promise<LineSiteContext> {
-  const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM'] });
+  const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM', 'unitSystem'] });
   const overdue = await models().SeasonalTask.findOne({
     where: { projectId, kind: 'drain-down', done: false, dueOn: { [Op.lt]: today } },
     attributes: ['dueOn'],
     order: [['dueOn', 'ASC']],
   });
-  return { ramOutlets: await pumpOutletHeadForProject(projectId), frostDepthM: project?.frostDepthM ?? null, overdueDrainDownOn: overdue?.dueOn ?? null };
+  return {
+    ramOutlets: await pumpOutletHeadForProject(projectId),
+    frostDepthM: project?.frostDepthM ?? null,
+    overdueDrainDownOn: overdue?.dueOn ?? null,
+    unitSystem: project?.unitSystem ?? 'metric',
+  };
 }
 
 /** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */

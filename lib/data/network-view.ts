@@ -6,13 +6,10 @@ import { toWaterUse } from '../lift/demand';
 import { outcomeOf } from '../lift/outcome';
 import type { NetworkJobView, NetworkRunKind } from '../network/jobs';
 import type { NetworkRunResult } from '../network/run-result';
-import type { NetworkLineSummary, NetworkView } from '../network/view';
+import { lineSummaryOf, type NetworkLineSummary, type NetworkView } from '../network/view';
 import { loadLiftRecords } from './lift-summary';
 import { getLine, stationsOfLine } from './lines';
 import { readNetworkRecords } from './network-records';
-
-/** Stations kept per line for the schematic: enough to draw its course, never the whole survey. */
-const PLAN_POINTS = 120;
 
 export function networkJobView(row: NetworkJob): NetworkJobView {
   return {
@@ -31,17 +28,7 @@ export function networkJobView(row: NetworkJob): NetworkJobView {
 async function lineSummary(lineId: string): Promise<NetworkLineSummary | null> {
   const line = await getLine(lineId);
   if (!line || !line.routeId) return null;
-  const stations = await stationsOfLine(line.routeId, line);
-  if (stations.length === 0) return null;
-  const step = Math.max(1, Math.ceil(stations.length / PLAN_POINTS));
-  const kept = stations.filter((_, index) => index % step === 0 || index === stations.length - 1);
-  return {
-    id: line.id,
-    name: line.name,
-    fromChainageM: stations[0].chainageM,
-    toChainageM: stations[stations.length - 1].chainageM,
-    plan: kept.map((s) => ({ chainageM: s.chainageM, groundM: s.groundElevationM, latitudeDeg: s.latitudeDeg ?? null, longitudeDeg: s.longitudeDeg ?? null })),
-  };
+  return lineSummaryOf(line, await stationsOfLine(line.routeId, line));
 }
 
 /** The latest run of each kind of a project. */

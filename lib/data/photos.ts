@@ -7,6 +7,7 @@ import type { SitePhoto, PhotoPlacement } from '../../models/site-photo';
 import { AppError } from '../errors';
 import { log } from '../log';
 import { readPhoto } from '../photos/read-photo';
+import { projectStoragePrefix } from './project-files';
 import { deleteObject, getObject, putObject } from '../storage';
 import { numberPhotos } from '../chart/photo-marks';
 import type { ReportPhoto } from '../report/photo-section';
@@ -90,7 +91,7 @@ async function placementOf(projectId: string, position: { latitude: number | nul
 export async function uploadPhoto(input: { projectId: string; userId: string; fileName: string; bytes: Uint8Array; caption: string } & PhotoPlacementRequest): Promise<PhotoSummary> {
   const photo = await readPhoto(input.bytes, input.fileName);
   const place = await placementOf(input.projectId, photo, input);
-  const folder = `projects/${input.projectId}/photos/${randomUUID()}`;
+  const folder = `${projectStoragePrefix(input.projectId)}photos/${randomUUID()}`;
   const imageKey = `${folder}/image.${photo.contentType === 'image/png' ? 'png' : 'jpg'}`;
   const thumbnailKey = `${folder}/thumbnail.jpg`;
   const stored: string[] = [];

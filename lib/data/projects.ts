@@ -1,5 +1,6 @@
 import 'server-only';
 import { models } from '../../models';
+import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
 import type { UpdateProjectInput } from '../validations/projects';
@@ -15,6 +16,8 @@ export interface ProjectSummary {
   frostDepthM: number | null;
   /** Decimal mark for number boxes; null = the browser's locale. */
   decimalMark: DecimalMark | null;
+  /** IANA time zone survey times without an offset are read in; null = UTC. */
+  timeZone: string | null;
   archived: boolean;
   createdAt: string;
   updatedAt: string;
@@ -30,6 +33,7 @@ function toSummary(p: Project): ProjectSummary {
     siteNotes: p.siteNotes,
     frostDepthM: p.frostDepthM ?? null,
     decimalMark: p.decimalMark ?? null,
+    timeZone: p.timeZone ?? null,
     archived: p.archivedAt != null,
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
@@ -73,6 +77,14 @@ export async function updateProject(projectId: string, input: UpdateProjectInput
   });
 }
 
+/**
+ * Deletes the project and everything in it. Its stored files go by a job queued in the same
+ * transaction: the job exists exactly when the delete committed, and retries until the files are gone.
+ */
 export async function deleteProject(projectId: string): Promise<void> {
-  await models().Project.destroy({ where: { id: projectId } });
+  const { Project, sequelize } = models();
+  await sequelize.transaction(async (transaction) => {
+    await Project.destroy({ where: { id: projectId }, transaction });
+    await enqueueJob(transaction, 'delete-project-files', { projectId });
+  });
 }

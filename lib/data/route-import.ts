@@ -6,6 +6,7 @@ import type { PointRecord } from '../routes/edit-ops';
 import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
 import { log } from '../log';
+import { projectStoragePrefix } from './project-files';
 import { deleteObject, putObject } from '../storage';
 import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
@@ -72,7 +73,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
   });
   const records = recordsOfSurvey(survey);
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
-  const storageKey = `projects/${upload.projectId}/survey-files/${randomUUID()}/${safeName}`;
+  const storageKey = `${projectStoragePrefix(upload.projectId)}survey-files/${randomUUID()}/${safeName}`;
   const contentType = storedContentType(upload.fileName, upload.contentType);
   await putObject(storageKey, upload.bytes, contentType);
   const { Attachment, Route, sequelize } = models();

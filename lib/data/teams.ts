@@ -61,9 +61,19 @@ async function assertAnotherOwnerRemains(teamId: string, userId: string, transac
   if (owners.length === 0) throw new AppError('conflict', 'A team needs at least one owner: make someone else owner first', { role: ['The last owner cannot be removed or demoted'] });
 }
 
+/**
+ * Membership changes of one team run one after another (the team row is locked first): two owners
+ * demoting each other at the same moment get one success and one 409, never a deadlock.
+ */
+async function lockTeam(teamId: string, transaction: import('sequelize').Transaction): Promise<void> {
+  const team = await models().Team.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
+  if (!team) throw new AppError('not_found', 'Team not found');
+}
+
 export async function changeRole(teamId: string, userId: string, role: Role): Promise<MemberSummary> {
   const { Membership, User, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
+    await lockTeam(teamId, transaction);
     const m = await Membership.findOne({ where: { teamId, userId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!m) throw new AppError('not_found', 'Not a member of this team');
     if (m.role === 'owner' && role !== 'owner') await assertAnotherOwnerRemains(teamId, userId, transaction);
@@ -77,6 +87,7 @@ export async function changeRole(teamId: string, userId: string, role: Role): Pr
 export async function removeMember(teamId: string, userId: string): Promise<void> {
   const { Membership, sequelize } = models();
   await sequelize.transaction(async (transaction) => {
+    await lockTeam(teamId, transaction);
     const m = await Membership.findOne({ where: { teamId, userId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!m) throw new AppError('not_found', 'Not a member of this team');
     if (m.role === 'owner') await assertAnotherOwnerRemains(teamId, userId, transaction);

@@ -10,6 +10,7 @@ import type { SurveyFormat } from '../survey/parsed-survey';
 import { fieldErrorsOf } from '../validations/common';
 import { SurveyImportOptionsSchema, type SurveyImportOptions } from '../validations/survey-import';
 import { typedNumber } from '../units/decimal-mark-store';
+import { readWrittenDate } from '../survey/local-time';
 
 /** Everything the mapping screen lets the user set; turned into import options on submit. */
 export interface MappingDraft {
@@ -17,6 +18,8 @@ export interface MappingDraft {
   name: string;
   dialect: { delimiter: CsvDelimiter; decimalComma: boolean; hasHeader: boolean };
   gps: { mapping: GpsColumnMapping; elevationUnit: LengthUnit; accuracyIsVertical: boolean; heightSource: HeightSource };
+  /** How times are read: the project's zone for times without an offset, and the order of an ambiguous date ('ask' until chosen). */
+  times: { timeZone: string; dateOrder: 'ask' | 'day-first' | 'month-first' };
   station: { mapping: StationColumnMapping; chainageUnit: LengthUnit; elevationUnit: LengthUnit; heightSource: HeightSource };
   gpx: { useWaypointsAsRoute: boolean; heightSource: HeightSource };
   /** Field-book heights are typed in the project's units, as text until submitted. */
@@ -37,9 +40,10 @@ export function routeNameFromFile(fileName: string): string {
   return (base || 'Imported route').slice(0, 120);
 }
 
-export function initialMappingDraft(inspection: SurveyInspection, fileName: string): MappingDraft {
+export function initialMappingDraft(inspection: SurveyInspection, fileName: string, projectTimeZone: string | null = null): MappingDraft {
   const csv = inspection.kind === 'csv' ? inspection : null;
   return {
+    times: { timeZone: projectTimeZone ?? 'UTC', dateOrder: 'ask' },
     format: inspection.suggestedFormat,
     name: routeNameFromFile(fileName),
     dialect: csv ? { delimiter: csv.dialect.delimiter, decimalComma: csv.dialect.decimalComma, hasHeader: csv.dialect.hasHeader } : { delimiter: ',', decimalComma: false, hasHeader: true },
@@ -77,7 +81,10 @@ export function mappingToOptions(draft: MappingDraft, units: UnitSystem): { opti
   const raw = (() => {
     switch (draft.format) {
       case 'gps-csv':
-        return { format: draft.format, name: draft.name, ...draft.gps, dialect: draft.dialect };
+        return {
+          format: draft.format, name: draft.name, ...draft.gps, dialect: draft.dialect, timeZone: draft.times.timeZone,
+          ...(draft.times.dateOrder === 'ask' ? {} : { dateOrder: draft.times.dateOrder }),
+        };
       case 'station-csv':
         return { format: draft.format, name: draft.name, ...draft.station, dialect: draft.dialect };
       case 'gpx':
@@ -105,4 +112,16 @@ export function mappingToOptions(draft: MappingDraft, units: UnitSystem): { opti
   })();
   const parsed = SurveyImportOptionsSchema.safeParse(raw);
   return parsed.success ? { options: parsed.data } : { errors: fieldErrorsOf(parsed.error) };
+}
+
+/**
+ * Whether the time column's first rows hold a date that could be day first or month first
+ * (01.05.2024): the mapping screen then asks, before anything is read.
+ */
+export function sampleDatesAmbiguous(rows: readonly (readonly string[])[], timeColumn: number | null): boolean {
+  if (timeColumn === null) return false;
+  return rows.some((row) => {
+    const reading = readWrittenDate((row[timeColumn] ?? '').trim());
+    return !reading.ok && reading.reason === 'ambiguous-order';
+  });
 }

@@ -37,3 +37,6 @@ export type WorkerResponse =
   | { type: 'progress'; id: number; fraction: number }
   | { type: 'parsed'; id: number; preview: ImportPreview }
   | { type: 'failed'; id: number; error: ImportFailure };
+
+/** Moving-median window offered on import for a consumer-GPS walk (points; common practice, no source). */
+export const IMPORT_SMOOTHING_WINDOW = 5;

@@ -5,6 +5,8 @@ import { db } from '../db';
 /** The queue's task names and their payloads (one place, so producer and worker agree). */
 export interface JobPayloads {
   'send-mail': { outboxId: string };
+  /** Removes every stored file of a deleted project (everything under `projects/<id>/`). */
+  'delete-project-files': { projectId: string };
 }
 export type JobName = keyof JobPayloads;
 

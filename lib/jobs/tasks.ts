@@ -1,5 +1,6 @@
 import 'server-only';
 import type { TaskList } from 'graphile-worker';
+import { deleteProjectFiles } from '../data/project-files';
 import { deliverOutboxMessage } from '../mail/deliver';
 import type { JobPayloads } from './enqueue';
 
@@ -8,5 +9,9 @@ export const JOB_TASKS: TaskList = {
   'send-mail': async (payload) => {
     const { outboxId } = payload as JobPayloads['send-mail'];
     await deliverOutboxMessage(outboxId);
+  },
+  'delete-project-files': async (payload) => {
+    const { projectId } = payload as JobPayloads['delete-project-files'];
+    await deleteProjectFiles(projectId);
   },
 };

@@ -6,6 +6,8 @@ export interface LineSiteContext {
   ramOutlets: PumpOutletHead[];
   /** Depth frost reaches at the site, m; null when the project does not say. */
   frostDepthM: number | null;
+  /** The project's unit system, for words about the design (metric when not known). */
+  unitSystem?: 'metric' | 'us';
   /** Due date of the earliest open drain-down task that is past due, ISO date; null when none. */
   overdueDrainDownOn?: string | null;
 }

@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { profileRows, type LineProfile, type StretchResult } from '../../hydraulics/index';
-import { pressureOfHead, toDisplay, type DisplayUnits } from '../units/index';
+import { formatStation, pressureOfHead, toDisplay, type DisplayUnits } from '../units/index';
 
 /** One column of a results table: heading with its unit and the value in display units. */
 export interface ResultColumn<R> {
@@ -16,7 +16,10 @@ type Row = ReturnType<typeof profileRows>[number];
 export function stationColumns(u: DisplayUnits, temperatureC: number): ResultColumn<Row>[] {
   const L = (m: number) => toDisplay('length', m, u.system);
   const P = (m: number) => pressureOfHead(m, u.system, temperatureC);
+  // US projects read stations in the 12+50 form beside the chainage.
+  const station: ResultColumn<Row>[] = u.system === 'us' ? [{ key: 'station', heading: 'Station', value: (r) => formatStation(r.chainageM, u.system) ?? '' }] : [];
   return [
+    ...station,
     { key: 'chainage', heading: `Chainage (${u.length})`, value: (r) => L(r.chainageM), digits: 1 },
     { key: 'ground', heading: `Ground (${u.length})`, value: (r) => L(r.groundElevationM), digits: 2 },
     { key: 'pipe', heading: `Pipe (${u.length})`, value: (r) => L(r.pipeElevationM), digits: 2 },

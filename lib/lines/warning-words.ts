@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { findPipe, PRESSURE_CAUTION, type LineFix, type LineWarning, type WarningCode, type WarningSeverity, type WarningValues } from '../../hydraulics/index';
 import type { GpsHeightWarning } from '../../hydraulics/survey/gps-height-warning';
-import { formatHeadPressure, formatNumber, formatQuantity, type DisplayUnits, type UnitSystem } from '../units/index';
+import { formatHeadPressure, formatNumber, formatQuantity, formatStation, type DisplayUnits, type UnitSystem } from '../units/index';
 
 /** Runnel's short titles for the core's warning codes. */
 export const WARNING_TITLES: Record<WarningCode, string> = {
@@ -47,7 +47,11 @@ export function fixWords(fixes: readonly LineFix[], u: DisplayUnits): string {
 
 /** Where a warning applies, in the project's units. */
 export function placeWords(at: { chainageM: number } | { fromM: number; toM: number }, u: DisplayUnits): string {
-  return 'chainageM' in at ? `ch. ${formatQuantity('chainage', at.chainageM, u.system)}` : `ch. ${formatQuantity('chainage', at.fromM, u.system)} to ${formatQuantity('chainage', at.toM, u.system)}`;
+  // US projects also read the place as stations (12+50).
+  const sta = (c: number) => (u.system === 'us' ? ` (sta. ${formatStation(c, u.system)})` : '');
+  return 'chainageM' in at
+    ? `ch. ${formatQuantity('chainage', at.chainageM, u.system)}${sta(at.chainageM)}`
+    : `ch. ${formatQuantity('chainage', at.fromM, u.system)} to ${formatQuantity('chainage', at.toM, u.system)}${u.system === 'us' ? ` (sta. ${formatStation(at.fromM, u.system)} to ${formatStation(at.toM, u.system)})` : ''}`;
 }
 
 /** A warning worded for a person in the project's units: title, what and why, and the fix. */
@@ -118,7 +122,9 @@ const WORDING: Record<WarningCode, Wording> = {
   'residual-below-target': (v, f) => [
     `At the design flow of ${f.flow(v.flowM3s)} the outlet has ${f.head(v.headM)} of pressure, below the ${f.head(v.limitHeadM)} it needs: friction and fittings use up too much of the available head.`,
     v.toPipeLabel
-      ? `Change stretch ${(v.stretchIndex ?? 0) + 1} (${f.range(v.fromM, v.toM)}) from ${v.pipeLabel} to ${v.toPipeLabel}: the outlet then has ${f.head(v.fixedHeadM)}.`
+      ? `Change stretch ${(v.stretchIndex ?? 0) + 1} (${f.range(v.fromM, v.toM)}) from ${v.pipeLabel} to ${v.toPipeLabel}: the outlet then has ${f.head(v.fixedHeadM)}${
+        (v.alsoClears ?? []).length > 0 ? `, and the ${(v.alsoClears ?? []).map((c) => WARNING_TITLES[c].toLowerCase()).join(', ')} this flow causes clear with it` : ''
+      }.`
       : `No single pipe change is enough: use larger pipe over several stretches, lower the design flow (the line carries ${f.flow(v.capacityM3s)} by gravity to this outlet), or set the outlet lower.`,
   ],
   'no-gravity-flow': (v, f) => [

@@ -29,3 +29,6 @@ export interface NetworkContext {
   /** What the team pays per metre of each catalogue pipe. */
   prices: { pipeId: string; costPerM: number }[];
 }
+
+/** What a network computation reads beyond the records, the lines and the lift records: a revision freezes exactly this. */
+export type NetworkBasis = Pick<NetworkContext, 'ramOutlets' | 'sourceYieldsM3s' | 'prices'>;

@@ -1,3 +1,4 @@
+import type { LineRouteStation } from '../lines/route-stations';
 import type { UnitSystem } from '../units';
 import type { NetworkJobView } from './jobs';
 import type { NetworkRecords } from './records';
@@ -34,4 +35,21 @@ export interface NetworkView {
   demandUses: NetworkDemandUse[];
   /** The latest run of each kind. */
   runs: { solve: NetworkJobView | null; day: NetworkJobView | null; size: NetworkJobView | null };
+}
+
+/** Stations kept per line for the schematic: enough to draw its course, never the whole survey. */
+const PLAN_POINTS = 120;
+
+/** A line's chainage window and thinned plan, from its stations (null when it has none). */
+export function lineSummaryOf(line: { id: string; name: string }, stations: readonly LineRouteStation[]): NetworkLineSummary | null {
+  if (stations.length === 0) return null;
+  const step = Math.max(1, Math.ceil(stations.length / PLAN_POINTS));
+  const kept = stations.filter((_, index) => index % step === 0 || index === stations.length - 1);
+  return {
+    id: line.id,
+    name: line.name,
+    fromChainageM: stations[0].chainageM,
+    toChainageM: stations[stations.length - 1].chainageM,
+    plan: kept.map((s) => ({ chainageM: s.chainageM, groundM: s.groundElevationM, latitudeDeg: s.latitudeDeg ?? null, longitudeDeg: s.longitudeDeg ?? null })),
+  };
 }

@@ -9,7 +9,8 @@ import type { LineRecord } from '../data/lines';
 import { lineAnswers } from '../lines/answers';
 import { ramFeedAnswers } from '../lines/ram-feed';
 import { EMPTY_SITE_CONTEXT, type LineSiteContext } from '../lines/ram-start';
-import { lineWinterPlan } from '../lines/winter';
+import { lineWinterPlan, winterWarnings } from '../lines/winter';
+import { FRICTION_WORDS } from '../lines/answers';
 import { stampRows, type ReviewStamp } from '../review/stamp';
 import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
 import { INK, labelGrid } from './pdf-table';
@@ -76,14 +77,21 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
     ['Units', unitSystemName(u.system)],
   ], 5, CONTENT_WIDTH);
 
-  const answers = lineAnswers(analysis);
+  // The winter findings stand with the line's other items, as on the screen.
+  const winter = lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, line.design.winter, context.frostDepthM, false);
+  const withWinter = { ...analysis, warnings: [...analysis.warnings, ...winterWarnings(winter, context.overdueDrainDownOn ?? null)] };
+  const answers = lineAnswers(withWinter);
   const t = analysis.settings.waterTemperatureC;
+  const flowWords = answers.overCapacity
+    ? `at most ${formatQuantity('designFlow', answers.capacityM3s, u.system)} (the design flow of ${formatQuantity('designFlow', answers.flowM3s, u.system)} is more than the line carries by gravity)`
+    : `${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'})`;
   doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
-    `Flow delivered: ${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.flowSource === 'design' ? 'design flow' : 'found by gravity'}). ` +
+    `Flow delivered: ${flowWords}. ` +
       `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
       `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u.system, t)} at ch. ${formatQuantity('chainage', answers.worstStatic.chainageM, u.system)} ` +
       `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u.system, t)}). ` +
-      `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice.`,
+      `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice. ` +
+      (answers.frictionMethod ? FRICTION_WORDS[answers.frictionMethod] : ''),
   ));
   doc.moveDown(0.4);
 
@@ -100,9 +108,9 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   if (feed) liftSection(doc, feed, u, t);
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
-  warningList(doc, analysis, u);
+  warningList(doc, withWinter, u);
   photoSection(doc, photos, u);
-  winterSection(doc, lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, line.design.winter, context.frostDepthM, false), u);
+  winterSection(doc, winter, u);
   assumptions(doc, analysis, u);
   cautions(doc);
   markEveryPage(doc, stamp);

@@ -1,5 +1,6 @@
 import type { LineAnalysis, LineDevice } from '../../hydraulics/index';
 import { lineAnswers } from '../lines/answers';
+import { designCost, type DesignCost } from './cost';
 import { analyseSnapshotLine } from './snapshot-analysis';
 import type { DesignSnapshot, SnapshotLine } from './snapshot-types';
 
@@ -36,6 +37,23 @@ export interface RevisionComparison {
   /** Network nodes (take-offs, outlets, tanks...) and links; empty when neither revision froze a network. */
   networkNodes: { added: string[]; removed: string[]; changed: string[] };
   networkLinks: { added: string[]; removed: string[]; changed: string[] };
+  /** Pipe material cost at each revision's frozen price list; null on a side that froze none. */
+  cost: { before: DesignCost | null; after: DesignCost | null; difference: number | null };
+  /** Residual pressure head at each network outlet in each revision's frozen peak-hour solve. */
+  outlets: OutletPressureChange[];
+  /** Why a side has no outlet pressures (no network, not solved, made before solves were frozen); null when it has them. */
+  outletsMissing: { before: string | null; after: string | null };
+}
+
+export interface OutletPressureChange {
+  nodeId: string;
+  name: string;
+  /** Pressure head at the outlet, m; null when the outlet is not on that side or was not solved. */
+  before: number | null;
+  after: number | null;
+  /** The residual the outlet asks for, m (the later revision's, else the earlier's). */
+  minimumM: number | null;
+  change: 'added' | 'removed' | 'changed' | 'unchanged';
 }
 
 const KEY_DECIMALS = 100;
@@ -77,9 +95,7 @@ export function deviceChanges(before: readonly LineDevice[], after: readonly Lin
   ].sort((x, y) => x.chainageM - y.chainageM);
 }
 
-function compareLine(before: SnapshotLine | null, after: SnapshotLine | null): LineComparison {
-  const ab = before ? analyseSnapshotLine(before) : null;
-  const aa = after ? analyseSnapshotLine(after) : null;
+function compareLine(before: SnapshotLine | null, after: SnapshotLine | null, ab: LineAnalysis | null, aa: LineAnalysis | null): LineComparison {
   const outlet = (a: LineAnalysis | null) => (a ? lineAnswers(a).endResidualHeadM : null);
   const result: LineComparison = {
     lineId: (after ?? before)!.id,
@@ -114,16 +130,56 @@ function named<T extends { id: string; name: string; kind: string }>(part: T): T
   return { ...part, name: `${part.name} (${part.kind})` };
 }
 
-/** What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram sites and demand. */
+/** Why a revision has no outlet pressures to compare, or null when it has them. */
+function outletsMissing(snapshot: DesignSnapshot): string | null {
+  if (snapshot.networkSolve === undefined) return 'made before network solves were kept with a revision';
+  if (snapshot.networkSolve === null) return 'no network';
+  return snapshot.networkSolve.ok ? null : `the network did not solve: ${snapshot.networkSolve.problem}`;
+}
+
+function outletPressures(snapshot: DesignSnapshot): Map<string, { name: string; headM: number | null; minimumM: number | null }> {
+  const solved = snapshot.networkSolve?.ok ? new Map(snapshot.networkSolve.result.nodes.map((n) => [n.nodeId, n])) : null;
+  return new Map((snapshot.network?.nodes ?? []).filter((n) => n.kind === 'outlet').map((n) => {
+    const result = solved?.get(n.id);
+    return [n.id, { name: n.name, headM: result?.pressureHeadM ?? null, minimumM: result?.minPressureHeadM ?? n.data.residualHeadM ?? null }];
+  }));
+}
+
+/** Each network outlet's residual pressure head in the two frozen solves, outlets in the later revision first. */
+export function compareOutlets(before: DesignSnapshot, after: DesignSnapshot): OutletPressureChange[] {
+  const was = outletPressures(before);
+  const now = outletPressures(after);
+  const ids = [...new Set([...now.keys(), ...was.keys()])];
+  return ids.map((nodeId) => {
+    const a = was.get(nodeId);
+    const b = now.get(nodeId);
+    const change = !a ? 'added' : !b ? 'removed' : sameNumber(a.headM, b.headM) ? 'unchanged' : 'changed';
+    return { nodeId, name: (b ?? a)!.name, before: a?.headM ?? null, after: b?.headM ?? null, minimumM: (b ?? a)!.minimumM, change };
+  });
+}
+
+/** Each line of a revision analysed as frozen (null: it could not be). */
+function analysesOf(snapshot: DesignSnapshot): Map<string, LineAnalysis | null> {
+  return new Map(snapshot.lines.map((line) => [line.id, analyseSnapshotLine(line)]));
+}
+
+/** What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram sites, demand, the network, its outlet pressures and the pipe cost. */
 export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot): RevisionComparison {
   const ids = [...new Set([...before.lines.map((l) => l.id), ...after.lines.map((l) => l.id)])];
   const find = (s: DesignSnapshot, id: string) => s.lines.find((l) => l.id === id) ?? null;
+  const analysedBefore = analysesOf(before);
+  const analysedAfter = analysesOf(after);
+  const costBefore = designCost(before, analysedBefore);
+  const costAfter = designCost(after, analysedAfter);
   return {
-    lines: ids.map((id) => compareLine(find(before, id), find(after, id))),
+    lines: ids.map((id) => compareLine(find(before, id), find(after, id), analysedBefore.get(id) ?? null, analysedAfter.get(id) ?? null)),
     tanks: compareNamed(before.lift.tanks, after.lift.tanks),
     ramSites: compareNamed(before.lift.ramSites, after.lift.ramSites),
     demandUses: compareNamed(before.lift.demandUses, after.lift.demandUses),
     networkNodes: compareNamed((before.network?.nodes ?? []).map(named), (after.network?.nodes ?? []).map(named)),
     networkLinks: compareNamed((before.network?.links ?? []).map(named), (after.network?.links ?? []).map(named)),
+    cost: { before: costBefore, after: costAfter, difference: costBefore && costAfter ? costAfter.total - costBefore.total : null },
+    outlets: compareOutlets(before, after),
+    outletsMissing: { before: outletsMissing(before), after: outletsMissing(after) },
   };
 }

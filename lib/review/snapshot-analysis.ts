@@ -11,3 +11,14 @@ export function analyseSnapshotLine(line: SnapshotLine): LineAnalysis | null {
 export function snapshotLine(snapshot: DesignSnapshot, lineId: string): SnapshotLine | null {
   return snapshot.lines.find((l) => l.id === lineId) ?? null;
 }
+
+/** Names of what a comment on this revision can point at (lines, routes, network nodes and links), by id. */
+export function snapshotPartNames(snapshot: DesignSnapshot): Map<string, string> {
+  const names = new Map<string, string>();
+  for (const line of snapshot.lines) {
+    names.set(line.id, line.name);
+    if (line.routeId && line.routeName) names.set(line.routeId, line.routeName);
+  }
+  for (const part of [...(snapshot.network?.nodes ?? []), ...(snapshot.network?.links ?? [])]) names.set(part.id, part.name);
+  return names;
+}

@@ -1,6 +1,8 @@
 import type { LiftRecords } from '../lift/records';
 import type { LineSiteContext } from '../lines/ram-start';
+import type { NetworkBasis } from '../network/context';
 import type { NetworkRecords } from '../network/records';
+import type { SolveRunResult } from '../network/run-result';
 import type { LineRouteStation } from '../lines/route-stations';
 import type { LineDesign } from '../validations/line-design';
 import type { UnitSystem } from '../units/index';
@@ -32,4 +34,14 @@ export interface DesignSnapshot {
   lift: Pick<LiftRecords, 'sources' | 'yieldReadings' | 'ramSites' | 'tanks' | 'demandUses'>;
   /** The network (nodes, links, which outlet each demand use feeds); absent in revisions made before it existed. */
   network?: NetworkRecords;
+  /** What the network's solve read beyond the records (planned ram outlets, design yields, the team's price list in force); absent in older revisions. */
+  networkBasis?: NetworkBasis;
+  /**
+   * The network solved at the peak hour from this snapshot when the revision was made (on a worker
+   * thread); null when the project had no network; absent in older revisions.
+   */
+  networkSolve?: FrozenNetworkSolve | null;
 }
+
+/** A frozen peak-hour solve, or why there is none (the network did not solve, or could not be built). */
+export type FrozenNetworkSolve = { ok: true; result: SolveRunResult } | { ok: false; problem: string };

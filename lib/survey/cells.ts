@@ -1,4 +1,5 @@
 import { SurveyImportError } from './errors';
+import { readWrittenDate, writtenDateToUtcMs, type DateOrder } from './local-time';
 
 /** International foot, exactly 0.3048 m (international yard and pound agreement, 1959). */
 export const METRES_PER_FOOT = 0.3048;
@@ -55,11 +56,21 @@ export function readOptionalNumberCell(raw: string | undefined, decimalComma: bo
   return (raw ?? '').trim() === '' ? undefined : readNumberCell(raw, decimalComma, place);
 }
 
+/** How to read a time written without an offset, and a date whose day and month could swap. */
+export interface TimeReading {
+  /** IANA zone of times written without an offset (the project's). @default 'UTC' */
+  timeZone?: string;
+  /** Order of a date such as 01.05.2024; asked for when the file does not decide it. */
+  dateOrder?: DateOrder;
+}
+
 /**
- * Reads a time: ISO 8601 text, or a Unix epoch in seconds or milliseconds (phones log both).
- * Returns ISO 8601 in UTC.
+ * Reads a time: ISO 8601 text (with or without an offset), a day-month or month-day date with an
+ * optional time, or a Unix epoch in seconds or milliseconds (phones log both). A time without an
+ * offset is read in `reading.timeZone`, never in the machine's own zone, so the browser's preview
+ * and the server's import agree. Returns ISO 8601 in UTC.
  */
-export function readTimeCell(raw: string | undefined, place: CellPlace): string | undefined {
+export function readTimeCell(raw: string | undefined, place: CellPlace, reading: TimeReading = {}): string | undefined {
   const cell = (raw ?? '').trim();
   if (cell === '') return undefined;
   if (cell.length > MAX_NUMBER_CELL_CHARS) {
@@ -70,7 +81,15 @@ export function readTimeCell(raw: string | undefined, place: CellPlace): string 
     const n = Number(cell);
     ms = n > 1e11 ? n : n * 1000;
   } else {
-    ms = Date.parse(cell);
+    const written = readWrittenDate(cell, reading.dateOrder);
+    if (!written.ok && written.reason === 'ambiguous-order') {
+      throw new SurveyImportError(
+        'ambiguous-date-order',
+        `“${quoteCell(cell)}” could be day first or month first; choose the date order of the file (day first, as 31.12.2024, or month first, as 12/31/2024)`,
+        place,
+      );
+    }
+    ms = written.ok ? writtenDateToUtcMs(written.date, reading.timeZone ?? 'UTC') : Number.NaN;
   }
   if (!Number.isFinite(ms)) {
     throw new SurveyImportError('bad-time', `“${quoteCell(cell)}” is not a date and time this importer can read (use ISO 8601, e.g. 2024-05-01T07:30:00Z)`, place);

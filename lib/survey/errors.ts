@@ -13,6 +13,7 @@ export type SurveyImportErrorCode =
   | 'latitude-out-of-range'
   | 'longitude-out-of-range'
   | 'bad-time'
+  | 'ambiguous-date-order'
   | 'too-few-points'
   | 'too-many-points'
   | 'negative-chainage'

@@ -5,6 +5,7 @@ import { detectCsvDialect, type CsvDialect } from './csv-dialect';
 import { openCsvTable } from './csv-rows';
 import { SurveyImportError } from './errors';
 import type { HeightSourceName, ParsedSurvey } from './parsed-survey';
+import type { DateOrder } from './local-time';
 
 export interface GpsCsvOptions {
   /** Column mapping confirmed on the mapping screen; guessed from headers when omitted. */
@@ -17,6 +18,9 @@ export interface GpsCsvOptions {
   accuracyIsVertical?: boolean;
   /** Overrides the detected dialect (e.g. the user picked a delimiter). */
   dialect?: Partial<CsvDialect>;
+  /** Time zone of times without an offset (the project's) and the date order when the file does not decide it. */
+  timeZone?: string;
+  dateOrder?: DateOrder;
   onProgress?: (fraction: number) => void;
 }
 
@@ -100,7 +104,7 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
         lon,
         elevationM: toMetres(elevation, elevationUnit),
         label: mapping.name === null ? undefined : (cells[mapping.name] ?? '').trim() || undefined,
-        time: mapping.time === null ? undefined : readTimeCell(cells[mapping.time], at('time', mapping.time)),
+        time: mapping.time === null ? undefined : readTimeCell(cells[mapping.time], at('time', mapping.time), { timeZone: options.timeZone, dateOrder: options.dateOrder }),
         confidence:
           accuracy === undefined ? undefined : accuracyIsVertical ? toMetres(accuracy, elevationUnit) : accuracy * VERTICAL_PER_HORIZONTAL,
       });

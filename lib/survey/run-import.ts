@@ -30,6 +30,8 @@ export function parseSurveyText(text: string, options: SurveyImportOptions, onPr
         accuracyIsVertical: options.accuracyIsVertical,
         heightSource: options.heightSource,
         dialect: options.dialect,
+        timeZone: options.timeZone,
+        dateOrder: options.dateOrder,
         onProgress,
       });
     case 'station-csv':

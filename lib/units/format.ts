@@ -52,3 +52,16 @@ export function formatDuration(seconds: number): string {
 export function formatPercent(fraction: number, decimals: Decimals = 0): string {
   return `${formatNumber(fraction * 100, decimals)} %`;
 }
+
+/**
+ * A chainage as a surveyor's station: hundreds of feet, a plus, then feet (1,250 ft = "12+50";
+ * 1,234.6 ft = "12+35", whole feet). US practice, 100-ft stations (common practice, no source);
+ * metric projects give none (their chainage in metres is the usual form).
+ */
+export function formatStation(chainageM: number, system: UnitSystem): string | null {
+  if (system !== 'us') return null;
+  const feet = Math.round(toDisplay('chainage', chainageM, system));
+  const sign = feet < 0 ? '-' : '';
+  const abs = Math.abs(feet);
+  return `${sign}${Math.floor(abs / 100)}+${String(abs % 100).padStart(2, '0')}`;
+}

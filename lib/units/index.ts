@@ -7,6 +7,7 @@ export {
   formatPercent,
   formatPressureOfHead,
   formatQuantity,
+  formatStation,
   formatTemperature,
   inputValue,
 } from './format';

@@ -38,3 +38,17 @@ export function fieldErrorsOf(error: z.ZodError): FieldErrors {
   }
   return fields;
 }
+
+/** An IANA time zone name the platform knows, e.g. "America/Denver" or "UTC". */
+export const timeZone = z
+  .string({ error: 'Time zone must be text' })
+  .trim()
+  .max(64, 'Time zone must be at most 64 characters')
+  .refine((name) => {
+    try {
+      new Intl.DateTimeFormat('en', { timeZone: name });
+      return true;
+    } catch {
+      return false;
+    }
+  }, 'Time zone must be a zone name such as America/Denver, Europe/Vienna or UTC');

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { DECIMAL_MARKS } from '../units/typed-number';
-import { nameText, safeText, uuid } from './common';
+import { nameText, safeText, timeZone, uuid } from './common';
 
 export const UNIT_SYSTEMS = ['metric', 'us'] as const;
 export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'Units must be "metric" or "us"' });
@@ -30,6 +30,7 @@ export const UpdateProjectSchema = z
     siteNotes: safeText('Site notes', 10000),
     frostDepthM: frostDepth,
     decimalMark: z.enum(DECIMAL_MARKS, { error: 'Decimal mark must be "." or ","' }).nullable(),
+    timeZone: timeZone.nullable(),
     archived: z.boolean({ error: 'Archived must be true or false' }),
   })
   .partial()

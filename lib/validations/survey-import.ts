@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { nameText, safeText } from './common';
+import { nameText, safeText, timeZone } from './common';
 import { heightSource } from './routes';
 
 /**
@@ -28,6 +28,9 @@ export const GpsCsvImportSchema = z.strictObject({
   accuracyIsVertical: z.boolean().optional(),
   heightSource: heightSource.default('gps'),
   dialect,
+  /** Zone of times written without an offset: the project's, the same in preview and import. */
+  timeZone: timeZone.optional(),
+  dateOrder: z.enum(['day-first', 'month-first'], { error: 'Date order must be day-first or month-first' }).optional(),
 });
 
 export const StationCsvImportSchema = z.strictObject({

@@ -77,6 +77,17 @@ describe('bad input is refused with 400 and field errors, and nothing is written
     expect(after!.updatedAt.getTime()).toBe(before!.updatedAt.getTime());
   });
 
+  it('a project time zone: a real zone is kept, an unknown one is refused by name and nothing changes', async () => {
+    const patch = (body: unknown) => call(patchProject, { method: 'PATCH', path: '/api/projects/x', params: { projectId: f.projectId }, body, userId: f.users.designer.id });
+    const bad = await patch({ timeZone: 'Mars/Olympus' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.json.error.fields)).toEqual(['timeZone']);
+    expect((await models().Project.findByPk(f.projectId))!.timeZone).toBeNull();
+    const good = await patch({ timeZone: 'America/Denver' });
+    expect(good.status).toBe(200);
+    expect((await models().Project.findByPk(f.projectId))!.timeZone).toBe('America/Denver');
+  });
+
   it('sign-up: a weak password and a bad e-mail are named, and no account is made', async () => {
     const email = `not-an-email-${Date.now()}`;
     const res = await call(createAccount, { method: 'POST', path: '/api/accounts', body: { name: 'A', email, password: 'short' } });

@@ -4,6 +4,8 @@ import * as commentRoute from '@/app/api/comments/[commentId]/route';
 import * as commentsRoute from '@/app/api/projects/[projectId]/comments/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
+import { deleteNetworkLink } from '@/lib/data/network';
+import { createPipeNetworkFixture } from '../support/network-fixtures';
 import { createRevisionFixture } from '../support/review-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -67,5 +69,24 @@ describe('review comments', () => {
     const res = await post(f.users.reviewer.id, { body: 'x', revisionId: revision.id, anchor: { kind: 'line-chainage', lineId: other.lineId, chainageM: 5 } });
     expect(res.status).toBe(400);
     expect(res.json.error.fields['anchor.lineId']).toBeDefined();
+  });
+
+  it('pins a comment to a part of the working copy\'s network, says where it is now, and refuses a part that is not there', async () => {
+    const g = await createTeamFixture();
+    const network = await createPipeNetworkFixture(g.projectId);
+    const postIn = (body: unknown) => call(commentsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: g.projectId }, body, userId: g.users.reviewer.id });
+    const onLink = await postIn({ body: 'Is 32 mm enough to the tap?', anchor: { kind: 'network', part: 'link', partId: network.link.id } });
+    expect(onLink.status).toBe(201);
+    const read = async () => (await call(commentsRoute.GET, { method: 'GET', path: '/api/x', params: { projectId: g.projectId }, userId: g.users.designer.id })).json.comments;
+    expect((await read())[0]).toMatchObject({ revisionId: null, anchor: { kind: 'network', part: 'link', partId: network.link.id }, anchorNow: { state: 'present', words: 'network link "Fixture pipe"' } });
+    // A node id given as a link, and a part of another project, are both refused with the field named.
+    const wrongPart = await postIn({ body: 'x', anchor: { kind: 'network', part: 'link', partId: network.outlet.id } });
+    expect(wrongPart.status).toBe(400);
+    expect(wrongPart.json.error.fields['anchor.partId']).toEqual(['Pick a link of this revision or working copy']);
+    const other = await createPipeNetworkFixture(f.projectId);
+    expect((await postIn({ body: 'x', anchor: { kind: 'network', part: 'node', partId: other.outlet.id } })).status).toBe(400);
+    // The link goes: the comment stays readable and says so.
+    await deleteNetworkLink(g.projectId, network.link.id);
+    expect((await read())[0]).toMatchObject({ body: 'Is 32 mm enough to the tap?', anchorNow: { state: 'gone', words: 'the network link is no longer in the working copy' } });
   });
 });

@@ -45,3 +45,22 @@ describe('seasonal tasks', () => {
     expect(await models().SeasonalTask.count({ where: { projectId: f.projectId } })).toBe(0);
   });
 });
+
+describe('an overdue drain-down reaches the lines of the project', () => {
+  it('the earliest open drain-down past its date, not a done one nor one still to come', async () => {
+    const { lineSiteContext } = await import('@/lib/data/line-context');
+    const f = await createTeamFixture();
+    const task = (dueOn: string, done = false, kind: 'drain-down' | 'refill' = 'drain-down') =>
+      models().SeasonalTask.create({ projectId: f.projectId, kind, title: `${kind} ${dueOn}`, dueOn, done, doneOn: done ? dueOn : null });
+    expect((await lineSiteContext(f.projectId, '2026-12-02')).overdueDrainDownOn).toBeNull();
+    await task('2026-09-15', true);
+    await task('2026-11-20', false, 'refill');
+    await task('2026-12-20');
+    expect((await lineSiteContext(f.projectId, '2026-12-02')).overdueDrainDownOn).toBeNull();
+    await task('2026-10-01');
+    await task('2026-11-01');
+    const context = await lineSiteContext(f.projectId, '2026-12-02');
+    expect(context.overdueDrainDownOn).toBe('2026-10-01');
+    expect(context.unitSystem).toBe('metric');
+  });
+});

@@ -72,7 +72,9 @@ describe('lines API', () => {
     expect(bad.json.error.fields.colour).toEqual(['Unknown field "colour"']);
     const off = await create({ name: 'Off', routeId: f.lineRouteId, design: designOf({ devices: [{ kind: 'washout', chainageM: 900 }] }) });
     expect(off.status).toBe(400);
-    expect(off.json.error.fields['design.devices.chainageM.0'][0]).toMatch(/outside the line/);
+    // Named as on screen, never by the core's internal path.
+    expect(off.json.error.fields['design.devices.chainageM.0'][0]).toBe('Device 1: chainage: ch. 900.0 m lies outside the line (ch. 0.0 m to 400.0 m)');
+    expect(off.json.error.message).not.toMatch(/devices\.chainageM/);
     const unknownPipe = await create({ name: 'Pipe', routeId: f.lineRouteId, design: designOf({ stretches: [{ fromM: 0, toM: 400, pipe: 'copper-99mm' }] }) });
     expect(unknownPipe.status).toBe(400);
     expect(unknownPipe.json.error.fields['design.stretches.pipe.0'][0]).toMatch(/unknown pipe id "copper-99mm"/);

@@ -13,7 +13,12 @@ import * as membersRoute from '@/app/api/teams/[teamId]/members/route';
 import * as sourceFileRoute from '@/app/api/routes/[routeId]/source/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
-import { createPipeNetworkFixture } from '../support/network-fixtures';
+import * as compareRoute from '@/app/api/revisions/[revisionId]/compare/[otherId]/route';
+import { findPipe } from '@/hydraulics/index';
+import { updateNetworkLink } from '@/lib/data/network';
+import { replacePriceList } from '@/lib/data/price-list';
+import { NetworkLinkSchema } from '@/lib/validations/network';
+import { createPipeNetworkFixture, pipeLinkBody } from '../support/network-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 
@@ -164,5 +169,44 @@ describe('revisions and the review cycle', () => {
     expect(forTeam.json.members.every((m: { email: string | null }) => typeof m.email === 'string')).toBe(true);
     const raw = await call(sourceFileRoute.GET, { method: 'GET', path: '/api/x', params: { routeId: f.routeId }, userId: f.users.viewer.id });
     expect(raw.status).toBe(403);
+  });
+
+  it('a revision freezes the price list in force and its network solve: the compare shows the cost and outlet pressure moving as worked by hand', async () => {
+    const g = await createTeamFixture();
+    const network = await createPipeNetworkFixture(g.projectId);
+    const prices = (fiftyMm: number) => ({ items: [
+      { pipeId: 'pe100-iso4427-sdr11-32mm', costPerM: 2.1, notes: '' },
+      { pipeId: 'pe100-iso4427-sdr11-40mm', costPerM: 3.4, notes: '' },
+      { pipeId: 'pe100-iso4427-sdr11-50mm', costPerM: fiftyMm, notes: '' },
+    ] });
+    await replacePriceList(g.teamId, prices(5));
+    const makeIn = async (note: string) => (await call(revisionsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: g.projectId }, body: { note }, userId: g.users.designer.id })).json.revision;
+    const first = await makeIn('32 mm to the tap');
+    // The designer puts in a larger pipe to the tap, and the 50 mm price goes up.
+    await updateNetworkLink(g.projectId, network.link.id, NetworkLinkSchema.parse({ ...pipeLinkBody(network.source.id, network.outlet.id), data: { lengthM: 250, pipe: 'pe100-iso4427-sdr11-40mm' } }));
+    await replacePriceList(g.teamId, prices(5.5));
+    const second = await makeIn('40 mm to the tap');
+    // A later price change does not touch what either revision froze.
+    await replacePriceList(g.teamId, prices(9));
+
+    const res = await call(compareRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId: second.id, otherId: first.id }, userId: g.users.reviewer.id });
+    expect(res.status).toBe(200);
+    const { cost, outlets } = res.json.comparison;
+    // The fixture line: 400 m on plan falling 240 -> 231 -> 226 -> 214 -> 200 m, all 50 mm.
+    const lineSlopeM = Math.hypot(100, 9) + Math.hypot(100, 5) + Math.hypot(100, 12) + Math.hypot(100, 14);
+    expect(cost.before.total).toBeCloseTo(250 * 2.1 + lineSlopeM * 5, 6);
+    expect(cost.after.total).toBeCloseTo(250 * 3.4 + lineSlopeM * 5.5, 6);
+    expect(cost.difference).toBeCloseTo(250 * 1.3 + lineSlopeM * 0.5, 6);
+    // Intake 120 m, tap 100 m, 250 m at 0.2 L/s: Hazen-Williams h = 10.6742 L Q^1.85185 / (C^1.85185 D^4.87037) (docs/references/core.md §1.1 [R18]).
+    const loss = (pipeId: string) => {
+      const pipe = findPipe(pipeId)!;
+      return (10.6742 * 250 * 0.0002 ** (1 / 0.54)) / (pipe.hazenWilliamsC ** (1 / 0.54) * pipe.insideDiameterM ** (2.63 / 0.54));
+    };
+    expect(outlets).toHaveLength(1);
+    expect(outlets[0]).toMatchObject({ nodeId: network.outlet.id, name: 'Fixture tap', change: 'changed' });
+    expect(outlets[0].before).toBeCloseTo(20 - loss('pe100-iso4427-sdr11-32mm'), 3);
+    expect(outlets[0].after).toBeCloseTo(20 - loss('pe100-iso4427-sdr11-40mm'), 3);
+    const frozen = await models().Revision.findByPk(first.id);
+    expect((frozen!.snapshot as { networkBasis: { prices: unknown[] } }).networkBasis.prices).toContainEqual({ pipeId: 'pe100-iso4427-sdr11-50mm', costPerM: 5 });
   });
 });

@@ -85,6 +85,10 @@ test('a designer submits, a reviewer pins a comment and sends it back, the desig
   await designer.page.getByRole('link', { name: 'Compare the two picked' }).click();
   await expect(designer.page.getByTestId('compare-table').filter({ visible: true })).toBeVisible();
   await expect(designer.page.locator('[data-layer="earlier-grade"]').first()).toBeAttached();
+  // Cost at the team's price list and the network outlets' pressures, each revision as it was frozen.
+  await expect(designer.page.getByTestId('cost-total').filter({ visible: true })).toContainText('Total');
+  await expect(designer.page.getByTestId('cost-row').filter({ visible: true }).first()).toBeVisible();
+  await expect(designer.page.getByTestId('outlet-pressure').filter({ visible: true }).first()).toContainText(' m');
   await designer.page.screenshot({ path: 'test-results/review-compare.png', fullPage: true });
   await designer.page.goto(`/projects/${PROJECT}/activity?kinds=revision.approved`);
   await expect(designer.page.getByTestId('activity-feed').filter({ visible: true })).toContainText('Dara Okafor approved revision');

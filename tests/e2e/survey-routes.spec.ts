@@ -73,7 +73,7 @@ test('a surveyor maps the columns of a long CSV, watches the progress, fixes a s
 
   // The guess finds latitude, longitude and time but cannot name “GPS height (ft)”.
   await expect(page.getByLabel('Latitude *')).toHaveValue('1');
-  await expect(page.getByLabel('Time')).toHaveValue('0');
+  await expect(page.getByLabel('Time', { exact: true })).toHaveValue('0');
   await expect(page.getByLabel('Elevation or altitude *')).toHaveValue('');
   await expect(page.getByRole('table', { name: 'First rows of the file' }).getByRole('cell', { name: 'spring box' })).toBeVisible();
   await page.getByLabel('Elevation or altitude *').selectOption({ label: '4 · GPS height (ft)' });

@@ -120,6 +120,7 @@ const EXPORTED_NAMES = [
   'headFromM',
   'headMToPressurePa',
   'headToM',
+  'heightDatumOf',
   'highLowToleranceM',
   'hourlyMultipliers',
   'interpolateStation',

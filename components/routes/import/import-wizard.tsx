@@ -23,6 +23,8 @@ interface Progress { label: string; detail: string; fraction: number }
 export interface ImportWizardProps {
   projectId: string;
   units: UnitSystem;
+  /** The project's time zone: times without an offset are read in it, in the preview and the import alike. */
+  timeZone?: string | null;
 }
 
 /**
@@ -30,7 +32,7 @@ export interface ImportWizardProps {
  * against the first rows, preview what was read with its warnings, then save (one upload, one
  * transaction on the server). Nothing is stored until the last step.
  */
-export function ImportWizard({ projectId, units }: ImportWizardProps) {
+export function ImportWizard({ projectId, units, timeZone = null }: ImportWizardProps) {
   const router = useRouter();
   const worker = useSurveyWorker();
   const upload = useImportSurvey(projectId);
@@ -57,7 +59,7 @@ export function ImportWizard({ projectId, units }: ImportWizardProps) {
     try {
       const result = await worker.inspect(chosen, (fraction) => setProgress({ label: 'Reading the file', detail: `Reading “${chosen.name}”`, fraction }));
       setInspection(result.inspection);
-      setDraft(initialMappingDraft(result.inspection, chosen.name));
+      setDraft(initialMappingDraft(result.inspection, chosen.name, timeZone));
       setPhase('mapping');
       setProgress(null);
     } catch (error) {
@@ -102,14 +104,14 @@ export function ImportWizard({ projectId, units }: ImportWizardProps) {
     }
   }
 
-  async function onSave() {
+  async function onSave(smooth: boolean) {
     if (!file || !options) return;
     setProblem(null);
     const label = 'Uploading';
     setProgress({ label, detail: 'Uploading and saving', fraction: 0 });
     try {
       const result = await upload.mutateAsync({ file, options, onProgress: (fraction) => setProgress({ label, detail: 'Uploading and saving', fraction }) });
-      router.push(`/projects/${projectId}/routes/${result.route.id}`);
+      router.push(`/projects/${projectId}/routes/${result.route.id}${smooth ? '?propose=smoothing' : ''}`);
     } catch (error) {
       setProgress(null);
       report(error);

@@ -2,7 +2,7 @@ import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import type { FieldErrors } from '@/lib/errors';
-import type { MappingDraft } from '@/lib/import/mapping-draft';
+import { sampleDatesAmbiguous, type MappingDraft } from '@/lib/import/mapping-draft';
 import type { CsvDelimiter, CsvDialect } from '@/lib/survey/csv-dialect';
 import type { SurveyInspection } from '@/lib/survey/inspect';
 import type { SurveyFormat } from '@/lib/survey/parsed-survey';
@@ -75,6 +75,9 @@ export function MappingStep({ fileName, inspection, draft, units, errors, busy, 
       )}
 
       {csv && draft.format === 'gps-csv' && <GpsColumns draft={draft} headers={csv.headers} update={update} />}
+      {csv && draft.format === 'gps-csv' && draft.gps.mapping.time !== null && (
+        <TimeQuestions draft={draft} ambiguous={sampleDatesAmbiguous(csv.sampleRows, draft.gps.mapping.time)} update={update} />
+      )}
       {csv && draft.format === 'station-csv' && <StationColumns draft={draft} headers={csv.headers} update={update} />}
       {csv && (draft.format === 'inclinometer-csv' || draft.format === 'level-book-csv') && <FieldBookFields draft={draft} units={units} errors={errors} update={update} />}
       {!csv && (
@@ -99,5 +102,40 @@ export function MappingStep({ fileName, inspection, draft, units, errors, busy, 
       )}
       <Button type="submit" disabled={busy}>{busy ? 'Reading…' : 'Read the file with these settings'}</Button>
     </form>
+  );
+}
+
+const ZONES: readonly string[] = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
+
+/**
+ * How the time column is read: the zone of times written without an offset (the project's, so the
+ * preview here and the import on the server agree) and, when a date could be either, its order.
+ */
+function TimeQuestions({ draft, ambiguous, update }: { draft: MappingDraft; ambiguous: boolean; update: MappingStepProps['update'] }) {
+  const setTimes = (patch: Partial<MappingDraft['times']>) => update((d) => ({ ...d, times: { ...d.times, ...patch } }));
+  const zones = ZONES.includes(draft.times.timeZone) ? ZONES : [draft.times.timeZone, ...ZONES];
+  return (
+    <fieldset className="space-y-3 rounded-md border border-creek-100 p-3 text-sm" data-testid="time-questions">
+      <legend className="px-1 font-medium text-creek-900">Times in the file</legend>
+      {ambiguous && draft.times.dateOrder === 'ask' && (
+        <p role="alert" className="rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-ochre-700" data-testid="ask-date-order">
+          The dates in the time column could be read two ways (01.05.2024 is 1 May day first, or 5 January month first). Which order does this file use?
+        </p>
+      )}
+      <div className="flex flex-wrap gap-4" role="radiogroup" aria-label="Date order">
+        {([['ask', 'Ask me when a date could be either'], ['day-first', 'Day first (31.12.2024)'], ['month-first', 'Month first (12/31/2024)']] as const).map(([value, label]) => (
+          <label key={value} className="flex items-center gap-2">
+            <input type="radio" name="date-order" value={value} checked={draft.times.dateOrder === value} onChange={() => setTimes({ dateOrder: value })} /> {label}
+          </label>
+        ))}
+      </div>
+      <label className="block max-w-sm">
+        <span className="font-medium text-creek-900">Time zone of times without an offset</span>
+        <select id="time-zone" value={draft.times.timeZone} onChange={(e) => setTimes({ timeZone: e.target.value })} className="mt-1 block w-full rounded-md border border-creek-200 bg-white px-2 py-1.5">
+          {zones.map((zone) => <option key={zone} value={zone}>{zone}</option>)}
+        </select>
+        <span className="mt-1 block text-xs text-creek-600">The project&apos;s time zone unless you change it; a time that carries its own offset (Z, +02:00) keeps it.</span>
+      </label>
+    </fieldset>
   );
 }

@@ -1,6 +1,7 @@
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { formatNumber, formatQuantity } from '@/lib/units';
-import type { ImportPreview } from '@/lib/import/protocol';
+import { IMPORT_SMOOTHING_WINDOW, type ImportPreview } from '@/lib/import/protocol';
 import type { UnitSystem } from '@/lib/units';
 import { FORMAT_LABELS } from '../format-labels';
 import { GpsWarningBanner } from '../gps-warning-banner';
@@ -11,11 +12,14 @@ export interface PreviewStepProps {
   units: UnitSystem;
   saving: boolean;
   onBack: () => void;
-  onSave: () => void;
+  /** `smooth`: propose smoothing of the heights on the route page straight after saving. */
+  onSave: (smooth: boolean) => void;
 }
 
 /** What will be saved: the numbers, the profile, every warning, before anything is stored. */
 export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewStepProps) {
+  // A consumer-GPS walk is offered smoothing (the user ticks it); a levelled route is not offered it.
+  const [smooth, setSmooth] = useState(false);
   const s = preview.stats;
   const spikes = preview.proposals.length;
   // The consumer-GPS note is the banner above; the list holds the rest.
@@ -55,9 +59,18 @@ export function PreviewStep({ preview, units, saving, onBack, onSave }: PreviewS
       {preview.features.length > 0 && (
         <p className="text-sm text-creek-700">Waypoints placed along the route: {preview.features.map((f) => `${f.label} (${formatQuantity('length', f.chainageM, units, 0)})`).join(', ')}.</p>
       )}
+      {preview.gpsWarning && (
+        <label className="flex items-start gap-2 rounded-md border border-creek-100 bg-creek-50/60 px-3 py-2 text-sm text-creek-900" data-testid="offer-smoothing">
+          <input type="checkbox" checked={smooth} onChange={(e) => setSmooth(e.target.checked)} className="mt-1" />
+          <span>
+            Propose smoothing of the heights after saving (moving median of {IMPORT_SMOOTHING_WINDOW} points). The GPS heights scatter; summits and lows that
+            stand out of that scatter keep their heights, and you accept or reject the changes on the route page. The surveyed heights are always kept.
+          </span>
+        </label>
+      )}
       <div className="flex flex-wrap gap-3">
         <Button tone="quiet" onClick={onBack} disabled={saving}>Back to the mapping</Button>
-        <Button onClick={onSave} disabled={saving}>{saving ? 'Saving…' : 'Save route'}</Button>
+        <Button onClick={() => onSave(smooth)} disabled={saving}>{saving ? 'Saving…' : 'Save route'}</Button>
       </div>
     </div>
   );

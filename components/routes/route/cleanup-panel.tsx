@@ -11,6 +11,8 @@ import type { RouteDetail, RouteProposal } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
 import { ProposalItem } from './proposal-item';
 import { typedNumber } from '@/lib/units/decimal-mark-store';
+import { useSearchParams } from 'next/navigation';
+import { IMPORT_SMOOTHING_WINDOW } from '@/lib/import/protocol';
 
 export interface CleanupPanelProps {
   detail: RouteDetail;
@@ -29,7 +31,9 @@ const SHOWN = 200;
  */
 export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: CleanupPanelProps) {
   const decide = useCleanupDecision(detail.route.projectId, detail.route.id);
-  const [requested, setRequested] = useState<RouteProposal[]>([]);
+  // An import of a consumer-GPS walk may ask for smoothing to be proposed straight away.
+  const proposedOnImport = useSearchParams().get('propose') === 'smoothing' && editable;
+  const [requested, setRequested] = useState<RouteProposal[]>(() => (proposedOnImport ? smoothingProposals(detail.points, IMPORT_SMOOTHING_WINDOW) : []));
   const [message, setMessage] = useState<string | null>(null);
   const chainage = new Map(detail.points.map((p) => [p.seq, p.chainageM]));
   const u = unitOf('length', units);
@@ -92,6 +96,11 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
       )}
       {requested.length > 0 && (
         <div className="mt-3">
+          {proposedOnImport && (
+            <p className="mb-2 text-sm text-creek-700" data-testid="import-smoothing-note">
+              Proposed on import: the heights come from a consumer GPS, so a moving median of {IMPORT_SMOOTHING_WINDOW} points is offered. Summits and lows that stand out of the survey&apos;s scatter keep their heights.
+            </p>
+          )}
           <div className="flex flex-wrap items-center gap-3">
             <h3 className="text-sm font-medium text-creek-900">Requested ({requested.length} changes)</h3>
             <Button className="px-2.5 py-1" disabled={disabled} onClick={() => send(requested, [])}>Accept all {requested.length}</Button>

@@ -12,6 +12,7 @@ import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/dr
 import { thinProfile } from '@/lib/routes/profile-series';
 import type { RouteDetail } from '@/lib/routes/types';
 import { displayUnits, type UnitSystem } from '@/lib/units';
+import type { ProfilePin } from '@/lib/chart/profile-types';
 import { GpsWarningBanner } from '../gps-warning-banner';
 import { RouteProfile } from '../route-profile';
 import { CleanupPanel } from './cleanup-panel';
@@ -28,10 +29,13 @@ export interface RouteWorkspaceProps {
   onSketchArea: (a: SketchArea) => void;
   page: number;
   onPage: (page: number) => void;
+  /** Review comments pinned on the ground profile, and what a click on it does (pin a comment). */
+  pins?: readonly ProfilePin[];
+  onPick?: (chainageM: number) => void;
 }
 
 /** One version of the route as the server has it, with the user's unsaved edits on top. */
-export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage }: RouteWorkspaceProps) {
+export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
   const [draft, dispatch] = useReducer(draftReducer, detail.points, draftFromPoints);
   const [message, setMessage] = useState<string | null>(null);
   const [planHoverM, setPlanHoverM] = useState<number | null>(null);
@@ -83,6 +87,8 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
             markers={markers}
             units={units}
             title={`Ground profile of ${detail.route.name}`}
+            pins={pins}
+            onPick={onPick}
             sketch={sketching ? { ...sketchArea, onAdd: (chainageM, elevationM) => dispatch({ type: 'sketch', chainageM: Math.max(0, chainageM), elevationM, heightSource: 'map' }) } : undefined}
             photos={photos}
           />

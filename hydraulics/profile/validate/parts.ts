@@ -12,7 +12,7 @@ const DEVICE_KINDS = ['break-pressure-tank', 'air-release-valve', 'washout', 'is
 
 function assertOnLine(chainageM: number, firstM: number, lastM: number, field: string, index: number): void {
   if (chainageM < firstM || chainageM > lastM) {
-    throw new HydraulicsInputError(field, `${chainageM} m lies outside the line (${firstM} m to ${lastM} m)`, index);
+    throw new HydraulicsInputError(field, `${chainageM} m lies outside the line (${firstM} m to ${lastM} m)`, index, { chainageM, fromM: firstM, toM: lastM });
   }
 }
 

@@ -76,3 +76,33 @@ describe('solveNetwork on random networks (property tests)', () => {
     );
   });
 });
+
+describe('solveNetwork where a wide pipe carries next to nothing', () => {
+  // Found by the property test above: a 187 mm pipe feeding 3.9 mL/s under 150 m of head has so large
+  // a conductance that its flow moves by ~1e-11 m³/s with the last bits of the heads every step; the
+  // iteration must call that settled rather than run out of steps.
+  it('settles, with continuity to 1e-9 m³/s and the source-to-tank flow of a single pipe', () => {
+    const pipe = (id: string, insideDiameterM: number) => ({ id, insideDiameterM, hazenWilliamsC: 100 });
+    const input: NetworkInput = {
+      nodes: [
+        { id: 'spring', kind: 'source', elevationM: 200, waterLevelM: 200 },
+        { id: 'tap', kind: 'junction', elevationM: 50, demandM3s: 3.902364706360237e-6 },
+        { id: 'dead-end', kind: 'junction', elevationM: 50, demandM3s: 0 },
+        { id: 'tank', kind: 'tank', elevationM: 150, waterLevelM: 195 },
+      ],
+      links: [
+        { id: 'to-tap', from: 'spring', to: 'tap', lengthM: 10, pipe: pipe('wide', 0.186996927411556) },
+        { id: 'to-dead-end', from: 'spring', to: 'dead-end', lengthM: 10, pipe: pipe('small', 0.025) },
+        { id: 'to-tank', from: 'spring', to: 'tank', lengthM: 10, pipe: pipe('small', 0.025) },
+      ],
+    };
+    const solution = solveNetwork(input);
+    expect(solution.converged).toBe(true);
+    for (const error of continuityErrors(input, solution)) expect(error).toBeLessThan(1e-9);
+    expect(Math.abs(solution.flowsM3s['to-tap'] - 3.902364706360237e-6)).toBeLessThan(1e-9);
+    expect(solution.flowsM3s['to-dead-end']).toBe(0);
+    // 5 m of head over 10 m of 25 mm pipe, C 100: Q = (5 / (10.6742 · 10 / (100^1.852 · 0.025^4.8704)))^(1/1.852)
+    const resistance = (10.6742 * 10) / (100 ** 1.85185 * 0.025 ** 4.87037);
+    expect(solution.flowsM3s['to-tank']).toBeCloseTo((5 / resistance) ** (1 / 1.85185), 6);
+  });
+});

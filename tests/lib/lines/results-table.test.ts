@@ -47,3 +47,18 @@ describe('results CSV and formula injection', () => {
     expect(parsed.map((r) => r[1])).toEqual(['0.00', '-1.50', '-3.00', '-4.50', '-6.00', '-7.50']);
   });
 });
+
+describe('stations in the 12+50 form for US projects (common practice, no source)', () => {
+  it('formats hundreds of feet, a plus and two digits of feet', async () => {
+    const { formatStation } = await import('../../../lib/units');
+    const { placeWords } = await import('../../../lib/lines/warning-words');
+    expect(formatStation(1250 * 0.3048, 'us')).toBe('12+50');
+    expect(formatStation(1234.6 * 0.3048, 'us')).toBe('12+35');
+    expect(formatStation(5 * 0.3048, 'us')).toBe('0+05');
+    expect(formatStation(100, 'metric')).toBeNull();
+    expect(placeWords({ chainageM: 600 }, displayUnits('us'))).toBe('ch. 1,969 ft (sta. 19+69)');
+    expect(placeWords({ chainageM: 600 }, displayUnits('metric'))).toBe('ch. 600.0 m');
+    expect(stationColumns(displayUnits('us'), 20)[0].heading).toBe('Station');
+    expect(stationColumns(displayUnits('metric'), 20)[0].key).toBe('chainage');
+  });
+});

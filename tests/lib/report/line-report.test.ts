@@ -13,8 +13,8 @@ import { referenceDesignParts, referenceLine } from '../../lines/reference-line'
 
 const squash = (text: string) => text.replace(/\s+/g, ' ');
 
-async function reportText(unitSystem: 'metric' | 'us') {
-  const input = referenceLine();
+async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnType<typeof referenceLine>) => ReturnType<typeof referenceLine> = (i) => i) {
+  const input = change(referenceLine());
   const design = LineDesignSchema.parse(referenceDesignParts());
   const line: LineRecord = {
     id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
@@ -31,6 +31,13 @@ async function reportText(unitSystem: 'metric' | 'us') {
 }
 
 describe('line design report (PDF)', () => {
+  it('never reports a design flow the line cannot carry as delivered, and names the friction formula', async () => {
+    const found = analyzeLine({ ...referenceLine(), flow: { kind: 'find' } });
+    const { text } = await reportText('metric', (input) => ({ ...input, flow: { kind: 'design', flowM3s: found.flowM3s * 1.5 } }));
+    expect(text).toMatch(/Flow delivered: at most [\d.,]+ L\/s \(the design flow of [\d.,]+ L\/s is more than the line carries by gravity\)/);
+    expect(text).toMatch(/Friction by (Hazen-Williams|Darcy-Weisbach)/);
+  });
+
   it('parses, runs to several pages and carries the title block', async () => {
     const { pdf, text, pages } = await reportText('metric');
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');

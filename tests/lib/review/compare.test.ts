@@ -1,10 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { findPipe } from '../../../hydraulics/catalogue/index';
 import { EMPTY_SITE_CONTEXT } from '../../../lib/lines/ram-start';
+import { solveNetworkRun } from '../../../lib/network/run-network';
 import { compareSnapshots } from '../../../lib/review/compare';
+import { networkContextOfSnapshot } from '../../../lib/review/snapshot-network';
 import type { DesignSnapshot, SnapshotLine } from '../../../lib/review/snapshot-types';
 import { LineDesignSchema } from '../../../lib/validations/line-design';
+import { NetworkLinkSchema, NetworkNodeSchema } from '../../../lib/validations/network';
 import { referenceDesignParts, referenceStations } from '../../lines/reference-line';
+import { outletNodeBody, pipeLinkBody, sourceNodeBody } from '../../support/network-fixtures';
 
 const LINE_ID = '00000000-0000-4000-8000-0000000000a1';
 
@@ -23,19 +27,20 @@ function snapshot(line: Partial<SnapshotLine['design']>, tanks: DesignSnapshot['
 
 const label = (id: string) => findPipe(id)!.label;
 
-describe('revision compare', () => {
-  // Revision 1: the reference line (PE80 SDR 17, 40 mm to ch. 300 then 50 mm; an air-release valve at 900).
-  // Revision 2: PE100 SDR 11 50 mm from 300 to 900 m, the valve at 900 taken out, a washout added at 650, a tank added.
-  const before = snapshot({});
-  const after = snapshot({
-    stretches: [
-      { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
-      { fromM: 300, toM: 900, pipe: 'pe100-iso4427-sdr11-50mm' },
-      { fromM: 900, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
-    ],
-    devices: [{ kind: 'washout', chainageM: 650 }],
-  }, [{ id: '00000000-0000-4000-8000-0000000000b1', name: 'Knoll tank' } as DesignSnapshot['lift']['tanks'][number]]);
+// Revision 1: the reference line (PE80 SDR 17, 40 mm to ch. 300 then 50 mm; an air-release valve at 900).
+// Revision 2: PE100 SDR 11 50 mm from 300 to 900 m, the valve at 900 taken out, a washout added at 650, a tank added.
+const before = snapshot({});
+const after = snapshot({
+  stretches: [
+    { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
+    { fromM: 300, toM: 900, pipe: 'pe100-iso4427-sdr11-50mm' },
+    { fromM: 900, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
+  ],
+  devices: [{ kind: 'washout', chainageM: 650 }],
+}, [{ id: '00000000-0000-4000-8000-0000000000b1', name: 'Knoll tank' } as DesignSnapshot['lift']['tanks'][number]]);
 
+
+describe('revision compare', () => {
   it('lists exactly the pipe, class and device changes written into the pair', () => {
     const [line] = compareSnapshots(before, after).lines;
     expect(line.change).toBe('changed');
@@ -69,5 +74,99 @@ describe('revision compare', () => {
     const empty: DesignSnapshot = { ...before, lines: [] };
     expect(compareSnapshots(empty, after).lines[0].change).toBe('added');
     expect(compareSnapshots(before, empty).lines[0].change).toBe('removed');
+  });
+});
+
+// --- Cost and network outlet pressures -------------------------------------------------------------
+const SOURCE_ID = '00000000-0000-4000-8000-0000000000d1';
+const OUTLET_ID = '00000000-0000-4000-8000-0000000000d2';
+const PIPE_LINK_ID = '00000000-0000-4000-8000-0000000000d3';
+// Invented prices per metre (the demo's currency is whatever the team prices in).
+const PRICES = [
+  { pipeId: 'pe80-iso4427-sdr17-40mm', costPerM: 1.9 },
+  { pipeId: 'pe80-iso4427-sdr17-50mm', costPerM: 2.6 },
+  { pipeId: 'pe100-iso4427-sdr11-50mm', costPerM: 3.8 },
+  { pipeId: 'pe100-iso4427-sdr11-32mm', costPerM: 2.1 },
+  { pipeId: 'pe100-iso4427-sdr11-40mm', costPerM: 3.4 },
+];
+
+/** A revision with the reference line plus a small network (intake at 120 m, 250 m of `pipeId`, a tap at 100 m drawing 0.2 L/s), solved as a revision freezes it. */
+function withNetwork(base: DesignSnapshot, pipeId: string): DesignSnapshot {
+  const snap: DesignSnapshot = {
+    ...base,
+    network: {
+      projectId: 'p',
+      nodes: [{ id: SOURCE_ID, ...NetworkNodeSchema.parse(sourceNodeBody()) }, { id: OUTLET_ID, ...NetworkNodeSchema.parse(outletNodeBody()) }],
+      links: [{ id: PIPE_LINK_ID, ...NetworkLinkSchema.parse({ ...pipeLinkBody(SOURCE_ID, OUTLET_ID), data: { lengthM: 250, pipe: pipeId } }) }],
+      demandUseTies: [],
+    },
+    networkBasis: { prices: PRICES, ramOutlets: [], sourceYieldsM3s: {} },
+  };
+  return { ...snap, networkSolve: { ok: true, result: solveNetworkRun(networkContextOfSnapshot(snap)!) } };
+}
+
+/** Slope length of the reference route between two chainages, from its stations (straight between stations). */
+function slopeLength(fromM: number, toM: number): number {
+  const s = referenceStations().filter((st) => st.chainageM >= fromM && st.chainageM <= toM);
+  let sum = 0;
+  for (let i = 1; i < s.length; i++) sum += Math.hypot(s[i].chainageM - s[i - 1].chainageM, s[i].groundElevationM - s[i - 1].groundElevationM);
+  return sum;
+}
+
+/**
+ * Head loss by Hazen-Williams in its SI form h = 10.6742·L·Q^1.85185 / (C^1.85185·D^4.87037)
+ * (docs/references/core.md §1.1 [R18]), written out here independently of the network solver.
+ */
+function hazenWilliamsLossM(lengthM: number, flowM3s: number, pipeId: string): number {
+  const pipe = findPipe(pipeId)!;
+  return (10.6742 * lengthM * flowM3s ** (1 / 0.54)) / (pipe.hazenWilliamsC ** (1 / 0.54) * pipe.insideDiameterM ** (2.63 / 0.54));
+}
+
+describe('revision compare: pipe cost and network outlet pressures', () => {
+  const costBefore = withNetwork(before, 'pe100-iso4427-sdr11-32mm');
+  const costAfter = withNetwork(after, 'pe100-iso4427-sdr11-40mm');
+  const comparison = compareSnapshots(costBefore, costAfter);
+
+  it('prices every stretch by its slope length and the network pipe by its length, at the frozen price list', () => {
+    // Revision 1: 40 mm PE80 0-300, 50 mm PE80 300-1400, 250 m of 32 mm PE100 on the network.
+    const expectedBefore = slopeLength(0, 300) * 1.9 + slopeLength(300, 1400) * 2.6 + 250 * 2.1;
+    // Revision 2: 300-900 becomes PE100 SDR 11 50 mm, and the network pipe 40 mm.
+    const expectedAfter = slopeLength(0, 300) * 1.9 + slopeLength(300, 900) * 3.8 + slopeLength(900, 1400) * 2.6 + 250 * 3.4;
+    expect(comparison.cost.before!.total).toBeCloseTo(expectedBefore, 6);
+    expect(comparison.cost.after!.total).toBeCloseTo(expectedAfter, 6);
+    expect(comparison.cost.difference).toBeCloseTo(expectedAfter - expectedBefore, 6);
+    // The change costs about 600 m x 1.2 + 250 m x 1.3 = 1045 more on plan; the sag's slope adds a few per cent.
+    expect(comparison.cost.difference!).toBeGreaterThan(1045);
+    expect(comparison.cost.difference!).toBeLessThan(1045 * 1.03);
+    expect(comparison.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-50mm')).toMatchObject({ costPerM: 3.8 });
+    expect(comparison.cost.after!.unpricedLengthM).toBe(0);
+  });
+
+  it('leaves unpriced pipe out of the total and says how much, and has no cost for a revision that kept no price list', () => {
+    const unpriced = compareSnapshots(before, { ...costAfter, networkBasis: { ...costAfter.networkBasis!, prices: PRICES.filter((p) => p.pipeId !== 'pe100-iso4427-sdr11-40mm') } });
+    expect(unpriced.cost.after!.unpricedLengthM).toBeCloseTo(250, 9);
+    expect(unpriced.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-40mm')).toMatchObject({ costPerM: null, cost: null });
+    expect(unpriced.cost.before).toBeNull();
+    expect(unpriced.cost.difference).toBeNull();
+  });
+
+  it('gives each outlet its residual pressure in both solves, matching Hazen-Williams worked by hand', () => {
+    // Intake water level 120 m, tap at 100 m: 20 m static, less the friction of 250 m at 0.2 L/s (no minor losses).
+    const [tap] = comparison.outlets;
+    expect(tap).toMatchObject({ nodeId: OUTLET_ID, name: 'Fixture tap', change: 'changed', minimumM: 3 });
+    expect(tap.before!).toBeCloseTo(20 - hazenWilliamsLossM(250, 0.0002, 'pe100-iso4427-sdr11-32mm'), 3);
+    expect(tap.after!).toBeCloseTo(20 - hazenWilliamsLossM(250, 0.0002, 'pe100-iso4427-sdr11-40mm'), 3);
+    // The larger bore loses less: pressure at the tap rises.
+    expect(tap.after!).toBeGreaterThan(tap.before!);
+    expect(comparison.outletsMissing).toEqual({ before: null, after: null });
+  });
+
+  it('says why a side has no outlet pressures: a revision from before solves were kept, or a network that did not solve', () => {
+    const old = compareSnapshots(before, costAfter);
+    expect(old.outlets[0]).toMatchObject({ before: null, after: costAfter.networkSolve!.ok ? expect.any(Number) : null });
+    expect(old.outletsMissing.before).toMatch(/before network solves were kept/);
+    const failed = compareSnapshots(costBefore, { ...costAfter, networkSolve: { ok: false, problem: 'Outlet "Fixture tap" is not joined to any source' } });
+    expect(failed.outletsMissing.after).toBe('the network did not solve: Outlet "Fixture tap" is not joined to any source');
+    expect(failed.outlets[0].after).toBeNull();
   });
 });

@@ -2,8 +2,10 @@ import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
 import { NewRevisionForm } from '@/components/reviews/new-revision-form';
 import { RevisionsList } from '@/components/reviews/revisions-list';
+import { WorkingCopyComments } from '@/components/reviews/working-copy-comments';
 import { Panel } from '@/components/ui/panel';
 import { requireProjectPage } from '@/lib/auth/project-page';
+import { listComments } from '@/lib/data/comments';
 import { listRevisions } from '@/lib/data/revisions';
 import { can } from '@/lib/permissions';
 import { reviewKeys } from '@/lib/queries/reviews';
@@ -14,8 +16,11 @@ export const metadata: Metadata = { title: 'Reviews' };
 export default async function ReviewsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { project, role } = await requireProjectPage(params);
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: reviewKeys.revisions(project.id), queryFn: () => listRevisions(project.id, role) });
   const client = !can(role, 'design.view');
+  await Promise.all([
+    queryClient.prefetchQuery({ queryKey: reviewKeys.revisions(project.id), queryFn: () => listRevisions(project.id, role) }),
+    client ? null : queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) }),
+  ]);
 
   return (
     <div className="space-y-6">
@@ -34,6 +39,11 @@ export default async function ReviewsPage({ params }: { params: Promise<{ projec
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
         <RevisionsList projectId={project.id} />
+        {!client && (
+          <Panel title="Comments on the working copy">
+            <WorkingCopyComments projectId={project.id} />
+          </Panel>
+        )}
       </HydrationBoundary>
     </div>
   );

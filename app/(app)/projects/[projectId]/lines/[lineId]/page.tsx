@@ -4,11 +4,13 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { LineEditor } from '@/components/lines/line-editor';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { listComments, mentionableMembers } from '@/lib/data/comments';
 import { lineSiteContext } from '@/lib/data/line-context';
 import { getLine, stationsOfLine } from '@/lib/data/lines';
 import { getProject } from '@/lib/data/projects';
 import { can } from '@/lib/permissions';
 import { lineKeys } from '@/lib/queries/lines';
+import { reviewKeys } from '@/lib/queries/reviews';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { uuid } from '@/lib/validations/common';
 
@@ -32,10 +34,13 @@ export default async function LinePage({ params }: { params: Promise<{ projectId
     const stations = await stationsOfLine(line.routeId, line).catch(() => []);
     queryClient.setQueryData(lineKeys.stations(line.id), stations);
   }
+  await queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) });
+  const canComment = can(role, 'review.comment');
+  const members = canComment ? await mentionableMembers(project.teamId, user, role) : [];
 
   return (
     <HydrationBoundary state={dehydrate(queryClient)}>
-      <LineEditor lineId={line.id} projectName={project.name} unitSystem={project.unitSystem} canEdit={can(role, 'design.edit')} />
+      <LineEditor lineId={line.id} projectName={project.name} unitSystem={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
     </HydrationBoundary>
   );
 }

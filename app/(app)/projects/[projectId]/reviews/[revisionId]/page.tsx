@@ -7,9 +7,8 @@ import { RevisionActions } from '@/components/reviews/revision-actions';
 import { RevisionStatusBadge } from '@/components/reviews/revision-status-badge';
 import { RevisionWorkspace } from '@/components/reviews/revision-workspace';
 import { requireProjectPage } from '@/lib/auth/project-page';
-import { listComments } from '@/lib/data/comments';
+import { listComments, mentionableMembers } from '@/lib/data/comments';
 import { getRevision } from '@/lib/data/revisions';
-import { listMembers } from '@/lib/data/teams';
 import { AppError } from '@/lib/errors';
 import { can } from '@/lib/permissions';
 import { reviewKeys } from '@/lib/queries/reviews';
@@ -34,7 +33,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
   const lineId = revision.snapshot.lines.find((l) => l.id === wantedLine)?.id ?? revision.snapshot.lines[0]?.id ?? null;
   const stamp = revisionStamp({ number: revision.number, status: revision.status, designerName: revision.createdBy?.name ?? null, reviewerName: revision.reviewedBy?.name ?? null, reviewedAt: revision.reviewedAt });
   const canComment = can(role, 'review.comment');
-  const members = canComment ? (await listMembers(project.teamId, { userId: user.id, role })).filter((m) => m.userId !== user.id).map((m) => ({ id: m.userId, name: m.name })) : [];
+  const members = canComment ? await mentionableMembers(project.teamId, user, role) : [];
 
   const queryClient = getQueryClient();
   await queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) });

@@ -6,12 +6,14 @@ import { z } from 'zod';
 import { RoutePhotos } from '@/components/photos/route-photos';
 import { RouteEditor } from '@/components/routes/route/route-editor';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
+import { listComments, mentionableMembers } from '@/lib/data/comments';
 import { getProject } from '@/lib/data/projects';
 import { listPhotos } from '@/lib/data/photos';
 import { getRouteDetail } from '@/lib/data/routes';
 import { can } from '@/lib/permissions';
 import { photoKeys } from '@/lib/queries/photos';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { reviewKeys } from '@/lib/queries/reviews';
 import { routeKeys } from '@/lib/queries/routes';
 import { uuid } from '@/lib/validations/common';
 
@@ -29,13 +31,18 @@ export default async function RoutePage({ params }: { params: Promise<{ projectI
   if (!project || !detail || detail.route.projectId !== project.id) notFound();
   const queryClient = getQueryClient();
   queryClient.setQueryData(routeKeys.one(detail.route.id), detail);
-  await queryClient.prefetchQuery({ queryKey: photoKeys.project(project.id), queryFn: () => listPhotos(project.id) });
+  await Promise.all([
+    queryClient.prefetchQuery({ queryKey: photoKeys.project(project.id), queryFn: () => listPhotos(project.id) }),
+    queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) }),
+  ]);
+  const canComment = can(role, 'comment.route');
+  const members = await mentionableMembers(project.teamId, user, role);
 
   return (
     <div className="space-y-4">
       <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <RouteEditor routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+        <RouteEditor projectId={project.id} routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} canComment={canComment} canCommentAnywhere={can(role, 'review.comment')} members={members} />
         <RoutePhotos projectId={project.id} routeId={detail.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
       </HydrationBoundary>
     </div>

@@ -19,7 +19,7 @@ export default async function ImportPage({ params }: { params: Promise<{ project
       </div>
       {can(role, 'survey.edit') ? (
         <Panel>
-          <ImportWizard projectId={project.id} units={project.unitSystem} />
+          <ImportWizard projectId={project.id} units={project.unitSystem} timeZone={project.timeZone} />
         </Panel>
       ) : (
         <p role="status" className="rounded-md border border-creek-100 bg-white p-4 text-sm text-creek-700">

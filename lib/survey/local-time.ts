@@ -1,0 +1,93 @@
+/**
+ * Wall-clock times in a time zone, and dates in either order. A time written without an offset
+ * means nothing until its zone is known: the browser's preview and the server's import must read
+ * it in the same zone (the project's), never in the machine's own.
+ */
+
+/** Minutes the zone is ahead of UTC at an instant. */
+function zoneOffsetMinutes(timeZone: string, utcMs: number): number {
+  const parts = new Intl.DateTimeFormat('en-US', {
+    timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+  }).formatToParts(new Date(utcMs));
+  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
+  const asUtc = Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second'));
+  return Math.round((asUtc - Math.floor(utcMs / 1000) * 1000) / 60_000);
+}
+
+/** The UTC instant (ms) of a wall-clock time in `timeZone` (two passes settle a daylight-saving change). */
+export function zonedTimeToUtcMs(fields: { year: number; month: number; day: number; hour: number; minute: number; second: number }, timeZone: string): number {
+  const wall = Date.UTC(fields.year, fields.month - 1, fields.day, fields.hour, fields.minute, 0) + fields.second * 1000;
+  let utc = wall - zoneOffsetMinutes(timeZone, wall) * 60_000;
+  utc = wall - zoneOffsetMinutes(timeZone, utc) * 60_000;
+  return utc;
+}
+
+export type DateOrder = 'day-first' | 'month-first';
+
+export interface WrittenDate {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+  /** Offset written in the text, minutes ahead of UTC; undefined when none was written. */
+  offsetMinutes?: number;
+}
+
+export type DateReading =
+  | { ok: true; date: WrittenDate }
+  | { ok: false; reason: 'ambiguous-order' | 'unreadable' };
+
+const TIME = String.raw`(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d+))?)?)?`;
+const OFFSET = String.raw`\s*(Z|[+-]\d{2}:?\d{2})?`;
+const ISO = new RegExp(String.raw`^(\d{4})-(\d{1,2})-(\d{1,2})${TIME}${OFFSET}$`, 'i');
+const NUMERIC = new RegExp(String.raw`^(\d{1,2})([./-])(\d{1,2})\2(\d{4})${TIME}${OFFSET}$`, 'i');
+
+function offsetOf(text: string | undefined): number | undefined {
+  if (text === undefined) return undefined;
+  if (text.toUpperCase() === 'Z') return 0;
+  const sign = text.startsWith('-') ? -1 : 1;
+  const digits = text.slice(1).replace(':', '');
+  return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4)));
+}
+
+function withTime(date: Omit<WrittenDate, 'hour' | 'minute' | 'second'>, m: RegExpMatchArray, at: number): WrittenDate {
+  const fraction = m[at + 3] ? Number(`0.${m[at + 3]}`) : 0;
+  return { ...date, hour: Number(m[at] ?? 0), minute: Number(m[at + 1] ?? 0), second: Number(m[at + 2] ?? 0) + fraction, offsetMinutes: offsetOf(m[at + 4]) };
+}
+
+function valid(d: WrittenDate): boolean {
+  const days = new Date(Date.UTC(d.year, d.month, 0)).getUTCDate();
+  return d.month >= 1 && d.month <= 12 && d.day >= 1 && d.day <= days && d.hour <= 23 && d.minute <= 59 && d.second < 61;
+}
+
+/**
+ * Reads `2024-05-01 07:30`, `2024-05-01T07:30:00+02:00`, `01.05.2024 07:30` or `05/01/2024`. A date
+ * whose first two numbers could each be the month (both 12 or less) needs `order`, or it is
+ * reported as ambiguous so the import can ask; one that cannot be a month decides by itself.
+ */
+export function readWrittenDate(text: string, order?: DateOrder): DateReading {
+  const iso = ISO.exec(text);
+  if (iso) {
+    const d = withTime({ year: Number(iso[1]), month: Number(iso[2]), day: Number(iso[3]) }, iso, 4);
+    return valid(d) ? { ok: true, date: d } : { ok: false, reason: 'unreadable' };
+  }
+  const num = NUMERIC.exec(text);
+  if (!num) return { ok: false, reason: 'unreadable' };
+  const a = Number(num[1]);
+  const b = Number(num[3]);
+  const decided: DateOrder | undefined = a > 12 ? 'day-first' : b > 12 ? 'month-first' : a === b ? 'day-first' : order;
+  if (!decided) return { ok: false, reason: 'ambiguous-order' };
+  const [day, month] = decided === 'day-first' ? [a, b] : [b, a];
+  const d = withTime({ year: Number(num[4]), month, day }, num, 5);
+  return valid(d) ? { ok: true, date: d } : { ok: false, reason: 'unreadable' };
+}
+
+/** The UTC instant of a written date: its own offset if it has one, else the given zone's wall clock. */
+export function writtenDateToUtcMs(date: WrittenDate, timeZone: string): number {
+  if (date.offsetMinutes !== undefined) {
+    return Date.UTC(date.year, date.month - 1, date.day, date.hour, date.minute, 0) + date.second * 1000 - date.offsetMinutes * 60_000;
+  }
+  return zonedTimeToUtcMs(date, timeZone);
+}

@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import { readWrittenDate, writtenDateToUtcMs, zonedTimeToUtcMs } from '../../../lib/survey/local-time';
+import { parseSurveyText } from '../../../lib/survey/run-import';
+import { SurveyImportError } from '../../../lib/survey/errors';
+import { sampleDatesAmbiguous } from '../../../lib/import/mapping-draft';
+import { SurveyImportOptionsSchema } from '../../../lib/validations/survey-import';
+
+const iso = (ms: number) => new Date(ms).toISOString();
+
+describe('dates in either order are asked, never guessed', () => {
+  it('01.05.2024 could be either: reported as ambiguous until an order is chosen', () => {
+    expect(readWrittenDate('01.05.2024 07:30')).toEqual({ ok: false, reason: 'ambiguous-order' });
+    const dayFirst = readWrittenDate('01.05.2024 07:30', 'day-first');
+    const monthFirst = readWrittenDate('01.05.2024 07:30', 'month-first');
+    expect(dayFirst.ok && [dayFirst.date.day, dayFirst.date.month]).toEqual([1, 5]);
+    expect(monthFirst.ok && [monthFirst.date.day, monthFirst.date.month]).toEqual([5, 1]);
+  });
+
+  it('a number above 12 decides by itself; ISO dates are never ambiguous; nonsense is unreadable', () => {
+    const a = readWrittenDate('31.12.2024');
+    const b = readWrittenDate('12/31/2024 18:05:09');
+    expect(a.ok && [a.date.day, a.date.month]).toEqual([31, 12]);
+    expect(b.ok && [b.date.day, b.date.month, b.date.second]).toEqual([31, 12, 9]);
+    expect(readWrittenDate('2024-05-01T07:30:00').ok).toBe(true);
+    expect(readWrittenDate('31.02.2024')).toEqual({ ok: false, reason: 'unreadable' });
+    expect(readWrittenDate('next Tuesday')).toEqual({ ok: false, reason: 'unreadable' });
+  });
+
+  it('the mapping screen sees the ambiguity in the first rows of the time column', () => {
+    expect(sampleDatesAmbiguous([['46.1', '7.2', '01.05.2024 07:30']], 2)).toBe(true);
+    expect(sampleDatesAmbiguous([['46.1', '7.2', '13.05.2024 07:30']], 2)).toBe(false);
+    expect(sampleDatesAmbiguous([['46.1', '7.2', '01.05.2024 07:30']], null)).toBe(false);
+  });
+});
+
+describe('times without an offset are read in the project\'s zone, the same everywhere', () => {
+  it('wall-clock time in a zone, across a daylight-saving change (IANA tz rules via Intl)', () => {
+    // Denver: MST (UTC−7) in January, MDT (UTC−6) in July.
+    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 1, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver'))).toBe('2024-01-15T14:30:00.000Z');
+    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver'))).toBe('2024-07-15T13:30:00.000Z');
+    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'UTC'))).toBe('2024-07-15T07:30:00.000Z');
+  });
+
+  it('a time with its own offset keeps it, whatever zone is chosen', () => {
+    const written = readWrittenDate('2024-05-01T07:30:00+02:00');
+    expect(written.ok && iso(writtenDateToUtcMs(written.date, 'America/Denver'))).toBe('2024-05-01T05:30:00.000Z');
+  });
+
+  const csv = 'lat,lon,ele,time\n46.10000,7.20000,812.4,01.05.2024 07:30\n46.10010,7.20010,811.9,01.05.2024 07:31\n';
+
+  it('a phone CSV with an ambiguous date stops with a clear question naming the line and column', () => {
+    const options = SurveyImportOptionsSchema.parse({ format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm' });
+    try {
+      parseSurveyText(csv, options);
+      throw new Error('expected an ambiguous-date error');
+    } catch (error) {
+      expect(error).toBeInstanceOf(SurveyImportError);
+      expect((error as SurveyImportError).code).toBe('ambiguous-date-order');
+      expect((error as SurveyImportError).message).toMatch(/day first or month first/);
+      expect((error as SurveyImportError).line).toBe(2);
+      expect((error as SurveyImportError).column).toBe('time');
+    }
+  });
+
+  it('with the order and the project zone chosen, the same file gives the same UTC times wherever it is read', () => {
+    const options = SurveyImportOptionsSchema.parse({
+      format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm',
+      timeZone: 'Europe/Vienna', dateOrder: 'day-first',
+    });
+    const survey = parseSurveyText(csv, options);
+    // 1 May 2024 07:30 in Vienna (CEST, UTC+2) is 05:30 UTC.
+    expect(survey.points.map((p) => p.time)).toEqual(['2024-05-01T05:30:00.000Z', '2024-05-01T05:31:00.000Z']);
+  });
+
+  it('refuses a time zone the platform does not know, naming the field', () => {
+    const result = SurveyImportOptionsSchema.safeParse({ format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm', timeZone: 'Mars/Olympus' });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0].path).toEqual(['timeZone']);
+  });
+});
