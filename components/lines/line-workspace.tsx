@@ -15,6 +15,7 @@ import { designWithInput, lineFeedOf, lineInputOf } from '@/lib/lines/line-input
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
 import { lineWinterPlan, winterWarnings } from '@/lib/lines/winter';
+import { useRoutePhotos } from '@/lib/queries/photos';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
@@ -75,6 +76,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   const [placeKind, setPlaceKind] = useState<LineDeviceKind>('air-release-valve');
   const [note, setNote] = useState<string | null>(null);
   const profileRef = useRef<HTMLDivElement>(null);
+  const photos = useRoutePhotos(line.projectId, line.routeId);
   const openedWithComment = useRef(comments.selectedId !== null);
   useEffect(() => {
     if (openedWithComment.current) profileRef.current?.scrollIntoView({ block: 'start' });
@@ -201,6 +203,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
               onPick={placing ? place : canComment ? setPickedM : undefined}
               pickLabel={placing ? `place a ${placeKind.replace(/-/g, ' ')}` : 'pin a comment'}
               pins={pins}
+              photos={photos}
             />
             <div className="space-y-2">
               {canComment && !placing && (
@@ -208,7 +211,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
                   {pickedM === null ? 'Click the profile to pin a comment at a chainage.' : <>Picked ch. {formatQuantity('chainage', pickedM, units.system)}: write the comment under <a className="underline" href="#line-comments">Comments</a>.</>}
                 </p>
               )}
-              <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} />
+              <PlanView stations={stations} warnings={analysis.warnings} devices={design.devices} units={units} hoverM={hoverM} onHover={setHoverM} photos={photos} />
               <p className="text-xs text-creek-600">Plan from the surveyed positions, north up. Point at either drawing to find the same place on the other.</p>
               <div className="flex gap-1 text-xs">
                 <button type="button" className="underline" onClick={() => setView(panView(view, -(view.toM - view.fromM) / 2, firstM, lastM))}>◀ Back along the line</button>

@@ -7,6 +7,8 @@ import { profileScene } from '@/lib/chart/profile-scene';
 import type { ProfileChartData, ProfileChartOptions, ProfilePin } from '@/lib/chart/profile-types';
 import { panView, zoomView, type ChainageView } from '@/lib/chart/profile-view';
 import type { DisplayUnits } from '@/lib/units';
+import type { NumberedPhoto } from '@/lib/queries/photos';
+import { PhotoCardOverlay, PhotoTargets, usePhotoCard } from '@/components/photos/photo-targets';
 import { SvgNodeView } from './svg-node-view';
 
 export interface ProfileChartProps {
@@ -26,18 +28,21 @@ export interface ProfileChartProps {
   pins?: readonly ProfilePin[];
   /** An earlier revision's grade line, drawn dashed beside this one. */
   earlierGrade?: ProfileChartOptions['earlierGrade'];
+  /** Site photos along the route: marked at their chainages, their card shown on hover or click. */
+  photos?: readonly NumberedPhoto[];
 }
 
 /**
  * The long profile on screen: the pure drawing from lib/chart plus a pointer layer for hover,
  * click-to-place, drag to pan and wheel to zoom on chainage.
  */
-export function ProfileChart({ data, devices, units, view, onViewChange, exaggeration, highlight, hoverM, onHover, onPick, pickLabel, pins, earlierGrade }: ProfileChartProps) {
+export function ProfileChart({ data, devices, units, view, onViewChange, exaggeration, highlight, hoverM, onHover, onPick, pickLabel, pins, earlierGrade, photos }: ProfileChartProps) {
   const boxRef = useRef<HTMLDivElement>(null);
   const svgRef = useRef<HTMLDivElement>(null);
   const captureRef = useRef<SVGRectElement>(null);
   const [width, setWidth] = useState(960);
   const [dragging, setDragging] = useState(false);
+  const card = usePhotoCard();
   const drag = useRef<{ x: number; view: ChainageView; moved: boolean } | null>(null);
   const { chainageM } = data.points;
   const firstM = chainageM[0];
@@ -52,10 +57,17 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
   }, []);
 
   const scene = useMemo(
-    () => profileScene(data, { units, devices, width, view, exaggeration, highlight, pins, earlierGrade }, 'screen'),
-    [data, units, devices, width, view, exaggeration, highlight, pins, earlierGrade],
+    () => profileScene(data, { units, devices, width, view, exaggeration, highlight, pins, earlierGrade, photos }, 'screen'),
+    [data, units, devices, width, view, exaggeration, highlight, pins, earlierGrade, photos],
   );
   const { frame } = scene;
+  const photoPlaces = useMemo(() => {
+    const byId = new Map((photos ?? []).map((p) => [p.id, p]));
+    return scene.photos.flatMap((place) => {
+      const photo = byId.get(place.photo.id);
+      return photo ? [{ photo, x: place.x, y: place.y }] : [];
+    });
+  }, [scene, photos]);
 
   const chainageAtEvent = (clientX: number) => {
     const rect = captureRef.current?.ownerSVGElement?.getBoundingClientRect();
@@ -136,7 +148,7 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
   const hx = hover ? frame.x(chainageM[hover]) : 0;
 
   return (
-    <div ref={boxRef} className="w-full" data-testid="profile-chart">
+    <div ref={boxRef} className="relative w-full" data-testid="profile-chart">
       <div ref={svgRef} className="overflow-hidden rounded-md border border-creek-100">
         <SvgNodeView node={scene.root}>
           {hover !== null && (
@@ -165,8 +177,10 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
             onKeyDown={onKeyDown}
             data-testid="profile-capture"
           />
+          <PhotoTargets places={photoPlaces} card={card} />
         </SvgNodeView>
       </div>
+      <PhotoCardOverlay places={photoPlaces} card={card} units={units.system} width={frame.width} height={frame.height} />
     </div>
   );
 }

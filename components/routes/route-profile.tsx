@@ -3,6 +3,10 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { useRef, type MouseEvent } from 'react';
+import { PhotoCardOverlay, PhotoTargets, usePhotoCard } from '@/components/photos/photo-targets';
+import { photoMarkPlaces, photoMarksLayer, PHOTO_MARK_COLOUR } from '@/lib/chart/photo-marks';
+import { valueAt } from '@/lib/chart/profile-marks';
+import type { NumberedPhoto } from '@/lib/queries/photos';
 import { chainagePinMark } from '@/lib/chart/profile-review';
 import type { ProfilePin } from '@/lib/chart/profile-types';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/units';
@@ -27,6 +31,8 @@ export interface RouteProfileProps {
   markers?: readonly ProfileMarker[];
   units: UnitSystem;
   title: string;
+  /** Site photos along the route: marked at their chainages, their card shown on hover or click. */
+  photos?: readonly NumberedPhoto[];
   /** Sketch mode: the area shown when there are no points yet, metres, and what a click does. */
   sketch?: { lengthM: number; lowM: number; highM: number; onAdd: (chainageM: number, elevationM: number) => void };
   /** Review comments pinned at chainages of the route. */
@@ -41,8 +47,9 @@ type Pt = { x: number; y: number };
  * A small long-section: raw heights dashed, cleaned heights solid, side by side, in the project's
  * units. In sketch mode a click on the chart adds a station at that chainage and height.
  */
-export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch, pins = [], onPick }: RouteProfileProps) {
+export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sketch, pins = [], onPick, photos = [] }: RouteProfileProps) {
   const svgRef = useRef<SVGSVGElement>(null);
+  const card = usePhotoCard();
   const d = (p: ProfilePoint): Pt => ({ x: toDisplay('length', p.chainageM, units), y: toDisplay('length', p.elevationM, units) });
   const rawD = raw.map(d);
   const cleanD = cleaned.map(d);
@@ -58,6 +65,22 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
   const y = scaleLinear().domain([yLow - pad, yHigh + pad]).range([H - M.bottom, M.top]).nice();
   const path = line<Pt>().x((p) => x(p.x)).y((p) => y(p.y));
   const u = unitOf('length', units);
+  // Photo marks: the same layer the line's long profile draws, on this chart's scales.
+  const chainages = cleaned.map((p) => p.chainageM);
+  const heights = cleaned.map((p) => p.elevationM);
+  const photoFrame = {
+    fromM: chainages[0] ?? 0,
+    toM: chainages[chainages.length - 1] ?? 0,
+    x: (c: number) => x(toDisplay('length', c, units)),
+    groundY: (c: number) => y(toDisplay('length', valueAt(chainages, heights, c), units)),
+    topY: M.top,
+  };
+  const photoLayer = cleaned.length > 1 ? photoMarksLayer(photos, photoFrame, units) : null;
+  const byId = new Map(photos.map((p) => [p.id, p]));
+  const photoPlaces = cleaned.length < 2 ? [] : photoMarkPlaces(photos, photoFrame).flatMap((place) => {
+    const photo = byId.get(place.photo.id);
+    return photo ? [{ photo, x: place.x, y: place.y }] : [];
+  });
 
   function pointAt(e: MouseEvent<SVGRectElement>) {
     const ctm = svgRef.current?.getScreenCTM();
@@ -79,8 +102,8 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
   const pinMarks = pins.map((p) => chainagePinMark(p, x(toDisplay('length', p.chainageM, units)), M.top - 4, H - M.bottom, units));
 
   return (
-    <figure className="space-y-1">
-      <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full rounded-md border border-creek-100 bg-white" data-testid="route-profile">
+    <figure className="relative space-y-1">
+      <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} role={photoPlaces.length > 0 ? 'group' : 'img'} aria-label={title} className="w-full rounded-md border border-creek-100 bg-white" data-testid="route-profile">
         <title>{title}</title>
         {y.ticks(5).map((t) => (
           <g key={`y${t}`}>
@@ -108,14 +131,18 @@ export function RouteProfile({ raw = [], cleaned, markers = [], units, title, sk
           <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onPickClick} data-testid="route-profile-capture" />
         )}
         {pinMarks.length > 0 && <g data-layer="comment-pins" pointerEvents="none"><SvgNodes nodes={pinMarks} /></g>}
+        {photoLayer && <SvgNodes nodes={[photoLayer]} />}
+        <PhotoTargets places={photoPlaces} card={card} />
         {sketch && (
           <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="transparent" className="cursor-crosshair" onClick={onClick} data-testid="sketch-area" />
         )}
       </svg>
+      <PhotoCardOverlay places={photoPlaces} card={card} units={units} width={W} height={H} />
       <figcaption className="flex flex-wrap gap-4 text-xs text-creek-700">
         <span className="flex items-center gap-1"><span className="inline-block h-0.5 w-5 bg-creek-700" /> cleaned (used for design)</span>
         {rawD.length > 0 && <span className="flex items-center gap-1"><span className="inline-block h-0 w-5 border-t-2 border-dashed border-ochre-500" /> as surveyed</span>}
         {markers.length > 0 && <span className="flex items-center gap-1"><span className="inline-block h-2.5 w-2.5 rounded-full border-2 border-clay-500" /> proposed clean-up</span>}
+        {photoPlaces.length > 0 && <span className="flex items-center gap-1"><span className="inline-block h-2.5 w-3.5 rounded-sm" style={{ background: PHOTO_MARK_COLOUR }} /> site photo (point at it to see it)</span>}
         {sketch && <span>Click on the chart to add a station at that chainage and height.</span>}
       </figcaption>
     </figure>

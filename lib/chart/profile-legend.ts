@@ -1,11 +1,12 @@
 import type { LineDeviceKind } from '../../hydraulics/index';
+import { PHOTO_MARK_COLOUR } from './photo-marks';
 import { DEVICE_STYLE, FONT_FAMILY, PROFILE_COLOURS, ZONE_FILLS } from './profile-palette';
 import { pipeStyles } from './profile-series';
 import { deviceSymbol } from './profile-symbols';
 import type { ProfileChartData, ProfileChartOptions } from './profile-types';
 import { el, type SvgNode } from './svg-node';
 
-type Swatch = { kind: 'line'; colour: string; width: number; dash?: string } | { kind: 'box'; colour: string } | { kind: 'device'; device: LineDeviceKind };
+type Swatch = { kind: 'line'; colour: string; width: number; dash?: string } | { kind: 'box'; colour: string } | { kind: 'device'; device: LineDeviceKind } | { kind: 'photo' };
 interface LegendItem { label: string; swatch: Swatch; key: string }
 
 const ROW_HEIGHT = 18;
@@ -29,11 +30,13 @@ function legendItems(data: ProfileChartData, options: ProfileChartOptions): Lege
     ...(severities.has('danger') ? [{ key: 'danger', label: 'Danger range', swatch: { kind: 'box' as const, colour: ZONE_FILLS.danger!.fill } }] : []),
     ...(severities.has('warning') ? [{ key: 'warning', label: 'Warning range', swatch: { kind: 'box' as const, colour: ZONE_FILLS.warning!.fill } }] : []),
     ...kinds.map((kind) => ({ key: `device:${kind}`, label: DEVICE_STYLE[kind].label, swatch: { kind: 'device' as const, device: kind } })),
+    ...((options.photos?.length ?? 0) > 0 ? [{ key: 'photos', label: 'Site photo (numbered)', swatch: { kind: 'photo' as const } }] : []),
   ];
 }
 
 function swatchNode(s: Swatch, x: number, y: number): SvgNode {
   if (s.kind === 'line') return el('path', { d: `M${x},${y}L${x + 22},${y}`, stroke: s.colour, 'stroke-width': s.width, 'stroke-dasharray': s.dash, fill: 'none' });
+  if (s.kind === 'photo') return el('rect', { x: x + 4, y: y - 6, width: 14, height: 11, rx: 3, fill: PHOTO_MARK_COLOUR });
   if (s.kind === 'box') return el('rect', { x, y: y - 6, width: 22, height: 12, fill: s.colour, stroke: 'none' });
   return deviceSymbol(s.device, x + 11, y + (s.device === 'washout' ? -6 : s.device === 'air-release-valve' ? 7 : s.device === 'break-pressure-tank' ? 4 : 0));
 }

@@ -1,7 +1,8 @@
 import { profileFrame, PROFILE_LAYOUT } from './profile-frame';
 import { axesLayer } from './profile-axes';
 import { legendLayer } from './profile-legend';
-import { devicesLayer, highlightLayer, zonesLayer } from './profile-marks';
+import { photoMarkPlaces, photoMarksLayer, type PhotoMarkPlace } from './photo-marks';
+import { devicesLayer, highlightLayer, valueAt, zonesLayer } from './profile-marks';
 import { commentPinsLayer, earlierGradeLayer, stampLayer } from './profile-review';
 import { FONT_FAMILY, PROFILE_COLOURS } from './profile-palette';
 import { gradeLayer, groundLayer, pipeLayer, pressureLayer, staticLayer } from './profile-series';
@@ -14,6 +15,8 @@ export interface ProfileScene {
   frame: ProfileFrame;
   /** Profile points drawn (after thinning), ascending indices. */
   drawnIndices: number[];
+  /** Where each photo in the window is marked (the screen lays its pointer targets over them). */
+  photos: PhotoMarkPlace[];
 }
 
 /** Points that must be drawn whatever the thinning: inserted points (stretch ends, fittings, tanks). */
@@ -23,10 +26,22 @@ function insertedPoints(stationIndex: ArrayLike<number>, from: number, to: numbe
   return out;
 }
 
+/** Photo marks stand on the ground line of the elevation panel. */
+function photoFrame(data: ProfileChartData, frame: ProfileFrame) {
+  const { chainageM, groundElevationM } = data.points;
+  return {
+    fromM: frame.fromM,
+    toM: frame.toM,
+    x: frame.x,
+    groundY: (c: number) => Math.min(Math.max(frame.yElevation(valueAt(chainageM, groundElevationM, c)), frame.elevationTop), frame.elevationBottom),
+    topY: frame.elevationTop,
+  };
+}
+
 /**
  * The long profile as an SVG node tree: two panels on one chainage axis (elevation with ground,
  * pipe by class, static line and hydraulic grade; pressure head with allowed head), warning
- * ranges shaded, devices drawn, axes in the project's units and a legend. Each layer is a `<g>`
+ * ranges shaded, devices and site photos marked, axes in the project's units and a legend. Each layer is a `<g>`
  * with `data-layer` so exports and tests can find it. Long lines are thinned to about two
  * points per pixel column, keeping every local high and low of the ground and the pipe.
  */
@@ -45,13 +60,16 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
   const legend = legendLayer(data, options, width, PROFILE_LAYOUT.marginLeft, frame.pressureBottom + PROFILE_LAYOUT.axisBelow);
   const clip = (id: string, top: number, bottom: number) =>
     el('clipPath', { id }, el('rect', { x: frame.plotLeft, y: top, width: frame.plotRight - frame.plotLeft, height: bottom - top }));
+  const photosFrame = photoFrame(data, frame);
+  const photoPlaces = options.photos ? photoMarkPlaces(options.photos, photosFrame) : [];
   const elevationClip = `${idPrefix}-elevation-clip`;
   const pressureClip = `${idPrefix}-pressure-clip`;
   const root = el('svg', {
     viewBox: `0 0 ${frame.width} ${frame.height}`,
     width: frame.width,
     height: frame.height,
-    role: 'img',
+    // With photo marks to point at (focusable on screen) it is a labelled group, not a flat image.
+    role: photoPlaces.length > 0 ? 'group' : 'img',
     'aria-labelledby': `${idPrefix}-title`,
     'font-family': FONT_FAMILY,
     'data-from-m': frame.fromM,
@@ -72,10 +90,11 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
     el('g', { 'clip-path': `url(#${pressureClip})`, 'data-panel': 'pressure', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.pressureBottom} ${frame.pressureTop}`, 'data-y-domain-m': frame.pressureDomainM.join(' ') },
       pressureLayer(data, frame, drawnIndices)),
     devicesLayer(data, frame, options),
+    photoMarksLayer(options.photos, photosFrame, options.units.system),
     highlightLayer(frame, options),
     commentPinsLayer(frame, options),
     stampLayer(frame, options.stamp),
     legend.node,
   );
-  return { root, frame, drawnIndices };
+  return { root, frame, drawnIndices, photos: photoPlaces };
 }

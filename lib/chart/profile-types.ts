@@ -1,5 +1,6 @@
 import type { FrictionMethod, LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
 import type { ReviewStamp } from '../review/stamp';
+import type { ChartPhoto } from './photo-marks';
 import type { DisplayUnits } from '../units/index';
 
 /** What the profile drawing needs from a line analysis (typed arrays or plain arrays both do). */
@@ -33,6 +34,8 @@ export interface ProfileChartOptions {
   stamp?: ReviewStamp;
   /** Review comments pinned at chainages. */
   pins?: readonly ProfilePin[];
+  /** Site photos placed along the route, marked at their chainages. */
+  photos?: readonly ChartPhoto[];
   /** The hydraulic grade line of an earlier revision, drawn dashed beside this one. */
   earlierGrade?: { label: string; chainageM: ArrayLike<number>; gradeM: ArrayLike<number> } | null;
 }

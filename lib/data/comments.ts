@@ -161,7 +161,7 @@ export async function createComment(projectId: string, user: SessionUser, role: 
     await recordActivity(transaction, {
       projectId, actorUserId: user.id, kind: 'comment.added', subjectType: 'comment', subjectId: row.id,
       summary: `${user.name} ${input.parentId ? 'replied' : 'commented'} on ${revisionNumber ? `revision ${revisionNumber}` : 'the working copy'}: ${input.body.slice(0, 140)}`,
-      data: { mentions, revisionNumber: revisionNumber ?? undefined, anchor },
+      data: { mentions, revisionNumber: revisionNumber ?? undefined, revisionId: revisionId ?? undefined, anchor },
     });
     return { id: row.id };
   });

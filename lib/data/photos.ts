@@ -8,7 +8,9 @@ import { AppError } from '../errors';
 import { log } from '../log';
 import { readPhoto } from '../photos/read-photo';
 import { projectStoragePrefix } from './project-files';
-import { deleteObject, putObject } from '../storage';
+import { deleteObject, getObject, putObject } from '../storage';
+import { numberPhotos } from '../chart/photo-marks';
+import type { ReportPhoto } from '../report/photo-section';
 
 export interface PhotoSummary {
   id: string;
@@ -149,10 +151,26 @@ export async function deletePhoto(photoId: string): Promise<void> {
   for (const key of [photo.imageKey, photo.thumbnailKey]) await deleteObject(key).catch((err: unknown) => log().error({ err, key }, 'could not remove a deleted photo’s file'));
 }
 
-/** Photos chosen for a report, of one route between two chainages (a line's window), by chainage. */
-export async function reportPhotos(routeId: string, fromM: number, toM: number): Promise<SitePhoto[]> {
-  return models().SitePhoto.findAll({
-    where: { routeId, inReport: true, chainageM: { [Op.between]: [fromM, toM] } },
-    order: [['chainageM', 'ASC']],
-  });
+/**
+ * The photos chosen for a line's report: those on its route inside its chainage window, numbered as
+ * every drawing numbers the route's photos, with their stored thumbnails.
+ */
+export async function reportPhotosForLine(routeId: string | null, window: { fromM: number; toM: number }): Promise<ReportPhoto[]> {
+  if (!routeId) return [];
+  const rows = await models().SitePhoto.findAll({ where: { routeId, chainageM: { [Op.ne]: null } } });
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  const chosen = numberPhotos(rows.map(toPhotoSummary)).filter((p) => p.source.inReport && p.chainageM >= window.fromM - 1e-6 && p.chainageM <= window.toM + 1e-6);
+  return Promise.all(
+    chosen.map(async (p) => {
+      const row = byId.get(p.id)!;
+      const stored = await getObject(row.thumbnailKey).catch((err: unknown) => {
+        log().error({ err, key: row.thumbnailKey }, 'could not read a photo thumbnail for a report');
+        return null;
+      });
+      return {
+        id: row.id, number: p.number, chainageM: p.chainageM, caption: row.caption, fileName: row.fileName, takenAt: row.takenAt,
+        offsetM: row.offsetM, placement: row.placement, latitude: row.latitude, longitude: row.longitude, thumbnail: stored?.bytes ?? null,
+      };
+    }),
+  );
 }

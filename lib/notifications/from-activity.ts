@@ -10,7 +10,17 @@ export interface ActivityForNotice {
   actorUserId: string | null;
   kind: string;
   summary: string;
-  data?: { mentions?: string[]; authorUserId?: string; [key: string]: unknown };
+  /** What the activity is about: a revision's mail links to that revision. */
+  subjectType?: string | null;
+  subjectId?: string | null;
+  /** `revisionId` on a comment made on a revision: its mail links to that revision. */
+  data?: { mentions?: string[]; authorUserId?: string; revisionId?: string; [key: string]: unknown };
+}
+
+/** The page the mail opens: the revision the activity is about when there is one, else the project. */
+function pathOf(projectId: string, activity: ActivityForNotice): string {
+  const revisionId = activity.subjectType === 'revision' ? activity.subjectId : activity.data?.revisionId;
+  return revisionId ? `/projects/${projectId}/reviews/${revisionId}` : `/projects/${projectId}`;
 }
 
 /** Which activity kinds people are told of, and who: the revision's author, those mentioned, or the reviewers. */
@@ -38,6 +48,6 @@ export async function notifyForActivity(transaction: Transaction, activity: Acti
     actorId: activity.actorUserId,
     recipientIds,
     summary: `${project.name}: ${activity.summary}`,
-    path: `/projects/${project.id}`,
+    path: pathOf(project.id, activity),
   });
 }

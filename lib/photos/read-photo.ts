@@ -2,6 +2,8 @@ import 'server-only';
 import exifr from 'exifr';
 import sharp from 'sharp';
 import { AppError } from '../errors';
+import { runInWorker } from '../workers/pool';
+import { heifExifBlock } from './heif-exif';
 
 export type PhotoType = 'image/jpeg' | 'image/png';
 
@@ -32,38 +34,60 @@ export interface ReadPhoto {
 const THUMBNAIL_PX = 320;
 /** Larger images are refused before decoding (a small file can claim a huge canvas). */
 const MAX_PIXELS = 100_000_000;
+/** HEIC is decoded to raw pixels first (4 bytes each): a lower cap, still above a 48-megapixel phone camera's. */
+const MAX_HEIC_PIXELS = 60_000_000;
+
+type Tags = { latitude?: number; longitude?: number; DateTimeOriginal?: Date; CreateDate?: Date } | null | undefined;
+
+/** Position and time only: nothing else is read from the metadata. */
+const readTags = (bytes: Uint8Array): Promise<Tags> =>
+  exifr.parse(bytes, { gps: true, pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLatitudeRef', 'GPSLongitude', 'GPSLongitudeRef'] }).catch(() => null) as Promise<Tags>;
 
 const refuse = (message: string) => new AppError('unsupported_media_type', message, { file: [message] });
 
+async function decodedHeic(bytes: Uint8Array, fileName: string) {
+  try {
+    return await runInWorker('photo.decode-heic', { bytes, maxPixels: MAX_HEIC_PIXELS });
+  } catch (error) {
+    if (error instanceof AppError) throw error;
+    const why = error instanceof Error && /megapixels/.test(error.message) ? error.message : 'it may be damaged, or coded in a way the decoder does not know';
+    throw refuse(`“${fileName}” is a HEIC photo that could not be decoded: ${why}. Export it as JPEG and upload that`);
+  }
+}
+
 /**
  * Reads a site photo: checks the type from the bytes, keeps only position and time from its
- * metadata, and makes the upright, metadata-free image and its thumbnail that Runnel serves.
+ * metadata, and makes the upright, metadata-free image and its thumbnail that Runnel serves
+ * (a HEIC photo is served as JPEG).
  */
 export async function readPhoto(bytes: Uint8Array, fileName: string): Promise<ReadPhoto> {
   const type = sniffPhotoType(bytes);
-  if (type === 'heic') throw refuse(`“${fileName}” is a HEIC photo, which this server cannot decode: export it as JPEG (most phones can share it that way) and upload that`);
-  if (!type) throw refuse(`“${fileName}” is not a JPEG or PNG image`);
+  if (!type) throw refuse(`“${fileName}” is not a JPEG, PNG or HEIC image`);
+  // A HEIC photo is decoded to pixels (sharp as shipped cannot read HEVC) and stored as JPEG.
+  const heic = type === 'heic' ? await decodedHeic(bytes, fileName) : null;
+  const input = heic ? heic.rgba : bytes;
+  const options: sharp.SharpOptions = heic ? { raw: { width: heic.width, height: heic.height, channels: 4 }, limitInputPixels: MAX_PIXELS } : { limitInputPixels: MAX_PIXELS };
+  const contentType: PhotoType = type === 'image/png' ? 'image/png' : 'image/jpeg';
   let meta: sharp.Metadata;
   try {
-    meta = await sharp(bytes, { limitInputPixels: MAX_PIXELS }).metadata();
+    meta = await sharp(input, options).metadata();
   } catch {
     throw refuse(`“${fileName}” looks like an image but cannot be read; it may be damaged`);
   }
   if (!meta.width || !meta.height) throw refuse(`“${fileName}” has no picture in it`);
-  const tags = (await exifr.parse(bytes, { gps: true, pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLatitudeRef', 'GPSLongitude', 'GPSLongitudeRef'] }).catch(() => null)) as
-    | { latitude?: number; longitude?: number; DateTimeOriginal?: Date; CreateDate?: Date }
-    | null
-    | undefined;
+  // HEIC keeps its Exif in an item of the file's boxes; read it from there, as the JPEG's is read from the JPEG.
+  const tags = await readTags(heic ? (heifExifBlock(bytes) ?? bytes) : bytes);
   const latitude = Number.isFinite(tags?.latitude) && Math.abs(tags!.latitude!) <= 90 ? tags!.latitude! : null;
   const longitude = Number.isFinite(tags?.longitude) && Math.abs(tags!.longitude!) <= 180 ? tags!.longitude! : null;
   const taken = tags?.DateTimeOriginal ?? tags?.CreateDate ?? null;
   try {
     // rotate() applies the orientation tag; sharp writes no metadata unless asked, so all of it is dropped.
-    const upright = sharp(bytes, { limitInputPixels: MAX_PIXELS }).rotate();
-    const image = type === 'image/jpeg' ? await upright.clone().jpeg({ quality: 88 }).toBuffer({ resolveWithObject: true }) : await upright.clone().png().toBuffer({ resolveWithObject: true });
+    // (HEIC pixels come out of the decoder upright already and carry no tag, so rotate() leaves them.)
+    const upright = sharp(input, options).rotate();
+    const image = contentType === 'image/jpeg' ? await upright.clone().jpeg({ quality: 88 }).toBuffer({ resolveWithObject: true }) : await upright.clone().png().toBuffer({ resolveWithObject: true });
     const thumbnail = await upright.clone().resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer();
     return {
-      contentType: type,
+      contentType,
       image: new Uint8Array(image.data),
       thumbnail: new Uint8Array(thumbnail),
       width: image.info.width,

@@ -1,4 +1,6 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
+import { numberPhotos, type ChartPhoto } from '../chart/photo-marks';
 import type { PhotoSummary } from '../data/photos';
 import { fetchJson } from './fetch-json';
 
@@ -9,6 +11,15 @@ export const projectPhotosQuery = (projectId: string) =>
     queryKey: photoKeys.project(projectId),
     queryFn: async () => (await fetchJson<{ photos: PhotoSummary[] }>(`/api/projects/${projectId}/photos`)).photos,
   });
+
+/** A photo numbered along its route (the number its marks and the report show), with its details. */
+export type NumberedPhoto = ChartPhoto & { source: PhotoSummary };
+
+/** The photos placed on one route, numbered along it, for the drawings. */
+export function useRoutePhotos(projectId: string, routeId: string | null): NumberedPhoto[] {
+  const { data } = useQuery({ ...projectPhotosQuery(projectId), enabled: routeId !== null });
+  return useMemo(() => numberPhotos((data ?? []).filter((p) => p.routeId === routeId)), [data, routeId]);
+}
 
 export const photoImageUrl = (photoId: string, size: 'full' | 'thumbnail' = 'full') => `/api/photos/${photoId}/image${size === 'thumbnail' ? '?size=thumbnail' : ''}`;
 
@@ -35,10 +46,23 @@ export function useUploadPhoto(projectId: string) {
 
 export function useUpdatePhoto(projectId: string) {
   const client = useQueryClient();
+  const key = photoKeys.project(projectId);
   return useMutation({
     mutationFn: ({ photoId, ...changes }: { photoId: string; caption?: string; inReport?: boolean; routeId?: string; chainageM?: number }) =>
       fetchJson<{ photo: PhotoSummary }>(`/api/photos/${photoId}`, { method: 'PATCH', body: changes }),
-    onSettled: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
+    // The report box and caption change at once on screen; the server's answer then replaces the list (or the old one comes back on an error).
+    onMutate: async ({ photoId, caption, inReport }) => {
+      await client.cancelQueries({ queryKey: key });
+      const before = client.getQueryData<PhotoSummary[]>(key);
+      if (before) {
+        client.setQueryData<PhotoSummary[]>(key, before.map((p) => (p.id === photoId ? { ...p, ...(caption !== undefined ? { caption } : {}), ...(inReport !== undefined ? { inReport } : {}) } : p)));
+      }
+      return { before };
+    },
+    onError: (_error, _changes, context) => {
+      if (context?.before) client.setQueryData(key, context.before);
+    },
+    onSettled: () => client.invalidateQueries({ queryKey: key }),
   });
 }
 

@@ -2,6 +2,7 @@ import 'server-only';
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
 import { highLowToleranceM, type LineAnalysis } from '../../hydraulics/index';
+import type { ChartPhoto } from '../chart/photo-marks';
 import { profileScene } from '../chart/profile-scene';
 import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
@@ -14,6 +15,7 @@ import { stampRows, type ReviewStamp } from '../review/stamp';
 import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
 import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
+import { photoSection, type ReportPhoto } from './photo-section';
 import { markEveryPage } from './review-mark';
 import { liftSection, networkFeedSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
@@ -30,6 +32,8 @@ export interface LineReportInput {
   stamp: ReviewStamp;
   /** Printed as the date and written as the file's creation date; a revision passes its own date so its PDF never changes. */
   generatedAt: Date;
+  /** Site photos chosen for the report, in the line's window: marked on the profile and printed with their thumbnails. @default none */
+  photos?: readonly ReportPhoto[];
 }
 
 const PAGE = { size: 'A4', layout: 'landscape', margin: 40 } as const;
@@ -40,11 +44,18 @@ function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType
   return `${line.routeName ?? 'route removed'}, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}`;
 }
 
+/** The report's profile: the screen's drawing at report width, with the chosen photos marked. */
+export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = []) {
+  const marks: ChartPhoto[] = photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName }));
+  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, photos: marks }, 'report');
+}
+
 /**
  * The line's design report as a PDF: title block, the answers, the long profile (the same drawing as
- * the screen), stretch schedule, devices, warnings, assumptions and cautions. A4 landscape.
+ * the screen, with the site photos chosen for it marked), stretch schedule, devices, warnings, the
+ * chosen photos, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [] }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
   const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });
   const chunks: Buffer[] = [];
@@ -84,7 +95,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   ));
   doc.moveDown(0.4);
 
-  const scene = profileScene(analysis, { units: u, devices: line.design.devices, width: 1000 }, 'report');
+  const scene = reportProfileScene(analysis, line, project.unitSystem, photos);
   const scale = CONTENT_WIDTH / scene.frame.width;
   const top = doc.y;
   SVGtoPDF(doc, pdfText(svgToString(scene.root)), PAGE.margin, top, {
@@ -99,6 +110,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, withWinter, u);
+  photoSection(doc, photos, u);
   winterSection(doc, winter, u);
   assumptions(doc, analysis, u);
   cautions(doc);

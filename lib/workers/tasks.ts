@@ -1,6 +1,7 @@
 import { analyzeLine } from '../../hydraulics/index';
 import type { LineInput } from '../../hydraulics/index';
 import { thinAnalysis } from '../lines/thin-analysis';
+import { decodeHeic } from '../photos/decode-heic';
 import type { NetworkContext } from '../network/context';
 import { dayNetworkRun, sizeNetworkRun, solveNetworkRun, tankStorageRun } from '../network/run-network';
 import { parseSurveyText } from '../survey/run-import';
@@ -32,6 +33,8 @@ export const TASKS = {
   'network.tank-storage': (input: NetworkContext) => tankStorageRun(input),
   /** Least-cost pipe sizes from the team's price list (HiGHS, loaded in the worker). */
   'network.size': (input: { context: NetworkContext; onePipePerLink: boolean; timeLimitS: number }) => sizeNetworkRun(input.context, input),
+  /** Decodes a HEIC photo's picture to RGBA pixels (libheif as WebAssembly: CPU-bound, so off the request thread). */
+  'photo.decode-heic': (input: { bytes: Uint8Array; maxPixels: number }) => decodeHeic(input.bytes, input.maxPixels),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */
   'test.spin': (input: { ms: number; answer: number }) => {
     const end = Date.now() + input.ms;

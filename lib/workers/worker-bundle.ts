@@ -25,8 +25,12 @@ async function build(): Promise<string> {
     target: 'node20',
     conditions: ['react-server'],
     logLevel: 'silent',
-    // Bundled CommonJS packages call require(); give the ES module one.
-    banner: { js: "import { createRequire as __runnelRequire } from 'node:module'; const require = __runnelRequire(import.meta.url);" },
+    // Bundled CommonJS packages call require() and read __dirname/__filename; give the ES module them.
+    banner: {
+      js:
+        "import { createRequire as __runnelRequire } from 'node:module'; import { fileURLToPath as __runnelPath } from 'node:url'; " +
+        'const require = __runnelRequire(import.meta.url); const __filename = __runnelPath(import.meta.url); const __dirname = __runnelPath(new URL(".", import.meta.url));',
+    },
   });
   // The sizing optimiser (highs) loads its WebAssembly from beside the script that runs it.
   const wasm = path.join(process.cwd(), 'node_modules', 'highs', 'build', 'highs.wasm');

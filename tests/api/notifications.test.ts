@@ -13,14 +13,16 @@ describe('notifications from project activity', () => {
   beforeEach(async () => { f = await createTeamFixture(); });
 
   it('a revision submitted for review is mailed to those who review (owner, reviewer), not to its author', async () => {
-    const sent = await notify({ projectId: f.projectId, actorUserId: f.users.designer.id, kind: 'revision.submitted', summary: 'Fixture designer submitted revision 2 for review' });
+    const revisionId = '00000000-0000-4000-8000-00000000abcd';
+    const sent = await notify({ projectId: f.projectId, actorUserId: f.users.designer.id, kind: 'revision.submitted', subjectType: 'revision', subjectId: revisionId, summary: 'Fixture designer submitted revision 2 for review' });
     expect(sent).toBe(2);
     expect(await kindsTo(f.users.reviewer.email)).toEqual(['revision-submitted']);
     expect(await kindsTo(f.users.owner.email)).toEqual(['revision-submitted']);
     for (const who of ['designer', 'surveyor', 'viewer', 'outsider'] as const) expect(await kindsTo(f.users[who].email)).toEqual([]);
     const [mail] = await models().MailOutbox.findAll({ where: { toAddress: f.users.reviewer.email } });
     expect(mail.subject).toBe('Fixture project: Fixture designer submitted revision 2 for review');
-    expect(mail.textBody).toContain(`/projects/${f.projectId}`);
+    // The link opens the revision that waits.
+    expect(mail.textBody).toContain(`/projects/${f.projectId}/reviews/${revisionId}\n`);
   });
 
   it('approval and changes requested go to the revision author; mentions to the members mentioned', async () => {
@@ -29,6 +31,8 @@ describe('notifications from project activity', () => {
     await notify({ projectId: f.projectId, actorUserId: f.users.reviewer.id, kind: 'comment.added', summary: 'commented at 412 m', data: { mentions: [f.users.surveyor.id, f.users.outsider.id] } });
     expect(await kindsTo(f.users.designer.email)).toEqual(['revision-approved', 'revision-changes-requested']);
     expect(await kindsTo(f.users.surveyor.email)).toEqual(['comment-mention']);
+    // A comment on the working copy links to the project; one on a revision to that revision.
+    expect((await models().MailOutbox.findOne({ where: { toAddress: f.users.surveyor.email } }))!.textBody).toMatch(new RegExp(`/projects/${f.projectId}\n`));
     // Not on the team: never told, whatever the activity names.
     expect(await kindsTo(f.users.outsider.email)).toEqual([]);
     expect(await notify({ projectId: f.projectId, actorUserId: f.users.designer.id, kind: 'line.edited', summary: 'edited a line' })).toBe(0);

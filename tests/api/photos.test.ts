@@ -1,3 +1,5 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import exifr from 'exifr';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { GET as image } from '@/app/api/photos/[photoId]/image/route';
@@ -79,11 +81,13 @@ describe('site photos', () => {
     const fake = new TextEncoder().encode('lat,lon\n54,-2.9\n<html>not a photo</html>');
     const res = await upload(fake, 'trough.jpg');
     expect(res.status).toBe(415);
-    expect(res.json.error.fields.file[0]).toContain('not a JPEG or PNG image');
+    expect(res.json.error.fields.file[0]).toContain('not a JPEG, PNG or HEIC image');
     const heic = new Uint8Array([0, 0, 0, 24, 0x66, 0x74, 0x79, 0x70, 0x68, 0x65, 0x69, 0x63, 0, 0, 0, 0]);
     const heicRes = await upload(heic, 'IMG_0001.HEIC', {}, 'image/heic');
     expect(heicRes.status).toBe(415);
-    expect(heicRes.json.error.message).toContain('export it as JPEG');
+    // A HEIC header with no picture behind it: refused with the way out, nothing stored.
+    expect(heicRes.json.error.message).toContain('is a HEIC photo that could not be decoded');
+    expect(heicRes.json.error.message).toContain('Export it as JPEG');
     const truncated = (await jpegWithPosition(54, -2.9)).slice(0, 40);
     expect((await upload(truncated, 'cut.jpg')).status).toBe(415);
     expect(await listKeys(`projects/${f.projectId}/photos/`)).toEqual(before);
@@ -100,5 +104,25 @@ describe('site photos', () => {
     const moved = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: res.json.photo.id }, body: { chainageM: 100, inReport: true }, userId: f.users.designer.id });
     expect(moved.status).toBe(200);
     expect(moved.json.photo).toMatchObject({ chainageM: 100, inReport: true, placement: 'picked' });
+  });
+
+  it('a HEIC photo (made by libheif’s encoder) is decoded, served as a metadata-free JPEG and lands at its chainage', async () => {
+    // tests/fixtures/photos/README.md: 54.0075° N, 2.9015° W, taken 2026-04-12 10:15, Exif in the file's idat box.
+    const heic = new Uint8Array(fs.readFileSync(path.join(process.cwd(), 'tests/fixtures/photos/walk-54.0075N-2.9015W.heic')));
+    const res = await upload(heic, 'IMG_2207.HEIC', { caption: 'Creek crossing' }, 'image/heic');
+    expect(res.status).toBe(201);
+    const chainageByHand = meridianRadius(54.00375) * rad(0.0075); // ≈ 834.1 m
+    const offsetByHand = primeVertical(54.0075) * Math.cos(rad(54.0075)) * rad(0.0015); // ≈ 98.4 m
+    expect(chainageByHand).toBeGreaterThan(833);
+    expect(chainageByHand).toBeLessThan(835);
+    expect(res.json.photo).toMatchObject({ routeId: walkId, placement: 'position', width: 64, height: 48, takenAt: '2026-04-12T10:15:00.000Z' });
+    expect(res.json.photo.chainageM).toBeCloseTo(chainageByHand, 1);
+    expect(res.json.photo.offsetM).toBeCloseTo(offsetByHand, 1);
+    const stored = await models().SitePhoto.findByPk(res.json.photo.id);
+    expect(stored!.contentType).toBe('image/jpeg');
+    const object = await getObject(stored!.imageKey);
+    expect([...object!.bytes.subarray(0, 3)]).toEqual([0xff, 0xd8, 0xff]);
+    expect(Buffer.from(object!.bytes).includes(Buffer.from('Private Camera Owner'))).toBe(false);
+    expect(await exifr.parse(Buffer.from(object!.bytes)).catch(() => undefined)).toBeUndefined();
   });
 });

@@ -1,17 +1,9 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
+import { seriousFindings } from './axe';
 import { signIn } from './fixtures';
 
 const PROJECT = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001';
 const DEMO_LINE = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a4001';
-
-/** Serious and critical findings of axe-core (WCAG 2.1 A and AA rules) on the page as it stands. */
-async function seriousFindings(page: Page): Promise<string[]> {
-  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
-  return results.violations
-    .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .map((violation) => `${violation.id}: ${violation.help} — ${violation.nodes.slice(0, 3).map((node) => node.target.join(' ')).join(' | ')}`);
-}
 
 async function firstLinkTo(page: Page, pattern: RegExp): Promise<string> {
   const hrefs = await page.locator('a[href]').evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));

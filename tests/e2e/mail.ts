@@ -14,9 +14,9 @@ async function mailTo(address: string): Promise<FakeMail[]> {
 
 /**
  * Waits for the `nth` message (1-based) to `address` whose subject matches, as the job queue
- * delivers it, and returns it with the first link token link in its text.
+ * delivers it, and returns it with the first token link in its text and all its links.
  */
-export async function waitForMail(address: string, subject: RegExp, nth = 1, timeoutMs = 20_000): Promise<{ subject: string; text: string; link: string }> {
+export async function waitForMail(address: string, subject: RegExp, nth = 1, timeoutMs = 20_000): Promise<{ subject: string; text: string; link: string; links: string[] }> {
   const until = Date.now() + timeoutMs;
   for (;;) {
     const found = (await mailTo(address)).filter((m) => subject.test(m.subject));
@@ -24,7 +24,9 @@ export async function waitForMail(address: string, subject: RegExp, nth = 1, tim
       const mail = found[nth - 1]!;
       const link = /https?:\/\/\S+token=[A-Za-z0-9_-]+/.exec(mail.text)?.[0];
       // The path and query of the mailed link (the test's own server answers it), or '' when none.
-      return { subject: mail.subject, text: mail.text, link: link ? new URL(link).pathname + new URL(link).search : '' };
+      // Every link in the text as a path and query, in order (a notification's "Open it" link first).
+      const links = [...mail.text.matchAll(/https?:\/\/\S+/g)].map(([url]) => new URL(url).pathname + new URL(url).search);
+      return { subject: mail.subject, text: mail.text, link: link ? new URL(link).pathname + new URL(link).search : '', links };
     }
     if (Date.now() > until) throw new Error(`no mail "${subject}" #${nth} to ${address} after ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 250));

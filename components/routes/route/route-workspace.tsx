@@ -1,15 +1,17 @@
 'use client';
 
-import { useReducer, useState } from 'react';
+import { useMemo, useReducer, useState } from 'react';
+import { PlanView } from '@/components/lines/plan-view';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/units';
+import { useRoutePhotos } from '@/lib/queries/photos';
 import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
 import { thinProfile } from '@/lib/routes/profile-series';
 import type { RouteDetail } from '@/lib/routes/types';
-import type { UnitSystem } from '@/lib/units';
+import { displayUnits, type UnitSystem } from '@/lib/units';
 import type { ProfilePin } from '@/lib/chart/profile-types';
 import { GpsWarningBanner } from '../gps-warning-banner';
 import { RouteProfile } from '../route-profile';
@@ -36,6 +38,12 @@ export interface RouteWorkspaceProps {
 export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
   const [draft, dispatch] = useReducer(draftReducer, detail.points, draftFromPoints);
   const [message, setMessage] = useState<string | null>(null);
+  const [planHoverM, setPlanHoverM] = useState<number | null>(null);
+  const photos = useRoutePhotos(detail.route.projectId, detail.route.id);
+  const planStations = useMemo(
+    () => detail.points.filter((p) => !p.excluded && p.latitude !== null && p.longitude !== null).map((p) => ({ chainageM: p.chainageM, latitudeDeg: p.latitude!, longitudeDeg: p.longitude! })),
+    [detail.points],
+  );
   const save = useSavePoints(detail.route.projectId, detail.route.id);
   const positioned = detail.points.length > 0 && detail.points.every((p) => p.latitude !== null && p.longitude !== null);
   const sketching = editable && detail.points.length === 0;
@@ -72,6 +80,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
       <Panel title="Ground profile">
         {sketching && <div className="mb-3"><SketchAreaForm area={sketchArea} units={units} onChange={onSketchArea} /></div>}
         {placed.length > 0 || sketching ? (
+          <div className={planStations.length >= 2 ? 'grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]' : ''}>
           <RouteProfile
             raw={raw}
             cleaned={cleaned}
@@ -81,7 +90,15 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
             pins={pins}
             onPick={onPick}
             sketch={sketching ? { ...sketchArea, onAdd: (chainageM, elevationM) => dispatch({ type: 'sketch', chainageM: Math.max(0, chainageM), elevationM, heightSource: 'map' }) } : undefined}
+            photos={photos}
           />
+          {planStations.length >= 2 && (
+            <div className="space-y-1">
+              <PlanView stations={planStations} warnings={[]} devices={[]} units={displayUnits(units)} hoverM={planHoverM} onHover={setPlanHoverM} photos={photos} />
+              <p className="text-xs text-creek-600">Plan from the surveyed positions, north up{photos.length > 0 ? '; photos where they were taken' : ''}.</p>
+            </div>
+          )}
+          </div>
         ) : (
           <p className="text-sm text-creek-700">This route has no points yet.</p>
         )}

@@ -1,6 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { analyseSavedLine } from '@/lib/data/line-analysis';
 import { teamOfLine } from '@/lib/data/lines';
+import { reportPhotosForLine } from '@/lib/data/photos';
 import { getProject } from '@/lib/data/projects';
 import { notFound } from '@/lib/errors';
 import { reportFileName } from '@/lib/lines/file-names';
@@ -8,14 +9,16 @@ import { lineReportPdf } from '@/lib/report/line-report';
 import { workingCopyStamp } from '@/lib/review/stamp';
 import { LineParams } from '@/lib/validations/lines';
 
-/** The working copy's design report as a PDF, marked not for construction; the team (not the client) may export it. */
+/** The working copy's design report as a PDF, marked not for construction, with the site photos chosen for it; the team (not the client) may export it. */
 export const GET = teamRoute(
   { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {
     const { line, analysis, context, stations } = await analyseSavedLine(params.lineId);
     const project = await getProject(line.projectId);
     if (!project) throw notFound();
-    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date() });
+    const c = analysis.points.chainageM;
+    const photos = await reportPhotosForLine(line.routeId, { fromM: c[0], toM: c[c.length - 1] });
+    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date(), photos });
     return new Response(new Uint8Array(pdf), {
       status: 200,
       headers: {
