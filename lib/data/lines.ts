@@ -237,7 +237,25 @@ export async function deleteLine(lineId: string, userId: string): Promise<void> 
   await models().sequelize.transaction(async (transaction) => {
     const line = await models().Line.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!line) throw notFound();
+    const { sequelize } = models();
+    // The ends the line's link joined: when nothing else joins them once the line is gone, and they stand
+    // for no tank, ram, source or demand, they were the line's own and go with it, so the network has no
+    // part left with no head to fix it.
+    const [ends] = await sequelize.query(
+      'SELECT from_node_id AS id FROM network_links WHERE line_id = :lineId UNION SELECT to_node_id FROM network_links WHERE line_id = :lineId',
+      { replacements: { lineId }, transaction },
+    );
     await line.destroy({ transaction });
+    const endIds = (ends as { id: string }[]).map((end) => end.id);
+    if (endIds.length > 0) {
+      await sequelize.query(
+        `DELETE FROM network_nodes n WHERE n.id IN (:endIds) AND n.kind IN ('source', 'junction', 'outlet')
+           AND n.water_source_id IS NULL AND n.ram_site_id IS NULL AND n.tank_id IS NULL
+           AND NOT EXISTS (SELECT 1 FROM network_links l WHERE l.from_node_id = n.id OR l.to_node_id = n.id)
+           AND NOT EXISTS (SELECT 1 FROM demand_uses d WHERE d.outlet_node_id = n.id)`,
+        { replacements: { endIds }, transaction },
+      );
+    }
     await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.deleted', subjectType: 'line', subjectId: line.id, summary: `Removed line "${line.name}"`, data: { name: line.name } });
   });
 }

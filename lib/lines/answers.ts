@@ -48,7 +48,11 @@ export function lineAnswers(a: AnswerInput): LineAnswers {
   const stretch = a.stretches[stretchIndex[worst]];
   const counts: Record<WarningSeverity, number> = { danger: 0, warning: 0, info: 0 };
   for (const w of a.warnings) counts[w.severity] += 1;
-  const scheduled = (a.flowSchedule?.length ?? 0) > 1;
+  const pieces = (a.flowSchedule ?? []) as readonly { flowM3s: number }[];
+  // Pieces that all carry the same flow (the line's ends split at nodes that draw nothing) are one flow
+  // through the whole line, which the reaches' capacity does answer.
+  const oneFlow = pieces.every((piece) => Math.abs(piece.flowM3s - (pieces[0]?.flowM3s ?? 0)) <= 1e-12);
+  const scheduled = pieces.length > 1 && !oneFlow;
   const capacityM3s = a.reaches.length > 0 ? Math.min(...a.reaches.map((reach) => reach.capacityM3s)) : a.flowM3s;
   return {
     flowM3s: a.flowM3s,
@@ -56,7 +60,7 @@ export function lineAnswers(a: AnswerInput): LineAnswers {
     capacityM3s,
     // A reach's capacity is for one flow through the whole line; with a schedule the flow drops at each
     // take-off, so whether the water gets there is the end residual's answer, not this comparison.
-    overCapacity: !scheduled && a.flowSource === 'design' && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
+    overCapacity: !scheduled && (a.flowSource === 'design' || pieces.length > 0) && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
     scheduled,
     frictionMethod: a.settings.frictionMethod,
     endResidualHeadM: a.end.residualHeadM,

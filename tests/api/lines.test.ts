@@ -138,6 +138,23 @@ describe('lines API', () => {
     expect(outsider.status).toBe(404);
   });
 
+  it('deleting a line removes its link and the end nodes only it joined, nothing else of the network', async () => {
+    const res = await create({ name: 'Short-lived line', routeId: f.lineRouteId });
+    expect(res.status).toBe(201);
+    const lineId = res.json.line.id as string;
+    const { sequelize } = models();
+    const nodesOf = async () => ((await sequelize.query('SELECT id FROM network_nodes WHERE project_id = :p ORDER BY id', { replacements: { p: f.projectId } }))[0] as { id: string }[]).map((n) => n.id);
+    const [ends] = await sequelize.query('SELECT from_node_id AS a, to_node_id AS b FROM network_links WHERE line_id = :lineId', { replacements: { lineId } });
+    expect(ends).toHaveLength(1);
+    const { a, b } = (ends as { a: string; b: string }[])[0];
+    const before = await nodesOf();
+    expect(before).toEqual(expect.arrayContaining([a, b]));
+    const del = await call(lineRoute.DELETE, { method: 'DELETE', path: '/api/x', params: { lineId }, userId: f.users.designer.id });
+    expect(del.status).toBe(204);
+    expect((await sequelize.query('SELECT 1 FROM network_links WHERE line_id = :lineId', { replacements: { lineId } }))[0]).toHaveLength(0);
+    expect(await nodesOf()).toEqual(before.filter((id) => id !== a && id !== b));
+  });
+
   it('analyses the saved line with the engineering core', async () => {
     const res = await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.reviewer.id });
     expect(res.status).toBe(200);

@@ -57,7 +57,7 @@ test('the village network: a 24-hour day on screen, a tap stand edited, least-co
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await page.goto(`/projects/${ORRIN_FORD}/network`);
-  await expect(page.getByRole('heading', { name: 'Network' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Network', exact: true })).toBeVisible();
   await page.waitForLoadState('networkidle');
 
   // The day: tank depth, outlet pressures and the source draw through 24 hours, with the day's findings.

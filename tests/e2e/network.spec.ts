@@ -9,7 +9,7 @@ test('a designer builds a branched system with a take-off, solves it, sizes it, 
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await page.goto(`/projects/${KESTREL}/network`);
-  await expect(page.getByRole('heading', { name: 'Network' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Network', exact: true })).toBeVisible();
   await page.waitForLoadState('networkidle');
   const stamp = Date.now().toString().slice(-5);
   const tee = `Orchard tee ${stamp}`;
