@@ -6,8 +6,10 @@ import type { RouteChoice } from '@/lib/data/line-routes';
 import { useFormErrors } from '@/lib/forms/use-form-errors';
 import { useCreateLine } from '@/lib/queries/lines';
 import { displayUnits, formatQuantity, fromDisplay, type UnitSystem } from '@/lib/units';
+import { parseTypedNumber } from '@/lib/units/typed-number';
 import { CreateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
+import { useDecimalMark } from '@/components/ui/decimal-mark';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 
@@ -17,6 +19,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   const create = useCreateLine(projectId);
   const units = displayUnits(unitSystem);
   const { fields, message, check, fail } = useFormErrors();
+  const decimalMark = useDecimalMark();
 
   if (routes.length === 0) {
     return <p className="text-sm text-creek-700">This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line follows a route.</p>;
@@ -25,11 +28,12 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const f = new FormData(event.currentTarget);
+    // The one reading of a typed number (the project's decimal mark); unreadable text goes on as NaN so
+    // the schema names the box.
     const chainage = (name: string) => {
-      const text = String(f.get(name) ?? '').trim();
-      if (text === '') return undefined;
-      const v = Number(text);
-      return Number.isFinite(v) ? fromDisplay('chainage', v, units.system) : Number.NaN;
+      const typed = parseTypedNumber(String(f.get(name) ?? ''), decimalMark);
+      if (!typed.ok) return Number.NaN;
+      return typed.value === null ? undefined : fromDisplay('chainage', typed.value, units.system);
     };
     const input = check(CreateLineSchema, { name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
     if (!input) return;
