@@ -30,3 +30,16 @@ users_after="$(sql 'SELECT count(*) FROM users')"
 [ "$kept" = 1 ] || die "a second npm start lost the row written after the first (found $kept)"
 [ "$users_after" = "$users_before" ] || die "a second npm start changed the demo users ($users_before -> $users_after)"
 log "second start kept the data ($users_after demo users, marker row kept)"
+
+# A fresh clone in the same place makes a new .secrets/pg-password while the clusters outside the
+# clone keep the old one. The password is kept beside the clusters for such a clone to take up,
+# and a test-only cluster whose password no longer matches is made afresh instead of stopping here.
+[ "$(cat "$(cluster_password_file)")" = "$PG_PASSWORD" ] \
+  || die "the cluster password is not kept beside the clusters ($(cluster_password_file))"
+sql "ALTER ROLE runnel PASSWORD 'a password from an earlier clone'" >/dev/null
+stop_postgres "$PGDATA_DIR" >/dev/null
+start_postgres "$CLUSTER" "$PORT_CHECK" >/dev/null
+[ "$(pg_client "$PG_BIN/psql" -h 127.0.0.1 -p "$PORT_CHECK" -U runnel -d postgres -tAc \
+     "SELECT count(*) FROM pg_database WHERE datname = 'runnel'")" = 0 ] \
+  || die "a test cluster made with another password was not made afresh"
+log "a test cluster made with another password is made afresh"

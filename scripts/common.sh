@@ -103,9 +103,29 @@ ensure_session_secret() {
 }
 
 # The password of the `runnel` database role in the clusters the scripts run (SCRAM).
+# The clusters live outside the clone (see runnel_state_dir), so a copy of the password is kept
+# beside them: a fresh clone in the same place takes up its clusters' password instead of making
+# a new one that cannot sign in.
+cluster_password_file() { echo "$(runnel_state_dir)/pg-password"; }
 ensure_pg_password() {
+  local kept
+  kept="$(cluster_password_file)"
+  if [ ! -s "$SECRETS_DIR/pg-password" ] && [ -s "$kept" ]; then
+    ensure_secrets_dir
+    (umask 077; cp "$kept" "$SECRETS_DIR/pg-password")
+  fi
   PG_PASSWORD="$(secret_value pg-password)"
 }
+keep_cluster_password() {
+  local kept
+  kept="$(cluster_password_file)"
+  (umask 077; mkdir -p "$(dirname "$kept")"; printf '%s' "$PG_PASSWORD" > "$kept")
+  chmod 600 "$kept"
+}
+
+# Clusters that hold only test data: when their password no longer matches they are made afresh.
+# The development cluster holds the user's work and is never removed by a script.
+cluster_is_disposable() { [ "$1" != dev ]; }
 
 # ── PostgreSQL run by the scripts ─────────────────────────────────────────────────────────────
 # PostgreSQL refuses to run as root: run the server tools as the 'postgres' OS user when we are root.
@@ -145,6 +165,24 @@ start_postgres() {
       || die "the PostgreSQL user '${PG_OS_USER:-postgres}' cannot reach $PGDATA_DIR: every folder above it must be enterable by that user (set RUNNEL_STATE_DIR elsewhere)"
   fi
   chmod 700 "$PGDATA_DIR"
+  init_cluster_if_new
+  if ! cluster_accepts_password "$port"; then
+    if cluster_is_disposable "$cluster"; then
+      log "the $cluster cluster in $PGDATA_DIR was made with another password (an earlier clone in this place); it holds only test data, so it is made afresh"
+      pg_run "$PG_BIN/pg_ctl" -D "$PGDATA_DIR" -m fast -w stop >/dev/null 2>&1 || true
+      pg_run find "$PGDATA_DIR" -mindepth 1 -delete
+      init_cluster_if_new
+      cluster_accepts_password "$port" \
+        || die "cannot sign in to the new PostgreSQL cluster on 127.0.0.1:$port (log: $PGDATA_DIR/server.log)"
+    else
+      die "cannot sign in to PostgreSQL on 127.0.0.1:$port with the password in .secrets/pg-password; if that file was replaced, put the old one back, or remove $PGDATA_DIR to start afresh (this removes the data)"
+    fi
+  fi
+  keep_cluster_password
+}
+
+# Uses PGDATA_DIR and PG_PASSWORD from start_postgres.
+init_cluster_if_new() {
   if [ ! -f "$PGDATA_DIR/PG_VERSION" ]; then
     log "initialising PostgreSQL cluster in $PGDATA_DIR (password authentication)"
     # initdb reads the password from a file its own user can read; it is removed right after.
@@ -159,6 +197,12 @@ start_postgres() {
   elif grep -Eq '^[^#]*\btrust\b' "$PGDATA_DIR/pg_hba.conf"; then
     die "the cluster in $PGDATA_DIR accepts connections without a password (made by an older Runnel); remove that folder to start afresh"
   fi
+}
+
+# $1 port. Starts the cluster in PGDATA_DIR when it is not running; true when the role `runnel`
+# can sign in with PG_PASSWORD.
+cluster_accepts_password() {
+  local port="$1"
   if pg_run "$PG_BIN/pg_ctl" -D "$PGDATA_DIR" status >/dev/null 2>&1; then
     log "PostgreSQL already running on 127.0.0.1:$port"
   else
@@ -167,9 +211,7 @@ start_postgres() {
       -o "-h 127.0.0.1 -p $port -k $PG_SOCKET_DIR" start >/dev/null \
       || { tail -n 30 "$PGDATA_DIR/server.log" >&2; die "PostgreSQL did not start (log above)"; }
   fi
-  if ! pg_client "$PG_BIN/psql" -h 127.0.0.1 -p "$port" -U runnel -d postgres -tAc 'SELECT 1' >/dev/null 2>&1; then
-    die "cannot sign in to PostgreSQL on 127.0.0.1:$port with the password in .secrets/pg-password; if that file was replaced, remove $PGDATA_DIR to start afresh"
-  fi
+  pg_client "$PG_BIN/psql" -h 127.0.0.1 -p "$port" -U runnel -d postgres -tAc 'SELECT 1' >/dev/null 2>&1
 }
 
 postgres_running() { pg_run "$PG_BIN/pg_ctl" -D "$1" status >/dev/null 2>&1; }
