@@ -1,6 +1,5 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
-import SVGtoPDF from 'svg-to-pdfkit';
 import { buildNetworkScene } from '../chart/network-scene';
 import { svgToString } from '../chart/svg-node';
 import { dayViewModel } from '../network/day-view';
@@ -13,6 +12,7 @@ import { heading, INK, labelGrid, table } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { cautions } from './report-sections';
 import { markEveryPage } from './review-mark';
+import { drawSceneToFit, headEveryPage } from './page-furniture';
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -151,8 +151,7 @@ export async function networkReportPdf({ project, view, solve, solveProblem, siz
     const width = 1000;
     const height = 500;
     const scene = buildNetworkScene({ view, layout: layoutNetwork(view), solve, units: u, width, height });
-    const scale = CONTENT_WIDTH / width;
-    SVGtoPDF(doc, pdfText(svgToString(scene)), PAGE.margin, doc.y, { width: CONTENT_WIDTH, height: height * scale, fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica') });
+    drawSceneToFit(doc, svgToString(scene), { width, height }, { minHeight: 250 });
   }
   doc.addPage();
   if (solve) {
@@ -172,6 +171,7 @@ export async function networkReportPdf({ project, view, solve, solveProblem, siz
   if (day) daySection(doc, view, day, u);
   cautions(doc);
   markEveryPage(doc, stamp);
+  headEveryPage(doc, `${project.name} \u00b7 water network report`);
   doc.end();
   return finished;
 }
