@@ -1,6 +1,6 @@
 'use client';
 
-import { RAM_COMMISSIONING_CHECKLIST, RAM_TROUBLESHOOTING_NOTES } from '@/hydraulics/ram/commissioning-notes';
+import { RAM_COMMISSIONING_CHECKLIST, RAM_TROUBLESHOOTING_NOTES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import type { RamSiteView } from '@/lib/lift/summary';

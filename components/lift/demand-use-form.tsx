@@ -1,8 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import { DEFAULT_DEMAND_FIGURES } from '@/hydraulics/demand/default-figures';
-import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/storage/daily-patterns';
+import { DAILY_USE_PATTERN_PRESETS, DEFAULT_DEMAND_FIGURES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';

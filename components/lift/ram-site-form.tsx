@@ -1,8 +1,7 @@
 'use client';
 
 import { useMemo, useState, type FormEvent } from 'react';
-import { RAM_EFFICIENCY_TABLES } from '@/hydraulics/ram/efficiency-table';
-import { RAM_SIZE_CLASSES } from '@/hydraulics/ram/size-classes';
+import { RAM_EFFICIENCY_TABLES, RAM_SIZE_CLASSES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';

@@ -9,3 +9,7 @@ export { servedOutletsByTank, type ServedOutlet } from './day/served-outlets';
 export { sizeTankStorage, type TankStorageOptions, type TankStorageResult } from './day/tank-storage';
 export type { NetworkDayOptions, NetworkDayResult, NetworkDayStep } from './day/types';
 export { lineFlowSchedule, type LinePieceLink } from './line-schedule';
+// The solver's stages, public for the benchmark that times its linear step against a dense solve
+export { compileNetwork, type CompiledNetwork } from './compile-network';
+export { networkTopology, type NetworkTopology } from './topology';
+export { GradientSolver, type HeadSystem } from './gradient-method';

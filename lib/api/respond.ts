@@ -1,5 +1,5 @@
 import { NextResponse } from 'next/server';
-import { HydraulicsInputError } from '../../hydraulics/errors';
+import { HydraulicsInputError } from '../../hydraulics/index';
 import { DATABASE_RETRY_AFTER_SECONDS, isConcurrentWriteConflict, isDatabaseUnavailable } from '../db-availability';
 import { AppError, type ApiErrorBody } from '../errors';
 import { log } from '../log';

@@ -1,5 +1,5 @@
 import 'server-only';
-import { planRamPump } from '../../hydraulics/ram/plan-ram';
+import { planRamPump } from '../../hydraulics/index';
 import { models } from '../../models';
 import { AppError, notFound } from '../errors';
 import { commissioningOutcome, type CommissioningView } from '../lift/commissioning';

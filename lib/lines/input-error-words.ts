@@ -1,4 +1,4 @@
-import type { HydraulicsInputError } from '../../hydraulics/errors';
+import type { HydraulicsInputError } from '../../hydraulics/index';
 import { formatQuantity, type UnitSystem } from '../units/index';
 
 /**

@@ -1,7 +1,10 @@
 import { z } from 'zod';
-import { DEFAULT_DEMAND_FIGURES } from '../../hydraulics/demand/default-figures';
-import { HOURS_PER_DAY, PATTERN_SUM_TOLERANCE } from '../../hydraulics/demand/hourly-pattern';
-import { DAILY_USE_PATTERN_PRESETS } from '../../hydraulics/storage/daily-patterns';
+import {
+  DAILY_USE_PATTERN_PRESETS,
+  DEFAULT_DEMAND_FIGURES,
+  HOURS_PER_DAY,
+  PATTERN_SUM_TOLERANCE,
+} from '../../hydraulics/index';
 import { safeText } from './common';
 import { finite, hourOfDay, issueAt, nonNegative, positive, wholeNonNegative } from './lift-common';
 

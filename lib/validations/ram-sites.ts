@@ -1,7 +1,5 @@
 import { z } from 'zod';
-import { findPipe } from '../../hydraulics/catalogue/index';
-import { RAM_EFFICIENCY_TABLES, type RamEfficiencyTableId } from '../../hydraulics/ram/efficiency-table';
-import { RAM_SIZE_CLASSES } from '../../hydraulics/ram/size-classes';
+import { findPipe, RAM_EFFICIENCY_TABLES, RAM_SIZE_CLASSES, type RamEfficiencyTableId } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
 import { finite, fraction, isoDate, issueAt, nonNegative, positive } from './lift-common';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HEIGHT_SOURCES } from '../../hydraulics/survey/height-source';
+import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
 
 export const RouteParams = z.strictObject({ routeId: uuid('Route id') });

@@ -1,6 +1,6 @@
 'use client';
 
-import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/survey/height-source';
+import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/index';
 import { formatNumber, fromDisplay, toDisplay } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/lib/units';
