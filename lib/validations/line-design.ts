@@ -10,14 +10,14 @@ import { safeText, uuid } from './common';
 
 const LIMIT_M = 1e6;
 
-function metres(label: string) {
+export function metres(label: string) {
   return z
     .number({ error: `${label} must be a number (metres)` })
     .min(-LIMIT_M, `${label} must be at least ${-LIMIT_M} m`)
     .max(LIMIT_M, `${label} must be at most ${LIMIT_M} m`);
 }
 
-function atLeast(label: string, min: number, max: number, unit: string) {
+export function atLeast(label: string, min: number, max: number, unit: string) {
   return z
     .number({ error: `${label} must be a number (${unit})` })
     .min(min, `${label} must be at least ${min} ${unit}`)
@@ -31,20 +31,22 @@ function positive(label: string, max: number, unit: string) {
     .max(max, `${label} must be at most ${max} ${unit}`);
 }
 
-export const LineStartSchema = z.discriminatedUnion(
-  'kind',
-  [
-    z.strictObject({ kind: z.literal('water-level'), levelM: metres('Start water level') }),
-    z.strictObject({
-      kind: z.literal('pump'),
-      outletHeadM: metres('Pump outlet head'),
-      shutoffHeadM: metres('Pump shut-off head').optional(),
-    }),
-    /** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
-    z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') }),
-  ],
-  { error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")' },
-);
+const WaterLevelStartSchema = z.strictObject({ kind: z.literal('water-level'), levelM: metres('Start water level') });
+const PumpStartSchema = z.strictObject({
+  kind: z.literal('pump'),
+  outletHeadM: metres('Pump outlet head'),
+  shutoffHeadM: metres('Pump shut-off head').optional(),
+});
+/** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
+const RamSiteStartSchema = z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') });
+
+export const LineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema, RamSiteStartSchema], {
+  error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")',
+});
+/** The starts a line given whole in a request can have: no project, so no ram site to read. */
+export const StandaloneLineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema], {
+  error: 'Start must be a water level ("water-level") or a pump outlet ("pump")',
+});
 
 export const LineEndSchema = z.discriminatedUnion(
   'kind',
@@ -60,16 +62,18 @@ export const LineEndSchema = z.discriminatedUnion(
   { error: 'End must be an outlet, a tank inlet or free discharge' },
 );
 
-export const LineFlowSchema = z.discriminatedUnion(
-  'kind',
-  [
-    z.strictObject({ kind: z.literal('design'), flowM3s: atLeast('Design flow', 0, 10, 'm³/s') }),
-    z.strictObject({ kind: z.literal('find') }),
-    /** What the feeding ram delivers (only with a ram-site start). */
-    z.strictObject({ kind: z.literal('pump-delivery') }),
-  ],
-  { error: 'Flow must be a design flow ("design"), "find" or the ram\'s delivery ("pump-delivery")' },
-);
+const DesignFlowSchema = z.strictObject({ kind: z.literal('design'), flowM3s: atLeast('Design flow', 0, 10, 'm³/s') });
+const FindFlowSchema = z.strictObject({ kind: z.literal('find') });
+/** What the feeding ram delivers (only with a ram-site start). */
+const PumpDeliveryFlowSchema = z.strictObject({ kind: z.literal('pump-delivery') });
+
+export const LineFlowSchema = z.discriminatedUnion('kind', [DesignFlowSchema, FindFlowSchema, PumpDeliveryFlowSchema], {
+  error: 'Flow must be a design flow ("design"), "find" or the ram\'s delivery ("pump-delivery")',
+});
+/** The flows of a line given whole in a request: no ram to deliver. */
+export const StandaloneLineFlowSchema = z.discriminatedUnion('kind', [DesignFlowSchema, FindFlowSchema], {
+  error: 'Flow must be a design flow ("design") or "find"',
+});
 
 const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], { error: 'Material must be pvc, pe, steel or custom' });
 
@@ -152,15 +156,27 @@ export const LineWinterSchema = z.strictObject({
   treatment: z.enum(WINTER_TREATMENTS, { error: 'Winter treatment must be buried-below-frost or drained-for-winter' }),
 });
 
-export const LineDesignSchema = z.strictObject({
-  start: LineStartSchema,
+/**
+ * The parts of a design that need no project (ends, pipes, fittings, devices, settings): one
+ * schema for a saved line and for a line given whole to the stateless analysis, so both accept
+ * and refuse the same input with the same words.
+ */
+export const lineDesignParts = {
   end: LineEndSchema,
-  flow: LineFlowSchema,
   stretches: z.array(LineStretchSchema, { error: 'Stretches must be a list' }).min(1, 'A line needs at least one stretch').max(500, 'At most 500 stretches'),
   fittings: z.array(LineFittingSchema, { error: 'Fittings must be a list' }).max(1000, 'At most 1000 fittings').default([]),
   devices: z.array(LineDeviceSchema, { error: 'Devices must be a list' }).max(1000, 'At most 1000 devices').default([]),
   pipes: z.array(CustomPipeSchema, { error: 'Custom pipes must be a list' }).max(100, 'At most 100 custom pipes').default([]),
   settings: LineSettingsSchema.default({}),
+};
+
+const { end, ...restOfDesign } = lineDesignParts;
+
+export const LineDesignSchema = z.strictObject({
+  start: LineStartSchema,
+  end,
+  flow: LineFlowSchema,
+  ...restOfDesign,
   winter: LineWinterSchema.optional(),
 }).refine((d) => d.flow.kind !== 'pump-delivery' || d.start.kind === 'ram-site', {
   message: 'The flow can come from the ram only when the line starts at a ram pump outlet',
