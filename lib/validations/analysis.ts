@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { atLeast, lineDesignParts, LineSettingsSchema, metres, StandaloneLineFlowSchema, StandaloneLineStartSchema } from './line-design';
+import { lineDesignParts, LineSettingsSchema, StandaloneLineFlowSchema, StandaloneLineStartSchema } from './line-design';
+import { elevation, metres, nonNegative } from './numbers';
 
 // A line given whole to the stateless analysis: the saved line's design schema (lib/validations/line-design.ts)
 // with the stations a saved line reads from its route, and without the project's parts (ram sites).
@@ -20,8 +21,8 @@ export const AnalysisQuerySchema = z.strictObject({
 /** One station as a route gives it to a saved line (the same height range as a route point). */
 const StationSchema = z.strictObject({
   chainageM: metres('Chainage'),
-  groundElevationM: atLeast('Ground elevation', -500, 9000, 'm'),
-  coverM: atLeast('Cover', 0, 10, 'm').optional(),
+  groundElevationM: elevation('Ground elevation'),
+  coverM: nonNegative('Cover', 10, 'm').optional(),
 });
 
 export const LineInputSchema = z.strictObject({
