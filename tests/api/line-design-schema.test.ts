@@ -57,6 +57,24 @@ describe('one line-design schema for saved lines and the stateless analysis', ()
     expect(wholeWords).toEqual(savedWords);
   });
 
+  // The core's own refusals (stretches that leave a gap, a pipe nobody has), worded by the one mapping.
+  const coreRefusals: [string, (line: 'saved' | 'whole') => Record<string, unknown>, string][] = [
+    ['stretches that leave a gap', (line) => ({ stretches: [{ fromM: 0, toM: 150, pipe: 'pe100-iso4427-sdr11-63mm' }, { fromM: 160, toM: line === 'saved' ? 400 : 1000, pipe: 'pe100-iso4427-sdr11-50mm' }] }), 'stretches.fromM.1'],
+    ['a pipe id nobody has', (line) => ({ stretches: [{ fromM: 0, toM: line === 'saved' ? 400 : 1000, pipe: 'copper-99mm' }] }), 'stretches.pipe.0'],
+  ];
+
+  it.each(coreRefusals)('refuses %s in the words of the line page on both endpoints', async (_what, part, field) => {
+    const saved = await save({ ...savedDesign, ...part('saved') });
+    const whole = await analyseWhole({ ...referenceLine(), ...part('whole') });
+    expect(saved.status).toBe(400);
+    expect(whole.status).toBe(400);
+    const savedWords = saved.json.error.fields?.[`design.${field}`];
+    expect(savedWords, JSON.stringify(saved.json.error.fields)).toBeDefined();
+    expect(whole.json.error.fields?.[field]).toEqual(savedWords);
+    expect(whole.json.error.message).toBe(saved.json.error.message);
+    expect(savedWords[0]).toMatch(/^Pipe stretch (1|2): /);
+  });
+
   it('refuses a ram-site start or a ram delivery on the stateless endpoint, saying which starts it takes', async () => {
     const ram = await analyseWhole({ ...referenceLine(), start: { kind: 'ram-site', ramSiteId: '00000000-0000-4000-8000-000000000000' } });
     expect(ram.status).toBe(400);
