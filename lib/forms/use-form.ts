@@ -63,6 +63,8 @@ export function useForm<S extends z.ZodType = z.ZodType, R = unknown>(bound?: Fo
     check,
     fail,
     submit,
+    /** Marks fields by a rule of the form's own (a name already taken), beside the fields like the schema's. */
+    mark: (marked: FieldErrors) => setFields(marked),
     setMessage: (text: string | null) => setNote(text === null ? null : { text, tone: 'error' }),
     clearNote: () => setNote(null),
   };
