@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { HydraulicsInputError } from '../../hydraulics/errors';
 import {
   assertArray,
   assertFiniteNumber,
@@ -13,17 +12,10 @@ import {
   assertPositive,
   assertPositiveInteger,
 } from '../../hydraulics/input-guards';
+import { inputErrorOf } from './profile/fixtures';
 
 /** The core's one set of input guards: each refusal names the field and row, in one wording. */
-const refusal = (check: () => void): HydraulicsInputError => {
-  try {
-    check();
-  } catch (error) {
-    if (error instanceof HydraulicsInputError) return error;
-    throw error;
-  }
-  throw new Error('the guard let the value through');
-};
+const refusal = inputErrorOf;
 
 describe('the core input guards', () => {
   it('refuse what is not a finite number, naming field and row', () => {
