@@ -40,3 +40,8 @@ export function lineDesignRefusal(error: HydraulicsInputError, system: UnitSyste
   const words = inputErrorText(error, system);
   return new AppError('bad_request', `The design does not fit the line: ${words}`, { [field]: [words] });
 }
+
+/** A lift computation that failed on its input (a failed `Outcome` of lib/lift), refused at the field it names. */
+export function failedOutcomeRefusal(failure: { error: string; field?: string }): AppError {
+  return new AppError('bad_request', failure.error, { [failure.field ?? '_']: [failure.error] });
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { HydraulicsInputError } from '../../../hydraulics/errors';
-import { domainRefusal, lineDesignRefusal } from '../../../lib/api/domain-errors';
+import { domainRefusal, failedOutcomeRefusal, lineDesignRefusal } from '../../../lib/api/domain-errors';
 import { appErrorOf } from '../../../lib/api/respond';
 import { AppError } from '../../../lib/errors';
 import { RouteEditError } from '../../../lib/routes/errors';
@@ -44,5 +44,12 @@ describe('the one mapping from domain refusals to HTTP answers', () => {
     expect(saved.fields).toEqual({ 'design.devices.chainageM.0': ['Device 1: chainage: ch. 900.0 m lies outside the line (ch. 0.0 m to 400.0 m)'] });
     expect(whole.fields).toEqual({ 'devices.chainageM.0': saved.fields!['design.devices.chainageM.0'] });
     expect(whole.message).toBe(saved.message);
+  });
+
+  it('refuses a failed lift computation at the field it names, or at the form when it names none', () => {
+    const answer = failedOutcomeRefusal({ error: 'Measure the waste flow.', field: 'driveMeasure' });
+    expect(answer.status).toBe(400);
+    expect(answer.toBody().error).toEqual({ code: 'bad_request', message: 'Measure the waste flow.', fields: { driveMeasure: ['Measure the waste flow.'] } });
+    expect(failedOutcomeRefusal({ error: 'No plan.' }).toBody().error.fields).toEqual({ _: ['No plan.'] });
   });
 });
