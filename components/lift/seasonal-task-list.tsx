@@ -9,7 +9,7 @@ import { isOverdue, todayIn } from '@/lib/lift/task-due';
 import { useAddSeasonalTask, useDeleteSeasonalTask, useGenerateSeasonalTasks, useUpdateSeasonalTask } from '@/lib/queries/lift';
 import { GenerateSeasonalTasksSchema, SeasonalTaskSchema } from '@/lib/validations/seasonal-tasks';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberFrom } from './typed-number';
 
 const KIND_LABEL: Record<SeasonalTaskRecord['kind'], string> = {
@@ -65,7 +65,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
 function GenerateTasksForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ year: String(new Date().getFullYear()), hemisphere: 'north', firstFrost: '10-15', lastFrost: '04-20', replace: false });
   const generate = useGenerateSeasonalTasks(projectId);
-  const form = useSaveForm(GenerateSeasonalTasksSchema, (input) => generate.mutateAsync(input), 'Tasks added for the year.');
+  const form = useForm({ schema: GenerateSeasonalTasksSchema, save: (input) => generate.mutateAsync(input), savedText: 'Tasks added for the year.' });
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     await form.submit({ year: numberFrom(state.year), hemisphere: state.hemisphere, firstFrost: state.firstFrost, lastFrost: state.lastFrost || null, replace: state.replace });
@@ -94,7 +94,7 @@ function GenerateTasksForm({ projectId }: { projectId: string }) {
 function AddTaskForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ title: '', dueOn: '', kind: 'other' });
   const add = useAddSeasonalTask(projectId);
-  const form = useSaveForm(SeasonalTaskSchema, (input) => add.mutateAsync(input), 'Task added.');
+  const form = useForm({ schema: SeasonalTaskSchema, save: (input) => add.mutateAsync(input), savedText: 'Task added.' });
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (await form.submit({ ...state })) setState({ title: '', dueOn: '', kind: 'other' });

@@ -1,9 +1,8 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import type { FieldErrors } from '@/lib/errors';
 import { fromDisplay, type DisplayUnits } from '@/lib/units';
-import { fieldErrorsOf } from '@/lib/validations/common';
+import { useForm } from '@/lib/forms/use-form';
 import { CustomPipeSchema, type LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
 
@@ -13,7 +12,8 @@ const INPUT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-
 
 /** A pipe not in the catalogue (old stock, another standard), checked by the catalogue's own guard. */
 export function CustomPipeForm({ design, units, change }: { design: LineDesign; units: DisplayUnits; change: Change }) {
-  const [fields, setFields] = useState<FieldErrors>({});
+  const form = useForm();
+  const fields = form.fields;
   const [message, setMessage] = useState<string | null>(null);
 
   function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -39,11 +39,10 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
       waveSpeedMs: safe(num('waveSpeed'), (v) => fromDisplay('velocity', v, units.system)),
       source: String(f.get('source') ?? '').trim(),
     };
-    const parsed = CustomPipeSchema.safeParse(candidate);
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    if (design.pipes.some((p) => p.id === id)) return setFields({ label: ['A custom pipe with this name exists already'] });
-    setFields({});
-    const problem = change({ ...design, pipes: [...design.pipes, parsed.data] }, `add the custom pipe ${label}`);
+    const pipe = form.check(CustomPipeSchema, candidate);
+    if (pipe === null) return;
+    if (design.pipes.some((p) => p.id === id)) return form.mark({ label: ['A custom pipe with this name exists already'] });
+    const problem = change({ ...design, pipes: [...design.pipes, pipe] }, `add the custom pipe ${label}`);
     setMessage(problem ?? `Added. Pick “Custom pipes of this line” in a stretch's pipe to use it.`);
     if (!problem) event.currentTarget.reset();
   }

@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import { useQuery } from '@tanstack/react-query';
 import { lineQuery, lineSiteContextQuery, lineStationsQuery } from '@/lib/queries/lines';
 import { Skeleton } from '@/components/ui/panel';
@@ -23,11 +24,7 @@ export function LineEditor({ lineId, projectName, unitSystem, canEdit, canCommen
   const stations = useQuery(lineStationsQuery(lineId));
   const context = useQuery(lineSiteContextQuery(lineId));
   if (line.isError || stations.isError || context.isError) {
-    return (
-      <p role="alert" className="text-sm text-clay-700">
-        The line could not be loaded. <button className="underline" onClick={() => { void line.refetch(); void stations.refetch(); void context.refetch(); }}>Try again</button>
-      </p>
-    );
+    return <LoadError what="The line" onRetry={() => { void line.refetch(); void stations.refetch(); void context.refetch(); }} />;
   }
   if (!line.data || !stations.data || !context.data) return <LineEditorSkeleton />;
   if (stations.data.length < 2) {

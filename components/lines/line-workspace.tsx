@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
@@ -226,7 +227,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       <Panel title={`Comments on this line and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
         <span id="line-comments" className="block scroll-mt-4" />
         {comments.isError ? (
-          <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void comments.refetch()}>Try again</button></p>
+          <LoadError what="The comments" onRetry={() => void comments.refetch()} />
         ) : (
           <CommentsPanel
             projectId={line.projectId}

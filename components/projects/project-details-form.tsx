@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { ProjectSummary } from '@/lib/data/projects';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useUpdateProject } from '@/lib/queries/projects';
 import { UpdateProjectSchema } from '@/lib/validations/projects';
 import { displayUnits, formatPlainNumber, fromDisplay, toDisplay } from '@/lib/units';
@@ -23,7 +23,7 @@ function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSumm
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
   const router = useRouter();
   const update = useUpdateProject(project.id);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
   const [saved, setSaved] = useState(false);
   const units = displayUnits(project.unitSystem);
   const frostShown = project.frostDepthM === null ? '' : formatPlainNumber(toDisplay('length', project.frostDepthM, units.system), 2);

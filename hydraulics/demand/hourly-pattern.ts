@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../errors';
-import { assertArray, assertFiniteNumber, assertNonNegativeInteger, assertPositive } from './guards';
+import { assertArray, assertFiniteNumber, assertNonNegativeInteger, assertPositive } from '../input-guards';
 
 /** Hours in the day a pattern covers: index h is the hour from h:00 to h+1:00. */
 export const HOURS_PER_DAY = 24;

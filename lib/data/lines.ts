@@ -14,7 +14,7 @@ import type { LineDesign } from '../validations/line-design';
 import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
 import { assertRamSiteInProject, lineSiteContext } from './line-context';
 import { routeColumns, routeOwner } from './line-routes';
-import { inputErrorText } from '../lines/input-error-words';
+import { lineDesignRefusal } from '../api/domain-errors';
 
 /** A line as the API and pages see it (SI units; the design as the core reads it). */
 export interface LineRecord {
@@ -149,9 +149,7 @@ function assertDesignFits(design: LineDesign, stations: readonly LineRouteStatio
     assertLineInput(lineInputOf(design, stations, context));
   } catch (error) {
     if (!(error instanceof HydraulicsInputError)) throw error;
-    const field = `design.${error.field}${error.index === undefined ? '' : `.${error.index}`}`;
-    const words = inputErrorText(error, context.unitSystem ?? 'metric');
-    throw new AppError('bad_request', `The design does not fit the line: ${words}`, { [field]: [words] });
+    throw lineDesignRefusal(error, context.unitSystem ?? 'metric', 'design.');
   }
 }
 

@@ -12,7 +12,6 @@ import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors'
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
 import type { SurveyImportOptions } from '../validations/survey-import';
 import { runInWorker } from '../workers/pool';
-import { asAppError } from './route-errors';
 import { insertRoutePoints } from './route-points-store';
 import { toRouteSummary } from './routes';
 
@@ -68,8 +67,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
   // Sniffing and parsing run on the worker pool: a large or hostile file never holds the request thread.
   const survey = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options }).catch((error: unknown) => {
     // The sniff's refusals already name the file; the parsers' do not.
-    const namesFile = error instanceof SurveyImportError && SNIFF_CODES.has(error.code);
-    throw asAppError(error, namesFile ? undefined : upload.fileName);
+    throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
   });
   const records = recordsOfSurvey(survey);
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';

@@ -9,7 +9,7 @@ import { formatQuantity } from '@/lib/units';
 import { useRoutePhotos } from '@/lib/queries/photos';
 import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
-import { thinProfile } from '@/lib/routes/profile-series';
+import { routeProfileSeries } from '@/lib/routes/profile-series';
 import type { RouteDetail } from '@/lib/routes/types';
 import { displayUnits, type UnitSystem } from '@/lib/units';
 import type { ProfilePin } from '@/lib/chart/profile-types';
@@ -49,8 +49,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
   const sketching = editable && detail.points.length === 0;
   const flagged = new Set(detail.proposals.map((p) => p.index));
   const placed = draft.points.filter((p) => p.chainageM !== null);
-  const raw = thinProfile(placed.filter((p) => p.rawElevationM !== null).map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })));
-  const cleaned = thinProfile(placed.filter((p) => !p.excluded).map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })));
+  const { raw, cleaned } = routeProfileSeries(draft.points);
   const bySeq = new Map(detail.points.map((p) => [p.seq, p]));
   const markers = detail.proposals.flatMap((c) => {
     const p = bySeq.get(c.index);

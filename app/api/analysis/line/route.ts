@@ -1,3 +1,5 @@
+import { HydraulicsInputError } from '@/hydraulics/index';
+import { lineDesignRefusal } from '@/lib/api/domain-errors';
 import { userRoute } from '@/lib/api/route';
 import { AppError } from '@/lib/errors';
 import { enforce } from '@/lib/rate-limits';
@@ -19,6 +21,9 @@ export const POST = userRoute({ body: LineInputSchema, maxBodyBytes: MAX_STATELE
     throw new AppError('bad_request', message, { stations: [message] });
   }
   await enforce(ANALYSIS_LIMIT, `user:${user.id}`, 'Too many analyses in a short time; wait a little and try again');
-  const analysis = await runInWorker('line.analyse', { line: body, profilePoints: query.profilePoints });
+  const analysis = await runInWorker('line.analyse', { line: body, profilePoints: query.profilePoints }).catch((error: unknown) => {
+    // Refused in the same words as a saved line's design (SI: the body is in SI).
+    throw error instanceof HydraulicsInputError ? lineDesignRefusal(error, 'metric', '') : error;
+  });
   return { analysis: analysisToJson(analysis) };
 });
