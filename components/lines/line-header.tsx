@@ -8,7 +8,10 @@ import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
 import { workingCopyStamp } from '@/lib/review/stamp';
 import { formatQuantity, type DisplayUnits } from '@/lib/units';
+import { useRouter } from 'next/navigation';
 import { Button } from '@/components/ui/button';
+import { FormMessage } from '@/components/ui/form-message';
+import { useLineActions } from './line-actions';
 import type { useLineDraft } from './use-line-draft';
 
 const SAVE_WORDS = {
@@ -16,7 +19,8 @@ const SAVE_WORDS = {
   pending: 'Changes not saved yet…',
   saving: 'Saving…',
   failed: 'Not saved',
-  conflict: 'Not saved: someone else changed this line',
+  conflict: 'Not saved: this line was saved elsewhere since this page opened it',
+  refused: 'Not saved',
 } as const;
 
 /** Title, revision, save state, undo and the exports. */
@@ -30,6 +34,14 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
 }) {
   const c = analysis?.points.chainageM;
   const saved = draft.saveState === 'saved';
+  const router = useRouter();
+  const actions = useLineActions(line.projectId);
+  const toRemove = { id: line.id, name: line.name, stretchCount: draft.design.stretches.length, deviceCount: draft.design.devices.length };
+
+  async function duplicate() {
+    const made = await actions.copy(line);
+    if (made) router.push(`/projects/${line.projectId}/lines/${made.id}`);
+  }
 
   function exportSvg() {
     if (!analysis) return;
@@ -51,13 +63,24 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
         <div className="flex flex-wrap items-center gap-2">
           {canEdit && (
             <>
-              <span role="status" data-testid="save-state" data-state={draft.saveState} className={`text-xs ${draft.saveState === 'failed' || draft.saveState === 'conflict' ? 'font-medium text-clay-700' : 'text-creek-700'}`}>
+              <span role="status" data-testid="save-state" data-state={draft.saveState} className={`text-xs ${saved || draft.saveState === 'pending' || draft.saveState === 'saving' ? 'text-creek-700' : 'font-medium text-clay-700'}`}>
                 {SAVE_WORDS[draft.saveState]}{draft.saveError && !saved ? `: ${draft.saveError}` : ''}
               </span>
+              {draft.saveState === 'conflict' && (
+                <Button tone="primary" className="py-1 text-xs" onClick={() => window.location.reload()} title="Your change on this page is not kept; make it again on the saved line">
+                  Reload the saved line
+                </Button>
+              )}
               <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canUndo} onClick={draft.undo} title={draft.undoLabel ? `Undo: ${draft.undoLabel}` : undefined}>
                 Undo{draft.canUndo && draft.undoLabel ? `: ${draft.undoLabel}` : ''}
               </Button>
               <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canRedo} onClick={draft.redo}>Redo</Button>
+            </>
+          )}
+          {canEdit && (
+            <>
+              <Button tone="quiet" className="py-1 text-xs" onClick={() => void duplicate()} disabled={actions.copying || !line.routeId}>Duplicate</Button>
+              <Button tone="quiet" className="py-1 text-xs text-clay-700" onClick={() => actions.askDelete(toRemove, () => router.push(`/projects/${line.projectId}/lines`))}>Delete</Button>
             </>
           )}
           <Button tone="quiet" className="py-1 text-xs" onClick={exportSvg} disabled={!analysis}>Profile as SVG</Button>
@@ -70,6 +93,8 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
           )}
         </div>
       </div>
+      {actions.notice?.tone === 'error' && <FormMessage message={actions.notice.text} />}
+      {actions.dialog}
     </header>
   );
 }
