@@ -24,16 +24,20 @@ const SAVE_WORDS = {
 } as const;
 
 /** Title, revision, save state, undo and the exports. */
-export function LineHeader({ line, projectName, units, draft, analysis, canEdit }: {
+export function LineHeader({ line, projectName, units, draft, analysis, canEdit, notTaken = [] }: {
   line: LineRecord;
   projectName: string;
   units: DisplayUnits;
   draft: ReturnType<typeof useLineDraft>;
   analysis: LineAnalysis | null;
   canEdit: boolean;
+  /** Boxes holding a value the editor refused or still waits for: not saved, whatever the save state. */
+  notTaken?: readonly string[];
 }) {
   const c = analysis?.points.chainageM;
-  const saved = draft.saveState === 'saved';
+  // Saved only when the last save went through and no box holds a value that was not taken.
+  const saveState = draft.saveState === 'saved' && notTaken.length > 0 ? 'refused' : draft.saveState;
+  const saved = saveState === 'saved';
   const router = useRouter();
   const actions = useLineActions(line.projectId);
   const toRemove = { id: line.id, name: line.name, stretchCount: draft.design.stretches.length, deviceCount: draft.design.devices.length };
@@ -63,8 +67,9 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
         <div className="flex flex-wrap items-center gap-2">
           {canEdit && (
             <>
-              <span role="status" data-testid="save-state" data-state={draft.saveState} className={`text-xs ${saved || draft.saveState === 'pending' || draft.saveState === 'saving' ? 'text-creek-700' : 'font-medium text-clay-700'}`}>
-                {SAVE_WORDS[draft.saveState]}{draft.saveError && !saved ? `: ${draft.saveError}` : ''}
+              <span role="status" data-testid="save-state" data-state={saveState} className={`text-xs ${saved || saveState === 'pending' || saveState === 'saving' ? 'text-creek-700' : 'font-medium text-clay-700'}`}>
+                {SAVE_WORDS[saveState]}
+                {saveState === 'refused' ? `: ${notTaken.join(', ')} ${notTaken.length === 1 ? 'holds a value' : 'hold values'} not taken; the line keeps its saved value` : draft.saveError && !saved ? `: ${draft.saveError}` : ''}
               </span>
               {draft.saveState === 'conflict' && (
                 <Button tone="primary" className="py-1 text-xs" onClick={() => window.location.reload()} title="Your change on this page is not kept; make it again on the saved line">
@@ -84,7 +89,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit 
             </>
           )}
           <Button tone="quiet" className="py-1 text-xs" onClick={exportSvg} disabled={!analysis}>Profile as SVG</Button>
-          {saved ? (
+          {draft.saveState === 'saved' ? (
             <a href={`/api/lines/${line.id}/report`} download={reportFileName(line.name, null, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
               PDF report
             </a>
