@@ -4,6 +4,8 @@ import { useQuery } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
+import { projectLinesQuery } from '@/lib/queries/lines';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
@@ -31,6 +33,8 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
   const trim = useTrimRoute(projectId, id);
   const join = useJoinRoutes(projectId, id);
   const remove = useDeleteRoute(projectId, id);
+  const linesOnRoute = (useQuery(projectLinesQuery(projectId)).data ?? []).filter((line) => line.routeId === id);
+  const confirm = useConfirm();
   const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
   const u = unitOf('length', units);
   const lengthShown = toDisplay('length', detail.route.lengthM, units);
@@ -95,7 +99,30 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
         </form>
       </div>
       <div className="mt-4 flex flex-wrap items-center gap-3 border-t border-creek-100 pt-3">
-        <Button tone="danger" disabled={busy} onClick={() => { if (window.confirm(`Delete the route “${detail.route.name}” and its points?`)) void run(async () => { await remove.mutateAsync(undefined); router.push(`/projects/${projectId}/routes`); }, 'Deleted.'); }}>Delete route</Button>
+        <Button tone="danger" disabled={busy} onClick={() => confirm.ask({
+          title: `Delete the route “${detail.route.name}”?`,
+          body: (
+            <>
+              <p>The route goes with its {detail.points.length} {detail.points.length === 1 ? 'point' : 'points'}, their clean-up and its place on the profile of any photo taken along it (the photos stay).</p>
+              {linesOnRoute.length > 0 ? (
+                <div data-testid="route-deletion-lines">
+                  <p className="font-medium text-clay-700">{linesOnRoute.length === 1 ? 'One line follows' : `${linesOnRoute.length} lines follow`} this route:</p>
+                  <ul className="list-disc pl-5">{linesOnRoute.map((line) => <li key={line.id}>{line.name}</li>)}</ul>
+                  <p>{linesOnRoute.length === 1 ? 'It stays' : 'They stay'} in the project with {linesOnRoute.length === 1 ? 'its design' : 'their designs'}, but without a route {linesOnRoute.length === 1 ? 'it' : 'they'} cannot be drawn, analysed or reported, and cannot be duplicated. Keep the route if you still need {linesOnRoute.length === 1 ? 'that line' : 'those lines'}.</p>
+                </div>
+              ) : (
+                <p>No line follows this route.</p>
+              )}
+              <p>A ram site whose delivery pipe follows this route loses that length; type it on the Lift &amp; storage page. This cannot be undone.</p>
+            </>
+          ),
+          confirmLabel: linesOnRoute.length > 0 ? 'Delete the route anyway' : 'Delete route',
+          onConfirm: async () => {
+            await remove.mutateAsync(undefined);
+            router.push(`/projects/${projectId}/routes`);
+          },
+        })}>Delete route</Button>
+        {confirm.dialog}
         <FormMessage message={message?.text} tone={message?.tone} />
       </div>
     </Panel>
