@@ -38,7 +38,7 @@ export function DeviceTable({ design, units, change, canEdit, tankLevels }: {
         </div>
       )}
       {design.devices.length === 0 ? (
-        <p className="text-sm text-creek-700">No devices yet.</p>
+        <p className="text-sm text-creek-700">No devices yet. Place air-release valves, washouts and break-pressure tanks with “Place by clicking” on the profile, or take the one-click fixes the warnings offer.</p>
       ) : (
         <table className="w-full text-left text-xs" data-testid="device-table">
           <thead className="bg-creek-50 text-creek-800">
