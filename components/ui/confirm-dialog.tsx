@@ -70,7 +70,7 @@ function ConfirmDialog({ request, onClose }: { request: ConfirmRequest; onClose:
         event.preventDefault();
         if (!busy) onClose();
       }}
-      className="w-[min(32rem,calc(100vw-2rem))] rounded-lg border border-creek-200 bg-white p-0 text-creek-900 shadow-xl backdrop:bg-creek-950/40"
+      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-lg border border-creek-200 bg-white p-0 text-creek-900 shadow-xl backdrop:bg-creek-950/40"
     >
       <div className="space-y-3 p-5">
         <h2 id="confirm-dialog-title" className="text-lg font-semibold">{request.title}</h2>

@@ -33,7 +33,6 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
   const trim = useTrimRoute(projectId, id);
   const join = useJoinRoutes(projectId, id);
   const remove = useDeleteRoute(projectId, id);
-  const linesOnRoute = (useQuery(projectLinesQuery(projectId)).data ?? []).filter((line) => line.routeId === id);
   const confirm = useConfirm();
   const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
   const u = unitOf('length', units);
@@ -103,20 +102,12 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
           title: `Delete the route “${detail.route.name}”?`,
           body: (
             <>
-              <p>The route goes with its {detail.points.length} {detail.points.length === 1 ? 'point' : 'points'}, their clean-up and its place on the profile of any photo taken along it (the photos stay).</p>
-              {linesOnRoute.length > 0 ? (
-                <div data-testid="route-deletion-lines">
-                  <p className="font-medium text-clay-700">{linesOnRoute.length === 1 ? 'One line follows' : `${linesOnRoute.length} lines follow`} this route:</p>
-                  <ul className="list-disc pl-5">{linesOnRoute.map((line) => <li key={line.id}>{line.name}</li>)}</ul>
-                  <p>{linesOnRoute.length === 1 ? 'It stays' : 'They stay'} in the project with {linesOnRoute.length === 1 ? 'its design' : 'their designs'}, but without a route {linesOnRoute.length === 1 ? 'it' : 'they'} cannot be drawn, analysed or reported, and cannot be duplicated. Keep the route if you still need {linesOnRoute.length === 1 ? 'that line' : 'those lines'}.</p>
-                </div>
-              ) : (
-                <p>No line follows this route.</p>
-              )}
+              <p>The route goes with its {detail.points.length} {detail.points.length === 1 ? 'point' : 'points'} and their clean-up. Photos placed along it stay in the project, no longer placed on a route.</p>
+              <LinesOnRoute projectId={projectId} routeId={id} />
               <p>A ram site whose delivery pipe follows this route loses that length; type it on the Lift &amp; storage page. This cannot be undone.</p>
             </>
           ),
-          confirmLabel: linesOnRoute.length > 0 ? 'Delete the route anyway' : 'Delete route',
+          confirmLabel: 'Delete route',
           onConfirm: async () => {
             await remove.mutateAsync(undefined);
             router.push(`/projects/${projectId}/routes`);
@@ -126,5 +117,25 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
         <FormMessage message={message?.text} tone={message?.tone} />
       </div>
     </Panel>
+  );
+}
+
+/** The lines that follow the route, read when the dialog opens, and what becomes of them. */
+function LinesOnRoute({ projectId, routeId }: { projectId: string; routeId: string }) {
+  const query = useQuery(projectLinesQuery(projectId));
+  if (query.isError) return <p className="font-medium text-clay-700">Which lines follow this route could not be read; lines on it would stay without a route.</p>;
+  if (!query.data) return <p>Looking for lines that follow this route…</p>;
+  const lines = query.data.filter((line) => line.routeId === routeId);
+  if (lines.length === 0) return <p data-testid="route-deletion-lines">No line follows this route.</p>;
+  const one = lines.length === 1;
+  return (
+    <div data-testid="route-deletion-lines">
+      <p className="font-medium text-clay-700">{one ? 'One line follows' : `${lines.length} lines follow`} this route:</p>
+      <ul className="list-disc pl-5">{lines.map((line) => <li key={line.id}>{line.name}</li>)}</ul>
+      <p>
+        {one ? 'It stays' : 'They stay'} in the project with {one ? 'its design' : 'their designs'}, but without a route {one ? 'it' : 'they'} cannot be
+        drawn, analysed, reported or duplicated. Keep the route if you still need {one ? 'that line' : 'those lines'}.
+      </p>
+    </div>
   );
 }
