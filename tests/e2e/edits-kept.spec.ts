@@ -172,7 +172,7 @@ test('deleting a route names its lines and what happens to them; lift deletes as
   const lines = dialog.getByTestId('route-deletion-lines');
   await expect(lines).toContainText('lines follow this route');
   await expect(lines.getByRole('listitem').filter({ hasText: 'Spring box to house, PN 16 option' })).toHaveCount(1);
-  await expect(lines).toContainText('cannot be drawn, analysed or reported');
+  await expect(lines).toContainText('cannot be drawn, analysed, reported or duplicated');
   await page.screenshot({ path: `${shots}/delete-route-dialog.png` });
   await dialog.getByRole('button', { name: 'Cancel' }).click();
   await expect(remove).toBeFocused();
