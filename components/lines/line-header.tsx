@@ -71,11 +71,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
                 {SAVE_WORDS[saveState]}
                 {saveState === 'refused' ? `: ${notTaken.join(', ')} ${notTaken.length === 1 ? 'holds a value' : 'hold values'} not taken; the line keeps its saved value` : draft.saveError && !saved ? `: ${draft.saveError}` : ''}
               </span>
-              {draft.saveState === 'conflict' && (
-                <Button tone="primary" className="py-1 text-xs" onClick={() => window.location.reload()} title="Your change on this page is not kept; make it again on the saved line">
-                  Reload the saved line
-                </Button>
-              )}
+
               <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canUndo} onClick={draft.undo} title={draft.undoLabel ? `Undo: ${draft.undoLabel}` : undefined}>
                 Undo{draft.canUndo && draft.undoLabel ? `: ${draft.undoLabel}` : ''}
               </Button>
@@ -99,6 +95,14 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
         </div>
       </div>
       {actions.notice?.tone === 'error' && <FormMessage message={actions.notice.text} />}
+      {canEdit && draft.saveState === 'conflict' && (
+        // Shown where the person is working, not only in the header they may have scrolled away from.
+        <div role="alert" data-testid="save-conflict" className="fixed inset-x-3 bottom-3 z-40 mx-auto flex max-w-3xl flex-wrap items-center gap-3 rounded-lg border border-clay-100 bg-white px-4 py-3 text-sm text-clay-700 shadow-lg">
+          <span className="min-w-0 flex-1">Not saved. {draft.saveError}</span>
+          <Button tone="primary" className="py-1 text-xs" onClick={() => window.location.reload()}>Reload the saved line</Button>
+          <span className="basis-full text-xs text-creek-700">Your last change on this page is not kept: make it again on the saved line.</span>
+        </div>
+      )}
       {actions.dialog}
     </header>
   );

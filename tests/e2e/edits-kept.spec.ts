@@ -133,6 +133,10 @@ test('a save conflict with one\'s own other tab says so and offers a reload', as
     await expect(state).toHaveAttribute('data-state', 'conflict');
     await expect(state).toContainText('You saved revision 2 of this line in another tab or window');
     await expect(state).not.toContainText('someone else');
+    // Said where the person is working too, not only in the header above.
+    const bar = other.getByTestId('save-conflict');
+    await expect(bar).toBeInViewport();
+    await expect(bar).toContainText('You saved revision 2');
     await other.screenshot({ path: `${shots}/own-tab-conflict.png` });
     await other.getByRole('button', { name: 'Reload the saved line' }).click();
     await expect(flowIn(other)).toHaveValue(/^0[.,]7/);
