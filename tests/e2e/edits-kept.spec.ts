@@ -162,6 +162,13 @@ test('unsaved route-table edits survive a visit to another section', async ({ pa
   await expect(page.getByText(/^Unsaved changes \(kept from before you left this page\)$/)).toBeVisible();
   await expect(page.getByLabel('Elevation of point 2', { exact: true })).toHaveValue(/^123[.,]45$/);
 
+  // Removing a row from the keyboard keeps focus in place: on the delete button of the row that moved up.
+  const count = await page.getByRole('button', { name: /^Delete point \d+$/ }).count();
+  await page.getByRole('button', { name: 'Delete point 3', exact: true }).focus();
+  await page.keyboard.press('Enter');
+  await expect(page.getByRole('button', { name: /^Delete point \d+$/ })).toHaveCount(count - 1);
+  await expect(page.getByRole('button', { name: 'Delete point 3', exact: true })).toBeFocused();
+
   // Discarded, they are gone for good (nothing was saved).
   await page.getByRole('button', { name: 'Discard' }).click();
   await expect(page.getByLabel('Elevation of point 2', { exact: true })).toHaveValue(before);
