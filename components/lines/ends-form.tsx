@@ -44,7 +44,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   // so no made-up figure is ever saved.
   const [choosingDesignFlow, setChoosingDesignFlow] = useState(false);
   const typingDesignFlow = choosingDesignFlow && flow.kind !== 'design';
-  useReportUnsaved('design-flow-choice', typingDesignFlow ? 'Design flow (type it)' : null);
+  useReportUnsaved('design-flow-choice', typingDesignFlow ? 'Design flow, still to be typed' : null);
   const pickFlow = (next: LineDesign['flow'], label: string) => {
     setChoosingDesignFlow(false);
     return next.kind === flow.kind ? null : setFlow(next, label);

@@ -69,7 +69,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
             <>
               <span role="status" data-testid="save-state" data-state={saveState} className={`text-xs ${saved || saveState === 'pending' || saveState === 'saving' ? 'text-creek-700' : 'font-medium text-clay-700'}`}>
                 {SAVE_WORDS[saveState]}
-                {saveState === 'refused' ? `: ${notTaken.join(', ')} ${notTaken.length === 1 ? 'holds a value' : 'hold values'} not taken; the line keeps its saved value` : draft.saveError && !saved ? `: ${draft.saveError}` : ''}
+                {saveState === 'refused' ? `: ${notTaken.join('; ')} — the line keeps its saved values until then` : draft.saveError && !saved ? `: ${draft.saveError}` : ''}
               </span>
 
               <Button tone="quiet" className="py-1 text-xs" disabled={!draft.canUndo} onClick={draft.undo} title={draft.undoLabel ? `Undo: ${draft.undoLabel}` : undefined}>
