@@ -163,10 +163,10 @@ test('unsaved route-table edits survive a visit to another section', async ({ pa
   await expect(page.getByLabel('Elevation of point 2', { exact: true })).toHaveValue(/^123[.,]45$/);
 
   // Removing a row from the keyboard keeps focus in place: on the delete button of the row that moved up.
-  const fourth = await page.getByLabel('Chainage of point 4', { exact: true }).inputValue();
+  const fourth = await page.getByLabel('Elevation of point 4', { exact: true }).inputValue();
   await page.getByRole('button', { name: 'Delete point 3', exact: true }).focus();
   await page.keyboard.press('Enter');
-  await expect(page.getByLabel('Chainage of point 3', { exact: true })).toHaveValue(fourth);
+  await expect(page.getByLabel('Elevation of point 3', { exact: true })).toHaveValue(fourth);
   await expect(page.getByRole('button', { name: 'Delete point 3', exact: true })).toBeFocused();
 
   // Discarded, they are gone for good (nothing was saved).
