@@ -1,6 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { findPipe } from '../../hydraulics/index';
 import { pipeForFamily } from '../../lib/lines/pipe-choices';
+import { seriousFindings } from './axe';
 import { signIn, watchConsole } from './fixtures';
 
 // Edits are never lost and never shown as saved when they were not; deletes ask first.
@@ -40,6 +41,7 @@ test('lines are duplicated and deleted from the list and the line page; the dial
   await expect(dialog.getByTestId('line-deletion-effects')).toContainText('network ends that only this line joined');
   await expect(dialog).toContainText('1 pipe stretch');
   await page.screenshot({ path: `${shots}/delete-line-dialog.png` });
+  expect(await seriousFindings(page)).toEqual([]);
   await page.keyboard.press('Escape');
   await expect(dialog).toHaveCount(0);
   await expect(del).toBeFocused();
