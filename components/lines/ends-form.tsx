@@ -32,7 +32,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   const flowAwayFromRam = (): LineDesign['flow'] => {
     if (design.flow.kind !== 'pump-delivery') return design.flow;
     const fed = design.start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === (design.start as { ramSiteId: string }).ramSiteId) : undefined;
-    return { kind: 'design', flowM3s: fed?.deliveredFlowM3s ?? 0.001 };
+    // A ram that is gone gives no figure: the line then finds its flow rather than take a made-up one.
+    return fed ? { kind: 'design', flowM3s: fed.deliveredFlowM3s } : { kind: 'find' };
   };
   const setStart = (start: LineDesign['start'], label: string) =>
     change({ ...design, start, flow: start.kind === 'ram-site' ? design.flow : flowAwayFromRam() }, label);
