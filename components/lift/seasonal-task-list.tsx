@@ -2,6 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { SeasonalTaskRecord } from '@/lib/lift/records';
@@ -21,8 +22,10 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
   const update = useUpdateSeasonalTask(projectId);
   const today = todayIn(undefined);
   const remove = useDeleteSeasonalTask(projectId);
+  const confirm = useConfirm();
   return (
     <div className="space-y-4">
+      {confirm.dialog}
       {tasks.length === 0 ? (
         <p className="text-sm text-creek-700">No tasks yet{canEdit ? ': make a year of them from the site\'s frost dates below.' : '.'}</p>
       ) : (
@@ -47,7 +50,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
                     <input type="checkbox" checked={task.done} onChange={(event) => update.mutate({ id: task.id, input: { done: event.target.checked } })} />
                     Done{task.doneOn ? ` ${task.doneOn}` : ''}
                   </label>
-                  <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => remove.mutate(task.id)} aria-label={`Delete ${task.title} on ${task.dueOn}`}>Delete</Button>
+                  <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => confirm.ask({ title: `Delete “${task.title}” (${task.dueOn})?`, body: <p>The task goes from the season&apos;s list; the other tasks stay. This cannot be undone.</p>, confirmLabel: 'Delete task', onConfirm: () => remove.mutateAsync(task.id) })} aria-label={`Delete ${task.title} on ${task.dueOn}`}>Delete</Button>
                 </div>
               ) : (
                 <span className="text-xs text-creek-700">{task.done ? `Done ${task.doneOn ?? ''}` : 'Open'}</span>

@@ -1,5 +1,6 @@
 'use client';
 
+import { removeKeepingFocus } from '@/components/ui/focus-return';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -83,7 +84,7 @@ export function TankForm({ projectId, units, tank, sources, onDone }: {
             <NumberField id={id(`outlet-${index}-elevation`)} label="Elevation" unit={unitOf('elevation', units)} value={outlet.elevation} onChange={(value) => setOutlet(index, 'elevation', value)} errors={form.fields[`outlets.${index}.elevationM`]} />
             <NumberField id={id(`outlet-${index}-residual`)} label="Residual head wanted" unit={unitOf('head', units)} value={outlet.residual} onChange={(value) => setOutlet(index, 'residual', value)} errors={form.fields[`outlets.${index}.residualHeadM`]} />
             <NumberField id={id(`outlet-${index}-friction`)} label="Friction loss to it" unit={unitOf('head', units)} value={outlet.friction} onChange={(value) => setOutlet(index, 'friction', value)} errors={form.fields[`outlets.${index}.frictionLossM`]} />
-            <Button tone="quiet" onClick={() => setState((previous) => ({ ...previous, outlets: previous.outlets.filter((_, i) => i !== index) }))}>Remove</Button>
+            <Button tone="quiet" onClick={(e) => removeKeepingFocus(e.currentTarget, () => setState((previous) => ({ ...previous, outlets: previous.outlets.filter((_, i) => i !== index) })))}>Remove</Button>
           </div>
         ))}
         <Button tone="quiet" onClick={() => setState((previous) => ({ ...previous, outlets: [...previous.outlets, { label: '', elevation: '', residual: '', friction: '0' }] }))}>Add an outlet</Button>

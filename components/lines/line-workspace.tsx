@@ -38,6 +38,7 @@ import { ResultsTables } from './results-tables';
 import { SettingsForm } from './settings-form';
 import { StretchTable } from './stretch-table';
 import { useLineDraft } from './use-line-draft';
+import { UnsavedValuesProvider, useUnsavedValues } from './unsaved-values';
 import { reportFileName } from '@/lib/lines/file-names';
 import { WarningsPanel } from './warnings-panel';
 import { NetworkFlowsStrip } from './network-flows-strip';
@@ -60,6 +61,7 @@ export interface LineWorkspaceProps {
 export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit, canComment, members }: LineWorkspaceProps) {
   const units = displayUnits(unitSystem);
   const draft = useLineDraft(line, stations, context, canEdit);
+  const unsaved = useUnsavedValues();
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
@@ -144,8 +146,9 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   }
 
   return (
+    <UnsavedValuesProvider value={unsaved.report}>
     <div className="space-y-5">
-      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} />
+      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} notTaken={unsaved.labels} />
       {'error' in result && (
         <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-3 text-sm text-clay-700">
           The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.
@@ -278,5 +281,6 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </Panel>
       )}
     </div>
+    </UnsavedValuesProvider>
   );
 }

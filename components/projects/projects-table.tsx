@@ -78,7 +78,7 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
               </tr>
             ))}
             {rows.length === 0 && (
-              <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet.' : 'No project matches.'}</td></tr>
+              <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet. Owners and designers start one under “Start a project”; it then leads on to importing the pipe route.' : 'No project matches: clear the filter to see them all.'}</td></tr>
             )}
       </TableFrame>
     </div>

@@ -180,13 +180,52 @@ export async function createLine(projectId: string, userId: string, input: Creat
   });
 }
 
+/** "Spring line" -> "Spring line (copy)", then "(copy 2)", … : the first name no line of the project has. */
+export function copyNameOf(name: string, taken: ReadonlySet<string>): string {
+  const base = name.replace(/ \(copy(?: \d+)?\)$/, '');
+  for (let n = 1; ; n += 1) {
+    const candidate = `${base} (copy${n === 1 ? '' : ` ${n}`})`.slice(0, 120);
+    if (!taken.has(candidate)) return candidate;
+  }
+}
+
+/**
+ * A copy of a line on the same route and window, with its stretches, fittings, devices, custom pipes
+ * and settings, under a new name; it joins the network with ends of its own, like any new line.
+ * One transaction: the copy and its network link are made together or not at all.
+ */
+export async function duplicateLine(lineId: string, userId: string, name?: string): Promise<LineRecord> {
+  const { Line: L, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.SHARE });
+    if (!line) throw notFound();
+    if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route for it before copying it', { routeId: ['Pick a route'] });
+    const siblings = await L.findAll({ attributes: ['name'], where: { projectId: line.projectId }, transaction });
+    const copyName = name ?? copyNameOf(line.name, new Set(siblings.map((s) => s.name)));
+    const copy = await L.create(
+      {
+        projectId: line.projectId, routeId: line.routeId, name: copyName, notes: line.notes,
+        fromChainageM: line.fromChainageM, toChainageM: line.toChainageM, ...columnsOf(designOf(line)),
+        createdBy: userId, updatedBy: userId,
+      },
+      { transaction },
+    );
+    await linkLineIntoNetwork(sequelize, transaction, copy.id);
+    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: copy.id, summary: `Copied line "${line.name}" as "${copy.name}"` });
+    return recordOf(copy, transaction);
+  });
+}
+
 export async function updateLine(lineId: string, userId: string, input: UpdateLineInput): Promise<LineRecord> {
   const { Line: L, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!line) throw notFound();
     if (input.baseRevision !== undefined && input.baseRevision !== line.revision) {
-      throw new AppError('conflict', `Someone saved revision ${line.revision} of this line after you opened revision ${input.baseRevision}; reload to see it`);
+      // Saved by the same person: another tab or window of theirs, not a colleague.
+      const who = line.updatedBy === userId ? 'You saved' : 'Someone else saved';
+      const where = line.updatedBy === userId ? ' in another tab or window' : '';
+      throw new AppError('conflict', `${who} revision ${line.revision} of this line${where} after this page opened revision ${input.baseRevision}; reload to carry on from it`);
     }
     const fields: Partial<UpdateLineInput> = { ...input };
     const design = fields.design;

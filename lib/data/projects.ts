@@ -4,6 +4,8 @@ import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
 import type { UpdateProjectInput } from '../validations/projects';
+import type { ProjectProgress } from '../projects/next-step';
+import { Op } from 'sequelize';
 
 export interface ProjectSummary {
   id: string;
@@ -87,4 +89,15 @@ export async function deleteProject(projectId: string): Promise<void> {
     await Project.destroy({ where: { id: projectId }, transaction });
     await enqueueJob(transaction, 'delete-project-files', { projectId });
   });
+}
+
+/** Counts for the overview's next step: routes, routes a line can be laid on, lines. */
+export async function projectProgress(projectId: string): Promise<ProjectProgress> {
+  const { Route, Line } = models();
+  const [routes, surveyedRoutes, lines] = await Promise.all([
+    Route.count({ where: { projectId } }),
+    Route.count({ where: { projectId, pointCount: { [Op.gte]: 2 } } }),
+    Line.count({ where: { projectId } }),
+  ]);
+  return { routes, surveyedRoutes, lines };
 }

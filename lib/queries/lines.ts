@@ -2,7 +2,7 @@ import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query
 import type { LineRecord, LineSummary } from '../data/lines';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
-import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
+import type { CreateLineInput, DuplicateLineInput, UpdateLineInput } from '../validations/lines';
 import { fetchJson } from './fetch-json';
 
 export const lineKeys = {
@@ -60,10 +60,27 @@ export function useUpdateLine(lineId: string) {
   });
 }
 
-export function useDeleteLine(lineId: string, projectId: string) {
+/** Deletes a line of the project; the line to delete is given at the call, so one hook serves a whole list. */
+export function useDeleteLine(projectId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: () => fetchJson<void>(`/api/lines/${lineId}`, { method: 'DELETE' }),
-    onSuccess: () => client.invalidateQueries({ queryKey: lineKeys.project(projectId) }),
+    mutationFn: (lineId: string) => fetchJson<void>(`/api/lines/${lineId}`, { method: 'DELETE' }),
+    onSuccess: (_, lineId) => {
+      client.removeQueries({ queryKey: lineKeys.one(lineId) });
+      return client.invalidateQueries({ queryKey: lineKeys.project(projectId) });
+    },
+  });
+}
+
+/** Copies a line on the same route ("… (copy)"); answers the new line. */
+export function useDuplicateLine(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ lineId, ...input }: DuplicateLineInput & { lineId: string }) =>
+      (await fetchJson<{ line: LineRecord }>(`/api/lines/${lineId}/duplicate`, { method: 'POST', body: input })).line,
+    onSuccess: (line) => {
+      client.setQueryData(lineKeys.one(line.id), line);
+      return client.invalidateQueries({ queryKey: lineKeys.project(projectId) });
+    },
   });
 }

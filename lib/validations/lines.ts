@@ -42,3 +42,7 @@ export const UpdateLineSchema = z
   .refine((v) => Object.keys(v).some((k) => k !== 'baseRevision'), 'Send at least one field to change')
   .refine(windowIsOrdered, windowMessage);
 export type UpdateLineInput = z.input<typeof UpdateLineSchema>;
+
+/** Copy of a line: optionally its new name (otherwise "… (copy)"). */
+export const DuplicateLineSchema = z.strictObject({ name: nameText('Line name').optional() });
+export type DuplicateLineInput = z.input<typeof DuplicateLineSchema>;

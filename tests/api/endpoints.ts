@@ -57,6 +57,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'PATCH', params: (f) => ({ lineId: f.lineId }), body: () => ({ notes: 'Trench walked.' }), expect: designers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
+  { file: 'lines/[lineId]/duplicate/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), body: () => ({}), expect: designers(201) },
   { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/site-context/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
