@@ -67,6 +67,9 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
   assertNetworkInput(input);
   const settings = resolveNetworkSettings(input.settings);
   const viscosity = waterKinematicViscosityM2s(settings.waterTemperatureC);
+  // Line analysis, analyze-profile.ts: the grade one velocity head plus the entrance loss below a free surface.
+  const freeSurfaceK = (node: NetworkNode): number =>
+    settings.freeSurfaceLosses && (hasFixedHead(node.kind) || node.kind === 'break-pressure-tank') ? 1 + settings.entranceLossK : 0;
   const hiddenInlets = input.nodes.filter((node) => node.kind === 'break-pressure-tank');
   const nodeCount = input.nodes.length + hiddenInlets.length;
   const nodeIds = [...input.nodes.map((node) => node.id), ...hiddenInlets.map((node) => `${node.id}#inlet`)];
@@ -103,7 +106,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     from[index] = nodeIndex.get(link.from) as number;
     to[index] = inletOf.get(toIndex) ?? toIndex;
     laws.push(lawFor(pipe, link.lengthM, settings, viscosity));
-    minor[index] = minorLossCoefficient(link.minorK ?? 0, pipe.insideDiameterM);
+    minor[index] = minorLossCoefficient((link.minorK ?? 0) + freeSurfaceK(input.nodes[from[index]]), pipe.insideDiameterM);
     diameterM[index] = pipe.insideDiameterM;
     lengthM[index] = link.lengthM;
     pipes.push(pipe);

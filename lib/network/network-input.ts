@@ -1,6 +1,7 @@
 import {
   DEFAULT_LINE_SETTINGS,
   HydraulicsInputError,
+  MATERIAL_GRADES,
   dailyDemand,
   type NetworkInput,
   type NetworkLink,
@@ -47,9 +48,14 @@ export interface BuiltNetwork {
 
 /** A tank without an overflow level is taken as 2 m deep above its lowest working level (common practice, no source). */
 const ASSUMED_TANK_DEPTH_M = 2;
+/**
+ * Smooth plastic's roughness for the bores that carry only a Hazen-Williams C (a ram plan's pipe, a
+ * valve body), so the default Darcy-Weisbach can solve them: the catalogue's PE/PVC value.
+ */
+const PLASTIC_ROUGHNESS_M = MATERIAL_GRADES.pvc.roughnessM;
 /** A valve is a short link of its own body: 1 m with the given bore, C = 140 (common practice, no source). */
 const VALVE_LENGTH_M = 1;
-const VALVE_BODY: NetworkPipe = { id: 'valve-body', insideDiameterM: 0.05, hazenWilliamsC: 140, label: 'valve' };
+const VALVE_BODY: NetworkPipe = { id: 'valve-body', insideDiameterM: 0.05, hazenWilliamsC: 140, roughnessM: PLASTIC_ROUGHNESS_M, label: 'valve' };
 
 /** Fails on a node or link by its record id, so the API names the element. */
 export function elementError(kind: 'nodes' | 'links', record: { id: string; name: string }, field: string, message: string): HydraulicsInputError {
@@ -93,7 +99,8 @@ function linkPipe(link: NetworkLinkRecord): { pipe: string | NetworkPipe; id: st
   if (given) return { pipe: given, id: given.id, label: given.label };
   if (link.data.insideDiameterM && link.data.hazenC) {
     const id = `${link.id}-bore`;
-    return { pipe: { id, insideDiameterM: link.data.insideDiameterM, hazenWilliamsC: link.data.hazenC, label: 'pipe of the ram plan' }, id, label: 'pipe of the ram plan' };
+    const pipe = { id, insideDiameterM: link.data.insideDiameterM, hazenWilliamsC: link.data.hazenC, roughnessM: PLASTIC_ROUGHNESS_M, label: 'pipe of the ram plan' };
+    return { pipe, id, label: 'pipe of the ram plan' };
   }
   if (link.kind === 'valve') return { pipe: VALVE_BODY, id: VALVE_BODY.id, label: 'valve' };
   throw elementError('links', link, 'data.pipe', 'pick a pipe');

@@ -18,7 +18,7 @@ export function solveNetworkRun(context: NetworkContext): SolveRunResult {
 export function sizingCandidates(context: NetworkContext): SizingCandidate[] {
   return context.prices.flatMap(({ pipeId, costPerM }) => {
     const pipe = findPipe(pipeId);
-    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
+    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, roughnessM: pipe.roughnessM, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
   });
 }
 
@@ -121,6 +121,7 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
   }
   return {
     kind: 'day',
+    friction: { method: day.frictionMethod, freeSurfaceLosses: day.freeSurfaceLosses },
     hours: day.steps.map((step) => step.hour),
     tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: storage.get(tank.id) ?? null })),
     sources: sources.map((source) => ({ nodeId: source.id, drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0), yieldM3s: source.yieldM3s ?? null })),

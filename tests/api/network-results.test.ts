@@ -88,6 +88,8 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
     const job = await run(f, tankProject, 'day');
     expect(job.status).toBe('done');
     const day = job.result as DayRunResult;
+    // The network solves with the line analysis's law, and the result says so.
+    expect(day.friction).toEqual({ method: 'darcy-weisbach', freeSurfaceLosses: true });
     expect(day.hours).toHaveLength(24);
     expect(day.tanks[0].levelsM).toHaveLength(25);
     const tap = day.outlets.find((o) => o.nodeId === ids.tap)!;

@@ -8,7 +8,7 @@ const CANDIDATES: SizingCandidate[] = [
   { pipe: { id: 'd63', insideDiameterM: 0.063, hazenWilliamsC: 140 }, costPerM: 7 },
   { pipe: { id: 'd75', insideDiameterM: 0.075, hazenWilliamsC: 140 }, costPerM: 10 },
 ];
-const SETTINGS = { hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const SETTINGS = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
 
 /** A spring feeding a tee, then a trough line and a house line (invented). */
 function farm(): NetworkInput {
