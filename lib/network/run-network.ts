@@ -131,6 +131,9 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
       minPressureHeadM: outlet.minPressureHeadM ?? null,
       lowest: day.outletLowestPressureHeadM[outlet.id] ?? null,
     })),
-    warnings: day.warnings.map((warning) => recordWarning(built, warning)),
+    warnings: [
+      ...built.notes.map((note) => ({ ...note, code: 'network.assumed-figure', severity: 'info' as const })),
+      ...day.warnings.map((warning) => recordWarning(built, warning)),
+    ],
   };
 }

@@ -102,6 +102,7 @@ const EXPORTED_NAMES = [
   'detectMedianOutliers',
   'detectOutOfOrder',
   'drawPatternOf',
+  'drawPatternWithPeak',
   'driveColumnSurge',
   'elevationAtChainage',
   'findLimitRanges',
