@@ -1,4 +1,4 @@
-import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, type SizingCandidate } from '../../hydraulics/index';
+import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, tankFillNodeId, type SizingCandidate } from '../../hydraulics/index';
 import type { NetworkContext } from './context';
 import { buildNetworkInput, type BuiltNetwork } from './network-input';
 import type { DayRunResult, SizeRunResult, SolveRunResult, TankStorageView } from './run-result';
@@ -45,9 +45,11 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
   if (candidates.length === 0) {
     return { kind: 'size', feasible: false, cost: null, uniform: null, solution: null, warnings: [{ code: 'network.no-prices', severity: 'warning', message: "The team's price list is empty: price some pipes first" }] };
   }
+  const tankFillFlowsM3s = tankFillFlows(context, built);
+  for (const nodeId of Object.keys(tankFillFlowsM3s)) built.names[tankFillNodeId(nodeId)] = `${built.names[nodeId] ?? nodeId} inlet while filling`;
   let result;
   try {
-    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS });
+    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS, tankFillFlowsM3s });
   } catch (error) {
     throw explainCoreError(built, context.records, error);
   }
@@ -61,6 +63,30 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
     solution: solveRunResult(sized, result.solution),
     warnings: result.warnings.map((warning) => recordWarning(built, warning)),
   };
+}
+
+/**
+ * The flow each tank's inlet must pass for the sizing: the daily demand of the outlets it serves (as
+ * the storage sizing traces them) over the tank record's supply hours per day. Tanks fed by a ram
+ * take what the ram delivers, and a network whose day cannot be traced keeps tanks at a fixed level.
+ */
+function tankFillFlows(context: NetworkContext, built: BuiltNetwork): Record<string, number> {
+  let storage: TankStorageView[];
+  try {
+    storage = tankStorageRun(context);
+  } catch {
+    return {};
+  }
+  const fills: Record<string, number> = {};
+  const kindOf = new Map(built.input.nodes.map((n) => [n.id, n.kind]));
+  for (const tank of storage) {
+    const inlets = built.input.links.filter((link) => link.to === tank.nodeId);
+    if (inlets.length === 0 || inlets.some((link) => kindOf.get(link.from) === 'ram-outlet')) continue;
+    const record = context.tanks.find((t) => t.id === tank.tankId);
+    const hours = record?.supplyHoursPerDay ?? 24;
+    if (tank.dailyDemandM3 > 0) fills[tank.nodeId] = tank.dailyDemandM3 / (hours * 3600);
+  }
+  return fills;
 }
 
 /**

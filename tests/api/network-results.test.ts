@@ -102,6 +102,16 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
     expect(day.tanks[0].storageNeededM3).toBeCloseTo(34.56 + 0, 0);
   });
 
+  it("sizes the spring pipe to fill the tank with its tap's day over the tank's supply hours, not as a pipe into a fixed level", async () => {
+    const job = await run(f, tankProject, 'size');
+    expect(job.status).toBe('done');
+    const sized = job.result as SizeRunResult;
+    expect(sized.feasible).toBe(true);
+    // The tap draws 0.2 L/s all day (no uses tied): 17.28 m³ a day, brought in over 24 supply hours = 0.2 L/s.
+    const inlet = sized.solution!.links.find((l) => l.linkId === ids.inlet)!;
+    expect(inlet.flowM3s).toBeCloseTo(17.28 / 86_400, 12);
+  });
+
   it('applies the chosen sizes to the typed pipes in one go', async () => {
     // Invented: a spring at 140 m, a tee at 120 m, taps at 100 m and 105 m; every pipe typed as 50 mm.
     const pipes = await newProject(f, 'Pipes fixture');

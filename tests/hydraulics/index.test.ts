@@ -193,6 +193,7 @@ const EXPORTED_NAMES = [
   'surveyHeightScatterM',
   'swameeJainFrictionFactor',
   'tankAreaM2',
+  'tankFillNodeId',
   'tankFillTimeS',
   'totalLossCoefficient',
   'trimRoute',
