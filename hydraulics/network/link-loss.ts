@@ -1,5 +1,5 @@
 import { GRAVITY_MS2 } from '../constants';
-import { darcyFrictionFactorUnchecked } from '../friction/darcy-weisbach';
+import { darcyFrictionFactorUnchecked, darcyLossExponentUnchecked } from '../friction/darcy-weisbach';
 import { pipeAreaM2 } from '../friction/pipe-flow';
 
 /**
@@ -76,15 +76,21 @@ function rawLossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: numbe
     out.gradient = law.exponent * perFlow + minorGradient;
     return;
   }
-  const friction = frictionLossM(law, q);
-  out.lossM = friction + minor * q * magnitude;
-  out.gradient = (2 * Math.abs(friction)) / magnitude + minorGradient;
+  const velocity = magnitude / pipeAreaM2(law.diameterM);
+  const reynolds = (velocity * law.diameterM) / law.kinematicViscosityM2s;
+  const f = darcyFrictionFactorUnchecked(reynolds, law.relativeRoughness, law.lastInverseSqrtF);
+  law.lastInverseSqrtF = 1 / Math.sqrt(f);
+  const friction = (f * law.lengthM * velocity * velocity) / (law.diameterM * 2 * GRAVITY_MS2);
+  out.lossM = Math.sign(q) * friction + minor * q * magnitude;
+  // The exact slope, friction factor's change with the flow included: a full Newton step.
+  out.gradient = (darcyLossExponentUnchecked(reynolds, law.relativeRoughness, f) * friction) / magnitude + minorGradient;
 }
 
 /**
  * Loss and slope of a link (friction plus minor loss `minor`·Q|Q|) written into `out`. Hazen-Williams
- * has the exact slope n·r·|Q|^(n-1); for Darcy-Weisbach the friction factor is held for the step
- * (slope 2h/Q), as the gradient method allows (Todini & Pilati 1988). Below `linearBelowM3s` the loss
+ * has the exact slope n·r·|Q|^(n-1); Darcy-Weisbach the exact slope with the friction factor's own
+ * change (`darcyLossExponentUnchecked`), so the gradient method keeps Newton's quadratic
+ * convergence (Todini & Pilati 1988). Below `linearBelowM3s` the loss
  * is linear (see {@link LINEAR_BELOW_VELOCITY_MS}); the slope never falls below {@link MIN_LOSS_GRADIENT}.
  */
 export function lossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
