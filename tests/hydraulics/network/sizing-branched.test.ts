@@ -98,3 +98,17 @@ describe('sizeNetwork: branched networks solved exactly [NET-KGM68]', () => {
     expect(result.warnings[0].message).toContain('"house"');
   });
 });
+
+describe('sizeNetwork on the default law counts the entrance at the spring', () => {
+  it("gives a split-pipe design the solver confirms, the spring's entrance and velocity head included", async () => {
+    // The farm above on the network's default (Darcy-Weisbach, K = 1.5 where water leaves the spring).
+    const pe = (id: string, mm: number, costPerM: number): SizingCandidate => ({ pipe: { id, insideDiameterM: mm / 1000, roughnessM: 1.5e-6, hazenWilliamsC: 150 }, costPerM });
+    const input: NetworkInput = { ...farm(), settings: undefined };
+    const result = await sizeNetwork(input, { candidates: [pe('d40', 40, 3), pe('d50', 50, 4.5), pe('d63', 63, 7), pe('d75', 75, 10)], onePipePerLink: false });
+    expect(result.solution.freeSurfaceLosses).toBe(true);
+    expect(result.warnings.map((w) => w.code)).not.toContain('design-check-failed');
+    expect(result.feasible).toBe(true);
+    expect(result.solution.pressureHeadsM.trough).toBeGreaterThanOrEqual(5 - 1e-6);
+    expect(result.solution.pressureHeadsM.house).toBeGreaterThanOrEqual(15 - 1e-6);
+  });
+});
