@@ -3,6 +3,7 @@ export { solveNetwork } from './solve-network';
 export { assertNetworkInput } from './validate-network';
 export { DEFAULT_NETWORK_SETTINGS, DEFAULT_HAZEN_WILLIAMS_CONSTANT } from './settings';
 export { sizeNetwork } from './sizing/size-network';
+export { tankFillNodeId } from './sizing/tank-fill';
 export type { SizingCandidate, SizingOptions, SizingResult, SizedPiece } from './sizing/types';
 export { runNetworkDay, tankAreaM2 } from './day/run-network-day';
 export { servedOutletsByTank, type ServedOutlet } from './day/served-outlets';

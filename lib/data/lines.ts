@@ -1,5 +1,5 @@
 import 'server-only';
-import { linkLineIntoNetwork } from '../../migrations/support/network-from-records.cjs';
+import { linkLineIntoNetwork, rejoinLineStart } from '../../migrations/support/network-from-records.cjs';
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
@@ -233,6 +233,7 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     delete fields.baseRevision;
     if (fields.routeId !== undefined && fields.routeId !== line.routeId) await assertRouteInProject(fields.routeId, line.projectId);
     line.set(fields as Partial<Line>);
+    const startBefore = JSON.stringify(line.startCondition);
     if (design) {
       await assertRamSiteInProject(design as LineDesign, line.projectId);
       line.set(columnsOf(design as LineDesign));
@@ -246,6 +247,8 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     line.revision += 1;
     line.updatedBy = userId;
     await line.save({ transaction });
+    // A new start (another ram site, a water level instead of a ram) joins the network where it says.
+    if (JSON.stringify(line.startCondition) !== startBefore) await rejoinLineStart(models().sequelize, transaction, line.id);
     await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary: `Edited line "${line.name}"` });
     return recordOf(line, transaction);
   });

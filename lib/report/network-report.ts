@@ -3,6 +3,7 @@ import PDFDocument from 'pdfkit';
 import { buildNetworkScene } from '../chart/network-scene';
 import { svgToString } from '../chart/svg-node';
 import { dayViewModel } from '../network/day-view';
+import { networkFrictionWords } from '../network/friction-words';
 import { layoutNetwork } from '../network/layout';
 import type { DayRunResult, NetworkRunWarning, SizeRunResult, SolveRunResult } from '../network/run-result';
 import type { NetworkView } from '../network/view';
@@ -156,7 +157,7 @@ export async function networkReportPdf({ project, view, solve, solveProblem, siz
   doc.addPage();
   if (solve) {
     heading(doc, 'Nodes at the peak hour');
-    text(doc, `${solve.converged ? 'Converged' : 'Did NOT converge'} in ${solve.iterations} iterations. Every outlet draws its peak; tanks sit at their lowest working level.`);
+    text(doc, `${solve.converged ? 'Converged' : 'Did NOT converge'} in ${solve.iterations} iterations. Every outlet draws its peak; tanks sit at their lowest working level. ${networkFrictionWords(solve.friction)}`);
     doc.moveDown(0.3);
     nodeTable(doc, view, solve, u);
     heading(doc, 'Links at the peak hour');

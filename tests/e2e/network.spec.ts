@@ -45,6 +45,8 @@ test('a designer builds a branched system with a take-off, solves it, sizes it, 
   // Solve: the schematic shows flows with their direction and the trough's pressure.
   await page.getByRole('button', { name: 'Solve at the peak hour' }).click();
   await expect(page.getByTestId('solve-summary')).toContainText('Converged', { timeout: 60_000 });
+  // The result says which friction law it was solved with: the line analysis's own.
+  await expect(page.getByTestId('solve-friction')).toContainText('Friction by Darcy-Weisbach with the Colebrook friction factor');
   const branchLabel = page.locator('[data-scene="network"] [data-link-label]').filter({ hasText: `Orchard branch ${stamp}` });
   await expect(branchLabel).toContainText('0.30 L/s →');
   await expect(page.locator('[data-scene="network"] [data-node-label]').filter({ hasText: trough })).toContainText('head');
