@@ -4,7 +4,7 @@ import { Op, type Transaction } from 'sequelize';
 import { locateOnRoute, type RouteLocation } from '../../hydraulics';
 import { models } from '../../models';
 import type { SitePhoto, PhotoPlacement } from '../../models/site-photo';
-import { AppError } from '../errors';
+import { AppError, notInProject } from '../errors';
 import { log } from '../log';
 import { readPhoto } from '../photos/read-photo';
 import { projectStoragePrefix } from './project-files';
@@ -46,7 +46,7 @@ export interface PhotoPlacementRequest {
 
 async function routeOfProject(projectId: string, routeId: string, transaction?: Transaction) {
   const route = await models().Route.findOne({ where: { id: routeId, projectId }, attributes: ['id', 'lengthM'], transaction });
-  if (!route) throw new AppError('bad_request', 'That route is not one of this project’s', { routeId: ['Pick a route of this project'] });
+  if (!route) throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not one of this project’s');
   return route;
 }
 
@@ -69,6 +69,8 @@ async function nearestOnRoutes(projectId: string, routeId: string | null | undef
 }
 
 async function placementOf(projectId: string, position: { latitude: number | null; longitude: number | null }, request: PhotoPlacementRequest) {
+  // A named route is the project's whatever else is sent: never keep another team's route on a photo.
+  if (request.routeId) await routeOfProject(projectId, request.routeId);
   if (position.latitude !== null && position.longitude !== null) {
     const found = await nearestOnRoutes(projectId, request.routeId, { latitudeDeg: position.latitude, longitudeDeg: position.longitude });
     if (found) return { routeId: found.routeId, chainageM: found.at.chainageM, offsetM: found.at.offsetM, placement: 'position' as const };
