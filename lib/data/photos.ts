@@ -7,8 +7,9 @@ import type { SitePhoto, PhotoPlacement } from '../../models/site-photo';
 import { AppError, notInProject } from '../errors';
 import { log } from '../log';
 import { readPhoto } from '../photos/read-photo';
-import { projectStoragePrefix } from './project-files';
-import { deleteObject, getObject, putObject } from '../storage';
+import { projectStoragePrefix, removeStoredFiles } from './project-files';
+import { getObject, putObject } from '../storage';
+import { enqueueJob } from '../jobs/enqueue';
 import { numberPhotos } from '../chart/photo-marks';
 import type { ReportPhoto } from '../report/photo-section';
 
@@ -109,7 +110,7 @@ export async function uploadPhoto(input: { projectId: string; userId: string; fi
     });
     return toPhotoSummary(row);
   } catch (error) {
-    for (const key of stored) await deleteObject(key).catch((err: unknown) => log().error({ err, key }, 'could not remove a stored photo after a failed upload'));
+    await removeStoredFiles(stored);
     throw error;
   }
 }
@@ -147,10 +148,15 @@ export async function updatePhoto(photoId: string, changes: { caption?: string; 
   return toPhotoSummary(photo);
 }
 
+/** The row goes with its files' removal queued in one transaction; the files are removed now too when the store answers. */
 export async function deletePhoto(photoId: string): Promise<void> {
   const photo = await photoRow(photoId);
-  await photo.destroy();
-  for (const key of [photo.imageKey, photo.thumbnailKey]) await deleteObject(key).catch((err: unknown) => log().error({ err, key }, 'could not remove a deleted photo’s file'));
+  const keys = [photo.imageKey, photo.thumbnailKey];
+  await models().sequelize.transaction(async (transaction) => {
+    await photo.destroy({ transaction });
+    await enqueueJob(transaction, 'delete-stored-files', { keys });
+  });
+  await removeStoredFiles(keys, true);
 }
 
 /**
