@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db } from '@/lib/db';
 import { ENDPOINTS, EXEMPT, type EndpointCase } from '../api/endpoints';
 import { ACTORS, type Actor } from '../support/api';
 import { apiPath, createCast, freshFixture, markTeam, renewSession, request, type Cast, type Fixture, type SignedInActor } from './cast';
@@ -155,6 +156,7 @@ describe('authorisation matrix against the running app', () => {
   const plans: CasePlan[] = [];
   let before: Record<string, string> = {};
   let after: Record<string, string> = {};
+  let probeWrites: string[] = [];
 
   // Every refused call of every case runs in one stretch: each call is checked on its own against
   // the write log (one indexed query), the stretch as a whole against two fingerprints of the whole
@@ -166,6 +168,11 @@ describe('authorisation matrix against the running app', () => {
     await markTeam(cast.b.teamId);
     await settle();
     let mark = await startWriteLog();
+    // The log must see a write for its silence to mean anything: an update that changes nothing still counts.
+    await db().query('UPDATE teams SET name = name WHERE id = :id', { replacements: { id: cast.b.teamId } });
+    const probe = await writesSince(mark);
+    probeWrites = probe.writes;
+    mark = probe.mark;
     before = await fingerprint();
     for (const p of plans) {
       for (const call of p.refused) {
@@ -189,6 +196,10 @@ describe('authorisation matrix against the running app', () => {
     expect(served.length).toBeGreaterThan(60);
     expect(served.filter((key) => !tabled.has(key)), 'endpoints missing from the table').toEqual([]);
     expect([...tabled].filter((key) => !served.includes(key)), 'table rows with no endpoint').toEqual([]);
+  });
+
+  it('the write log notes a write made while it runs', () => {
+    expect(probeWrites).toEqual(['UPDATE teams ×1']);
   });
 
   it('the refused calls (every refused actor, every swapped and missing id) wrote nothing', () => {
