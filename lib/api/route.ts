@@ -1,13 +1,12 @@
 import type { NextRequest } from 'next/server';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
-import { userFromRequest } from '../auth/session';
+import { sessionTokenOf, tokenSubject, userAndRoleOf, userFromRequest } from '../auth/session';
 import type { SessionUser } from '../auth/users';
 import { forbidden, notFound, unauthenticated } from '../errors';
 import { can, type Permission } from '../permissions';
 import type { Role } from '../roles';
 import { parseOrThrow, readJsonBody } from './body';
-import { roleOnTeam } from './membership';
 import { errorResponse, json } from './respond';
 
 type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
@@ -100,9 +99,13 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const user = await signedInUser(req);
+      // A request without a session is refused before any lookup; then the resource's team, then
+      // the user and their role on it in one query (the session re-read every time).
+      const subject = tokenSubject(await sessionTokenOf(req));
+      if (!subject) throw unauthenticated();
       const teamId = await spec.teamOf(params);
-      const role = teamId ? await roleOnTeam(user.id, teamId) : null;
+      const { user, role } = await userAndRoleOf(subject, teamId);
+      if (!user) throw unauthenticated();
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
       const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;

@@ -5,7 +5,7 @@ import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
 import { recordActivity } from '../activity/record';
 import type { Line } from '../../models/line';
-import { AppError, notFound } from '../errors';
+import { AppError, notFound, notInProject } from '../errors';
 import { startingDesign } from '../lines/default-design';
 import { lineInputOf } from '../lines/line-input';
 import type { LineSiteContext } from '../lines/ram-start';
@@ -156,7 +156,7 @@ function assertDesignFits(design: LineDesign, stations: readonly LineRouteStatio
 async function assertRouteInProject(routeId: string, projectId: string): Promise<void> {
   const owner = await routeOwner(routeId);
   if (!owner || owner.projectId !== projectId) {
-    throw new AppError('bad_request', 'That route is not part of this project', { routeId: ['Pick a route of this project'] });
+    throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not part of this project');
   }
 }
 

@@ -43,7 +43,8 @@ function toSummary(p: Project): ProjectSummary {
 }
 
 export async function listProjects(teamId: string): Promise<ProjectSummary[]> {
-  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']] });
+  // Plain rows: a team's list is read often and needs no model instances.
+  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']], raw: true });
   return rows.map(toSummary);
 }
 
@@ -53,7 +54,7 @@ export async function getProject(projectId: string): Promise<ProjectSummary | nu
 }
 
 export async function teamOfProject(projectId: string): Promise<string | null> {
-  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'] });
+  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'], raw: true });
   return p?.teamId ?? null;
 }
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import { models } from '../../models';
 import type { SurveyFeature } from '../survey/parsed-survey';
-import { AppError } from '../errors';
+import { AppError, notInProject } from '../errors';
 import { joinPoints, reversePoints, splitPoints, trimPoints } from '../routes/edit-ops';
 import type { RouteDetail, RouteSummary } from '../routes/types';
 import type { JoinRoutesInput, SplitRouteInput, TrimRouteInput } from '../validations/routes';
@@ -79,7 +79,7 @@ export async function joinRoutesById(routeId: string, userId: string, input: Joi
     const first = await lockRoute(routeId, transaction);
     const other = await models().Route.findByPk(input.otherRouteId, { transaction });
     if (!other || other.projectId !== first.projectId) {
-      throw new AppError('bad_request', 'There is no route with that id in this project', { otherRouteId: ['Choose a route of this project'] });
+      throw notInProject({ otherRouteId: ['Choose a route of this project'] }, 'There is no route with that id in this project');
     }
     const a = await loadRoutePoints(first.id, transaction);
     const b = await loadRoutePoints(other.id, transaction);

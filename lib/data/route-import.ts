@@ -5,9 +5,8 @@ import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
 import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
-import { log } from '../log';
-import { projectStoragePrefix } from './project-files';
-import { deleteObject, putObject } from '../storage';
+import { projectStoragePrefix, removeStoredFiles } from './project-files';
+import { putObject } from '../storage';
 import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
 import type { SurveyImportOptions } from '../validations/survey-import';
@@ -115,7 +114,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
     });
     return { route, warnings: survey.warnings.slice(0, 50) };
   } catch (error) {
-    await deleteObject(storageKey).catch((err: unknown) => log().error({ err, storageKey }, 'could not remove the stored file of a failed import'));
+    await removeStoredFiles([storageKey]);
     throw error;
   }
 }

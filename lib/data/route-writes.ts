@@ -9,8 +9,8 @@ import { recordOf, type PointRecord } from '../routes/edit-ops';
 import { RouteEditError } from '../routes/errors';
 import { computeRouteGeometry } from '../routes/geometry';
 import type { RouteDetail, RouteSummary } from '../routes/types';
-import { log } from '../log';
-import { deleteObject } from '../storage';
+import { enqueueJob } from '../jobs/enqueue';
+import { removeStoredFiles } from './project-files';
 import type { CleanupDecision, CreateRouteInput, SavePointsInput, UpdateRouteInput } from '../validations/routes';
 import { loadRoutePoints, replaceRoutePoints } from './route-points-store';
 import { getRouteDetail, getRouteSummary, toRouteSummary } from './routes';
@@ -61,10 +61,11 @@ export async function deleteRoute(routeId: string): Promise<void> {
     if (stillUsed > 0) return null;
     const file = await Attachment.findByPk(attachmentId, { transaction });
     await file?.destroy({ transaction });
+    // Queued with the delete: the file goes once the rows are gone, even if the store is down now.
+    if (file) await enqueueJob(transaction, 'delete-stored-files', { keys: [file.storageKey] });
     return file?.storageKey ?? null;
   });
-  // After the commit: a failed object delete leaves an orphan object, never a dangling row.
-  if (orphanKey) await deleteObject(orphanKey).catch((err: unknown) => log().error({ err, storageKey: orphanKey }, 'could not delete a stored file'));
+  if (orphanKey) await removeStoredFiles([orphanKey], true);
 }
 
 /** Saves an edited route whole. Raw heights are taken from the stored points, never from the client. */

@@ -97,10 +97,10 @@ describe('lines API', () => {
     expect(analysis.json.analysis.stretches[0].pipe.id).toBe('old-barn-pipe');
   });
 
-  it('refuses a route of another project', async () => {
+  it('refuses a route of another project with the 404 of a missing one', async () => {
     const other = await createTeamFixture();
     const res = await create({ name: 'Borrowed', routeId: other.lineRouteId });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields.routeId).toEqual(['Pick a route of this project']);
   });
 

@@ -136,7 +136,7 @@ describe('network API', () => {
       method: 'PUT', path: '/n', params: { projectId: f.projectId, nodeId: ids.intake }, userId: f.users.designer.id,
       body: { ...sourceNodeBody(), tankId: '00000000-0000-4000-8000-000000000000' },
     });
-    expect(refused.status).toBe(400);
+    expect(refused.status).toBe(404);
     expect(refused.json.error.fields).toHaveProperty('tankId');
   });
 });

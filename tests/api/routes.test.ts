@@ -239,7 +239,7 @@ describe('reverse, split, trim and join', () => {
     expect(res.json.route).toMatchObject({ name: 'Intake to ram + Ram to tank', lengthM: 310, pointCount: 8, sourceFormat: 'joined' });
     expect((await readRoute(surveyor, a)).route.lengthM).toBe(150);
     const foreign = await post(joinRoute.POST, a, { otherRouteId: (await createTeamFixture()).routeId });
-    expect(foreign.status).toBe(400);
+    expect(foreign.status).toBe(404);
   });
 
   it('deleting a route removes its points, its file row and the stored object', async () => {
