@@ -5,7 +5,7 @@ import { pipeAreaM2 } from '../friction/pipe-flow';
 /**
  * Slope floor of any link's loss, m per m³/s: a link with no friction and no fittings (a bare valve)
  * still loses 1 mm of head at 1 m³/s, so the system stays well conditioned. Common practice, no
- * source (the gradient method needs some floor; Rossman, EPANET 2 Users Manual, 2000, App. D).
+ * source (the gradient method needs some floor: Todini and Pilati 1988 [NET-TP88]).
  */
 export const MIN_LOSS_GRADIENT = 1e-3;
 /**
