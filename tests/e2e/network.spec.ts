@@ -87,6 +87,17 @@ test('a designer builds a branched system with a take-off, solves it, sizes it, 
   await page.goto(`/projects/${KESTREL}/network`);
   const network = page.locator('main').filter({ visible: true });
   await expect(network.getByRole('heading', { name: 'Network', exact: true })).toBeVisible();
+  // A join asks too, and says its two ends stay; cancelled, it stays and focus is back on its button.
+  const branchRow = network.locator(`tr[aria-label="Link Orchard branch ${stamp}"]`);
+  const removeBranch = branchRow.getByRole('button', { name: `Remove Orchard branch ${stamp}` });
+  await removeBranch.click();
+  const joinDialog = page.getByRole('dialog', { name: `Remove “Orchard branch ${stamp}”?` });
+  await expect(joinDialog).toContainText(`from ${tee} to ${trough} goes from the network; ${tee} and ${trough} stay`);
+  await page.keyboard.press('Escape');
+  await expect(joinDialog).toHaveCount(0);
+  await expect(removeBranch).toBeFocused();
+  await expect(branchRow).toBeVisible();
+
   const troughRow = network.locator(`tr[aria-label="Node ${trough}"]`);
   const removeTrough = troughRow.getByRole('button', { name: `Remove ${trough}` });
   await removeTrough.click();
