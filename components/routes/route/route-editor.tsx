@@ -3,7 +3,7 @@
 import { LoadError } from '@/components/ui/load-error';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
-import { Panel, Skeleton } from '@/components/ui/panel';
+import { Panel } from '@/components/ui/panel';
 import { CommentsPanel } from '@/components/reviews/comments-panel';
 import { useCommentThreads } from '@/components/reviews/use-comment-threads';
 import { ROUTE_PAGE_SIZE, routePointsQuery, routeViewQuery } from '@/lib/queries/routes';
@@ -14,6 +14,7 @@ import { pinsOf, routePinChainage } from '@/lib/review/threads';
 import { formatQuantity, fromDisplay, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
 import { UnitNumberInput } from '@/components/lines/unit-number-input';
 import { RouteWorkspace } from './route-workspace';
+import { RouteEditorSkeleton } from './route-editor-skeleton';
 
 export interface RouteEditorProps {
   projectId: string;
@@ -47,7 +48,7 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
   if (view.isError || rows.isError) {
     return <LoadError what="The route" onRetry={() => void (view.isError ? view.refetch() : rows.refetch())} />;
   }
-  if (!data || !rows.data) return <Skeleton className="h-96 w-full" />;
+  if (!data || !rows.data) return <RouteEditorSkeleton />;
 
   function jumpToComment(comment: CommentRecord) {
     comments.setSelectedId(comment.id);

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -16,6 +17,8 @@ import { getQueryClient } from '@/lib/queries/query-client';
 import { reviewKeys } from '@/lib/queries/reviews';
 import { ROUTE_PAGE_SIZE, routeKeys } from '@/lib/queries/routes';
 import { uuid } from '@/lib/validations/common';
+import { RouteEditorSkeleton } from '@/components/routes/route/route-editor-skeleton';
+import { RoutePhotosSkeleton } from '@/components/photos/route-photos';
 
 export const metadata: Metadata = { title: 'Survey route' };
 
@@ -45,8 +48,12 @@ export default async function RoutePage({ params }: { params: Promise<{ projectI
     <div className="space-y-4">
       <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <RouteEditor projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} canComment={canComment} canCommentAnywhere={can(role, 'review.comment')} members={members} />
-        <RoutePhotos projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+        <Suspense fallback={<RouteEditorSkeleton />}>
+          <RouteEditor projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} canComment={canComment} canCommentAnywhere={can(role, 'review.comment')} members={members} />
+        </Suspense>
+        <Suspense fallback={<RoutePhotosSkeleton />}>
+          <RoutePhotos projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );
