@@ -29,6 +29,23 @@ export function keepRouteView(routeId: string, version: string, view: RouteView)
   while (views.size > MAX_ROUTES) views.delete(views.keys().next().value as string);
 }
 
+const working = new Map<string, Promise<RouteView | null>>();
+
+/**
+ * The view of this saved version, kept, being worked out (the import's warm-up and a first visit
+ * at once share the one read), or worked out now by `compute`.
+ */
+export function sharedRouteView(routeId: string, version: string, compute: () => Promise<RouteView | null>): Promise<RouteView | null> {
+  const kept = cachedRouteView(routeId, version);
+  if (kept) return Promise.resolve(kept);
+  const key = `${routeId}|${version}`;
+  const running = working.get(key);
+  if (running) return running;
+  const started = compute().finally(() => working.delete(key));
+  working.set(key, started);
+  return started;
+}
+
 /** Forgets every kept view (the benchmark's cold reads). */
 export function forgetRouteViews(): void {
   views.clear();

@@ -8,7 +8,8 @@ import { benchmarkProposals, detectRouteProposals, smoothingProposals } from '..
 import { proposalPlacesOf, routeViewOf } from '../routes/route-view';
 import type { RouteDetail, RoutePointsPage, RouteProposalsAnswer, RouteSummary, RouteView } from '../routes/types';
 import type { RouteProposalsQuery } from '../validations/routes';
-import { cachedRouteView, keepRouteView, routeViewVersion } from './route-view-cache';
+import { log } from '../log';
+import { keepRouteView, routeViewVersion, sharedRouteView } from './route-view-cache';
 import { loadCheckedPoints, loadRoutePoints, loadRoutePointsPage } from './route-points-store';
 
 export function toRouteSummary(r: Route, file: Attachment | null | undefined): RouteSummary {
@@ -64,18 +65,26 @@ const snapshot = <T>(read: (transaction: Transaction) => Promise<T>) =>
 export async function getRouteView(routeId: string, profilePoints?: number): Promise<RouteView | null> {
   const current = await models().Route.findByPk(routeId, { attributes: ['updatedAt'] });
   if (!current) return null;
-  const cached = cachedRouteView(routeId, routeViewVersion(current.updatedAt, profilePoints));
-  if (cached) return cached;
-  const read = await snapshot(async (transaction) => {
-    const r = await models().Route.findByPk(routeId, { include: withFile(), transaction });
-    return r ? { r, points: await loadCheckedPoints(routeId, transaction) } : null;
+  return sharedRouteView(routeId, routeViewVersion(current.updatedAt, profilePoints), async () => {
+    const read = await snapshot(async (transaction) => {
+      const r = await models().Route.findByPk(routeId, { include: withFile(), transaction });
+      return r ? { r, points: await loadCheckedPoints(routeId, transaction) } : null;
+    });
+    if (!read) return null;
+    const { r, points } = read;
+    const route = { ...toRouteSummary(r, fileOf(r)), features: r.features, importNotes: r.importNotes, closureErrorM: r.closureErrorM ?? null };
+    const view = routeViewOf({ route, proposals: detectRouteProposals(points), gpsWarning: routeGpsWarning(points) }, points, profilePoints);
+    keepRouteView(routeId, routeViewVersion(r.updatedAt, profilePoints), view);
+    return view;
   });
-  if (!read) return null;
-  const { r, points } = read;
-  const route = { ...toRouteSummary(r, fileOf(r)), features: r.features, importNotes: r.importNotes, closureErrorM: r.closureErrorM ?? null };
-  const view = routeViewOf({ route, proposals: detectRouteProposals(points), gpsWarning: routeGpsWarning(points) }, points, profilePoints);
-  keepRouteView(routeId, routeViewVersion(r.updatedAt, profilePoints), view);
-  return view;
+}
+
+/**
+ * Works a new route's view out after its import has answered, so the route page the import leads
+ * to opens warm on this instance; a failure only means that first visit works it out itself.
+ */
+export function warmRouteView(routeId: string): void {
+  getRouteView(routeId).catch((err: unknown) => log().warn({ err }, 'working out a new route view ahead of its first visit'));
 }
 
 /** A page of the route's rows by seq (an offset past the end gives an empty page). */

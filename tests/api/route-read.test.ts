@@ -2,6 +2,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import * as pointsRoute from '@/app/api/routes/[routeId]/points/route';
 import * as proposalsRoute from '@/app/api/routes/[routeId]/proposals/route';
 import * as viewRoute from '@/app/api/routes/[routeId]/view/route';
+import { getRouteView } from '@/lib/data/routes';
+import { forgetRouteViews, sharedRouteView } from '@/lib/data/route-view-cache';
 import { smoothingProposals } from '@/lib/routes/proposals';
 import { ROUTE_PROFILE_POINTS } from '@/lib/routes/profile-series';
 import { call, createTeamFixture } from '../support/api';
@@ -166,5 +168,37 @@ describe('saving one page of rows', () => {
     const backwards = await putPoints(id, { points: rows, window: { fromSeq: 10, toSeq: 5 } });
     expect(backwards.status).toBe(400);
     expect((await readRoute(surveyor, id)).route.updatedAt).toBe(before.route.updatedAt);
+  });
+});
+
+describe('the view kept per saved version', () => {
+  it('answers a later read from the kept view, and a save is never answered with the older one', async () => {
+    forgetRouteViews();
+    const first = await getRouteView(walkId);
+    expect(await getRouteView(walkId)).toBe(first);
+    const made = await importFile(surveyor, f.projectId, 'kept.csv', gpsTrackCsv(80), { ...GPS_OPTIONS, name: 'Kept view' });
+    const id = made.json.route.id;
+    const before = await getRouteView(id);
+    const page = await get(pointsRoute.GET, id, '?offset=0&limit=10');
+    const rows = page.json.points.map(asInput);
+    rows[3] = { ...rows[3], elevationM: 777 };
+    expect((await putPoints(id, { points: rows, baseUpdatedAt: page.json.updatedAt, window: { fromSeq: 0, toSeq: 10 } })).status).toBe(200);
+    const after = await getRouteView(id);
+    expect(after).not.toBe(before);
+    expect(after!.heightRangeM!.highM).toBe(777);
+    expect(before!.heightRangeM!.highM).toBeLessThan(777);
+  });
+
+  it('works one version out once when two reads (the import warm-up and the first visit) ask at once', async () => {
+    let computed = 0;
+    const compute = async () => {
+      computed += 1;
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      return null;
+    };
+    await Promise.all([sharedRouteView('r-1', 'v1', compute), sharedRouteView('r-1', 'v1', compute)]);
+    expect(computed).toBe(1);
+    await sharedRouteView('r-1', 'v2', compute);
+    expect(computed).toBe(2);
   });
 });
