@@ -83,21 +83,33 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
   const raise = input.tankWaterAboveGroundM ?? 0;
   const clearance = input.summitClearanceM ?? 0;
-  const allow = (piece: number): number =>
-    typeof allowableHeadM === 'number' ? allowableHeadM : allowableHeadM[piece];
-  const lossTo = input.headLossToPointM;
-  const lossAt = (piece: number, c: number): number => {
-    if (!lossTo) return 0;
-    const c0 = chainageM[piece];
-    const c1 = piece + 1 < chainageM.length ? chainageM[piece + 1] : c0;
-    return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
-  };
+  // Plain locals, not closures over the input's union types: the loops below visit every point of a
+  // 100,000-station line, and each lookup stays one typed-array read.
+  const allowFixed = typeof allowableHeadM === 'number' ? allowableHeadM : 0;
+  const allowByPiece = typeof allowableHeadM === 'number' ? null : allowableHeadM;
+  const lossTo = input.headLossToPointM ?? null;
+  const n = chainageM.length;
   // Highest "pipe plus loss to reach it" at or after each point: a tank at point k must hold at
   // least highestAhead[k] - loss(k) + clearance for the design flow to pass every summit ahead.
   const highestAhead = new Float64Array(to + 1);
-  highestAhead[to] = pipeElevationM[to] + (lossTo?.[to] ?? 0);
-  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo?.[k] ?? 0), highestAhead[k + 1]);
+  highestAhead[to] = pipeElevationM[to] + (lossTo === null ? 0 : lossTo[to]);
+  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highestAhead[k + 1]);
+  const lossAt = (piece: number, c: number): number => {
+    if (lossTo === null) return 0;
+    const c0 = chainageM[piece];
+    const c1 = piece + 1 < n ? chainageM[piece + 1] : c0;
+    return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
+  };
   const floorAt = (ahead: number, piece: number, c: number): number => ahead - lossAt(piece, c) + clearance;
+  // lossAt at a piece's start and end (fraction 0 and 1, written out so the per-point loop has no division).
+  const lossAtStart = (piece: number): number => {
+    if (lossTo === null) return 0;
+    return piece + 1 < n && chainageM[piece + 1] > chainageM[piece] ? lossTo[piece] + 0 * (lossTo[piece + 1] - lossTo[piece]) : lossTo[piece];
+  };
+  const lossAtEnd = (piece: number): number => {
+    if (lossTo === null) return 0;
+    return piece + 1 < n && chainageM[piece + 1] > chainageM[piece] ? lossTo[piece] + (lossTo[piece + 1] - lossTo[piece]) : lossTo[piece];
+  };
   const tanks: PlannedTank[] = [];
   let level = input.startLevelM;
   let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
@@ -106,36 +118,43 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   // Every tank lowers the level by at least (rating - cover) > 0, so the loop ends; the cap only
   // guards against a caller's NaN.
   for (let guard = 0; guard < 1_000_000; guard++) {
-    const over = firstOverRating(input, at, level, to, allow);
+    const over = firstOverRating(chainageM, groundElevationM, pipeElevationM, allowFixed, allowByPiece, at, level, to);
     if (over === null) return { tanks, feasible: true };
     if (over.chainageM <= at.chainageM + EPS_M) {
       return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
     }
     // Sites are weighed from plain numbers; a Position is made only for a new best (a long reach
     // offers a site at every point, and an object for each would dominate the planner's time).
-    const pick: { best: Position | null } = { best: null };
+    let best: Position | null = null;
     const consider = (piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void => {
       const siteLevel = groundM + raise;
       if (siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) return;
-      if (siteLevel - pipeM > allow(piece) + EPS_M) return;
-      if (pick.best === null || siteLevel <= pick.best.groundM + raise) pick.best = { piece, chainageM: siteChainageM, pipeM, groundM };
+      if (siteLevel - pipeM > (allowByPiece === null ? allowFixed : allowByPiece[piece]) + EPS_M) return;
+      if (best === null || siteLevel <= best.groundM + raise) best = { piece, chainageM: siteChainageM, pipeM, groundM };
     };
     for (let k = at.piece; k <= over.piece; k++) {
-      const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
-      if (k > at.piece) {
-        consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], floorAt(highestAhead[k], k, chainageM[k]));
+      const first = k === at.piece;
+      const last = k === over.piece;
+      const pieceEndM = last ? over.chainageM : chainageM[k + 1];
+      const startLoss = first ? lossAt(k, at.chainageM) : lossAtStart(k);
+      if (!first) {
+        // `consider` on the point itself, its first two refusals written out: most points of a long window are no site.
+        const siteLevel = groundElevationM[k] + raise;
+        if (siteLevel >= highestAhead[k] - startLoss + clearance - EPS_M && siteLevel < level - EPS_M) {
+          consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], highestAhead[k] - startLoss + clearance);
+        }
       }
       // Where the tank level on the ground inside this piece comes down to the floor set by the
       // summits ahead (both vary linearly along the piece): the lowest usable site.
-      const c0 = k === at.piece ? at.chainageM : chainageM[k];
-      const g0 = k === at.piece ? at.groundM : groundElevationM[k];
-      const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
-      const f0 = g0 + raise - floorAt(highestAhead[k + 1], k, c0);
-      const f1 = g1 + raise - floorAt(highestAhead[k + 1], k, pieceEndM);
+      const c0 = first ? at.chainageM : chainageM[k];
+      const g0 = first ? at.groundM : groundElevationM[k];
+      const g1 = last ? over.groundM : groundElevationM[k + 1];
+      const f0 = g0 + raise - (highestAhead[k + 1] - startLoss + clearance);
+      const f1 = g1 + raise - (highestAhead[k + 1] - (last ? lossAt(k, pieceEndM) : lossAtEnd(k)) + clearance);
       if (f0 * f1 < 0) {
         const t = f0 / (f0 - f1);
-        const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
-        const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
+        const z0 = first ? at.pipeM : pipeElevationM[k];
+        const z1 = last ? over.pipeM : pipeElevationM[k + 1];
         const c = lerp(c0, pieceEndM, t);
         consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), floorAt(highestAhead[k + 1], k, c));
       }
@@ -143,7 +162,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     const overLoss = lossAt(over.piece, over.chainageM);
     const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
     consider(over.piece, over.chainageM, over.pipeM, over.groundM, floorAt(aheadOfOver, over.piece, over.chainageM));
-    const chosen = pick.best;
+    const chosen = best as Position | null;
     if (chosen === null) {
       return fail(
         over.chainageM,
@@ -159,22 +178,25 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
 
 /** First position at or after `at` where `level` minus the pipe passes the allowable head. */
 function firstOverRating(
-  input: TankPlanInput,
+  chainageM: ArrayLike<number>,
+  groundElevationM: ArrayLike<number>,
+  pipeElevationM: ArrayLike<number>,
+  allowFixed: number,
+  allowByPiece: ArrayLike<number> | null,
   at: Position,
   level: number,
   to: number,
-  allow: (piece: number) => number,
 ): Position | null {
-  const { chainageM, groundElevationM, pipeElevationM } = input;
   for (let j = at.piece; j < to; j++) {
-    const limit = allow(j);
-    const c0 = j === at.piece ? at.chainageM : chainageM[j];
-    const z0 = j === at.piece ? at.pipeM : pipeElevationM[j];
-    const g0 = j === at.piece ? at.groundM : groundElevationM[j];
+    const limit = allowByPiece === null ? allowFixed : allowByPiece[j];
+    const first = j === at.piece;
+    const z0 = first ? at.pipeM : pipeElevationM[j];
     const startExcess = level - z0 - limit;
-    if (startExcess > EPS_M) return { piece: j, chainageM: c0, pipeM: z0, groundM: g0 };
+    if (startExcess > EPS_M) return { piece: j, chainageM: first ? at.chainageM : chainageM[j], pipeM: z0, groundM: first ? at.groundM : groundElevationM[j] };
     const endExcess = level - pipeElevationM[j + 1] - limit;
     if (endExcess > EPS_M) {
+      const c0 = first ? at.chainageM : chainageM[j];
+      const g0 = first ? at.groundM : groundElevationM[j];
       // Fraction of the way from c0 to the next point where the excess reaches zero.
       const t = -startExcess / (endExcess - startExcess);
       return {
