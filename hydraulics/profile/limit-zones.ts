@@ -47,16 +47,20 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
   const mergeWithinM = Math.max(args.mergeWithinM ?? 0, 0);
   const ranges: LimitRange[] = [];
   let open = false;
-  let fromM = 0;
-  let worstExcessM = 0;
-  let worstChainageM = 0;
+  // The running figures live in a typed array, not in variables the helpers below capture: a
+  // number assigned to a captured variable is boxed anew each time, and `note` and `inside` run
+  // at every point of a long range.
+  const FROM = 0;
+  const WORST = 1;
+  const WORST_AT = 2;
+  const RECOVERY = 3;
+  const run = new Float64Array(4);
   // A closed range waits here until the value has come back inside by more than mergeWithinM.
   let pending: LimitRange | null = null;
-  let recoveryM = 0;
   const note = (excess: number, atM: number): void => {
-    if (excess > worstExcessM) {
-      worstExcessM = excess;
-      worstChainageM = atM;
+    if (excess > run[WORST]) {
+      run[WORST] = excess;
+      run[WORST_AT] = atM;
     }
   };
   // Ends stay exact; a range whose worst excess is within the tolerance is rounding, not a finding.
@@ -66,25 +70,27 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
   };
   const close = (toM: number): void => {
     open = false;
-    if (!(toM > fromM)) return;
-    pending = { fromM, toM, worstExcessM, worstChainageM };
-    recoveryM = 0;
+    if (!(toM > run[FROM])) return;
+    pending = { fromM: run[FROM], toM, worstExcessM: run[WORST], worstChainageM: run[WORST_AT] };
+    run[RECOVERY] = 0;
     if (mergeWithinM === 0) flush();
   };
   const openAt = (atM: number): void => {
     open = true;
     if (pending !== null) {
-      ({ fromM, worstExcessM, worstChainageM } = pending);
+      run[FROM] = pending.fromM;
+      run[WORST] = pending.worstExcessM;
+      run[WORST_AT] = pending.worstChainageM;
       pending = null;
     } else {
-      fromM = atM;
-      worstExcessM = 0;
+      run[FROM] = atM;
+      run[WORST] = 0;
     }
   };
   const inside = (byM: number): void => {
     if (pending === null) return;
-    recoveryM = Math.max(recoveryM, byM);
-    if (recoveryM > mergeWithinM) flush();
+    run[RECOVERY] = Math.max(run[RECOVERY], byM);
+    if (run[RECOVERY] > mergeWithinM) flush();
   };
   const n = chainageM.length;
   const fixedLimit = typeof limitM === 'number' ? limitM : 0;
