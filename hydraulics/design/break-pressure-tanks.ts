@@ -101,16 +101,8 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
   };
   const floorAt = (ahead: number, piece: number, c: number): number => ahead - lossAt(piece, c) + clearance;
-  // lossAt at a piece's start and end (fraction 0 and 1, written out so the per-point loop has no division).
-  const lossAtStart = (piece: number): number => {
-    if (lossTo === null) return 0;
-    return piece + 1 < n && chainageM[piece + 1] > chainageM[piece] ? lossTo[piece] + 0 * (lossTo[piece + 1] - lossTo[piece]) : lossTo[piece];
-  };
-  const lossAtEnd = (piece: number): number => {
-    if (lossTo === null) return 0;
-    return piece + 1 < n && chainageM[piece + 1] > chainageM[piece] ? lossTo[piece] + (lossTo[piece + 1] - lossTo[piece]) : lossTo[piece];
-  };
   const tanks: PlannedTank[] = [];
+  const best = new Float64Array(4);
   let level = input.startLevelM;
   let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
   const fail = (chainage: number, message: string): TankPlan => ({ tanks, feasible: false, problem: { chainageM: chainage, message } });
@@ -123,25 +115,47 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     if (over.chainageM <= at.chainageM + EPS_M) {
       return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
     }
-    // Sites are weighed from plain numbers; a Position is made only for a new best (a long reach
-    // offers a site at every point, and an object for each would dominate the planner's time).
-    let best: Position | null = null;
+    // Sites are weighed from plain numbers and the best is kept as its piece and a typed array
+    // (-, chainage, pipe, ground); its Position is made once, at the end. On falling ground nearly every point of
+    // a long window is a new best: an object (its numbers boxed) for each would be megabytes of
+    // garbage per plan.
+    let found = false;
+    let bestPiece = 0;
     const consider = (piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void => {
       const siteLevel = groundM + raise;
       if (siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) return;
       if (siteLevel - pipeM > (allowByPiece === null ? allowFixed : allowByPiece[piece]) + EPS_M) return;
-      if (best === null || siteLevel <= best.groundM + raise) best = { piece, chainageM: siteChainageM, pipeM, groundM };
+      if (!found || siteLevel <= best[3] + raise) {
+        found = true;
+        bestPiece = piece;
+        best[1] = siteChainageM;
+        best[2] = pipeM;
+        best[3] = groundM;
+      }
     };
+    // The per-point work is written out with no call taking or returning a number: an engine that
+    // does not inline such a call boxes each of those numbers, megabytes per plan on a long line.
     for (let k = at.piece; k <= over.piece; k++) {
       const first = k === at.piece;
       const last = k === over.piece;
       const pieceEndM = last ? over.chainageM : chainageM[k + 1];
-      const startLoss = first ? lossAt(k, at.chainageM) : lossAtStart(k);
+      const rising = k + 1 < n && chainageM[k + 1] > chainageM[k];
+      // lossAt at the piece's start and end (fractions 0 and 1), as lossAt computes them.
+      const startLoss = lossTo === null ? 0 : first ? lossAt(k, at.chainageM) : rising ? lossTo[k] + 0 * (lossTo[k + 1] - lossTo[k]) : lossTo[k];
+      const endLoss = lossTo === null ? 0 : last ? lossAt(k, pieceEndM) : rising ? lossTo[k] + (lossTo[k + 1] - lossTo[k]) : lossTo[k];
       if (!first) {
-        // `consider` on the point itself, its first two refusals written out: most points of a long window are no site.
+        // `consider` on the point itself.
+        const floorM = highestAhead[k] - startLoss + clearance;
         const siteLevel = groundElevationM[k] + raise;
-        if (siteLevel >= highestAhead[k] - startLoss + clearance - EPS_M && siteLevel < level - EPS_M) {
-          consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], highestAhead[k] - startLoss + clearance);
+        const usable =
+          !(siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) &&
+          !(siteLevel - pipeElevationM[k] > (allowByPiece === null ? allowFixed : allowByPiece[k]) + EPS_M);
+        if (usable && (!found || siteLevel <= best[3] + raise)) {
+          found = true;
+          bestPiece = k;
+          best[1] = chainageM[k];
+          best[2] = pipeElevationM[k];
+          best[3] = groundElevationM[k];
         }
       }
       // Where the tank level on the ground inside this piece comes down to the floor set by the
@@ -150,7 +164,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
       const g0 = first ? at.groundM : groundElevationM[k];
       const g1 = last ? over.groundM : groundElevationM[k + 1];
       const f0 = g0 + raise - (highestAhead[k + 1] - startLoss + clearance);
-      const f1 = g1 + raise - (highestAhead[k + 1] - (last ? lossAt(k, pieceEndM) : lossAtEnd(k)) + clearance);
+      const f1 = g1 + raise - (highestAhead[k + 1] - endLoss + clearance);
       if (f0 * f1 < 0) {
         const t = f0 / (f0 - f1);
         const z0 = first ? at.pipeM : pipeElevationM[k];
@@ -162,16 +176,15 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     const overLoss = lossAt(over.piece, over.chainageM);
     const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
     consider(over.piece, over.chainageM, over.pipeM, over.groundM, floorAt(aheadOfOver, over.piece, over.chainageM));
-    const chosen = best as Position | null;
-    if (chosen === null) {
+    if (!found) {
       return fail(
         over.chainageM,
         'every tank site low enough to protect the pipe lies below a summit further on, which the water could not pass: use a higher pressure class',
       );
     }
-    tanks.push({ chainageM: chosen.chainageM, waterLevelM: chosen.groundM + raise });
-    level = chosen.groundM + raise;
-    at = chosen;
+    tanks.push({ chainageM: best[1], waterLevelM: best[3] + raise });
+    level = best[3] + raise;
+    at = { piece: bestPiece, chainageM: best[1], pipeM: best[2], groundM: best[3] };
   }
   return fail(at.chainageM, 'tank planning did not converge');
 }
