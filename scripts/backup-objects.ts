@@ -140,17 +140,20 @@ async function load(folder: string, journalDir: string): Promise<void> {
   // 1. The whole backup is checked before anything is touched.
   const entries = readManifest(path.join(folder, 'objects.json'));
   const backupDir = path.join(folder, 'objects');
-  const incoming = new Map(entries.map((entry) => [entry.key, { entry, bytes: savedBytes(backupDir, entry, `${folder}/objects`) }]));
+  const where = `${folder}/objects`;
+  // Checked one file at a time (a bucket can be larger than memory), read again when written.
+  for (const entry of entries) savedBytes(backupDir, entry, where);
+  const incoming = new Map(entries.map((entry) => [entry.key, entry]));
 
   // 2. What the restore will replace or remove is saved first, and the plan written down.
-  const current = await step('listing the bucket', () => listKeys(''));
+  const current = new Set(await step('listing the bucket', () => listKeys('')));
   const journal: Journal = { before: [], added: [] };
   const toPut: string[] = [];
   const toRemove: string[] = [];
   for (const key of new Set([...current, ...incoming.keys()])) {
-    const now = current.includes(key) ? await readIfStillThere(key) : null;
+    const now = current.has(key) ? await readIfStillThere(key) : null;
     const wanted = incoming.get(key);
-    if (now && wanted && sha256(now.bytes) === wanted.entry.sha256 && now.contentType === wanted.entry.contentType) continue;
+    if (now && wanted && sha256(now.bytes) === wanted.sha256 && now.contentType === wanted.contentType) continue;
     if (now) {
       const file = `${String(journal.before.length + 1).padStart(6, '0')}.bin`;
       fs.writeFileSync(path.join(journalDir, file), now.bytes, { mode: 0o600 });
@@ -165,7 +168,8 @@ async function load(folder: string, journalDir: string): Promise<void> {
   // 3. The changes; any failure puts back what was changed.
   try {
     for (const key of toPut) {
-      const { entry, bytes } = incoming.get(key)!;
+      const entry = incoming.get(key)!;
+      const bytes = savedBytes(backupDir, entry, where);
       await step(`writing object ${key}`, () => putObject(key, bytes, entry.contentType));
     }
     for (const key of toRemove) await step(`removing object ${key}, which is not in the backup`, () => deleteObject(key));
