@@ -103,6 +103,21 @@ describe('npm run backup / npm run restore', () => {
     expect(await listKeys('attachments/check/')).toEqual(['attachments/check/spring-box.txt']);
   }, 240_000);
 
+  it('backs up a bucket of more than one listing page (1,000 keys) in full', async () => {
+    const { putObject, deleteObject, listKeys } = await storage();
+    const keys = Array.from({ length: 1005 }, (_, i) => `attachments/pages/reading-${String(i).padStart(4, '0')}.txt`);
+    for (let i = 0; i < keys.length; i += 50) await Promise.all(keys.slice(i, i + 50).map((key) => putObject(key, new TextEncoder().encode(key), 'text/plain')));
+    try {
+      const folder = path.join(work, 'many-objects');
+      await script('backup', folder);
+      const saved = (JSON.parse(fs.readFileSync(path.join(folder, 'objects.json'), 'utf8')) as { key: string }[]).map((e) => e.key);
+      expect(saved.filter((key) => key.startsWith('attachments/pages/')).sort()).toEqual(keys);
+    } finally {
+      for (let i = 0; i < keys.length; i += 50) await Promise.all(keys.slice(i, i + 50).map((key) => deleteObject(key)));
+    }
+    expect(await listKeys('attachments/pages/')).toEqual([]);
+  }, 240_000);
+
   it('refuses a folder that is not a complete backup and changes nothing', async () => {
     const empty = fs.mkdtempSync(path.join(work, 'empty-'));
     await expect(script('restore', empty)).rejects.toMatchObject({ stderr: expect.stringContaining('not a complete Runnel backup') });
