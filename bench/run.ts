@@ -15,6 +15,7 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
   'api-capacity-50': async () => (await import('./api-load')).apiCapacity50,
   'api-latency-50u': async () => (await import('./api-load')).apiLatency50u,
+  'api-list-cost': async () => (await import('./api-load')).apiListCost,
 };
 
 async function main(): Promise<void> {
