@@ -198,6 +198,25 @@ describe('npm run backup / npm run restore when object storage or the database f
     }
   }, 120_000);
 
+  it('when the bucket cannot be put back either, keeps the objects as they were and says where and how to put them back', async () => {
+    // The database half fails, then putting back the one object the restore removed is refused too.
+    await query(scratchUrl, 'CREATE SCHEMA restore_blocker; CREATE VIEW restore_blocker.team_names AS SELECT name FROM public.teams');
+    const journals = fs.mkdtempSync(path.join(work, 'journals-'));
+    try {
+      const err = await failing('restore', base, { ...storageFault({ match: 'attachments/fault/air-valve.txt', op: 'put', nth: 1 }), TMPDIR: journals });
+      const journal = /the objects as they were are in (\S+);/.exec(err)?.[1];
+      expect(err).toMatch(/putting object attachments\/fault\/air-valve\.txt back in the bucket runnel-backup-check-\w+ at \S+ failed: injected storage fault/);
+      expect(journal && path.dirname(journal)).toBe(journals);
+      expect(await rowsNow()).toEqual(rowsBefore);
+      expect((await objectsNow())['attachments/fault/air-valve.txt']).toBeUndefined();
+      // The command the message gives, once storage answers again, puts the bucket back as it was.
+      await run('node', ['--import', 'tsx', 'scripts/backup-objects.ts', 'undo', journal!], { env: { ...process.env, RUNNEL_S3_BUCKET: scratchBucket }, timeout: 60_000 });
+      await unchanged();
+    } finally {
+      await query(scratchUrl, 'DROP SCHEMA restore_blocker CASCADE');
+    }
+  }, 120_000);
+
   it('a backup whose storage half fails names the step and leaves no folder behind', async () => {
     const down = path.join(work, 'backup-storage-down');
     expect(await failing('backup', down, STORAGE_DOWN)).toMatch(/listing the bucket in the bucket runnel-backup-check-\w+ at http:\/\/127\.0\.0\.1:9 failed.*no backup was written/s);
