@@ -18,27 +18,44 @@ use_database_and_storage
 
 objects() { node --disable-warning=NodeVersionSupportWarning --import tsx scripts/backup-objects.ts "$@"; }
 journal="$(mktemp -d "${TMPDIR:-/tmp}/runnel-restore-XXXXXX")" || die "cannot make a scratch folder; nothing restored"
-keep_journal=""
-trap '[ -z "$keep_journal" ] && rm -rf "$journal"; ops_cleanup' EXIT
+undo_hint="node --import tsx scripts/backup-objects.ts undo $journal"
+# The journal (the objects as they were) goes only once the bucket is whole again: restored with the
+# database, or put back. Stopped any other way (Ctrl-C, a crash), it stays, and this says where.
+bucket_whole=""
+finish() {
+  if [ -n "$bucket_whole" ] || [ ! -f "$journal/journal.json" ]; then
+    rm -rf "$journal"
+  else
+    printf '\033[1;31m[runnel]\033[0m object storage may be part restored: the objects as they were are in %s; put them back with: %s\n' "$journal" "$undo_hint" >&2
+  fi
+  ops_cleanup
+}
+trap finish EXIT
 
 log "restoring object storage (bucket ${RUNNEL_S3_BUCKET:-runnel-files})"
 rc=0
 objects load "$from" "$journal" || rc=$?
-case $rc in
-  0) ;;
-  3) keep_journal=1
-     die "object storage restore failed and the bucket could not be put back (message above): the objects as they were are in $journal; put them back with: node --import tsx scripts/backup-objects.ts undo $journal. The database was not touched" ;;
-  *) die "object storage restore failed (message above); object storage is as it was and the database was not touched" ;;
-esac
+if [ "$rc" = 1 ]; then
+  bucket_whole=1
+  die "object storage restore failed (message above); object storage is as it was and the database was not touched"
+elif [ "$rc" != 0 ]; then
+  # 3: the bucket could not be put back; anything else: the step ended abnormally (a signal, a crash).
+  if [ "$rc" != 3 ] && [ -f "$journal/journal.json" ] && objects undo "$journal"; then
+    bucket_whole=1
+    die "object storage restore stopped part way (exit status $rc); the bucket was put back as it was and the database was not touched"
+  fi
+  die "object storage restore failed and the bucket could not be put back (message above); the database was not touched"
+fi
 
 log "restoring the database from $from/database.dump"
 if ! "$PG_BIN/pg_restore" --clean --if-exists --no-owner --no-privileges --single-transaction --exit-on-error \
   --dbname "$DATABASE_URL" "$from/database.dump"; then
   log "putting object storage back as it was"
   if objects undo "$journal"; then
+    bucket_whole=1
     die "pg_restore failed (message above); the database was left as it was and object storage was put back as it was"
   fi
-  keep_journal=1
-  die "pg_restore failed (message above); the database was left as it was, but object storage could not be put back (message above): the objects as they were are in $journal; put them back with: node --import tsx scripts/backup-objects.ts undo $journal"
+  die "pg_restore failed (message above); the database was left as it was, but object storage could not be put back (message above)"
 fi
+bucket_whole=1
 log "restore complete from $from"
