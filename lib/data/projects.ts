@@ -64,9 +64,26 @@ export async function getProject(projectId: string): Promise<ProjectSummary | nu
   return p ? toSummary(p) : null;
 }
 
+// The team lookups run first on every request about a project or one of its rows (teamRoute's
+// `teamOf`): one fixed statement each, a join rather than two reads.
 export async function teamOfProject(projectId: string): Promise<string | null> {
-  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'], raw: true });
-  return p?.teamId ?? null;
+  const [row] = await models().sequelize.query<{ teamId: string }>('SELECT team_id AS "teamId" FROM projects WHERE id = :projectId', {
+    type: QueryTypes.SELECT,
+    replacements: { projectId },
+  });
+  return row?.teamId ?? null;
+}
+
+/** Tables whose rows each belong to one project (a `project_id` column). */
+export type ProjectRowTable = 'lines' | 'revisions' | 'site_photos' | 'comments' | 'routes';
+
+/** The team owning a project's row, or null when there is no such row. */
+export async function teamOfProjectRow(table: ProjectRowTable, id: string): Promise<string | null> {
+  const [row] = await models().sequelize.query<{ teamId: string }>(`SELECT p.team_id AS "teamId" FROM ${table} r JOIN projects p ON p.id = r.project_id WHERE r.id = :id`, {
+    type: QueryTypes.SELECT,
+    replacements: { id },
+  });
+  return row?.teamId ?? null;
 }
 
 export async function createProject(

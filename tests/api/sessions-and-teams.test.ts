@@ -5,6 +5,9 @@ import { DELETE as removeMember, PATCH as changeRole } from '@/app/api/teams/[te
 import { GET as listTeamProjects } from '@/app/api/teams/[teamId]/projects/route';
 import { GET as listTeams } from '@/app/api/teams/route';
 import { authOptions } from '@/lib/auth/options';
+import { teamOfLine } from '@/lib/data/lines';
+import { teamOfProject } from '@/lib/data/projects';
+import { teamOfRoute } from '@/lib/data/routes';
 import { models } from '@/models';
 import { call, createTeamFixture, sessionCookie } from '../support/api';
 
@@ -93,6 +96,16 @@ describe("a team's project list", () => {
     const one = async (projectId: string) => (await call(getProject, { method: 'GET', path: '/x', params: { projectId }, userId: f.users.viewer.id })).json.project;
     expect(res.json.projects).toEqual([await one(newer.id), await one(f.projectId)]);
     expect(res.json.projects[1]).toMatchObject({ frostDepthM: 0.9, decimalMark: ',', timeZone: 'Pacific/Auckland', archived: true });
+  });
+
+  it("finds the team of a project and of a project's rows, and none for an id that names nothing", async () => {
+    const missing = '00000000-0000-4000-8000-000000000000';
+    expect(await teamOfProject(f.projectId)).toBe(f.teamId);
+    expect(await teamOfRoute(f.routeId)).toBe(f.teamId);
+    expect(await teamOfLine(f.lineId)).toBe(f.teamId);
+    for (const lookup of [teamOfProject, teamOfRoute, teamOfLine]) expect(await lookup(missing)).toBeNull();
+    // A project id is not a line id: each lookup reads its own table.
+    expect(await teamOfLine(f.projectId)).toBeNull();
   });
 
   it('answers a team that does not exist as it answers a team the user is not in (404), and no session first (401)', async () => {
