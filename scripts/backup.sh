@@ -10,7 +10,7 @@ use_database_and_storage
 out="${1:-${RUNNEL_BACKUP_DIR:-backups}/runnel-$(date -u +%Y%m%dT%H%M%SZ)}"
 out="${out%/}"
 if [ -e "$out" ] && [ -n "$(ls -A "$out" 2>/dev/null)" ]; then die "$out already exists and is not empty; choose another folder"; fi
-mkdir -p "$(dirname "$out")"
+(umask 077; mkdir -p "$(dirname "$out")")
 partial="$(mktemp -d "$out.partial-XXXXXX")" || die "cannot write beside $out"
 remove_partial() { rm -rf "$partial"; }
 trap 'remove_partial; ops_cleanup' EXIT
