@@ -3,8 +3,9 @@ import { FLOW_UNITS_M3S, HEAD_UNITS_M, headMToPressurePa, LENGTH_UNITS_M, PRESSU
 
 /**
  * Project units at the edge: every figure is stored and computed in SI and shown (or typed) in the
- * project's unit system. One table, so every screen shows the same unit and the same decimals for
- * the same quantity. Sizes come from the engineering core's unit tables (hydraulics/units.ts,
+ * project's unit system. One table, so every screen, the PDF and the CSV files show the same unit and
+ * the same decimals for the same quantity (elevations, head losses and depths of cover to the
+ * hundredth, as a level book and a friction table write them; heads to the tenth). Sizes come from the engineering core's unit tables (hydraulics/units.ts,
  * hydraulics/constants.ts).
  */
 export type UnitSystem = 'metric' | 'us';
@@ -16,6 +17,8 @@ export type Quantity =
   | 'chainage'
   | 'elevation'
   | 'head'
+  | 'headLoss'
+  | 'depth'
   | 'diameter'
   | 'velocity'
   | 'designFlow'
@@ -45,8 +48,10 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
   metric: {
     length: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
     chainage: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
-    elevation: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 1 },
+    elevation: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 2 },
     head: { symbol: 'm', si: HEAD_UNITS_M.m, decimals: 1 },
+    headLoss: { symbol: 'm', si: HEAD_UNITS_M.m, decimals: 2 },
+    depth: { symbol: 'm', si: LENGTH_UNITS_M.m, decimals: 2 },
     diameter: { symbol: 'mm', si: LENGTH_UNITS_M.mm, decimals: 'auto' },
     velocity: { symbol: 'm/s', si: LENGTH_UNITS_M.m, decimals: 2 },
     designFlow: { symbol: 'L/s', si: FLOW_UNITS_M3S['L/s'], decimals: 2 },
@@ -62,8 +67,10 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
   us: {
     length: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 1 },
     chainage: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 0 },
-    elevation: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 1 },
+    elevation: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 2 },
     head: { symbol: 'ft', si: HEAD_UNITS_M.ft, decimals: 1 },
+    headLoss: { symbol: 'ft', si: HEAD_UNITS_M.ft, decimals: 2 },
+    depth: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 2 },
     diameter: { symbol: 'in', si: LENGTH_UNITS_M.in, decimals: 'auto' },
     velocity: { symbol: 'ft/s', si: LENGTH_UNITS_M.ft, decimals: 2 },
     designFlow: { symbol: 'US gpm', si: FLOW_UNITS_M3S['US gpm'], decimals: 1 },

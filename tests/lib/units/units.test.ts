@@ -138,7 +138,9 @@ describe('values with their units, the same on every screen', () => {
     expect(formatQuantity('chainage', 4050 * 0.3048, 'us')).toBe('4,050 ft');
     expect(formatQuantity('length', 1402.6, 'metric')).toBe('1,402.6 m');
     expect(formatQuantity('length', 304.8, 'us', 0)).toBe('1,000 ft');
-    expect(formatQuantity('elevation', 316.52, 'metric')).toBe('316.5 m');
+    expect(formatQuantity('elevation', 316.524, 'metric')).toBe('316.52 m'); // elevations to the hundredth, as a level book writes them
+    expect(formatQuantity('headLoss', 3.456, 'metric')).toBe('3.46 m');
+    expect(formatQuantity('depth', 0.762, 'us')).toBe('2.50 ft');
     expect(formatQuantity('head', 42.13, 'metric')).toBe('42.1 m');
   });
 
