@@ -1,7 +1,7 @@
 import { findPipe, PIPE_SERIES } from '@/hydraulics/catalogue/index';
 import type { RamEfficiencyTableId } from '@/hydraulics/ram/efficiency-table';
 import type { RamSiteRecord } from '@/lib/lift/records';
-import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units';
+import { fromDisplay, inputValue, unitDefaults, type UnitSystem } from '@/lib/units';
 import { numberFrom, numberOrNull } from './typed-number';
 
 /** The ram form's boxes, as typed (project units). */
@@ -32,10 +32,11 @@ export interface RamSiteFormState {
   notes: string;
 }
 
-export function emptyRamSiteForm(): RamSiteFormState {
+/** An empty ram form: the delivery pipe opens on the project's pipe series (ASTM in a US project, ISO in a metric one). */
+export function emptyRamSiteForm(units: UnitSystem): RamSiteFormState {
   return {
     name: '', sourceId: '', tankId: '', driveFlow: '', fall: '', driveLength: '', driveBore: '', driveMaterial: 'steel', driveRigid: 'auto',
-    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: 'custom', pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
+    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: unitDefaults(units).pipeSeriesId, pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
     sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', efficiencyTableId: 'trade-pocketbook', notes: '',
   };
 }

@@ -28,7 +28,7 @@ export interface RamSiteFormProps {
 
 /** The ram site: fall, drive pipe, lift, delivery pipe, size class and pumps; the plan updates as you type. */
 export function RamSiteForm({ projectId, units, site, sources, tanks, routes, onDone }: RamSiteFormProps) {
-  const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm()));
+  const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm(units)));
   const set = <K extends keyof RamSiteFormState>(key: K, value: RamSiteFormState[K]) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveRamSite(projectId);
   const form = useSaveForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.');
@@ -46,7 +46,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (!(await form.submit(ramSiteInputFrom(state, units)))) return;
-    if (!site) setState(emptyRamSiteForm());
+    if (!site) setState(emptyRamSiteForm(units));
     onDone?.();
   }
 

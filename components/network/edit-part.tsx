@@ -12,7 +12,7 @@ import type { NetworkLinkRecord, NetworkNodeRecord } from '@/lib/network/records
 import type { NetworkView } from '@/lib/network/view';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
-import { formatQuantity, fromDisplay, toDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
+import { formatQuantity, fromDisplay, toDisplay, unitDefaults, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { fieldErrorsOf } from '@/lib/validations/common';
 import { NetworkLinkSchema, NetworkNodeSchema, VALVE_KINDS } from '@/lib/validations/network';
 
@@ -128,7 +128,7 @@ function LinkFigures({ projectId, record, units }: { projectId: string; record: 
       {(record.kind === 'pipe' || pipeId) && (
         <div>
           <span className="block text-xs font-medium text-creek-900">Pipe (size and class)</span>
-          <PipePicker id="edit-link-pipe" pipeId={pipeId ?? 'pe100-iso4427-sdr11-32mm'} custom={[]} disabled={false} onPick={(pipe) => setData({ pipe })} />
+          <PipePicker id="edit-link-pipe" pipeId={pipeId ?? unitDefaults(units).networkPipeId} custom={[]} disabled={false} onPick={(pipe) => setData({ pipe })} />
           {e('data.pipe') && <p role="alert" className="mt-1 text-xs text-clay-600">{e('data.pipe')!.join(' ')}</p>}
         </div>
       )}

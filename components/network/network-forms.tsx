@@ -9,14 +9,13 @@ import { SelectField, TextField } from '@/components/ui/field';
 import type { NetworkView } from '@/lib/network/view';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
-import { fromDisplay, unitOf, type UnitSystem } from '@/lib/units';
+import { fromDisplay, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { NetworkLinkSchema, NetworkNodeSchema, OUTLET_KINDS, VALVE_KINDS } from '@/lib/validations/network';
 import { fieldErrorsOf } from '@/lib/validations/common';
 
 type Errors = Record<string, string[]>;
 // Typed numbers read with the project's decimal mark (the one parser); unreadable -> NaN, which the schema names.
 const num = numberOrNull;
-const DEFAULT_PIPE = 'pe100-iso4427-sdr11-32mm';
 
 function errorsOf(error: unknown): Errors {
   return error instanceof ApiError && error.fields ? error.fields : {};
@@ -118,7 +117,7 @@ export function AddNodeForm({ projectId, view, units }: { projectId: string; vie
 export function AddLinkForm({ projectId, view, units }: { projectId: string; view: NetworkView; units: UnitSystem }) {
   const save = useSaveNetworkLink(projectId);
   const [kind, setKind] = useState<'pipe' | 'valve'>('pipe');
-  const [pipeId, setPipeId] = useState(DEFAULT_PIPE);
+  const [pipeId, setPipeId] = useState(() => unitDefaults(units).networkPipeId);
   const [errors, setErrors] = useState<Errors>({});
   const [done, setDone] = useState<string | null>(null);
 

@@ -166,9 +166,10 @@ export async function createLine(projectId: string, userId: string, input: Creat
   await assertRouteInProject(input.routeId, projectId);
   const window = { fromChainageM: input.fromChainageM ?? null, toChainageM: input.toChainageM ?? null };
   const stations = await stationsOfLine(input.routeId, window);
-  const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
+  const context = await lineSiteContext(projectId);
+  const design = (input.design as LineDesign | undefined) ?? startingDesign(stations, context.unitSystem ?? 'metric');
   await assertRamSiteInProject(design, projectId);
-  assertDesignFits(design, stations, await lineSiteContext(projectId));
+  assertDesignFits(design, stations, context);
   const { Line: L, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const line = await L.create(

@@ -3,6 +3,7 @@ import { models } from '../../models';
 import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
+import { unitDefaults } from '../units/defaults';
 import type { UpdateProjectInput } from '../validations/projects';
 
 export interface ProjectSummary {
@@ -60,7 +61,8 @@ export async function createProject(
   userId: string,
   input: { name: string; description: string; unitSystem: UnitSystem; siteNotes: string },
 ): Promise<ProjectSummary> {
-  const p = await models().Project.create({ ...input, teamId, createdBy: userId });
+  // A US project writes decimals with a point from the start; a metric one follows each browser's language until set.
+  const p = await models().Project.create({ ...input, decimalMark: unitDefaults(input.unitSystem).decimalMark, teamId, createdBy: userId });
   return toSummary(p);
 }
 

@@ -71,6 +71,7 @@ function figures(u: DisplayUnits) {
     head: (h: number | undefined) => formatHeadPressure(n(h), s),
     length: (h: number | undefined) => formatQuantity('head', n(h), s),
     depth: (d: number | undefined) => formatQuantity('depth', n(d), s),
+    temperature: (c: number | undefined) => formatQuantity('temperature', n(c), s),
     level: (z: number | undefined) => formatQuantity('elevation', n(z), s),
     flow: (q: number | undefined) => formatQuantity('designFlow', n(q), s),
     speed: (v: number | undefined) => formatQuantity('velocity', n(v), s),
@@ -111,7 +112,7 @@ const WORDING: Record<WarningCode, Wording> = {
     'Lower the pipe through this range, route around the rise, or pump instead of siphoning.',
   ],
   'static-over-rating': (v, f) => [
-    `With the line shut, static pressure from ${f.range(v.fromM, v.toM)} rises above the ${f.head(v.limitHeadM)} allowed for ${v.pipeLabel} (rating derated for ${v.waterTemperatureC} °C water, divided by the safety factor ${v.safetyFactor}), up to ${f.head(v.headM)} at ${f.ch(v.worstChainageM)}. A pipe over its rating can burst.${scatterSentence(v, f)}`,
+    `With the line shut, static pressure from ${f.range(v.fromM, v.toM)} rises above the ${f.head(v.limitHeadM)} allowed for ${v.pipeLabel} (rating derated for ${f.temperature(v.waterTemperatureC)} water, divided by the safety factor ${v.safetyFactor}), up to ${f.head(v.headM)} at ${f.ch(v.worstChainageM)}. A pipe over its rating can burst.${scatterSentence(v, f)}`,
     (v.tankChainagesM ?? []).length > 0
       ? `Add a break-pressure tank at ${(v.tankChainagesM ?? []).map((c) => f.ch(c)).join(', ')} (the fewest that keep every pipe within its rating), or use a higher pressure class here.`
       : `Use a higher pressure class through this range${v.problem ? `: ${v.problem}` : ''}.`,

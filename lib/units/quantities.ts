@@ -29,7 +29,8 @@ export type Quantity =
   | 'pressure'
   | 'area'
   | 'depthPerDay'
-  | 'volumePerDay';
+  | 'volumePerDay'
+  | 'temperature';
 
 /** Fixed decimals, or 'auto': fewer decimals as the number grows (see formatNumber). */
 export type Decimals = number | 'auto';
@@ -39,6 +40,8 @@ export interface UnitDef {
   /** Size of one display unit in SI. */
   si: number;
   decimals: Decimals;
+  /** Display value of SI zero (temperature: 0 °C is 32 °F); none for the other quantities. */
+  offset?: number;
 }
 
 const LITRE_M3 = 1e-3;
@@ -63,6 +66,7 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
     area: { symbol: 'm²', si: 1, decimals: 'auto' },
     depthPerDay: { symbol: 'mm/day', si: LENGTH_UNITS_M.mm, decimals: 'auto' },
     volumePerDay: { symbol: 'L/day', si: LITRE_M3, decimals: 'auto' },
+    temperature: { symbol: '°C', si: 1, decimals: 0 },
   },
   us: {
     length: { symbol: 'ft', si: LENGTH_UNITS_M.ft, decimals: 1 },
@@ -83,6 +87,8 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
     // Irrigation depth: a week is how US growers read it.
     depthPerDay: { symbol: 'in/week', si: INCH_M / 7, decimals: 'auto' },
     volumePerDay: { symbol: 'US gal/day', si: US_GALLON_M3, decimals: 'auto' },
+    // Water temperature is kept in °C (the core's unit); °F = °C × 9/5 + 32.
+    temperature: { symbol: '°F', si: 5 / 9, decimals: 0, offset: 32 },
   },
 };
 
@@ -97,12 +103,14 @@ export function unitOf(quantity: Quantity, system: UnitSystem): string {
 
 /** SI -> the project's unit. */
 export function toDisplay(quantity: Quantity, valueSi: number, system: UnitSystem): number {
-  return valueSi / UNITS[system][quantity].si;
+  const def = UNITS[system][quantity];
+  return valueSi / def.si + (def.offset ?? 0);
 }
 
 /** The project's unit -> SI (for forms). */
 export function fromDisplay(quantity: Quantity, value: number, system: UnitSystem): number {
-  return value * UNITS[system][quantity].si;
+  const def = UNITS[system][quantity];
+  return (value - (def.offset ?? 0)) * def.si;
 }
 
 /** The gauge pressure of a head of water at `temperatureC` (the core's density; 20 °C by default), in the project's unit. */

@@ -40,6 +40,9 @@ test('a designer enters a ram site, sees litres a day and the tank fill time, an
   await ramForm.getByLabel('Drive pipe bore (mm)').fill('35.05');
   await ramForm.getByLabel('Lift, pump to delivery outlet (m)').fill('10.7');
   await ramForm.getByLabel('Delivery pipe length (m)').fill('107');
+  // The delivery pipe opens on the project's pipe series (ISO 4427 here); this ram has a pipe of its own.
+  await expect(ramForm.getByLabel('Pipe', { exact: true })).toHaveValue('pe100-iso4427-sdr11');
+  await ramForm.getByLabel('Pipe', { exact: true }).selectOption('custom');
   await ramForm.getByLabel('Delivery pipe bore (mm)').fill('20.93');
   await ramForm.getByLabel('Pressure rating (kPa)').fill('689');
   await expect(ramForm.getByTestId('ram-preview')).toContainText('L/day');

@@ -160,7 +160,10 @@ describe('values with their units, the same on every screen', () => {
     expect(formatQuantity('pressure', 800_000, 'metric')).toBe('800 kPa');
     expect(formatQuantity('pressure', 800_000, 'us')).toBe(`${(800_000 / 6894.757293168).toFixed(1)} psi`);
     expect(formatTemperature(20, 'metric')).toBe('20 °C');
-    expect(formatTemperature(20, 'us')).toBe('20 °C (68 °F)');
+    expect(formatTemperature(20, 'us')).toBe('68 °F (20 °C)');
+    expect(formatTemperature(4, 'us')).toBe('39 °F (4 °C)'); // 4 × 9/5 + 32 = 39.2
+    expect(fromDisplay('temperature', 68, 'us')).toBeCloseTo(20, 12);
+    expect(toDisplay('temperature', 40, 'us')).toBeCloseTo(104, 12);
   });
 
   it('volumes, durations and shares (what lift & storage shows)', () => {
