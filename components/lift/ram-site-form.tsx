@@ -13,6 +13,7 @@ import { formatDuration, formatQuantity, inputValue, unitOf, type UnitSystem } f
 import { RamSiteSchema } from '@/lib/validations/ram-sites';
 import { DeliveryPipeFields } from './delivery-pipe-fields';
 import { NumberField } from './number-field';
+import { RAM_SITE_WORDS } from '@/lib/validations/field-word-tables';
 import { emptyRamSiteForm, ramSiteFormFrom, ramSiteInputFrom, type RamSiteFormState } from './ram-site-form-state';
 import { useSaveForm } from '@/lib/forms/use-save-form';
 
@@ -31,7 +32,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm(units)));
   const set = <K extends keyof RamSiteFormState>(key: K, value: RamSiteFormState[K]) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveRamSite(projectId);
-  const form = useSaveForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.');
+  const form = useSaveForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.', { table: RAM_SITE_WORDS, units });
   const tankVolumeM3 = tanks.find((tank) => tank.id === state.tankId)?.volumeM3 ?? null;
   const preview = useMemo(() => {
     if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;

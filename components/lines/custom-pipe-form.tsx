@@ -3,7 +3,8 @@
 import { useState, type FormEvent } from 'react';
 import type { FieldErrors } from '@/lib/errors';
 import { fromDisplay, type DisplayUnits } from '@/lib/units';
-import { fieldErrorsOf } from '@/lib/validations/common';
+import { CUSTOM_PIPE_WORDS } from '@/lib/validations/field-word-tables';
+import { fieldErrorsIn } from '@/lib/validations/field-words';
 import { CustomPipeSchema, type LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
 
@@ -40,7 +41,7 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
       source: String(f.get('source') ?? '').trim(),
     };
     const parsed = CustomPipeSchema.safeParse(candidate);
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
+    if (!parsed.success) return setFields(fieldErrorsIn(parsed.error, units.system, CUSTOM_PIPE_WORDS));
     if (design.pipes.some((p) => p.id === id)) return setFields({ label: ['A custom pipe with this name exists already'] });
     setFields({});
     const problem = change({ ...design, pipes: [...design.pipes, parsed.data] }, `add the custom pipe ${label}`);

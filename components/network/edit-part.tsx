@@ -13,7 +13,8 @@ import type { NetworkView } from '@/lib/network/view';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
 import { formatQuantity, fromDisplay, toDisplay, unitDefaults, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
-import { fieldErrorsOf } from '@/lib/validations/common';
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
+import { fieldErrorsIn } from '@/lib/validations/field-words';
 import { NetworkLinkSchema, NetworkNodeSchema, VALVE_KINDS } from '@/lib/validations/network';
 
 type Errors = Record<string, string[]>;
@@ -63,7 +64,7 @@ function NodeFigures({ projectId, record, units }: { projectId: string; record: 
 
   function submit() {
     const parsed = NetworkNodeSchema.safeParse(draft);
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
     setErrors({});
     save.mutate({ id, input: parsed.data }, { onError: (error) => setErrors(apiErrors(error)) });
   }
@@ -115,7 +116,7 @@ function LinkFigures({ projectId, record, units }: { projectId: string; record: 
 
   function submit() {
     const parsed = NetworkLinkSchema.safeParse(draft);
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
     setErrors({});
     save.mutate({ id, input: parsed.data }, { onError: (error) => setErrors(apiErrors(error)) });
   }

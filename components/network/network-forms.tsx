@@ -11,7 +11,8 @@ import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
 import { fromDisplay, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { NetworkLinkSchema, NetworkNodeSchema, OUTLET_KINDS, VALVE_KINDS } from '@/lib/validations/network';
-import { fieldErrorsOf } from '@/lib/validations/common';
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
+import { fieldErrorsIn } from '@/lib/validations/field-words';
 
 type Errors = Record<string, string[]>;
 // Typed numbers read with the project's decimal mark (the one parser); unreadable -> NaN, which the schema names.
@@ -63,7 +64,7 @@ export function AddNodeForm({ projectId, view, units }: { projectId: string; vie
       },
     };
     const parsed = NetworkNodeSchema.safeParse(candidate);
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
     setErrors({});
     const target = event.currentTarget;
     save.mutate({ id: null, input: parsed.data }, {
@@ -138,7 +139,7 @@ export function AddLinkForm({ projectId, view, units }: { projectId: string; vie
       },
     };
     const parsed = NetworkLinkSchema.safeParse(candidate);
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
     setErrors({});
     const target = event.currentTarget;
     save.mutate({ id: null, input: parsed.data }, {

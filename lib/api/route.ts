@@ -4,9 +4,12 @@ import type { z } from 'zod';
 import { userFromRequest } from '../auth/session';
 import type { SessionUser } from '../auth/users';
 import { forbidden, notFound, unauthenticated } from '../errors';
+import type { UnitSystem } from '../units/index';
+import type { FieldWordTable } from '../validations/field-words';
+import { fieldErrorsIn } from '../validations/field-words';
 import { can, type Permission } from '../permissions';
 import type { Role } from '../roles';
-import { parseOrThrow, readJsonBody } from './body';
+import { parseOrThrow, readJsonBody, type FieldsOf } from './body';
 import { roleOnTeam } from './membership';
 import { errorResponse, json } from './respond';
 
@@ -28,6 +31,14 @@ interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   permission: Permission;
   /** The team that owns the resource named by the params; null when it does not exist. */
   teamOf: (params: Infer<P>) => Promise<string | null>;
+  /** A refused body's fields named as the screen names them, bounds in the project's units. */
+  bodyWords?: BodyWords<Infer<P>>;
+}
+
+interface BodyWords<P> {
+  table: FieldWordTable;
+  /** The unit system of the project the params name (read before the body, so a refusal can be worded). */
+  unitsOf: (params: P) => Promise<UnitSystem>;
 }
 
 export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
@@ -52,8 +63,15 @@ async function parseParams<P extends z.ZodType | undefined>(schema: P, ctx: Rout
   return (schema ? parseOrThrow(schema, raw, 'The address names something that cannot exist') : undefined) as Infer<P>;
 }
 
-async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number): Promise<Infer<B>> {
-  return (schema ? await readJsonBody(req, schema, maxBytes) : undefined) as Infer<B>;
+async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number, fieldsOf?: FieldsOf): Promise<Infer<B>> {
+  return (schema ? await readJsonBody(req, schema, maxBytes, fieldsOf) : undefined) as Infer<B>;
+}
+
+/** A refused body worded with the screen's names and the project's units, when the route says how to find them. */
+async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P): Promise<FieldsOf | undefined> {
+  if (!words) return undefined;
+  const system = await words.unitsOf(params);
+  return (error) => fieldErrorsIn(error, system, words.table);
 }
 
 async function signedInUser(req: NextRequest): Promise<SessionUser> {
@@ -105,7 +123,7 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
       const role = teamId ? await roleOnTeam(user.id, teamId) : null;
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params))) as Infer<B>;
       return handler({ req, params, body, user, teamId, role });
     }, spec.status ?? 200);
 }

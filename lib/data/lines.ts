@@ -7,6 +7,7 @@ import { recordActivity } from '../activity/record';
 import type { Line } from '../../models/line';
 import { AppError, notFound } from '../errors';
 import { startingDesign } from '../lines/default-design';
+import type { UnitSystem } from '../units/index';
 import { lineInputOf } from '../lines/line-input';
 import type { LineSiteContext } from '../lines/ram-start';
 import { lineStationsOf, type ChainageWindow, type LineRouteStation } from '../lines/route-stations';
@@ -107,6 +108,14 @@ export async function teamOfLine(lineId: string): Promise<string | null> {
   if (!line) return null;
   const project = await Project.findByPk(line.projectId, { attributes: ['teamId'] });
   return project?.teamId ?? null;
+}
+
+/** The unit system of a line's project (metric when the line is gone), for wording refusals. */
+export async function unitSystemOfLine(lineId: string): Promise<UnitSystem> {
+  const { Line: L, Project } = models();
+  const line = await L.findByPk(lineId, { attributes: ['projectId'] });
+  const project = line ? await Project.findByPk(line.projectId, { attributes: ['unitSystem'] }) : null;
+  return project?.unitSystem ?? 'metric';
 }
 
 export async function listLines(projectId: string): Promise<LineSummary[]> {

@@ -56,6 +56,12 @@ export async function teamOfProject(projectId: string): Promise<string | null> {
   return p?.teamId ?? null;
 }
 
+/** The unit system of a project (metric when it is gone), for wording refusals. */
+export async function unitSystemOfProject(projectId: string): Promise<UnitSystem> {
+  const project = await models().Project.findByPk(projectId, { attributes: ['unitSystem'] });
+  return project?.unitSystem ?? 'metric';
+}
+
 export async function createProject(
   teamId: string,
   userId: string,

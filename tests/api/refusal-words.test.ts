@@ -1,0 +1,54 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import * as lineRoute from '@/app/api/lines/[lineId]/route';
+import * as projectLines from '@/app/api/projects/[projectId]/lines/route';
+import { models } from '@/models';
+import { call, createTeamFixture } from '../support/api';
+
+type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
+
+const design = (settings: Record<string, unknown>) => ({
+  start: { kind: 'water-level', levelM: 241 },
+  end: { kind: 'outlet', elevationM: 200 },
+  flow: { kind: 'design', flowM3s: 0.001 },
+  stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }],
+  settings,
+});
+
+/** A refused line body names the field as the screen does, with its bound in the project's units (1 ft = 0.3048 m). */
+describe('refusals of the line endpoints speak the project\'s units', () => {
+  let f: Fixture;
+  beforeAll(async () => {
+    f = await createTeamFixture();
+  });
+  const setUnits = (unitSystem: 'us' | 'metric') => models().Project.update({ unitSystem }, { where: { id: f.projectId } });
+  const create = (body: unknown) => call(projectLines.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, body, userId: f.users.designer.id });
+
+  it('a new line with a cover beyond the bound: feet in a US project, metres in a metric one; nothing written', async () => {
+    const before = await models().Line.count({ where: { projectId: f.projectId } });
+    await setUnits('us');
+    const us = await create({ name: 'Deep', routeId: f.lineRouteId, design: design({ defaultCoverM: 20 }) });
+    await setUnits('metric');
+    const metric = await create({ name: 'Deep', routeId: f.lineRouteId, design: design({ defaultCoverM: 20 }) });
+    expect(us.status).toBe(400);
+    expect(us.json.error.fields).toEqual({ 'design.settings.defaultCoverM': ['Pipe cover must be at most 32.81 ft'] });
+    expect(us.json.error.message).toBe('Some fields are not valid: Pipe cover must be at most 32.81 ft');
+    expect(metric.json.error.fields).toEqual({ 'design.settings.defaultCoverM': ['Pipe cover must be at most 10.00 m'] });
+    expect(await models().Line.count({ where: { projectId: f.projectId } })).toBe(before);
+  });
+
+  it('a saved line\'s update with a device far off: named by its place, chainage in feet', async () => {
+    await setUnits('us');
+    const made = await create({ name: 'Main', routeId: f.lineRouteId });
+    expect(made.status).toBe(201);
+    const line = made.json.line;
+    const res = await call(lineRoute.PATCH, {
+      method: 'PATCH', path: '/api/x', params: { lineId: line.id }, userId: f.users.designer.id,
+      body: { name: line.name, notes: '', routeId: line.routeId, fromChainageM: null, toChainageM: null, baseRevision: line.revision, design: { ...line.design, devices: [{ kind: 'washout', chainageM: 10 }, { kind: 'washout', chainageM: 2e6 }] } },
+    });
+    await setUnits('metric');
+    expect(res.status).toBe(400);
+    // 1,000 km = 3,280,840 ft.
+    expect(res.json.error.fields['design.devices.1.chainageM']).toEqual(['Device 2: chainage must be at most 3,280,840 ft']);
+    expect(JSON.stringify(res.json.error)).not.toMatch(/\d\.\d{4,}/);
+  });
+});
