@@ -5,7 +5,7 @@ import type { PumpOutletHead } from '@/lib/lift/pump-outlet';
 import { lineStartFromRam } from '@/lib/lines/ram-start';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
-import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay } from '@/lib/units';
+import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay, unitDefaults } from '@/lib/units';
 
 type Change = (next: LineDesign, label: string) => string | null;
 
@@ -30,7 +30,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   const flowAwayFromRam = (): LineDesign['flow'] => {
     if (design.flow.kind !== 'pump-delivery') return design.flow;
     const fed = design.start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === (design.start as { ramSiteId: string }).ramSiteId) : undefined;
-    return { kind: 'design', flowM3s: fed?.deliveredFlowM3s ?? 0.001 };
+    return { kind: 'design', flowM3s: fed?.deliveredFlowM3s ?? unitDefaults(units.system).designFlowM3s };
   };
   const setStart = (start: LineDesign['start'], label: string) =>
     change({ ...design, start, flow: start.kind === 'ram-site' ? design.flow : flowAwayFromRam() }, label);
@@ -126,7 +126,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
           {start.kind === 'ram-site' && (
             <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'pump-delivery'} onChange={() => setFlow({ kind: 'pump-delivery' }, 'use what the ram delivers')} /> What the ram delivers{ram ? ` (${formatQuantity('designFlow', ram.deliveredFlowM3s, units.system)})` : ''}</label>
           )}
-          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design'} onChange={() => setFlow({ kind: 'design', flowM3s: ram?.deliveredFlowM3s ?? 0.001 }, 'use a design flow')} /> Design flow</label>
+          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design'} onChange={() => setFlow({ kind: 'design', flowM3s: ram?.deliveredFlowM3s ?? unitDefaults(units.system).designFlowM3s }, 'use a design flow')} /> Design flow</label>
           <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'find'} onChange={() => setFlow({ kind: 'find' }, 'find the flow')} /> Find the flow the line carries by gravity</label>
         </div>
         {flow.kind === 'design' && (

@@ -4,6 +4,7 @@ import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
 import { unitDefaults } from '../units/defaults';
+import type { FieldWordTable } from '../validations/field-words';
 import type { UpdateProjectInput } from '../validations/projects';
 
 export interface ProjectSummary {
@@ -60,6 +61,11 @@ export async function teamOfProject(projectId: string): Promise<string | null> {
 export async function unitSystemOfProject(projectId: string): Promise<UnitSystem> {
   const project = await models().Project.findByPk(projectId, { attributes: ['unitSystem'] });
   return project?.unitSystem ?? 'metric';
+}
+
+/** A route's `bodyWords` for a handler under /projects/[projectId]: refusals worded in that project's units. */
+export function inProjectUnits(table: FieldWordTable) {
+  return { table, unitsOf: ({ projectId }: { projectId: string }) => unitSystemOfProject(projectId) };
 }
 
 export async function createProject(

@@ -1,4 +1,4 @@
-import { FOOT_M } from '../../hydraulics/index';
+import { FOOT_M, US_GALLON_M3 } from '../../hydraulics/index';
 import type { UnitSystem } from './quantities';
 
 /**
@@ -12,6 +12,8 @@ export interface UnitDefaults {
   linePipeId: string;
   /** The pipe a new network link gets (a service-sized bore). */
   networkPipeId: string;
+  /** A design flow typed fresh, m³/s: 1 L/s, or 15 US gpm (a round figure near it). */
+  designFlowM3s: number;
   /** Cover where the survey gives none, m: 0.75 m, or 2.5 ft in feet. */
   coverM: number;
   /** Water temperature, °C (20 °C is 68 °F exactly). */
@@ -27,6 +29,7 @@ const DEFAULTS: Record<UnitSystem, UnitDefaults> = {
     pipeSeriesId: 'pe100-iso4427-sdr11',
     linePipeId: 'pe100-iso4427-sdr11-50mm',
     networkPipeId: 'pe100-iso4427-sdr11-32mm',
+    designFlowM3s: 0.001,
     coverM: 0.75,
     waterTemperatureC: 20,
     perPersonFigureId: 'most-needs',
@@ -36,6 +39,7 @@ const DEFAULTS: Record<UnitSystem, UnitDefaults> = {
     pipeSeriesId: 'pe-d2239-sidr7',
     linePipeId: 'pe-d2239-sidr7-1.5in',
     networkPipeId: 'pe-d2239-sidr7-1in',
+    designFlowM3s: 15 * US_GALLON_M3 / 60,
     coverM: 2.5 * FOOT_M,
     waterTemperatureC: 20,
     perPersonFigureId: 'us-rural-home',

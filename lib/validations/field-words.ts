@@ -36,7 +36,12 @@ export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTabl
   const named = fieldLabel(issue.path, table);
   if (!named) return issue.message;
   const { label, quantity } = named;
-  const figure = (value: number | bigint) => (quantity ? formatQuantity(quantity, Number(value), system) : String(value));
+  // A bound of zero reads "0 ft", not "0.000 US gal": nothing to round.
+  const figure = (value: number | bigint) => {
+    if (!quantity) return String(value);
+    const text = formatQuantity(quantity, Number(value), system);
+    return Number(value) === 0 && quantity !== 'temperature' ? text.replace(/^-?0(\.0+)?/, '0') : text;
+  };
   if (issue.code === 'too_small' && issue.origin === 'number') {
     return `${label} must be ${issue.inclusive ? 'at least' : 'more than'} ${figure(issue.minimum)}`;
   }

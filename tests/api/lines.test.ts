@@ -69,7 +69,7 @@ describe('lines API', () => {
     const bad = await create({ name: 'Bad', routeId: f.lineRouteId, design: designOf({ flow: { kind: 'design', flowM3s: -1 } }), colour: 'red' });
     expect(bad.status).toBe(400);
     // Worded as the screen names the field, the bound in the project's flow unit.
-    expect(bad.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0.00 L/s']);
+    expect(bad.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0 L/s']);
     expect(bad.json.error.fields.colour).toEqual(['Unknown field "colour"']);
     const off = await create({ name: 'Off', routeId: f.lineRouteId, design: designOf({ devices: [{ kind: 'washout', chainageM: 900 }] }) });
     expect(off.status).toBe(400);

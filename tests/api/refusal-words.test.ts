@@ -1,6 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as lineRoute from '@/app/api/lines/[lineId]/route';
 import * as projectLines from '@/app/api/projects/[projectId]/lines/route';
+import * as nodes from '@/app/api/projects/[projectId]/network/nodes/route';
+import * as tanks from '@/app/api/projects/[projectId]/tanks/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
 
@@ -50,5 +52,17 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     // 1,000 km = 3,280,840 ft.
     expect(res.json.error.fields['design.devices.1.chainageM']).toEqual(['Device 2: chainage must be at most 3,280,840 ft']);
     expect(JSON.stringify(res.json.error)).not.toMatch(/\d\.\d{4,}/);
+  });
+
+  it('a tank and a network part under the project: their forms\' names, bounds in US units', async () => {
+    await setUnits('us');
+    const tank = await call(tanks.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { name: 'Top', volumeM3: -1, supplyHoursPerDay: 30 } });
+    const node = await call(nodes.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'outlet', name: 'Trough', elevationM: 9500 } });
+    await setUnits('metric');
+    expect(tank.status).toBe(400);
+    expect(tank.json.error.fields.volumeM3).toEqual(['Volume must be more than 0 US gal']);
+    expect(tank.json.error.fields.supplyHoursPerDay).toEqual(['Supply runs (hours a day) must be at most 24']);
+    expect(node.status).toBe(400);
+    expect(node.json.error.fields.elevationM).toEqual(['Elevation must be at most 29,527.56 ft']); // 9,000 m
   });
 });

@@ -25,10 +25,12 @@ describe('defaults by unit system', () => {
     }
   });
 
-  it('cover in round feet for a US project, 0.75 m for a metric one; water at 20 °C shown as 68 °F', () => {
+  it('cover in round feet for a US project, 0.75 m for a metric one; water at 20 °C shown as 68 °F; a fresh design flow in round gpm', () => {
     expect(formatQuantity('depth', us.coverM, 'us')).toBe('2.50 ft');
     expect(formatQuantity('depth', metric.coverM, 'metric')).toBe('0.75 m');
     expect(formatQuantity('temperature', us.waterTemperatureC, 'us')).toBe('68 °F');
+    expect(formatQuantity('designFlow', us.designFlowM3s, 'us')).toBe('15.0 US gpm');
+    expect(formatQuantity('designFlow', metric.designFlowM3s, 'metric')).toBe('1.00 L/s');
     expect(formatQuantity('temperature', metric.waterTemperatureC, 'metric')).toBe('20 °C');
   });
 

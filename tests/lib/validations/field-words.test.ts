@@ -64,7 +64,7 @@ describe('line design refusals in the project\'s units', () => {
     });
     const fields = fieldErrorsIn(error as never, 'us', CUSTOM_PIPE_WORDS);
     expect(fields.wallM).toEqual(['Wall must be at most 39.4 in']); // 1 m = 39.37 in
-    expect(fields.pressureRatingPa).toEqual(['Pressure rating must be more than 0.0 psi']);
+    expect(fields.pressureRatingPa).toEqual(['Pressure rating must be more than 0 psi']);
   });
 });
 
