@@ -122,6 +122,19 @@ export const NETWORK_WORDS: FieldWordTable = {
   'data.pipe': { label: 'Pipe' },
 };
 
+/** A route's points and its tools (save, split, trim, join), labels as on the route page. */
+export const ROUTE_WORDS: FieldWordTable = {
+  'points.#.chainageM': { label: 'Point #: chainage', quantity: 'chainage' },
+  'points.#.elevationM': { label: 'Point #: elevation', quantity: 'elevation' },
+  'points.#.confidenceM': { label: 'Point #: height accuracy', quantity: 'depth' },
+  'points.#.latitude': { label: 'Point #: latitude' },
+  'points.#.longitude': { label: 'Point #: longitude' },
+  chainageM: { label: 'Split at chainage', quantity: 'chainage' },
+  fromChainageM: { label: 'Keep from', quantity: 'chainage' },
+  toChainageM: { label: 'Keep to', quantity: 'chainage' },
+  gapM: { label: 'Gap', quantity: 'length' },
+};
+
 /** The project details form. */
 export const PROJECT_WORDS: FieldWordTable = {
   name: { label: 'Project name' },

@@ -3,6 +3,7 @@ import * as lineRoute from '@/app/api/lines/[lineId]/route';
 import * as projectLines from '@/app/api/projects/[projectId]/lines/route';
 import * as nodes from '@/app/api/projects/[projectId]/network/nodes/route';
 import * as tanks from '@/app/api/projects/[projectId]/tanks/route';
+import * as points from '@/app/api/routes/[routeId]/points/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
 
@@ -64,5 +65,14 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     expect(tank.json.error.fields.supplyHoursPerDay).toEqual(['Supply runs (hours a day) must be at most 24']);
     expect(node.status).toBe(400);
     expect(node.json.error.fields.elevationM).toEqual(['Elevation must be at most 29,527.56 ft']); // 9,000 m
+  });
+
+  it('a route save with a height out of range names the point, the bound in feet', async () => {
+    await setUnits('us');
+    const point = { sourceSeq: null, latitude: null, longitude: null, chainageM: 0, elevationM: 9500, label: null, heightSource: 'level', confidenceM: null, excluded: false };
+    const res = await call(points.PUT, { method: 'PUT', path: '/api/x', params: { routeId: f.lineRouteId }, userId: f.users.designer.id, body: { points: [{ ...point, elevationM: 100 }, point] } });
+    await setUnits('metric');
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 2: elevation must be at most 29,527.56 ft']);
   });
 });
