@@ -95,7 +95,7 @@ export const TANK_WORDS: FieldWordTable = {
   lowLevelM: { label: 'Lowest working level above floor', quantity: 'length' },
   overflowLevelM: { label: 'Overflow level above floor', quantity: 'length' },
   supplyFlowM3s: { label: 'Supply flow', quantity: 'flow' },
-  supplyHoursPerDay: { label: 'Supply runs (hours a day)' },
+  supplyHoursPerDay: { label: 'Supply hours per day' },
   supplyStartHour: { label: 'Supply starts at hour' },
   reserveDays: { label: 'Reserve wanted (days)' },
   'outlets.#.label': { label: 'Outlet #: name' },

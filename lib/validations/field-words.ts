@@ -42,16 +42,21 @@ export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTabl
     const text = formatQuantity(quantity, Number(value), system);
     return Number(value) === 0 && quantity !== 'temperature' ? text.replace(/^-?0(\.0+)?/, '0') : text;
   };
-  if (issue.code === 'too_small' && issue.origin === 'number') {
+  // Bounds are reworded only for a figure with a unit; a plain number's own words stay (under the screen's name).
+  if (issue.code === 'too_small' && issue.origin === 'number' && quantity) {
     return `${label} must be ${issue.inclusive ? 'at least' : 'more than'} ${figure(issue.minimum)}`;
   }
-  if (issue.code === 'too_big' && issue.origin === 'number') {
+  if (issue.code === 'too_big' && issue.origin === 'number' && quantity) {
     return `${label} must be ${issue.inclusive ? 'at most' : 'less than'} ${figure(issue.maximum)}`;
   }
   if (issue.code === 'invalid_type' && issue.expected === 'number') {
     return `${label} must be a number${quantity ? ` (${formatQuantity(quantity, 0, system).split(' ').slice(1).join(' ')})` : ''}`;
   }
-  return issue.message.startsWith(label) ? issue.message : `${label}: ${lowerFirst(issue.message)}`;
+  if (issue.message.startsWith(label)) return issue.message;
+  // "Latitude must be …" under "Point 2: latitude" reads "Point 2: latitude must be …".
+  const short = label.split(': ').pop() ?? label;
+  if (issue.message.toLowerCase().startsWith(short.toLowerCase())) return `${label}${issue.message.slice(short.length)}`;
+  return `${label}: ${lowerFirst(issue.message)}`;
 }
 
 function lowerFirst(text: string): string {
