@@ -163,7 +163,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           )}
           {analysis.settings.heightScatterM > 0.1 && (
             <p className="text-sm text-creek-700" data-testid="survey-scatter-note">
-              Heights on this route scatter by about {formatQuantity('length', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
+              Heights on this route scatter by about {formatQuantity('depth', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
             </p>
           )}
           <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { CustomPipeSchema, LineDesignSchema } from '../../../lib/validations/line-design';
-import { CUSTOM_PIPE_WORDS, LINE_DESIGN_WORDS, NETWORK_WORDS, RAM_SITE_WORDS, TANK_WORDS } from '../../../lib/validations/field-word-tables';
+import { CUSTOM_PIPE_WORDS, LINE_DESIGN_WORDS, NETWORK_WORDS, PROJECT_WORDS, RAM_SITE_WORDS, TANK_WORDS } from '../../../lib/validations/field-word-tables';
 import { fieldErrorsIn, issuesText } from '../../../lib/validations/field-words';
 import { NetworkNodeSchema } from '../../../lib/validations/network';
+import { UpdateProjectSchema } from '../../../lib/validations/projects';
 import { RamSiteSchema } from '../../../lib/validations/ram-sites';
 import { TankSchema } from '../../../lib/validations/tanks';
 import { fieldErrorsOf } from '../../../lib/validations/common';
@@ -84,5 +85,11 @@ describe('lift and network refusals in the project\'s units', () => {
     const tankFields = fieldErrorsIn(tank as never, 'us', TANK_WORDS);
     expect(tankFields['outlets.0.elevationM']).toEqual(['Outlet 1: elevation must be a number (ft)']);
     Object.values({ ...ramFields, ...tankFields }).flat().forEach(readable);
+  });
+
+  it('a project\'s frost depth beyond the bound reads in feet for a US project', () => {
+    const error = refusal(UpdateProjectSchema, { frostDepthM: 12 });
+    // 10 m = 32.81 ft.
+    expect(fieldErrorsIn(error as never, 'us', PROJECT_WORDS).frostDepthM).toEqual(['Frost depth must be at most 32.81 ft']);
   });
 });
