@@ -1,8 +1,5 @@
 import { lusolve } from 'mathjs';
-import { solveNetwork } from '../hydraulics/index';
-import { compileNetwork } from '../hydraulics/network/compile-network';
-import { GradientSolver } from '../hydraulics/network/gradient-method';
-import { networkTopology } from '../hydraulics/network/topology';
+import { compileNetwork, GradientSolver, networkTopology, solveNetwork } from '../hydraulics/index';
 import type { Benchmark } from './harness';
 import { latticeNetwork } from './network-data';
 

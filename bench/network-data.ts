@@ -46,7 +46,7 @@ export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7, w
   const links: NetworkLink[] = [...tree, ...extra].map(([a, b], index) => {
     const flow = index < tree.length ? flowOf[index] : 0.0005;
     const diameterM = Math.max(0.025, Math.sqrt((4 * flow) / Math.PI));
-    return { id: `l${index}`, from: `n${a}`, to: `n${b}`, lengthM: 50 + 150 * random(), pipe: { id: 'p', insideDiameterM: diameterM, hazenWilliamsC: 140 } };
+    return { id: `l${index}`, from: `n${a}`, to: `n${b}`, lengthM: 50 + 150 * random(), pipe: { id: 'p', insideDiameterM: diameterM, hazenWilliamsC: 140, roughnessM: 1.5e-6 } };
   });
   return { nodes, links };
 }

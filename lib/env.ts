@@ -29,6 +29,8 @@ const EnvSchema = z.object({
   RUNNEL_S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'RUNNEL_S3_BUCKET must be a valid bucket name').default('runnel-files'),
   RUNNEL_S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
   RUNNEL_S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
+  /** Test only (RUNNEL_ENV=test): a file naming a storage call to fail (lib/storage-faults.ts); ignored otherwise. */
+  RUNNEL_STORAGE_FAULTS: z.string().min(1).optional(),
   /** Outgoing mail (SMTP). Locally the fake in scripts/fakes/mail.mjs; `npm test` runs its own. */
   RUNNEL_SMTP_HOST: z.string().min(1).default('127.0.0.1'),
   RUNNEL_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),

@@ -52,5 +52,11 @@ export class AppError extends Error {
 }
 
 export const notFound = (what = 'Not found') => new AppError('not_found', what);
+/**
+ * A body names a record (a route, a line, a node, a revision...) that is not this project's:
+ * another team's, or none at all. The same 404 as an id in the address, alike for both so nothing
+ * tells them apart, with the field named so the form can show it.
+ */
+export const notInProject = (fields: FieldErrors, message = 'A record the request names is not part of this project') => new AppError('not_found', message, fields);
 export const forbidden = (message = 'Your role on this team does not allow this') => new AppError('forbidden', message);
 export const unauthenticated = () => new AppError('unauthenticated', 'Sign in first');

@@ -1,6 +1,14 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { PipeSpec } from '../hydraulics/catalogue/pipe-spec';
-import type { LineDevice, LineEnd, LineFitting, LineFlow, LineSettings, LineStart, LineStretch } from '../hydraulics/profile/types';
+import type {
+  LineDevice,
+  LineEnd,
+  LineFitting,
+  LineFlow,
+  LineSettings,
+  LineStart,
+  LineStretch,
+  PipeSpec,
+} from '../hydraulics/index';
 
 /** Where a line is fed: the core's own starts, or a ram site of the project whose plan gives the pump outlet head. */
 export type StoredLineStart = LineStart | { kind: 'ram-site'; ramSiteId: string };

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { PipeSpec } from '../hydraulics/catalogue/pipe-spec';
+import type { PipeSpec } from '../hydraulics/index';
 
 export type NetworkLinkKind = 'line' | 'pipe' | 'valve';
 export type ValveKind = 'isolation' | 'check' | 'pressure-reducing' | 'float';

@@ -1,6 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { RamDriveMaterial } from '../hydraulics/ram/drive-surge';
-import type { RamEfficiencyTableId } from '../hydraulics/ram/efficiency-table';
+import type { RamDriveMaterial, RamEfficiencyTableId } from '../hydraulics/index';
 
 /** A hydraulic ram site: fall, drive pipe, lift and delivery pipe, all in SI. */
 export class RamSite extends Model<InferAttributes<RamSite>, InferCreationAttributes<RamSite>> {

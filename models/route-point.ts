@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { HeightSource } from '../hydraulics/survey/height-source';
+import type { HeightSource } from '../hydraulics/index';
 
 /** One station of a route. `rawElevationM` is the surveyed value and is never overwritten. */
 export class RoutePoint extends Model<InferAttributes<RoutePoint>, InferCreationAttributes<RoutePoint>> {

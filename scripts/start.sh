@@ -4,6 +4,7 @@
 #   RUNNEL_ENV=production: the database, object storage and mail given in the environment; no demo,
 #   no fakes; refuses to start while any of them (or the session secret) is missing.
 #   RUNNEL_SETUP_ONLY=1: set up (database, migrations, seed), then stop what was started and exit.
+#   RUNNEL_DEV_SERVER=1 (`npm run dev`): the same set-up, then `next dev` with hot reload instead of a build.
 source "$(dirname "$0")/common.sh"
 
 export RUNNEL_ENV="${RUNNEL_ENV:-development}"
@@ -58,6 +59,17 @@ fi
 if [ "$RUNNEL_ENV" = development ]; then
   FAKES_STARTED=1
   bash scripts/fakes.sh start
+fi
+
+if [ "${RUNNEL_DEV_SERVER:-0}" = "1" ]; then
+  [ "$RUNNEL_ENV" = development ] || die "the hot-reload server is for development only (RUNNEL_ENV=$RUNNEL_ENV)"
+  log "serving Runnel with hot reload (next dev) on http://127.0.0.1:$PORT (Ctrl-C stops what npm run dev started)"
+  set -m
+  node node_modules/next/dist/bin/next dev --hostname "${RUNNEL_HOST:-127.0.0.1}" --port "$PORT" &
+  APP_PID=$!
+  set +m
+  wait "$APP_PID"
+  exit
 fi
 
 if [ "${RUNNEL_SKIP_BUILD:-0}" != "1" ] || [ ! -f .next/BUILD_ID ]; then

@@ -6,7 +6,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useChangePassword } from '@/lib/queries/accounts';
 import { PasswordChangeSchema } from '@/lib/validations/auth';
 
@@ -15,7 +15,7 @@ export function PasswordChangeForm({ email }: { email: string }) {
   const router = useRouter();
   const change = useChangePassword();
   const [done, setDone] = useState<string | null>(null);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -5,14 +5,14 @@ import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useResetPassword } from '@/lib/queries/accounts';
 import { PasswordResetSchema } from '@/lib/validations/auth';
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const reset = useResetPassword();
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

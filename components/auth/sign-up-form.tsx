@@ -4,7 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useSignUp } from '@/lib/queries/accounts';
 import { SignUpSchema } from '@/lib/validations/auth';
 import { CheckYourMail } from './check-your-mail';
@@ -13,7 +13,7 @@ import { CheckYourMail } from './check-your-mail';
 export function SignUpForm() {
   const signUp = useSignUp();
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -8,7 +8,7 @@ import { useAddCommissioningReading } from '@/lib/queries/lift';
 import { fromDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { CommissioningReadingSchema } from '@/lib/validations/ram-sites';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberFrom, numberOrNull } from './typed-number';
 
 const EMPTY = {
@@ -51,7 +51,7 @@ export function CommissioningForm({ projectId, siteId, units }: { projectId: str
   const [state, setState] = useState<State>(EMPTY);
   const set = (key: keyof State, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const add = useAddCommissioningReading(projectId, siteId);
-  const form = useSaveForm(CommissioningReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
+  const form = useForm({ schema: CommissioningReadingSchema, save: (input) => add.mutateAsync(input), savedText: 'Reading logged.' });
   const f = form.fields;
   const id = (name: string) => `comm-${siteId.slice(0, 8)}-${name}`;
 

@@ -1,7 +1,8 @@
 'use client';
 
-import { RAM_COMMISSIONING_CHECKLIST, RAM_TROUBLESHOOTING_NOTES } from '@/hydraulics/ram/commissioning-notes';
+import { RAM_COMMISSIONING_CHECKLIST, RAM_TROUBLESHOOTING_NOTES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { FormMessage } from '@/components/ui/form-message';
 import type { RamSiteView } from '@/lib/lift/summary';
 import { useDeleteCommissioningReading, useSaveRamSite } from '@/lib/queries/lift';
@@ -14,6 +15,7 @@ const DRIVE_BASIS = { 'measured-drive': 'measured', 'measured-waste': 'waste + d
 /** Dated readings at the ram with the measured efficiency beside the plan's, and the field notes. */
 export function CommissioningLog({ projectId, view, units, canEdit }: { projectId: string; view: RamSiteView; units: UnitSystem; canEdit: boolean }) {
   const remove = useDeleteCommissioningReading(projectId, view.site.id);
+  const confirm = useConfirm();
   const saveSite = useSaveRamSite(projectId);
   const latest = view.commissioning[0];
   const latestEfficiency = latest?.result.ok ? latest.result.value.measuredEfficiency : null;
@@ -25,6 +27,7 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
 
   return (
     <div className="space-y-4">
+      {confirm.dialog}
       {view.commissioning.length === 0 ? (
         <p className="text-sm text-creek-700">No readings yet. Log the first one once the ram runs by itself.</p>
       ) : (
@@ -52,7 +55,7 @@ export function CommissioningLog({ projectId, view, units, canEdit }: { projectI
                   )}
                   <td className="pr-3 text-creek-700">{reading.notes}</td>
                   {canEdit && (
-                    <td><Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => remove.mutate(reading.id)} aria-label={`Delete the reading of ${reading.measuredOn}`}>Delete</Button></td>
+                    <td><Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => confirm.ask({ title: `Delete the commissioning reading of ${reading.measuredOn}?`, body: <p>The reading goes from the log of {view.site.name}; the site and its other readings stay. This cannot be undone.</p>, confirmLabel: 'Delete reading', onConfirm: () => remove.mutateAsync(reading.id) })} aria-label={`Delete the reading of ${reading.measuredOn}`}>Delete</Button></td>
                   )}
                 </tr>
               ))}

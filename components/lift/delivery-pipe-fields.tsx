@@ -1,6 +1,6 @@
 'use client';
 
-import { PIPE_SERIES, pipesOfSeries } from '@/hydraulics/catalogue/index';
+import { PIPE_SERIES, pipesOfSeries } from '@/hydraulics/index';
 import { SelectField } from '@/components/ui/field';
 import type { FieldErrors } from '@/lib/errors';
 import type { RouteOption } from '@/lib/lift/records';

@@ -1,5 +1,5 @@
 import type { DemandUseInput } from '@/lib/validations/demand-uses';
-import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/storage/daily-patterns';
+import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/index';
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from '@/lib/units';
 
 /** The quantity a use's per-unit figure is shown in. */

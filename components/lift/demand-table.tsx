@@ -2,6 +2,7 @@
 
 import { Fragment, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import type { DemandView } from '@/lib/lift/demand';
 import { useDeleteDemandUse } from '@/lib/queries/lift';
 import { formatQuantity, type UnitSystem } from '@/lib/units';
@@ -12,9 +13,11 @@ import { DemandUseForm } from './demand-use-form';
 export function DemandTable({ projectId, view, units, canEdit }: { projectId: string; view: DemandView; units: UnitSystem; canEdit: boolean }) {
   const [editing, setEditing] = useState<string | null>(null);
   const remove = useDeleteDemandUse(projectId);
+  const confirm = useConfirm();
   const total = view.total.ok ? view.total.value : null;
   return (
     <div className="space-y-4">
+      {confirm.dialog}
       {!view.total.ok && <p role="alert" className="text-sm text-clay-700">{view.total.error}</p>}
       <div className="overflow-x-auto">
         <table className="tabular w-full text-left text-sm">
@@ -45,7 +48,7 @@ export function DemandTable({ projectId, view, units, canEdit }: { projectId: st
                     {canEdit && (
                       <td className="whitespace-nowrap">
                         <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => setEditing(editing === use.id ? null : use.id)}>Edit</Button>{' '}
-                        <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => remove.mutate(use.id)} aria-label={`Delete ${result?.label ?? 'use'}`}>Delete</Button>
+                        <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => confirm.ask({ title: `Delete the use “${result?.label ?? use.label}”?`, body: <p>Its draw leaves the daily demand and the storage sizing; tanks, outlets and the other uses stay. This cannot be undone.</p>, confirmLabel: 'Delete use', onConfirm: () => remove.mutateAsync(use.id) })} aria-label={`Delete ${result?.label ?? 'use'}`}>Delete</Button>
                       </td>
                     )}
                   </tr>

@@ -1,8 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import { DEFAULT_DEMAND_FIGURES } from '@/hydraulics/demand/default-figures';
-import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/storage/daily-patterns';
+import { DAILY_USE_PATTERN_PRESETS, DEFAULT_DEMAND_FIGURES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
@@ -13,7 +12,7 @@ import { formatQuantity, fromDisplay, inputValue, unitDefaults, unitOf, type Uni
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
 import { figureQuantity, PER_UNIT } from './demand-format';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberFrom, numberOrNull } from './typed-number';
 
 const FIGURES = { people: DEFAULT_DEMAND_FIGURES.perPerson, livestock: DEFAULT_DEMAND_FIGURES.livestock, garden: DEFAULT_DEMAND_FIGURES.garden, fixed: [] };
@@ -37,7 +36,7 @@ export function DemandUseForm({ projectId, units, use, onDone }: { projectId: st
   const [state, setState] = useState(() => initialState(use, units));
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveDemandUse(projectId);
-  const form = useSaveForm(DemandUseSchema, (input) => save.mutateAsync({ id: use?.id ?? null, input }), use ? 'Use saved.' : 'Use added.');
+  const form = useForm({ schema: DemandUseSchema, save: (input) => save.mutateAsync({ id: use?.id ?? null, input }), savedText: use ? 'Use saved.' : 'Use added.' });
   const kind = state.kind as Kind;
   const published = publishedFigureOf({ kind, figureId: state.figureId || null, season: state.season as 'winter' | 'summer' });
   const id = (name: string) => `use-${use?.id.slice(0, 8) ?? 'new'}-${name}`;

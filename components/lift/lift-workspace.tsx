@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import { useQuery } from '@tanstack/react-query';
 import { Panel } from '@/components/ui/panel';
 import { liftSummaryQuery } from '@/lib/queries/lift';
@@ -31,8 +32,8 @@ const SECTIONS = [
 
 /** The lift and storage page: what the ram delivers and how long the tank takes first, then the rest. */
 export function LiftWorkspace({ projectId, units, canEdit, canLogYield }: LiftWorkspaceProps) {
-  const { data: lift, error } = useQuery(liftSummaryQuery(projectId));
-  if (error) return <p role="alert" className="text-sm text-clay-700">The lift figures could not be loaded: {error.message}</p>;
+  const { data: lift, isError, refetch } = useQuery(liftSummaryQuery(projectId));
+  if (isError) return <LoadError what="The lift figures" onRetry={() => void refetch()} />;
   if (!lift) return <LiftWorkspaceSkeleton />;
   const sources = lift.sources.map((view) => ({ id: view.source.id, name: view.source.name, designYieldM3s: view.design.ok ? view.design.value.designYieldM3s : null }));
   const tanks = lift.tanks.map((view) => ({ id: view.tank.id, name: view.tank.name, volumeM3: view.tank.volumeM3 }));

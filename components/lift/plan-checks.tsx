@@ -1,4 +1,4 @@
-import type { PlanCheck } from '@/hydraulics/ram/plan-check';
+import type { PlanCheck } from '@/hydraulics/index';
 import type { UnitSystem } from '@/lib/units';
 import { planCheckText } from '@/lib/lift/check-words';
 

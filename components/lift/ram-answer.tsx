@@ -1,4 +1,4 @@
-import type { RamPlanResult } from '@/hydraulics/ram/plan-types';
+import type { RamPlanResult } from '@/hydraulics/index';
 import { formatDuration, formatNumber, formatPercent, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Caution, PlanChecks } from './plan-checks';
 import { Readout } from './readout';

@@ -2,6 +2,7 @@
 
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import type { RouteOption } from '@/lib/lift/records';
 import type { RamSiteView } from '@/lib/lift/summary';
 import { useDeleteRamSite } from '@/lib/queries/lift';
@@ -24,9 +25,11 @@ export interface RamSiteCardProps {
 export function RamSiteCard({ projectId, view, units, canEdit, sources, tanks, routes }: RamSiteCardProps) {
   const [editing, setEditing] = useState(false);
   const remove = useDeleteRamSite(projectId);
+  const confirm = useConfirm();
   const { site } = view;
   return (
     <article className="space-y-4 rounded-lg border border-creek-100 bg-white p-4 shadow-sm sm:p-5" aria-labelledby={`ram-${site.id}`}>
+      {confirm.dialog}
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h2 id={`ram-${site.id}`} className="text-lg font-semibold text-creek-900">{site.name}</h2>
@@ -40,7 +43,18 @@ export function RamSiteCard({ projectId, view, units, canEdit, sources, tanks, r
         {canEdit && !editing && (
           <div className="flex gap-2">
             <Button tone="quiet" onClick={() => setEditing(true)}>Edit site</Button>
-            <Button tone="quiet" onClick={() => remove.mutate(site.id)}>Delete site</Button>
+            <Button tone="quiet" onClick={() => confirm.ask({
+              title: `Delete the ram site “${site.name}”?`,
+              body: (
+                <>
+                  <p>The site goes with its commissioning log ({view.commissioning.length} {view.commissioning.length === 1 ? 'reading' : 'readings'}) and its pump in the network, with the pipes joined to it there.</p>
+                  <p>Lines that start at this ram keep their design but cannot be analysed until you pick another start for them. Its source and tank stay.</p>
+                  <p>This cannot be undone.</p>
+                </>
+              ),
+              confirmLabel: 'Delete site',
+              onConfirm: () => remove.mutateAsync(site.id),
+            })}>Delete site</Button>
           </div>
         )}
       </div>

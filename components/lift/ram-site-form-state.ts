@@ -1,5 +1,4 @@
-import { findPipe, PIPE_SERIES } from '@/hydraulics/catalogue/index';
-import type { RamEfficiencyTableId } from '@/hydraulics/ram/efficiency-table';
+import { findPipe, PIPE_SERIES, type RamEfficiencyTableId } from '@/hydraulics/index';
 import type { RamSiteRecord } from '@/lib/lift/records';
 import { fromDisplay, inputValue, unitDefaults, type UnitSystem } from '@/lib/units';
 import { numberFrom, numberOrNull } from './typed-number';

@@ -1,8 +1,7 @@
 'use client';
 
 import { useMemo, useState, type FormEvent } from 'react';
-import { RAM_EFFICIENCY_TABLES } from '@/hydraulics/ram/efficiency-table';
-import { RAM_SIZE_CLASSES } from '@/hydraulics/ram/size-classes';
+import { RAM_EFFICIENCY_TABLES, RAM_SIZE_CLASSES } from '@/hydraulics/index';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
@@ -15,7 +14,7 @@ import { DeliveryPipeFields } from './delivery-pipe-fields';
 import { NumberField } from './number-field';
 import { RAM_SITE_WORDS } from '@/lib/validations/field-word-tables';
 import { emptyRamSiteForm, ramSiteFormFrom, ramSiteInputFrom, type RamSiteFormState } from './ram-site-form-state';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 
 export interface RamSiteFormProps {
   projectId: string;
@@ -32,7 +31,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm(units)));
   const set = <K extends keyof RamSiteFormState>(key: K, value: RamSiteFormState[K]) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveRamSite(projectId);
-  const form = useSaveForm(RamSiteSchema, (input) => save.mutateAsync({ id: site?.id ?? null, input }), site ? 'Ram site saved.' : 'Ram site added.', { table: RAM_SITE_WORDS, units });
+  const form = useForm({ schema: RamSiteSchema, save: (input) => save.mutateAsync({ id: site?.id ?? null, input }), savedText: site ? 'Ram site saved.' : 'Ram site added.' }, { table: RAM_SITE_WORDS, units });
   const tankVolumeM3 = tanks.find((tank) => tank.id === state.tankId)?.volumeM3 ?? null;
   const preview = useMemo(() => {
     if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;

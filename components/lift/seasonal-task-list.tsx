@@ -2,6 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { SeasonalTaskRecord } from '@/lib/lift/records';
@@ -9,7 +10,7 @@ import { isOverdue, todayIn } from '@/lib/lift/task-due';
 import { useAddSeasonalTask, useDeleteSeasonalTask, useGenerateSeasonalTasks, useUpdateSeasonalTask } from '@/lib/queries/lift';
 import { GenerateSeasonalTasksSchema, SeasonalTaskSchema } from '@/lib/validations/seasonal-tasks';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberFrom } from './typed-number';
 
 const KIND_LABEL: Record<SeasonalTaskRecord['kind'], string> = {
@@ -21,8 +22,10 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
   const update = useUpdateSeasonalTask(projectId);
   const today = todayIn(undefined);
   const remove = useDeleteSeasonalTask(projectId);
+  const confirm = useConfirm();
   return (
     <div className="space-y-4">
+      {confirm.dialog}
       {tasks.length === 0 ? (
         <p className="text-sm text-creek-700">No tasks yet{canEdit ? ': make a year of them from the site\'s frost dates below.' : '.'}</p>
       ) : (
@@ -47,7 +50,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
                     <input type="checkbox" checked={task.done} onChange={(event) => update.mutate({ id: task.id, input: { done: event.target.checked } })} />
                     Done{task.doneOn ? ` ${task.doneOn}` : ''}
                   </label>
-                  <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => remove.mutate(task.id)} aria-label={`Delete ${task.title} on ${task.dueOn}`}>Delete</Button>
+                  <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => confirm.ask({ title: `Delete “${task.title}” (${task.dueOn})?`, body: <p>The task goes from the season&apos;s list; the other tasks stay. This cannot be undone.</p>, confirmLabel: 'Delete task', onConfirm: () => remove.mutateAsync(task.id) })} aria-label={`Delete ${task.title} on ${task.dueOn}`}>Delete</Button>
                 </div>
               ) : (
                 <span className="text-xs text-creek-700">{task.done ? `Done ${task.doneOn ?? ''}` : 'Open'}</span>
@@ -65,7 +68,7 @@ export function SeasonalTaskList({ projectId, tasks, canEdit }: { projectId: str
 function GenerateTasksForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ year: String(new Date().getFullYear()), hemisphere: 'north', firstFrost: '10-15', lastFrost: '04-20', replace: false });
   const generate = useGenerateSeasonalTasks(projectId);
-  const form = useSaveForm(GenerateSeasonalTasksSchema, (input) => generate.mutateAsync(input), 'Tasks added for the year.');
+  const form = useForm({ schema: GenerateSeasonalTasksSchema, save: (input) => generate.mutateAsync(input), savedText: 'Tasks added for the year.' });
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     await form.submit({ year: numberFrom(state.year), hemisphere: state.hemisphere, firstFrost: state.firstFrost, lastFrost: state.lastFrost || null, replace: state.replace });
@@ -94,7 +97,7 @@ function GenerateTasksForm({ projectId }: { projectId: string }) {
 function AddTaskForm({ projectId }: { projectId: string }) {
   const [state, setState] = useState({ title: '', dueOn: '', kind: 'other' });
   const add = useAddSeasonalTask(projectId);
-  const form = useSaveForm(SeasonalTaskSchema, (input) => add.mutateAsync(input), 'Task added.');
+  const form = useForm({ schema: SeasonalTaskSchema, save: (input) => add.mutateAsync(input), savedText: 'Task added.' });
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (await form.submit({ ...state })) setState({ title: '', dueOn: '', kind: 'other' });

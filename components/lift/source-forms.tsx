@@ -9,7 +9,7 @@ import { useAddYieldReading, useSaveSource } from '@/lib/queries/lift';
 import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
 import { WaterSourceSchema, YieldReadingSchema } from '@/lib/validations/water-sources';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberOrNull } from './typed-number';
 
 const siOrNull = (quantity: 'flow' | 'volume', text: string, units: UnitSystem) => {
@@ -27,7 +27,7 @@ export function SourceForm({ projectId, units, source, readings, onDone }: {
   });
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveSource(projectId);
-  const form = useSaveForm(WaterSourceSchema, (input) => save.mutateAsync({ id: source?.id ?? null, input }), source ? 'Source saved.' : 'Source added.');
+  const form = useForm({ schema: WaterSourceSchema, save: (input) => save.mutateAsync({ id: source?.id ?? null, input }), savedText: source ? 'Source saved.' : 'Source added.' });
   const id = (name: string) => `source-${source?.id.slice(0, 8) ?? 'new'}-${name}`;
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -77,7 +77,7 @@ export function YieldReadingForm({ projectId, sourceId, units }: { projectId: st
   const [state, setState] = useState(empty);
   const set = (key: keyof typeof empty, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const add = useAddYieldReading(projectId, sourceId);
-  const form = useSaveForm(YieldReadingSchema, (input) => add.mutateAsync(input), 'Reading logged.');
+  const form = useForm({ schema: YieldReadingSchema, save: (input) => add.mutateAsync(input), savedText: 'Reading logged.' });
   const id = (name: string) => `yield-${sourceId.slice(0, 8)}-${name}`;
   const exampleBucketM3 = fromDisplay('volume', units === 'us' ? 5 : 20, units);
 

@@ -2,6 +2,7 @@
 
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import type { SourceYieldView } from '@/lib/lift/source-yield';
 import { useDeleteSource, useDeleteYieldReading } from '@/lib/queries/lift';
 import { formatQuantity, type UnitSystem } from '@/lib/units';
@@ -44,15 +45,27 @@ function SourceCard({ projectId, view, units, canEdit, canLog }: { projectId: st
   const [editing, setEditing] = useState(false);
   const removeSource = useDeleteSource(projectId);
   const removeReading = useDeleteYieldReading(projectId, view.source.id);
+  const confirm = useConfirm();
   const { design } = view;
   return (
     <article className="space-y-3 rounded-md border border-creek-100 p-3" aria-label={view.source.name}>
+      {confirm.dialog}
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h3 className="font-semibold text-creek-900">{view.source.name} <span className="text-sm font-normal text-creek-600">({view.source.kind})</span></h3>
         {canEdit && !editing && (
           <div className="flex gap-2">
             <Button tone="quiet" onClick={() => setEditing(true)}>Edit source</Button>
-            <Button tone="quiet" onClick={() => removeSource.mutate(view.source.id)}>Delete source</Button>
+            <Button tone="quiet" onClick={() => confirm.ask({
+              title: `Delete the source “${view.source.name}”?`,
+              body: (
+                <>
+                  <p>The source goes with its {view.readings.length} yield {view.readings.length === 1 ? 'reading' : 'readings'}. Ram sites and tanks it fed stay, with no source named; its node in the network stays, no longer tied to a source record.</p>
+                  <p>This cannot be undone.</p>
+                </>
+              ),
+              confirmLabel: 'Delete source',
+              onConfirm: () => removeSource.mutateAsync(view.source.id),
+            })}>Delete source</Button>
           </div>
         )}
       </div>
@@ -75,7 +88,7 @@ function SourceCard({ projectId, view, units, canEdit, canLog }: { projectId: st
                 <td>{reading.flowM3s !== null ? 'flow figure' : `${formatQuantity('volume', reading.bucketVolumeM3 ?? 0, units)} in ${reading.bucketSeconds} s`}</td>
                 <td>{formatQuantity('flow', reading.flowM3sMeasured, units)}{design.ok && design.value.readingId === reading.id ? ' (design)' : ''}</td>
                 <td className="text-creek-700">{reading.note}</td>
-                {canLog && <td><Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => removeReading.mutate(reading.id)} aria-label={`Delete the reading of ${reading.measuredOn}`}>Delete</Button></td>}
+                {canLog && <td><Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => confirm.ask({ title: `Delete the yield reading of ${reading.measuredOn}?`, body: <p>The reading goes from {view.source.name}; the design yield is worked out again from the readings left. This cannot be undone.</p>, confirmLabel: 'Delete reading', onConfirm: () => removeReading.mutateAsync(reading.id) })} aria-label={`Delete the reading of ${reading.measuredOn}`}>Delete</Button></td>}
               </tr>
             ))}
           </tbody>

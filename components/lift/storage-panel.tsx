@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { HourChart } from '@/components/ui/hour-chart';
 import type { TankView } from '@/lib/lift/summary';
 import type { ProjectTankStorage } from '@/lib/data/network-tank-storage';
@@ -55,15 +56,27 @@ function TankCard({ projectId, view, sources, units, canEdit, network, fromNetwo
 }) {
   const [editing, setEditing] = useState(false);
   const remove = useDeleteTank(projectId);
+  const confirm = useConfirm();
   const { tank, supply, sizing } = view;
   return (
     <article className="space-y-3 rounded-md border border-creek-100 p-3" aria-label={tank.name}>
+      {confirm.dialog}
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h3 className="font-semibold text-creek-900">{tank.name} <span className="text-sm font-normal text-creek-600">{formatQuantity('volume', tank.volumeM3, units)}</span></h3>
         {canEdit && !editing && (
           <div className="flex gap-2">
             <Button tone="quiet" onClick={() => setEditing(true)}>Edit tank</Button>
-            <Button tone="quiet" onClick={() => remove.mutate(tank.id)}>Delete tank</Button>
+            <Button tone="quiet" onClick={() => confirm.ask({
+              title: `Delete the tank “${tank.name}”?`,
+              body: (
+                <>
+                  <p>The tank goes, and with it its tank in the network and the pipes joined to it there. Ram sites that deliver into it stay, with no tank named.</p>
+                  <p>This cannot be undone.</p>
+                </>
+              ),
+              confirmLabel: 'Delete tank',
+              onConfirm: () => remove.mutateAsync(tank.id),
+            })}>Delete tank</Button>
           </div>
         )}
       </div>

@@ -1,5 +1,6 @@
 'use client';
 
+import { removeKeepingFocus } from '@/components/ui/focus-return';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -10,7 +11,7 @@ import { fromDisplay, inputValue, unitOf, type Quantity, type UnitSystem } from 
 import { TANK_WORDS } from '@/lib/validations/field-word-tables';
 import { TankSchema } from '@/lib/validations/tanks';
 import { NumberField } from './number-field';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { numberFrom, numberOrNull } from './typed-number';
 
 type Outlet = { label: string; elevation: string; residual: string; friction: string };
@@ -36,7 +37,7 @@ export function TankForm({ projectId, units, tank, sources, onDone }: {
   const setOutlet = (index: number, key: keyof Outlet, value: string) =>
     setState((previous) => ({ ...previous, outlets: previous.outlets.map((outlet, i) => (i === index ? { ...outlet, [key]: value } : outlet)) }));
   const save = useSaveTank(projectId);
-  const form = useSaveForm(TankSchema, (input) => save.mutateAsync({ id: tank?.id ?? null, input }), tank ? 'Tank saved.' : 'Tank added.', { table: TANK_WORDS, units });
+  const form = useForm({ schema: TankSchema, save: (input) => save.mutateAsync({ id: tank?.id ?? null, input }), savedText: tank ? 'Tank saved.' : 'Tank added.' }, { table: TANK_WORDS, units });
   const id = (name: string) => `tank-${tank?.id.slice(0, 8) ?? 'new'}-${name}`;
   const si = (quantity: Quantity, text: string) => fromDisplay(quantity, numberFrom(text), units);
   const siOrNull = (quantity: Quantity, text: string) => (numberOrNull(text) === null ? null : si(quantity, text));
@@ -84,7 +85,7 @@ export function TankForm({ projectId, units, tank, sources, onDone }: {
             <NumberField id={id(`outlet-${index}-elevation`)} label="Elevation" unit={unitOf('elevation', units)} value={outlet.elevation} onChange={(value) => setOutlet(index, 'elevation', value)} errors={form.fields[`outlets.${index}.elevationM`]} />
             <NumberField id={id(`outlet-${index}-residual`)} label="Residual head wanted" unit={unitOf('head', units)} value={outlet.residual} onChange={(value) => setOutlet(index, 'residual', value)} errors={form.fields[`outlets.${index}.residualHeadM`]} />
             <NumberField id={id(`outlet-${index}-friction`)} label="Friction loss to it" unit={unitOf('head', units)} value={outlet.friction} onChange={(value) => setOutlet(index, 'friction', value)} errors={form.fields[`outlets.${index}.frictionLossM`]} />
-            <Button tone="quiet" onClick={() => setState((previous) => ({ ...previous, outlets: previous.outlets.filter((_, i) => i !== index) }))}>Remove</Button>
+            <Button tone="quiet" onClick={(e) => removeKeepingFocus(e.currentTarget, () => setState((previous) => ({ ...previous, outlets: previous.outlets.filter((_, i) => i !== index) })))}>Remove</Button>
           </div>
         ))}
         <Button tone="quiet" onClick={() => setState((previous) => ({ ...previous, outlets: [...previous.outlets, { label: '', elevation: '', residual: '', friction: '0' }] }))}>Add an outlet</Button>

@@ -1,10 +1,9 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
-import type { FieldErrors } from '@/lib/errors';
-import { fromDisplay, type DisplayUnits } from '@/lib/units';
 import { CUSTOM_PIPE_WORDS } from '@/lib/validations/field-word-tables';
-import { fieldErrorsIn } from '@/lib/validations/field-words';
+import { useState, type FormEvent } from 'react';
+import { fromDisplay, type DisplayUnits } from '@/lib/units';
+import { useForm } from '@/lib/forms/use-form';
 import { CustomPipeSchema, type LineDesign } from '@/lib/validations/line-design';
 import { Button } from '@/components/ui/button';
 
@@ -14,7 +13,8 @@ const INPUT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-
 
 /** A pipe not in the catalogue (old stock, another standard), checked by the catalogue's own guard. */
 export function CustomPipeForm({ design, units, change }: { design: LineDesign; units: DisplayUnits; change: Change }) {
-  const [fields, setFields] = useState<FieldErrors>({});
+  const form = useForm(undefined, { table: CUSTOM_PIPE_WORDS, units: units.system });
+  const fields = form.fields;
   const [message, setMessage] = useState<string | null>(null);
 
   function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -40,11 +40,10 @@ export function CustomPipeForm({ design, units, change }: { design: LineDesign; 
       waveSpeedMs: safe(num('waveSpeed'), (v) => fromDisplay('velocity', v, units.system)),
       source: String(f.get('source') ?? '').trim(),
     };
-    const parsed = CustomPipeSchema.safeParse(candidate);
-    if (!parsed.success) return setFields(fieldErrorsIn(parsed.error, units.system, CUSTOM_PIPE_WORDS));
-    if (design.pipes.some((p) => p.id === id)) return setFields({ label: ['A custom pipe with this name exists already'] });
-    setFields({});
-    const problem = change({ ...design, pipes: [...design.pipes, parsed.data] }, `add the custom pipe ${label}`);
+    const pipe = form.check(CustomPipeSchema, candidate);
+    if (pipe === null) return;
+    if (design.pipes.some((p) => p.id === id)) return form.mark({ label: ['A custom pipe with this name exists already'] });
+    const problem = change({ ...design, pipes: [...design.pipes, pipe] }, `add the custom pipe ${label}`);
     setMessage(problem ?? `Added. Pick “Custom pipes of this line” in a stretch's pipe to use it.`);
     if (!problem) event.currentTarget.reset();
   }

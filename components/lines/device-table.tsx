@@ -1,5 +1,6 @@
 'use client';
 
+import { removeKeepingFocus } from '@/components/ui/focus-return';
 import { useState } from 'react';
 import type { LineDeviceKind } from '@/hydraulics/index';
 import { DEVICE_STYLE } from '@/lib/chart/profile-palette';
@@ -38,7 +39,7 @@ export function DeviceTable({ design, units, change, canEdit, tankLevels }: {
         </div>
       )}
       {design.devices.length === 0 ? (
-        <p className="text-sm text-creek-700">No devices yet.</p>
+        <p className="text-sm text-creek-700">No devices yet. Place air-release valves, washouts and break-pressure tanks with “Place by clicking” on the profile, or take the one-click fixes the warnings offer.</p>
       ) : (
         <table className="w-full text-left text-xs" data-testid="device-table">
           <thead className="bg-creek-50 text-creek-800">
@@ -60,7 +61,7 @@ export function DeviceTable({ design, units, change, canEdit, tankLevels }: {
                     {d.kind === 'break-pressure-tank' && d.waterLevelM === undefined && tank && <span className="ml-1 text-creek-600">(ground: {formatQuantity('length', tank.waterLevelM, units.system)})</span>}
                   </td>
                   <td className="px-2 py-1.5 text-creek-700">{d.label ?? ''}</td>
-                  {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={() => change(removeDevice(design, i), `remove ${DEVICE_STYLE[d.kind].label.toLowerCase()}`)}>Remove</Button></td>}
+                  {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={(e) => removeKeepingFocus(e.currentTarget, () => change(removeDevice(design, i), `remove ${DEVICE_STYLE[d.kind].label.toLowerCase()}`))}>Remove</Button></td>}
                 </tr>
               );
             })}

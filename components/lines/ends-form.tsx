@@ -4,8 +4,10 @@ import type { LineEnd } from '@/hydraulics/index';
 import type { PumpOutletHead } from '@/lib/lift/pump-outlet';
 import { lineStartFromRam } from '@/lib/lines/ram-start';
 import type { LineDesign } from '@/lib/validations/line-design';
+import { useState } from 'react';
 import { UnitNumberInput } from './unit-number-input';
-import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay, unitDefaults } from '@/lib/units';
+import { useReportUnsaved } from './unsaved-values';
+import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay } from '@/lib/units';
 
 type Change = (next: LineDesign, label: string) => string | null;
 
@@ -30,7 +32,8 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   const flowAwayFromRam = (): LineDesign['flow'] => {
     if (design.flow.kind !== 'pump-delivery') return design.flow;
     const fed = design.start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === (design.start as { ramSiteId: string }).ramSiteId) : undefined;
-    return { kind: 'design', flowM3s: fed?.deliveredFlowM3s ?? unitDefaults(units.system).designFlowM3s };
+    // A ram that is gone gives no figure: the line then finds its flow rather than take a made-up one.
+    return fed ? { kind: 'design', flowM3s: fed.deliveredFlowM3s } : { kind: 'find' };
   };
   const setStart = (start: LineDesign['start'], label: string) =>
     change({ ...design, start, flow: start.kind === 'ram-site' ? design.flow : flowAwayFromRam() }, label);
@@ -38,6 +41,15 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
   const setEnd = (end: LineEnd, label: string) => change({ ...design, end }, label);
   const setFlow = (flow: LineDesign['flow'], label: string) => change({ ...design, flow }, label);
   const { start, end, flow } = design;
+  // "Design flow" picked but no flow typed yet: the line keeps its saved flow until one is typed,
+  // so no made-up figure is ever saved.
+  const [choosingDesignFlow, setChoosingDesignFlow] = useState(false);
+  const typingDesignFlow = choosingDesignFlow && flow.kind !== 'design';
+  useReportUnsaved('design-flow-choice', typingDesignFlow ? 'Design flow, still to be typed' : null);
+  const pickFlow = (next: LineDesign['flow'], label: string) => {
+    setChoosingDesignFlow(false);
+    return next.kind === flow.kind ? null : setFlow(next, label);
+  };
   const ram = start.kind === 'ram-site' ? ramOutlets.find((o) => o.ramSiteId === start.ramSiteId) : undefined;
   const ramStart = ram ? lineStartFromRam(ram, firstGroundM) : null;
 
@@ -124,14 +136,20 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
         <legend className="px-1 text-sm font-semibold text-creek-900">Flow</legend>
         <div className="flex flex-col gap-1 text-sm">
           {start.kind === 'ram-site' && (
-            <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'pump-delivery'} onChange={() => setFlow({ kind: 'pump-delivery' }, 'use what the ram delivers')} /> What the ram delivers{ram ? ` (${formatQuantity('designFlow', ram.deliveredFlowM3s, units.system)})` : ''}</label>
+            <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'pump-delivery' && !typingDesignFlow} onChange={() => pickFlow({ kind: 'pump-delivery' }, 'use what the ram delivers')} /> What the ram delivers{ram ? ` (${formatQuantity('designFlow', ram.deliveredFlowM3s, units.system)})` : ''}</label>
           )}
-          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design'} onChange={() => setFlow({ kind: 'design', flowM3s: ram?.deliveredFlowM3s ?? unitDefaults(units.system).designFlowM3s }, 'use a design flow')} /> Design flow</label>
-          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'find'} onChange={() => setFlow({ kind: 'find' }, 'find the flow')} /> Find the flow the line carries by gravity</label>
+          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'design' || typingDesignFlow} onChange={() => setChoosingDesignFlow(true)} /> Design flow</label>
+          <label className="flex items-center gap-2"><input type="radio" name="flow-kind" disabled={!canEdit} checked={flow.kind === 'find' && !typingDesignFlow} onChange={() => pickFlow({ kind: 'find' }, 'find the flow')} /> Find the flow the line carries by gravity</label>
         </div>
-        {flow.kind === 'design' && (
-          <UnitNumberInput id="design-flow" label="Design flow" unit={units.flow} digits={3} value={toDisplay('designFlow', flow.flowM3s, units.system)} disabled={!canEdit}
-            onCommit={(v) => (v! < 0 ? 'The flow cannot be negative' : setFlow({ kind: 'design', flowM3s: fromDisplay('designFlow', v!, units.system) }, 'change the design flow'))} />
+        {(flow.kind === 'design' || typingDesignFlow) && (
+          <UnitNumberInput id="design-flow" label="Design flow" unit={units.flow} digits={3} value={flow.kind === 'design' ? toDisplay('designFlow', flow.flowM3s, units.system) : undefined} disabled={!canEdit}
+            hint={typingDesignFlow ? `Type the flow the line must carry; until then the line keeps ${flow.kind === 'find' ? 'finding its flow by gravity' : 'what the ram delivers'}` : undefined}
+            onCommit={(v) => {
+              if (v! < 0) return 'The flow cannot be negative';
+              const problem = setFlow({ kind: 'design', flowM3s: fromDisplay('designFlow', v!, units.system) }, typingDesignFlow ? 'use a design flow' : 'change the design flow');
+              if (!problem) setChoosingDesignFlow(false);
+              return problem;
+            }} />
         )}
       </fieldset>
     </div>

@@ -1,5 +1,6 @@
 'use client';
 
+import { removeKeepingFocus } from '@/components/ui/focus-return';
 import { useState } from 'react';
 import { FITTING_LOSS_COEFFICIENTS, type FittingKind } from '@/hydraulics/index';
 import { addFitting, removeFitting } from '@/lib/lines/edit-design';
@@ -39,7 +40,7 @@ export function FittingTable({ design, units, change, canEdit }: { design: LineD
                 <td className="tabular px-2 py-1.5">{formatQuantity('chainage', f.chainageM, units.system)}</td>
                 <td className="px-2 py-1.5">{f.label ?? '—'}</td>
                 <td className="tabular px-2 py-1.5">{f.k}</td>
-                {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={() => change(removeFitting(design, i), 'remove a fitting')}>Remove</Button></td>}
+                {canEdit && <td className="px-2 py-1.5"><Button tone="quiet" className="px-2 py-0.5 text-xs" onClick={(e) => removeKeepingFocus(e.currentTarget, () => change(removeFitting(design, i), 'remove a fitting'))}>Remove</Button></td>}
               </tr>
             ))}
           </tbody>

@@ -2,7 +2,7 @@
 
 import type { FormEvent } from 'react';
 import type { LineRecord } from '@/lib/data/lines';
-import { useSaveForm } from '@/lib/forms/use-save-form';
+import { useForm } from '@/lib/forms/use-form';
 import { useUpdateLine } from '@/lib/queries/lines';
 import { UpdateLineSchema } from '@/lib/validations/lines';
 import { Button } from '@/components/ui/button';
@@ -12,11 +12,15 @@ import { FormMessage } from '@/components/ui/form-message';
 /** Name and notes of the line; who checked and approved it is recorded on a revision, never typed here. */
 export function LineDetailsForm({ line, baseRevision, onSaved }: { line: LineRecord; baseRevision: () => number; onSaved: (revision: number) => void }) {
   const update = useUpdateLine(line.id);
-  const form = useSaveForm(UpdateLineSchema, async (input) => {
-    const saved = await update.mutateAsync(input);
-    onSaved(saved.revision);
-    return saved;
-  }, () => 'Saved.');
+  const form = useForm({
+    schema: UpdateLineSchema,
+    save: async (input) => {
+      const saved = await update.mutateAsync(input);
+      onSaved(saved.revision);
+      return saved;
+    },
+    savedText: () => 'Saved.',
+  });
   const { fields, note: message } = form;
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {

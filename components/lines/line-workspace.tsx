@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { applyLineFixes, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
@@ -37,6 +38,7 @@ import { ResultsTables } from './results-tables';
 import { SettingsForm } from './settings-form';
 import { StretchTable } from './stretch-table';
 import { useLineDraft } from './use-line-draft';
+import { UnsavedValuesProvider, useUnsavedValues } from './unsaved-values';
 import { reportFileName } from '@/lib/lines/file-names';
 import { WarningsPanel } from './warnings-panel';
 import { NetworkFlowsStrip } from './network-flows-strip';
@@ -59,6 +61,7 @@ export interface LineWorkspaceProps {
 export function LineWorkspace({ line, stations, context, projectName, unitSystem, canEdit, canComment, members }: LineWorkspaceProps) {
   const units = displayUnits(unitSystem);
   const draft = useLineDraft(line, stations, context, canEdit);
+  const unsaved = useUnsavedValues();
   const { design, result } = draft;
   const firstM = stations[0].chainageM;
   const lastM = stations[stations.length - 1].chainageM;
@@ -141,8 +144,9 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   }
 
   return (
+    <UnsavedValuesProvider value={unsaved.report}>
     <div className="space-y-5">
-      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} />
+      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} notTaken={unsaved.labels} />
       {'error' in result && (
         <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-3 text-sm text-clay-700">
           The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.
@@ -224,7 +228,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
       <Panel title={`Comments on this line and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
         <span id="line-comments" className="block scroll-mt-4" />
         {comments.isError ? (
-          <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void comments.refetch()}>Try again</button></p>
+          <LoadError what="The comments" onRetry={() => void comments.refetch()} />
         ) : (
           <CommentsPanel
             projectId={line.projectId}
@@ -275,5 +279,6 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
         </Panel>
       )}
     </div>
+    </UnsavedValuesProvider>
   );
 }

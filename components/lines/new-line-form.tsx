@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import type { FormEvent } from 'react';
 import type { RouteChoice } from '@/lib/data/line-routes';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useCreateLine } from '@/lib/queries/lines';
 import { displayUnits, formatQuantity, fromDisplay, type UnitSystem } from '@/lib/units';
 import { parseTypedNumber } from '@/lib/units/typed-number';
@@ -18,7 +18,7 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   const router = useRouter();
   const create = useCreateLine(projectId);
   const units = displayUnits(unitSystem);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
   const decimalMark = useDecimalMark();
 
   if (routes.length === 0) {

@@ -1,7 +1,7 @@
 'use client';
 
 import { findPipe, type PipeSpec } from '@/hydraulics/index';
-import { closestInSeries, PIPE_FAMILIES, pipeChoiceOf } from '@/lib/lines/pipe-choices';
+import { closestInSeries, PIPE_FAMILIES, pipeChoiceOf, pipeForFamily } from '@/lib/lines/pipe-choices';
 
 const SELECT = 'block w-full rounded-md border border-creek-200 bg-white px-1.5 py-1 text-xs disabled:bg-creek-50';
 const CUSTOM = 'custom';
@@ -19,8 +19,7 @@ export function PipePicker({ id, pipeId, custom, disabled, onPick }: { id: strin
       <select aria-label="Pipe material and standard" id={`${id}-family`} className={SELECT} disabled={disabled} value={familyId}
         onChange={(e) => {
           if (e.target.value === CUSTOM) return custom[0] && onPick(custom[0].id);
-          const f = PIPE_FAMILIES.find((x) => x.id === e.target.value)!;
-          onPick(closestInSeries(f.classes[0].seriesId, current));
+          onPick(pipeForFamily(e.target.value, current));
         }}>
         {PIPE_FAMILIES.map((f) => <option key={f.id} value={f.id}>{f.label}</option>)}
         {custom.length > 0 && <option value={CUSTOM}>Custom pipes of this line</option>}

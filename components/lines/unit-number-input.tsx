@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { useDecimalMark } from '@/components/ui/decimal-mark';
 import { formatTypedNumber, parseTypedNumber, type DecimalMark } from '@/lib/units/typed-number';
+import { useReportUnsaved } from './unsaved-values';
 
 export interface UnitNumberInputProps {
   id: string;
@@ -35,7 +36,11 @@ export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, 
   if (shown.value !== value || shown.mark !== mark) {
     setShown({ value, mark });
     setText(format(value, digits, mark));
+    // The refused text is gone; so is its complaint.
+    if (shown.value !== value) setError(null);
   }
+  // A refused value is not saved: the editor's save state must not say it is.
+  useReportUnsaved(id, ownError ? label : null);
 
   function commit() {
     const trimmed = text.trim();

@@ -4,6 +4,7 @@ import { HourChart } from '@/components/ui/hour-chart';
 import { Panel } from '@/components/ui/panel';
 import { HeadCell, TableFrame } from '@/components/ui/table-frame';
 import { dayViewModel } from '@/lib/network/day-view';
+import { networkFrictionWords } from '@/lib/network/friction-words';
 import type { DayRunResult } from '@/lib/network/run-result';
 import type { NetworkView } from '@/lib/network/view';
 import { formatQuantity, type UnitSystem } from '@/lib/units';
@@ -30,6 +31,7 @@ export function DayView({ view, units }: { view: NetworkView; units: UnitSystem 
         {model.tanks.length} {model.tanks.length === 1 ? 'tank' : 'tanks'}, {model.outlets.length} outlets over {model.hours} hours;{' '}
         {short === 0 ? 'every outlet keeps its residual pressure all day' : `${short} ${short === 1 ? 'outlet is' : 'outlets are'} short of residual pressure at their worst hour`}.
       </p>
+      <p className="mt-1 text-xs text-creek-700" data-testid="day-friction">{networkFrictionWords(day.friction)}</p>
       <NetworkFindings view={view} warnings={day.warnings} units={units} label="Day findings" />
       <div className="mt-4 grid gap-4 lg:grid-cols-2">
         {model.tanks.length > 0 && (

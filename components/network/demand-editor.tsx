@@ -14,7 +14,7 @@ export function DemandEditor({ projectId, view, units, canEdit }: { projectId: s
   const tie = useTieDemandUse(projectId);
   const save = useSaveNetworkNode(projectId);
   const outlets = view.records.nodes.filter((n) => n.kind === 'outlet');
-  if (outlets.length === 0) return <p className="text-sm text-creek-700">No outlets yet.</p>;
+  if (outlets.length === 0) return <p className="text-sm text-creek-700">No outlets yet. A line that ends at an outlet brings one; or add an outlet part to the network, then tie the uses of the Lift &amp; storage page to it here.</p>;
 
   return (
     <div className="space-y-4">

@@ -1,5 +1,6 @@
 'use client';
 
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
 import Link from 'next/link';
 import { useState } from 'react';
 import { TankForm } from '@/components/lift/tank-form';
@@ -10,15 +11,11 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { NetworkLinkRecord, NetworkNodeRecord } from '@/lib/network/records';
 import type { NetworkView } from '@/lib/network/view';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
 import { formatQuantity, fromDisplay, toDisplay, unitDefaults, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
-import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
-import { fieldErrorsIn } from '@/lib/validations/field-words';
+import { useForm } from '@/lib/forms/use-form';
 import { NetworkLinkSchema, NetworkNodeSchema, VALVE_KINDS } from '@/lib/validations/network';
 
-type Errors = Record<string, string[]>;
-const apiErrors = (error: unknown): Errors => (error instanceof ApiError && error.fields ? error.fields : {});
 
 /** The figures of the part picked on the schematic or in a table, edited in place. */
 export function EditPart({ projectId, view, units, selectedId }: { projectId: string; view: NetworkView; units: UnitSystem; selectedId: string | null }) {
@@ -56,17 +53,17 @@ function useSi(units: UnitSystem) {
 function NodeFigures({ projectId, record, units }: { projectId: string; record: NetworkNodeRecord; units: UnitSystem }) {
   const { id, ...initial } = record;
   const [draft, setDraft] = useState(initial);
-  const [errors, setErrors] = useState<Errors>({});
+  const form = useForm(undefined, { table: NETWORK_WORDS, units });
+  const errors = form.fields;
   const save = useSaveNetworkNode(projectId);
   const { shown, si } = useSi(units);
   const setData = (patch: Partial<typeof draft.data>) => setDraft((d) => ({ ...d, data: { ...d.data, ...patch } }));
   const e = (field: string) => errors[field];
 
   function submit() {
-    const parsed = NetworkNodeSchema.safeParse(draft);
-    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
-    setErrors({});
-    save.mutate({ id, input: parsed.data }, { onError: (error) => setErrors(apiErrors(error)) });
+    const input = form.check(NetworkNodeSchema, draft);
+    if (input === null) return;
+    save.mutate({ id, input }, { onError: (error) => form.fail(error) });
   }
 
   return (
@@ -107,7 +104,8 @@ function NodeFigures({ projectId, record, units }: { projectId: string; record: 
 function LinkFigures({ projectId, record, units }: { projectId: string; record: NetworkLinkRecord; units: UnitSystem }) {
   const { id, ...initial } = record;
   const [draft, setDraft] = useState(initial);
-  const [errors, setErrors] = useState<Errors>({});
+  const form = useForm(undefined, { table: NETWORK_WORDS, units });
+  const errors = form.fields;
   const save = useSaveNetworkLink(projectId);
   const { shown, si } = useSi(units);
   const setData = (patch: Partial<typeof draft.data>) => setDraft((d) => ({ ...d, data: { ...d.data, ...patch } }));
@@ -115,10 +113,9 @@ function LinkFigures({ projectId, record, units }: { projectId: string; record: 
   const pipeId = typeof draft.data.pipe === 'string' ? draft.data.pipe : null;
 
   function submit() {
-    const parsed = NetworkLinkSchema.safeParse(draft);
-    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
-    setErrors({});
-    save.mutate({ id, input: parsed.data }, { onError: (error) => setErrors(apiErrors(error)) });
+    const input = form.check(NetworkLinkSchema, draft);
+    if (input === null) return;
+    save.mutate({ id, input }, { onError: (error) => form.fail(error) });
   }
 
   return (

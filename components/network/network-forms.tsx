@@ -1,5 +1,6 @@
 'use client';
 
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
 import { useState, type FormEvent } from 'react';
 import { numberOrNull } from '@/components/lift/typed-number';
 import { PipePicker } from '@/components/lines/pipe-picker';
@@ -7,20 +8,13 @@ import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { SelectField, TextField } from '@/components/ui/field';
 import type { NetworkView } from '@/lib/network/view';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
 import { fromDisplay, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { NetworkLinkSchema, NetworkNodeSchema, OUTLET_KINDS, VALVE_KINDS } from '@/lib/validations/network';
-import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
-import { fieldErrorsIn } from '@/lib/validations/field-words';
+import { useForm } from '@/lib/forms/use-form';
 
-type Errors = Record<string, string[]>;
 // Typed numbers read with the project's decimal mark (the one parser); unreadable -> NaN, which the schema names.
 const num = numberOrNull;
-
-function errorsOf(error: unknown): Errors {
-  return error instanceof ApiError && error.fields ? error.fields : {};
-}
 
 const NODE_KINDS = [
   ['outlet', 'Outlet (tap, trough, house, garden)'],
@@ -34,7 +28,8 @@ const NODE_KINDS = [
 export function AddNodeForm({ projectId, view, units }: { projectId: string; view: NetworkView; units: UnitSystem }) {
   const save = useSaveNetworkNode(projectId);
   const [kind, setKind] = useState<(typeof NODE_KINDS)[number][0]>('outlet');
-  const [errors, setErrors] = useState<Errors>({});
+  const checks = useForm(undefined, { table: NETWORK_WORDS, units });
+  const errors = checks.fields;
   const [done, setDone] = useState<string | null>(null);
   const m = unitOf('elevation', units);
 
@@ -63,13 +58,12 @@ export function AddNodeForm({ projectId, view, units }: { projectId: string; vie
         } : {}),
       },
     };
-    const parsed = NetworkNodeSchema.safeParse(candidate);
-    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
-    setErrors({});
+    const input = checks.check(NetworkNodeSchema, candidate);
+    if (input === null) return;
     const target = event.currentTarget;
-    save.mutate({ id: null, input: parsed.data }, {
-      onSuccess: () => { setDone(`Added ${parsed.data.name}`); target.reset(); },
-      onError: (error) => setErrors(errorsOf(error)),
+    save.mutate({ id: null, input }, {
+      onSuccess: () => { setDone(`Added ${input.name}`); target.reset(); },
+      onError: (error) => checks.fail(error),
     });
   }
 
@@ -119,7 +113,8 @@ export function AddLinkForm({ projectId, view, units }: { projectId: string; vie
   const save = useSaveNetworkLink(projectId);
   const [kind, setKind] = useState<'pipe' | 'valve'>('pipe');
   const [pipeId, setPipeId] = useState(() => unitDefaults(units).networkPipeId);
-  const [errors, setErrors] = useState<Errors>({});
+  const checks = useForm(undefined, { table: NETWORK_WORDS, units });
+  const errors = checks.fields;
   const [done, setDone] = useState<string | null>(null);
 
   function submit(event: FormEvent<HTMLFormElement>) {
@@ -138,13 +133,12 @@ export function AddLinkForm({ projectId, view, units }: { projectId: string; vie
         ...(kind === 'valve' ? { valveKind: text('valveKind'), open: true, ...(num(text('setHead')) !== null ? { setHeadM: fromDisplay('head', num(text('setHead'))!, units) } : {}) } : {}),
       },
     };
-    const parsed = NetworkLinkSchema.safeParse(candidate);
-    if (!parsed.success) return setErrors(fieldErrorsIn(parsed.error, units, NETWORK_WORDS));
-    setErrors({});
+    const input = checks.check(NetworkLinkSchema, candidate);
+    if (input === null) return;
     const target = event.currentTarget;
-    save.mutate({ id: null, input: parsed.data }, {
-      onSuccess: () => { setDone(`Joined with ${parsed.data.name}`); target.reset(); },
-      onError: (error) => setErrors(errorsOf(error)),
+    save.mutate({ id: null, input }, {
+      onSuccess: () => { setDone(`Joined with ${input.name}`); target.reset(); },
+      onError: (error) => checks.fail(error),
     });
   }
   const e = (field: string) => errors[field];

@@ -11,6 +11,7 @@ import type { SizeRunResult, SolveRunResult } from '@/lib/network/run-result';
 import type { NetworkView } from '@/lib/network/view';
 import { useApplySizes, useNetworkRun, useStartNetworkRun } from '@/lib/queries/network';
 import { formatNumber, type UnitSystem } from '@/lib/units';
+import { networkFrictionWords } from '@/lib/network/friction-words';
 import { NetworkFindings } from './network-findings';
 
 /** Solve, size and day buttons, the running job's progress, and what the last runs found. */
@@ -54,6 +55,7 @@ export function NetworkRunPanel({ projectId, view, units, showing, onShow, canEd
         <div>
           <dt className="text-creek-600">Peak-hour solve</dt>
           <dd data-testid="solve-summary">{solved ? `${solved.converged ? 'Converged' : 'Did not converge'} in ${solved.iterations} iterations` : 'Not run yet'}</dd>
+          {solved && <dd className="mt-1 text-xs text-creek-700" data-testid="solve-friction">{networkFrictionWords(solved.friction)}</dd>}
         </div>
         <div>
           <dt className="text-creek-600">Least-cost sizes</dt>

@@ -1,7 +1,7 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { PipePicker } from '@/components/lines/pipe-picker';
 import { UnitNumberInput } from '@/components/lines/unit-number-input';
 import { Button } from '@/components/ui/button';
@@ -29,6 +29,7 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
   const [rows, setRows] = useState(initial);
   const [errors, setErrors] = useState<Errors>({});
   const [done, setDone] = useState<string | null>(null);
+  const added = useRef(0);
   const change = (key: string, patch: Partial<PriceRowDraft>) => {
     setDone(null);
     setRows((current) => current.map((row) => (row.key === key ? { ...row, ...patch } : row)));
@@ -82,7 +83,7 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
       {errors.items && <FormMessage message={errors.items.join(' ')} />}
       {canEdit && (
         <div className="flex flex-wrap items-center gap-3">
-          <Button tone="quiet" onClick={() => { setDone(null); setRows((current) => [...current, newPriceRow(current)]); }}>Add a pipe</Button>
+          <Button tone="quiet" onClick={() => { setDone(null); added.current += 1; const serial = added.current; setRows((current) => [...current, newPriceRow(current, serial)]); }}>Add a pipe</Button>
           <Button onClick={submit} disabled={save.isPending}>Save the price list</Button>
           <FormMessage message={save.error && !Object.keys(errors).length ? save.error.message : done} tone={save.error && !done ? 'error' : 'ok'} />
         </div>

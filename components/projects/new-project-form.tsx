@@ -5,14 +5,14 @@ import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useCreateProject } from '@/lib/queries/projects';
 import { CreateProjectSchema } from '@/lib/validations/projects';
 
 export function NewProjectForm({ teamId }: { teamId: string }) {
   const router = useRouter();
   const create = useCreateProject(teamId);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

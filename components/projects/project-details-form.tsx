@@ -1,13 +1,13 @@
 'use client';
 
+import { PROJECT_WORDS } from '@/lib/validations/field-word-tables';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import type { ProjectSummary } from '@/lib/data/projects';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
-import { PROJECT_WORDS } from '@/lib/validations/field-word-tables';
+import { useForm } from '@/lib/forms/use-form';
 import { useUpdateProject } from '@/lib/queries/projects';
 import { UpdateProjectSchema } from '@/lib/validations/projects';
 import { displayUnits, formatPlainNumber, fromDisplay, toDisplay } from '@/lib/units';
@@ -24,7 +24,7 @@ function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSumm
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
   const router = useRouter();
   const update = useUpdateProject(project.id);
-  const { fields, message, check, fail } = useFormErrors({ table: PROJECT_WORDS, units: project.unitSystem });
+  const { fields, message, check, fail } = useForm(undefined, { table: PROJECT_WORDS, units: project.unitSystem });
   const [saved, setSaved] = useState(false);
   const units = displayUnits(project.unitSystem);
   const frostShown = project.frostDepthM === null ? '' : formatPlainNumber(toDisplay('length', project.frostDepthM, units.system), 2);

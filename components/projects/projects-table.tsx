@@ -4,8 +4,8 @@ import { TableFrame } from '@/components/ui/table-frame';
 import { LoadError } from '@/components/ui/load-error';
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
-import { useState } from 'react';
-import { visibleProjects, type ProjectSortKey, type ProjectTableState } from '@/lib/projects-table';
+import { usePathname, useSearchParams } from 'next/navigation';
+import { projectTableParams, projectTableStateFromParams, sortedBy, visibleProjects, type ProjectSortKey, type ProjectTableState } from '@/lib/projects-table';
 import { teamProjectsQuery } from '@/lib/queries/projects';
 
 const COLUMNS: { key: ProjectSortKey; label: string }[] = [
@@ -16,11 +16,18 @@ const COLUMNS: { key: ProjectSortKey; label: string }[] = [
 
 export function ProjectsTable({ teamId }: { teamId: string }) {
   const { data: projects = [], isError, refetch } = useQuery(teamProjectsQuery(teamId));
-  const [state, setState] = useState<ProjectTableState>({ search: '', sort: 'updatedAt', descending: true, showArchived: false });
+  const pathname = usePathname();
+  const state = projectTableStateFromParams(useSearchParams());
   const rows = visibleProjects(projects, state);
 
+  // The browser's own history call: Next.js keeps useSearchParams in step without asking the server again.
+  function setState(change: (s: ProjectTableState) => ProjectTableState) {
+    const query = projectTableParams(change(state));
+    window.history.replaceState(null, '', query ? `${pathname}?${query}` : pathname);
+  }
+
   function sortBy(key: ProjectSortKey) {
-    setState((s) => ({ ...s, sort: key, descending: s.sort === key ? !s.descending : key === 'updatedAt' }));
+    setState((s) => sortedBy(s, key));
   }
 
   if (isError) {
@@ -71,7 +78,7 @@ export function ProjectsTable({ teamId }: { teamId: string }) {
               </tr>
             ))}
             {rows.length === 0 && (
-              <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet.' : 'No project matches.'}</td></tr>
+              <tr><td colSpan={3} className="px-4 py-6 text-center text-creek-600">{projects.length === 0 ? 'No projects yet. Owners and designers start one under “Start a project”; it then leads on to importing the pipe route.' : 'No project matches: clear the filter to see them all.'}</td></tr>
             )}
       </TableFrame>
     </div>

@@ -1,5 +1,5 @@
 const UPCOMING = [
-  { title: 'Review and report', text: 'Comments on the profile, approval of a revision, bill of materials and the PDF report.' },
+  { title: 'Bill of materials', text: 'One list of pipe by size and class, fittings and devices, with quantities and prices from the lines and the network.' },
 ];
 
 /** Capabilities still being built, labelled as such rather than faked. */

@@ -30,7 +30,7 @@ export function RevisionsList({ projectId }: { projectId: string }) {
             <td className="tabular px-4 py-2.5">{day(r.createdAt)} / {day(r.reviewedAt)}</td>
           </tr>
         ))}
-        {revisions.length === 0 && <tr><td colSpan={7} className="px-4 py-6 text-center text-creek-600">No revisions to show yet.</td></tr>}
+        {revisions.length === 0 && <tr><td colSpan={7} className="px-4 py-6 text-center text-creek-600">No revisions to show yet. A designer submits the working copy for review on this page; reviewers then approve it or send it back.</td></tr>}
       </TableFrame>
       {revisions.length > 1 && (
         picked.length === 2 ? (

@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import Link from 'next/link';
 import { useCommentThreads } from './use-comment-threads';
 import { commentPlaceHref } from '@/lib/review/comment-place';
@@ -7,7 +8,7 @@ import { commentPlaceHref } from '@/lib/review/comment-place';
 /** Every thread on the working copy, open ones first, each linking to the page where its pin is. */
 export function WorkingCopyComments({ projectId }: { projectId: string }) {
   const { threads, isError, refetch } = useCommentThreads(projectId, null, [], true);
-  if (isError) return <p role="alert" className="text-sm text-clay-700">The comments could not be loaded. <button type="button" className="underline" onClick={() => void refetch()}>Try again</button></p>;
+  if (isError) return <LoadError what="The comments" onRetry={() => void refetch()} />;
   const ordered = [...threads].sort((a, b) => Number(a.thread.resolved) - Number(b.thread.resolved));
   if (ordered.length === 0) return <p className="text-sm text-creek-700">No comments on the working copy yet. Pin one on a line&apos;s long profile, a route&apos;s ground profile or the network schematic.</p>;
   return (

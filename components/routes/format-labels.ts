@@ -1,4 +1,4 @@
-import type { HeightSource } from '@/hydraulics/survey/height-source';
+import type { HeightSource } from '@/hydraulics/index';
 import type { RouteSourceFormat } from '@/models/route';
 
 export const FORMAT_LABELS: Record<RouteSourceFormat, string> = {

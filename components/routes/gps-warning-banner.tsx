@@ -1,4 +1,4 @@
-import type { GpsHeightWarning } from '@/hydraulics/survey/gps-height-warning';
+import type { GpsHeightWarning } from '@/hydraulics/index';
 import type { UnitSystem } from '@/lib/units';
 import { gpsWarningText } from '@/lib/lines/warning-words';
 

@@ -5,7 +5,7 @@ import type { FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useCreateRoute } from '@/lib/queries/routes';
 import { CreateRouteSchema } from '@/lib/validations/routes';
 
@@ -13,7 +13,7 @@ import { CreateRouteSchema } from '@/lib/validations/routes';
 export function NewSketchRouteForm({ projectId }: { projectId: string }) {
   const router = useRouter();
   const create = useCreateRoute(projectId);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

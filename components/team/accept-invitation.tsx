@@ -7,7 +7,7 @@ import { selectTeam } from '@/app/actions/select-team';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useAcceptInvitation } from '@/lib/queries/invitations';
 import { AcceptInvitationSchema } from '@/lib/validations/auth';
 
@@ -22,7 +22,7 @@ interface Props {
 export function AcceptInvitation({ token, email, signedInAs }: Props) {
   const router = useRouter();
   const accept = useAcceptInvitation();
-  const { fields, message, check, fail, setMessage } = useFormErrors();
+  const { fields, message, check, fail, setMessage } = useForm();
 
   async function land(teamId: string) {
     await selectTeam({ teamId });

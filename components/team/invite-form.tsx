@@ -4,7 +4,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
-import { useFormErrors } from '@/lib/forms/use-form-errors';
+import { useForm } from '@/lib/forms/use-form';
 import { useInvite } from '@/lib/queries/invitations';
 import { ROLE_LABELS, ROLES } from '@/lib/roles';
 import { InviteMemberSchema } from '@/lib/validations/teams';
@@ -12,7 +12,7 @@ import { InviteMemberSchema } from '@/lib/validations/teams';
 export function InviteForm({ teamId }: { teamId: string }) {
   const invite = useInvite(teamId);
   const [sent, setSent] = useState<string | null>(null);
-  const { fields, message, check, fail } = useFormErrors();
+  const { fields, message, check, fail } = useForm();
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -4,6 +4,7 @@ import { TableFrame } from '@/components/ui/table-frame';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { FormMessage } from '@/components/ui/form-message';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { teamMembersQuery, useChangeRole, useRemoveMember } from '@/lib/queries/members';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
@@ -15,6 +16,7 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
   const changeRole = useChangeRole(teamId);
   const remove = useRemoveMember(teamId);
   const [error, setError] = useState<string | null>(null);
+  const confirm = useConfirm();
 
   return (
     <div className="space-y-2">
@@ -56,9 +58,13 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
                       type="button"
                       className="text-sm text-clay-600 underline"
                       onClick={() => {
-                        if (!window.confirm(`Remove ${m.name} from the team?`)) return;
                         setError(null);
-                        remove.mutate(m.userId, { onError: (err) => setError(err.message) });
+                        confirm.ask({
+                          title: `Remove ${m.name} from the team?`,
+                          body: <p>{m.name} loses access to the team&apos;s projects at once. What they made stays. To bring them back, invite them again.</p>,
+                          confirmLabel: 'Remove from the team',
+                          onConfirm: () => remove.mutateAsync(m.userId),
+                        });
                       }}
                     >
                       Remove
@@ -68,6 +74,7 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
               </tr>
             ))}
       </TableFrame>
+      {confirm.dialog}
     </div>
   );
 }

@@ -1,3 +1,4 @@
+import { pointIndexAt } from '../profile/grid';
 import { findLimitRanges } from '../profile/limit-zones';
 import type { LimitZone, LineProfile } from '../profile/result-types';
 import type { LineWarning, WarningValues } from './types';
@@ -113,8 +114,7 @@ export function trueSiphonWarnings(profile: LineProfile): LineWarning[] {
   const ranges = findLimitRanges({ chainageM, valueM: staticPressureHeadM, dropAtPointM: null, limitM: 0, side: 'below', mergeWithinM: profile.settings.heightScatterM });
   return ranges.map((range) => {
     const zone: LimitZone = { kind: 'negative-pressure', ...range };
-    let top = 0;
-    for (let i = 0; i < chainageM.length; i++) if (Math.abs(chainageM[i] - range.worstChainageM) < Math.abs(chainageM[top] - range.worstChainageM)) top = i;
+    const top = pointIndexAt(chainageM, range.worstChainageM);
     const values: WarningValues = { ...zoneValues(zone, profile), headM: range.worstExcessM, chainageM: range.worstChainageM, elevationM: pipeElevationM[top] };
     return {
       code: 'true-siphon',

@@ -1,7 +1,7 @@
 import { DEFAULT_DEMAND_FIGURES } from './default-figures';
 import type { DemandFigures } from './figures';
 import { peakOfSummedFlows, useFlowIntervals } from './flow-timeline';
-import { assertArray } from './guards';
+import { assertArray } from '../input-guards';
 import { HOURS_PER_DAY } from './hourly-pattern';
 import { useDemand } from './use-demand';
 import type { UseDemandResult, WaterUse } from './use-types';

@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../errors';
-import { assertArray, assertFiniteNumber, assertNonNegativeInteger, assertPositive } from './guards';
+import { assertArray, assertFiniteNumber, assertNonNegativeInteger, assertPositive } from '../input-guards';
 
 /** Hours in the day a pattern covers: index h is the hour from h:00 to h+1:00. */
 export const HOURS_PER_DAY = 24;
@@ -117,3 +117,17 @@ export function drawPatternOf(hourlyVolumeM3: readonly number[]): DrawPattern {
     hourlyFractions: daily > 0 ? hourlyVolumeM3.map((volume) => volume / daily) : uniformPattern(),
   };
 }
+
+/**
+ * The draw of an outlet whose peak flow is fixed (a tap rated at so many L/s) shaped by the hours of
+ * the uses it serves: the busiest hour draws `peakFlowM3s`, every other hour in proportion to its
+ * share of the day's volume. A day run then draws the peak in the peak hour only, not all day.
+ */
+export function drawPatternWithPeak(peakFlowM3s: number, hourlyVolumeM3: readonly number[]): DrawPattern {
+  assertFiniteNumber(peakFlowM3s, 'peakFlowM3s');
+  if (peakFlowM3s < 0) throw new HydraulicsInputError('peakFlowM3s', `must not be negative, got ${peakFlowM3s}`);
+  const { hourlyFractions } = drawPatternOf(hourlyVolumeM3);
+  const busiest = Math.max(...hourlyFractions);
+  return { meanFlowM3s: peakFlowM3s / (HOURS_PER_DAY * busiest), hourlyFractions };
+}
+

@@ -2,7 +2,7 @@ import { SECONDS_PER_DAY } from '../constants';
 import { HydraulicsInputError } from '../errors';
 import { DEFAULT_DEMAND_FIGURES } from './default-figures';
 import type { DemandFigures } from './figures';
-import { assertPositive } from './guards';
+import { assertPositive } from '../input-guards';
 import { assertHourlyPattern, deliveryWindowPattern, HOURS_PER_DAY, uniformPattern } from './hourly-pattern';
 import { resolveUseFigure, useQuantity } from './use-figure';
 import type { UseDelivery, UseDemandResult, WaterUse } from './use-types';

@@ -1,6 +1,6 @@
 import { HydraulicsInputError } from '../errors';
 import type { DemandFigures } from './figures';
-import { assertNonNegative } from './guards';
+import { assertNonNegative } from '../input-guards';
 import type { WaterUse } from './use-types';
 
 export interface UseFigure {

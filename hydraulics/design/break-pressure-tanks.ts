@@ -111,17 +111,19 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
     if (over.chainageM <= at.chainageM + EPS_M) {
       return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
     }
+    // Sites are weighed from plain numbers; a Position is made only for a new best (a long reach
+    // offers a site at every point, and an object for each would dominate the planner's time).
     const pick: { best: Position | null } = { best: null };
-    const consider = (site: Position, floorM: number): void => {
-      const siteLevel = site.groundM + raise;
+    const consider = (piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void => {
+      const siteLevel = groundM + raise;
       if (siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) return;
-      if (siteLevel - site.pipeM > allow(site.piece) + EPS_M) return;
-      if (pick.best === null || siteLevel <= pick.best.groundM + raise) pick.best = site;
+      if (siteLevel - pipeM > allow(piece) + EPS_M) return;
+      if (pick.best === null || siteLevel <= pick.best.groundM + raise) pick.best = { piece, chainageM: siteChainageM, pipeM, groundM };
     };
     for (let k = at.piece; k <= over.piece; k++) {
       const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
       if (k > at.piece) {
-        consider({ piece: k, chainageM: chainageM[k], pipeM: pipeElevationM[k], groundM: groundElevationM[k] }, floorAt(highestAhead[k], k, chainageM[k]));
+        consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], floorAt(highestAhead[k], k, chainageM[k]));
       }
       // Where the tank level on the ground inside this piece comes down to the floor set by the
       // summits ahead (both vary linearly along the piece): the lowest usable site.
@@ -135,12 +137,12 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
         const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
         const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
         const c = lerp(c0, pieceEndM, t);
-        consider({ piece: k, chainageM: c, pipeM: lerp(z0, z1, t), groundM: lerp(g0, g1, t) }, floorAt(highestAhead[k + 1], k, c));
+        consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), floorAt(highestAhead[k + 1], k, c));
       }
     }
     const overLoss = lossAt(over.piece, over.chainageM);
     const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
-    consider(over, floorAt(aheadOfOver, over.piece, over.chainageM));
+    consider(over.piece, over.chainageM, over.pipeM, over.groundM, floorAt(aheadOfOver, over.piece, over.chainageM));
     const chosen = pick.best;
     if (chosen === null) {
       return fail(

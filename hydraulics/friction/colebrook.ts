@@ -17,11 +17,15 @@ export function colebrookFrictionFactor(options: FrictionFactorOptions): number 
   return colebrookUnchecked(options.reynolds, options.relativeRoughness);
 }
 
-/** Hot-path kernel of {@link colebrookFrictionFactor}: no checks, no allocation. */
-export function colebrookUnchecked(reynolds: number, relativeRoughness: number): number {
+/**
+ * Hot-path kernel of {@link colebrookFrictionFactor}: no checks, no allocation. `startInverseSqrtF`
+ * (1/√f of a nearby solve, e.g. the same pipe's last iteration) replaces the Swamee-Jain start: Newton
+ * converges from any positive start, to the same tolerance, in one or two steps from a close one.
+ */
+export function colebrookUnchecked(reynolds: number, relativeRoughness: number, startInverseSqrtF = 0): number {
   const a = relativeRoughness / 3.7;
   const b = 2.51 / reynolds;
-  const guess = 1 / Math.sqrt(swameeJainUnchecked(reynolds, relativeRoughness));
+  const guess = startInverseSqrtF > 0 ? startInverseSqrtF : 1 / Math.sqrt(swameeJainUnchecked(reynolds, relativeRoughness));
   let x = Number.isFinite(guess) && guess > 0 ? guess : 1;
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration += 1) {
     const inner = a + b * x;

@@ -26,13 +26,32 @@ export function darcyFrictionFactor(options: FrictionFactorOptions): number {
 }
 
 /** Hot-path kernel of {@link darcyFrictionFactor}. */
-export function darcyFrictionFactorUnchecked(reynolds: number, relativeRoughness: number): number {
+export function darcyFrictionFactorUnchecked(reynolds: number, relativeRoughness: number, startInverseSqrtF = 0): number {
   if (reynolds < LAMINAR_LIMIT_RE) return 64 / reynolds;
-  if (reynolds >= TURBULENT_LIMIT_RE) return colebrookUnchecked(reynolds, relativeRoughness);
+  if (reynolds >= TURBULENT_LIMIT_RE) return colebrookUnchecked(reynolds, relativeRoughness, startInverseSqrtF);
   const laminarEnd = 64 / LAMINAR_LIMIT_RE;
   const turbulentStart = colebrookUnchecked(TURBULENT_LIMIT_RE, relativeRoughness);
   const fraction = (reynolds - LAMINAR_LIMIT_RE) / (TURBULENT_LIMIT_RE - LAMINAR_LIMIT_RE);
   return laminarEnd + fraction * (turbulentStart - laminarEnd);
+}
+
+/**
+ * d ln h / d ln Q of the Darcy-Weisbach friction loss at this Reynolds number, given its friction
+ * factor `f` (h ∝ f(Re)·Q² with Re ∝ Q): 1 in laminar flow, 2 + d ln f / d ln Re otherwise. On
+ * Colebrook, with x = 1/√f and c = (2/ln 10)·(2.51/Re) / (ε/(3.7D) + 2.51·x/Re), implicit
+ * differentiation gives d ln f / d ln Re = −2c/(1 + c); in the transition band f is linear in Re.
+ * The network solver's Newton step needs this slope: 2h/Q alone makes it converge only linearly.
+ */
+export function darcyLossExponentUnchecked(reynolds: number, relativeRoughness: number, f: number): number {
+  if (reynolds < LAMINAR_LIMIT_RE) return 1;
+  if (reynolds >= TURBULENT_LIMIT_RE) {
+    const b = 2.51 / reynolds;
+    const c = ((2 / Math.LN10) * b) / (relativeRoughness / 3.7 + b / Math.sqrt(f));
+    return 2 - (2 * c) / (1 + c);
+  }
+  const laminarEnd = 64 / LAMINAR_LIMIT_RE;
+  const turbulentStart = colebrookUnchecked(TURBULENT_LIMIT_RE, relativeRoughness);
+  return 2 + (reynolds * (turbulentStart - laminarEnd)) / ((TURBULENT_LIMIT_RE - LAMINAR_LIMIT_RE) * f);
 }
 
 /** Kinematic viscosity of water at 20 °C, m²/s: the default when none is given. */

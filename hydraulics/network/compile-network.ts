@@ -32,6 +32,8 @@ export interface CompiledNetwork {
   laws: LinkLaw[];
   /** Minor-loss coefficient m of m·Q|Q|, m per (m³/s)². */
   minor: Float64Array;
+  /** Total K of each link behind `minor`: its fittings plus the free-surface entrance (for a pipe of another bore). */
+  minorK: Float64Array;
   diameterM: Float64Array;
   /** Length of each link, m (0 for the hidden float valves). */
   lengthM: Float64Array;
@@ -67,6 +69,9 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
   assertNetworkInput(input);
   const settings = resolveNetworkSettings(input.settings);
   const viscosity = waterKinematicViscosityM2s(settings.waterTemperatureC);
+  // Line analysis, analyze-profile.ts: the grade one velocity head plus the entrance loss below a free surface.
+  const freeSurfaceK = (node: NetworkNode): number =>
+    settings.freeSurfaceLosses && (hasFixedHead(node.kind) || node.kind === 'break-pressure-tank') ? 1 + settings.entranceLossK : 0;
   const hiddenInlets = input.nodes.filter((node) => node.kind === 'break-pressure-tank');
   const nodeCount = input.nodes.length + hiddenInlets.length;
   const nodeIds = [...input.nodes.map((node) => node.id), ...hiddenInlets.map((node) => `${node.id}#inlet`)];
@@ -89,6 +94,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
   const from = new Int32Array(linkCount);
   const to = new Int32Array(linkCount);
   const minor = new Float64Array(linkCount);
+  const minorK = new Float64Array(linkCount);
   const diameterM = new Float64Array(linkCount);
   const lengthM = new Float64Array(linkCount);
   const setHeadM = new Float64Array(linkCount).fill(Number.NaN);
@@ -103,7 +109,8 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     from[index] = nodeIndex.get(link.from) as number;
     to[index] = inletOf.get(toIndex) ?? toIndex;
     laws.push(lawFor(pipe, link.lengthM, settings, viscosity));
-    minor[index] = minorLossCoefficient(link.minorK ?? 0, pipe.insideDiameterM);
+    minorK[index] = (link.minorK ?? 0) + freeSurfaceK(input.nodes[from[index]]);
+    minor[index] = minorLossCoefficient(minorK[index], pipe.insideDiameterM);
     diameterM[index] = pipe.insideDiameterM;
     lengthM[index] = link.lengthM;
     pipes.push(pipe);
@@ -142,6 +149,7 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     to,
     laws,
     minor,
+    minorK,
     diameterM,
     lengthM,
     linearBelowM3s: Float64Array.from(diameterM, (d) => LINEAR_BELOW_VELOCITY_MS * pipeAreaM2(d)),

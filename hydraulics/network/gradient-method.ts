@@ -1,6 +1,6 @@
 import { pipeAreaM2 } from '../friction/pipe-flow';
 import type { CompiledNetwork } from './compile-network';
-import { CLOSED_LINK_RESISTANCE, lossAndGradient } from './link-loss';
+import { CLOSED_LINK_RESISTANCE, lossAndGradientInto, type LossAndGradient } from './link-loss';
 import { SparseCholesky } from './sparse/cholesky';
 import { isShut, type NetworkTopology } from './topology';
 
@@ -80,6 +80,8 @@ export class GradientSolver {
   private readonly edgeB: Int32Array;
   private readonly incidentStart: Int32Array;
   private readonly incidentLink: Int32Array;
+  /** Where each link's loss and slope are written in the loops (no object per link per step). */
+  private readonly scratch: LossAndGradient = { lossM: 0, gradient: 0 };
 
   constructor(
     private readonly net: CompiledNetwork,
@@ -285,7 +287,7 @@ export class GradientSolver {
         p[k] = 1 / CLOSED_LINK_RESISTANCE;
         y[k] = flow[k];
       } else {
-        const { lossM, gradient } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
+        const { lossM, gradient } = lossAndGradientInto(this.scratch, laws[k], minor[k], flow[k], linearBelowM3s[k]);
         p[k] = 1 / gradient;
         y[k] = lossM / gradient;
       }
@@ -332,7 +334,7 @@ export class GradientSolver {
     let worst = 0;
     for (let k = 0; k < linkCount; k++) {
       if (states[k] !== LinkState.Open) continue;
-      const { lossM } = lossAndGradient(laws[k], minor[k], flow[k], linearBelowM3s[k]);
+      const { lossM } = lossAndGradientInto(this.scratch, laws[k], minor[k], flow[k], linearBelowM3s[k]);
       worst = Math.max(worst, Math.abs(lossM - (head[from[k]] - head[to[k]])));
     }
     return worst;

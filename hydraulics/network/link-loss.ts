@@ -1,11 +1,11 @@
 import { GRAVITY_MS2 } from '../constants';
-import { darcyFrictionFactorUnchecked } from '../friction/darcy-weisbach';
+import { darcyFrictionFactorUnchecked, darcyLossExponentUnchecked } from '../friction/darcy-weisbach';
 import { pipeAreaM2 } from '../friction/pipe-flow';
 
 /**
  * Slope floor of any link's loss, m per m³/s: a link with no friction and no fittings (a bare valve)
  * still loses 1 mm of head at 1 m³/s, so the system stays well conditioned. Common practice, no
- * source (the gradient method needs some floor; Rossman, EPANET 2 Users Manual, 2000, App. D).
+ * source (the gradient method needs some floor: Todini and Pilati 1988 [NET-TP88]).
  */
 export const MIN_LOSS_GRADIENT = 1e-3;
 /**
@@ -20,7 +20,18 @@ export const CLOSED_LINK_RESISTANCE = 1e12;
 /** Friction law of one link with its constants folded in. */
 export type LinkLaw =
   | { kind: 'hazen-williams'; resistance: number; exponent: number }
-  | { kind: 'darcy-weisbach'; lengthM: number; diameterM: number; relativeRoughness: number; kinematicViscosityM2s: number };
+  | {
+      kind: 'darcy-weisbach';
+      lengthM: number;
+      diameterM: number;
+      relativeRoughness: number;
+      kinematicViscosityM2s: number;
+      /**
+       * 1/√f of this link's last turbulent friction factor: the next Colebrook solve starts there
+       * (a cache for speed only; the factor converges to the same tolerance from any start).
+       */
+      lastInverseSqrtF?: number;
+    };
 
 /** Head loss of a link and its slope at one flow. */
 export interface LossAndGradient {
@@ -44,35 +55,61 @@ export function frictionLossM(law: LinkLaw, q: number): number {
   const area = pipeAreaM2(law.diameterM);
   const velocity = magnitude / area;
   const reynolds = (velocity * law.diameterM) / law.kinematicViscosityM2s;
-  const f = darcyFrictionFactorUnchecked(reynolds, law.relativeRoughness);
+  const f = darcyFrictionFactorUnchecked(reynolds, law.relativeRoughness, law.lastInverseSqrtF);
+  law.lastInverseSqrtF = 1 / Math.sqrt(f);
   return (Math.sign(q) * f * law.lengthM * velocity * velocity) / (law.diameterM * 2 * GRAVITY_MS2);
 }
 
-function rawLossAndGradient(law: LinkLaw, minor: number, q: number): LossAndGradient {
+/** Writes the raw loss and slope of a link at flow `q` into `out` (no allocation on the solver's hot path). */
+function rawLossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: number, q: number): void {
   const magnitude = Math.abs(q);
-  if (magnitude === 0) return { lossM: 0, gradient: 0 };
+  if (magnitude === 0) {
+    out.lossM = 0;
+    out.gradient = 0;
+    return;
+  }
   const minorGradient = 2 * minor * magnitude;
   if (law.kind === 'hazen-williams') {
     // One power per call: r·|Q|^(n-1) gives both the loss (× Q) and the slope (× n).
     const perFlow = law.resistance * magnitude ** (law.exponent - 1);
-    return { lossM: (perFlow + minor * magnitude) * q, gradient: law.exponent * perFlow + minorGradient };
+    out.lossM = (perFlow + minor * magnitude) * q;
+    out.gradient = law.exponent * perFlow + minorGradient;
+    return;
   }
-  const friction = frictionLossM(law, q);
-  return { lossM: friction + minor * q * magnitude, gradient: (2 * Math.abs(friction)) / magnitude + minorGradient };
+  const velocity = magnitude / pipeAreaM2(law.diameterM);
+  const reynolds = (velocity * law.diameterM) / law.kinematicViscosityM2s;
+  const f = darcyFrictionFactorUnchecked(reynolds, law.relativeRoughness, law.lastInverseSqrtF);
+  law.lastInverseSqrtF = 1 / Math.sqrt(f);
+  const friction = (f * law.lengthM * velocity * velocity) / (law.diameterM * 2 * GRAVITY_MS2);
+  out.lossM = Math.sign(q) * friction + minor * q * magnitude;
+  // The exact slope, friction factor's change with the flow included: a full Newton step.
+  out.gradient = (darcyLossExponentUnchecked(reynolds, law.relativeRoughness, f) * friction) / magnitude + minorGradient;
 }
 
 /**
- * Loss and slope of a link (friction plus minor loss `minor`·Q|Q|). Hazen-Williams has the exact
- * slope n·r·|Q|^(n-1); for Darcy-Weisbach the friction factor is held for the step (slope 2h/Q), as
- * the gradient method allows (Todini & Pilati 1988). Below `linearBelowM3s` the loss is linear
- * (see {@link LINEAR_BELOW_VELOCITY_MS}); the slope never falls below {@link MIN_LOSS_GRADIENT}.
+ * Loss and slope of a link (friction plus minor loss `minor`·Q|Q|) written into `out`. Hazen-Williams
+ * has the exact slope n·r·|Q|^(n-1); Darcy-Weisbach the exact slope with the friction factor's own
+ * change (`darcyLossExponentUnchecked`), so the gradient method keeps Newton's quadratic
+ * convergence (Todini & Pilati 1988). Below `linearBelowM3s` the loss
+ * is linear (see {@link LINEAR_BELOW_VELOCITY_MS}); the slope never falls below {@link MIN_LOSS_GRADIENT}.
  */
-export function lossAndGradient(law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
+export function lossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
   if (Math.abs(q) < linearBelowM3s) {
-    const chord = Math.max(rawLossAndGradient(law, minor, linearBelowM3s).lossM / linearBelowM3s, MIN_LOSS_GRADIENT);
-    return { lossM: chord * q, gradient: chord };
+    rawLossAndGradientInto(out, law, minor, linearBelowM3s);
+    const chord = Math.max(out.lossM / linearBelowM3s, MIN_LOSS_GRADIENT);
+    out.lossM = chord * q;
+    out.gradient = chord;
+    return out;
   }
-  const raw = rawLossAndGradient(law, minor, q);
-  if (raw.gradient < MIN_LOSS_GRADIENT) return { lossM: MIN_LOSS_GRADIENT * q, gradient: MIN_LOSS_GRADIENT };
-  return raw;
+  rawLossAndGradientInto(out, law, minor, q);
+  if (out.gradient < MIN_LOSS_GRADIENT) {
+    out.lossM = MIN_LOSS_GRADIENT * q;
+    out.gradient = MIN_LOSS_GRADIENT;
+  }
+  return out;
+}
+
+/** {@link lossAndGradientInto} returning a fresh object (outside the solver's loops). */
+export function lossAndGradient(law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
+  return lossAndGradientInto({ lossM: 0, gradient: 0 }, law, minor, q, linearBelowM3s);
 }

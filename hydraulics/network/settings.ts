@@ -6,6 +6,7 @@ import {
   HAZEN_WILLIAMS_K_SI,
   HAZEN_WILLIAMS_RADIUS_EXPONENT,
 } from '../friction/hazen-williams';
+import { DEFAULT_LINE_SETTINGS } from '../profile/settings';
 import type { NetworkSettings } from './types';
 
 /**
@@ -18,8 +19,15 @@ export const DEFAULT_HAZEN_WILLIAMS_CONSTANT =
 /** Settings with every default filled in. */
 export type ResolvedNetworkSettings = Required<NetworkSettings>;
 
+/**
+ * Defaults match the line analysis (`DEFAULT_LINE_SETTINGS`): Darcy-Weisbach with Colebrook, and
+ * the sharp-edged entrance (K = 0.5) plus the velocity head where water leaves a free surface, so a
+ * line reads the same flows on its own page and in the network.
+ */
 export const DEFAULT_NETWORK_SETTINGS: ResolvedNetworkSettings = {
-  frictionMethod: 'hazen-williams' as FrictionMethod,
+  frictionMethod: 'darcy-weisbach' as FrictionMethod,
+  freeSurfaceLosses: true,
+  entranceLossK: DEFAULT_LINE_SETTINGS.entranceLossK,
   hazenWilliamsConstant: DEFAULT_HAZEN_WILLIAMS_CONSTANT,
   hazenWilliamsFlowExponent: HAZEN_WILLIAMS_FLOW_EXPONENT,
   hazenWilliamsDiameterExponent: HAZEN_WILLIAMS_DIAMETER_EXPONENT,

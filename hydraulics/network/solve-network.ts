@@ -40,6 +40,8 @@ export function solutionOf(net: CompiledNetwork, topology: NetworkTopology, resu
   });
   return {
     converged: result.converged,
+    frictionMethod: net.settings.frictionMethod,
+    freeSurfaceLosses: net.settings.freeSurfaceLosses,
     iterations: result.iterations,
     flowsM3s,
     headsM,
@@ -58,7 +60,8 @@ export function solutionOf(net: CompiledNetwork, topology: NetworkTopology, resu
  * Steady flows and heads in a network of sources, tanks, junctions, outlets, ram outlets and
  * break-pressure tanks joined by pipes and valves, by the global gradient method (Todini & Pilati
  * 1988) with a sparse Cholesky solve, so the cost grows about linearly with the size. Friction by
- * Hazen-Williams (constant and exponents in `settings`) or Darcy-Weisbach, plus minor losses.
+ * Darcy-Weisbach with Colebrook (the default, as the line analysis) or Hazen-Williams (constant and
+ * exponents in `settings`), plus minor losses and the entrance losses at free surfaces.
  * Check valves, float valves and PRVs take the state the heads call for. A part of the network with
  * no source or tank throws `HydraulicsInputError` naming its nodes; a part cut off by shut valves
  * is reported in `isolatedNodeIds` and the warnings.

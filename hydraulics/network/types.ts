@@ -72,10 +72,18 @@ export interface NetworkLink {
 export type NetworkPipe = Pick<PipeSpec, 'id' | 'insideDiameterM'> &
   Partial<Pick<PipeSpec, 'hazenWilliamsC' | 'roughnessM' | 'pressureRatingPa' | 'label'>>;
 
-/** Solver settings; the defaults are the core's own friction law. */
+/** Solver settings; the defaults are the line analysis's own (Darcy-Weisbach, free-surface losses). */
 export interface NetworkSettings {
-  /** @default 'hazen-williams' */
+  /** @default 'darcy-weisbach' (Colebrook friction factor), as the line analysis */
   frictionMethod?: FrictionMethod;
+  /**
+   * Count the loss where water leaves a free surface (source, tank, break-pressure tank) into the
+   * link laid from it: the velocity head plus the entrance loss, K = 1 + `entranceLossK`, as the
+   * line analysis does. Published network benchmarks leave it out. @default true
+   */
+  freeSurfaceLosses?: boolean;
+  /** Entrance loss coefficient at a free surface. @default 0.5 (sharp-edged, as the line analysis) */
+  entranceLossK?: number;
   /**
    * Hazen-Williams constant ω in h = ω L Q^a / (C^a D^b), SI. @default 10.6742 (the exact image of
    * V = 0.849 C R^0.63 S^0.54, the form `hazenWilliamsHeadLoss` uses)
@@ -118,6 +126,10 @@ export type ValveState = 'open' | 'closed' | 'active';
 /** The steady state of the network. */
 export interface NetworkSolution {
   converged: boolean;
+  /** The friction law the heads were solved with (say it beside every result). */
+  frictionMethod: FrictionMethod;
+  /** Whether entrance and velocity-head losses at free surfaces were counted. */
+  freeSurfaceLosses: boolean;
   iterations: number;
   /** Flow per link, m³/s, positive from `from` to `to`. */
   flowsM3s: Record<string, number>;

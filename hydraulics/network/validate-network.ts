@@ -1,6 +1,7 @@
 import { findPipe } from '../catalogue/index';
 import { HydraulicsInputError } from '../errors';
 import { assertFiniteNumber, assertNonNegative, assertPositive } from '../input-guards';
+import { DEFAULT_NETWORK_SETTINGS } from './settings';
 import type { NetworkInput, NetworkLink, NetworkNode, NetworkNodeKind, NetworkPipe, NetworkLinkStatus } from './types';
 
 const NODE_KINDS: readonly NetworkNodeKind[] = ['source', 'tank', 'junction', 'outlet', 'ram-outlet', 'break-pressure-tank'];
@@ -96,7 +97,7 @@ export function assertNetworkInput(input: NetworkInput): void {
     if (nodes.has(node.id)) throw new HydraulicsInputError('nodes.id', `"${node.id}" is used twice`, index);
     nodes.set(node.id, node);
   });
-  const method = input.settings?.frictionMethod ?? 'hazen-williams';
+  const method = input.settings?.frictionMethod ?? DEFAULT_NETWORK_SETTINGS.frictionMethod;
   if (method !== 'hazen-williams' && method !== 'darcy-weisbach') {
     throw new HydraulicsInputError('settings.frictionMethod', `must be 'hazen-williams' or 'darcy-weisbach', got ${String(method)}`);
   }
@@ -104,6 +105,9 @@ export function assertNetworkInput(input: NetworkInput): void {
     const value = input.settings?.[key];
     if (value !== undefined) assertPositive(value, `settings.${key}`);
   }
+  if (input.settings?.entranceLossK !== undefined) assertNonNegative(input.settings.entranceLossK, 'settings.entranceLossK');
+  const freeSurface = input.settings?.freeSurfaceLosses;
+  if (freeSurface !== undefined && typeof freeSurface !== 'boolean') throw new HydraulicsInputError('settings.freeSurfaceLosses', 'must be true or false');
   const linkIds = new Set<string>();
   const prvTargets = new Map<string, string>();
   input.links.forEach((link, index) => {

@@ -1,4 +1,4 @@
-import { assertNonNegative, assertPositive } from '../demand/guards';
+import { assertNonNegative, assertPositive } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 import { measuredFlowM3s, type FlowMeasurement } from '../yield/bucket-flow';
 import { daubuissonEfficiency, rankineEfficiency } from './delivery-formula';

@@ -1,4 +1,4 @@
-import { assertFiniteNumber, assertNonNegative, assertPositive } from '../demand/guards';
+import { assertFiniteNumber, assertNonNegative, assertPositive } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 export interface RamDeliveryOptions {

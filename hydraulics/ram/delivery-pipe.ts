@@ -1,5 +1,5 @@
 import { assertPipeSpec } from '../catalogue/guard';
-import { assertNonNegative, assertPositive } from '../demand/guards';
+import { assertNonNegative, assertPositive } from '../input-guards';
 import { hazenWilliamsHeadLoss } from '../friction/hazen-williams';
 import { pressurePaToHeadM } from '../units';
 import type { RamDeliveryPipe } from './plan-types';

@@ -1,5 +1,5 @@
 import { pipeAreaM2 } from '../friction/pipe-flow';
-import { assertNonNegative, assertPositive } from '../demand/guards';
+import { assertNonNegative, assertPositive } from '../input-guards';
 import { GRAVITY_MS2 } from '../constants';
 import { darcyFrictionFactorUnchecked, darcyWeisbachHeadLossUnchecked } from '../friction/darcy-weisbach';
 import { joukowskyHeadRise } from '../surge/joukowsky';

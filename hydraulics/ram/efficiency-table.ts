@@ -1,4 +1,4 @@
-import { assertPositive } from '../demand/guards';
+import { assertPositive } from '../input-guards';
 
 /** A published table of ram efficiency against the ratio of delivery head to fall. */
 export interface RamEfficiencyTable {

@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../errors';
-import { assertFraction, assertPositive, assertPositiveInteger } from '../demand/guards';
+import { assertFraction, assertPositive, assertPositiveInteger } from '../input-guards';
 import { tankFillTimeS } from '../storage/tank-fill';
 import { deliveryPipeHydraulics } from './delivery-pipe';
 import { ramDeliveredFlowM3s } from './delivery-formula';

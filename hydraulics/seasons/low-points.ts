@@ -1,4 +1,4 @@
-import { assertArray, assertFiniteNumber, assertNonNegative } from '../demand/guards';
+import { assertArray, assertFiniteNumber, assertNonNegative } from '../input-guards';
 import { findTurningPoints } from '../checks/air-points';
 import { HydraulicsInputError } from '../errors';
 import { DEFAULT_LINE_SETTINGS } from '../profile/settings';

@@ -1,4 +1,4 @@
-import { assertPositiveInteger } from '../demand/guards';
+import { assertPositiveInteger } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 import type { PlanCheck } from '../ram/plan-check';
 import { addDays, formatIsoDate } from '../yield/iso-date';

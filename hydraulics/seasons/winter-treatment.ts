@@ -1,4 +1,4 @@
-import { assertNonNegative } from '../demand/guards';
+import { assertNonNegative } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 import { findLowPoints, type LowPoint, type PipeProfile } from './low-points';
 

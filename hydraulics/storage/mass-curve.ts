@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../errors';
-import { assertArray, assertNonNegative } from '../demand/guards';
+import { assertArray, assertNonNegative } from '../input-guards';
 import { HOURS_PER_DAY } from '../demand/hourly-pattern';
 
 export interface MassCurveOptions {

@@ -1,4 +1,4 @@
-import { assertNonNegative, assertPositiveInteger } from '../demand/guards';
+import { assertNonNegative, assertPositiveInteger } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 export interface SimulateTankOptions {

@@ -1,5 +1,5 @@
 import { SECONDS_PER_DAY } from '../constants';
-import { assertNonNegative, assertPositive } from '../demand/guards';
+import { assertNonNegative, assertPositive } from '../input-guards';
 import { assertHourlyPattern } from '../demand/hourly-pattern';
 import type { PlanCheck } from '../ram/plan-check';
 import { massCurveStorage, type MassCurveResult } from './mass-curve';

@@ -1,5 +1,5 @@
 import { deliveryWindowPattern, HOURS_PER_DAY } from '../demand/hourly-pattern';
-import { assertNonNegative } from '../demand/guards';
+import { assertNonNegative } from '../input-guards';
 
 export interface SupplyProfileOptions {
   /** Flow into the tank while the supply runs, m³/s (source yield or pump delivery). */

@@ -1,4 +1,4 @@
-import { assertArray, assertFiniteNumber, assertNonNegative } from '../demand/guards';
+import { assertArray, assertFiniteNumber, assertNonNegative } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 /** One outlet fed from the tank. */

@@ -1,5 +1,5 @@
 import { geodesicInverse } from './geodesic';
-import { assertFiniteNumber, assertLatitude, assertLongitude } from './guards';
+import { assertFiniteNumber, assertLatitude, assertLongitude } from '../input-guards';
 import type { GeoPosition } from './types';
 import { HydraulicsInputError } from '../errors';
 

@@ -1,5 +1,5 @@
 import { Geodesic } from 'geographiclib-geodesic';
-import { assertFiniteNumber, assertLatitude, assertLongitude } from './guards';
+import { assertFiniteNumber, assertLatitude, assertLongitude } from '../input-guards';
 
 /** WGS84 ellipsoid; every route distance in Runnel is measured on it. */
 const WGS84 = Geodesic.WGS84;

@@ -1,5 +1,5 @@
 import { DEFAULT_VERTICAL_UNCERTAINTY, type HeightSource } from './height-source';
-import { assertFiniteNumber } from './guards';
+import { assertFiniteNumber } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 /** A design choice that rests on a height difference read from the survey. */

@@ -1,5 +1,5 @@
 import { geodesicInterpolate, geodesicInverse } from './geodesic';
-import { assertFiniteNumber, assertLatitude, assertLongitude } from './guards';
+import { assertFiniteNumber, assertLatitude, assertLongitude } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 /** WGS84 semi-major axis (m) and flattening: NGA TR8350.2, table 3.1. */

@@ -1,4 +1,4 @@
-import { assertLatitude, assertLongitude } from './guards';
+import { assertLatitude, assertLongitude } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 
 /** Mean Earth radius R₁ (IUGG), metres; used only for the drawing projection, never for lengths. */

@@ -1,4 +1,4 @@
-import { assertPositive } from '../demand/guards';
+import { assertPositive } from '../input-guards';
 
 /** A bucket-and-stopwatch measurement. */
 export interface BucketReading {

@@ -1,4 +1,4 @@
-import { assertArray, assertPositive, assertPositiveInteger } from '../demand/guards';
+import { assertArray, assertPositive, assertPositiveInteger } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 import type { PlanCheck } from '../ram/plan-check';
 import { measuredFlowM3s } from './bucket-flow';

@@ -41,10 +41,10 @@ function isJsonContentType(type: string | null): boolean {
   return mediaType === 'application/json' || /^application\/[a-z0-9.+-]{1,60}\+json$/.test(mediaType);
 }
 
-/** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
 /** How a refused body's issues become field errors: the default names paths and keeps the schema's (SI) messages. */
 export type FieldsOf = (error: z.ZodError) => FieldErrors;
 
+/** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
 export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number, fieldsOf?: FieldsOf): Promise<z.output<S>> {
   const max = maxBytes ?? env().RUNNEL_MAX_JSON_BYTES;
   const bytes = await readBodyCapped(req, max, () => new AppError('payload_too_large', `Request body is larger than ${max} bytes`));

@@ -1,8 +1,8 @@
 import { NextResponse } from 'next/server';
-import { HydraulicsInputError } from '../../hydraulics/errors';
 import { DATABASE_RETRY_AFTER_SECONDS, isConcurrentWriteConflict, isDatabaseUnavailable } from '../db-availability';
 import { AppError, type ApiErrorBody } from '../errors';
 import { log } from '../log';
+import { domainRefusal } from './domain-errors';
 
 /** API answers are per user and change with every write: never stored by a browser or a proxy. */
 export const API_CACHE_CONTROL = 'no-store';
@@ -16,10 +16,8 @@ function withHeaders<T>(res: NextResponse<T>, retryAfterSeconds?: number): NextR
 /** Turns a refusal or a failure into the API's one error shape (no logging: see errorResponse). */
 export function appErrorOf(error: unknown): AppError {
   if (error instanceof AppError) return error;
-  if (error instanceof HydraulicsInputError) {
-    const field = error.index === undefined ? error.field : `${error.field}.${error.index}`;
-    return new AppError('bad_request', error.message, { [field]: [error.message] });
-  }
+  const refusal = domainRefusal(error);
+  if (refusal) return refusal;
   if (isDatabaseUnavailable(error)) {
     return new AppError('service_unavailable', 'The database cannot be reached just now; nothing was changed. Try again in a few seconds.', undefined, {
       retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,

@@ -1,7 +1,7 @@
 import type { NextRequest } from 'next/server';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
-import { userFromRequest } from '../auth/session';
+import { sessionTokenOf, tokenSubject, userAndRoleOf, userFromRequest } from '../auth/session';
 import type { SessionUser } from '../auth/users';
 import { forbidden, notFound, unauthenticated } from '../errors';
 import type { UnitSystem } from '../units/index';
@@ -10,7 +10,6 @@ import { fieldErrorsIn } from '../validations/field-words';
 import { can, type Permission } from '../permissions';
 import type { Role } from '../roles';
 import { parseOrThrow, readJsonBody, type FieldsOf } from './body';
-import { roleOnTeam } from './membership';
 import { errorResponse, json } from './respond';
 
 type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
@@ -25,20 +24,24 @@ interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   status?: number;
   /** Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default RUNNEL_MAX_JSON_BYTES */
   maxBodyBytes?: number;
+  /** A refused body's fields named as the screen names them, bounds in the unit system `unitsOf` gives. */
+  bodyWords?: BodyWords<Infer<P>>;
 }
 
 interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefined> extends BaseSpec<P, B> {
   permission: Permission;
   /** The team that owns the resource named by the params; null when it does not exist. */
   teamOf: (params: Infer<P>) => Promise<string | null>;
-  /** A refused body's fields named as the screen names them, bounds in the project's units. */
-  bodyWords?: BodyWords<Infer<P>>;
 }
 
-interface BodyWords<P> {
+/**
+ * How a handler words a refused body: one table of the screen's names, and the unit system to state
+ * bounds in. A saved record's handler reads its project's system (before the body); a stateless one
+ * takes the system the request names. The same input in the same units gets the same words.
+ */
+export interface BodyWords<P> {
   table: FieldWordTable;
-  /** The unit system of the project the params name (read before the body, so a refusal can be worded). */
-  unitsOf: (params: P) => Promise<UnitSystem>;
+  unitsOf: (params: P, req: NextRequest) => Promise<UnitSystem> | UnitSystem;
 }
 
 export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
@@ -67,10 +70,10 @@ async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRe
   return (schema ? await readJsonBody(req, schema, maxBytes, fieldsOf) : undefined) as Infer<B>;
 }
 
-/** A refused body worded with the screen's names and the project's units, when the route says how to find them. */
-async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P): Promise<FieldsOf | undefined> {
+/** A refused body worded with the screen's names in the unit system the route names, when it names one. */
+async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P, req: NextRequest): Promise<FieldsOf | undefined> {
   if (!words) return undefined;
-  const system = await words.unitsOf(params);
+  const system = await words.unitsOf(params, req);
   return (error) => fieldErrorsIn(error, system, words.table);
 }
 
@@ -88,7 +91,7 @@ export function publicRoute<P extends z.ZodType | undefined = undefined, B exten
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body });
     }, spec.status ?? 200);
 }
@@ -102,7 +105,7 @@ export function userRoute<P extends z.ZodType | undefined = undefined, B extends
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
       const user = await signedInUser(req);
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body, user });
     }, spec.status ?? 200);
 }
@@ -118,12 +121,16 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const user = await signedInUser(req);
+      // A request without a session is refused before any lookup; then the resource's team, then
+      // the user and their role on it in one query (the session re-read every time).
+      const subject = tokenSubject(await sessionTokenOf(req));
+      if (!subject) throw unauthenticated();
       const teamId = await spec.teamOf(params);
-      const role = teamId ? await roleOnTeam(user.id, teamId) : null;
+      const { user, role } = await userAndRoleOf(subject, teamId);
+      if (!user) throw unauthenticated();
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params))) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body, user, teamId, role });
     }, spec.status ?? 200);
 }

@@ -1,4 +1,4 @@
-import { localExtremeIndices } from './local-extremes';
+import { turningIndices } from './local-extremes';
 
 export interface ThinOptions {
   /** Points wanted from the largest-triangle pass (the extremes and `keep` come on top). */
@@ -7,6 +7,12 @@ export interface ThinOptions {
   guardSeries?: readonly ArrayLike<number>[];
   /** Indices that must survive (tanks, stretch ends, devices). Out-of-range ones are ignored. */
   keep?: Iterable<number>;
+  /**
+   * Highs and lows that stand out by this much or less may go, m: a walked GPS route's scatter
+   * (`surveyHeightScatterM`) makes a false high or low every few points, and keeping them all would
+   * keep most of the route. @default 0: every local high and low is kept
+   */
+  reversalM?: number;
   /** Index range to thin, inclusive. @default the whole series */
   from?: number;
   to?: number;
@@ -56,10 +62,11 @@ function largestTriangles(x: ArrayLike<number>, y: ArrayLike<number>, from: numb
 }
 
 /**
- * Indices of the points to draw for a long profile: the largest-triangle choice, plus EVERY local
- * high and low of `y` and of each guard series, plus the ends and the `keep` indices. Between two
- * kept extremes the series is monotonic, so what is dropped can never hide a summit or a sag.
- * Returns ascending indices into the original arrays.
+ * THE thinning of a long profile (route, line, import preview, exports). Indices of the points to
+ * draw: the largest-triangle choice, plus EVERY local high and low of `y` and of each guard series
+ * (those taller than `reversalM` when it is given), plus the ends and the `keep` indices. Between
+ * two kept points the series stays within `reversalM` of the band they span (monotonic when 0), so
+ * what is dropped can never hide a summit or a sag. Returns ascending indices into the original arrays.
  */
 export function thinProfile(x: ArrayLike<number>, y: ArrayLike<number>, options: ThinOptions): number[] {
   const from = Math.max(options.from ?? 0, 0);
@@ -72,9 +79,16 @@ export function thinProfile(x: ArrayLike<number>, y: ArrayLike<number>, options:
     if (i >= from && i <= to) marks[i - from] = 1;
   };
   for (const i of largestTriangles(x, y, from, to, Math.max(options.targetPoints - 2, 0))) mark(i);
-  for (const series of [y, ...(options.guardSeries ?? [])]) for (const i of localExtremeIndices(series, from, to)) mark(i);
+  for (const series of [y, ...(options.guardSeries ?? [])]) for (const i of turningIndices(series, options.reversalM ?? 0, from, to)) mark(i);
   for (const i of options.keep ?? []) mark(i);
   const out: number[] = [];
   for (let k = 0; k < count; k++) if (marks[k] === 1) out.push(from + k);
   return out;
+}
+
+/** `thinProfile` over chainage/elevation points: the kept points themselves, in order. */
+export function thinPoints<T extends { chainageM: number; elevationM: number }>(points: readonly T[], options: Omit<ThinOptions, 'from' | 'to' | 'guardSeries'>): T[] {
+  const x = Float64Array.from(points, (p) => p.chainageM);
+  const y = Float64Array.from(points, (p) => p.elevationM);
+  return thinProfile(x, y, options).map((i) => points[i]);
 }

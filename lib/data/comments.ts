@@ -4,7 +4,7 @@ import { models } from '../../models';
 import type { Comment } from '../../models/comment';
 import { recordActivity } from '../activity/record';
 import type { SessionUser } from '../auth/users';
-import { AppError, forbidden, notFound } from '../errors';
+import { AppError, forbidden, notFound, notInProject } from '../errors';
 import { can } from '../permissions';
 import { isRouteAnchor, type CommentAnchor } from '../review/anchors';
 import type { AnchorNow, CommentRecord } from '../review/comment-types';
@@ -116,17 +116,17 @@ async function assertAnchorExists(projectId: string, anchor: CommentAnchor, snap
   const { Line, Route } = models();
   if (anchor.kind === 'line-chainage' || anchor.kind === 'warning') {
     const there = snapshot ? snapshot.lines.some((l) => l.id === anchor.lineId) : (await Line.count({ where: { id: anchor.lineId, projectId } })) > 0;
-    if (!there) throw new AppError('bad_request', 'That line is not part of what you are commenting on', { 'anchor.lineId': ['Pick a line of this revision or working copy'] });
+    if (!there) throw notInProject({ 'anchor.lineId': ['Pick a line of this revision or working copy'] }, 'That line is not part of what you are commenting on');
   }
   if (anchor.kind === 'network') {
     const parts = snapshot ? (anchor.part === 'node' ? snapshot.network?.nodes : snapshot.network?.links) ?? [] : null;
     const where = { id: anchor.partId, projectId };
     const inWorkingCopy = async () => (anchor.part === 'node' ? await models().NetworkNode.count({ where }) : await models().NetworkLink.count({ where })) > 0;
     const there = parts ? parts.some((p) => p.id === anchor.partId) : await inWorkingCopy();
-    if (!there) throw new AppError('bad_request', `That network ${anchor.part} is not part of what you are commenting on`, { 'anchor.partId': [`Pick a ${anchor.part} of this revision or working copy`] });
+    if (!there) throw notInProject({ 'anchor.partId': [`Pick a ${anchor.part} of this revision or working copy`] }, `That network ${anchor.part} is not part of what you are commenting on`);
   }
   if (anchor.kind === 'route-chainage' && (await Route.count({ where: { id: anchor.routeId, projectId } })) === 0) {
-    throw new AppError('bad_request', 'That route is not part of this project', { 'anchor.routeId': ['Pick a route of this project'] });
+    throw notInProject({ 'anchor.routeId': ['Pick a route of this project'] }, 'That route is not part of this project');
   }
 }
 
@@ -136,7 +136,7 @@ export async function createComment(projectId: string, user: SessionUser, role: 
     let { revisionId, anchor } = { revisionId: input.revisionId ?? null, anchor: input.anchor ?? { kind: 'project' as const } };
     if (input.parentId) {
       const parent = await C.findOne({ where: { id: input.parentId, projectId }, transaction });
-      if (!parent) throw new AppError('bad_request', 'The comment you reply to is not in this project', { parentId: ['Reply to a comment of this project'] });
+      if (!parent) throw notInProject({ parentId: ['Reply to a comment of this project'] }, 'The comment you reply to is not in this project');
       if (parent.parentId) throw new AppError('bad_request', 'Reply to the first comment of the thread', { parentId: ['Reply to the thread, not to a reply'] });
       revisionId = parent.revisionId;
       anchor = parent.anchor;
@@ -146,7 +146,7 @@ export async function createComment(projectId: string, user: SessionUser, role: 
     let revisionNumber: number | null = null;
     if (revisionId) {
       const revision = await Revision.findOne({ where: { id: revisionId, projectId }, transaction });
-      if (!revision) throw new AppError('bad_request', 'That revision is not part of this project', { revisionId: ['Pick a revision of this project'] });
+      if (!revision) throw notInProject({ revisionId: ['Pick a revision of this project'] }, 'That revision is not part of this project');
       snapshot = revision.snapshot as DesignSnapshot;
       revisionNumber = revision.number;
     }
@@ -155,7 +155,7 @@ export async function createComment(projectId: string, user: SessionUser, role: 
     if (mentions.length) {
       const project = await Project.findByPk(projectId, { attributes: ['teamId'], transaction });
       const members = await Membership.count({ where: { teamId: project!.teamId, userId: mentions }, transaction });
-      if (members !== mentions.length) throw new AppError('bad_request', 'Only members of this team can be mentioned', { mentions: ['Mention members of this team only'] });
+      if (members !== mentions.length) throw notInProject({ mentions: ['Mention members of this team only'] }, 'Only members of this team can be mentioned');
     }
     const row = await C.create({ projectId, revisionId, parentId: input.parentId ?? null, authorId: user.id, body: input.body, anchor, mentions }, { transaction });
     await recordActivity(transaction, {

@@ -1,6 +1,6 @@
 import 'server-only';
 // The engine's name starts with "use"; renamed so the hooks lint rule does not mistake it for a React hook.
-import { useDemand as demandOfOneUse } from '../../hydraulics/demand/use-demand';
+import { useDemand as demandOfOneUse } from '../../hydraulics/index';
 import { models } from '../../models';
 import { notFound } from '../errors';
 import { toWaterUse } from '../lift/demand';

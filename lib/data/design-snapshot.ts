@@ -2,6 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { models } from '../../models';
 import { AppError } from '../errors';
+import { lineNetworkFlows } from '../network/line-flows';
 import { networkContextOfSnapshot } from '../review/snapshot-network';
 import type { DesignSnapshot, FrozenNetworkSolve, SnapshotLine } from '../review/snapshot-types';
 import { runInWorker } from '../workers/pool';
@@ -93,5 +94,20 @@ export async function takeDesignSnapshot(projectId: string, transaction: Transac
     DESIGN_PARTS.networkBasis(projectId, transaction),
   ]);
   const snapshot: DesignSnapshot = { format: 1, project, lines, lift, network, networkBasis };
-  return { ...snapshot, networkSolve: await solveFrozenNetwork(snapshot) };
+  const networkSolve = await solveFrozenNetwork(snapshot);
+  return { ...snapshot, lines: withFrozenFeeds(snapshot, networkSolve), networkSolve };
+}
+
+/**
+ * Each line with the network's word on it as the revision froze it (its feed and the flow of each
+ * piece, from the frozen solve), so the revision's line analyses read the same whatever the network
+ * does later. A network that did not solve is frozen with its reason, as the line page shows it.
+ */
+function withFrozenFeeds(snapshot: DesignSnapshot, solve: FrozenNetworkSolve | null): SnapshotLine[] {
+  const context = networkContextOfSnapshot(snapshot);
+  if (!context || !solve) return snapshot.lines;
+  return snapshot.lines.map((line) => ({
+    ...line,
+    context: { ...line.context, network: lineNetworkFlows(context, line.id, solve.ok ? solve.result : null, solve.ok ? null : solve.problem) },
+  }));
 }

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Model, ModelStatic, Transaction } from 'sequelize';
 import { models } from '../../models';
-import { AppError } from '../errors';
+import { notInProject } from '../errors';
 
 type Owned = 'WaterSource' | 'Tank' | 'RamSite' | 'Route' | 'DemandUse' | 'SeasonalTask' | 'Line' | 'NetworkNode';
 
@@ -12,8 +12,8 @@ export async function existsInProject(model: Owned, id: string, projectId: strin
 }
 
 /**
- * Refuses (400, nothing written) a body that names a source, tank or route of another project or
- * one that does not exist: the field is named so the form can show it.
+ * Refuses (404 like an id in the address, nothing written) a body that names a record of another
+ * project or one that does not exist: the field is named so the form can show it.
  */
 export async function assertReferences(
   projectId: string,
@@ -27,5 +27,5 @@ export async function assertReferences(
       fields[reference.field] = [`${reference.label} is not part of this project`];
     }
   }
-  if (Object.keys(fields).length > 0) throw new AppError('bad_request', 'Some fields are not valid', fields);
+  if (Object.keys(fields).length > 0) throw notInProject(fields);
 }

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { models } from '../../models';
-import { AppError } from '../errors';
+import { notInProject } from '../errors';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineDesign } from '../validations/line-design';
 import { networkFlowsOfLine } from './line-network-flows';
@@ -35,11 +35,11 @@ export async function lineFeedContext(projectId: string, lineId: string): Promis
   return { ...site, network };
 }
 
-/** A design that starts at a ram site must name one of this project's ram sites; otherwise a 400 on that field. */
+/** A design that starts at a ram site must name one of this project's ram sites; otherwise a 404 on that field. */
 export async function assertRamSiteInProject(design: LineDesign, projectId: string): Promise<void> {
   if (design.start.kind !== 'ram-site') return;
   const site = await models().RamSite.findOne({ where: { id: design.start.ramSiteId, projectId }, attributes: ['id'] });
   if (!site) {
-    throw new AppError('bad_request', 'That ram site is not part of this project', { 'design.start.ramSiteId': ['Pick a ram site of this project'] });
+    throw notInProject({ 'design.start.ramSiteId': ['Pick a ram site of this project'] }, 'That ram site is not part of this project');
   }
 }

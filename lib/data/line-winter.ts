@@ -1,6 +1,5 @@
 import 'server-only';
-import { analyzeLine, highLowToleranceM, HydraulicsInputError } from '../../hydraulics/index';
-import type { WinterLine } from '../../hydraulics/seasons/winter-treatment';
+import { analyzeLine, highLowToleranceM, HydraulicsInputError, type WinterLine } from '../../hydraulics/index';
 import { models } from '../../models';
 import { AppError } from '../errors';
 import { lineInputOf } from '../lines/line-input';

@@ -1,11 +1,11 @@
 import 'server-only';
-import { linkLineIntoNetwork } from '../../migrations/support/network-from-records.cjs';
+import { linkLineIntoNetwork, rejoinLineStart } from '../../migrations/support/network-from-records.cjs';
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
 import { recordActivity } from '../activity/record';
 import type { Line } from '../../models/line';
-import { AppError, notFound } from '../errors';
+import { AppError, notFound, notInProject } from '../errors';
 import { startingDesign } from '../lines/default-design';
 import type { UnitSystem } from '../units/index';
 import { lineInputOf } from '../lines/line-input';
@@ -15,7 +15,7 @@ import type { LineDesign } from '../validations/line-design';
 import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
 import { assertRamSiteInProject, lineSiteContext } from './line-context';
 import { routeColumns, routeOwner } from './line-routes';
-import { inputErrorText } from '../lines/input-error-words';
+import { lineDesignRefusal } from '../api/domain-errors';
 
 /** A line as the API and pages see it (SI units; the design as the core reads it). */
 export interface LineRecord {
@@ -158,16 +158,14 @@ function assertDesignFits(design: LineDesign, stations: readonly LineRouteStatio
     assertLineInput(lineInputOf(design, stations, context));
   } catch (error) {
     if (!(error instanceof HydraulicsInputError)) throw error;
-    const field = `design.${error.field}${error.index === undefined ? '' : `.${error.index}`}`;
-    const words = inputErrorText(error, context.unitSystem ?? 'metric');
-    throw new AppError('bad_request', `The design does not fit the line: ${words}`, { [field]: [words] });
+    throw lineDesignRefusal(error, context.unitSystem ?? 'metric', 'design.');
   }
 }
 
 async function assertRouteInProject(routeId: string, projectId: string): Promise<void> {
   const owner = await routeOwner(routeId);
   if (!owner || owner.projectId !== projectId) {
-    throw new AppError('bad_request', 'That route is not part of this project', { routeId: ['Pick a route of this project'] });
+    throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not part of this project');
   }
 }
 
@@ -192,13 +190,52 @@ export async function createLine(projectId: string, userId: string, input: Creat
   });
 }
 
+/** "Spring line" -> "Spring line (copy)", then "(copy 2)", … : the first name no line of the project has. */
+export function copyNameOf(name: string, taken: ReadonlySet<string>): string {
+  const base = name.replace(/ \(copy(?: \d+)?\)$/, '');
+  for (let n = 1; ; n += 1) {
+    const candidate = `${base} (copy${n === 1 ? '' : ` ${n}`})`.slice(0, 120);
+    if (!taken.has(candidate)) return candidate;
+  }
+}
+
+/**
+ * A copy of a line on the same route and window, with its stretches, fittings, devices, custom pipes
+ * and settings, under a new name; it joins the network with ends of its own, like any new line.
+ * One transaction: the copy and its network link are made together or not at all.
+ */
+export async function duplicateLine(lineId: string, userId: string, name?: string): Promise<LineRecord> {
+  const { Line: L, sequelize } = models();
+  return sequelize.transaction(async (transaction) => {
+    const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.SHARE });
+    if (!line) throw notFound();
+    if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route for it before copying it', { routeId: ['Pick a route'] });
+    const siblings = await L.findAll({ attributes: ['name'], where: { projectId: line.projectId }, transaction });
+    const copyName = name ?? copyNameOf(line.name, new Set(siblings.map((s) => s.name)));
+    const copy = await L.create(
+      {
+        projectId: line.projectId, routeId: line.routeId, name: copyName, notes: line.notes,
+        fromChainageM: line.fromChainageM, toChainageM: line.toChainageM, ...columnsOf(designOf(line)),
+        createdBy: userId, updatedBy: userId,
+      },
+      { transaction },
+    );
+    await linkLineIntoNetwork(sequelize, transaction, copy.id);
+    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: copy.id, summary: `Copied line "${line.name}" as "${copy.name}"` });
+    return recordOf(copy, transaction);
+  });
+}
+
 export async function updateLine(lineId: string, userId: string, input: UpdateLineInput): Promise<LineRecord> {
   const { Line: L, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!line) throw notFound();
     if (input.baseRevision !== undefined && input.baseRevision !== line.revision) {
-      throw new AppError('conflict', `Someone saved revision ${line.revision} of this line after you opened revision ${input.baseRevision}; reload to see it`);
+      // Saved by the same person: another tab or window of theirs, not a colleague.
+      const who = line.updatedBy === userId ? 'You saved' : 'Someone else saved';
+      const where = line.updatedBy === userId ? ' in another tab or window' : '';
+      throw new AppError('conflict', `${who} revision ${line.revision} of this line${where} after this page opened revision ${input.baseRevision}; reload to carry on from it`);
     }
     const fields: Partial<UpdateLineInput> = { ...input };
     const design = fields.design;
@@ -206,6 +243,7 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     delete fields.baseRevision;
     if (fields.routeId !== undefined && fields.routeId !== line.routeId) await assertRouteInProject(fields.routeId, line.projectId);
     line.set(fields as Partial<Line>);
+    const startBefore = JSON.stringify(line.startCondition);
     if (design) {
       await assertRamSiteInProject(design as LineDesign, line.projectId);
       line.set(columnsOf(design as LineDesign));
@@ -219,6 +257,8 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
     line.revision += 1;
     line.updatedBy = userId;
     await line.save({ transaction });
+    // A new start (another ram site, a water level instead of a ram) joins the network where it says.
+    if (JSON.stringify(line.startCondition) !== startBefore) await rejoinLineStart(models().sequelize, transaction, line.id);
     await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary: `Edited line "${line.name}"` });
     return recordOf(line, transaction);
   });

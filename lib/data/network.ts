@@ -1,15 +1,15 @@
 import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { models } from '../../models';
-import { AppError, notFound } from '../errors';
+import { AppError, notFound, notInProject } from '../errors';
 import type { NetworkLinkRecord, NetworkNodeRecord } from '../network/records';
 import type { NetworkLinkInput, NetworkNodeInput } from '../validations/network';
 import { assertReferences } from './lift-ownership';
 import { networkLinkRecord, networkNodeRecord } from './network-records';
 
 /**
- * Writes to a project's network. Every write runs in one transaction and refuses (400 on the
- * field, nothing written) a body naming a record of another project.
+ * Writes to a project's network. Every write runs in one transaction and refuses (404 on the
+ * field, as for an id in the address; nothing written) a body naming a record of another project.
  */
 
 async function assertNodeReferences(projectId: string, input: NetworkNodeInput, transaction: Transaction): Promise<void> {
@@ -129,7 +129,8 @@ export async function tieDemandUse(projectId: string, useId: string, outletNodeI
     if (!use) throw notFound('No such demand use in this project');
     if (outletNodeId !== null) {
       const outlet = await NetworkNode.findOne({ where: { id: outletNodeId, projectId }, attributes: ['kind'], transaction });
-      if (!outlet || outlet.kind !== 'outlet') throw new AppError('bad_request', 'Pick an outlet of this network', { outletNodeId: ['Pick an outlet of this network'] });
+      if (!outlet) throw notInProject({ outletNodeId: ['Pick an outlet of this network'] }, 'That node is not part of this network');
+      if (outlet.kind !== 'outlet') throw new AppError('bad_request', 'Pick an outlet of this network', { outletNodeId: ['Pick an outlet of this network'] });
     }
     await use.update({ outletNodeId }, { transaction });
   });

@@ -4,11 +4,12 @@ import { Op, type Transaction } from 'sequelize';
 import { locateOnRoute, type RouteLocation } from '../../hydraulics';
 import { models } from '../../models';
 import type { SitePhoto, PhotoPlacement } from '../../models/site-photo';
-import { AppError } from '../errors';
+import { AppError, notInProject } from '../errors';
 import { log } from '../log';
 import { readPhoto } from '../photos/read-photo';
-import { projectStoragePrefix } from './project-files';
-import { deleteObject, getObject, putObject } from '../storage';
+import { projectStoragePrefix, removeStoredFiles } from './project-files';
+import { getObject, putObject } from '../storage';
+import { enqueueJob } from '../jobs/enqueue';
 import { numberPhotos } from '../chart/photo-marks';
 import type { ReportPhoto } from '../report/photo-section';
 
@@ -46,7 +47,7 @@ export interface PhotoPlacementRequest {
 
 async function routeOfProject(projectId: string, routeId: string, transaction?: Transaction) {
   const route = await models().Route.findOne({ where: { id: routeId, projectId }, attributes: ['id', 'lengthM'], transaction });
-  if (!route) throw new AppError('bad_request', 'That route is not one of this project’s', { routeId: ['Pick a route of this project'] });
+  if (!route) throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not one of this project’s');
   return route;
 }
 
@@ -69,6 +70,8 @@ async function nearestOnRoutes(projectId: string, routeId: string | null | undef
 }
 
 async function placementOf(projectId: string, position: { latitude: number | null; longitude: number | null }, request: PhotoPlacementRequest) {
+  // A named route is the project's whatever else is sent: never keep another team's route on a photo.
+  if (request.routeId) await routeOfProject(projectId, request.routeId);
   if (position.latitude !== null && position.longitude !== null) {
     const found = await nearestOnRoutes(projectId, request.routeId, { latitudeDeg: position.latitude, longitudeDeg: position.longitude });
     if (found) return { routeId: found.routeId, chainageM: found.at.chainageM, offsetM: found.at.offsetM, placement: 'position' as const };
@@ -107,7 +110,7 @@ export async function uploadPhoto(input: { projectId: string; userId: string; fi
     });
     return toPhotoSummary(row);
   } catch (error) {
-    for (const key of stored) await deleteObject(key).catch((err: unknown) => log().error({ err, key }, 'could not remove a stored photo after a failed upload'));
+    await removeStoredFiles(stored);
     throw error;
   }
 }
@@ -145,10 +148,15 @@ export async function updatePhoto(photoId: string, changes: { caption?: string; 
   return toPhotoSummary(photo);
 }
 
+/** The row goes with its files' removal queued in one transaction; the files are removed now too when the store answers. */
 export async function deletePhoto(photoId: string): Promise<void> {
   const photo = await photoRow(photoId);
-  await photo.destroy();
-  for (const key of [photo.imageKey, photo.thumbnailKey]) await deleteObject(key).catch((err: unknown) => log().error({ err, key }, 'could not remove a deleted photo’s file'));
+  const keys = [photo.imageKey, photo.thumbnailKey];
+  await models().sequelize.transaction(async (transaction) => {
+    await photo.destroy({ transaction });
+    await enqueueJob(transaction, 'delete-stored-files', { keys });
+  });
+  await removeStoredFiles(keys, true);
 }
 
 /**

@@ -6,6 +6,8 @@ import type { DecimalMark } from '../units/typed-number';
 import { unitDefaults } from '../units/defaults';
 import type { FieldWordTable } from '../validations/field-words';
 import type { UpdateProjectInput } from '../validations/projects';
+import type { ProjectProgress } from '../projects/next-step';
+import { Op } from 'sequelize';
 
 export interface ProjectSummary {
   id: string;
@@ -43,7 +45,8 @@ function toSummary(p: Project): ProjectSummary {
 }
 
 export async function listProjects(teamId: string): Promise<ProjectSummary[]> {
-  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']] });
+  // Plain rows: a team's list is read often and needs no model instances.
+  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']], raw: true });
   return rows.map(toSummary);
 }
 
@@ -53,7 +56,7 @@ export async function getProject(projectId: string): Promise<ProjectSummary | nu
 }
 
 export async function teamOfProject(projectId: string): Promise<string | null> {
-  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'] });
+  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'], raw: true });
   return p?.teamId ?? null;
 }
 
@@ -101,4 +104,15 @@ export async function deleteProject(projectId: string): Promise<void> {
     await Project.destroy({ where: { id: projectId }, transaction });
     await enqueueJob(transaction, 'delete-project-files', { projectId });
   });
+}
+
+/** Counts for the overview's next step: routes, routes a line can be laid on, lines. */
+export async function projectProgress(projectId: string): Promise<ProjectProgress> {
+  const { Route, Line } = models();
+  const [routes, surveyedRoutes, lines] = await Promise.all([
+    Route.count({ where: { projectId } }),
+    Route.count({ where: { projectId, pointCount: { [Op.gte]: 2 } } }),
+    Line.count({ where: { projectId } }),
+  ]);
+  return { routes, surveyedRoutes, lines };
 }

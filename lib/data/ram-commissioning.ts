@@ -1,7 +1,8 @@
 import 'server-only';
-import { planRamPump } from '../../hydraulics/ram/plan-ram';
+import { planRamPump } from '../../hydraulics/index';
 import { models } from '../../models';
-import { AppError, notFound } from '../errors';
+import { failedOutcomeRefusal } from '../api/domain-errors';
+import { notFound } from '../errors';
 import { commissioningOutcome, type CommissioningView } from '../lift/commissioning';
 import { ramPlanOptions, tablePlanOf } from '../lift/ram-plan';
 import type { CommissioningRecord } from '../lift/records';
@@ -24,7 +25,7 @@ export async function addCommissioningReading(
     const context = await planContext(projectId, record, transaction);
     const plan = tablePlanOf(record, context) ?? planRamPump(ramPlanOptions(record, context));
     const outcome = commissioningOutcome(input, plan);
-    if (!outcome.ok) throw new AppError('bad_request', outcome.error, { [outcome.field ?? '_']: [outcome.error] });
+    if (!outcome.ok) throw failedOutcomeRefusal(outcome);
     const row = await RamCommissioningReading.create({ ...input, ramSiteId: siteId, createdBy: userId }, { transaction });
     return { reading: commissioningRecord(row), result: outcome.value };
   });

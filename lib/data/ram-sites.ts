@@ -1,7 +1,6 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { planRamPump } from '../../hydraulics/ram/plan-ram';
-import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
+import { planRamPump, type RamPlanResult } from '../../hydraulics/index';
 import { models } from '../../models';
 import { notFound } from '../errors';
 import type { PumpOutletHead } from '../lift/pump-outlet';

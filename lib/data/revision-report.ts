@@ -28,7 +28,7 @@ export async function revisionLineReport(revisionId: string, lineId: string, rol
       fromChainageM: line.fromChainageM, toChainageM: line.toChainageM, revision: revision.number, preparedBy: revision.createdBy?.name ?? null,
       design: line.design, createdAt: revision.createdAt, updatedAt: revision.createdAt,
     },
-    analysis, context: line.context, startGroundM: line.stations[0].groundElevationM, stamp, generatedAt: new Date(revision.createdAt),
+    analysis, context: line.context, startGroundM: line.stations[0].groundElevationM, stamp, generatedAt: new Date(revision.createdAt), stations: line.stations,
   });
   return { pdf, lineName: line.name, number: revision.number };
 }

@@ -5,14 +5,12 @@ import { models } from '../../models';
 import type { PointRecord } from '../routes/edit-ops';
 import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
-import { log } from '../log';
-import { projectStoragePrefix } from './project-files';
-import { deleteObject, putObject } from '../storage';
+import { projectStoragePrefix, removeStoredFiles } from './project-files';
+import { putObject } from '../storage';
 import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors';
 import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
 import type { SurveyImportOptions } from '../validations/survey-import';
 import { runInWorker } from '../workers/pool';
-import { asAppError } from './route-errors';
 import { insertRoutePoints } from './route-points-store';
 import { toRouteSummary } from './routes';
 
@@ -68,8 +66,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
   // Sniffing and parsing run on the worker pool: a large or hostile file never holds the request thread.
   const survey = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options }).catch((error: unknown) => {
     // The sniff's refusals already name the file; the parsers' do not.
-    const namesFile = error instanceof SurveyImportError && SNIFF_CODES.has(error.code);
-    throw asAppError(error, namesFile ? undefined : upload.fileName);
+    throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
   });
   const records = recordsOfSurvey(survey);
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
@@ -117,7 +114,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
     });
     return { route, warnings: survey.warnings.slice(0, 50) };
   } catch (error) {
-    await deleteObject(storageKey).catch((err: unknown) => log().error({ err, storageKey }, 'could not remove the stored file of a failed import'));
+    await removeStoredFiles([storageKey]);
     throw error;
   }
 }

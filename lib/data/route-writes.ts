@@ -9,10 +9,9 @@ import { recordOf, type PointRecord } from '../routes/edit-ops';
 import { RouteEditError } from '../routes/errors';
 import { computeRouteGeometry } from '../routes/geometry';
 import type { RouteDetail, RouteSummary } from '../routes/types';
-import { log } from '../log';
-import { deleteObject } from '../storage';
+import { enqueueJob } from '../jobs/enqueue';
+import { removeStoredFiles } from './project-files';
 import type { CleanupDecision, CreateRouteInput, SavePointsInput, UpdateRouteInput } from '../validations/routes';
-import { refusingPlainly } from './route-errors';
 import { loadRoutePoints, replaceRoutePoints } from './route-points-store';
 import { getRouteDetail, getRouteSummary, toRouteSummary } from './routes';
 
@@ -62,64 +61,61 @@ export async function deleteRoute(routeId: string): Promise<void> {
     if (stillUsed > 0) return null;
     const file = await Attachment.findByPk(attachmentId, { transaction });
     await file?.destroy({ transaction });
+    // Queued with the delete: the file goes once the rows are gone, even if the store is down now.
+    if (file) await enqueueJob(transaction, 'delete-stored-files', { keys: [file.storageKey] });
     return file?.storageKey ?? null;
   });
-  // After the commit: a failed object delete leaves an orphan object, never a dangling row.
-  if (orphanKey) await deleteObject(orphanKey).catch((err: unknown) => log().error({ err, storageKey: orphanKey }, 'could not delete a stored file'));
+  if (orphanKey) await removeStoredFiles([orphanKey], true);
 }
 
 /** Saves an edited route whole. Raw heights are taken from the stored points, never from the client. */
 export async function saveRoutePoints(routeId: string, input: SavePointsInput): Promise<RouteDetail> {
-  await refusingPlainly(() =>
-    models().sequelize.transaction(async (transaction) => {
-      const route = await lockRoute(routeId, transaction);
-      if (input.baseUpdatedAt && route.updatedAt.toISOString() !== new Date(input.baseUpdatedAt).toISOString()) {
-        throw new AppError('conflict', 'Someone saved this route after you opened it; reload it and make your changes again.');
+  await models().sequelize.transaction(async (transaction) => {
+    const route = await lockRoute(routeId, transaction);
+    if (input.baseUpdatedAt && route.updatedAt.toISOString() !== new Date(input.baseUpdatedAt).toISOString()) {
+      throw new AppError('conflict', 'Someone saved this route after you opened it; reload it and make your changes again.');
+    }
+    const existing = new Map((await loadRoutePoints(routeId, transaction)).map((p) => [p.seq, p]));
+    const used = new Set<number>();
+    const records: PointDraftRecord[] = input.points.map((p, i) => {
+      const source = p.sourceSeq === null ? undefined : existing.get(p.sourceSeq);
+      if (p.sourceSeq !== null && (!source || used.has(p.sourceSeq))) {
+        throw new RouteEditError('sourceSeq', `refers to ${source ? 'a point already used' : 'a point this route does not have'} (${p.sourceSeq + 1})`, { pointNumber: i + 1 });
       }
-      const existing = new Map((await loadRoutePoints(routeId, transaction)).map((p) => [p.seq, p]));
-      const used = new Set<number>();
-      const records: PointDraftRecord[] = input.points.map((p, i) => {
-        const source = p.sourceSeq === null ? undefined : existing.get(p.sourceSeq);
-        if (p.sourceSeq !== null && (!source || used.has(p.sourceSeq))) {
-          throw new RouteEditError('sourceSeq', `refers to ${source ? 'a point already used' : 'a point this route does not have'} (${p.sourceSeq + 1})`, { pointNumber: i + 1 });
-        }
-        if (p.sourceSeq !== null) used.add(p.sourceSeq);
-        return {
-          latitude: p.latitude,
-          longitude: p.longitude,
-          chainageM: p.chainageM,
-          slopeChainageM: null,
-          elevationM: p.elevationM,
-          rawElevationM: source ? source.rawElevationM : p.elevationM,
-          label: p.label === null || p.label.trim() === '' ? null : p.label.trim(),
-          heightSource: p.heightSource,
-          confidenceM: p.confidenceM,
-          recordedAt: source?.recordedAt ?? null,
-          excluded: p.excluded,
-          dismissedChecks: source?.dismissedChecks ?? [],
-        };
-      });
-      await writeRoutePoints(route, records, transaction);
-    }),
-  );
+      if (p.sourceSeq !== null) used.add(p.sourceSeq);
+      return {
+        latitude: p.latitude,
+        longitude: p.longitude,
+        chainageM: p.chainageM,
+        slopeChainageM: null,
+        elevationM: p.elevationM,
+        rawElevationM: source ? source.rawElevationM : p.elevationM,
+        label: p.label === null || p.label.trim() === '' ? null : p.label.trim(),
+        heightSource: p.heightSource,
+        confidenceM: p.confidenceM,
+        recordedAt: source?.recordedAt ?? null,
+        excluded: p.excluded,
+        dismissedChecks: source?.dismissedChecks ?? [],
+      };
+    });
+    await writeRoutePoints(route, records, transaction);
+  });
   return (await getRouteDetail(routeId)) as RouteDetail;
 }
 
 /** Accepts and rejects clean-up proposals in one transaction. */
 export async function decideCleanup(routeId: string, input: CleanupDecision, actorUserId: string | null = null): Promise<RouteDetail> {
-  await refusingPlainly(() =>
-    models().sequelize.transaction(async (transaction) => {
-      const route = await lockRoute(routeId, transaction);
-      const points = await loadRoutePoints(routeId, transaction);
-      const decided = applyCleanupDecisions(points, input);
-      await writeRoutePoints(route, decided.map(recordOf), transaction);
-      const accepted = input.accept?.length ?? 0;
-      const rejected = input.reject?.length ?? 0;
-      await recordActivity(transaction, {
-        projectId: route.projectId, actorUserId, kind: 'route.cleaned', subjectType: 'route', subjectId: route.id,
-        summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`, data: { accepted, rejected },
-      });
-    }),
-  );
+  await models().sequelize.transaction(async (transaction) => {
+    const route = await lockRoute(routeId, transaction);
+    const points = await loadRoutePoints(routeId, transaction);
+    const decided = applyCleanupDecisions(points, input);
+    await writeRoutePoints(route, decided.map(recordOf), transaction);
+    const accepted = input.accept?.length ?? 0;
+    const rejected = input.reject?.length ?? 0;
+    await recordActivity(transaction, {
+      projectId: route.projectId, actorUserId, kind: 'route.cleaned', subjectType: 'route', subjectId: route.id,
+      summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`, data: { accepted, rejected },
+    });
+  });
   return (await getRouteDetail(routeId)) as RouteDetail;
 }

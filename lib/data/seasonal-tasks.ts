@@ -1,6 +1,6 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { seasonalTasks } from '../../hydraulics/seasons/seasonal-tasks';
+import { seasonalTasks } from '../../hydraulics/index';
 import { models } from '../../models';
 import { AppError, notFound } from '../errors';
 import type { SeasonalTaskRecord } from '../lift/records';

@@ -34,7 +34,7 @@ export async function renameTeam(teamId: string, name: string): Promise<{ id: st
 }
 
 export async function teamExists(teamId: string): Promise<string | null> {
-  const team = await models().Team.findByPk(teamId, { attributes: ['id'] });
+  const team = await models().Team.findByPk(teamId, { attributes: ['id'], raw: true });
   return team?.id ?? null;
 }
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { models } from '../../models';
-import { AppError, notFound } from '../errors';
+import { notFound, notInProject } from '../errors';
 import type { WaterSourceRecord, YieldReadingRecord } from '../lift/records';
 import type { WaterSourceInput, YieldReadingInput } from '../validations/water-sources';
 import { sourceRecord, yieldReadingRecord } from './lift-records';
@@ -19,7 +19,7 @@ export async function listSources(projectId: string): Promise<SourceWithReadings
 async function assertDesignReading(sourceId: string | null, input: WaterSourceInput, transaction: Transaction): Promise<void> {
   if (input.designReadingId === null) return;
   const found = sourceId ? await models().YieldReading.count({ where: { id: input.designReadingId, sourceId }, transaction }) : 0;
-  if (found === 0) throw new AppError('bad_request', 'Some fields are not valid', { designReadingId: ['The design reading is not one of this source\'s readings'] });
+  if (found === 0) throw notInProject({ designReadingId: ['The design reading is not one of this source\'s readings'] }, 'That reading is not one of this source\'s');
 }
 
 export async function createSource(projectId: string, userId: string, input: WaterSourceInput): Promise<WaterSourceRecord> {

@@ -1,4 +1,4 @@
-import type { HeightSource } from '../../hydraulics/survey/height-source';
+import type { HeightSource } from '../../hydraulics/index';
 import { fromDisplay } from '../units/index';
 import type { FieldErrors } from '../errors';
 import type { UnitSystem } from '../units';

@@ -1,6 +1,6 @@
 import { routeGpsWarning } from '../routes/gps-warning';
 import { surveyPointRecord } from '../routes/new-point';
-import { thinProfile } from '../routes/profile-series';
+import { thinRouteProfile } from '../routes/profile-series';
 import { detectRouteProposals } from '../routes/proposals';
 import type { RoutePointView } from '../routes/types';
 import type { ParsedSurvey } from '../survey/parsed-survey';
@@ -21,7 +21,7 @@ export function buildImportPreview(survey: ParsedSurvey): ImportPreview {
     warnings: survey.warnings.slice(0, SHOWN_WARNINGS),
     warningCount: survey.warnings.length,
     features: survey.features ?? [],
-    profile: thinProfile(points.map((p) => ({ chainageM: p.chainageM, elevationM: p.elevationM }))),
+    profile: thinRouteProfile(points.map((p) => ({ chainageM: p.chainageM, elevationM: p.elevationM })), points),
     proposals: detectRouteProposals(points),
     gpsWarning: routeGpsWarning(points),
   };

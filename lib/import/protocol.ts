@@ -1,4 +1,4 @@
-import type { GpsHeightWarning } from '../../hydraulics/survey/gps-height-warning';
+import type { GpsHeightWarning } from '../../hydraulics/index';
 import type { RouteProposal } from '../routes/types';
 import type { CsvDialect } from '../survey/csv-dialect';
 import type { SurveyImportErrorCode } from '../survey/errors';

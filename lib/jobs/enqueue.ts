@@ -7,6 +7,8 @@ export interface JobPayloads {
   'send-mail': { outboxId: string };
   /** Removes every stored file of a deleted project (everything under `projects/<id>/`). */
   'delete-project-files': { projectId: string };
+  /** Removes stored files whose rows are gone (a deleted photo or route, a write that failed after storing). */
+  'delete-stored-files': { keys: string[] };
 }
 export type JobName = keyof JobPayloads;
 

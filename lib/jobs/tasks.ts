@@ -1,6 +1,6 @@
 import 'server-only';
 import type { TaskList } from 'graphile-worker';
-import { deleteProjectFiles } from '../data/project-files';
+import { deleteProjectFiles, deleteStoredFiles } from '../data/project-files';
 import { deliverOutboxMessage } from '../mail/deliver';
 import type { JobPayloads } from './enqueue';
 
@@ -13,5 +13,9 @@ export const JOB_TASKS: TaskList = {
   'delete-project-files': async (payload) => {
     const { projectId } = payload as JobPayloads['delete-project-files'];
     await deleteProjectFiles(projectId);
+  },
+  'delete-stored-files': async (payload) => {
+    const { keys } = payload as JobPayloads['delete-stored-files'];
+    await deleteStoredFiles(keys);
   },
 };

@@ -1,4 +1,4 @@
-import type { PlanCheck, PlanCheckCode, PlanCheckValues } from '../../hydraulics/ram/plan-check';
+import type { PlanCheck, PlanCheckCode, PlanCheckValues } from '../../hydraulics/index';
 import { formatHeadPressure, formatNumber, formatPercent, formatQuantity, type UnitSystem } from '../units/index';
 
 /**

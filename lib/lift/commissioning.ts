@@ -1,7 +1,10 @@
-import { commissioningResult, type CommissioningResult } from '../../hydraulics/ram/commissioning';
-import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
-import { pressurePaToHeadM } from '../../hydraulics/units';
-import type { FlowMeasurement } from '../../hydraulics/yield/bucket-flow';
+import {
+  commissioningResult,
+  type CommissioningResult,
+  type FlowMeasurement,
+  pressurePaToHeadM,
+  type RamPlanResult,
+} from '../../hydraulics/index';
 import type { CommissioningReadingInput } from '../validations/ram-sites';
 import { outcomeOf } from './outcome';
 import type { Outcome } from './records';

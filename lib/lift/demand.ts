@@ -1,7 +1,11 @@
-import { DEFAULT_DEMAND_FIGURES } from '../../hydraulics/demand/default-figures';
-import { dailyDemand, type DailyDemandResult } from '../../hydraulics/demand/daily-demand';
-import type { UseDelivery, WaterUse } from '../../hydraulics/demand/use-types';
-import { DAILY_USE_PATTERN_PRESETS } from '../../hydraulics/storage/daily-patterns';
+import {
+  DAILY_USE_PATTERN_PRESETS,
+  dailyDemand,
+  type DailyDemandResult,
+  DEFAULT_DEMAND_FIGURES,
+  type UseDelivery,
+  type WaterUse,
+} from '../../hydraulics/index';
 import type { DemandUseInput } from '../validations/demand-uses';
 import { outcomeOf } from './outcome';
 import type { DemandUseRecord, Outcome } from './records';

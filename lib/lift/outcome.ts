@@ -1,4 +1,4 @@
-import { HydraulicsInputError } from '../../hydraulics/errors';
+import { HydraulicsInputError } from '../../hydraulics/index';
 import type { Outcome } from './records';
 
 /** Runs a computation; a HydraulicsInputError becomes a failed outcome naming the field, anything else is rethrown. */

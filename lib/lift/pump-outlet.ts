@@ -1,4 +1,4 @@
-import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
+import type { RamPlanResult } from '../../hydraulics/index';
 import type { RamSiteRecord } from './records';
 
 /** What the line designer reads of one ram site to start a delivery line at its pump outlet (SI). */

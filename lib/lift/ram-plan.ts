@@ -1,7 +1,11 @@
-import { findPipe } from '../../hydraulics/catalogue/index';
-import { RAM_EFFICIENCY_TABLES } from '../../hydraulics/ram/efficiency-table';
-import { planRamPump } from '../../hydraulics/ram/plan-ram';
-import type { RamDeliveryPipe, RamPlanOptions, RamPlanResult } from '../../hydraulics/ram/plan-types';
+import {
+  findPipe,
+  planRamPump,
+  RAM_EFFICIENCY_TABLES,
+  type RamDeliveryPipe,
+  type RamPlanOptions,
+  type RamPlanResult,
+} from '../../hydraulics/index';
 import type { RamSiteInput } from '../validations/ram-sites';
 import { outcomeOf } from './outcome';
 import type { Outcome, RouteOption } from './records';

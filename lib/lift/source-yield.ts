@@ -1,7 +1,12 @@
-import type { PlanCheck } from '../../hydraulics/ram/plan-check';
-import { designYield, yieldDrawChecks, type DesignYieldChoice, type DesignYieldResult } from '../../hydraulics/yield/design-yield';
-import { measuredFlowM3s } from '../../hydraulics/yield/bucket-flow';
-import type { YieldReading } from '../../hydraulics/yield/yield-reading';
+import {
+  designYield,
+  type DesignYieldChoice,
+  type DesignYieldResult,
+  measuredFlowM3s,
+  type PlanCheck,
+  yieldDrawChecks,
+  type YieldReading,
+} from '../../hydraulics/index';
 import { outcomeOf } from './outcome';
 import type { Outcome, WaterSourceRecord, YieldReadingRecord } from './records';
 

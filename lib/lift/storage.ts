@@ -1,9 +1,13 @@
-import type { PlanCheck } from '../../hydraulics/ram/plan-check';
-import { sizeStorage, type StorageSizingResult } from '../../hydraulics/storage/size-storage';
-import { supplyHourlyVolumeM3 } from '../../hydraulics/storage/supply-profile';
-import { requiredTankElevation, type TankElevationResult } from '../../hydraulics/storage/tank-elevation';
-import { simulateTank } from '../../hydraulics/storage/simulate-tank';
-import { tankFillTimeS } from '../../hydraulics/storage/tank-fill';
+import {
+  type PlanCheck,
+  requiredTankElevation,
+  simulateTank,
+  sizeStorage,
+  type StorageSizingResult,
+  supplyHourlyVolumeM3,
+  type TankElevationResult,
+  tankFillTimeS,
+} from '../../hydraulics/index';
 import { outcomeOf } from './outcome';
 import type { Outcome, TankRecord } from './records';
 

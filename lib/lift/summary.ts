@@ -1,4 +1,4 @@
-import type { RamPlanResult } from '../../hydraulics/ram/plan-types';
+import type { RamPlanResult } from '../../hydraulics/index';
 import { commissioningOutcome, type CommissioningView } from './commissioning';
 import { demandView, type DemandView } from './demand';
 import { deliveryLengthM, planRamSite, tablePlanOf } from './ram-plan';

@@ -1,4 +1,4 @@
-import type { HydraulicsInputError } from '../../hydraulics/errors';
+import type { HydraulicsInputError } from '../../hydraulics/index';
 import { formatQuantity, type UnitSystem } from '../units/index';
 import { LINE_DESIGN_WORDS } from '../validations/field-word-tables';
 import { fieldLabel } from '../validations/field-words';

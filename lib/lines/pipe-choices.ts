@@ -66,6 +66,26 @@ export function closestInSeries(seriesId: string, current: PipeSpec | undefined)
   return [...series.pipes].sort((a, b) => Math.abs(a.insideDiameterM - bore) - Math.abs(b.insideDiameterM - bore))[0].id;
 }
 
+/**
+ * The pipe to take when the material (family) changes: the size whose bore is nearest the current
+ * pipe's, in the class rated nearest the current pipe's rating and not below it where the family has
+ * one (else the highest rated). Classes of a family do not all carry every size (PVC SDR 13.5 is
+ * made in 1/2 in only), so taking the family's first class would shrink the pipe.
+ */
+export function pipeForFamily(familyId: string, current: PipeSpec | undefined): string {
+  const family = PIPE_FAMILIES.find((f) => f.id === familyId);
+  if (!family) throw new Error(`unknown pipe family ${familyId}`);
+  const bore = current?.insideDiameterM ?? 0.05;
+  const nearest = family.classes.map((c) => findPipe(closestInSeries(c.seriesId, current))!);
+  const best = Math.min(...nearest.map((p) => Math.abs(p.insideDiameterM - bore)));
+  // Classes that offer (about) that size: bores of one nominal size differ by wall thickness only.
+  const offering = nearest.filter((p) => Math.abs(p.insideDiameterM - bore) <= best + 0.1 * bore);
+  const rating = current?.pressureRatingPa ?? 0;
+  const atOrAbove = offering.filter((p) => p.pressureRatingPa >= rating).sort((a, b) => a.pressureRatingPa - b.pressureRatingPa);
+  const pick = atOrAbove[0] ?? [...offering].sort((a, b) => b.pressureRatingPa - a.pressureRatingPa)[0];
+  return pick.id;
+}
+
 /** A stretch's pipe as a spec: inline, custom by id, or from the catalogue. */
 export function resolvePipe(pipe: string | PipeSpec, custom: readonly PipeSpec[]): PipeSpec | undefined {
   if (typeof pipe !== 'string') return pipe;

@@ -1,6 +1,14 @@
 import Papa from 'papaparse';
-import { findPipe, PRESSURE_CAUTION, type LineFix, type LineWarning, type WarningCode, type WarningSeverity, type WarningValues } from '../../hydraulics/index';
-import type { GpsHeightWarning } from '../../hydraulics/survey/gps-height-warning';
+import {
+  findPipe,
+  type GpsHeightWarning,
+  type LineFix,
+  type LineWarning,
+  PRESSURE_CAUTION,
+  type WarningCode,
+  type WarningSeverity,
+  type WarningValues,
+} from '../../hydraulics/index';
 import { formatHeadPressure, formatNumber, formatQuantity, formatStation, type DisplayUnits, type UnitSystem } from '../units/index';
 
 /** Runnel's short titles for the core's warning codes. */

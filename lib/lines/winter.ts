@@ -1,5 +1,4 @@
-import type { LineWarning } from '../../hydraulics/index';
-import { findLowPoints, type LowPoint } from '../../hydraulics/seasons/low-points';
+import { findLowPoints, type LineWarning, type LowPoint } from '../../hydraulics/index';
 import type { LineDesign } from '../validations/line-design';
 
 /** Extra cover below the frost depth a one-click "lay it deeper" fix asks for, m (common practice, no source). */

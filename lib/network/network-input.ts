@@ -1,7 +1,9 @@
 import {
   DEFAULT_LINE_SETTINGS,
   HydraulicsInputError,
+  MATERIAL_GRADES,
   dailyDemand,
+  drawPatternWithPeak,
   type NetworkInput,
   type NetworkLink,
   type NetworkLinkStatus,
@@ -47,9 +49,14 @@ export interface BuiltNetwork {
 
 /** A tank without an overflow level is taken as 2 m deep above its lowest working level (common practice, no source). */
 const ASSUMED_TANK_DEPTH_M = 2;
+/**
+ * Smooth plastic's roughness for the bores that carry only a Hazen-Williams C (a ram plan's pipe, a
+ * valve body), so the default Darcy-Weisbach can solve them: the catalogue's PE/PVC value.
+ */
+const PLASTIC_ROUGHNESS_M = MATERIAL_GRADES.pvc.roughnessM;
 /** A valve is a short link of its own body: 1 m with the given bore, C = 140 (common practice, no source). */
 const VALVE_LENGTH_M = 1;
-const VALVE_BODY: NetworkPipe = { id: 'valve-body', insideDiameterM: 0.05, hazenWilliamsC: 140, label: 'valve' };
+const VALVE_BODY: NetworkPipe = { id: 'valve-body', insideDiameterM: 0.05, hazenWilliamsC: 140, roughnessM: PLASTIC_ROUGHNESS_M, label: 'valve' };
 
 /** Fails on a node or link by its record id, so the API names the element. */
 export function elementError(kind: 'nodes' | 'links', record: { id: string; name: string }, field: string, message: string): HydraulicsInputError {
@@ -93,7 +100,8 @@ function linkPipe(link: NetworkLinkRecord): { pipe: string | NetworkPipe; id: st
   if (given) return { pipe: given, id: given.id, label: given.label };
   if (link.data.insideDiameterM && link.data.hazenC) {
     const id = `${link.id}-bore`;
-    return { pipe: { id, insideDiameterM: link.data.insideDiameterM, hazenWilliamsC: link.data.hazenC, label: 'pipe of the ram plan' }, id, label: 'pipe of the ram plan' };
+    const pipe = { id, insideDiameterM: link.data.insideDiameterM, hazenWilliamsC: link.data.hazenC, roughnessM: PLASTIC_ROUGHNESS_M, label: 'pipe of the ram plan' };
+    return { pipe, id, label: 'pipe of the ram plan' };
   }
   if (link.kind === 'valve') return { pipe: VALVE_BODY, id: VALVE_BODY.id, label: 'valve' };
   throw elementError('links', link, 'data.pipe', 'pick a pipe');
@@ -125,29 +133,47 @@ function lineStartingAt(context: NetworkContext, nodeId: string): NetworkLineCon
   return link ? context.lines.find((line) => line.id === link.lineId) : undefined;
 }
 
-function outletDemand(node: NetworkNodeRecord, context: NetworkContext, mode: DemandMode): { demandM3s: number; hourlyFractions?: number[] } {
+/** The day of the uses tied to an outlet, or null when none is tied; a use that cannot be computed fails on the outlet. */
+function tiedUsesDay(node: NetworkNodeRecord, context: NetworkContext): ReturnType<typeof dailyDemand> | null {
   const tied = new Set(context.records.demandUseTies.filter((t) => t.outletNodeId === node.id).map((t) => t.demandUseId));
   const uses = context.demandUses.filter((use) => tied.has(use.id));
-  const from = node.data.demandFrom ?? (uses.length > 0 ? 'uses' : 'fixed');
-  if (from === 'fixed') return { demandM3s: node.data.fixedDemandM3s ?? 0 };
-  if (from === 'line') {
-    const line = lineEndingAt(context, node.id);
-    const flow = line?.design.flow;
-    if (flow?.kind === 'design') return { demandM3s: flow.flowM3s };
-    return { demandM3s: 0 };
-  }
-  if (uses.length === 0) return { demandM3s: 0 };
-  let demand;
+  if (uses.length === 0) return null;
   try {
-    demand = dailyDemand({ uses: uses.map(toWaterUse) });
+    return dailyDemand({ uses: uses.map(toWaterUse) });
   } catch (error) {
     if (error instanceof HydraulicsInputError) throw elementError('nodes', node, 'demandUses', `a demand use tied here cannot be computed (${error.message}); fix it on the Lift & storage page`);
     throw error;
   }
-  const total = demand.dailyVolumeM3;
+}
+
+/**
+ * A peak figure (a fixed draw, or the design flow of the line that ends here) in the day run: the
+ * busiest hour of the tied uses draws it and the other hours follow their shape; with no uses tied
+ * there is no shape to follow, so it draws all day and a note says so.
+ */
+function peakDraw(node: NetworkNodeRecord, peakM3s: number, day: ReturnType<typeof dailyDemand> | null, mode: DemandMode, notes: BuiltNetwork['notes']): { demandM3s: number; hourlyFractions?: number[] } {
+  if (mode === 'peak' || peakM3s <= 0) return { demandM3s: peakM3s };
+  if (!day || day.dailyVolumeM3 <= 0) {
+    notes.push({ nodeId: node.id, message: `"${node.name}" has a fixed draw and no demand uses to give its hours; it draws that flow all day` });
+    return { demandM3s: peakM3s };
+  }
+  const draw = drawPatternWithPeak(peakM3s, day.hourlyVolumeM3);
+  return { demandM3s: draw.meanFlowM3s, hourlyFractions: draw.hourlyFractions };
+}
+
+function outletDemand(node: NetworkNodeRecord, context: NetworkContext, mode: DemandMode, notes: BuiltNetwork['notes']): { demandM3s: number; hourlyFractions?: number[] } {
+  const day = tiedUsesDay(node, context);
+  const from = node.data.demandFrom ?? (day ? 'uses' : 'fixed');
+  if (from === 'fixed') return peakDraw(node, node.data.fixedDemandM3s ?? 0, day, mode, notes);
+  if (from === 'line') {
+    const flow = lineEndingAt(context, node.id)?.design.flow;
+    return peakDraw(node, flow?.kind === 'design' ? flow.flowM3s : 0, day, mode, notes);
+  }
+  if (!day) return { demandM3s: 0 };
+  const total = day.dailyVolumeM3;
   // The steady solve draws the peak; the day run draws the mean flow shaped by the uses' hours.
-  if (mode === 'peak' || total <= 0) return { demandM3s: demand.peakFlowM3s };
-  return { demandM3s: total / 86_400, hourlyFractions: demand.hourlyVolumeM3.map((v) => v / total) };
+  if (mode === 'peak' || total <= 0) return { demandM3s: day.peakFlowM3s };
+  return { demandM3s: total / 86_400, hourlyFractions: day.hourlyVolumeM3.map((v) => v / total) };
 }
 
 function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: BuiltNetwork['notes'], mode: DemandMode): NetworkNode {
@@ -197,7 +223,7 @@ function coreNode(node: NetworkNodeRecord, context: NetworkContext, notes: Built
       const line = lineEndingAt(context, node.id);
       const lastGround = line ? line.stations[line.stations.length - 1]?.groundElevationM : undefined;
       const residual = node.data.residualHeadM ?? (node.data.outletKind === 'tank-inlet' || node.data.outletKind === 'free' ? 0 : line?.design.settings.minResidualHeadM ?? DEFAULT_LINE_SETTINGS.minResidualHeadM);
-      const demand = outletDemand(node, context, mode);
+      const demand = outletDemand(node, context, mode, notes);
       return { id: node.id, kind: 'outlet', elevationM: needElevation(lastGround), minPressureHeadM: residual, ...demand };
     }
   }

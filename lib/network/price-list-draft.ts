@@ -10,18 +10,20 @@ export interface PriceRowDraft {
   notes: string;
 }
 
-let nextKey = 0;
-const newKey = () => `row-${++nextKey}`;
-
+/**
+ * Row keys become element ids, so they must come out the same on the server and in the browser:
+ * a saved row is keyed by its place in the saved list, a new row by a number the table counts itself.
+ * (A module-wide counter differs between the two and once gave a new row the id of the first.)
+ */
 export function draftRowsOf(items: readonly PriceListItemRecord[]): PriceRowDraft[] {
-  return items.map((item) => ({ key: newKey(), pipeId: item.pipeId, costPerM: item.costPerM, notes: item.notes }));
+  return items.map((item, index) => ({ key: `saved-${index}`, pipeId: item.pipeId, costPerM: item.costPerM, notes: item.notes }));
 }
 
 /** A new row for the first catalogue pipe not priced yet (a designer then picks the one they mean). */
-export function newPriceRow(rows: readonly PriceRowDraft[]): PriceRowDraft {
+export function newPriceRow(rows: readonly PriceRowDraft[], serial: number): PriceRowDraft {
   const priced = new Set(rows.map((row) => row.pipeId));
   const pipe = PIPE_CATALOGUE.find((p) => !priced.has(p.id)) ?? PIPE_CATALOGUE[0];
-  return { key: newKey(), pipeId: pipe.id, costPerM: undefined, notes: '' };
+  return { key: `new-${serial}`, pipeId: pipe.id, costPerM: undefined, notes: '' };
 }
 
 /** What the API takes (a cost not typed stays out, so the schema names that row's field). */

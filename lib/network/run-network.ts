@@ -1,4 +1,4 @@
-import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, type SizingCandidate } from '../../hydraulics/index';
+import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, tankFillNodeId, type SizingCandidate } from '../../hydraulics/index';
 import type { NetworkContext } from './context';
 import { buildNetworkInput, type BuiltNetwork } from './network-input';
 import type { DayRunResult, SizeRunResult, SolveRunResult, TankStorageView } from './run-result';
@@ -18,7 +18,7 @@ export function solveNetworkRun(context: NetworkContext): SolveRunResult {
 export function sizingCandidates(context: NetworkContext): SizingCandidate[] {
   return context.prices.flatMap(({ pipeId, costPerM }) => {
     const pipe = findPipe(pipeId);
-    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
+    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, roughnessM: pipe.roughnessM, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
   });
 }
 
@@ -45,9 +45,11 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
   if (candidates.length === 0) {
     return { kind: 'size', feasible: false, cost: null, uniform: null, solution: null, warnings: [{ code: 'network.no-prices', severity: 'warning', message: "The team's price list is empty: price some pipes first" }] };
   }
+  const tankFillFlowsM3s = tankFillFlows(context, built);
+  for (const nodeId of Object.keys(tankFillFlowsM3s)) built.names[tankFillNodeId(nodeId)] = `${built.names[nodeId] ?? nodeId} inlet while filling`;
   let result;
   try {
-    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS });
+    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS, tankFillFlowsM3s });
   } catch (error) {
     throw explainCoreError(built, context.records, error);
   }
@@ -61,6 +63,30 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
     solution: solveRunResult(sized, result.solution),
     warnings: result.warnings.map((warning) => recordWarning(built, warning)),
   };
+}
+
+/**
+ * The flow each tank's inlet must pass for the sizing: the daily demand of the outlets it serves (as
+ * the storage sizing traces them) over the tank record's supply hours per day. Tanks fed by a ram
+ * take what the ram delivers, and a network whose day cannot be traced keeps tanks at a fixed level.
+ */
+function tankFillFlows(context: NetworkContext, built: BuiltNetwork): Record<string, number> {
+  let storage: TankStorageView[];
+  try {
+    storage = tankStorageRun(context);
+  } catch {
+    return {};
+  }
+  const fills: Record<string, number> = {};
+  const kindOf = new Map(built.input.nodes.map((n) => [n.id, n.kind]));
+  for (const tank of storage) {
+    const inlets = built.input.links.filter((link) => link.to === tank.nodeId);
+    if (inlets.length === 0 || inlets.some((link) => kindOf.get(link.from) === 'ram-outlet')) continue;
+    const record = context.tanks.find((t) => t.id === tank.tankId);
+    const hours = record?.supplyHoursPerDay ?? 24;
+    if (tank.dailyDemandM3 > 0) fills[tank.nodeId] = tank.dailyDemandM3 / (hours * 3600);
+  }
+  return fills;
 }
 
 /**
@@ -121,6 +147,7 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
   }
   return {
     kind: 'day',
+    friction: { method: day.frictionMethod, freeSurfaceLosses: day.freeSurfaceLosses },
     hours: day.steps.map((step) => step.hour),
     tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: storage.get(tank.id) ?? null })),
     sources: sources.map((source) => ({ nodeId: source.id, drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0), yieldM3s: source.yieldM3s ?? null })),
@@ -130,6 +157,9 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
       minPressureHeadM: outlet.minPressureHeadM ?? null,
       lowest: day.outletLowestPressureHeadM[outlet.id] ?? null,
     })),
-    warnings: day.warnings.map((warning) => recordWarning(built, warning)),
+    warnings: [
+      ...built.notes.map((note) => ({ ...note, code: 'network.assumed-figure', severity: 'info' as const })),
+      ...day.warnings.map((warning) => recordWarning(built, warning)),
+    ],
   };
 }

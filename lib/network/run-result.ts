@@ -44,8 +44,15 @@ export interface NodeResult {
   minPressureHeadM: number | null;
 }
 
+/** The friction law a run was solved with (absent on runs stored before it was recorded). */
+export interface RunFriction {
+  method: 'darcy-weisbach' | 'hazen-williams';
+  freeSurfaceLosses: boolean;
+}
+
 export interface SolveRunResult {
   kind: 'solve';
+  friction?: RunFriction;
   converged: boolean;
   iterations: number;
   nodes: NodeResult[];
@@ -55,6 +62,7 @@ export interface SolveRunResult {
 
 export interface DayRunResult {
   kind: 'day';
+  friction?: RunFriction;
   /** Start of each time step, hours from midnight. */
   hours: number[];
   tanks: { nodeId: string; levelsM: number[]; floorM: number; overflowM: number; storageNeededM3: number | null }[];

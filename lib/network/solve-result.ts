@@ -58,7 +58,7 @@ export function solveRunResult(built: BuiltNetwork, solution: NetworkSolution): 
     ...built.notes.map((note) => ({ ...note, code: 'network.assumed-figure', severity: 'info' as const })),
     ...solution.warnings.map((warning) => recordWarning(built, warning)),
   ];
-  return { kind: 'solve', converged: solution.converged, iterations: solution.iterations, nodes, links, warnings };
+  return { kind: 'solve', friction: { method: solution.frictionMethod, freeSurfaceLosses: solution.freeSurfaceLosses }, converged: solution.converged, iterations: solution.iterations, nodes, links, warnings };
 }
 
 /** A core input error that names an array position, restated on the record it came from. */

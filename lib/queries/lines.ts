@@ -1,9 +1,10 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { LineRecord, LineSummary } from '../data/lines';
 import type { LineSiteContext } from '../lines/ram-start';
 import type { LineRouteStation } from '../lines/route-stations';
-import type { CreateLineInput, UpdateLineInput } from '../validations/lines';
+import type { CreateLineInput, DuplicateLineInput, UpdateLineInput } from '../validations/lines';
 import { fetchJson } from './fetch-json';
+import { networkKeys } from './network';
 
 export const lineKeys = {
   project: (projectId: string) => ['projects', projectId, 'lines'] as const,
@@ -48,22 +49,49 @@ export function useCreateLine(projectId: string) {
   });
 }
 
+/**
+ * What a saved line makes stale: the project's line list, the line's site context (it carries the
+ * network's flows along the line, which a new flow, start or stretch changes) and the network view.
+ */
+export function afterLineSaved(client: QueryClient, line: LineRecord): Promise<unknown> {
+  client.setQueryData(lineKeys.one(line.id), line);
+  return Promise.all([
+    client.invalidateQueries({ queryKey: lineKeys.project(line.projectId) }),
+    client.invalidateQueries({ queryKey: lineKeys.siteContext(line.id) }),
+    client.invalidateQueries({ queryKey: networkKeys.view(line.projectId) }),
+  ]);
+}
+
 export function useUpdateLine(lineId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: UpdateLineInput) =>
       (await fetchJson<{ line: LineRecord }>(`/api/lines/${lineId}`, { method: 'PATCH', body: input })).line,
-    onSuccess: (line) => {
-      client.setQueryData(lineKeys.one(lineId), line);
-      return client.invalidateQueries({ queryKey: lineKeys.project(line.projectId) });
+    onSuccess: (line) => afterLineSaved(client, line),
+  });
+}
+
+/** Deletes a line of the project; the line to delete is given at the call, so one hook serves a whole list. */
+export function useDeleteLine(projectId: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (lineId: string) => fetchJson<void>(`/api/lines/${lineId}`, { method: 'DELETE' }),
+    onSuccess: (_, lineId) => {
+      client.removeQueries({ queryKey: lineKeys.one(lineId) });
+      return client.invalidateQueries({ queryKey: lineKeys.project(projectId) });
     },
   });
 }
 
-export function useDeleteLine(lineId: string, projectId: string) {
+/** Copies a line on the same route ("… (copy)"); answers the new line. */
+export function useDuplicateLine(projectId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: () => fetchJson<void>(`/api/lines/${lineId}`, { method: 'DELETE' }),
-    onSuccess: () => client.invalidateQueries({ queryKey: lineKeys.project(projectId) }),
+    mutationFn: async ({ lineId, ...input }: DuplicateLineInput & { lineId: string }) =>
+      (await fetchJson<{ line: LineRecord }>(`/api/lines/${lineId}/duplicate`, { method: 'POST', body: input })).line,
+    onSuccess: (line) => {
+      client.setQueryData(lineKeys.one(line.id), line);
+      return client.invalidateQueries({ queryKey: lineKeys.project(projectId) });
+    },
   });
 }

@@ -1,8 +1,8 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
-import SVGtoPDF from 'svg-to-pdfkit';
 import type { LineAnalysis } from '../../hydraulics/index';
 import type { ChartPhoto } from '../chart/photo-marks';
+import { planScene, type PlanStation } from '../chart/plan-scene';
 import { profileScene } from '../chart/profile-scene';
 import { svgToString } from '../chart/svg-node';
 import type { LineRecord } from '../data/lines';
@@ -17,6 +17,7 @@ import { INK, labelGrid } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { photoSection, type ReportPhoto } from './photo-section';
 import { markEveryPage } from './review-mark';
+import { drawSceneToFit, headEveryPage } from './page-furniture';
 import { liftSection, networkFeedSection, winterSection } from './feed-sections';
 import { assumptions, cautions, deviceList, stretchSchedule, warningList } from './report-sections';
 
@@ -34,20 +35,28 @@ export interface LineReportInput {
   generatedAt: Date;
   /** Site photos chosen for the report, in the line's window: marked on the profile and printed with their thumbnails. @default none */
   photos?: readonly ReportPhoto[];
+  /** The line's stations with their map positions, for the plan view. @default none (no plan) */
+  stations?: readonly PlanStation[];
 }
 
 const PAGE = { size: 'A4', layout: 'landscape', margin: 40 } as const;
 const CONTENT_WIDTH = 842 - 2 * PAGE.margin;
+/** The plan's drawing size (points on the page; equal scale both ways). */
+const PLAN_SIZE = { width: 620, height: 400 } as const;
 
 function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType<typeof displayUnits>): string {
   const c = analysis.points.chainageM;
   return `${line.routeName ?? 'route removed'}, ch. ${formatQuantity('chainage', c[0], units.system)} to ${formatQuantity('chainage', c[c.length - 1], units.system)}`;
 }
 
+/** The report's photos as the drawings mark them (number, label, own position). */
+function chartPhotosOf(photos: readonly ReportPhoto[]): ChartPhoto[] {
+  return photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName, latitudeDeg: p.latitude, longitudeDeg: p.longitude }));
+}
+
 /** The report's profile: the screen's drawing at report width, with the chosen photos marked. */
 export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = []) {
-  const marks: ChartPhoto[] = photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName }));
-  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, photos: marks }, 'report');
+  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, photos: chartPhotosOf(photos) }, 'report');
 }
 
 /**
@@ -55,7 +64,7 @@ export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, uni
  * the screen, with the site photos chosen for it marked), stretch schedule, devices, warnings, the
  * chosen photos, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [] }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [], stations = [] }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
   const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });
   const chunks: Buffer[] = [];
@@ -95,15 +104,18 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   ));
   doc.moveDown(0.4);
 
+  // The whole drawing (axes, chainage title and legend) on the page: scaled to the room left, never cut.
   const scene = reportProfileScene(analysis, line, project.unitSystem, photos);
-  const scale = CONTENT_WIDTH / scene.frame.width;
-  const top = doc.y;
-  SVGtoPDF(doc, pdfText(svgToString(scene.root)), PAGE.margin, top, {
-    width: CONTENT_WIDTH,
-    height: scene.frame.height * scale,
-    fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica'),
-  });
+  drawSceneToFit(doc, svgToString(scene.root), scene.frame, { minHeight: 300 });
+  const plan = planScene(stations, analysis.warnings, line.design.devices, PLAN_SIZE, u, chartPhotosOf(photos));
   doc.addPage();
+  if (plan) {
+    doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text('Plan of the line');
+    doc.font('Helvetica').fontSize(8.5).fillColor(INK).text(pdfText('North up, equal scale both ways, from the surveyed positions; warning ranges, devices and photos as on the profile.'));
+    doc.moveDown(0.3);
+    drawSceneToFit(doc, svgToString(plan.root), PLAN_SIZE, { minHeight: 200 });
+    doc.addPage();
+  }
   const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
   if (feed) liftSection(doc, feed, u, t);
   if (context.network) networkFeedSection(doc, context.network, { start: line.design.start.kind !== 'ram-site', flow: analysis.flowSchedule !== undefined }, u);
@@ -115,6 +127,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   assumptions(doc, analysis, u);
   cautions(doc);
   markEveryPage(doc, stamp);
+  headEveryPage(doc, `${project.name} \u00b7 ${line.name} \u00b7 line design report`);
   doc.end();
   return finished;
 }

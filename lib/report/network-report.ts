@@ -1,9 +1,9 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
-import SVGtoPDF from 'svg-to-pdfkit';
 import { buildNetworkScene } from '../chart/network-scene';
 import { svgToString } from '../chart/svg-node';
 import { dayViewModel } from '../network/day-view';
+import { networkFrictionWords } from '../network/friction-words';
 import { layoutNetwork } from '../network/layout';
 import type { DayRunResult, NetworkRunWarning, SizeRunResult, SolveRunResult } from '../network/run-result';
 import type { NetworkView } from '../network/view';
@@ -13,6 +13,7 @@ import { heading, INK, labelGrid, table } from './pdf-table';
 import { pdfText } from './pdf-text';
 import { cautions } from './report-sections';
 import { markEveryPage } from './review-mark';
+import { drawSceneToFit, headEveryPage } from './page-furniture';
 
 type Doc = InstanceType<typeof PDFDocument>;
 
@@ -151,13 +152,12 @@ export async function networkReportPdf({ project, view, solve, solveProblem, siz
     const width = 1000;
     const height = 500;
     const scene = buildNetworkScene({ view, layout: layoutNetwork(view), solve, units: u, width, height });
-    const scale = CONTENT_WIDTH / width;
-    SVGtoPDF(doc, pdfText(svgToString(scene)), PAGE.margin, doc.y, { width: CONTENT_WIDTH, height: height * scale, fontCallback: (_family, bold) => (bold ? 'Helvetica-Bold' : 'Helvetica') });
+    drawSceneToFit(doc, svgToString(scene), { width, height }, { minHeight: 250 });
   }
   doc.addPage();
   if (solve) {
     heading(doc, 'Nodes at the peak hour');
-    text(doc, `${solve.converged ? 'Converged' : 'Did NOT converge'} in ${solve.iterations} iterations. Every outlet draws its peak; tanks sit at their lowest working level.`);
+    text(doc, `${solve.converged ? 'Converged' : 'Did NOT converge'} in ${solve.iterations} iterations. Every outlet draws its peak; tanks sit at their lowest working level. ${networkFrictionWords(solve.friction)}`);
     doc.moveDown(0.3);
     nodeTable(doc, view, solve, u);
     heading(doc, 'Links at the peak hour');
@@ -172,6 +172,7 @@ export async function networkReportPdf({ project, view, solve, solveProblem, siz
   if (day) daySection(doc, view, day, u);
   cautions(doc);
   markEveryPage(doc, stamp);
+  headEveryPage(doc, `${project.name} \u00b7 water network report`);
   doc.end();
   return finished;
 }

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { safeText, uuid } from '../validations/common';
+import { chainage } from '../validations/numbers';
 
-const chainage = z.number({ error: 'Chainage must be a number (metres)' }).min(0, 'Chainage must be at least 0 m').max(1e6, 'Chainage must be at most 1000 km');
+const chainageM = chainage('Chainage');
 
 /**
  * Where a comment is pinned: the whole project, a chainage of a line (a pin on its long profile),
@@ -10,9 +11,9 @@ const chainage = z.number({ error: 'Chainage must be a number (metres)' }).min(0
  */
 export const CommentAnchorSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('project') }),
-  z.strictObject({ kind: z.literal('line-chainage'), lineId: uuid('Line id'), chainageM: chainage }),
-  z.strictObject({ kind: z.literal('warning'), lineId: uuid('Line id'), code: safeText('Warning code', 60).pipe(z.string().min(1, 'Warning code is required')), chainageM: chainage }),
-  z.strictObject({ kind: z.literal('route-chainage'), routeId: uuid('Route id'), chainageM: chainage }),
+  z.strictObject({ kind: z.literal('line-chainage'), lineId: uuid('Line id'), chainageM }),
+  z.strictObject({ kind: z.literal('warning'), lineId: uuid('Line id'), code: safeText('Warning code', 60).pipe(z.string().min(1, 'Warning code is required')), chainageM }),
+  z.strictObject({ kind: z.literal('route-chainage'), routeId: uuid('Route id'), chainageM }),
   z.strictObject({ kind: z.literal('network'), part: z.enum(['node', 'link'], { error: 'Network part must be node or link' }), partId: uuid('Network part id') }),
 ], { error: 'Anchor kind must be project, line-chainage, warning, route-chainage or network' });
 export type CommentAnchor = z.infer<typeof CommentAnchorSchema>;

@@ -1,4 +1,4 @@
-import type { CleanupKind, ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
+import type { CleanupKind, ProposedChange } from '../../hydraulics/index';
 import { RouteEditError } from './errors';
 import { DETECTED_KINDS } from './proposals';
 import type { RoutePointView } from './types';

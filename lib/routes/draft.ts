@@ -1,4 +1,4 @@
-import type { HeightSource } from '../../hydraulics/survey/height-source';
+import type { HeightSource } from '../../hydraulics/index';
 import type { RoutePointInput } from '../validations/routes';
 import type { RoutePointView } from './types';
 

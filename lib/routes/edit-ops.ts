@@ -1,8 +1,4 @@
-import { joinRoutes } from '../../hydraulics/survey/route/join';
-import { reverseRoute } from '../../hydraulics/survey/route/reverse';
-import { splitRoute } from '../../hydraulics/survey/route/split';
-import { trimRoute } from '../../hydraulics/survey/route/trim';
-import type { RouteStation } from '../../hydraulics/survey/types';
+import { joinRoutes, reverseRoute, type RouteStation, splitRoute, trimRoute } from '../../hydraulics/index';
 import { newPointRecord } from './new-point';
 import type { RoutePointView } from './types';
 

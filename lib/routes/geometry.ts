@@ -1,4 +1,4 @@
-import { chainageAlongTrack } from '../../hydraulics/survey/chainage';
+import { chainageAlongTrack } from '../../hydraulics/index';
 import { RouteEditError } from './errors';
 
 /** The fields chainage depends on; any other fields are carried through untouched. */

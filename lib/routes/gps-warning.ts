@@ -1,4 +1,4 @@
-import { consumerGpsHeightWarning, type GpsHeightWarning, type HeightDecision } from '../../hydraulics/survey/gps-height-warning';
+import { consumerGpsHeightWarning, type GpsHeightWarning, type HeightDecision } from '../../hydraulics/index';
 import type { RoutePointView } from './types';
 
 /**

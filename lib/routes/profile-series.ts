@@ -1,32 +1,38 @@
+import { surveyHeightScatterM, type HeightConfidence } from '../../hydraulics/index';
+import { thinPoints } from '../chart/thin-profile';
+
 export interface ProfilePoint {
   chainageM: number;
   elevationM: number;
 }
 
+/** Points a route's long profile is drawn with, about (the kept highs and lows come on top). */
+export const ROUTE_PROFILE_POINTS = 1500;
+
 /**
- * Thins a long profile for drawing: the points are cut into buckets along the route and each
- * bucket keeps its lowest and highest point, in order, so a spike or a low point never vanishes
- * from the picture. Profiles within the budget are returned as they are.
+ * A route's profile thinned for drawing by the one profile thinning (lib/chart/thin-profile.ts):
+ * every high and low that stands out by more than the survey's own height scatter
+ * (`surveyHeightScatterM` of the points' stated confidence) is kept; the smaller ones are that
+ * scatter, and keeping them would keep most of a walked GPS route.
  */
-export function thinProfile<T extends ProfilePoint>(points: readonly T[], maxPoints = 1500): T[] {
-  if (points.length <= maxPoints) return [...points];
-  const buckets = Math.max(1, Math.floor((maxPoints - 2) / 2));
-  const size = (points.length - 2) / buckets;
-  const out: T[] = [points[0]];
-  for (let b = 0; b < buckets; b += 1) {
-    const from = 1 + Math.floor(b * size);
-    const to = Math.min(points.length - 1, 1 + Math.floor((b + 1) * size));
-    let lo = from;
-    let hi = from;
-    for (let i = from; i < to; i += 1) {
-      if (points[i].elevationM < points[lo].elevationM) lo = i;
-      if (points[i].elevationM > points[hi].elevationM) hi = i;
-    }
-    if (to > from) {
-      out.push(points[Math.min(lo, hi)]);
-      if (lo !== hi) out.push(points[Math.max(lo, hi)]);
-    }
-  }
-  out.push(points[points.length - 1]);
-  return out;
+export function thinRouteProfile(points: readonly ProfilePoint[], confidence: readonly HeightConfidence[]): ProfilePoint[] {
+  return thinPoints(points, { targetPoints: ROUTE_PROFILE_POINTS, reversalM: surveyHeightScatterM(confidence) });
+}
+
+interface PlacedPoint extends HeightConfidence {
+  chainageM: number | null;
+  elevationM: number;
+  rawElevationM: number | null;
+  excluded: boolean;
+}
+
+/** The two profiles of the route page: as surveyed, and as cleaned (excluded points left out). */
+export function routeProfileSeries(points: readonly PlacedPoint[]): { raw: ProfilePoint[]; cleaned: ProfilePoint[] } {
+  const placed = points.filter((p) => p.chainageM !== null);
+  const surveyed = placed.filter((p) => p.rawElevationM !== null);
+  const kept = placed.filter((p) => !p.excluded);
+  return {
+    raw: thinRouteProfile(surveyed.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })), surveyed),
+    cleaned: thinRouteProfile(kept.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })), kept),
+  };
 }

@@ -1,12 +1,17 @@
-import type { CleanupKind, ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
-import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
-import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
-import { proposeBenchmarkOffset, proposeSmoothing } from '../../hydraulics/survey/cleanup/smoothing';
-import { detectGradeSpikes, detectMedianOutliers } from '../../hydraulics/survey/cleanup/spikes';
-import type { HeightSource } from '../../hydraulics/survey/height-source';
-import { surveyHeightScatterM } from '../../hydraulics/survey/height-scatter';
-import { DEFAULT_LINE_SETTINGS } from '../../hydraulics/profile/settings';
-import type { RouteStation } from '../../hydraulics/survey/types';
+import {
+  type CleanupKind,
+  DEFAULT_LINE_SETTINGS,
+  detectDuplicates,
+  detectGradeSpikes,
+  detectMedianOutliers,
+  detectOutOfOrder,
+  type HeightSource,
+  proposeBenchmarkOffset,
+  type ProposedChange,
+  proposeSmoothing,
+  type RouteStation,
+  surveyHeightScatterM,
+} from '../../hydraulics/index';
 import type { RoutePointView } from './types';
 
 /**

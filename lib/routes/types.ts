@@ -1,6 +1,4 @@
-import type { GpsHeightWarning } from '../../hydraulics/survey/gps-height-warning';
-import type { HeightSource } from '../../hydraulics/survey/height-source';
-import type { ProposedChange } from '../../hydraulics/survey/cleanup/proposed-change';
+import type { GpsHeightWarning, HeightSource, ProposedChange } from '../../hydraulics/index';
 import type { SurveyFeature, SurveyImportWarning } from '../survey/parsed-survey';
 import type { RouteSourceFormat } from '../../models/route';
 

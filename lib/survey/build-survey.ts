@@ -1,8 +1,12 @@
-import { chainageAlongTrack, slopeLengthOfProfile } from '../../hydraulics/survey/chainage';
+import {
+  chainageAlongTrack,
+  DEFAULT_VERTICAL_UNCERTAINTY,
+  defaultVerticalUncertaintyM,
+  detectDuplicates,
+  detectOutOfOrder,
+  slopeLengthOfProfile,
+} from '../../hydraulics/index';
 import { MAX_ROUTE_POINTS } from '../validations/routes';
-import { detectDuplicates } from '../../hydraulics/survey/cleanup/duplicates';
-import { detectOutOfOrder } from '../../hydraulics/survey/cleanup/order';
-import { DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM } from '../../hydraulics/survey/height-source';
 import { SurveyImportError } from './errors';
 import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFormat, type SurveyImportWarning, type SurveyPoint } from './parsed-survey';
 

@@ -60,6 +60,11 @@ export class SurveyImportError extends Error {
     this.field = details.field;
   }
 
+  /** The same refusal naming the file it was found in: "“walk.csv”, line 3: …". */
+  inFile(fileName: string): SurveyImportError {
+    return new SurveyImportError(this.code, `“${fileName}”, ${this.message}`, { field: this.field });
+  }
+
   toJSON(): { code: SurveyImportErrorCode; message: string; line?: number; column?: string; field?: string } {
     return { code: this.code, message: this.message, line: this.line, column: this.column, field: this.field };
   }

@@ -1,5 +1,4 @@
-import { reduceInclinometerLeg, type VerticalAngleUnit } from '../../hydraulics/survey/fieldbook/inclinometer';
-import { HydraulicsInputError } from '../../hydraulics/errors';
+import { HydraulicsInputError, reduceInclinometerLeg, type VerticalAngleUnit } from '../../hydraulics/index';
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, toMetres, type LengthUnit } from './cells';
 import { normaliseHeader } from './column-mapping';

@@ -1,5 +1,9 @@
-import { reduceLevelBook, type LevelBookMethod, type LevelBookReading } from '../../hydraulics/survey/fieldbook/level-book';
-import { HydraulicsInputError } from '../../hydraulics/errors';
+import {
+  HydraulicsInputError,
+  type LevelBookMethod,
+  type LevelBookReading,
+  reduceLevelBook,
+} from '../../hydraulics/index';
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, readOptionalNumberCell, toMetres, type LengthUnit } from './cells';
 import { normaliseHeader } from './column-mapping';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HEIGHT_SOURCES } from '../../hydraulics/survey/height-source';
+import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { SurveyImportError } from './errors';
 
 export const HeightSourceSchema = z.enum(HEIGHT_SOURCES);

@@ -1,5 +1,5 @@
 import Flatbush from 'flatbush';
-import { projectToLocalPlan } from '../../hydraulics/survey/plan-projection';
+import { projectToLocalPlan } from '../../hydraulics/index';
 
 export interface SnapResult {
   chainageM: number;

@@ -1,4 +1,4 @@
-import { FOOT_M } from '../../hydraulics/constants';
+import { FOOT_M } from '../../hydraulics/index';
 import { formatNumber } from './number';
 import { pressureOfHead, toDisplay, unitDef, unitOf, type Decimals, type Quantity, type UnitSystem } from './quantities';
 

@@ -1,5 +1,14 @@
-import { FOOT_M, INCH_M, SECONDS_PER_DAY, US_GALLON_M3 } from '../../hydraulics/constants';
-import { FLOW_UNITS_M3S, HEAD_UNITS_M, headMToPressurePa, LENGTH_UNITS_M, PRESSURE_UNITS_PA } from '../../hydraulics/units';
+import {
+  FLOW_UNITS_M3S,
+  FOOT_M,
+  HEAD_UNITS_M,
+  headMToPressurePa,
+  INCH_M,
+  LENGTH_UNITS_M,
+  PRESSURE_UNITS_PA,
+  SECONDS_PER_DAY,
+  US_GALLON_M3,
+} from '../../hydraulics/index';
 
 /**
  * Project units at the edge: every figure is stored and computed in SI and shown (or typed) in the

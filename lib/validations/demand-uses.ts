@@ -1,9 +1,13 @@
 import { z } from 'zod';
-import { DEFAULT_DEMAND_FIGURES } from '../../hydraulics/demand/default-figures';
-import { HOURS_PER_DAY, PATTERN_SUM_TOLERANCE } from '../../hydraulics/demand/hourly-pattern';
-import { DAILY_USE_PATTERN_PRESETS } from '../../hydraulics/storage/daily-patterns';
+import {
+  DAILY_USE_PATTERN_PRESETS,
+  DEFAULT_DEMAND_FIGURES,
+  HOURS_PER_DAY,
+  PATTERN_SUM_TOLERANCE,
+} from '../../hydraulics/index';
 import { safeText } from './common';
-import { finite, hourOfDay, issueAt, nonNegative, positive, wholeNonNegative } from './lift-common';
+import { issueAt } from './lift-common';
+import { finite, hourOfDay, nonNegative, positive, whole } from './numbers';
 
 export const USE_KINDS = ['people', 'livestock', 'garden', 'fixed'] as const;
 export const DELIVERY_KINDS = ['pattern', 'peak-factor', 'delivery-hours'] as const;
@@ -61,8 +65,8 @@ function checkDelivery(value: z.output<typeof DemandUseObject>, ctx: Ctx): void 
 const DemandUseObject = z.strictObject({
   label: safeText('Label', 120).default(''),
   kind: z.enum(USE_KINDS, { error: 'Kind must be people, livestock, garden or fixed' }),
-  count: wholeNonNegative('Count').max(1_000_000, 'Count must be at most 1,000,000').nullable().default(null),
-  areaM2: nonNegative('Garden area').nullable().default(null),
+  count: whole('Count', 0, 1_000_000).nullable().default(null),
+  areaM2: nonNegative('Garden area', undefined, 'm²').nullable().default(null),
   figureId: z.string({ error: 'Figure must be the id of a published figure' }).max(64).nullable().default(null),
   ownFigure: nonNegative('Own figure').nullable().default(null),
   season: z.enum(['winter', 'summer'], { error: 'Season must be winter or summer' }).nullable().default(null),
@@ -74,7 +78,7 @@ const DemandUseObject = z.strictObject({
     .nullable()
     .default(null),
   peakFactor: finite('Peak factor').min(1, 'A peak factor below 1 is not a peak').max(20, 'A peak factor above 20 is not plausible').nullable().default(null),
-  deliveryHours: positive('Hours of delivery').max(24, 'Hours of delivery must be at most 24').nullable().default(null),
+  deliveryHours: positive('Hours of delivery', 24, 'h').nullable().default(null),
   startHour: hourOfDay('Start hour').nullable().default(null),
 });
 

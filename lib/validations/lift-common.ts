@@ -3,16 +3,9 @@ import { uuid } from './common';
 import { ProjectParams } from './projects';
 
 /**
- * Number and date pieces shared by the lift, storage, yield and demand schemas. Every figure the
- * API takes is SI (m, m³, m³/s, Pa) and named with its unit; forms convert from project units.
+ * Date pieces, path params and cross-field issues shared by the lift, storage, yield and demand
+ * schemas (numbers: ./numbers.ts).
  */
-export const finite = (label: string) => z.number({ error: `${label} must be a number` });
-export const positive = (label: string) => finite(label).positive(`${label} must be greater than zero`);
-export const nonNegative = (label: string) => finite(label).nonnegative(`${label} must not be negative`);
-export const wholeNonNegative = (label: string) => finite(label).int(`${label} must be a whole number`).nonnegative(`${label} must not be negative`);
-export const fraction = (label: string) => positive(label).max(1, `${label} must be a fraction no greater than 1`);
-export const hourOfDay = (label: string) => finite(label).int(`${label} must be a whole hour`).min(0, `${label} must be 0-23`).max(23, `${label} must be 0-23`);
-
 function isCalendarDate(value: string): boolean {
   const [year, month, day] = value.split('-').map(Number);
   const date = new Date(Date.UTC(year, month - 1, day));

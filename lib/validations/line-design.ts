@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { assertPipeSpec, HydraulicsInputError, WATER_TEMPERATURE_MAX_C, WATER_TEMPERATURE_MIN_C } from '../../hydraulics/index';
 import { safeText, uuid } from './common';
+import { between, metres, positive } from './numbers';
 
 /**
  * The design of a line as the API stores it (SI units, the engineering core's own shapes). zod
@@ -8,43 +9,22 @@ import { safeText, uuid } from './common';
  * against the route's stations (stretches cover the line, devices lie on it) in lib/data.
  */
 
-const LIMIT_M = 1e6;
+const WaterLevelStartSchema = z.strictObject({ kind: z.literal('water-level'), levelM: metres('Start water level') });
+const PumpStartSchema = z.strictObject({
+  kind: z.literal('pump'),
+  outletHeadM: metres('Pump outlet head'),
+  shutoffHeadM: metres('Pump shut-off head').optional(),
+});
+/** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
+const RamSiteStartSchema = z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') });
 
-function metres(label: string) {
-  return z
-    .number({ error: `${label} must be a number (metres)` })
-    .min(-LIMIT_M, `${label} must be at least ${-LIMIT_M} m`)
-    .max(LIMIT_M, `${label} must be at most ${LIMIT_M} m`);
-}
-
-function atLeast(label: string, min: number, max: number, unit: string) {
-  return z
-    .number({ error: `${label} must be a number (${unit})` })
-    .min(min, `${label} must be at least ${min} ${unit}`)
-    .max(max, `${label} must be at most ${max} ${unit}`);
-}
-
-function positive(label: string, max: number, unit: string) {
-  return z
-    .number({ error: `${label} must be a number (${unit})` })
-    .positive(`${label} must be more than 0 ${unit}`)
-    .max(max, `${label} must be at most ${max} ${unit}`);
-}
-
-export const LineStartSchema = z.discriminatedUnion(
-  'kind',
-  [
-    z.strictObject({ kind: z.literal('water-level'), levelM: metres('Start water level') }),
-    z.strictObject({
-      kind: z.literal('pump'),
-      outletHeadM: metres('Pump outlet head'),
-      shutoffHeadM: metres('Pump shut-off head').optional(),
-    }),
-    /** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
-    z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') }),
-  ],
-  { error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")' },
-);
+export const LineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema, RamSiteStartSchema], {
+  error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")',
+});
+/** The starts a line given whole in a request can have: no project, so no ram site to read. */
+export const StandaloneLineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema], {
+  error: 'Start must be a water level ("water-level") or a pump outlet ("pump")',
+});
 
 export const LineEndSchema = z.discriminatedUnion(
   'kind',
@@ -52,7 +32,7 @@ export const LineEndSchema = z.discriminatedUnion(
     z.strictObject({
       kind: z.literal('outlet'),
       elevationM: metres('Outlet elevation'),
-      residualHeadM: atLeast('Residual pressure wanted', 0, 1000, 'm of head').optional(),
+      residualHeadM: between('Residual pressure wanted', 0, 1000, 'm of head').optional(),
     }),
     z.strictObject({ kind: z.literal('tank-inlet'), elevationM: metres('Tank inlet elevation') }),
     z.strictObject({ kind: z.literal('free-discharge') }),
@@ -60,16 +40,18 @@ export const LineEndSchema = z.discriminatedUnion(
   { error: 'End must be an outlet, a tank inlet or free discharge' },
 );
 
-export const LineFlowSchema = z.discriminatedUnion(
-  'kind',
-  [
-    z.strictObject({ kind: z.literal('design'), flowM3s: atLeast('Design flow', 0, 10, 'm³/s') }),
-    z.strictObject({ kind: z.literal('find') }),
-    /** What the feeding ram delivers (only with a ram-site start). */
-    z.strictObject({ kind: z.literal('pump-delivery') }),
-  ],
-  { error: 'Flow must be a design flow ("design"), "find" or the ram\'s delivery ("pump-delivery")' },
-);
+const DesignFlowSchema = z.strictObject({ kind: z.literal('design'), flowM3s: between('Design flow', 0, 10, 'm³/s') });
+const FindFlowSchema = z.strictObject({ kind: z.literal('find') });
+/** What the feeding ram delivers (only with a ram-site start). */
+const PumpDeliveryFlowSchema = z.strictObject({ kind: z.literal('pump-delivery') });
+
+export const LineFlowSchema = z.discriminatedUnion('kind', [DesignFlowSchema, FindFlowSchema, PumpDeliveryFlowSchema], {
+  error: 'Flow must be a design flow ("design"), "find" or the ram\'s delivery ("pump-delivery")',
+});
+/** The flows of a line given whole in a request: no ram to deliver. */
+export const StandaloneLineFlowSchema = z.discriminatedUnion('kind', [DesignFlowSchema, FindFlowSchema], {
+  error: 'Flow must be a design flow ("design") or "find"',
+});
 
 const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], { error: 'Material must be pvc, pe, steel or custom' });
 
@@ -84,12 +66,12 @@ export const CustomPipeSchema = z
     insideDiameterM: positive('Inside diameter', 5, 'm'),
     wallM: positive('Wall thickness', 1, 'm'),
     pressureRatingPa: positive('Pressure rating', 1e9, 'Pa'),
-    hazenWilliamsC: positive('Hazen-Williams C', 1000, ''),
-    roughnessM: atLeast('Roughness', 0, 1, 'm'),
+    hazenWilliamsC: positive('Hazen-Williams C', 1000),
+    roughnessM: between('Roughness', 0, 1, 'm'),
     waveSpeedMs: positive('Wave speed', 10000, 'm/s'),
     source: safeText('Pipe source', 300).pipe(z.string().min(1, 'Say where the pipe figures come from')),
-    sdr: positive('SDR', 1000, '').optional(),
-    sidr: positive('SIDR', 1000, '').optional(),
+    sdr: positive('SDR', 1000).optional(),
+    sidr: positive('SIDR', 1000).optional(),
   })
   .superRefine((pipe, ctx) => {
     try {
@@ -113,7 +95,7 @@ export const LineStretchSchema = z
 
 export const LineFittingSchema = z.strictObject({
   chainageM: metres('Fitting chainage'),
-  k: atLeast('Loss coefficient K', 0, 1000, ''),
+  k: between('Loss coefficient K', 0, 1000),
   label: safeText('Fitting label', 80).optional(),
 });
 
@@ -129,16 +111,16 @@ export const LineDeviceSchema = z.strictObject({
 export const LineSettingsSchema = z
   .strictObject({
     frictionMethod: z.enum(['hazen-williams', 'darcy-weisbach'], { error: 'Friction method must be hazen-williams or darcy-weisbach' }).optional(),
-    waterTemperatureC: atLeast('Water temperature', WATER_TEMPERATURE_MIN_C, WATER_TEMPERATURE_MAX_C, '°C').optional(),
-    safetyFactor: atLeast('Safety factor', 1, 10, '').optional(),
-    velocityMinMs: atLeast('Lowest velocity', 0, 10, 'm/s').optional(),
+    waterTemperatureC: between('Water temperature', WATER_TEMPERATURE_MIN_C, WATER_TEMPERATURE_MAX_C, '°C').optional(),
+    safetyFactor: between('Safety factor', 1, 10).optional(),
+    velocityMinMs: between('Lowest velocity', 0, 10, 'm/s').optional(),
     velocityMaxMs: positive('Highest velocity', 20, 'm/s').optional(),
-    minResidualHeadM: atLeast('Minimum residual pressure', 0, 1000, 'm of head').optional(),
-    airPointToleranceM: atLeast('High/low point tolerance', 0, 100, 'm').optional(),
-    siteAltitudeM: atLeast('Site altitude', -500, 11000, 'm').optional(),
+    minResidualHeadM: between('Minimum residual pressure', 0, 1000, 'm of head').optional(),
+    airPointToleranceM: between('High/low point tolerance', 0, 100, 'm').optional(),
+    siteAltitudeM: between('Site altitude', -500, 11000, 'm').optional(),
     siphonLimitHeadM: positive('Siphon limit', 10.3, 'm of head').optional(),
-    defaultCoverM: atLeast('Pipe cover', 0, 10, 'm').optional(),
-    entranceLossK: atLeast('Entrance loss coefficient', 0, 10, '').optional(),
+    defaultCoverM: between('Pipe cover', 0, 10, 'm').optional(),
+    entranceLossK: between('Entrance loss coefficient', 0, 10).optional(),
     checkSurge: z.boolean({ error: 'Surge check must be true or false' }).optional(),
   })
   .refine((s) => (s.velocityMaxMs ?? 3) > (s.velocityMinMs ?? 0.7), {
@@ -153,15 +135,27 @@ export const LineWinterSchema = z.strictObject({
   treatment: z.enum(WINTER_TREATMENTS, { error: 'Winter treatment must be buried-below-frost or drained-for-winter' }),
 });
 
-export const LineDesignSchema = z.strictObject({
-  start: LineStartSchema,
+/**
+ * The parts of a design that need no project (ends, pipes, fittings, devices, settings): one
+ * schema for a saved line and for a line given whole to the stateless analysis, so both accept
+ * and refuse the same input with the same words.
+ */
+export const lineDesignParts = {
   end: LineEndSchema,
-  flow: LineFlowSchema,
   stretches: z.array(LineStretchSchema, { error: 'Stretches must be a list' }).min(1, 'A line needs at least one stretch').max(500, 'At most 500 stretches'),
   fittings: z.array(LineFittingSchema, { error: 'Fittings must be a list' }).max(1000, 'At most 1000 fittings').default([]),
   devices: z.array(LineDeviceSchema, { error: 'Devices must be a list' }).max(1000, 'At most 1000 devices').default([]),
   pipes: z.array(CustomPipeSchema, { error: 'Custom pipes must be a list' }).max(100, 'At most 100 custom pipes').default([]),
   settings: LineSettingsSchema.default({}),
+};
+
+const { end, ...restOfDesign } = lineDesignParts;
+
+export const LineDesignSchema = z.strictObject({
+  start: LineStartSchema,
+  end,
+  flow: LineFlowSchema,
+  ...restOfDesign,
   winter: LineWinterSchema.optional(),
 }).refine((d) => d.flow.kind !== 'pump-delivery' || d.start.kind === 'ram-site', {
   message: 'The flow can come from the ram only when the line starts at a ram pump outlet',

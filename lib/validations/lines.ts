@@ -1,10 +1,9 @@
 import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
 import { LineDesignSchema } from './line-design';
+import { chainage, whole } from './numbers';
 
 export const LineParams = z.strictObject({ lineId: uuid('Line id') });
-
-const chainage = (label: string) => z.number({ error: `${label} must be a number (metres)` }).min(0, `${label} must be at least 0 m`).max(1e6, `${label} must be at most 1000 km`);
 
 /** A chainage window of the route: both ends or neither, the end after the start. */
 const window = {
@@ -37,9 +36,13 @@ export const UpdateLineSchema = z
     ...window,
     design: LineDesignSchema,
     /** The revision the editor started from; a newer saved revision answers 409 instead of being overwritten. */
-    baseRevision: z.number({ error: 'Base revision must be a whole number' }).int('Base revision must be a whole number').positive('Base revision must be at least 1'),
+    baseRevision: whole('Base revision', 1),
   })
   .partial()
   .refine((v) => Object.keys(v).some((k) => k !== 'baseRevision'), 'Send at least one field to change')
   .refine(windowIsOrdered, windowMessage);
 export type UpdateLineInput = z.input<typeof UpdateLineSchema>;
+
+/** Copy of a line: optionally its new name (otherwise "… (copy)"). */
+export const DuplicateLineSchema = z.strictObject({ name: nameText('Line name').optional() });
+export type DuplicateLineInput = z.input<typeof DuplicateLineSchema>;

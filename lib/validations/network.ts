@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
 import { CustomPipeSchema } from './line-design';
-import { finite, issueAt, nonNegative, positive } from './lift-common';
+import { issueAt } from './lift-common';
+import { chainage, elevation, finite, nonNegative, positive } from './numbers';
 import { ProjectParams } from './projects';
 
 /**
@@ -19,21 +20,21 @@ const NodeDataSchema = z.strictObject({
   typedPumpHead: z.strictObject({ outletHeadM: finite('Pump outlet head'), shutoffHeadM: finite('Pump shut-off head').optional() }).optional(),
   inletFloatValve: z.boolean({ error: 'Float valve must be true or false' }).optional(),
   outletKind: z.enum(OUTLET_KINDS, { error: `Outlet must be one of ${OUTLET_KINDS.join(', ')}` }).optional(),
-  residualHeadM: nonNegative('Residual head wanted').max(200, 'Residual head wanted must be at most 200 m').nullable().optional(),
+  residualHeadM: nonNegative('Residual head wanted', 200, 'm').nullable().optional(),
   demandFrom: z.enum(DEMAND_FROM, { error: 'Demand must come from its uses, a fixed flow or the line' }).optional(),
-  fixedDemandM3s: nonNegative('Fixed demand').max(10, 'Fixed demand must be at most 10 m³/s').nullable().optional(),
+  fixedDemandM3s: nonNegative('Fixed demand', 10, 'm³/s').nullable().optional(),
 });
 
 export const NetworkNodeSchema = z
   .strictObject({
     kind: z.enum(NODE_KINDS, { error: `Kind must be one of ${NODE_KINDS.join(', ')}` }),
     name: nameText('Node name'),
-    elevationM: finite('Elevation').min(-500, 'Elevation must be above -500 m').max(9000, 'Elevation must be below 9000 m').nullable().default(null),
+    elevationM: elevation('Elevation').nullable().default(null),
     waterSourceId: uuid('Water source').nullable().default(null),
     ramSiteId: uuid('Ram site').nullable().default(null),
     tankId: uuid('Tank').nullable().default(null),
     lineId: uuid('Line').nullable().default(null),
-    chainageM: nonNegative('Chainage').nullable().default(null),
+    chainageM: chainage('Chainage').nullable().default(null),
     eastM: finite('East position').nullable().default(null),
     northM: finite('North position').nullable().default(null),
     data: NodeDataSchema.default({}),
@@ -68,14 +69,14 @@ export const NetworkNodeSchema = z
 export type NetworkNodeInput = z.output<typeof NetworkNodeSchema>;
 
 const LinkDataSchema = z.strictObject({
-  lengthM: positive('Pipe length').max(100_000, 'Pipe length must be at most 100 km').optional(),
+  lengthM: positive('Pipe length', 100_000, 'm').optional(),
   pipe: z.union([safeText('Pipe id', 80).pipe(z.string().min(1, 'Pick a pipe')), CustomPipeSchema], { error: 'Pipe must be a catalogue id or a pipe spec' }).nullable().optional(),
-  insideDiameterM: positive('Inside diameter').max(5, 'Inside diameter must be at most 5 m').nullable().optional(),
-  hazenC: positive('Hazen-Williams C').max(200, 'Hazen-Williams C must be at most 200').nullable().optional(),
-  minorK: nonNegative('Minor loss coefficient').max(1000, 'Minor loss coefficient must be at most 1000').optional(),
+  insideDiameterM: positive('Inside diameter', 5, 'm').nullable().optional(),
+  hazenC: positive('Hazen-Williams C', 200).nullable().optional(),
+  minorK: nonNegative('Minor loss coefficient', 1000).optional(),
   valveKind: z.enum(VALVE_KINDS, { error: `Valve must be one of ${VALVE_KINDS.join(', ')}` }).optional(),
   open: z.boolean({ error: 'Open must be true or false' }).optional(),
-  setHeadM: nonNegative('Set pressure head').max(300, 'Set pressure head must be at most 300 m').optional(),
+  setHeadM: nonNegative('Set pressure head', 300, 'm').optional(),
 });
 
 export const NetworkLinkSchema = z
@@ -112,7 +113,7 @@ export const DemandUseOutletSchema = z.strictObject({ outletNodeId: uuid('Outlet
 /** A take-off placed on a line's long profile: a new junction there, and the branch from it to a new outlet. */
 export const TakeOffSchema = z.strictObject({
   lineId: uuid('Line'),
-  chainageM: nonNegative('Chainage'),
+  chainageM: chainage('Chainage'),
   name: nameText('Take-off name'),
 });
 
@@ -122,13 +123,13 @@ export const NetworkRunSchema = z.strictObject({
   /** Sizing: one pipe per link (no split sizes). */
   onePipePerLink: z.boolean().default(true),
   /** Sizing: seconds the optimiser may take. */
-  timeLimitS: positive('Time limit').max(120, 'Time limit must be at most 120 s').default(30),
+  timeLimitS: positive('Time limit', 120, 's').default(30),
 });
 export type NetworkRunInput = z.output<typeof NetworkRunSchema>;
 
 export const PriceListItemSchema = z.strictObject({
   pipeId: safeText('Pipe id', 80).pipe(z.string().min(1, 'Pick a pipe')),
-  costPerM: nonNegative('Cost per metre').max(1_000_000, 'Cost per metre must be at most 1,000,000'),
+  costPerM: nonNegative('Cost per metre', 1_000_000),
   notes: safeText('Notes', 1000).default(''),
 });
 export const PriceListSchema = z.strictObject({

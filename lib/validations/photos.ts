@@ -1,16 +1,17 @@
 import { z } from 'zod';
 import { safeText, uuid } from './common';
+import { chainage } from './numbers';
 
 export const PhotoParams = z.strictObject({ photoId: uuid('Photo id') });
 export const PhotoImageQuery = z.strictObject({ size: z.enum(['full', 'thumbnail'], { error: 'Size is full or thumbnail' }).default('full') });
 
-const chainageM = z.number({ error: 'Chainage must be a number of metres' }).finite('Chainage must be a number of metres').min(0, 'Chainage cannot be negative');
+const chainageM = chainage('Chainage');
 
 /** The text fields sent with an upload (multipart strings, so numbers come as text). */
 export const PhotoUploadFieldsSchema = z.strictObject({
   caption: safeText('Caption', 500).default(''),
   routeId: uuid('Route id').optional(),
-  chainageM: z.string().trim().regex(/^\d+(\.\d+)?$/, 'Chainage must be a number of metres').transform(Number).pipe(chainageM).optional(),
+  chainageM: z.string().trim().regex(/^\d+(\.\d+)?$/, 'Chainage must be a number (m)').transform(Number).pipe(chainageM).optional(),
 });
 
 export const PhotoUpdateSchema = z

@@ -1,16 +1,13 @@
 import { z } from 'zod';
 import { DECIMAL_MARKS } from '../units/typed-number';
 import { nameText, safeText, timeZone, uuid } from './common';
+import { nonNegative } from './numbers';
 
 export const UNIT_SYSTEMS = ['metric', 'us'] as const;
 export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'Units must be "metric" or "us"' });
 
 /** Depth frost reaches at the site, m (local code or records). */
-export const frostDepth = z
-  .number({ error: 'Frost depth must be a number (metres)' })
-  .min(0, 'Frost depth must be at least 0 m')
-  .max(10, 'Frost depth must be at most 10 m')
-  .nullable();
+export const frostDepth = nonNegative('Frost depth', 10, 'm').nullable();
 
 export const ProjectParams = z.strictObject({ projectId: uuid('Project id') });
 

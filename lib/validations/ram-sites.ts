@@ -1,9 +1,8 @@
 import { z } from 'zod';
-import { findPipe } from '../../hydraulics/catalogue/index';
-import { RAM_EFFICIENCY_TABLES, type RamEfficiencyTableId } from '../../hydraulics/ram/efficiency-table';
-import { RAM_SIZE_CLASSES } from '../../hydraulics/ram/size-classes';
+import { findPipe, RAM_EFFICIENCY_TABLES, RAM_SIZE_CLASSES, type RamEfficiencyTableId } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
-import { finite, fraction, isoDate, issueAt, nonNegative, positive } from './lift-common';
+import { isoDate, issueAt } from './lift-common';
+import { elevation, fraction, nonNegative, positive, whole } from './numbers';
 
 export const DRIVE_MATERIALS = ['steel', 'pvc', 'pe', 'custom'] as const;
 const EFFICIENCY_TABLE_IDS = Object.keys(RAM_EFFICIENCY_TABLES) as [RamEfficiencyTableId, ...RamEfficiencyTableId[]];
@@ -47,10 +46,10 @@ export const RamSiteSchema = z
     drivePipe: DrivePipeSchema,
     liftM: positive('Lift'),
     /** Elevation of the pump, m above the survey datum: a delivery line fed by this ram measures its head from here. */
-    pumpElevationM: finite('Pump elevation').min(-500, 'Pump elevation must be at least -500 m').max(9000, 'Pump elevation must be at most 9000 m').nullable().default(null),
+    pumpElevationM: elevation('Pump elevation').nullable().default(null),
     deliveryPipe: DeliveryPipeSchema,
     sizeClassId: z.enum(SIZE_CLASS_IDS, { error: `Size class must be one of ${SIZE_CLASS_IDS.join(', ')}` }).nullable().default(null),
-    pumpCount: finite('Pumps in parallel').int('Pumps in parallel must be a whole number').min(1, 'At least one pump').max(20, 'At most 20 pumps in parallel').default(1),
+    pumpCount: whole('Pumps in parallel', 1, 20).default(1),
     measuredEfficiency: fraction('Measured efficiency').nullable().default(null),
     /** Published efficiency table the plan reads (shown with every plan). */
     efficiencyTableId: z.enum(EFFICIENCY_TABLE_IDS, { error: `Efficiency table must be one of ${EFFICIENCY_TABLE_IDS.join(', ')}` }).default('trade-pocketbook'),

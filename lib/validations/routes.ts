@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { HEIGHT_SOURCES } from '../../hydraulics/survey/height-source';
+import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
+import { between, chainage, elevation, finite, MAX_LENGTH_M, metres, nonNegative, positive, whole } from './numbers';
 
 export const RouteParams = z.strictObject({ routeId: uuid('Route id') });
 
@@ -10,8 +11,6 @@ export const MAX_ROUTE_POINTS = 200_000;
 export const MAX_POINTS_JSON_BYTES = 40 * 1024 * 1024;
 
 export const heightSource = z.enum(HEIGHT_SOURCES, { error: `Height source must be one of ${HEIGHT_SOURCES.join(', ')}` });
-
-const finite = (label: string) => z.number({ error: `${label} must be a number` }).finite(`${label} must be a finite number`);
 
 export const CreateRouteSchema = z.strictObject({
   name: nameText('Route name'),
@@ -27,14 +26,14 @@ export type UpdateRouteInput = z.infer<typeof UpdateRouteSchema>;
 
 /** One point of a whole-route save. `sourceSeq` ties an existing point to its raw survey values. */
 export const RoutePointInputSchema = z.strictObject({
-  sourceSeq: z.number().int().min(0).nullable(),
-  latitude: finite('Latitude').min(-90, 'Latitude must be between -90 and 90 degrees').max(90, 'Latitude must be between -90 and 90 degrees').nullable(),
-  longitude: finite('Longitude').min(-180, 'Longitude must be between -180 and 180 degrees').max(180, 'Longitude must be between -180 and 180 degrees').nullable(),
-  chainageM: finite('Chainage').min(0, 'Chainage must not be negative').nullable(),
-  elevationM: finite('Elevation').min(-500, 'Elevation must be above -500 m').max(9000, 'Elevation must be below 9000 m'),
+  sourceSeq: whole('Source row', 0).nullable(),
+  latitude: between('Latitude', -90, 90, 'degrees').nullable(),
+  longitude: between('Longitude', -180, 180, 'degrees').nullable(),
+  chainageM: chainage('Chainage').nullable(),
+  elevationM: elevation('Elevation'),
   label: safeText('Label', 200).nullable(),
   heightSource,
-  confidenceM: finite('Confidence').min(0, 'Confidence must not be negative').nullable(),
+  confidenceM: nonNegative('Confidence', undefined, 'm').nullable(),
   excluded: z.boolean({ error: 'Excluded must be true or false' }),
 });
 export type RoutePointInput = z.infer<typeof RoutePointInputSchema>;
@@ -48,7 +47,7 @@ export type SavePointsInput = z.infer<typeof SavePointsSchema>;
 
 const CLEANUP_KINDS = ['grade-spike', 'median-outlier', 'duplicate', 'chainage-backwards', 'time-backwards', 'smoothing', 'benchmark-offset'] as const;
 const kind = z.enum(CLEANUP_KINDS, { error: `Kind must be one of ${CLEANUP_KINDS.join(', ')}` });
-const pointIndex = z.number({ error: 'Index must be a point number' }).int('Index must be a whole number').min(0, 'Index must not be negative');
+const pointIndex = whole('Index', 0);
 
 export const ProposedChangeSchema = z.discriminatedUnion('field', [
   z.strictObject({ kind, index: pointIndex, field: z.literal('elevationM'), from: finite('From'), to: finite('To'), reason: safeText('Reason', 500).default('') }),
@@ -65,19 +64,19 @@ export type CleanupDecisionInput = z.input<typeof CleanupDecisionSchema>;
 export type CleanupDecision = z.infer<typeof CleanupDecisionSchema>;
 
 export const SplitRouteSchema = z.strictObject({
-  chainageM: finite('Split chainage').positive('Split chainage must be greater than zero'),
+  chainageM: positive('Split chainage', MAX_LENGTH_M, 'm'),
   secondName: nameText('Name of the second part').optional(),
 });
 export type SplitRouteInput = z.input<typeof SplitRouteSchema>;
 
 export const TrimRouteSchema = z
-  .strictObject({ fromChainageM: finite('Keep from').min(0, 'Keep from must not be negative'), toChainageM: finite('Keep to') })
+  .strictObject({ fromChainageM: chainage('Keep from'), toChainageM: metres('Keep to') })
   .refine((v) => v.toChainageM > v.fromChainageM, { message: 'Keep to must be beyond keep from', path: ['toChainageM'] });
 export type TrimRouteInput = z.input<typeof TrimRouteSchema>;
 
 export const JoinRoutesSchema = z.strictObject({
   otherRouteId: uuid('Route to join'),
-  gapM: finite('Gap').min(0, 'Gap must not be negative').optional(),
+  gapM: nonNegative('Gap', MAX_LENGTH_M, 'm').optional(),
   name: nameText('Name of the joined route').optional(),
 });
 export type JoinRoutesInput = z.input<typeof JoinRoutesSchema>;

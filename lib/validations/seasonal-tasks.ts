@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { nameText, safeText } from './common';
-import { finite, isoDate, monthDay } from './lift-common';
+import { isoDate, monthDay } from './lift-common';
+import { whole } from './numbers';
 
 export const TASK_KINDS = ['drain-down', 'refill', 'silt-cleaning', 'intake-screen', 'valve-exercise', 'other'] as const;
 
@@ -26,11 +27,11 @@ export type UpdateSeasonalTaskInput = z.output<typeof UpdateSeasonalTaskSchema>;
 
 /** A year's upkeep tasks from the site's frost dates. */
 export const GenerateSeasonalTasksSchema = z.strictObject({
-  year: finite('Year').int('Year must be a whole number').min(1900, 'Year must be 1900 or later').max(2200, 'Year must be 2200 or earlier'),
+  year: whole('Year', 1900, 2200),
   hemisphere: z.enum(['north', 'south'], { error: 'Hemisphere must be north or south' }),
   firstFrost: monthDay('Usual first frost'),
   lastFrost: monthDay('Usual last frost').nullable().default(null),
-  drainDownLeadDays: finite('Days before first frost').int('Days must be a whole number').min(1, 'At least 1 day').max(120, 'At most 120 days').default(14),
+  drainDownLeadDays: whole('Days before first frost', 1, 120, 'days').default(14),
   /** Replace the year's open tasks made earlier (done ones are kept). */
   replace: z.boolean({ error: 'Replace must be true or false' }).default(false),
 });

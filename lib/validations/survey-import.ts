@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { nameText, safeText, timeZone } from './common';
+import { elevation, whole } from './numbers';
 import { heightSource } from './routes';
 
 /**
@@ -7,8 +8,7 @@ import { heightSource } from './routes';
  * the server parses the uploaded file again with the same options (it never trusts the preview).
  */
 const lengthUnit = z.enum(['m', 'ft'], { error: 'Units must be "m" or "ft"' });
-const column = z.number({ error: 'Column must be a column number' }).int().min(0).max(999).nullable();
-const finite = (label: string) => z.number({ error: `${label} must be a number` }).finite(`${label} must be a finite number`);
+const column = whole('Column', 0, 999).nullable();
 const dialect = z
   .strictObject({
     delimiter: z.enum([',', ';', '\t', '|'], { error: 'Delimiter must be a comma, semicolon, tab or bar' }),
@@ -53,7 +53,7 @@ export const GpxImportSchema = z.strictObject({
 export const InclinometerImportSchema = z.strictObject({
   format: z.literal('inclinometer-csv'),
   name: routeName,
-  startElevationM: finite('Height of the first mark'),
+  startElevationM: elevation('Height of the first mark'),
   startLabel: safeText('First mark', 200).optional(),
   angleUnit: z.enum(['degrees', 'percent']).optional(),
   distanceUnit: lengthUnit.default('m'),
@@ -62,9 +62,9 @@ export const InclinometerImportSchema = z.strictObject({
 export const LevelBookImportSchema = z.strictObject({
   format: z.literal('level-book-csv'),
   name: routeName,
-  startElevationM: finite('Reduced level of the first station'),
+  startElevationM: elevation('Reduced level of the first station'),
   method: z.enum(['rise-and-fall', 'height-of-collimation']).default('rise-and-fall'),
-  closingElevationM: finite('Known closing level').optional(),
+  closingElevationM: elevation('Known closing level').optional(),
   hoseLevel: z.boolean().default(false),
   unit: lengthUnit.default('m'),
 });

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
-import { finite, hourOfDay, issueAt, nonNegative, positive } from './lift-common';
+import { issueAt } from './lift-common';
+import { finite, hourOfDay, nonNegative, positive } from './numbers';
 
 export const TANK_SUPPLY_KINDS = ['ram-sites', 'source', 'entered'] as const;
 
@@ -22,9 +23,9 @@ export const TankSchema = z
     supplyKind: z.enum(TANK_SUPPLY_KINDS, { error: 'Supply must be ram-sites, source or entered' }).default('ram-sites'),
     supplySourceId: uuid('Supply source').nullable().default(null),
     supplyFlowM3s: positive('Supply flow').nullable().default(null),
-    supplyHoursPerDay: positive('Supply hours per day').max(24, 'Supply hours per day must be at most 24').default(24),
+    supplyHoursPerDay: positive('Supply hours per day', 24, 'h').default(24),
     supplyStartHour: hourOfDay('Supply start hour').default(0),
-    reserveDays: nonNegative('Reserve days').max(365, 'Reserve days must be at most 365').default(0),
+    reserveDays: nonNegative('Reserve days', 365, 'days').default(0),
     outlets: z.array(OutletSchema, { error: 'Outlets must be a list' }).max(50, 'At most 50 outlets').default([]),
     notes: safeText('Notes', 4000).default(''),
   })

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
-import { isoDate, issueAt, nonNegative, positive } from './lift-common';
+import { isoDate, issueAt } from './lift-common';
+import { nonNegative, positive } from './numbers';
 
 export const SOURCE_KINDS = ['creek', 'spring', 'other'] as const;
 export const DESIGN_YIELD_CHOICES = ['lowest-recent-dry', 'reading', 'entered'] as const;

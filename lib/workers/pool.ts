@@ -1,7 +1,7 @@
 import 'server-only';
 import os from 'node:os';
 import { Piscina } from 'piscina';
-import { HydraulicsInputError } from '../../hydraulics/errors';
+import { HydraulicsInputError } from '../../hydraulics/index';
 import { AppError } from '../errors';
 import { SurveyImportError } from '../survey/errors';
 import type { TaskInput, TaskName, TaskOutput } from './tasks';

@@ -14,11 +14,16 @@ export interface WorkerFailure {
 
 export type WorkerReply = { ok: true; value: unknown } | { ok: false; error: WorkerFailure };
 
+/** A flat record of numbers, such as a core refusal's `values` (the figures a screen restates in its units). */
+function isFigures(value: unknown): value is Record<string, number> {
+  return typeof value === 'object' && value !== null && Object.getPrototypeOf(value) === Object.prototype && Object.values(value).every((v) => typeof v === 'number');
+}
+
 function failureOf(error: unknown): WorkerFailure {
   if (!(error instanceof Error)) return { name: 'Error', message: String(error), fields: {} };
   const fields: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(error)) {
-    if (value === undefined || ['string', 'number', 'boolean'].includes(typeof value)) fields[key] = value;
+    if (value === undefined || ['string', 'number', 'boolean'].includes(typeof value) || isFigures(value)) fields[key] = value;
   }
   return { name: error.name, message: error.message, fields };
 }

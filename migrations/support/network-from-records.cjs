@@ -107,6 +107,41 @@ async function linkLineIntoNetwork(sequelize, transaction, lineId) {
   return link.id;
 }
 
+/**
+ * After a line's start changes, its link starts from the node the new start names: the ram site's
+ * outlet node, or a source. A source that only this line joins (and no water source record names)
+ * is the line's own: it follows the new water level or typed pump head in place. Any other start
+ * node gets a new node, and the old one goes when it was the line's own and nothing joins it now.
+ */
+async function rejoinLineStart(sequelize, transaction, lineId) {
+  const [line] = await rows(sequelize, transaction, 'SELECT * FROM lines WHERE id = :lineId', { lineId });
+  if (!line) return null;
+  const [link] = await rows(sequelize, transaction, 'SELECT id, from_node_id FROM network_links WHERE line_id = :lineId', { lineId });
+  if (!link) return linkLineIntoNetwork(sequelize, transaction, lineId);
+  const start = parse(line.start_condition);
+  const [current] = await rows(sequelize, transaction, 'SELECT id, kind, ram_site_id, water_source_id FROM network_nodes WHERE id = :id', { id: link.from_node_id });
+  if (start.kind === 'ram-site' && current && current.ram_site_id === start.ramSiteId) return link.id;
+  if (start.kind !== 'ram-site' && current && current.kind === 'source') {
+    const others = await rows(sequelize, transaction, 'SELECT 1 FROM network_links WHERE (from_node_id = :id OR to_node_id = :id) AND id <> :linkId LIMIT 1', { id: current.id, linkId: link.id });
+    if (others.length === 0 && !current.water_source_id) {
+      const levelM = start.kind === 'water-level' ? start.levelM : start.kind === 'pump' ? start.outletHeadM : null;
+      const data = start.kind === 'pump'
+        ? { waterLevelM: levelM, typedPumpHead: { outletHeadM: start.outletHeadM, ...(start.shutoffHeadM !== undefined ? { shutoffHeadM: start.shutoffHeadM } : {}) } }
+        : { waterLevelM: levelM };
+      await rows(sequelize, transaction, 'UPDATE network_nodes SET elevation_m = :levelM, data = CAST(:data AS jsonb), updated_at = now() WHERE id = :id', { id: current.id, levelM, data: JSON.stringify(data) });
+    }
+    return link.id;
+  }
+  const next = await startNodeOf(sequelize, transaction, line);
+  await rows(sequelize, transaction, 'UPDATE network_links SET from_node_id = :fromId, updated_at = now() WHERE id = :linkId', { fromId: next.id, linkId: link.id });
+  await rows(sequelize, transaction, `
+    DELETE FROM network_nodes n WHERE n.id = :id AND n.kind IN ('source', 'junction', 'outlet')
+      AND n.water_source_id IS NULL AND n.ram_site_id IS NULL AND n.tank_id IS NULL
+      AND NOT EXISTS (SELECT 1 FROM network_links l WHERE l.from_node_id = n.id OR l.to_node_id = n.id)
+      AND NOT EXISTS (SELECT 1 FROM demand_uses d WHERE d.outlet_node_id = n.id)`, { id: link.from_node_id });
+  return link.id;
+}
+
 /** One project's network from its records; a project that already has nodes is left as it is. */
 async function buildNetworkOfProject(sequelize, transaction, projectId) {
   const already = await rows(sequelize, transaction, 'SELECT 1 FROM network_nodes WHERE project_id = :projectId LIMIT 1', { projectId });
@@ -172,4 +207,4 @@ async function buildNetworksFromRecords(sequelize, transaction, projectIds) {
   return built;
 }
 
-module.exports = { buildNetworksFromRecords, buildNetworkOfProject, linkLineIntoNetwork };
+module.exports = { buildNetworksFromRecords, buildNetworkOfProject, linkLineIntoNetwork, rejoinLineStart };

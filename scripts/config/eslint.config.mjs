@@ -12,6 +12,25 @@ const config = [
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
   {
+    // The engineering core is used only through its barrel, hydraulics/index.ts (its export list is
+    // pinned by tests/hydraulics/index.test.ts). The core's own files and its unit tests reach inside.
+    files: ['**/*.{ts,tsx,mts,cts,js,mjs,cjs}'],
+    ignores: ['hydraulics/**', 'tests/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(@/|(\\.\\.?/)+)hydraulics/(?!index$)',
+              message: "Import the engineering core through its barrel: '@/hydraulics/index' (or a relative path to hydraulics/index).",
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['tests/**'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
   },

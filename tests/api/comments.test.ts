@@ -55,7 +55,7 @@ describe('review comments', () => {
     expect(onLine.status).toBe(403);
     expect((await post(f.users.viewer.id, { body: 'Looks good' })).status).toBe(403);
     const outsider = await post(f.users.reviewer.id, { body: 'FYI', mentions: [f.users.outsider.id] });
-    expect(outsider.status).toBe(400);
+    expect(outsider.status).toBe(404);
     expect(outsider.json.error.fields.mentions).toEqual(['Mention members of this team only']);
     const approved = await createRevisionFixture(f, 'approved');
     await post(f.users.reviewer.id, { body: 'Approved as drawn', revisionId: approved.id });
@@ -67,7 +67,7 @@ describe('review comments', () => {
     const revision = await createRevisionFixture(f, 'draft');
     const other = await createTeamFixture();
     const res = await post(f.users.reviewer.id, { body: 'x', revisionId: revision.id, anchor: { kind: 'line-chainage', lineId: other.lineId, chainageM: 5 } });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields['anchor.lineId']).toBeDefined();
   });
 
@@ -81,10 +81,10 @@ describe('review comments', () => {
     expect((await read())[0]).toMatchObject({ revisionId: null, anchor: { kind: 'network', part: 'link', partId: network.link.id }, anchorNow: { state: 'present', words: 'network link "Fixture pipe"' } });
     // A node id given as a link, and a part of another project, are both refused with the field named.
     const wrongPart = await postIn({ body: 'x', anchor: { kind: 'network', part: 'link', partId: network.outlet.id } });
-    expect(wrongPart.status).toBe(400);
+    expect(wrongPart.status).toBe(404);
     expect(wrongPart.json.error.fields['anchor.partId']).toEqual(['Pick a link of this revision or working copy']);
     const other = await createPipeNetworkFixture(f.projectId);
-    expect((await postIn({ body: 'x', anchor: { kind: 'network', part: 'node', partId: other.outlet.id } })).status).toBe(400);
+    expect((await postIn({ body: 'x', anchor: { kind: 'network', part: 'node', partId: other.outlet.id } })).status).toBe(404);
     // The link goes: the comment stays readable and says so.
     await deleteNetworkLink(g.projectId, network.link.id);
     expect((await read())[0]).toMatchObject({ body: 'Is 32 mm enough to the tap?', anchorNow: { state: 'gone', words: 'the network link is no longer in the working copy' } });

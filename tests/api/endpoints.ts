@@ -6,6 +6,7 @@ import { LIFT_ENDPOINTS } from './lift-endpoints';
 import { REVIEW_ENDPOINTS } from './review-endpoints';
 import { NETWORK_ENDPOINTS } from './network-endpoints';
 import { PHOTO_ENDPOINTS } from './photo-endpoints';
+import { REFERENCE_ENDPOINTS } from './reference-endpoints';
 import { surveyUpload } from '../support/multipart';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
@@ -20,6 +21,12 @@ export interface EndpointCase {
   body?: (f: Fixture, n: number) => unknown;
   /** A non-JSON body (a file upload) with its content type, instead of `body`. */
   upload?: (f: Fixture) => { body: Uint8Array; contentType: string };
+  /**
+   * Where the body names other records: dot paths into the JSON body (`anchor.lineId`,
+   * `mentions.0`) or field names of an upload. The live matrix swaps each for team B's and for a
+   * missing id (the same 404, nothing written) and fails on any id in a body not listed here.
+   */
+  bodyIds?: string[];
   expect: Expect;
 }
 
@@ -53,10 +60,11 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'analysis/line/route.ts', method: 'POST', params: () => ({}), body: () => referenceLine(), expect: signedIn(200) },
   { file: 'projects/[projectId]/route.ts', method: 'DELETE', params: (f) => ({ projectId: f.projectId }), expect: onlyOwner(204) },
   { file: 'projects/[projectId]/lines/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
-  { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.lineRouteId }), expect: designers(201) },
+  { file: 'projects/[projectId]/lines/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: (f) => ({ name: 'Matrix line', routeId: f.lineRouteId }), bodyIds: ['routeId'], expect: designers(201) },
   { file: 'lines/[lineId]/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'PATCH', params: (f) => ({ lineId: f.lineId }), body: () => ({ notes: 'Trench walked.' }), expect: designers(200) },
   { file: 'lines/[lineId]/route.ts', method: 'DELETE', params: (f) => ({ lineId: f.lineId }), expect: designers(204) },
+  { file: 'lines/[lineId]/duplicate/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), body: () => ({}), expect: designers(201) },
   { file: 'lines/[lineId]/stations/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/site-context/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   { file: 'lines/[lineId]/analysis/route.ts', method: 'POST', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
@@ -66,6 +74,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'lines/[lineId]/network-flows/route.ts', method: 'GET', params: (f) => ({ lineId: f.lineId }), expect: teamWorkers(200) },
   ...REVIEW_ENDPOINTS,
   ...NETWORK_ENDPOINTS,
+  ...REFERENCE_ENDPOINTS,
   // Survey routes: every member reads; surveyors, designers and owners import and edit.
   { file: 'projects/[projectId]/routes/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(200) },
   { file: 'projects/[projectId]/routes/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), body: () => ({ name: 'Sketch of the lower field' }), expect: surveyEditors(201) },
@@ -92,7 +101,7 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'routes/[routeId]/reverse/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), expect: surveyEditors(200) },
   { file: 'routes/[routeId]/split/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ chainageM: 100 }), expect: surveyEditors(201) },
   { file: 'routes/[routeId]/trim/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: () => ({ fromChainageM: 40, toChainageM: 160 }), expect: surveyEditors(200) },
-  { file: 'routes/[routeId]/join/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: (f) => ({ otherRouteId: f.otherRouteId }), expect: surveyEditors(201) },
+  { file: 'routes/[routeId]/join/route.ts', method: 'POST', params: (f) => ({ routeId: f.routeId }), body: (f) => ({ otherRouteId: f.otherRouteId }), bodyIds: ['otherRouteId'], expect: surveyEditors(201) },
   { file: 'routes/[routeId]/source/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
 ];
 

@@ -57,11 +57,11 @@ describe('POST ram-sites', () => {
     expect(await siteCount()).toBe(before);
   });
 
-  it('refuses a tank of another project (400 on tankId), and writes nothing', async () => {
+  it('refuses a tank of another project (404 on tankId, as for an id in the address), and writes nothing', async () => {
     const foreignTank = await createTankFixture(other.projectId, other.users.owner.id);
     const before = await siteCount();
     const res = await post({ ...ramSiteBody(), tankId: foreignTank.id });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields.tankId).toEqual(['The tank is not part of this project']);
     expect(await siteCount()).toBe(before);
   });

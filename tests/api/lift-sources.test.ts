@@ -59,12 +59,12 @@ describe('source yield log', () => {
     expect(await readingCount(source.id)).toBe(0);
   });
 
-  it('refuses a design reading taken from another source (400), keeping the source as it was', async () => {
+  it('refuses a design reading taken from another source (404 naming the field), keeping the source as it was', async () => {
     const { source } = await createYieldReadingFixture(f.projectId, f.users.owner.id);
     const { reading: foreign } = await createYieldReadingFixture(f.projectId, f.users.owner.id);
     const body = { ...sourceBody(), name: 'Changed', designYieldChoice: 'reading', designReadingId: foreign.id };
     const res = await call(sourceRoute.PUT, { method: 'PUT', path: 'x', params: { projectId: f.projectId, sourceId: source.id }, body, userId: f.users.designer.id });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields.designReadingId).toBeDefined();
     expect((await models().WaterSource.findByPk(source.id))?.name).toBe('Fixture creek');
   });

@@ -68,10 +68,10 @@ describe('a delivery line fed by a ram site', () => {
     expect((await models().Line.findByPk(f.lineId))!.revision).toBe(revision);
   });
 
-  it('refuses a ram site of another project with a 400 naming the field, and writes nothing', async () => {
+  it('refuses a ram site of another project with a 404 naming the field, and writes nothing', async () => {
     const before = (await models().Line.findByPk(f.lineId))!;
     const res = await patch({ design: ramDesign(foreignRamSiteId) });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(Object.keys(res.json.error.fields)).toEqual(['design.start.ramSiteId']);
     const after = (await models().Line.findByPk(f.lineId))!;
     expect(after.revision).toBe(before.revision);
@@ -84,7 +84,7 @@ describe('a delivery line fed by a ram site', () => {
       method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id,
       body: { name: 'Borrowed ram', routeId: f.lineRouteId, design: ramDesign(foreignRamSiteId) },
     });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields).toHaveProperty(['design.start.ramSiteId']);
     expect(await models().Line.count({ where: { projectId: f.projectId } })).toBe(count);
   });

@@ -2,6 +2,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import * as lineRoute from '@/app/api/lines/[lineId]/route';
 import * as analysisRoute from '@/app/api/lines/[lineId]/analysis/route';
 import * as stationsRoute from '@/app/api/lines/[lineId]/stations/route';
+import * as duplicateRoute from '@/app/api/lines/[lineId]/duplicate/route';
+import { copyNameOf } from '@/lib/data/lines';
 import * as projectLines from '@/app/api/projects/[projectId]/lines/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
@@ -96,10 +98,10 @@ describe('lines API', () => {
     expect(analysis.json.analysis.stretches[0].pipe.id).toBe('old-barn-pipe');
   });
 
-  it('refuses a route of another project', async () => {
+  it('refuses a route of another project with the 404 of a missing one', async () => {
     const other = await createTeamFixture();
     const res = await create({ name: 'Borrowed', routeId: other.lineRouteId });
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(404);
     expect(res.json.error.fields.routeId).toEqual(['Pick a route of this project']);
   });
 
@@ -112,6 +114,10 @@ describe('lines API', () => {
     const stale = await patch(id, { notes: 'late', baseRevision: 1 });
     expect(stale.status).toBe(409);
     expect(stale.json.error.code).toBe('conflict');
+    // The same designer in another tab is told it was their own save, not someone else's.
+    expect(stale.json.error.message).toMatch(/^You saved revision 2 of this line in another tab or window/);
+    const colleague = await patch(id, { notes: 'late', baseRevision: 1 }, f.users.owner.id);
+    expect(colleague.json.error.message).toMatch(/^Someone else saved revision 2 /);
     expect((await read(id)).json.line).toMatchObject({ revision: 2, notes: '' });
   });
 
@@ -154,6 +160,35 @@ describe('lines API', () => {
     expect(del.status).toBe(204);
     expect((await sequelize.query('SELECT 1 FROM network_links WHERE line_id = :lineId', { replacements: { lineId } }))[0]).toHaveLength(0);
     expect(await nodesOf()).toEqual(before.filter((id) => id !== a && id !== b));
+  });
+
+  it('duplicates a line on the same route with its stretches, devices and settings, as a new network link', async () => {
+    const made = await create({ name: 'Orchard feed', routeId: f.lineRouteId, fromChainageM: 0, toChainageM: 400, design: designOf() });
+    const id = made.json.line.id as string;
+    const dup = (body: unknown, userId = f.users.designer.id) =>
+      call(duplicateRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: id }, body, userId });
+    const first = await dup({});
+    expect(first.status).toBe(201);
+    const copy = first.json.line;
+    expect(copy.id).not.toBe(id);
+    expect(copy).toMatchObject({ name: 'Orchard feed (copy)', routeId: f.lineRouteId, fromChainageM: 0, toChainageM: 400, revision: 1 });
+    expect(copy.design).toEqual(made.json.line.design);
+    expect((await dup({})).json.line.name).toBe('Orchard feed (copy 2)');
+    expect((await dup({ name: '  Orchard feed, PN 16  ' })).json.line.name).toBe('Orchard feed, PN 16');
+    const { sequelize } = models();
+    const [links] = await sequelize.query('SELECT from_node_id AS a, to_node_id AS b FROM network_links WHERE line_id IN (:ids)', { replacements: { ids: [id, copy.id] } });
+    expect(links).toHaveLength(2);
+    // Editing the copy leaves the original as it was.
+    await patch(copy.id, { design: designOf({ devices: [] }), baseRevision: 1 });
+    expect((await read(id)).json.line.design.devices).toEqual([{ kind: 'washout', chainageM: 390 }]);
+    expect((await dup({}, f.users.surveyor.id)).status).toBe(403);
+    expect((await dup({ name: '' })).status).toBe(400);
+  });
+
+  it('names copies after the first free "(copy n)"', () => {
+    expect(copyNameOf('Spring line', new Set())).toBe('Spring line (copy)');
+    expect(copyNameOf('Spring line (copy)', new Set(['Spring line (copy)']))).toBe('Spring line (copy 2)');
+    expect(copyNameOf('Spring line', new Set(['Spring line (copy)', 'Spring line (copy 2)']))).toBe('Spring line (copy 3)');
   });
 
   it('analyses the saved line with the engineering core', async () => {

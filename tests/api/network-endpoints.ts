@@ -27,7 +27,7 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     params: async (f) => ({ projectId: f.projectId, nodeId: (await createNodeFixture(f.projectId, outletNodeBody())).id }),
   },
   {
-    file: `${P}/links/route.ts`, method: 'POST', expect: designers(201),
+    file: `${P}/links/route.ts`, method: 'POST', expect: designers(201), bodyIds: ['fromNodeId', 'toNodeId'],
     params: async (f) => {
       const from = await createNodeFixture(f.projectId, sourceNodeBody());
       const to = await createNodeFixture(f.projectId, outletNodeBody());
@@ -37,7 +37,7 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     body: (f) => pipeLinkBody(madeFor.get(f)!.from, madeFor.get(f)!.to),
   },
   {
-    file: `${P}/links/[linkId]/route.ts`, method: 'PUT', expect: designers(200),
+    file: `${P}/links/[linkId]/route.ts`, method: 'PUT', expect: designers(200), bodyIds: ['fromNodeId', 'toNodeId'],
     params: async (f) => {
       const made = await createPipeNetworkFixture(f.projectId);
       madeFor.set(f, { from: made.source.id, to: made.outlet.id });
@@ -50,12 +50,12 @@ export const NETWORK_ENDPOINTS: EndpointCase[] = [
     params: async (f) => ({ projectId: f.projectId, linkId: (await createPipeNetworkFixture(f.projectId)).link.id }),
   },
   {
-    file: `${P}/take-offs/route.ts`, method: 'POST', expect: designers(201),
+    file: `${P}/take-offs/route.ts`, method: 'POST', expect: designers(201), bodyIds: ['lineId'],
     params: (f) => ({ projectId: f.projectId }),
     body: (f) => ({ lineId: f.lineId, chainageM: 10, name: 'Garden tee' }),
   },
   {
-    file: 'projects/[projectId]/demand-uses/[useId]/outlet/route.ts', method: 'PUT', expect: designers(200),
+    file: 'projects/[projectId]/demand-uses/[useId]/outlet/route.ts', method: 'PUT', expect: designers(200), bodyIds: ['outletNodeId'],
     params: async (f) => {
       const outlet = await createNodeFixture(f.projectId, outletNodeBody());
       madeFor.set(f, { from: outlet.id, to: outlet.id });

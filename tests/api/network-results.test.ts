@@ -88,6 +88,8 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
     const job = await run(f, tankProject, 'day');
     expect(job.status).toBe('done');
     const day = job.result as DayRunResult;
+    // The network solves with the line analysis's law, and the result says so.
+    expect(day.friction).toEqual({ method: 'darcy-weisbach', freeSurfaceLosses: true });
     expect(day.hours).toHaveLength(24);
     expect(day.tanks[0].levelsM).toHaveLength(25);
     const tap = day.outlets.find((o) => o.nodeId === ids.tap)!;
@@ -98,6 +100,16 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
     // The tap sits 20 m and more below the tank floor: its pressure is at least that less the pipe's loss.
     expect(lowest).toBeGreaterThan(15);
     expect(day.tanks[0].storageNeededM3).toBeCloseTo(34.56 + 0, 0);
+  });
+
+  it("sizes the spring pipe to fill the tank with its tap's day over the tank's supply hours, not as a pipe into a fixed level", async () => {
+    const job = await run(f, tankProject, 'size');
+    expect(job.status).toBe('done');
+    const sized = job.result as SizeRunResult;
+    expect(sized.feasible).toBe(true);
+    // The tap draws 0.2 L/s all day (no uses tied): 17.28 m³ a day, brought in over 24 supply hours = 0.2 L/s.
+    const inlet = sized.solution!.links.find((l) => l.linkId === ids.inlet)!;
+    expect(inlet.flowM3s).toBeCloseTo(17.28 / 86_400, 12);
   });
 
   it('applies the chosen sizes to the typed pipes in one go', async () => {

@@ -62,7 +62,7 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     await setUnits('metric');
     expect(tank.status).toBe(400);
     expect(tank.json.error.fields.volumeM3).toEqual(['Volume must be more than 0 US gal']);
-    expect(tank.json.error.fields.supplyHoursPerDay).toEqual(['Supply hours per day must be at most 24']);
+    expect(tank.json.error.fields.supplyHoursPerDay).toEqual(['Supply hours per day must be at most 24 h']);
     expect(node.status).toBe(400);
     expect(node.json.error.fields.elevationM).toEqual(['Elevation must be at most 29,527.56 ft']); // 9,000 m
   });

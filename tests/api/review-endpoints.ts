@@ -35,12 +35,12 @@ export const REVIEW_ENDPOINTS: EndpointCase[] = [
 
   { file: 'projects/[projectId]/comments/route.ts', method: 'GET', params: (f) => ({ projectId: f.projectId }), expect: anyMember(200) },
   {
-    file: 'projects/[projectId]/comments/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), expect: commenters(201),
+    file: 'projects/[projectId]/comments/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), expect: commenters(201), bodyIds: ['anchor.lineId'],
     body: (f) => ({ body: 'Washout needed at the sag?', anchor: { kind: 'line-chainage', lineId: f.lineId, chainageM: 120 } }),
   },
   {
     // Surveyors comment on their routes.
-    file: 'projects/[projectId]/comments/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(201),
+    file: 'projects/[projectId]/comments/route.ts', method: 'POST', params: (f) => ({ projectId: f.projectId }), expect: teamWorkers(201), bodyIds: ['anchor.routeId'],
     body: (f) => ({ body: 'Peg 12 re-walked', anchor: { kind: 'route-chainage', routeId: f.routeId, chainageM: 40 } }),
   },
   {

@@ -14,7 +14,7 @@ import * as sourceFileRoute from '@/app/api/routes/[routeId]/source/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
 import * as compareRoute from '@/app/api/revisions/[revisionId]/compare/[otherId]/route';
-import { findPipe } from '@/hydraulics/index';
+import { findPipe, pipeHeadLossM } from '@/hydraulics/index';
 import { updateNetworkLink } from '@/lib/data/network';
 import { replacePriceList } from '@/lib/data/price-list';
 import { NetworkLinkSchema } from '@/lib/validations/network';
@@ -197,10 +197,13 @@ describe('revisions and the review cycle', () => {
     expect(cost.before.total).toBeCloseTo(250 * 2.1 + lineSlopeM * 5, 6);
     expect(cost.after.total).toBeCloseTo(250 * 3.4 + lineSlopeM * 5.5, 6);
     expect(cost.difference).toBeCloseTo(250 * 1.3 + lineSlopeM * 0.5, 6);
-    // Intake 120 m, tap 100 m, 250 m at 0.2 L/s: Hazen-Williams h = 10.6742 L Q^1.85185 / (C^1.85185 D^4.87037) (docs/references/core.md §1.1 [R18]).
+    // Intake 120 m, tap 100 m, 250 m at 0.2 L/s, by the network's default law (the line analysis's): Darcy-Weisbach
+    // with Colebrook (the core's pipeHeadLossM) plus the sharp entrance and velocity head at the intake, K = 1.5
+    // (profile-and-checks.md §5.2).
     const loss = (pipeId: string) => {
       const pipe = findPipe(pipeId)!;
-      return (10.6742 * 250 * 0.0002 ** (1 / 0.54)) / (pipe.hazenWilliamsC ** (1 / 0.54) * pipe.insideDiameterM ** (2.63 / 0.54));
+      const velocity = 0.0002 / (Math.PI * (pipe.insideDiameterM / 2) ** 2);
+      return pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.0002, lengthM: 250, pipe }) + (1.5 * velocity ** 2) / (2 * 9.80665);
     };
     expect(outlets).toHaveLength(1);
     expect(outlets[0]).toMatchObject({ nodeId: network.outlet.id, name: 'Fixture tap', change: 'changed' });

@@ -187,7 +187,7 @@ describe('editing points', () => {
   it('refuses a malformed point with the field named', async () => {
     const res = await putPoints(f.routeId, { points: [{ sourceSeq: null, latitude: 91, longitude: 0, chainageM: null, elevationM: 1, label: null, heightSource: 'gps', confidenceM: null, excluded: false }] });
     expect(res.status).toBe(400);
-    expect(res.json.error.fields['points.0.latitude']).toEqual(['Point 1: latitude must be between -90 and 90 degrees']);
+    expect(res.json.error.fields['points.0.latitude']).toEqual(['Point 1: latitude must be at most 90 degrees']);
   });
 });
 
@@ -239,7 +239,7 @@ describe('reverse, split, trim and join', () => {
     expect(res.json.route).toMatchObject({ name: 'Intake to ram + Ram to tank', lengthM: 310, pointCount: 8, sourceFormat: 'joined' });
     expect((await readRoute(surveyor, a)).route.lengthM).toBe(150);
     const foreign = await post(joinRoute.POST, a, { otherRouteId: (await createTeamFixture()).routeId });
-    expect(foreign.status).toBe(400);
+    expect(foreign.status).toBe(404);
   });
 
   it('deleting a route removes its points, its file row and the stored object', async () => {

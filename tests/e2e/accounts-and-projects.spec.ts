@@ -40,7 +40,16 @@ test('a newcomer signs up, confirms the address from the mail, signs in, creates
   const table = page.getByRole('table');
   await expect(table.getByRole('link', { name: 'Lower meadow trough line' })).toBeVisible();
   await page.getByLabel('Search projects').fill('nothing like it');
-  await expect(table.getByText('No project matches.')).toBeVisible();
+  await expect(table.getByText(/No project matches/)).toBeVisible();
+  // The search lives in the address: a reload (or a shared link) shows the same rows.
+  await expect(page).toHaveURL(/[?&]q=nothing\+like\+it/);
+  await page.reload();
+  await expect(page.getByLabel('Search projects')).toHaveValue('nothing like it');
+  await expect(page.getByRole('table').getByText(/No project matches/)).toBeVisible();
+  await page.getByLabel('Search projects').fill('');
+  await page.getByRole('button', { name: 'Project', exact: true }).click();
+  await expect(page).toHaveURL(/[?&]sort=name(&|$)/);
+  await expect(page.getByRole('columnheader', { name: /Project/ })).toHaveAttribute('aria-sort', 'ascending');
   // The one deliberate wrong password above is answered 401 by the sign-in endpoint; nothing else may fail.
   expect(errors.filter((e) => !e.includes('401 (Unauthorized)'))).toEqual([]);
   expect(errors.filter((e) => e.includes('401 (Unauthorized)'))).toHaveLength(1);

@@ -82,7 +82,7 @@ test('a reviewer sees the lift figures without edit controls, and a direct write
   await signIn(page, 'reviewer@example.test');
   await page.goto(`/projects/${BRACKWATER}/lift`);
   await expect(page.getByRole('heading', { name: 'Weir ram' })).toBeVisible();
-  await expect(page.getByTestId('ram-answer')).toContainText('US gal/day');
+  await expect(page.getByRole('article', { name: 'Weir ram' }).getByTestId('ram-answer')).toContainText('US gal/day');
   await expect(page.getByTestId('measured-efficiency').first()).toBeVisible();
   for (const control of ['Edit site', 'Delete site', 'Add ram site', 'Log reading', 'Add tank', 'Make tasks']) {
     await expect(page.getByRole('button', { name: control })).toHaveCount(0);

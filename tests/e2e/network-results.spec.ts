@@ -63,6 +63,7 @@ test('the village network: a 24-hour day on screen, a tap stand edited, least-co
   // The day: tank depth, outlet pressures and the source draw through 24 hours, with the day's findings.
   await page.getByRole('button', { name: 'Run a 24-hour day' }).click();
   await expect(page.getByTestId('day-summary')).toContainText('over 24 hours', { timeout: 120_000 });
+  await expect(page.getByTestId('day-friction')).toContainText('Friction by Darcy-Weisbach');
   await expect(page.getByRole('figure', { name: 'Water depth in each tank' })).toBeVisible();
   await expect(page.getByRole('figure', { name: 'Pressure head at each outlet' })).toBeVisible();
   await expect(page.getByRole('figure', { name: 'Draw from each source' })).toBeVisible();

@@ -140,8 +140,10 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   // Captioned and chosen for the report, it stays so.
   await field.getByLabel('Caption of spring-box.jpg').fill('Spring box lid, moss on the north side');
   await field.getByLabel('Caption of spring-box.jpg').press('Enter');
-  await field.getByLabel('Show spring-box.jpg in the report').check();
-  await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
+  // The box shows the saved state once the server has it (a busy server may take a moment), so
+  // click and wait rather than expect the state to change on the click itself.
+  await field.getByLabel('Show spring-box.jpg in the report').click();
+  await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked({ timeout: 15_000 });
   await field.reload();
   await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
   await expect(field.getByLabel('Caption of spring-box.jpg')).toHaveValue('Spring box lid, moss on the north side');

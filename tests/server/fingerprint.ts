@@ -50,3 +50,58 @@ export async function settle(ms = 8_000): Promise<void> {
     await new Promise((r) => setTimeout(r, 100));
   }
 }
+
+/**
+ * A log of committed writes, for checking every single call cheaply: statement triggers with
+ * transition tables on every data table note each INSERT, UPDATE and DELETE that touched a row
+ * (in a schema of its own, so the fingerprint never sees it). A rolled-back write leaves no note,
+ * like it leaves no row. `writesSince(mark)` is then one indexed query instead of hashing every
+ * row of the database.
+ */
+const LOG = 'runnel_harness';
+
+export async function startWriteLog(): Promise<number> {
+  const q = (sql: string) => db().query(sql);
+  await q(`CREATE SCHEMA IF NOT EXISTS ${LOG}`);
+  await q(`CREATE TABLE IF NOT EXISTS ${LOG}.writes (id bigserial PRIMARY KEY, table_name text NOT NULL, op text NOT NULL, row_count bigint NOT NULL)`);
+  for (const [name, rows] of [['note_new', 'new_rows'], ['note_old', 'old_rows']]) {
+    await q(`CREATE OR REPLACE FUNCTION ${LOG}.${name}() RETURNS trigger LANGUAGE plpgsql AS $$
+      DECLARE n bigint;
+      BEGIN
+        SELECT count(*) INTO n FROM ${rows};
+        IF n > 0 THEN INSERT INTO ${LOG}.writes (table_name, op, row_count) VALUES (TG_TABLE_NAME, TG_OP, n); END IF;
+        RETURN NULL;
+      END $$`);
+  }
+  for (const name of await dataTables()) {
+    const t = `"${name.replace(/"/g, '""')}"`;
+    await q(`CREATE OR REPLACE TRIGGER ${LOG}_insert AFTER INSERT ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`);
+    await q(`CREATE OR REPLACE TRIGGER ${LOG}_update AFTER UPDATE ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`);
+    await q(`CREATE OR REPLACE TRIGGER ${LOG}_delete AFTER DELETE ON ${t} REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_old()`);
+  }
+  return writeMark();
+}
+
+/** The newest note: pass it to `writesSince` after the next call. */
+export async function writeMark(): Promise<number> {
+  const [row] = await db().query<{ mark: string }>(`SELECT coalesce(max(id), 0)::text AS mark FROM ${LOG}.writes`, { type: QueryTypes.SELECT });
+  return Number(row!.mark);
+}
+
+/** Writes committed after `mark`, as `INSERT comments ×1`, and the new mark. */
+export async function writesSince(mark: number): Promise<{ writes: string[]; mark: number }> {
+  const rows = await db().query<{ id: string; table_name: string; op: string; row_count: string }>(
+    `SELECT id::text, table_name, op, row_count::text FROM ${LOG}.writes WHERE id > :mark ORDER BY id`,
+    { type: QueryTypes.SELECT, replacements: { mark } },
+  );
+  return { writes: rows.map((r) => `${r.op} ${r.table_name} ×${r.row_count}`), mark: rows.length ? Number(rows[rows.length - 1]!.id) : mark };
+}
+
+/** Removes the triggers and the log. */
+export async function stopWriteLog(): Promise<void> {
+  for (const name of await dataTables()) {
+    const t = `"${name.replace(/"/g, '""')}"`;
+    for (const op of ['insert', 'update', 'delete']) await db().query(`DROP TRIGGER IF EXISTS ${LOG}_${op} ON ${t}`);
+  }
+  await db().query(`DROP SCHEMA IF EXISTS ${LOG} CASCADE`);
+}

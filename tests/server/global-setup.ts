@@ -8,6 +8,8 @@ import path from 'node:path';
  * .runtime/test/server.log, which the log test reads back for planted secrets.
  */
 const root = path.resolve(import.meta.dirname, '../..');
+/** Where a test names the one storage call the server must fail (lib/storage-faults.ts). */
+export const STORAGE_FAULTS_FILE = path.join(root, '.runtime', 'test', 'storage-faults.json');
 let server: ChildProcess | undefined;
 
 export async function setup(): Promise<void> {
@@ -17,11 +19,16 @@ export async function setup(): Promise<void> {
   const logFile = path.join(root, '.runtime', 'test', 'server.log');
   fs.mkdirSync(path.dirname(logFile), { recursive: true });
   const out = fs.openSync(logFile, 'w');
+  fs.rmSync(STORAGE_FAULTS_FILE, { force: true });
   server = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '--hostname', '127.0.0.1', '--port', port], {
     cwd: root,
     detached: true,
     stdio: ['ignore', out, out],
-    env: { ...process.env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', NEXTAUTH_URL: base, RUNNEL_LOG_LEVEL: 'info' },
+    // RUNNEL_STORAGE_FAULTS: the file tests/server/faults.test.ts writes to fail one storage call (test env only).
+    env: {
+      ...process.env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', NEXTAUTH_URL: base, RUNNEL_LOG_LEVEL: 'info',
+      RUNNEL_ENV: 'test', RUNNEL_STORAGE_FAULTS: STORAGE_FAULTS_FILE,
+    },
   });
   const deadline = Date.now() + 90_000;
   for (;;) {

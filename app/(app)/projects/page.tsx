@@ -1,7 +1,9 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { NewProjectForm } from '@/components/projects/new-project-form';
 import { ProjectsTable } from '@/components/projects/projects-table';
+import { ProjectsTableSkeleton } from '@/components/projects/projects-table-skeleton';
 import { Panel } from '@/components/ui/panel';
 import { requireTeamRole, requireUser } from '@/lib/auth/current';
 import { currentTeam } from '@/lib/current-team';
@@ -33,7 +35,9 @@ export default async function ProjectsPage() {
         </Panel>
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <ProjectsTable teamId={team.id} />
+        <Suspense fallback={<ProjectsTableSkeleton />}>
+          <ProjectsTable teamId={team.id} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );

@@ -1,4 +1,4 @@
-import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/survey/height-source';
+import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/index';
 import { HEIGHT_SOURCE_LABELS } from '../format-labels';
 
 export function HeightSourceSelect({ id, value, onChange }: { id: string; value: HeightSource; onChange: (v: HeightSource) => void }) {

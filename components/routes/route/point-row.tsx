@@ -1,6 +1,7 @@
 'use client';
 
-import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/survey/height-source';
+import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/index';
+import { removeKeepingFocus } from '@/components/ui/focus-return';
 import { formatNumber, fromDisplay, toDisplay, unitDef } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/lib/units';
@@ -66,7 +67,7 @@ export function PointRow({ point: p, index, count, units, editable, positioned, 
         <td className="whitespace-nowrap px-2 py-1 text-xs">
           <button type="button" aria-label={`Move point ${n} up`} disabled={index === 0} onClick={() => dispatch({ type: 'move', key: p.key, by: -1 })} className="px-1 disabled:opacity-30">↑</button>
           <button type="button" aria-label={`Move point ${n} down`} disabled={index === count - 1} onClick={() => dispatch({ type: 'move', key: p.key, by: 1 })} className="px-1 disabled:opacity-30">↓</button>
-          <button type="button" aria-label={`Delete point ${n}`} onClick={() => dispatch({ type: 'delete', key: p.key })} className="px-1 text-clay-600">✕</button>
+          <button type="button" aria-label={`Delete point ${n}`} onClick={(e) => removeKeepingFocus(e.currentTarget, () => dispatch({ type: 'delete', key: p.key }))} className="px-1 text-clay-600">✕</button>
         </td>
       )}
     </tr>

@@ -1,5 +1,6 @@
 'use client';
 
+import { LoadError } from '@/components/ui/load-error';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
 import { Panel, Skeleton } from '@/components/ui/panel';
@@ -36,11 +37,7 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
   const pins = useMemo(() => pinsOf(comments.threads, (c) => routePinChainage(c, routeId), comments.selectedId), [comments.threads, comments.selectedId, routeId]);
   const topRef = useRef<HTMLDivElement>(null);
   if (isError) {
-    return (
-      <p role="alert" className="text-sm text-clay-700">
-        The route could not be loaded. <button className="underline" onClick={() => void refetch()}>Try again</button>
-      </p>
-    );
+    return <LoadError what="The route" onRetry={() => void refetch()} />;
   }
   if (!data) return <Skeleton className="h-96 w-full" />;
 

@@ -4,6 +4,8 @@ import { useQuery } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
+import { useConfirm } from '@/components/ui/confirm-dialog';
+import { projectLinesQuery } from '@/lib/queries/lines';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
@@ -31,6 +33,7 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
   const trim = useTrimRoute(projectId, id);
   const join = useJoinRoutes(projectId, id);
   const remove = useDeleteRoute(projectId, id);
+  const confirm = useConfirm();
   const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
   const u = unitOf('length', units);
   const lengthShown = toDisplay('length', detail.route.lengthM, units);
@@ -95,9 +98,44 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
         </form>
       </div>
       <div className="mt-4 flex flex-wrap items-center gap-3 border-t border-creek-100 pt-3">
-        <Button tone="danger" disabled={busy} onClick={() => { if (window.confirm(`Delete the route “${detail.route.name}” and its points?`)) void run(async () => { await remove.mutateAsync(undefined); router.push(`/projects/${projectId}/routes`); }, 'Deleted.'); }}>Delete route</Button>
+        <Button tone="danger" disabled={busy} onClick={() => confirm.ask({
+          title: `Delete the route “${detail.route.name}”?`,
+          body: (
+            <>
+              <p>The route goes with its {detail.points.length} {detail.points.length === 1 ? 'point' : 'points'} and their clean-up. Photos placed along it stay in the project, no longer placed on a route.</p>
+              <LinesOnRoute projectId={projectId} routeId={id} />
+              <p>A ram site whose delivery pipe follows this route loses that length; type it on the Lift &amp; storage page. This cannot be undone.</p>
+            </>
+          ),
+          confirmLabel: 'Delete route',
+          onConfirm: async () => {
+            await remove.mutateAsync(undefined);
+            router.push(`/projects/${projectId}/routes`);
+          },
+        })}>Delete route</Button>
+        {confirm.dialog}
         <FormMessage message={message?.text} tone={message?.tone} />
       </div>
     </Panel>
+  );
+}
+
+/** The lines that follow the route, read when the dialog opens, and what becomes of them. */
+function LinesOnRoute({ projectId, routeId }: { projectId: string; routeId: string }) {
+  const query = useQuery(projectLinesQuery(projectId));
+  if (query.isError) return <p className="font-medium text-clay-700">Which lines follow this route could not be read; lines on it would stay without a route.</p>;
+  if (!query.data) return <p>Looking for lines that follow this route…</p>;
+  const lines = query.data.filter((line) => line.routeId === routeId);
+  if (lines.length === 0) return <p data-testid="route-deletion-lines">No line follows this route.</p>;
+  const one = lines.length === 1;
+  return (
+    <div data-testid="route-deletion-lines">
+      <p className="font-medium text-clay-700">{one ? 'One line follows' : `${lines.length} lines follow`} this route:</p>
+      <ul className="list-disc pl-5">{lines.map((line) => <li key={line.id}>{line.name}</li>)}</ul>
+      <p>
+        {one ? 'It stays' : 'They stay'} in the project with {one ? 'its design' : 'their designs'}, but without a route {one ? 'it' : 'they'} cannot be
+        drawn, analysed, reported or duplicated. Keep the route if you still need {one ? 'that line' : 'those lines'}.
+      </p>
+    </div>
   );
 }

@@ -1,6 +1,6 @@
 'use client';
 
-import { useMemo, useReducer, useState } from 'react';
+import { useEffect, useMemo, useReducer, useState } from 'react';
 import { PlanView } from '@/components/lines/plan-view';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
@@ -9,7 +9,9 @@ import { formatQuantity } from '@/lib/units';
 import { useRoutePhotos } from '@/lib/queries/photos';
 import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
-import { thinProfile } from '@/lib/routes/profile-series';
+import { routeProfileSeries } from '@/lib/routes/profile-series';
+import { keepDraft, keptDraft } from '@/lib/routes/kept-drafts';
+import { useLeaveWarning } from '@/components/ui/use-leave-warning';
 import type { RouteDetail } from '@/lib/routes/types';
 import { displayUnits, type UnitSystem } from '@/lib/units';
 import type { ProfilePin } from '@/lib/chart/profile-types';
@@ -36,7 +38,13 @@ export interface RouteWorkspaceProps {
 
 /** One version of the route as the server has it, with the user's unsaved edits on top. */
 export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
-  const [draft, dispatch] = useReducer(draftReducer, detail.points, draftFromPoints);
+  const routeId = detail.route.id;
+  const baseUpdatedAt = detail.route.updatedAt;
+  // Edits left unsaved when the person went to another section of the project come back.
+  const [restored] = useState(() => keptDraft(routeId, baseUpdatedAt) !== null);
+  const [draft, dispatch] = useReducer(draftReducer, detail.points, (points) => keptDraft(routeId, baseUpdatedAt) ?? draftFromPoints(points));
+  useEffect(() => keepDraft(routeId, baseUpdatedAt, draft), [routeId, baseUpdatedAt, draft]);
+  useLeaveWarning(editable && draft.dirty);
   const [message, setMessage] = useState<string | null>(null);
   const [planHoverM, setPlanHoverM] = useState<number | null>(null);
   const photos = useRoutePhotos(detail.route.projectId, detail.route.id);
@@ -49,8 +57,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
   const sketching = editable && detail.points.length === 0;
   const flagged = new Set(detail.proposals.map((p) => p.index));
   const placed = draft.points.filter((p) => p.chainageM !== null);
-  const raw = thinProfile(placed.filter((p) => p.rawElevationM !== null).map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })));
-  const cleaned = thinProfile(placed.filter((p) => !p.excluded).map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })));
+  const { raw, cleaned } = routeProfileSeries(draft.points);
   const bySeq = new Map(detail.points.map((p) => [p.seq, p]));
   const markers = detail.proposals.flatMap((c) => {
     const p = bySeq.get(c.index);
@@ -110,7 +117,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
       <Panel title="Points" aside={positioned && editable ? <span className="text-xs text-creek-600">Chainage is measured on the WGS84 ellipsoid from the positions when you save.</span> : undefined}>
         {editable && draft.dirty && (
           <div className="mb-3 flex flex-wrap items-center gap-3 rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm" role="status">
-            <span className="font-medium text-ochre-700">Unsaved changes</span>
+            <span className="font-medium text-ochre-700">Unsaved changes{restored ? ' (kept from before you left this page)' : ''}</span>
             <Button tone="quiet" className="px-2.5 py-1" disabled={draft.past.length === 0} onClick={() => dispatch({ type: 'undo' })}>Undo</Button>
             <Button tone="quiet" className="px-2.5 py-1" onClick={() => dispatch({ type: 'reset', points: detail.points })}>Discard</Button>
             <Button className="px-2.5 py-1" disabled={save.isPending} onClick={onSave}>{save.isPending ? 'Saving…' : 'Save points'}</Button>

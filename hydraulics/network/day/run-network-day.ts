@@ -1,6 +1,7 @@
 import { HOURS_PER_DAY, hourlyMultipliers } from '../../demand/hourly-pattern';
 import { HydraulicsInputError } from '../../errors';
 import { assertPositive } from '../../input-guards';
+import { resolveNetworkSettings } from '../settings';
 import { solveNetwork } from '../solve-network';
 import type { NetworkInput, NetworkNode, NetworkSolution, NetworkWarning } from '../types';
 import { assertNetworkInput } from '../validate-network';
@@ -154,7 +155,8 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
       elementId: sourceId,
     });
   }
-  return { steps, tankLevelsM: history, tankOverflowM3: overflow, tankShortfallM3: shortfall, outletLowestPressureHeadM: lowest, warnings: [...warnings, ...shortAtPeak] };
+  const { frictionMethod, freeSurfaceLosses } = resolveNetworkSettings(input.settings);
+  return { frictionMethod, freeSurfaceLosses, steps, tankLevelsM: history, tankOverflowM3: overflow, tankShortfallM3: shortfall, outletLowestPressureHeadM: lowest, warnings: [...warnings, ...shortAtPeak] };
 }
 
 function clock(timeS: number): string {

@@ -1,3 +1,4 @@
+import type { FrictionMethod } from '../../friction/head-loss';
 import type { NetworkSolution, NetworkWarning } from '../types';
 
 /** How to run a day of operation. */
@@ -29,6 +30,10 @@ export interface NetworkDayStep {
 
 /** A day of operation. */
 export interface NetworkDayResult {
+  /** The friction law every step was solved with. */
+  frictionMethod: FrictionMethod;
+  /** Whether entrance and velocity-head losses at free surfaces were counted. */
+  freeSurfaceLosses: boolean;
   steps: NetworkDayStep[];
   /** Level of each tank at every step boundary (steps + 1 values), m. */
   tankLevelsM: Record<string, number[]>;

@@ -42,7 +42,7 @@ export function fastEvaluator(context: SizingContext): (design: Int32Array) => Q
       const lengthM = net.lengthM[k];
       const law = laws[design[i]];
       net.laws[k] = law.kind === 'hazen-williams' ? { ...law, resistance: law.resistance * lengthM } : { ...law, lengthM };
-      net.minor[k] = minorLossCoefficient(context.input.links[k].minorK ?? 0, candidate.pipe.insideDiameterM);
+      net.minor[k] = minorLossCoefficient(net.minorK[k], candidate.pipe.insideDiameterM);
       net.diameterM[k] = candidate.pipe.insideDiameterM;
       net.linearBelowM3s[k] = LINEAR_BELOW_VELOCITY_MS * pipeAreaM2(candidate.pipe.insideDiameterM);
       cost += candidate.costPerM * lengthM;

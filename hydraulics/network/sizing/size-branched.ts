@@ -38,7 +38,7 @@ export function linkChoices(context: SizingContext, flowOf: (link: number) => nu
         elementId: id,
       });
     }
-    return { link: k, allowed, ...lossesOf(net, k, allowed, candidates, flow, context.input.links[k].minorK ?? 0) };
+    return { link: k, allowed, ...lossesOf(net, k, allowed, candidates, flow, net.minorK[k]) };
   });
   return ok ? choices : undefined;
 }

@@ -6,6 +6,7 @@ import { loadHighs } from './highs-solver';
 import { searchLooped } from './looped-search';
 import { sizeBranched, splitInput } from './size-branched';
 import { designPipes, sizingContext, type SizingContext } from './sizing-context';
+import { withTankFills } from './tank-fill';
 import { treeFlows } from './tree-flows';
 import type { SizedPiece, SizingOptions, SizingResult } from './types';
 
@@ -38,12 +39,14 @@ function infeasible(context: SizingContext, method: SizingResult['method'], warn
  *   link, or an LP over lengths when links may be split.
  * - Looped networks: the best feasible design found within `timeLimitS` by a spanning-tree MIP and a
  *   local search checked by the network solver at every step (see `searchLooped`).
+ * A tank given a fill flow in `tankFillFlowsM3s` has the links laid into it sized to fill it (see
+ * `withTankFills`); otherwise a tank is a fixed level only.
  * Also returns the cheapest single size for comparison. Throws `HydraulicsInputError` for bad input.
  */
 export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], options: SizingOptions): Promise<SizingResult> {
   // Loading the WebAssembly solver is not part of the search's time budget.
   await loadHighs();
-  const context = sizingContext(input, options);
+  const context = sizingContext(withTankFills(input, options.tankFillFlowsM3s), options);
   const onePipePerLink = options.onePipePerLink ?? true;
   const tree = treeFlows(context.net, context.topology);
   if (!tree) {

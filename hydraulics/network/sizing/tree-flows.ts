@@ -44,7 +44,8 @@ export function treeFlows(net: CompiledNetwork, topology: NetworkTopology, left?
       for (const k of adjacency[v]) {
         if (k === parentLink[v]) continue;
         const other = net.from[k] === v ? net.to[k] : net.from[k];
-        if (seen[other]) return undefined;
+        // A second fixed head reached from this one: the part is fed from two, not a tree.
+        if (seen[other] || !Number.isNaN(net.fixedHeadM[other])) return undefined;
         seen[other] = 1;
         parentLink[other] = k;
         parent[other] = v;

@@ -25,6 +25,12 @@ export interface SizingOptions {
   velocityMaxMs?: number;
   /** Lowest velocity allowed in a pipe that carries flow, m/s. @default 0 (no floor: loops need small pipes) */
   velocityMinMs?: number;
+  /**
+   * Flow each tank must take in while it fills, m³/s, by tank node id: the daily demand of the outlets
+   * it serves over its fill window. The links laid into the tank are sized to deliver it at the
+   * tank's overflow level (see `withTankFills`). @default none (a tank is only a fixed level)
+   */
+  tankFillFlowsM3s?: Readonly<Record<string, number>>;
 }
 
 /** A length of one candidate on a link (split-pipe designs). */
@@ -43,7 +49,7 @@ export interface SizingResult {
   pipeByLink: Record<string, string>;
   /** Pieces per link when `onePipePerLink` is false, upstream piece first. */
   piecesByLink?: Record<string, SizedPiece[]>;
-  /** The network solved with the chosen pipes (the check of the design). */
+  /** The network solved with the chosen pipes (the check of the design); a filled tank's inlet is the node `<tank id>#fill`. */
   solution: NetworkSolution;
   /** How the design was found. */
   method: 'branched-mip' | 'branched-lp' | 'looped-search';

@@ -124,8 +124,11 @@ export function minimumDegreeOrder(n: number, edgeA: Int32Array, edgeB: Int32Arr
   for (let k = 0; k < n; k++) columnStart[k + 1] = columnStart[k] + patterns[order[k]].length;
   const rowIndex = new Int32Array(columnStart[n]);
   for (let k = 0; k < n; k++) {
-    const rows = patterns[order[k]].map((old) => position[old]).sort((a, b) => a - b);
-    rowIndex.set(rows, columnStart[k]);
+    // Written in place and sorted as a typed array (numeric order, no comparator, no temporary list).
+    const rows = patterns[order[k]];
+    const start = columnStart[k];
+    for (let i = 0; i < rows.length; i++) rowIndex[start + i] = position[rows[i]];
+    if (rows.length > 1) rowIndex.subarray(start, start + rows.length).sort();
   }
   return { order, position, columnStart, rowIndex };
 }

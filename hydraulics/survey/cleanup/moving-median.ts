@@ -1,4 +1,4 @@
-import { assertFiniteNumber, assertOddWindow } from '../guards';
+import { assertFiniteNumber, assertOddWindow } from '../../input-guards';
 
 function median(sorted: readonly number[]): number {
   const mid = sorted.length >> 1;

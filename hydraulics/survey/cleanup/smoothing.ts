@@ -4,7 +4,7 @@ import { findTurningPoints } from '../../checks/air-points';
 import { DEFAULT_LINE_SETTINGS } from '../../profile/settings';
 import type { RouteStation } from '../types';
 import { HydraulicsInputError } from '../../errors';
-import { assertFiniteNumber } from '../guards';
+import { assertFiniteNumber } from '../../input-guards';
 
 /**
  * Moving-median smoothing of heights, one proposal per height that would change. A median flattens

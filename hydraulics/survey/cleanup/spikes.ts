@@ -1,6 +1,6 @@
 import type { ProposedChange } from './proposed-change';
 import { movingMedian } from './moving-median';
-import { assertFiniteNumber, assertPositive } from '../guards';
+import { assertFiniteNumber, assertPositive } from '../../input-guards';
 import type { RouteStation } from '../types';
 
 export interface GradeSpikeOptions {

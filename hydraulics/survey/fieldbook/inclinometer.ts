@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../../errors';
-import { assertFiniteNumber, assertNonNegative } from '../guards';
+import { assertFiniteNumber, assertNonNegative } from '../../input-guards';
 
 export type VerticalAngleUnit = 'degrees' | 'percent';
 

@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../../errors';
-import { assertFiniteNumber } from '../guards';
+import { assertFiniteNumber } from '../../input-guards';
 
 /** One line of a level book. Staff readings in metres; a staff held inverted is booked negative. */
 export interface LevelBookReading {

@@ -1,5 +1,5 @@
 import { geodesicInverse } from '../geodesic';
-import { assertNonNegative } from '../guards';
+import { assertNonNegative } from '../../input-guards';
 import type { RouteStation } from '../types';
 import { assertOrderedStations } from './ordered-stations';
 

@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../../errors';
-import { assertFiniteNumber } from '../guards';
+import { assertFiniteNumber } from '../../input-guards';
 import type { RouteStation } from '../types';
 
 /** A route edit needs at least two stations with chainage that never goes backwards. */

@@ -1,5 +1,5 @@
 import { HydraulicsInputError } from '../../errors';
-import { assertFiniteNumber } from '../guards';
+import { assertFiniteNumber } from '../../input-guards';
 import type { RouteStation } from '../types';
 import { interpolateStation } from './interpolate';
 import { assertOrderedStations } from './ordered-stations';

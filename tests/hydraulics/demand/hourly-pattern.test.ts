@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   assertHourlyPattern,
   deliveryWindowPattern,
+  drawPatternWithPeak,
   patternFromPercentByHour,
   uniformPattern,
 } from '../../../hydraulics/demand/hourly-pattern';
@@ -60,5 +61,26 @@ describe('deliveryWindowPattern', () => {
   it('rejects a window longer than a day and a start that is not an hour', () => {
     expect(() => deliveryWindowPattern({ hours: 25 })).toThrow(HydraulicsInputError);
     expect(() => deliveryWindowPattern({ hours: 4, startHour: 6.5 })).toThrow(/startHour/);
+  });
+});
+
+describe('drawPatternWithPeak', () => {
+  it('draws the fixed peak in the busiest hour only, the other hours in proportion (worked by hand)', () => {
+    // Invented: 0.4 m³ in 07:00, 0.2 m³ in 18:00, 0.1 m³ in 19:00 (0.7 m³ a day); a tap rated 0.3 L/s.
+    const volumes = Array.from({ length: 24 }, (_, hour) => ({ 7: 0.4, 18: 0.2, 19: 0.1 })[hour] ?? 0);
+    const draw = drawPatternWithPeak(0.0003, volumes);
+    // By hand: busiest share 0.4 / 0.7; mean = 0.3 L/s / (24 × 4/7) = 0.021875 L/s.
+    expect(draw.meanFlowM3s).toBeCloseTo(0.0003 / (24 * (0.4 / 0.7)), 15);
+    const hourly = draw.hourlyFractions.map((fraction) => draw.meanFlowM3s * fraction * 24);
+    expect(hourly[7]).toBeCloseTo(0.0003, 15);
+    expect(hourly[18]).toBeCloseTo(0.00015, 15);
+    expect(hourly[19]).toBeCloseTo(0.000075, 15);
+    expect(hourly[3]).toBe(0);
+  });
+
+  it('draws the peak all day when the uses spread evenly, and refuses a negative peak', () => {
+    const even = drawPatternWithPeak(0.001, new Array(24).fill(0.5));
+    expect(even.meanFlowM3s).toBeCloseTo(0.001, 15);
+    expect(() => drawPatternWithPeak(-1, new Array(24).fill(1))).toThrow(HydraulicsInputError);
   });
 });

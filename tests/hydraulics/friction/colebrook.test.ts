@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { colebrookFrictionFactor, colebrookResidual } from '../../../hydraulics/friction/colebrook';
+import { colebrookFrictionFactor, colebrookResidual, colebrookUnchecked } from '../../../hydraulics/friction/colebrook';
 
 
 describe('Colebrook-White', () => {
@@ -40,5 +40,23 @@ describe('Colebrook-White', () => {
     expect(() => colebrookFrictionFactor({ reynolds: 0, relativeRoughness: 0 })).toThrow(/reynolds: must be greater than 0/);
     expect(() => colebrookFrictionFactor({ reynolds: 1e5, relativeRoughness: -1e-4 })).toThrow(/relativeRoughness/);
     expect(() => colebrookFrictionFactor({ reynolds: Number.NaN, relativeRoughness: 0 })).toThrow(/reynolds/);
+  });
+});
+
+describe('colebrookUnchecked from a warm start (the network solver restarts each pipe from its last factor)', () => {
+  it('lands on the same factor from any positive start, near or far', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 4000, max: 1e8, noNaN: true }),
+        fc.double({ min: 0, max: 0.05, noNaN: true }),
+        fc.double({ min: 0.5, max: 20, noNaN: true }),
+        (reynolds, relativeRoughness, start) => {
+          const cold = colebrookUnchecked(reynolds, relativeRoughness);
+          const warm = colebrookUnchecked(reynolds, relativeRoughness, start);
+          expect(Math.abs(warm - cold) / cold).toBeLessThan(1e-13);
+          expect(Math.abs(colebrookResidual({ reynolds, relativeRoughness }, warm))).toBeLessThan(1e-12);
+        },
+      ),
+    );
   });
 });

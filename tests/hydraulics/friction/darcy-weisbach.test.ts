@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { colebrookFrictionFactor } from '../../../hydraulics/friction/colebrook';
-import { darcyFrictionFactor, darcyWeisbachHeadLoss } from '../../../hydraulics/friction/darcy-weisbach';
+import { darcyFrictionFactor, darcyFrictionFactorUnchecked, darcyLossExponentUnchecked, darcyWeisbachHeadLoss } from '../../../hydraulics/friction/darcy-weisbach';
 
 describe('darcyFrictionFactor regimes', () => {
   it('laminar f = 64/Re: Re 128 → 0.5 (fluids friction_laminar docstring [R16])', () => {
@@ -54,5 +54,29 @@ describe('darcyWeisbachHeadLoss', () => {
     expect(() => darcyWeisbachHeadLoss({ ...ok, roughnessM: 0.05 })).toThrow(/roughnessM: must be at most/);
     expect(() => darcyWeisbachHeadLoss({ ...ok, kinematicViscosityM2s: 0 })).toThrow(/kinematicViscosityM2s/);
     expect(() => darcyWeisbachHeadLoss({ ...ok, flowM3s: Number.NEGATIVE_INFINITY })).toThrow(/flowM3s/);
+  });
+});
+
+describe('darcyLossExponentUnchecked (the slope the network solver steps with)', () => {
+  // d ln h / d ln Q against a central difference of the loss itself, h = f(Re)·(L/D)·V²/2g, in all three bands.
+  const lossAt = (q: number, relativeRoughness: number) => {
+    const d = 0.05;
+    const v = q / (Math.PI * d * d / 4);
+    const re = (v * d) / 1.004e-6;
+    return { h: (darcyFrictionFactorUnchecked(re, relativeRoughness) * v * v) / (d * 2 * 9.80665), re };
+  };
+  it.each([
+    ['laminar', 5e-5, 0],
+    ['transition', 1.2e-4, 1e-4],
+    ['smooth turbulent', 2e-3, 3e-5],
+    ['rough turbulent', 2e-2, 0.01],
+  ])('matches the numerical slope in %s flow', (_band, q, relativeRoughness) => {
+    const step = 1e-6;
+    const up = lossAt(q * (1 + step), relativeRoughness).h;
+    const down = lossAt(q * (1 - step), relativeRoughness).h;
+    const numeric = (Math.log(up) - Math.log(down)) / (Math.log(1 + step) - Math.log(1 - step));
+    const { h, re } = lossAt(q, relativeRoughness);
+    const f = (h * 0.05 * 2 * 9.80665) / (q / (Math.PI * 0.05 * 0.05 / 4)) ** 2;
+    expect(darcyLossExponentUnchecked(re, relativeRoughness, f)).toBeCloseTo(numeric, 5);
   });
 });

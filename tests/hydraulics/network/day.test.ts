@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { runNetworkDay, servedOutletsByTank, sizeStorage, sizeTankStorage, solveNetwork, type NetworkInput } from '../../../hydraulics/index';
 
-const PIPE = { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140 };
+// C for Hazen-Williams, roughness for the default Darcy-Weisbach (PE, 0.0015 mm: catalogue value).
+const PIPE = { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140, roughnessM: 0.0000015 };
 /** Morning and evening draw: a quarter of the day's water in each of 06, 07, 18 and 19 h. */
 const TWO_PEAKS = Array.from({ length: 24 }, (_, hour) => ([6, 7, 18, 19].includes(hour) ? 0.25 : 0));
 
@@ -58,7 +59,7 @@ describe('runNetworkDay', () => {
         { id: 'spring', kind: 'source', elevationM: 100, yieldM3s: 0.002 },
         { id: 'garden', kind: 'outlet', elevationM: 85, demandM3s: 0.0005, hourlyFractions: TWO_PEAKS, minPressureHeadM: 12 },
       ],
-      links: [{ id: 'line', from: 'spring', to: 'garden', lengthM: 900, pipe: { id: 'p32', insideDiameterM: 0.032, hazenWilliamsC: 140 } }],
+      links: [{ id: 'line', from: 'spring', to: 'garden', lengthM: 900, pipe: { id: 'p32', insideDiameterM: 0.032, hazenWilliamsC: 140, roughnessM: 0.0000015 } }],
     };
     const day = runNetworkDay(input);
     const codes = day.warnings.map((w) => w.code);

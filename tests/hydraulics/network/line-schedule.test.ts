@@ -4,15 +4,15 @@ import { analyzeLine, lineFlowSchedule, pipeHeadLossM, solveNetwork, type LineIn
 const PIPE = 'pe100-iso4427-sdr11-50mm';
 
 /** A 1,200 m line falling 60 m with stations every 100 m (invented), feeding an outlet at its end. */
-function line(flow: LineInput['flow']): LineInput {
+function line(flow: LineInput['flow'], settings: LineInput['settings'] = { frictionMethod: 'hazen-williams' }): LineInput {
   return {
     stations: Array.from({ length: 13 }, (_, i) => ({ chainageM: i * 100, groundElevationM: 200 - 5 * i })),
     stretches: [{ fromM: 0, toM: 1200, pipe: PIPE }],
     start: { kind: 'water-level', levelM: 201 },
     end: { kind: 'outlet', elevationM: 140, residualHeadM: 5 },
     flow,
-    // The network solver's formula; the line takes the velocity head and sharp entrance at the spring (K 1.5).
-    settings: { frictionMethod: 'hazen-williams' },
+    // Hazen-Williams for the hand checks below; the line takes the velocity head and sharp entrance at the spring (K 1.5).
+    settings,
   };
 }
 
@@ -40,8 +40,9 @@ describe('analyzeLine with a flow schedule', () => {
     expect(scheduled.points.velocityMs[atTakeOff - 1]).toBeGreaterThan(scheduled.points.velocityMs[atTakeOff + 1]);
   });
 
-  it('agrees with the network solver at the take-off', () => {
+  it('agrees with the network solver at the take-off, both on their defaults (Darcy-Weisbach, entrance at the spring)', () => {
     // The same line as a network: spring -> take-off (500 m) -> outlet (700 m), 1.2 L/s drawn at the take-off.
+    // Neither side names a friction law or the spring's entrance loss: the defaults must be the same.
     const slope = Math.hypot(100, 5) / 100;
     const network: NetworkInput = {
       nodes: [
@@ -50,14 +51,17 @@ describe('analyzeLine with a flow schedule', () => {
         { id: 'trough', kind: 'outlet', elevationM: 140, demandM3s: 0.0008 },
       ],
       links: [
-        { id: 'upper', from: 'spring', to: 'take-off', lengthM: 500 * slope, pipe: PIPE, minorK: 1.5 },
+        { id: 'upper', from: 'spring', to: 'take-off', lengthM: 500 * slope, pipe: PIPE },
         { id: 'lower', from: 'take-off', to: 'trough', lengthM: 700 * slope, pipe: PIPE },
       ],
     };
     const solution = solveNetwork(network);
+    expect(solution.frictionMethod).toBe('darcy-weisbach');
+    expect(solution.freeSurfaceLosses).toBe(true);
     const pieces = lineFlowSchedule([{ linkId: 'lower', fromM: 500 }, { linkId: 'upper', fromM: 0 }], solution);
     expect(pieces).toEqual([{ fromM: 0, flowM3s: solution.flowsM3s.upper }, { fromM: 500, flowM3s: solution.flowsM3s.lower }]);
-    const profile = analyzeLine(line({ kind: 'schedule', pieces }));
+    const profile = analyzeLine(line({ kind: 'schedule', pieces }, {}));
+    expect(profile.settings.frictionMethod).toBe('darcy-weisbach');
     const atTakeOff = Array.from(profile.points.chainageM).indexOf(500);
     expect(profile.points.hydraulicGradeM[atTakeOff]).toBeCloseTo(solution.headsM['take-off'], 6);
     expect(profile.end.hydraulicGradeM).toBeCloseTo(solution.headsM.trough, 6);

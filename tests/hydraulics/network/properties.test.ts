@@ -95,6 +95,7 @@ describe('solveNetwork where a wide pipe carries next to nothing', () => {
         { id: 'to-dead-end', from: 'spring', to: 'dead-end', lengthM: 10, pipe: pipe('small', 0.025) },
         { id: 'to-tank', from: 'spring', to: 'tank', lengthM: 10, pipe: pipe('small', 0.025) },
       ],
+      settings: { frictionMethod: 'hazen-williams', freeSurfaceLosses: false },
     };
     const solution = solveNetwork(input);
     expect(solution.converged).toBe(true);

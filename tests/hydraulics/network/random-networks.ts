@@ -44,5 +44,5 @@ export const randomNetwork = (maxNodes = 30): fc.Arbitrary<RandomNetwork> =>
         loopLinks.push(links.length);
         links.push({ id: `x${e}`, from: `n${a}`, to: `n${b}`, lengthM: 10 + 990 * next(), pipe: pipe(), minorK: 5 * next() });
       }
-      return { input: { nodes, links }, loopLinks };
+      return { input: { nodes, links, settings: { frictionMethod: 'hazen-williams' } }, loopLinks };
     });

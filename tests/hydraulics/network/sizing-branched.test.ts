@@ -8,7 +8,7 @@ const CANDIDATES: SizingCandidate[] = [
   { pipe: { id: 'd63', insideDiameterM: 0.063, hazenWilliamsC: 140 }, costPerM: 7 },
   { pipe: { id: 'd75', insideDiameterM: 0.075, hazenWilliamsC: 140 }, costPerM: 10 },
 ];
-const SETTINGS = { hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const SETTINGS = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
 
 /** A spring feeding a tee, then a trough line and a house line (invented). */
 function farm(): NetworkInput {
@@ -96,5 +96,19 @@ describe('sizeNetwork: branched networks solved exactly [NET-KGM68]', () => {
     expect(result.feasible).toBe(false);
     expect(result.warnings[0].code).toBe('head-not-enough');
     expect(result.warnings[0].message).toContain('"house"');
+  });
+});
+
+describe('sizeNetwork on the default law counts the entrance at the spring', () => {
+  it("gives a split-pipe design the solver confirms, the spring's entrance and velocity head included", async () => {
+    // The farm above on the network's default (Darcy-Weisbach, K = 1.5 where water leaves the spring).
+    const pe = (id: string, mm: number, costPerM: number): SizingCandidate => ({ pipe: { id, insideDiameterM: mm / 1000, roughnessM: 1.5e-6, hazenWilliamsC: 150 }, costPerM });
+    const input: NetworkInput = { ...farm(), settings: undefined };
+    const result = await sizeNetwork(input, { candidates: [pe('d40', 40, 3), pe('d50', 50, 4.5), pe('d63', 63, 7), pe('d75', 75, 10)], onePipePerLink: false });
+    expect(result.solution.freeSurfaceLosses).toBe(true);
+    expect(result.warnings.map((w) => w.code)).not.toContain('design-check-failed');
+    expect(result.feasible).toBe(true);
+    expect(result.solution.pressureHeadsM.trough).toBeGreaterThanOrEqual(5 - 1e-6);
+    expect(result.solution.pressureHeadsM.house).toBeGreaterThanOrEqual(15 - 1e-6);
   });
 });

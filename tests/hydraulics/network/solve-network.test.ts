@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { solveNetwork, type NetworkInput } from '../../../hydraulics/index';
+import { pipeHeadLossM, solveNetwork, type NetworkInput } from '../../../hydraulics/index';
 import { TWO_LOOP_419K_DESIGN_IN, twoLoopNetwork } from './two-loop-fixture';
 
 /** Hazen-Williams with the textbook constants pinned for hand calculation: 10.67, 1.852, 4.87. */
-const HAND_SETTINGS = { hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const HAND_SETTINGS = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
 
 function branched(): NetworkInput {
   return {
@@ -80,5 +80,43 @@ describe('solveNetwork: the two-loop benchmark [NET-AS77]', () => {
     const solution = solveNetwork(twoLoopNetwork(TWO_LOOP_419K_DESIGN_IN));
     for (const [pipe, flow] of Object.entries(PUBLISHED_FLOWS_M3H)) expect(Math.abs(solution.flowsM3s[pipe] * 3600 - flow)).toBeLessThan(0.01);
     expect(solution.maxContinuityErrorM3s).toBeLessThan(1e-9);
+  });
+});
+
+describe('solveNetwork: the default friction law is the line analysis\'s', () => {
+  // Spring at 100 m to a tank at 90 m through 800 m of 50 mm PE (invented). Energy between two free
+  // surfaces, as the line analysis writes it (analyze-profile.ts, profile-and-checks.md §5.2):
+  // Δz = (K_entrance 0.5 + f·L/D + 1)·v²/2g, f by Colebrook.
+  const pipe = { id: 'pe50', insideDiameterM: 0.05, roughnessM: 1.5e-6, hazenWilliamsC: 150 };
+  const input = (settings?: NetworkInput['settings']): NetworkInput => ({
+    nodes: [
+      { id: 'spring', kind: 'source', elevationM: 100, waterLevelM: 100 },
+      { id: 'tank', kind: 'tank', elevationM: 88, waterLevelM: 90 },
+    ],
+    links: [{ id: 'trunk', from: 'spring', to: 'tank', lengthM: 800, pipe }],
+    settings,
+  });
+
+  it('is Darcy-Weisbach with the entrance and velocity head at the spring, and says so', () => {
+    const solution = solveNetwork(input());
+    expect(solution.frictionMethod).toBe('darcy-weisbach');
+    expect(solution.freeSurfaceLosses).toBe(true);
+    const q = solution.flowsM3s.trunk;
+    const v = q / (Math.PI * 0.025 ** 2);
+    const friction = pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: q, lengthM: 800, pipe });
+    expect(friction + (1.5 * v * v) / (2 * 9.80665)).toBeCloseTo(10, 6);
+  });
+
+  it('leaves the free-surface losses out when asked (published benchmarks), so the flow rises', () => {
+    const without = solveNetwork(input({ freeSurfaceLosses: false }));
+    expect(without.freeSurfaceLosses).toBe(false);
+    const q = without.flowsM3s.trunk;
+    expect(pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: q, lengthM: 800, pipe })).toBeCloseTo(10, 6);
+    expect(q).toBeGreaterThan(solveNetwork(input()).flowsM3s.trunk);
+  });
+
+  it('reports Hazen-Williams when a network asks for it', () => {
+    const hw = solveNetwork({ ...input({ frictionMethod: 'hazen-williams' }), links: [{ id: 'trunk', from: 'spring', to: 'tank', lengthM: 800, pipe: { id: 'c140', insideDiameterM: 0.05, hazenWilliamsC: 140 } }] });
+    expect(hw.frictionMethod).toBe('hazen-williams');
   });
 });

@@ -73,6 +73,8 @@ function example1(): NetworkInput {
       pipe: { id: `p${id}`, insideDiameterM: diameterIn * INCH_M, hazenWilliamsC: 95 },
     })),
     settings: {
+      frictionMethod: 'hazen-williams',
+      freeSurfaceLosses: false,
       hazenWilliamsConstant: MANUAL_HW_CONSTANT_SI,
       hazenWilliamsFlowExponent: HW_FLOW_EXPONENT,
       hazenWilliamsDiameterExponent: HW_DIAMETER_EXPONENT,
@@ -144,7 +146,7 @@ function example2(): NetworkInput {
       lengthM: lengthFt * FOOT_M,
       pipe: { id: `p${id}`, insideDiameterM: diameterIn * INCH_M, roughnessM: 0.012 * INCH_M },
     })),
-    settings: { frictionMethod: 'darcy-weisbach', waterTemperatureC: DECK_TEMPERATURE_C },
+    settings: { frictionMethod: 'darcy-weisbach', freeSurfaceLosses: false, waterTemperatureC: DECK_TEMPERATURE_C },
   };
 }
 
@@ -186,7 +188,7 @@ describe('solveNetwork: Jeppson manual, chapter 7 deck (Darcy-Weisbach, Hardy Cr
     const wrong = solveNetwork({
       ...input,
       links: input.links.map((link) => ({ ...link, pipe: { ...(link.pipe as object), id: 'hw', insideDiameterM: (link.pipe as { insideDiameterM: number }).insideDiameterM, hazenWilliamsC: 130 } })),
-      settings: {},
+      settings: { frictionMethod: 'hazen-williams', freeSurfaceLosses: false },
     });
     const worst = Math.max(...Object.entries(EXAMPLE_2_FLOWS_CFS).map(([id, flowCfs]) => relativeError(wrong.flowsM3s[id] / CFS_M3S, flowCfs)));
     expect(worst).toBeGreaterThan(2e-4);
@@ -226,7 +228,7 @@ function example3(): NetworkInput {
       lengthM: lengthFt * FOOT_M,
       pipe: { id: `p${id}`, insideDiameterM: diameterIn * INCH_M, roughnessM: 0.0102 * INCH_M },
     })),
-    settings: { frictionMethod: 'darcy-weisbach', waterTemperatureC: DECK_TEMPERATURE_C },
+    settings: { frictionMethod: 'darcy-weisbach', freeSurfaceLosses: false, waterTemperatureC: DECK_TEMPERATURE_C },
   };
 }
 

@@ -28,6 +28,9 @@ export const INCH_TO_M = 0.0254;
 
 /** Constants the benchmark fixes: ω = 10.667, exponents 1.852 and 4.871 [NET-AS77]. */
 export const TWO_LOOP_SETTINGS = {
+  frictionMethod: 'hazen-williams',
+  // The benchmark's heads count friction alone: no entrance loss at the reservoir.
+  freeSurfaceLosses: false,
   hazenWilliamsConstant: 10.667,
   hazenWilliamsFlowExponent: 1.852,
   hazenWilliamsDiameterExponent: 4.871,

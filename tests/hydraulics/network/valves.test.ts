@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { HydraulicsInputError, solveNetwork, type NetworkInput, type NetworkLink, type NetworkNode } from '../../../hydraulics/index';
 
 const PIPE = { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140 };
-const HAND = { hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const HAND = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
 
 function net(nodes: NetworkNode[], links: Omit<NetworkLink, 'pipe'>[]): NetworkInput {
   return { nodes, links: links.map((link) => ({ pipe: PIPE, ...link })), settings: HAND };

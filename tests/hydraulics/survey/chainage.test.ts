@@ -31,7 +31,7 @@ describe('chainageAlongTrack', () => {
         { latitudeDeg: 45, longitudeDeg: 0, elevationM: 1 },
         { latitudeDeg: 91, longitudeDeg: 0, elevationM: 1 },
       ]),
-    ).toThrow('points.latitudeDeg[1]: latitude must be between -90 and 90 degrees, got 91');
+    ).toThrow('points.latitudeDeg[1]: must be between -90 and 90 degrees, got 91');
   });
 
   it('slopeLengthOfProfile adds √(Δchainage² + Δz²) per leg (3-4-5 triangles)', () => {

@@ -43,7 +43,7 @@ describe('geodesicInverse on WGS84', () => {
   });
 
   it('rejects latitude 91 and longitude 181 with the field named', () => {
-    expect(() => geodesicInverse({ latitude1Deg: 91, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(/latitude1Deg: latitude must be between -90 and 90/);
+    expect(() => geodesicInverse({ latitude1Deg: 91, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(/latitude1Deg: must be between -90 and 90 degrees/);
     expect(() => geodesicInverse({ latitude1Deg: 0, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 181 })).toThrow(HydraulicsInputError);
     expect(() => geodesicInverse({ latitude1Deg: Number.NaN, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(/finite number/);
   });

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { localExtremeIndices } from '../../../lib/chart/local-extremes';
+import { localExtremeIndices, turningIndices } from '../../../lib/chart/local-extremes';
 import { thinProfile } from '../../../lib/chart/thin-profile';
 
 /**
@@ -87,5 +87,38 @@ describe('thinning a long profile', () => {
     expect(kept[0]).toBe(100);
     expect(kept[kept.length - 1]).toBe(300);
     expect(kept.every((i) => i >= 100 && i <= 300)).toBe(true);
+  });
+});
+
+describe('thinning with a height tolerance (reversalM)', () => {
+  it('is every local high and low at 0, and with a tolerance hides nothing taller than it between two kept points', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: -20, max: 20 }), { minLength: 0, maxLength: 80 }), fc.constantFrom(0, 0.5, 2, 7), (values, reversal) => {
+        if (reversal === 0) expect(turningIndices(values, 0)).toEqual(localExtremeIndices(values));
+        if (values.length < 2) return;
+        const kept = [0, ...turningIndices(values, reversal), values.length - 1];
+        for (let k = 1; k < kept.length; k++) {
+          const [a, b] = [kept[k - 1], kept[k]];
+          expect(b).toBeGreaterThan(a);
+          const lo = Math.min(values[a], values[b]);
+          const hi = Math.max(values[a], values[b]);
+          for (let j = a; j <= b; j++) {
+            expect(values[j]).toBeLessThanOrEqual(hi + reversal);
+            expect(values[j]).toBeGreaterThanOrEqual(lo - reversal);
+          }
+        }
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('keeps a 100,000-point walked route with 0.6 m scatter near its budget when told the scatter, and every turn taller than it', () => {
+    const { x, y } = route(7, 0.6);
+    const all = thinProfile(x, y, { targetPoints: 1500 });
+    const told = thinProfile(x, y, { targetPoints: 1500, reversalM: 0.6 });
+    expect(all.length).toBeGreaterThan(20_000);
+    expect(told.length).toBeLessThan(all.length / 4);
+    const set = new Set(told);
+    for (const i of turningIndices(y, 0.6)) expect(set.has(i)).toBe(true);
   });
 });

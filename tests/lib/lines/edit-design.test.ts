@@ -4,7 +4,7 @@ import { lineAnswers } from '../../../lib/lines/answers';
 import { addDevice, DesignEditError, mergeWithNext, moveJoint, removeDevice, setStretchPipe, splitStretch } from '../../../lib/lines/edit-design';
 import { record, redo, startHistory, undo } from '../../../lib/lines/history';
 import { designWithInput, lineInputOf } from '../../../lib/lines/line-input';
-import { closestInSeries, familyIdOf, PIPE_FAMILIES, pipeChoiceOf } from '../../../lib/lines/pipe-choices';
+import { closestInSeries, familyIdOf, PIPE_FAMILIES, pipeChoiceOf, pipeForFamily } from '../../../lib/lines/pipe-choices';
 import { lineStationsOf } from '../../../lib/lines/route-stations';
 import { LineDesignSchema, type LineDesign } from '../../../lib/validations/line-design';
 import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
@@ -89,6 +89,30 @@ describe('pipe pickers from the catalogue', () => {
     expect(closestInSeries('pe100-iso4427-sdr11', findPipe('pe80-iso4427-sdr17-50mm'))).toBe('pe100-iso4427-sdr11-50mm');
     // With no pipe yet the picker aims at a 50 mm bore: the 63 mm pipe's 51.4 mm.
     expect(closestInSeries('pe100-iso4427-sdr11', undefined)).toBe('pe100-iso4427-sdr11-63mm');
+  });
+
+  it('a change of material keeps the nearest bore (and a class rated at least as high), never the family\'s smallest pipe', () => {
+    const from = findPipe('pe100-iso4427-sdr11-50mm')!;
+    for (const family of PIPE_FAMILIES) {
+      const picked = findPipe(pipeForFamily(family.id, from))!;
+      const bores = family.classes.flatMap((c) => c.pipes).map((p) => findPipe(p.id)!.insideDiameterM);
+      const nearest = Math.min(...bores.map((b) => Math.abs(b - from.insideDiameterM)));
+      // Within 10 % of the bore of the nearest size the family makes.
+      expect(Math.abs(picked.insideDiameterM - from.insideDiameterM), family.id).toBeLessThanOrEqual(nearest + 0.1 * from.insideDiameterM);
+      expect(picked.insideDiameterM, family.id).toBeGreaterThan(0.03);
+    }
+    // PVC (ASTM D2241): SDR 13.5 is made in 1/2 in only; the 40.8 mm bore of 50 mm PE100 SDR 11 (16 bar) becomes
+    // 1-1/2 in SDR 17 (about 42.6 mm bore, 250 psi = 17.2 bar, the lowest PVC class rated at least 16 bar).
+    const pvc = findPipe(pipeForFamily('pvc-d2241', from))!;
+    expect(pvc.nominalSize).toBe('1-1/2 in');
+    expect(pvc.sdr).toBe(17);
+    // Steel Schedule 40 has one class: 1-1/2 in (40.9 mm bore) is the nearest.
+    expect(findPipe(pipeForFamily('steel-sch40', from))!.nominalSize).toBe('1-1/2 in');
+    // PE80 to PE100 at 10 bar: 63 mm SDR 17 keeps its size and takes PE100 SDR 17 (10 bar).
+    const pe100 = findPipe(pipeForFamily('pe100-iso4427', findPipe('pe80-iso4427-sdr13.6-63mm')))!;
+    expect([pe100.nominalSize, pe100.pressureRatingPa]).toEqual(['63 mm', 1e6]);
+    // Back the other way the 16 bar pipe keeps its 16 bar in PE80 (SDR 9).
+    expect(pipeForFamily('pe80-iso4427', from)).toMatch(/^pe80-iso4427-sdr9-50mm$/);
   });
 });
 

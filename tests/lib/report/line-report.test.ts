@@ -13,7 +13,7 @@ import { referenceDesignParts, referenceLine } from '../../lines/reference-line'
 
 const squash = (text: string) => text.replace(/\s+/g, ' ');
 
-async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnType<typeof referenceLine>) => ReturnType<typeof referenceLine> = (i) => i) {
+async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnType<typeof referenceLine>) => ReturnType<typeof referenceLine> = (i) => i, withPlan = false) {
   const input = change(referenceLine());
   const design = LineDesignSchema.parse(referenceDesignParts());
   const line: LineRecord = {
@@ -23,7 +23,8 @@ async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnTyp
     createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
   };
   const analysis = analyzeLine(input);
-  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, stamp: revisionStamp({ number: 7, status: 'approved', designerName: 'Tobias Wren', reviewerName: 'Dara Okafor', reviewedAt: '2026-11-30T15:20:00.000Z' }), generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const stations = withPlan ? Array.from(analysis.points.chainageM, (c) => ({ chainageM: c, latitudeDeg: 54.2 + c / 111_000, longitudeDeg: -2.9 + Math.sin(c / 300) / 400 })) : [];
+  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, stations, stamp: revisionStamp({ number: 7, status: 'approved', designerName: 'Tobias Wren', reviewerName: 'Dara Okafor', reviewedAt: '2026-11-30T15:20:00.000Z' }), generatedAt: new Date('2026-12-01T12:00:00Z') });
   const parser = new PDFParse({ data: new Uint8Array(pdf) });
   const result = await parser.getText();
   await parser.destroy();
@@ -58,6 +59,15 @@ describe('line design report (PDF)', () => {
     for (const words of ['Stretch schedule', '40 mm PE80 SDR 17 (PN 8)', 'Devices by chainage', 'Air-release valve', 'Assumptions', 'Hazen-Williams', '20 °C']) {
       expect(text).toContain(words);
     }
+  });
+
+  it('draws the plan of the line when its stations have positions, and heads the later pages', async () => {
+    const without = await reportText('metric');
+    expect(without.text).not.toContain('Plan of the line');
+    const withPlan = await reportText('metric', (i) => i, true);
+    expect(withPlan.text).toContain('Plan of the line');
+    expect(withPlan.pages).toBe(without.pages + 1);
+    expect(withPlan.text).toContain('Kestrel Hollow spring line · Spring box to house · line design report');
   });
 
   it('carries the cautions: pressure, surge, trenching and drinking water', async () => {

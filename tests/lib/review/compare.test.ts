@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { findPipe } from '../../../hydraulics/catalogue/index';
+import { pipeHeadLossM } from '../../../hydraulics/index';
 import { EMPTY_SITE_CONTEXT } from '../../../lib/lines/ram-start';
 import { solveNetworkRun } from '../../../lib/network/run-network';
 import { compareSnapshots } from '../../../lib/review/compare';
@@ -114,12 +115,14 @@ function slopeLength(fromM: number, toM: number): number {
 }
 
 /**
- * Head loss by Hazen-Williams in its SI form h = 10.6742·L·Q^1.85185 / (C^1.85185·D^4.87037)
- * (docs/references/core.md §1.1 [R18]), written out here independently of the network solver.
+ * Loss from the intake's water surface by the network's default law, the line analysis's: Darcy-Weisbach
+ * with Colebrook (the core's `pipeHeadLossM`, not the network solver) plus the sharp entrance and the
+ * velocity head where the water leaves the intake, K = 1.5 (profile-and-checks.md §5.2).
  */
-function hazenWilliamsLossM(lengthM: number, flowM3s: number, pipeId: string): number {
+function lossFromIntakeM(lengthM: number, flowM3s: number, pipeId: string): number {
   const pipe = findPipe(pipeId)!;
-  return (10.6742 * lengthM * flowM3s ** (1 / 0.54)) / (pipe.hazenWilliamsC ** (1 / 0.54) * pipe.insideDiameterM ** (2.63 / 0.54));
+  const velocity = flowM3s / (Math.PI * (pipe.insideDiameterM / 2) ** 2);
+  return pipeHeadLossM({ method: 'darcy-weisbach', flowM3s, lengthM, pipe }) + (1.5 * velocity ** 2) / (2 * 9.80665);
 }
 
 describe('revision compare: pipe cost and network outlet pressures', () => {
@@ -150,12 +153,12 @@ describe('revision compare: pipe cost and network outlet pressures', () => {
     expect(unpriced.cost.difference).toBeNull();
   });
 
-  it('gives each outlet its residual pressure in both solves, matching Hazen-Williams worked by hand', () => {
-    // Intake water level 120 m, tap at 100 m: 20 m static, less the friction of 250 m at 0.2 L/s (no minor losses).
+  it('gives each outlet its residual pressure in both solves, matching the loss worked out beside it', () => {
+    // Intake water level 120 m, tap at 100 m: 20 m static, less the loss of 250 m at 0.2 L/s (friction plus the intake's entrance).
     const [tap] = comparison.outlets;
     expect(tap).toMatchObject({ nodeId: OUTLET_ID, name: 'Fixture tap', change: 'changed', minimumM: 3 });
-    expect(tap.before!).toBeCloseTo(20 - hazenWilliamsLossM(250, 0.0002, 'pe100-iso4427-sdr11-32mm'), 3);
-    expect(tap.after!).toBeCloseTo(20 - hazenWilliamsLossM(250, 0.0002, 'pe100-iso4427-sdr11-40mm'), 3);
+    expect(tap.before!).toBeCloseTo(20 - lossFromIntakeM(250, 0.0002, 'pe100-iso4427-sdr11-32mm'), 3);
+    expect(tap.after!).toBeCloseTo(20 - lossFromIntakeM(250, 0.0002, 'pe100-iso4427-sdr11-40mm'), 3);
     // The larger bore loses less: pressure at the tap rises.
     expect(tap.after!).toBeGreaterThan(tap.before!);
     expect(comparison.outletsMissing).toEqual({ before: null, after: null });

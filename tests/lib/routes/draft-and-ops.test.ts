@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { draftFromPoints, draftReducer, draftToSaveInput, UNDO_LIMIT } from '../../../lib/routes/draft';
 import { joinPoints, reversePoints, splitPoints, trimPoints } from '../../../lib/routes/edit-ops';
-import { thinProfile } from '../../../lib/routes/profile-series';
 import type { RoutePointView } from '../../../lib/routes/types';
 
 const pt = (seq: number, c: number, z: number, raw = z, extra: Partial<RoutePointView> = {}): RoutePointView => ({
@@ -62,17 +61,5 @@ describe('edit operations keep the surveyed heights', () => {
     const j = joinPoints([pt(0, 0, 10), pt(1, 40, 8)], [pt(0, 0, 8), pt(1, 60, 5)], 5);
     expect(j.points.map((p) => p.chainageM)).toEqual([0, 40, 45, 105]);
     expect(j.gapM).toBe(5);
-  });
-});
-
-describe('thinProfile', () => {
-  it('keeps ends and every bucket’s highest and lowest point, so a one-point spike survives', () => {
-    const long = Array.from({ length: 10_000 }, (_, i) => ({ chainageM: i, elevationM: i === 5_432 ? 999 : 100 - i * 0.001 }));
-    const thin = thinProfile(long, 500);
-    expect(thin.length).toBeLessThanOrEqual(500);
-    expect(thin[0]).toBe(long[0]);
-    expect(thin[thin.length - 1]).toBe(long[long.length - 1]);
-    expect(thin).toContain(long[5_432]);
-    expect(thin.map((p) => p.chainageM)).toEqual([...thin.map((p) => p.chainageM)].sort((a, b) => a - b));
   });
 });

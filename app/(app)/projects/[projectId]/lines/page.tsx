@@ -31,7 +31,7 @@ export default async function LinesPage({ params }: { params: Promise<{ projectI
         </Panel>
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <LinesTable projectId={project.id} />
+        <LinesTable projectId={project.id} canEdit={editable} />
       </HydrationBoundary>
     </div>
   );

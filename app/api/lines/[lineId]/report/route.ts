@@ -18,7 +18,7 @@ export const GET = teamRoute(
     if (!project) throw notFound();
     const c = analysis.points.chainageM;
     const photos = await reportPhotosForLine(line.routeId, { fromM: c[0], toM: c[c.length - 1] });
-    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date(), photos });
+    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date(), photos, stations });
     return new Response(new Uint8Array(pdf), {
       status: 200,
       headers: {
