@@ -56,11 +56,18 @@ export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTabl
   // "Latitude must be …" under "Point 2: latitude" reads "Point 2: latitude must be …".
   const short = label.split(': ').pop() ?? label;
   if (issue.message.toLowerCase().startsWith(short.toLowerCase())) return `${label}${issue.message.slice(short.length)}`;
+  // "Safety factor must be …" under "Safety factor on ratings", "The highest velocity must …" under "Highest velocity".
+  const verb = issue.message.indexOf(' must ');
+  const subject = verb > 0 ? issue.message.slice(0, verb).replace(/^the /i, '').toLowerCase() : '';
+  if (subject !== '' && short.toLowerCase().startsWith(subject)) return `${label}${issue.message.slice(verb)}`;
+  // A reason with no subject ("must be less than the outside diameter") takes the field's name as its own.
+  if (issue.message.startsWith('must ')) return `${label} ${issue.message}`;
   return `${label}: ${lowerFirst(issue.message)}`;
 }
 
+/** "A stretch must …" -> "a stretch must …"; a name or an abbreviation ("PE", "I") keeps its capital. */
 function lowerFirst(text: string): string {
-  return /^[A-Z][a-z]/.test(text) ? text[0].toLowerCase() + text.slice(1) : text;
+  return /^([A-Z][a-z]|[A-HJ-Z] )/.test(text) ? text[0].toLowerCase() + text.slice(1) : text;
 }
 
 /** zod issues -> `{ "field.path": [messages] }` (the keys fieldErrorsOf gives), worded for the screen in the project's units. */

@@ -90,7 +90,7 @@ describe('lines API', () => {
     };
     const wrong = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [{ ...pipe, insideDiameterM: 0.05 }], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(wrong.status).toBe(400);
-    expect(wrong.json.error.fields['design.pipes.0.insideDiameterM'][0]).toMatch(/must be less than outsideDiameterM/);
+    expect(wrong.json.error.fields['design.pipes.0.insideDiameterM'][0]).toBe('Custom pipe 1: inside diameter must be less than the outside diameter');
     const ok = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [pipe], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(ok.status).toBe(201);
     const analysis = await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: ok.json.line.id }, userId: f.users.reviewer.id });

@@ -69,6 +69,29 @@ describe('line design refusals in the project\'s units', () => {
   });
 });
 
+describe('a schema\'s own words under the screen\'s name', () => {
+  it('a subject that is the start of the screen\'s name takes the name; a reason with no subject takes it too', () => {
+    const factor = refusal(LineDesignSchema, design({ settings: { safetyFactor: 0.5 } }));
+    expect(issuesText(factor as never, 'us', LINE_DESIGN_WORDS)).toBe('Safety factor on ratings must be at least 1');
+    const velocity = refusal(LineDesignSchema, design({ settings: { velocityMinMs: 2, velocityMaxMs: 1 } }));
+    expect(issuesText(velocity as never, 'metric', LINE_DESIGN_WORDS)).toBe('Highest velocity must exceed the lowest');
+    const stretch = refusal(LineDesignSchema, design({ stretches: [{ fromM: 300, toM: 100, pipe: 'pe100-iso4427-sdr11-50mm' }] }));
+    expect(issuesText(stretch as never, 'metric', LINE_DESIGN_WORDS)).toBe('Pipe stretch 1: end: a stretch must end after it starts');
+  });
+
+  it('a custom pipe\'s core check names the other diameter as the screen does, not by its field', () => {
+    const pipe = {
+      id: 'custom-x', label: 'X', material: 'pe', nominalSize: '1 in', outsideDiameterM: 0.033, insideDiameterM: 0.04, wallM: 0.003,
+      pressureRatingPa: 6e5, hazenWilliamsC: 150, roughnessM: 0, waveSpeedMs: 300, source: 'maker',
+    };
+    const inside = fieldErrorsIn(refusal(CustomPipeSchema, pipe) as never, 'us', CUSTOM_PIPE_WORDS);
+    expect(inside).toEqual({ insideDiameterM: ['Inside diameter must be less than the outside diameter'] });
+    const wall = fieldErrorsIn(refusal(CustomPipeSchema, { ...pipe, insideDiameterM: 0.03 }) as never, 'us', CUSTOM_PIPE_WORDS);
+    expect(wall).toEqual({ wallM: ['Wall must be at most half the outside diameter less the inside diameter'] });
+    Object.values({ ...inside, ...wall }).flat().forEach(readable);
+  });
+});
+
 describe('lift and network refusals in the project\'s units', () => {
   it('a network part above the highest elevation: feet, under the form\'s label', () => {
     const error = refusal(NetworkNodeSchema, { kind: 'outlet', name: 'Trough', elevationM: 9500 });
