@@ -12,7 +12,7 @@ export interface UnitDefaults {
   linePipeId: string;
   /** The pipe a new network link gets (a service-sized bore). */
   networkPipeId: string;
-  /** A design flow typed fresh, m³/s: 1 L/s, or 15 US gpm (a round figure near it). */
+  /** The example in an empty design-flow box (never saved), m³/s: 1 L/s, or 15 US gpm (a round figure near it). */
   designFlowM3s: number;
   /** Cover where the survey gives none, m: 0.75 m, or 2.5 ft in feet. */
   coverM: number;

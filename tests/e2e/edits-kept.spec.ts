@@ -90,6 +90,8 @@ test('switching the material keeps the nearest bore; design flow saves nothing u
     await page.getByRole('radio', { name: 'Design flow' }).check();
     const flowBox = page.getByLabel(/^Design flow \(/);
     await expect(flowBox).toHaveValue('');
+    // An example in the project's units stands in the empty box; nothing is saved from it.
+    await expect(flowBox).toHaveAttribute('placeholder', 'e.g. 1');
     await expect(state).toHaveAttribute('data-state', 'refused');
     await expect(state).toContainText('Not saved: Design flow, still to be typed — the line keeps its saved values');
     await page.screenshot({ path: `${shots}/design-flow-untyped.png` });
