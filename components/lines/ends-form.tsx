@@ -143,7 +143,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
         </div>
         {(flow.kind === 'design' || typingDesignFlow) && (
           <UnitNumberInput id="design-flow" label="Design flow" unit={units.flow} digits={3} value={flow.kind === 'design' ? toDisplay('designFlow', flow.flowM3s, units.system) : undefined} disabled={!canEdit}
-            placeholder={`e.g. ${formatPlainNumber(Math.round(toDisplay('designFlow', unitDefaults(units.system).designFlowM3s, units.system)))}`}
+            placeholder={`e.g. ${formatPlainNumber(toDisplay('designFlow', unitDefaults(units.system).designFlowM3s, units.system), 0)}`}
             hint={typingDesignFlow ? `Type the flow the line must carry; until then the line keeps ${flow.kind === 'find' ? 'finding its flow by gravity' : 'what the ram delivers'}` : undefined}
             onCommit={(v) => {
               if (v! < 0) return 'The flow cannot be negative';
