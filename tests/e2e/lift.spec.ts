@@ -114,7 +114,7 @@ test('a lift below the fall is refused beside the field and the site stays as it
   await form.getByLabel('Lift, pump to delivery outlet (ft)').fill('3');
   await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet');
   await form.getByRole('button', { name: 'Save ram site' }).click();
-  await expect(form.getByRole('alert').filter({ hasText: 'Lift must be above the fall' })).toBeVisible();
+  await expect(form.getByRole('alert').filter({ hasText: 'Lift, pump to delivery outlet must be above the fall' })).toBeVisible();
   await page.reload();
   // Heads print with one decimal on every screen (lib/units quantity table).
   await expect(page.getByRole('region', { name: 'Ram pump' }).getByText('Fall 6.0 ft, lift 70.0 ft')).toBeVisible();
