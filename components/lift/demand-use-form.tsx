@@ -10,6 +10,7 @@ import type { DemandUseRecord } from '@/lib/lift/records';
 import { useSaveDemandUse } from '@/lib/queries/lift';
 import { formatQuantity, fromDisplay, inputValue, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
+import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
 import { figureQuantity, PER_UNIT } from './demand-format';
 import { NumberField } from './number-field';
 import { useForm } from '@/lib/forms/use-form';
@@ -36,7 +37,7 @@ export function DemandUseForm({ projectId, units, use, onDone }: { projectId: st
   const [state, setState] = useState(() => initialState(use, units));
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveDemandUse(projectId);
-  const form = useForm({ schema: DemandUseSchema, save: (input) => save.mutateAsync({ id: use?.id ?? null, input }), savedText: use ? 'Use saved.' : 'Use added.' });
+  const form = useForm({ schema: DemandUseSchema, save: (input) => save.mutateAsync({ id: use?.id ?? null, input }), savedText: use ? 'Use saved.' : 'Use added.' }, { table: DEMAND_USE_WORDS, units });
   const kind = state.kind as Kind;
   const published = publishedFigureOf({ kind, figureId: state.figureId || null, season: state.season as 'winter' | 'summer' });
   const id = (name: string) => `use-${use?.id.slice(0, 8) ?? 'new'}-${name}`;

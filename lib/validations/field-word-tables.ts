@@ -122,6 +122,20 @@ export const NETWORK_WORDS: FieldWordTable = {
   'data.pipe': { label: 'Pipe' },
 };
 
+/** A take-off placed on a line's long profile (network.ts TakeOffSchema). */
+export const TAKE_OFF_WORDS: FieldWordTable = {
+  name: { label: 'Take-off name' },
+  chainageM: { label: 'Chainage', quantity: 'chainage' },
+};
+
+/** A daily use on the Lift & storage page (lib/validations/demand-uses.ts); the amount's unit follows its kind, so only the garden's area is converted. */
+export const DEMAND_USE_WORDS: FieldWordTable = {
+  label: { label: 'Label' },
+  areaM2: { label: 'Garden area', quantity: 'area' },
+  peakFactor: { label: 'Peak factor' },
+  deliveryHours: { label: 'Hours of delivery' },
+};
+
 /** A route's points and its tools (save, split, trim, join), labels as on the route page. */
 export const ROUTE_WORDS: FieldWordTable = {
   'points.#.chainageM': { label: 'Point #: chainage', quantity: 'chainage' },

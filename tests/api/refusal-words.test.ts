@@ -3,6 +3,8 @@ import * as lineRoute from '@/app/api/lines/[lineId]/route';
 import * as projectLines from '@/app/api/projects/[projectId]/lines/route';
 import * as nodes from '@/app/api/projects/[projectId]/network/nodes/route';
 import * as tanks from '@/app/api/projects/[projectId]/tanks/route';
+import * as demandUses from '@/app/api/projects/[projectId]/demand-uses/route';
+import * as takeOffs from '@/app/api/projects/[projectId]/network/take-offs/route';
 import * as points from '@/app/api/routes/[routeId]/points/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
@@ -65,6 +67,22 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     expect(tank.json.error.fields.supplyHoursPerDay).toEqual(['Supply hours per day must be at most 24 h']);
     expect(node.status).toBe(400);
     expect(node.json.error.fields.elevationM).toEqual(['Elevation must be at most 29,527.56 ft']); // 9,000 m
+  });
+
+  it('a daily use and a take-off: the garden\'s area in square feet, the take-off\'s chainage in feet; nothing written', async () => {
+    await setUnits('us');
+    const usesBefore = await models().DemandUse.count({ where: { projectId: f.projectId } });
+    const garden = await call(demandUses.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'garden', areaM2: -5, figureId: 'vegetables-inch-per-week', deliveryKind: 'delivery-hours', deliveryHours: 30, startHour: 6 } });
+    const takeOff = await call(takeOffs.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { lineId: f.lineId, chainageM: 2e6, name: 'Barn branch' } });
+    await setUnits('metric');
+    const metricGarden = await call(demandUses.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'garden', areaM2: -5, figureId: 'vegetables-inch-per-week' } });
+    expect(garden.status).toBe(400);
+    expect(garden.json.error.fields.areaM2).toEqual(['Garden area must be at least 0 ft²']);
+    expect(garden.json.error.fields.deliveryHours).toEqual(['Hours of delivery must be at most 24 h']);
+    expect(metricGarden.json.error.fields.areaM2).toEqual(['Garden area must be at least 0 m²']);
+    expect(takeOff.status).toBe(400);
+    expect(takeOff.json.error.fields.chainageM).toEqual(['Chainage must be at most 3,280,840 ft']);
+    expect(await models().DemandUse.count({ where: { projectId: f.projectId } })).toBe(usesBefore);
   });
 
   it('a route save with a height out of range names the point, the bound in feet', async () => {
