@@ -13,6 +13,7 @@ import { RamSiteSchema } from '@/lib/validations/ram-sites';
 import { DeliveryPipeFields } from './delivery-pipe-fields';
 import { NumberField } from './number-field';
 import { RAM_SITE_WORDS } from '@/lib/validations/field-word-tables';
+import { issueText } from '@/lib/validations/field-words';
 import { emptyRamSiteForm, ramSiteFormFrom, ramSiteInputFrom, type RamSiteFormState } from './ram-site-form-state';
 import { useForm } from '@/lib/forms/use-form';
 
@@ -37,7 +38,11 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
     if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;
     // The name does not change the plan, so a site without one yet still gets its preview.
     const parsed = RamSiteSchema.safeParse({ ...ramSiteInputFrom(state, units), name: state.name.trim() || 'preview' });
-    if (!parsed.success) return { ok: false as const, error: parsed.error.issues[0]?.message ?? 'check the fields' };
+    if (!parsed.success) {
+      // The same words as the refusal beside the box (the screen's name, the project's units).
+      const first = parsed.error.issues[0];
+      return { ok: false as const, error: first ? issueText(first, units, RAM_SITE_WORDS) : 'check the fields' };
+    }
     return planRamSite(parsed.data, { routes, tankVolumeM3 });
   }, [state, units, routes, tankVolumeM3]);
   const source = sources.find((candidate) => candidate.id === state.sourceId);

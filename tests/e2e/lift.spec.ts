@@ -112,7 +112,7 @@ test('a lift below the fall is refused beside the field and the site stays as it
   const form = page.getByRole('form', { name: 'Edit Weir ram' });
   await expect(form.getByLabel('Lift, pump to delivery outlet (ft)')).toHaveValue('70');
   await form.getByLabel('Lift, pump to delivery outlet (ft)').fill('3');
-  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet');
+  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet: Lift, pump to delivery outlet must be above the fall');
   await form.getByRole('button', { name: 'Save ram site' }).click();
   await expect(form.getByRole('alert').filter({ hasText: 'Lift, pump to delivery outlet must be above the fall' })).toBeVisible();
   await page.reload();
