@@ -128,6 +128,11 @@ export const TAKE_OFF_WORDS: FieldWordTable = {
   chainageM: { label: 'Chainage', quantity: 'chainage' },
 };
 
+/** A site photo's place on its route (lib/validations/photos.ts). */
+export const PHOTO_WORDS: FieldWordTable = {
+  chainageM: { label: 'Chainage', quantity: 'chainage' },
+};
+
 /** A daily use on the Lift & storage page (lib/validations/demand-uses.ts); the amount's unit follows its kind, so only the garden's area is converted. */
 export const DEMAND_USE_WORDS: FieldWordTable = {
   label: { label: 'Label' },
