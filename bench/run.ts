@@ -13,6 +13,7 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'day-1k': async () => (await import('./network-sizing')).day1k,
   'network-10k': async () => (await import('./network-10k')).network10k,
   'survey-import-100k': async () => (await import('./survey-import-100k')).surveyImport100k(),
+  'route-read-100k': async () => (await import('./route-read-100k')).routeRead100k(),
   'api-capacity-50': async () => (await import('./api-load')).apiCapacity50,
   'api-latency-50u': async () => (await import('./api-load')).apiLatency50u,
 };

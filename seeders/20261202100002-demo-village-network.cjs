@@ -5,7 +5,8 @@
 // through the village to tap stand 8, with two take-offs: branch A (tap stands 1-3 and the school)
 // and branch B (tap stands 4-7), joined by a loop pipe from tap stand 3 to tap stand 4. Routes are
 // walked with a phone (metre-level height scatter). Every name and number is made up for the demo.
-// Idempotent, fixed ids; pipe sizes are those the least-cost sizing picks from the demo price list.
+// Idempotent, fixed ids. The next seed (demo-village-day) ties each tap stand to the households it
+// serves, gives the spring its yield tests and re-sizes the pipes for that demand.
 const TEAM_ID = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a0001';
 const DESIGNER_ID = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a1002';
 const PROJECT_ID = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2003';

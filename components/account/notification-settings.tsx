@@ -4,11 +4,13 @@ import { useQuery } from '@tanstack/react-query';
 import { FormMessage } from '@/components/ui/form-message';
 import { NOTIFICATION_KINDS, NOTIFICATION_LABELS } from '@/lib/notifications/kinds';
 import { notificationPreferencesQuery, useSetNotificationPreferences } from '@/lib/queries/accounts';
+import { ListSkeleton } from '@/components/ui/widget-skeletons';
 
 /** One switch per kind of notification; each change is saved at once. */
 export function NotificationSettings() {
   const { data: prefs } = useQuery(notificationPreferencesQuery());
   const save = useSetNotificationPreferences();
+  if (!prefs) return <NotificationSettingsSkeleton />;
   return (
     <div className="space-y-3">
       <FormMessage message={save.error ? `Not saved: ${save.error.message}` : null} />
@@ -33,4 +35,8 @@ export function NotificationSettings() {
       </ul>
     </div>
   );
+}
+
+export function NotificationSettingsSkeleton() {
+  return <ListSkeleton label="Loading notification settings" items={NOTIFICATION_KINDS.length} />;
 }

@@ -1,11 +1,11 @@
 'use client';
 
 import type { LineAnalysis } from '@/hydraulics/index';
-import { profileScene } from '@/lib/chart/profile-scene';
 import { standaloneSvg } from '@/lib/chart/svg-node';
 import type { LineRecord } from '@/lib/data/lines';
 import { downloadText } from '@/lib/lines/download';
 import { reportFileName } from '@/lib/lines/file-names';
+import { lineReportUrl, svgExportScene, type ExaggerationSetting } from '@/lib/lines/profile-exports';
 import { workingCopyStamp } from '@/lib/review/stamp';
 import { formatQuantity, type DisplayUnits } from '@/lib/units';
 import { useRouter } from 'next/navigation';
@@ -24,7 +24,7 @@ const SAVE_WORDS = {
 } as const;
 
 /** Title, revision, save state, undo and the exports. */
-export function LineHeader({ line, projectName, units, draft, analysis, canEdit, notTaken = [] }: {
+export function LineHeader({ line, projectName, units, draft, analysis, canEdit, notTaken = [], exaggeration = 'auto' }: {
   line: LineRecord;
   projectName: string;
   units: DisplayUnits;
@@ -33,6 +33,8 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
   canEdit: boolean;
   /** Boxes holding a value the editor refused or still waits for: not saved, whatever the save state. */
   notTaken?: readonly string[];
+  /** The profile's vertical exaggeration setting on screen: the SVG and the PDF draw the same one. */
+  exaggeration?: ExaggerationSetting;
 }) {
   const c = analysis?.points.chainageM;
   // Saved only when the last save went through and no box holds a value that was not taken.
@@ -50,7 +52,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
   function exportSvg() {
     if (!analysis) return;
     const title = `${projectName}: ${line.name}, working copy`;
-    const scene = profileScene(analysis, { units, devices: draft.design.devices, width: 1200, title, stamp: workingCopyStamp(line.preparedBy) }, 'export');
+    const scene = svgExportScene(analysis, { units, devices: draft.design.devices, title, stamp: workingCopyStamp(line.preparedBy), exaggeration });
     downloadText(standaloneSvg(scene.root), reportFileName(line.name, null, 'svg', 'profile'), 'image/svg+xml');
   }
 
@@ -86,7 +88,7 @@ export function LineHeader({ line, projectName, units, draft, analysis, canEdit,
           )}
           <Button tone="quiet" className="py-1 text-xs" onClick={exportSvg} disabled={!analysis}>Profile as SVG</Button>
           {draft.saveState === 'saved' ? (
-            <a href={`/api/lines/${line.id}/report`} download={reportFileName(line.name, null, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
+            <a href={lineReportUrl(line.id, exaggeration)} download={reportFileName(line.name, null, 'pdf')} className="inline-flex items-center rounded-md bg-creek-700 px-3.5 py-1 text-xs font-medium text-white hover:bg-creek-800">
               PDF report
             </a>
           ) : (

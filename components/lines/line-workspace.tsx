@@ -146,7 +146,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
   return (
     <UnsavedValuesProvider value={unsaved.report}>
     <div className="space-y-5">
-      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} notTaken={unsaved.labels} />
+      <LineHeader line={line} projectName={projectName} units={units} draft={draft} analysis={analysis} canEdit={canEdit} notTaken={unsaved.labels} exaggeration={exaggeration} />
       {'error' in result && (
         <p role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-3 text-sm text-clay-700">
           The saved design does not fit its route any more: {result.error}. Change the stretches or devices below to fit the route.

@@ -8,14 +8,16 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { projectLinesQuery } from '@/lib/queries/lines';
 import { useLineActions } from './line-actions';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 /** The project's lines (working copy) with their route and last save; review status belongs to revisions. */
 export function LinesTable({ projectId, canEdit }: { projectId: string; canEdit: boolean }) {
-  const { data: lines = [], isError, refetch } = useQuery(projectLinesQuery(projectId));
+  const { data: lines, isError, refetch } = useQuery(projectLinesQuery(projectId));
   const actions = useLineActions(projectId);
   if (isError) {
     return <LoadError what="Lines" onRetry={() => void refetch()} />;
   }
+  if (!lines) return <LinesTableSkeleton />;
   return (
     <div className="space-y-2">
       <FormMessage message={actions.notice?.text} tone={actions.notice?.tone} />
@@ -51,4 +53,8 @@ export function LinesTable({ projectId, canEdit }: { projectId: string; canEdit:
       {actions.dialog}
     </div>
   );
+}
+
+export function LinesTableSkeleton() {
+  return <TableSkeleton label="Loading lines" />;
 }

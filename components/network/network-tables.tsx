@@ -1,14 +1,15 @@
 'use client';
 
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type ColumnDef } from '@tanstack/react-table';
-import { useMemo } from 'react';
+import { useCallback, useMemo } from 'react';
 
 // Mixed accessor and display columns: TanStack Table types such a list with `any` values.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Columns<T> = ColumnDef<T, any>[];
-import { FormMessage } from '@/components/ui/form-message';
+import { useConfirm } from '@/components/ui/confirm-dialog';
 import { TableFrame } from '@/components/ui/table-frame';
 import type { NetworkLinkRecord, NetworkNodeRecord } from '@/lib/network/records';
+import { nodeRemoval } from '@/lib/network/removal';
 import type { LinkResult, NodeResult, SolveRunResult } from '@/lib/network/run-result';
 import type { NetworkView } from '@/lib/network/view';
 import { useDeleteNetworkLink, useDeleteNetworkNode } from '@/lib/queries/network';
@@ -18,6 +19,14 @@ const KIND_WORDS: Record<string, string> = {
   source: 'Source', 'ram-outlet': 'Ram outlet', tank: 'Tank', 'break-pressure-tank': 'Break-pressure tank', junction: 'Take-off', outlet: 'Outlet',
   line: 'Line', pipe: 'Pipe', valve: 'Valve',
 };
+
+const listWords = new Intl.ListFormat('en', { type: 'conjunction' });
+
+function RemoveButton({ name, onClick }: { name: string; onClick: () => void }) {
+  return (
+    <button type="button" aria-label={`Remove ${name}`} className="text-xs text-clay-700 underline" onClick={(e) => { e.stopPropagation(); onClick(); }}>Remove</button>
+  );
+}
 
 interface TableProps {
   view: NetworkView;
@@ -61,6 +70,24 @@ type LinkRow = NetworkLinkRecord & { result: LinkResult | undefined; fromName: s
 
 export function NodeTable({ view, solve, units, selectedId, onSelect, projectId, canEdit }: TableProps) {
   const remove = useDeleteNetworkNode(projectId);
+  const confirm = useConfirm();
+  const { ask } = confirm;
+  const askRemove = useCallback((nodeId: string) => {
+    const removal = nodeRemoval(view, nodeId);
+    ask({
+      title: `Remove “${removal.name}”?`,
+      body: (
+        <>
+          <p>“{removal.name}” goes from the network{removal.joins.length > 0 ? <>, and with it {removal.joins.length === 1 ? 'the join' : `its ${removal.joins.length} joins`} {listWords.format(removal.joins.map((j) => `“${j}”`))}</> : ''}.</p>
+          {removal.untiedUses.length > 0 && <p>{listWords.format(removal.untiedUses.map((u) => `“${u}”`))} {removal.untiedUses.length === 1 ? 'stays' : 'stay'} on the Lift &amp; storage page, tied to no outlet.</p>}
+          <p>This cannot be undone.</p>
+        </>
+      ),
+      confirmLabel: 'Remove part',
+      onConfirm: () => remove.mutateAsync(nodeId),
+    });
+  }, [view, ask, remove]);
+  const lineEnds = useMemo(() => new Set(view.records.links.filter((l) => l.kind === 'line').flatMap((l) => [l.fromNodeId, l.toNodeId])), [view]);
   const columns = useMemo(() => {
     const c = createColumnHelper<NodeRow>();
     return [
@@ -85,23 +112,40 @@ export function NodeTable({ view, solve, units, selectedId, onSelect, projectId,
           </span>
         );
       } }),
-      ...(canEdit ? [c.display({ id: 'remove', header: '', cell: ({ row }) => (
-        <button type="button" className="text-xs text-clay-700 underline" onClick={(e) => { e.stopPropagation(); remove.mutate(row.original.id); }}>Remove</button>
-      ) })] : []),
+      ...(canEdit ? [c.display({ id: 'remove', header: '', cell: ({ row }) => lineEnds.has(row.original.id)
+        // An end of a line goes with its line (or once the line is joined elsewhere): the server refuses it.
+        ? <span className="text-xs text-creek-600">ends a line</span>
+        : <RemoveButton name={row.original.name} onClick={() => askRemove(row.original.id)} />,
+      })] : []),
     ] as Columns<NodeRow>;
-  }, [units, canEdit, remove]);
+  }, [units, canEdit, askRemove, lineEnds]);
   const results = new Map((solve?.nodes ?? []).map((n) => [n.nodeId, n]));
   const rows = view.records.nodes.map((node) => ({ ...node, result: results.get(node.id) }));
   return (
     <>
       <Grid rows={rows} columns={columns} selectedId={selectedId} onSelect={onSelect} label="Node" />
-      {remove.error && <div className="mt-2"><FormMessage message={remove.error.message} /></div>}
+      {confirm.dialog}
     </>
   );
 }
 
 export function LinkTable({ view, solve, units, selectedId, onSelect, projectId, canEdit }: TableProps) {
   const remove = useDeleteNetworkLink(projectId);
+  const confirm = useConfirm();
+  const { ask } = confirm;
+  const askRemove = useCallback((link: LinkRow) => {
+    ask({
+      title: `Remove “${link.name}”?`,
+      body: (
+        <>
+          <p>The {link.kind === 'valve' ? 'valve' : 'join'} “{link.name}” from {link.fromName} to {link.toName} goes from the network; {link.fromName} and {link.toName} stay.</p>
+          <p>This cannot be undone.</p>
+        </>
+      ),
+      confirmLabel: link.kind === 'valve' ? 'Remove valve' : 'Remove join',
+      onConfirm: () => remove.mutateAsync(link.id),
+    });
+  }, [ask, remove]);
   const columns = useMemo(() => {
     const c = createColumnHelper<LinkRow>();
     return [
@@ -124,10 +168,10 @@ export function LinkTable({ view, solve, units, selectedId, onSelect, projectId,
         return pieces ? formatQuantity('velocity', Math.max(...pieces.map((p) => Math.abs(p.velocityMs))), units) : '—';
       } }),
       ...(canEdit ? [c.display({ id: 'remove', header: '', cell: ({ row }) => row.original.kind === 'line' ? null : (
-        <button type="button" className="text-xs text-clay-700 underline" onClick={(e) => { e.stopPropagation(); remove.mutate(row.original.id); }}>Remove</button>
+        <RemoveButton name={row.original.name} onClick={() => askRemove(row.original)} />
       ) })] : []),
     ] as Columns<LinkRow>;
-  }, [units, canEdit, remove]);
+  }, [units, canEdit, askRemove]);
   const names = new Map(view.records.nodes.map((n) => [n.id, n.name]));
   const results = new Map((solve?.links ?? []).map((l) => [l.linkId, l]));
   const rows = view.records.links.map((link) => ({
@@ -136,7 +180,7 @@ export function LinkTable({ view, solve, units, selectedId, onSelect, projectId,
   return (
     <>
       <Grid rows={rows} columns={columns} selectedId={selectedId} onSelect={onSelect} label="Link" />
-      {remove.error && <div className="mt-2"><FormMessage message={remove.error.message} /></div>}
+      {confirm.dialog}
     </>
   );
 }

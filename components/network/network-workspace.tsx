@@ -22,6 +22,7 @@ import { DemandEditor } from './demand-editor';
 import { LinkTable, NodeTable } from './network-tables';
 import { NetworkRunPanel } from './network-run-panel';
 import { TakeOffPicker } from './take-off-picker';
+import { NetworkWorkspaceSkeleton } from './network-workspace-skeleton';
 
 export interface NetworkWorkspaceProps {
   projectId: string;
@@ -46,7 +47,7 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
   const schematicRef = useRef<HTMLDivElement>(null);
   const partNames = useMemo(() => new Map([...(view?.records.nodes ?? []), ...(view?.records.links ?? [])].map((p) => [p.id, p.name])), [view]);
   if (error) return <LoadError what="The network" onRetry={() => void refetch()} />;
-  if (!view || !layout) return null;
+  if (!view || !layout) return <NetworkWorkspaceSkeleton />;
 
   const pickedNode = view.records.nodes.find((n) => n.id === selectedId);
   const pickedLink = view.records.links.find((l) => l.id === selectedId);

@@ -15,6 +15,7 @@ import { ApiError } from '@/lib/queries/fetch-json';
 import { photoImageUrl, projectPhotosQuery, useDeletePhoto, useUpdatePhoto, useUploadPhoto } from '@/lib/queries/photos';
 import { formatQuantity, fromDisplay, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
 import { parseTypedNumber } from '@/lib/units/typed-number';
+import { ThumbnailsSkeleton } from '@/components/ui/widget-skeletons';
 
 interface Props { projectId: string; routeId: string; units: UnitSystem; editable: boolean }
 
@@ -26,7 +27,8 @@ const PLACEMENT: Record<PhotoSummary['placement'], string> = {
 
 /** The photos of a walk along this route: upload several at once; each lands at its chainage. */
 export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
-  const { data: all = [] } = useQuery(projectPhotosQuery(projectId));
+  const { data, isPending } = useQuery(projectPhotosQuery(projectId));
+  const all = data ?? [];
   const mark = useDecimalMark();
   const onRoute = all.filter((p) => p.routeId === routeId);
   const numbers = new Map(numberPhotos(onRoute).map((p) => [p.id, p.number]));
@@ -74,6 +76,7 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
     return null;
   }
 
+  if (isPending) return <RoutePhotosSkeleton />;
   return (
     <Panel title="Site photos on this route">
       {editable && (
@@ -172,6 +175,14 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
           ))}
         </TableFrame>
       )}
+    </Panel>
+  );
+}
+
+export function RoutePhotosSkeleton() {
+  return (
+    <Panel title="Site photos on this route">
+      <ThumbnailsSkeleton label="Loading the route's photos" />
     </Panel>
   );
 }

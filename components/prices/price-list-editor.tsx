@@ -13,6 +13,7 @@ import { ApiError } from '@/lib/queries/fetch-json';
 import { priceListQuery, useSavePriceList } from '@/lib/queries/price-list';
 import { fieldErrorsOf } from '@/lib/validations/common';
 import { PriceListSchema } from '@/lib/validations/network';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 type Errors = Record<string, string[]>;
 
@@ -20,7 +21,7 @@ type Errors = Record<string, string[]>;
 export function PriceListEditor({ teamId, canEdit }: { teamId: string; canEdit: boolean }) {
   const { data, error, refetch } = useQuery(priceListQuery(teamId));
   if (error) return <LoadError what="The price list" onRetry={() => void refetch()} />;
-  if (!data) return null;
+  if (!data) return <PriceListSkeleton />;
   return <PriceTable teamId={teamId} initial={draftRowsOf(data)} canEdit={canEdit} />;
 }
 
@@ -90,4 +91,8 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
       )}
     </div>
   );
+}
+
+export function PriceListSkeleton() {
+  return <TableSkeleton label="Loading the price list" rows={6} />;
 }

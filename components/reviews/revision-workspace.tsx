@@ -15,7 +15,8 @@ import type { ReviewStamp } from '@/lib/review/stamp';
 import { networkPart, networkPinsOf, pinChainage, pinsOf, type ThreadScope } from '@/lib/review/threads';
 import { displayUnits, formatQuantity, type UnitSystem } from '@/lib/units';
 import { Button } from '@/components/ui/button';
-import { Panel } from '@/components/ui/panel';
+import { Panel, Skeleton } from '@/components/ui/panel';
+import { ListSkeleton } from '@/components/ui/widget-skeletons';
 import { ProfileChart } from '@/components/lines/profile-chart';
 import { CommentsPanel } from './comments-panel';
 import { RevisionSchematic } from './revision-schematic';
@@ -143,6 +144,16 @@ export function RevisionWorkspace({ revision, lineId, stamp, canComment, members
           onJump={jump}
         />
       </Panel>
+    </div>
+  );
+}
+
+export function RevisionWorkspaceSkeleton() {
+  return (
+    <div className="space-y-4" aria-busy="true" aria-label="Loading the revision">
+      <Skeleton className="h-9 w-96" />
+      <Skeleton className="h-[460px] w-full" />
+      <ListSkeleton label="Loading the revision's comments" />
     </div>
   );
 }

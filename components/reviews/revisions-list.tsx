@@ -7,14 +7,16 @@ import { projectRevisionsQuery } from '@/lib/queries/reviews';
 import { HeadCell, TableFrame } from '@/components/ui/table-frame';
 import { LoadError } from '@/components/ui/load-error';
 import { RevisionStatusBadge } from './revision-status-badge';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 const day = (iso: string | null) => (iso ? iso.slice(0, 10) : '—');
 
 /** The project's revisions, newest first, with two picked for a compare. */
 export function RevisionsList({ projectId }: { projectId: string }) {
-  const { data: revisions = [], isError, refetch } = useQuery(projectRevisionsQuery(projectId));
+  const { data: revisions, isError, refetch } = useQuery(projectRevisionsQuery(projectId));
   const [picked, setPicked] = useState<string[]>([]);
   if (isError) return <LoadError what="Revisions" onRetry={() => void refetch()} />;
+  if (!revisions) return <RevisionsListSkeleton />;
   const toggle = (id: string) => setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
   return (
     <div className="space-y-3">
@@ -39,4 +41,8 @@ export function RevisionsList({ projectId }: { projectId: string }) {
       )}
     </div>
   );
+}
+
+export function RevisionsListSkeleton() {
+  return <TableSkeleton label="Loading revisions" />;
 }

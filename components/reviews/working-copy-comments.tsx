@@ -4,11 +4,13 @@ import { LoadError } from '@/components/ui/load-error';
 import Link from 'next/link';
 import { useCommentThreads } from './use-comment-threads';
 import { commentPlaceHref } from '@/lib/review/comment-place';
+import { ListSkeleton } from '@/components/ui/widget-skeletons';
 
 /** Every thread on the working copy, open ones first, each linking to the page where its pin is. */
 export function WorkingCopyComments({ projectId }: { projectId: string }) {
-  const { threads, isError, refetch } = useCommentThreads(projectId, null, [], true);
+  const { threads, isError, isPending, refetch } = useCommentThreads(projectId, null, [], true);
   if (isError) return <LoadError what="The comments" onRetry={() => void refetch()} />;
+  if (isPending) return <CommentsSkeleton />;
   const ordered = [...threads].sort((a, b) => Number(a.thread.resolved) - Number(b.thread.resolved));
   if (ordered.length === 0) return <p className="text-sm text-creek-700">No comments on the working copy yet. Pin one on a line&apos;s long profile, a route&apos;s ground profile or the network schematic.</p>;
   return (
@@ -29,4 +31,8 @@ export function WorkingCopyComments({ projectId }: { projectId: string }) {
       })}
     </ul>
   );
+}
+
+export function CommentsSkeleton() {
+  return <ListSkeleton label="Loading comments" />;
 }

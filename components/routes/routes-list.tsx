@@ -8,6 +8,7 @@ import { formatDistance, formatNumber, formatQuantity } from '@/lib/units';
 import type { UnitSystem } from '@/lib/units';
 import { projectRoutesQuery } from '@/lib/queries/routes';
 import { FORMAT_LABELS } from './format-labels';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 export interface RoutesListProps {
   projectId: string;
@@ -16,10 +17,11 @@ export interface RoutesListProps {
 
 /** The project's routes with their length, points and where they came from. */
 export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
-  const { data: routes = [], isError, refetch } = useQuery(projectRoutesQuery(projectId));
+  const { data: routes, isError, refetch } = useQuery(projectRoutesQuery(projectId));
   if (isError) {
     return <LoadError what="Routes" onRetry={() => void refetch()} />;
   }
+  if (!routes) return <RoutesListSkeleton />;
   return (
     <TableFrame head={<><HeadCell>Route</HeadCell><HeadCell>Length</HeadCell><HeadCell>Along the ground</HeadCell><HeadCell>Points</HeadCell><HeadCell>From</HeadCell></>}>
           {routes.map((r) => (
@@ -42,4 +44,8 @@ export function RoutesList({ projectId, unitSystem }: RoutesListProps) {
           )}
     </TableFrame>
   );
+}
+
+export function RoutesListSkeleton() {
+  return <TableSkeleton label="Loading routes" />;
 }

@@ -6,12 +6,14 @@ import { FormMessage } from '@/components/ui/form-message';
 import { HeadCell, TableFrame } from '@/components/ui/table-frame';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { teamInvitationsQuery, useRevokeInvitation } from '@/lib/queries/invitations';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 /** Invitations sent and not yet accepted; an owner withdraws one and its link stops working. */
 export function InvitationsTable({ teamId }: { teamId: string }) {
-  const { data: invitations = [] } = useQuery(teamInvitationsQuery(teamId));
+  const { data: invitations } = useQuery(teamInvitationsQuery(teamId));
   const revoke = useRevokeInvitation(teamId);
   const [error, setError] = useState<string | null>(null);
+  if (!invitations) return <InvitationsTableSkeleton />;
 
   if (invitations.length === 0) return <p className="text-sm text-creek-600">No invitation is waiting for an answer.</p>;
   return (
@@ -42,4 +44,8 @@ export function InvitationsTable({ teamId }: { teamId: string }) {
       </TableFrame>
     </div>
   );
+}
+
+export function InvitationsTableSkeleton() {
+  return <TableSkeleton label="Loading invitations" rows={1} />;
 }

@@ -8,15 +8,17 @@ import { useConfirm } from '@/components/ui/confirm-dialog';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { teamMembersQuery, useChangeRole, useRemoveMember } from '@/lib/queries/members';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/roles';
+import { TableSkeleton } from '@/components/ui/widget-skeletons';
 
 interface Props { teamId: string; manage: boolean; selfId: string }
 
 export function MembersTable({ teamId, manage, selfId }: Props) {
-  const { data: members = [] } = useQuery(teamMembersQuery(teamId));
+  const { data: members } = useQuery(teamMembersQuery(teamId));
   const changeRole = useChangeRole(teamId);
   const remove = useRemoveMember(teamId);
   const [error, setError] = useState<string | null>(null);
   const confirm = useConfirm();
+  if (!members) return <MembersTableSkeleton />;
 
   return (
     <div className="space-y-2">
@@ -77,4 +79,8 @@ export function MembersTable({ teamId, manage, selfId }: Props) {
       {confirm.dialog}
     </div>
   );
+}
+
+export function MembersTableSkeleton() {
+  return <TableSkeleton label="Loading members" rows={4} />;
 }

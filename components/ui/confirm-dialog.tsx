@@ -3,7 +3,7 @@
 import { useCallback, useEffect, useRef, useState, type ReactNode } from 'react';
 import { Button } from './button';
 import { FormMessage } from './form-message';
-import { restoreFocus, rememberFocus, type FocusMemory } from './focus-return';
+import { restoreFocusThroughRedraw, rememberFocus, type FocusMemory } from './focus-return';
 
 export interface ConfirmRequest {
   title: string;
@@ -24,17 +24,24 @@ export interface ConfirmRequest {
 export function useConfirm() {
   const [request, setRequest] = useState<ConfirmRequest | null>(null);
   const memory = useRef<FocusMemory | null>(null);
+  const returning = useRef<FocusMemory | null>(null);
   const ask = useCallback((next: ConfirmRequest) => {
     memory.current = rememberFocus();
     setRequest(next);
   }, []);
   const close = useCallback(() => {
-    setRequest(null);
-    const remembered = memory.current;
+    returning.current = memory.current;
     memory.current = null;
-    // After React has removed what the confirmed action removed.
-    requestAnimationFrame(() => restoreFocus(remembered));
+    setRequest(null);
   }, []);
+  // Once the dialog is off the page (while it is there, the page behind it cannot take focus);
+  // again if what the action removed only goes later.
+  useEffect(() => {
+    if (request !== null || !returning.current) return;
+    const remembered = returning.current;
+    returning.current = null;
+    restoreFocusThroughRedraw(remembered);
+  }, [request]);
   const dialog = request ? <ConfirmDialog request={request} onClose={close} /> : null;
   return { ask, dialog };
 }

@@ -47,6 +47,33 @@ export function restoreFocus(memory: FocusMemory | null): void {
   kept.focus();
 }
 
+/** How long after a dialog closes a late redraw may still take focus away from where it went back. */
+const LATE_REDRAW_MS = 3000;
+
+/**
+ * Focus back where it was (as `restoreFocus`), and again whenever the page redraws with focus lost
+ * (on the body) in the moments after: a confirmed removal can reach the page only after the dialog
+ * has closed (the list is fetched again and redrawn), which would otherwise drop focus to the top
+ * of the page. Stops at the user's next key or pointer press, so it never fights the user.
+ */
+export function restoreFocusThroughRedraw(memory: FocusMemory | null): void {
+  if (!memory) return;
+  restoreFocus(memory);
+  const observer = new MutationObserver(() => {
+    if (!document.activeElement || document.activeElement === document.body) restoreFocus(memory);
+  });
+  const stop = () => {
+    observer.disconnect();
+    window.clearTimeout(timer);
+    document.removeEventListener('keydown', stop, true);
+    document.removeEventListener('pointerdown', stop, true);
+  };
+  const timer = window.setTimeout(stop, LATE_REDRAW_MS);
+  observer.observe(document.body, { childList: true, subtree: true });
+  document.addEventListener('keydown', stop, true);
+  document.addEventListener('pointerdown', stop, true);
+}
+
 /** Runs a removal started from `control` and keeps keyboard focus in its place once the page has redrawn. */
 export function removeKeepingFocus(control: Element, remove: () => unknown): void {
   const memory = rememberFocus(control);

@@ -21,13 +21,15 @@ export interface HeightConfidence {
  * book (0.01 m) or hose level (0.05 m) gives a scatter below any tolerance, so nothing changes.
  */
 export function surveyHeightScatterM(points: readonly HeightConfidence[]): number {
-  const known: number[] = [];
+  // A typed array sorts numerically without a comparator: a 100,000-point walk is read on every page view.
+  const all = new Float64Array(points.length);
+  let count = 0;
   for (const p of points) {
     const stated = p.confidenceM ?? (p.heightSource === undefined ? undefined : defaultVerticalUncertaintyM(p.heightSource));
-    if (stated !== undefined && Number.isFinite(stated) && stated >= 0) known.push(stated);
+    if (stated !== undefined && Number.isFinite(stated) && stated >= 0) all[count++] = stated;
   }
-  if (known.length === 0) return 0;
-  known.sort((a, b) => a - b);
+  if (count === 0) return 0;
+  const known = all.subarray(0, count).sort();
   const mid = known.length >> 1;
   const median = known.length % 2 === 1 ? known[mid] : (known[mid - 1] + known[mid]) / 2;
   return Math.min(median, WALKED_SCATTER_CAP_M);

@@ -9,7 +9,13 @@ export const PROFILE_LAYOUT = {
   gap: 46,
   pressureHeight: 150,
   axisBelow: 40,
+  /** The elevation panel grows or shrinks with the width so the exaggeration stays; within these heights. */
+  minElevationHeight: 120,
+  maxElevationHeight: 600,
 } as const;
+
+/** The plot width `auto` is worked out at, px: the default layout's, so every width draws the same exaggeration. */
+const REFERENCE_PLOT_WIDTH = PROFILE_LAYOUT.width - PROFILE_LAYOUT.marginLeft - PROFILE_LAYOUT.marginRight;
 
 /** Index of the last point at or before `chainageM` (0 when before the line). */
 export function indexAtOrBefore(chainageM: ArrayLike<number>, value: number): number {
@@ -46,8 +52,13 @@ function padded([lo, hi]: [number, number], fraction: number, minSpan: number): 
 
 /**
  * Lays the two panels out and builds their scales. Scales work in the project's display units
- * (so ticks fall on round feet or metres) and are wrapped to take SI values. With a fixed
- * exaggeration the elevation domain is set by it and centred on the visible lines; `auto` fits them.
+ * (so ticks fall on round feet or metres) and are wrapped to take SI values.
+ *
+ * The vertical exaggeration does not depend on the drawing's width, so the screen (any width), the
+ * SVG file and the PDF show the same one: `auto` is the exaggeration that fits the visible lines in
+ * the default elevation panel at the default width, a number is taken as it is; the elevation panel
+ * then takes the height that exaggeration needs at this width (within min/max; outside them the
+ * elevation range is widened or cut about the lines' middle, the exaggeration kept).
  */
 export function profileFrame(data: ProfileChartData, options: ProfileChartOptions, legendHeight: number): ProfileFrame {
   const L = PROFILE_LAYOUT;
@@ -63,24 +74,25 @@ export function profileFrame(data: ProfileChartData, options: ProfileChartOption
   const firstIndex = indexAtOrBefore(points.chainageM, fromM);
   const lastIndex = Math.min(indexAtOrBefore(points.chainageM, toM) + (points.chainageM[indexAtOrBefore(points.chainageM, toM)] < toM ? 1 : 0), n - 1);
 
+  const u = options.units;
+  const viewSpanM = Math.max(toM - fromM, 1e-9);
+  const pxPerM = (plotRight - plotLeft) / viewSpanM;
+  const visible = rangeOf([points.groundElevationM, points.pipeElevationM, points.staticHeadM, points.hydraulicGradeM], firstIndex, lastIndex);
+  const fitted = padded(visible, 0.08, 2);
+  const fittedSpanM = fitted[1] - fitted[0];
+  const exaggeration =
+    typeof options.exaggeration === 'number' && options.exaggeration > 0 ? options.exaggeration : L.elevationHeight / fittedSpanM / (REFERENCE_PLOT_WIDTH / viewSpanM);
+  const elevationHeight = Math.min(Math.max(fittedSpanM * exaggeration * pxPerM, L.minElevationHeight), L.maxElevationHeight);
+  const spanM = elevationHeight / (exaggeration * pxPerM);
+  const mid = (visible[0] + visible[1]) / 2;
+  const elevationDomainM: [number, number] = [mid - spanM / 2, mid + spanM / 2];
+
   const elevationTop = L.top;
-  const elevationBottom = elevationTop + L.elevationHeight;
+  const elevationBottom = elevationTop + elevationHeight;
   const pressureTop = elevationBottom + L.gap;
   const pressureBottom = pressureTop + L.pressureHeight;
   const height = pressureBottom + L.axisBelow + legendHeight;
 
-  const u = options.units;
-  const pxPerM = (plotRight - plotLeft) / Math.max(toM - fromM, 1e-9);
-
-  const visible = rangeOf([points.groundElevationM, points.pipeElevationM, points.staticHeadM, points.hydraulicGradeM], firstIndex, lastIndex);
-  let elevationDomainM = padded(visible, 0.08, 2);
-  let exaggeration = (L.elevationHeight / (elevationDomainM[1] - elevationDomainM[0])) / pxPerM;
-  if (typeof options.exaggeration === 'number' && options.exaggeration > 0) {
-    exaggeration = options.exaggeration;
-    const spanM = L.elevationHeight / (exaggeration * pxPerM);
-    const mid = (visible[0] + visible[1]) / 2;
-    elevationDomainM = [mid - spanM / 2, mid + spanM / 2];
-  }
   const pressureSeries = [points.pressureHeadM, points.staticPressureHeadM];
   const [pLo, pHi] = rangeOf(pressureSeries, firstIndex, lastIndex);
   const pressureDomainM = padded([Math.min(pLo, 0), Math.max(pHi, 1)], 0.1, 5);

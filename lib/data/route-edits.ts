@@ -3,10 +3,10 @@ import { models } from '../../models';
 import type { SurveyFeature } from '../survey/parsed-survey';
 import { AppError, notInProject } from '../errors';
 import { joinPoints, reversePoints, splitPoints, trimPoints } from '../routes/edit-ops';
-import type { RouteDetail, RouteSummary } from '../routes/types';
+import type { RouteSummary, RouteView } from '../routes/types';
 import type { JoinRoutesInput, SplitRouteInput, TrimRouteInput } from '../validations/routes';
 import { loadRoutePoints } from './route-points-store';
-import { getRouteDetail, getRouteSummary } from './routes';
+import { getRouteSummary, getRouteView } from './routes';
 import { lockRoute, writeRoutePoints } from './route-writes';
 
 /** Features follow their chainage through an edit; those that fall off the route are dropped. */
@@ -20,7 +20,7 @@ function moveFeatures(features: readonly SurveyFeature[], map: (chainageM: numbe
 const round = (m: number) => Math.round(m * 10) / 10;
 
 /** The same route walked the other way. */
-export async function reverseRouteById(routeId: string): Promise<RouteDetail> {
+export async function reverseRouteById(routeId: string): Promise<RouteView> {
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     const points = await loadRoutePoints(routeId, transaction);
@@ -30,11 +30,11 @@ export async function reverseRouteById(routeId: string): Promise<RouteDetail> {
     route.features = moveFeatures(route.features, (c) => start + end - c).sort((a, b) => a.chainageM - b.chainageM);
     await writeRoutePoints(route, reversePoints(points), transaction);
   });
-  return (await getRouteDetail(routeId)) as RouteDetail;
+  return (await getRouteView(routeId)) as RouteView;
 }
 
 /** Keeps the part between two chainages. */
-export async function trimRouteById(routeId: string, input: TrimRouteInput): Promise<RouteDetail> {
+export async function trimRouteById(routeId: string, input: TrimRouteInput): Promise<RouteView> {
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     const points = await loadRoutePoints(routeId, transaction);
@@ -42,7 +42,7 @@ export async function trimRouteById(routeId: string, input: TrimRouteInput): Pro
     route.features = moveFeatures(route.features, (c) => (c >= from && c <= to ? c - from : null));
     await writeRoutePoints(route, trimPoints(points, from, to), transaction);
   });
-  return (await getRouteDetail(routeId)) as RouteDetail;
+  return (await getRouteView(routeId)) as RouteView;
 }
 
 /** Splits a route at a chainage: this route keeps the first part, a new route holds the second. */

@@ -8,12 +8,12 @@ import { applyCleanupDecisions } from '../routes/apply-cleanup';
 import { recordOf, type PointRecord } from '../routes/edit-ops';
 import { RouteEditError } from '../routes/errors';
 import { computeRouteGeometry } from '../routes/geometry';
-import type { RouteDetail, RouteSummary } from '../routes/types';
+import type { RoutePointView, RouteSummary, RouteView } from '../routes/types';
 import { enqueueJob } from '../jobs/enqueue';
 import { removeStoredFiles } from './project-files';
 import type { CleanupDecision, CreateRouteInput, SavePointsInput, UpdateRouteInput } from '../validations/routes';
 import { loadRoutePoints, replaceRoutePoints } from './route-points-store';
-import { getRouteDetail, getRouteSummary, toRouteSummary } from './routes';
+import { getRouteSummary, getRouteView, toRouteSummary } from './routes';
 
 /** A point to write; chainage may be missing where positions will give it. */
 export type PointDraftRecord = Omit<PointRecord, 'chainageM'> & { chainageM: number | null };
@@ -68,19 +68,30 @@ export async function deleteRoute(routeId: string): Promise<void> {
   if (orphanKey) await removeStoredFiles([orphanKey], true);
 }
 
-/** Saves an edited route whole. Raw heights are taken from the stored points, never from the client. */
-export async function saveRoutePoints(routeId: string, input: SavePointsInput): Promise<RouteDetail> {
+/**
+ * Saves an edited route: whole, or (with `window`) one stretch of its stored points replaced by the
+ * edited ones, the rest kept as stored. Raw heights are taken from the stored points, never from the
+ * client; chainage and lengths are worked out again for the whole route.
+ */
+export async function saveRoutePoints(routeId: string, input: SavePointsInput): Promise<RouteView> {
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     if (input.baseUpdatedAt && route.updatedAt.toISOString() !== new Date(input.baseUpdatedAt).toISOString()) {
       throw new AppError('conflict', 'Someone saved this route after you opened it; reload it and make your changes again.');
     }
-    const existing = new Map((await loadRoutePoints(routeId, transaction)).map((p) => [p.seq, p]));
+    const stored = await loadRoutePoints(routeId, transaction);
+    const fromSeq = input.window?.fromSeq ?? 0;
+    const toSeq = input.window?.toSeq ?? stored.length;
+    if (toSeq > stored.length) {
+      throw new AppError('bad_request', `The edited rows end at point ${toSeq}, but the route has ${stored.length}`, { 'window.toSeq': [`must be at most ${stored.length}`] });
+    }
+    const existing = new Map(stored.slice(fromSeq, toSeq).map((p) => [p.seq, p]));
     const used = new Set<number>();
-    const records: PointDraftRecord[] = input.points.map((p, i) => {
+    const edited: PointDraftRecord[] = input.points.map((p, i) => {
       const source = p.sourceSeq === null ? undefined : existing.get(p.sourceSeq);
       if (p.sourceSeq !== null && (!source || used.has(p.sourceSeq))) {
-        throw new RouteEditError('sourceSeq', `refers to ${source ? 'a point already used' : 'a point this route does not have'} (${p.sourceSeq + 1})`, { pointNumber: i + 1 });
+        const why = source ? 'a point already used' : input.window ? 'a point outside the edited rows' : 'a point this route does not have';
+        throw new RouteEditError('sourceSeq', `refers to ${why} (${p.sourceSeq + 1})`, { pointNumber: fromSeq + i + 1 });
       }
       if (p.sourceSeq !== null) used.add(p.sourceSeq);
       return {
@@ -98,13 +109,14 @@ export async function saveRoutePoints(routeId: string, input: SavePointsInput): 
         dismissedChecks: source?.dismissedChecks ?? [],
       };
     });
-    await writeRoutePoints(route, records, transaction);
+    const kept = (points: readonly RoutePointView[]): PointDraftRecord[] => points.map(recordOf);
+    await writeRoutePoints(route, [...kept(stored.slice(0, fromSeq)), ...edited, ...kept(stored.slice(toSeq))], transaction);
   });
-  return (await getRouteDetail(routeId)) as RouteDetail;
+  return (await getRouteView(routeId)) as RouteView;
 }
 
 /** Accepts and rejects clean-up proposals in one transaction. */
-export async function decideCleanup(routeId: string, input: CleanupDecision, actorUserId: string | null = null): Promise<RouteDetail> {
+export async function decideCleanup(routeId: string, input: CleanupDecision, actorUserId: string | null = null): Promise<RouteView> {
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     const points = await loadRoutePoints(routeId, transaction);
@@ -117,5 +129,5 @@ export async function decideCleanup(routeId: string, input: CleanupDecision, act
       summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`, data: { accepted, rejected },
     });
   });
-  return (await getRouteDetail(routeId)) as RouteDetail;
+  return (await getRouteView(routeId)) as RouteView;
 }

@@ -1,15 +1,22 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ApiErrorBody } from '../errors';
-import type { RouteDetail, RouteSummary } from '../routes/types';
+import type { RoutePointsPage, RouteProposalsAnswer, RouteSummary, RouteView } from '../routes/types';
 import type { SurveyImportWarning } from '../survey/parsed-survey';
+import { ROUTE_PAGE_SIZE } from '../validations/routes';
 import type { CleanupDecisionInput, CreateRouteInput, JoinRoutesInput, SavePointsInput, SplitRouteInput, TrimRouteInput, UpdateRouteInput } from '../validations/routes';
 import type { SurveyImportOptions } from '../validations/survey-import';
 import { ApiError, fetchJson } from './fetch-json';
 
 export const routeKeys = {
   project: (projectId: string) => ['projects', projectId, 'routes'] as const,
+  /** Everything read about one route (its view and its pages of rows). */
   one: (routeId: string) => ['routes', routeId] as const,
+  view: (routeId: string) => ['routes', routeId, 'view'] as const,
+  pages: (routeId: string) => ['routes', routeId, 'points'] as const,
+  page: (routeId: string, offset: number, limit: number) => ['routes', routeId, 'points', offset, limit] as const,
 };
+
+export { ROUTE_PAGE_SIZE };
 
 export const projectRoutesQuery = (projectId: string) =>
   queryOptions({
@@ -17,22 +24,42 @@ export const projectRoutesQuery = (projectId: string) =>
     queryFn: async () => (await fetchJson<{ routes: RouteSummary[] }>(`/api/projects/${projectId}/routes`)).routes,
   });
 
-export const routeDetailQuery = (routeId: string) =>
+/** The route page's header, thinned profile, plan and proposals (never the points). */
+export const routeViewQuery = (routeId: string) =>
   queryOptions({
-    queryKey: routeKeys.one(routeId),
-    queryFn: () => fetchJson<RouteDetail>(`/api/routes/${routeId}`),
+    queryKey: routeKeys.view(routeId),
+    queryFn: () => fetchJson<RouteView>(`/api/routes/${routeId}/view`),
   });
+
+/** One page of the route's rows, from `offset` (a seq). */
+export const routePointsQuery = (routeId: string, offset: number, limit = ROUTE_PAGE_SIZE) =>
+  queryOptions({
+    queryKey: routeKeys.page(routeId, offset, limit),
+    queryFn: () => fetchJson<RoutePointsPage>(`/api/routes/${routeId}/points?offset=${offset}&limit=${limit}`),
+  });
+
+/** Smoothing or a benchmark offset proposed by the server over the stored route. */
+export function useProposeCleanup(routeId: string) {
+  return useMutation({
+    mutationFn: (ask: { smoothingWindow: number } | { benchmarkPoint: number; benchmarkElevationM: number }) =>
+      fetchJson<RouteProposalsAnswer>(`/api/routes/${routeId}/proposals?${new URLSearchParams(Object.entries(ask).map(([k, v]) => [k, String(v)]))}`),
+  });
+}
 
 /** Where the original file of a route is downloaded from (a plain link, not a query). */
 export const routeSourceUrl = (routeId: string) => `/api/routes/${routeId}/source`;
 
-function useRouteMutation<I, O>(projectId: string, run: (input: I) => Promise<O>, onDetail?: (o: O) => RouteDetail | null) {
+function useRouteMutation<I, O>(projectId: string, run: (input: I) => Promise<O>, onView?: (o: O) => RouteView | null) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: run,
     onSuccess: async (result) => {
-      const detail = onDetail?.(result);
-      if (detail) client.setQueryData(routeKeys.one(detail.route.id), detail);
+      const view = onView?.(result);
+      if (view) {
+        // The write answers with the new view; the rows are read again, a page at a time.
+        client.setQueryData(routeKeys.view(view.route.id), view);
+        await client.invalidateQueries({ queryKey: routeKeys.pages(view.route.id) });
+      }
       await client.invalidateQueries({ queryKey: routeKeys.project(projectId) });
     },
   });
@@ -59,22 +86,22 @@ export function useDeleteRoute(projectId: string, routeId: string) {
   return useRouteMutation(projectId, () => fetchJson<void>(`/api/routes/${routeId}`, { method: 'DELETE' }));
 }
 
-const detailOf = (d: RouteDetail) => d;
+const viewOf = (v: RouteView) => v;
 
 export function useSavePoints(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: SavePointsInput) => fetchJson<RouteDetail>(`/api/routes/${routeId}/points`, { method: 'PUT', body: input }), detailOf);
+  return useRouteMutation(projectId, (input: SavePointsInput) => fetchJson<RouteView>(`/api/routes/${routeId}/points`, { method: 'PUT', body: input }), viewOf);
 }
 
 export function useCleanupDecision(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: CleanupDecisionInput) => fetchJson<RouteDetail>(`/api/routes/${routeId}/cleanup`, { method: 'POST', body: input }), detailOf);
+  return useRouteMutation(projectId, (input: CleanupDecisionInput) => fetchJson<RouteView>(`/api/routes/${routeId}/cleanup`, { method: 'POST', body: input }), viewOf);
 }
 
 export function useReverseRoute(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, () => fetchJson<RouteDetail>(`/api/routes/${routeId}/reverse`, { method: 'POST' }), detailOf);
+  return useRouteMutation(projectId, () => fetchJson<RouteView>(`/api/routes/${routeId}/reverse`, { method: 'POST' }), viewOf);
 }
 
 export function useTrimRoute(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: TrimRouteInput) => fetchJson<RouteDetail>(`/api/routes/${routeId}/trim`, { method: 'POST', body: input }), detailOf);
+  return useRouteMutation(projectId, (input: TrimRouteInput) => fetchJson<RouteView>(`/api/routes/${routeId}/trim`, { method: 'POST', body: input }), viewOf);
 }
 
 export function useSplitRoute(projectId: string, routeId: string) {

@@ -35,6 +35,8 @@ export interface LineReportInput {
   generatedAt: Date;
   /** Site photos chosen for the report, in the line's window: marked on the profile and printed with their thumbnails. @default none */
   photos?: readonly ReportPhoto[];
+  /** The vertical exaggeration of the profile, as the screen shows it. @default 'auto' (the same on every width) */
+  exaggeration?: number | 'auto';
   /** The line's stations with their map positions, for the plan view. @default none (no plan) */
   stations?: readonly PlanStation[];
 }
@@ -54,9 +56,9 @@ function chartPhotosOf(photos: readonly ReportPhoto[]): ChartPhoto[] {
   return photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName, latitudeDeg: p.latitude, longitudeDeg: p.longitude }));
 }
 
-/** The report's profile: the screen's drawing at report width, with the chosen photos marked. */
-export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = []) {
-  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, photos: chartPhotosOf(photos) }, 'report');
+/** The report's profile: the screen's drawing at report width and the screen's exaggeration, with the chosen photos marked. */
+export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = [], exaggeration: number | 'auto' = 'auto') {
+  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, exaggeration, photos: chartPhotosOf(photos) }, 'report');
 }
 
 /**
@@ -64,7 +66,7 @@ export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, uni
  * the screen, with the site photos chosen for it marked), stretch schedule, devices, warnings, the
  * chosen photos, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [], stations = [] }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [], stations = [], exaggeration = 'auto' }: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
   const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });
   const chunks: Buffer[] = [];
@@ -105,7 +107,7 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   doc.moveDown(0.4);
 
   // The whole drawing (axes, chainage title and legend) on the page: scaled to the room left, never cut.
-  const scene = reportProfileScene(analysis, line, project.unitSystem, photos);
+  const scene = reportProfileScene(analysis, line, project.unitSystem, photos, exaggeration);
   drawSceneToFit(doc, svgToString(scene.root), scene.frame, { minHeight: 300 });
   const plan = planScene(stations, analysis.warnings, line.design.devices, PLAN_SIZE, u, chartPhotosOf(photos));
   doc.addPage();

@@ -1,12 +1,12 @@
 import { consumerGpsHeightWarning, type GpsHeightWarning, type HeightDecision } from '../../hydraulics/index';
-import type { RoutePointView } from './types';
+import type { CheckedPoint } from './types';
 
 /**
  * The decisions a route's heights feed straight away: the fall from end to end (static head of
  * a gravity line) and the depth of the lowest point below the start (the highest static pressure
  * if the line is full and closed). A loud warning when either rests on consumer-GPS heights.
  */
-export function routeGpsWarning(points: readonly RoutePointView[]): GpsHeightWarning | null {
+export function routeGpsWarning(points: readonly Pick<CheckedPoint, 'excluded' | 'elevationM' | 'heightSource'>[]): GpsHeightWarning | null {
   const kept = points.filter((p) => !p.excluded);
   if (kept.length < 2) return null;
   const first = kept[0];

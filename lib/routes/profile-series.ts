@@ -1,5 +1,5 @@
 import { surveyHeightScatterM, type HeightConfidence } from '../../hydraulics/index';
-import { thinPoints } from '../chart/thin-profile';
+import { thinPoints, type ThinOptions } from '../chart/thin-profile';
 
 export interface ProfilePoint {
   chainageM: number;
@@ -15,8 +15,13 @@ export const ROUTE_PROFILE_POINTS = 1500;
  * (`surveyHeightScatterM` of the points' stated confidence) is kept; the smaller ones are that
  * scatter, and keeping them would keep most of a walked GPS route.
  */
-export function thinRouteProfile(points: readonly ProfilePoint[], confidence: readonly HeightConfidence[]): ProfilePoint[] {
-  return thinPoints(points, { targetPoints: ROUTE_PROFILE_POINTS, reversalM: surveyHeightScatterM(confidence) });
+export function thinRouteProfile<T extends ProfilePoint>(points: readonly T[], confidence: readonly HeightConfidence[], targetPoints = ROUTE_PROFILE_POINTS): T[] {
+  return thinPoints(points, routeThinOptions(surveyHeightScatterM(confidence), targetPoints));
+}
+
+/** The route profile's thinning options, for callers that hold the series as arrays (`thinProfile`). */
+export function routeThinOptions(scatterM: number, targetPoints = ROUTE_PROFILE_POINTS): ThinOptions {
+  return { targetPoints, reversalM: scatterM };
 }
 
 interface PlacedPoint extends HeightConfidence {
@@ -35,4 +40,14 @@ export function routeProfileSeries(points: readonly PlacedPoint[]): { raw: Profi
     raw: thinRouteProfile(surveyed.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })), surveyed),
     cleaned: thinRouteProfile(kept.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })), kept),
   };
+}
+
+/**
+ * The server's thinned profile with one page of rows as edited on screen: the profile's points
+ * within the page's stored chainage span give way to the page's own (thinned) points, so an edit
+ * shows on the chart before it is saved.
+ */
+export function withPageEdits(profile: readonly ProfilePoint[], span: { fromM: number; toM: number } | null, page: readonly ProfilePoint[]): ProfilePoint[] {
+  const outside = span === null ? [...profile] : profile.filter((p) => p.chainageM < span.fromM || p.chainageM > span.toM);
+  return [...outside, ...page].sort((a, b) => a.chainageM - b.chainageM);
 }

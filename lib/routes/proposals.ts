@@ -12,7 +12,7 @@ import {
   type RouteStation,
   surveyHeightScatterM,
 } from '../../hydraulics/index';
-import type { RoutePointView } from './types';
+import type { CheckedPoint } from './types';
 
 /**
  * Thresholds of the automatic checks. Common practice, no source: a ground grade steeper than
@@ -30,18 +30,21 @@ const PRIORITY: CleanupKind[] = ['duplicate', 'time-backwards', 'chainage-backwa
 /** The checks run by themselves; smoothing and benchmark offsets are only proposed on request. */
 export const DETECTED_KINDS: ReadonlySet<CleanupKind> = new Set(PRIORITY);
 
-function stationsOf(points: readonly RoutePointView[]): RouteStation[] {
+const timeOf = (p: CheckedPoint): number | undefined =>
+  p.timeS !== undefined && p.timeS !== null ? p.timeS : p.recordedAt ? Date.parse(p.recordedAt) / 1000 : undefined;
+
+function stationsOf(points: readonly CheckedPoint[]): RouteStation[] {
   return points.map((p) => ({
     chainageM: p.chainageM,
     elevationM: p.elevationM,
     latitudeDeg: p.latitude ?? undefined,
     longitudeDeg: p.longitude ?? undefined,
-    timeS: p.recordedAt === null ? undefined : Date.parse(p.recordedAt) / 1000,
+    timeS: timeOf(p),
   }));
 }
 
 /** Re-keys proposals made on a subset of points from subset positions to the points' seq. */
-function toSeq(changes: readonly ProposedChange[], subset: readonly RoutePointView[]): ProposedChange[] {
+function toSeq(changes: readonly ProposedChange[], subset: readonly CheckedPoint[]): ProposedChange[] {
   return changes.map((c) => ({ ...c, index: subset[c.index].seq }));
 }
 
@@ -49,23 +52,26 @@ function toSeq(changes: readonly ProposedChange[], subset: readonly RoutePointVi
  * Runs the automatic clean-up checks on the cleaned profile (kept points, current heights) and
  * returns at most one proposal per point, leaving out checks the user already dismissed there.
  */
-export function detectRouteProposals(points: readonly RoutePointView[]): ProposedChange[] {
+export function detectRouteProposals(points: readonly CheckedPoint[]): ProposedChange[] {
   const kept = points.filter((p) => !p.excluded);
   if (kept.length < 3) return [];
   const stations = stationsOf(kept);
   const scattered = kept.filter((p) => SCATTERED_SOURCES.has(p.heightSource));
+  // A walked GPS route is scattered throughout: its stations are the kept ones already.
+  const scatteredStations = scattered.length === kept.length ? stations : stationsOf(scattered);
   const all = [
     ...toSeq(detectDuplicates(stations), kept),
     ...toSeq(detectOutOfOrder(stations), kept),
     ...toSeq(detectGradeSpikes(stations, { gradeThreshold: CHECK_SETTINGS.gradeThreshold }), kept),
     ...(scattered.length >= 3
-      ? toSeq(detectMedianOutliers(stationsOf(scattered), { windowSize: CHECK_SETTINGS.medianWindow, toleranceM: CHECK_SETTINGS.medianToleranceM }), scattered)
+      ? toSeq(detectMedianOutliers(scatteredStations, { windowSize: CHECK_SETTINGS.medianWindow, toleranceM: CHECK_SETTINGS.medianToleranceM }), scattered)
       : []),
   ];
-  const bySeq = new Map(points.map((p) => [p.seq, p]));
+  // seq is the point's place along the route, so it indexes the ordered points.
+  const pointOf = (seq: number) => (points[seq]?.seq === seq ? points[seq] : points.find((p) => p.seq === seq));
   const chosen = new Map<number, ProposedChange>();
   for (const c of all) {
-    if (bySeq.get(c.index)?.dismissedChecks.includes(c.kind)) continue;
+    if (pointOf(c.index)?.dismissedChecks.includes(c.kind)) continue;
     const current = chosen.get(c.index);
     if (!current || PRIORITY.indexOf(c.kind) < PRIORITY.indexOf(current.kind)) chosen.set(c.index, c);
   }
@@ -76,7 +82,7 @@ export function detectRouteProposals(points: readonly RoutePointView[]): Propose
  * Moving-median smoothing of the kept points' heights, keyed by seq. The highs and lows that stand
  * out of the route's height scatter keep their heights (the same rule the line checks use).
  */
-export function smoothingProposals(points: readonly RoutePointView[], windowSize: number): ProposedChange[] {
+export function smoothingProposals(points: readonly CheckedPoint[], windowSize: number): ProposedChange[] {
   const kept = points.filter((p) => !p.excluded);
   if (kept.length === 0) return [];
   const keepTurningPointsM = Math.max(DEFAULT_LINE_SETTINGS.airPointToleranceM, surveyHeightScatterM(kept));
@@ -84,7 +90,7 @@ export function smoothingProposals(points: readonly RoutePointView[], windowSize
 }
 
 /** Shifts every kept height so the point `seq` takes the benchmark's known elevation. */
-export function benchmarkProposals(points: readonly RoutePointView[], seq: number, knownElevationM: number): ProposedChange[] {
+export function benchmarkProposals(points: readonly CheckedPoint[], seq: number, knownElevationM: number): ProposedChange[] {
   const kept = points.filter((p) => !p.excluded);
   const index = kept.findIndex((p) => p.seq === seq);
   const label = kept[index]?.label ?? `point ${seq + 1}`;

@@ -24,6 +24,18 @@ export interface RoutePointView {
   dismissedChecks: string[];
 }
 
+/**
+ * What the clean-up checks, the consumer-GPS warning and the route view read of a point: a stored
+ * point (`RoutePointView`) is one; the view's fast read builds these from columns, with the time
+ * already in seconds.
+ */
+export type CheckedPoint = Pick<RoutePointView, 'seq' | 'latitude' | 'longitude' | 'chainageM' | 'elevationM' | 'rawElevationM' | 'heightSource' | 'confidenceM' | 'excluded' | 'dismissedChecks'> & {
+  /** When the point was recorded, seconds since 1970 (a stored point gives `recordedAt` instead). */
+  timeS?: number | null;
+  recordedAt?: string | null;
+  label?: string | null;
+};
+
 export interface RouteSourceFile {
   fileName: string;
   contentType: string;
@@ -59,4 +71,52 @@ export interface RouteDetail {
   /** What the automatic checks found in the cleaned profile and the user has not yet decided. */
   proposals: RouteProposal[];
   gpsWarning: GpsHeightWarning | null;
+}
+
+/** Where a clean-up proposal sits on the profile (aligned with the proposals it accompanies). */
+export interface ProposalPlace {
+  chainageM: number;
+  rawElevationM: number;
+}
+
+/** A station of the route's plan (a kept point with a position). */
+export interface RoutePlanStation {
+  chainageM: number;
+  latitudeDeg: number;
+  longitudeDeg: number;
+}
+
+/**
+ * What the route page draws above its table, never the points themselves: the header, the profile
+ * thinned on the server by the one profile thinning, the plan at the same kept points, and what the
+ * checks propose. A 100,000-point route answers with a few thousand points.
+ */
+export interface RouteView {
+  route: RouteDetail['route'];
+  /** Lowest and highest kept (cleaned) height, m; null without kept points. */
+  heightRangeM: { lowM: number; highM: number } | null;
+  /** Every stored point has a position (chainage is then measured from them on save). */
+  positioned: boolean;
+  profile: { raw: { chainageM: number; elevationM: number }[]; cleaned: { chainageM: number; elevationM: number }[] };
+  plan: RoutePlanStation[];
+  proposals: RouteProposal[];
+  proposalPlaces: ProposalPlace[];
+  gpsWarning: GpsHeightWarning | null;
+}
+
+/** One page of the route's rows, by position (`seq`) along the route. */
+export interface RoutePointsPage {
+  /** Points on the route. */
+  total: number;
+  /** `seq` of the first row. */
+  offset: number;
+  /** The route's `updatedAt` the rows were read at: the version an edit of them starts from. */
+  updatedAt: string;
+  points: RoutePointView[];
+}
+
+/** Proposals asked for on the route page (smoothing, a benchmark), with their places. */
+export interface RouteProposalsAnswer {
+  proposals: RouteProposal[];
+  places: ProposalPlace[];
 }

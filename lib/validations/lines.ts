@@ -1,9 +1,24 @@
 import { z } from 'zod';
 import { nameText, safeText, uuid } from './common';
 import { LineDesignSchema } from './line-design';
-import { chainage, whole } from './numbers';
+import { chainage, positive, whole } from './numbers';
 
 export const LineParams = z.strictObject({ lineId: uuid('Line id') });
+
+/** Largest vertical exaggeration a drawing takes. */
+export const MAX_EXAGGERATION = 1000;
+
+/**
+ * `GET /api/lines/:id/report?exaggeration=auto|8`: the vertical exaggeration the screen shows (its
+ * setting: `auto`, width-independent, or a number), so the PDF draws the same one. @default auto
+ */
+export const LineReportQuerySchema = z.strictObject({
+  exaggeration: z
+    .union([z.literal('auto'), z.string().regex(/^\d{1,4}(\.\d{1,4})?$/, 'exaggeration must be auto or a number').transform(Number).pipe(positive('exaggeration', MAX_EXAGGERATION))], {
+      error: 'exaggeration must be auto or a number',
+    })
+    .default('auto'),
+});
 
 /** A chainage window of the route: both ends or neither, the end after the start. */
 const window = {

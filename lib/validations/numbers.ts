@@ -43,6 +43,11 @@ export function whole(label: string, min: number, max?: number, unit = '') {
   return between(label, min, max, unit).int(`${label} must be a whole number`);
 }
 
+/** A whole number written in an address's query (`?offset=200`): digits only, then `whole`'s range and words. */
+export function wholeInQuery(label: string, min: number, max?: number) {
+  return z.string().regex(/^\d{1,9}$/, `${label} must be a whole number`).transform(Number).pipe(whole(label, min, max));
+}
+
 /** More than zero, at most one (an efficiency, a share). */
 export const fraction = (label: string) => positive(label, 1);
 /** An hour of the day, 0 to 23. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
-import { between, chainage, elevation, finite, MAX_LENGTH_M, metres, nonNegative, positive, whole } from './numbers';
+import { between, chainage, elevation, finite, MAX_LENGTH_M, metres, nonNegative, positive, whole, wholeInQuery } from './numbers';
 
 export const RouteParams = z.strictObject({ routeId: uuid('Route id') });
 
@@ -42,6 +42,15 @@ export const SavePointsSchema = z.strictObject({
   points: z.array(RoutePointInputSchema).max(MAX_ROUTE_POINTS, `A route can hold at most ${MAX_ROUTE_POINTS} points`),
   /** The route's updatedAt the edit started from; a newer one on the server means someone else saved (409). */
   baseUpdatedAt: z.iso.datetime({ error: 'baseUpdatedAt must be an ISO date-time' }).optional(),
+  /**
+   * The stored points `points` replace, by seq: from `fromSeq` up to (not including) `toSeq`; the
+   * rest of the route stays as stored. Absent: `points` is the whole route. The route page saves
+   * the page of rows it edited this way.
+   */
+  window: z
+    .strictObject({ fromSeq: whole('fromSeq', 0, MAX_ROUTE_POINTS), toSeq: whole('toSeq', 0, MAX_ROUTE_POINTS) })
+    .refine((w) => w.toSeq >= w.fromSeq, { error: 'toSeq must not be below fromSeq', path: ['toSeq'] })
+    .optional(),
 });
 export type SavePointsInput = z.infer<typeof SavePointsSchema>;
 
@@ -80,3 +89,40 @@ export const JoinRoutesSchema = z.strictObject({
   name: nameText('Name of the joined route').optional(),
 });
 export type JoinRoutesInput = z.input<typeof JoinRoutesSchema>;
+
+/** Rows a page of the route table may ask for at once. */
+export const MAX_POINTS_PAGE = 500;
+/** Rows the route table shows and edits at once (one request each); the default page. */
+export const ROUTE_PAGE_SIZE = 50;
+
+/** `GET /api/routes/:id/points?offset=&limit=`: a page of rows by seq. */
+export const RoutePointsQuerySchema = z.strictObject({
+  offset: wholeInQuery('offset', 0, MAX_ROUTE_POINTS).default(0),
+  limit: wholeInQuery('limit', 1, MAX_POINTS_PAGE).default(ROUTE_PAGE_SIZE),
+});
+
+/** `GET /api/routes/:id/view?profilePoints=N`: the profile thinned to about N points (highs and lows on top). */
+export const RouteViewQuerySchema = z.strictObject({
+  profilePoints: wholeInQuery('profilePoints', 50, 20_000).optional(),
+});
+
+/**
+ * `GET /api/routes/:id/proposals`: a moving-median smoothing (`smoothingWindow`, by default the
+ * import's 5 points, `IMPORT_SMOOTHING_WINDOW`) or a benchmark offset (`benchmarkPoint` with
+ * `benchmarkElevationM`), never both.
+ */
+export const RouteProposalsQuerySchema = z
+  .strictObject({
+    smoothingWindow: wholeInQuery('smoothingWindow', 3, 101).optional(),
+    benchmarkPoint: wholeInQuery('benchmarkPoint', 1, MAX_ROUTE_POINTS).optional(),
+    benchmarkElevationM: z.string().regex(/^-?\d{1,5}(\.\d{1,6})?$/, 'benchmarkElevationM must be a number of metres').transform(Number).pipe(elevation('benchmarkElevationM')).optional(),
+  })
+  .transform((q, ctx): { smoothingWindow: number } | { benchmarkPoint: number; benchmarkElevationM: number } => {
+    const benchmark = q.benchmarkPoint !== undefined || q.benchmarkElevationM !== undefined;
+    if (!benchmark) return { smoothingWindow: q.smoothingWindow ?? 5 };
+    if (q.smoothingWindow !== undefined) ctx.addIssue({ code: 'custom', path: ['smoothingWindow'], message: 'Ask for smoothing or for a benchmark offset, not both' });
+    if (q.benchmarkPoint === undefined) ctx.addIssue({ code: 'custom', path: ['benchmarkPoint'], message: 'Give benchmarkPoint with benchmarkElevationM' });
+    if (q.benchmarkElevationM === undefined) ctx.addIssue({ code: 'custom', path: ['benchmarkElevationM'], message: 'Give benchmarkElevationM with benchmarkPoint' });
+    return { benchmarkPoint: q.benchmarkPoint ?? 0, benchmarkElevationM: q.benchmarkElevationM ?? 0 };
+  });
+export type RouteProposalsQuery = z.infer<typeof RouteProposalsQuerySchema>;

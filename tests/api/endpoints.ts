@@ -88,6 +88,10 @@ export const ENDPOINTS: EndpointCase[] = [
   { file: 'routes/[routeId]/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
   { file: 'routes/[routeId]/route.ts', method: 'PATCH', params: (f) => ({ routeId: f.routeId }), body: () => ({ notes: 'Walked again after the thaw.' }), expect: surveyEditors(200) },
   { file: 'routes/[routeId]/route.ts', method: 'DELETE', params: (f) => ({ routeId: f.routeId }), expect: surveyEditors(204) },
+  // The route page's reads: its view (thinned profile), pages of rows, clean-up proposed on request.
+  { file: 'routes/[routeId]/view/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
+  { file: 'routes/[routeId]/points/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
+  { file: 'routes/[routeId]/proposals/route.ts', method: 'GET', params: (f) => ({ routeId: f.routeId }), expect: teamWorkers(200) },
   {
     file: 'routes/[routeId]/points/route.ts', method: 'PUT', params: (f) => ({ routeId: f.routeId }),
     body: () => ({ points: [0, 50, 100].map((c, i) => ({ sourceSeq: null, latitude: null, longitude: null, chainageM: c, elevationM: 400 - i, label: null, heightSource: 'typed', confidenceM: null, excluded: false })) }),

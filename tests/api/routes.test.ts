@@ -113,9 +113,12 @@ describe('clean-up proposals', () => {
     const spike = before.proposals.find((p: any) => p.index === 10);
     const res = await post(cleanupRoute.POST, routeId, { accept: [spike] });
     expect(res.status).toBe(200);
-    expect(res.json.points[10].elevationM).toBeCloseTo(spike.to, 9);
-    expect(res.json.points[10].rawElevationM).toBeCloseTo(410, 9);
+    // The answer is the route's view (header, thinned profile, proposals), never its points.
+    expect(res.json.points).toBeUndefined();
     expect(res.json.proposals.map((p: any) => p.index)).not.toContain(10);
+    const after = await readRoute(surveyor, routeId);
+    expect(after.points[10].elevationM).toBeCloseTo(spike.to, 9);
+    expect(after.points[10].rawElevationM).toBeCloseTo(410, 9);
     const again = await post(cleanupRoute.POST, routeId, { accept: [spike] });
     expect(again.status).toBe(409);
     expect(again.json.error.message).toMatch(/point 11: the height changed/);
@@ -126,9 +129,10 @@ describe('clean-up proposals', () => {
     const spike = before.proposals.find((p: any) => p.index === 20);
     const res = await post(cleanupRoute.POST, routeId, { reject: [spike] });
     expect(res.status).toBe(200);
-    expect(res.json.points[20].elevationM).toBe(before.points[20].elevationM);
-    expect(res.json.points[20].dismissedChecks).toEqual(['grade-spike', 'median-outlier']);
     expect(res.json.proposals.filter((p: any) => p.index === 20)).toEqual([]);
+    const after = await readRoute(surveyor, routeId);
+    expect(after.points[20].elevationM).toBe(before.points[20].elevationM);
+    expect(after.points[20].dismissedChecks).toEqual(['grade-spike', 'median-outlier']);
   });
 
   it('a reviewer may not decide (403) and nothing changes', async () => {
@@ -142,9 +146,13 @@ describe('clean-up proposals', () => {
     const before = await readRoute(surveyor, routeId);
     const res = await post(cleanupRoute.POST, routeId, { accept: [{ kind: 'duplicate', index: 29, field: 'deleted', from: false, to: true }] });
     expect(res.status).toBe(200);
-    expect(res.json.points).toHaveLength(30);
-    expect(res.json.points[29]).toMatchObject({ excluded: true, rawElevationM: before.points[29].rawElevationM });
+    const after = await readRoute(surveyor, routeId);
+    expect(after.points).toHaveLength(30);
+    expect(after.points[29]).toMatchObject({ excluded: true, rawElevationM: before.points[29].rawElevationM });
     expect(res.json.route.lengthM).toBeCloseTo(before.points[28].chainageM, 6);
+    // The view's cleaned profile stops where the kept points do; the raw one still reaches the excluded point.
+    expect(res.json.profile.cleaned.at(-1).chainageM).toBe(after.points[28].chainageM);
+    expect(res.json.profile.raw.at(-1).chainageM).toBe(after.points[29].chainageM);
   });
 });
 
@@ -157,10 +165,11 @@ describe('editing points', () => {
     pts.splice(4, 1); // delete the fifth point
     const res = await putPoints(detail.route.id, { points: pts, baseUpdatedAt: detail.route.updatedAt });
     expect(res.status).toBe(200);
-    expect(res.json.points).toHaveLength(5);
-    expect(res.json.points[2]).toMatchObject({ elevationM: 350, rawElevationM: detail.points[2].rawElevationM, label: 'Old sheepfold' });
-    expect(res.json.points[4].rawElevationM).toBe(detail.points[5].rawElevationM);
-    expect(res.json.points[4].chainageM).toBeCloseTo(detail.points[5].chainageM, 6);
+    const saved = (await readRoute(surveyor, detail.route.id)).points;
+    expect(saved).toHaveLength(5);
+    expect(saved[2]).toMatchObject({ elevationM: 350, rawElevationM: detail.points[2].rawElevationM, label: 'Old sheepfold' });
+    expect(saved[4].rawElevationM).toBe(detail.points[5].rawElevationM);
+    expect(saved[4].chainageM).toBeCloseTo(detail.points[5].chainageM, 6);
     const stale = await putPoints(detail.route.id, { points: pts, baseUpdatedAt: detail.route.updatedAt });
     expect(stale.status).toBe(409);
   });
@@ -177,7 +186,7 @@ describe('editing points', () => {
     const awkward = 'Gate "B", {north} \\ NULL';
     const ok = await putPoints(id, { points: [p(0, 300), { ...p(80, 285), label: awkward }, p(120, 290)] });
     expect(ok.status).toBe(200);
-    expect(ok.json.points.map((x: any) => x.label)).toEqual([null, awkward, null]);
+    expect((await readRoute(surveyor, id)).points.map((x: any) => x.label)).toEqual([null, awkward, null]);
     expect(ok.json.route).toMatchObject({ pointCount: 3, lengthM: 120, sourceFormat: 'sketch' });
     expect(ok.json.route.slopeLengthM).toBeCloseTo(Math.hypot(80, 15) + Math.hypot(40, 5), 9);
     const list = await call(listRoute.GET, { method: 'GET', path: 'x', params: { projectId: f.projectId }, userId: f.users.reviewer.id });
@@ -203,7 +212,7 @@ describe('reverse, split, trim and join', () => {
     const id = await stationRoute('To reverse');
     const res = await post(reverseRoute.POST, id);
     expect(res.status).toBe(200);
-    expect(res.json.points.map((p: any) => [p.chainageM, p.elevationM])).toEqual([[0, 90], [50, 92], [100, 95], [150, 100]]);
+    expect(res.json.profile.cleaned.map((p: any) => [p.chainageM, p.elevationM])).toEqual([[0, 90], [50, 92], [100, 95], [150, 100]]);
     expect(res.json.route.lengthM).toBe(150);
   });
 
@@ -228,7 +237,7 @@ describe('reverse, split, trim and join', () => {
     const id = await stationRoute('To trim');
     const res = await post(trimRoute.POST, id, { fromChainageM: 25, toChainageM: 100 });
     expect(res.status).toBe(200);
-    expect(res.json.points.map((p: any) => [p.chainageM, p.elevationM])).toEqual([[0, 97.5], [25, 95], [75, 92]]);
+    expect((await readRoute(surveyor, id)).points.map((p: any) => [p.chainageM, p.elevationM])).toEqual([[0, 97.5], [25, 95], [75, 92]]);
   });
 
   it('joins two routes end to start into a new route, leaving both as they were', async () => {

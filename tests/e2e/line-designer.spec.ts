@@ -1,4 +1,5 @@
 import fs from 'node:fs';
+import { PDFParse } from 'pdf-parse';
 import { expect, test, type Page } from '@playwright/test';
 import { signIn, watchConsole } from './fixtures';
 
@@ -84,13 +85,34 @@ test('a reviewer can view and export the working copy but not change it', async 
   await expect(page.getByRole('button', { name: 'Save details' })).toHaveCount(0);
   await expect(page.getByLabel('Water level (m)')).toBeDisabled();
 
-  const [svg] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Profile as SVG' }).click()]);
-  const svgText = fs.readFileSync((await svg.path())!, 'utf8');
-  expect(svgText).toContain('<svg xmlns="http://www.w3.org/2000/svg"');
-  expect(svgText).toContain('data-layer="grade"');
-
-  const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'PDF report' }).click()]);
-  expect(fs.readFileSync((await pdf.path())!).subarray(0, 5).toString()).toBe('%PDF-');
+  // The exaggeration the screen prints is the one both exports draw and print: first as found (auto), then set to ×10.
+  const screenWords = () => page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]').textContent();
+  const exportedWords = async () => {
+    const [svg] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Profile as SVG' }).click()]);
+    const svgText = fs.readFileSync((await svg.path())!, 'utf8');
+    expect(svgText).toContain('<svg xmlns="http://www.w3.org/2000/svg"');
+    expect(svgText).toContain('data-layer="grade"');
+    return /data-role="exaggeration"[^>]*>([^<]*)</.exec(svgText)?.[1];
+  };
+  const pdfText = async () => {
+    const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'PDF report' }).click()]);
+    const bytes = fs.readFileSync((await pdf.path())!);
+    expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    const parser = new PDFParse({ data: new Uint8Array(bytes) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    return text;
+  };
+  const auto = await screenWords();
+  expect(auto).toMatch(/^Vertical exaggeration ×[\d.]+$/);
+  expect(await exportedWords()).toBe(auto);
+  expect(await pdfText()).toContain(auto!);
+  await page.getByLabel('Vertical exaggeration').filter({ visible: true }).selectOption('10');
+  await expect(page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]')).toHaveText('Vertical exaggeration ×10');
+  expect(await exportedWords()).toBe('Vertical exaggeration ×10');
+  expect(await page.getByRole('link', { name: 'PDF report' }).getAttribute('href')).toBe(`/api/lines/${DEMO_LINE}/report?exaggeration=10`);
+  expect(await pdfText()).toContain('Vertical exaggeration ×10');
+  await page.getByTestId('profile-chart').filter({ visible: true }).screenshot({ path: 'test-results/line-exaggeration-x10.png' });
 
   const res = await page.request.patch(`/api/lines/${DEMO_LINE}`, { data: { notes: 'Taken over' } });
   expect(res.status()).toBe(403);

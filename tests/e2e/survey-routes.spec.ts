@@ -89,6 +89,12 @@ test('a surveyor maps the columns of a long CSV, watches the progress, fixes a s
   const seen = await page.evaluate(() => (window as unknown as { progressSeen: number[] }).progressSeen);
   expect(seen.some((v) => v > 0 && v < 100)).toBe(true);
   await expect(page.getByText('The clean-up checks found 1 point to look at')).toBeVisible();
+  // The route page reads what it draws: its view and pages of rows, never the whole route.
+  const reads: string[] = [];
+  page.on('request', (request) => {
+    const url = new URL(request.url());
+    if (request.method() === 'GET' && url.pathname.startsWith('/api/routes/')) reads.push(`${url.pathname}${url.search}`);
+  });
   await page.getByRole('button', { name: 'Save route' }).click();
 
   await expect(page.getByRole('heading', { name: 'Long walk to the far trough' })).toBeVisible({ timeout: 30_000 });
@@ -99,6 +105,9 @@ test('a surveyor maps the columns of a long CSV, watches the progress, fixes a s
   await proposal.getByRole('button', { name: new RegExp(`^Point ${point} at`) }).click();
   const row = page.locator(`tr[data-point="${point}"]`);
   await expect(row.getByLabel(`Elevation of point ${point}`)).toHaveValue('340.03');
+  expect(reads.some((r) => /\/points\?offset=\d+&limit=50$/.test(r))).toBe(SPIKE_ROW >= 50);
+  expect(reads.filter((r) => /^\/api\/routes\/[0-9a-f-]{36}$/.test(r))).toEqual([]);
+  await page.screenshot({ path: 'test-results/route-page-long-walk.png', fullPage: true });
   await proposal.getByRole('button', { name: `Accept the change to point ${point}` }).click();
   await expect(page.getByText('found nothing to look at')).toBeVisible();
   await expect(page.locator('circle[data-marker="proposal"]')).toHaveCount(0);

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { NotificationSettings } from '@/components/account/notification-settings';
 import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { Panel } from '@/components/ui/panel';
@@ -7,6 +8,7 @@ import { requireUser } from '@/lib/auth/current';
 import { getNotificationPreferences } from '@/lib/notifications/preferences';
 import { notificationKeys } from '@/lib/queries/accounts';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { NotificationSettingsSkeleton } from '@/components/account/notification-settings';
 
 export const metadata: Metadata = { title: 'Your account' };
 
@@ -22,7 +24,9 @@ export default async function AccountPage() {
       </div>
       <Panel title="Mail you get">
         <HydrationBoundary state={dehydrate(queryClient)}>
-          <NotificationSettings />
+          <Suspense fallback={<NotificationSettingsSkeleton />}>
+            <NotificationSettings />
+          </Suspense>
         </HydrationBoundary>
       </Panel>
       <Panel title="Change your password">

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import Link from 'next/link';
 import { MembersTable } from '@/components/team/members-table';
 import { InvitationsTable } from '@/components/team/invitations-table';
@@ -14,6 +15,8 @@ import { can } from '@/lib/permissions';
 import { invitationKeys } from '@/lib/queries/invitations';
 import { memberKeys } from '@/lib/queries/members';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { InvitationsTableSkeleton } from '@/components/team/invitations-table';
+import { MembersTableSkeleton } from '@/components/team/members-table';
 
 export const metadata: Metadata = { title: 'Team' };
 
@@ -40,10 +43,14 @@ export default async function TeamPage() {
             <p className="mb-3 text-sm text-creek-700">People join only through an invitation: we mail them a link that works once, for 7 days.</p>
             <InviteForm teamId={team.id} />
             <h3 className="mb-2 mt-5 text-sm font-semibold text-creek-900">Waiting for an answer</h3>
-            <InvitationsTable teamId={team.id} />
+            <Suspense fallback={<InvitationsTableSkeleton />}>
+              <InvitationsTable teamId={team.id} />
+            </Suspense>
           </Panel>
         )}
-        <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
+        <Suspense fallback={<MembersTableSkeleton />}>
+          <MembersTable teamId={team.id} manage={manage} selfId={user.id} />
+        </Suspense>
       </HydrationBoundary>
       <Panel title="Pipe prices">
         <p className="text-sm text-creek-700">

@@ -8,6 +8,9 @@ import type { UnitSystem } from '@/lib/units';
 import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface AddPointFormProps {
+  /** Place along the route of the page's first row: a point goes in among the page's rows. */
+  offset?: number;
+  /** Rows on the page. */
   count: number;
   units: UnitSystem;
   positioned: boolean;
@@ -17,7 +20,7 @@ export interface AddPointFormProps {
 const num = (v: FormDataEntryValue | null) => typedNumber(String(v ?? ''));
 
 /** Adds a station: by position on a walked route, by chainage on a station profile. */
-export function AddPointForm({ count, units, positioned, dispatch }: AddPointFormProps) {
+export function AddPointForm({ offset = 0, count, units, positioned, dispatch }: AddPointFormProps) {
   const [error, setError] = useState<string | null>(null);
   const u = unitOf('length', units);
   function onSubmit(e: FormEvent<HTMLFormElement>) {
@@ -28,14 +31,16 @@ export function AddPointForm({ count, units, positioned, dispatch }: AddPointFor
     const lat = num(form.get('lat'));
     const lon = num(form.get('lon'));
     const chainage = num(form.get('chainage'));
-    if (!Number.isInteger(after) || after < 0 || after > count) return setError(`“After point” must be a whole number from 0 to ${count}`);
+    if (!Number.isInteger(after) || after < offset || after > offset + count) {
+      return setError(`“After point” must be a whole number from ${offset} to ${offset + count}${offset > 0 || count > 0 ? ' (the points on this page)' : ''}`);
+    }
     if (!Number.isFinite(elevation)) return setError('Give the elevation');
     if (positioned && (!(Math.abs(lat) <= 90) || !(Math.abs(lon) <= 180))) return setError('Give a latitude (−90 to 90) and longitude (−180 to 180)');
     if (!positioned && !(chainage >= 0)) return setError('Give a chainage of zero or more');
     setError(null);
     dispatch({
       type: 'insert',
-      at: after,
+      at: after - offset,
       point: {
         latitude: positioned ? lat : null,
         longitude: positioned ? lon : null,
@@ -52,7 +57,7 @@ export function AddPointForm({ count, units, positioned, dispatch }: AddPointFor
   const input = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1 text-sm';
   return (
     <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3 text-sm" aria-label="Add a point" noValidate>
-      <label>After point<input key={count} name="after" defaultValue={count} inputMode="numeric" className={input} /></label>
+      <label>After point<input key={offset + count} name="after" defaultValue={offset + count} inputMode="numeric" className={input} /></label>
       {positioned ? (
         <>
           <label>Latitude<input name="lat" inputMode="decimal" className={input} /></label>

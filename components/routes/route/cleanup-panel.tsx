@@ -1,13 +1,12 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { fromDisplay, unitOf } from '@/lib/units';
-import { useCleanupDecision } from '@/lib/queries/routes';
-import { benchmarkProposals, smoothingProposals } from '@/lib/routes/proposals';
-import type { RouteDetail, RouteProposal } from '@/lib/routes/types';
+import { useCleanupDecision, useProposeCleanup } from '@/lib/queries/routes';
+import type { RouteProposal, RouteProposalsAnswer, RouteView } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
 import { ProposalItem } from './proposal-item';
 import { typedNumber } from '@/lib/units/decimal-mark-store';
@@ -15,7 +14,7 @@ import { useSearchParams } from 'next/navigation';
 import { IMPORT_SMOOTHING_WINDOW } from '@/lib/import/protocol';
 
 export interface CleanupPanelProps {
-  detail: RouteDetail;
+  view: RouteView;
   units: UnitSystem;
   editable: boolean;
   /** Unsaved table edits: decisions wait until they are saved or discarded. */
@@ -29,14 +28,41 @@ const SHOWN = 200;
  * What the checks found, and smoothing or a benchmark offset on request, each change listed for
  * the user to accept or reject. Nothing changes a height without an accept.
  */
-export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: CleanupPanelProps) {
-  const decide = useCleanupDecision(detail.route.projectId, detail.route.id);
+export function CleanupPanel({ view, units, editable, blocked, onShowPoint }: CleanupPanelProps) {
+  const decide = useCleanupDecision(view.route.projectId, view.route.id);
+  // Smoothing and benchmark offsets are worked out by the server over the whole stored route.
+  const propose$ = useProposeCleanup(view.route.id);
   // An import of a consumer-GPS walk may ask for smoothing to be proposed straight away.
   const proposedOnImport = useSearchParams().get('propose') === 'smoothing' && editable;
-  const [requested, setRequested] = useState<RouteProposal[]>(() => (proposedOnImport ? smoothingProposals(detail.points, IMPORT_SMOOTHING_WINDOW) : []));
+  const [requested, setRequestedAnswer] = useState<RouteProposalsAnswer>({ proposals: [], places: [] });
   const [message, setMessage] = useState<string | null>(null);
-  const chainage = new Map(detail.points.map((p) => [p.seq, p.chainageM]));
+  const chainage = new Map<number, number>();
+  view.proposals.forEach((p, i) => chainage.set(p.index, view.proposalPlaces[i].chainageM));
+  requested.proposals.forEach((p, i) => chainage.set(p.index, requested.places[i].chainageM));
   const u = unitOf('length', units);
+  const setRequested = (keep: (r: RouteProposal[]) => RouteProposal[]) =>
+    setRequestedAnswer((answer) => {
+      const kept = new Set(keep(answer.proposals));
+      const at = answer.proposals.flatMap((p, i) => (kept.has(p) ? [i] : []));
+      return { proposals: at.map((i) => answer.proposals[i]), places: at.map((i) => answer.places[i]) };
+    });
+
+  async function ask(request: Parameters<typeof propose$.mutateAsync>[0]) {
+    try {
+      setRequestedAnswer(await propose$.mutateAsync(request));
+      setMessage(null);
+    } catch (error) {
+      setMessage(error instanceof Error ? error.message : 'Could not propose that.');
+    }
+  }
+  const askedOnImport = useRef(false);
+  useEffect(() => {
+    if (!proposedOnImport || askedOnImport.current) return;
+    askedOnImport.current = true;
+    void ask({ smoothingWindow: IMPORT_SMOOTHING_WINDOW });
+    // Asked once, when the page opens from an import.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [proposedOnImport]);
 
   async function send(accept: RouteProposal[], reject: RouteProposal[]) {
     setMessage(null);
@@ -52,16 +78,22 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
   function propose(e: FormEvent<HTMLFormElement>, kind: 'smoothing' | 'benchmark') {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
+    const whole = (name: string, what: string) => {
+      const n = typedNumber(String(form.get(name) ?? ''));
+      if (!Number.isInteger(n) || n < 1) throw new Error(`${what} must be a whole number of 1 or more`);
+      return n;
+    };
     try {
-      if (kind === 'smoothing') setRequested(smoothingProposals(detail.points, Number(form.get('window'))));
-      else setRequested(benchmarkProposals(detail.points, Number(form.get('benchmark-point')) - 1, fromDisplay('length', typedNumber(String(form.get('benchmark-elevation'))), units)));
-      setMessage(null);
+      if (kind === 'smoothing') return void ask({ smoothingWindow: whole('window', 'The window') });
+      const elevationM = fromDisplay('length', typedNumber(String(form.get('benchmark-elevation') ?? '')), units);
+      if (!Number.isFinite(elevationM)) throw new Error('Give the known elevation');
+      void ask({ benchmarkPoint: whole('benchmark-point', 'The point'), benchmarkElevationM: Number(elevationM.toFixed(6)) });
     } catch (error) {
-      setMessage(error instanceof Error ? error.message.replace(/^[\w.]+(\[\d+\])?: /, '') : 'Could not propose that.');
+      setMessage(error instanceof Error ? error.message : 'Could not propose that.');
     }
   }
 
-  const disabled = blocked || decide.isPending;
+  const disabled = blocked || decide.isPending || propose$.isPending;
   const list = (items: RouteProposal[]) => (
     <ul>
       {items.slice(0, SHOWN).map((p) => (
@@ -73,12 +105,12 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
   return (
     <Panel title="Clean-up" aside={<span className="text-xs text-creek-600">The surveyed heights are always kept.</span>}>
       {blocked && editable && <p className="mb-2 text-sm text-ochre-700">Save or discard your table edits before deciding on clean-ups.</p>}
-      {detail.proposals.length === 0 ? (
+      {view.proposals.length === 0 ? (
         <p className="text-sm text-creek-700">The checks (spikes, outliers, duplicates, points out of order) found nothing to look at.</p>
       ) : (
         <>
-          <h3 className="text-sm font-medium text-creek-900">Found by the checks ({detail.proposals.length})</h3>
-          {list(detail.proposals)}
+          <h3 className="text-sm font-medium text-creek-900">Found by the checks ({view.proposals.length})</h3>
+          {list(view.proposals)}
         </>
       )}
       {editable && (
@@ -94,7 +126,7 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
           </form>
         </div>
       )}
-      {requested.length > 0 && (
+      {requested.proposals.length > 0 && (
         <div className="mt-3">
           {proposedOnImport && (
             <p className="mb-2 text-sm text-creek-700" data-testid="import-smoothing-note">
@@ -102,11 +134,11 @@ export function CleanupPanel({ detail, units, editable, blocked, onShowPoint }: 
             </p>
           )}
           <div className="flex flex-wrap items-center gap-3">
-            <h3 className="text-sm font-medium text-creek-900">Requested ({requested.length} changes)</h3>
-            <Button className="px-2.5 py-1" disabled={disabled} onClick={() => send(requested, [])}>Accept all {requested.length}</Button>
-            <Button tone="quiet" className="px-2.5 py-1" onClick={() => setRequested([])}>Discard</Button>
+            <h3 className="text-sm font-medium text-creek-900">Requested ({requested.proposals.length} changes)</h3>
+            <Button className="px-2.5 py-1" disabled={disabled} onClick={() => send(requested.proposals, [])}>Accept all {requested.proposals.length}</Button>
+            <Button tone="quiet" className="px-2.5 py-1" onClick={() => setRequested(() => [])}>Discard</Button>
           </div>
-          {list(requested)}
+          {list(requested.proposals)}
         </div>
       )}
       <div className="mt-2"><FormMessage message={message} /></div>

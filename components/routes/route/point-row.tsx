@@ -10,8 +10,12 @@ import { NumberCell } from './number-cell';
 
 export interface PointRowProps {
   point: DraftPoint;
+  /** Place of the row along the route (0-based) and the route's point count. */
   index: number;
   count: number;
+  /** First or last row of the page: a point moves only within the page being edited. */
+  firstOnPage?: boolean;
+  lastOnPage?: boolean;
   units: UnitSystem;
   editable: boolean;
   positioned: boolean;
@@ -22,7 +26,7 @@ export interface PointRowProps {
 const show = (m: number | null, units: UnitSystem) => (m === null ? null : toDisplay('length', m, units));
 
 /** One station in the points table: read-only for readers, edit controls for surveyors. */
-export function PointRow({ point: p, index, count, units, editable, positioned, hasProposal, dispatch }: PointRowProps) {
+export function PointRow({ point: p, index, count, firstOnPage = false, lastOnPage = false, units, editable, positioned, hasProposal, dispatch }: PointRowProps) {
   const n = index + 1;
   const changed = p.rawElevationM !== null && Math.abs(p.rawElevationM - p.elevationM) > 0.005;
   const edit = (patch: Extract<DraftAction, { type: 'edit' }>['patch']) => dispatch({ type: 'edit', key: p.key, patch });
@@ -65,8 +69,8 @@ export function PointRow({ point: p, index, count, units, editable, positioned, 
       </td>
       {editable && (
         <td className="whitespace-nowrap px-2 py-1 text-xs">
-          <button type="button" aria-label={`Move point ${n} up`} disabled={index === 0} onClick={() => dispatch({ type: 'move', key: p.key, by: -1 })} className="px-1 disabled:opacity-30">↑</button>
-          <button type="button" aria-label={`Move point ${n} down`} disabled={index === count - 1} onClick={() => dispatch({ type: 'move', key: p.key, by: 1 })} className="px-1 disabled:opacity-30">↓</button>
+          <button type="button" aria-label={`Move point ${n} up`} disabled={index === 0 || firstOnPage} onClick={() => dispatch({ type: 'move', key: p.key, by: -1 })} className="px-1 disabled:opacity-30">↑</button>
+          <button type="button" aria-label={`Move point ${n} down`} disabled={index === count - 1 || lastOnPage} onClick={() => dispatch({ type: 'move', key: p.key, by: 1 })} className="px-1 disabled:opacity-30">↓</button>
           <button type="button" aria-label={`Delete point ${n}`} onClick={(e) => removeKeepingFocus(e.currentTarget, () => dispatch({ type: 'delete', key: p.key }))} className="px-1 text-clay-600">✕</button>
         </td>
       )}

@@ -7,25 +7,29 @@ import { AddPointForm } from './add-point-form';
 import { PointRow } from './point-row';
 import { ScrollFrame } from '@/components/ui/table-frame';
 
-export const PAGE_SIZE = 50;
-
 export interface PointsTableProps {
+  /** The page of rows, as edited. */
   points: readonly DraftPoint[];
+  /** Place along the route (seq) of the page's first row. */
+  offset: number;
+  /** Points on the whole route, with this page's edits. */
+  total: number;
   units: UnitSystem;
   editable: boolean;
   positioned: boolean;
   /** Source seqs with a pending clean-up proposal, highlighted. */
   flagged: ReadonlySet<number>;
   page: number;
+  pageCount: number;
   onPage: (page: number) => void;
+  /** Why the pages cannot be turned now (unsaved edits on this one), or null. */
+  pagingBlocked: string | null;
   dispatch: (action: DraftAction) => void;
 }
 
-/** The route's stations, a page at a time, with cleaned and surveyed heights side by side. */
-export function PointsTable({ points, units, editable, positioned, flagged, page, onPage, dispatch }: PointsTableProps) {
-  const pages = Math.max(1, Math.ceil(points.length / PAGE_SIZE));
-  const current = Math.min(page, pages - 1);
-  const start = current * PAGE_SIZE;
+/** The route's stations, a page at a time as read from the server, with cleaned and surveyed heights side by side. */
+export function PointsTable({ points, offset, total, units, editable, positioned, flagged, page, pageCount, onPage, pagingBlocked, dispatch }: PointsTableProps) {
+  const current = Math.min(page, pageCount - 1);
   const u = unitOf('length', units);
   return (
     <div className="space-y-3">
@@ -45,12 +49,14 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
             </tr>
           </thead>
           <tbody>
-            {points.slice(start, start + PAGE_SIZE).map((p, i) => (
+            {points.map((p, i) => (
               <PointRow
                 key={p.key}
                 point={p}
-                index={start + i}
-                count={points.length}
+                index={offset + i}
+                count={total}
+                firstOnPage={i === 0}
+                lastOnPage={i === points.length - 1}
                 units={units}
                 editable={editable}
                 positioned={positioned}
@@ -64,14 +70,15 @@ export function PointsTable({ points, units, editable, positioned, flagged, page
           </tbody>
         </table>
       </ScrollFrame>
-      {pages > 1 && (
-        <nav aria-label="Pages of points" className="flex items-center gap-2 text-sm">
-          <button type="button" onClick={() => onPage(current - 1)} disabled={current === 0} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Previous</button>
-          <span className="tabular">Points {start + 1}–{Math.min(points.length, start + PAGE_SIZE)} of {formatNumber(points.length, 0)}</span>
-          <button type="button" onClick={() => onPage(current + 1)} disabled={current >= pages - 1} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Next</button>
+      {pageCount > 1 && (
+        <nav aria-label="Pages of points" className="flex flex-wrap items-center gap-2 text-sm">
+          <button type="button" onClick={() => onPage(current - 1)} disabled={current === 0 || pagingBlocked !== null} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Previous</button>
+          <span className="tabular">Points {formatNumber(offset + 1, 0)}–{formatNumber(offset + points.length, 0)} of {formatNumber(total, 0)}</span>
+          <button type="button" onClick={() => onPage(current + 1)} disabled={current >= pageCount - 1 || pagingBlocked !== null} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Next</button>
+          {pagingBlocked && <span className="text-xs text-ochre-700" role="status">{pagingBlocked}</span>}
         </nav>
       )}
-      {editable && <AddPointForm count={points.length} units={units} positioned={positioned} dispatch={dispatch} />}
+      {editable && <AddPointForm offset={offset} count={points.length} units={units} positioned={positioned} dispatch={dispatch} />}
     </div>
   );
 }

@@ -1,18 +1,20 @@
 'use client';
 
 import { LoadError } from '@/components/ui/load-error';
-import { useQuery } from '@tanstack/react-query';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useMemo, useRef, useState } from 'react';
-import { Panel, Skeleton } from '@/components/ui/panel';
+import { Panel } from '@/components/ui/panel';
 import { CommentsPanel } from '@/components/reviews/comments-panel';
 import { useCommentThreads } from '@/components/reviews/use-comment-threads';
-import { routeDetailQuery } from '@/lib/queries/routes';
+import { ROUTE_PAGE_SIZE, routePointsQuery, routeViewQuery } from '@/lib/queries/routes';
+import { keptDraftOffset } from '@/lib/routes/kept-drafts';
 import { routeAnchorChoices } from '@/lib/review/anchor-choices';
 import type { CommentRecord } from '@/lib/review/comment-types';
 import { pinsOf, routePinChainage } from '@/lib/review/threads';
 import { formatQuantity, fromDisplay, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
 import { UnitNumberInput } from '@/components/lines/unit-number-input';
 import { RouteWorkspace } from './route-workspace';
+import { RouteEditorSkeleton } from './route-editor-skeleton';
 
 export interface RouteEditorProps {
   projectId: string;
@@ -26,20 +28,27 @@ export interface RouteEditorProps {
   members: { id: string; name: string }[];
 }
 
-/** The route page: its data from the query cache, a fresh workspace each time the server's copy changes, and the comments pinned on the route. */
+/**
+ * The route page: the route's view (header, thinned profile, plan, proposals) and one page of its
+ * rows, each read from the server as needed; a fresh workspace each time the server's rows change;
+ * the comments pinned on the route.
+ */
 export function RouteEditor({ projectId, routeId, units, editable, canComment, canCommentAnywhere, members }: RouteEditorProps) {
-  const { data, isError, refetch } = useQuery(routeDetailQuery(routeId));
+  const view = useQuery(routeViewQuery(routeId));
   const [sketchArea, setSketchArea] = useState({ lengthM: 1000, lowM: 0, highM: 100 });
-  // Kept here so the table stays on its page when a decision brings a new version of the route.
-  const [page, setPage] = useState(0);
+  // Kept here so the table stays on its page when a decision brings a new version of the route;
+  // edits left unsaved on a page bring the table back to that page.
+  const [page, setPage] = useState(() => Math.floor((keptDraftOffset(routeId) ?? 0) / ROUTE_PAGE_SIZE));
+  const rows = useQuery({ ...routePointsQuery(routeId, page * ROUTE_PAGE_SIZE), placeholderData: keepPreviousData });
+  const data = view.data;
   const [pickedM, setPickedM] = useState<number | null>(null);
   const comments = useCommentThreads(projectId, null, [{ kind: 'route', routeId }, { kind: 'project' }]);
   const pins = useMemo(() => pinsOf(comments.threads, (c) => routePinChainage(c, routeId), comments.selectedId), [comments.threads, comments.selectedId, routeId]);
   const topRef = useRef<HTMLDivElement>(null);
-  if (isError) {
-    return <LoadError what="The route" onRetry={() => void refetch()} />;
+  if (view.isError || rows.isError) {
+    return <LoadError what="The route" onRetry={() => void (view.isError ? view.refetch() : rows.refetch())} />;
   }
-  if (!data) return <Skeleton className="h-96 w-full" />;
+  if (!data || !rows.data) return <RouteEditorSkeleton />;
 
   function jumpToComment(comment: CommentRecord) {
     comments.setSelectedId(comment.id);
@@ -50,8 +59,10 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
     <div className="space-y-5">
       <div ref={topRef} className="scroll-mt-4" />
       <RouteWorkspace
-        key={data.route.updatedAt}
-        detail={data}
+        key={`${rows.data.updatedAt}:${rows.data.offset}`}
+        view={data}
+        rows={rows.data}
+        loadingPage={rows.isPlaceholderData}
         units={units}
         editable={editable}
         sketchArea={sketchArea}

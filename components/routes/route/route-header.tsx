@@ -5,21 +5,19 @@ import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { formatNumber, formatQuantity } from '@/lib/units';
 import { routeSourceUrl, useUpdateRoute } from '@/lib/queries/routes';
-import type { RouteDetail } from '@/lib/routes/types';
+import type { RouteView } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
 import { FORMAT_LABELS } from '../format-labels';
 
 const kb = (bytes: number) => (bytes < 1024 * 1024 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / (1024 * 1024), 1)} MB`);
 
 /** Name, the route's numbers, and the original file to download again. */
-export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; units: UnitSystem; editable: boolean }) {
-  const r = detail.route;
+export function RouteHeader({ view, units, editable }: { view: RouteView; units: UnitSystem; editable: boolean }) {
+  const r = view.route;
   const rename = useUpdateRoute(r.projectId, r.id);
   const [editing, setEditing] = useState(false);
   const [error, setError] = useState<string | null>(null);
-  const kept = detail.points.filter((p) => !p.excluded);
-  const low = kept.reduce((m, p) => Math.min(m, p.elevationM), Infinity);
-  const high = kept.reduce((m, p) => Math.max(m, p.elevationM), -Infinity);
+  const heights = view.heightRangeM;
 
   async function onRename(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -53,7 +51,7 @@ export function RouteHeader({ detail, units, editable }: { detail: RouteDetail; 
         <div><dt className="text-creek-600">Points</dt><dd className="tabular font-medium">{formatNumber(r.pointCount, 0)}</dd></div>
         <div><dt className="text-creek-600">Length</dt><dd className="tabular font-medium">{formatQuantity('length', r.lengthM, units)}</dd></div>
         <div><dt className="text-creek-600">Along the ground</dt><dd className="tabular font-medium">{formatQuantity('length', r.slopeLengthM, units)}</dd></div>
-        <div><dt className="text-creek-600">Heights</dt><dd className="tabular font-medium">{kept.length > 0 ? `${formatQuantity('elevation', low, units)} – ${formatQuantity('elevation', high, units)}` : '—'}</dd></div>
+        <div><dt className="text-creek-600">Heights</dt><dd className="tabular font-medium">{heights ? `${formatQuantity('elevation', heights.lowM, units)} – ${formatQuantity('elevation', heights.highM, units)}` : '—'}</dd></div>
         <div>
           <dt className="text-creek-600">From</dt>
           <dd className="font-medium">

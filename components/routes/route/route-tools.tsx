@@ -10,12 +10,12 @@ import { FormMessage } from '@/components/ui/form-message';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/units';
 import { projectRoutesQuery, useDeleteRoute, useJoinRoutes, useReverseRoute, useSplitRoute, useTrimRoute } from '@/lib/queries/routes';
-import type { RouteDetail } from '@/lib/routes/types';
+import type { RouteView } from '@/lib/routes/types';
 import type { UnitSystem } from '@/lib/units';
 import { typedNumber } from '@/lib/units/decimal-mark-store';
 
 export interface RouteToolsProps {
-  detail: RouteDetail;
+  view: RouteView;
   units: UnitSystem;
   blocked: boolean;
 }
@@ -24,9 +24,9 @@ const field = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1';
 const num = (form: FormData, name: string) => typedNumber(String(form.get(name) ?? ''));
 
 /** Reverse, split, trim, join and delete: each one transaction on the server. */
-export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
+export function RouteTools({ view, units, blocked }: RouteToolsProps) {
   const router = useRouter();
-  const { id, projectId } = detail.route;
+  const { id, projectId } = view.route;
   const routes = useQuery(projectRoutesQuery(projectId)).data ?? [];
   const reverse = useReverseRoute(projectId, id);
   const split = useSplitRoute(projectId, id);
@@ -36,7 +36,7 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
   const confirm = useConfirm();
   const [message, setMessage] = useState<{ text: string; tone: 'ok' | 'error' } | null>(null);
   const u = unitOf('length', units);
-  const lengthShown = toDisplay('length', detail.route.lengthM, units);
+  const lengthShown = toDisplay('length', view.route.lengthM, units);
   const busy = blocked || reverse.isPending || split.isPending || trim.isPending || join.isPending || remove.isPending;
 
   async function run(work: () => Promise<unknown>, done: string) {
@@ -77,32 +77,32 @@ export function RouteTools({ detail, units, blocked }: RouteToolsProps) {
       {blocked && <p className="mb-2 text-sm text-ochre-700">Save or discard your table edits first.</p>}
       <div className="grid gap-4 text-sm md:grid-cols-2">
         <div className="space-y-1">
-          <Button tone="quiet" disabled={busy || detail.points.length < 2} onClick={() => run(() => reverse.mutateAsync(), 'Reversed: the route now runs the other way.')}>Reverse the route</Button>
+          <Button tone="quiet" disabled={busy || view.route.pointCount < 2} onClick={() => run(() => reverse.mutateAsync(), 'Reversed: the route now runs the other way.')}>Reverse the route</Button>
           <p className="text-xs text-creek-600">For a walk recorded from the tank up to the spring.</p>
         </div>
         <form onSubmit={onSplit} className="flex flex-wrap items-end gap-2" aria-label="Split">
           <label>Split at chainage ({u})<input name="split-at" inputMode="decimal" className={field} placeholder={(lengthShown / 2).toFixed(0)} /></label>
-          <Button type="submit" tone="quiet" disabled={busy || detail.points.length < 2}>Split</Button>
+          <Button type="submit" tone="quiet" disabled={busy || view.route.pointCount < 2}>Split</Button>
         </form>
         <form onSubmit={onTrim} className="flex flex-wrap items-end gap-2" aria-label="Trim">
           <label>Keep from ({u})<input name="trim-from" inputMode="decimal" defaultValue="0" className={field} /></label>
           <label>to ({u})<input name="trim-to" inputMode="decimal" defaultValue={lengthShown.toFixed(1)} className={field} /></label>
-          <Button type="submit" tone="quiet" disabled={busy || detail.points.length < 2}>Trim</Button>
+          <Button type="submit" tone="quiet" disabled={busy || view.route.pointCount < 2}>Trim</Button>
         </form>
         <form onSubmit={onJoin} className="flex flex-wrap items-end gap-2" aria-label="Join">
           <label>Join onto the end<select name="join-other" className="mt-1 block w-48 rounded-md border border-creek-200 px-2 py-1">
             {routes.filter((r) => r.id !== id && r.pointCount >= 2).map((r) => <option key={r.id} value={r.id}>{r.name} ({formatQuantity('length', r.lengthM, units, 0)})</option>)}
           </select></label>
           <label>Gap ({u}, optional)<input name="join-gap" inputMode="decimal" className={field} placeholder="measured" /></label>
-          <Button type="submit" tone="quiet" disabled={busy || routes.length < 2 || detail.points.length < 2}>Join</Button>
+          <Button type="submit" tone="quiet" disabled={busy || routes.length < 2 || view.route.pointCount < 2}>Join</Button>
         </form>
       </div>
       <div className="mt-4 flex flex-wrap items-center gap-3 border-t border-creek-100 pt-3">
         <Button tone="danger" disabled={busy} onClick={() => confirm.ask({
-          title: `Delete the route “${detail.route.name}”?`,
+          title: `Delete the route “${view.route.name}”?`,
           body: (
             <>
-              <p>The route goes with its {detail.points.length} {detail.points.length === 1 ? 'point' : 'points'} and their clean-up. Photos placed along it stay in the project, no longer placed on a route.</p>
+              <p>The route goes with its {view.route.pointCount} {view.route.pointCount === 1 ? 'point' : 'points'} and their clean-up. Photos placed along it stay in the project, no longer placed on a route.</p>
               <LinesOnRoute projectId={projectId} routeId={id} />
               <p>A ram site whose delivery pipe follows this route loses that length; type it on the Lift &amp; storage page. This cannot be undone.</p>
             </>

@@ -9,22 +9,27 @@ import { formatQuantity } from '@/lib/units';
 import { useRoutePhotos } from '@/lib/queries/photos';
 import { useSavePoints } from '@/lib/queries/routes';
 import { draftFromPoints, draftReducer, draftToSaveInput } from '@/lib/routes/draft';
-import { routeProfileSeries } from '@/lib/routes/profile-series';
+import { routeProfileSeries, withPageEdits } from '@/lib/routes/profile-series';
 import { keepDraft, keptDraft } from '@/lib/routes/kept-drafts';
 import { useLeaveWarning } from '@/components/ui/use-leave-warning';
-import type { RouteDetail } from '@/lib/routes/types';
+import type { RoutePointsPage, RouteView } from '@/lib/routes/types';
 import { displayUnits, type UnitSystem } from '@/lib/units';
 import type { ProfilePin } from '@/lib/chart/profile-types';
 import { GpsWarningBanner } from '../gps-warning-banner';
 import { RouteProfile } from '../route-profile';
 import { CleanupPanel } from './cleanup-panel';
-import { PAGE_SIZE, PointsTable } from './points-table';
+import { ROUTE_PAGE_SIZE } from '@/lib/queries/routes';
+import { PointsTable } from './points-table';
 import { RouteHeader } from './route-header';
 import { RouteTools } from './route-tools';
 import { SketchAreaForm, type SketchArea } from './sketch-area-form';
 
 export interface RouteWorkspaceProps {
-  detail: RouteDetail;
+  view: RouteView;
+  /** The page of rows shown and edited (the draft covers these rows only). */
+  rows: RoutePointsPage;
+  /** Another page is being read; the rows shown are the last page's. */
+  loadingPage?: boolean;
   units: UnitSystem;
   editable: boolean;
   sketchArea: SketchArea;
@@ -36,45 +41,55 @@ export interface RouteWorkspaceProps {
   onPick?: (chainageM: number) => void;
 }
 
-/** One version of the route as the server has it, with the user's unsaved edits on top. */
-export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
-  const routeId = detail.route.id;
-  const baseUpdatedAt = detail.route.updatedAt;
+/**
+ * One version of the route as the server has it: its view (header, thinned profile, plan, proposals)
+ * and one page of its rows, with the user's unsaved edits of that page on top. A save replaces the
+ * page's stored rows only (the route is measured again whole on the server).
+ */
+export function RouteWorkspace({ view, rows, loadingPage = false, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
+  const routeId = view.route.id;
+  const baseUpdatedAt = rows.updatedAt;
+  const offset = rows.offset;
   // Edits left unsaved when the person went to another section of the project come back.
-  const [restored] = useState(() => keptDraft(routeId, baseUpdatedAt) !== null);
-  const [draft, dispatch] = useReducer(draftReducer, detail.points, (points) => keptDraft(routeId, baseUpdatedAt) ?? draftFromPoints(points));
-  useEffect(() => keepDraft(routeId, baseUpdatedAt, draft), [routeId, baseUpdatedAt, draft]);
+  const [restored] = useState(() => keptDraft(routeId, baseUpdatedAt, offset) !== null);
+  const [draft, dispatch] = useReducer(draftReducer, rows.points, (points) => keptDraft(routeId, baseUpdatedAt, offset) ?? draftFromPoints(points));
+  useEffect(() => keepDraft(routeId, baseUpdatedAt, draft, offset), [routeId, baseUpdatedAt, draft, offset]);
   useLeaveWarning(editable && draft.dirty);
   const [message, setMessage] = useState<string | null>(null);
   const [planHoverM, setPlanHoverM] = useState<number | null>(null);
-  const photos = useRoutePhotos(detail.route.projectId, detail.route.id);
-  const planStations = useMemo(
-    () => detail.points.filter((p) => !p.excluded && p.latitude !== null && p.longitude !== null).map((p) => ({ chainageM: p.chainageM, latitudeDeg: p.latitude!, longitudeDeg: p.longitude! })),
-    [detail.points],
-  );
-  const save = useSavePoints(detail.route.projectId, detail.route.id);
-  const positioned = detail.points.length > 0 && detail.points.every((p) => p.latitude !== null && p.longitude !== null);
-  const sketching = editable && detail.points.length === 0;
-  const flagged = new Set(detail.proposals.map((p) => p.index));
+  const photos = useRoutePhotos(view.route.projectId, view.route.id);
+  const planStations = view.plan;
+  const save = useSavePoints(view.route.projectId, view.route.id);
+  const positioned = view.positioned;
+  const sketching = editable && view.route.pointCount === 0;
+  const flagged = new Set(view.proposals.map((p) => p.index));
   const placed = draft.points.filter((p) => p.chainageM !== null);
-  const { raw, cleaned } = routeProfileSeries(draft.points);
-  const bySeq = new Map(detail.points.map((p) => [p.seq, p]));
-  const markers = detail.proposals.flatMap((c) => {
-    const p = bySeq.get(c.index);
-    return p ? [{ chainageM: p.chainageM, elevationM: p.rawElevationM, label: `Point ${c.index + 1}: ${c.reason}` }] : [];
-  });
+  // The chart is the server's thinned profile; an unsaved edit of this page shows on it at once.
+  const { raw, cleaned } = useMemo(() => {
+    if (!draft.dirty) return view.profile;
+    const span = rows.points.length > 0 ? { fromM: rows.points[0].chainageM, toM: rows.points[rows.points.length - 1].chainageM } : null;
+    const edited = routeProfileSeries(draft.points);
+    return { raw: withPageEdits(view.profile.raw, span, edited.raw), cleaned: withPageEdits(view.profile.cleaned, span, edited.cleaned) };
+  }, [draft.dirty, draft.points, rows.points, view.profile]);
+  const markers = view.proposals.map((c, i) => ({ chainageM: view.proposalPlaces[i].chainageM, elevationM: view.proposalPlaces[i].rawElevationM, label: `Point ${c.index + 1}: ${c.reason}` }));
+  const pageCount = Math.max(1, Math.ceil(rows.total / ROUTE_PAGE_SIZE));
 
   function showPoint(seq: number) {
-    const i = draft.points.findIndex((p) => p.sourceSeq === seq);
-    if (i < 0) return;
-    onPage(Math.floor(i / PAGE_SIZE));
-    requestAnimationFrame(() => document.querySelector(`[data-point="${i + 1}"]`)?.scrollIntoView({ block: 'center', behavior: 'smooth' }));
+    // seq is the point's place along the stored route, so its page is known without reading it.
+    if (!draft.dirty) onPage(Math.floor(seq / ROUTE_PAGE_SIZE));
+    let tries = 0;
+    const find = () => {
+      const row = document.querySelector(`[data-point="${seq + 1}"]`);
+      if (row) row.scrollIntoView({ block: 'center', behavior: 'smooth' });
+      else if (++tries < 30) setTimeout(find, 100);
+    };
+    requestAnimationFrame(find);
   }
 
   async function onSave() {
     setMessage(null);
     try {
-      await save.mutateAsync({ points: draftToSaveInput(draft.points), baseUpdatedAt: detail.route.updatedAt });
+      await save.mutateAsync({ points: draftToSaveInput(draft.points), baseUpdatedAt, window: { fromSeq: offset, toSeq: offset + rows.points.length } });
     } catch (error) {
       setMessage(error instanceof Error ? error.message : 'Not saved.');
     }
@@ -82,8 +97,8 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
 
   return (
     <div className="space-y-5">
-      <RouteHeader detail={detail} units={units} editable={editable} />
-      {detail.gpsWarning && <GpsWarningBanner units={units} warning={detail.gpsWarning} />}
+      <RouteHeader view={view} units={units} editable={editable} />
+      {view.gpsWarning && <GpsWarningBanner units={units} warning={view.gpsWarning} />}
       <Panel title="Ground profile">
         {sketching && <div className="mb-3"><SketchAreaForm area={sketchArea} units={units} onChange={onSketchArea} /></div>}
         {placed.length > 0 || sketching ? (
@@ -93,7 +108,7 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
             cleaned={cleaned}
             markers={markers}
             units={units}
-            title={`Ground profile of ${detail.route.name}`}
+            title={`Ground profile of ${view.route.name}`}
             pins={pins}
             onPick={onPick}
             sketch={sketching ? { ...sketchArea, onAdd: (chainageM, elevationM) => dispatch({ type: 'sketch', chainageM: Math.max(0, chainageM), elevationM, heightSource: 'map' }) } : undefined}
@@ -109,28 +124,41 @@ export function RouteWorkspace({ detail, units, editable, sketchArea, onSketchAr
         ) : (
           <p className="text-sm text-creek-700">This route has no points yet.</p>
         )}
-        {detail.route.features.length > 0 && (
-          <p className="mt-2 text-xs text-creek-700">Along the route: {detail.route.features.map((f) => `${f.label} at ${formatQuantity('length', f.chainageM, units, 0)}`).join(' · ')}</p>
+        {view.route.features.length > 0 && (
+          <p className="mt-2 text-xs text-creek-700">Along the route: {view.route.features.map((f) => `${f.label} at ${formatQuantity('length', f.chainageM, units, 0)}`).join(' · ')}</p>
         )}
       </Panel>
-      {detail.points.length > 0 && <CleanupPanel detail={detail} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />}
+      {view.route.pointCount > 0 && <CleanupPanel view={view} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />}
       <Panel title="Points" aside={positioned && editable ? <span className="text-xs text-creek-600">Chainage is measured on the WGS84 ellipsoid from the positions when you save.</span> : undefined}>
         {editable && draft.dirty && (
           <div className="mb-3 flex flex-wrap items-center gap-3 rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm" role="status">
             <span className="font-medium text-ochre-700">Unsaved changes{restored ? ' (kept from before you left this page)' : ''}</span>
             <Button tone="quiet" className="px-2.5 py-1" disabled={draft.past.length === 0} onClick={() => dispatch({ type: 'undo' })}>Undo</Button>
-            <Button tone="quiet" className="px-2.5 py-1" onClick={() => dispatch({ type: 'reset', points: detail.points })}>Discard</Button>
+            <Button tone="quiet" className="px-2.5 py-1" onClick={() => dispatch({ type: 'reset', points: rows.points })}>Discard</Button>
             <Button className="px-2.5 py-1" disabled={save.isPending} onClick={onSave}>{save.isPending ? 'Saving…' : 'Save points'}</Button>
           </div>
         )}
         <FormMessage message={message} />
-        <PointsTable points={draft.points} units={units} editable={editable} positioned={positioned} flagged={flagged} page={page} onPage={onPage} dispatch={dispatch} />
+        <PointsTable
+          points={draft.points}
+          offset={offset}
+          total={rows.total + draft.points.length - rows.points.length}
+          units={units}
+          editable={editable}
+          positioned={positioned}
+          flagged={flagged}
+          page={page}
+          pageCount={pageCount}
+          onPage={onPage}
+          pagingBlocked={editable && draft.dirty ? 'Save or discard the changes on this page to turn to another.' : loadingPage ? 'Reading the page…' : null}
+          dispatch={dispatch}
+        />
       </Panel>
-      {editable && detail.points.length > 0 && <RouteTools detail={detail} units={units} blocked={draft.dirty} />}
-      {detail.route.importNotes.some((n) => n.code !== 'consumer-gps-heights') && (
+      {editable && view.route.pointCount > 0 && <RouteTools view={view} units={units} blocked={draft.dirty} />}
+      {view.route.importNotes.some((n) => n.code !== 'consumer-gps-heights') && (
         <Panel title="Notes from the import">
           <ul className="list-disc space-y-0.5 pl-5 text-sm text-creek-800">
-            {detail.route.importNotes.filter((n) => n.code !== 'consumer-gps-heights').map((n, i) => <li key={i}>{n.line !== undefined ? `line ${n.line}: ` : ''}{n.message}</li>)}
+            {view.route.importNotes.filter((n) => n.code !== 'consumer-gps-heights').map((n, i) => <li key={i}>{n.line !== undefined ? `line ${n.line}: ` : ''}{n.message}</li>)}
           </ul>
         </Panel>
       )}

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import Link from 'next/link';
 import { PriceListEditor } from '@/components/prices/price-list-editor';
 import { Panel } from '@/components/ui/panel';
@@ -9,6 +10,7 @@ import { readPriceList } from '@/lib/data/price-list';
 import { can } from '@/lib/permissions';
 import { priceListKeys } from '@/lib/queries/price-list';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { PriceListSkeleton } from '@/components/prices/price-list-editor';
 
 export const metadata: Metadata = { title: 'Pipe prices' };
 
@@ -30,7 +32,9 @@ export default async function PricesPage() {
       </div>
       <Panel title="Price list">
         <HydrationBoundary state={dehydrate(queryClient)}>
-          <PriceListEditor teamId={team.id} canEdit={can(role, 'design.edit')} />
+          <Suspense fallback={<PriceListSkeleton />}>
+            <PriceListEditor teamId={team.id} canEdit={can(role, 'design.edit')} />
+          </Suspense>
         </HydrationBoundary>
       </Panel>
     </div>

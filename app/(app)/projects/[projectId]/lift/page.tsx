@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { LiftWorkspace } from '@/components/lift/lift-workspace';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { requireProjectPage } from '@/lib/auth/project-page';
@@ -7,6 +8,7 @@ import { getLiftSummary } from '@/lib/data/lift-summary';
 import { can } from '@/lib/permissions';
 import { liftKeys } from '@/lib/queries/lift';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { LiftWorkspaceSkeleton } from '@/components/lift/lift-workspace-skeleton';
 
 export const metadata: Metadata = { title: 'Lift & storage' };
 
@@ -27,7 +29,9 @@ export default async function LiftPage({ params }: { params: Promise<{ projectId
         what the uses take each day; and the tank that carries them. Figures in {project.unitSystem === 'us' ? 'US customary units' : 'metric units'}.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <LiftWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canLogYield={can(role, 'yield.log')} />
+        <Suspense fallback={<LiftWorkspaceSkeleton />}>
+          <LiftWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canLogYield={can(role, 'yield.log')} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );

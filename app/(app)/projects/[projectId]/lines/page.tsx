@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { LinesTable } from '@/components/lines/lines-table';
 import { NewLineForm } from '@/components/lines/new-line-form';
 import { Panel } from '@/components/ui/panel';
@@ -9,6 +10,7 @@ import { listLines } from '@/lib/data/lines';
 import { can } from '@/lib/permissions';
 import { lineKeys } from '@/lib/queries/lines';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { LinesTableSkeleton } from '@/components/lines/lines-table';
 
 export const metadata: Metadata = { title: 'Lines' };
 
@@ -31,7 +33,9 @@ export default async function LinesPage({ params }: { params: Promise<{ projectI
         </Panel>
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <LinesTable projectId={project.id} canEdit={editable} />
+        <Suspense fallback={<LinesTableSkeleton />}>
+          <LinesTable projectId={project.id} canEdit={editable} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { NetworkWorkspace } from '@/components/network/network-workspace';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { requireProjectPage } from '@/lib/auth/project-page';
@@ -9,6 +10,7 @@ import { can } from '@/lib/permissions';
 import { networkKeys } from '@/lib/queries/network';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { reviewKeys } from '@/lib/queries/reviews';
+import { NetworkWorkspaceSkeleton } from '@/components/network/network-workspace-skeleton';
 
 export const metadata: Metadata = { title: 'Network' };
 
@@ -32,7 +34,9 @@ export default async function NetworkPage({ params }: { params: Promise<{ projec
         peak hour to see every flow and pressure, or let Runnel choose the least-cost pipe sizes from the team&apos;s price list.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <NetworkWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+        <Suspense fallback={<NetworkWorkspaceSkeleton />}>
+          <NetworkWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { NewRevisionForm } from '@/components/reviews/new-revision-form';
 import { RevisionsList } from '@/components/reviews/revisions-list';
 import { WorkingCopyComments } from '@/components/reviews/working-copy-comments';
@@ -10,6 +11,8 @@ import { listRevisions } from '@/lib/data/revisions';
 import { can } from '@/lib/permissions';
 import { reviewKeys } from '@/lib/queries/reviews';
 import { getQueryClient } from '@/lib/queries/query-client';
+import { RevisionsListSkeleton } from '@/components/reviews/revisions-list';
+import { CommentsSkeleton } from '@/components/reviews/working-copy-comments';
 
 export const metadata: Metadata = { title: 'Reviews' };
 
@@ -38,10 +41,14 @@ export default async function ReviewsPage({ params }: { params: Promise<{ projec
         </Panel>
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <RevisionsList projectId={project.id} />
+        <Suspense fallback={<RevisionsListSkeleton />}>
+          <RevisionsList projectId={project.id} />
+        </Suspense>
         {!client && (
           <Panel title="Comments on the working copy">
-            <WorkingCopyComments projectId={project.id} />
+            <Suspense fallback={<CommentsSkeleton />}>
+              <WorkingCopyComments projectId={project.id} />
+            </Suspense>
           </Panel>
         )}
       </HydrationBoundary>

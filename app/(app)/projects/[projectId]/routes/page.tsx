@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import Link from 'next/link';
 import { NewSketchRouteForm } from '@/components/routes/new-sketch-route-form';
 import { RoutesList } from '@/components/routes/routes-list';
@@ -9,6 +10,7 @@ import { listRoutes } from '@/lib/data/routes';
 import { can } from '@/lib/permissions';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { routeKeys } from '@/lib/queries/routes';
+import { RoutesListSkeleton } from '@/components/routes/routes-list';
 
 export const metadata: Metadata = { title: 'Survey routes' };
 
@@ -32,7 +34,9 @@ export default async function RoutesPage({ params }: { params: Promise<{ project
         )}
       </div>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <RoutesList projectId={project.id} unitSystem={project.unitSystem} />
+        <Suspense fallback={<RoutesListSkeleton />}>
+          <RoutesList projectId={project.id} unitSystem={project.unitSystem} />
+        </Suspense>
       </HydrationBoundary>
       {editable && (
         <Panel title="No survey yet?">

@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { LineEditor } from '@/components/lines/line-editor';
@@ -13,6 +14,7 @@ import { lineKeys } from '@/lib/queries/lines';
 import { reviewKeys } from '@/lib/queries/reviews';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { uuid } from '@/lib/validations/common';
+import { LineEditorSkeleton } from '@/components/lines/line-editor';
 
 export const metadata: Metadata = { title: 'Line' };
 
@@ -40,7 +42,9 @@ export default async function LinePage({ params }: { params: Promise<{ projectId
 
   return (
     <HydrationBoundary state={dehydrate(queryClient)}>
-      <LineEditor lineId={line.id} projectName={project.name} unitSystem={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+      <Suspense fallback={<LineEditorSkeleton />}>
+        <LineEditor lineId={line.id} projectName={project.name} unitSystem={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+      </Suspense>
     </HydrationBoundary>
   );
 }

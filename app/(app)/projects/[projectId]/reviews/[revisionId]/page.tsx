@@ -1,5 +1,6 @@
 import { dehydrate, HydrationBoundary } from '@tanstack/react-query';
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -15,6 +16,7 @@ import { reviewKeys } from '@/lib/queries/reviews';
 import { getQueryClient } from '@/lib/queries/query-client';
 import { revisionStamp, stampRows } from '@/lib/review/stamp';
 import { uuid } from '@/lib/validations/common';
+import { RevisionWorkspaceSkeleton } from '@/components/reviews/revision-workspace';
 
 export const metadata: Metadata = { title: 'Revision' };
 
@@ -62,7 +64,9 @@ export default async function RevisionPage({ params, searchParams }: { params: P
         </nav>
       )}
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <RevisionWorkspace key={lineId ?? 'none'} revision={revision} lineId={lineId} stamp={stamp} canComment={canComment} members={members} />
+        <Suspense fallback={<RevisionWorkspaceSkeleton />}>
+          <RevisionWorkspace key={lineId ?? 'none'} revision={revision} lineId={lineId} stamp={stamp} canComment={canComment} members={members} />
+        </Suspense>
       </HydrationBoundary>
     </div>
   );

@@ -4,6 +4,7 @@ import { readFileUpload } from '@/lib/api/upload';
 import { AppError } from '@/lib/errors';
 import { teamOfProject } from '@/lib/data/projects';
 import { importSurvey } from '@/lib/data/route-import';
+import { warmRouteView } from '@/lib/data/routes';
 import { MAX_SURVEY_FILE_BYTES } from '@/lib/survey/sniff';
 import { ProjectParams } from '@/lib/validations/projects';
 import { SurveyImportOptionsSchema } from '@/lib/validations/survey-import';
@@ -26,5 +27,8 @@ function readOptions(raw: string | undefined): unknown {
 export const POST = teamRoute({ params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 }, async ({ req, params, user }) => {
   const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: MAX_SURVEY_FILE_BYTES });
   const options = parseOrThrow(SurveyImportOptionsSchema, readOptions(upload.fields.options), 'Some import options are not valid');
-  return importSurvey({ projectId: params.projectId, userId: user.id, fileName: upload.fileName, contentType: upload.contentType, bytes: upload.bytes, options });
+  const imported = await importSurvey({ projectId: params.projectId, userId: user.id, fileName: upload.fileName, contentType: upload.contentType, bytes: upload.bytes, options });
+  // The browser goes to the route's page next: its view is worked out meanwhile (not awaited).
+  warmRouteView(imported.route.id);
+  return imported;
 });
