@@ -41,8 +41,8 @@ function isJsonContentType(type: string | null): boolean {
   return mediaType === 'application/json' || /^application\/[a-z0-9.+-]{1,60}\+json$/.test(mediaType);
 }
 
-/** How a refused body's issues become field errors: the default names paths and keeps the schema's (SI) messages. */
-export type FieldsOf = (error: z.ZodError) => FieldErrors;
+/** How a refused body's issues become field errors (`data` is the body as sent): the default names paths and keeps the schema's (SI) messages. */
+export type FieldsOf = (error: z.ZodError, data: unknown) => FieldErrors;
 
 /** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
 export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number, fieldsOf?: FieldsOf): Promise<z.output<S>> {
@@ -70,7 +70,7 @@ export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema
 export function parseOrThrow<S extends z.ZodType>(schema: S, data: unknown, message: string, fieldsOf: FieldsOf = fieldErrorsOf): z.output<S> {
   const result = schema.safeParse(data);
   if (!result.success) {
-    const fields = fieldsOf(result.error);
+    const fields = fieldsOf(result.error, data);
     // With screen words, the message names the first problem too, so a client that shows only the message says what and where.
     const first = fieldsOf === fieldErrorsOf ? undefined : Object.values(fields)[0]?.[0];
     throw new AppError('bad_request', first ? `${message}: ${first}` : message, fields);

@@ -42,6 +42,8 @@ interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
 export interface BodyWords<P> {
   table: FieldWordTable;
   unitsOf: (params: P, req: NextRequest) => Promise<UnitSystem> | UnitSystem;
+  /** The number the screen gives the body's first list item, read from the body as sent (a page of rows starts past 1). @default 1 */
+  firstNumberOf?: (data: unknown) => number;
 }
 
 export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
@@ -74,7 +76,7 @@ async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRe
 async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P, req: NextRequest): Promise<FieldsOf | undefined> {
   if (!words) return undefined;
   const system = await words.unitsOf(params, req);
-  return (error) => fieldErrorsIn(error, system, words.table);
+  return (error, data) => fieldErrorsIn(error, system, words.table, words.firstNumberOf?.(data) ?? 1);
 }
 
 async function signedInUser(req: NextRequest): Promise<SessionUser> {

@@ -18,13 +18,17 @@ type Issue = z.core.$ZodIssue;
 
 const patternOf = (path: readonly PropertyKey[]) => path.map((part) => (typeof part === 'number' ? '#' : String(part))).join('.');
 
-/** The screen's name of a path: the table's label with its list positions filled in, or null when the table does not know it. */
-export function fieldLabel(path: readonly PropertyKey[], table: FieldWordTable): { label: string; quantity?: Quantity } | null {
+/**
+ * The screen's name of a path: the table's label with its list positions filled in, or null when the
+ * table does not know it. `firstNumber` is the number the screen gives a list's first item (1, or
+ * 51 for a page of a route's rows that starts at its 51st point).
+ */
+export function fieldLabel(path: readonly PropertyKey[], table: FieldWordTable, firstNumber = 1): { label: string; quantity?: Quantity } | null {
   const word = table[patternOf(path)];
   if (!word) return null;
   const positions = path.filter((part): part is number => typeof part === 'number');
   let k = 0;
-  return { label: word.label.replace(/#/g, () => String((positions[k++] ?? 0) + 1)), quantity: word.quantity };
+  return { label: word.label.replace(/#/g, () => String((positions[k++] ?? 0) + firstNumber)), quantity: word.quantity };
 }
 
 /**
@@ -32,8 +36,8 @@ export function fieldLabel(path: readonly PropertyKey[], table: FieldWordTable):
  * worded from the issue's own bound (zod keeps it as a number), converted to the project's unit; other
  * issues keep their message, prefixed with the field's screen name when the message does not start with it.
  */
-export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTable): string {
-  const named = fieldLabel(issue.path, table);
+export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTable, firstNumber = 1): string {
+  const named = fieldLabel(issue.path, table, firstNumber);
   if (!named) return issue.message;
   const { label, quantity } = named;
   // A bound of zero reads "0 ft", not "0.000 US gal": nothing to round.
@@ -71,7 +75,7 @@ function lowerFirst(text: string): string {
 }
 
 /** zod issues -> `{ "field.path": [messages] }` (the keys fieldErrorsOf gives), worded for the screen in the project's units. */
-export function fieldErrorsIn(error: z.ZodError, system: UnitSystem, table: FieldWordTable): FieldErrors {
+export function fieldErrorsIn(error: z.ZodError, system: UnitSystem, table: FieldWordTable, firstNumber = 1): FieldErrors {
   const fields = new Map<string, string[]>();
   const add = (key: string, message: string) => fields.set(key, [...(fields.get(key) ?? []), message]);
   // A field's own range or type refusal says it best: a whole-object check on the same field adds nothing.
@@ -83,7 +87,7 @@ export function fieldErrorsIn(error: z.ZodError, system: UnitSystem, table: Fiel
       for (const k of issue.keys) add(key === '_' ? k : `${key}.${k}`, `Unknown field "${k}"`);
       continue;
     }
-    add(key, issueText(issue, system, table));
+    add(key, issueText(issue, system, table, firstNumber));
   }
   return Object.fromEntries(fields);
 }

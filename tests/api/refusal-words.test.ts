@@ -93,4 +93,13 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     expect(res.status).toBe(400);
     expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 2: elevation must be at most 29,527.56 ft']);
   });
+
+  it('a page of rows saved from the route table names the point by its number in the table', async () => {
+    const point = { sourceSeq: null, latitude: null, longitude: null, chainageM: 0, elevationM: 9500, label: null, heightSource: 'level', confidenceM: null, excluded: false };
+    // The table's third page starts at point 101 (seq 100); its second row is point 102.
+    const res = await call(points.PUT, { method: 'PUT', path: '/api/x', params: { routeId: f.lineRouteId }, userId: f.users.designer.id, body: { points: [{ ...point, elevationM: 100 }, point], window: { fromSeq: 100, toSeq: 102 } } });
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 102: elevation must be at most 9,000.00 m']);
+    expect(res.json.error.message).toBe('Some fields are not valid: Point 102: elevation must be at most 9,000.00 m');
+  });
 });
