@@ -16,6 +16,7 @@ const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'route-read-100k': async () => (await import('./route-read-100k')).routeRead100k(),
   'api-capacity-50': async () => (await import('./api-load')).apiCapacity50,
   'api-latency-50u': async () => (await import('./api-load')).apiLatency50u,
+  'api-list-cost': async () => (await import('./api-load')).apiListCost,
 };
 
 async function main(): Promise<void> {

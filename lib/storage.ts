@@ -70,7 +70,14 @@ export async function putObject(key: string, bytes: Uint8Array, contentType: str
     await put();
   } catch (error) {
     if (!isMissingBucket(error)) throw error;
-    await guarded('put', key, () => s3().send(new CreateBucketCommand({ Bucket: bucket() })));
+    await guarded('put', key, async () => {
+      try {
+        await s3().send(new CreateBucketCommand({ Bucket: bucket() }));
+      } catch (createError) {
+        // Several first writes to a fresh store race to create the bucket: one wins, the rest find it made.
+        if (!(createError instanceof S3ServiceException && ['BucketAlreadyOwnedByYou', 'BucketAlreadyExists'].includes(createError.name))) throw createError;
+      }
+    });
     await put();
   }
 }

@@ -77,28 +77,12 @@ function lerp(a: number, b: number, t: number): number {
  * greedy plan needs at most m. Checked against brute force in tests/hydraulics/design.
  */
 export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
-  const { chainageM, groundElevationM, pipeElevationM, allowableHeadM } = input;
   const from = input.fromPoint ?? 0;
-  const to = input.toPoint ?? chainageM.length - 1;
+  const to = input.toPoint ?? input.chainageM.length - 1;
   if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
-  const raise = input.tankWaterAboveGroundM ?? 0;
-  const clearance = input.summitClearanceM ?? 0;
-  const allow = (piece: number): number =>
-    typeof allowableHeadM === 'number' ? allowableHeadM : allowableHeadM[piece];
-  const lossTo = input.headLossToPointM;
-  const lossAt = (piece: number, c: number): number => {
-    if (!lossTo) return 0;
-    const c0 = chainageM[piece];
-    const c1 = piece + 1 < chainageM.length ? chainageM[piece + 1] : c0;
-    return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
-  };
-  // Highest "pipe plus loss to reach it" at or after each point: a tank at point k must hold at
-  // least highestAhead[k] - loss(k) + clearance for the design flow to pass every summit ahead.
-  const highestAhead = new Float64Array(to + 1);
-  highestAhead[to] = pipeElevationM[to] + (lossTo?.[to] ?? 0);
-  for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo?.[k] ?? 0), highestAhead[k + 1]);
-  const floorAt = (ahead: number, piece: number, c: number): number => ahead - lossAt(piece, c) + clearance;
+  const planner = new TankPlanner(input, from, to);
   const tanks: PlannedTank[] = [];
+  const { chainageM, groundElevationM, pipeElevationM } = input;
   let level = input.startLevelM;
   let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
   const fail = (chainage: number, message: string): TankPlan => ({ tanks, feasible: false, problem: { chainageM: chainage, message } });
@@ -106,75 +90,156 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   // Every tank lowers the level by at least (rating - cover) > 0, so the loop ends; the cap only
   // guards against a caller's NaN.
   for (let guard = 0; guard < 1_000_000; guard++) {
-    const over = firstOverRating(input, at, level, to, allow);
+    const over = firstOverRating(chainageM, groundElevationM, pipeElevationM, planner.allowFixed, planner.allowByPiece, at, level, to);
     if (over === null) return { tanks, feasible: true };
     if (over.chainageM <= at.chainageM + EPS_M) {
       return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
     }
-    // Sites are weighed from plain numbers; a Position is made only for a new best (a long reach
-    // offers a site at every point, and an object for each would dominate the planner's time).
-    const pick: { best: Position | null } = { best: null };
-    const consider = (piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void => {
-      const siteLevel = groundM + raise;
-      if (siteLevel < floorM - EPS_M || siteLevel >= level - EPS_M) return;
-      if (siteLevel - pipeM > allow(piece) + EPS_M) return;
-      if (pick.best === null || siteLevel <= pick.best.groundM + raise) pick.best = { piece, chainageM: siteChainageM, pipeM, groundM };
-    };
-    for (let k = at.piece; k <= over.piece; k++) {
-      const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
-      if (k > at.piece) {
-        consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], floorAt(highestAhead[k], k, chainageM[k]));
-      }
-      // Where the tank level on the ground inside this piece comes down to the floor set by the
-      // summits ahead (both vary linearly along the piece): the lowest usable site.
-      const c0 = k === at.piece ? at.chainageM : chainageM[k];
-      const g0 = k === at.piece ? at.groundM : groundElevationM[k];
-      const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
-      const f0 = g0 + raise - floorAt(highestAhead[k + 1], k, c0);
-      const f1 = g1 + raise - floorAt(highestAhead[k + 1], k, pieceEndM);
-      if (f0 * f1 < 0) {
-        const t = f0 / (f0 - f1);
-        const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
-        const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
-        const c = lerp(c0, pieceEndM, t);
-        consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), floorAt(highestAhead[k + 1], k, c));
-      }
-    }
-    const overLoss = lossAt(over.piece, over.chainageM);
-    const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
-    consider(over.piece, over.chainageM, over.pipeM, over.groundM, floorAt(aheadOfOver, over.piece, over.chainageM));
-    const chosen = pick.best;
+    const chosen = planner.lowestSite(at, over, level);
     if (chosen === null) {
       return fail(
         over.chainageM,
         'every tank site low enough to protect the pipe lies below a summit further on, which the water could not pass: use a higher pressure class',
       );
     }
-    tanks.push({ chainageM: chosen.chainageM, waterLevelM: chosen.groundM + raise });
-    level = chosen.groundM + raise;
+    tanks.push({ chainageM: chosen.chainageM, waterLevelM: chosen.groundM + planner.raise });
+    level = chosen.groundM + planner.raise;
     at = chosen;
   }
   return fail(at.chainageM, 'tank planning did not converge');
 }
 
+/**
+ * The planner's per-point work. A class with its figures as fields, not closures made per call: a
+ * closure made anew each call is a new call target for the engine's optimised code, and the
+ * numbers passing through it end up boxed, megabytes per plan on a 100,000-station line.
+ */
+class TankPlanner {
+  readonly chainageM: ArrayLike<number>;
+  readonly groundElevationM: ArrayLike<number>;
+  readonly pipeElevationM: ArrayLike<number>;
+  readonly allowFixed: number;
+  readonly allowByPiece: ArrayLike<number> | null;
+  readonly lossTo: ArrayLike<number> | null;
+  readonly raise: number;
+  readonly clearance: number;
+  readonly n: number;
+  readonly to: number;
+  /**
+   * Highest "pipe plus loss to reach it" at or after each point: a tank at point k must hold at
+   * least highestAhead[k] - loss(k) + clearance for the design flow to pass every summit ahead.
+   */
+  readonly highestAhead: Float64Array;
+  // The best site so far, as numbers (a Position is made once, for the chosen site): on falling
+  // ground nearly every point of a long window is a new best.
+  found = false;
+  bestPiece = 0;
+  bestChainageM = 0;
+  bestPipeM = 0;
+  bestGroundM = 0;
+  level = 0;
+
+  constructor(input: TankPlanInput, from: number, to: number) {
+    this.chainageM = input.chainageM;
+    this.groundElevationM = input.groundElevationM;
+    this.pipeElevationM = input.pipeElevationM;
+    this.allowFixed = typeof input.allowableHeadM === 'number' ? input.allowableHeadM : 0;
+    this.allowByPiece = typeof input.allowableHeadM === 'number' ? null : input.allowableHeadM;
+    this.lossTo = input.headLossToPointM ?? null;
+    this.raise = input.tankWaterAboveGroundM ?? 0;
+    this.clearance = input.summitClearanceM ?? 0;
+    this.n = input.chainageM.length;
+    this.to = to;
+    const { pipeElevationM, lossTo } = this;
+    const highestAhead = new Float64Array(to + 1);
+    highestAhead[to] = pipeElevationM[to] + (lossTo === null ? 0 : lossTo[to]);
+    for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highestAhead[k + 1]);
+    this.highestAhead = highestAhead;
+  }
+
+  /** Head lost from the start to chainage c inside piece `piece`, m (linear along the piece). */
+  lossAt(piece: number, c: number): number {
+    const { lossTo, chainageM } = this;
+    if (lossTo === null) return 0;
+    const c0 = chainageM[piece];
+    const c1 = piece + 1 < this.n ? chainageM[piece + 1] : c0;
+    return c1 > c0 ? lerp(lossTo[piece], lossTo[piece + 1], (c - c0) / (c1 - c0)) : lossTo[piece];
+  }
+
+  floorAt(ahead: number, piece: number, c: number): number {
+    return ahead - this.lossAt(piece, c) + this.clearance;
+  }
+
+  consider(piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void {
+    const siteLevel = groundM + this.raise;
+    if (siteLevel < floorM - EPS_M || siteLevel >= this.level - EPS_M) return;
+    if (siteLevel - pipeM > (this.allowByPiece === null ? this.allowFixed : this.allowByPiece[piece]) + EPS_M) return;
+    if (!this.found || siteLevel <= this.bestGroundM + this.raise) {
+      this.found = true;
+      this.bestPiece = piece;
+      this.bestChainageM = siteChainageM;
+      this.bestPipeM = pipeM;
+      this.bestGroundM = groundM;
+    }
+  }
+
+  /**
+   * The lowest usable tank site from `at` to `over` with the static line at `level` (the latest
+   * one on a tie), or null when there is none.
+   */
+  lowestSite(at: Position, over: Position, level: number): Position | null {
+    const { chainageM, groundElevationM, pipeElevationM, highestAhead, raise } = this;
+    this.found = false;
+    this.level = level;
+    for (let k = at.piece; k <= over.piece; k++) {
+      const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
+      if (k > at.piece) {
+        this.consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], this.floorAt(highestAhead[k], k, chainageM[k]));
+      }
+      // Where the tank level on the ground inside this piece comes down to the floor set by the
+      // summits ahead (both vary linearly along the piece): the lowest usable site.
+      const c0 = k === at.piece ? at.chainageM : chainageM[k];
+      const g0 = k === at.piece ? at.groundM : groundElevationM[k];
+      const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
+      const f0 = g0 + raise - this.floorAt(highestAhead[k + 1], k, c0);
+      const f1 = g1 + raise - this.floorAt(highestAhead[k + 1], k, pieceEndM);
+      if (f0 * f1 < 0) {
+        const t = f0 / (f0 - f1);
+        const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
+        const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
+        const c = lerp(c0, pieceEndM, t);
+        this.consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), this.floorAt(highestAhead[k + 1], k, c));
+      }
+    }
+    const overLoss = this.lossAt(over.piece, over.chainageM);
+    const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= this.to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
+    this.consider(over.piece, over.chainageM, over.pipeM, over.groundM, this.floorAt(aheadOfOver, over.piece, over.chainageM));
+    if (!this.found) return null;
+    return { piece: this.bestPiece, chainageM: this.bestChainageM, pipeM: this.bestPipeM, groundM: this.bestGroundM };
+  }
+}
+
 /** First position at or after `at` where `level` minus the pipe passes the allowable head. */
 function firstOverRating(
-  input: TankPlanInput,
+  chainageM: ArrayLike<number>,
+  groundElevationM: ArrayLike<number>,
+  pipeElevationM: ArrayLike<number>,
+  allowFixed: number,
+  allowByPiece: ArrayLike<number> | null,
   at: Position,
   level: number,
   to: number,
-  allow: (piece: number) => number,
 ): Position | null {
-  const { chainageM, groundElevationM, pipeElevationM } = input;
   for (let j = at.piece; j < to; j++) {
-    const limit = allow(j);
-    const c0 = j === at.piece ? at.chainageM : chainageM[j];
-    const z0 = j === at.piece ? at.pipeM : pipeElevationM[j];
-    const g0 = j === at.piece ? at.groundM : groundElevationM[j];
+    const limit = allowByPiece === null ? allowFixed : allowByPiece[j];
+    const first = j === at.piece;
+    const z0 = first ? at.pipeM : pipeElevationM[j];
     const startExcess = level - z0 - limit;
-    if (startExcess > EPS_M) return { piece: j, chainageM: c0, pipeM: z0, groundM: g0 };
+    if (startExcess > EPS_M) return { piece: j, chainageM: first ? at.chainageM : chainageM[j], pipeM: z0, groundM: first ? at.groundM : groundElevationM[j] };
     const endExcess = level - pipeElevationM[j + 1] - limit;
     if (endExcess > EPS_M) {
+      const c0 = first ? at.chainageM : chainageM[j];
+      const g0 = first ? at.groundM : groundElevationM[j];
       // Fraction of the way from c0 to the next point where the excess reaches zero.
       const t = -startExcess / (endExcess - startExcess);
       return {

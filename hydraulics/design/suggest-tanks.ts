@@ -20,8 +20,9 @@ export function suggestBreakPressureTanks(profile: LineProfile, tankWaterAboveGr
 function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, keepFlowing: boolean): TankPlan {
   const { points } = profile;
   const n = points.chainageM.length;
+  const allowableByStretch = Float64Array.from(profile.stretches, (s) => s.allowableHeadM);
   const allowableByPiece = new Float64Array(n - 1);
-  for (let j = 0; j < n - 1; j++) allowableByPiece[j] = profile.stretches[points.stretchIndex[j]].allowableHeadM;
+  for (let j = 0; j < n - 1; j++) allowableByPiece[j] = allowableByStretch[points.stretchIndex[j]];
   const lossToPoint = new Float64Array(n);
   for (let j = 0; j < n; j++) lossToPoint[j] = points.frictionLossM[j] + points.minorLossM[j];
   const tanks: PlannedTank[] = [];

@@ -40,52 +40,69 @@ export interface LimitRangeArgs {
  * reset, a fitting, a change of pipe rating) starts or ends a range at that point's chainage.
  * One pass, no per-point allocation.
  */
+/**
+ * The ranges found so far and the one being followed. A class, not closures made per call: a
+ * closure made anew on each call is a new call target each time, which the engine's optimised
+ * code does not expect, and its numbers then end up boxed at every point.
+ */
+class RangeCollector {
+  readonly ranges: LimitRange[] = [];
+  open = false;
+  fromM = 0;
+  worstExcessM = 0;
+  worstChainageM = 0;
+  /** A closed range waits here until the value has come back inside by more than mergeWithinM. */
+  pending: LimitRange | null = null;
+  recoveryM = 0;
+
+  constructor(
+    private readonly tolerance: number,
+    private readonly mergeWithinM: number,
+  ) {}
+
+  note(excess: number, atM: number): void {
+    if (excess > this.worstExcessM) {
+      this.worstExcessM = excess;
+      this.worstChainageM = atM;
+    }
+  }
+
+  /** Ends stay exact; a range whose worst excess is within the tolerance is rounding, not a finding. */
+  flush(): void {
+    if (this.pending !== null && this.pending.worstExcessM > this.tolerance) this.ranges.push(this.pending);
+    this.pending = null;
+  }
+
+  close(toM: number): void {
+    this.open = false;
+    if (!(toM > this.fromM)) return;
+    this.pending = { fromM: this.fromM, toM, worstExcessM: this.worstExcessM, worstChainageM: this.worstChainageM };
+    this.recoveryM = 0;
+    if (this.mergeWithinM === 0) this.flush();
+  }
+
+  openAt(atM: number): void {
+    this.open = true;
+    if (this.pending !== null) {
+      ({ fromM: this.fromM, worstExcessM: this.worstExcessM, worstChainageM: this.worstChainageM } = this.pending);
+      this.pending = null;
+    } else {
+      this.fromM = atM;
+      this.worstExcessM = 0;
+    }
+  }
+
+  inside(byM: number): void {
+    if (this.pending === null) return;
+    this.recoveryM = Math.max(this.recoveryM, byM);
+    if (this.recoveryM > this.mergeWithinM) this.flush();
+  }
+}
+
 export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
   const { chainageM, valueM, dropAtPointM, limitM, side } = args;
   const sign = side === 'below' ? -1 : 1;
-  const tolerance = args.toleranceM ?? 1e-6;
-  const mergeWithinM = Math.max(args.mergeWithinM ?? 0, 0);
-  const ranges: LimitRange[] = [];
-  let open = false;
-  let fromM = 0;
-  let worstExcessM = 0;
-  let worstChainageM = 0;
-  // A closed range waits here until the value has come back inside by more than mergeWithinM.
-  let pending: LimitRange | null = null;
-  let recoveryM = 0;
-  const note = (excess: number, atM: number): void => {
-    if (excess > worstExcessM) {
-      worstExcessM = excess;
-      worstChainageM = atM;
-    }
-  };
-  // Ends stay exact; a range whose worst excess is within the tolerance is rounding, not a finding.
-  const flush = (): void => {
-    if (pending !== null && pending.worstExcessM > tolerance) ranges.push(pending);
-    pending = null;
-  };
-  const close = (toM: number): void => {
-    open = false;
-    if (!(toM > fromM)) return;
-    pending = { fromM, toM, worstExcessM, worstChainageM };
-    recoveryM = 0;
-    if (mergeWithinM === 0) flush();
-  };
-  const openAt = (atM: number): void => {
-    open = true;
-    if (pending !== null) {
-      ({ fromM, worstExcessM, worstChainageM } = pending);
-      pending = null;
-    } else {
-      fromM = atM;
-      worstExcessM = 0;
-    }
-  };
-  const inside = (byM: number): void => {
-    if (pending === null) return;
-    recoveryM = Math.max(recoveryM, byM);
-    if (recoveryM > mergeWithinM) flush();
-  };
+  const r = new RangeCollector(args.toleranceM ?? 1e-6, Math.max(args.mergeWithinM ?? 0, 0));
   const n = chainageM.length;
   const fixedLimit = typeof limitM === 'number' ? limitM : 0;
   const limits = typeof limitM === 'number' ? null : limitM;
@@ -96,21 +113,21 @@ export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
     const c1 = chainageM[j + 1];
     const a = sign * (valueM[j] - limit);
     const b = sign * (valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]) - limit);
-    if (a > 0 && !open) openAt(c0);
-    else if (a <= 0 && open) close(c0);
-    if (a <= 0) inside(-a);
-    if (open) note(a, c0);
+    if (a > 0 && !r.open) r.openAt(c0);
+    else if (a <= 0 && r.open) r.close(c0);
+    if (a <= 0) r.inside(-a);
+    if (r.open) r.note(a, c0);
     if (a > 0 && b <= 0) {
-      close(c0 + ((c1 - c0) * a) / (a - b));
-      inside(-b);
+      r.close(c0 + ((c1 - c0) * a) / (a - b));
+      r.inside(-b);
     } else if (a <= 0 && b > 0) {
-      openAt(c0 + ((c1 - c0) * -a) / (b - a));
+      r.openAt(c0 + ((c1 - c0) * -a) / (b - a));
     } else if (b <= 0) {
-      inside(-b);
+      r.inside(-b);
     }
-    if (open) note(b, c1);
+    if (r.open) r.note(b, c1);
   }
-  if (open) close(chainageM[n - 1]);
-  flush();
-  return ranges;
+  if (r.open) r.close(chainageM[n - 1]);
+  r.flush();
+  return r.ranges;
 }

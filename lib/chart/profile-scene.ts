@@ -43,7 +43,8 @@ function photoFrame(data: ProfileChartData, frame: ProfileFrame) {
  * pipe by class, static line and hydraulic grade; pressure head with allowed head), warning
  * ranges shaded, devices and site photos marked, axes in the project's units and a legend. Each layer is a `<g>`
  * with `data-layer` so exports and tests can find it. Long lines are thinned to about two
- * points per pixel column, keeping every local high and low of the ground and the pipe.
+ * points per pixel column, keeping in each column the highest and lowest high or low of the ground
+ * and of the pipe, so no summit or sag a column could show is lost.
  */
 export function profileScene(data: ProfileChartData, options: ProfileChartOptions, idPrefix = 'profile'): ProfileScene {
   const width = options.width ?? PROFILE_LAYOUT.width;
@@ -53,6 +54,7 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
   const drawnIndices = thinProfile(points.chainageM, points.groundElevationM, {
     targetPoints: Math.round(2 * (frame.plotRight - frame.plotLeft)),
     guardSeries: [points.pipeElevationM],
+    columns: frame.plotRight - frame.plotLeft,
     keep: insertedPoints(points.stationIndex, frame.firstIndex, frame.lastIndex),
     from: frame.firstIndex,
     to: frame.lastIndex,

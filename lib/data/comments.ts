@@ -1,6 +1,7 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { models } from '../../models';
+import { teamOfProjectRow } from './projects';
 import type { Comment } from '../../models/comment';
 import { recordActivity } from '../activity/record';
 import type { SessionUser } from '../auth/users';
@@ -69,10 +70,7 @@ export function anchorNow(anchor: CommentAnchor, index: WorkingCopyIndex): Ancho
 }
 
 export async function teamOfComment(commentId: string): Promise<string | null> {
-  const { Comment: C, Project } = models();
-  const row = await C.findByPk(commentId, { attributes: ['projectId'] });
-  if (!row) return null;
-  return (await Project.findByPk(row.projectId, { attributes: ['teamId'] }))?.teamId ?? null;
+  return teamOfProjectRow('comments', commentId);
 }
 
 /** The project's comments (threads in order) that the caller may read: a client reads those on approved and issued revisions only. */

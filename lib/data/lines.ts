@@ -3,6 +3,7 @@ import { linkLineIntoNetwork, rejoinLineStart } from '../../migrations/support/n
 import type { Transaction } from 'sequelize';
 import { assertLineInput, HydraulicsInputError } from '../../hydraulics/index';
 import { models } from '../../models';
+import { teamOfProjectRow } from './projects';
 import { recordActivity } from '../activity/record';
 import type { Line } from '../../models/line';
 import { AppError, notFound, notInProject } from '../errors';
@@ -103,11 +104,7 @@ async function recordOf(line: Line, transaction?: Transaction): Promise<LineReco
 }
 
 export async function teamOfLine(lineId: string): Promise<string | null> {
-  const { Line: L, Project } = models();
-  const line = await L.findByPk(lineId, { attributes: ['projectId'] });
-  if (!line) return null;
-  const project = await Project.findByPk(line.projectId, { attributes: ['teamId'] });
-  return project?.teamId ?? null;
+  return teamOfProjectRow('lines', lineId);
 }
 
 /** The unit system of a line's project (metric when the line is gone), for wording refusals. */

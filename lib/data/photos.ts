@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { locateOnRoute, type RouteLocation } from '../../hydraulics';
 import { models } from '../../models';
+import { teamOfProjectRow } from './projects';
 import type { SitePhoto, PhotoPlacement } from '../../models/site-photo';
 import { AppError, notInProject } from '../errors';
 import { log } from '../log';
@@ -126,10 +127,7 @@ export async function listPhotos(projectId: string, routeId?: string): Promise<P
 }
 
 export async function teamOfPhoto(photoId: string): Promise<string | null> {
-  const photo = await models().SitePhoto.findByPk(photoId, { attributes: ['projectId'] });
-  if (!photo) return null;
-  const project = await models().Project.findByPk(photo.projectId, { attributes: ['teamId'] });
-  return project?.teamId ?? null;
+  return teamOfProjectRow('site_photos', photoId);
 }
 
 /** The unit system of the photo's project (metric when it is gone), for wording refusals. */

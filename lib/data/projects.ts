@@ -7,7 +7,7 @@ import { unitDefaults } from '../units/defaults';
 import type { FieldWordTable } from '../validations/field-words';
 import type { UpdateProjectInput } from '../validations/projects';
 import type { ProjectProgress } from '../projects/next-step';
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 
 export interface ProjectSummary {
   id: string;
@@ -44,9 +44,20 @@ function toSummary(p: Project): ProjectSummary {
   };
 }
 
+/** The columns `toSummary` reads, under the model's attribute names. */
+const SUMMARY_COLUMNS = [
+  'id', 'team_id AS "teamId"', 'name', 'description', 'unit_system AS "unitSystem"', 'site_notes AS "siteNotes"',
+  'frost_depth_m AS "frostDepthM"', 'decimal_mark AS "decimalMark"', 'time_zone AS "timeZone"', 'archived_at AS "archivedAt"',
+  'created_at AS "createdAt"', 'updated_at AS "updatedAt"',
+].join(', ');
+
 export async function listProjects(teamId: string): Promise<ProjectSummary[]> {
-  // Plain rows: a team's list is read often and needs no model instances.
-  const rows = await models().Project.findAll({ where: { teamId }, order: [['updatedAt', 'DESC']], raw: true });
+  // One fixed statement: a team's list is read on every visit, and building the query and model rows
+  // cost more than the read itself (tests/api/sessions-and-teams.test.ts keeps it equal to getProject).
+  const rows = await models().sequelize.query<Project>(`SELECT ${SUMMARY_COLUMNS} FROM projects WHERE team_id = :teamId ORDER BY updated_at DESC`, {
+    type: QueryTypes.SELECT,
+    replacements: { teamId },
+  });
   return rows.map(toSummary);
 }
 
@@ -55,9 +66,26 @@ export async function getProject(projectId: string): Promise<ProjectSummary | nu
   return p ? toSummary(p) : null;
 }
 
+// The team lookups run first on every request about a project or one of its rows (teamRoute's
+// `teamOf`): one fixed statement each, a join rather than two reads.
 export async function teamOfProject(projectId: string): Promise<string | null> {
-  const p = await models().Project.findByPk(projectId, { attributes: ['teamId'], raw: true });
-  return p?.teamId ?? null;
+  const [row] = await models().sequelize.query<{ teamId: string }>('SELECT team_id AS "teamId" FROM projects WHERE id = :projectId', {
+    type: QueryTypes.SELECT,
+    replacements: { projectId },
+  });
+  return row?.teamId ?? null;
+}
+
+/** Tables whose rows each belong to one project (a `project_id` column). */
+export type ProjectRowTable = 'lines' | 'revisions' | 'site_photos' | 'comments' | 'routes';
+
+/** The team owning a project's row, or null when there is no such row. */
+export async function teamOfProjectRow(table: ProjectRowTable, id: string): Promise<string | null> {
+  const [row] = await models().sequelize.query<{ teamId: string }>(`SELECT p.team_id AS "teamId" FROM ${table} r JOIN projects p ON p.id = r.project_id WHERE r.id = :id`, {
+    type: QueryTypes.SELECT,
+    replacements: { id },
+  });
+  return row?.teamId ?? null;
 }
 
 /** The unit system of a project (metric when it is gone), for wording refusals. */

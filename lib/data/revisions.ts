@@ -1,6 +1,7 @@
 import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { models } from '../../models';
+import { teamOfProjectRow } from './projects';
 import type { Revision } from '../../models/revision';
 import { recordActivity } from '../activity/record';
 import type { SessionUser } from '../auth/users';
@@ -47,10 +48,7 @@ function visibleWhere(role: Role) {
 }
 
 export async function teamOfRevision(revisionId: string): Promise<string | null> {
-  const { Revision: R, Project } = models();
-  const row = await R.findByPk(revisionId, { attributes: ['projectId'] });
-  if (!row) return null;
-  return (await Project.findByPk(row.projectId, { attributes: ['teamId'] }))?.teamId ?? null;
+  return teamOfProjectRow('revisions', revisionId);
 }
 
 export async function listRevisions(projectId: string, role: Role): Promise<RevisionSummary[]> {

@@ -1,17 +1,15 @@
 import 'server-only';
 import { recordActivity } from '../activity/record';
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { models } from '../../models';
-import type { PointRecord } from '../routes/edit-ops';
-import { surveyPointRecord } from '../routes/new-point';
 import type { RouteSummary } from '../routes/types';
 import { projectStoragePrefix, removeStoredFiles } from './project-files';
 import { putObject } from '../storage';
 import { SurveyImportError, type SurveyImportErrorCode } from '../survey/errors';
-import type { ParsedSurvey, SurveyImportWarning } from '../survey/parsed-survey';
+import type { SurveyImportWarning } from '../survey/parsed-survey';
 import type { SurveyImportOptions } from '../validations/survey-import';
 import { runInWorker } from '../workers/pool';
-import { insertRoutePoints } from './route-points-store';
+import { insertRouteRows } from './route-points-store';
 import { toRouteSummary } from './routes';
 
 const SNIFF_CODES = new Set<SurveyImportErrorCode>(['file-too-large', 'empty-file', 'binary-content', 'not-text']);
@@ -39,18 +37,6 @@ function storedContentType(fileName: string, declared: string): string {
   return declared.startsWith('text/') ? declared : 'text/plain';
 }
 
-/** Survey points as stored: raw and cleaned heights equal, slope chainage summed leg by leg. */
-export function recordsOfSurvey(survey: ParsedSurvey): PointRecord[] {
-  let slopeM = 0;
-  return survey.points.map((p, i) => {
-    if (i > 0) {
-      const prev = survey.points[i - 1];
-      slopeM += Math.hypot(p.chainageM - prev.chainageM, p.elevationM - prev.elevationM);
-    }
-    return surveyPointRecord(p, slopeM);
-  });
-}
-
 function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[] {
   if (warnings.length <= MAX_STORED_NOTES) return [...warnings];
   const rest = warnings.length - MAX_STORED_NOTES + 1;
@@ -59,20 +45,28 @@ function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[
 
 /**
  * Imports an uploaded survey file, all or nothing: the file is checked and parsed before anything
- * is stored; then the original goes to object storage and the attachment, route and points are
- * written in one transaction. If that transaction fails the stored object is removed again.
+ * is stored; then the original goes to object storage while the attachment, route and points are
+ * written in one transaction, which commits only once the object is stored. If either fails, the
+ * transaction rolls back and the stored object is removed again.
  */
 export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportResult> {
-  // Sniffing and parsing run on the worker pool: a large or hostile file never holds the request thread.
-  const survey = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options }).catch((error: unknown) => {
-    // The sniff's refusals already name the file; the parsers' do not.
-    throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
-  });
-  const records = recordsOfSurvey(survey);
+  // The route's id is chosen here so the worker can write the points as its rows.
+  const routeId = randomUUID();
+  // Sniffing, parsing and writing the rows run on the worker pool: a large or hostile file never holds the request thread.
+  const { survey, rows, sha256 } = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options, routeId }).catch(
+    (error: unknown) => {
+      // The sniff's refusals already name the file; the parsers' do not.
+      throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
+    },
+  );
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
   const storageKey = `${projectStoragePrefix(upload.projectId)}survey-files/${randomUUID()}/${safeName}`;
   const contentType = storedContentType(upload.fileName, upload.contentType);
-  await putObject(storageKey, upload.bytes, contentType);
+  // Stored alongside the database work; awaited (and its failure rolled back) before the commit.
+  const stored = putObject(storageKey, upload.bytes, contentType).then(
+    () => ({ ok: true as const }),
+    (error: unknown) => ({ ok: false as const, error }),
+  );
   const { Attachment, Route, sequelize } = models();
   try {
     const route = await sequelize.transaction(async (transaction) => {
@@ -83,7 +77,7 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
           fileName: upload.fileName.slice(0, 255),
           contentType,
           sizeBytes: upload.bytes.byteLength,
-          sha256: createHash('sha256').update(upload.bytes).digest('hex'),
+          sha256,
           storageKey,
           uploadedBy: upload.userId,
         },
@@ -91,29 +85,34 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
       );
       const r = await Route.create(
         {
+          id: routeId,
           projectId: upload.projectId,
           name: upload.options.name,
           sourceAttachmentId: file.id,
           sourceFormat: survey.stats.format,
           createdBy: upload.userId,
-          pointCount: records.length,
+          pointCount: rows.count,
           lengthM: survey.stats.totalHorizontalLengthM,
-          slopeLengthM: records[records.length - 1].slopeChainageM ?? 0,
+          slopeLengthM: rows.slopeLengthM,
           features: survey.features ?? [],
           importNotes: notesOf(survey.warnings),
           closureErrorM: survey.stats.closureErrorM ?? null,
         },
         { transaction },
       );
-      await insertRoutePoints(r.id, records, transaction);
+      await insertRouteRows(rows, transaction);
       await recordActivity(transaction, {
         projectId: upload.projectId, actorUserId: upload.userId, kind: 'survey.imported', subjectType: 'route', subjectId: r.id,
-        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${records.length} points)`, data: { fileName: upload.fileName, points: records.length },
+        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${rows.count} points)`, data: { fileName: upload.fileName, points: rows.count },
       });
+      const put = await stored;
+      if (!put.ok) throw put.error;
       return toRouteSummary(r, file);
     });
     return { route, warnings: survey.warnings.slice(0, 50) };
   } catch (error) {
+    // Wait for the upload to settle, so an object that lands after the failure is removed too.
+    await stored;
     await removeStoredFiles([storageKey]);
     throw error;
   }

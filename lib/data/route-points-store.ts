@@ -10,67 +10,33 @@ import type { PointRecord } from '../routes/edit-ops';
 import { MAX_ROUTE_POINTS } from '../validations/routes';
 import type { HeightSource } from '../../hydraulics/index';
 import type { CheckedPoint, RoutePointView } from '../routes/types';
+import { pointRows, ROUTE_POINTS_COPY_SQL, type CopyRows } from './route-points-copy';
 
-const COPY_SQL = `COPY route_points (route_id, seq, latitude, longitude, chainage_m, slope_chainage_m, elevation_m,
-  raw_elevation_m, label, height_source, confidence_m, recorded_at, excluded, dismissed_checks) FROM STDIN`;
-
-/** Rows per piece of COPY text handed to the connection: big enough to keep the stream busy, small enough to stay in cache. */
-const ROWS_PER_PIECE = 2_000;
-
-const COPY_ESCAPES: Record<string, string> = { '\\': '\\\\', '\t': '\\t', '\n': '\\n', '\r': '\\r' };
-
-/** A value in COPY's text format: NULL as \N; backslash, tab and line breaks escaped (PostgreSQL manual, COPY, "Text Format"). */
-export function copyText(value: string | null): string {
-  return value === null ? '\\N' : value.replace(/[\\\t\n\r]/g, (c) => COPY_ESCAPES[c]);
-}
-
-/** Numbers print exactly (shortest round-trip form), as float8 reads them back. */
-const copyNumber = (value: number | null) => (value === null ? '\\N' : String(value));
-
-/** One point as a line of COPY text; seq = its position in the route. */
-function copyLine(routeId: string, seq: number, p: PointRecord): string {
-  return [
-    routeId,
-    seq,
-    copyNumber(p.latitude),
-    copyNumber(p.longitude),
-    copyNumber(p.chainageM),
-    copyNumber(p.slopeChainageM),
-    copyNumber(p.elevationM),
-    copyNumber(p.rawElevationM),
-    copyText(p.label),
-    copyText(p.heightSource),
-    copyNumber(p.confidenceM),
-    copyText(p.recordedAt),
-    p.excluded ? 't' : 'f',
-    // Check kinds are plain words with hyphens, so the array literal needs no quoting.
-    `{${p.dismissedChecks.join(',')}}`,
-  ].join('\t');
-}
-
-function* copyPieces(routeId: string, records: readonly PointRecord[]): Generator<string> {
-  for (let start = 0; start < records.length; start += ROWS_PER_PIECE) {
-    let piece = '';
-    const end = Math.min(records.length, start + ROWS_PER_PIECE);
-    for (let i = start; i < end; i++) piece += `${copyLine(routeId, i, records[i])}\n`;
-    yield piece;
-  }
+/** Pieces of a buffer, as views (no copy), for the COPY stream. */
+function* slices(bytes: Uint8Array, size: number): Generator<Uint8Array> {
+  for (let at = 0; at < bytes.byteLength; at += size) yield bytes.subarray(at, Math.min(at + size, bytes.byteLength));
 }
 
 /**
- * Bulk insert of a route's points with PostgreSQL's COPY on the transaction's own connection: the
- * rows go out as one text stream, with no statement, parameters or array literals per chunk.
+ * Bulk insert of rows already in COPY's binary form (`pointRows`, or `surveyRows` written by the
+ * worker that parsed an upload) with PostgreSQL's COPY on the transaction's own connection: one
+ * stream, no statement, parameters or text per row.
  */
-export async function insertRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+export async function insertRouteRows(rows: CopyRows, transaction: Transaction): Promise<void> {
   // Every way a route gets points (import, save, join, split, clean-up) ends here, so the cap holds for all of them.
-  if (records.length > MAX_ROUTE_POINTS) {
-    const message = `A route can hold at most ${MAX_ROUTE_POINTS.toLocaleString('en-US')} points; this one would have ${records.length.toLocaleString('en-US')}`;
+  if (rows.count > MAX_ROUTE_POINTS) {
+    const message = `A route can hold at most ${MAX_ROUTE_POINTS.toLocaleString('en-US')} points; this one would have ${rows.count.toLocaleString('en-US')}`;
     throw new AppError('bad_request', message, { points: [message] });
   }
-  if (records.length === 0) return;
+  if (rows.count === 0) return;
   // Sequelize keeps the transaction's pg client here (not in its typings).
   const client = (transaction as unknown as { connection: pg.ClientBase }).connection;
-  await pipeline(Readable.from(copyPieces(routeId, records)), client.query(copyFrom(COPY_SQL)));
+  await pipeline(Readable.from(slices(rows.bytes, 256 * 1024)), client.query(copyFrom(ROUTE_POINTS_COPY_SQL)));
+}
+
+/** Bulk insert of a route's points (seq = position in the list); see insertRouteRows. */
+export async function insertRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+  await insertRouteRows(pointRows(routeId, records), transaction);
 }
 
 interface PointRow {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { Transaction } from 'sequelize';
 import { models } from '../../models';
+import { teamOfProjectRow } from './projects';
 import type { Attachment } from '../../models/attachment';
 import type { Route } from '../../models/route';
 import { routeGpsWarning } from '../routes/gps-warning';
@@ -106,8 +107,7 @@ export async function routeProposals(routeId: string, query: RouteProposalsQuery
 }
 
 export async function teamOfRoute(routeId: string): Promise<string | null> {
-  const r = await models().Route.findByPk(routeId, { attributes: ['projectId'], include: [{ model: models().Project, as: 'project', attributes: ['teamId'] }] });
-  return (r as (Route & { project?: { teamId: string } }) | null)?.project?.teamId ?? null;
+  return teamOfProjectRow('routes', routeId);
 }
 
 /** The original uploaded file of a route, for download. */

@@ -33,9 +33,14 @@ export async function renameTeam(teamId: string, name: string): Promise<{ id: st
   return { id: teamId, name };
 }
 
-export async function teamExists(teamId: string): Promise<string | null> {
-  const team = await models().Team.findByPk(teamId, { attributes: ['id'], raw: true });
-  return team?.id ?? null;
+/**
+ * The team of a team's own address (`/api/teams/[teamId]/...`), with no lookup: teamRoute's one
+ * user-and-role query finds no membership for a team that does not exist (memberships reference
+ * teams and are deleted with them), so a missing team is answered 404 exactly as a team the user is
+ * not in, without a query of its own.
+ */
+export async function teamOfTeamPath({ teamId }: { teamId: string }): Promise<string> {
+  return teamId;
 }
 
 export async function getTeam(teamId: string): Promise<{ id: string; name: string } | null> {

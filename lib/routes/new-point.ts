@@ -6,7 +6,21 @@ export type NewPointFields = Omit<PointRecord, 'rawElevationM' | 'excluded' | 'd
 
 /** A point that enters a route: its height is both the surveyed and the cleaned one, it is kept and no check is dismissed yet. */
 export function newPointRecord(fields: NewPointFields): PointRecord {
-  return { ...fields, rawElevationM: fields.elevationM, excluded: false, dismissedChecks: [] };
+  // Field by field, not by spreading: an import makes one per point of a 100,000-point file.
+  return {
+    latitude: fields.latitude,
+    longitude: fields.longitude,
+    chainageM: fields.chainageM,
+    slopeChainageM: fields.slopeChainageM,
+    elevationM: fields.elevationM,
+    rawElevationM: fields.elevationM,
+    label: fields.label,
+    heightSource: fields.heightSource,
+    confidenceM: fields.confidenceM,
+    recordedAt: fields.recordedAt,
+    excluded: false,
+    dismissedChecks: [],
+  };
 }
 
 /** A parsed survey point as a new point of the route. */

@@ -80,23 +80,32 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
     }
   }
   const col = (i: number | null) => (i === null ? '' : table.headers[i]);
+  // One place per field, its line set per row: no objects per cell on a 100,000-row file (an error copies what it needs).
+  const place = (field: string, i: number | null) => ({ line: 0, column: col(i), field });
+  const at = {
+    latitude: place('latitude', mapping.latitude),
+    longitude: place('longitude', mapping.longitude),
+    elevation: place('elevation', mapping.elevation),
+    accuracy: place('accuracy', mapping.accuracy),
+    time: place('time', mapping.time),
+  };
+  const timeReading = { timeZone: options.timeZone, dateOrder: options.dateOrder };
   const drafts: DraftPoint[] = [];
   const rowsRead = table.forEachRow(
     (cells, line) => {
-      const at = (field: string, i: number | null) => ({ line, column: col(i), field });
-      const lat = readNumberCell(cells[mapping.latitude as number], dialect.decimalComma, at('latitude', mapping.latitude));
+      at.latitude.line = at.longitude.line = at.elevation.line = at.accuracy.line = at.time.line = line;
+      const lat = readNumberCell(cells[mapping.latitude as number], dialect.decimalComma, at.latitude);
       if (lat < -90 || lat > 90) {
-        throw new SurveyImportError('latitude-out-of-range', `latitude ${lat} is outside −90 to 90 degrees`, at('latitude', mapping.latitude));
+        throw new SurveyImportError('latitude-out-of-range', `latitude ${lat} is outside −90 to 90 degrees`, at.latitude);
       }
-      const lon = readNumberCell(cells[mapping.longitude as number], dialect.decimalComma, at('longitude', mapping.longitude));
+      const lon = readNumberCell(cells[mapping.longitude as number], dialect.decimalComma, at.longitude);
       if (lon < -180 || lon > 180) {
-        throw new SurveyImportError('longitude-out-of-range', `longitude ${lon} is outside −180 to 180 degrees`, at('longitude', mapping.longitude));
+        throw new SurveyImportError('longitude-out-of-range', `longitude ${lon} is outside −180 to 180 degrees`, at.longitude);
       }
-      const elevation = readNumberCell(cells[mapping.elevation as number], dialect.decimalComma, at('elevation', mapping.elevation));
-      const accuracy =
-        mapping.accuracy === null ? undefined : readOptionalNumberCell(cells[mapping.accuracy], dialect.decimalComma, at('accuracy', mapping.accuracy));
+      const elevation = readNumberCell(cells[mapping.elevation as number], dialect.decimalComma, at.elevation);
+      const accuracy = mapping.accuracy === null ? undefined : readOptionalNumberCell(cells[mapping.accuracy], dialect.decimalComma, at.accuracy);
       if (accuracy !== undefined && accuracy < 0) {
-        throw new SurveyImportError('not-a-number', `accuracy cannot be negative (${accuracy})`, at('accuracy', mapping.accuracy));
+        throw new SurveyImportError('not-a-number', `accuracy cannot be negative (${accuracy})`, at.accuracy);
       }
       drafts.push({
         line,
@@ -104,7 +113,7 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
         lon,
         elevationM: toMetres(elevation, elevationUnit),
         label: mapping.name === null ? undefined : (cells[mapping.name] ?? '').trim() || undefined,
-        time: mapping.time === null ? undefined : readTimeCell(cells[mapping.time], at('time', mapping.time), { timeZone: options.timeZone, dateOrder: options.dateOrder }),
+        time: mapping.time === null ? undefined : readTimeCell(cells[mapping.time], at.time, timeReading),
         confidence:
           accuracy === undefined ? undefined : accuracyIsVertical ? toMetres(accuracy, elevationUnit) : accuracy * VERTICAL_PER_HORIZONTAL,
       });

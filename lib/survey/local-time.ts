@@ -52,14 +52,23 @@ function offsetOf(text: string | undefined): number | undefined {
   return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4)));
 }
 
-function withTime(date: Omit<WrittenDate, 'hour' | 'minute' | 'second'>, m: RegExpMatchArray, at: number): WrittenDate {
+// Built as one literal (no spread) and checked without a Date: this runs once per fix of a 100,000-point walk.
+function withTime(year: number, month: number, day: number, m: RegExpExecArray, at: number): WrittenDate {
   const fraction = m[at + 3] ? Number(`0.${m[at + 3]}`) : 0;
-  return { ...date, hour: Number(m[at] ?? 0), minute: Number(m[at + 1] ?? 0), second: Number(m[at + 2] ?? 0) + fraction, offsetMinutes: offsetOf(m[at + 4]) };
+  return { year, month, day, hour: Number(m[at] ?? 0), minute: Number(m[at + 1] ?? 0), second: Number(m[at + 2] ?? 0) + fraction, offsetMinutes: offsetOf(m[at + 4]) };
+}
+
+const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
+/** Days in a month as Date.UTC counts them (Gregorian; years 0-99 taken as 1900-1999, as Date.UTC takes them). */
+function daysInMonth(written: number, month: number): number {
+  const year = written >= 0 && written <= 99 ? 1900 + written : written;
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+  return month === 2 && leap ? 29 : DAYS_IN_MONTH[month - 1];
 }
 
 function valid(d: WrittenDate): boolean {
-  const days = new Date(Date.UTC(d.year, d.month, 0)).getUTCDate();
-  return d.month >= 1 && d.month <= 12 && d.day >= 1 && d.day <= days && d.hour <= 23 && d.minute <= 59 && d.second < 61;
+  return d.month >= 1 && d.month <= 12 && d.day >= 1 && d.day <= daysInMonth(d.year, d.month) && d.hour <= 23 && d.minute <= 59 && d.second < 61;
 }
 
 /**
@@ -70,7 +79,7 @@ function valid(d: WrittenDate): boolean {
 export function readWrittenDate(text: string, order?: DateOrder): DateReading {
   const iso = ISO.exec(text);
   if (iso) {
-    const d = withTime({ year: Number(iso[1]), month: Number(iso[2]), day: Number(iso[3]) }, iso, 4);
+    const d = withTime(Number(iso[1]), Number(iso[2]), Number(iso[3]), iso, 4);
     return valid(d) ? { ok: true, date: d } : { ok: false, reason: 'unreadable' };
   }
   const num = NUMERIC.exec(text);
@@ -80,7 +89,7 @@ export function readWrittenDate(text: string, order?: DateOrder): DateReading {
   const decided: DateOrder | undefined = a > 12 ? 'day-first' : b > 12 ? 'month-first' : a === b ? 'day-first' : order;
   if (!decided) return { ok: false, reason: 'ambiguous-order' };
   const [day, month] = decided === 'day-first' ? [a, b] : [b, a];
-  const d = withTime({ year: Number(num[4]), month, day }, num, 5);
+  const d = withTime(Number(num[4]), month, day, num, 5);
   return valid(d) ? { ok: true, date: d } : { ok: false, reason: 'unreadable' };
 }
 

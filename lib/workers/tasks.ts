@@ -1,4 +1,6 @@
+import { createHash } from 'node:crypto';
 import { analyzeLine } from '../../hydraulics/index';
+import { surveyRows } from '../data/route-points-copy';
 import type { LineInput } from '../../hydraulics/index';
 import { thinAnalysis } from '../lines/thin-analysis';
 import { decodeHeic } from '../photos/decode-heic';
@@ -15,10 +17,16 @@ import type { SurveyImportOptions } from '../validations/survey-import';
  * models or the database: a worker thread has neither.
  */
 export const TASKS = {
-  /** Sniffs and parses an uploaded survey file with the chosen import options. */
-  'survey.parse': (input: { bytes: Uint8Array; fileName: string; options: SurveyImportOptions }) => {
+  /**
+   * Sniffs and parses an uploaded survey file with the chosen import options, and writes its points
+   * as the rows of route `routeId` in COPY text: the request thread gets one buffer to stream to
+   * the database, not 100,000 objects to copy across threads and convert again. Also the file's
+   * SHA-256, so the request thread does not hash it either.
+   */
+  'survey.parse': (input: { bytes: Uint8Array; fileName: string; options: SurveyImportOptions; routeId: string }) => {
     const { text } = sniffSurveyFile(input.bytes, { fileName: input.fileName });
-    return parseSurveyText(text, input.options);
+    const { points, ...outline } = parseSurveyText(text, input.options);
+    return { survey: outline, rows: surveyRows(input.routeId, points), sha256: createHash('sha256').update(input.bytes).digest('hex') };
   },
   /** Analyses a whole line (the core's analyzeLine); `profilePoints` thins the profile for drawing. */
   'line.analyse': (input: { line: LineInput; profilePoints?: number }) => {

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as importRoute from '@/app/api/projects/[projectId]/routes/import/route';
+import { importSurvey } from '@/lib/data/route-import';
 import { listKeys } from '@/lib/storage';
 import { call, createTeamFixture } from '../support/api';
 import { multipartBody } from '../support/multipart';
@@ -126,6 +127,17 @@ describe('malformed survey uploads through the import handler: a clear error, no
       const r2 = await call(importRoute.POST, { method: 'POST', path: 'x', params: { projectId: f.projectId }, rawBody: notJson.body, headers: { 'content-type': notJson.contentType }, userId: f.users.owner.id });
       expect(r2.status).toBe(400);
       expect(r2.json.error.message).toBe('The import options are not valid JSON');
+    });
+  });
+
+  it('a write the database refuses after the file was read leaves no route, no points and no stored file', async () => {
+    // A project that does not exist: the attachment row is refused inside the transaction while the
+    // original is being stored alongside it; both must be undone.
+    const missingProject = '00000000-0000-4000-8000-00000000dead';
+    await nothingStored(missingProject, async () => {
+      const bytes = new TextEncoder().encode(fixtureText('walked-route.gpx'));
+      const error = await importSurvey({ projectId: missingProject, userId: f.users.owner.id, fileName: 'walk.gpx', contentType: 'application/gpx+xml', bytes, options: GPX as never }).catch((e: unknown) => e);
+      expect(String(error)).toMatch(/foreign key/i);
     });
   });
 

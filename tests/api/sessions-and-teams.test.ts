@@ -2,8 +2,12 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { POST as signOutEverywhere } from '@/app/api/accounts/sign-out-everywhere/route';
 import { GET as getProject } from '@/app/api/projects/[projectId]/route';
 import { DELETE as removeMember, PATCH as changeRole } from '@/app/api/teams/[teamId]/members/[userId]/route';
+import { GET as listTeamProjects } from '@/app/api/teams/[teamId]/projects/route';
 import { GET as listTeams } from '@/app/api/teams/route';
 import { authOptions } from '@/lib/auth/options';
+import { teamOfLine } from '@/lib/data/lines';
+import { teamOfProject } from '@/lib/data/projects';
+import { teamOfRoute } from '@/lib/data/routes';
 import { models } from '@/models';
 import { call, createTeamFixture, sessionCookie } from '../support/api';
 
@@ -73,5 +77,44 @@ describe('teams', () => {
     const demote = await call(changeRole, { method: 'PATCH', path: '/x', params: { teamId: f.teamId, userId: f.users.owner.id }, body: { role: 'viewer' }, userId: f.users.owner.id });
     expect(demote.status).toBe(200);
     expect(demote.json.member.role).toBe('viewer');
+  });
+});
+
+describe("a team's project list", () => {
+  let f: Fixture;
+  beforeEach(async () => {
+    f = await createTeamFixture();
+  });
+
+  it('lists every project exactly as the project read shows it, most recently changed first', async () => {
+    const { Project } = models();
+    const older = await Project.findByPk(f.projectId);
+    await older!.update({ frostDepthM: 0.9, decimalMark: ',', timeZone: 'Pacific/Auckland', archivedAt: new Date('2026-11-30T10:00:00Z') });
+    const newer = await Project.create({ teamId: f.teamId, name: 'Upper tank line', description: 'to the ridge', siteNotes: 'gate code 4', unitSystem: 'us' });
+    const res = await call(listTeamProjects, { method: 'GET', path: '/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    expect(res.status).toBe(200);
+    const one = async (projectId: string) => (await call(getProject, { method: 'GET', path: '/x', params: { projectId }, userId: f.users.viewer.id })).json.project;
+    expect(res.json.projects).toEqual([await one(newer.id), await one(f.projectId)]);
+    expect(res.json.projects[1]).toMatchObject({ frostDepthM: 0.9, decimalMark: ',', timeZone: 'Pacific/Auckland', archived: true });
+  });
+
+  it("finds the team of a project and of a project's rows, and none for an id that names nothing", async () => {
+    const missing = '00000000-0000-4000-8000-000000000000';
+    expect(await teamOfProject(f.projectId)).toBe(f.teamId);
+    expect(await teamOfRoute(f.routeId)).toBe(f.teamId);
+    expect(await teamOfLine(f.lineId)).toBe(f.teamId);
+    for (const lookup of [teamOfProject, teamOfRoute, teamOfLine]) expect(await lookup(missing)).toBeNull();
+    // A project id is not a line id: each lookup reads its own table.
+    expect(await teamOfLine(f.projectId)).toBeNull();
+  });
+
+  it('answers a team that does not exist as it answers a team the user is not in (404), and no session first (401)', async () => {
+    const missing = { teamId: '00000000-0000-4000-8000-000000000000' };
+    const other = await call(listTeamProjects, { method: 'GET', path: '/x', params: { teamId: f.teamId }, userId: f.users.outsider.id });
+    const none = await call(listTeamProjects, { method: 'GET', path: '/x', params: missing, userId: f.users.owner.id });
+    expect(other.status).toBe(404);
+    expect(none.status).toBe(404);
+    expect(none.json).toEqual(other.json);
+    expect((await call(listTeamProjects, { method: 'GET', path: '/x', params: missing })).status).toBe(401);
   });
 });

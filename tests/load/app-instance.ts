@@ -4,6 +4,8 @@ import fs from 'node:fs';
 /** One `next start` of the built app, in its own process group. */
 export interface AppInstance {
   port: number;
+  /** The server's process group (it leads it): what its CPU time is read from. */
+  pid: number;
   /** SIGTERM: the server stops accepting connections, finishes the requests it has, then exits. */
   drainAndStop: () => Promise<void>;
 }
@@ -42,6 +44,7 @@ export async function startAppInstance(port: number, env: NodeJS.ProcessEnv, log
   }
   return {
     port,
+    pid: child.pid!,
     drainAndStop: async () => {
       if (child.exitCode !== null) return;
       process.kill(-child.pid!, 'SIGTERM');

@@ -4,29 +4,35 @@ import { db } from '@/lib/db';
 // Counters that a refused request may legitimately move (rate limits) are not application data.
 const NOT_DATA = new Set(['rate_limits', 'SequelizeMeta', 'SequelizeData']);
 
+/** Runs a read on some database and returns its rows. */
+export type ReadRows = (sql: string) => Promise<object[]>;
+const appDatabase: ReadRows = (sql) => db().query(sql, { type: QueryTypes.SELECT });
+
 let tables: string[] | undefined;
 
-async function dataTables(): Promise<string[]> {
-  tables ??= (await db().query<{ name: string }>(`SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`, { type: QueryTypes.SELECT }))
-    .map((t) => t.name)
-    .filter((name) => !NOT_DATA.has(name));
+async function dataTables(rows: ReadRows = appDatabase): Promise<string[]> {
+  const read = async () =>
+    ((await rows(`SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)) as { name: string }[]).map((t) => t.name).filter((name) => !NOT_DATA.has(name));
+  if (rows !== appDatabase) return read();
+  tables ??= await read();
   return tables;
 }
 
 /**
  * The database's fingerprint: per table, its row count and a hash of its rows (the sum of each
  * row's md5, so no sort is needed and the order rows are stored in does not matter). Two equal
- * fingerprints mean nothing was written in between. One round trip for every table.
+ * fingerprints mean nothing was written in between. One round trip for every table. The app's
+ * database unless `rows` reads another (the backup tests' scratch database).
  */
-export async function fingerprint(): Promise<Record<string, string>> {
-  const names = await dataTables();
+export async function fingerprint(rows: ReadRows = appDatabase): Promise<Record<string, string>> {
+  const names = await dataTables(rows);
   const parts = names.map((name) => {
     const quoted = `"${name.replace(/"/g, '""')}"`;
     const literal = `'${name.replace(/'/g, "''")}'`;
     return `SELECT ${literal} AS name, count(*)::text AS n, coalesce(sum(('x' || left(md5(t::text), 15))::bit(60)::bigint::numeric), 0)::text AS h FROM ${quoted} t`;
   });
-  const rows = await db().query<{ name: string; n: string; h: string }>(parts.join(' UNION ALL '), { type: QueryTypes.SELECT });
-  return Object.fromEntries(rows.map((r) => [r.name, `${r.n}:${r.h}`]));
+  const result = (await rows(parts.join(' UNION ALL '))) as { name: string; n: string; h: string }[];
+  return Object.fromEntries(result.map((r) => [r.name, `${r.n}:${r.h}`]));
 }
 
 /** Tables whose fingerprint differs, for a readable failure. */

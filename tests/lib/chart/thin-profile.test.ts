@@ -122,3 +122,73 @@ describe('thinning with a height tolerance (reversalM)', () => {
     for (const i of turningIndices(y, 0.6)) expect(set.has(i)).toBe(true);
   });
 });
+
+describe('thinning to pixel columns (columns)', () => {
+  /**
+   * What a column of pixels shows, read apart from the code under test: the heights the whole series
+   * reaches inside the column, and the heights the polyline through the kept points reaches there
+   * (its vertices in the column plus the two segments that enter and leave it, cut at its edges).
+   */
+  function columnSpans(x: ArrayLike<number>, y: ArrayLike<number>, kept: readonly number[], columns: number) {
+    const x0 = x[0];
+    const width = (x[x.length - 1] - x0) / columns;
+    const spans: { c: number; all: [number, number]; drawn: [number, number] }[] = [];
+    const yOn = (a: number, b: number, at: number) => (x[b] === x[a] ? y[a] : y[a] + ((y[b] - y[a]) * (at - x[a])) / (x[b] - x[a]));
+    for (let c = 0; c < columns; c++) {
+      const left = x0 + c * width;
+      const right = c === columns - 1 ? x[x.length - 1] : x0 + (c + 1) * width;
+      let lo = Infinity;
+      let hi = -Infinity;
+      for (let i = 0; i < x.length; i++) if (x[i] >= left && x[i] <= right) [lo, hi] = [Math.min(lo, y[i]), Math.max(hi, y[i])];
+      if (lo === Infinity) continue;
+      let dlo = Infinity;
+      let dhi = -Infinity;
+      for (let k = 0; k + 1 < kept.length; k++) {
+        const [a, b] = [kept[k], kept[k + 1]];
+        if (x[b] < left || x[a] > right) continue;
+        for (const at of [Math.max(x[a], left), Math.min(x[b], right)]) {
+          const v = yOn(a, b, at);
+          [dlo, dhi] = [Math.min(dlo, v), Math.max(dhi, v)];
+        }
+      }
+      spans.push({ c, all: [lo, hi], drawn: [dlo, dhi] });
+    }
+    return spans;
+  }
+
+  it('every column still reaches the lowest and highest height of the series in it', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.constantFrom(0.05, 0.6, 3), fc.integer({ min: 20, max: 400 }), (seed, noise, columns) => {
+        const { x, y } = route(seed, noise, 6_000);
+        const kept = thinProfile(x, y, { targetPoints: 2 * columns, columns });
+        expect(kept[0]).toBe(0);
+        expect(kept[kept.length - 1]).toBe(y.length - 1);
+        for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
+        for (const { c, all, drawn } of columnSpans(x, y, kept, columns)) {
+          if (drawn[0] > all[0] + 1e-9 || drawn[1] < all[1] - 1e-9) throw new Error(`column ${c}: series spans ${all}, the drawn line ${drawn}`);
+        }
+      }),
+      { numRuns: 30 },
+    );
+  });
+
+  it('keeps each column’s highest and lowest high or low exactly, and a few points per column on a noisy line', () => {
+    const { x, y } = route(11, 0.6);
+    const columns = 900;
+    const kept = new Set(thinProfile(x, y, { targetPoints: 2 * columns, columns }));
+    expect(kept.size).toBeLessThan(9 * columns);
+    expect(thinProfile(x, y, { targetPoints: 2 * columns }).length).toBeGreaterThan(20 * columns);
+    const perColumn = new Map<number, number[]>();
+    const width = (x[x.length - 1] - x[0]) / columns;
+    for (const i of localExtremeIndices(y)) {
+      const c = Math.min(Math.floor((x[i] - x[0]) / width), columns - 1);
+      perColumn.set(c, [...(perColumn.get(c) ?? []), i]);
+    }
+    for (const [c, turns] of perColumn) {
+      const hi = Math.max(...turns.map((i) => y[i]));
+      const lo = Math.min(...turns.map((i) => y[i]));
+      if (!turns.some((i) => kept.has(i) && y[i] === hi)) throw new Error(`column ${c} lost its highest point ${hi}`);
+      if (!turns.some((i) => kept.has(i) && y[i] === lo)) throw new Error(`column ${c} lost its lowest point ${lo}`);
+    }
+  });
+});

@@ -26,6 +26,20 @@ describe('dates in either order are asked, never guessed', () => {
     expect(readWrittenDate('next Tuesday')).toEqual({ ok: false, reason: 'unreadable' });
   });
 
+  it('a day is valid exactly when the calendar has it: leap years by the Gregorian rule, every month of 1896-2104', () => {
+    for (let year = 1896; year <= 2104; year++) {
+      for (let month = 1; month <= 12; month++) {
+        for (let day = 27; day <= 32; day++) {
+          const text = `${year}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')}`;
+          const calendarHasIt = new Date(Date.UTC(year, month - 1, day)).getUTCDate() === day;
+          expect(readWrittenDate(text).ok, text).toBe(calendarHasIt);
+        }
+      }
+    }
+    expect(readWrittenDate('29.02.1900').ok).toBe(false);
+    expect(readWrittenDate('29.02.2000').ok).toBe(true);
+  });
+
   it('the mapping screen sees the ambiguity in the first rows of the time column', () => {
     expect(sampleDatesAmbiguous([['46.1', '7.2', '01.05.2024 07:30']], 2)).toBe(true);
     expect(sampleDatesAmbiguous([['46.1', '7.2', '13.05.2024 07:30']], 2)).toBe(false);

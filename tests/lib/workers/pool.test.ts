@@ -37,7 +37,7 @@ describe('the worker pool', () => {
 
   it('gives back a survey refusal as its own class, with its line and code', async () => {
     const bytes = new TextEncoder().encode('lat,lon,ele\n52.1,-1.2,100\n52.2,x,101\n');
-    const error = await runInWorker('survey.parse', { bytes, fileName: 'walk.csv', options: gpsOptions as never }).catch((e: unknown) => e);
+    const error = await runInWorker('survey.parse', { bytes, fileName: 'walk.csv', options: gpsOptions as never, routeId: '00000000-0000-4000-8000-000000000000' }).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(SurveyImportError);
     expect((error as SurveyImportError).code).toBe('not-a-number');
     expect((error as SurveyImportError).line).toBe(3);

@@ -1,8 +1,8 @@
 import { teamRoute } from '@/lib/api/route';
-import { getTeam, renameTeam, teamExists } from '@/lib/data/teams';
+import { getTeam, renameTeam, teamOfTeamPath } from '@/lib/data/teams';
 import { RenameTeamSchema, TeamParams } from '@/lib/validations/teams';
 
-const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
+const teamOf = teamOfTeamPath;
 
 export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId, role }) => ({
   team: { ...(await getTeam(teamId))!, role },

@@ -1,9 +1,9 @@
 import { teamRoute } from '@/lib/api/route';
 import { inviteToTeam, listOpenInvitations } from '@/lib/data/invitations';
-import { teamExists } from '@/lib/data/teams';
+import { teamOfTeamPath } from '@/lib/data/teams';
 import { InviteMemberSchema, TeamParams } from '@/lib/validations/teams';
 
-const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
+const teamOf = teamOfTeamPath;
 
 export const GET = teamRoute({ params: TeamParams, permission: 'team.manage', teamOf }, async ({ teamId }) => ({
   invitations: await listOpenInvitations(teamId),

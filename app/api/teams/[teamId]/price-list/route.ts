@@ -1,10 +1,10 @@
 import { teamRoute } from '@/lib/api/route';
 import { readPriceList, replacePriceList } from '@/lib/data/price-list';
-import { teamExists } from '@/lib/data/teams';
+import { teamOfTeamPath } from '@/lib/data/teams';
 import { PriceListSchema } from '@/lib/validations/network';
 import { TeamParams } from '@/lib/validations/teams';
 
-const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
+const teamOf = teamOfTeamPath;
 
 export const GET = teamRoute({ params: TeamParams, permission: 'team.view', teamOf }, async ({ teamId }) => ({
   items: await readPriceList(teamId),

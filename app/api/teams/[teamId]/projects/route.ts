@@ -1,10 +1,10 @@
 import { teamRoute } from '@/lib/api/route';
 import { createProject, listProjects } from '@/lib/data/projects';
-import { teamExists } from '@/lib/data/teams';
+import { teamOfTeamPath } from '@/lib/data/teams';
 import { CreateProjectSchema } from '@/lib/validations/projects';
 import { TeamParams } from '@/lib/validations/teams';
 
-const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
+const teamOf = teamOfTeamPath;
 
 export const GET = teamRoute({ params: TeamParams, permission: 'project.view', teamOf }, async ({ teamId }) => ({
   projects: await listProjects(teamId),

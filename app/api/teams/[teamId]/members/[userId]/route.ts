@@ -1,8 +1,8 @@
 import { teamRoute } from '@/lib/api/route';
-import { changeRole, removeMember, teamExists } from '@/lib/data/teams';
+import { changeRole, removeMember, teamOfTeamPath } from '@/lib/data/teams';
 import { ChangeRoleSchema, MemberParams } from '@/lib/validations/teams';
 
-const teamOf = ({ teamId }: { teamId: string }) => teamExists(teamId);
+const teamOf = teamOfTeamPath;
 
 export const PATCH = teamRoute(
   { params: MemberParams, body: ChangeRoleSchema, permission: 'team.manage', teamOf },
