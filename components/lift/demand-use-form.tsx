@@ -8,22 +8,25 @@ import { FormMessage } from '@/components/ui/form-message';
 import { publishedFigureOf } from '@/lib/lift/demand';
 import type { DemandUseRecord } from '@/lib/lift/records';
 import { useSaveDemandUse } from '@/lib/queries/lift';
-import { formatQuantity, fromDisplay, inputValue, unitOf, type UnitSystem } from '@/lib/units';
+import { formatQuantity, fromDisplay, inputValue, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
+import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
 import { figureQuantity, PER_UNIT } from './demand-format';
 import { NumberField } from './number-field';
 import { useForm } from '@/lib/forms/use-form';
 import { numberFrom, numberOrNull } from './typed-number';
 
 const FIGURES = { people: DEFAULT_DEMAND_FIGURES.perPerson, livestock: DEFAULT_DEMAND_FIGURES.livestock, garden: DEFAULT_DEMAND_FIGURES.garden, fixed: [] };
-const DEFAULT_FIGURE = { people: 'most-needs', livestock: 'cow-calf-pair', garden: 'vegetables-inch-per-week', fixed: '' };
+/** The figure a new use starts with; a person's daily use follows the project's units (profile-and-checks.md §7.1). */
+const defaultFigure = (kind: Kind, units: UnitSystem) =>
+  ({ people: unitDefaults(units).perPersonFigureId, livestock: 'cow-calf-pair', garden: 'vegetables-inch-per-week', fixed: '' })[kind];
 type Kind = DemandUseInput['kind'];
 
 function initialState(use: DemandUseRecord | null, units: UnitSystem) {
   const kind: Kind = use?.kind ?? 'people';
   return {
     kind, label: use?.label ?? '', count: use?.count === null || use?.count === undefined ? '' : String(use.count), area: inputValue('area', use?.areaM2, units),
-    season: use?.season ?? 'summer', figureId: use?.figureId ?? DEFAULT_FIGURE[kind], own: inputValue(figureQuantity(kind), use?.ownFigure, units),
+    season: use?.season ?? 'summer', figureId: use?.figureId ?? defaultFigure(kind, units), own: inputValue(figureQuantity(kind), use?.ownFigure, units),
     deliveryKind: use?.deliveryKind ?? 'peak-factor', peakFactor: String(use?.peakFactor ?? 3), hours: String(use?.deliveryHours ?? 4),
     startHour: String(use?.startHour ?? 6), presetId: use?.patternPresetId ?? 'jordan-morning-evening',
   };
@@ -34,7 +37,7 @@ export function DemandUseForm({ projectId, units, use, onDone }: { projectId: st
   const [state, setState] = useState(() => initialState(use, units));
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveDemandUse(projectId);
-  const form = useForm({ schema: DemandUseSchema, save: (input) => save.mutateAsync({ id: use?.id ?? null, input }), savedText: use ? 'Use saved.' : 'Use added.' });
+  const form = useForm({ schema: DemandUseSchema, save: (input) => save.mutateAsync({ id: use?.id ?? null, input }), savedText: use ? 'Use saved.' : 'Use added.' }, { table: DEMAND_USE_WORDS, units });
   const kind = state.kind as Kind;
   const published = publishedFigureOf({ kind, figureId: state.figureId || null, season: state.season as 'winter' | 'summer' });
   const id = (name: string) => `use-${use?.id.slice(0, 8) ?? 'new'}-${name}`;
@@ -62,7 +65,7 @@ export function DemandUseForm({ projectId, units, use, onDone }: { projectId: st
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-3 sm:grid-cols-4" aria-label={use ? 'Edit use' : 'Add a use'}>
-      <SelectField id={id('kind')} label="Use" value={kind} onChange={(event) => setState((previous) => ({ ...previous, kind: event.target.value as Kind, figureId: DEFAULT_FIGURE[event.target.value as Kind], own: '' }))}>
+      <SelectField id={id('kind')} label="Use" value={kind} onChange={(event) => setState((previous) => ({ ...previous, kind: event.target.value as Kind, figureId: defaultFigure(event.target.value as Kind, units), own: '' }))}>
         <option value="people">People</option><option value="livestock">Livestock</option><option value="garden">Garden</option><option value="fixed">Other, a daily volume</option>
       </SelectField>
       <TextField id={id('label')} label="Label" value={state.label} onChange={(event) => set('label', event.target.value)} errors={form.fields.label} placeholder="e.g. Farmhouse" />

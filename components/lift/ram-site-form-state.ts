@@ -1,6 +1,6 @@
 import { findPipe, PIPE_SERIES, type RamEfficiencyTableId } from '@/hydraulics/index';
 import type { RamSiteRecord } from '@/lib/lift/records';
-import { fromDisplay, inputValue, type UnitSystem } from '@/lib/units';
+import { fromDisplay, inputValue, unitDefaults, type UnitSystem } from '@/lib/units';
 import { numberFrom, numberOrNull } from './typed-number';
 
 /** The ram form's boxes, as typed (project units). */
@@ -31,10 +31,11 @@ export interface RamSiteFormState {
   notes: string;
 }
 
-export function emptyRamSiteForm(): RamSiteFormState {
+/** An empty ram form: the delivery pipe opens on the project's pipe series (ASTM in a US project, ISO in a metric one). */
+export function emptyRamSiteForm(units: UnitSystem): RamSiteFormState {
   return {
     name: '', sourceId: '', tankId: '', driveFlow: '', fall: '', driveLength: '', driveBore: '', driveMaterial: 'steel', driveRigid: 'auto',
-    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: 'custom', pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
+    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: unitDefaults(units).pipeSeriesId, pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
     sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', efficiencyTableId: 'trade-pocketbook', notes: '',
   };
 }

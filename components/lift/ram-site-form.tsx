@@ -12,6 +12,8 @@ import { formatDuration, formatQuantity, inputValue, unitOf, type UnitSystem } f
 import { RamSiteSchema } from '@/lib/validations/ram-sites';
 import { DeliveryPipeFields } from './delivery-pipe-fields';
 import { NumberField } from './number-field';
+import { RAM_SITE_WORDS } from '@/lib/validations/field-word-tables';
+import { issueText } from '@/lib/validations/field-words';
 import { emptyRamSiteForm, ramSiteFormFrom, ramSiteInputFrom, type RamSiteFormState } from './ram-site-form-state';
 import { useForm } from '@/lib/forms/use-form';
 
@@ -27,16 +29,20 @@ export interface RamSiteFormProps {
 
 /** The ram site: fall, drive pipe, lift, delivery pipe, size class and pumps; the plan updates as you type. */
 export function RamSiteForm({ projectId, units, site, sources, tanks, routes, onDone }: RamSiteFormProps) {
-  const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm()));
+  const [state, setState] = useState<RamSiteFormState>(() => (site ? ramSiteFormFrom(site, units) : emptyRamSiteForm(units)));
   const set = <K extends keyof RamSiteFormState>(key: K, value: RamSiteFormState[K]) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveRamSite(projectId);
-  const form = useForm({ schema: RamSiteSchema, save: (input) => save.mutateAsync({ id: site?.id ?? null, input }), savedText: site ? 'Ram site saved.' : 'Ram site added.' });
+  const form = useForm({ schema: RamSiteSchema, save: (input) => save.mutateAsync({ id: site?.id ?? null, input }), savedText: site ? 'Ram site saved.' : 'Ram site added.' }, { table: RAM_SITE_WORDS, units });
   const tankVolumeM3 = tanks.find((tank) => tank.id === state.tankId)?.volumeM3 ?? null;
   const preview = useMemo(() => {
     if (![state.driveFlow, state.fall, state.lift].some((text) => text.trim() !== '')) return null;
     // The name does not change the plan, so a site without one yet still gets its preview.
     const parsed = RamSiteSchema.safeParse({ ...ramSiteInputFrom(state, units), name: state.name.trim() || 'preview' });
-    if (!parsed.success) return { ok: false as const, error: parsed.error.issues[0]?.message ?? 'check the fields' };
+    if (!parsed.success) {
+      // The same words as the refusal beside the box (the screen's name, the project's units).
+      const first = parsed.error.issues[0];
+      return { ok: false as const, error: first ? issueText(first, units, RAM_SITE_WORDS) : 'check the fields' };
+    }
     return planRamSite(parsed.data, { routes, tankVolumeM3 });
   }, [state, units, routes, tankVolumeM3]);
   const source = sources.find((candidate) => candidate.id === state.sourceId);
@@ -45,7 +51,7 @@ export function RamSiteForm({ projectId, units, site, sources, tanks, routes, on
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (!(await form.submit(ramSiteInputFrom(state, units)))) return;
-    if (!site) setState(emptyRamSiteForm());
+    if (!site) setState(emptyRamSiteForm(units));
     onDone?.();
   }
 

@@ -8,6 +8,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import type { TankRecord } from '@/lib/lift/records';
 import { useSaveTank } from '@/lib/queries/lift';
 import { fromDisplay, inputValue, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
+import { TANK_WORDS } from '@/lib/validations/field-word-tables';
 import { TankSchema } from '@/lib/validations/tanks';
 import { NumberField } from './number-field';
 import { useForm } from '@/lib/forms/use-form';
@@ -36,7 +37,7 @@ export function TankForm({ projectId, units, tank, sources, onDone }: {
   const setOutlet = (index: number, key: keyof Outlet, value: string) =>
     setState((previous) => ({ ...previous, outlets: previous.outlets.map((outlet, i) => (i === index ? { ...outlet, [key]: value } : outlet)) }));
   const save = useSaveTank(projectId);
-  const form = useForm({ schema: TankSchema, save: (input) => save.mutateAsync({ id: tank?.id ?? null, input }), savedText: tank ? 'Tank saved.' : 'Tank added.' });
+  const form = useForm({ schema: TankSchema, save: (input) => save.mutateAsync({ id: tank?.id ?? null, input }), savedText: tank ? 'Tank saved.' : 'Tank added.' }, { table: TANK_WORDS, units });
   const id = (name: string) => `tank-${tank?.id.slice(0, 8) ?? 'new'}-${name}`;
   const si = (quantity: Quantity, text: string) => fromDisplay(quantity, numberFrom(text), units);
   const siOrNull = (quantity: Quantity, text: string) => (numberOrNull(text) === null ? null : si(quantity, text));

@@ -1,5 +1,6 @@
 'use client';
 
+import { CUSTOM_PIPE_WORDS } from '@/lib/validations/field-word-tables';
 import { useState, type FormEvent } from 'react';
 import { fromDisplay, type DisplayUnits } from '@/lib/units';
 import { useForm } from '@/lib/forms/use-form';
@@ -12,7 +13,7 @@ const INPUT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-
 
 /** A pipe not in the catalogue (old stock, another standard), checked by the catalogue's own guard. */
 export function CustomPipeForm({ design, units, change }: { design: LineDesign; units: DisplayUnits; change: Change }) {
-  const form = useForm();
+  const form = useForm(undefined, { table: CUSTOM_PIPE_WORDS, units: units.system });
   const fields = form.fields;
   const [message, setMessage] = useState<string | null>(null);
 

@@ -7,7 +7,7 @@ import type { LineDesign } from '@/lib/validations/line-design';
 import { useState } from 'react';
 import { UnitNumberInput } from './unit-number-input';
 import { useReportUnsaved } from './unsaved-values';
-import { type DisplayUnits, formatQuantity, fromDisplay, toDisplay } from '@/lib/units';
+import { type DisplayUnits, formatPlainNumber, formatQuantity, fromDisplay, toDisplay, unitDefaults } from '@/lib/units';
 
 type Change = (next: LineDesign, label: string) => string | null;
 
@@ -143,6 +143,7 @@ export function EndsForm({ design, units, change, canEdit, firstGroundM, lastGro
         </div>
         {(flow.kind === 'design' || typingDesignFlow) && (
           <UnitNumberInput id="design-flow" label="Design flow" unit={units.flow} digits={3} value={flow.kind === 'design' ? toDisplay('designFlow', flow.flowM3s, units.system) : undefined} disabled={!canEdit}
+            placeholder={`e.g. ${formatPlainNumber(toDisplay('designFlow', unitDefaults(units.system).designFlowM3s, units.system), 0)}`}
             hint={typingDesignFlow ? `Type the flow the line must carry; until then the line keeps ${flow.kind === 'find' ? 'finding its flow by gravity' : 'what the ram delivers'}` : undefined}
             onCommit={(v) => {
               if (v! < 0) return 'The flow cannot be negative';

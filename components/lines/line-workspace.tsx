@@ -2,7 +2,7 @@
 
 import { LoadError } from '@/components/ui/load-error';
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { applyLineFixes, highLowToleranceM, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
+import { applyLineFixes, type LineDeviceKind, type LineWarning } from '@/hydraulics/index';
 import { warningRange } from '@/lib/chart/profile-marks';
 import { panView, viewAround, zoomView, type ChainageView } from '@/lib/chart/profile-view';
 import { lineAnchorChoices } from '@/lib/review/anchor-choices';
@@ -15,7 +15,7 @@ import { addDevice } from '@/lib/lines/edit-design';
 import { designWithInput, lineFeedOf, lineInputOf } from '@/lib/lines/line-input';
 import { ramFeedAnswers } from '@/lib/lines/ram-feed';
 import type { LineSiteContext } from '@/lib/lines/ram-start';
-import { lineWinterPlan, winterWarnings } from '@/lib/lines/winter';
+import { lineFixItems } from '@/lib/lines/fix-items';
 import { useRoutePhotos } from '@/lib/queries/photos';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { fixWords } from '@/lib/lines/warning-words';
@@ -98,15 +98,13 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
     }
   }, [design, stations, context]);
   const ramFeed = useMemo(() => (analysis ? ramFeedAnswers(design, context, analysis, stations[0].groundElevationM) : null), [analysis, design, context, stations]);
-  const winter = useMemo(
-    () => (analysis ? lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, design.winter, context.frostDepthM, stations.every((s) => s.coverM === undefined)) : null),
-    [analysis, design.winter, context.frostDepthM, stations],
-  );
   // The winter findings stand with the line's other items: counted in the answers and listed under "What to fix".
-  const warnings = useMemo(
-    () => (analysis ? [...analysis.warnings, ...(winter ? winterWarnings(winter, context.overdueDrainDownOn ?? null) : [])] : []),
-    [analysis, winter, context.overdueDrainDownOn],
+  const items = useMemo(
+    () => (analysis ? lineFixItems(analysis, design.winter, context, stations.every((s) => s.coverM === undefined)) : null),
+    [analysis, design.winter, context, stations],
   );
+  const winter = items?.winter ?? null;
+  const warnings = useMemo(() => items?.warnings ?? [], [items]);
   const answers = useMemo(() => (analysis ? lineAnswers({ ...analysis, warnings }) : null), [analysis, warnings]);
   const highlight = analysis && selected !== null && warnings[selected] ? warningRange(warnings[selected]) : null;
 
@@ -169,7 +167,7 @@ export function LineWorkspace({ line, stations, context, projectName, unitSystem
           )}
           {analysis.settings.heightScatterM > 0.1 && (
             <p className="text-sm text-creek-700" data-testid="survey-scatter-note">
-              Heights on this route scatter by about {formatQuantity('length', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
+              Heights on this route scatter by about {formatQuantity('depth', analysis.settings.heightScatterM, units.system)} (the survey&apos;s stated accuracy): highs and lows smaller than that are grouped under the real one, and a result within that of its limit says so. Level the critical points before ordering pipe.
             </p>
           )}
           <WarningsPanel csvFileName={reportFileName(line.name, draft.revision, 'csv', 'warnings')} warnings={warnings} units={units} selected={selected} onSelect={selectWarning} onApply={applyFix} canEdit={canEdit} />

@@ -13,10 +13,10 @@ export function ProfileReadout({ data, index, units }: { data: ProfileChartData;
   const stretch = data.stretches[p.stretchIndex[index]];
   const items: [string, string][] = [
     ['Chainage', formatQuantity('chainage', p.chainageM[index], units.system)],
-    ['Ground', formatQuantity('length', p.groundElevationM[index], units.system, 2)],
-    ['Pipe', formatQuantity('length', p.pipeElevationM[index], units.system, 2)],
-    ['Hydraulic grade', formatQuantity('length', p.hydraulicGradeM[index], units.system, 2)],
-    ['Static head', formatQuantity('length', p.staticHeadM[index], units.system, 2)],
+    ['Ground', formatQuantity('elevation', p.groundElevationM[index], units.system)],
+    ['Pipe', formatQuantity('elevation', p.pipeElevationM[index], units.system)],
+    ['Hydraulic grade', formatQuantity('elevation', p.hydraulicGradeM[index], units.system)],
+    ['Static head', formatQuantity('elevation', p.staticHeadM[index], units.system)],
     ['Static pressure', formatHeadPressure(p.staticPressureHeadM[index], units.system, t)],
     ['Flowing pressure', formatHeadPressure(p.pressureHeadM[index], units.system, t)],
     ['Velocity', formatQuantity('velocity', p.velocityMs[index], units.system)],

@@ -26,7 +26,7 @@ export function RamFeedStrip({ feed, units, temperatureC }: { feed: RamFeedAnswe
         <Figure
           label="Head at the pump, delivering"
           value={formatHeadPressure(feed.workingHeadM, units.system, temperatureC)}
-          note={`lift ${formatQuantity('length', outlet.liftM, units.system)} plus ${formatQuantity('length', outlet.deliveryFrictionM, units.system, 2)} friction in the ram's plan`}
+          note={`lift ${formatQuantity('length', outlet.liftM, units.system)} plus ${formatQuantity('headLoss', outlet.deliveryFrictionM, units.system)} friction in the ram's plan`}
         />
         <Figure
           label="Ram delivers"

@@ -1,7 +1,7 @@
 'use client';
 
 import { DEFAULT_LINE_SETTINGS, type LineSettings } from '@/hydraulics/index';
-import { fromDisplay, toDisplay, type DisplayUnits } from '@/lib/units';
+import { formatQuantity, formatTemperature, fromDisplay, toDisplay, unitOf, type DisplayUnits } from '@/lib/units';
 import type { LineDesign } from '@/lib/validations/line-design';
 import { UnitNumberInput } from './unit-number-input';
 
@@ -35,6 +35,7 @@ export function SettingsForm({ design, units, change, canEdit, assumedDatum = fa
   const L = [(m: number) => toDisplay('length', m, units.system), (v: number) => fromDisplay('length', v, units.system)] as const;
   const V = [(m: number) => toDisplay('velocity', m, units.system), (v: number) => fromDisplay('velocity', v, units.system)] as const;
   const H = [(m: number) => toDisplay('head', m, units.system), (v: number) => fromDisplay('head', v, units.system)] as const;
+  const T = [(c: number) => toDisplay('temperature', c, units.system), (v: number) => fromDisplay('temperature', v, units.system)] as const;
   const same = [(v: number) => v, (v: number) => v] as const;
   const d = DEFAULT_LINE_SETTINGS;
   const inUnits = (m: number, conv: readonly [(m: number) => number, unknown], unit: string) => `${Number(conv[0](m).toFixed(2))} ${unit}`;
@@ -58,9 +59,9 @@ export function SettingsForm({ design, units, change, canEdit, assumedDatum = fa
           <option value="darcy-weisbach">Darcy-Weisbach (Colebrook)</option>
         </select>
       </div>
-      {field('waterTemperatureC', 'Water temperature', '°C', ...same, `${d.waterTemperatureC} °C`)}
+      {field('waterTemperatureC', 'Water temperature', unitOf('temperature', units.system), ...T, formatTemperature(d.waterTemperatureC, units.system))}
       {field('safetyFactor', 'Safety factor on ratings', '×', ...same, `${d.safetyFactor}`)}
-      {field('defaultCoverM', 'Pipe cover', units.length, ...L, inUnits(d.defaultCoverM, L, units.length))}
+      {field('defaultCoverM', 'Pipe cover', units.length, ...L, formatQuantity('depth', d.defaultCoverM, units.system))}
       {field('velocityMinMs', 'Lowest velocity', units.velocity, ...V, inUnits(d.velocityMinMs, V, units.velocity))}
       {field('velocityMaxMs', 'Highest velocity', units.velocity, ...V, inUnits(d.velocityMaxMs, V, units.velocity))}
       {field('minResidualHeadM', 'Minimum residual at outlets', units.head, ...H, inUnits(d.minResidualHeadM, H, units.head))}

@@ -78,7 +78,7 @@ export function StretchTable({ design, results, units, change, canEdit, temperat
                   </td>
                   <td className="tabular px-2 py-1.5">{r ? formatQuantity('velocity', r.velocityMs, units.system) : '—'}</td>
                   <td className={`tabular px-2 py-1.5 ${over ? 'font-semibold text-clay-700' : ''}`}>
-                    {r ? `${formatHeadPressure(r.maxStaticPressureHeadM, units.system, temperatureC)} / ${formatQuantity('length', r.allowableHeadM, units.system)}` : '—'}
+                    {r ? `${formatHeadPressure(r.maxStaticPressureHeadM, units.system, temperatureC)} / ${formatQuantity('head', r.allowableHeadM, units.system)}` : '—'}
                   </td>
                   {canEdit && (
                     <td className="px-2 py-1.5">

@@ -18,6 +18,8 @@ export interface UnitNumberInputProps {
   /** Commits a display-unit value; returns an error message to show, or null. */
   onCommit: (value: number | undefined) => string | null;
   hint?: string;
+  /** Greyed example in an empty box (a figure in the project's units; nothing is saved from it). */
+  placeholder?: string;
   compact?: boolean;
   /** Errors found on the value elsewhere (a form's schema, the server), shown beside the box like its own. */
   errors?: readonly string[];
@@ -26,7 +28,7 @@ export interface UnitNumberInputProps {
 const format = (v: number | undefined, digits: number, mark: DecimalMark) => (v === undefined ? '' : formatTypedNumber(Number(v.toFixed(digits)), mark));
 
 /** A number in the project's units that commits on Enter or leaving the field, with its error beside it. */
-export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, compact, errors }: UnitNumberInputProps) {
+export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, placeholder, compact, errors }: UnitNumberInputProps) {
   const mark = useDecimalMark();
   const [text, setText] = useState(format(value, digits, mark));
   const [ownError, setError] = useState<string | null>(null);
@@ -65,6 +67,7 @@ export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, 
         id={id}
         inputMode="decimal"
         value={text}
+        placeholder={placeholder}
         disabled={disabled}
         onChange={(e) => setText(e.target.value)}
         onBlur={commit}

@@ -9,6 +9,9 @@ import type { LineSiteContext } from '@/lib/lines/ram-start';
 import type { LineRouteStation } from '@/lib/lines/route-stations';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { useUpdateLine } from '@/lib/queries/lines';
+import { inputErrorText } from '@/lib/lines/input-error-words';
+import { LINE_DESIGN_WORDS } from '@/lib/validations/field-word-tables';
+import { issuesText } from '@/lib/validations/field-words';
 import { LineDesignSchema, type LineDesign } from '@/lib/validations/line-design';
 
 export type SaveState = 'saved' | 'pending' | 'saving' | 'failed' | 'conflict';
@@ -18,7 +21,8 @@ function analyse(design: LineDesign, stations: readonly LineRouteStation[], cont
   try {
     return { analysis: analyzeLine(lineInputOf(design, stations, context)) };
   } catch (error) {
-    if (error instanceof HydraulicsInputError) return { error: error.message };
+    // The core's refusal in the screen's words and the project's units, never its internal field path.
+    if (error instanceof HydraulicsInputError) return { error: inputErrorText(error, context.unitSystem ?? 'metric') };
     throw error;
   }
 }
@@ -44,7 +48,7 @@ export function useLineDraft(line: LineRecord, stations: readonly LineRouteStati
     (next: LineDesign, label: string): string | null => {
       if (!canEdit) return 'Your role can view this line but not change it';
       const parsed = LineDesignSchema.safeParse(next);
-      if (!parsed.success) return parsed.error.issues.map((i) => i.message).join('; ');
+      if (!parsed.success) return issuesText(parsed.error, context.unitSystem ?? 'metric', LINE_DESIGN_WORDS);
       const checked = analyse(parsed.data, stations, context);
       if ('error' in checked) return checked.error;
       setHistory((h) => record(h, parsed.data, label));

@@ -9,7 +9,7 @@ type Change = (next: LineDesign, label: string) => string | null;
 const SELECT = 'mt-1 block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50';
 
 function fixLabel(fix: WinterFix, units: DisplayUnits): string {
-  return fix.kind === 'drain-for-winter' ? 'Drain it for winter' : `Lay it deeper: ${formatQuantity('length', fix.coverM, units.system, 2)} of cover`;
+  return fix.kind === 'drain-for-winter' ? 'Drain it for winter' : `Lay it deeper: ${formatQuantity('depth', fix.coverM, units.system)} of cover`;
 }
 
 /** How the line is kept through winter: the choice, the cover against the frost depth, and the drain points of a drained line. */
@@ -25,7 +25,7 @@ export function WinterPanel({ design, plan, units, change, canEdit, onProblem }:
     onProblem(
       fix.kind === 'drain-for-winter'
         ? change({ ...design, winter: { treatment: 'drained-for-winter' } }, 'drain the line for winter')
-        : change({ ...design, settings: { ...design.settings, defaultCoverM: fix.coverM } }, `lay the pipe ${formatQuantity('length', fix.coverM, units.system, 2)} deep`),
+        : change({ ...design, settings: { ...design.settings, defaultCoverM: fix.coverM } }, `lay the pipe ${formatQuantity('depth', fix.coverM, units.system)} deep`),
     );
   }
   const drained = plan.treatment === 'drained-for-winter';
@@ -40,8 +40,8 @@ export function WinterPanel({ design, plan, units, change, canEdit, onProblem }:
           <option value="drained-for-winter">Drained for winter</option>
         </select>
         <dl className="space-y-0.5 text-sm text-creek-800">
-          <div className="flex justify-between gap-2"><dt>Site frost depth</dt><dd className="tabular">{plan.frostDepthM === null ? 'not set for the project' : formatQuantity('length', plan.frostDepthM, units.system, 2)}</dd></div>
-          <div className="flex justify-between gap-2"><dt>Least cover over the pipe</dt><dd className="tabular">{formatQuantity('length', plan.shallowestCoverM, units.system, 2)} at ch. {formatQuantity('chainage', plan.shallowestCoverAtM, units.system)}</dd></div>
+          <div className="flex justify-between gap-2"><dt>Site frost depth</dt><dd className="tabular">{plan.frostDepthM === null ? 'not set for the project' : formatQuantity('depth', plan.frostDepthM, units.system)}</dd></div>
+          <div className="flex justify-between gap-2"><dt>Least cover over the pipe</dt><dd className="tabular">{formatQuantity('depth', plan.shallowestCoverM, units.system)} at ch. {formatQuantity('chainage', plan.shallowestCoverAtM, units.system)}</dd></div>
         </dl>
         {plan.frostDepthM === null && <p className="text-xs text-creek-600">Set the frost depth on the project&apos;s page so Runnel can check the cover.</p>}
         {!plan.chosen && <p className="text-xs text-creek-600">Not chosen yet: taken as buried below frost depth.</p>}
@@ -51,8 +51,8 @@ export function WinterPanel({ design, plan, units, change, canEdit, onProblem }:
           <div role="alert" className="rounded-md border border-clay-100 bg-clay-50 p-3 text-sm text-clay-700" data-testid="winter-warning">
             <p className="font-semibold">Shallower than frost</p>
             <p>
-              {formatQuantity('length', plan.shallowestCoverM, units.system, 2)} of cover at ch. {formatQuantity('chainage', plan.shallowestCoverAtM, units.system)} against a frost depth of{' '}
-              {formatQuantity('length', plan.frostDepthM ?? 0, units.system, 2)}. {plan.warning.message}
+              {formatQuantity('depth', plan.shallowestCoverM, units.system)} of cover at ch. {formatQuantity('chainage', plan.shallowestCoverAtM, units.system)} against a frost depth of{' '}
+              {formatQuantity('depth', plan.frostDepthM ?? 0, units.system)}. {plan.warning.message}
             </p>
             {canEdit && (
               <div className="mt-2 flex flex-wrap gap-2">

@@ -1,5 +1,6 @@
 'use client';
 
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
 import Link from 'next/link';
 import { useState } from 'react';
 import { TankForm } from '@/components/lift/tank-form';
@@ -11,7 +12,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import type { NetworkLinkRecord, NetworkNodeRecord } from '@/lib/network/records';
 import type { NetworkView } from '@/lib/network/view';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
-import { formatQuantity, fromDisplay, toDisplay, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
+import { formatQuantity, fromDisplay, toDisplay, unitDefaults, unitOf, type Quantity, type UnitSystem } from '@/lib/units';
 import { useForm } from '@/lib/forms/use-form';
 import { NetworkLinkSchema, NetworkNodeSchema, VALVE_KINDS } from '@/lib/validations/network';
 
@@ -52,7 +53,7 @@ function useSi(units: UnitSystem) {
 function NodeFigures({ projectId, record, units }: { projectId: string; record: NetworkNodeRecord; units: UnitSystem }) {
   const { id, ...initial } = record;
   const [draft, setDraft] = useState(initial);
-  const form = useForm();
+  const form = useForm(undefined, { table: NETWORK_WORDS, units });
   const errors = form.fields;
   const save = useSaveNetworkNode(projectId);
   const { shown, si } = useSi(units);
@@ -103,7 +104,7 @@ function NodeFigures({ projectId, record, units }: { projectId: string; record: 
 function LinkFigures({ projectId, record, units }: { projectId: string; record: NetworkLinkRecord; units: UnitSystem }) {
   const { id, ...initial } = record;
   const [draft, setDraft] = useState(initial);
-  const form = useForm();
+  const form = useForm(undefined, { table: NETWORK_WORDS, units });
   const errors = form.fields;
   const save = useSaveNetworkLink(projectId);
   const { shown, si } = useSi(units);
@@ -125,7 +126,7 @@ function LinkFigures({ projectId, record, units }: { projectId: string; record: 
       {(record.kind === 'pipe' || pipeId) && (
         <div>
           <span className="block text-xs font-medium text-creek-900">Pipe (size and class)</span>
-          <PipePicker id="edit-link-pipe" pipeId={pipeId ?? 'pe100-iso4427-sdr11-32mm'} custom={[]} disabled={false} onPick={(pipe) => setData({ pipe })} />
+          <PipePicker id="edit-link-pipe" pipeId={pipeId ?? unitDefaults(units).networkPipeId} custom={[]} disabled={false} onPick={(pipe) => setData({ pipe })} />
           {e('data.pipe') && <p role="alert" className="mt-1 text-xs text-clay-600">{e('data.pipe')!.join(' ')}</p>}
         </div>
       )}

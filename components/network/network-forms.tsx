@@ -1,5 +1,6 @@
 'use client';
 
+import { NETWORK_WORDS } from '@/lib/validations/field-word-tables';
 import { useState, type FormEvent } from 'react';
 import { numberOrNull } from '@/components/lift/typed-number';
 import { PipePicker } from '@/components/lines/pipe-picker';
@@ -8,13 +9,12 @@ import { FormMessage } from '@/components/ui/form-message';
 import { SelectField, TextField } from '@/components/ui/field';
 import type { NetworkView } from '@/lib/network/view';
 import { useSaveNetworkLink, useSaveNetworkNode } from '@/lib/queries/network';
-import { fromDisplay, unitOf, type UnitSystem } from '@/lib/units';
+import { fromDisplay, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { NetworkLinkSchema, NetworkNodeSchema, OUTLET_KINDS, VALVE_KINDS } from '@/lib/validations/network';
 import { useForm } from '@/lib/forms/use-form';
 
 // Typed numbers read with the project's decimal mark (the one parser); unreadable -> NaN, which the schema names.
 const num = numberOrNull;
-const DEFAULT_PIPE = 'pe100-iso4427-sdr11-32mm';
 
 const NODE_KINDS = [
   ['outlet', 'Outlet (tap, trough, house, garden)'],
@@ -28,7 +28,7 @@ const NODE_KINDS = [
 export function AddNodeForm({ projectId, view, units }: { projectId: string; view: NetworkView; units: UnitSystem }) {
   const save = useSaveNetworkNode(projectId);
   const [kind, setKind] = useState<(typeof NODE_KINDS)[number][0]>('outlet');
-  const checks = useForm();
+  const checks = useForm(undefined, { table: NETWORK_WORDS, units });
   const errors = checks.fields;
   const [done, setDone] = useState<string | null>(null);
   const m = unitOf('elevation', units);
@@ -112,8 +112,8 @@ export function AddNodeForm({ projectId, view, units }: { projectId: string; vie
 export function AddLinkForm({ projectId, view, units }: { projectId: string; view: NetworkView; units: UnitSystem }) {
   const save = useSaveNetworkLink(projectId);
   const [kind, setKind] = useState<'pipe' | 'valve'>('pipe');
-  const [pipeId, setPipeId] = useState(DEFAULT_PIPE);
-  const checks = useForm();
+  const [pipeId, setPipeId] = useState(() => unitDefaults(units).networkPipeId);
+  const checks = useForm(undefined, { table: NETWORK_WORDS, units });
   const errors = checks.fields;
   const [done, setDone] = useState<string | null>(null);
 

@@ -1,5 +1,6 @@
 'use client';
 
+import { PROJECT_WORDS } from '@/lib/validations/field-word-tables';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
@@ -23,7 +24,7 @@ function frostDepthFrom(text: FormDataEntryValue | null, unitSystem: ProjectSumm
 export function ProjectDetailsForm({ project, editable }: { project: ProjectSummary; editable: boolean }) {
   const router = useRouter();
   const update = useUpdateProject(project.id);
-  const { fields, message, check, fail } = useForm();
+  const { fields, message, check, fail } = useForm(undefined, { table: PROJECT_WORDS, units: project.unitSystem });
   const [saved, setSaved] = useState(false);
   const units = displayUnits(project.unitSystem);
   const frostShown = project.frostDepthM === null ? '' : formatPlainNumber(toDisplay('length', project.frostDepthM, units.system), 2);

@@ -40,16 +40,16 @@ export function assertPipeSpec(value: unknown, field = 'pipe', index?: number): 
   const inside = spec.insideDiameterM as number;
   const wall = spec.wallM as number;
   if (inside >= outside) {
-    throw new HydraulicsInputError(at('insideDiameterM'), `must be less than outsideDiameterM (${outside} m), got ${inside}`, index);
+    throw new HydraulicsInputError(at('insideDiameterM'), 'must be less than the outside diameter', index);
   }
   if (inside + 2 * wall > outside * (1 + DIAMETER_TOLERANCE)) {
-    throw new HydraulicsInputError(at('wallM'), `inside diameter + 2 × wall exceeds the outside diameter (${outside} m)`, index);
+    throw new HydraulicsInputError(at('wallM'), 'must be at most half the outside diameter less the inside diameter', index);
   }
   if ((spec.hazenWilliamsC as number) > MAX_HAZEN_WILLIAMS_C) {
     throw new HydraulicsInputError(at('hazenWilliamsC'), `must be at most ${MAX_HAZEN_WILLIAMS_C}`, index);
   }
   if ((spec.roughnessM as number) > MAX_RELATIVE_ROUGHNESS * inside) {
-    throw new HydraulicsInputError(at('roughnessM'), `must be at most ${MAX_RELATIVE_ROUGHNESS} × insideDiameterM`, index);
+    throw new HydraulicsInputError(at('roughnessM'), `must be at most ${MAX_RELATIVE_ROUGHNESS} × the inside diameter`, index);
   }
   if ((spec.waveSpeedMs as number) > MAX_WAVE_SPEED_MS) {
     throw new HydraulicsInputError(at('waveSpeedMs'), `must be at most ${MAX_WAVE_SPEED_MS} m/s`, index);

@@ -1,7 +1,7 @@
 import type { NextRequest } from 'next/server';
 import type { z } from 'zod';
 import { env } from '../env';
-import { AppError } from '../errors';
+import { AppError, type FieldErrors } from '../errors';
 import { fieldErrorsOf } from '../validations/common';
 
 /**
@@ -41,8 +41,11 @@ function isJsonContentType(type: string | null): boolean {
   return mediaType === 'application/json' || /^application\/[a-z0-9.+-]{1,60}\+json$/.test(mediaType);
 }
 
+/** How a refused body's issues become field errors (`data` is the body as sent): the default names paths and keeps the schema's (SI) messages. */
+export type FieldsOf = (error: z.ZodError, data: unknown) => FieldErrors;
+
 /** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
-export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number): Promise<z.output<S>> {
+export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number, fieldsOf?: FieldsOf): Promise<z.output<S>> {
   const max = maxBytes ?? env().RUNNEL_MAX_JSON_BYTES;
   const bytes = await readBodyCapped(req, max, () => new AppError('payload_too_large', `Request body is larger than ${max} bytes`));
   let raw: string;
@@ -61,11 +64,16 @@ export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema
   } catch {
     throw new AppError('bad_request', 'Request body is not valid JSON', { _: ['Send a JSON object'] });
   }
-  return parseOrThrow(schema, data, 'Some fields are not valid');
+  return parseOrThrow(schema, data, 'Some fields are not valid', fieldsOf);
 }
 
-export function parseOrThrow<S extends z.ZodType>(schema: S, data: unknown, message: string): z.output<S> {
+export function parseOrThrow<S extends z.ZodType>(schema: S, data: unknown, message: string, fieldsOf: FieldsOf = fieldErrorsOf): z.output<S> {
   const result = schema.safeParse(data);
-  if (!result.success) throw new AppError('bad_request', message, fieldErrorsOf(result.error));
+  if (!result.success) {
+    const fields = fieldsOf(result.error, data);
+    // With screen words, the message names the first problem too, so a client that shows only the message says what and where.
+    const first = fieldsOf === fieldErrorsOf ? undefined : Object.values(fields)[0]?.[0];
+    throw new AppError('bad_request', first ? `${message}: ${first}` : message, fields);
+  }
   return result.data;
 }

@@ -4,9 +4,12 @@ import type { z } from 'zod';
 import { sessionTokenOf, tokenSubject, userAndRoleOf, userFromRequest } from '../auth/session';
 import type { SessionUser } from '../auth/users';
 import { forbidden, notFound, unauthenticated } from '../errors';
+import type { UnitSystem } from '../units/index';
+import type { FieldWordTable } from '../validations/field-words';
+import { fieldErrorsIn } from '../validations/field-words';
 import { can, type Permission } from '../permissions';
 import type { Role } from '../roles';
-import { parseOrThrow, readJsonBody } from './body';
+import { parseOrThrow, readJsonBody, type FieldsOf } from './body';
 import { errorResponse, json } from './respond';
 
 type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
@@ -21,12 +24,26 @@ interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   status?: number;
   /** Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default RUNNEL_MAX_JSON_BYTES */
   maxBodyBytes?: number;
+  /** A refused body's fields named as the screen names them, bounds in the unit system `unitsOf` gives. */
+  bodyWords?: BodyWords<Infer<P>>;
 }
 
 interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefined> extends BaseSpec<P, B> {
   permission: Permission;
   /** The team that owns the resource named by the params; null when it does not exist. */
   teamOf: (params: Infer<P>) => Promise<string | null>;
+}
+
+/**
+ * How a handler words a refused body: one table of the screen's names, and the unit system to state
+ * bounds in. A saved record's handler reads its project's system (before the body); a stateless one
+ * takes the system the request names. The same input in the same units gets the same words.
+ */
+export interface BodyWords<P> {
+  table: FieldWordTable;
+  unitsOf: (params: P, req: NextRequest) => Promise<UnitSystem> | UnitSystem;
+  /** The number the screen gives the body's first list item, read from the body as sent (a page of rows starts past 1). @default 1 */
+  firstNumberOf?: (data: unknown) => number;
 }
 
 export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
@@ -51,8 +68,15 @@ async function parseParams<P extends z.ZodType | undefined>(schema: P, ctx: Rout
   return (schema ? parseOrThrow(schema, raw, 'The address names something that cannot exist') : undefined) as Infer<P>;
 }
 
-async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number): Promise<Infer<B>> {
-  return (schema ? await readJsonBody(req, schema, maxBytes) : undefined) as Infer<B>;
+async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number, fieldsOf?: FieldsOf): Promise<Infer<B>> {
+  return (schema ? await readJsonBody(req, schema, maxBytes, fieldsOf) : undefined) as Infer<B>;
+}
+
+/** A refused body worded with the screen's names in the unit system the route names, when it names one. */
+async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P, req: NextRequest): Promise<FieldsOf | undefined> {
+  if (!words) return undefined;
+  const system = await words.unitsOf(params, req);
+  return (error, data) => fieldErrorsIn(error, system, words.table, words.firstNumberOf?.(data) ?? 1);
 }
 
 async function signedInUser(req: NextRequest): Promise<SessionUser> {
@@ -69,7 +93,7 @@ export function publicRoute<P extends z.ZodType | undefined = undefined, B exten
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body });
     }, spec.status ?? 200);
 }
@@ -83,7 +107,7 @@ export function userRoute<P extends z.ZodType | undefined = undefined, B extends
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
       const user = await signedInUser(req);
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body, user });
     }, spec.status ?? 200);
 }
@@ -108,7 +132,7 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
       if (!user) throw unauthenticated();
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes)) as Infer<B>;
+      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
       return handler({ req, params, body, user, teamId, role });
     }, spec.status ?? 200);
 }

@@ -2,6 +2,9 @@ import 'server-only';
 import { models } from '../../models';
 import type { HeightSource } from '../../hydraulics/index';
 import type { RouteColumns } from '../lines/route-stations';
+import type { UnitSystem } from '../units/index';
+import type { FieldWordTable } from '../validations/field-words';
+import { unitSystemOfProject } from './projects';
 
 export interface RouteChoice {
   id: string;
@@ -34,6 +37,17 @@ export async function listRouteChoices(projectId: string): Promise<RouteChoice[]
 }
 
 /** The project a route belongs to and its name, or null. */
+/** A route's `bodyWords` for a handler under /routes/[routeId]: refusals worded in its project's units. */
+export function inRouteUnits(table: FieldWordTable) {
+  return {
+    table,
+    unitsOf: async ({ routeId }: { routeId: string }): Promise<UnitSystem> => {
+      const owner = await routeOwner(routeId);
+      return owner ? unitSystemOfProject(owner.projectId) : 'metric';
+    },
+  };
+}
+
 export async function routeOwner(routeId: string): Promise<{ projectId: string; name: string } | null> {
   const route = await models().Route.findByPk(routeId, { attributes: ['projectId', 'name'] });
   return route ? { projectId: route.projectId, name: route.name } : null;

@@ -8,6 +8,7 @@ import { recordActivity } from '../activity/record';
 import type { Line } from '../../models/line';
 import { AppError, notFound, notInProject } from '../errors';
 import { startingDesign } from '../lines/default-design';
+import type { UnitSystem } from '../units/index';
 import { lineInputOf } from '../lines/line-input';
 import type { LineSiteContext } from '../lines/ram-start';
 import { lineStationsOf, type ChainageWindow, type LineRouteStation } from '../lines/route-stations';
@@ -106,6 +107,14 @@ export async function teamOfLine(lineId: string): Promise<string | null> {
   return teamOfProjectRow('lines', lineId);
 }
 
+/** The unit system of a line's project (metric when the line is gone), for wording refusals. */
+export async function unitSystemOfLine(lineId: string): Promise<UnitSystem> {
+  const { Line: L, Project } = models();
+  const line = await L.findByPk(lineId, { attributes: ['projectId'] });
+  const project = line ? await Project.findByPk(line.projectId, { attributes: ['unitSystem'] }) : null;
+  return project?.unitSystem ?? 'metric';
+}
+
 export async function listLines(projectId: string): Promise<LineSummary[]> {
   const rows = await models().Line.findAll({ where: { projectId }, order: [['name', 'ASC']] });
   const people = await names(rows.map((r) => r.updatedBy));
@@ -161,9 +170,10 @@ export async function createLine(projectId: string, userId: string, input: Creat
   await assertRouteInProject(input.routeId, projectId);
   const window = { fromChainageM: input.fromChainageM ?? null, toChainageM: input.toChainageM ?? null };
   const stations = await stationsOfLine(input.routeId, window);
-  const design = (input.design as LineDesign | undefined) ?? startingDesign(stations);
+  const context = await lineSiteContext(projectId);
+  const design = (input.design as LineDesign | undefined) ?? startingDesign(stations, context.unitSystem ?? 'metric');
   await assertRamSiteInProject(design, projectId);
-  assertDesignFits(design, stations, await lineSiteContext(projectId));
+  assertDesignFits(design, stations, context);
   const { Line: L, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const line = await L.create(

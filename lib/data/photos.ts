@@ -12,6 +12,8 @@ import { projectStoragePrefix, removeStoredFiles } from './project-files';
 import { getObject, putObject } from '../storage';
 import { enqueueJob } from '../jobs/enqueue';
 import { numberPhotos } from '../chart/photo-marks';
+import type { UnitSystem } from '../units/index';
+import { unitSystemOfProject } from './projects';
 import type { ReportPhoto } from '../report/photo-section';
 
 export interface PhotoSummary {
@@ -126,6 +128,12 @@ export async function listPhotos(projectId: string, routeId?: string): Promise<P
 
 export async function teamOfPhoto(photoId: string): Promise<string | null> {
   return teamOfProjectRow('site_photos', photoId);
+}
+
+/** The unit system of the photo's project (metric when it is gone), for wording refusals. */
+export async function unitSystemOfPhoto(photoId: string): Promise<UnitSystem> {
+  const photo = await models().SitePhoto.findByPk(photoId, { attributes: ['projectId'] });
+  return photo ? unitSystemOfProject(photo.projectId) : 'metric';
 }
 
 export async function photoRow(photoId: string): Promise<SitePhoto> {

@@ -3,6 +3,8 @@ import { models } from '../../models';
 import { enqueueJob } from '../jobs/enqueue';
 import type { Project, UnitSystem } from '../../models/project';
 import type { DecimalMark } from '../units/typed-number';
+import { unitDefaults } from '../units/defaults';
+import type { FieldWordTable } from '../validations/field-words';
 import type { UpdateProjectInput } from '../validations/projects';
 import type { ProjectProgress } from '../projects/next-step';
 import { Op, QueryTypes } from 'sequelize';
@@ -86,12 +88,24 @@ export async function teamOfProjectRow(table: ProjectRowTable, id: string): Prom
   return row?.teamId ?? null;
 }
 
+/** The unit system of a project (metric when it is gone), for wording refusals. */
+export async function unitSystemOfProject(projectId: string): Promise<UnitSystem> {
+  const project = await models().Project.findByPk(projectId, { attributes: ['unitSystem'] });
+  return project?.unitSystem ?? 'metric';
+}
+
+/** A route's `bodyWords` for a handler under /projects/[projectId]: refusals worded in that project's units. */
+export function inProjectUnits(table: FieldWordTable) {
+  return { table, unitsOf: ({ projectId }: { projectId: string }) => unitSystemOfProject(projectId) };
+}
+
 export async function createProject(
   teamId: string,
   userId: string,
   input: { name: string; description: string; unitSystem: UnitSystem; siteNotes: string },
 ): Promise<ProjectSummary> {
-  const p = await models().Project.create({ ...input, teamId, createdBy: userId });
+  // A US project writes decimals with a point from the start; a metric one follows each browser's language until set.
+  const p = await models().Project.create({ ...input, decimalMark: unitDefaults(input.unitSystem).decimalMark, teamId, createdBy: userId });
   return toSummary(p);
 }
 

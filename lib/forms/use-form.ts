@@ -3,9 +3,9 @@
 import { useState } from 'react';
 import type { z } from 'zod';
 import type { FieldErrors } from '../errors';
-import { CHECK_FIELDS_NOTE, checkInput, refusalOf, type FormNote } from './form-state';
+import { CHECK_FIELDS_NOTE, checkInput, refusalOf, type FormNote, type FormWords } from './form-state';
 
-export type { FormNote };
+export type { FormNote, FormWords };
 
 /** A save the form is bound to: `submit(raw)` checks with `schema`, saves, and says `savedText`. */
 export interface FormSave<S extends z.ZodType, R> {
@@ -20,12 +20,12 @@ export interface FormSave<S extends z.ZodType, R> {
  * message under the form. Bound to a save (`useForm({ schema, save, savedText })`), `submit(raw)`
  * does all of it and says it is saved; unbound, a form runs `check` and `fail` around its own call.
  */
-export function useForm<S extends z.ZodType = z.ZodType, R = unknown>(bound?: FormSave<S, R>) {
+export function useForm<S extends z.ZodType = z.ZodType, R = unknown>(bound?: FormSave<S, R>, words?: FormWords) {
   const [fields, setFields] = useState<FieldErrors>({});
   const [note, setNote] = useState<FormNote | null>(null);
 
   function check<T extends z.ZodType>(schema: T, data: unknown): z.output<T> | null {
-    const checked = checkInput(schema, data);
+    const checked = checkInput(schema, data, words);
     setNote(null);
     setFields(checked.fields);
     return checked.value;

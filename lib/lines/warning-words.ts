@@ -78,6 +78,8 @@ function figures(u: DisplayUnits) {
     range: (a: number | undefined, b: number | undefined) => `ch. ${formatQuantity('chainage', n(a), s)} to ${formatQuantity('chainage', n(b), s)}`,
     head: (h: number | undefined) => formatHeadPressure(n(h), s),
     length: (h: number | undefined) => formatQuantity('head', n(h), s),
+    depth: (d: number | undefined) => formatQuantity('depth', n(d), s),
+    temperature: (c: number | undefined) => formatQuantity('temperature', n(c), s),
     level: (z: number | undefined) => formatQuantity('elevation', n(z), s),
     flow: (q: number | undefined) => formatQuantity('designFlow', n(q), s),
     speed: (v: number | undefined) => formatQuantity('velocity', n(v), s),
@@ -88,13 +90,13 @@ function figures(u: DisplayUnits) {
 /** "The worst figure lies within the survey's scatter" in the project's units, or ''. */
 function scatterSentence(v: WarningValues, f: ReturnType<typeof figures>): string {
   return v.withinScatter
-    ? ` The worst figure lies within the survey's height scatter of ${f.length(v.scatterM)} of the limit: it may or may not be passed; check the heights here with a level before deciding.`
+    ? ` The worst figure lies within the survey's height scatter of ${f.depth(v.scatterM)} of the limit: it may or may not be passed; check the heights here with a level before deciding.`
     : '';
 }
 
 function groupStart(kind: 'highs' | 'lows', v: WarningValues, f: ReturnType<typeof figures>): string {
   return (v.memberCount ?? 0) > 1
-    ? `${v.memberCount} small ${kind} between ${f.range(v.fromM, v.toM)} lie within the survey's height scatter of ${f.length(v.scatterM)}; the real ${kind === 'highs' ? 'summit' : 'sag'} is at`
+    ? `${v.memberCount} small ${kind} between ${f.range(v.fromM, v.toM)} lie within the survey's height scatter of ${f.depth(v.scatterM)}; the real ${kind === 'highs' ? 'summit' : 'sag'} is at`
     : `The pipe has a ${kind === 'highs' ? 'summit' : 'sag'} at`;
 }
 
@@ -118,7 +120,7 @@ const WORDING: Record<WarningCode, Wording> = {
     'Lower the pipe through this range, route around the rise, or pump instead of siphoning.',
   ],
   'static-over-rating': (v, f) => [
-    `With the line shut, static pressure from ${f.range(v.fromM, v.toM)} rises above the ${f.head(v.limitHeadM)} allowed for ${v.pipeLabel} (rating derated for ${v.waterTemperatureC} °C water, divided by the safety factor ${v.safetyFactor}), up to ${f.head(v.headM)} at ${f.ch(v.worstChainageM)}. A pipe over its rating can burst.${scatterSentence(v, f)}`,
+    `With the line shut, static pressure from ${f.range(v.fromM, v.toM)} rises above the ${f.head(v.limitHeadM)} allowed for ${v.pipeLabel} (rating derated for ${f.temperature(v.waterTemperatureC)} water, divided by the safety factor ${v.safetyFactor}), up to ${f.head(v.headM)} at ${f.ch(v.worstChainageM)}. A pipe over its rating can burst.${scatterSentence(v, f)}`,
     (v.tankChainagesM ?? []).length > 0
       ? `Add a break-pressure tank at ${(v.tankChainagesM ?? []).map((c) => f.ch(c)).join(', ')} (the fewest that keep every pipe within its rating), or use a higher pressure class here.`
       : `Use a higher pressure class through this range${v.problem ? `: ${v.problem}` : ''}.`,
@@ -160,11 +162,11 @@ const WORDING: Record<WarningCode, Wording> = {
     'Use a smaller pipe if the head allows it, and fit washouts at the low points of this stretch.',
   ],
   'winter-frost': (v, f) => [
-    `The pipe lies ${f.length(v.coverM)} deep at ${f.ch(v.chainageM)}, no deeper than the site's frost depth of ${f.length(v.frostDepthM)}, and the line is not drained: water left in it can freeze and split the pipe or its fittings.`,
+    `The pipe lies ${f.depth(v.coverM)} deep at ${f.ch(v.chainageM)}, no deeper than the site's frost depth of ${f.depth(v.frostDepthM)}, and the line is not drained: water left in it can freeze and split the pipe or its fittings.`,
     'Drain the line for winter, or lay it deeper (see Winter below).',
   ],
   'winter-cover-contradiction': (v, f) => [
-    `The line is taken as buried below frost depth, but the pipe lies on the surface (cover ${f.length(v.coverM)}) at ${f.ch(v.chainageM)}: both cannot be true.`,
+    `The line is taken as buried below frost depth, but the pipe lies on the surface (cover ${f.depth(v.coverM)}) at ${f.ch(v.chainageM)}: both cannot be true.`,
     'Give the survey stations their cover, or choose to drain the line for winter (see Winter below).',
   ],
   'drain-down-overdue': (v) => [

@@ -17,7 +17,7 @@ export function liftSection(doc: Doc, feed: RamFeedAnswers, u: DisplayUnits, tem
     ['Delivered flow per day', `${formatQuantity('flowPerDay', outlet.deliveredFlowM3s, u.system)} (${formatQuantity('flow', outlet.deliveredFlowM3s, u.system)})${feed.flowFromRam ? ', the flow this line is analysed at' : ''}`],
     ['Tank fill time', outlet.tankFillTimeS !== null && outlet.tankName ? `${outlet.tankName} from empty in ${formatDuration(outlet.tankFillTimeS)}, outlets shut` : 'no tank given for this ram site'],
     ['Efficiency', `${formatPercent(outlet.efficiency)}, ${outlet.efficiencyBasis === 'measured' ? 'measured at commissioning' : `from ${outlet.efficiencySource}`}`],
-    ['Head at the pump, delivering', `${formatHeadPressure(feed.workingHeadM, u.system, temperatureC)}: lift ${formatQuantity('length', outlet.liftM, u.system)} plus ${formatQuantity('length', outlet.deliveryFrictionM, u.system, 2)} friction`],
+    ['Head at the pump, delivering', `${formatHeadPressure(feed.workingHeadM, u.system, temperatureC)}: lift ${formatQuantity('length', outlet.liftM, u.system)} plus ${formatQuantity('headLoss', outlet.deliveryFrictionM, u.system)} friction`],
     ['Peak head at the pump, line shut', `${formatHeadPressure(feed.peakHeadAtPumpM, u.system, temperatureC)} against ${formatHeadPressure(feed.allowableHeadAtPumpM, u.system, temperatureC)} allowed for ${feed.pipeAtPumpLabel}${feed.peakWithinRating ? '' : ': OVER THE RATING'}`],
   ];
   table(doc, [{ heading: 'Item', width: 200 }, { heading: 'Value', width: 562 }], rows.map(([k, v]) => [k, v]));
@@ -32,10 +32,10 @@ const TREATMENT_WORDS: Record<LineWinterPlan['treatment'], string> = {
 /** How the line is kept through winter and, for a drained line, where it is drained. */
 export function winterSection(doc: Doc, plan: LineWinterPlan, u: DisplayUnits): void {
   heading(doc, 'Winter');
-  const frost = plan.frostDepthM === null ? 'not set for the project' : formatQuantity('length', plan.frostDepthM, u.system, 2);
+  const frost = plan.frostDepthM === null ? 'not set for the project' : formatQuantity('depth', plan.frostDepthM, u.system);
   doc.font('Helvetica').fontSize(9).fillColor(INK).text(pdfText(
     `Through winter the line is ${TREATMENT_WORDS[plan.treatment]}${plan.chosen ? '' : ' (not chosen: assumed)'}. ` +
-      `Site frost depth: ${frost}. Least cover over the pipe: ${formatQuantity('length', plan.shallowestCoverM, u.system, 2)} at ch. ${formatQuantity('chainage', plan.shallowestCoverAtM, u.system)}.`,
+      `Site frost depth: ${frost}. Least cover over the pipe: ${formatQuantity('depth', plan.shallowestCoverM, u.system)} at ch. ${formatQuantity('chainage', plan.shallowestCoverAtM, u.system)}.`,
   ));
   if (plan.warning) {
     doc.font('Helvetica-Bold').fillColor('#9a3b24').text('Shallower than frost. ', { continued: true }).font('Helvetica').text(pdfText(`${plan.warning.message} Drain it for winter or lay it deeper.`));

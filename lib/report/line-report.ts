@@ -1,6 +1,6 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
-import { highLowToleranceM, type LineAnalysis } from '../../hydraulics/index';
+import type { LineAnalysis } from '../../hydraulics/index';
 import type { ChartPhoto } from '../chart/photo-marks';
 import { planScene, type PlanStation } from '../chart/plan-scene';
 import { profileScene } from '../chart/profile-scene';
@@ -9,7 +9,7 @@ import type { LineRecord } from '../data/lines';
 import { lineAnswers } from '../lines/answers';
 import { ramFeedAnswers } from '../lines/ram-feed';
 import { EMPTY_SITE_CONTEXT, type LineSiteContext } from '../lines/ram-start';
-import { lineWinterPlan, winterWarnings } from '../lines/winter';
+import { lineFixItems } from '../lines/fix-items';
 import { FRICTION_WORDS } from '../lines/answers';
 import { stampRows, type ReviewStamp } from '../review/stamp';
 import { displayUnits, formatHeadPressure, formatQuantity, unitSystemName, type UnitSystem } from '../units/index';
@@ -89,8 +89,8 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   ], 5, CONTENT_WIDTH);
 
   // The winter findings stand with the line's other items, as on the screen.
-  const winter = lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, line.design.winter, context.frostDepthM, false);
-  const withWinter = { ...analysis, warnings: [...analysis.warnings, ...winterWarnings(winter, context.overdueDrainDownOn ?? null)] };
+  const { winter, warnings } = lineFixItems(analysis, line.design.winter, context, false);
+  const withWinter = { ...analysis, warnings };
   const answers = lineAnswers(withWinter);
   const t = analysis.settings.waterTemperatureC;
   const flowWords = answers.overCapacity

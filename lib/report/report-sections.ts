@@ -28,7 +28,7 @@ export function stretchSchedule(doc: Doc, a: LineAnalysis, u: DisplayUnits): voi
     a.stretches.map((s) => [
       String(s.index + 1), formatQuantity('chainage', s.fromM, u.system), formatQuantity('chainage', s.toM, u.system), formatQuantity('length', s.slopeLengthM, u.system),
       s.pipe.label, `${s.pipe.sdr ? `SDR ${s.pipe.sdr}` : s.pipe.sidr ? `SIDR ${s.pipe.sidr}` : s.pipe.material}, ${formatQuantity('pressure', s.pipe.pressureRatingPa, u.system)}`,
-      formatHeadPressure(s.allowableHeadM, u.system, t), formatQuantity('velocity', s.velocityMs, u.system), formatQuantity('length', s.frictionLossM, u.system, 2),
+      formatHeadPressure(s.allowableHeadM, u.system, t), formatQuantity('velocity', s.velocityMs, u.system), formatQuantity('headLoss', s.frictionLossM, u.system),
     ]),
   );
 }
@@ -82,12 +82,12 @@ export function assumptions(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
     ['Safety factor on pipe ratings', `${formatNumber(s.safetyFactor, 2)} (allowed head = rating derated for temperature / safety factor)`],
     ['Velocity band', `${formatQuantity('velocity', s.velocityMinMs, u.system)} to ${formatQuantity('velocity', s.velocityMaxMs, u.system)}`],
     ['Residual pressure wanted at the end', formatHeadPressure(a.end.targetResidualHeadM, u.system, s.waterTemperatureC)],
-    ['Pipe cover where the survey gives none', formatQuantity('length', s.defaultCoverM, u.system, 2)],
-    ['High and low point tolerance', formatQuantity('length', s.airPointToleranceM, u.system, 2)],
+    ['Pipe cover where the survey gives none', formatQuantity('depth', s.defaultCoverM, u.system)],
+    ['High and low point tolerance', formatQuantity('depth', s.airPointToleranceM, u.system)],
     ...(s.heightScatterM > 0
-      ? [['Survey height scatter', `${formatQuantity('length', s.heightScatterM, u.system, 2)} (the route's stated height accuracy): highs, lows and limit ranges are read no finer than this`] as [string, string]]
+      ? [['Survey height scatter', `${formatQuantity('depth', s.heightScatterM, u.system)} (the route's stated height accuracy): highs, lows and limit ranges are read no finer than this`] as [string, string]]
       : []),
-    ['Siphon limit / vapour limit', `${formatQuantity('length', a.limits.siphonLimitHeadM, u.system)} / ${formatQuantity('length', a.limits.vapourLimitHeadM, u.system)} of suction at ${formatQuantity('length', a.limits.siteAltitudeM, u.system, 0)} altitude`],
+    ['Siphon limit / vapour limit', `${formatQuantity('length', a.limits.siphonLimitHeadM, u.system)} / ${formatQuantity('length', a.limits.vapourLimitHeadM, u.system)} of suction at ${formatQuantity('elevation', a.limits.siteAltitudeM, u.system)} altitude`],
     ['Surge check', s.checkSurge ? 'static pressure plus a sudden stop (Joukowsky) against the allowed head' : 'off'],
     ['Flow analysed', `${formatQuantity('designFlow', a.flowM3s, u.system)} (${a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends'})`],
   ];

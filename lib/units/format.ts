@@ -34,9 +34,9 @@ export function formatDistance(lengthM: number, system: UnitSystem): string {
   return lengthM >= big ? `${formatNumber(lengthM / big, 2)} ${symbol}` : formatQuantity('length', lengthM, system, 0);
 }
 
-/** A water temperature in °C, with °F alongside for US projects. */
+/** A water temperature in the project's unit: °F first in a US project, with °C alongside (the core's unit). */
 export function formatTemperature(c: number, system: UnitSystem): string {
-  return system === 'us' ? `${formatNumber(c, 0)} °C (${formatNumber((c * 9) / 5 + 32, 0)} °F)` : `${formatNumber(c, 0)} °C`;
+  return system === 'us' ? `${formatQuantity('temperature', c, system)} (${formatQuantity('temperature', c, 'metric')})` : formatQuantity('temperature', c, system);
 }
 
 /** A duration for people: minutes under 2 h, hours under 3 days, then hours and days. */

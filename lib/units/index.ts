@@ -11,6 +11,7 @@ export {
   formatTemperature,
   inputValue,
 } from './format';
+export { unitDefaults, type UnitDefaults } from './defaults';
 export { autoDecimals, formatNumber, formatPlainNumber } from './number';
 export {
   fromDisplay,

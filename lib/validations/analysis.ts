@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { lineDesignParts, LineSettingsSchema, StandaloneLineFlowSchema, StandaloneLineStartSchema } from './line-design';
 import { elevation, metres, nonNegative } from './numbers';
+import { unitSystem } from './projects';
 
 // A line given whole to the stateless analysis: the saved line's design schema (lib/validations/line-design.ts)
 // with the stations a saved line reads from its route, and without the project's parts (ram sites).
@@ -13,8 +14,13 @@ export const MAX_STATELESS_ANALYSIS_BYTES = 4_000_000;
 /** Stateless analyses per user per minute (common practice, no source: well above what an editor sends). */
 export const ANALYSIS_LIMIT = { name: 'analysis-user', points: 30, durationSeconds: 60 };
 
-/** `?profilePoints=N`: thin the returned profile to about N points (it keeps every high and low). */
+/**
+ * `?profilePoints=N`: thin the returned profile to about N points (it keeps every high and low).
+ * `?units=us|metric`: the unit system a refusal states its bounds in (the body and the answer stay SI);
+ * metric by default, so a refusal reads as a metric project's saved line would.
+ */
 export const AnalysisQuerySchema = z.strictObject({
+  units: unitSystem.default('metric'),
   profilePoints: z.coerce.number({ error: 'profilePoints must be a whole number' }).int('profilePoints must be a whole number').min(50, 'profilePoints must be at least 50').max(20_000, 'profilePoints must be at most 20000').optional(),
 });
 

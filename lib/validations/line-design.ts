@@ -78,7 +78,8 @@ export const CustomPipeSchema = z
       assertPipeSpec(pipe);
     } catch (error) {
       if (!(error instanceof HydraulicsInputError)) throw error;
-      ctx.addIssue({ code: 'custom', message: error.message, path: error.field.split('.').slice(1) });
+      // The core's reason without its internal field path; the path puts it beside the field.
+      ctx.addIssue({ code: 'custom', message: error.reason, path: error.field.split('.').slice(1) });
     }
   });
 

@@ -54,6 +54,13 @@ export const SavePointsSchema = z.strictObject({
 });
 export type SavePointsInput = z.infer<typeof SavePointsSchema>;
 
+const WindowStart = z.object({ window: z.object({ fromSeq: z.number().int().min(0).max(MAX_ROUTE_POINTS) }) });
+/** The route page's number of a save's first point: a page of rows (`window`) starts at its first seq + 1, so a refusal names the row as the table does. */
+export function firstPointNumberOf(data: unknown): number {
+  const sent = WindowStart.safeParse(data);
+  return sent.success ? sent.data.window.fromSeq + 1 : 1;
+}
+
 const CLEANUP_KINDS = ['grade-spike', 'median-outlier', 'duplicate', 'chainage-backwards', 'time-backwards', 'smoothing', 'benchmark-offset'] as const;
 const kind = z.enum(CLEANUP_KINDS, { error: `Kind must be one of ${CLEANUP_KINDS.join(', ')}` });
 const pointIndex = whole('Index', 0);

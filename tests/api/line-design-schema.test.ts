@@ -1,15 +1,18 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as analyse } from '@/app/api/analysis/line/route';
 import * as lineRoute from '@/app/api/lines/[lineId]/route';
+import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
 import { REFERENCE_PIPE, referenceLine } from './analysis-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 
 /**
- * One line-design schema: a saved line's design (PATCH /api/lines/:id, under `design`) and a line
- * given whole to the stateless analysis (POST /api/analysis/line) refuse the same bad part with the
- * same words at the same field.
+ * One line-design schema and one wording: a saved line's design (PATCH /api/lines/:id, under `design`)
+ * and a line given whole to the stateless analysis (POST /api/analysis/line) refuse the same bad part
+ * at the same field through the same words table, the saved line in its project's units and the
+ * stateless call in the units `?units=` names (metric by default): the same input in the same units
+ * gets the same words.
  */
 const savedDesign = {
   start: { kind: 'water-level', levelM: 241 },
@@ -42,19 +45,49 @@ describe('one line-design schema for saved lines and the stateless analysis', ()
   beforeAll(async () => {
     f = await createTeamFixture();
   });
+  const setUnits = (unitSystem: 'us' | 'metric') => models().Project.update({ unitSystem }, { where: { id: f.projectId } });
   const save = (design: unknown) =>
     call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, body: { design }, userId: f.users.designer.id });
-  const analyseWhole = (body: unknown) => call(analyse, { method: 'POST', path: '/api/analysis/line', body, userId: f.users.designer.id });
+  const analyseWhole = (body: unknown, query = '') => call(analyse, { method: 'POST', path: `/api/analysis/line${query}`, body, userId: f.users.designer.id });
+  /** The saved line's refusal in a project of `system`, and the stateless one asked in the same system. */
+  async function bothIn(system: 'us' | 'metric', savedPart: Record<string, unknown>, wholePart: Record<string, unknown>) {
+    await setUnits(system);
+    const saved = await save({ ...savedDesign, ...savedPart }).finally(() => setUnits('metric'));
+    const whole = await analyseWhole({ ...referenceLine(), ...wholePart }, `?units=${system}`);
+    return { saved, whole };
+  }
 
-  it.each(badParts)('refuses %s with the same words on both endpoints', async (_what, part, field) => {
-    const saved = await save({ ...savedDesign, ...part });
-    const whole = await analyseWhole({ ...referenceLine(), ...part });
-    expect(saved.status).toBe(400);
-    expect(whole.status).toBe(400);
-    const savedWords = saved.json.error.fields?.[`design.${field}`];
-    const wholeWords = whole.json.error.fields?.[field];
-    expect(savedWords, JSON.stringify(saved.json.error.fields)).toBeDefined();
-    expect(wholeWords).toEqual(savedWords);
+  it.each(badParts)('refuses %s with the same words on both endpoints, in either unit system', async (_what, part, field) => {
+    const metric = await bothIn('metric', part, part);
+    const us = await bothIn('us', part, part);
+    const byDefault = await analyseWhole({ ...referenceLine(), ...part });
+    for (const { saved, whole } of [metric, us]) {
+      expect(saved.status).toBe(400);
+      expect(whole.status).toBe(400);
+      const savedWords = saved.json.error.fields?.[`design.${field}`];
+      expect(savedWords, JSON.stringify(saved.json.error.fields)).toBeDefined();
+      expect(whole.json.error.fields?.[field]).toEqual(savedWords);
+      expect(whole.json.error.message).toBe(saved.json.error.message);
+      // Named as the screen names it, never by its path.
+      if (field.includes('.')) expect(savedWords.join(' ')).not.toContain(field);
+    }
+    // Without `?units=` the stateless call words as a metric project does.
+    expect(byDefault.json.error.fields?.[field]).toEqual(metric.whole.json.error.fields?.[field]);
+  });
+
+  it('states a bound in the units asked: a negative design flow in L/s, or in US gpm', async () => {
+    const part = { flow: { kind: 'design', flowM3s: -1 } };
+    const metric = await bothIn('metric', part, part);
+    const us = await bothIn('us', part, part);
+    expect(metric.whole.json.error.fields['flow.flowM3s']).toEqual(['Design flow must be at least 0 L/s']);
+    expect(us.whole.json.error.fields['flow.flowM3s']).toEqual(['Design flow must be at least 0 US gpm']);
+    expect(us.saved.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0 US gpm']);
+  });
+
+  it('refuses a unit system it does not know, before reading the body', async () => {
+    const res = await analyseWhole(referenceLine(), '?units=imperial');
+    expect(res.status).toBe(400);
+    expect(res.json.error.fields.units).toEqual(['Units must be "metric" or "us"']);
   });
 
   // The core's own refusals (stretches that leave a gap, a pipe nobody has), worded by the one mapping.
@@ -63,16 +96,17 @@ describe('one line-design schema for saved lines and the stateless analysis', ()
     ['a pipe id nobody has', (line) => ({ stretches: [{ fromM: 0, toM: line === 'saved' ? 400 : 1000, pipe: 'copper-99mm' }] }), 'stretches.pipe.0'],
   ];
 
-  it.each(coreRefusals)('refuses %s in the words of the line page on both endpoints', async (_what, part, field) => {
-    const saved = await save({ ...savedDesign, ...part('saved') });
-    const whole = await analyseWhole({ ...referenceLine(), ...part('whole') });
-    expect(saved.status).toBe(400);
-    expect(whole.status).toBe(400);
-    const savedWords = saved.json.error.fields?.[`design.${field}`];
-    expect(savedWords, JSON.stringify(saved.json.error.fields)).toBeDefined();
-    expect(whole.json.error.fields?.[field]).toEqual(savedWords);
-    expect(whole.json.error.message).toBe(saved.json.error.message);
-    expect(savedWords[0]).toMatch(/^Pipe stretch (1|2): /);
+  it.each(coreRefusals)('refuses %s in the words of the line page on both endpoints, in either unit system', async (_what, part, field) => {
+    for (const system of ['metric', 'us'] as const) {
+      const { saved, whole } = await bothIn(system, part('saved'), part('whole'));
+      expect(saved.status).toBe(400);
+      expect(whole.status).toBe(400);
+      const savedWords = saved.json.error.fields?.[`design.${field}`];
+      expect(savedWords, JSON.stringify(saved.json.error.fields)).toBeDefined();
+      expect(whole.json.error.fields?.[field]).toEqual(savedWords);
+      expect(whole.json.error.message).toBe(saved.json.error.message);
+      expect(savedWords[0]).toMatch(/^Pipe stretch (1|2): /);
+    }
   });
 
   it('refuses a ram-site start or a ram delivery on the stateless endpoint, saying which starts it takes', async () => {

@@ -70,7 +70,8 @@ describe('lines API', () => {
   it('refuses shapes zod can see: unknown pipe kind, negative flow, unknown fields, a device off the line', async () => {
     const bad = await create({ name: 'Bad', routeId: f.lineRouteId, design: designOf({ flow: { kind: 'design', flowM3s: -1 } }), colour: 'red' });
     expect(bad.status).toBe(400);
-    expect(bad.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0 m³/s']);
+    // Worded as the screen names the field, the bound in the project's flow unit.
+    expect(bad.json.error.fields['design.flow.flowM3s']).toEqual(['Design flow must be at least 0 L/s']);
     expect(bad.json.error.fields.colour).toEqual(['Unknown field "colour"']);
     const off = await create({ name: 'Off', routeId: f.lineRouteId, design: designOf({ devices: [{ kind: 'washout', chainageM: 900 }] }) });
     expect(off.status).toBe(400);
@@ -89,7 +90,7 @@ describe('lines API', () => {
     };
     const wrong = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [{ ...pipe, insideDiameterM: 0.05 }], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(wrong.status).toBe(400);
-    expect(wrong.json.error.fields['design.pipes.0.insideDiameterM'][0]).toMatch(/must be less than outsideDiameterM/);
+    expect(wrong.json.error.fields['design.pipes.0.insideDiameterM'][0]).toBe('Custom pipe 1: inside diameter must be less than the outside diameter');
     const ok = await create({ name: 'Custom', routeId: f.lineRouteId, design: designOf({ pipes: [pipe], stretches: [{ fromM: 0, toM: 400, pipe: 'old-barn-pipe' }] }) });
     expect(ok.status).toBe(201);
     const analysis = await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: ok.json.line.id }, userId: f.users.reviewer.id });

@@ -104,6 +104,14 @@ describe('site photos', () => {
     const moved = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: res.json.photo.id }, body: { chainageM: 100, inReport: true }, userId: f.users.designer.id });
     expect(moved.status).toBe(200);
     expect(moved.json.photo).toMatchObject({ chainageM: 100, inReport: true, placement: 'picked' });
+    // A chainage beyond any line is refused in the project's units (1,000 km = 3,280,840 ft).
+    await models().Project.update({ unitSystem: 'us' }, { where: { id: f.projectId } });
+    const far = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: res.json.photo.id }, body: { chainageM: 2e6 }, userId: f.users.designer.id });
+    const farUpload = await upload(PLAIN_PNG, 'sketch.png', { routeId: walkId, chainageM: '2000000' }, 'image/png');
+    await models().Project.update({ unitSystem: 'metric' }, { where: { id: f.projectId } });
+    expect(far.status).toBe(400);
+    expect(far.json.error.fields.chainageM).toEqual(['Chainage must be at most 3,280,840 ft']);
+    expect(farUpload.json.error.fields.chainageM).toEqual(['Chainage must be at most 3,280,840 ft']);
   });
 
   it('a HEIC photo (made by libheif’s encoder) is decoded, served as a metadata-free JPEG and lands at its chainage', async () => {

@@ -196,7 +196,7 @@ describe('editing points', () => {
   it('refuses a malformed point with the field named', async () => {
     const res = await putPoints(f.routeId, { points: [{ sourceSeq: null, latitude: 91, longitude: 0, chainageM: null, elevationM: 1, label: null, heightSource: 'gps', confidenceM: null, excluded: false }] });
     expect(res.status).toBe(400);
-    expect(res.json.error.fields['points.0.latitude']).toEqual(['Latitude must be at most 90 degrees']);
+    expect(res.json.error.fields['points.0.latitude']).toEqual(['Point 1: latitude must be at most 90 degrees']);
   });
 });
 

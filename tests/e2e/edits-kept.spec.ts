@@ -52,7 +52,8 @@ test('lines are duplicated and deleted from the list and the line page; the dial
   await dialog.getByRole('button', { name: 'Delete line' }).click();
   await expect(copyRow).toHaveCount(0);
   await expect(page.getByRole('status').filter({ hasText: 'Deleted “Spring box to house, PN 16 option (copy)”.' })).toBeVisible();
-  expect(await page.evaluate(() => document.activeElement !== document.body && document.activeElement?.closest('table, [role="region"], section, div') !== null)).toBe(true);
+  // Focus comes back once the dialog has closed and the list re-rendered: wait for it rather than read it once.
+  await expect.poll(() => page.evaluate(() => document.activeElement !== document.body && document.activeElement?.closest('table, [role="region"], section, div') !== null)).toBe(true);
 
   // From the line page: duplicate opens the copy; delete returns to the list.
   await page.goto(`/projects/${PROJECT}/lines/${PN16_LINE}`);
@@ -90,6 +91,8 @@ test('switching the material keeps the nearest bore; design flow saves nothing u
     await page.getByRole('radio', { name: 'Design flow' }).check();
     const flowBox = page.getByLabel(/^Design flow \(/);
     await expect(flowBox).toHaveValue('');
+    // An example in the project's units stands in the empty box; nothing is saved from it.
+    await expect(flowBox).toHaveAttribute('placeholder', 'e.g. 1');
     await expect(state).toHaveAttribute('data-state', 'refused');
     await expect(state).toContainText('Not saved: Design flow, still to be typed — the line keeps its saved values');
     await page.screenshot({ path: `${shots}/design-flow-untyped.png` });
@@ -151,7 +154,8 @@ test('a save conflict with one\'s own other tab says so and offers a reload', as
 test('unsaved route-table edits survive a visit to another section', async ({ page }) => {
   await signIn(page, 'designer@example.test');
   await page.goto(`/projects/${PROJECT}/routes/${ROUTE}`);
-  const elevation = page.getByLabel('Elevation of point 2', { exact: true });
+  // The streamed page holds a hidden copy of the table for a moment: act on the one on screen.
+  const elevation = page.getByLabel('Elevation of point 2', { exact: true }).filter({ visible: true });
   const before = await elevation.inputValue();
   await elevation.fill('123.45');
   await elevation.press('Enter');
@@ -162,18 +166,18 @@ test('unsaved route-table edits survive a visit to another section', async ({ pa
   await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Survey routes' }).click();
   await page.getByRole('link', { name: 'Spring line design profile' }).first().click();
   await expect(page.getByText(/^Unsaved changes \(kept from before you left this page\)$/)).toBeVisible();
-  await expect(page.getByLabel('Elevation of point 2', { exact: true })).toHaveValue(/^123[.,]45$/);
+  await expect(page.getByLabel('Elevation of point 2', { exact: true }).filter({ visible: true })).toHaveValue(/^123[.,]45$/);
 
   // Removing a row from the keyboard keeps focus in place: on the delete button of the row that moved up.
-  const fourth = await page.getByLabel('Elevation of point 4', { exact: true }).inputValue();
-  await page.getByRole('button', { name: 'Delete point 3', exact: true }).focus();
+  const fourth = await page.getByLabel('Elevation of point 4', { exact: true }).filter({ visible: true }).inputValue();
+  await page.getByRole('button', { name: 'Delete point 3', exact: true }).filter({ visible: true }).focus();
   await page.keyboard.press('Enter');
-  await expect(page.getByLabel('Elevation of point 3', { exact: true })).toHaveValue(fourth);
-  await expect(page.getByRole('button', { name: 'Delete point 3', exact: true })).toBeFocused();
+  await expect(page.getByLabel('Elevation of point 3', { exact: true }).filter({ visible: true })).toHaveValue(fourth);
+  await expect(page.getByRole('button', { name: 'Delete point 3', exact: true }).filter({ visible: true })).toBeFocused();
 
   // Discarded, they are gone for good (nothing was saved).
   await page.getByRole('button', { name: 'Discard' }).click();
-  await expect(page.getByLabel('Elevation of point 2', { exact: true })).toHaveValue(before);
+  await expect(page.getByLabel('Elevation of point 2', { exact: true }).filter({ visible: true })).toHaveValue(before);
 });
 
 test('deleting a route names its lines and what happens to them; lift deletes ask first', async ({ page }) => {

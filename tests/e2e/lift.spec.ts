@@ -40,6 +40,9 @@ test('a designer enters a ram site, sees litres a day and the tank fill time, an
   await ramForm.getByLabel('Drive pipe bore (mm)').fill('35.05');
   await ramForm.getByLabel('Lift, pump to delivery outlet (m)').fill('10.7');
   await ramForm.getByLabel('Delivery pipe length (m)').fill('107');
+  // The delivery pipe opens on the project's pipe series (ISO 4427 here); this ram has a pipe of its own.
+  await expect(ramForm.getByLabel('Pipe', { exact: true })).toHaveValue('pe100-iso4427-sdr11');
+  await ramForm.getByLabel('Pipe', { exact: true }).selectOption('custom');
   await ramForm.getByLabel('Delivery pipe bore (mm)').fill('20.93');
   await ramForm.getByLabel('Pressure rating (kPa)').fill('689');
   await expect(ramForm.getByTestId('ram-preview')).toContainText('L/day');
@@ -109,9 +112,9 @@ test('a lift below the fall is refused beside the field and the site stays as it
   const form = page.getByRole('form', { name: 'Edit Weir ram' });
   await expect(form.getByLabel('Lift, pump to delivery outlet (ft)')).toHaveValue('70');
   await form.getByLabel('Lift, pump to delivery outlet (ft)').fill('3');
-  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet');
+  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet: Lift, pump to delivery outlet must be above the fall');
   await form.getByRole('button', { name: 'Save ram site' }).click();
-  await expect(form.getByRole('alert').filter({ hasText: 'Lift must be above the fall' })).toBeVisible();
+  await expect(form.getByRole('alert').filter({ hasText: 'Lift, pump to delivery outlet must be above the fall' })).toBeVisible();
   await page.reload();
   // Heads print with one decimal on every screen (lib/units quantity table).
   await expect(page.getByRole('region', { name: 'Ram pump' }).getByText('Fall 6.0 ft, lift 70.0 ft')).toBeVisible();

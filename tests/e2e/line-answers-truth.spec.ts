@@ -36,3 +36,20 @@ test('the flow card never shows a flow the line cannot carry, and names the fric
   }
   expect(errors).toEqual([]);
 });
+
+test('the demo\'s walked phone route lists a short "What to fix": the smooth ground\'s items and one it names as within the scatter', async ({ page }) => {
+  const errors = watchConsole(page);
+  await signIn(page, 'designer@example.test');
+  // Larkspur Gill, Hobb spring to the village tank (seeders/20261202600001-demo-walked-route.cjs); the
+  // list was 110 items before the analysis knew the survey's scatter (tests/lib/lines/walked-demo-items.test.ts
+  // works the 13 out from the smooth ground the walk was made from).
+  await page.goto('/projects/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2601/lines/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a4601');
+  await expect(page.getByRole('heading', { name: /^What to fix \(\d+\)$/ })).toHaveText('What to fix (13)');
+  const list = page.getByTestId('warnings').filter({ visible: true });
+  await expect(list.locator(':scope > li')).toHaveCount(13);
+  // One air valve per summit and one washout per sag of the smooth ground (420, 1,650, 2,200 m; 330, 1,000, 2,040 m).
+  await expect(list.locator('li[data-code="air-release-needed"]')).toHaveCount(3);
+  await expect(list.locator('li[data-code="washout-needed"]')).toHaveCount(3);
+  await page.screenshot({ path: test.info().outputPath('walked-line-what-to-fix.png'), fullPage: true });
+  expect(errors).toEqual([]);
+});

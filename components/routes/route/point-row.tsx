@@ -2,7 +2,7 @@
 
 import { HEIGHT_SOURCES, type HeightSource } from '@/hydraulics/index';
 import { removeKeepingFocus } from '@/components/ui/focus-return';
-import { formatNumber, fromDisplay, toDisplay } from '@/lib/units';
+import { formatNumber, fromDisplay, toDisplay, unitDef } from '@/lib/units';
 import type { DraftAction, DraftPoint } from '@/lib/routes/draft';
 import type { UnitSystem } from '@/lib/units';
 import { HEIGHT_SOURCE_LABELS } from '../format-labels';
@@ -37,16 +37,16 @@ export function PointRow({ point: p, index, count, firstOnPage = false, lastOnPa
       <td className="tabular px-2 py-1 text-right">
         {editable && !positioned ? (
           <NumberCell label={`Chainage of point ${n}`} value={show(p.chainageM, units)} digits={2} onCommit={(v) => edit({ chainageM: toM(v) })} />
-        ) : p.chainageM === null ? '—' : formatNumber(toDisplay('length', p.chainageM, units), 1)}
+        ) : p.chainageM === null ? '—' : formatNumber(toDisplay('chainage', p.chainageM, units), unitDef('chainage', units).decimals)}
       </td>
       <td className="tabular px-2 py-1 text-right">
         {editable ? (
           <NumberCell label={`Elevation of point ${n}`} value={show(p.elevationM, units)} digits={2} onCommit={(v) => v !== null && edit({ elevationM: fromDisplay('length', v, units) })} />
         ) : (
-          <span className={changed ? 'font-semibold text-moss-700' : undefined}>{formatNumber(toDisplay('length', p.elevationM, units), 2)}</span>
+          <span className={changed ? 'font-semibold text-moss-700' : undefined}>{formatNumber(toDisplay('elevation', p.elevationM, units), unitDef('elevation', units).decimals)}</span>
         )}
       </td>
-      <td className={`tabular px-2 py-1 text-right ${changed ? 'text-ochre-700' : 'text-creek-500'}`}>{p.rawElevationM === null ? 'new' : formatNumber(toDisplay('length', p.rawElevationM, units), 2)}</td>
+      <td className={`tabular px-2 py-1 text-right ${changed ? 'text-ochre-700' : 'text-creek-500'}`}>{p.rawElevationM === null ? 'new' : formatNumber(toDisplay('elevation', p.rawElevationM, units), unitDef('elevation', units).decimals)}</td>
       <td className="px-2 py-1">
         {editable ? (
           <input aria-label={`Label of point ${n}`} defaultValue={p.label ?? ''} key={`${p.key}-${p.label}`} onBlur={(e) => e.target.value !== (p.label ?? '') && edit({ label: e.target.value || null })} className="w-36 rounded border border-creek-100 px-1.5 py-0.5 text-sm" />

@@ -32,8 +32,8 @@ describe('an air valve at a low point or a washout at a high point is warned (pr
     expect(analysis.warnings.map((w) => w.code)).toContain('air-release-needed');
     expect(analysis.warnings.map((w) => w.code)).toContain('washout-needed');
     const text = warningText(misplaced[1], displayUnits('us'));
-    // 600 m = 1,969 ft; 80 m = 262.5 ft (1 ft = 0.3048 m, core.md §7).
-    expect(text.message).toContain('ch. 1,969 ft (262.5 ft)');
+    // 600 m = 1,969 ft; 80 m = 262.47 ft (1 ft = 0.3048 m, core.md §7; elevations to the hundredth, the one rounding rule).
+    expect(text.message).toContain('ch. 1,969 ft (262.47 ft)');
     expect(text.fix).toMatch(/fit a washout here at ch\. 1,969 ft/);
   });
 

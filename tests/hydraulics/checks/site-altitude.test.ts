@@ -61,8 +61,8 @@ describe('site altitude on an assumed datum (profile-and-checks.md §6.1)', () =
   it('a US project reads the warning in feet', () => {
     const w = analyzeLine(levelBookLine({ heightDatum: 'assumed' })).warnings.find((x) => x.code === 'site-altitude-assumed')!;
     const text = warningText(w, displayUnits('us'));
-    // 112 m = 367.5 ft (1 ft = 0.3048 m exactly, core.md §7).
-    expect(text.message).toContain('367.5 ft');
+    // 112 m = 367.45 ft (1 ft = 0.3048 m exactly, core.md §7; an elevation, to the hundredth).
+    expect(text.message).toContain('367.45 ft');
     expect(text.message).not.toMatch(/\d m\b/);
     expect(text.fix).toMatch(/Site altitude/);
   });

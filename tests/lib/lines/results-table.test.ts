@@ -20,7 +20,8 @@ describe('results tables and their CSV files', () => {
     ]);
     expect(body).toHaveLength(analysis.points.chainageM.length);
     const sag = body.find((r) => r[0] === '650.0')!;
-    expect(Number(sag[5])).toBeCloseTo(112.75, 2); // static head 412 m over the pipe at 300 - 0.75 m
+    // Static pressure head 112.75 m (412 m over the pipe at 300 - 0.75 m), shown as every head is: to the tenth.
+    expect(sag[5]).toBe('112.8');
     expect(Number(sag[4])).toBeCloseTo(analysis.points.hydraulicGradeM[rows.findIndex((r) => r.chainageM === 650)], 2);
   });
 
@@ -28,8 +29,8 @@ describe('results tables and their CSV files', () => {
     const csv = tableCsv(stretchColumns(displayUnits('us'), 20), analysis.stretches);
     const [header, first] = Papa.parse<string[]>(csv.trim()).data;
     expect(header.slice(0, 4)).toEqual(['Stretch', 'From (ft)', 'To (ft)', 'Pipe length (ft)']);
-    // 300 m = 984.3 ft (1 ft = 0.3048 m exactly).
-    expect(Number(first[2])).toBeCloseTo(300 / FOOT_M, 1);
+    // 300 m = 984.3 ft (1 ft = 0.3048 m exactly); US chainages to the whole foot.
+    expect(first[2]).toBe(String(Math.round(300 / FOOT_M)));
     expect(first[4]).toBe('40 mm PE80 SDR 17 (PN 8)');
   });
 });
@@ -39,7 +40,7 @@ describe('results CSV and formula injection', () => {
     const { tableCsv } = await import('@/lib/lines/results-table');
     const columns = [
       { key: 'pipe', heading: 'Pipe', value: (r: { label: string; head: number }) => r.label },
-      { key: 'head', heading: 'Head (m)', value: (r: { label: string; head: number }) => r.head, digits: 2 },
+      { key: 'head', heading: 'Head (m)', value: (r: { label: string; head: number }) => r.head, decimals: 2 },
     ];
     const rows = ['=HYPERLINK("http://x.test","y")', '+1+1', '-2+3', '@SUM(A1)', '\tTAB', 'PE 32 PN 8'].map((label, i) => ({ label, head: -1.5 * i }));
     const parsed = (await import('papaparse')).default.parse<string[]>(tableCsv(columns, rows)).data.slice(1);

@@ -42,7 +42,7 @@ describe('warnings worded from code and values (issue 13, point 2)', () => {
   it('words the grouped summit the way the issue asks', () => {
     const grouped = walked.warnings.find((w) => w.code === 'air-release-needed' && (w.values.memberCount ?? 0) > 1)!;
     expect(warningText(grouped, metric).message).toMatch(
-      /^\d+ small highs between ch\. [\d,.]+ m to [\d,.]+ m lie within the survey's height scatter of 4\.0 m; the real summit is at ch\. [\d,.]+ m/,
+      /^\d+ small highs between ch\. [\d,.]+ m to [\d,.]+ m lie within the survey's height scatter of 4\.00 m; the real summit is at ch\. [\d,.]+ m/,
     );
     expect(warningText(grouped, metric).fix).toContain('not at each small high');
   });

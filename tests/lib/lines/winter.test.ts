@@ -78,7 +78,7 @@ describe('winter findings stand with the line\'s other items (common practice, n
     const surface: WinterProfileInput = { points: { chainageM: [0, 50, 100], groundElevationM: [100, 95, 90], pipeElevationM: [100, 95, 90] }, airPointToleranceM: 1 };
     const items = winterWarnings(lineWinterPlan(surface, undefined, null, true));
     expect(items.map((w) => w.code)).toEqual(['winter-cover-contradiction']);
-    expect(warningText(items[0], displayUnits('us')).message).toMatch(/on the surface \(cover 0\.0 ft\)/);
+    expect(warningText(items[0], displayUnits('us')).message).toMatch(/on the surface \(cover 0\.00 ft\)/);
     // Drained for winter: no contradiction.
     expect(winterWarnings(lineWinterPlan(surface, { treatment: 'drained-for-winter' }, null, true))).toEqual([]);
   });

@@ -138,7 +138,9 @@ describe('values with their units, the same on every screen', () => {
     expect(formatQuantity('chainage', 4050 * 0.3048, 'us')).toBe('4,050 ft');
     expect(formatQuantity('length', 1402.6, 'metric')).toBe('1,402.6 m');
     expect(formatQuantity('length', 304.8, 'us', 0)).toBe('1,000 ft');
-    expect(formatQuantity('elevation', 316.52, 'metric')).toBe('316.5 m');
+    expect(formatQuantity('elevation', 316.524, 'metric')).toBe('316.52 m'); // elevations to the hundredth, as a level book writes them
+    expect(formatQuantity('headLoss', 3.456, 'metric')).toBe('3.46 m');
+    expect(formatQuantity('depth', 0.762, 'us')).toBe('2.50 ft');
     expect(formatQuantity('head', 42.13, 'metric')).toBe('42.1 m');
   });
 
@@ -158,7 +160,10 @@ describe('values with their units, the same on every screen', () => {
     expect(formatQuantity('pressure', 800_000, 'metric')).toBe('800 kPa');
     expect(formatQuantity('pressure', 800_000, 'us')).toBe(`${(800_000 / 6894.757293168).toFixed(1)} psi`);
     expect(formatTemperature(20, 'metric')).toBe('20 °C');
-    expect(formatTemperature(20, 'us')).toBe('20 °C (68 °F)');
+    expect(formatTemperature(20, 'us')).toBe('68 °F (20 °C)');
+    expect(formatTemperature(4, 'us')).toBe('39 °F (4 °C)'); // 4 × 9/5 + 32 = 39.2
+    expect(fromDisplay('temperature', 68, 'us')).toBeCloseTo(20, 12);
+    expect(toDisplay('temperature', 40, 'us')).toBeCloseTo(104, 12);
   });
 
   it('volumes, durations and shares (what lift & storage shows)', () => {

@@ -1,6 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { notFound } from '@/lib/errors';
-import { deleteLine, getLine, teamOfLine, updateLine } from '@/lib/data/lines';
+import { deleteLine, getLine, teamOfLine, unitSystemOfLine, updateLine } from '@/lib/data/lines';
+import { NEW_LINE_WORDS } from '@/lib/validations/field-word-tables';
 import { LineParams, UpdateLineSchema } from '@/lib/validations/lines';
 
 const teamOf = ({ lineId }: { lineId: string }) => teamOfLine(lineId);
@@ -12,7 +13,7 @@ export const GET = teamRoute({ params: LineParams, permission: 'design.view', te
 });
 
 export const PATCH = teamRoute(
-  { params: LineParams, body: UpdateLineSchema, permission: 'design.edit', teamOf },
+  { params: LineParams, body: UpdateLineSchema, permission: 'design.edit', teamOf, bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ lineId }) => unitSystemOfLine(lineId) } },
   async ({ params, user, body }) => ({ line: await updateLine(params.lineId, user.id, body) }),
 );
 

@@ -1,10 +1,11 @@
 import { teamRoute } from '@/lib/api/route';
-import { deletePhoto, teamOfPhoto, updatePhoto } from '@/lib/data/photos';
+import { deletePhoto, teamOfPhoto, unitSystemOfPhoto, updatePhoto } from '@/lib/data/photos';
+import { PHOTO_WORDS } from '@/lib/validations/field-word-tables';
 import { PhotoParams, PhotoUpdateSchema } from '@/lib/validations/photos';
 
 const teamOf = ({ photoId }: { photoId: string }) => teamOfPhoto(photoId);
 
-export const PATCH = teamRoute({ params: PhotoParams, body: PhotoUpdateSchema, permission: 'survey.edit', teamOf }, async ({ params, body }) => ({
+export const PATCH = teamRoute({ params: PhotoParams, body: PhotoUpdateSchema, bodyWords: { table: PHOTO_WORDS, unitsOf: ({ photoId }) => unitSystemOfPhoto(photoId) }, permission: 'survey.edit', teamOf }, async ({ params, body }) => ({
   photo: await updatePhoto(params.photoId, body),
 }));
 

@@ -1,5 +1,6 @@
+import { PROJECT_WORDS } from '@/lib/validations/field-word-tables';
 import { teamRoute } from '@/lib/api/route';
-import { deleteProject, getProject, teamOfProject, updateProject } from '@/lib/data/projects';
+import { deleteProject, getProject, teamOfProject, updateProject, inProjectUnits } from '@/lib/data/projects';
 import { ProjectParams, UpdateProjectSchema } from '@/lib/validations/projects';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
@@ -9,7 +10,7 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'project.view'
 }));
 
 export const PATCH = teamRoute(
-  { params: ProjectParams, body: UpdateProjectSchema, permission: 'project.edit', teamOf },
+  { params: ProjectParams, body: UpdateProjectSchema, bodyWords: inProjectUnits(PROJECT_WORDS), permission: 'project.edit', teamOf },
   async ({ params, body }) => ({ project: await updateProject(params.projectId, body) }),
 );
 

@@ -1,6 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { createDemandUse, listDemandUses } from '@/lib/data/demand-uses';
-import { teamOfProject } from '@/lib/data/projects';
+import { inProjectUnits, teamOfProject } from '@/lib/data/projects';
+import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
 import { DemandUseSchema } from '@/lib/validations/demand-uses';
 import { ProjectParams } from '@/lib/validations/projects';
 
@@ -11,6 +12,6 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: DemandUseSchema, permission: 'design.edit', teamOf, status: 201 },
+  { params: ProjectParams, body: DemandUseSchema, bodyWords: inProjectUnits(DEMAND_USE_WORDS), permission: 'design.edit', teamOf, status: 201 },
   async ({ params, body }) => ({ use: await createDemandUse(params.projectId, body) }),
 );

@@ -1,6 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { createLine, listLines } from '@/lib/data/lines';
-import { teamOfProject } from '@/lib/data/projects';
+import { teamOfProject, unitSystemOfProject } from '@/lib/data/projects';
+import { NEW_LINE_WORDS } from '@/lib/validations/field-word-tables';
 import { CreateLineSchema } from '@/lib/validations/lines';
 import { ProjectParams } from '@/lib/validations/projects';
 
@@ -11,6 +12,6 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: CreateLineSchema, permission: 'design.edit', teamOf, status: 201 },
+  { params: ProjectParams, body: CreateLineSchema, permission: 'design.edit', teamOf, status: 201, bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ projectId }) => unitSystemOfProject(projectId) } },
   async ({ params, user, body }) => ({ line: await createLine(params.projectId, user.id, body) }),
 );

@@ -3,7 +3,9 @@ import { teamRoute } from '@/lib/api/route';
 import { readFileUpload } from '@/lib/api/upload';
 import { env } from '@/lib/env';
 import { listPhotos, uploadPhoto } from '@/lib/data/photos';
-import { teamOfProject } from '@/lib/data/projects';
+import { teamOfProject, unitSystemOfProject } from '@/lib/data/projects';
+import { PHOTO_WORDS } from '@/lib/validations/field-word-tables';
+import { fieldErrorsIn } from '@/lib/validations/field-words';
 import { PhotoUploadFieldsSchema } from '@/lib/validations/photos';
 import { ProjectParams } from '@/lib/validations/projects';
 
@@ -20,6 +22,7 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
  */
 export const POST = teamRoute({ params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 }, async ({ req, params, user }) => {
   const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: env().RUNNEL_PHOTO_MAX_BYTES, what: 'a photo' });
-  const fields = parseOrThrow(PhotoUploadFieldsSchema, upload.fields, 'Some photo details are not valid');
+  const system = await unitSystemOfProject(params.projectId);
+  const fields = parseOrThrow(PhotoUploadFieldsSchema, upload.fields, 'Some photo details are not valid', (error) => fieldErrorsIn(error, system, PHOTO_WORDS));
   return { photo: await uploadPhoto({ projectId: params.projectId, userId: user.id, fileName: upload.fileName, bytes: upload.bytes, ...fields }) };
 });

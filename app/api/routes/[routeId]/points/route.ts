@@ -1,8 +1,10 @@
 import { parseOrThrow } from '@/lib/api/body';
+import { inRouteUnits } from '@/lib/data/line-routes';
+import { ROUTE_WORDS } from '@/lib/validations/field-word-tables';
 import { teamRoute } from '@/lib/api/route';
 import { getRoutePointsPage, teamOfRoute } from '@/lib/data/routes';
 import { saveRoutePoints } from '@/lib/data/route-writes';
-import { MAX_POINTS_JSON_BYTES, RouteParams, RoutePointsQuerySchema, SavePointsSchema } from '@/lib/validations/routes';
+import { firstPointNumberOf, MAX_POINTS_JSON_BYTES, RouteParams, RoutePointsQuerySchema, SavePointsSchema } from '@/lib/validations/routes';
 
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
@@ -17,6 +19,6 @@ export const GET = teamRoute({ params: RouteParams, permission: 'design.view', t
  * survey heights are kept from the stored points. Answers with the route's view, not its points.
  */
 export const PUT = teamRoute(
-  { params: RouteParams, body: SavePointsSchema, permission: 'survey.edit', teamOf, maxBodyBytes: MAX_POINTS_JSON_BYTES },
+  { params: RouteParams, body: SavePointsSchema, bodyWords: { ...inRouteUnits(ROUTE_WORDS), firstNumberOf: firstPointNumberOf }, permission: 'survey.edit', teamOf, maxBodyBytes: MAX_POINTS_JSON_BYTES },
   async ({ params, body }) => saveRoutePoints(params.routeId, body),
 );

@@ -1,13 +1,14 @@
 import { teamRoute } from '@/lib/api/route';
 import { deleteDemandUse, updateDemandUse } from '@/lib/data/demand-uses';
-import { teamOfProject } from '@/lib/data/projects';
+import { inProjectUnits, teamOfProject } from '@/lib/data/projects';
+import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
 import { DemandUseSchema } from '@/lib/validations/demand-uses';
 import { DemandUseParams } from '@/lib/validations/lift-common';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const PUT = teamRoute(
-  { params: DemandUseParams, body: DemandUseSchema, permission: 'design.edit', teamOf },
+  { params: DemandUseParams, body: DemandUseSchema, bodyWords: inProjectUnits(DEMAND_USE_WORDS), permission: 'design.edit', teamOf },
   async ({ params, body }) => ({ use: await updateDemandUse(params.projectId, params.useId, body) }),
 );
 
