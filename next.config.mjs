@@ -12,11 +12,30 @@ const HSTS_HEADER = { key: 'Strict-Transport-Security', value: 'max-age=31536000
 const nextConfig = {
   poweredByHeader: false,
   // Native and Node-only packages stay out of the bundle and load at run time.
-  serverExternalPackages: ['sequelize', 'pg', 'pg-hstore', 'argon2', 'pdfkit', 'svg-to-pdfkit', 'piscina', 'esbuild', 'pino', 'rate-limiter-flexible', 'graphile-worker', 'nodemailer', 'sharp', 'exifr'],
+  serverExternalPackages: [
+    'sequelize',
+    'pg',
+    'pg-hstore',
+    'argon2',
+    'pdfkit',
+    'svg-to-pdfkit',
+    'piscina',
+    'esbuild',
+    'pino',
+    'rate-limiter-flexible',
+    'graphile-worker',
+    'nodemailer',
+    'sharp',
+    'exifr',
+  ],
   async headers() {
     return [
       { source: '/:path*', headers: COMMON_SECURITY_HEADERS },
-      { source: '/:path*', has: [{ type: 'header', key: 'x-forwarded-proto', value: 'https' }], headers: [HSTS_HEADER] },
+      {
+        source: '/:path*',
+        has: [{ type: 'header', key: 'x-forwarded-proto', value: 'https' }],
+        headers: [HSTS_HEADER],
+      },
       // API answers are per user: never kept by a browser or a shared cache.
       { source: '/api/:path*', headers: [{ key: 'Cache-Control', value: 'no-store' }] },
     ];

@@ -23,16 +23,24 @@ function freePort(): Promise<number> {
 }
 
 /** One built instance (`.next`, from `npm test` or `next build`) on a free loopback port, and a fixture team. */
-async function serve(label: string): Promise<{ url: string; fixture: LoadFixture; pid: number; databaseUrl: string; stop: () => Promise<void> }> {
+async function serve(
+  label: string,
+): Promise<{ url: string; fixture: LoadFixture; pid: number; databaseUrl: string; stop: () => Promise<void> }> {
   const databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) throw new Error(`${label} needs DATABASE_URL (a migrated Runnel database, e.g. the test cluster)`);
-  if (!fs.existsSync('.next/BUILD_ID')) throw new Error(`${label} needs a build: run \`npm test\` or \`next build\` first`);
+  if (!fs.existsSync('.next/BUILD_ID'))
+    throw new Error(`${label} needs a build: run \`npm test\` or \`next build\` first`);
   const secretFile = path.join('.secrets', 'session-secret');
-  const secret = process.env.NEXTAUTH_SECRET ?? (fs.existsSync(secretFile) ? fs.readFileSync(secretFile, 'utf8').trim() : '');
+  const secret =
+    process.env.NEXTAUTH_SECRET ?? (fs.existsSync(secretFile) ? fs.readFileSync(secretFile, 'utf8').trim() : '');
   if (!secret) throw new Error(`${label} needs NEXTAUTH_SECRET or .secrets/session-secret`);
   const port = await freePort();
   fs.mkdirSync('.runtime', { recursive: true });
-  const instance: AppInstance = await startAppInstance(port, { ...process.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${port}`, RUNNEL_ENV: 'test' }, `.runtime/${label}.log`);
+  const instance: AppInstance = await startAppInstance(
+    port,
+    { ...process.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${port}`, RUNNEL_ENV: 'test' },
+    `.runtime/${label}.log`,
+  );
   const fixture = await createLoadFixture(databaseUrl, secret, label);
   return {
     url: `http://127.0.0.1:${port}`,
@@ -48,7 +56,14 @@ async function serve(label: string): Promise<{ url: string; fixture: LoadFixture
 
 function figures(result: LoadResult): Record<string, number> {
   const non2xx = Object.values(result.non2xx).reduce((n, c) => n + c, 0);
-  return { median_ms: result.p50, rps: result.requestsPerSecond, p95_ms: result.p95, p99_ms: result.p99, errors: result.errors + result.timeouts + non2xx, requests: result.requests };
+  return {
+    median_ms: result.p50,
+    rps: result.requestsPerSecond,
+    p95_ms: result.p95,
+    p99_ms: result.p99,
+    errors: result.errors + result.timeouts + non2xx,
+    requests: result.requests,
+  };
 }
 
 /** 50 closed-loop connections for 30 s reading a team's project list (database-backed), through one instance. */
@@ -60,7 +75,9 @@ export const apiCapacity50: Benchmark = {
     try {
       // A short warm-up so the figures are not the first compilation of each route.
       await closedLoop(server.url, server.fixture, { connections: 10, durationS: 3, writeEvery: 0 });
-      return figures(await closedLoop(server.url, server.fixture, { connections: USERS, durationS: DURATION_S, writeEvery: 0 }));
+      return figures(
+        await closedLoop(server.url, server.fixture, { connections: USERS, durationS: DURATION_S, writeEvery: 0 }),
+      );
     } finally {
       await server.stop();
     }
@@ -104,7 +121,9 @@ async function transactions(databaseUrl: string): Promise<number> {
   const client = new pg.Client({ connectionString: databaseUrl });
   await client.connect();
   try {
-    const { rows } = await client.query('SELECT xact_commit + xact_rollback AS n FROM pg_stat_database WHERE datname = current_database()');
+    const { rows } = await client.query(
+      'SELECT xact_commit + xact_rollback AS n FROM pg_stat_database WHERE datname = current_database()',
+    );
     return Number(rows[0].n);
   } finally {
     await client.end();
@@ -112,14 +131,24 @@ async function transactions(databaseUrl: string): Promise<number> {
 }
 
 /** The server's CPU time and database statements per request over a closed-loop run of `path`. */
-async function costOf(server: Awaited<ReturnType<typeof serve>>, route: string, seconds: number): Promise<{ cpuMs: number; statements: number }> {
+async function costOf(
+  server: Awaited<ReturnType<typeof serve>>,
+  route: string,
+  seconds: number,
+): Promise<{ cpuMs: number; statements: number }> {
   const cpu0 = groupCpuMs(server.pid);
   const tx0 = await transactions(server.databaseUrl);
-  const result = await autocannon({ url: `${server.url}${route}`, connections: 20, duration: seconds, headers: { cookie: server.fixture.cookie } });
+  const result = await autocannon({
+    url: `${server.url}${route}`,
+    connections: 20,
+    duration: seconds,
+    headers: { cookie: server.fixture.cookie },
+  });
   const cpu1 = groupCpuMs(server.pid);
   // Less the one reading `transactions` itself makes.
   const tx1 = (await transactions(server.databaseUrl)) - 1;
-  if (result.non2xx || result.errors) throw new Error(`${route}: ${result.non2xx} answers outside 2xx and ${result.errors} errors under load`);
+  if (result.non2xx || result.errors)
+    throw new Error(`${route}: ${result.non2xx} answers outside 2xx and ${result.errors} errors under load`);
   const requests = result.requests.total;
   return { cpuMs: (cpu1 - cpu0) / requests, statements: (tx1 - tx0) / requests };
 }
@@ -139,7 +168,12 @@ export const apiListCost: Benchmark = {
       await closedLoop(server.url, server.fixture, { connections: 10, durationS: 3, writeEvery: 0 });
       const list = await costOf(server, `/api/teams/${server.fixture.teamId}/projects`, 10);
       const health = await costOf(server, '/api/health', 10);
-      return { median_ms: list.cpuMs, ratio: list.cpuMs / health.cpuMs, health_ms: health.cpuMs, statements: list.statements };
+      return {
+        median_ms: list.cpuMs,
+        ratio: list.cpuMs / health.cpuMs,
+        health_ms: health.cpuMs,
+        statements: list.statements,
+      };
     } finally {
       await server.stop();
     }

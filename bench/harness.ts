@@ -1,7 +1,10 @@
 /** A named benchmark: `run` is timed; `floor`, when given, is timed the same way for the ratio. */
 export interface Benchmark {
   name: string;
-  /** Work to time (may be async: it is awaited inside the timing). Its result is kept so the engine cannot drop the call. */
+  /**
+   * Work to time (may be async: it is awaited inside the timing). Its result is kept so the engine cannot drop the
+   * call.
+   */
   run: () => unknown;
   /** A lower-bound loop over the same data; the printed ratio is run / floor. */
   floor?: () => unknown;
@@ -26,7 +29,8 @@ export interface Benchmark {
 // Results go to an exported sink so the engine cannot prove them dead and skip the work.
 export const benchSink: { last: unknown } = { last: undefined };
 
-const isThenable = (v: unknown): v is PromiseLike<unknown> => typeof (v as { then?: unknown } | null)?.then === 'function';
+const isThenable = (v: unknown): v is PromiseLike<unknown> =>
+  typeof (v as { then?: unknown } | null)?.then === 'function';
 
 /** Median wall time of `fn` in milliseconds (awaiting it when it returns a promise). */
 export async function medianMs(fn: () => unknown, runs: number, warmUps: number): Promise<number> {
@@ -51,7 +55,9 @@ export async function runBenchmark(benchmark: Benchmark): Promise<string> {
   if (benchmark.measure) {
     try {
       const figures = await benchmark.measure();
-      return `BENCH ${benchmark.name} ${Object.entries(figures).map(([k, v]) => `${k}=${Number.isInteger(v) ? v : v.toFixed(3)}`).join(' ')}`;
+      return `BENCH ${benchmark.name} ${Object.entries(figures)
+        .map(([k, v]) => `${k}=${Number.isInteger(v) ? v : v.toFixed(3)}`)
+        .join(' ')}`;
     } finally {
       await benchmark.teardown?.();
     }

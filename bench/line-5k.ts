@@ -13,22 +13,41 @@ const SPACING_M = 1;
  */
 export function editorLine(stationCount = STATIONS): LineInput {
   let state = 977 >>> 0;
-  const random = () => ((state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 2 ** 32);
+  const random = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 2 ** 32;
   const stations: LineStation[] = new Array(stationCount);
   const lengthM = (stationCount - 1) * SPACING_M * (STATIONS / stationCount);
   for (let i = 0; i < stationCount; i++) {
     const chainageM = (i * lengthM) / (stationCount - 1);
     const t = chainageM / lengthM;
-    const groundElevationM = 620 - 180 * t - 60 * Math.sin(Math.PI * t) ** 8 + 6 * Math.sin(chainageM / 140) + (random() - 0.5) * 0.3;
+    const groundElevationM =
+      620 - 180 * t - 60 * Math.sin(Math.PI * t) ** 8 + 6 * Math.sin(chainageM / 140) + (random() - 0.5) * 0.3;
     stations[i] = { chainageM, groundElevationM };
   }
-  const pipes = ['pe100-iso4427-sdr11-63mm', 'pe100-iso4427-sdr11-50mm', 'pe80-iso4427-sdr11-50mm', 'pe100-iso4427-sdr11-50mm', 'pe100-iso4427-sdr13.6-50mm', 'pe100-iso4427-sdr11-40mm'];
-  const stretches = pipes.map((pipe, s) => ({ fromM: (s * lengthM) / pipes.length, toM: s === pipes.length - 1 ? lengthM : ((s + 1) * lengthM) / pipes.length, pipe }));
+  const pipes = [
+    'pe100-iso4427-sdr11-63mm',
+    'pe100-iso4427-sdr11-50mm',
+    'pe80-iso4427-sdr11-50mm',
+    'pe100-iso4427-sdr11-50mm',
+    'pe100-iso4427-sdr13.6-50mm',
+    'pe100-iso4427-sdr11-40mm',
+  ];
+  const stretches = pipes.map((pipe, s) => ({
+    fromM: (s * lengthM) / pipes.length,
+    toM: s === pipes.length - 1 ? lengthM : ((s + 1) * lengthM) / pipes.length,
+    pipe,
+  }));
   return {
     stations,
     stretches,
-    fittings: [{ chainageM: 0, k: 0.5, label: 'entrance' }, { chainageM: lengthM * 0.5, k: 0.15, label: 'gate valve' }],
-    devices: [{ kind: 'break-pressure-tank', chainageM: lengthM * 0.4 }, { kind: 'washout', chainageM: lengthM * 0.5 }, { kind: 'isolation-valve', chainageM: lengthM * 0.9 }],
+    fittings: [
+      { chainageM: 0, k: 0.5, label: 'entrance' },
+      { chainageM: lengthM * 0.5, k: 0.15, label: 'gate valve' },
+    ],
+    devices: [
+      { kind: 'break-pressure-tank', chainageM: lengthM * 0.4 },
+      { kind: 'washout', chainageM: lengthM * 0.5 },
+      { kind: 'isolation-valve', chainageM: lengthM * 0.9 },
+    ],
     start: { kind: 'water-level', levelM: 621 },
     end: { kind: 'outlet', elevationM: stations[stationCount - 1].groundElevationM, residualHeadM: 5 },
     flow: { kind: 'design', flowM3s: 0.0015 },

@@ -4,7 +4,13 @@ import type { Benchmark } from './harness';
 import { latticeNetwork } from './network-data';
 
 /** The dense matrix of a head system, for the dense comparison. */
-function denseOf(size: number, diagonal: Float64Array, edgeA: Int32Array, edgeB: Int32Array, edgeValue: Float64Array): number[][] {
+function denseOf(
+  size: number,
+  diagonal: Float64Array,
+  edgeA: Int32Array,
+  edgeB: Int32Array,
+  edgeValue: Float64Array,
+): number[][] {
   const dense = Array.from({ length: size }, () => new Array<number>(size).fill(0));
   for (let i = 0; i < size; i++) dense[i][i] = diagonal[i];
   for (let e = 0; e < edgeA.length; e++) {

@@ -21,8 +21,22 @@ export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7, w
     const y = Math.floor(v / side);
     const elevationM = 100 - 0.5 * (x + y) * (100 / side) + 3 * random();
     if (v === 0) nodes.push({ id: 'n0', kind: 'source', elevationM: 160, waterLevelM: 160 });
-    else if (withTank && v === nodeCount - 1) nodes.push({ id: `n${v}`, kind: 'tank', elevationM: 60, waterLevelM: 62, tank: { overflowLevelM: 63, areaM2: 50 } });
-    else nodes.push({ id: `n${v}`, kind: 'junction', elevationM, demandM3s: 0.00002 + 0.00008 * random(), minPressureHeadM: 10 });
+    else if (withTank && v === nodeCount - 1)
+      nodes.push({
+        id: `n${v}`,
+        kind: 'tank',
+        elevationM: 60,
+        waterLevelM: 62,
+        tank: { overflowLevelM: 63, areaM2: 50 },
+      });
+    else
+      nodes.push({
+        id: `n${v}`,
+        kind: 'junction',
+        elevationM,
+        demandM3s: 0.00002 + 0.00008 * random(),
+        minPressureHeadM: 10,
+      });
   }
   const candidates: [number, number, number][] = [];
   for (let v = 0; v < nodeCount; v++) {
@@ -46,13 +60,23 @@ export function latticeNetwork(nodeCount: number, linkCount: number, seed = 7, w
   const links: NetworkLink[] = [...tree, ...extra].map(([a, b], index) => {
     const flow = index < tree.length ? flowOf[index] : 0.0005;
     const diameterM = Math.max(0.025, Math.sqrt((4 * flow) / Math.PI));
-    return { id: `l${index}`, from: `n${a}`, to: `n${b}`, lengthM: 50 + 150 * random(), pipe: { id: 'p', insideDiameterM: diameterM, hazenWilliamsC: 140, roughnessM: 1.5e-6 } };
+    return {
+      id: `l${index}`,
+      from: `n${a}`,
+      to: `n${b}`,
+      lengthM: 50 + 150 * random(),
+      pipe: { id: 'p', insideDiameterM: diameterM, hazenWilliamsC: 140, roughnessM: 1.5e-6 },
+    };
   });
   return { nodes, links };
 }
 
 /** Flow each tree link carries when node 0 feeds every demand through the tree, m³/s. */
-function branchFlows(nodeCount: number, tree: readonly [number, number][], nodes: readonly NetworkNode[]): Float64Array {
+function branchFlows(
+  nodeCount: number,
+  tree: readonly [number, number][],
+  nodes: readonly NetworkNode[],
+): Float64Array {
   const adjacency: [number, number][][] = Array.from({ length: nodeCount }, () => []);
   tree.forEach(([a, b], index) => {
     adjacency[a].push([b, index]);

@@ -20,13 +20,19 @@ export async function routeRead100k(): Promise<Benchmark> {
   const { forgetRouteViews } = await import('../lib/data/route-view-cache');
   const { ROUTE_PAGE_SIZE } = await import('../lib/validations/routes');
   const imported = await importSurvey({
-    projectId: site.project.id, userId: site.user.id, fileName: 'walk-100k.csv', contentType: 'text/csv', bytes: new TextEncoder().encode(walkCsv(POINTS)), options: WALK_OPTIONS,
+    projectId: site.project.id,
+    userId: site.user.id,
+    fileName: 'walk-100k.csv',
+    contentType: 'text/csv',
+    bytes: new TextEncoder().encode(walkCsv(POINTS)),
+    options: WALK_OPTIONS,
   });
   const routeId = imported.route.id;
   let bytes = 0;
   const firstScreen = async () => {
     const [view, page] = await Promise.all([getRouteView(routeId), getRoutePointsPage(routeId, 0, ROUTE_PAGE_SIZE)]);
-    if (!view || view.route.pointCount !== POINTS || page.points.length !== ROUTE_PAGE_SIZE) throw new Error('the route did not read back whole');
+    if (!view || view.route.pointCount !== POINTS || page.points.length !== ROUTE_PAGE_SIZE)
+      throw new Error('the route did not read back whole');
     bytes = JSON.stringify(view).length + JSON.stringify(page).length;
     return bytes;
   };
@@ -34,10 +40,14 @@ export async function routeRead100k(): Promise<Benchmark> {
     name: 'route-read-100k',
     run: () => undefined, // timed by `measure`, cold and warm
     measure: async () => {
-      const cold = await medianMs(() => {
-        forgetRouteViews();
-        return firstScreen();
-      }, 9, 2);
+      const cold = await medianMs(
+        () => {
+          forgetRouteViews();
+          return firstScreen();
+        },
+        9,
+        2,
+      );
       const warm = await medianMs(firstScreen, 9, 2);
       return { median_ms: cold, warm_ms: warm, bytes };
     },

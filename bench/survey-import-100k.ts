@@ -19,9 +19,16 @@ export const WALK_OPTIONS = {
  * DATABASE_URL, for the benchmarks that store routes; `teardown` removes them all.
  */
 export async function benchSite(name: string) {
-  if (!process.env.DATABASE_URL) throw new Error(`${name} needs DATABASE_URL (a migrated Runnel database, e.g. the test cluster)`);
+  if (!process.env.DATABASE_URL)
+    throw new Error(`${name} needs DATABASE_URL (a migrated Runnel database, e.g. the test cluster)`);
   const dir = mkdtempSync(path.join(os.tmpdir(), 'runnel-bench-s3-'));
-  const s3 = new S3rver({ address: '127.0.0.1', port: 0, silent: true, directory: dir, configureBuckets: [{ name: 'runnel-bench', configs: [] }] });
+  const s3 = new S3rver({
+    address: '127.0.0.1',
+    port: 0,
+    silent: true,
+    directory: dir,
+    configureBuckets: [{ name: 'runnel-bench', configs: [] }],
+  });
   const { port } = await s3.run();
   process.env.RUNNEL_S3_ENDPOINT = `http://127.0.0.1:${port}`;
   process.env.RUNNEL_S3_BUCKET = 'runnel-bench';
@@ -30,8 +37,18 @@ export async function benchSite(name: string) {
   const { models } = await import('../models');
   const { Team, Project, User } = models();
   const team = await Team.create({ name: 'Benchmark team' });
-  const user = await User.create({ email: `bench-${Date.now()}@bench.test`, name: 'Benchmark', passwordHash: 'not-a-login' });
-  const project = await Project.create({ teamId: team.id, name: 'Benchmark project', description: '', siteNotes: '', unitSystem: 'metric' });
+  const user = await User.create({
+    email: `bench-${Date.now()}@bench.test`,
+    name: 'Benchmark',
+    passwordHash: 'not-a-login',
+  });
+  const project = await Project.create({
+    teamId: team.id,
+    name: 'Benchmark project',
+    description: '',
+    siteNotes: '',
+    unitSystem: 'metric',
+  });
   return {
     project,
     user,
@@ -68,7 +85,9 @@ export function walkCsv(points = POINTS): string {
     lat += 0.000027 * (0.6 + random());
     lon += 0.00002 * (random() - 0.3);
     const ele = 400 + 60 * Math.sin(i / 4000) - i * 0.001 + (random() - 0.5) * 2;
-    rows.push(`${lat.toFixed(7)},${lon.toFixed(7)},${ele.toFixed(2)},${new Date(start + i * 3000).toISOString()},${i % 5000 === 0 ? `mark ${i}` : ''},${(3 + random() * 2).toFixed(1)}`);
+    rows.push(
+      `${lat.toFixed(7)},${lon.toFixed(7)},${ele.toFixed(2)},${new Date(start + i * 3000).toISOString()},${i % 5000 === 0 ? `mark ${i}` : ''},${(3 + random() * 2).toFixed(1)}`,
+    );
   }
   return `${rows.join('\n')}\n`;
 }
@@ -91,7 +110,14 @@ export async function surveyImport100k(): Promise<Benchmark> {
     runs: 5,
     warmUps: 1,
     run: async () => {
-      const r = await importSurvey({ projectId: project.id, userId: user.id, fileName: 'walk-100k.csv', contentType: 'text/csv', bytes, options: WALK_OPTIONS });
+      const r = await importSurvey({
+        projectId: project.id,
+        userId: user.id,
+        fileName: 'walk-100k.csv',
+        contentType: 'text/csv',
+        bytes,
+        options: WALK_OPTIONS,
+      });
       if (r.route.pointCount !== POINTS) throw new Error(`imported ${r.route.pointCount} points, expected ${POINTS}`);
       return r.route.lengthM;
     },

@@ -124,7 +124,12 @@ export { seriesCriticalClosureTimeS, type SurgePipeRun } from './surge/series-cl
 // Line profile
 export { analyzeProfile } from './profile/analyze-profile';
 export { assertLineInput } from './profile/validate-line';
-export { DEFAULT_LINE_SETTINGS, highLowToleranceM, resolveLineSettings, type ResolvedLineSettings } from './profile/settings';
+export {
+  DEFAULT_LINE_SETTINGS,
+  highLowToleranceM,
+  resolveLineSettings,
+  type ResolvedLineSettings,
+} from './profile/settings';
 export { profileRows, type ProfileRow } from './profile/rows';
 export { findLimitRanges, type LimitRange, type LimitRangeArgs } from './profile/limit-zones';
 export type {
@@ -157,14 +162,7 @@ export type {
 export { analyzeLine, type LineAnalysis } from './checks/analyze-line';
 export { findTurningPoints, type TurningPoints } from './checks/air-points';
 export { PRESSURE_CAUTION } from './checks/wording';
-export type {
-  LineWarning,
-  WarningValues,
-  LineFix,
-  WarningCode,
-  WarningSeverity,
-  WarningPlace,
-} from './checks/types';
+export type { LineWarning, WarningValues, LineFix, WarningCode, WarningSeverity, WarningPlace } from './checks/types';
 
 // Design helpers
 export {

@@ -1,9 +1,4 @@
-import {
-  GRAVITY_MS2,
-  STANDARD_ATMOSPHERE_PA,
-  WATER_TEMPERATURE_MAX_C,
-  WATER_TEMPERATURE_MIN_C,
-} from './constants';
+import { GRAVITY_MS2, STANDARD_ATMOSPHERE_PA, WATER_TEMPERATURE_MAX_C, WATER_TEMPERATURE_MIN_C } from './constants';
 import { assertInRange } from './input-guards';
 
 /**

@@ -36,7 +36,10 @@ export function isDatabaseUnavailable(error: unknown, depth = 0): boolean {
   if (CONNECTION_ERROR_NAMES.has(error.name)) return true;
   const text = `${error.name} ${error.message}`;
   if (RETRYABLE_CONNECTION_ERRORS.some((pattern) => pattern.test(text))) return true;
-  const inner = (error as { original?: unknown; parent?: unknown }).original ?? (error as { parent?: unknown }).parent ?? error.cause;
+  const inner =
+    (error as { original?: unknown; parent?: unknown }).original ??
+    (error as { parent?: unknown }).parent ??
+    error.cause;
   return isDatabaseUnavailable(inner, depth + 1);
 }
 
@@ -50,6 +53,9 @@ export function isConcurrentWriteConflict(error: unknown, depth = 0): boolean {
   if (error.name === 'SequelizeUniqueConstraintError') return true;
   const code = (error as { code?: unknown }).code;
   if (typeof code === 'string' && CONCURRENT_WRITE_CODES.has(code)) return true;
-  const inner = (error as { original?: unknown; parent?: unknown }).original ?? (error as { parent?: unknown }).parent ?? error.cause;
+  const inner =
+    (error as { original?: unknown; parent?: unknown }).original ??
+    (error as { parent?: unknown }).parent ??
+    error.cause;
   return isConcurrentWriteConflict(inner, depth + 1);
 }

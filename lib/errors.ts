@@ -57,6 +57,7 @@ export const notFound = (what = 'Not found') => new AppError('not_found', what);
  * another team's, or none at all. The same 404 as an id in the address, alike for both so nothing
  * tells them apart, with the field named so the form can show it.
  */
-export const notInProject = (fields: FieldErrors, message = 'A record the request names is not part of this project') => new AppError('not_found', message, fields);
+export const notInProject = (fields: FieldErrors, message = 'A record the request names is not part of this project') =>
+  new AppError('not_found', message, fields);
 export const forbidden = (message = 'Your role on this team does not allow this') => new AppError('forbidden', message);
 export const unauthenticated = () => new AppError('unauthenticated', 'Sign in first');

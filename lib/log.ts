@@ -7,10 +7,30 @@ import pino, { type DestinationStream, type Logger } from 'pino';
  * scrubbed of the configured secrets before it is written, in case one sits inside a message.
  */
 const REDACTED_PATHS = [
-  'password', '*.password', 'passwordHash', '*.passwordHash', 'newPassword', '*.newPassword',
-  'token', '*.token', 'cookie', '*.cookie', 'cookies', '*.cookies', 'authorization', '*.authorization',
-  'headers.cookie', 'headers.authorization', '*.headers.cookie', '*.headers.authorization',
-  'sql', '*.sql', 'parameters', '*.parameters', 'bind', '*.bind',
+  'password',
+  '*.password',
+  'passwordHash',
+  '*.passwordHash',
+  'newPassword',
+  '*.newPassword',
+  'token',
+  '*.token',
+  'cookie',
+  '*.cookie',
+  'cookies',
+  '*.cookies',
+  'authorization',
+  '*.authorization',
+  'headers.cookie',
+  'headers.authorization',
+  '*.headers.cookie',
+  '*.headers.authorization',
+  'sql',
+  '*.sql',
+  'parameters',
+  '*.parameters',
+  'bind',
+  '*.bind',
 ];
 
 interface SerializedError {
@@ -27,7 +47,12 @@ const QUOTED_VALUE = /"(?:[^"\\]|\\.){0,200}"/g;
 export function serializeError(error: unknown, depth = 0): SerializedError {
   if (!(error instanceof Error)) return { type: typeof error, message: String(error).slice(0, 200) };
   const named = error as Error & { code?: unknown; original?: { code?: unknown } };
-  const code = typeof named.code === 'string' ? named.code : typeof named.original?.code === 'string' ? named.original.code : undefined;
+  const code =
+    typeof named.code === 'string'
+      ? named.code
+      : typeof named.original?.code === 'string'
+        ? named.original.code
+        : undefined;
   const isDatabase = error.name.startsWith('Sequelize');
   const message = isDatabase ? error.message.replace(QUOTED_VALUE, '"…"') : error.message;
   const cause = error.cause !== undefined && depth < 3 ? serializeError(error.cause, depth + 1) : undefined;

@@ -3,9 +3,19 @@ import type { ProjectSummary } from './data/projects';
 
 const SORT_KEYS = ['name', 'updatedAt', 'unitSystem'] as const;
 export type ProjectSortKey = (typeof SORT_KEYS)[number];
-export interface ProjectTableState { search: string; sort: ProjectSortKey; descending: boolean; showArchived: boolean }
+export interface ProjectTableState {
+  search: string;
+  sort: ProjectSortKey;
+  descending: boolean;
+  showArchived: boolean;
+}
 
-export const DEFAULT_PROJECT_TABLE: ProjectTableState = { search: '', sort: 'updatedAt', descending: true, showArchived: false };
+export const DEFAULT_PROJECT_TABLE: ProjectTableState = {
+  search: '',
+  sort: 'updatedAt',
+  descending: true,
+  showArchived: false,
+};
 
 /** Newest first by date; A to Z otherwise. */
 const descendingByDefault = (sort: ProjectSortKey) => sort === 'updatedAt';
@@ -59,5 +69,7 @@ export function visibleProjects(projects: ProjectSummary[], state: ProjectTableS
       (needle === '' || p.name.toLowerCase().includes(needle) || p.description.toLowerCase().includes(needle)),
   );
   const direction = state.descending ? -1 : 1;
-  return [...rows].sort((a, b) => direction * String(a[state.sort]).localeCompare(String(b[state.sort]), 'en', { sensitivity: 'base' }));
+  return [...rows].sort(
+    (a, b) => direction * String(a[state.sort]).localeCompare(String(b[state.sort]), 'en', { sensitivity: 'base' }),
+  );
 }

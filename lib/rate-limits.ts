@@ -51,7 +51,8 @@ export async function consume(spec: LimitSpec, key: string, points = 1): Promise
     await limiter(spec).consume(key, points);
     return { allowed: true, retryAfterSeconds: 0 };
   } catch (error) {
-    if (error instanceof RateLimiterRes) return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil(error.msBeforeNext / 1000)) };
+    if (error instanceof RateLimiterRes)
+      return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil(error.msBeforeNext / 1000)) };
     throw error;
   }
 }
@@ -76,5 +77,6 @@ export async function refund(spec: LimitSpec, key: string, points = 1): Promise<
 /** Throws 429 with Retry-After when `key` is over its limit. */
 export async function enforce(spec: LimitSpec, key: string, message: string): Promise<void> {
   const outcome = await consume(spec, key);
-  if (!outcome.allowed) throw new AppError('rate_limited', message, undefined, { retryAfterSeconds: outcome.retryAfterSeconds });
+  if (!outcome.allowed)
+    throw new AppError('rate_limited', message, undefined, { retryAfterSeconds: outcome.retryAfterSeconds });
 }

@@ -44,10 +44,16 @@ async function guarded<T>(op: StorageOp, key: string, run: () => Promise<T>): Pr
     checkStorageFault(op, key);
     return await run();
   } catch (error) {
-    if (error instanceof S3ServiceException && (error.name === 'NoSuchKey' || error.name === 'NoSuchBucket')) throw error;
-    const unavailable = new AppError('service_unavailable', 'File storage cannot be reached just now; nothing was changed. Try again in a few seconds.', undefined, {
-      retryAfterSeconds: STORAGE_RETRY_AFTER_SECONDS,
-    });
+    if (error instanceof S3ServiceException && (error.name === 'NoSuchKey' || error.name === 'NoSuchBucket'))
+      throw error;
+    const unavailable = new AppError(
+      'service_unavailable',
+      'File storage cannot be reached just now; nothing was changed. Try again in a few seconds.',
+      undefined,
+      {
+        retryAfterSeconds: STORAGE_RETRY_AFTER_SECONDS,
+      },
+    );
     unavailable.cause = error;
     log().warn({ err: error, op }, 'file storage failed');
     throw unavailable;
@@ -65,7 +71,18 @@ export interface StoredObject {
 
 /** Stores bytes under `key`. Creates the bucket once if a fresh store has none yet. */
 export async function putObject(key: string, bytes: Uint8Array, contentType: string): Promise<void> {
-  const put = () => guarded('put', key, () => s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: bytes, ContentType: contentType, ContentLength: bytes.byteLength })));
+  const put = () =>
+    guarded('put', key, () =>
+      s3().send(
+        new PutObjectCommand({
+          Bucket: bucket(),
+          Key: key,
+          Body: bytes,
+          ContentType: contentType,
+          ContentLength: bytes.byteLength,
+        }),
+      ),
+    );
   try {
     await put();
   } catch (error) {
@@ -75,7 +92,11 @@ export async function putObject(key: string, bytes: Uint8Array, contentType: str
         await s3().send(new CreateBucketCommand({ Bucket: bucket() }));
       } catch (createError) {
         // Several first writes to a fresh store race to create the bucket: one wins, the rest find it made.
-        if (!(createError instanceof S3ServiceException && ['BucketAlreadyOwnedByYou', 'BucketAlreadyExists'].includes(createError.name))) throw createError;
+        if (!(
+          createError instanceof S3ServiceException &&
+          ['BucketAlreadyOwnedByYou', 'BucketAlreadyExists'].includes(createError.name)
+        ))
+          throw createError;
       }
     });
     await put();
@@ -89,7 +110,8 @@ export async function getObject(key: string): Promise<StoredObject | null> {
     if (!res.Body) return null;
     return { bytes: await res.Body.transformToByteArray(), contentType: res.ContentType ?? 'application/octet-stream' };
   } catch (error) {
-    if (error instanceof S3ServiceException && (error.name === 'NoSuchKey' || error.name === 'NoSuchBucket')) return null;
+    if (error instanceof S3ServiceException && (error.name === 'NoSuchKey' || error.name === 'NoSuchBucket'))
+      return null;
     throw error;
   }
 }
@@ -106,7 +128,9 @@ export async function listKeys(prefix: string): Promise<string[]> {
   do {
     let res;
     try {
-      res = await guarded('list', prefix, () => s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token })));
+      res = await guarded('list', prefix, () =>
+        s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token })),
+      );
     } catch (error) {
       // A store that has never been written to has no bucket yet, and so no keys.
       if (isMissingBucket(error)) return keys;

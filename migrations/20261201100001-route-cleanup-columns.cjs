@@ -9,12 +9,42 @@
 module.exports = {
   async up(queryInterface, Sequelize) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.addColumn('routes', 'source_format', { type: Sequelize.STRING(24), allowNull: true }, { transaction });
-      await queryInterface.addColumn('routes', 'slope_length_m', { type: Sequelize.DOUBLE, allowNull: false, defaultValue: 0 }, { transaction });
-      await queryInterface.addColumn('routes', 'features', { type: Sequelize.JSONB, allowNull: false, defaultValue: [] }, { transaction });
-      await queryInterface.addColumn('routes', 'import_notes', { type: Sequelize.JSONB, allowNull: false, defaultValue: [] }, { transaction });
-      await queryInterface.addColumn('routes', 'closure_error_m', { type: Sequelize.DOUBLE, allowNull: true }, { transaction });
-      await queryInterface.addColumn('route_points', 'excluded', { type: Sequelize.BOOLEAN, allowNull: false, defaultValue: false }, { transaction });
+      await queryInterface.addColumn(
+        'routes',
+        'source_format',
+        { type: Sequelize.STRING(24), allowNull: true },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'routes',
+        'slope_length_m',
+        { type: Sequelize.DOUBLE, allowNull: false, defaultValue: 0 },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'routes',
+        'features',
+        { type: Sequelize.JSONB, allowNull: false, defaultValue: [] },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'routes',
+        'import_notes',
+        { type: Sequelize.JSONB, allowNull: false, defaultValue: [] },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'routes',
+        'closure_error_m',
+        { type: Sequelize.DOUBLE, allowNull: true },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'route_points',
+        'excluded',
+        { type: Sequelize.BOOLEAN, allowNull: false, defaultValue: false },
+        { transaction },
+      );
       await queryInterface.addColumn(
         'route_points',
         'dismissed_checks',
@@ -22,8 +52,23 @@ module.exports = {
         { transaction },
       );
       await queryInterface.addConstraint('routes', {
-        type: 'check', fields: ['source_format'], name: 'routes_source_format_check', transaction,
-        where: { source_format: ['gps-csv', 'station-csv', 'gpx', 'inclinometer-csv', 'level-book-csv', 'sketch', 'joined', 'split', 'typed'] },
+        type: 'check',
+        fields: ['source_format'],
+        name: 'routes_source_format_check',
+        transaction,
+        where: {
+          source_format: [
+            'gps-csv',
+            'station-csv',
+            'gpx',
+            'inclinometer-csv',
+            'level-book-csv',
+            'sketch',
+            'joined',
+            'split',
+            'typed',
+          ],
+        },
       });
     });
   },

@@ -9,35 +9,63 @@ module.exports = {
   async up(queryInterface, Sequelize) {
     await queryInterface.sequelize.transaction(async (transaction) => {
       const now = { type: Sequelize.DATE, allowNull: false, defaultValue: Sequelize.fn('now') };
-      await queryInterface.createTable('water_sources', {
-        id: { type: Sequelize.UUID, primaryKey: true, defaultValue: Sequelize.literal('gen_random_uuid()') },
-        project_id: { type: Sequelize.UUID, allowNull: false, references: { model: 'projects', key: 'id' }, onDelete: 'CASCADE' },
-        name: { type: Sequelize.STRING(120), allowNull: false },
-        kind: { type: Sequelize.STRING(16), allowNull: false, defaultValue: 'creek' },
-        notes: { type: Sequelize.TEXT, allowNull: false, defaultValue: '' },
-        design_yield_choice: { type: Sequelize.STRING(24), allowNull: false, defaultValue: 'lowest-recent-dry' },
-        design_reading_id: { type: Sequelize.UUID, allowNull: true },
-        entered_yield_m3s: { type: Sequelize.DOUBLE, allowNull: true },
-        other_draw_m3s: { type: Sequelize.DOUBLE, allowNull: false, defaultValue: 0 },
-        created_by: { type: Sequelize.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
-        created_at: now,
-        updated_at: now,
-      }, { transaction });
+      await queryInterface.createTable(
+        'water_sources',
+        {
+          id: { type: Sequelize.UUID, primaryKey: true, defaultValue: Sequelize.literal('gen_random_uuid()') },
+          project_id: {
+            type: Sequelize.UUID,
+            allowNull: false,
+            references: { model: 'projects', key: 'id' },
+            onDelete: 'CASCADE',
+          },
+          name: { type: Sequelize.STRING(120), allowNull: false },
+          kind: { type: Sequelize.STRING(16), allowNull: false, defaultValue: 'creek' },
+          notes: { type: Sequelize.TEXT, allowNull: false, defaultValue: '' },
+          design_yield_choice: { type: Sequelize.STRING(24), allowNull: false, defaultValue: 'lowest-recent-dry' },
+          design_reading_id: { type: Sequelize.UUID, allowNull: true },
+          entered_yield_m3s: { type: Sequelize.DOUBLE, allowNull: true },
+          other_draw_m3s: { type: Sequelize.DOUBLE, allowNull: false, defaultValue: 0 },
+          created_by: {
+            type: Sequelize.UUID,
+            allowNull: true,
+            references: { model: 'users', key: 'id' },
+            onDelete: 'SET NULL',
+          },
+          created_at: now,
+          updated_at: now,
+        },
+        { transaction },
+      );
       await queryInterface.addIndex('water_sources', ['project_id'], { transaction });
 
-      await queryInterface.createTable('yield_readings', {
-        id: { type: Sequelize.UUID, primaryKey: true, defaultValue: Sequelize.literal('gen_random_uuid()') },
-        source_id: { type: Sequelize.UUID, allowNull: false, references: { model: 'water_sources', key: 'id' }, onDelete: 'CASCADE' },
-        measured_on: { type: Sequelize.DATEONLY, allowNull: false },
-        season: { type: Sequelize.STRING(16), allowNull: false, defaultValue: 'unspecified' },
-        bucket_volume_m3: { type: Sequelize.DOUBLE, allowNull: true },
-        bucket_seconds: { type: Sequelize.DOUBLE, allowNull: true },
-        flow_m3s: { type: Sequelize.DOUBLE, allowNull: true },
-        note: { type: Sequelize.TEXT, allowNull: false, defaultValue: '' },
-        created_by: { type: Sequelize.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
-        created_at: now,
-        updated_at: now,
-      }, { transaction });
+      await queryInterface.createTable(
+        'yield_readings',
+        {
+          id: { type: Sequelize.UUID, primaryKey: true, defaultValue: Sequelize.literal('gen_random_uuid()') },
+          source_id: {
+            type: Sequelize.UUID,
+            allowNull: false,
+            references: { model: 'water_sources', key: 'id' },
+            onDelete: 'CASCADE',
+          },
+          measured_on: { type: Sequelize.DATEONLY, allowNull: false },
+          season: { type: Sequelize.STRING(16), allowNull: false, defaultValue: 'unspecified' },
+          bucket_volume_m3: { type: Sequelize.DOUBLE, allowNull: true },
+          bucket_seconds: { type: Sequelize.DOUBLE, allowNull: true },
+          flow_m3s: { type: Sequelize.DOUBLE, allowNull: true },
+          note: { type: Sequelize.TEXT, allowNull: false, defaultValue: '' },
+          created_by: {
+            type: Sequelize.UUID,
+            allowNull: true,
+            references: { model: 'users', key: 'id' },
+            onDelete: 'SET NULL',
+          },
+          created_at: now,
+          updated_at: now,
+        },
+        { transaction },
+      );
       await queryInterface.addIndex('yield_readings', ['source_id', 'measured_on'], { transaction });
 
       const checks = [
@@ -57,7 +85,10 @@ module.exports = {
 
   async down(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.sequelize.query('ALTER TABLE water_sources DROP CONSTRAINT IF EXISTS water_sources_design_reading_fk', { transaction });
+      await queryInterface.sequelize.query(
+        'ALTER TABLE water_sources DROP CONSTRAINT IF EXISTS water_sources_design_reading_fk',
+        { transaction },
+      );
       await queryInterface.dropTable('yield_readings', { transaction });
       await queryInterface.dropTable('water_sources', { transaction });
     });

@@ -8,11 +8,24 @@
 module.exports = {
   async up(queryInterface, Sequelize) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.addColumn('ram_sites', 'pump_elevation_m', { type: Sequelize.DOUBLE, allowNull: true }, { transaction });
-      await queryInterface.addColumn('projects', 'frost_depth_m', { type: Sequelize.DOUBLE, allowNull: true }, { transaction });
+      await queryInterface.addColumn(
+        'ram_sites',
+        'pump_elevation_m',
+        { type: Sequelize.DOUBLE, allowNull: true },
+        { transaction },
+      );
+      await queryInterface.addColumn(
+        'projects',
+        'frost_depth_m',
+        { type: Sequelize.DOUBLE, allowNull: true },
+        { transaction },
+      );
       await queryInterface.addColumn('lines', 'winter', { type: Sequelize.JSONB, allowNull: true }, { transaction });
       await queryInterface.addConstraint('projects', {
-        type: 'check', fields: ['frost_depth_m'], name: 'projects_frost_depth_m_check', transaction,
+        type: 'check',
+        fields: ['frost_depth_m'],
+        name: 'projects_frost_depth_m_check',
+        transaction,
         where: { frost_depth_m: { [Sequelize.Op.between]: [0, 10] } },
       });
     });

@@ -22,7 +22,10 @@ module.exports = {
 
   async down(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.sequelize.query('ALTER TABLE ram_sites DROP CONSTRAINT IF EXISTS ram_sites_efficiency_table_check', { transaction });
+      await queryInterface.sequelize.query(
+        'ALTER TABLE ram_sites DROP CONSTRAINT IF EXISTS ram_sites_efficiency_table_check',
+        { transaction },
+      );
       await queryInterface.removeColumn('ram_sites', 'efficiency_table_id', { transaction });
     });
   },

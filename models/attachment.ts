@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type AttachmentKind = 'survey-file' | 'photo';
 
@@ -25,7 +32,13 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
         fileName: { type: DataTypes.STRING(255), allowNull: false },
         contentType: { type: DataTypes.STRING(120), allowNull: false },
         // BIGINT comes back from pg as a string; sizes stay far below 2^53.
-        sizeBytes: { type: DataTypes.BIGINT, allowNull: false, get() { return Number(this.getDataValue('sizeBytes')); } },
+        sizeBytes: {
+          type: DataTypes.BIGINT,
+          allowNull: false,
+          get() {
+            return Number(this.getDataValue('sizeBytes'));
+          },
+        },
         sha256: { type: DataTypes.STRING(64), allowNull: false },
         storageKey: { type: DataTypes.STRING(300), allowNull: false },
         uploadedBy: { type: DataTypes.UUID, allowNull: true },

@@ -3,14 +3,30 @@ import { Activity } from './activity';
 import { Attachment } from './attachment';
 import { Comment } from './comment';
 import { Line } from './line';
-import { DemandUse, initialiseLiftModels, RamCommissioningReading, RamSite, SeasonalTaskRow, Tank, WaterSource, YieldReadingRow } from './lift';
+import {
+  DemandUse,
+  initialiseLiftModels,
+  RamCommissioningReading,
+  RamSite,
+  SeasonalTaskRow,
+  Tank,
+  WaterSource,
+  YieldReadingRow,
+} from './lift';
 import { Membership } from './membership';
 import { initialiseNetworkModels, NetworkJob, NetworkLink, NetworkNode, PriceListItem } from './network';
 import { Project } from './project';
 import { Revision } from './revision';
 import { Route } from './route';
 import { RoutePoint } from './route-point';
-import { AccountToken, initialiseTeamMailModels, Invitation, MailOutbox, NotificationPreference, SitePhoto } from './team-mail';
+import {
+  AccountToken,
+  initialiseTeamMailModels,
+  Invitation,
+  MailOutbox,
+  NotificationPreference,
+  SitePhoto,
+} from './team-mail';
 import { Team } from './team';
 import { User } from './user';
 
@@ -52,11 +68,33 @@ export function models() {
     ready = true;
   }
   return {
-    User, Team, Membership, Project, Attachment, Route, RoutePoint, Line,
-    Revision, Comment, Activity,
-    WaterSource, YieldReading: YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTask: SeasonalTaskRow,
-    NetworkNode, NetworkLink, PriceListItem, NetworkJob,
-    AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto,
+    User,
+    Team,
+    Membership,
+    Project,
+    Attachment,
+    Route,
+    RoutePoint,
+    Line,
+    Revision,
+    Comment,
+    Activity,
+    WaterSource,
+    YieldReading: YieldReadingRow,
+    Tank,
+    RamSite,
+    RamCommissioningReading,
+    DemandUse,
+    SeasonalTask: SeasonalTaskRow,
+    NetworkNode,
+    NetworkLink,
+    PriceListItem,
+    NetworkJob,
+    AccountToken,
+    Invitation,
+    MailOutbox,
+    NotificationPreference,
+    SitePhoto,
     sequelize: db(),
   };
 }

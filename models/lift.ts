@@ -10,7 +10,16 @@ import { YieldReadingRow } from './yield-reading';
 
 /** Sources, yield readings, tanks, ram sites, commissioning readings, demand uses, seasonal tasks. */
 export function initialiseLiftModels(sequelize: Sequelize): void {
-  for (const model of [WaterSource, YieldReadingRow, Tank, RamSite, RamCommissioningReading, DemandUse, SeasonalTaskRow]) model.initialise(sequelize);
+  for (const model of [
+    WaterSource,
+    YieldReadingRow,
+    Tank,
+    RamSite,
+    RamCommissioningReading,
+    DemandUse,
+    SeasonalTaskRow,
+  ])
+    model.initialise(sequelize);
   Project.hasMany(WaterSource, { foreignKey: 'projectId', as: 'waterSources' });
   WaterSource.hasMany(YieldReadingRow, { foreignKey: 'sourceId', as: 'readings' });
   Project.hasMany(Tank, { foreignKey: 'projectId', as: 'tanks' });

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type NetworkNodeKind = 'source' | 'ram-outlet' | 'tank' | 'break-pressure-tank' | 'junction' | 'outlet';
 export type OutletKind = 'tap' | 'trough' | 'house' | 'garden' | 'tank-inlet' | 'free';
@@ -18,7 +25,10 @@ export interface NetworkNodeData {
   outletKind?: OutletKind;
   /** Outlet: residual pressure head wanted at the peak hour, m; null = the line's setting. */
   residualHeadM?: number | null;
-  /** Outlet: where its demand comes from: the uses tied to it, a fixed flow, or (a line end) whatever the line's own flow is. */
+  /**
+   * Outlet: where its demand comes from: the uses tied to it, a fixed flow, or (a line end) whatever the line's own
+   * flow is.
+   */
   demandFrom?: 'uses' | 'fixed' | 'line';
   /** Outlet: the fixed peak demand, m³/s, when `demandFrom` is 'fixed'. */
   fixedDemandM3s?: number | null;

@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** One person's choice for one kind of notification; no row means the kind's default (on). */
-export class NotificationPreference extends Model<InferAttributes<NotificationPreference>, InferCreationAttributes<NotificationPreference>> {
+export class NotificationPreference extends Model<
+  InferAttributes<NotificationPreference>,
+  InferCreationAttributes<NotificationPreference>
+> {
   declare userId: string;
   declare kind: string;
   declare enabled: boolean;

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** What a team pays per metre for one catalogue pipe; least-cost sizing reads it. */
 export class PriceListItem extends Model<InferAttributes<PriceListItem>, InferCreationAttributes<PriceListItem>> {

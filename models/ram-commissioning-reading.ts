@@ -1,10 +1,20 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** How the drive flow of a commissioning reading was found. */
 export type DriveMeasure = 'drive' | 'waste' | 'plan';
 
 /** Readings taken at a running ram on one day. */
-export class RamCommissioningReading extends Model<InferAttributes<RamCommissioningReading>, InferCreationAttributes<RamCommissioningReading>> {
+export class RamCommissioningReading extends Model<
+  InferAttributes<RamCommissioningReading>,
+  InferCreationAttributes<RamCommissioningReading>
+> {
   declare id: CreationOptional<string>;
   declare ramSiteId: string;
   declare measuredOn: string;

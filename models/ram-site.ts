@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { RamDriveMaterial, RamEfficiencyTableId } from '../hydraulics/index';
 
 /** A hydraulic ram site: fall, drive pipe, lift and delivery pipe, all in SI. */

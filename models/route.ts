@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { SurveyFeature, SurveyFormat, SurveyImportWarning } from '../lib/survey/parsed-survey';
 
 /** Where a route's points came from: an imported file's format, or an edit in Runnel. */

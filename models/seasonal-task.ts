@@ -1,6 +1,14 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
-export type SeasonalTaskKindRow = 'drain-down' | 'refill' | 'silt-cleaning' | 'intake-screen' | 'valve-exercise' | 'other';
+export type SeasonalTaskKindRow =
+  'drain-down' | 'refill' | 'silt-cleaning' | 'intake-screen' | 'valve-exercise' | 'other';
 
 /** A dated upkeep task of a project (drain-down, silt cleaning, intake screen, valves). */
 export class SeasonalTaskRow extends Model<InferAttributes<SeasonalTaskRow>, InferCreationAttributes<SeasonalTaskRow>> {

@@ -8,7 +8,8 @@ import { Team } from './team';
 
 /** Account tokens, invitations, the mail outbox, notification preferences and site photos. */
 export function initialiseTeamMailModels(sequelize: Sequelize): void {
-  for (const model of [AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto]) model.initialise(sequelize);
+  for (const model of [AccountToken, Invitation, MailOutbox, NotificationPreference, SitePhoto])
+    model.initialise(sequelize);
   Invitation.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 }
 

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type WaterSourceKind = 'creek' | 'spring' | 'other';
 export type DesignYieldChoiceKind = 'lowest-recent-dry' | 'reading' | 'entered';

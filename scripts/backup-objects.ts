@@ -80,7 +80,8 @@ function savedBytes(dir: string, entry: ManifestEntry, where: string): Buffer {
   const file = path.join(dir, entry.file);
   if (!fs.existsSync(file)) throw new StepError(`${where}/${entry.file} (object ${entry.key}) is missing`);
   const bytes = fs.readFileSync(file);
-  if (sha256(bytes) !== entry.sha256) throw new StepError(`${where}/${entry.file} (object ${entry.key}) does not match its checksum`);
+  if (sha256(bytes) !== entry.sha256)
+    throw new StepError(`${where}/${entry.file} (object ${entry.key}) does not match its checksum`);
   return bytes;
 }
 
@@ -106,7 +107,13 @@ async function save(folder: string): Promise<void> {
     if (!object) continue;
     const file = `${String(entries.length + 1).padStart(6, '0')}.bin`;
     fs.writeFileSync(path.join(dir, file), object.bytes, { mode: 0o600 });
-    entries.push({ key, file, contentType: object.contentType, bytes: object.bytes.byteLength, sha256: sha256(object.bytes) });
+    entries.push({
+      key,
+      file,
+      contentType: object.contentType,
+      bytes: object.bytes.byteLength,
+      sha256: sha256(object.bytes),
+    });
   }
   fs.writeFileSync(path.join(folder, 'objects.json'), `${JSON.stringify(entries, null, 1)}\n`, { mode: 0o600 });
   console.log(`[runnel] ${entries.length} objects saved`);
@@ -132,7 +139,9 @@ async function undo(journalDir: string): Promise<void> {
     }
   }
   if (failures.length > 0) {
-    throw new NotPutBackError(`${failures.length} object(s) could not be put back (first: ${failures[0]}); the objects as they were are kept in ${journalDir}`);
+    throw new NotPutBackError(
+      `${failures.length} object(s) could not be put back (first: ${failures[0]}); the objects as they were are kept in ${journalDir}`,
+    );
   }
 }
 
@@ -157,7 +166,13 @@ async function load(folder: string, journalDir: string): Promise<void> {
     if (now) {
       const file = `${String(journal.before.length + 1).padStart(6, '0')}.bin`;
       fs.writeFileSync(path.join(journalDir, file), now.bytes, { mode: 0o600 });
-      journal.before.push({ key, file, contentType: now.contentType, bytes: now.bytes.byteLength, sha256: sha256(now.bytes) });
+      journal.before.push({
+        key,
+        file,
+        contentType: now.contentType,
+        bytes: now.bytes.byteLength,
+        sha256: sha256(now.bytes),
+      });
     } else if (wanted) {
       journal.added.push(key);
     }
@@ -172,26 +187,36 @@ async function load(folder: string, journalDir: string): Promise<void> {
       const bytes = savedBytes(backupDir, entry, where);
       await step(`writing object ${key}`, () => putObject(key, bytes, entry.contentType));
     }
-    for (const key of toRemove) await step(`removing object ${key}, which is not in the backup`, () => deleteObject(key));
+    for (const key of toRemove)
+      await step(`removing object ${key}, which is not in the backup`, () => deleteObject(key));
   } catch (error) {
     try {
       await undo(journalDir);
     } catch (undoError) {
-      throw new NotPutBackError(`${(error as Error).message}; putting the bucket back failed too: ${(undoError as Error).message}`);
+      throw new NotPutBackError(
+        `${(error as Error).message}; putting the bucket back failed too: ${(undoError as Error).message}`,
+      );
     }
     throw new StepError(`${(error as Error).message}; the bucket was put back as it was`);
   }
-  console.log(`[runnel] ${entries.length} objects in the backup: ${toPut.length} written, ${toRemove.length} not in the backup removed`);
+  console.log(
+    `[runnel] ${entries.length} objects in the backup: ${toPut.length} written, ${toRemove.length} not in the backup removed`,
+  );
 }
 
 const [command, first, second] = process.argv.slice(2);
 const run =
-  command === 'save' && first ? () => save(first)
-  : command === 'load' && first && second ? () => load(first, second)
-  : command === 'undo' && first ? () => undo(first)
-  : null;
+  command === 'save' && first
+    ? () => save(first)
+    : command === 'load' && first && second
+      ? () => load(first, second)
+      : command === 'undo' && first
+        ? () => undo(first)
+        : null;
 if (!run) {
-  console.error('usage: backup-objects.ts save <backup folder> | load <backup folder> <journal folder> | undo <journal folder>');
+  console.error(
+    'usage: backup-objects.ts save <backup folder> | load <backup folder> <journal folder> | undo <journal folder>',
+  );
   process.exit(2);
 }
 run().catch((error) => {

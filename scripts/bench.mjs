@@ -16,5 +16,9 @@ await build({
   packages: 'external',
 });
 // react-server: the server-only data modules refuse to load under the default condition.
-const result = spawnSync(process.execPath, ['--conditions=react-server', '.runtime/bench.cjs', ...process.argv.slice(2)], { stdio: 'inherit' });
+const result = spawnSync(
+  process.execPath,
+  ['--conditions=react-server', '.runtime/bench.cjs', ...process.argv.slice(2)],
+  { stdio: 'inherit' },
+);
 process.exit(result.status ?? 1);

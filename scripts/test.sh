@@ -48,6 +48,8 @@ step "type check (tsc --noEmit)"
 npx tsc --noEmit
 step "lint (eslint)"
 npx eslint --max-warnings=0 -c scripts/config/eslint.config.mjs .
+step "formatting (prettier --check; npm run format rewrites)"
+npm run --silent format:check
 step "unit and integration tests (vitest)"
 npx vitest run --config tests/vitest.config.mts
 step "build for end-to-end tests"

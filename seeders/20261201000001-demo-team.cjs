@@ -36,23 +36,54 @@ const PROJECTS = [
 
 module.exports = {
   async up(queryInterface) {
-    const [existing] = await queryInterface.sequelize.query(
-      'SELECT 1 FROM users WHERE email = :email', { replacements: { email: PEOPLE[0].email } });
+    const [existing] = await queryInterface.sequelize.query('SELECT 1 FROM users WHERE email = :email', {
+      replacements: { email: PEOPLE[0].email },
+    });
     if (existing.length > 0) return;
 
     const passwordHash = await argon2.hash(DEMO_PASSWORD, { type: argon2.argon2id });
     const now = new Date();
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.bulkInsert('teams', [{ id: TEAM_ID, name: 'Kestrel Hollow Farm', created_at: now, updated_at: now }], { transaction });
-      await queryInterface.bulkInsert('users', PEOPLE.map((p) => ({
-        id: p.id, email: p.email, name: p.name, password_hash: passwordHash, session_version: 0, created_at: now, updated_at: now,
-      })), { transaction });
-      await queryInterface.bulkInsert('memberships', PEOPLE.map((p) => ({
-        team_id: TEAM_ID, user_id: p.id, role: p.role, created_at: now, updated_at: now,
-      })), { transaction });
-      await queryInterface.bulkInsert('projects', PROJECTS.map((p) => ({
-        ...p, team_id: TEAM_ID, created_by: PEOPLE[1].id, created_at: now, updated_at: now,
-      })), { transaction });
+      await queryInterface.bulkInsert(
+        'teams',
+        [{ id: TEAM_ID, name: 'Kestrel Hollow Farm', created_at: now, updated_at: now }],
+        { transaction },
+      );
+      await queryInterface.bulkInsert(
+        'users',
+        PEOPLE.map((p) => ({
+          id: p.id,
+          email: p.email,
+          name: p.name,
+          password_hash: passwordHash,
+          session_version: 0,
+          created_at: now,
+          updated_at: now,
+        })),
+        { transaction },
+      );
+      await queryInterface.bulkInsert(
+        'memberships',
+        PEOPLE.map((p) => ({
+          team_id: TEAM_ID,
+          user_id: p.id,
+          role: p.role,
+          created_at: now,
+          updated_at: now,
+        })),
+        { transaction },
+      );
+      await queryInterface.bulkInsert(
+        'projects',
+        PROJECTS.map((p) => ({
+          ...p,
+          team_id: TEAM_ID,
+          created_by: PEOPLE[1].id,
+          created_at: now,
+          updated_at: now,
+        })),
+        { transaction },
+      );
     });
   },
 

@@ -13,7 +13,15 @@ const SPACING_M = 10;
 const LENGTH_M = 1400;
 // Chainage (m) and ground (m) at the turning points of the walk: spring box, a dip, a low rise,
 // the long fall to the sheepfold sag, the shoulder, the house.
-const CONTROL = [[0, 411], [100, 403.5], [220, 408], [450, 352], [650, 300], [900, 322], [1400, 316]];
+const CONTROL = [
+  [0, 411],
+  [100, 403.5],
+  [220, 408],
+  [450, 352],
+  [650, 300],
+  [900, 322],
+  [1400, 316],
+];
 const ORIGIN = { lat: 54.4621, lon: -2.6113 };
 const EARTH_RADIUS_M = 6371008.8;
 
@@ -69,7 +77,10 @@ const COMMON = {
   start_condition: JSON.stringify({ kind: 'water-level', levelM: 412 }),
   end_condition: JSON.stringify({ kind: 'outlet', elevationM: 316.5, residualHeadM: 3 }),
   flow: JSON.stringify({ kind: 'design', flowM3s: 0.001 }),
-  fittings: JSON.stringify([{ chainageM: 0, k: 0.5, label: 'intake entrance' }, { chainageM: 1400, k: 0.2, label: 'gate valve at the house' }]),
+  fittings: JSON.stringify([
+    { chainageM: 0, k: 0.5, label: 'intake entrance' },
+    { chainageM: 1400, k: 0.2, label: 'gate valve at the house' },
+  ]),
   pipes: JSON.stringify([]),
   settings: JSON.stringify({ defaultCoverM: 0.75, waterTemperatureC: 10 }),
   created_by: DESIGNER_ID,
@@ -78,53 +89,74 @@ const COMMON = {
 
 module.exports = {
   async up(queryInterface) {
-    const [existing] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', { replacements: { id: PROJECT_ID } });
+    const [existing] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', {
+      replacements: { id: PROJECT_ID },
+    });
     if (existing.length === 0) return;
-    const [already] = await queryInterface.sequelize.query('SELECT 1 FROM routes WHERE id = :id', { replacements: { id: ROUTE_ID } });
+    const [already] = await queryInterface.sequelize.query('SELECT 1 FROM routes WHERE id = :id', {
+      replacements: { id: ROUTE_ID },
+    });
     if (already.length > 0) return;
     const now = new Date();
     const points = routePoints();
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.bulkInsert('routes', [{
-        id: ROUTE_ID, project_id: PROJECT_ID, name: 'Spring line design profile',
-        notes: 'Levelled along the pegged line from the spring box to the house; design profile for the line designs.',
-        point_count: points.length, length_m: LENGTH_M, created_by: DESIGNER_ID, created_at: now, updated_at: now,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'routes',
+        [
+          {
+            id: ROUTE_ID,
+            project_id: PROJECT_ID,
+            name: 'Spring line design profile',
+            notes:
+              'Levelled along the pegged line from the spring box to the house; design profile for the line designs.',
+            point_count: points.length,
+            length_m: LENGTH_M,
+            created_by: DESIGNER_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
       await queryInterface.bulkInsert('route_points', points, { transaction });
-      await queryInterface.bulkInsert('lines', [
-        {
-          ...COMMON,
-          id: LINE_IDS[0],
-          name: 'Spring box to house',
-          notes: 'First layout with the PN 8 pipe left over from the barn supply.',
-          stretches: JSON.stringify([
-            { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
-            { fromM: 300, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
-          ]),
-          devices: JSON.stringify([]),
-          revision: 1,
-          created_at: now,
-          updated_at: now,
-        },
-        {
-          ...COMMON,
-          id: LINE_IDS[1],
-          name: 'Spring box to house, PN 16 option',
-          notes: 'PE100 PN 16 throughout, valves at every summit and sag.',
-          stretches: JSON.stringify([{ fromM: 0, toM: 1400, pipe: 'pe100-iso4427-sdr11-50mm' }]),
-          devices: JSON.stringify([
-            { kind: 'isolation-valve', chainageM: 5, label: 'below the spring box' },
-            { kind: 'washout', chainageM: 100 },
-            { kind: 'air-release-valve', chainageM: 220 },
-            { kind: 'washout', chainageM: 650, label: 'drain to the ditch by the sheepfold' },
-            { kind: 'air-release-valve', chainageM: 900 },
-            { kind: 'isolation-valve', chainageM: 1395, label: 'house stop valve' },
-          ]),
-          revision: 1,
-          created_at: now,
-          updated_at: now,
-        },
-      ], { transaction });
+      await queryInterface.bulkInsert(
+        'lines',
+        [
+          {
+            ...COMMON,
+            id: LINE_IDS[0],
+            name: 'Spring box to house',
+            notes: 'First layout with the PN 8 pipe left over from the barn supply.',
+            stretches: JSON.stringify([
+              { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
+              { fromM: 300, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
+            ]),
+            devices: JSON.stringify([]),
+            revision: 1,
+            created_at: now,
+            updated_at: now,
+          },
+          {
+            ...COMMON,
+            id: LINE_IDS[1],
+            name: 'Spring box to house, PN 16 option',
+            notes: 'PE100 PN 16 throughout, valves at every summit and sag.',
+            stretches: JSON.stringify([{ fromM: 0, toM: 1400, pipe: 'pe100-iso4427-sdr11-50mm' }]),
+            devices: JSON.stringify([
+              { kind: 'isolation-valve', chainageM: 5, label: 'below the spring box' },
+              { kind: 'washout', chainageM: 100 },
+              { kind: 'air-release-valve', chainageM: 220 },
+              { kind: 'washout', chainageM: 650, label: 'drain to the ditch by the sheepfold' },
+              { kind: 'air-release-valve', chainageM: 900 },
+              { kind: 'isolation-valve', chainageM: 1395, label: 'house stop valve' },
+            ]),
+            revision: 1,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
     });
   },
 

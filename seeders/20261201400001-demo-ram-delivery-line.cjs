@@ -15,7 +15,16 @@ const LENGTH_M = 350 * FT;
 const PUMP_ELEVATION_M = 150.3;
 const FROST_DEPTH_M = 3.5 * FT;
 /** Levelled pegs (chainage, ground): up from the ram, over a hump, a sag, then the climb to the tank pad. */
-const PEGS = [[0, 150.3], [15, 151.6], [30, 152.4], [45, 151.2], [60, 155.0], [80, 161.5], [95, 166.8], [LENGTH_M, 170.0]];
+const PEGS = [
+  [0, 150.3],
+  [15, 151.6],
+  [30, 152.4],
+  [45, 151.2],
+  [60, 155.0],
+  [80, 161.5],
+  [95, 166.8],
+  [LENGTH_M, 170.0],
+];
 const ORIGIN = { lat: 54.4412, lon: -2.6347 };
 const EARTH_RADIUS_M = 6371008.8;
 
@@ -57,39 +66,81 @@ function routePoints() {
 
 module.exports = {
   async up(queryInterface) {
-    const [project] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', { replacements: { id: PROJECT_ID } });
-    const [ram] = await queryInterface.sequelize.query('SELECT 1 FROM ram_sites WHERE id = :id', { replacements: { id: RAM_ID } });
+    const [project] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', {
+      replacements: { id: PROJECT_ID },
+    });
+    const [ram] = await queryInterface.sequelize.query('SELECT 1 FROM ram_sites WHERE id = :id', {
+      replacements: { id: RAM_ID },
+    });
     if (project.length === 0 || ram.length === 0) return;
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.sequelize.query('UPDATE ram_sites SET pump_elevation_m = :z WHERE id = :id AND pump_elevation_m IS NULL', { replacements: { id: RAM_ID, z: PUMP_ELEVATION_M }, transaction });
-      await queryInterface.sequelize.query('UPDATE projects SET frost_depth_m = :d WHERE id = :id AND frost_depth_m IS NULL', { replacements: { id: PROJECT_ID, d: FROST_DEPTH_M }, transaction });
-      const [already] = await queryInterface.sequelize.query('SELECT 1 FROM routes WHERE id = :id', { replacements: { id: ROUTE_ID }, transaction });
+      await queryInterface.sequelize.query(
+        'UPDATE ram_sites SET pump_elevation_m = :z WHERE id = :id AND pump_elevation_m IS NULL',
+        { replacements: { id: RAM_ID, z: PUMP_ELEVATION_M }, transaction },
+      );
+      await queryInterface.sequelize.query(
+        'UPDATE projects SET frost_depth_m = :d WHERE id = :id AND frost_depth_m IS NULL',
+        { replacements: { id: PROJECT_ID, d: FROST_DEPTH_M }, transaction },
+      );
+      const [already] = await queryInterface.sequelize.query('SELECT 1 FROM routes WHERE id = :id', {
+        replacements: { id: ROUTE_ID },
+        transaction,
+      });
       if (already.length > 0) return;
       const now = new Date();
       const points = routePoints();
-      await queryInterface.bulkInsert('routes', [{
-        id: ROUTE_ID, project_id: PROJECT_ID, name: 'Ram delivery line, weir to Harrow Knoll',
-        notes: 'Levelled along the trench line from the ram house to the tank pad; 1 in PE laid 3 ft deep.',
-        point_count: points.length, length_m: LENGTH_M, slope_length_m: points[points.length - 1].slope_chainage_m, source_format: 'typed',
-        created_by: DESIGNER_ID, created_at: now, updated_at: now,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'routes',
+        [
+          {
+            id: ROUTE_ID,
+            project_id: PROJECT_ID,
+            name: 'Ram delivery line, weir to Harrow Knoll',
+            notes: 'Levelled along the trench line from the ram house to the tank pad; 1 in PE laid 3 ft deep.',
+            point_count: points.length,
+            length_m: LENGTH_M,
+            slope_length_m: points[points.length - 1].slope_chainage_m,
+            source_format: 'typed',
+            created_by: DESIGNER_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
       await queryInterface.bulkInsert('route_points', points, { transaction });
-      await queryInterface.bulkInsert('lines', [{
-        id: LINE_ID, project_id: PROJECT_ID, route_id: ROUTE_ID, name: 'Ram delivery to Harrow Knoll tank',
-        notes: 'Delivery pipe of the Weir ram. Start heads typed in from the first plan; the ram site can feed the line directly.',
-        from_chainage_m: null, to_chainage_m: null,
-        start_condition: JSON.stringify({ kind: 'pump', outletHeadM: 172.5 }),
-        end_condition: JSON.stringify({ kind: 'tank-inlet', elevationM: 171.6 }),
-        flow: JSON.stringify({ kind: 'design', flowM3s: 0.75 * 0.003785411784 / 60 }),
-        stretches: JSON.stringify([{ fromM: 0, toM: Math.round(LENGTH_M * 100) / 100, pipe: 'pe-d2239-sidr9-1in' }]),
-        fittings: JSON.stringify([{ chainageM: 0, k: 2, label: 'check valve and tee at the ram' }]),
-        devices: JSON.stringify([]),
-        pipes: JSON.stringify([]),
-        settings: JSON.stringify({ defaultCoverM: 3 * FT, waterTemperatureC: 10 }),
-        winter: null,
-        revision: 1,
-        created_by: DESIGNER_ID, updated_by: DESIGNER_ID, created_at: now, updated_at: now,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'lines',
+        [
+          {
+            id: LINE_ID,
+            project_id: PROJECT_ID,
+            route_id: ROUTE_ID,
+            name: 'Ram delivery to Harrow Knoll tank',
+            notes:
+              'Delivery pipe of the Weir ram. Start heads typed in from the first plan; the ram site can feed the line directly.',
+            from_chainage_m: null,
+            to_chainage_m: null,
+            start_condition: JSON.stringify({ kind: 'pump', outletHeadM: 172.5 }),
+            end_condition: JSON.stringify({ kind: 'tank-inlet', elevationM: 171.6 }),
+            flow: JSON.stringify({ kind: 'design', flowM3s: (0.75 * 0.003785411784) / 60 }),
+            stretches: JSON.stringify([
+              { fromM: 0, toM: Math.round(LENGTH_M * 100) / 100, pipe: 'pe-d2239-sidr9-1in' },
+            ]),
+            fittings: JSON.stringify([{ chainageM: 0, k: 2, label: 'check valve and tee at the ram' }]),
+            devices: JSON.stringify([]),
+            pipes: JSON.stringify([]),
+            settings: JSON.stringify({ defaultCoverM: 3 * FT, waterTemperatureC: 10 }),
+            winter: null,
+            revision: 1,
+            created_by: DESIGNER_ID,
+            updated_by: DESIGNER_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
     });
   },
 

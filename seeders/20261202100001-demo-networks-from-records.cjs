@@ -7,7 +7,9 @@ const { buildNetworksFromRecords } = require('../migrations/support/network-from
 // Projects that already have a network are left alone (idempotent).
 module.exports = {
   async up(queryInterface) {
-    await queryInterface.sequelize.transaction((transaction) => buildNetworksFromRecords(queryInterface.sequelize, transaction));
+    await queryInterface.sequelize.transaction((transaction) =>
+      buildNetworksFromRecords(queryInterface.sequelize, transaction),
+    );
   },
   async down() {},
 };

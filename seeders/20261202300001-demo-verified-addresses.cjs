@@ -2,7 +2,13 @@
 
 // The demo people of Kestrel Hollow sign in with confirmed addresses (they are invented; the
 // mail they would get goes to the local fake mail server).
-const DEMO_EMAILS = ['owner@example.test', 'designer@example.test', 'surveyor@example.test', 'reviewer@example.test', 'viewer@example.test'];
+const DEMO_EMAILS = [
+  'owner@example.test',
+  'designer@example.test',
+  'surveyor@example.test',
+  'reviewer@example.test',
+  'viewer@example.test',
+];
 
 module.exports = {
   async up(queryInterface) {

@@ -16,7 +16,13 @@ const SURVEYOR_ID = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a1003';
 const ORIGIN = { lat: 54.5312, lon: -2.4021 };
 const EARTH_RADIUS_M = 6371008.8;
 const START_TIME = Date.parse('2026-05-09T09:12:00Z');
-const LABELS = { 0: 'Hobb spring', 420: 'Hobb knoll', 1000: 'Gill bottom', 1650: 'Cragend ridge', 2400: 'Nether Sowby tank' };
+const LABELS = {
+  0: 'Hobb spring',
+  420: 'Hobb knoll',
+  1000: 'Gill bottom',
+  1650: 'Cragend ridge',
+  2400: 'Nether Sowby tank',
+};
 
 function routePoints() {
   let east = 0;
@@ -53,49 +59,83 @@ function routePoints() {
 
 module.exports = {
   async up(queryInterface) {
-    const [team] = await queryInterface.sequelize.query('SELECT 1 FROM teams WHERE id = :id', { replacements: { id: TEAM_ID } });
+    const [team] = await queryInterface.sequelize.query('SELECT 1 FROM teams WHERE id = :id', {
+      replacements: { id: TEAM_ID },
+    });
     if (team.length === 0) return;
-    const [already] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', { replacements: { id: PROJECT_ID } });
+    const [already] = await queryInterface.sequelize.query('SELECT 1 FROM projects WHERE id = :id', {
+      replacements: { id: PROJECT_ID },
+    });
     if (already.length > 0) return;
     const now = new Date();
     const points = routePoints();
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.bulkInsert('projects', [{
-        id: PROJECT_ID, team_id: TEAM_ID, name: 'Larkspur Gill village supply',
-        description: 'Gravity supply from the Hobb spring to the Nether Sowby village tank, walked with a phone.',
-        unit_system: 'metric',
-        site_notes: 'Route walked with a phone GPS in May 2026; heights scatter by a metre or more. Level the Gill bottom and Cragend ridge before ordering pipe.',
-        created_by: DESIGNER_ID, created_at: now, updated_at: now,
-      }], { transaction });
-      await queryInterface.bulkInsert('routes', [{
-        id: ROUTE_ID, project_id: PROJECT_ID, name: 'Hobb spring to Nether Sowby (phone walk)',
-        notes: 'Walked with a phone logging every 5 m; one spiked fix near Cragend taken out in clean-up.',
-        point_count: points.length, length_m: LENGTH_M, source_format: 'gps-csv',
-        created_by: SURVEYOR_ID, created_at: now, updated_at: now,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'projects',
+        [
+          {
+            id: PROJECT_ID,
+            team_id: TEAM_ID,
+            name: 'Larkspur Gill village supply',
+            description: 'Gravity supply from the Hobb spring to the Nether Sowby village tank, walked with a phone.',
+            unit_system: 'metric',
+            site_notes:
+              'Route walked with a phone GPS in May 2026; heights scatter by a metre or more. Level the Gill bottom and Cragend ridge before ordering pipe.',
+            created_by: DESIGNER_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
+      await queryInterface.bulkInsert(
+        'routes',
+        [
+          {
+            id: ROUTE_ID,
+            project_id: PROJECT_ID,
+            name: 'Hobb spring to Nether Sowby (phone walk)',
+            notes: 'Walked with a phone logging every 5 m; one spiked fix near Cragend taken out in clean-up.',
+            point_count: points.length,
+            length_m: LENGTH_M,
+            source_format: 'gps-csv',
+            created_by: SURVEYOR_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
       await queryInterface.bulkInsert('route_points', points, { transaction });
-      await queryInterface.bulkInsert('lines', [{
-        id: LINE_ID,
-        project_id: PROJECT_ID,
-        route_id: ROUTE_ID,
-        name: 'Hobb spring to village tank',
-        notes: 'First sizing on the walked heights: PE100 SDR 17 (PN 10), 50 mm to the ridge and 63 mm down to the tank.',
-        from_chainage_m: null,
-        to_chainage_m: null,
-        start_condition: JSON.stringify(WALK_LINE.start),
-        end_condition: JSON.stringify(WALK_LINE.end),
-        flow: JSON.stringify(WALK_LINE.flow),
-        stretches: JSON.stringify(WALK_LINE.stretches),
-        fittings: JSON.stringify([]),
-        devices: JSON.stringify([]),
-        pipes: JSON.stringify([]),
-        settings: JSON.stringify(WALK_LINE.settings),
-        revision: 1,
-        created_by: DESIGNER_ID,
-        updated_by: DESIGNER_ID,
-        created_at: now,
-        updated_at: now,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'lines',
+        [
+          {
+            id: LINE_ID,
+            project_id: PROJECT_ID,
+            route_id: ROUTE_ID,
+            name: 'Hobb spring to village tank',
+            notes:
+              'First sizing on the walked heights: PE100 SDR 17 (PN 10), 50 mm to the ridge and 63 mm down to the tank.',
+            from_chainage_m: null,
+            to_chainage_m: null,
+            start_condition: JSON.stringify(WALK_LINE.start),
+            end_condition: JSON.stringify(WALK_LINE.end),
+            flow: JSON.stringify(WALK_LINE.flow),
+            stretches: JSON.stringify(WALK_LINE.stretches),
+            fittings: JSON.stringify([]),
+            devices: JSON.stringify([]),
+            pipes: JSON.stringify([]),
+            settings: JSON.stringify(WALK_LINE.settings),
+            revision: 1,
+            created_by: DESIGNER_ID,
+            updated_by: DESIGNER_ID,
+            created_at: now,
+            updated_at: now,
+          },
+        ],
+        { transaction },
+      );
     });
   },
 

@@ -3,7 +3,12 @@ import path from 'node:path';
 
 export default defineConfig({
   root: path.resolve(import.meta.dirname, '..'),
-  resolve: { alias: { '@': path.resolve(import.meta.dirname, '..'), 'server-only': path.resolve(import.meta.dirname, 'support/server-only-stub.ts') } },
+  resolve: {
+    alias: {
+      '@': path.resolve(import.meta.dirname, '..'),
+      'server-only': path.resolve(import.meta.dirname, 'support/server-only-stub.ts'),
+    },
+  },
   test: {
     include: ['tests/**/*.test.ts'],
     exclude: ['tests/e2e/**', 'tests/server/**', 'node_modules/**'],

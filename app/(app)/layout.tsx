@@ -15,7 +15,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
         Skip to content
       </a>
       <AppHeader user={{ name: user.name, email: user.email }} team={team} teams={teams} />
-      <main id="content" tabIndex={-1} className="mx-auto w-full max-w-6xl px-4 py-6 outline-none sm:px-6">{children}</main>
+      <main id="content" tabIndex={-1} className="mx-auto w-full max-w-6xl px-4 py-6 outline-none sm:px-6">
+        {children}
+      </main>
     </div>
   );
 }

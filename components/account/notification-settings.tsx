@@ -28,7 +28,9 @@ export function NotificationSettings() {
             />
             <label htmlFor={`notify-${kind}`} className="text-sm text-creek-900">
               {NOTIFICATION_LABELS[kind].label}
-              <span id={`notify-${kind}-hint`} className="block text-xs text-creek-600">{NOTIFICATION_LABELS[kind].hint}</span>
+              <span id={`notify-${kind}-hint`} className="block text-xs text-creek-600">
+                {NOTIFICATION_LABELS[kind].hint}
+              </span>
             </label>
           </li>
         ))}

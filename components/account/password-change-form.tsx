@@ -22,7 +22,10 @@ export function PasswordChangeForm({ email }: { email: string }) {
     const formElement = event.currentTarget;
     const form = new FormData(formElement);
     setDone(null);
-    const input = check(PasswordChangeSchema, { currentPassword: form.get('currentPassword'), newPassword: form.get('newPassword') });
+    const input = check(PasswordChangeSchema, {
+      currentPassword: form.get('currentPassword'),
+      newPassword: form.get('newPassword'),
+    });
     if (!input) return;
     try {
       await change.mutateAsync(input);
@@ -43,9 +46,26 @@ export function PasswordChangeForm({ email }: { email: string }) {
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       <FormMessage message={message} />
       <FormMessage tone="ok" message={done} />
-      <TextField id="currentPassword" label="Current password" type="password" autoComplete="current-password" errors={fields.currentPassword} required />
-      <TextField id="newPassword" label="New password" type="password" autoComplete="new-password" hint="At least 10 characters; a long passphrase is best." errors={fields.newPassword} required />
-      <Button type="submit" disabled={change.isPending}>{change.isPending ? 'Saving…' : 'Change password'}</Button>
+      <TextField
+        id="currentPassword"
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        errors={fields.currentPassword}
+        required
+      />
+      <TextField
+        id="newPassword"
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters; a long passphrase is best."
+        errors={fields.newPassword}
+        required
+      />
+      <Button type="submit" disabled={change.isPending}>
+        {change.isPending ? 'Saving…' : 'Change password'}
+      </Button>
     </form>
   );
 }

@@ -15,7 +15,11 @@ export function ConfirmEmailForm({ token }: { token: string }) {
       <Button
         className="w-full"
         disabled={confirm.isPending}
-        onClick={() => confirm.mutate(token, { onSuccess: ({ confirmed }) => router.push(`/sign-in?confirmed=${encodeURIComponent(confirmed.email)}`) })}
+        onClick={() =>
+          confirm.mutate(token, {
+            onSuccess: ({ confirmed }) => router.push(`/sign-in?confirmed=${encodeURIComponent(confirmed.email)}`),
+          })
+        }
       >
         {confirm.isPending ? 'Confirming…' : 'Confirm my address'}
       </Button>

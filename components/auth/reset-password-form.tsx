@@ -29,8 +29,18 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       <FormMessage message={message ?? fields.token?.[0]} />
-      <TextField id="password" label="New password" type="password" autoComplete="new-password" hint="At least 10 characters; a long passphrase is best." errors={fields.password} required />
-      <Button type="submit" className="w-full" disabled={reset.isPending}>{reset.isPending ? 'Saving…' : 'Set the new password'}</Button>
+      <TextField
+        id="password"
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters; a long passphrase is best."
+        errors={fields.password}
+        required
+      />
+      <Button type="submit" className="w-full" disabled={reset.isPending}>
+        {reset.isPending ? 'Saving…' : 'Set the new password'}
+      </Button>
     </form>
   );
 }

@@ -30,7 +30,9 @@ export function ResetRequestForm() {
     <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       <FormMessage message={message} />
       <TextField id="email" label="E-mail" type="email" autoComplete="email" errors={fields.email} required />
-      <Button type="submit" className="w-full" disabled={request.isPending}>{request.isPending ? 'Sending…' : 'Send me a reset link'}</Button>
+      <Button type="submit" className="w-full" disabled={request.isPending}>
+        {request.isPending ? 'Sending…' : 'Send me a reset link'}
+      </Button>
     </form>
   );
 }

@@ -18,7 +18,11 @@ export function SignInForm({ email, returnTo = '/projects' }: { email?: string; 
     const form = new FormData(event.currentTarget);
     setPending(true);
     setMessage(null);
-    const result = await signIn('credentials', { email: form.get('email'), password: form.get('password'), redirect: false });
+    const result = await signIn('credentials', {
+      email: form.get('email'),
+      password: form.get('password'),
+      redirect: false,
+    });
     setPending(false);
     if (result?.ok && !result.error) {
       router.push(returnTo);
@@ -33,7 +37,9 @@ export function SignInForm({ email, returnTo = '/projects' }: { email?: string; 
       <FormMessage message={message} />
       <TextField id="email" label="E-mail" type="email" autoComplete="email" defaultValue={email} required />
       <TextField id="password" label="Password" type="password" autoComplete="current-password" required />
-      <Button type="submit" className="w-full" disabled={pending}>{pending ? 'Signing in…' : 'Sign in'}</Button>
+      <Button type="submit" className="w-full" disabled={pending}>
+        {pending ? 'Signing in…' : 'Sign in'}
+      </Button>
     </form>
   );
 }

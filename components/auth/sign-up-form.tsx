@@ -18,7 +18,11 @@ export function SignUpForm() {
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    const input = check(SignUpSchema, { name: form.get('name'), email: form.get('email'), password: form.get('password') });
+    const input = check(SignUpSchema, {
+      name: form.get('name'),
+      email: form.get('email'),
+      password: form.get('password'),
+    });
     if (!input) return;
     try {
       const answer = await signUp.mutateAsync(input);
@@ -35,8 +39,18 @@ export function SignUpForm() {
       <FormMessage message={message} />
       <TextField id="name" label="Your name" autoComplete="name" errors={fields.name} required />
       <TextField id="email" label="E-mail" type="email" autoComplete="email" errors={fields.email} required />
-      <TextField id="password" label="Password" type="password" autoComplete="new-password" hint="At least 10 characters; a long passphrase is best." errors={fields.password} required />
-      <Button type="submit" className="w-full" disabled={signUp.isPending}>{signUp.isPending ? 'Creating…' : 'Create account'}</Button>
+      <TextField
+        id="password"
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters; a long passphrase is best."
+        errors={fields.password}
+        required
+      />
+      <Button type="submit" className="w-full" disabled={signUp.isPending}>
+        {signUp.isPending ? 'Creating…' : 'Create account'}
+      </Button>
     </form>
   );
 }

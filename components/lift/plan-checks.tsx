@@ -9,16 +9,34 @@ const SEVERITY = {
 } as const;
 
 /** Findings with their reason, the fix, and the source of the rule. */
-export function PlanChecks({ checks, emptyText, units }: { checks: readonly PlanCheck[]; emptyText?: string; units: UnitSystem }) {
+export function PlanChecks({
+  checks,
+  emptyText,
+  units,
+}: {
+  checks: readonly PlanCheck[];
+  emptyText?: string;
+  units: UnitSystem;
+}) {
   if (checks.length === 0) return emptyText ? <p className="text-sm text-moss-700">{emptyText}</p> : null;
   return (
     <ul className="space-y-2" aria-label="Checks">
       {checks.map((check) => {
         const text = planCheckText(check, units);
         return (
-          <li key={`${check.code}-${check.message}`} data-code={check.code} className={`rounded-md border px-3 py-2 text-sm ${SEVERITY[check.severity].className}`}>
-            <p><span className="font-semibold">{SEVERITY[check.severity].label}:</span> {text.message}</p>
-            {text.fix && <p className="mt-1"><span className="font-medium">Fix:</span> {text.fix}</p>}
+          <li
+            key={`${check.code}-${check.message}`}
+            data-code={check.code}
+            className={`rounded-md border px-3 py-2 text-sm ${SEVERITY[check.severity].className}`}
+          >
+            <p>
+              <span className="font-semibold">{SEVERITY[check.severity].label}:</span> {text.message}
+            </p>
+            {text.fix && (
+              <p className="mt-1">
+                <span className="font-medium">Fix:</span> {text.fix}
+              </p>
+            )}
             <p className="mt-1 text-xs opacity-80">Basis: {check.source}</p>
           </li>
         );

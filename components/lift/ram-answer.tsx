@@ -39,14 +39,39 @@ export function RamAnswer({ plan, units, tank }: RamAnswerProps) {
         <Readout
           label="Efficiency"
           value={formatPercent(plan.efficiency)}
-          detail={plan.efficiencyBasis === 'measured' ? 'measured at commissioning' : `from the table at ${formatNumber(plan.effectiveLiftToFallRatio, 1)} : 1`}
+          detail={
+            plan.efficiencyBasis === 'measured'
+              ? 'measured at commissioning'
+              : `from the table at ${formatNumber(plan.effectiveLiftToFallRatio, 1)} : 1`
+          }
         />
       </div>
       <dl className="grid gap-x-6 gap-y-1 text-sm text-creek-800 sm:grid-cols-2">
-        <div className="flex justify-between gap-3"><dt>Lift to fall</dt><dd className="tabular">{formatNumber(plan.liftToFallRatio, 1)} : 1 static, {formatNumber(plan.effectiveLiftToFallRatio, 1)} : 1 with friction</dd></div>
-        <div className="flex justify-between gap-3"><dt>Delivery head at the pump</dt><dd className="tabular">{formatQuantity('head', plan.deliveryHeadM, units)} (friction {formatQuantity('head', plan.deliveryFrictionM, units)})</dd></div>
-        <div className="flex justify-between gap-3"><dt>Pumps</dt><dd className="tabular">{plan.pumpCount}{plan.sizeClassId ? `, class ${plan.sizeClassId.replace('drive-', '')} drive` : ''}</dd></div>
-        <div className="flex justify-between gap-3"><dt>Efficiency basis</dt><dd className="text-right text-xs">{plan.efficiencySource}</dd></div>
+        <div className="flex justify-between gap-3">
+          <dt>Lift to fall</dt>
+          <dd className="tabular">
+            {formatNumber(plan.liftToFallRatio, 1)} : 1 static, {formatNumber(plan.effectiveLiftToFallRatio, 1)} : 1
+            with friction
+          </dd>
+        </div>
+        <div className="flex justify-between gap-3">
+          <dt>Delivery head at the pump</dt>
+          <dd className="tabular">
+            {formatQuantity('head', plan.deliveryHeadM, units)} (friction{' '}
+            {formatQuantity('head', plan.deliveryFrictionM, units)})
+          </dd>
+        </div>
+        <div className="flex justify-between gap-3">
+          <dt>Pumps</dt>
+          <dd className="tabular">
+            {plan.pumpCount}
+            {plan.sizeClassId ? `, class ${plan.sizeClassId.replace('drive-', '')} drive` : ''}
+          </dd>
+        </div>
+        <div className="flex justify-between gap-3">
+          <dt>Efficiency basis</dt>
+          <dd className="text-right text-xs">{plan.efficiencySource}</dd>
+        </div>
       </dl>
       <SurgeCompare plan={plan} units={units} />
       <div>
@@ -65,13 +90,19 @@ function SurgeCompare({ plan, units }: { plan: RamPlanResult; units: UnitSystem 
     <div className="space-y-2 rounded-md border border-creek-100 p-3 text-sm">
       <h3 className="font-semibold text-creek-900">Surge at the pump</h3>
       <p className="text-creek-800">
-        Each beat stops the drive column: about {formatQuantity('head', surge.surgeHeadM, units)} of surge (a·v/g with a ={' '}
-        {formatNumber(surge.waveSpeedMs, 0)} m/s and v = {formatQuantity('velocity', surge.driveVelocityMs, units)}, the drive velocity when the waste valve shuts; the beat&apos;s mean is{' '}
+        Each beat stops the drive column: about {formatQuantity('head', surge.surgeHeadM, units)} of surge (a·v/g with a
+        = {formatNumber(surge.waveSpeedMs, 0)} m/s and v = {formatQuantity('velocity', surge.driveVelocityMs, units)},
+        the drive velocity when the waste valve shuts; the beat&apos;s mean is{' '}
         {formatQuantity('velocity', surge.meanDriveVelocityMs, units)}). The drive pipe loses{' '}
-        {formatQuantity('head', surge.driveFrictionM, units)} of the fall to friction. Against a shut delivery line the pump can build about{' '}
-        <strong className="tabular">{formatQuantity('head', surge.peakHeadAtPumpM, units)}</strong>
+        {formatQuantity('head', surge.driveFrictionM, units)} of the fall to friction. Against a shut delivery line the
+        pump can build about <strong className="tabular">{formatQuantity('head', surge.peakHeadAtPumpM, units)}</strong>
         {rating !== null ? (
-          <> against a delivery pipe rated for <strong className="tabular">{formatQuantity('head', rating, units)}</strong>{over ? ': above its rating.' : '.'}</>
+          <>
+            {' '}
+            against a delivery pipe rated for{' '}
+            <strong className="tabular">{formatQuantity('head', rating, units)}</strong>
+            {over ? ': above its rating.' : '.'}
+          </>
         ) : (
           <>; the delivery pipe rating is not known.</>
         )}

@@ -31,17 +31,41 @@ export interface RamSiteFormState {
   notes: string;
 }
 
-/** An empty ram form: the delivery pipe opens on the project's pipe series (ASTM in a US project, ISO in a metric one). */
+/**
+ * An empty ram form: the delivery pipe opens on the project's pipe series (ASTM in a US project, ISO in a metric one).
+ */
 export function emptyRamSiteForm(units: UnitSystem): RamSiteFormState {
   return {
-    name: '', sourceId: '', tankId: '', driveFlow: '', fall: '', driveLength: '', driveBore: '', driveMaterial: 'steel', driveRigid: 'auto',
-    lift: '', pumpElevation: '', routeId: '', deliveryLength: '', pipeSeries: unitDefaults(units).pipeSeriesId, pipeId: '', deliveryBore: '', hazenC: '150', rating: '',
-    sizeClassId: '', pumpCount: '1', measuredEfficiencyPercent: '', efficiencyTableId: 'trade-pocketbook', notes: '',
+    name: '',
+    sourceId: '',
+    tankId: '',
+    driveFlow: '',
+    fall: '',
+    driveLength: '',
+    driveBore: '',
+    driveMaterial: 'steel',
+    driveRigid: 'auto',
+    lift: '',
+    pumpElevation: '',
+    routeId: '',
+    deliveryLength: '',
+    pipeSeries: unitDefaults(units).pipeSeriesId,
+    pipeId: '',
+    deliveryBore: '',
+    hazenC: '150',
+    rating: '',
+    sizeClassId: '',
+    pumpCount: '1',
+    measuredEfficiencyPercent: '',
+    efficiencyTableId: 'trade-pocketbook',
+    notes: '',
   };
 }
 
 /** Catalogue series of each pipe, so the form can offer series and size apart. */
-const SERIES_OF_PIPE = new Map(PIPE_SERIES.flatMap((series) => series.pipes.map((pipe) => [pipe.id, series.id] as const)));
+const SERIES_OF_PIPE = new Map(
+  PIPE_SERIES.flatMap((series) => series.pipes.map((pipe) => [pipe.id, series.id] as const)),
+);
 
 export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSiteFormState {
   const { drivePipe, deliveryPipe } = site;
@@ -67,7 +91,8 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
     rating: inputValue('pressure', deliveryPipe.pressureRatingPa, units),
     sizeClassId: site.sizeClassId ?? '',
     pumpCount: String(site.pumpCount),
-    measuredEfficiencyPercent: site.measuredEfficiency === null ? '' : String(Number((site.measuredEfficiency * 100).toPrecision(4))),
+    measuredEfficiencyPercent:
+      site.measuredEfficiency === null ? '' : String(Number((site.measuredEfficiency * 100).toPrecision(4))),
     efficiencyTableId: site.efficiencyTableId,
     notes: site.notes,
   };
@@ -75,7 +100,8 @@ export function ramSiteFormFrom(site: RamSiteRecord, units: UnitSystem): RamSite
 
 /** The boxes as the API body (SI); the schema then says what is missing or wrong. */
 export function ramSiteInputFrom(state: RamSiteFormState, units: UnitSystem) {
-  const si = (quantity: Parameters<typeof fromDisplay>[0], text: string) => fromDisplay(quantity, numberFrom(text), units);
+  const si = (quantity: Parameters<typeof fromDisplay>[0], text: string) =>
+    fromDisplay(quantity, numberFrom(text), units);
   const siOrNull = (quantity: Parameters<typeof fromDisplay>[0], text: string) => {
     const value = numberOrNull(text);
     return value === null ? null : fromDisplay(quantity, value, units);

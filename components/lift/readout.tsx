@@ -1,7 +1,17 @@
 import type { ReactNode } from 'react';
 
 /** One headline figure: what it is, the figure with its unit, and a line of context. */
-export function Readout({ label, value, detail, emphasis = false }: { label: string; value: ReactNode; detail?: ReactNode; emphasis?: boolean }) {
+export function Readout({
+  label,
+  value,
+  detail,
+  emphasis = false,
+}: {
+  label: string;
+  value: ReactNode;
+  detail?: ReactNode;
+  emphasis?: boolean;
+}) {
   return (
     <div className={`rounded-lg border p-3 ${emphasis ? 'border-creek-300 bg-creek-50' : 'border-creek-100 bg-white'}`}>
       <p className="text-xs font-medium uppercase tracking-wide text-creek-600">{label}</p>

@@ -1,6 +1,9 @@
 import { typedNumber } from '@/lib/units/decimal-mark-store';
 
-/** Text typed in a number box -> a number with the project's decimal mark; blank or not a number -> NaN (the schema then names the field). */
+/**
+ * Text typed in a number box -> a number with the project's decimal mark; blank or not a number -> NaN (the schema then
+ * names the field).
+ */
 export function numberFrom(text: string): number {
   return typedNumber(text);
 }

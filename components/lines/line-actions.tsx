@@ -19,12 +19,19 @@ export function LineDeletionWords({ line }: { line: LineToRemove }) {
   return (
     <>
       <p>
-        The line <strong>{line.name}</strong> goes, with its {plural(line.stretchCount, 'pipe stretch', 'pipe stretches')},{' '}
-        {plural(line.deviceCount, 'device', 'devices')}, fittings, custom pipes and settings.
+        The line <strong>{line.name}</strong> goes, with its{' '}
+        {plural(line.stretchCount, 'pipe stretch', 'pipe stretches')}, {plural(line.deviceCount, 'device', 'devices')},
+        fittings, custom pipes and settings.
       </p>
       <ul className="list-disc space-y-1 pl-5" data-testid="line-deletion-effects">
-        <li>Its pipe leaves the network, with the network ends that only this line joined; take-offs placed on it go too, with the pipes joined to them.</li>
-        <li>Stays: the survey route, tanks, sources, ram sites, outlets that have water uses, and review revisions already submitted (they keep their own copy).</li>
+        <li>
+          Its pipe leaves the network, with the network ends that only this line joined; take-offs placed on it go too,
+          with the pipes joined to them.
+        </li>
+        <li>
+          Stays: the survey route, tanks, sources, ram sites, outlets that have water uses, and review revisions already
+          submitted (they keep their own copy).
+        </li>
       </ul>
       <p>This cannot be undone. To keep a version, duplicate the line first.</p>
     </>

@@ -1,8 +1,22 @@
 import { FRICTION_WORDS, type LineAnswers } from '@/lib/lines/answers';
 import { type DisplayUnits, formatHeadPressure, formatQuantity } from '@/lib/units';
 
-function Card({ label, value, note, tone }: { label: string; value: string; note: string; tone: 'ok' | 'warn' | 'bad' }) {
-  const colours = { ok: 'border-moss-100 bg-moss-50', warn: 'border-ochre-100 bg-ochre-50', bad: 'border-clay-100 bg-clay-50' }[tone];
+function Card({
+  label,
+  value,
+  note,
+  tone,
+}: {
+  label: string;
+  value: string;
+  note: string;
+  tone: 'ok' | 'warn' | 'bad';
+}) {
+  const colours = {
+    ok: 'border-moss-100 bg-moss-50',
+    warn: 'border-ochre-100 bg-ochre-50',
+    bad: 'border-clay-100 bg-clay-50',
+  }[tone];
   return (
     <div className={`rounded-lg border p-3 ${colours}`}>
       <p className="text-xs uppercase tracking-wide text-creek-700">{label}</p>
@@ -13,7 +27,17 @@ function Card({ label, value, note, tone }: { label: string; value: string; note
 }
 
 /** The answer first: flow, end pressure, worst static pressure, warnings. */
-export function LineAnswersStrip({ answers, units, temperatureC, flowNote }: { answers: LineAnswers; units: DisplayUnits; temperatureC: number; flowNote?: string }) {
+export function LineAnswersStrip({
+  answers,
+  units,
+  temperatureC,
+  flowNote,
+}: {
+  answers: LineAnswers;
+  units: DisplayUnits;
+  temperatureC: number;
+  flowNote?: string;
+}) {
   const a = answers;
   const endOk = a.endResidualHeadM >= a.endTargetHeadM - 1e-6;
   const staticOk = a.worstStatic.headM <= a.worstStatic.allowableHeadM;
@@ -28,12 +52,43 @@ export function LineAnswersStrip({ answers, units, temperatureC, flowNote }: { a
           tone="bad"
         />
       ) : (
-        <Card label="Flow delivered" value={formatQuantity('designFlow', a.flowM3s, units.system)} note={flowNote ?? (a.scheduled ? "at the start, from the network's solve; it drops at each take-off" : a.flowSource === 'design' ? 'design flow' : 'found by gravity between the fixed ends')} tone={a.flowM3s > 0 ? 'ok' : 'bad'} />
+        <Card
+          label="Flow delivered"
+          value={formatQuantity('designFlow', a.flowM3s, units.system)}
+          note={
+            flowNote ??
+            (a.scheduled
+              ? "at the start, from the network's solve; it drops at each take-off"
+              : a.flowSource === 'design'
+                ? 'design flow'
+                : 'found by gravity between the fixed ends')
+          }
+          tone={a.flowM3s > 0 ? 'ok' : 'bad'}
+        />
       )}
-      <Card label="Residual at the end" value={formatHeadPressure(a.endResidualHeadM, units.system, temperatureC)} note={`wanted ${formatHeadPressure(a.endTargetHeadM, units.system, temperatureC)}`} tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'} />
-      <Card label="Worst static pressure" value={formatHeadPressure(a.worstStatic.headM, units.system, temperatureC)} note={`at ch. ${formatQuantity('chainage', a.worstStatic.chainageM, units.system)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units.system, temperatureC)}`} tone={staticOk ? 'ok' : 'bad'} />
-      <Card label="Warnings" value={`${a.counts.danger} danger · ${a.counts.warning} warning`} note={`${a.counts.info} advice`} tone={warningsTone} />
-      {a.frictionMethod && <p className="text-xs text-creek-700 sm:col-span-2 xl:col-span-4" data-testid="friction-basis">{FRICTION_WORDS[a.frictionMethod]}</p>}
+      <Card
+        label="Residual at the end"
+        value={formatHeadPressure(a.endResidualHeadM, units.system, temperatureC)}
+        note={`wanted ${formatHeadPressure(a.endTargetHeadM, units.system, temperatureC)}`}
+        tone={endOk ? 'ok' : a.endResidualHeadM < 0 ? 'bad' : 'warn'}
+      />
+      <Card
+        label="Worst static pressure"
+        value={formatHeadPressure(a.worstStatic.headM, units.system, temperatureC)}
+        note={`at ch. ${formatQuantity('chainage', a.worstStatic.chainageM, units.system)}; ${a.worstStatic.pipeLabel} allows ${formatHeadPressure(a.worstStatic.allowableHeadM, units.system, temperatureC)}`}
+        tone={staticOk ? 'ok' : 'bad'}
+      />
+      <Card
+        label="Warnings"
+        value={`${a.counts.danger} danger · ${a.counts.warning} warning`}
+        note={`${a.counts.info} advice`}
+        tone={warningsTone}
+      />
+      {a.frictionMethod && (
+        <p className="text-xs text-creek-700 sm:col-span-2 xl:col-span-4" data-testid="friction-basis">
+          {FRICTION_WORDS[a.frictionMethod]}
+        </p>
+      )}
     </section>
   );
 }

@@ -10,7 +10,15 @@ import { TextAreaField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 
 /** Name and notes of the line; who checked and approved it is recorded on a revision, never typed here. */
-export function LineDetailsForm({ line, baseRevision, onSaved }: { line: LineRecord; baseRevision: () => number; onSaved: (revision: number) => void }) {
+export function LineDetailsForm({
+  line,
+  baseRevision,
+  onSaved,
+}: {
+  line: LineRecord;
+  baseRevision: () => number;
+  onSaved: (revision: number) => void;
+}) {
   const update = useUpdateLine(line.id);
   const form = useForm({
     schema: UpdateLineSchema,
@@ -32,9 +40,13 @@ export function LineDetailsForm({ line, baseRevision, onSaved }: { line: LineRec
   return (
     <form onSubmit={onSubmit} className="grid gap-3 sm:grid-cols-3" noValidate>
       <TextField id="name" label="Line name" defaultValue={line.name} errors={fields.name} required />
-      <div className="sm:col-span-3"><TextAreaField id="notes" label="Notes" rows={3} defaultValue={line.notes} errors={fields.notes} /></div>
+      <div className="sm:col-span-3">
+        <TextAreaField id="notes" label="Notes" rows={3} defaultValue={line.notes} errors={fields.notes} />
+      </div>
       <div className="flex items-center gap-3 sm:col-span-3">
-        <Button type="submit" disabled={update.isPending}>{update.isPending ? 'Saving…' : 'Save details'}</Button>
+        <Button type="submit" disabled={update.isPending}>
+          {update.isPending ? 'Saving…' : 'Save details'}
+        </Button>
         <FormMessage message={message?.text} tone={message?.tone} />
       </div>
     </form>

@@ -28,20 +28,45 @@ export function LineEditor({ lineId, projectName, unitSystem, canEdit, canCommen
   const stations = useQuery(lineStationsQuery(lineId));
   const context = useQuery(lineSiteContextQuery(lineId));
   if (line.isError || stations.isError || context.isError) {
-    return <LoadError what="The line" onRetry={() => { void line.refetch(); void stations.refetch(); void context.refetch(); }} />;
+    return (
+      <LoadError
+        what="The line"
+        onRetry={() => {
+          void line.refetch();
+          void stations.refetch();
+          void context.refetch();
+        }}
+      />
+    );
   }
   if (!line.data || !stations.data || !context.data) return <LineEditorSkeleton />;
   if (stations.data.length < 2) {
     return <LineWithoutRoute line={line.data} canEdit={canEdit} />;
   }
-  return <LineWorkspace key={line.data.id} line={line.data} stations={stations.data} context={context.data} projectName={projectName} unitSystem={unitSystem} canEdit={canEdit} canComment={canComment} members={members} />;
+  return (
+    <LineWorkspace
+      key={line.data.id}
+      line={line.data}
+      stations={stations.data}
+      context={context.data}
+      projectName={projectName}
+      unitSystem={unitSystem}
+      canEdit={canEdit}
+      canComment={canComment}
+      members={members}
+    />
+  );
 }
 
 export function LineEditorSkeleton() {
   return (
     <div className="space-y-4" aria-busy="true" aria-label="Loading the line">
       <Skeleton className="h-8 w-80" />
-      <div className="grid gap-3 sm:grid-cols-4">{[0, 1, 2, 3].map((i) => <Skeleton key={i} className="h-20" />)}</div>
+      <div className="grid gap-3 sm:grid-cols-4">
+        {[0, 1, 2, 3].map((i) => (
+          <Skeleton key={i} className="h-20" />
+        ))}
+      </div>
       <Skeleton className="h-[520px] w-full" />
     </div>
   );
@@ -55,14 +80,27 @@ function LineWithoutRoute({ line, canEdit }: { line: LineRecord; canEdit: boolea
     <div className="space-y-3">
       <h1 className="text-2xl font-semibold text-creek-900">{line.name}</h1>
       <p role="alert" className="text-sm text-clay-700">
-        This line has no route with at least two stations any more (the route was removed or emptied). Its design is kept: survey the route again, or
-        start a new line on a surveyed route{canEdit ? ' and delete this one' : ''}.
+        This line has no route with at least two stations any more (the route was removed or emptied). Its design is
+        kept: survey the route again, or start a new line on a surveyed route{canEdit ? ' and delete this one' : ''}.
       </p>
       {canEdit && (
-        <Button tone="quiet" className="text-clay-700" onClick={() => actions.askDelete(
-          { id: line.id, name: line.name, stretchCount: line.design.stretches.length, deviceCount: line.design.devices.length },
-          () => router.push(`/projects/${line.projectId}/lines`),
-        )}>Delete this line</Button>
+        <Button
+          tone="quiet"
+          className="text-clay-700"
+          onClick={() =>
+            actions.askDelete(
+              {
+                id: line.id,
+                name: line.name,
+                stretchCount: line.design.stretches.length,
+                deviceCount: line.design.devices.length,
+              },
+              () => router.push(`/projects/${line.projectId}/lines`),
+            )
+          }
+        >
+          Delete this line
+        </Button>
       )}
       {actions.dialog}
     </div>

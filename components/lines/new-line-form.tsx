@@ -14,7 +14,15 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 
 /** Starts a line on a surveyed route (or a chainage window of it) with a first design to change. */
-export function NewLineForm({ projectId, routes, unitSystem }: { projectId: string; routes: RouteChoice[]; unitSystem: UnitSystem }) {
+export function NewLineForm({
+  projectId,
+  routes,
+  unitSystem,
+}: {
+  projectId: string;
+  routes: RouteChoice[];
+  unitSystem: UnitSystem;
+}) {
   const router = useRouter();
   const create = useCreateLine(projectId);
   const units = displayUnits(unitSystem);
@@ -22,7 +30,12 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   const decimalMark = useDecimalMark();
 
   if (routes.length === 0) {
-    return <p className="text-sm text-creek-700">This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line follows a route.</p>;
+    return (
+      <p className="text-sm text-creek-700">
+        This project has no surveyed route with at least two stations yet. Import or enter a survey first; a line
+        follows a route.
+      </p>
+    );
   }
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
@@ -35,7 +48,12 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
       if (!typed.ok) return Number.NaN;
       return typed.value === null ? undefined : fromDisplay('chainage', typed.value, units.system);
     };
-    const input = check(CreateLineSchema, { name: f.get('name'), routeId: f.get('routeId'), fromChainageM: chainage('fromChainage'), toChainageM: chainage('toChainage') });
+    const input = check(CreateLineSchema, {
+      name: f.get('name'),
+      routeId: f.get('routeId'),
+      fromChainageM: chainage('fromChainage'),
+      toChainageM: chainage('toChainage'),
+    });
     if (!input) return;
     try {
       const line = await create.mutateAsync(input);
@@ -46,15 +64,40 @@ export function NewLineForm({ projectId, routes, unitSystem }: { projectId: stri
   }
 
   return (
-    <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto] lg:items-end" noValidate>
+    <form
+      onSubmit={onSubmit}
+      className="grid gap-4 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto] lg:items-end"
+      noValidate
+    >
       <TextField id="name" label="Line name" placeholder="e.g. Spring box to trough" errors={fields.name} required />
       <SelectField id="routeId" label="Follows the route" errors={fields.routeId}>
-        {routes.map((r) => <option key={r.id} value={r.id}>{r.name} (ch. {formatQuantity('chainage', r.firstChainageM, units.system)} to {formatQuantity('chainage', r.lastChainageM, units.system)})</option>)}
+        {routes.map((r) => (
+          <option key={r.id} value={r.id}>
+            {r.name} (ch. {formatQuantity('chainage', r.firstChainageM, units.system)} to{' '}
+            {formatQuantity('chainage', r.lastChainageM, units.system)})
+          </option>
+        ))}
       </SelectField>
-      <TextField id="fromChainage" label={`From chainage (${units.length})`} inputMode="decimal" placeholder="route start" errors={fields.fromChainageM} />
-      <TextField id="toChainage" label={`To chainage (${units.length})`} inputMode="decimal" placeholder="route end" errors={fields.toChainageM} />
-      <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Starting…' : 'Start line'}</Button>
-      <div className="sm:col-span-2 lg:col-span-5"><FormMessage message={message} /></div>
+      <TextField
+        id="fromChainage"
+        label={`From chainage (${units.length})`}
+        inputMode="decimal"
+        placeholder="route start"
+        errors={fields.fromChainageM}
+      />
+      <TextField
+        id="toChainage"
+        label={`To chainage (${units.length})`}
+        inputMode="decimal"
+        placeholder="route end"
+        errors={fields.toChainageM}
+      />
+      <Button type="submit" disabled={create.isPending}>
+        {create.isPending ? 'Starting…' : 'Start line'}
+      </Button>
+      <div className="sm:col-span-2 lg:col-span-5">
+        <FormMessage message={message} />
+      </div>
     </form>
   );
 }

@@ -12,7 +12,15 @@ const SIZE = { width: 320, height: 320 };
 const NO_PHOTOS: readonly NumberedPhoto[] = [];
 
 /** The route from above; hovering it moves the profile's readout, and the profile's hover shows here. */
-export function PlanView({ stations, warnings, devices, units, hoverM, onHover, photos = NO_PHOTOS }: {
+export function PlanView({
+  stations,
+  warnings,
+  devices,
+  units,
+  hoverM,
+  onHover,
+  photos = NO_PHOTOS,
+}: {
   stations: readonly PlanStation[];
   warnings: readonly LineWarning[];
   devices: readonly LineDevice[];
@@ -22,7 +30,10 @@ export function PlanView({ stations, warnings, devices, units, hoverM, onHover, 
   /** Site photos: drawn where they were taken, their card shown on hover or click. */
   photos?: readonly NumberedPhoto[];
 }) {
-  const scene = useMemo(() => planScene(stations, warnings, devices, SIZE, units, photos), [stations, warnings, devices, units, photos]);
+  const scene = useMemo(
+    () => planScene(stations, warnings, devices, SIZE, units, photos),
+    [stations, warnings, devices, units, photos],
+  );
   const captureRef = useRef<SVGRectElement>(null);
   const card = usePhotoCard();
   const photoPlaces = useMemo(() => {
@@ -33,9 +44,22 @@ export function PlanView({ stations, warnings, devices, units, hoverM, onHover, 
     });
   }, [scene, photos]);
   if (!scene) {
-    return <p className="rounded-md border border-dashed border-creek-200 p-4 text-sm text-creek-700">This route has no map positions, so there is no plan to draw. The profile and tables still work.</p>;
+    return (
+      <p className="rounded-md border border-dashed border-creek-200 p-4 text-sm text-creek-700">
+        This route has no map positions, so there is no plan to draw. The profile and tables still work.
+      </p>
+    );
   }
-  const marker = hoverM === null ? null : scene.positions.reduce((best, p) => (Math.abs(stations[p.index].chainageM - hoverM) < Math.abs(stations[best.index].chainageM - hoverM) ? p : best), scene.positions[0]);
+  const marker =
+    hoverM === null
+      ? null
+      : scene.positions.reduce(
+          (best, p) =>
+            Math.abs(stations[p.index].chainageM - hoverM) < Math.abs(stations[best.index].chainageM - hoverM)
+              ? p
+              : best,
+          scene.positions[0],
+        );
 
   function onMove(event: React.PointerEvent<SVGRectElement>) {
     const rect = captureRef.current?.ownerSVGElement?.getBoundingClientRect();
@@ -57,8 +81,28 @@ export function PlanView({ stations, warnings, devices, units, hoverM, onHover, 
   return (
     <div className="relative rounded-md border border-creek-100" data-testid="plan-view">
       <SvgNodeView node={scene.root}>
-        {marker && <circle cx={marker.x} cy={marker.y} r={6} fill="none" stroke="#122e3a" strokeWidth={2.5} pointerEvents="none" data-testid="plan-marker" />}
-        <rect ref={captureRef} x={0} y={0} width={SIZE.width} height={SIZE.height} fill="transparent" onPointerMove={onMove} onPointerLeave={() => onHover(null)} />
+        {marker && (
+          <circle
+            cx={marker.x}
+            cy={marker.y}
+            r={6}
+            fill="none"
+            stroke="#122e3a"
+            strokeWidth={2.5}
+            pointerEvents="none"
+            data-testid="plan-marker"
+          />
+        )}
+        <rect
+          ref={captureRef}
+          x={0}
+          y={0}
+          width={SIZE.width}
+          height={SIZE.height}
+          fill="transparent"
+          onPointerMove={onMove}
+          onPointerLeave={() => onHover(null)}
+        />
         <PhotoTargets places={photoPlaces} card={card} />
       </SvgNodeView>
       <PhotoCardOverlay places={photoPlaces} card={card} units={units.system} width={SIZE.width} height={SIZE.height} />

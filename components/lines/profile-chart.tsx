@@ -36,7 +36,22 @@ export interface ProfileChartProps {
  * The long profile on screen: the pure drawing from lib/chart plus a pointer layer for hover,
  * click-to-place, drag to pan and wheel to zoom on chainage.
  */
-export function ProfileChart({ data, devices, units, view, onViewChange, exaggeration, highlight, hoverM, onHover, onPick, pickLabel, pins, earlierGrade, photos }: ProfileChartProps) {
+export function ProfileChart({
+  data,
+  devices,
+  units,
+  view,
+  onViewChange,
+  exaggeration,
+  highlight,
+  hoverM,
+  onHover,
+  onPick,
+  pickLabel,
+  pins,
+  earlierGrade,
+  photos,
+}: ProfileChartProps) {
   const boxRef = useRef<HTMLDivElement>(null);
   const svgRef = useRef<HTMLDivElement>(null);
   const captureRef = useRef<SVGRectElement>(null);
@@ -57,7 +72,12 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
   }, []);
 
   const scene = useMemo(
-    () => profileScene(data, { units, devices, width, view, exaggeration, highlight, pins, earlierGrade, photos }, 'screen'),
+    () =>
+      profileScene(
+        data,
+        { units, devices, width, view, exaggeration, highlight, pins, earlierGrade, photos },
+        'screen',
+      ),
     [data, units, devices, width, view, exaggeration, highlight, pins, earlierGrade, photos],
   );
   const { frame } = scene;
@@ -153,7 +173,15 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
         <SvgNodeView node={scene.root}>
           {hover !== null && (
             <g pointerEvents="none" data-layer="hover">
-              <line x1={hx} x2={hx} y1={frame.elevationTop} y2={frame.pressureBottom} stroke="#122e3a" strokeWidth={1} strokeDasharray="2 2" />
+              <line
+                x1={hx}
+                x2={hx}
+                y1={frame.elevationTop}
+                y2={frame.pressureBottom}
+                stroke="#122e3a"
+                strokeWidth={1}
+                strokeDasharray="2 2"
+              />
               <circle cx={hx} cy={frame.yElevation(data.points.groundElevationM[hover])} r={3.5} fill="#7d5410" />
               <circle cx={hx} cy={frame.yElevation(data.points.hydraulicGradeM[hover])} r={3.5} fill="#1c4b5f" />
               <circle cx={hx} cy={frame.yPressure(data.points.pressureHeadM[hover])} r={3.5} fill="#1c4b5f" />
@@ -168,7 +196,11 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
             fill="transparent"
             tabIndex={0}
             role="application"
-            aria-label={onPick ? `Profile: click to ${pickLabel ?? 'place'}; arrow keys move the readout, + and - zoom` : 'Profile: arrow keys move the readout, + and - zoom, drag to pan'}
+            aria-label={
+              onPick
+                ? `Profile: click to ${pickLabel ?? 'place'}; arrow keys move the readout, + and - zoom`
+                : 'Profile: arrow keys move the readout, + and - zoom, drag to pan'
+            }
             style={{ cursor: onPick ? 'crosshair' : dragging ? 'grabbing' : 'grab', touchAction: 'none' }}
             onPointerDown={onPointerDown}
             onPointerMove={onPointerMove}
@@ -180,7 +212,13 @@ export function ProfileChart({ data, devices, units, view, onViewChange, exagger
           <PhotoTargets places={photoPlaces} card={card} />
         </SvgNodeView>
       </div>
-      <PhotoCardOverlay places={photoPlaces} card={card} units={units.system} width={frame.width} height={frame.height} />
+      <PhotoCardOverlay
+        places={photoPlaces}
+        card={card}
+        units={units.system}
+        width={frame.width}
+        height={frame.height}
+      />
     </div>
   );
 }

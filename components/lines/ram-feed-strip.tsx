@@ -1,9 +1,21 @@
 import type { RamFeedAnswers } from '@/lib/lines/ram-feed';
 import { type DisplayUnits, formatDuration, formatHeadPressure, formatPercent, formatQuantity } from '@/lib/units';
 
-function Figure({ label, value, note, tone = 'ok' }: { label: string; value: string; note: string; tone?: 'ok' | 'bad' }) {
+function Figure({
+  label,
+  value,
+  note,
+  tone = 'ok',
+}: {
+  label: string;
+  value: string;
+  note: string;
+  tone?: 'ok' | 'bad';
+}) {
   return (
-    <div className={`rounded-lg border p-3 ${tone === 'ok' ? 'border-creek-100 bg-creek-50' : 'border-clay-100 bg-clay-50'}`}>
+    <div
+      className={`rounded-lg border p-3 ${tone === 'ok' ? 'border-creek-100 bg-creek-50' : 'border-clay-100 bg-clay-50'}`}
+    >
       <p className="text-xs uppercase tracking-wide text-creek-700">{label}</p>
       <p className="tabular text-lg font-semibold text-creek-950">{value}</p>
       <p className="text-xs text-creek-700">{note}</p>
@@ -11,10 +23,24 @@ function Figure({ label, value, note, tone = 'ok' }: { label: string; value: str
   );
 }
 
-/** The ram that feeds this delivery line: which site, the head at the pump, what it delivers, and the peak head against the pipe's rating. */
-export function RamFeedStrip({ feed, units, temperatureC }: { feed: RamFeedAnswers; units: DisplayUnits; temperatureC: number }) {
+/**
+ * The ram that feeds this delivery line: which site, the head at the pump, what it delivers, and the peak head against
+ * the pipe's rating.
+ */
+export function RamFeedStrip({
+  feed,
+  units,
+  temperatureC,
+}: {
+  feed: RamFeedAnswers;
+  units: DisplayUnits;
+  temperatureC: number;
+}) {
   const { outlet } = feed;
-  const fill = outlet.tankFillTimeS !== null && outlet.tankName ? ` · fills ${outlet.tankName} in ${formatDuration(outlet.tankFillTimeS)}` : '';
+  const fill =
+    outlet.tankFillTimeS !== null && outlet.tankName
+      ? ` · fills ${outlet.tankName} in ${formatDuration(outlet.tankFillTimeS)}`
+      : '';
   return (
     <section aria-label="Ram pump feeding this line" className="space-y-2" data-testid="ram-feed">
       <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4">
@@ -41,7 +67,9 @@ export function RamFeedStrip({ feed, units, temperatureC }: { feed: RamFeedAnswe
         />
       </div>
       <p className="text-xs text-creek-700">
-        Efficiency {formatPercent(outlet.efficiency)} ({outlet.efficiencyBasis === 'measured' ? 'measured at commissioning' : outlet.efficiencySource}). {outlet.caution}
+        Efficiency {formatPercent(outlet.efficiency)} (
+        {outlet.efficiencyBasis === 'measured' ? 'measured at commissioning' : outlet.efficiencySource}).{' '}
+        {outlet.caution}
       </p>
     </section>
   );

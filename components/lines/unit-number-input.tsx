@@ -25,10 +25,24 @@ export interface UnitNumberInputProps {
   errors?: readonly string[];
 }
 
-const format = (v: number | undefined, digits: number, mark: DecimalMark) => (v === undefined ? '' : formatTypedNumber(Number(v.toFixed(digits)), mark));
+const format = (v: number | undefined, digits: number, mark: DecimalMark) =>
+  v === undefined ? '' : formatTypedNumber(Number(v.toFixed(digits)), mark);
 
 /** A number in the project's units that commits on Enter or leaving the field, with its error beside it. */
-export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, disabled, onCommit, hint, placeholder, compact, errors }: UnitNumberInputProps) {
+export function UnitNumberInput({
+  id,
+  label,
+  value,
+  unit,
+  digits = 2,
+  optional,
+  disabled,
+  onCommit,
+  hint,
+  placeholder,
+  compact,
+  errors,
+}: UnitNumberInputProps) {
   const mark = useDecimalMark();
   const [text, setText] = useState(format(value, digits, mark));
   const [ownError, setError] = useState<string | null>(null);
@@ -81,8 +95,16 @@ export function UnitNumberInput({ id, label, value, unit, digits = 2, optional, 
         aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
         className={`tabular block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm text-creek-950 disabled:bg-creek-50 disabled:text-creek-700 aria-[invalid=true]:border-clay-500 ${compact ? '' : 'mt-1'}`}
       />
-      {hint && !error && !compact && <p id={`${id}-hint`} className="mt-0.5 text-xs text-creek-600">{hint}</p>}
-      {error && <p id={`${id}-error`} role="alert" className="mt-0.5 text-xs font-medium text-clay-600">{error}</p>}
+      {hint && !error && !compact && (
+        <p id={`${id}-hint`} className="mt-0.5 text-xs text-creek-600">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} role="alert" className="mt-0.5 text-xs font-medium text-clay-600">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

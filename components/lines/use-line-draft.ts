@@ -17,7 +17,11 @@ import { LineDesignSchema, type LineDesign } from '@/lib/validations/line-design
 export type SaveState = 'saved' | 'pending' | 'saving' | 'failed' | 'conflict';
 const SAVE_DELAY_MS = 500;
 
-function analyse(design: LineDesign, stations: readonly LineRouteStation[], context: LineSiteContext): { analysis: LineAnalysis } | { error: string } {
+function analyse(
+  design: LineDesign,
+  stations: readonly LineRouteStation[],
+  context: LineSiteContext,
+): { analysis: LineAnalysis } | { error: string } {
   try {
     return { analysis: analyzeLine(lineInputOf(design, stations, context)) };
   } catch (error) {
@@ -32,7 +36,12 @@ function analyse(design: LineDesign, stations: readonly LineRouteStation[], cont
  * every change, saved through the API shortly after the last change. A change that the schema or
  * the core refuses is not taken; its reason is returned for the form to show.
  */
-export function useLineDraft(line: LineRecord, stations: readonly LineRouteStation[], context: LineSiteContext, canEdit: boolean) {
+export function useLineDraft(
+  line: LineRecord,
+  stations: readonly LineRouteStation[],
+  context: LineSiteContext,
+  canEdit: boolean,
+) {
   const [history, setHistory] = useState<History<LineDesign>>(() => startHistory(line.design));
   const [saveState, setSaveState] = useState<SaveState>('saved');
   const [saveError, setSaveError] = useState<string | null>(null);

@@ -33,7 +33,10 @@ export interface NetworkWorkspaceProps {
   members: { id: string; name: string }[];
 }
 
-/** The network page: runs, the schematic with comment pins, the parts' tables, adding and joining parts, demand per outlet, comments. */
+/**
+ * The network page: runs, the schematic with comment pins, the parts' tables, adding and joining parts, demand per
+ * outlet, comments.
+ */
 export function NetworkWorkspace({ projectId, units, canEdit, canComment, members }: NetworkWorkspaceProps) {
   const { data: view, error, refetch } = useQuery(networkQuery(projectId));
   const comments = useCommentThreads(projectId, null, [{ kind: 'network' }, { kind: 'project' }]);
@@ -45,13 +48,20 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
   const [showing, setShowing] = useState<'solve' | 'size'>('solve');
   const layout = useMemo(() => (view ? layoutNetwork(view) : null), [view]);
   const schematicRef = useRef<HTMLDivElement>(null);
-  const partNames = useMemo(() => new Map([...(view?.records.nodes ?? []), ...(view?.records.links ?? [])].map((p) => [p.id, p.name])), [view]);
+  const partNames = useMemo(
+    () => new Map([...(view?.records.nodes ?? []), ...(view?.records.links ?? [])].map((p) => [p.id, p.name])),
+    [view],
+  );
   if (error) return <LoadError what="The network" onRetry={() => void refetch()} />;
   if (!view || !layout) return <NetworkWorkspaceSkeleton />;
 
   const pickedNode = view.records.nodes.find((n) => n.id === selectedId);
   const pickedLink = view.records.links.find((l) => l.id === selectedId);
-  const picked = pickedNode ? { part: 'node' as const, id: pickedNode.id, name: pickedNode.name } : pickedLink ? { part: 'link' as const, id: pickedLink.id, name: pickedLink.name } : null;
+  const picked = pickedNode
+    ? { part: 'node' as const, id: pickedNode.id, name: pickedNode.name }
+    : pickedLink
+      ? { part: 'link' as const, id: pickedLink.id, name: pickedLink.name }
+      : null;
   const pins = networkPinsOf(comments.threads, comments.selectedId);
 
   function jumpToComment(comment: CommentRecord) {
@@ -68,11 +78,32 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
 
   return (
     <div className="space-y-5">
-      <NetworkRunPanel projectId={projectId} view={view} units={units} showing={showing} onShow={setShowing} canEdit={canEdit} />
+      <NetworkRunPanel
+        projectId={projectId}
+        view={view}
+        units={units}
+        showing={showing}
+        onShow={setShowing}
+        canEdit={canEdit}
+      />
       <div ref={schematicRef} className="scroll-mt-4" />
-      <Panel title="Schematic" aside={<span className="text-xs text-creek-600">{shown ? (showing === 'size' ? 'Showing the least-cost sizes' : 'Showing the peak-hour solve') : 'Not solved yet'}</span>}>
+      <Panel
+        title="Schematic"
+        aside={
+          <span className="text-xs text-creek-600">
+            {shown
+              ? showing === 'size'
+                ? 'Showing the least-cost sizes'
+                : 'Showing the peak-hour solve'
+              : 'Not solved yet'}
+          </span>
+        }
+      >
         {view.records.nodes.length === 0 ? (
-          <p className="text-sm text-creek-700">This project has no network yet. Add a line on the Lines page, or add a source and an outlet below and join them.</p>
+          <p className="text-sm text-creek-700">
+            This project has no network yet. Add a line on the Lines page, or add a source and an outlet below and join
+            them.
+          </p>
         ) : (
           <div
             className="overflow-hidden rounded-md border border-creek-100"
@@ -89,17 +120,43 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
         )}
         {canComment && view.records.nodes.length > 0 && (
           <p className="mt-2 text-xs text-creek-700" role="status" data-testid="picked-part">
-            {picked ? <>Picked {picked.name}: write a comment on it under <a className="underline" href="#network-comments">Comments</a>.</> : 'Click a node or link (or a row of the tables) to pin a comment on it.'}
+            {picked ? (
+              <>
+                Picked {picked.name}: write a comment on it under{' '}
+                <a className="underline" href="#network-comments">
+                  Comments
+                </a>
+                .
+              </>
+            ) : (
+              'Click a node or link (or a row of the tables) to pin a comment on it.'
+            )}
           </p>
         )}
       </Panel>
       <DayView view={view} units={units} />
       <div className="grid gap-5 xl:grid-cols-2">
         <Panel title="Nodes">
-          <NodeTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
+          <NodeTable
+            view={view}
+            solve={shown}
+            units={units}
+            selectedId={selectedId}
+            onSelect={setSelectedId}
+            projectId={projectId}
+            canEdit={canEdit}
+          />
         </Panel>
         <Panel title="Links">
-          <LinkTable view={view} solve={shown} units={units} selectedId={selectedId} onSelect={setSelectedId} projectId={projectId} canEdit={canEdit} />
+          <LinkTable
+            view={view}
+            solve={shown}
+            units={units}
+            selectedId={selectedId}
+            onSelect={setSelectedId}
+            projectId={projectId}
+            canEdit={canEdit}
+          />
         </Panel>
       </div>
       {canEdit && (
@@ -125,7 +182,10 @@ export function NetworkWorkspace({ projectId, units, canEdit, canComment, member
       <Panel title="Demand per outlet">
         <DemandEditor projectId={projectId} view={view} units={units} canEdit={canEdit} />
       </Panel>
-      <Panel title={`Comments on the network and the project (${comments.threads.length})`} aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}>
+      <Panel
+        title={`Comments on the network and the project (${comments.threads.length})`}
+        aside={<span className="text-xs text-creek-600">Working copy, not a revision</span>}
+      >
         <span id="network-comments" className="block scroll-mt-4" />
         <CommentsPanel
           projectId={projectId}

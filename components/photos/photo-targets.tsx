@@ -5,7 +5,11 @@ import type { UnitSystem } from '@/lib/units';
 import type { NumberedPhoto } from '@/lib/queries/photos';
 import { PhotoCard } from './photo-card';
 
-interface Place { photo: NumberedPhoto; x: number; y: number }
+interface Place {
+  photo: NumberedPhoto;
+  x: number;
+  y: number;
+}
 
 /**
  * Which photo's card is open: hovering or focusing a mark shows it, clicking keeps it open until
@@ -66,7 +70,19 @@ export function PhotoTargets({ places, card }: { places: readonly Place[]; card:
  * The open card, laid over the drawing beside its mark. `width`/`height` are the drawing's own
  * units, so the card follows the mark however the drawing is scaled on screen.
  */
-export function PhotoCardOverlay({ places, card, units, width, height }: { places: readonly Place[]; card: PhotoCardState; units: UnitSystem; width: number; height: number }): ReactNode {
+export function PhotoCardOverlay({
+  places,
+  card,
+  units,
+  width,
+  height,
+}: {
+  places: readonly Place[];
+  card: PhotoCardState;
+  units: UnitSystem;
+  width: number;
+  height: number;
+}): ReactNode {
   const place = places.find((p) => p.photo.id === card.shownId);
   if (!place) return null;
   const leftShare = place.x / width;
@@ -75,7 +91,12 @@ export function PhotoCardOverlay({ places, card, units, width, height }: { place
     ...(leftShare > 0.6 ? { right: `${(1 - leftShare) * 100}%` } : { left: `${leftShare * 100}%` }),
   };
   return (
-    <div className="absolute z-10" style={style} onPointerEnter={() => card.hover(place.photo.id)} onPointerLeave={card.leave}>
+    <div
+      className="absolute z-10"
+      style={style}
+      onPointerEnter={() => card.hover(place.photo.id)}
+      onPointerLeave={card.leave}
+    >
       <PhotoCard photo={place.photo} units={units} onClose={card.kept ? card.close : undefined} />
     </div>
   );

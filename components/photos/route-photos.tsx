@@ -12,12 +12,23 @@ import { numberPhotos } from '@/lib/chart/photo-marks';
 import type { PhotoSummary } from '@/lib/data/photos';
 import { offLineWords, takenWords } from '@/lib/photos/words';
 import { ApiError } from '@/lib/queries/fetch-json';
-import { photoImageUrl, projectPhotosQuery, useDeletePhoto, useUpdatePhoto, useUploadPhoto } from '@/lib/queries/photos';
+import {
+  photoImageUrl,
+  projectPhotosQuery,
+  useDeletePhoto,
+  useUpdatePhoto,
+  useUploadPhoto,
+} from '@/lib/queries/photos';
 import { formatQuantity, fromDisplay, toDisplay, unitOf, type UnitSystem } from '@/lib/units';
 import { parseTypedNumber } from '@/lib/units/typed-number';
 import { ThumbnailsSkeleton } from '@/components/ui/widget-skeletons';
 
-interface Props { projectId: string; routeId: string; units: UnitSystem; editable: boolean }
+interface Props {
+  projectId: string;
+  routeId: string;
+  units: UnitSystem;
+  editable: boolean;
+}
 
 const PLACEMENT: Record<PhotoSummary['placement'], string> = {
   position: 'from its position',
@@ -72,7 +83,10 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
   function place(photo: PhotoSummary, value: number | undefined): string | null {
     if (value === undefined) return 'Type the chainage where the photo was taken';
     setRowProblem(null);
-    update.mutate({ photoId: photo.id, routeId, chainageM: fromDisplay('chainage', value, units) }, { onError: (e) => setRowProblem(`${photo.fileName}: ${e.message}`) });
+    update.mutate(
+      { photoId: photo.id, routeId, chainageM: fromDisplay('chainage', value, units) },
+      { onError: (e) => setRowProblem(`${photo.fileName}: ${e.message}`) },
+    );
     return null;
   }
 
@@ -82,7 +96,9 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
       {editable && (
         <form onSubmit={onSubmit} className="mb-4 grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-start" noValidate>
           <div>
-            <label htmlFor="photos" className="block text-sm font-medium text-creek-900">Photos (JPEG, PNG or HEIC)</label>
+            <label htmlFor="photos" className="block text-sm font-medium text-creek-900">
+              Photos (JPEG, PNG or HEIC)
+            </label>
             <input
               id="photos"
               name="photos"
@@ -93,18 +109,33 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
               aria-describedby={problems.length > 0 ? 'photos-problems' : 'photos-hint'}
               className="mt-1 block w-full text-sm"
             />
-            <p id="photos-hint" className="mt-1 text-xs text-creek-600">Photos with a GPS position land at the nearest chainage; only position and time are kept from the file.</p>
+            <p id="photos-hint" className="mt-1 text-xs text-creek-600">
+              Photos with a GPS position land at the nearest chainage; only position and time are kept from the file.
+            </p>
             {problems.length > 0 && (
               <ul id="photos-problems" className="mt-1 space-y-1" data-testid="photo-upload-problems">
-                {problems.map((p) => <li key={p}><FormMessage message={p} /></li>)}
+                {problems.map((p) => (
+                  <li key={p}>
+                    <FormMessage message={p} />
+                  </li>
+                ))}
               </ul>
             )}
           </div>
           <div>
-            <label htmlFor="chainage" className="block text-sm font-medium text-creek-900">Chainage for photos without a position ({chainageUnit})</label>
-            <input id="chainage" name="chainage" inputMode="decimal" className="mt-1 block w-full rounded-md border border-creek-200 px-3 py-2 text-sm" />
+            <label htmlFor="chainage" className="block text-sm font-medium text-creek-900">
+              Chainage for photos without a position ({chainageUnit})
+            </label>
+            <input
+              id="chainage"
+              name="chainage"
+              inputMode="decimal"
+              className="mt-1 block w-full rounded-md border border-creek-200 px-3 py-2 text-sm"
+            />
           </div>
-          <Button type="submit" className="sm:mt-6" disabled={upload.isPending}>{upload.isPending ? 'Uploading…' : 'Add photos'}</Button>
+          <Button type="submit" className="sm:mt-6" disabled={upload.isPending}>
+            {upload.isPending ? 'Uploading…' : 'Add photos'}
+          </Button>
           <div className="sm:col-span-3">
             <FormMessage tone="ok" message={done} />
           </div>
@@ -114,14 +145,42 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
       {photos.length === 0 ? (
         <p className="text-sm text-creek-600">No photos on this route yet.</p>
       ) : (
-        <TableFrame head={<><HeadCell>No.</HeadCell><HeadCell><span className="sr-only">Photo</span></HeadCell><HeadCell>Chainage</HeadCell><HeadCell>Off the line</HeadCell><HeadCell>Taken</HeadCell><HeadCell>Caption and file</HeadCell><HeadCell>In the report</HeadCell>{editable && <HeadCell><span className="sr-only">Remove</span></HeadCell>}</>}>
+        <TableFrame
+          head={
+            <>
+              <HeadCell>No.</HeadCell>
+              <HeadCell>
+                <span className="sr-only">Photo</span>
+              </HeadCell>
+              <HeadCell>Chainage</HeadCell>
+              <HeadCell>Off the line</HeadCell>
+              <HeadCell>Taken</HeadCell>
+              <HeadCell>Caption and file</HeadCell>
+              <HeadCell>In the report</HeadCell>
+              {editable && (
+                <HeadCell>
+                  <span className="sr-only">Remove</span>
+                </HeadCell>
+              )}
+            </>
+          }
+        >
           {photos.map((p) => (
-            <tr key={p.id} className="border-t border-creek-50 align-middle" data-testid="photo-row" data-photo-id={p.id}>
+            <tr
+              key={p.id}
+              className="border-t border-creek-50 align-middle"
+              data-testid="photo-row"
+              data-photo-id={p.id}
+            >
               <td className="px-4 py-2 font-semibold text-creek-900">{numbers.get(p.id) ?? '—'}</td>
               <td className="px-4 py-2">
                 <a href={photoImageUrl(p.id)} target="_blank" rel="noreferrer">
-                  {/* eslint-disable-next-line @next/next/no-img-element -- a signed-in API image, not a static asset */}
-                  <img src={photoImageUrl(p.id, 'thumbnail')} alt={p.caption || p.fileName} className="h-14 w-20 rounded object-cover" />
+                  {/* eslint-disable-next-line @next/next/no-img-element -- a signed-in API image, not static */}
+                  <img
+                    src={photoImageUrl(p.id, 'thumbnail')}
+                    alt={p.caption || p.fileName}
+                    className="h-14 w-20 rounded object-cover"
+                  />
                 </a>
               </td>
               <td className="px-4 py-2 font-medium text-creek-900">
@@ -135,10 +194,17 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
                     compact
                     onCommit={(v) => place(p, v)}
                   />
-                ) : p.chainageM === null ? '—' : formatQuantity('chainage', p.chainageM, units)}
+                ) : p.chainageM === null ? (
+                  '—'
+                ) : (
+                  formatQuantity('chainage', p.chainageM, units)
+                )}
                 <span className="block text-xs font-normal text-creek-600">{PLACEMENT[p.placement]}</span>
               </td>
-              <td className="px-4 py-2 text-creek-700">{p.offsetM === null ? '—' : formatQuantity('length', p.offsetM, units)}<span className="sr-only"> ({offLineWords(p, units)})</span></td>
+              <td className="px-4 py-2 text-creek-700">
+                {p.offsetM === null ? '—' : formatQuantity('length', p.offsetM, units)}
+                <span className="sr-only"> ({offLineWords(p, units)})</span>
+              </td>
               <td className="px-4 py-2 text-creek-700">{p.takenAt ? takenWords(p.takenAt) : '—'}</td>
               <td className="px-4 py-2 text-creek-700">
                 {editable ? (
@@ -150,11 +216,19 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
                     className="block w-full min-w-40 rounded-md border border-creek-200 px-2 py-1 text-sm"
                     onBlur={(e) => {
                       const caption = e.currentTarget.value.trim();
-                      if (caption !== p.caption) update.mutate({ photoId: p.id, caption }, { onError: (err) => setRowProblem(`${p.fileName}: ${err.message}`) });
+                      if (caption !== p.caption)
+                        update.mutate(
+                          { photoId: p.id, caption },
+                          { onError: (err) => setRowProblem(`${p.fileName}: ${err.message}`) },
+                        );
                     }}
-                    onKeyDown={(e) => { if (e.key === 'Enter') e.currentTarget.blur(); }}
+                    onKeyDown={(e) => {
+                      if (e.key === 'Enter') e.currentTarget.blur();
+                    }}
                   />
-                ) : p.caption && <span className="block text-creek-900">{p.caption}</span>}
+                ) : (
+                  p.caption && <span className="block text-creek-900">{p.caption}</span>
+                )}
                 <span className="block text-xs">{p.fileName}</span>
               </td>
               <td className="px-4 py-2">
@@ -168,7 +242,14 @@ export function RoutePhotos({ projectId, routeId, units, editable }: Props) {
               </td>
               {editable && (
                 <td className="px-4 py-2">
-                  <button type="button" className="text-xs text-clay-700 underline" disabled={remove.isPending} onClick={() => remove.mutate(p.id)}>Remove</button>
+                  <button
+                    type="button"
+                    className="text-xs text-clay-700 underline"
+                    disabled={remove.isPending}
+                    onClick={() => remove.mutate(p.id)}
+                  >
+                    Remove
+                  </button>
                 </td>
               )}
             </tr>

@@ -8,7 +8,13 @@ import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { LoadError } from '@/components/ui/load-error';
 import { HeadCell, TableFrame } from '@/components/ui/table-frame';
-import { draftRowsOf, newPriceRow, pipeLabelOf, priceListCandidate, type PriceRowDraft } from '@/lib/network/price-list-draft';
+import {
+  draftRowsOf,
+  newPriceRow,
+  pipeLabelOf,
+  priceListCandidate,
+  type PriceRowDraft,
+} from '@/lib/network/price-list-draft';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { priceListQuery, useSavePriceList } from '@/lib/queries/price-list';
 import { fieldErrorsOf } from '@/lib/validations/common';
@@ -53,26 +59,85 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
   const fieldError = (index: number, field: string) => errors[`items.${index}.${field}`];
   return (
     <div className="space-y-3">
-      <TableFrame head={<><HeadCell>Pipe</HeadCell><HeadCell>Cost per metre</HeadCell><HeadCell>Notes</HeadCell>{canEdit && <HeadCell><span className="sr-only">Remove</span></HeadCell>}</>}>
+      <TableFrame
+        head={
+          <>
+            <HeadCell>Pipe</HeadCell>
+            <HeadCell>Cost per metre</HeadCell>
+            <HeadCell>Notes</HeadCell>
+            {canEdit && (
+              <HeadCell>
+                <span className="sr-only">Remove</span>
+              </HeadCell>
+            )}
+          </>
+        }
+      >
         {rows.map((row, index) => (
-          <tr key={row.key} className="border-t border-creek-50 align-top" aria-label={`Price of ${pipeLabelOf(row.pipeId)}`}>
+          <tr
+            key={row.key}
+            className="border-t border-creek-50 align-top"
+            aria-label={`Price of ${pipeLabelOf(row.pipeId)}`}
+          >
             <td className="px-4 py-2">
-              {canEdit ? <PipePicker id={`price-${row.key}-pipe`} pipeId={row.pipeId} custom={[]} disabled={false} onPick={(pipeId) => change(row.key, { pipeId })} /> : pipeLabelOf(row.pipeId)}
-              {fieldError(index, 'pipeId') && <p role="alert" className="mt-0.5 text-xs font-medium text-clay-600">{fieldError(index, 'pipeId')!.join(' ')}</p>}
+              {canEdit ? (
+                <PipePicker
+                  id={`price-${row.key}-pipe`}
+                  pipeId={row.pipeId}
+                  custom={[]}
+                  disabled={false}
+                  onPick={(pipeId) => change(row.key, { pipeId })}
+                />
+              ) : (
+                pipeLabelOf(row.pipeId)
+              )}
+              {fieldError(index, 'pipeId') && (
+                <p role="alert" className="mt-0.5 text-xs font-medium text-clay-600">
+                  {fieldError(index, 'pipeId')!.join(' ')}
+                </p>
+              )}
             </td>
             <td className="px-4 py-2">
-              <UnitNumberInput id={`price-${row.key}-cost`} label={`Cost per metre of ${pipeLabelOf(row.pipeId)}`} unit="per m" compact digits={2}
-                value={row.costPerM} disabled={!canEdit} optional errors={fieldError(index, 'costPerM')}
-                onCommit={(value) => { change(row.key, { costPerM: value }); return null; }} />
+              <UnitNumberInput
+                id={`price-${row.key}-cost`}
+                label={`Cost per metre of ${pipeLabelOf(row.pipeId)}`}
+                unit="per m"
+                compact
+                digits={2}
+                value={row.costPerM}
+                disabled={!canEdit}
+                optional
+                errors={fieldError(index, 'costPerM')}
+                onCommit={(value) => {
+                  change(row.key, { costPerM: value });
+                  return null;
+                }}
+              />
             </td>
             <td className="px-4 py-2">
-              <input aria-label={`Notes on ${pipeLabelOf(row.pipeId)}`} value={row.notes} disabled={!canEdit} onChange={(e) => change(row.key, { notes: e.target.value })}
-                className="block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50" />
-              {fieldError(index, 'notes') && <p role="alert" className="mt-0.5 text-xs font-medium text-clay-600">{fieldError(index, 'notes')!.join(' ')}</p>}
+              <input
+                aria-label={`Notes on ${pipeLabelOf(row.pipeId)}`}
+                value={row.notes}
+                disabled={!canEdit}
+                onChange={(e) => change(row.key, { notes: e.target.value })}
+                className="block w-full rounded-md border border-creek-200 bg-white px-2 py-1 text-sm disabled:bg-creek-50"
+              />
+              {fieldError(index, 'notes') && (
+                <p role="alert" className="mt-0.5 text-xs font-medium text-clay-600">
+                  {fieldError(index, 'notes')!.join(' ')}
+                </p>
+              )}
             </td>
             {canEdit && (
               <td className="px-4 py-2">
-                <button type="button" className="text-xs text-clay-700 underline" onClick={() => { setDone(null); setRows((current) => current.filter((r) => r.key !== row.key)); }}>
+                <button
+                  type="button"
+                  className="text-xs text-clay-700 underline"
+                  onClick={() => {
+                    setDone(null);
+                    setRows((current) => current.filter((r) => r.key !== row.key));
+                  }}
+                >
                   Remove
                 </button>
               </td>
@@ -84,9 +149,24 @@ function PriceTable({ teamId, initial, canEdit }: { teamId: string; initial: Pri
       {errors.items && <FormMessage message={errors.items.join(' ')} />}
       {canEdit && (
         <div className="flex flex-wrap items-center gap-3">
-          <Button tone="quiet" onClick={() => { setDone(null); added.current += 1; const serial = added.current; setRows((current) => [...current, newPriceRow(current, serial)]); }}>Add a pipe</Button>
-          <Button onClick={submit} disabled={save.isPending}>Save the price list</Button>
-          <FormMessage message={save.error && !Object.keys(errors).length ? save.error.message : done} tone={save.error && !done ? 'error' : 'ok'} />
+          <Button
+            tone="quiet"
+            onClick={() => {
+              setDone(null);
+              added.current += 1;
+              const serial = added.current;
+              setRows((current) => [...current, newPriceRow(current, serial)]);
+            }}
+          >
+            Add a pipe
+          </Button>
+          <Button onClick={submit} disabled={save.isPending}>
+            Save the price list
+          </Button>
+          <FormMessage
+            message={save.error && !Object.keys(errors).length ? save.error.message : done}
+            tone={save.error && !done ? 'error' : 'ok'}
+          />
         </div>
       )}
     </div>

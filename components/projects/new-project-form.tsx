@@ -18,7 +18,11 @@ export function NewProjectForm({ teamId }: { teamId: string }) {
     event.preventDefault();
     const formElement = event.currentTarget;
     const form = new FormData(formElement);
-    const input = check(CreateProjectSchema, { name: form.get('name'), description: form.get('description'), unitSystem: form.get('unitSystem') });
+    const input = check(CreateProjectSchema, {
+      name: form.get('name'),
+      description: form.get('description'),
+      unitSystem: form.get('unitSystem'),
+    });
     if (!input) return;
     try {
       const project = await create.mutateAsync(input);
@@ -32,13 +36,22 @@ export function NewProjectForm({ teamId }: { teamId: string }) {
   return (
     <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-[2fr_3fr_1fr_auto] sm:items-end" noValidate>
       <TextField id="name" label="Name" placeholder="e.g. Upper spring line" errors={fields.name} required />
-      <TextField id="description" label="Description" placeholder="What this system supplies" errors={fields.description} />
+      <TextField
+        id="description"
+        label="Description"
+        placeholder="What this system supplies"
+        errors={fields.description}
+      />
       <SelectField id="unitSystem" label="Units" defaultValue="metric" errors={fields.unitSystem}>
         <option value="metric">Metric</option>
         <option value="us">US customary</option>
       </SelectField>
-      <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Creating…' : 'Create project'}</Button>
-      <div className="sm:col-span-4"><FormMessage message={message} /></div>
+      <Button type="submit" disabled={create.isPending}>
+        {create.isPending ? 'Creating…' : 'Create project'}
+      </Button>
+      <div className="sm:col-span-4">
+        <FormMessage message={message} />
+      </div>
     </form>
   );
 }

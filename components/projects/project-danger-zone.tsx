@@ -8,7 +8,11 @@ import { Panel } from '@/components/ui/panel';
 import type { ProjectSummary } from '@/lib/data/projects';
 import { useDeleteProject, useUpdateProject } from '@/lib/queries/projects';
 
-interface Props { project: ProjectSummary; canArchive: boolean; canDelete: boolean }
+interface Props {
+  project: ProjectSummary;
+  canArchive: boolean;
+  canDelete: boolean;
+}
 
 export function ProjectDangerZone({ project, canArchive, canDelete }: Props) {
   const router = useRouter();
@@ -52,8 +56,16 @@ export function ProjectDangerZone({ project, canArchive, canDelete }: Props) {
             <label htmlFor="confirm-delete" className="block font-medium text-clay-700">
               Delete for good: type the project name, <strong>{project.name}</strong>, to confirm
             </label>
-            <input id="confirm-delete" value={confirmName} onChange={(e) => setConfirmName(e.target.value)} className="w-full max-w-sm rounded-md border border-clay-100 px-3 py-1.5" autoComplete="off" />
-            <Button type="submit" tone="danger" disabled={confirmName !== project.name || remove.isPending}>Delete project</Button>
+            <input
+              id="confirm-delete"
+              value={confirmName}
+              onChange={(e) => setConfirmName(e.target.value)}
+              className="w-full max-w-sm rounded-md border border-clay-100 px-3 py-1.5"
+              autoComplete="off"
+            />
+            <Button type="submit" tone="danger" disabled={confirmName !== project.name || remove.isPending}>
+              Delete project
+            </Button>
           </form>
         )}
         <FormMessage message={error} />

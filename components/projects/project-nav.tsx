@@ -23,7 +23,10 @@ export function ProjectNav({ projectId, role }: { projectId: string; role: Role 
   const pathname = usePathname();
   const base = `/projects/${projectId}`;
   return (
-    <nav aria-label="Project sections" className="-mx-1 flex gap-1 overflow-x-auto border-b border-creek-100 pb-px text-sm">
+    <nav
+      aria-label="Project sections"
+      className="-mx-1 flex gap-1 overflow-x-auto border-b border-creek-100 pb-px text-sm"
+    >
       {PROJECT_SECTIONS.filter((s) => !s.needs || can(role, s.needs)).map((s) => {
         const href = `${base}${s.path}`;
         const active = s.path === '' ? pathname === base : pathname.startsWith(href);

@@ -1,12 +1,17 @@
 const UPCOMING = [
-  { title: 'Bill of materials', text: 'One list of pipe by size and class, fittings and devices, with quantities and prices from the lines and the network.' },
+  {
+    title: 'Bill of materials',
+    text: 'One list of pipe by size and class, fittings and devices, with quantities and prices from the lines and the network.',
+  },
 ];
 
 /** Capabilities still being built, labelled as such rather than faked. */
 export function UpcomingSections() {
   return (
     <section aria-labelledby="upcoming-heading">
-      <h2 id="upcoming-heading" className="mb-2 text-base font-semibold text-creek-900">Coming to this project</h2>
+      <h2 id="upcoming-heading" className="mb-2 text-base font-semibold text-creek-900">
+        Coming to this project
+      </h2>
       <div className="grid gap-3 sm:grid-cols-2">
         {UPCOMING.map((s) => (
           <div key={s.title} className="rounded-lg border border-dashed border-creek-200 bg-creek-50/40 p-4">

@@ -19,9 +19,15 @@ export function NewRevisionForm({ projectId }: { projectId: string }) {
     const data = new FormData(form);
     setMessage(null);
     try {
-      const made = await create.mutateAsync({ note: String(data.get('note') ?? ''), submit: data.get('submit') === 'on' });
+      const made = await create.mutateAsync({
+        note: String(data.get('note') ?? ''),
+        submit: data.get('submit') === 'on',
+      });
       setFields({});
-      setMessage({ text: `Revision ${made.number} made${made.status === 'submitted' ? ' and submitted for review' : ''}.`, tone: 'ok' });
+      setMessage({
+        text: `Revision ${made.number} made${made.status === 'submitted' ? ' and submitted for review' : ''}.`,
+        tone: 'ok',
+      });
       form.reset();
     } catch (error) {
       setFields(error instanceof ApiError ? (error.fields ?? {}) : {});
@@ -36,10 +42,15 @@ export function NewRevisionForm({ projectId }: { projectId: string }) {
         <input type="checkbox" name="submit" defaultChecked /> Submit for review at once
       </label>
       <div className="flex items-center gap-3">
-        <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Freezing the design…' : 'Make a revision'}</Button>
+        <Button type="submit" disabled={create.isPending}>
+          {create.isPending ? 'Freezing the design…' : 'Make a revision'}
+        </Button>
         <FormMessage message={message?.text} tone={message?.tone} />
       </div>
-      <p className="text-xs text-creek-700">A revision freezes every line (with its route&apos;s cleaned stations), the ram sites, tanks, sources and demand as they are now. Later edits change only the working copy.</p>
+      <p className="text-xs text-creek-700">
+        A revision freezes every line (with its route&apos;s cleaned stations), the ram sites, tanks, sources and demand
+        as they are now. Later edits change only the working copy.
+      </p>
     </form>
   );
 }

@@ -21,8 +21,19 @@ export interface RevisionSchematicProps {
   onPickPin: (commentId: string) => void;
 }
 
-/** A revision's network as it was frozen, drawn by the one schematic scene, with comment pins; click a part to pin a comment on it. */
-export function RevisionSchematic({ view, solve, units, pins, selectedPartId, onPickPart, onPickPin }: RevisionSchematicProps) {
+/**
+ * A revision's network as it was frozen, drawn by the one schematic scene, with comment pins; click a part to pin a
+ * comment on it.
+ */
+export function RevisionSchematic({
+  view,
+  solve,
+  units,
+  pins,
+  selectedPartId,
+  onPickPart,
+  onPickPin,
+}: RevisionSchematicProps) {
   const layout = useMemo(() => layoutNetwork(view), [view]);
   const scene = useMemo(
     () => buildNetworkScene({ view, layout, solve, units, width: 960, height: 540, selectedId: selectedPartId, pins }),

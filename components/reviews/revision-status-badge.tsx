@@ -10,5 +10,13 @@ const COLOURS: Record<RevisionStatus, string> = {
 };
 
 export function RevisionStatusBadge({ status }: { status: RevisionStatus }) {
-  return <span data-testid="revision-status" data-status={status} className={`inline-block rounded-full px-2 py-0.5 text-xs font-medium ${COLOURS[status]}`}>{REVISION_STATUS_LABELS[status]}</span>;
+  return (
+    <span
+      data-testid="revision-status"
+      data-status={status}
+      className={`inline-block rounded-full px-2 py-0.5 text-xs font-medium ${COLOURS[status]}`}
+    >
+      {REVISION_STATUS_LABELS[status]}
+    </span>
+  );
 }

@@ -30,9 +30,16 @@ export function NewSketchRouteForm({ projectId }: { projectId: string }) {
   return (
     <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3" noValidate>
       <div className="w-72 max-w-full">
-        <TextField id="sketch-name" label="Name of the new route" placeholder="e.g. Tank to lower trough" errors={fields.name} />
+        <TextField
+          id="sketch-name"
+          label="Name of the new route"
+          placeholder="e.g. Tank to lower trough"
+          errors={fields.name}
+        />
       </div>
-      <Button type="submit" tone="quiet" disabled={create.isPending}>{create.isPending ? 'Creating…' : 'Start an empty route'}</Button>
+      <Button type="submit" tone="quiet" disabled={create.isPending}>
+        {create.isPending ? 'Creating…' : 'Start an empty route'}
+      </Button>
       <FormMessage message={message} />
     </form>
   );

@@ -31,7 +31,9 @@ export function TeamSwitcher({ current, teams }: { current: TeamSummary; teams: 
         }}
       >
         {teams.map((t) => (
-          <option key={t.id} value={t.id}>{t.name}</option>
+          <option key={t.id} value={t.id}>
+            {t.name}
+          </option>
         ))}
       </select>
     </label>

@@ -21,12 +21,23 @@ export function UserMenu({ name, email }: { name: string; email: string }) {
         {name} <span aria-hidden>▾</span>
       </button>
       {open && (
-        <div id="account-menu" className="absolute right-0 z-20 mt-2 w-60 rounded-md border border-creek-100 bg-white p-2 text-sm text-creek-900 shadow-lg">
+        <div
+          id="account-menu"
+          className="absolute right-0 z-20 mt-2 w-60 rounded-md border border-creek-100 bg-white p-2 text-sm text-creek-900 shadow-lg"
+        >
           <p className="truncate px-2 py-1 text-xs text-creek-600">{email}</p>
-          <Link href="/account" className="block w-full rounded px-2 py-1.5 text-left hover:bg-creek-50" onClick={() => setOpen(false)}>
+          <Link
+            href="/account"
+            className="block w-full rounded px-2 py-1.5 text-left hover:bg-creek-50"
+            onClick={() => setOpen(false)}
+          >
             Password and notifications
           </Link>
-          <button type="button" className="block w-full rounded px-2 py-1.5 text-left hover:bg-creek-50" onClick={() => signOut({ callbackUrl: '/sign-in' })}>
+          <button
+            type="button"
+            className="block w-full rounded px-2 py-1.5 text-left hover:bg-creek-50"
+            onClick={() => signOut({ callbackUrl: '/sign-in' })}
+          >
             Sign out
           </button>
           <button

@@ -60,8 +60,15 @@ export function AcceptInvitation({ token, email, signedInAs }: Props) {
   if (signedInAs && signedInAs !== email) {
     return (
       <div className="space-y-3 text-sm text-creek-800">
-        <p role="alert">You are signed in as <strong>{signedInAs}</strong>, but this invitation is for <strong>{email}</strong>.</p>
-        <Button tone="quiet" onClick={() => signOut({ callbackUrl: `/invitations/accept?token=${encodeURIComponent(token)}` })}>Sign out and continue</Button>
+        <p role="alert">
+          You are signed in as <strong>{signedInAs}</strong>, but this invitation is for <strong>{email}</strong>.
+        </p>
+        <Button
+          tone="quiet"
+          onClick={() => signOut({ callbackUrl: `/invitations/accept?token=${encodeURIComponent(token)}` })}
+        >
+          Sign out and continue
+        </Button>
       </div>
     );
   }
@@ -70,7 +77,9 @@ export function AcceptInvitation({ token, email, signedInAs }: Props) {
     return (
       <div className="space-y-4">
         <FormMessage message={message} />
-        <Button className="w-full" onClick={joinSignedIn} disabled={accept.isPending}>{accept.isPending ? 'Joining…' : 'Join the team'}</Button>
+        <Button className="w-full" onClick={joinSignedIn} disabled={accept.isPending}>
+          {accept.isPending ? 'Joining…' : 'Join the team'}
+        </Button>
       </div>
     );
   }
@@ -82,11 +91,25 @@ export function AcceptInvitation({ token, email, signedInAs }: Props) {
         <FormMessage message={message} />
         <TextField id="invited-email" label="E-mail" type="email" value={email} readOnly />
         <TextField id="name" label="Your name" autoComplete="name" errors={fields.name} required />
-        <TextField id="password" label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters; a long passphrase is best." errors={fields.password} required />
-        <Button type="submit" className="w-full" disabled={accept.isPending}>{accept.isPending ? 'Joining…' : 'Create my account and join'}</Button>
+        <TextField
+          id="password"
+          label="Choose a password"
+          type="password"
+          autoComplete="new-password"
+          hint="At least 10 characters; a long passphrase is best."
+          errors={fields.password}
+          required
+        />
+        <Button type="submit" className="w-full" disabled={accept.isPending}>
+          {accept.isPending ? 'Joining…' : 'Create my account and join'}
+        </Button>
       </form>
       <p className="text-sm text-creek-700">
-        Already have a Runnel account with this address? <a className="font-medium text-creek-600 underline" href={signInHref}>Sign in</a>, then join.
+        Already have a Runnel account with this address?{' '}
+        <a className="font-medium text-creek-600 underline" href={signInHref}>
+          Sign in
+        </a>
+        , then join.
       </p>
     </div>
   );

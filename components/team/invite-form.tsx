@@ -34,9 +34,15 @@ export function InviteForm({ teamId }: { teamId: string }) {
     <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-[3fr_2fr_auto] sm:items-end" noValidate>
       <TextField id="email" label="E-mail address" type="email" errors={fields.email} required />
       <SelectField id="role" label="Role" defaultValue="viewer" errors={fields.role}>
-        {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+        {ROLES.map((r) => (
+          <option key={r} value={r}>
+            {ROLE_LABELS[r]}
+          </option>
+        ))}
       </SelectField>
-      <Button type="submit" disabled={invite.isPending}>{invite.isPending ? 'Sending…' : 'Send invitation'}</Button>
+      <Button type="submit" disabled={invite.isPending}>
+        {invite.isPending ? 'Sending…' : 'Send invitation'}
+      </Button>
       <div className="sm:col-span-3">
         <FormMessage message={message} />
         <FormMessage tone="ok" message={sent} />

@@ -14,7 +14,15 @@ function fieldErrorOf(error: unknown): string[] | undefined {
 }
 
 /** Rename the current team (owners) and start another team (anyone; they become its owner). */
-export function TeamSettings({ teamId, teamName, canRename }: { teamId: string; teamName: string; canRename: boolean }) {
+export function TeamSettings({
+  teamId,
+  teamName,
+  canRename,
+}: {
+  teamId: string;
+  teamName: string;
+  canRename: boolean;
+}) {
   const router = useRouter();
   const rename = useRenameTeam(teamId);
   const create = useCreateTeam();
@@ -23,7 +31,13 @@ export function TeamSettings({ teamId, teamName, canRename }: { teamId: string; 
   async function onRename(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const name = String(new FormData(event.currentTarget).get('teamName') ?? '');
-    await rename.mutateAsync(name).then(() => { setStatus('Team renamed.'); router.refresh(); }).catch(() => undefined);
+    await rename
+      .mutateAsync(name)
+      .then(() => {
+        setStatus('Team renamed.');
+        router.refresh();
+      })
+      .catch(() => undefined);
   }
 
   async function onCreate(event: FormEvent<HTMLFormElement>) {
@@ -39,14 +53,30 @@ export function TeamSettings({ teamId, teamName, canRename }: { teamId: string; 
     <div className="grid gap-6 sm:grid-cols-2">
       {canRename && (
         <form onSubmit={onRename} className="space-y-3" noValidate>
-          <TextField id="teamName" label="Team name" defaultValue={teamName} errors={fieldErrorOf(rename.error)} required />
-          <Button type="submit" tone="quiet" disabled={rename.isPending}>Rename team</Button>
+          <TextField
+            id="teamName"
+            label="Team name"
+            defaultValue={teamName}
+            errors={fieldErrorOf(rename.error)}
+            required
+          />
+          <Button type="submit" tone="quiet" disabled={rename.isPending}>
+            Rename team
+          </Button>
           <FormMessage message={status} tone="ok" />
         </form>
       )}
       <form onSubmit={onCreate} className="space-y-3" noValidate>
-        <TextField id="newTeamName" label="Start another team" placeholder="e.g. Valley water co-op" errors={fieldErrorOf(create.error)} required />
-        <Button type="submit" tone="quiet" disabled={create.isPending}>Create team and switch to it</Button>
+        <TextField
+          id="newTeamName"
+          label="Start another team"
+          placeholder="e.g. Valley water co-op"
+          errors={fieldErrorOf(create.error)}
+          required
+        />
+        <Button type="submit" tone="quiet" disabled={create.isPending}>
+          Create team and switch to it
+        </Button>
       </form>
     </div>
   );

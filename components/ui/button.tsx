@@ -18,7 +18,11 @@ const noSubscription = () => () => {};
 
 /** False in the server's HTML and during hydration, true once React owns the page. */
 function useHydrated(): boolean {
-  return useSyncExternalStore(noSubscription, () => true, () => false);
+  return useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
 }
 
 export function Button({ tone = 'primary', className = '', type = 'button', disabled, ...rest }: ButtonProps) {

@@ -80,11 +80,17 @@ function ConfirmDialog({ request, onClose }: { request: ConfirmRequest; onClose:
       className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-lg border border-creek-200 bg-white p-0 text-creek-900 shadow-xl backdrop:bg-creek-950/40"
     >
       <div className="space-y-3 p-5">
-        <h2 id="confirm-dialog-title" className="text-lg font-semibold">{request.title}</h2>
-        <div id="confirm-dialog-body" className="space-y-2 text-sm text-creek-800">{request.body}</div>
+        <h2 id="confirm-dialog-title" className="text-lg font-semibold">
+          {request.title}
+        </h2>
+        <div id="confirm-dialog-body" className="space-y-2 text-sm text-creek-800">
+          {request.body}
+        </div>
         <FormMessage message={error} />
         <div className="flex flex-wrap justify-end gap-2 pt-1">
-          <Button tone="quiet" autoFocus disabled={busy} onClick={onClose}>Cancel</Button>
+          <Button tone="quiet" autoFocus disabled={busy} onClick={onClose}>
+            Cancel
+          </Button>
           <Button tone={request.tone ?? 'danger'} disabled={busy} onClick={() => void confirm()}>
             {busy ? 'Working…' : request.confirmLabel}
           </Button>

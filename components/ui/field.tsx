@@ -19,7 +19,11 @@ export function FieldShell({ id, label, hint, errors, children }: FieldShellProp
         {label}
       </label>
       {children}
-      {hint && !errors?.length && <p id={`${id}-hint`} className="mt-1 text-xs text-creek-600">{hint}</p>}
+      {hint && !errors?.length && (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-creek-600">
+          {hint}
+        </p>
+      )}
       {errors && errors.length > 0 && (
         <p id={`${id}-error`} role="alert" className="mt-1 text-xs font-medium text-clay-600">
           {errors.join(' ')}
@@ -39,23 +43,57 @@ type Common = { id: string; label: string; hint?: string; errors?: string[] };
 export function TextField({ id, label, hint, errors, ...input }: Common & InputHTMLAttributes<HTMLInputElement>) {
   return (
     <FieldShell id={id} label={label} hint={hint} errors={errors}>
-      <input id={id} name={id} className={CONTROL} aria-invalid={errors?.length ? true : undefined} aria-describedby={describedBy(id, hint, errors)} {...input} />
+      <input
+        id={id}
+        name={id}
+        className={CONTROL}
+        aria-invalid={errors?.length ? true : undefined}
+        aria-describedby={describedBy(id, hint, errors)}
+        {...input}
+      />
     </FieldShell>
   );
 }
 
-export function TextAreaField({ id, label, hint, errors, ...input }: Common & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+export function TextAreaField({
+  id,
+  label,
+  hint,
+  errors,
+  ...input
+}: Common & TextareaHTMLAttributes<HTMLTextAreaElement>) {
   return (
     <FieldShell id={id} label={label} hint={hint} errors={errors}>
-      <textarea id={id} name={id} className={CONTROL} aria-invalid={errors?.length ? true : undefined} aria-describedby={describedBy(id, hint, errors)} {...input} />
+      <textarea
+        id={id}
+        name={id}
+        className={CONTROL}
+        aria-invalid={errors?.length ? true : undefined}
+        aria-describedby={describedBy(id, hint, errors)}
+        {...input}
+      />
     </FieldShell>
   );
 }
 
-export function SelectField({ id, label, hint, errors, children, ...input }: Common & SelectHTMLAttributes<HTMLSelectElement>) {
+export function SelectField({
+  id,
+  label,
+  hint,
+  errors,
+  children,
+  ...input
+}: Common & SelectHTMLAttributes<HTMLSelectElement>) {
   return (
     <FieldShell id={id} label={label} hint={hint} errors={errors}>
-      <select id={id} name={id} className={CONTROL} aria-invalid={errors?.length ? true : undefined} aria-describedby={describedBy(id, hint, errors)} {...input}>
+      <select
+        id={id}
+        name={id}
+        className={CONTROL}
+        aria-invalid={errors?.length ? true : undefined}
+        aria-describedby={describedBy(id, hint, errors)}
+        {...input}
+      >
         {children}
       </select>
     </FieldShell>

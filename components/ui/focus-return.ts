@@ -6,17 +6,26 @@ export interface FocusMemory {
   row: { list: HTMLElement; index: number; control: number } | null;
 }
 
-const CONTROLS = 'button:not([disabled]), a[href], input:not([disabled]), select:not([disabled]), textarea:not([disabled])';
+const CONTROLS =
+  'button:not([disabled]), a[href], input:not([disabled]), select:not([disabled]), textarea:not([disabled])';
 
-export function rememberFocus(from: Element | null = typeof document === 'undefined' ? null : document.activeElement): FocusMemory {
+export function rememberFocus(
+  from: Element | null = typeof document === 'undefined' ? null : document.activeElement,
+): FocusMemory {
   const target = from instanceof HTMLElement && from !== document.body ? from : null;
   const ancestors: HTMLElement[] = [];
-  for (let node = target?.parentElement ?? null; node && node !== document.body; node = node.parentElement) ancestors.push(node);
+  for (let node = target?.parentElement ?? null; node && node !== document.body; node = node.parentElement)
+    ancestors.push(node);
   const rowElement = target?.closest('tr, li') as HTMLElement | null;
   const list = rowElement?.parentElement ?? null;
-  const row = rowElement && list
-    ? { list, index: [...list.children].indexOf(rowElement), control: [...rowElement.querySelectorAll(CONTROLS)].indexOf(target!) }
-    : null;
+  const row =
+    rowElement && list
+      ? {
+          list,
+          index: [...list.children].indexOf(rowElement),
+          control: [...rowElement.querySelectorAll(CONTROLS)].indexOf(target!),
+        }
+      : null;
   return { target, ancestors, row };
 }
 

@@ -2,7 +2,10 @@
 export function LoadError({ what, onRetry }: { what: string; onRetry: () => void }) {
   return (
     <p role="alert" className="text-sm text-clay-700">
-      {what} could not be loaded. <button type="button" className="underline" onClick={onRetry}>Try again</button>
+      {what} could not be loaded.{' '}
+      <button type="button" className="underline" onClick={onRetry}>
+        Try again
+      </button>
     </p>
   );
 }

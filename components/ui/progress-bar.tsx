@@ -15,8 +15,18 @@ export function ProgressBar({ label, fraction, detail }: ProgressBarProps) {
         <span>{detail ?? label}</span>
         <span className="tabular">{percent} %</span>
       </div>
-      <div role="progressbar" aria-label={label} aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} className="h-2.5 overflow-hidden rounded-full bg-creek-100">
-        <div className="h-full rounded-full bg-creek-600 transition-[width] duration-150" style={{ width: `${percent}%` }} />
+      <div
+        role="progressbar"
+        aria-label={label}
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={percent}
+        className="h-2.5 overflow-hidden rounded-full bg-creek-100"
+      >
+        <div
+          className="h-full rounded-full bg-creek-600 transition-[width] duration-150"
+          style={{ width: `${percent}%` }}
+        />
       </div>
     </div>
   );

@@ -9,5 +9,9 @@ const COLOURS: Record<Role, string> = {
 };
 
 export function RoleBadge({ role }: { role: Role }) {
-  return <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-medium ${COLOURS[role]}`}>{ROLE_LABELS[role]}</span>;
+  return (
+    <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-medium ${COLOURS[role]}`}>
+      {ROLE_LABELS[role]}
+    </span>
+  );
 }

@@ -4,7 +4,15 @@ import type { ReactNode } from 'react';
  * The sideways-scrolling frame around every table: a labelled region that takes keyboard focus, so a
  * keyboard user can scroll a table wider than a phone (WCAG 2.1.1).
  */
-export function ScrollFrame({ label, dense = false, children }: { label: string; dense?: boolean; children: ReactNode }) {
+export function ScrollFrame({
+  label,
+  dense = false,
+  children,
+}: {
+  label: string;
+  dense?: boolean;
+  children: ReactNode;
+}) {
   return (
     <div
       role="region"
@@ -21,7 +29,15 @@ export function ScrollFrame({ label, dense = false, children }: { label: string;
  * The frame every list table shares: scrolls sideways on a phone (relative, so screen-reader-only
  * text inside cannot widen the page) with Runnel's header row. `head` is the header cells.
  */
-export function TableFrame({ head, children, label = 'Table' }: { head: ReactNode; children: ReactNode; label?: string }) {
+export function TableFrame({
+  head,
+  children,
+  label = 'Table',
+}: {
+  head: ReactNode;
+  children: ReactNode;
+  label?: string;
+}) {
   return (
     <ScrollFrame label={label}>
       <table className="w-full text-left text-sm">
@@ -36,5 +52,9 @@ export function TableFrame({ head, children, label = 'Table' }: { head: ReactNod
 
 /** A plain header cell. */
 export function HeadCell({ children }: { children: ReactNode }) {
-  return <th scope="col" className="px-4 py-2 font-medium">{children}</th>;
+  return (
+    <th scope="col" className="px-4 py-2 font-medium">
+      {children}
+    </th>
+  );
 }

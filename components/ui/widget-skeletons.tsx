@@ -6,12 +6,22 @@ import { Skeleton } from './panel';
  * items (comments, switches), a row of thumbnails. Widgets of their own shape (the lift page, the
  * line editor, the route page) keep a skeleton beside them built from the same `Skeleton`.
  */
-export function TableSkeleton({ label, rows = 3, heading = false }: { label: string; rows?: number; heading?: boolean }) {
+export function TableSkeleton({
+  label,
+  rows = 3,
+  heading = false,
+}: {
+  label: string;
+  rows?: number;
+  heading?: boolean;
+}) {
   return (
     <div className="space-y-3" aria-busy="true" aria-label={label}>
       {heading && <Skeleton className="h-8 w-48" />}
       <Skeleton className="h-10 w-full" />
-      {Array.from({ length: rows }, (_, i) => <Skeleton key={i} className="h-12 w-full" />)}
+      {Array.from({ length: rows }, (_, i) => (
+        <Skeleton key={i} className="h-12 w-full" />
+      ))}
     </div>
   );
 }
@@ -36,7 +46,11 @@ export function ThumbnailsSkeleton({ label, count = 4 }: { label: string; count?
   return (
     <div className="space-y-3" aria-busy="true" aria-label={label}>
       <Skeleton className="h-9 w-64" />
-      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">{Array.from({ length: count }, (_, i) => <Skeleton key={i} className="aspect-[4/3] w-full" />)}</div>
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        {Array.from({ length: count }, (_, i) => (
+          <Skeleton key={i} className="aspect-[4/3] w-full" />
+        ))}
+      </div>
     </div>
   );
 }

@@ -62,7 +62,10 @@ export function ratingReferenceTemperatureC(spec: Pick<PipeSpec, 'source'>): num
 
 /** Options for {@link plasticDeratingFactor}. */
 export interface PlasticDeratingOptions {
-  /** Pipe wall temperature, °C, from 0 to the end of the table (PVC ≈60 °C for an ASTM rating; PE 40 °C for an ISO rating). */
+  /**
+   * Pipe wall temperature, °C, from 0 to the end of the table (PVC ≈60 °C for an ASTM rating; PE 40 °C for an ISO
+   * rating).
+   */
   temperatureC: number;
   /** Temperature the rating was printed for, °C. @default the table's own (PVC 23, PE 20) */
   referenceTemperatureC?: number;
@@ -71,13 +74,23 @@ export interface PlasticDeratingOptions {
 }
 
 /** Fraction (0-1] of the printed rating a plastic pipe keeps at `temperatureC`. */
-export function plasticDeratingFactor({ temperatureC, referenceTemperatureC, table = 'pvc' }: PlasticDeratingOptions): number {
+export function plasticDeratingFactor({
+  temperatureC,
+  referenceTemperatureC,
+  table = 'pvc',
+}: PlasticDeratingOptions): number {
   const { pointsC, referenceC } = TABLES[table];
   const reference = referenceTemperatureC ?? referenceC;
   assertInRange(reference, 'referenceTemperatureC', 0, ASTM_REFERENCE_C, '°C');
   const shiftC = referenceC - reference;
   const endC = pointsC[pointsC.length - 1][0];
-  assertInRange(temperatureC, 'temperatureC', 0, endC - shiftC, '°C (the end of the derating table for this pipe and rating temperature)');
+  assertInRange(
+    temperatureC,
+    'temperatureC',
+    0,
+    endC - shiftC,
+    '°C (the end of the derating table for this pipe and rating temperature)',
+  );
   const equivalentC = temperatureC + shiftC;
   if (equivalentC <= pointsC[0][0]) return 1;
   for (let i = 1; i < pointsC.length; i += 1) {
@@ -101,6 +114,10 @@ export function deratedPressureRatingPa(spec: PipeSpec, temperatureC: number): n
   if (spec.material === 'steel') return spec.pressureRatingPa;
   // PE follows its own standard's factors; PVC and pipes of unknown plastic the harsher PVC table.
   const table: DeratingTable = spec.material === 'pe' ? 'pe' : 'pvc';
-  const factor = plasticDeratingFactor({ temperatureC, referenceTemperatureC: ratingReferenceTemperatureC(spec), table });
+  const factor = plasticDeratingFactor({
+    temperatureC,
+    referenceTemperatureC: ratingReferenceTemperatureC(spec),
+    table,
+  });
   return spec.pressureRatingPa * factor;
 }

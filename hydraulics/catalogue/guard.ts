@@ -31,7 +31,14 @@ export function assertPipeSpec(value: unknown, field = 'pipe', index?: number): 
   if (!MATERIALS.includes(spec.material as PipeMaterial)) {
     throw new HydraulicsInputError(at('material'), `must be one of ${MATERIALS.join(', ')}`, index);
   }
-  for (const name of ['outsideDiameterM', 'insideDiameterM', 'wallM', 'pressureRatingPa', 'hazenWilliamsC', 'waveSpeedMs'] as const) {
+  for (const name of [
+    'outsideDiameterM',
+    'insideDiameterM',
+    'wallM',
+    'pressureRatingPa',
+    'hazenWilliamsC',
+    'waveSpeedMs',
+  ] as const) {
     assertPositive(spec[name], at(name), index);
   }
   assertNonNegative(spec.roughnessM, at('roughnessM'), index);
@@ -43,13 +50,21 @@ export function assertPipeSpec(value: unknown, field = 'pipe', index?: number): 
     throw new HydraulicsInputError(at('insideDiameterM'), 'must be less than the outside diameter', index);
   }
   if (inside + 2 * wall > outside * (1 + DIAMETER_TOLERANCE)) {
-    throw new HydraulicsInputError(at('wallM'), 'must be at most half the outside diameter less the inside diameter', index);
+    throw new HydraulicsInputError(
+      at('wallM'),
+      'must be at most half the outside diameter less the inside diameter',
+      index,
+    );
   }
   if ((spec.hazenWilliamsC as number) > MAX_HAZEN_WILLIAMS_C) {
     throw new HydraulicsInputError(at('hazenWilliamsC'), `must be at most ${MAX_HAZEN_WILLIAMS_C}`, index);
   }
   if ((spec.roughnessM as number) > MAX_RELATIVE_ROUGHNESS * inside) {
-    throw new HydraulicsInputError(at('roughnessM'), `must be at most ${MAX_RELATIVE_ROUGHNESS} × the inside diameter`, index);
+    throw new HydraulicsInputError(
+      at('roughnessM'),
+      `must be at most ${MAX_RELATIVE_ROUGHNESS} × the inside diameter`,
+      index,
+    );
   }
   if ((spec.waveSpeedMs as number) > MAX_WAVE_SPEED_MS) {
     throw new HydraulicsInputError(at('waveSpeedMs'), `must be at most ${MAX_WAVE_SPEED_MS} m/s`, index);

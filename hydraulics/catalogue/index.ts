@@ -1,12 +1,7 @@
 import { PE_D2239_SIDRS } from './data/pe-d2239';
 import { PE_ISO4427_SDRS } from './data/pe-iso4427';
 import { PVC_D2241_SDRS } from './data/pvc-d2241';
-import {
-  buildPeD2239Series,
-  buildPeIso4427Series,
-  buildPvcD2241Series,
-  buildSteelSch40Series,
-} from './build-series';
+import { buildPeD2239Series, buildPeIso4427Series, buildPvcD2241Series, buildSteelSch40Series } from './build-series';
 import type { PipeSeries } from './pipe-series';
 import type { PipeSpec } from './pipe-spec';
 

@@ -67,8 +67,10 @@ export const MATERIAL_GRADES = {
     roughnessM: 0.15e-3,
     elasticModulusPa: 207e9,
     sources: {
-      hazenWilliamsC: 'Boesch Engineering C-factor table: galvanized iron 110 [R19] (120 is often quoted; the lower value is kept)',
-      roughnessM: 'Idelchik, Handbook of Hydraulic Resistance, 4th ed.: ordinary galvanization 0.10-0.15 mm (via fluids [R16]); upper value',
+      hazenWilliamsC:
+        'Boesch Engineering C-factor table: galvanized iron 110 [R19] (120 is often quoted; the lower value is kept)',
+      roughnessM:
+        'Idelchik, Handbook of Hydraulic Resistance, 4th ed.: ordinary galvanization 0.10-0.15 mm (via fluids [R16]); upper value',
       elasticModulusPa: '207 GPa, from memory (core.md §5 [M])',
     },
   },

@@ -14,7 +14,11 @@ interface Neighbourhood {
 }
 
 /** Each turning point with the chainages of the turning points (or line ends) either side. */
-function neighbourhoods(points: readonly number[], others: readonly number[], chainageM: Float64Array): Neighbourhood[] {
+function neighbourhoods(
+  points: readonly number[],
+  others: readonly number[],
+  chainageM: Float64Array,
+): Neighbourhood[] {
   const all = [...points, ...others].sort((a, b) => a - b);
   const lastM = chainageM[chainageM.length - 1];
   const rank = new Map(all.map((point, i) => [point, i]));
@@ -44,7 +48,8 @@ function isCovered(
   const { chainageM, pipeElevationM } = profile.points;
   const z = pipeElevationM[spot.point];
   return devices.some((device) => {
-    if (!kinds.includes(device.kind) || device.chainageM <= spot.beforeM || device.chainageM >= spot.afterM) return false;
+    if (!kinds.includes(device.kind) || device.chainageM <= spot.beforeM || device.chainageM >= spot.afterM)
+      return false;
     const zDevice = valueAtChainage(chainageM, pipeElevationM, device.chainageM);
     return summit ? zDevice >= z - toleranceM : zDevice <= z + toleranceM;
   });
@@ -68,14 +73,18 @@ function groupWords(kind: 'highs' | 'lows', members: readonly number[], scatterM
  * *Watering Systems for Serious Graziers* p.29 [R10]; air pockets cost head and can stop a
  * gravity line, Wikipedia "Air lock" [R7]). Points already served by a device are skipped.
  * A point counts only where it stands out by more than `highLowToleranceM` (the survey's height
- * scatter on a walked route); the smaller wiggles around it become members of its one item (profile-and-checks.md §1.2).
+ * scatter on a walked route); the smaller wiggles around it become members of its one item (profile-and-checks.md
+ * §1.2).
  */
 export function airAndSedimentWarnings(profile: LineProfile, devices: readonly LineDevice[]): LineWarning[] {
   const { chainageM, pipeElevationM, pressureHeadM } = profile.points;
   const toleranceM = highLowToleranceM(profile.settings);
   const scatterM = profile.settings.heightScatterM;
   const { highs, lows } = findTurningPoints(pipeElevationM, toleranceM);
-  const small = toleranceM > profile.settings.airPointToleranceM ? findTurningPoints(pipeElevationM, profile.settings.airPointToleranceM) : { highs, lows };
+  const small =
+    toleranceM > profile.settings.airPointToleranceM
+      ? findTurningPoints(pipeElevationM, profile.settings.airPointToleranceM)
+      : { highs, lows };
   const warnings: LineWarning[] = [];
   for (const spot of neighbourhoods(highs, lows, chainageM)) {
     if (isCovered(spot, devices, ['air-release-valve', 'break-pressure-tank'], profile, true, toleranceM)) continue;
@@ -84,7 +93,9 @@ export function airAndSedimentWarnings(profile: LineProfile, devices: readonly L
     const members = membersOf(spot, small.highs, chainageM);
     const group = groupWords('highs', members, scatterM);
     const suction = pressureHeadM[spot.point] < 0 && profile.flowM3s > 0;
-    const summit = group ? `the real summit is at ${chainage(c)} (${metres(z)})` : `The pipe has a summit at ${chainage(c)} (${metres(z)})`;
+    const summit = group
+      ? `the real summit is at ${chainage(c)} (${metres(z)})`
+      : `The pipe has a summit at ${chainage(c)} (${metres(z)})`;
     warnings.push({
       code: 'air-release-needed',
       severity: 'warning',
@@ -134,7 +145,16 @@ export function airAndSedimentWarnings(profile: LineProfile, devices: readonly L
       fixes: [{ kind: 'add-device', device: 'washout', chainageM: c }],
     });
   }
-  return [...warnings, ...misplacedDevices(profile, devices, neighbourhoods(highs, lows, chainageM), neighbourhoods(lows, highs, chainageM), toleranceM)];
+  return [
+    ...warnings,
+    ...misplacedDevices(
+      profile,
+      devices,
+      neighbourhoods(highs, lows, chainageM),
+      neighbourhoods(lows, highs, chainageM),
+      toleranceM,
+    ),
+  ];
 }
 
 /**
@@ -152,8 +172,12 @@ function misplacedDevices(
   const { chainageM, pipeElevationM } = profile.points;
   const out: LineWarning[] = [];
   for (const device of devices) {
-    const atLow = device.kind === 'air-release-valve' && lowSpots.find((spot) => isCovered(spot, [device], ['air-release-valve'], profile, false, toleranceM));
-    const atHigh = device.kind === 'washout' && highSpots.find((spot) => isCovered(spot, [device], ['washout'], profile, true, toleranceM));
+    const atLow =
+      device.kind === 'air-release-valve' &&
+      lowSpots.find((spot) => isCovered(spot, [device], ['air-release-valve'], profile, false, toleranceM));
+    const atHigh =
+      device.kind === 'washout' &&
+      highSpots.find((spot) => isCovered(spot, [device], ['washout'], profile, true, toleranceM));
     const spot = atLow || atHigh;
     if (!spot) continue;
     const c = device.chainageM;

@@ -33,7 +33,12 @@ export function analyzeLine(input: LineInput): LineAnalysis {
 }
 
 /** Results of the flow that the pipe being too small causes; they go with the pipe change that clears them. */
-const FLOW_CONSEQUENCES: ReadonlySet<WarningCode> = new Set<WarningCode>(['negative-pressure', 'siphon-limit', 'vapour-limit', 'tank-not-reached']);
+const FLOW_CONSEQUENCES: ReadonlySet<WarningCode> = new Set<WarningCode>([
+  'negative-pressure',
+  'siphon-limit',
+  'vapour-limit',
+  'tank-not-reached',
+]);
 
 /**
  * One cause, one item: when the outlet is short because the pipe is too small and one pipe change
@@ -51,7 +56,15 @@ function foldIntoPipeFix(input: LineInput, warnings: LineWarning[]): LineWarning
   const alsoClears = [...new Set(folded.map((w) => w.code))];
   return warnings
     .filter((w) => !folded.includes(w))
-    .map((w) => (w === short ? { ...w, values: { ...w.values, alsoClears }, message: `${w.message} The same change also clears the ${alsoClears.join(', ')} found at this flow.` } : w));
+    .map((w) =>
+      w === short
+        ? {
+            ...w,
+            values: { ...w.values, alsoClears },
+            message: `${w.message} The same change also clears the ${alsoClears.join(', ')} found at this flow.`,
+          }
+        : w,
+    );
 }
 
 function checkedLine(input: LineInput): { profile: LineProfile; warnings: LineWarning[] } {

@@ -11,7 +11,11 @@ import { chainage, chainageRange, metres, PRESSURE_CAUTION, speed } from './word
  * at a boundary between two, pressure is the same on both sides, so the pipe passed is the one
  * with less margin (`marginM`), which may be the upstream one.
  */
-function stretchAt(profile: LineProfile, chainageM: number, marginM: (stretch: StretchResult) => number): StretchResult {
+function stretchAt(
+  profile: LineProfile,
+  chainageM: number,
+  marginM: (stretch: StretchResult) => number,
+): StretchResult {
   const point = pointIndexAt(profile.points.chainageM, chainageM);
   const own = profile.stretches[profile.points.stretchIndex[point]];
   const touching = profile.stretches.filter((s) => s.fromM <= chainageM && chainageM <= s.toM);
@@ -112,5 +116,8 @@ function surgeWarnings(profile: LineProfile, zones: readonly LimitZone[]): LineW
 /** Static and surge pressure against the (derated, safety-factored) pipe ratings. */
 export function ratingWarnings(profile: LineProfile): LineWarning[] {
   const ofKind = (kind: LimitZone['kind']) => profile.zones.filter((zone) => zone.kind === kind);
-  return [...staticWarnings(profile, ofKind('static-over-rating')), ...surgeWarnings(profile, ofKind('surge-over-rating'))];
+  return [
+    ...staticWarnings(profile, ofKind('static-over-rating')),
+    ...surgeWarnings(profile, ofKind('surge-over-rating')),
+  ];
 }

@@ -39,24 +39,26 @@ export function suctionWarnings(profile: LineProfile): LineWarning[] {
   const warnings: LineWarning[] = trueSiphonWarnings(profile);
   // With no flow the flowing grade is the static line: suction there is the true siphon above, not "while flowing".
   const flowingSuction = profile.flowM3s > 0 ? zonesOf(profile, 'negative-pressure') : [];
-  warnings.push(...flowingSuction.map((zone): LineWarning => {
-    const values: WarningValues = { ...zoneValues(zone, profile), headM: -zone.worstExcessM, limitHeadM: 0 };
-    return {
-      code: 'negative-pressure',
-      severity: 'warning',
-      at: { fromM: zone.fromM, toM: zone.toM },
-      values,
-      message:
-        `While flowing, the pressure falls below atmospheric from ${chainageRange(zone.fromM, zone.toM)} ` +
-        `(down to -${metres(zone.worstExcessM)} at ${chainage(zone.worstChainageM)}): the pipe runs above the ` +
-        `hydraulic grade line. Suction can draw dirty water in at joints and lets air come out of the water ` +
-        `and block the line. ${scatterWords(values)}${PRESSURE_CAUTION}`,
-      suggestedFix:
-        'Lay the pipe lower through this range or route it below the grade line; or use a larger pipe ' +
-        'upstream so less head is lost before it.',
-      fixes: [],
-    };
-  }));
+  warnings.push(
+    ...flowingSuction.map((zone): LineWarning => {
+      const values: WarningValues = { ...zoneValues(zone, profile), headM: -zone.worstExcessM, limitHeadM: 0 };
+      return {
+        code: 'negative-pressure',
+        severity: 'warning',
+        at: { fromM: zone.fromM, toM: zone.toM },
+        values,
+        message:
+          `While flowing, the pressure falls below atmospheric from ${chainageRange(zone.fromM, zone.toM)} ` +
+          `(down to -${metres(zone.worstExcessM)} at ${chainage(zone.worstChainageM)}): the pipe runs above the ` +
+          `hydraulic grade line. Suction can draw dirty water in at joints and lets air come out of the water ` +
+          `and block the line. ${scatterWords(values)}${PRESSURE_CAUTION}`,
+        suggestedFix:
+          'Lay the pipe lower through this range or route it below the grade line; or use a larger pipe ' +
+          'upstream so less head is lost before it.',
+        fixes: [],
+      };
+    }),
+  );
   if (limits.siphonLimitHeadM < limits.vapourLimitHeadM) {
     for (const zone of zonesOf(profile, 'siphon-limit')) {
       const values: WarningValues = {
@@ -107,15 +109,28 @@ export function suctionWarnings(profile: LineProfile): LineWarning[] {
  * Pipe above the static line (the source's water level, or a tank's): a true siphon. It does not
  * fill or start by itself, must be primed, and loses its prime as air comes out of the water and
  * gathers at the summit; an automatic air valve there lets air in and stops it (BC Factsheet
- * 590.304-5 "Water Flow, Air Locks and Siphons" [R10]; [R7]; profile-and-checks.md §2.2). Reported whether or not water flows.
+ * 590.304-5 "Water Flow, Air Locks and Siphons" [R10]; [R7]; profile-and-checks.md §2.2). Reported whether or not water
+ * flows.
  */
 export function trueSiphonWarnings(profile: LineProfile): LineWarning[] {
   const { chainageM, staticPressureHeadM, pipeElevationM } = profile.points;
-  const ranges = findLimitRanges({ chainageM, valueM: staticPressureHeadM, dropAtPointM: null, limitM: 0, side: 'below', mergeWithinM: profile.settings.heightScatterM });
+  const ranges = findLimitRanges({
+    chainageM,
+    valueM: staticPressureHeadM,
+    dropAtPointM: null,
+    limitM: 0,
+    side: 'below',
+    mergeWithinM: profile.settings.heightScatterM,
+  });
   return ranges.map((range) => {
     const zone: LimitZone = { kind: 'negative-pressure', ...range };
     const top = pointIndexAt(chainageM, range.worstChainageM);
-    const values: WarningValues = { ...zoneValues(zone, profile), headM: range.worstExcessM, chainageM: range.worstChainageM, elevationM: pipeElevationM[top] };
+    const values: WarningValues = {
+      ...zoneValues(zone, profile),
+      headM: range.worstExcessM,
+      chainageM: range.worstChainageM,
+      elevationM: pipeElevationM[top],
+    };
     return {
       code: 'true-siphon',
       severity: 'danger',
@@ -144,19 +159,28 @@ export function siteAltitudeWarnings(profile: LineProfile): LineWarning[] {
   if (settings.heightDatum !== 'assumed' || limits.siteAltitudeBasis !== 'highest-ground') return [];
   let worst = 0;
   for (let i = 1; i < points.chainageM.length; i++) {
-    if (Math.min(points.pressureHeadM[i], points.staticPressureHeadM[i]) < Math.min(points.pressureHeadM[worst], points.staticPressureHeadM[worst])) worst = i;
+    if (
+      Math.min(points.pressureHeadM[i], points.staticPressureHeadM[i]) <
+      Math.min(points.pressureHeadM[worst], points.staticPressureHeadM[worst])
+    )
+      worst = i;
   }
   const deepestM = Math.min(points.pressureHeadM[worst], points.staticPressureHeadM[worst]);
   const suction = deepestM < 0;
-  return [{
-    code: 'site-altitude-assumed',
-    severity: suction ? 'warning' : 'info',
-    at: { chainageM: points.chainageM[suction ? worst : 0] },
-    values: { siteAltitudeM: limits.siteAltitudeM, ...(suction ? { headM: deepestM, chainageM: points.chainageM[worst] } : {}) },
-    message:
-      `The heights of this route are on an assumed datum, so the site altitude (${metres(limits.siteAltitudeM)} m, the highest ground in that datum) ` +
-      `is a guess, and the siphon and vapour limits that depend on it may be wrong${suction ? ` where the line has suction (down to ${metres(deepestM)} m at ${chainage(points.chainageM[worst])})` : ''}.`,
-    suggestedFix: "Enter the site's altitude above sea level (from a map or a phone) in the line's settings.",
-    fixes: [],
-  }];
+  return [
+    {
+      code: 'site-altitude-assumed',
+      severity: suction ? 'warning' : 'info',
+      at: { chainageM: points.chainageM[suction ? worst : 0] },
+      values: {
+        siteAltitudeM: limits.siteAltitudeM,
+        ...(suction ? { headM: deepestM, chainageM: points.chainageM[worst] } : {}),
+      },
+      message:
+        `The heights of this route are on an assumed datum, so the site altitude (${metres(limits.siteAltitudeM)} m, the highest ground in that datum) ` +
+        `is a guess, and the siphon and vapour limits that depend on it may be wrong${suction ? ` where the line has suction (down to ${metres(deepestM)} m at ${chainage(points.chainageM[worst])})` : ''}.`,
+      suggestedFix: "Enter the site's altitude above sea level (from a map or a phone) in the line's settings.",
+      fixes: [],
+    },
+  ];
 }

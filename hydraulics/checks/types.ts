@@ -1,6 +1,8 @@
 import type { LineDeviceKind } from '../profile/types';
 
-/** How serious a warning is: `danger` can hurt people or wreck the line; `warning` will cause trouble; `info` is advice. */
+/**
+ * How serious a warning is: `danger` can hurt people or wreck the line; `warning` will cause trouble; `info` is advice.
+ */
 export type WarningSeverity = 'danger' | 'warning' | 'info';
 
 /** Stable codes of the line checks (the app maps them to its own labels). */
@@ -110,7 +112,9 @@ export interface LineWarning {
   values: WarningValues;
   /** Small highs or lows this item groups (within the survey's scatter), m of chainage; a click shows them. */
   memberChainagesM?: number[];
-  /** Plain words in SI: what is wrong and why it matters (pressure messages carry the caution). For logs and fallback. */
+  /**
+   * Plain words in SI: what is wrong and why it matters (pressure messages carry the caution). For logs and fallback.
+   */
   message: string;
   /** Plain words: what to do about it. */
   suggestedFix: string;

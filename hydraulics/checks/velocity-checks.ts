@@ -14,7 +14,13 @@ export function velocityWarnings(profile: LineProfile): LineWarning[] {
   for (const stretch of profile.stretches) {
     const v = Math.abs(stretch.velocityMs);
     const at = { fromM: stretch.fromM, toM: stretch.toM };
-    const base = { ...at, velocityMs: v, stretchIndex: stretch.index, pipeId: stretch.pipe.id, pipeLabel: stretch.pipe.label };
+    const base = {
+      ...at,
+      velocityMs: v,
+      stretchIndex: stretch.index,
+      pipeId: stretch.pipe.id,
+      pipeLabel: stretch.pipe.label,
+    };
     const where = chainageRange(stretch.fromM, stretch.toM);
     if (v < velocityMinMs) {
       warnings.push({
@@ -34,7 +40,11 @@ export function velocityWarnings(profile: LineProfile): LineWarning[] {
         code: 'velocity-high',
         severity: 'warning',
         at,
-        values: { ...base, limitVelocityMs: velocityMaxMs, ...(next ? { toPipeId: next.id, toPipeLabel: next.label } : {}) },
+        values: {
+          ...base,
+          limitVelocityMs: velocityMaxMs,
+          ...(next ? { toPipeId: next.id, toPipeLabel: next.label } : {}),
+        },
         message:
           `Water moves at ${speed(v)} in ${stretch.pipe.label} from ${where}, above ${speed(velocityMaxMs)}: ` +
           'suspended sand wears the pipe and fittings, and a sudden stop gives a larger pressure surge.',

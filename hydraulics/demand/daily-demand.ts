@@ -42,7 +42,10 @@ export function dailyDemand({ uses, figures = DEFAULT_DEMAND_FIGURES }: DailyDem
   const largestSingle = Math.max(0, ...results.map((result) => result.peakFlowM3s));
   const peakFlowM3s = anyNominal
     ? results.reduce((sum, result) => sum + result.peakFlowM3s, 0)
-    : Math.max(largestSingle, peakOfSummedFlows(uses.flatMap((use, i) => useFlowIntervals(use.delivery, results[i].dailyVolumeM3))));
+    : Math.max(
+        largestSingle,
+        peakOfSummedFlows(uses.flatMap((use, i) => useFlowIntervals(use.delivery, results[i].dailyVolumeM3))),
+      );
   return {
     uses: results,
     dailyVolumeM3: results.reduce((sum, result) => sum + result.dailyVolumeM3, 0),

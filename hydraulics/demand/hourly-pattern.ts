@@ -84,7 +84,8 @@ export function uniformPattern(): number[] {
 /** A whole hour of the day, 0-23. */
 export function assertHourOfDay(value: unknown, field: string, index?: number): asserts value is number {
   assertNonNegativeInteger(value, field, index);
-  if (value >= HOURS_PER_DAY) throw new HydraulicsInputError(field, `must be an hour from 0 to 23, got ${value}`, index);
+  if (value >= HOURS_PER_DAY)
+    throw new HydraulicsInputError(field, `must be an hour from 0 to 23, got ${value}`, index);
 }
 
 /**
@@ -106,7 +107,11 @@ export interface DrawPattern {
 
 /** Mean flow and hourly shape of 24 hourly volumes (m³), as `dailyDemand` gives them. */
 export function drawPatternOf(hourlyVolumeM3: readonly number[]): DrawPattern {
-  if (hourlyVolumeM3.length !== HOURS_PER_DAY) throw new HydraulicsInputError('hourlyVolumeM3', `needs ${HOURS_PER_DAY} hourly volumes, got ${hourlyVolumeM3.length}`);
+  if (hourlyVolumeM3.length !== HOURS_PER_DAY)
+    throw new HydraulicsInputError(
+      'hourlyVolumeM3',
+      `needs ${HOURS_PER_DAY} hourly volumes, got ${hourlyVolumeM3.length}`,
+    );
   hourlyVolumeM3.forEach((volume, hour) => {
     assertFiniteNumber(volume, 'hourlyVolumeM3', hour);
     if (volume < 0) throw new HydraulicsInputError('hourlyVolumeM3', `hour ${hour} is negative (${volume})`, hour);
@@ -130,4 +135,3 @@ export function drawPatternWithPeak(peakFlowM3s: number, hourlyVolumeM3: readonl
   const busiest = Math.max(...hourlyFractions);
   return { meanFlowM3s: peakFlowM3s / (HOURS_PER_DAY * busiest), hourlyFractions };
 }
-

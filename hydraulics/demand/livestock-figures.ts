@@ -16,9 +16,30 @@ interface Row {
 
 // The source prints litres and imperial gallons side by side; the litres are used as printed.
 const ROWS: readonly Row[] = [
-  { id: 'lactating-cow', label: 'Lactating cow', winterLitres: 77, summerLitres: 95, winterImperialGallons: 17, summerImperialGallons: 21 },
-  { id: 'cow-calf-pair', label: 'Cow-calf pair', winterLitres: 50, summerLitres: 68, winterImperialGallons: 11, summerImperialGallons: 15 },
-  { id: 'dry-cow', label: 'Dry cow', winterLitres: 36, summerLitres: 55, winterImperialGallons: 8, summerImperialGallons: 12 },
+  {
+    id: 'lactating-cow',
+    label: 'Lactating cow',
+    winterLitres: 77,
+    summerLitres: 95,
+    winterImperialGallons: 17,
+    summerImperialGallons: 21,
+  },
+  {
+    id: 'cow-calf-pair',
+    label: 'Cow-calf pair',
+    winterLitres: 50,
+    summerLitres: 68,
+    winterImperialGallons: 11,
+    summerImperialGallons: 15,
+  },
+  {
+    id: 'dry-cow',
+    label: 'Dry cow',
+    winterLitres: 36,
+    summerLitres: 55,
+    winterImperialGallons: 8,
+    summerImperialGallons: 12,
+  },
   {
     id: 'calf',
     label: 'Calf',
@@ -38,10 +59,38 @@ const ROWS: readonly Row[] = [
     summerImperialGallons: 12,
     note: 'Source range 23-36 L winter, 36-55 L summer; the upper value is used for design.',
   },
-  { id: 'finishing-cattle', label: 'Finishing cattle 270-540 kg', winterLitres: 55, summerLitres: 86, winterImperialGallons: 12, summerImperialGallons: 19 },
-  { id: 'bull', label: 'Bull', winterLitres: 36, summerLitres: 55, winterImperialGallons: 8, summerImperialGallons: 12 },
-  { id: 'horse', label: 'Horse', winterLitres: 36, summerLitres: 55, winterImperialGallons: 8, summerImperialGallons: 12 },
-  { id: 'sheep', label: 'Sheep', winterLitres: 3.6, summerLitres: 14, winterImperialGallons: 0.8, summerImperialGallons: 3 },
+  {
+    id: 'finishing-cattle',
+    label: 'Finishing cattle 270-540 kg',
+    winterLitres: 55,
+    summerLitres: 86,
+    winterImperialGallons: 12,
+    summerImperialGallons: 19,
+  },
+  {
+    id: 'bull',
+    label: 'Bull',
+    winterLitres: 36,
+    summerLitres: 55,
+    winterImperialGallons: 8,
+    summerImperialGallons: 12,
+  },
+  {
+    id: 'horse',
+    label: 'Horse',
+    winterLitres: 36,
+    summerLitres: 55,
+    winterImperialGallons: 8,
+    summerImperialGallons: 12,
+  },
+  {
+    id: 'sheep',
+    label: 'Sheep',
+    winterLitres: 3.6,
+    summerLitres: 14,
+    winterImperialGallons: 0.8,
+    summerImperialGallons: 3,
+  },
 ];
 
 /**

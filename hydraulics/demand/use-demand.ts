@@ -19,12 +19,20 @@ function spreadOf(delivery: UseDelivery, index: number): Spread {
   switch (delivery?.kind) {
     case 'pattern': {
       assertHourlyPattern(delivery.hourlyFractions, `uses[${index}].delivery.hourlyFractions`);
-      return { fractions: delivery.hourlyFractions, peakToMean: Math.max(...delivery.hourlyFractions) * HOURS_PER_DAY, nominal: false };
+      return {
+        fractions: delivery.hourlyFractions,
+        peakToMean: Math.max(...delivery.hourlyFractions) * HOURS_PER_DAY,
+        nominal: false,
+      };
     }
     case 'peak-factor':
       assertPositive(delivery.peakFactor, 'uses.delivery.peakFactor', index);
       if (delivery.peakFactor < 1) {
-        throw new HydraulicsInputError('uses.delivery.peakFactor', `a peak factor below 1 is not a peak (${delivery.peakFactor})`, index);
+        throw new HydraulicsInputError(
+          'uses.delivery.peakFactor',
+          `a peak factor below 1 is not a peak (${delivery.peakFactor})`,
+          index,
+        );
       }
       return { fractions: uniformPattern(), peakToMean: delivery.peakFactor, nominal: true };
     case 'delivery-hours': {

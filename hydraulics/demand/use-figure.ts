@@ -10,7 +10,12 @@ export interface UseFigure {
   label: string;
 }
 
-function pickFigure<T extends { id: string }>(list: readonly T[], id: string | undefined, field: string, index: number): T {
+function pickFigure<T extends { id: string }>(
+  list: readonly T[],
+  id: string | undefined,
+  field: string,
+  index: number,
+): T {
   if (id === undefined) {
     throw new HydraulicsInputError(field, 'give either a figure of your own or the id of a published figure', index);
   }

@@ -84,16 +84,37 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   const tanks: PlannedTank[] = [];
   const { chainageM, groundElevationM, pipeElevationM } = input;
   let level = input.startLevelM;
-  let at: Position = { piece: from, chainageM: chainageM[from], pipeM: pipeElevationM[from], groundM: groundElevationM[from] };
-  const fail = (chainage: number, message: string): TankPlan => ({ tanks, feasible: false, problem: { chainageM: chainage, message } });
+  let at: Position = {
+    piece: from,
+    chainageM: chainageM[from],
+    pipeM: pipeElevationM[from],
+    groundM: groundElevationM[from],
+  };
+  const fail = (chainage: number, message: string): TankPlan => ({
+    tanks,
+    feasible: false,
+    problem: { chainageM: chainage, message },
+  });
 
   // Every tank lowers the level by at least (rating - cover) > 0, so the loop ends; the cap only
   // guards against a caller's NaN.
   for (let guard = 0; guard < 1_000_000; guard++) {
-    const over = firstOverRating(chainageM, groundElevationM, pipeElevationM, planner.allowFixed, planner.allowByPiece, at, level, to);
+    const over = firstOverRating(
+      chainageM,
+      groundElevationM,
+      pipeElevationM,
+      planner.allowFixed,
+      planner.allowByPiece,
+      at,
+      level,
+      to,
+    );
     if (over === null) return { tanks, feasible: true };
     if (over.chainageM <= at.chainageM + EPS_M) {
-      return fail(over.chainageM, 'the pipe here is over its rating even right below a tank: use a higher pressure class');
+      return fail(
+        over.chainageM,
+        'the pipe here is over its rating even right below a tank: use a higher pressure class',
+      );
     }
     const chosen = planner.lowestSite(at, over, level);
     if (chosen === null) {
@@ -153,7 +174,8 @@ class TankPlanner {
     const { pipeElevationM, lossTo } = this;
     const highestAhead = new Float64Array(to + 1);
     highestAhead[to] = pipeElevationM[to] + (lossTo === null ? 0 : lossTo[to]);
-    for (let k = to - 1; k >= from; k--) highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highestAhead[k + 1]);
+    for (let k = to - 1; k >= from; k--)
+      highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highestAhead[k + 1]);
     this.highestAhead = highestAhead;
   }
 
@@ -194,7 +216,13 @@ class TankPlanner {
     for (let k = at.piece; k <= over.piece; k++) {
       const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
       if (k > at.piece) {
-        this.consider(k, chainageM[k], pipeElevationM[k], groundElevationM[k], this.floorAt(highestAhead[k], k, chainageM[k]));
+        this.consider(
+          k,
+          chainageM[k],
+          pipeElevationM[k],
+          groundElevationM[k],
+          this.floorAt(highestAhead[k], k, chainageM[k]),
+        );
       }
       // Where the tank level on the ground inside this piece comes down to the floor set by the
       // summits ahead (both vary linearly along the piece): the lowest usable site.
@@ -212,8 +240,17 @@ class TankPlanner {
       }
     }
     const overLoss = this.lossAt(over.piece, over.chainageM);
-    const aheadOfOver = Math.max(over.pipeM + overLoss, over.piece + 1 <= this.to ? highestAhead[over.piece + 1] : over.pipeM + overLoss);
-    this.consider(over.piece, over.chainageM, over.pipeM, over.groundM, this.floorAt(aheadOfOver, over.piece, over.chainageM));
+    const aheadOfOver = Math.max(
+      over.pipeM + overLoss,
+      over.piece + 1 <= this.to ? highestAhead[over.piece + 1] : over.pipeM + overLoss,
+    );
+    this.consider(
+      over.piece,
+      over.chainageM,
+      over.pipeM,
+      over.groundM,
+      this.floorAt(aheadOfOver, over.piece, over.chainageM),
+    );
     if (!this.found) return null;
     return { piece: this.bestPiece, chainageM: this.bestChainageM, pipeM: this.bestPipeM, groundM: this.bestGroundM };
   }
@@ -235,7 +272,13 @@ function firstOverRating(
     const first = j === at.piece;
     const z0 = first ? at.pipeM : pipeElevationM[j];
     const startExcess = level - z0 - limit;
-    if (startExcess > EPS_M) return { piece: j, chainageM: first ? at.chainageM : chainageM[j], pipeM: z0, groundM: first ? at.groundM : groundElevationM[j] };
+    if (startExcess > EPS_M)
+      return {
+        piece: j,
+        chainageM: first ? at.chainageM : chainageM[j],
+        pipeM: z0,
+        groundM: first ? at.groundM : groundElevationM[j],
+      };
     const endExcess = level - pipeElevationM[j + 1] - limit;
     if (endExcess > EPS_M) {
       const c0 = first ? at.chainageM : chainageM[j];

@@ -44,7 +44,9 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
       tankWaterAboveGroundM,
       fromPoint,
       toPoint,
-      ...(keepFlowing ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM + entranceM } : {}),
+      ...(keepFlowing
+        ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM + entranceM }
+        : {}),
     });
     tanks.push(...plan.tanks);
     if (!plan.feasible) return { tanks, feasible: false, problem: plan.problem };

@@ -25,7 +25,8 @@ export function colebrookFrictionFactor(options: FrictionFactorOptions): number 
 export function colebrookUnchecked(reynolds: number, relativeRoughness: number, startInverseSqrtF = 0): number {
   const a = relativeRoughness / 3.7;
   const b = 2.51 / reynolds;
-  const guess = startInverseSqrtF > 0 ? startInverseSqrtF : 1 / Math.sqrt(swameeJainUnchecked(reynolds, relativeRoughness));
+  const guess =
+    startInverseSqrtF > 0 ? startInverseSqrtF : 1 / Math.sqrt(swameeJainUnchecked(reynolds, relativeRoughness));
   let x = Number.isFinite(guess) && guess > 0 ? guess : 1;
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration += 1) {
     const inner = a + b * x;

@@ -26,7 +26,11 @@ export function darcyFrictionFactor(options: FrictionFactorOptions): number {
 }
 
 /** Hot-path kernel of {@link darcyFrictionFactor}. */
-export function darcyFrictionFactorUnchecked(reynolds: number, relativeRoughness: number, startInverseSqrtF = 0): number {
+export function darcyFrictionFactorUnchecked(
+  reynolds: number,
+  relativeRoughness: number,
+  startInverseSqrtF = 0,
+): number {
   if (reynolds < LAMINAR_LIMIT_RE) return 64 / reynolds;
   if (reynolds >= TURBULENT_LIMIT_RE) return colebrookUnchecked(reynolds, relativeRoughness, startInverseSqrtF);
   const laminarEnd = 64 / LAMINAR_LIMIT_RE;

@@ -17,7 +17,9 @@ export interface PipeHeadLossOptions {
   lengthM: number;
   /** The pipe; only the fields the method needs are read (inside diameter, C or roughness). */
   pipe: Pick<PipeSpec, 'insideDiameterM' | 'hazenWilliamsC' | 'roughnessM'>;
-  /** Water temperature, °C (sets the viscosity for Darcy-Weisbach; Hazen-Williams has no temperature term). @default 20 */
+  /**
+   * Water temperature, °C (sets the viscosity for Darcy-Weisbach; Hazen-Williams has no temperature term). @default 20
+   */
   temperatureC?: number;
 }
 

@@ -55,7 +55,8 @@ function darcyFlowForPositiveLoss(headLossM: number, lengthM: number, pipe: Pipe
   const slope = headLossM / lengthM;
 
   const velocityTimesRootF = Math.sqrt(2 * GRAVITY_MS2 * diameter * slope);
-  const inverseRootF = -2 * Math.log10(pipe.roughnessM / diameter / 3.7 + (2.51 * viscosity) / (diameter * velocityTimesRootF));
+  const inverseRootF =
+    -2 * Math.log10(pipe.roughnessM / diameter / 3.7 + (2.51 * viscosity) / (diameter * velocityTimesRootF));
   const turbulentVelocity = velocityTimesRootF * inverseRootF;
   if ((turbulentVelocity * diameter) / viscosity >= TURBULENT_LIMIT_RE) return turbulentVelocity * area;
 

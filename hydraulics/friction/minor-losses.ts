@@ -11,19 +11,37 @@ export interface FittingLossCoefficient {
 
 const MUNSON_TABLE_8_2 =
   'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Table 8.2 "Loss coefficients for pipe components" (stored copy p. 422)';
-const MUNSON_FIG_8_25 = 'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.25 exit loss (stored copy p. 419)';
-const SHARP_ENTRANCE = 'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.22 sharp-edged entrance (from memory)';
+const MUNSON_FIG_8_25 =
+  'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.25 exit loss (stored copy p. 419)';
+const SHARP_ENTRANCE =
+  'Munson, Young & Okiishi, Fundamentals of Fluid Mechanics (Wiley), Fig. 8.22 sharp-edged entrance (from memory)';
 
 /** Loss coefficients for common fittings and valves, fully turbulent flow. K varies ±20-50 % with make and size. */
 export const FITTING_LOSS_COEFFICIENTS = {
-  'entrance-sharp': { k: 0.5, description: 'Pipe entrance, sharp-edged (flush with tank wall)', source: SHARP_ENTRANCE },
-  'entrance-projecting': { k: 0.8, description: 'Pipe entrance, re-entrant (projecting into tank)', source: 'Munson et al., Fig. 8.22 (from memory)' },
-  'entrance-rounded': { k: 0.04, description: 'Pipe entrance, well rounded', source: 'Munson et al., Fig. 8.22 (from memory)' },
+  'entrance-sharp': {
+    k: 0.5,
+    description: 'Pipe entrance, sharp-edged (flush with tank wall)',
+    source: SHARP_ENTRANCE,
+  },
+  'entrance-projecting': {
+    k: 0.8,
+    description: 'Pipe entrance, re-entrant (projecting into tank)',
+    source: 'Munson et al., Fig. 8.22 (from memory)',
+  },
+  'entrance-rounded': {
+    k: 0.04,
+    description: 'Pipe entrance, well rounded',
+    source: 'Munson et al., Fig. 8.22 (from memory)',
+  },
   exit: { k: 1.0, description: 'Pipe exit into a tank (any shape)', source: MUNSON_FIG_8_25 },
   'elbow-90-flanged': { k: 0.3, description: 'Elbow 90°, regular, flanged', source: MUNSON_TABLE_8_2 },
   'elbow-90-threaded': { k: 1.5, description: 'Elbow 90°, regular, threaded', source: MUNSON_TABLE_8_2 },
   'elbow-90-long-radius-flanged': { k: 0.2, description: 'Elbow 90°, long radius, flanged', source: MUNSON_TABLE_8_2 },
-  'elbow-90-long-radius-threaded': { k: 0.7, description: 'Elbow 90°, long radius, threaded', source: MUNSON_TABLE_8_2 },
+  'elbow-90-long-radius-threaded': {
+    k: 0.7,
+    description: 'Elbow 90°, long radius, threaded',
+    source: MUNSON_TABLE_8_2,
+  },
   'elbow-45-long-radius-flanged': { k: 0.2, description: 'Elbow 45°, long radius, flanged', source: MUNSON_TABLE_8_2 },
   'elbow-45-threaded': { k: 0.4, description: 'Elbow 45°, regular, threaded', source: MUNSON_TABLE_8_2 },
   'return-bend-flanged': { k: 0.2, description: 'Return bend 180°, flanged', source: MUNSON_TABLE_8_2 },
@@ -57,10 +75,14 @@ export interface FittingCount {
 export function totalLossCoefficient(fittings: readonly FittingCount[]): number {
   let total = 0;
   fittings.forEach(({ kind, count }, index) => {
-    const entry: FittingLossCoefficient | undefined = (FITTING_LOSS_COEFFICIENTS as Record<string, FittingLossCoefficient>)[kind];
-    if (entry === undefined) throw new HydraulicsInputError('fittings.kind', `unknown fitting "${String(kind)}"`, index);
+    const entry: FittingLossCoefficient | undefined = (
+      FITTING_LOSS_COEFFICIENTS as Record<string, FittingLossCoefficient>
+    )[kind];
+    if (entry === undefined)
+      throw new HydraulicsInputError('fittings.kind', `unknown fitting "${String(kind)}"`, index);
     assertNonNegative(count, 'fittings.count', index);
-    if (!Number.isInteger(count)) throw new HydraulicsInputError('fittings.count', `must be a whole number, got ${count}`, index);
+    if (!Number.isInteger(count))
+      throw new HydraulicsInputError('fittings.count', `must be a whole number, got ${count}`, index);
     total += entry.k * count;
   });
   return total;

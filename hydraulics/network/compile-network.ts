@@ -71,7 +71,9 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
   const viscosity = waterKinematicViscosityM2s(settings.waterTemperatureC);
   // Line analysis, analyze-profile.ts: the grade one velocity head plus the entrance loss below a free surface.
   const freeSurfaceK = (node: NetworkNode): number =>
-    settings.freeSurfaceLosses && (hasFixedHead(node.kind) || node.kind === 'break-pressure-tank') ? 1 + settings.entranceLossK : 0;
+    settings.freeSurfaceLosses && (hasFixedHead(node.kind) || node.kind === 'break-pressure-tank')
+      ? 1 + settings.entranceLossK
+      : 0;
   const hiddenInlets = input.nodes.filter((node) => node.kind === 'break-pressure-tank');
   const nodeCount = input.nodes.length + hiddenInlets.length;
   const nodeIds = [...input.nodes.map((node) => node.id), ...hiddenInlets.map((node) => `${node.id}#inlet`)];
@@ -119,7 +121,8 @@ export function compileNetwork(input: NetworkInput): CompiledNetwork {
     status.push(linkStatus);
     if (linkStatus === 'prv') setHeadM[index] = input.nodes[toIndex].elevationM + (link.setPressureHeadM as number);
     const tank = input.nodes[toIndex];
-    if (linkStatus === 'float-valve' && tank.tank && (tank.waterLevelM ?? tank.elevationM) >= tank.tank.overflowLevelM) shutByFullTank[index] = 1;
+    if (linkStatus === 'float-valve' && tank.tank && (tank.waterLevelM ?? tank.elevationM) >= tank.tank.overflowLevelM)
+      shutByFullTank[index] = 1;
   });
   hiddenInlets.forEach((node, k) => {
     const link = input.links.length + k;

@@ -246,7 +246,14 @@ export class GradientSolver {
       rhs: new Float64Array(size),
     };
     this.assemble(arrays);
-    return { size, diagonal: arrays.diagonal, edgeA: this.edgeA, edgeB: this.edgeB, edgeValue: arrays.edgeValue, rhs: arrays.rhs };
+    return {
+      size,
+      diagonal: arrays.diagonal,
+      edgeA: this.edgeA,
+      edgeB: this.edgeB,
+      edgeValue: arrays.edgeValue,
+      rhs: arrays.rhs,
+    };
   }
 
   /** Solves one head system with this solver's factorisation (for benchmarks and checks). */

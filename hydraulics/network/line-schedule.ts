@@ -21,9 +21,15 @@ export function lineFlowSchedule(pieces: readonly LinePieceLink[], solution: Net
     .sort((a, b) => a.fromM - b.fromM)
     .map((piece, index) => {
       const flow = solution.flowsM3s[piece.linkId];
-      if (flow === undefined) throw new HydraulicsInputError('pieces.linkId', `no link "${piece.linkId}" in the solution`, index);
+      if (flow === undefined)
+        throw new HydraulicsInputError('pieces.linkId', `no link "${piece.linkId}" in the solution`, index);
       const along = piece.reversed ? -flow : flow;
-      if (along < -1e-9) throw new HydraulicsInputError('pieces.linkId', `water in "${piece.linkId}" runs back up the line (${(along * 1000).toFixed(3)} L/s)`, index);
+      if (along < -1e-9)
+        throw new HydraulicsInputError(
+          'pieces.linkId',
+          `water in "${piece.linkId}" runs back up the line (${(along * 1000).toFixed(3)} L/s)`,
+          index,
+        );
       return { fromM: piece.fromM, flowM3s: Math.max(0, along) };
     });
 }

@@ -83,7 +83,8 @@ function rawLossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: numbe
   const friction = (f * law.lengthM * velocity * velocity) / (law.diameterM * 2 * GRAVITY_MS2);
   out.lossM = Math.sign(q) * friction + minor * q * magnitude;
   // The exact slope, friction factor's change with the flow included: a full Newton step.
-  out.gradient = (darcyLossExponentUnchecked(reynolds, law.relativeRoughness, f) * friction) / magnitude + minorGradient;
+  out.gradient =
+    (darcyLossExponentUnchecked(reynolds, law.relativeRoughness, f) * friction) / magnitude + minorGradient;
 }
 
 /**
@@ -93,7 +94,13 @@ function rawLossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: numbe
  * convergence (Todini & Pilati 1988). Below `linearBelowM3s` the loss
  * is linear (see {@link LINEAR_BELOW_VELOCITY_MS}); the slope never falls below {@link MIN_LOSS_GRADIENT}.
  */
-export function lossAndGradientInto(out: LossAndGradient, law: LinkLaw, minor: number, q: number, linearBelowM3s = 0): LossAndGradient {
+export function lossAndGradientInto(
+  out: LossAndGradient,
+  law: LinkLaw,
+  minor: number,
+  q: number,
+  linearBelowM3s = 0,
+): LossAndGradient {
   if (Math.abs(q) < linearBelowM3s) {
     rawLossAndGradientInto(out, law, minor, linearBelowM3s);
     const chord = Math.max(out.lossM / linearBelowM3s, MIN_LOSS_GRADIENT);

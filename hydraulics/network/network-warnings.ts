@@ -20,13 +20,18 @@ function outflowOf(net: CompiledNetwork, node: number, flow: Float64Array): numb
 }
 
 /** The findings of one solve, as data with plain words. */
-export function networkWarnings(net: CompiledNetwork, topology: NetworkTopology, result: GradientResult): NetworkWarning[] {
+export function networkWarnings(
+  net: CompiledNetwork,
+  topology: NetworkTopology,
+  result: GradientResult,
+): NetworkWarning[] {
   const warnings: NetworkWarning[] = [];
   if (!result.statesSettled && result.iterations < net.settings.maxIterations) {
     warnings.push({
       code: 'valve-states-unsettled',
       severity: 'danger',
-      message: 'The check valves and pressure-reducing valves kept switching between open and shut: the result is not a steady state. Look for valves that face each other or a valve with no head across it.',
+      message:
+        'The check valves and pressure-reducing valves kept switching between open and shut: the result is not a steady state. Look for valves that face each other or a valve with no head across it.',
       values: { iterations: result.iterations },
     });
   } else if (!result.converged) {
@@ -34,7 +39,11 @@ export function networkWarnings(net: CompiledNetwork, topology: NetworkTopology,
       code: 'not-converged',
       severity: 'danger',
       message: `The solver stopped after ${result.iterations} iterations without settling (last flow change ${result.lastRelativeChange.toExponential(1)} of the total, head balance error ${result.maxHeadBalanceErrorM.toExponential(1)} m): the flows and heads shown are not reliable.`,
-      values: { iterations: result.iterations, relativeChange: result.lastRelativeChange, headBalanceErrorM: result.maxHeadBalanceErrorM },
+      values: {
+        iterations: result.iterations,
+        relativeChange: result.lastRelativeChange,
+        headBalanceErrorM: result.maxHeadBalanceErrorM,
+      },
     });
   }
   if (topology.partCount > 1) {

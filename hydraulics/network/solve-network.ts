@@ -24,8 +24,12 @@ export function solutionOf(net: CompiledNetwork, topology: NetworkTopology, resu
     const q = result.flowM3s[k];
     flowsM3s[id] = q;
     velocitiesMs[id] = meanVelocityMs(q, net.diameterM[k]);
-    headLossesM[id] = result.states[k] === LinkState.Open ? lossAndGradient(net.laws[k], net.minor[k], q, net.linearBelowM3s[k]).lossM : 0;
-    if (net.status[k] !== 'open' && net.status[k] !== 'closed') valveStates[id] = STATE_NAMES[result.states[k] as LinkState];
+    headLossesM[id] =
+      result.states[k] === LinkState.Open
+        ? lossAndGradient(net.laws[k], net.minor[k], q, net.linearBelowM3s[k]).lossM
+        : 0;
+    if (net.status[k] !== 'open' && net.status[k] !== 'closed')
+      valveStates[id] = STATE_NAMES[result.states[k] as LinkState];
   }
   const headsM: Record<string, number> = {};
   const pressureHeadsM: Record<string, number> = {};

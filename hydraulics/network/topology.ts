@@ -25,7 +25,10 @@ function components(count: number, joined: (union: (a: number, b: number) => voi
 
 /** Names a list of nodes, the first few in full. */
 export function nameNodes(ids: readonly string[], limit = 8): string {
-  const shown = ids.slice(0, limit).map((id) => `"${id}"`).join(', ');
+  const shown = ids
+    .slice(0, limit)
+    .map((id) => `"${id}"`)
+    .join(', ');
   return ids.length > limit ? `${shown} and ${ids.length - limit} more` : shown;
 }
 

@@ -30,7 +30,11 @@ function startHeads(start: LineStart, pumpPipeElevationM: number): { flowingM: n
  * (exit loss K = 1) is counted once. Energy equation between two free surfaces:
  * Δz = (K_entrance + f·L/D + ΣK + 1)·v²/2g (profile-and-checks.md §5.2).
  */
-function addFreeSurfaceEntrances(events: { kAtPoint: Float64Array; tankLevelAtPoint: Float64Array }, start: LineStart, entranceLossK: number): void {
+function addFreeSurfaceEntrances(
+  events: { kAtPoint: Float64Array; tankLevelAtPoint: Float64Array },
+  start: LineStart,
+  entranceLossK: number,
+): void {
   const k = 1 + entranceLossK;
   if (start.kind === 'water-level') events.kAtPoint[0] += k;
   for (let j = 1; j < events.tankLevelAtPoint.length - 1; j++) {
@@ -72,7 +76,12 @@ export function profileModel(input: LineInput): ProfileModel {
   const method = settings.frictionMethod;
   const pipes = resolveStretchPipes(input.stretches, input.pipes);
   const declaredTanks = tanksOf(input);
-  const grid = buildProfileGrid(input.stations, input.stretches, eventChainages(input, declaredTanks), settings.defaultCoverM);
+  const grid = buildProfileGrid(
+    input.stations,
+    input.stretches,
+    eventChainages(input, declaredTanks),
+    settings.defaultCoverM,
+  );
   const n = grid.chainageM.length;
   const { events, tanks } = pointEvents(grid, input, declaredTanks);
   addFreeSurfaceEntrances(events, input.start, settings.entranceLossK);
@@ -81,7 +90,10 @@ export function profileModel(input: LineInput): ProfileModel {
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);
   const gravity = findGravityFlow(reaches, pipes, method, temperatureC);
   const capacities = gravity.reachCapacityM3s;
-  const schedule = input.flow.kind === 'schedule' ? scheduledHydraulics(grid, pipes, input.flow.pieces, method, temperatureC) : undefined;
+  const schedule =
+    input.flow.kind === 'schedule'
+      ? scheduledHydraulics(grid, pipes, input.flow.pieces, method, temperatureC)
+      : undefined;
   const flowM3s =
     input.flow.kind === 'design'
       ? input.flow.flowM3s
@@ -109,10 +121,19 @@ export function profileModel(input: LineInput): ProfileModel {
     stretchIndex[j] = grid.pieceStretch[j < n - 1 ? j : n - 2];
     pressureHeadM[j] = lines.hydraulicGradeM[j] - grid.pipeElevationM[j];
     staticPressureHeadM[j] = lines.staticHeadM[j] - grid.pipeElevationM[j];
-    velocityMs[j] = schedule ? schedule.segments.velocityMs[schedule.pieceSegment[j < n - 1 ? j : n - 2]] : hydraulics.velocityMs[stretchIndex[j]];
+    velocityMs[j] = schedule
+      ? schedule.segments.velocityMs[schedule.pieceSegment[j < n - 1 ? j : n - 2]]
+      : hydraulics.velocityMs[stretchIndex[j]];
   }
   const stretches = stretchResults(
-    input.stretches, pipes, grid, hydraulics, staticPressureHeadM, temperatureC, settings.safetyFactor, lines.staticDropAtPointM,
+    input.stretches,
+    pipes,
+    grid,
+    hydraulics,
+    staticPressureHeadM,
+    temperatureC,
+    settings.safetyFactor,
+    lines.staticDropAtPointM,
   );
   const limits = pressureLimits(settings, grid.groundElevationM);
   const surgeOn = settings.checkSurge && anyFlowM3s > 0;
@@ -133,7 +154,8 @@ export function profileModel(input: LineInput): ProfileModel {
     requiredEndHeadM: reach.requiredEndHeadM,
     arrivingHeadM:
       r < reaches.length - 1
-        ? (lines.tankArrivals.find((arrival) => arrival.point === reach.toPoint)?.headM ?? lines.hydraulicGradeM[reach.toPoint])
+        ? (lines.tankArrivals.find((arrival) => arrival.point === reach.toPoint)?.headM ??
+          lines.hydraulicGradeM[reach.toPoint])
         : lines.hydraulicGradeM[n - 1],
     capacityM3s: capacities[r],
     criticalClosureTimeS: seriesCriticalClosureTimeS(

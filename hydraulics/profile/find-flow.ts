@@ -17,8 +17,7 @@ export interface GravityFlow {
 
 /** Head loss of one reach as a function of flow. */
 function reachLossAt(reach: Reach, pipes: readonly PipeSpec[], method: FrictionMethod, temperatureC: number) {
-  return (flowM3s: number): number =>
-    reachHeadLossM(reach, stretchHydraulics(pipes, flowM3s, method, temperatureC));
+  return (flowM3s: number): number => reachHeadLossM(reach, stretchHydraulics(pipes, flowM3s, method, temperatureC));
 }
 
 /**

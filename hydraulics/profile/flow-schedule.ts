@@ -58,7 +58,11 @@ export function scheduledHydraulics(
     }
     pieceSegment[j] = segment;
   }
-  const segments: StretchHydraulics = { velocityMs: new Float64Array(segmentStretch.length), velocityHeadM: new Float64Array(segmentStretch.length), frictionGradient: new Float64Array(segmentStretch.length) };
+  const segments: StretchHydraulics = {
+    velocityMs: new Float64Array(segmentStretch.length),
+    velocityHeadM: new Float64Array(segmentStretch.length),
+    frictionGradient: new Float64Array(segmentStretch.length),
+  };
   segmentStretch.forEach((s, g) => {
     const one = stretchHydraulics([pipes[s]], segmentFlow[g], method, temperatureC);
     segments.velocityMs[g] = one.velocityMs[0];
@@ -66,7 +70,11 @@ export function scheduledHydraulics(
     segments.frictionGradient[g] = one.frictionGradient[0];
   });
   const stretchCount = pipes.length;
-  const stretches: StretchHydraulics = { velocityMs: new Float64Array(stretchCount), velocityHeadM: new Float64Array(stretchCount), frictionGradient: new Float64Array(stretchCount) };
+  const stretches: StretchHydraulics = {
+    velocityMs: new Float64Array(stretchCount),
+    velocityHeadM: new Float64Array(stretchCount),
+    frictionGradient: new Float64Array(stretchCount),
+  };
   const friction = new Float64Array(stretchCount);
   const length = new Float64Array(stretchCount);
   for (let j = 0; j < count; j++) {

@@ -62,7 +62,8 @@ export function buildReaches(
 export function reachHeadLossM(reach: Reach, hydraulics: StretchHydraulics): number {
   let loss = 0;
   for (let s = 0; s < reach.lengthByStretchM.length; s++) {
-    loss += hydraulics.frictionGradient[s] * reach.lengthByStretchM[s] + reach.kByStretch[s] * hydraulics.velocityHeadM[s];
+    loss +=
+      hydraulics.frictionGradient[s] * reach.lengthByStretchM[s] + reach.kByStretch[s] * hydraulics.velocityHeadM[s];
   }
   return loss;
 }

@@ -111,11 +111,7 @@ export interface PressureLimits {
 
 /** Which limit a zone passes. */
 export type LimitKind =
-  | 'negative-pressure'
-  | 'siphon-limit'
-  | 'vapour-limit'
-  | 'static-over-rating'
-  | 'surge-over-rating';
+  'negative-pressure' | 'siphon-limit' | 'vapour-limit' | 'static-over-rating' | 'surge-over-rating';
 
 /** A chainage range where a limit is passed. */
 export interface LimitZone extends LimitRange {

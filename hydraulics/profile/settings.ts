@@ -37,7 +37,9 @@ export interface ResolvedLineSettings {
  * frost-mild ground (common practice, no source; from memory, UK water-fittings guidance asks
  * 750 mm); a pipe on the surface (0 m) is not a design default. Frost depth may ask for more.
  */
-export const DEFAULT_LINE_SETTINGS: Readonly<Omit<ResolvedLineSettings, 'siteAltitudeM' | 'siphonLimitHeadM'> & { siphonLimitHeadM: number }> = Object.freeze({
+export const DEFAULT_LINE_SETTINGS: Readonly<
+  Omit<ResolvedLineSettings, 'siteAltitudeM' | 'siphonLimitHeadM'> & { siphonLimitHeadM: number }
+> = Object.freeze({
   frictionMethod: 'darcy-weisbach',
   waterTemperatureC: 20,
   safetyFactor: 1,
@@ -80,6 +82,8 @@ export function resolveLineSettings(settings: LineSettings | undefined): Resolve
  * valves, washouts, winter drain points): the line's tolerance, or the survey's height scatter
  * when that is larger, because a bump smaller than the scatter cannot be told from it.
  */
-export function highLowToleranceM(settings: Pick<ResolvedLineSettings, 'airPointToleranceM' | 'heightScatterM'>): number {
+export function highLowToleranceM(
+  settings: Pick<ResolvedLineSettings, 'airPointToleranceM' | 'heightScatterM'>,
+): number {
   return Math.max(settings.airPointToleranceM, settings.heightScatterM);
 }

@@ -29,7 +29,9 @@ export function computeZones(z: ZoneInputs): LimitZone[] {
   const mergeWithinM = z.heightScatterM ?? 0;
   const flowing = { chainageM, valueM: z.pressureHeadM, dropAtPointM: lines.hydraulicDropAtPointM, mergeWithinM };
   const still = { chainageM, valueM: z.staticPressureHeadM, dropAtPointM: lines.staticDropAtPointM, mergeWithinM };
-  const tag = (kind: LimitKind) => (range: Omit<LimitZone, 'kind'>): LimitZone => ({ kind, ...range });
+  const tag =
+    (kind: LimitKind) =>
+    (range: Omit<LimitZone, 'kind'>): LimitZone => ({ kind, ...range });
   const zones: LimitZone[] = [
     ...findLimitRanges({ ...flowing, limitM: 0, side: 'below' }).map(tag('negative-pressure')),
     ...findLimitRanges({ ...flowing, limitM: -z.limits.siphonLimitHeadM, side: 'below' }).map(tag('siphon-limit')),

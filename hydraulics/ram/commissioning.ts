@@ -48,7 +48,11 @@ export interface CommissioningResult {
 const UNDER_PERFORMING_SHARE = 0.8;
 
 /** Measured efficiency from commissioning readings, compared with the plan. */
-export function commissioningResult({ reading, plannedEfficiency, plannedDeliveredFlowM3s }: CommissioningOptions): CommissioningResult {
+export function commissioningResult({
+  reading,
+  plannedEfficiency,
+  plannedDeliveredFlowM3s,
+}: CommissioningOptions): CommissioningResult {
   assertPositive(reading.beatsPerMinute, 'reading.beatsPerMinute');
   assertPositive(reading.supplyHeadM, 'reading.supplyHeadM');
   assertPositive(reading.deliveryHeadM, 'reading.deliveryHeadM');
@@ -60,13 +64,20 @@ export function commissioningResult({ reading, plannedEfficiency, plannedDeliver
       ? measuredFlowM3s(reading.drive.driveFlow, 'reading.drive.driveFlow')
       : measuredFlowM3s(reading.drive.wasteFlow, 'reading.drive.wasteFlow') + deliveredFlowM3s;
   if (deliveredFlowM3s >= driveFlowM3s) {
-    throw new HydraulicsInputError('reading.delivered', 'the delivered flow must be less than the drive flow; check the bucket readings');
+    throw new HydraulicsInputError(
+      'reading.delivered',
+      'the delivered flow must be less than the drive flow; check the bucket readings',
+    );
   }
   const heads = { deliveredFlowM3s, driveFlowM3s, fallM: reading.supplyHeadM, deliveryHeadM: reading.deliveryHeadM };
   const measuredEfficiency = daubuissonEfficiency(heads);
   const efficiencyRatioToPlan = plannedEfficiency === undefined ? null : measuredEfficiency / plannedEfficiency;
   const checks: PlanCheck[] = [];
-  if (plannedEfficiency !== undefined && efficiencyRatioToPlan !== null && efficiencyRatioToPlan < UNDER_PERFORMING_SHARE) {
+  if (
+    plannedEfficiency !== undefined &&
+    efficiencyRatioToPlan !== null &&
+    efficiencyRatioToPlan < UNDER_PERFORMING_SHARE
+  ) {
     checks.push({
       code: 'below-planned-efficiency',
       severity: 'warning',
@@ -95,7 +106,9 @@ export function commissioningResult({ reading, plannedEfficiency, plannedDeliver
     deliveredPerBeatM3: (deliveredFlowM3s * 60) / reading.beatsPerMinute,
     efficiencyRatioToPlan,
     deliveredRatioToPlan:
-      plannedDeliveredFlowM3s === undefined || plannedDeliveredFlowM3s === 0 ? null : deliveredFlowM3s / plannedDeliveredFlowM3s,
+      plannedDeliveredFlowM3s === undefined || plannedDeliveredFlowM3s === 0
+        ? null
+        : deliveredFlowM3s / plannedDeliveredFlowM3s,
     checks,
   };
 }

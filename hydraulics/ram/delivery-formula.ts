@@ -21,7 +21,8 @@ export function ramDeliveredFlowM3s({ driveFlowM3s, fallM, deliveryHeadM, effici
   assertPositive(fallM, 'fallM');
   assertPositive(deliveryHeadM, 'deliveryHeadM');
   assertNonNegative(efficiency, 'efficiency');
-  if (efficiency > 1) throw new HydraulicsInputError('efficiency', `must be a fraction no greater than 1, got ${efficiency}`);
+  if (efficiency > 1)
+    throw new HydraulicsInputError('efficiency', `must be a fraction no greater than 1, got ${efficiency}`);
   return (efficiency * driveFlowM3s * fallM) / deliveryHeadM;
 }
 
@@ -36,7 +37,12 @@ export interface RamEfficiencyReadings {
 }
 
 /** D'Aubuisson efficiency q·h / (Q·H): the form the published efficiency tables use. */
-export function daubuissonEfficiency({ deliveredFlowM3s, driveFlowM3s, fallM, deliveryHeadM }: RamEfficiencyReadings): number {
+export function daubuissonEfficiency({
+  deliveredFlowM3s,
+  driveFlowM3s,
+  fallM,
+  deliveryHeadM,
+}: RamEfficiencyReadings): number {
   assertNonNegative(deliveredFlowM3s, 'deliveredFlowM3s');
   assertPositive(driveFlowM3s, 'driveFlowM3s');
   assertPositive(fallM, 'fallM');
@@ -48,11 +54,19 @@ export function daubuissonEfficiency({ deliveredFlowM3s, driveFlowM3s, fallM, de
  * Rankine efficiency q·(h − H) / ((Q − q)·H): counts only the water lifted above the source against
  * the water spent. Lower than D'Aubuisson's; both are reported so readings compare with either table.
  */
-export function rankineEfficiency({ deliveredFlowM3s, driveFlowM3s, fallM, deliveryHeadM }: RamEfficiencyReadings): number {
+export function rankineEfficiency({
+  deliveredFlowM3s,
+  driveFlowM3s,
+  fallM,
+  deliveryHeadM,
+}: RamEfficiencyReadings): number {
   assertFiniteNumber(deliveredFlowM3s, 'deliveredFlowM3s');
   assertPositive(fallM, 'fallM');
   if (deliveredFlowM3s >= driveFlowM3s) {
-    throw new HydraulicsInputError('deliveredFlowM3s', 'a ram cannot deliver all of its drive flow: the delivered flow must be less than the drive flow');
+    throw new HydraulicsInputError(
+      'deliveredFlowM3s',
+      'a ram cannot deliver all of its drive flow: the delivered flow must be less than the drive flow',
+    );
   }
   if (deliveryHeadM <= fallM) throw new HydraulicsInputError('deliveryHeadM', 'must be above the fall');
   return (deliveredFlowM3s * (deliveryHeadM - fallM)) / ((driveFlowM3s - deliveredFlowM3s) * fallM);

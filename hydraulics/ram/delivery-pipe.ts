@@ -19,13 +19,15 @@ export function deliveryPipeHydraulics(deliveryPipe: RamDeliveryPipe): DeliveryP
     assertPipeSpec(deliveryPipe.pipe, 'deliveryPipe.pipe');
     const { insideDiameterM, hazenWilliamsC, pressureRatingPa } = deliveryPipe.pipe;
     return {
-      frictionM: (flowM3s) => hazenWilliamsHeadLoss({ flowM3s, lengthM, diameterM: insideDiameterM, c: hazenWilliamsC }),
+      frictionM: (flowM3s) =>
+        hazenWilliamsHeadLoss({ flowM3s, lengthM, diameterM: insideDiameterM, c: hazenWilliamsC }),
       ratingHeadM: pressurePaToHeadM(pressureRatingPa),
     };
   }
   assertPositive(deliveryPipe.insideDiameterM, 'deliveryPipe.insideDiameterM');
   assertPositive(deliveryPipe.hazenWilliamsC, 'deliveryPipe.hazenWilliamsC');
-  if (deliveryPipe.pressureRatingPa !== undefined) assertPositive(deliveryPipe.pressureRatingPa, 'deliveryPipe.pressureRatingPa');
+  if (deliveryPipe.pressureRatingPa !== undefined)
+    assertPositive(deliveryPipe.pressureRatingPa, 'deliveryPipe.pressureRatingPa');
   const { insideDiameterM, hazenWilliamsC, pressureRatingPa } = deliveryPipe;
   return {
     frictionM: (flowM3s) => hazenWilliamsHeadLoss({ flowM3s, lengthM, diameterM: insideDiameterM, c: hazenWilliamsC }),

@@ -71,7 +71,13 @@ export interface DriveSurgeResult {
 }
 
 /** Steady velocity with the valve open: fall = (1 + f·L/D)·V²/2g, solved by fixed point. */
-function freeFlowVelocityMs(fallM: number, lengthM: number, diameterM: number, roughnessM: number, viscosityM2s: number): number {
+function freeFlowVelocityMs(
+  fallM: number,
+  lengthM: number,
+  diameterM: number,
+  roughnessM: number,
+  viscosityM2s: number,
+): number {
   let velocity = Math.sqrt(2 * GRAVITY_MS2 * fallM);
   for (let i = 0; i < 50; i += 1) {
     const f = darcyFrictionFactorUnchecked((velocity * diameterM) / viscosityM2s, roughnessM / diameterM);
@@ -102,7 +108,10 @@ export function driveColumnSurge(options: DriveSurgeOptions): DriveSurgeResult {
   const meanDriveVelocityMs = driveFlowM3s / pipeAreaM2(diameterM);
   const driveFrictionM = darcyWeisbachHeadLossUnchecked(driveFlowM3s, lengthM, diameterM, roughnessM, viscosityM2s);
   const freeFlow = freeFlowVelocityMs(fallM, lengthM, diameterM, roughnessM, viscosityM2s);
-  const driveVelocityMs = Math.max(meanDriveVelocityMs, Math.min(PEAK_TO_MEAN_DRIVE_VELOCITY * meanDriveVelocityMs, freeFlow));
+  const driveVelocityMs = Math.max(
+    meanDriveVelocityMs,
+    Math.min(PEAK_TO_MEAN_DRIVE_VELOCITY * meanDriveVelocityMs, freeFlow),
+  );
   return {
     meanDriveVelocityMs,
     driveVelocityMs,

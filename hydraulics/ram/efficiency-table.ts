@@ -62,8 +62,14 @@ function runningMinimum(points: readonly { liftToFallRatio: number; efficiency: 
 export const BLAKE_RAM_EFFICIENCY_TABLE: RamEfficiencyTable = {
   id: 'tested-blake-rams',
   label: 'Tested rams (lift/fall 5 to 40)',
-  source: 'Water for the World, Technical Note RWS.4.D.5, Table 1 (Blake rams, 1 m fall), efficiency D·L/(1440·F), lowest so far',
-  points: runningMinimum(BLAKE_ONE_METRE_ROW.map(([liftM, litresPerDayPerLMin]) => ({ liftToFallRatio: liftM / 1, efficiency: (litresPerDayPerLMin * liftM) / (1440 * 1) }))),
+  source:
+    'Water for the World, Technical Note RWS.4.D.5, Table 1 (Blake rams, 1 m fall), efficiency D·L/(1440·F), lowest so far',
+  points: runningMinimum(
+    BLAKE_ONE_METRE_ROW.map(([liftM, litresPerDayPerLMin]) => ({
+      liftToFallRatio: liftM / 1,
+      efficiency: (litresPerDayPerLMin * liftM) / (1440 * 1),
+    })),
+  ),
   note: 'Read from the 1 m fall row, the only row whose columns are certain in the copy seen.',
 };
 
@@ -85,7 +91,10 @@ export interface RamEfficiencyLookup {
  * Efficiency at a lift-to-fall ratio, linearly interpolated. Beyond the table's end its last
  * efficiency is held (not extrapolated) and the position says so, for a warning.
  */
-export function ramEfficiencyForRatio(liftToFallRatio: number, table: RamEfficiencyTable = RAM_EFFICIENCY_TABLE): RamEfficiencyLookup {
+export function ramEfficiencyForRatio(
+  liftToFallRatio: number,
+  table: RamEfficiencyTable = RAM_EFFICIENCY_TABLE,
+): RamEfficiencyLookup {
   assertPositive(liftToFallRatio, 'liftToFallRatio');
   const { points } = table;
   const first = points[0];

@@ -1,4 +1,10 @@
-export { type PlanCheck, type PlanCheckCode, type PlanCheckSeverity, type PlanCheckValues, passesChecks } from './plan-check';
+export {
+  type PlanCheck,
+  type PlanCheckCode,
+  type PlanCheckSeverity,
+  type PlanCheckValues,
+  passesChecks,
+} from './plan-check';
 export {
   BLAKE_RAM_EFFICIENCY_TABLE,
   RAM_EFFICIENCY_TABLE,

@@ -3,7 +3,12 @@ import { assertFraction, assertPositive, assertPositiveInteger } from '../input-
 import { tankFillTimeS } from '../storage/tank-fill';
 import { deliveryPipeHydraulics } from './delivery-pipe';
 import { ramDeliveredFlowM3s } from './delivery-formula';
-import { driveColumnSurge, RAM_DRIVE_ROUGHNESS_M, RAM_DRIVE_WAVE_SPEED_SOURCE, RAM_DRIVE_WAVE_SPEEDS_MS } from './drive-surge';
+import {
+  driveColumnSurge,
+  RAM_DRIVE_ROUGHNESS_M,
+  RAM_DRIVE_WAVE_SPEED_SOURCE,
+  RAM_DRIVE_WAVE_SPEEDS_MS,
+} from './drive-surge';
 import { RAM_EFFICIENCY_TABLE, ramEfficiencyForRatio } from './efficiency-table';
 import { ramFeasibilityChecks } from './feasibility';
 import { passesChecks } from './plan-check';
@@ -13,17 +18,23 @@ import { solveDeliveredFlow } from './solve-delivery';
 
 /** Shown with every ram plan: the figures can hurt someone if trusted blindly. */
 export const RAM_PLAN_CAUTION =
-  'Planning figures only. A ram hammers its body and delivery pipe on every beat; pipe ratings, anchoring and relief must follow the makers\' data, local codes and licensed practice. Check delivered flow by measurement at commissioning.';
+  "Planning figures only. A ram hammers its body and delivery pipe on every beat; pipe ratings, anchoring and relief must follow the makers' data, local codes and licensed practice. Check delivered flow by measurement at commissioning.";
 
 function assertSiteInputs(options: RamPlanOptions): void {
   assertPositive(options.driveFlowM3s, 'driveFlowM3s');
   assertPositive(options.fallM, 'fallM');
   assertPositive(options.liftM, 'liftM');
   if (options.liftM <= options.fallM) {
-    throw new HydraulicsInputError('liftM', `must be above the fall (${options.fallM} m): water that only needs to go below the source can flow there by gravity`);
+    throw new HydraulicsInputError(
+      'liftM',
+      `must be above the fall (${options.fallM} m): water that only needs to go below the source can flow there by gravity`,
+    );
   }
   if (!(options.drivePipe?.material in RAM_DRIVE_WAVE_SPEEDS_MS)) {
-    throw new HydraulicsInputError('drivePipe.material', `must be one of ${Object.keys(RAM_DRIVE_WAVE_SPEEDS_MS).join(', ')}`);
+    throw new HydraulicsInputError(
+      'drivePipe.material',
+      `must be one of ${Object.keys(RAM_DRIVE_WAVE_SPEEDS_MS).join(', ')}`,
+    );
   }
   assertPositive(options.drivePipe.lengthM, 'drivePipe.lengthM');
   assertPositive(options.drivePipe.insideDiameterM, 'drivePipe.insideDiameterM');
@@ -41,9 +52,13 @@ export function planRamPump(options: RamPlanOptions): RamPlanResult {
   const pumpCount = options.pumpCount ?? 1;
   assertPositiveInteger(pumpCount, 'pumpCount');
   const efficiencyTable = options.efficiencyTable ?? RAM_EFFICIENCY_TABLE;
-  const sizeClass = options.sizeClassId === undefined ? undefined : RAM_SIZE_CLASSES.find((entry) => entry.id === options.sizeClassId);
+  const sizeClass =
+    options.sizeClassId === undefined ? undefined : RAM_SIZE_CLASSES.find((entry) => entry.id === options.sizeClassId);
   if (options.sizeClassId !== undefined && !sizeClass) {
-    throw new HydraulicsInputError('sizeClassId', `unknown size class "${options.sizeClassId}"; known: ${RAM_SIZE_CLASSES.map((entry) => entry.id).join(', ')}`);
+    throw new HydraulicsInputError(
+      'sizeClassId',
+      `unknown size class "${options.sizeClassId}"; known: ${RAM_SIZE_CLASSES.map((entry) => entry.id).join(', ')}`,
+    );
   }
   const availablePerPump = driveFlowM3s / pumpCount;
   const driveFlowPerPumpM3s = sizeClass ? Math.min(availablePerPump, sizeClass.maxDriveFlowM3s) : availablePerPump;
@@ -72,7 +87,12 @@ export function planRamPump(options: RamPlanOptions): RamPlanResult {
     liftM,
     frictionM: pipe.frictionM,
     deliveredAtHeadM3s: (deliveryHeadM) =>
-      ramDeliveredFlowM3s({ driveFlowM3s: driveFlowUsedM3s, fallM: drivingFallM, deliveryHeadM, efficiency: efficiencyAt(deliveryHeadM) }),
+      ramDeliveredFlowM3s({
+        driveFlowM3s: driveFlowUsedM3s,
+        fallM: drivingFallM,
+        deliveryHeadM,
+        efficiency: efficiencyAt(deliveryHeadM),
+      }),
   });
   const deliveredFlowM3s = solved.deliveredFlowM3s;
   const deliveryHeadM = liftM + solved.deliveryFrictionM;
@@ -88,7 +108,11 @@ export function planRamPump(options: RamPlanOptions): RamPlanResult {
     driveFlowAvailablePerPumpM3s: availablePerPump,
     driveFlowAvailableM3s: driveFlowM3s,
     deliveredFlowM3s,
-    drivePipe: { lengthM: drivePipe.lengthM, insideDiameterM: drivePipe.insideDiameterM, rigid: drivePipe.rigid ?? drivePipe.material === 'steel' },
+    drivePipe: {
+      lengthM: drivePipe.lengthM,
+      insideDiameterM: drivePipe.insideDiameterM,
+      rigid: drivePipe.rigid ?? drivePipe.material === 'steel',
+    },
     deliveryHeadM,
     peakHeadAtPumpM,
     deliveryRatingHeadM: pipe.ratingHeadM,

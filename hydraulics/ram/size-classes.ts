@@ -12,7 +12,8 @@ export interface RamSizeClass {
 }
 
 const LITRE_PER_MIN_M3S = 1e-3 / 60;
-const SOURCE = 'Water for the World, Technical Note RWS.4.D.5 Designing a Hydraulic Ram Pump (USAID), pipe sizing table';
+const SOURCE =
+  'Water for the World, Technical Note RWS.4.D.5 Designing a Hydraulic Ram Pump (USAID), pipe sizing table';
 const NOTE =
   'The stored copy labels the table "Delivery pipe size (mm) vs flow (L/min)"; the flows are drive-flow ranges, so the size is read as the drive pipe. Treat the label as uncertain.';
 
@@ -37,5 +38,9 @@ export const RAM_SIZE_CLASSES: readonly RamSizeClass[] = ROWS.map(([mm, min, max
 
 /** The class whose published range holds a drive flow per pump (gaps of under 1 L/min go up), if any. */
 export function suggestRamSizeClass(driveFlowPerPumpM3s: number): RamSizeClass | undefined {
-  return RAM_SIZE_CLASSES.find((sizeClass) => driveFlowPerPumpM3s <= sizeClass.maxDriveFlowM3s && driveFlowPerPumpM3s >= sizeClass.minDriveFlowM3s - LITRE_PER_MIN_M3S);
+  return RAM_SIZE_CLASSES.find(
+    (sizeClass) =>
+      driveFlowPerPumpM3s <= sizeClass.maxDriveFlowM3s &&
+      driveFlowPerPumpM3s >= sizeClass.minDriveFlowM3s - LITRE_PER_MIN_M3S,
+  );
 }

@@ -20,7 +20,11 @@ const MAX_ITERATIONS = 200;
  * q = f(lift + friction(q)). f falls as q rises, so the root is single and bisection between 0 and
  * the frictionless flow always finds it (plain substitution can oscillate on long, thin pipes).
  */
-export function solveDeliveredFlow({ deliveredAtHeadM3s, liftM, frictionM }: DeliverySolveOptions): DeliverySolveResult {
+export function solveDeliveredFlow({
+  deliveredAtHeadM3s,
+  liftM,
+  frictionM,
+}: DeliverySolveOptions): DeliverySolveResult {
   const frictionless = deliveredAtHeadM3s(liftM);
   if (frictionless <= 0) return { deliveredFlowM3s: 0, deliveryFrictionM: 0, iterations: 0 };
   let low = 0;

@@ -29,14 +29,21 @@ export function assertPipeProfile({ chainageM, elevationM }: PipeProfile): void 
   assertArray(chainageM, 'chainageM');
   assertArray(elevationM, 'elevationM');
   if (chainageM.length !== elevationM.length) {
-    throw new HydraulicsInputError('elevationM', `has ${elevationM.length} values but chainageM has ${chainageM.length}`);
+    throw new HydraulicsInputError(
+      'elevationM',
+      `has ${elevationM.length} values but chainageM has ${chainageM.length}`,
+    );
   }
   if (chainageM.length < 2) throw new HydraulicsInputError('chainageM', 'needs at least two points');
   chainageM.forEach((chainage, index) => {
     assertFiniteNumber(chainage, 'chainageM', index);
     assertFiniteNumber(elevationM[index], 'elevationM', index);
     if (index > 0 && chainage <= chainageM[index - 1]) {
-      throw new HydraulicsInputError('chainageM', `must increase along the pipe (${chainage} after ${chainageM[index - 1]})`, index);
+      throw new HydraulicsInputError(
+        'chainageM',
+        `must increase along the pipe (${chainage} after ${chainageM[index - 1]})`,
+        index,
+      );
     }
   });
 }
@@ -46,7 +53,11 @@ export function assertPipeProfile({ chainageM, elevationM }: PipeProfile): void 
  * (`findTurningPoints`, which needs a sag to stand out by more than the prominence on both sides and
  * never reports the ends, which are the source and the outlet).
  */
-export function findLowPoints({ chainageM, elevationM, prominenceM = DEFAULT_LINE_SETTINGS.airPointToleranceM }: LowPointOptions): LowPoint[] {
+export function findLowPoints({
+  chainageM,
+  elevationM,
+  prominenceM = DEFAULT_LINE_SETTINGS.airPointToleranceM,
+}: LowPointOptions): LowPoint[] {
   assertPipeProfile({ chainageM, elevationM });
   assertNonNegative(prominenceM, 'prominenceM');
   return findTurningPoints(elevationM, prominenceM).lows.map((index) => ({

@@ -2,7 +2,14 @@ import { assertPositiveInteger } from '../input-guards';
 import { HydraulicsInputError } from '../errors';
 import type { PlanCheck } from '../ram/plan-check';
 import { addDays, formatIsoDate } from '../yield/iso-date';
-import { dateInYear, isUsualFirstFrostMonth, parseMonthDay, seasonStart, type Hemisphere, type Season } from './calendar';
+import {
+  dateInYear,
+  isUsualFirstFrostMonth,
+  parseMonthDay,
+  seasonStart,
+  type Hemisphere,
+  type Season,
+} from './calendar';
 import { winterTreatment, type WinterLine, type WinterTreatment } from './winter-treatment';
 
 export type SeasonalTaskKind = 'drain-down' | 'refill' | 'silt-cleaning' | 'intake-screen' | 'valve-exercise';
@@ -45,7 +52,14 @@ function withinYear(date: Date, year: number): Date {
 }
 
 /** A year's upkeep tasks with dates, from the project's frost dates and hemisphere. */
-export function seasonalTasks({ year, hemisphere, firstFrost, lastFrost, drainDownLeadDays = 14, lines = [] }: SeasonalTaskOptions): SeasonalTaskResult {
+export function seasonalTasks({
+  year,
+  hemisphere,
+  firstFrost,
+  lastFrost,
+  drainDownLeadDays = 14,
+  lines = [],
+}: SeasonalTaskOptions): SeasonalTaskResult {
   assertPositiveInteger(year, 'year');
   if (year < 1000 || year > 9999) throw new HydraulicsInputError('year', `must be a four-digit year, got ${year}`);
   if (hemisphere !== 'north' && hemisphere !== 'south') {
@@ -112,7 +126,8 @@ export function seasonalTasks({ year, hemisphere, firstFrost, lastFrost, drainDo
       kind: 'refill',
       date: at(addDays(dateInYear(year, parseMonthDay(lastFrost, 'lastFrost')), 7)),
       title: 'Close the drains and refill the lines',
-      detail: 'Close the low-point drains, refill slowly from the top with the air valves open, and recommission the ram.',
+      detail:
+        'Close the low-point drains, refill slowly from the top with the air valves open, and recommission the ram.',
       source: NO_SOURCE,
       lines: toDrain,
     });

@@ -12,7 +12,9 @@ export interface WinterLine {
   frostDepthM: number;
   /** Prominence for low points, m. @default 1 (the washout rule, see `findLowPoints`) */
   prominenceM?: number;
-  /** The designer drains this line for winter whatever its cover (a shallow line is drained in any case). @default false */
+  /**
+   * The designer drains this line for winter whatever its cover (a shallow line is drained in any case). @default false
+   */
   drainForWinter?: boolean;
 }
 
@@ -28,7 +30,8 @@ export function winterTreatment(line: WinterLine, index = 0): WinterTreatment {
   assertNonNegative(line.coverDepthM, 'lines.coverDepthM', index);
   assertNonNegative(line.frostDepthM, 'lines.frostDepthM', index);
   const drainPoints = lowPointsOfLine(line, index);
-  if (line.coverDepthM > line.frostDepthM && !line.drainForWinter) return { label: line.label, treatment: 'buried-below-frost', drainPoints: [] };
+  if (line.coverDepthM > line.frostDepthM && !line.drainForWinter)
+    return { label: line.label, treatment: 'buried-below-frost', drainPoints: [] };
   return { label: line.label, treatment: 'drain-for-winter', drainPoints };
 }
 

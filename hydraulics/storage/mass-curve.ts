@@ -28,7 +28,8 @@ export interface MassCurveResult {
 
 function assertHourly(value: unknown, field: string): asserts value is readonly number[] {
   assertArray(value, field);
-  if (value.length !== HOURS_PER_DAY) throw new HydraulicsInputError(field, `needs 24 hourly volumes, got ${value.length}`);
+  if (value.length !== HOURS_PER_DAY)
+    throw new HydraulicsInputError(field, `needs 24 hourly volumes, got ${value.length}`);
   value.forEach((volume, hour) => assertNonNegative(volume, field, hour));
 }
 

@@ -8,8 +8,7 @@ import { tankFillTimeS } from './tank-fill';
 
 /** Daily demand as a volume with its hourly pattern, or directly as hourly volumes. */
 export type StorageDemand =
-  | { dailyVolumeM3: number; hourlyFractions: readonly number[] }
-  | { hourlyVolumeM3: readonly number[] };
+  { dailyVolumeM3: number; hourlyFractions: readonly number[] } | { hourlyVolumeM3: readonly number[] };
 
 export interface StorageSizingOptions {
   supply: SupplyProfileOptions;
@@ -46,7 +45,10 @@ function demandHourlyM3(demand: StorageDemand): readonly number[] {
 export function sizeStorage({ supply, demand, reserveDays = 0 }: StorageSizingOptions): StorageSizingResult {
   assertPositive(supply.flowM3s, 'supply.flowM3s');
   assertNonNegative(reserveDays, 'reserveDays');
-  const massCurve = massCurveStorage({ supplyHourlyM3: supplyHourlyVolumeM3(supply), demandHourlyM3: demandHourlyM3(demand) });
+  const massCurve = massCurveStorage({
+    supplyHourlyM3: supplyHourlyVolumeM3(supply),
+    demandHourlyM3: demandHourlyM3(demand),
+  });
   const reserveStorageM3 = reserveDays * massCurve.dailyDemandM3;
   const totalStorageM3 = massCurve.cycleStorageM3 + reserveStorageM3;
   const averageDrawM3s = massCurve.dailyDemandM3 / SECONDS_PER_DAY;
@@ -55,7 +57,11 @@ export function sizeStorage({ supply, demand, reserveDays = 0 }: StorageSizingOp
     checks.push({
       code: 'supply-below-demand',
       severity: 'error',
-      values: { supplyVolumeM3: massCurve.dailySupplyM3, demandVolumeM3: massCurve.dailyDemandM3, volumeM3: -massCurve.dailyBalanceM3 },
+      values: {
+        supplyVolumeM3: massCurve.dailySupplyM3,
+        demandVolumeM3: massCurve.dailyDemandM3,
+        volumeM3: -massCurve.dailyBalanceM3,
+      },
       message: `The supply gives ${massCurve.dailySupplyM3.toFixed(2)} m³ a day but the uses take ${massCurve.dailyDemandM3.toFixed(2)} m³: the tank loses ${(-massCurve.dailyBalanceM3).toFixed(2)} m³ every day and no size of tank keeps up.`,
       fix: 'Increase the supply (longer hours, more drive flow, another source) or reduce the demand.',
       source: 'mass balance of the daily cycle',
@@ -66,7 +72,8 @@ export function sizeStorage({ supply, demand, reserveDays = 0 }: StorageSizingOp
       code: 'no-reserve',
       severity: 'info',
       values: {},
-      message: 'No reserve days are held: the tank only carries the daily cycle, so any stop in supply leaves the outlets dry within hours.',
+      message:
+        'No reserve days are held: the tank only carries the daily cycle, so any stop in supply leaves the outlets dry within hours.',
       fix: 'Hold a reserve equal to the interval between checks of the system (3-4 days if checked every 3-4 days).',
       source: 'Alberta Agriculture (McNaughton) in Western Producer 2002',
     });

@@ -11,7 +11,11 @@ export interface SupplyProfileOptions {
 }
 
 /** Volume delivered in each hour of the day, m³ (24 values). */
-export function supplyHourlyVolumeM3({ flowM3s, hoursPerDay = HOURS_PER_DAY, startHour = 0 }: SupplyProfileOptions): number[] {
+export function supplyHourlyVolumeM3({
+  flowM3s,
+  hoursPerDay = HOURS_PER_DAY,
+  startHour = 0,
+}: SupplyProfileOptions): number[] {
   assertNonNegative(flowM3s, 'supply.flowM3s');
   const dailyVolumeM3 = flowM3s * hoursPerDay * 3600;
   return deliveryWindowPattern({ hours: hoursPerDay, startHour }).map((fraction) => fraction * dailyVolumeM3);

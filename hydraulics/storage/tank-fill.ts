@@ -15,7 +15,10 @@ export function tankFillTimeS({ volumeM3, inflowM3s, outflowM3s = 0 }: TankFillO
   assertNonNegative(outflowM3s, 'outflowM3s');
   const netInflowM3s = inflowM3s - outflowM3s;
   if (netInflowM3s <= 0) {
-    throw new HydraulicsInputError('outflowM3s', `the draw (${outflowM3s} m³/s) is not less than the inflow, so the tank never fills`);
+    throw new HydraulicsInputError(
+      'outflowM3s',
+      `the draw (${outflowM3s} m³/s) is not less than the inflow, so the tank never fills`,
+    );
   }
   return volumeM3 / netInflowM3s;
 }

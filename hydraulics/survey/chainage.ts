@@ -60,7 +60,10 @@ export function chainageAlongTrack(points: readonly GeoPosition[]): TrackChainag
 export function slopeLengthOfProfile(stations: readonly { chainageM: number; elevationM: number }[]): number {
   let total = 0;
   for (let i = 1; i < stations.length; i += 1) {
-    total += Math.hypot(stations[i].chainageM - stations[i - 1].chainageM, stations[i].elevationM - stations[i - 1].elevationM);
+    total += Math.hypot(
+      stations[i].chainageM - stations[i - 1].chainageM,
+      stations[i].elevationM - stations[i - 1].elevationM,
+    );
   }
   return total;
 }

@@ -54,7 +54,10 @@ export function consumerGpsHeightWarning(input: {
   });
   if (affected.length === 0) return null;
   const list = affected
-    .map((a) => `${a.label} (${a.elevationDifferenceM.toFixed(1)} m${a.withinGpsErrorBand ? ', smaller than the GPS error itself' : ''})`)
+    .map(
+      (a) =>
+        `${a.label} (${a.elevationDifferenceM.toFixed(1)} m${a.withinGpsErrorBand ? ', smaller than the GPS error itself' : ''})`,
+    )
     .join('; ');
   return {
     severity: 'danger',

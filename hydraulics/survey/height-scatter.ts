@@ -17,7 +17,8 @@ export interface HeightConfidence {
 /**
  * How far a route's heights scatter about the real ground, m: the median of the points' stated
  * confidence (or their source's default, see `DEFAULT_VERTICAL_UNCERTAINTY`), capped at
- * `WALKED_SCATTER_CAP_M` (profile-and-checks.md §1.1). 0 when no point says anything (typed heights): taken as exact. A level
+ * `WALKED_SCATTER_CAP_M` (profile-and-checks.md §1.1). 0 when no point says anything (typed heights): taken as exact. A
+ * level
  * book (0.01 m) or hose level (0.05 m) gives a scatter below any tolerance, so nothing changes.
  */
 export function surveyHeightScatterM(points: readonly HeightConfidence[]): number {
@@ -25,7 +26,8 @@ export function surveyHeightScatterM(points: readonly HeightConfidence[]): numbe
   const all = new Float64Array(points.length);
   let count = 0;
   for (const p of points) {
-    const stated = p.confidenceM ?? (p.heightSource === undefined ? undefined : defaultVerticalUncertaintyM(p.heightSource));
+    const stated =
+      p.confidenceM ?? (p.heightSource === undefined ? undefined : defaultVerticalUncertaintyM(p.heightSource));
     if (stated !== undefined && Number.isFinite(stated) && stated >= 0) all[count++] = stated;
   }
   if (count === 0) return 0;

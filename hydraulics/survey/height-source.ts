@@ -1,5 +1,14 @@
 /** Where a station's height came from. */
-export const HEIGHT_SOURCES = ['gps', 'gnss', 'level', 'hose-level', 'inclinometer', 'altimeter', 'map', 'typed'] as const;
+export const HEIGHT_SOURCES = [
+  'gps',
+  'gnss',
+  'level',
+  'hose-level',
+  'inclinometer',
+  'altimeter',
+  'map',
+  'typed',
+] as const;
 export type HeightSource = (typeof HEIGHT_SOURCES)[number];
 
 export interface VerticalUncertaintyDefault {
@@ -15,7 +24,8 @@ export interface VerticalUncertaintyDefault {
 export const DEFAULT_VERTICAL_UNCERTAINTY: Readonly<Record<HeightSource, VerticalUncertaintyDefault>> = {
   gps: {
     uncertaintyM: 15,
-    source: 'U.S. DoD, GPS Standard Positioning Service Performance Standard 2020 §3.4: vertical ≤ 15 m (95 %, global average) [R28]',
+    source:
+      'U.S. DoD, GPS Standard Positioning Service Performance Standard 2020 §3.4: vertical ≤ 15 m (95 %, global average) [R28]',
   },
   gnss: {
     uncertaintyM: 0.02,

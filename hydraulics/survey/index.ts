@@ -1,7 +1,12 @@
 // Public surface of the survey core; the lead re-exports it from hydraulics/index.ts.
 export type { RouteStation, GeoPosition } from './types';
 export { geodesicInverse, geodesicDirect, geodesicInterpolate } from './geodesic';
-export type { GeodesicInverseInput, GeodesicInverseResult, GeodesicDirectInput, GeodesicDirectResult } from './geodesic';
+export type {
+  GeodesicInverseInput,
+  GeodesicInverseResult,
+  GeodesicDirectInput,
+  GeodesicDirectResult,
+} from './geodesic';
 export { chainageAlongTrack, slopeLengthOfProfile } from './chainage';
 export type { TrackChainage } from './chainage';
 export { projectToLocalPlan, MEAN_EARTH_RADIUS_M } from './plan-projection';
@@ -15,8 +20,19 @@ export type {
   VerticalAngleUnit,
 } from './fieldbook/inclinometer';
 export { reduceLevelBook, assertLevelBook } from './fieldbook/level-book';
-export type { LevelBookReading, LevelBookInput, LevelBookResult, LevelBookMethod, ReducedLevel } from './fieldbook/level-book';
-export { HEIGHT_SOURCES, DEFAULT_VERTICAL_UNCERTAINTY, defaultVerticalUncertaintyM, heightDatumOf } from './height-source';
+export type {
+  LevelBookReading,
+  LevelBookInput,
+  LevelBookResult,
+  LevelBookMethod,
+  ReducedLevel,
+} from './fieldbook/level-book';
+export {
+  HEIGHT_SOURCES,
+  DEFAULT_VERTICAL_UNCERTAINTY,
+  defaultVerticalUncertaintyM,
+  heightDatumOf,
+} from './height-source';
 export type { HeightDatum, HeightSource, VerticalUncertaintyDefault } from './height-source';
 export { surveyHeightScatterM, WALKED_SCATTER_CAP_M } from './height-scatter';
 export type { HeightConfidence } from './height-scatter';

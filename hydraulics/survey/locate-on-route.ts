@@ -30,13 +30,22 @@ export interface RouteLocation {
  * follows the route's own chainage between the two stations; the distance off the line is the
  * WGS84 geodesic from the position to the foot. Null when no station has a position.
  */
-export function locateOnRoute(stations: readonly LocatableStation[], position: { latitudeDeg: number; longitudeDeg: number }): RouteLocation | null {
+export function locateOnRoute(
+  stations: readonly LocatableStation[],
+  position: { latitudeDeg: number; longitudeDeg: number },
+): RouteLocation | null {
   assertLatitude(position.latitudeDeg, 'position.latitudeDeg');
   assertLongitude(position.longitudeDeg, 'position.longitudeDeg');
   stations.forEach((s, i) => assertFiniteNumber(s.chainageM, 'stations.chainageM', i));
   const located = stations
     .map((s, index) => ({ s, index }))
-    .filter(({ s }) => s.latitudeDeg != null && s.longitudeDeg != null && Number.isFinite(s.latitudeDeg) && Number.isFinite(s.longitudeDeg));
+    .filter(
+      ({ s }) =>
+        s.latitudeDeg != null &&
+        s.longitudeDeg != null &&
+        Number.isFinite(s.latitudeDeg) &&
+        Number.isFinite(s.longitudeDeg),
+    );
   if (located.length === 0) return null;
   const toRad = Math.PI / 180;
 
@@ -48,7 +57,10 @@ export function locateOnRoute(stations: readonly LocatableStation[], position: {
     const w = Math.sqrt(1 - WGS84_E2 * Math.sin(latA) ** 2);
     const northPerRad = (WGS84_A_M * (1 - WGS84_E2)) / w ** 3;
     const eastPerRad = (WGS84_A_M / w) * Math.cos(latA);
-    const plane = (lat: number, lon: number) => ({ x: eastPerRad * (lon - a.s.longitudeDeg!) * toRad, y: northPerRad * (lat - a.s.latitudeDeg!) * toRad });
+    const plane = (lat: number, lon: number) => ({
+      x: eastPerRad * (lon - a.s.longitudeDeg!) * toRad,
+      y: northPerRad * (lat - a.s.latitudeDeg!) * toRad,
+    });
     const p = plane(position.latitudeDeg, position.longitudeDeg);
     // The last station alone, or a stretch to the next station that has a position.
     const end = b ? plane(b.s.latitudeDeg!, b.s.longitudeDeg!) : { x: 0, y: 0 };
@@ -61,9 +73,21 @@ export function locateOnRoute(stations: readonly LocatableStation[], position: {
   if (!best) throw new HydraulicsInputError('stations', 'no stretch could be measured');
   const a = stations[best.index];
   const b = stations[best.nextIndex];
-  const foot = best.nextIndex === best.index || best.t === 0
-    ? { latitudeDeg: a.latitudeDeg!, longitudeDeg: a.longitudeDeg! }
-    : geodesicInterpolate({ latitude1Deg: a.latitudeDeg!, longitude1Deg: a.longitudeDeg!, latitude2Deg: b.latitudeDeg!, longitude2Deg: b.longitudeDeg!, fraction: best.t });
-  const offsetM = geodesicInverse({ latitude1Deg: position.latitudeDeg, longitude1Deg: position.longitudeDeg, latitude2Deg: foot.latitudeDeg, longitude2Deg: foot.longitudeDeg }).distanceM;
+  const foot =
+    best.nextIndex === best.index || best.t === 0
+      ? { latitudeDeg: a.latitudeDeg!, longitudeDeg: a.longitudeDeg! }
+      : geodesicInterpolate({
+          latitude1Deg: a.latitudeDeg!,
+          longitude1Deg: a.longitudeDeg!,
+          latitude2Deg: b.latitudeDeg!,
+          longitude2Deg: b.longitudeDeg!,
+          fraction: best.t,
+        });
+  const offsetM = geodesicInverse({
+    latitude1Deg: position.latitudeDeg,
+    longitude1Deg: position.longitudeDeg,
+    latitude2Deg: foot.latitudeDeg,
+    longitude2Deg: foot.longitudeDeg,
+  }).distanceM;
   return { chainageM: a.chainageM + best.t * (b.chainageM - a.chainageM), offsetM, stationIndex: best.index };
 }

@@ -11,7 +11,9 @@ export async function changePassword(userId: string, currentPassword: string, ne
   const { User } = models();
   const user = await User.findByPk(userId);
   if (!user || !(await verifyPassword(user.passwordHash, currentPassword))) {
-    throw new AppError('bad_request', 'The current password is not right', { currentPassword: ['The current password is not right'] });
+    throw new AppError('bad_request', 'The current password is not right', {
+      currentPassword: ['The current password is not right'],
+    });
   }
   user.passwordHash = await hashPassword(newPassword);
   user.sessionVersion += 1;

@@ -14,10 +14,18 @@ export async function requestPasswordReset(email: string): Promise<void> {
     const user = await User.findOne({ where: { email }, transaction });
     if (!user) return;
     const { token, hash } = newLinkToken();
-    await AccountToken.create({
-      purpose: 'password-reset', email, userId: user.id, name: null, passwordHash: null,
-      tokenHash: hash, expiresAt: new Date(Date.now() + LINK_LIFETIME_MS['password-reset']),
-    }, { transaction });
+    await AccountToken.create(
+      {
+        purpose: 'password-reset',
+        email,
+        userId: user.id,
+        name: null,
+        passwordHash: null,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + LINK_LIFETIME_MS['password-reset']),
+      },
+      { transaction },
+    );
     await queueMail(transaction, passwordResetMail(email, token));
   });
 }
@@ -33,7 +41,10 @@ export async function resetPassword(token: string, newPassword: string): Promise
     const row = await claimAccountToken(transaction, 'password-reset', token);
     const user = await User.findByPk(row.userId!, { transaction, lock: transaction.LOCK.UPDATE });
     const now = new Date();
-    await AccountToken.update({ usedAt: now }, { where: { purpose: 'password-reset', userId: row.userId, usedAt: { [Op.is]: null } }, transaction });
+    await AccountToken.update(
+      { usedAt: now },
+      { where: { purpose: 'password-reset', userId: row.userId, usedAt: { [Op.is]: null } }, transaction },
+    );
     if (!user) return { email: row.email };
     user.passwordHash = passwordHash;
     user.sessionVersion += 1;

@@ -23,10 +23,18 @@ export async function requestSignUp(input: SignUpInput): Promise<void> {
       return;
     }
     const { token, hash } = newLinkToken();
-    await AccountToken.create({
-      purpose: 'sign-up', email: input.email, userId: null, name: input.name, passwordHash,
-      tokenHash: hash, expiresAt: new Date(Date.now() + LINK_LIFETIME_MS['sign-up']),
-    }, { transaction });
+    await AccountToken.create(
+      {
+        purpose: 'sign-up',
+        email: input.email,
+        userId: null,
+        name: input.name,
+        passwordHash,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + LINK_LIFETIME_MS['sign-up']),
+      },
+      { transaction },
+    );
     await queueMail(transaction, signUpMail(input.email, input.name, token));
   });
 }
@@ -38,10 +46,16 @@ export async function confirmSignUp(token: string): Promise<{ email: string }> {
     const row = await claimAccountToken(transaction, 'sign-up', token);
     const now = new Date();
     // Every pending sign-up of the address ends here: only the confirmed one becomes the account.
-    await AccountToken.update({ usedAt: now }, { where: { purpose: 'sign-up', email: row.email, usedAt: { [Op.is]: null } }, transaction });
+    await AccountToken.update(
+      { usedAt: now },
+      { where: { purpose: 'sign-up', email: row.email, usedAt: { [Op.is]: null } }, transaction },
+    );
     const existing = await User.findOne({ where: { email: row.email }, transaction });
     if (existing) return { email: row.email };
-    const user = await User.create({ email: row.email, name: row.name!, passwordHash: row.passwordHash!, emailVerifiedAt: now }, { transaction });
+    const user = await User.create(
+      { email: row.email, name: row.name!, passwordHash: row.passwordHash!, emailVerifiedAt: now },
+      { transaction },
+    );
     const team = await Team.create({ name: `${user.name}'s team` }, { transaction });
     await Membership.create({ teamId: team.id, userId: user.id, role: 'owner' }, { transaction });
     return { email: user.email };

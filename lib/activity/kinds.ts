@@ -1,4 +1,6 @@
-/** Everything the activity feed records. Notifications hang off these kinds (recordActivity in lib/activity/record.ts). */
+/**
+ * Everything the activity feed records. Notifications hang off these kinds (recordActivity in lib/activity/record.ts).
+ */
 export type ActivityKind =
   | 'survey.imported'
   | 'route.cleaned'
@@ -17,9 +19,21 @@ export type ActivityKind =
   | 'line.review-state-carried-over';
 
 export const ACTIVITY_KINDS: readonly ActivityKind[] = [
-  'survey.imported', 'route.cleaned', 'line.created', 'line.edited', 'line.deleted',
-  'revision.created', 'revision.submitted', 'revision.changes-requested', 'revision.approved', 'revision.issued', 'revision.superseded',
-  'comment.added', 'comment.resolved', 'comment.reopened', 'line.review-state-carried-over',
+  'survey.imported',
+  'route.cleaned',
+  'line.created',
+  'line.edited',
+  'line.deleted',
+  'revision.created',
+  'revision.submitted',
+  'revision.changes-requested',
+  'revision.approved',
+  'revision.issued',
+  'revision.superseded',
+  'comment.added',
+  'comment.resolved',
+  'comment.reopened',
+  'line.review-state-carried-over',
 ];
 
 export const ACTIVITY_KIND_LABELS: Record<ActivityKind, string> = {

@@ -30,7 +30,12 @@ export async function recordActivity(transaction: Transaction, input: ActivityIn
   const { Activity } = models();
   if (input.kind === 'line.edited' && input.subjectId) {
     const recent = await Activity.findOne({
-      where: { projectId: input.projectId, kind: 'line.edited', subjectId: input.subjectId, actorUserId: input.actorUserId },
+      where: {
+        projectId: input.projectId,
+        kind: 'line.edited',
+        subjectId: input.subjectId,
+        actorUserId: input.actorUserId,
+      },
       order: [['createdAt', 'DESC']],
       transaction,
     });
@@ -40,15 +45,18 @@ export async function recordActivity(transaction: Transaction, input: ActivityIn
       return;
     }
   }
-  await Activity.create({
-    projectId: input.projectId,
-    actorUserId: input.actorUserId,
-    kind: input.kind,
-    subjectType: input.subjectType ?? null,
-    subjectId: input.subjectId ?? null,
-    summary: input.summary,
-    data: { saves: input.kind === 'line.edited' ? 1 : undefined, ...input.data },
-  }, { transaction });
+  await Activity.create(
+    {
+      projectId: input.projectId,
+      actorUserId: input.actorUserId,
+      kind: input.kind,
+      subjectType: input.subjectType ?? null,
+      subjectId: input.subjectId ?? null,
+      summary: input.summary,
+      data: { saves: input.kind === 'line.edited' ? 1 : undefined, ...input.data },
+    },
+    { transaction },
+  );
   // Reviews and mentions reach people by mail, queued in this same transaction.
   await notifyForActivity(transaction, input);
 }

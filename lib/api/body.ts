@@ -41,13 +41,25 @@ function isJsonContentType(type: string | null): boolean {
   return mediaType === 'application/json' || /^application\/[a-z0-9.+-]{1,60}\+json$/.test(mediaType);
 }
 
-/** How a refused body's issues become field errors (`data` is the body as sent): the default names paths and keeps the schema's (SI) messages. */
+/**
+ * How a refused body's issues become field errors (`data` is the body as sent): the default names paths and keeps the
+ * schema's (SI) messages.
+ */
 export type FieldsOf = (error: z.ZodError, data: unknown) => FieldErrors;
 
 /** Reads a JSON body with a size cap (413, checked while streaming) and validates it (400 with field errors). */
-export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema: S, maxBytes?: number, fieldsOf?: FieldsOf): Promise<z.output<S>> {
+export async function readJsonBody<S extends z.ZodType>(
+  req: NextRequest,
+  schema: S,
+  maxBytes?: number,
+  fieldsOf?: FieldsOf,
+): Promise<z.output<S>> {
   const max = maxBytes ?? env().RUNNEL_MAX_JSON_BYTES;
-  const bytes = await readBodyCapped(req, max, () => new AppError('payload_too_large', `Request body is larger than ${max} bytes`));
+  const bytes = await readBodyCapped(
+    req,
+    max,
+    () => new AppError('payload_too_large', `Request body is larger than ${max} bytes`),
+  );
   let raw: string;
   try {
     raw = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
@@ -56,7 +68,9 @@ export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema
   }
 
   if (raw.trim() !== '' && !isJsonContentType(req.headers.get('content-type'))) {
-    throw new AppError('unsupported_media_type', 'Send the body as JSON with Content-Type: application/json', { _: ['Send a JSON object'] });
+    throw new AppError('unsupported_media_type', 'Send the body as JSON with Content-Type: application/json', {
+      _: ['Send a JSON object'],
+    });
   }
   let data: unknown;
   try {
@@ -67,11 +81,17 @@ export async function readJsonBody<S extends z.ZodType>(req: NextRequest, schema
   return parseOrThrow(schema, data, 'Some fields are not valid', fieldsOf);
 }
 
-export function parseOrThrow<S extends z.ZodType>(schema: S, data: unknown, message: string, fieldsOf: FieldsOf = fieldErrorsOf): z.output<S> {
+export function parseOrThrow<S extends z.ZodType>(
+  schema: S,
+  data: unknown,
+  message: string,
+  fieldsOf: FieldsOf = fieldErrorsOf,
+): z.output<S> {
   const result = schema.safeParse(data);
   if (!result.success) {
     const fields = fieldsOf(result.error, data);
-    // With screen words, the message names the first problem too, so a client that shows only the message says what and where.
+    // With screen words, the message names the first problem too, so a client that shows only the message says what and
+    // where.
     const first = fieldsOf === fieldErrorsOf ? undefined : Object.values(fields)[0]?.[0];
     throw new AppError('bad_request', first ? `${message}: ${first}` : message, fields);
   }

@@ -20,11 +20,15 @@ export function domainRefusal(error: unknown): AppError | undefined {
   }
   if (error instanceof RouteEditError) {
     const key = error.pointNumber === undefined ? error.field : `points.${error.pointNumber - 1}.${error.field}`;
-    return new AppError(error.kind === 'conflict' ? 'conflict' : 'bad_request', error.message, { [key]: [error.message] });
+    return new AppError(error.kind === 'conflict' ? 'conflict' : 'bad_request', error.message, {
+      [key]: [error.message],
+    });
   }
   if (error instanceof SurveyImportError) {
-    if (error.code === 'file-too-large') return new AppError('payload_too_large', error.message, { file: [error.message] });
-    if (error.code === 'binary-content') return new AppError('unsupported_media_type', error.message, { file: [error.message] });
+    if (error.code === 'file-too-large')
+      return new AppError('payload_too_large', error.message, { file: [error.message] });
+    if (error.code === 'binary-content')
+      return new AppError('unsupported_media_type', error.message, { file: [error.message] });
     return new AppError('bad_request', error.message, { file: [error.message] });
   }
   return undefined;
@@ -35,7 +39,11 @@ export function domainRefusal(error: unknown): AppError | undefined {
  * and the project's units, at the design's field (`design.` for a saved line, none for a line given
  * whole to the stateless analysis), so both endpoints refuse the same design alike.
  */
-export function lineDesignRefusal(error: HydraulicsInputError, system: UnitSystem, fieldPrefix: '' | 'design.'): AppError {
+export function lineDesignRefusal(
+  error: HydraulicsInputError,
+  system: UnitSystem,
+  fieldPrefix: '' | 'design.',
+): AppError {
   const field = `${fieldPrefix}${error.field}${error.index === undefined ? '' : `.${error.index}`}`;
   const words = inputErrorText(error, system);
   return new AppError('bad_request', `The design does not fit the line: ${words}`, { [field]: [words] });

@@ -9,7 +9,8 @@ export const API_CACHE_CONTROL = 'no-store';
 
 function withHeaders<T>(res: NextResponse<T>, retryAfterSeconds?: number): NextResponse<T> {
   res.headers.set('Cache-Control', API_CACHE_CONTROL);
-  if (retryAfterSeconds !== undefined) res.headers.set('Retry-After', String(Math.max(1, Math.ceil(retryAfterSeconds))));
+  if (retryAfterSeconds !== undefined)
+    res.headers.set('Retry-After', String(Math.max(1, Math.ceil(retryAfterSeconds))));
   return res;
 }
 
@@ -19,12 +20,20 @@ export function appErrorOf(error: unknown): AppError {
   const refusal = domainRefusal(error);
   if (refusal) return refusal;
   if (isDatabaseUnavailable(error)) {
-    return new AppError('service_unavailable', 'The database cannot be reached just now; nothing was changed. Try again in a few seconds.', undefined, {
-      retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
-    });
+    return new AppError(
+      'service_unavailable',
+      'The database cannot be reached just now; nothing was changed. Try again in a few seconds.',
+      undefined,
+      {
+        retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
+      },
+    );
   }
   if (isConcurrentWriteConflict(error)) {
-    return new AppError('conflict', 'Someone else changed this at the same moment, so nothing was changed. Reload and try again.');
+    return new AppError(
+      'conflict',
+      'Someone else changed this at the same moment, so nothing was changed. Reload and try again.',
+    );
   }
   return new AppError('internal', 'Something went wrong on our side. Nothing was changed; try again.');
 }
@@ -33,7 +42,8 @@ export function appErrorOf(error: unknown): AppError {
 export function errorResponse(error: unknown): NextResponse<ApiErrorBody> {
   const appError = appErrorOf(error);
   if (appError.code === 'internal') log().error({ err: error }, 'unexpected error in a request handler');
-  if (appError.code === 'service_unavailable' && !(error instanceof AppError)) log().warn({ err: error }, 'database unavailable during a request');
+  if (appError.code === 'service_unavailable' && !(error instanceof AppError))
+    log().warn({ err: error }, 'database unavailable during a request');
   return withHeaders(NextResponse.json(appError.toBody(), { status: appError.status }), appError.retryAfterSeconds);
 }
 

@@ -22,7 +22,10 @@ interface BaseSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
   body?: B;
   /** Status for a successful plain-data result. @default 200 */
   status?: number;
-  /** Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default RUNNEL_MAX_JSON_BYTES */
+  /**
+   * Largest JSON body for this handler, bytes (a whole-route save is larger than a form). @default
+   * RUNNEL_MAX_JSON_BYTES
+   */
   maxBodyBytes?: number;
   /** A refused body's fields named as the screen names them, bounds in the unit system `unitsOf` gives. */
   bodyWords?: BodyWords<Infer<P>>;
@@ -42,13 +45,25 @@ interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
 export interface BodyWords<P> {
   table: FieldWordTable;
   unitsOf: (params: P, req: NextRequest) => Promise<UnitSystem> | UnitSystem;
-  /** The number the screen gives the body's first list item, read from the body as sent (a page of rows starts past 1). @default 1 */
+  /**
+   * The number the screen gives the body's first list item, read from the body as sent (a page of rows starts past 1).
+   * @default 1
+   */
   firstNumberOf?: (data: unknown) => number;
 }
 
-export interface PublicContext<P, B> { req: NextRequest; params: P; body: B }
-export interface UserContext<P, B> extends PublicContext<P, B> { user: SessionUser }
-export interface TeamContext<P, B> extends UserContext<P, B> { teamId: string; role: Role }
+export interface PublicContext<P, B> {
+  req: NextRequest;
+  params: P;
+  body: B;
+}
+export interface UserContext<P, B> extends PublicContext<P, B> {
+  user: SessionUser;
+}
+export interface TeamContext<P, B> extends UserContext<P, B> {
+  teamId: string;
+  role: Role;
+}
 
 type Handler<C> = (ctx: C) => Promise<unknown>;
 
@@ -68,12 +83,21 @@ async function parseParams<P extends z.ZodType | undefined>(schema: P, ctx: Rout
   return (schema ? parseOrThrow(schema, raw, 'The address names something that cannot exist') : undefined) as Infer<P>;
 }
 
-async function parseBody<B extends z.ZodType | undefined>(schema: B, req: NextRequest, maxBytes?: number, fieldsOf?: FieldsOf): Promise<Infer<B>> {
+async function parseBody<B extends z.ZodType | undefined>(
+  schema: B,
+  req: NextRequest,
+  maxBytes?: number,
+  fieldsOf?: FieldsOf,
+): Promise<Infer<B>> {
   return (schema ? await readJsonBody(req, schema, maxBytes, fieldsOf) : undefined) as Infer<B>;
 }
 
 /** A refused body worded with the screen's names in the unit system the route names, when it names one. */
-async function fieldsOfBody<P>(words: BodyWords<P> | undefined, params: P, req: NextRequest): Promise<FieldsOf | undefined> {
+async function fieldsOfBody<P>(
+  words: BodyWords<P> | undefined,
+  params: P,
+  req: NextRequest,
+): Promise<FieldsOf | undefined> {
   if (!words) return undefined;
   const system = await words.unitsOf(params, req);
   return (error, data) => fieldErrorsIn(error, system, words.table, words.firstNumberOf?.(data) ?? 1);
@@ -93,7 +117,12 @@ export function publicRoute<P extends z.ZodType | undefined = undefined, B exten
   return (req: NextRequest, ctx: RouteContext) =>
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
+      const body = (await parseBody(
+        spec.body,
+        req,
+        spec.maxBodyBytes,
+        await fieldsOfBody(spec.bodyWords, params, req),
+      )) as Infer<B>;
       return handler({ req, params, body });
     }, spec.status ?? 200);
 }
@@ -107,7 +136,12 @@ export function userRoute<P extends z.ZodType | undefined = undefined, B extends
     respond(async () => {
       const params = (await parseParams(spec.params, ctx)) as Infer<P>;
       const user = await signedInUser(req);
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
+      const body = (await parseBody(
+        spec.body,
+        req,
+        spec.maxBodyBytes,
+        await fieldsOfBody(spec.bodyWords, params, req),
+      )) as Infer<B>;
       return handler({ req, params, body, user });
     }, spec.status ?? 200);
 }
@@ -132,8 +166,12 @@ export function teamRoute<P extends z.ZodType | undefined = undefined, B extends
       if (!user) throw unauthenticated();
       if (!teamId || !role) throw notFound();
       if (!can(role, spec.permission)) throw forbidden();
-      const body = (await parseBody(spec.body, req, spec.maxBodyBytes, await fieldsOfBody(spec.bodyWords, params, req))) as Infer<B>;
+      const body = (await parseBody(
+        spec.body,
+        req,
+        spec.maxBodyBytes,
+        await fieldsOfBody(spec.bodyWords, params, req),
+      )) as Infer<B>;
       return handler({ req, params, body, user, teamId, role });
     }, spec.status ?? 200);
 }
-

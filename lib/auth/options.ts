@@ -8,7 +8,6 @@ import { SignInSchema } from '../validations/auth';
 import { verifyPassword } from './password';
 import { bumpSessionVersion } from './users';
 
-
 /** The sign-in error code while the database cannot be reached. */
 export const SIGN_IN_UNAVAILABLE = 'unavailable';
 

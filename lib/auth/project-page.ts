@@ -18,7 +18,10 @@ export interface ProjectPageAccess {
  * and a visitor who is not on its team all get the not-found page (as the API answers 404);
  * anonymous visitors go to sign-in.
  */
-export async function requireProjectPage(params: Promise<{ projectId: string }>, permission: Permission = 'project.view'): Promise<ProjectPageAccess> {
+export async function requireProjectPage(
+  params: Promise<{ projectId: string }>,
+  permission: Permission = 'project.view',
+): Promise<ProjectPageAccess> {
   const parsed = ProjectParams.safeParse(await params);
   if (!parsed.success) notFound();
   const user = await requireUser();

@@ -22,7 +22,10 @@ export function tokenSubject(token: JWT | null): { id: string; sessionVersion: n
 export async function userFromToken(token: JWT | null): Promise<SessionUser | null> {
   if (!tokenSubject(token) || !token?.sub) return null;
   // Plain row, four columns: this runs on every request.
-  const user = await models().User.findByPk(token.sub, { attributes: ['id', 'email', 'name', 'sessionVersion'], raw: true });
+  const user = await models().User.findByPk(token.sub, {
+    attributes: ['id', 'email', 'name', 'sessionVersion'],
+    raw: true,
+  });
   if (!user || user.sessionVersion !== token.sv) return null;
   return { id: user.id, email: user.email, name: user.name, sessionVersion: user.sessionVersion };
 }
@@ -59,8 +62,17 @@ export async function userFromRequest(req: NextRequest): Promise<SessionUser | n
  * The user a token names, if its session is still current, and their role on the team, in one
  * query (every team handler asks both).
  */
-export async function userAndRoleOf(subject: { id: string; sessionVersion: number }, teamId: string | null): Promise<{ user: SessionUser | null; role: Role | null }> {
-  const [row] = await db().query<{ id: string; email: string; name: string; sessionVersion: number; role: Role | null }>(
+export async function userAndRoleOf(
+  subject: { id: string; sessionVersion: number },
+  teamId: string | null,
+): Promise<{ user: SessionUser | null; role: Role | null }> {
+  const [row] = await db().query<{
+    id: string;
+    email: string;
+    name: string;
+    sessionVersion: number;
+    role: Role | null;
+  }>(
     `SELECT u.id, u.email, u.name, u.session_version AS "sessionVersion", m.role
        FROM users u LEFT JOIN memberships m ON m.user_id = u.id AND m.team_id = :teamId
       WHERE u.id = :userId`,

@@ -7,7 +7,14 @@ import { AppError } from '../errors';
 import { clientAddress } from '../http/client-address';
 import { log } from '../log';
 import { authOptions } from './options';
-import { admitSignIn, DEVICE_COOKIE, knownDeviceCookie, knownDeviceOf, signInSucceeded, type SignInAttempt } from './sign-in-throttle';
+import {
+  admitSignIn,
+  DEVICE_COOKIE,
+  knownDeviceCookie,
+  knownDeviceOf,
+  signInSucceeded,
+  type SignInAttempt,
+} from './sign-in-throttle';
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 
@@ -53,7 +60,12 @@ export async function credentialsSignIn(req: NextRequest, ctx: Ctx): Promise<Res
     try {
       const admission = await admitSignIn(attempt);
       if (!admission.allowed) {
-        const refusal = new AppError('rate_limited', 'Too many sign-in attempts. Wait a few minutes, then try again.', undefined, { retryAfterSeconds: admission.retryAfterSeconds });
+        const refusal = new AppError(
+          'rate_limited',
+          'Too many sign-in attempts. Wait a few minutes, then try again.',
+          undefined,
+          { retryAfterSeconds: admission.retryAfterSeconds },
+        );
         return errorAnswer(refusal, SIGN_IN_RATE_LIMITED);
       }
     } catch (error) {
@@ -66,7 +78,10 @@ export async function credentialsSignIn(req: NextRequest, ctx: Ctx): Promise<Res
   if (attempt && startedSession(res)) {
     await signInSucceeded(attempt).catch((err: unknown) => log().warn({ err }, 'could not clear sign-in counts'));
     const secure = env().NEXTAUTH_URL.startsWith('https:') ? '; Secure' : '';
-    res.headers.append('set-cookie', `${DEVICE_COOKIE}=${knownDeviceCookie(attempt.email)}; Path=/api/auth; Max-Age=${DEVICE_COOKIE_MAX_AGE_SECONDS}; HttpOnly; SameSite=Lax${secure}`);
+    res.headers.append(
+      'set-cookie',
+      `${DEVICE_COOKIE}=${knownDeviceCookie(attempt.email)}; Path=/api/auth; Max-Age=${DEVICE_COOKIE_MAX_AGE_SECONDS}; HttpOnly; SameSite=Lax${secure}`,
+    );
   }
   return res;
 }

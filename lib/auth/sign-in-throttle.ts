@@ -62,7 +62,9 @@ export async function admitSignIn(attempt: SignInAttempt): Promise<Admission> {
   const l = limits();
   const account = accountKey(attempt.email);
   const byAddress = await consume(l.address, attempt.address);
-  const byAccount = attempt.knownDevice ? await consume(l.device, `${account}:${attempt.knownDevice}`) : await consume(l.account, account);
+  const byAccount = attempt.knownDevice
+    ? await consume(l.device, `${account}:${attempt.knownDevice}`)
+    : await consume(l.account, account);
   const refused = [byAddress, byAccount].filter((o) => !o.allowed);
   if (refused.length === 0) return { allowed: true };
   return { allowed: false, retryAfterSeconds: Math.max(...refused.map((o) => o.retryAfterSeconds)) };

@@ -59,25 +59,76 @@ export function photoMark(place: PhotoMarkPlace, units: UnitSystem): SvgNode {
   const { photo, x, groundY, y } = place;
   const left = r2(x - BODY.width / 2);
   const top = r2(y - BODY.height / 2);
-  return el('g', { 'data-photo-id': photo.id, 'data-chainage-m': r2(photo.chainageM), 'data-x': x },
+  return el(
+    'g',
+    { 'data-photo-id': photo.id, 'data-chainage-m': r2(photo.chainageM), 'data-x': x },
     el('title', {}, `Photo ${photo.number} at ${formatQuantity('chainage', photo.chainageM, units)}: ${photo.label}`),
-    el('line', { x1: x, y1: r2(top + BODY.height), x2: x, y2: groundY, stroke: PHOTO_MARK_COLOUR, 'stroke-width': 1.2 }),
+    el('line', {
+      x1: x,
+      y1: r2(top + BODY.height),
+      x2: x,
+      y2: groundY,
+      stroke: PHOTO_MARK_COLOUR,
+      'stroke-width': 1.2,
+    }),
     el('rect', { x: r2(x - 4), y: r2(top - 3), width: 8, height: 4, rx: 1, fill: PHOTO_MARK_COLOUR }),
-    el('rect', { x: left, y: top, width: BODY.width, height: BODY.height, rx: 3, fill: PHOTO_MARK_COLOUR, stroke: '#ffffff', 'stroke-width': 1 }),
-    el('text', { x, y: r2(top + 9.5), 'font-size': 8.5, 'font-weight': 'bold', fill: '#ffffff', 'text-anchor': 'middle' }, String(photo.number)),
-    el('circle', { cx: x, cy: groundY, r: 2, fill: PROFILE_COLOURS.paper, stroke: PHOTO_MARK_COLOUR, 'stroke-width': 1.2 }));
+    el('rect', {
+      x: left,
+      y: top,
+      width: BODY.width,
+      height: BODY.height,
+      rx: 3,
+      fill: PHOTO_MARK_COLOUR,
+      stroke: '#ffffff',
+      'stroke-width': 1,
+    }),
+    el(
+      'text',
+      { x, y: r2(top + 9.5), 'font-size': 8.5, 'font-weight': 'bold', fill: '#ffffff', 'text-anchor': 'middle' },
+      String(photo.number),
+    ),
+    el('circle', {
+      cx: x,
+      cy: groundY,
+      r: 2,
+      fill: PROFILE_COLOURS.paper,
+      stroke: PHOTO_MARK_COLOUR,
+      'stroke-width': 1.2,
+    }),
+  );
 }
 
 /** The photos layer of a profile: one mark per photo in the window (null when none). */
-export function photoMarksLayer(photos: readonly ChartPhoto[] | undefined, frame: PhotoMarkFrame, units: UnitSystem): SvgNode | null {
+export function photoMarksLayer(
+  photos: readonly ChartPhoto[] | undefined,
+  frame: PhotoMarkFrame,
+  units: UnitSystem,
+): SvgNode | null {
   if (!photos || photos.length === 0) return null;
   return el('g', { 'data-layer': 'photos' }, ...photoMarkPlaces(photos, frame).map((p) => photoMark(p, units)));
 }
 
 /** Numbers photos 1, 2, … along the route (then the unplaced ones), as every list and drawing shows them. */
-export function numberPhotos<T extends { id: string; chainageM: number | null; caption: string; fileName: string; latitude?: number | null; longitude?: number | null }>(photos: readonly T[]): (ChartPhoto & { source: T })[] {
+export function numberPhotos<
+  T extends {
+    id: string;
+    chainageM: number | null;
+    caption: string;
+    fileName: string;
+    latitude?: number | null;
+    longitude?: number | null;
+  },
+>(photos: readonly T[]): (ChartPhoto & { source: T })[] {
   return [...photos]
     .filter((p): p is T & { chainageM: number } => p.chainageM !== null)
     .sort((a, b) => a.chainageM - b.chainageM || a.id.localeCompare(b.id))
-    .map((p, i) => ({ id: p.id, chainageM: p.chainageM, number: i + 1, label: p.caption || p.fileName, latitudeDeg: p.latitude ?? null, longitudeDeg: p.longitude ?? null, source: p }));
+    .map((p, i) => ({
+      id: p.id,
+      chainageM: p.chainageM,
+      number: i + 1,
+      label: p.caption || p.fileName,
+      latitudeDeg: p.latitude ?? null,
+      longitudeDeg: p.longitude ?? null,
+      source: p,
+    }));
 }

@@ -7,6 +7,7 @@
 export function polylinePath(xs: ArrayLike<number>, ys: ArrayLike<number>): string {
   if (xs.length < 2) return '';
   let d = '';
-  for (let i = 0; i < xs.length; i++) d += `${i === 0 ? 'M' : 'L'}${Math.round(xs[i] * 100) / 100},${Math.round(ys[i] * 100) / 100}`;
+  for (let i = 0; i < xs.length; i++)
+    d += `${i === 0 ? 'M' : 'L'}${Math.round(xs[i] * 100) / 100},${Math.round(ys[i] * 100) / 100}`;
   return d;
 }

@@ -72,17 +72,29 @@ export function profileFrame(data: ProfileChartData, options: ProfileChartOption
   const fromM = Math.max(options.view?.fromM ?? fullFrom, fullFrom);
   const toM = Math.min(options.view?.toM ?? fullTo, fullTo);
   const firstIndex = indexAtOrBefore(points.chainageM, fromM);
-  const lastIndex = Math.min(indexAtOrBefore(points.chainageM, toM) + (points.chainageM[indexAtOrBefore(points.chainageM, toM)] < toM ? 1 : 0), n - 1);
+  const lastIndex = Math.min(
+    indexAtOrBefore(points.chainageM, toM) + (points.chainageM[indexAtOrBefore(points.chainageM, toM)] < toM ? 1 : 0),
+    n - 1,
+  );
 
   const u = options.units;
   const viewSpanM = Math.max(toM - fromM, 1e-9);
   const pxPerM = (plotRight - plotLeft) / viewSpanM;
-  const visible = rangeOf([points.groundElevationM, points.pipeElevationM, points.staticHeadM, points.hydraulicGradeM], firstIndex, lastIndex);
+  const visible = rangeOf(
+    [points.groundElevationM, points.pipeElevationM, points.staticHeadM, points.hydraulicGradeM],
+    firstIndex,
+    lastIndex,
+  );
   const fitted = padded(visible, 0.08, 2);
   const fittedSpanM = fitted[1] - fitted[0];
   const exaggeration =
-    typeof options.exaggeration === 'number' && options.exaggeration > 0 ? options.exaggeration : L.elevationHeight / fittedSpanM / (REFERENCE_PLOT_WIDTH / viewSpanM);
-  const elevationHeight = Math.min(Math.max(fittedSpanM * exaggeration * pxPerM, L.minElevationHeight), L.maxElevationHeight);
+    typeof options.exaggeration === 'number' && options.exaggeration > 0
+      ? options.exaggeration
+      : L.elevationHeight / fittedSpanM / (REFERENCE_PLOT_WIDTH / viewSpanM);
+  const elevationHeight = Math.min(
+    Math.max(fittedSpanM * exaggeration * pxPerM, L.minElevationHeight),
+    L.maxElevationHeight,
+  );
   const spanM = elevationHeight / (exaggeration * pxPerM);
   const mid = (visible[0] + visible[1]) / 2;
   const elevationDomainM: [number, number] = [mid - spanM / 2, mid + spanM / 2];

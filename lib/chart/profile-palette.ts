@@ -29,7 +29,15 @@ export const ZONE_FILLS: Record<WarningSeverity, { fill: string; edge: string } 
 };
 
 /** Pipe strokes, one per pressure class met on the line, lowest rating first. */
-export const PIPE_CLASS_COLOURS = ['#5c8a3a', '#2d7590', '#a5700c', '#385722', '#0b1d25', '#78b4c7', '#7d5410'] as const;
+export const PIPE_CLASS_COLOURS = [
+  '#5c8a3a',
+  '#2d7590',
+  '#a5700c',
+  '#385722',
+  '#0b1d25',
+  '#78b4c7',
+  '#7d5410',
+] as const;
 
 /** How each device is drawn: colour and the words of its legend entry. */
 export const DEVICE_STYLE: Record<LineDeviceKind, { colour: string; label: string }> = {

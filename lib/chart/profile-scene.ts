@@ -33,7 +33,11 @@ function photoFrame(data: ProfileChartData, frame: ProfileFrame) {
     fromM: frame.fromM,
     toM: frame.toM,
     x: frame.x,
-    groundY: (c: number) => Math.min(Math.max(frame.yElevation(valueAt(chainageM, groundElevationM, c)), frame.elevationTop), frame.elevationBottom),
+    groundY: (c: number) =>
+      Math.min(
+        Math.max(frame.yElevation(valueAt(chainageM, groundElevationM, c)), frame.elevationTop),
+        frame.elevationBottom,
+      ),
     topY: frame.elevationTop,
   };
 }
@@ -59,38 +63,86 @@ export function profileScene(data: ProfileChartData, options: ProfileChartOption
     from: frame.firstIndex,
     to: frame.lastIndex,
   });
-  const legend = legendLayer(data, options, width, PROFILE_LAYOUT.marginLeft, frame.pressureBottom + PROFILE_LAYOUT.axisBelow);
+  const legend = legendLayer(
+    data,
+    options,
+    width,
+    PROFILE_LAYOUT.marginLeft,
+    frame.pressureBottom + PROFILE_LAYOUT.axisBelow,
+  );
   const clip = (id: string, top: number, bottom: number) =>
-    el('clipPath', { id }, el('rect', { x: frame.plotLeft, y: top, width: frame.plotRight - frame.plotLeft, height: bottom - top }));
+    el(
+      'clipPath',
+      { id },
+      el('rect', { x: frame.plotLeft, y: top, width: frame.plotRight - frame.plotLeft, height: bottom - top }),
+    );
   const photosFrame = photoFrame(data, frame);
   const photoPlaces = options.photos ? photoMarkPlaces(options.photos, photosFrame) : [];
   const elevationClip = `${idPrefix}-elevation-clip`;
   const pressureClip = `${idPrefix}-pressure-clip`;
-  const root = el('svg', {
-    viewBox: `0 0 ${frame.width} ${frame.height}`,
-    width: frame.width,
-    height: frame.height,
-    // With photo marks to point at (focusable on screen) it is a labelled group, not a flat image.
-    role: photoPlaces.length > 0 ? 'group' : 'img',
-    'aria-labelledby': `${idPrefix}-title`,
-    'font-family': FONT_FAMILY,
-    'data-from-m': frame.fromM,
-    'data-to-m': frame.toM,
-  },
+  const root = el(
+    'svg',
+    {
+      viewBox: `0 0 ${frame.width} ${frame.height}`,
+      width: frame.width,
+      height: frame.height,
+      // With photo marks to point at (focusable on screen) it is a labelled group, not a flat image.
+      role: photoPlaces.length > 0 ? 'group' : 'img',
+      'aria-labelledby': `${idPrefix}-title`,
+      'font-family': FONT_FAMILY,
+      'data-from-m': frame.fromM,
+      'data-to-m': frame.toM,
+    },
     el('title', { id: `${idPrefix}-title` }, options.title ?? 'Long profile of the line'),
-    el('defs', {}, clip(elevationClip, frame.elevationTop, frame.elevationBottom), clip(pressureClip, frame.pressureTop, frame.pressureBottom)),
-    el('rect', { x: 0, y: 0, width: frame.width, height: frame.height, fill: PROFILE_COLOURS.paper, 'data-layer': 'background' }),
-    options.title ? el('text', { x: frame.plotLeft, y: 22, 'font-size': 14, 'font-weight': 'bold', fill: PROFILE_COLOURS.ink }, options.title) : null,
+    el(
+      'defs',
+      {},
+      clip(elevationClip, frame.elevationTop, frame.elevationBottom),
+      clip(pressureClip, frame.pressureTop, frame.pressureBottom),
+    ),
+    el('rect', {
+      x: 0,
+      y: 0,
+      width: frame.width,
+      height: frame.height,
+      fill: PROFILE_COLOURS.paper,
+      'data-layer': 'background',
+    }),
+    options.title
+      ? el(
+          'text',
+          { x: frame.plotLeft, y: 22, 'font-size': 14, 'font-weight': 'bold', fill: PROFILE_COLOURS.ink },
+          options.title,
+        )
+      : null,
     zonesLayer(data, frame),
     axesLayer(frame),
-    el('g', { 'clip-path': `url(#${elevationClip})`, 'data-panel': 'elevation', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.elevationBottom} ${frame.elevationTop}`, 'data-y-domain-m': frame.elevationDomainM.join(' ') },
+    el(
+      'g',
+      {
+        'clip-path': `url(#${elevationClip})`,
+        'data-panel': 'elevation',
+        'data-x-range': `${frame.plotLeft} ${frame.plotRight}`,
+        'data-y-range': `${frame.elevationBottom} ${frame.elevationTop}`,
+        'data-y-domain-m': frame.elevationDomainM.join(' '),
+      },
       groundLayer(data, frame, drawnIndices),
       pipeLayer(data, frame, drawnIndices),
       staticLayer(data, frame),
       earlierGradeLayer(frame, options),
-      gradeLayer(data, frame, drawnIndices)),
-    el('g', { 'clip-path': `url(#${pressureClip})`, 'data-panel': 'pressure', 'data-x-range': `${frame.plotLeft} ${frame.plotRight}`, 'data-y-range': `${frame.pressureBottom} ${frame.pressureTop}`, 'data-y-domain-m': frame.pressureDomainM.join(' ') },
-      pressureLayer(data, frame, drawnIndices)),
+      gradeLayer(data, frame, drawnIndices),
+    ),
+    el(
+      'g',
+      {
+        'clip-path': `url(#${pressureClip})`,
+        'data-panel': 'pressure',
+        'data-x-range': `${frame.plotLeft} ${frame.plotRight}`,
+        'data-y-range': `${frame.pressureBottom} ${frame.pressureTop}`,
+        'data-y-domain-m': frame.pressureDomainM.join(' '),
+      },
+      pressureLayer(data, frame, drawnIndices),
+    ),
     devicesLayer(data, frame, options),
     photoMarksLayer(options.photos, photosFrame, options.units.system),
     highlightLayer(frame, options),

@@ -1,4 +1,11 @@
-import type { FrictionMethod, LineDevice, LineWarning, ProfilePoints, ReachResult, StretchResult } from '../../hydraulics/index';
+import type {
+  FrictionMethod,
+  LineDevice,
+  LineWarning,
+  ProfilePoints,
+  ReachResult,
+  StretchResult,
+} from '../../hydraulics/index';
 import type { ReviewStamp } from '../review/stamp';
 import type { ChartPhoto } from './photo-marks';
 import type { DisplayUnits } from '../units/index';

@@ -16,7 +16,13 @@ export function clampView(view: ChainageView, firstM: number, lastM: number): Ch
 }
 
 /** Zooms by `factor` (<1 in, >1 out) keeping `aboutM` at the same place on screen. */
-export function zoomView(view: ChainageView, factor: number, aboutM: number, firstM: number, lastM: number): ChainageView {
+export function zoomView(
+  view: ChainageView,
+  factor: number,
+  aboutM: number,
+  firstM: number,
+  lastM: number,
+): ChainageView {
   const t = (aboutM - view.fromM) / (view.toM - view.fromM);
   const span = (view.toM - view.fromM) * factor;
   return clampView({ fromM: aboutM - t * span, toM: aboutM - t * span + span }, firstM, lastM);

@@ -13,8 +13,16 @@ export interface SvgNode {
 }
 
 /** Builds a node; falsy children are skipped so callers can write `cond && el(...)`. */
-export function el(tag: string, attrs: SvgAttrs = {}, ...children: (SvgNode | string | false | null | undefined)[]): SvgNode {
-  return { tag, attrs, children: children.filter((c): c is SvgNode | string => c !== false && c !== null && c !== undefined && c !== '') };
+export function el(
+  tag: string,
+  attrs: SvgAttrs = {},
+  ...children: (SvgNode | string | false | null | undefined)[]
+): SvgNode {
+  return {
+    tag,
+    attrs,
+    children: children.filter((c): c is SvgNode | string => c !== false && c !== null && c !== undefined && c !== ''),
+  };
 }
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' };
@@ -34,7 +42,9 @@ function attrsToString(attrs: SvgAttrs): string {
 export function svgToString(node: SvgNode | string): string {
   if (typeof node === 'string') return escapeXml(node);
   const inner = node.children.map(svgToString).join('');
-  return inner === '' ? `<${node.tag}${attrsToString(node.attrs)}/>` : `<${node.tag}${attrsToString(node.attrs)}>${inner}</${node.tag}>`;
+  return inner === ''
+    ? `<${node.tag}${attrsToString(node.attrs)}/>`
+    : `<${node.tag}${attrsToString(node.attrs)}>${inner}</${node.tag}>`;
 }
 
 /** A standalone SVG document (XML declaration, namespace) for saving to a file. */

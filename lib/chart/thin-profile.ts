@@ -31,7 +31,13 @@ export interface ThinOptions {
  * representation", ch. 4): one point per bucket, the one spanning the largest triangle with the
  * point kept before it and the mean of the next bucket.
  */
-function largestTriangles(x: ArrayLike<number>, y: ArrayLike<number>, from: number, to: number, buckets: number): number[] {
+function largestTriangles(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  from: number,
+  to: number,
+  buckets: number,
+): number[] {
   const chosen = [from];
   const inner = to - from - 1;
   if (buckets <= 0 || inner <= 0) return [from, to];
@@ -54,7 +60,9 @@ function largestTriangles(x: ArrayLike<number>, y: ArrayLike<number>, from: numb
     let best = start;
     let bestArea = -1;
     for (let j = start; j < end; j++) {
-      const area = Math.abs((x[previous] - meanX) * (y[j] - y[previous]) - (x[previous] - x[j]) * (meanY - y[previous]));
+      const area = Math.abs(
+        (x[previous] - meanX) * (y[j] - y[previous]) - (x[previous] - x[j]) * (meanY - y[previous]),
+      );
       if (area > bestArea) {
         bestArea = area;
         best = j;
@@ -70,7 +78,8 @@ function largestTriangles(x: ArrayLike<number>, y: ArrayLike<number>, from: numb
 }
 
 /** Column of `columns` equal columns across [x0, x0 + columns / perM] that `xi` falls in. */
-const columnOf = (xi: number, x0: number, perM: number, columns: number) => Math.max(0, Math.min(Math.floor((xi - x0) * perM), columns - 1));
+const columnOf = (xi: number, x0: number, perM: number, columns: number) =>
+  Math.max(0, Math.min(Math.floor((xi - x0) * perM), columns - 1));
 
 /**
  * Marks the first and last index of each of `columns` equal columns of x across [x[from], x[to]]
@@ -78,7 +87,13 @@ const columnOf = (xi: number, x0: number, perM: number, columns: number) => Math
  * aggregation (Jugel et al. 2014, "M4: A Visualization-Oriented Time Series Data Aggregation",
  * PVLDB 7(10)), which draw the same pixels as the whole series.
  */
-function markColumnEnds(x: ArrayLike<number>, from: number, to: number, columns: number, mark: (i: number) => void): void {
+function markColumnEnds(
+  x: ArrayLike<number>,
+  from: number,
+  to: number,
+  columns: number,
+  mark: (i: number) => void,
+): void {
   const x0 = x[from];
   const perM = columns / (x[to] - x0 || 1);
   let start = from;
@@ -106,7 +121,15 @@ function markColumnEnds(x: ArrayLike<number>, from: number, to: number, columns:
  * aggregation, taken over the turns (a column's lowest or highest point is a turn or one of its
  * two end points).
  */
-function markColumnExtremes(turns: readonly number[], x: ArrayLike<number>, y: ArrayLike<number>, from: number, to: number, columns: number, mark: (i: number) => void): void {
+function markColumnExtremes(
+  turns: readonly number[],
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  from: number,
+  to: number,
+  columns: number,
+  mark: (i: number) => void,
+): void {
   if (turns.length === 0) return;
   const x0 = x[from];
   const perM = columns / (x[to] - x0 || 1);
@@ -165,7 +188,10 @@ export function thinProfile(x: ArrayLike<number>, y: ArrayLike<number>, options:
 }
 
 /** `thinProfile` over chainage/elevation points: the kept points themselves, in order. */
-export function thinPoints<T extends { chainageM: number; elevationM: number }>(points: readonly T[], options: Omit<ThinOptions, 'from' | 'to' | 'guardSeries'>): T[] {
+export function thinPoints<T extends { chainageM: number; elevationM: number }>(
+  points: readonly T[],
+  options: Omit<ThinOptions, 'from' | 'to' | 'guardSeries'>,
+): T[] {
   const x = Float64Array.from(points, (p) => p.chainageM);
   const y = Float64Array.from(points, (p) => p.elevationM);
   return thinProfile(x, y, options).map((i) => points[i]);

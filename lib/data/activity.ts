@@ -19,7 +19,10 @@ export interface ActivityRecord {
 const PAGE = 100;
 
 /** The project's feed, newest first, a page at a time (the index on project and time keeps it linear in the page). */
-export async function listActivity(projectId: string, query: ActivityQuery): Promise<{ items: ActivityRecord[]; nextBefore: string | null }> {
+export async function listActivity(
+  projectId: string,
+  query: ActivityQuery,
+): Promise<{ items: ActivityRecord[]; nextBefore: string | null }> {
   const { Activity: A, User } = models();
   const where: WhereOptions<Activity> = {
     projectId,
@@ -30,7 +33,12 @@ export async function listActivity(projectId: string, query: ActivityQuery): Pro
   const rows = await A.findAll({ where, order: [['createdAt', 'DESC']], limit: PAGE + 1 });
   const page = rows.slice(0, PAGE);
   const ids = [...new Set(page.map((r) => r.actorUserId).filter((id): id is string => id != null))];
-  const names = new Map((ids.length ? await User.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : []).map((u) => [u.id, u.name]));
+  const names = new Map(
+    (ids.length ? await User.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : []).map((u) => [
+      u.id,
+      u.name,
+    ]),
+  );
   return {
     items: page.map((r) => ({
       id: r.id,

@@ -9,7 +9,13 @@ import type { DemandUseInput } from '../validations/demand-uses';
 import { demandUseRecord } from './lift-records';
 
 export async function listDemandUses(projectId: string): Promise<DemandUseRecord[]> {
-  const rows = await models().DemandUse.findAll({ where: { projectId }, order: [['position', 'ASC'], ['createdAt', 'ASC']] });
+  const rows = await models().DemandUse.findAll({
+    where: { projectId },
+    order: [
+      ['position', 'ASC'],
+      ['createdAt', 'ASC'],
+    ],
+  });
   return rows.map(demandUseRecord);
 }
 
@@ -22,16 +28,28 @@ export async function createDemandUse(projectId: string, input: DemandUseInput):
   assertComputable(input);
   const { DemandUse, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
-    const last = (await DemandUse.max<number | null, InstanceType<typeof DemandUse>>('position', { where: { projectId }, transaction })) ?? -1;
+    const last =
+      (await DemandUse.max<number | null, InstanceType<typeof DemandUse>>('position', {
+        where: { projectId },
+        transaction,
+      })) ?? -1;
     return demandUseRecord(await DemandUse.create({ ...input, projectId, position: last + 1 }, { transaction }));
   });
 }
 
-export async function updateDemandUse(projectId: string, useId: string, input: DemandUseInput): Promise<DemandUseRecord> {
+export async function updateDemandUse(
+  projectId: string,
+  useId: string,
+  input: DemandUseInput,
+): Promise<DemandUseRecord> {
   assertComputable(input);
   const { DemandUse, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
-    const row = await DemandUse.findOne({ where: { id: useId, projectId }, transaction, lock: transaction.LOCK.UPDATE });
+    const row = await DemandUse.findOne({
+      where: { id: useId, projectId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!row) throw notFound('No such use in this project');
     await row.update(input, { transaction });
     return demandUseRecord(row);

@@ -13,16 +13,30 @@ import { loadNetworkBasis } from './network-context';
 import { readNetworkRecords } from './network-records';
 
 type GatheredPart = Exclude<keyof DesignSnapshot, 'format' | 'networkSolve'>;
-type PartGatherer<K extends keyof DesignSnapshot> = (projectId: string, transaction: Transaction) => Promise<DesignSnapshot[K]>;
+type PartGatherer<K extends keyof DesignSnapshot> = (
+  projectId: string,
+  transaction: Transaction,
+) => Promise<DesignSnapshot[K]>;
 
 async function projectPart(projectId: string, transaction: Transaction): Promise<DesignSnapshot['project']> {
   const p = await models().Project.findByPk(projectId, { transaction });
   if (!p) throw new Error(`project ${projectId} vanished while taking a snapshot`);
-  return { name: p.name, description: p.description, unitSystem: p.unitSystem, siteNotes: p.siteNotes, frostDepthM: p.frostDepthM ?? null };
+  return {
+    name: p.name,
+    description: p.description,
+    unitSystem: p.unitSystem,
+    siteNotes: p.siteNotes,
+    frostDepthM: p.frostDepthM ?? null,
+  };
 }
 
 async function linesPart(projectId: string, transaction: Transaction): Promise<SnapshotLine[]> {
-  const rows = await models().Line.findAll({ where: { projectId }, attributes: ['id'], order: [['name', 'ASC']], transaction });
+  const rows = await models().Line.findAll({
+    where: { projectId },
+    attributes: ['id'],
+    order: [['name', 'ASC']],
+    transaction,
+  });
   const context = await lineSiteContext(projectId);
   const out: SnapshotLine[] = [];
   for (const row of rows) {
@@ -39,8 +53,17 @@ async function linesPart(projectId: string, transaction: Transaction): Promise<S
       }
     }
     out.push({
-      id: line.id, name: line.name, notes: line.notes, routeId: line.routeId, routeName: line.routeName,
-      fromChainageM: line.fromChainageM, toChainageM: line.toChainageM, design: line.design, stations, context, problem,
+      id: line.id,
+      name: line.name,
+      notes: line.notes,
+      routeId: line.routeId,
+      routeName: line.routeName,
+      fromChainageM: line.fromChainageM,
+      toChainageM: line.toChainageM,
+      design: line.design,
+      stations,
+      context,
+      problem,
     });
   }
   return out;
@@ -78,7 +101,8 @@ export async function solveFrozenNetwork(snapshot: DesignSnapshot): Promise<Froz
     return { ok: true, result: await runInWorker('network.solve', context, { timeLimitMs: FROZEN_SOLVE_LIMIT_MS }) };
   } catch (error) {
     if (error instanceof AppError && error.code === 'service_unavailable') throw error;
-    // A network that cannot be built or does not solve (HydraulicsInputError naming the part, a time-out) is recorded, not fatal.
+    // A network that cannot be built or does not solve (HydraulicsInputError naming the part, a time-out) is recorded,
+    // not fatal.
     if (error instanceof Error) return { ok: false, problem: error.message };
     throw error;
   }
@@ -108,6 +132,9 @@ function withFrozenFeeds(snapshot: DesignSnapshot, solve: FrozenNetworkSolve | n
   if (!context || !solve) return snapshot.lines;
   return snapshot.lines.map((line) => ({
     ...line,
-    context: { ...line.context, network: lineNetworkFlows(context, line.id, solve.ok ? solve.result : null, solve.ok ? null : solve.problem) },
+    context: {
+      ...line.context,
+      network: lineNetworkFlows(context, line.id, solve.ok ? solve.result : null, solve.ok ? null : solve.problem),
+    },
   }));
 }

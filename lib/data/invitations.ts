@@ -10,12 +10,30 @@ import { queueMail } from '../mail/outbox';
 import { enqueueNotification } from '../notifications/enqueue';
 import { ROLE_LABELS, type Role } from '../roles';
 
-export interface InvitationSummary { id: string; email: string; role: Role; invitedBy: string | null; expiresAt: string; expired: boolean }
+export interface InvitationSummary {
+  id: string;
+  email: string;
+  role: Role;
+  invitedBy: string | null;
+  expiresAt: string;
+  expired: boolean;
+}
 export type InvitationState = 'open' | 'expired' | 'revoked' | 'used' | 'unknown';
-export interface InvitationView { state: InvitationState; teamName: string | null; role: Role | null; email: string | null; inviterName: string | null }
+export interface InvitationView {
+  state: InvitationState;
+  teamName: string | null;
+  role: Role | null;
+  email: string | null;
+  inviterName: string | null;
+}
 
 const summary = (i: Invitation, inviter: string | null): InvitationSummary => ({
-  id: i.id, email: i.email, role: i.role, invitedBy: inviter, expiresAt: i.expiresAt.toISOString(), expired: i.expiresAt.getTime() <= Date.now(),
+  id: i.id,
+  email: i.email,
+  role: i.role,
+  invitedBy: inviter,
+  expiresAt: i.expiresAt.toISOString(),
+  expired: i.expiresAt.getTime() <= Date.now(),
 });
 
 function stateOf(i: Invitation | null): InvitationState {
@@ -38,18 +56,41 @@ export const INVITATION_REFUSALS: Record<Exclude<InvitationState, 'open'>, strin
  * the same address to the team is withdrawn, so only the newest link works. The answer does not
  * depend on whether the address has a Runnel account.
  */
-export async function inviteToTeam(teamId: string, inviter: SessionUser, email: string, role: Role): Promise<InvitationSummary> {
+export async function inviteToTeam(
+  teamId: string,
+  inviter: SessionUser,
+  email: string,
+  role: Role,
+): Promise<InvitationSummary> {
   const { Invitation, Membership, Team, User, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
-    const member = await Membership.findOne({ where: { teamId }, include: [{ model: User, as: 'user', where: { email }, attributes: ['id'] }], transaction });
-    if (member) throw new AppError('conflict', 'Already a member of this team', { email: ['Already on the team; change their role in the list instead'] });
+    const member = await Membership.findOne({
+      where: { teamId },
+      include: [{ model: User, as: 'user', where: { email }, attributes: ['id'] }],
+      transaction,
+    });
+    if (member)
+      throw new AppError('conflict', 'Already a member of this team', {
+        email: ['Already on the team; change their role in the list instead'],
+      });
     const team = await Team.findByPk(teamId, { transaction });
     const now = new Date();
-    await Invitation.update({ revokedAt: now }, { where: { teamId, email, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } }, transaction });
+    await Invitation.update(
+      { revokedAt: now },
+      { where: { teamId, email, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } }, transaction },
+    );
     const { token, hash } = newLinkToken();
-    const invitation = await Invitation.create({
-      teamId, email, role, tokenHash: hash, invitedBy: inviter.id, expiresAt: new Date(now.getTime() + LINK_LIFETIME_MS.invitation),
-    }, { transaction });
+    const invitation = await Invitation.create(
+      {
+        teamId,
+        email,
+        role,
+        tokenHash: hash,
+        invitedBy: inviter.id,
+        expiresAt: new Date(now.getTime() + LINK_LIFETIME_MS.invitation),
+      },
+      { transaction },
+    );
     await queueMail(transaction, invitationMail(email, team!.name, inviter.name, role, token));
     return summary(invitation, inviter.name);
   });
@@ -58,10 +99,16 @@ export async function inviteToTeam(teamId: string, inviter: SessionUser, email: 
 /** Invitations not yet accepted or withdrawn (expired ones too, so the owner can send them again). */
 export async function listOpenInvitations(teamId: string): Promise<InvitationSummary[]> {
   const { Invitation, User } = models();
-  const rows = await Invitation.findAll({ where: { teamId, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } }, order: [['createdAt', 'DESC']] });
-  const inviters = await User.findAll({ where: { id: rows.map((r) => r.invitedBy).filter((x): x is string => Boolean(x)) }, attributes: ['id', 'name'] });
+  const rows = await Invitation.findAll({
+    where: { teamId, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } },
+    order: [['createdAt', 'DESC']],
+  });
+  const inviters = await User.findAll({
+    where: { id: rows.map((r) => r.invitedBy).filter((x): x is string => Boolean(x)) },
+    attributes: ['id', 'name'],
+  });
   const names = new Map(inviters.map((u) => [u.id, u.name]));
-  return rows.map((r) => summary(r, r.invitedBy ? names.get(r.invitedBy) ?? null : null));
+  return rows.map((r) => summary(r, r.invitedBy ? (names.get(r.invitedBy) ?? null) : null));
 }
 
 export async function revokeInvitation(teamId: string, invitationId: string): Promise<void> {
@@ -78,27 +125,37 @@ export async function viewInvitation(token: string): Promise<InvitationView> {
   const row = await Invitation.findOne({ where: { tokenHash: hashLinkToken(token) } });
   const state = stateOf(row);
   if (!row || state !== 'open') return { state, teamName: null, role: null, email: null, inviterName: null };
-  const [team, inviter] = await Promise.all([Team.findByPk(row.teamId), row.invitedBy ? User.findByPk(row.invitedBy) : null]);
+  const [team, inviter] = await Promise.all([
+    Team.findByPk(row.teamId),
+    row.invitedBy ? User.findByPk(row.invitedBy) : null,
+  ]);
   return { state, teamName: team?.name ?? null, role: row.role, email: row.email, inviterName: inviter?.name ?? null };
 }
 
 async function claimInvitation(transaction: Transaction, token: string): Promise<Invitation> {
-  const row = await models().Invitation.findOne({ where: { tokenHash: hashLinkToken(token) }, transaction, lock: transaction.LOCK.UPDATE });
+  const row = await models().Invitation.findOne({
+    where: { tokenHash: hashLinkToken(token) },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   const state = stateOf(row);
-  if (state !== 'open') throw new AppError('bad_request', INVITATION_REFUSALS[state], { token: [INVITATION_REFUSALS[state]] });
+  if (state !== 'open')
+    throw new AppError('bad_request', INVITATION_REFUSALS[state], { token: [INVITATION_REFUSALS[state]] });
   return row!;
 }
 
 export type Acceptance =
-  | { as: 'signed-in'; user: SessionUser }
-  | { as: 'new-account'; name: string; passwordHash: string };
+  { as: 'signed-in'; user: SessionUser } | { as: 'new-account'; name: string; passwordHash: string };
 
 /**
  * Accepts an invitation, once: the signed-in person whose address it was sent to joins the team,
  * or a new account is made for that address (the link reached the mailbox, so the address is
  * proven). The inviter is told, in the same transaction.
  */
-export async function acceptInvitation(token: string, acceptance: Acceptance): Promise<{ teamId: string; role: Role; email: string }> {
+export async function acceptInvitation(
+  token: string,
+  acceptance: Acceptance,
+): Promise<{ teamId: string; role: Role; email: string }> {
   const { Membership, User, Team, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const invitation = await claimInvitation(transaction, token);
@@ -107,7 +164,10 @@ export async function acceptInvitation(token: string, acceptance: Acceptance): P
     if (acceptance.as === 'signed-in') {
       const found = await User.findByPk(acceptance.user.id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!found || found.email !== invitation.email) {
-        throw new AppError('forbidden', `This invitation was sent to ${invitation.email}. Sign out, then open the link again and sign in with that address.`);
+        throw new AppError(
+          'forbidden',
+          `This invitation was sent to ${invitation.email}. Sign out, then open the link again and sign in with that address.`,
+        );
       }
       user = found;
       user.emailVerifiedAt ??= now;
@@ -115,9 +175,16 @@ export async function acceptInvitation(token: string, acceptance: Acceptance): P
     } else {
       const taken = await User.findOne({ where: { email: invitation.email }, transaction });
       if (taken) {
-        throw new AppError('conflict', `${invitation.email} already has a Runnel account: sign in with it, then open this link again.`, { email: ['Sign in with this address instead'] });
+        throw new AppError(
+          'conflict',
+          `${invitation.email} already has a Runnel account: sign in with it, then open this link again.`,
+          { email: ['Sign in with this address instead'] },
+        );
       }
-      user = await User.create({ email: invitation.email, name: acceptance.name, passwordHash: acceptance.passwordHash, emailVerifiedAt: now }, { transaction });
+      user = await User.create(
+        { email: invitation.email, name: acceptance.name, passwordHash: acceptance.passwordHash, emailVerifiedAt: now },
+        { transaction },
+      );
     }
     const existing = await Membership.findOne({ where: { teamId: invitation.teamId, userId: user.id }, transaction });
     if (existing) throw new AppError('conflict', 'You are already on this team; the owner can change your role.');
@@ -128,7 +195,10 @@ export async function acceptInvitation(token: string, acceptance: Acceptance): P
     const team = await Team.findByPk(invitation.teamId, { transaction });
     if (invitation.invitedBy) {
       await enqueueNotification(transaction, {
-        kind: 'invitation-accepted', teamId: invitation.teamId, actorId: user.id, recipientIds: [invitation.invitedBy],
+        kind: 'invitation-accepted',
+        teamId: invitation.teamId,
+        actorId: user.id,
+        recipientIds: [invitation.invitedBy],
         summary: `${user.name} accepted your invitation and joined ${team?.name ?? 'the team'} as ${ROLE_LABELS[invitation.role]}`,
         path: '/team',
       });

@@ -6,7 +6,12 @@ import { notInProject } from '../errors';
 type Owned = 'WaterSource' | 'Tank' | 'RamSite' | 'Route' | 'DemandUse' | 'SeasonalTask' | 'Line' | 'NetworkNode';
 
 /** Whether a row of a project-owned table exists and belongs to the project. */
-export async function existsInProject(model: Owned, id: string, projectId: string, transaction?: Transaction): Promise<boolean> {
+export async function existsInProject(
+  model: Owned,
+  id: string,
+  projectId: string,
+  transaction?: Transaction,
+): Promise<boolean> {
   const table = models()[model] as ModelStatic<Model>;
   return (await table.count({ where: { id, projectId }, transaction })) > 0;
 }

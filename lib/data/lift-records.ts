@@ -46,7 +46,12 @@ export const ramSiteRecord = (row: RamSite): RamSiteRecord => ({
   tankId: row.tankId,
   driveFlowM3s: row.driveFlowM3s,
   fallM: row.fallM,
-  drivePipe: { lengthM: row.driveLengthM, insideDiameterM: row.driveInsideDiameterM, material: row.driveMaterial, rigid: row.driveRigid },
+  drivePipe: {
+    lengthM: row.driveLengthM,
+    insideDiameterM: row.driveInsideDiameterM,
+    material: row.driveMaterial,
+    rigid: row.driveRigid,
+  },
   liftM: row.liftM,
   pumpElevationM: row.pumpElevationM ?? null,
   deliveryPipe: {

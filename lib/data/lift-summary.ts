@@ -20,7 +20,13 @@ export async function loadLiftRecords(projectId: string): Promise<LiftRecords> {
     m.WaterSource.findAll({ where, order: [['createdAt', 'ASC']] }),
     m.RamSite.findAll({ where, order: [['createdAt', 'ASC']] }),
     m.Tank.findAll({ where, order: [['createdAt', 'ASC']] }),
-    m.DemandUse.findAll({ where, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
+    m.DemandUse.findAll({
+      where,
+      order: [
+        ['position', 'ASC'],
+        ['createdAt', 'ASC'],
+      ],
+    }),
     m.SeasonalTask.findAll({ where, order: [['dueOn', 'ASC']] }),
     m.Route.findAll({ where, attributes: ['id', 'name', 'lengthM'], order: [['name', 'ASC']] }),
   ]);

@@ -20,10 +20,18 @@ export interface AnalysedLine {
 export async function analyseSavedLine(lineId: string): Promise<AnalysedLine> {
   const line = await getLine(lineId);
   if (!line) throw notFound();
-  if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
+  if (!line.routeId)
+    throw new AppError('bad_request', 'This line has lost its route; pick a route first', {
+      routeId: ['Pick a route'],
+    });
   const stations = await stationsOfLine(line.routeId, line);
   // What feeds the line comes from the network when it knows (lineFeedOf): start level or head, flow per piece.
   const context = await lineFeedContext(line.projectId, line.id);
   // On the worker pool: a long line's analysis must not hold the request thread.
-  return { line, stations, context, analysis: await runInWorker('line.analyse', { line: lineInputOf(line.design, stations, context) }) };
+  return {
+    line,
+    stations,
+    context,
+    analysis: await runInWorker('line.analyse', { line: lineInputOf(line.design, stations, context) }),
+  };
 }

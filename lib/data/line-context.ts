@@ -11,7 +11,10 @@ import { pumpOutletHeadForProject } from './ram-sites';
  * What a line of this project reads from the rest of it at each analysis: ram sites that can feed
  * it, the frost depth, and an open drain-down task already past its date (`today`, ISO date).
  */
-export async function lineSiteContext(projectId: string, today: string = new Date().toISOString().slice(0, 10)): Promise<LineSiteContext> {
+export async function lineSiteContext(
+  projectId: string,
+  today: string = new Date().toISOString().slice(0, 10),
+): Promise<LineSiteContext> {
   const project = await models().Project.findByPk(projectId, { attributes: ['frostDepthM', 'unitSystem'] });
   const overdue = await models().SeasonalTask.findOne({
     where: { projectId, kind: 'drain-down', done: false, dueOn: { [Op.lt]: today } },
@@ -40,6 +43,9 @@ export async function assertRamSiteInProject(design: LineDesign, projectId: stri
   if (design.start.kind !== 'ram-site') return;
   const site = await models().RamSite.findOne({ where: { id: design.start.ramSiteId, projectId }, attributes: ['id'] });
   if (!site) {
-    throw notInProject({ 'design.start.ramSiteId': ['Pick a ram site of this project'] }, 'That ram site is not part of this project');
+    throw notInProject(
+      { 'design.start.ramSiteId': ['Pick a ram site of this project'] },
+      'That ram site is not part of this project',
+    );
   }
 }

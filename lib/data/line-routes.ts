@@ -22,7 +22,12 @@ export async function listRouteChoices(projectId: string): Promise<RouteChoice[]
   const routes = await Route.findAll({ where: { projectId }, order: [['name', 'ASC']] });
   if (routes.length === 0) return [];
   const ranges = (await RoutePoint.findAll({
-    attributes: ['routeId', [sequelize.fn('min', sequelize.col('chainage_m')), 'first'], [sequelize.fn('max', sequelize.col('chainage_m')), 'last'], [sequelize.fn('count', sequelize.col('seq')), 'n']],
+    attributes: [
+      'routeId',
+      [sequelize.fn('min', sequelize.col('chainage_m')), 'first'],
+      [sequelize.fn('max', sequelize.col('chainage_m')), 'last'],
+      [sequelize.fn('count', sequelize.col('seq')), 'n'],
+    ],
     // Points a surveyor took out in clean-up are kept for the record but never designed on.
     where: { routeId: routes.map((r) => r.id), excluded: false },
     group: ['routeId'],
@@ -32,7 +37,16 @@ export async function listRouteChoices(projectId: string): Promise<RouteChoice[]
   return routes.flatMap((r) => {
     const range = byRoute.get(r.id);
     if (!range || Number(range.n) < 2) return [];
-    return [{ id: r.id, name: r.name, pointCount: Number(range.n), lengthM: r.lengthM, firstChainageM: Number(range.first), lastChainageM: Number(range.last) }];
+    return [
+      {
+        id: r.id,
+        name: r.name,
+        pointCount: Number(range.n),
+        lengthM: r.lengthM,
+        firstChainageM: Number(range.first),
+        lastChainageM: Number(range.last),
+      },
+    ];
   });
 }
 
@@ -60,7 +74,14 @@ export async function routeColumns(routeId: string): Promise<RouteColumns> {
     where: { routeId, excluded: false },
     order: [['seq', 'ASC']],
     raw: true,
-  })) as unknown as { chainageM: number; elevationM: number; latitude: number | null; longitude: number | null; heightSource: HeightSource; confidenceM: number | null }[];
+  })) as unknown as {
+    chainageM: number;
+    elevationM: number;
+    latitude: number | null;
+    longitude: number | null;
+    heightSource: HeightSource;
+    confidenceM: number | null;
+  }[];
   return {
     chainageM: rows.map((r) => r.chainageM),
     elevationM: rows.map((r) => r.elevationM),

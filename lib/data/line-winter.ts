@@ -37,14 +37,20 @@ export async function lineWintersForProject(projectId: string): Promise<ProjectL
         stations.every((s) => s.coverM === undefined),
       );
       const drainedByChoice = plan.treatment === 'drained-for-winter';
-      const winterLine: WinterLine | null = context.frostDepthM === null && !drainedByChoice ? null : {
-        label: line.name,
-        profile: { chainageM: Array.from(analysis.points.chainageM), elevationM: Array.from(analysis.points.pipeElevationM) },
-        coverDepthM: plan.shallowestCoverM,
-        frostDepthM: context.frostDepthM ?? 0,
-        prominenceM: highLowToleranceM(analysis.settings),
-        drainForWinter: drainedByChoice,
-      };
+      const winterLine: WinterLine | null =
+        context.frostDepthM === null && !drainedByChoice
+          ? null
+          : {
+              label: line.name,
+              profile: {
+                chainageM: Array.from(analysis.points.chainageM),
+                elevationM: Array.from(analysis.points.pipeElevationM),
+              },
+              coverDepthM: plan.shallowestCoverM,
+              frostDepthM: context.frostDepthM ?? 0,
+              prominenceM: highLowToleranceM(analysis.settings),
+              drainForWinter: drainedByChoice,
+            };
       winters.push({ lineId: line.id, name: line.name, plan, winterLine });
     } catch (error) {
       if (error instanceof HydraulicsInputError || error instanceof AppError) continue;

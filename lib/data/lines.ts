@@ -64,7 +64,10 @@ function columnsOf(design: LineDesign) {
     pipes: design.pipes,
     settings: design.settings,
     winter: design.winter ?? null,
-  } as Pick<Line, 'startCondition' | 'endCondition' | 'flow' | 'stretches' | 'fittings' | 'devices' | 'pipes' | 'settings' | 'winter'>;
+  } as Pick<
+    Line,
+    'startCondition' | 'endCondition' | 'flow' | 'stretches' | 'fittings' | 'devices' | 'pipes' | 'settings' | 'winter'
+  >;
 }
 
 async function names(ids: (string | null)[], transaction?: Transaction): Promise<Map<string, string>> {
@@ -124,7 +127,11 @@ export async function listLines(projectId: string): Promise<LineSummary[]> {
     const { design } = record as LineRecord;
     delete record.design;
     delete record.notes;
-    return { ...(record as Omit<LineRecord, 'design' | 'notes'>), stretchCount: design.stretches.length, deviceCount: design.devices.length };
+    return {
+      ...(record as Omit<LineRecord, 'design' | 'notes'>),
+      stretchCount: design.stretches.length,
+      deviceCount: design.devices.length,
+    };
   });
 }
 
@@ -136,7 +143,10 @@ export async function getLine(lineId: string): Promise<LineRecord | null> {
 /** The stations a line follows (route cut to its window), with map positions where known. */
 export async function stationsOfLine(routeId: string, window: ChainageWindow): Promise<LineRouteStation[]> {
   const columns = await routeColumns(routeId);
-  if (columns.chainageM.length < 2) throw new AppError('bad_request', 'The route has fewer than two stations', { routeId: ['Survey at least two stations on this route first'] });
+  if (columns.chainageM.length < 2)
+    throw new AppError('bad_request', 'The route has fewer than two stations', {
+      routeId: ['Survey at least two stations on this route first'],
+    });
   const first = columns.chainageM[0];
   const last = columns.chainageM[columns.chainageM.length - 1];
   const from = window.fromChainageM ?? first;
@@ -166,7 +176,11 @@ async function assertRouteInProject(routeId: string, projectId: string): Promise
   }
 }
 
-export async function createLine(projectId: string, userId: string, input: CreateLineInput & { notes: string }): Promise<LineRecord> {
+export async function createLine(
+  projectId: string,
+  userId: string,
+  input: CreateLineInput & { notes: string },
+): Promise<LineRecord> {
   await assertRouteInProject(input.routeId, projectId);
   const window = { fromChainageM: input.fromChainageM ?? null, toChainageM: input.toChainageM ?? null };
   const stations = await stationsOfLine(input.routeId, window);
@@ -177,12 +191,28 @@ export async function createLine(projectId: string, userId: string, input: Creat
   const { Line: L, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     const line = await L.create(
-      { projectId, routeId: input.routeId, name: input.name, notes: input.notes, ...window, ...columnsOf(design), createdBy: userId, updatedBy: userId },
+      {
+        projectId,
+        routeId: input.routeId,
+        name: input.name,
+        notes: input.notes,
+        ...window,
+        ...columnsOf(design),
+        createdBy: userId,
+        updatedBy: userId,
+      },
       { transaction },
     );
     // Every line is a link of its project's network from the moment it exists.
     await linkLineIntoNetwork(sequelize, transaction, line.id);
-    await recordActivity(transaction, { projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: line.id, summary: `Started line "${line.name}"` });
+    await recordActivity(transaction, {
+      projectId,
+      actorUserId: userId,
+      kind: 'line.created',
+      subjectType: 'line',
+      subjectId: line.id,
+      summary: `Started line "${line.name}"`,
+    });
     return recordOf(line, transaction);
   });
 }
@@ -206,19 +236,35 @@ export async function duplicateLine(lineId: string, userId: string, name?: strin
   return sequelize.transaction(async (transaction) => {
     const line = await L.findByPk(lineId, { transaction, lock: transaction.LOCK.SHARE });
     if (!line) throw notFound();
-    if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route for it before copying it', { routeId: ['Pick a route'] });
+    if (!line.routeId)
+      throw new AppError('bad_request', 'This line has lost its route; pick a route for it before copying it', {
+        routeId: ['Pick a route'],
+      });
     const siblings = await L.findAll({ attributes: ['name'], where: { projectId: line.projectId }, transaction });
     const copyName = name ?? copyNameOf(line.name, new Set(siblings.map((s) => s.name)));
     const copy = await L.create(
       {
-        projectId: line.projectId, routeId: line.routeId, name: copyName, notes: line.notes,
-        fromChainageM: line.fromChainageM, toChainageM: line.toChainageM, ...columnsOf(designOf(line)),
-        createdBy: userId, updatedBy: userId,
+        projectId: line.projectId,
+        routeId: line.routeId,
+        name: copyName,
+        notes: line.notes,
+        fromChainageM: line.fromChainageM,
+        toChainageM: line.toChainageM,
+        ...columnsOf(designOf(line)),
+        createdBy: userId,
+        updatedBy: userId,
       },
       { transaction },
     );
     await linkLineIntoNetwork(sequelize, transaction, copy.id);
-    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.created', subjectType: 'line', subjectId: copy.id, summary: `Copied line "${line.name}" as "${copy.name}"` });
+    await recordActivity(transaction, {
+      projectId: line.projectId,
+      actorUserId: userId,
+      kind: 'line.created',
+      subjectType: 'line',
+      subjectId: copy.id,
+      summary: `Copied line "${line.name}" as "${copy.name}"`,
+    });
     return recordOf(copy, transaction);
   });
 }
@@ -232,31 +278,53 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
       // Saved by the same person: another tab or window of theirs, not a colleague.
       const who = line.updatedBy === userId ? 'You saved' : 'Someone else saved';
       const where = line.updatedBy === userId ? ' in another tab or window' : '';
-      throw new AppError('conflict', `${who} revision ${line.revision} of this line${where} after this page opened revision ${input.baseRevision}; reload to carry on from it`);
+      throw new AppError(
+        'conflict',
+        `${who} revision ${line.revision} of this line${where} after this page opened revision ${input.baseRevision}; reload to carry on from it`,
+      );
     }
     const fields: Partial<UpdateLineInput> = { ...input };
     const design = fields.design;
     delete fields.design;
     delete fields.baseRevision;
-    if (fields.routeId !== undefined && fields.routeId !== line.routeId) await assertRouteInProject(fields.routeId, line.projectId);
+    if (fields.routeId !== undefined && fields.routeId !== line.routeId)
+      await assertRouteInProject(fields.routeId, line.projectId);
     line.set(fields as Partial<Line>);
     const startBefore = JSON.stringify(line.startCondition);
     if (design) {
       await assertRamSiteInProject(design as LineDesign, line.projectId);
       line.set(columnsOf(design as LineDesign));
     }
-    const geometryChanged = design !== undefined || fields.routeId !== undefined || fields.fromChainageM !== undefined || fields.toChainageM !== undefined;
+    const geometryChanged =
+      design !== undefined ||
+      fields.routeId !== undefined ||
+      fields.fromChainageM !== undefined ||
+      fields.toChainageM !== undefined;
     if (geometryChanged) {
-      if (!line.routeId) throw new AppError('bad_request', 'This line has lost its route; pick a route first', { routeId: ['Pick a route'] });
-      const stations = await stationsOfLine(line.routeId, { fromChainageM: line.fromChainageM, toChainageM: line.toChainageM });
+      if (!line.routeId)
+        throw new AppError('bad_request', 'This line has lost its route; pick a route first', {
+          routeId: ['Pick a route'],
+        });
+      const stations = await stationsOfLine(line.routeId, {
+        fromChainageM: line.fromChainageM,
+        toChainageM: line.toChainageM,
+      });
       assertDesignFits(designOf(line), stations, await lineSiteContext(line.projectId));
     }
     line.revision += 1;
     line.updatedBy = userId;
     await line.save({ transaction });
     // A new start (another ram site, a water level instead of a ram) joins the network where it says.
-    if (JSON.stringify(line.startCondition) !== startBefore) await rejoinLineStart(models().sequelize, transaction, line.id);
-    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary: `Edited line "${line.name}"` });
+    if (JSON.stringify(line.startCondition) !== startBefore)
+      await rejoinLineStart(models().sequelize, transaction, line.id);
+    await recordActivity(transaction, {
+      projectId: line.projectId,
+      actorUserId: userId,
+      kind: 'line.edited',
+      subjectType: 'line',
+      subjectId: line.id,
+      summary: `Edited line "${line.name}"`,
+    });
     return recordOf(line, transaction);
   });
 }
@@ -266,18 +334,37 @@ export async function updateLine(lineId: string, userId: string, input: UpdateLi
  * the network): the line is locked, the new design checked against its stations like any edit,
  * its revision counted and the edit recorded. A design that no longer fits is a 400 naming the field.
  */
-export async function setLineStretches(transaction: Transaction, lineId: string, userId: string, stretches: LineDesign['stretches'], summary: string): Promise<void> {
+export async function setLineStretches(
+  transaction: Transaction,
+  lineId: string,
+  userId: string,
+  stretches: LineDesign['stretches'],
+  summary: string,
+): Promise<void> {
   const line = await models().Line.findByPk(lineId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!line) throw notFound('A line of the network is gone; size the network again');
-  if (!line.routeId) throw new AppError('bad_request', `The line "${line.name}" has lost its route; pick a route first`, { routeId: ['Pick a route'] });
+  if (!line.routeId)
+    throw new AppError('bad_request', `The line "${line.name}" has lost its route; pick a route first`, {
+      routeId: ['Pick a route'],
+    });
   const design = { ...designOf(line), stretches };
-  const stations = await stationsOfLine(line.routeId, { fromChainageM: line.fromChainageM, toChainageM: line.toChainageM });
+  const stations = await stationsOfLine(line.routeId, {
+    fromChainageM: line.fromChainageM,
+    toChainageM: line.toChainageM,
+  });
   assertDesignFits(design, stations, await lineSiteContext(line.projectId));
   line.set(columnsOf(design));
   line.revision += 1;
   line.updatedBy = userId;
   await line.save({ transaction });
-  await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.edited', subjectType: 'line', subjectId: line.id, summary });
+  await recordActivity(transaction, {
+    projectId: line.projectId,
+    actorUserId: userId,
+    kind: 'line.edited',
+    subjectType: 'line',
+    subjectId: line.id,
+    summary,
+  });
 }
 
 export async function deleteLine(lineId: string, userId: string): Promise<void> {
@@ -303,6 +390,14 @@ export async function deleteLine(lineId: string, userId: string): Promise<void> 
         { replacements: { endIds }, transaction },
       );
     }
-    await recordActivity(transaction, { projectId: line.projectId, actorUserId: userId, kind: 'line.deleted', subjectType: 'line', subjectId: line.id, summary: `Removed line "${line.name}"`, data: { name: line.name } });
+    await recordActivity(transaction, {
+      projectId: line.projectId,
+      actorUserId: userId,
+      kind: 'line.deleted',
+      subjectType: 'line',
+      subjectId: line.id,
+      summary: `Removed line "${line.name}"`,
+      data: { name: line.name },
+    });
   });
 }

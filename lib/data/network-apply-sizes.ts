@@ -23,9 +23,17 @@ export async function applyChosenSizes(projectId: string, userId: string, jobId:
   const { NetworkJob, NetworkLink, sequelize } = models();
   const job = await NetworkJob.findOne({ where: { id: jobId, projectId } });
   if (!job) throw notFound('No such run of this network');
-  if (job.kind !== 'size' || job.status !== 'done') throw new AppError('bad_request', 'Only a finished sizing run can be applied', { jobId: ['Pick a finished sizing run'] });
+  if (job.kind !== 'size' || job.status !== 'done')
+    throw new AppError('bad_request', 'Only a finished sizing run can be applied', {
+      jobId: ['Pick a finished sizing run'],
+    });
   const result = job.result as unknown as SizeRunResult;
-  if (!result.feasible || !result.solution) throw new AppError('bad_request', 'This sizing found no set of sizes that meets every limit; there is nothing to apply', { jobId: ['Size again with more pipes priced'] });
+  if (!result.feasible || !result.solution)
+    throw new AppError(
+      'bad_request',
+      'This sizing found no set of sizes that meets every limit; there is nothing to apply',
+      { jobId: ['Size again with more pipes priced'] },
+    );
   const solution = result.solution;
 
   // Read each line's stations first (outside the transaction: they come from the survey, not the design).
@@ -38,7 +46,10 @@ export async function applyChosenSizes(projectId: string, userId: string, jobId:
     const line = await getLine(link.lineId);
     if (!line?.routeId) throw changed();
     const stations = await stationsOfLine(line.routeId, line);
-    const stretches = stretchesFromPieces(linkResult.pieces, { fromM: stations[0].chainageM, toM: stations[stations.length - 1].chainageM });
+    const stretches = stretchesFromPieces(linkResult.pieces, {
+      fromM: stations[0].chainageM,
+      toM: stations[stations.length - 1].chainageM,
+    });
     if (!stretches) throw changed();
     lineStretches.set(link.id, { lineId: line.id, name: line.name, stretches });
   }
@@ -47,7 +58,11 @@ export async function applyChosenSizes(projectId: string, userId: string, jobId:
     let pipes = 0;
     let lines = 0;
     for (const linkResult of solution.links) {
-      const row = await NetworkLink.findOne({ where: { id: linkResult.linkId, projectId }, transaction, lock: transaction.LOCK.UPDATE });
+      const row = await NetworkLink.findOne({
+        where: { id: linkResult.linkId, projectId },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (!row) throw changed();
       if (row.kind === 'pipe') {
         const pipeId = linkResult.pieces[0]?.pipeId;
@@ -58,7 +73,13 @@ export async function applyChosenSizes(projectId: string, userId: string, jobId:
         pipes += 1;
       } else if (row.kind === 'line') {
         const chosen = lineStretches.get(row.id)!;
-        await setLineStretches(transaction, chosen.lineId, userId, chosen.stretches, `Applied the least-cost sizes to line "${chosen.name}"`);
+        await setLineStretches(
+          transaction,
+          chosen.lineId,
+          userId,
+          chosen.stretches,
+          `Applied the least-cost sizes to line "${chosen.name}"`,
+        );
         lines += 1;
       }
     }

@@ -11,16 +11,21 @@ import { teamOfProject } from './projects';
 
 /** Every line that is a link of the network, with its stations (a line that lost its route is left out). */
 async function networkLines(lineIds: string[]): Promise<NetworkLineContext[]> {
-  const lines = await Promise.all(lineIds.map(async (lineId): Promise<NetworkLineContext | null> => {
-    const line = await getLine(lineId);
-    if (!line || !line.routeId) return null;
-    const stations = await stationsOfLine(line.routeId, line);
-    return { id: line.id, name: line.name, routeId: line.routeId, design: line.design, stations };
-  }));
+  const lines = await Promise.all(
+    lineIds.map(async (lineId): Promise<NetworkLineContext | null> => {
+      const line = await getLine(lineId);
+      if (!line || !line.routeId) return null;
+      const stations = await stationsOfLine(line.routeId, line);
+      return { id: line.id, name: line.name, routeId: line.routeId, design: line.design, stations };
+    }),
+  );
   return lines.filter((line): line is NetworkLineContext => line !== null);
 }
 
-/** The planned ram outlets, each source's design yield and the team's price list in force, from the project's lift records. */
+/**
+ * The planned ram outlets, each source's design yield and the team's price list in force, from the project's lift
+ * records.
+ */
 export async function loadNetworkBasis(projectId: string, lift: LiftRecords): Promise<NetworkBasis> {
   const teamId = await teamOfProject(projectId);
   const sourceYieldsM3s: Record<string, number | null> = {};
@@ -40,5 +45,11 @@ export async function loadNetworkContext(projectId: string): Promise<NetworkCont
   const records = await readNetworkRecords(projectId);
   const lineIds = records.links.flatMap((link) => (link.lineId ? [link.lineId] : []));
   const [lift, lines] = await Promise.all([loadLiftRecords(projectId), networkLines(lineIds)]);
-  return { records, lines, tanks: lift.tanks, demandUses: lift.demandUses, ...(await loadNetworkBasis(projectId, lift)) };
+  return {
+    records,
+    lines,
+    tanks: lift.tanks,
+    demandUses: lift.demandUses,
+    ...(await loadNetworkBasis(projectId, lift)),
+  };
 }

@@ -40,16 +40,29 @@ export const networkLinkRecord = (row: NetworkLink): NetworkLinkRecord => ({
  */
 export async function readNetworkRecords(projectId: string, transaction?: Transaction): Promise<NetworkRecords> {
   const { NetworkNode, NetworkLink, DemandUse } = models();
-  const order: [string, string][] = [['createdAt', 'ASC'], ['id', 'ASC']];
+  const order: [string, string][] = [
+    ['createdAt', 'ASC'],
+    ['id', 'ASC'],
+  ];
   const [nodes, links, uses] = await Promise.all([
     NetworkNode.findAll({ where: { projectId }, order, transaction }),
     NetworkLink.findAll({ where: { projectId }, order, transaction }),
-    DemandUse.findAll({ where: { projectId }, attributes: ['id', 'outletNodeId'], order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
+    DemandUse.findAll({
+      where: { projectId },
+      attributes: ['id', 'outletNodeId'],
+      order: [
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      transaction,
+    }),
   ]);
   return {
     projectId,
     nodes: nodes.map(networkNodeRecord),
     links: links.map(networkLinkRecord),
-    demandUseTies: uses.filter((use) => use.outletNodeId !== null).map((use) => ({ demandUseId: use.id, outletNodeId: use.outletNodeId! })),
+    demandUseTies: uses
+      .filter((use) => use.outletNodeId !== null)
+      .map((use) => ({ demandUseId: use.id, outletNodeId: use.outletNodeId! })),
   };
 }

@@ -26,9 +26,13 @@ export async function networkReport(projectId: string, preparedBy: string | null
   } else {
     solveProblem = 'the project has no network yet';
   }
-  const done = <T>(run: (typeof view.runs)['size']) => (run?.status === 'done' && run.result ? { result: run.result as T, finishedAt: run.finishedAt } : null);
+  const done = <T>(run: (typeof view.runs)['size']) =>
+    run?.status === 'done' && run.result ? { result: run.result as T, finishedAt: run.finishedAt } : null;
   return networkReportPdf({
-    project, view, solve, solveProblem,
+    project,
+    view,
+    solve,
+    solveProblem,
     sized: done<SizeRunResult>(view.runs.size),
     day: done<DayRunResult>(view.runs.day),
     stamp: workingCopyStamp(preparedBy),

@@ -30,7 +30,11 @@ async function runTask(kind: NetworkRunKind, context: NetworkContext, input: Net
       return runInWorker('network.day', context, { timeLimitMs: 120_000 });
     case 'size':
       // The optimiser's own limit, plus time to load it and to check the answer.
-      return runInWorker('network.size', { context, onePipePerLink: input.onePipePerLink, timeLimitS: input.timeLimitS }, { timeLimitMs: (input.timeLimitS + 60) * 1000 });
+      return runInWorker(
+        'network.size',
+        { context, onePipePerLink: input.onePipePerLink, timeLimitS: input.timeLimitS },
+        { timeLimitMs: (input.timeLimitS + 60) * 1000 },
+      );
   }
 }
 
@@ -41,10 +45,13 @@ async function runTask(kind: NetworkRunKind, context: NetworkContext, input: Net
 function assertSomethingToSize(records: NetworkContext['records']): void {
   const sizable = records.links.filter((link) => link.kind !== 'valve');
   if (sizable.length > 0) return;
-  const why = records.nodes.length < 2
-    ? `the network has ${records.nodes.length === 0 ? 'no parts' : 'only one part'}, so there is no pipe to size`
-    : 'no two parts are joined by a pipe or a line (valves keep their own size)';
-  throw new AppError('bad_request', `Nothing to size: ${why}. Join parts with a pipe or a line first.`, { links: ['Join parts with a pipe or a line to size'] });
+  const why =
+    records.nodes.length < 2
+      ? `the network has ${records.nodes.length === 0 ? 'no parts' : 'only one part'}, so there is no pipe to size`
+      : 'no two parts are joined by a pipe or a line (valves keep their own size)';
+  throw new AppError('bad_request', `Nothing to size: ${why}. Join parts with a pipe or a line first.`, {
+    links: ['Join parts with a pipe or a line to size'],
+  });
 }
 
 /**
@@ -53,10 +60,19 @@ function assertSomethingToSize(records: NetworkContext['records']): void {
  * its progress and result are kept in `network_jobs`, so any app instance can answer the poll. One
  * run of a kind at a time per project: asking again while one runs returns that run.
  */
-export async function startNetworkRun(projectId: string, userId: string, input: NetworkRunInput): Promise<NetworkJobView> {
+export async function startNetworkRun(
+  projectId: string,
+  userId: string,
+  input: NetworkRunInput,
+): Promise<NetworkJobView> {
   const { NetworkJob } = models();
   const running = await NetworkJob.findOne({
-    where: { projectId, kind: input.kind, status: { [Op.in]: ['queued', 'running'] }, updatedAt: { [Op.gt]: new Date(Date.now() - STALE_AFTER_MS) } },
+    where: {
+      projectId,
+      kind: input.kind,
+      status: { [Op.in]: ['queued', 'running'] },
+      updatedAt: { [Op.gt]: new Date(Date.now() - STALE_AFTER_MS) },
+    },
     order: [['createdAt', 'DESC']],
   });
   if (running) return networkJobView(running);
@@ -69,16 +85,38 @@ export async function startNetworkRun(projectId: string, userId: string, input: 
     throw explainCoreError(built, context.records, error);
   }
   const job = await NetworkJob.create({
-    projectId, kind: input.kind, status: 'running', progress: 0.1, stage: STAGE[input.kind],
-    options: { ...input }, createdBy: userId, startedAt: new Date(),
+    projectId,
+    kind: input.kind,
+    status: 'running',
+    progress: 0.1,
+    stage: STAGE[input.kind],
+    options: { ...input },
+    createdBy: userId,
+    startedAt: new Date(),
   });
   void runTask(input.kind, context, input)
-    .then((result) => job.update({ status: 'done', progress: 1, stage: 'Done', result: result as unknown as object, finishedAt: new Date() }))
+    .then((result) =>
+      job.update({
+        status: 'done',
+        progress: 1,
+        stage: 'Done',
+        result: result as unknown as object,
+        finishedAt: new Date(),
+      }),
+    )
     .catch(async (error: unknown) => {
-      const element = error instanceof Error && 'field' in error ? String((error as { field: unknown }).field) : undefined;
+      const element =
+        error instanceof Error && 'field' in error ? String((error as { field: unknown }).field) : undefined;
       const message = error instanceof Error ? error.message : 'The run failed';
       if (!element) log().error({ err: error }, 'network run failed');
-      await job.update({ status: 'failed', stage: 'Failed', error: { message, ...(element ? { element } : {}) }, finishedAt: new Date() }).catch(() => undefined);
+      await job
+        .update({
+          status: 'failed',
+          stage: 'Failed',
+          error: { message, ...(element ? { element } : {}) },
+          finishedAt: new Date(),
+        })
+        .catch(() => undefined);
     });
   return networkJobView(job);
 }
@@ -88,7 +126,10 @@ export async function getNetworkRun(projectId: string, jobId: string): Promise<N
   const row = await models().NetworkJob.findOne({ where: { id: jobId, projectId } });
   if (!row) throw notFound('No such run of this network');
   const view = networkJobView(row);
-  if ((view.status === 'running' || view.status === 'queued') && Date.now() - row.updatedAt.getTime() > STALE_AFTER_MS) {
+  if (
+    (view.status === 'running' || view.status === 'queued') &&
+    Date.now() - row.updatedAt.getTime() > STALE_AFTER_MS
+  ) {
     return { ...view, status: 'failed', error: { message: 'The run was lost (the server restarted); start it again' } };
   }
   return view;

@@ -18,10 +18,17 @@ export interface ProjectTankStorage {
  */
 export async function tankStorageOfProject(projectId: string): Promise<ProjectTankStorage> {
   const context = await loadNetworkContext(projectId);
-  const outletNames = Object.fromEntries(context.records.nodes.filter((n) => n.kind === 'outlet').map((n) => [n.id, n.name]));
-  if (!context.records.nodes.some((n) => n.kind === 'tank')) return { tanks: [], outletNames, reason: 'No tank is a part of the network yet' };
+  const outletNames = Object.fromEntries(
+    context.records.nodes.filter((n) => n.kind === 'outlet').map((n) => [n.id, n.name]),
+  );
+  if (!context.records.nodes.some((n) => n.kind === 'tank'))
+    return { tanks: [], outletNames, reason: 'No tank is a part of the network yet' };
   try {
-    return { tanks: await runInWorker('network.tank-storage', context, { timeLimitMs: 60_000 }), outletNames, reason: null };
+    return {
+      tanks: await runInWorker('network.tank-storage', context, { timeLimitMs: 60_000 }),
+      outletNames,
+      reason: null,
+    };
   } catch (error) {
     if (error instanceof HydraulicsInputError) return { tanks: [], outletNames, reason: error.message };
     throw error;

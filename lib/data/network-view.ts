@@ -34,8 +34,14 @@ async function lineSummary(lineId: string): Promise<NetworkLineSummary | null> {
 /** The latest run of each kind of a project. */
 export async function latestRuns(projectId: string): Promise<NetworkView['runs']> {
   const kinds: NetworkRunKind[] = ['solve', 'day', 'size'];
-  const rows = await Promise.all(kinds.map((kind) => models().NetworkJob.findOne({ where: { projectId, kind }, order: [['createdAt', 'DESC']] })));
-  return { solve: rows[0] ? networkJobView(rows[0]) : null, day: rows[1] ? networkJobView(rows[1]) : null, size: rows[2] ? networkJobView(rows[2]) : null };
+  const rows = await Promise.all(
+    kinds.map((kind) => models().NetworkJob.findOne({ where: { projectId, kind }, order: [['createdAt', 'DESC']] })),
+  );
+  return {
+    solve: rows[0] ? networkJobView(rows[0]) : null,
+    day: rows[1] ? networkJobView(rows[1]) : null,
+    size: rows[2] ? networkJobView(rows[2]) : null,
+  };
 }
 
 /** The network page's data: records, what the pickers offer, each line's course and the latest runs. */
@@ -43,7 +49,11 @@ export async function networkView(projectId: string): Promise<NetworkView> {
   const project = await models().Project.findByPk(projectId, { attributes: ['unitSystem'] });
   const records = await readNetworkRecords(projectId);
   const lineIds = records.links.flatMap((link) => (link.lineId ? [link.lineId] : []));
-  const [lift, lines, runs] = await Promise.all([loadLiftRecords(projectId), Promise.all(lineIds.map(lineSummary)), latestRuns(projectId)]);
+  const [lift, lines, runs] = await Promise.all([
+    loadLiftRecords(projectId),
+    Promise.all(lineIds.map(lineSummary)),
+    latestRuns(projectId),
+  ]);
   const outletOf = new Map(records.demandUseTies.map((tie) => [tie.demandUseId, tie.outletNodeId]));
   return {
     projectId,

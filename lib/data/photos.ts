@@ -35,10 +35,21 @@ export interface PhotoSummary {
 }
 
 export const toPhotoSummary = (p: SitePhoto): PhotoSummary => ({
-  id: p.id, projectId: p.projectId, fileName: p.fileName, width: p.width, height: p.height,
-  takenAt: p.takenAt?.toISOString() ?? null, latitude: p.latitude, longitude: p.longitude,
-  routeId: p.routeId, chainageM: p.chainageM, offsetM: p.offsetM, placement: p.placement,
-  caption: p.caption, inReport: p.inReport, createdAt: p.createdAt.toISOString(),
+  id: p.id,
+  projectId: p.projectId,
+  fileName: p.fileName,
+  width: p.width,
+  height: p.height,
+  takenAt: p.takenAt?.toISOString() ?? null,
+  latitude: p.latitude,
+  longitude: p.longitude,
+  routeId: p.routeId,
+  chainageM: p.chainageM,
+  offsetM: p.offsetM,
+  placement: p.placement,
+  caption: p.caption,
+  inReport: p.inReport,
+  createdAt: p.createdAt.toISOString(),
 });
 
 export interface PhotoPlacementRequest {
@@ -49,15 +60,26 @@ export interface PhotoPlacementRequest {
 }
 
 async function routeOfProject(projectId: string, routeId: string, transaction?: Transaction) {
-  const route = await models().Route.findOne({ where: { id: routeId, projectId }, attributes: ['id', 'lengthM'], transaction });
-  if (!route) throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not one of this project’s');
+  const route = await models().Route.findOne({
+    where: { id: routeId, projectId },
+    attributes: ['id', 'lengthM'],
+    transaction,
+  });
+  if (!route)
+    throw notInProject({ routeId: ['Pick a route of this project'] }, 'That route is not one of this project’s');
   return route;
 }
 
 /** The nearest point on the named route, or on whichever of the project's routes is nearest. */
-async function nearestOnRoutes(projectId: string, routeId: string | null | undefined, position: { latitudeDeg: number; longitudeDeg: number }) {
+async function nearestOnRoutes(
+  projectId: string,
+  routeId: string | null | undefined,
+  position: { latitudeDeg: number; longitudeDeg: number },
+) {
   const { Route, RoutePoint } = models();
-  const routes = routeId ? [await routeOfProject(projectId, routeId)] : await Route.findAll({ where: { projectId }, attributes: ['id'] });
+  const routes = routeId
+    ? [await routeOfProject(projectId, routeId)]
+    : await Route.findAll({ where: { projectId }, attributes: ['id'] });
   let best: { routeId: string; at: RouteLocation } | null = null;
   for (const route of routes) {
     const points = await RoutePoint.findAll({
@@ -66,23 +88,41 @@ async function nearestOnRoutes(projectId: string, routeId: string | null | undef
       order: [['seq', 'ASC']],
       raw: true,
     });
-    const at = locateOnRoute(points.map((p) => ({ chainageM: p.chainageM, latitudeDeg: p.latitude, longitudeDeg: p.longitude })), position);
+    const at = locateOnRoute(
+      points.map((p) => ({ chainageM: p.chainageM, latitudeDeg: p.latitude, longitudeDeg: p.longitude })),
+      position,
+    );
     if (at && (!best || at.offsetM < best.at.offsetM)) best = { routeId: route.id, at };
   }
   return best;
 }
 
-async function placementOf(projectId: string, position: { latitude: number | null; longitude: number | null }, request: PhotoPlacementRequest) {
+async function placementOf(
+  projectId: string,
+  position: { latitude: number | null; longitude: number | null },
+  request: PhotoPlacementRequest,
+) {
   // A named route is the project's whatever else is sent: never keep another team's route on a photo.
   if (request.routeId) await routeOfProject(projectId, request.routeId);
   if (position.latitude !== null && position.longitude !== null) {
-    const found = await nearestOnRoutes(projectId, request.routeId, { latitudeDeg: position.latitude, longitudeDeg: position.longitude });
-    if (found) return { routeId: found.routeId, chainageM: found.at.chainageM, offsetM: found.at.offsetM, placement: 'position' as const };
+    const found = await nearestOnRoutes(projectId, request.routeId, {
+      latitudeDeg: position.latitude,
+      longitudeDeg: position.longitude,
+    });
+    if (found)
+      return {
+        routeId: found.routeId,
+        chainageM: found.at.chainageM,
+        offsetM: found.at.offsetM,
+        placement: 'position' as const,
+      };
   }
   if (request.routeId && request.chainageM != null) {
     const route = await routeOfProject(projectId, request.routeId);
     if (request.chainageM < 0 || request.chainageM > route.lengthM + 1e-6) {
-      throw new AppError('bad_request', `The chainage must lie on the route, 0 to ${route.lengthM.toFixed(1)} m`, { chainageM: ['Pick a chainage on the route'] });
+      throw new AppError('bad_request', `The chainage must lie on the route, 0 to ${route.lengthM.toFixed(1)} m`, {
+        chainageM: ['Pick a chainage on the route'],
+      });
     }
     return { routeId: request.routeId, chainageM: request.chainageM, offsetM: null, placement: 'picked' as const };
   }
@@ -94,7 +134,15 @@ async function placementOf(projectId: string, position: { latitude: number | nul
  * placed on a route from its position (nearest chainage and distance off the line) or at the
  * chainage picked. If the database write fails the stored objects are removed again.
  */
-export async function uploadPhoto(input: { projectId: string; userId: string; fileName: string; bytes: Uint8Array; caption: string } & PhotoPlacementRequest): Promise<PhotoSummary> {
+export async function uploadPhoto(
+  input: {
+    projectId: string;
+    userId: string;
+    fileName: string;
+    bytes: Uint8Array;
+    caption: string;
+  } & PhotoPlacementRequest,
+): Promise<PhotoSummary> {
   const photo = await readPhoto(input.bytes, input.fileName);
   const place = await placementOf(input.projectId, photo, input);
   const folder = `${projectStoragePrefix(input.projectId)}photos/${randomUUID()}`;
@@ -107,9 +155,20 @@ export async function uploadPhoto(input: { projectId: string; userId: string; fi
     await putObject(thumbnailKey, photo.thumbnail, 'image/jpeg');
     stored.push(thumbnailKey);
     const row = await models().SitePhoto.create({
-      projectId: input.projectId, fileName: input.fileName.slice(0, 255), contentType: photo.contentType, sizeBytes: photo.image.byteLength,
-      width: photo.width, height: photo.height, imageKey, thumbnailKey, takenAt: photo.takenAt, latitude: photo.latitude, longitude: photo.longitude,
-      ...place, caption: input.caption, uploadedBy: input.userId,
+      projectId: input.projectId,
+      fileName: input.fileName.slice(0, 255),
+      contentType: photo.contentType,
+      sizeBytes: photo.image.byteLength,
+      width: photo.width,
+      height: photo.height,
+      imageKey,
+      thumbnailKey,
+      takenAt: photo.takenAt,
+      latitude: photo.latitude,
+      longitude: photo.longitude,
+      ...place,
+      caption: input.caption,
+      uploadedBy: input.userId,
     });
     return toPhotoSummary(row);
   } catch (error) {
@@ -121,7 +180,11 @@ export async function uploadPhoto(input: { projectId: string; userId: string; fi
 export async function listPhotos(projectId: string, routeId?: string): Promise<PhotoSummary[]> {
   const rows = await models().SitePhoto.findAll({
     where: { projectId, ...(routeId ? { routeId } : {}) },
-    order: [['routeId', 'ASC'], ['chainageM', 'ASC'], ['createdAt', 'ASC']],
+    order: [
+      ['routeId', 'ASC'],
+      ['chainageM', 'ASC'],
+      ['createdAt', 'ASC'],
+    ],
   });
   return rows.map(toPhotoSummary);
 }
@@ -143,18 +206,29 @@ export async function photoRow(photoId: string): Promise<SitePhoto> {
 }
 
 /** Caption, report choice, or a new place (a route and, for a photo without position, a chainage). */
-export async function updatePhoto(photoId: string, changes: { caption?: string; inReport?: boolean } & PhotoPlacementRequest): Promise<PhotoSummary> {
+export async function updatePhoto(
+  photoId: string,
+  changes: { caption?: string; inReport?: boolean } & PhotoPlacementRequest,
+): Promise<PhotoSummary> {
   const photo = await photoRow(photoId);
   if (changes.caption !== undefined) photo.caption = changes.caption;
   if (changes.inReport !== undefined) photo.inReport = changes.inReport;
   if (changes.routeId !== undefined || changes.chainageM !== undefined) {
-    Object.assign(photo, await placementOf(photo.projectId, photo, { routeId: changes.routeId ?? photo.routeId, chainageM: changes.chainageM ?? null }));
+    Object.assign(
+      photo,
+      await placementOf(photo.projectId, photo, {
+        routeId: changes.routeId ?? photo.routeId,
+        chainageM: changes.chainageM ?? null,
+      }),
+    );
   }
   await photo.save();
   return toPhotoSummary(photo);
 }
 
-/** The row goes with its files' removal queued in one transaction; the files are removed now too when the store answers. */
+/**
+ * The row goes with its files' removal queued in one transaction; the files are removed now too when the store answers.
+ */
 export async function deletePhoto(photoId: string): Promise<void> {
   const photo = await photoRow(photoId);
   const keys = [photo.imageKey, photo.thumbnailKey];
@@ -169,11 +243,16 @@ export async function deletePhoto(photoId: string): Promise<void> {
  * The photos chosen for a line's report: those on its route inside its chainage window, numbered as
  * every drawing numbers the route's photos, with their stored thumbnails.
  */
-export async function reportPhotosForLine(routeId: string | null, window: { fromM: number; toM: number }): Promise<ReportPhoto[]> {
+export async function reportPhotosForLine(
+  routeId: string | null,
+  window: { fromM: number; toM: number },
+): Promise<ReportPhoto[]> {
   if (!routeId) return [];
   const rows = await models().SitePhoto.findAll({ where: { routeId, chainageM: { [Op.ne]: null } } });
   const byId = new Map(rows.map((r) => [r.id, r]));
-  const chosen = numberPhotos(rows.map(toPhotoSummary)).filter((p) => p.source.inReport && p.chainageM >= window.fromM - 1e-6 && p.chainageM <= window.toM + 1e-6);
+  const chosen = numberPhotos(rows.map(toPhotoSummary)).filter(
+    (p) => p.source.inReport && p.chainageM >= window.fromM - 1e-6 && p.chainageM <= window.toM + 1e-6,
+  );
   return Promise.all(
     chosen.map(async (p) => {
       const row = byId.get(p.id)!;
@@ -182,8 +261,17 @@ export async function reportPhotosForLine(routeId: string | null, window: { from
         return null;
       });
       return {
-        id: row.id, number: p.number, chainageM: p.chainageM, caption: row.caption, fileName: row.fileName, takenAt: row.takenAt,
-        offsetM: row.offsetM, placement: row.placement, latitude: row.latitude, longitude: row.longitude, thumbnail: stored?.bytes ?? null,
+        id: row.id,
+        number: p.number,
+        chainageM: p.chainageM,
+        caption: row.caption,
+        fileName: row.fileName,
+        takenAt: row.takenAt,
+        offsetM: row.offsetM,
+        placement: row.placement,
+        latitude: row.latitude,
+        longitude: row.longitude,
+        thumbnail: stored?.bytes ?? null,
       };
     }),
   );

@@ -4,7 +4,11 @@ import { models } from '../../models';
 import { AppError } from '../errors';
 import type { PriceListInput } from '../validations/network';
 
-export interface PriceListItemRecord { pipeId: string; costPerM: number; notes: string }
+export interface PriceListItemRecord {
+  pipeId: string;
+  costPerM: number;
+  notes: string;
+}
 
 export async function readPriceList(teamId: string): Promise<PriceListItemRecord[]> {
   const rows = await models().PriceListItem.findAll({ where: { teamId }, order: [['pipeId', 'ASC']] });
@@ -24,7 +28,10 @@ export async function replacePriceList(teamId: string, input: PriceListInput): P
   const { PriceListItem, sequelize } = models();
   await sequelize.transaction(async (transaction) => {
     await PriceListItem.destroy({ where: { teamId }, transaction });
-    await PriceListItem.bulkCreate(input.items.map((item) => ({ ...item, teamId })), { transaction });
+    await PriceListItem.bulkCreate(
+      input.items.map((item) => ({ ...item, teamId })),
+      { transaction },
+    );
   });
   return readPriceList(teamId);
 }

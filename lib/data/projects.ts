@@ -46,18 +46,30 @@ function toSummary(p: Project): ProjectSummary {
 
 /** The columns `toSummary` reads, under the model's attribute names. */
 const SUMMARY_COLUMNS = [
-  'id', 'team_id AS "teamId"', 'name', 'description', 'unit_system AS "unitSystem"', 'site_notes AS "siteNotes"',
-  'frost_depth_m AS "frostDepthM"', 'decimal_mark AS "decimalMark"', 'time_zone AS "timeZone"', 'archived_at AS "archivedAt"',
-  'created_at AS "createdAt"', 'updated_at AS "updatedAt"',
+  'id',
+  'team_id AS "teamId"',
+  'name',
+  'description',
+  'unit_system AS "unitSystem"',
+  'site_notes AS "siteNotes"',
+  'frost_depth_m AS "frostDepthM"',
+  'decimal_mark AS "decimalMark"',
+  'time_zone AS "timeZone"',
+  'archived_at AS "archivedAt"',
+  'created_at AS "createdAt"',
+  'updated_at AS "updatedAt"',
 ].join(', ');
 
 export async function listProjects(teamId: string): Promise<ProjectSummary[]> {
   // One fixed statement: a team's list is read on every visit, and building the query and model rows
   // cost more than the read itself (tests/api/sessions-and-teams.test.ts keeps it equal to getProject).
-  const rows = await models().sequelize.query<Project>(`SELECT ${SUMMARY_COLUMNS} FROM projects WHERE team_id = :teamId ORDER BY updated_at DESC`, {
-    type: QueryTypes.SELECT,
-    replacements: { teamId },
-  });
+  const rows = await models().sequelize.query<Project>(
+    `SELECT ${SUMMARY_COLUMNS} FROM projects WHERE team_id = :teamId ORDER BY updated_at DESC`,
+    {
+      type: QueryTypes.SELECT,
+      replacements: { teamId },
+    },
+  );
   return rows.map(toSummary);
 }
 
@@ -69,10 +81,13 @@ export async function getProject(projectId: string): Promise<ProjectSummary | nu
 // The team lookups run first on every request about a project or one of its rows (teamRoute's
 // `teamOf`): one fixed statement each, a join rather than two reads.
 export async function teamOfProject(projectId: string): Promise<string | null> {
-  const [row] = await models().sequelize.query<{ teamId: string }>('SELECT team_id AS "teamId" FROM projects WHERE id = :projectId', {
-    type: QueryTypes.SELECT,
-    replacements: { projectId },
-  });
+  const [row] = await models().sequelize.query<{ teamId: string }>(
+    'SELECT team_id AS "teamId" FROM projects WHERE id = :projectId',
+    {
+      type: QueryTypes.SELECT,
+      replacements: { projectId },
+    },
+  );
   return row?.teamId ?? null;
 }
 
@@ -81,10 +96,13 @@ export type ProjectRowTable = 'lines' | 'revisions' | 'site_photos' | 'comments'
 
 /** The team owning a project's row, or null when there is no such row. */
 export async function teamOfProjectRow(table: ProjectRowTable, id: string): Promise<string | null> {
-  const [row] = await models().sequelize.query<{ teamId: string }>(`SELECT p.team_id AS "teamId" FROM ${table} r JOIN projects p ON p.id = r.project_id WHERE r.id = :id`, {
-    type: QueryTypes.SELECT,
-    replacements: { id },
-  });
+  const [row] = await models().sequelize.query<{ teamId: string }>(
+    `SELECT p.team_id AS "teamId" FROM ${table} r JOIN projects p ON p.id = r.project_id WHERE r.id = :id`,
+    {
+      type: QueryTypes.SELECT,
+      replacements: { id },
+    },
+  );
   return row?.teamId ?? null;
 }
 
@@ -105,7 +123,12 @@ export async function createProject(
   input: { name: string; description: string; unitSystem: UnitSystem; siteNotes: string },
 ): Promise<ProjectSummary> {
   // A US project writes decimals with a point from the start; a metric one follows each browser's language until set.
-  const p = await models().Project.create({ ...input, decimalMark: unitDefaults(input.unitSystem).decimalMark, teamId, createdBy: userId });
+  const p = await models().Project.create({
+    ...input,
+    decimalMark: unitDefaults(input.unitSystem).decimalMark,
+    teamId,
+    createdBy: userId,
+  });
   return toSummary(p);
 }
 

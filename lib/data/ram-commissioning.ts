@@ -26,7 +26,10 @@ export async function addCommissioningReading(
     const plan = tablePlanOf(record, context) ?? planRamPump(ramPlanOptions(record, context));
     const outcome = commissioningOutcome(input, plan);
     if (!outcome.ok) throw failedOutcomeRefusal(outcome);
-    const row = await RamCommissioningReading.create({ ...input, ramSiteId: siteId, createdBy: userId }, { transaction });
+    const row = await RamCommissioningReading.create(
+      { ...input, ramSiteId: siteId, createdBy: userId },
+      { transaction },
+    );
     return { reading: commissioningRecord(row), result: outcome.value };
   });
 }

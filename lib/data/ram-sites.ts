@@ -13,7 +13,9 @@ import { ramSiteRecord, tankRecord } from './lift-records';
 
 export async function planContext(projectId: string, input: RamSiteInput, transaction: Transaction) {
   const { Route, Tank } = models();
-  const route = input.deliveryPipe.routeId ? await Route.findOne({ where: { id: input.deliveryPipe.routeId, projectId }, transaction }) : null;
+  const route = input.deliveryPipe.routeId
+    ? await Route.findOne({ where: { id: input.deliveryPipe.routeId, projectId }, transaction })
+    : null;
   const tank = input.tankId ? await Tank.findOne({ where: { id: input.tankId, projectId }, transaction }) : null;
   const routes: RouteOption[] = route ? [{ id: route.id, name: route.name, lengthM: route.lengthM }] : [];
   return { routes, tankVolumeM3: tank?.volumeM3 ?? null, routeLengthM: route?.lengthM ?? null };
@@ -49,17 +51,24 @@ function rowFields(input: RamSiteInput, deliveryLengthM: number) {
 
 /** Checks references and plans the site before anything is written; a bad input throws a 400. */
 async function preparedFields(projectId: string, input: RamSiteInput, transaction: Transaction) {
-  await assertReferences(projectId, [
-    { field: 'sourceId', model: 'WaterSource', id: input.sourceId, label: 'The source' },
-    { field: 'tankId', model: 'Tank', id: input.tankId, label: 'The tank' },
-    { field: 'deliveryPipe.routeId', model: 'Route', id: input.deliveryPipe.routeId, label: 'The delivery route' },
-  ], transaction);
+  await assertReferences(
+    projectId,
+    [
+      { field: 'sourceId', model: 'WaterSource', id: input.sourceId, label: 'The source' },
+      { field: 'tankId', model: 'Tank', id: input.tankId, label: 'The tank' },
+      { field: 'deliveryPipe.routeId', model: 'Route', id: input.deliveryPipe.routeId, label: 'The delivery route' },
+    ],
+    transaction,
+  );
   const context = await planContext(projectId, input, transaction);
   const plan = planRamPump(ramPlanOptions(input, context));
   return { fields: rowFields(input, context.routeLengthM ?? input.deliveryPipe.lengthM ?? 0), plan };
 }
 
-export interface SavedRamSite { ramSite: RamSiteRecord; plan: RamPlanResult }
+export interface SavedRamSite {
+  ramSite: RamSiteRecord;
+  plan: RamPlanResult;
+}
 
 export async function listRamSites(projectId: string): Promise<RamSiteRecord[]> {
   const rows = await models().RamSite.findAll({ where: { projectId }, order: [['createdAt', 'ASC']] });

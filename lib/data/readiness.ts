@@ -19,7 +19,10 @@ function migrationFiles(): string[] {
 /** Whether this instance can serve: the database answers and every migration has run. */
 export async function readiness(): Promise<Readiness> {
   try {
-    const rows = await db().query<{ name: string }>('SELECT name FROM "SequelizeMeta"', { type: QueryTypes.SELECT, retry: { max: 1 } });
+    const rows = await db().query<{ name: string }>('SELECT name FROM "SequelizeMeta"', {
+      type: QueryTypes.SELECT,
+      retry: { max: 1 },
+    });
     const applied = new Set(rows.map((r) => r.name));
     const pending = migrationFiles().filter((f) => !applied.has(f)).length;
     return { ready: pending === 0, database: 'reachable', pendingMigrations: pending };

@@ -22,7 +22,8 @@ async function peopleByIds(ids: (string | null)[], transaction?: Transaction): P
   return new Map(users.map((u) => [u.id, u.name]));
 }
 
-const person = (id: string | null, names: Map<string, string>) => (id ? { id, name: names.get(id) ?? 'a former member' } : null);
+const person = (id: string | null, names: Map<string, string>) =>
+  id ? { id, name: names.get(id) ?? 'a former member' } : null;
 
 function summaryOf(row: Revision, names: Map<string, string>): RevisionSummary {
   const snapshot = row.snapshot as DesignSnapshot;
@@ -52,7 +53,10 @@ export async function teamOfRevision(revisionId: string): Promise<string | null>
 }
 
 export async function listRevisions(projectId: string, role: Role): Promise<RevisionSummary[]> {
-  const rows = await models().Revision.findAll({ where: { projectId, ...visibleWhere(role) }, order: [['number', 'DESC']] });
+  const rows = await models().Revision.findAll({
+    where: { projectId, ...visibleWhere(role) },
+    order: [['number', 'DESC']],
+  });
   const names = await peopleByIds(rows.flatMap((r) => [r.createdBy, r.reviewedBy]));
   return rows.map((r) => summaryOf(r, names));
 }
@@ -66,7 +70,11 @@ export async function getRevision(revisionId: string, role: Role): Promise<Revis
 }
 
 /** Freezes the project's design as the next numbered revision (a draft, or submitted at once). */
-export async function createRevision(projectId: string, user: SessionUser, input: { note: string; submit: boolean }): Promise<RevisionSummary> {
+export async function createRevision(
+  projectId: string,
+  user: SessionUser,
+  input: { note: string; submit: boolean },
+): Promise<RevisionSummary> {
   const { Revision: R, Project, sequelize } = models();
   return sequelize.transaction(async (transaction) => {
     // Numbers come from a locked project row, so two designers issuing at once get 4 and 5, never two 4s.
@@ -74,18 +82,36 @@ export async function createRevision(projectId: string, user: SessionUser, input
     const last = (await R.max('number', { where: { projectId }, transaction })) as number | null;
     const now = new Date();
     const snapshot = await takeDesignSnapshot(projectId, transaction);
-    const row = await R.create({
-      projectId, number: (last ?? 0) + 1, status: input.submit ? 'submitted' : 'draft', note: input.note, snapshot,
-      createdBy: user.id, ...(input.submit ? { submittedBy: user.id, submittedAt: now } : {}),
-    }, { transaction });
+    const row = await R.create(
+      {
+        projectId,
+        number: (last ?? 0) + 1,
+        status: input.submit ? 'submitted' : 'draft',
+        note: input.note,
+        snapshot,
+        createdBy: user.id,
+        ...(input.submit ? { submittedBy: user.id, submittedAt: now } : {}),
+      },
+      { transaction },
+    );
     await recordActivity(transaction, {
-      projectId, actorUserId: user.id, kind: 'revision.created', subjectType: 'revision', subjectId: row.id,
-      summary: `${user.name} made revision ${row.number}${input.note ? `: ${input.note}` : ''}`, data: { revisionNumber: row.number },
+      projectId,
+      actorUserId: user.id,
+      kind: 'revision.created',
+      subjectType: 'revision',
+      subjectId: row.id,
+      summary: `${user.name} made revision ${row.number}${input.note ? `: ${input.note}` : ''}`,
+      data: { revisionNumber: row.number },
     });
     if (input.submit) {
       await recordActivity(transaction, {
-        projectId, actorUserId: user.id, kind: 'revision.submitted', subjectType: 'revision', subjectId: row.id,
-        summary: `${user.name} submitted revision ${row.number} for review`, data: { revisionNumber: row.number },
+        projectId,
+        actorUserId: user.id,
+        kind: 'revision.submitted',
+        subjectType: 'revision',
+        subjectId: row.id,
+        summary: `${user.name} submitted revision ${row.number} for review`,
+        data: { revisionNumber: row.number },
       });
     }
     return summaryOf(row, new Map([[user.id, user.name]]));
@@ -96,7 +122,13 @@ export async function createRevision(projectId: string, user: SessionUser, input
  * Moves a revision one step through the review cycle. The row is locked and its current status
  * checked inside the transaction, so of two reviewers racing one succeeds and the other gets 409.
  */
-export async function transitionRevision(revisionId: string, user: SessionUser, role: Role, action: RevisionAction, note: string): Promise<RevisionSummary> {
+export async function transitionRevision(
+  revisionId: string,
+  user: SessionUser,
+  role: Role,
+  action: RevisionAction,
+  note: string,
+): Promise<RevisionSummary> {
   const rule = TRANSITIONS[action];
   if (!can(role, rule.permission)) throw forbidden();
   const { Revision: R, sequelize } = models();
@@ -107,26 +139,43 @@ export async function transitionRevision(revisionId: string, user: SessionUser, 
       throw new AppError('forbidden', `You made revision ${row.number}; someone else must review it`);
     }
     if (!rule.from.includes(row.status as RevisionStatus)) {
-      throw new AppError('conflict', `Revision ${row.number} is ${REVISION_STATUS_LABELS[row.status as RevisionStatus].toLowerCase()} now, so it cannot be ${rule.verb}; reload to see why`);
+      throw new AppError(
+        'conflict',
+        `Revision ${row.number} is ${REVISION_STATUS_LABELS[row.status as RevisionStatus].toLowerCase()} now, so it cannot be ${rule.verb}; reload to see why`,
+      );
     }
     const now = new Date();
     row.status = rule.to;
     if (action === 'submit') Object.assign(row, { submittedBy: user.id, submittedAt: now });
-    if (action === 'approve' || action === 'request-changes') Object.assign(row, { reviewedBy: user.id, reviewedAt: now });
+    if (action === 'approve' || action === 'request-changes')
+      Object.assign(row, { reviewedBy: user.id, reviewedAt: now });
     if (action === 'issue') {
       Object.assign(row, { issuedBy: user.id, issuedAt: now });
-      const earlier = await R.findAll({ where: { projectId: row.projectId, status: 'issued', id: { [Op.ne]: row.id } }, transaction, lock: transaction.LOCK.UPDATE });
+      const earlier = await R.findAll({
+        where: { projectId: row.projectId, status: 'issued', id: { [Op.ne]: row.id } },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       for (const old of earlier) {
         await old.update({ status: 'superseded' }, { transaction });
         await recordActivity(transaction, {
-          projectId: row.projectId, actorUserId: user.id, kind: 'revision.superseded', subjectType: 'revision', subjectId: old.id,
-          summary: `Revision ${old.number} was superseded by revision ${row.number}`, data: { revisionNumber: old.number, by: row.number },
+          projectId: row.projectId,
+          actorUserId: user.id,
+          kind: 'revision.superseded',
+          subjectType: 'revision',
+          subjectId: old.id,
+          summary: `Revision ${old.number} was superseded by revision ${row.number}`,
+          data: { revisionNumber: old.number, by: row.number },
         });
       }
     }
     await row.save({ transaction });
     await recordActivity(transaction, {
-      projectId: row.projectId, actorUserId: user.id, kind: rule.activity, subjectType: 'revision', subjectId: row.id,
+      projectId: row.projectId,
+      actorUserId: user.id,
+      kind: rule.activity,
+      subjectType: 'revision',
+      subjectId: row.id,
       summary: `${user.name} ${rule.verb} revision ${row.number}${note ? `: ${note}` : ''}`,
       data: { revisionNumber: row.number, authorUserId: row.createdBy, note },
     });
@@ -145,5 +194,9 @@ export async function compareRevisions(revisionId: string, otherId: string, role
     delete copy.snapshot;
     return copy as RevisionSummary;
   };
-  return { before: summary(before), after: summary(after), comparison: compareSnapshots(before.snapshot, after.snapshot) };
+  return {
+    before: summary(before),
+    after: summary(after),
+    comparison: compareSnapshots(before.snapshot, after.snapshot),
+  };
 }

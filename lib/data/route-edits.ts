@@ -46,7 +46,11 @@ export async function trimRouteById(routeId: string, input: TrimRouteInput): Pro
 }
 
 /** Splits a route at a chainage: this route keeps the first part, a new route holds the second. */
-export async function splitRouteById(routeId: string, userId: string, input: SplitRouteInput): Promise<{ first: RouteSummary; second: RouteSummary }> {
+export async function splitRouteById(
+  routeId: string,
+  userId: string,
+  input: SplitRouteInput,
+): Promise<{ first: RouteSummary; second: RouteSummary }> {
   const secondId = await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     const points = await loadRoutePoints(routeId, transaction);
@@ -69,17 +73,26 @@ export async function splitRouteById(routeId: string, userId: string, input: Spl
     await writeRoutePoints(second, parts.second, transaction);
     return second.id;
   });
-  return { first: (await getRouteSummary(routeId)) as RouteSummary, second: (await getRouteSummary(secondId)) as RouteSummary };
+  return {
+    first: (await getRouteSummary(routeId)) as RouteSummary,
+    second: (await getRouteSummary(secondId)) as RouteSummary,
+  };
 }
 
 /** A new route: this one, then the other joined onto its end. Both originals are left as they were. */
 export async function joinRoutesById(routeId: string, userId: string, input: JoinRoutesInput): Promise<RouteSummary> {
   const joinedId = await models().sequelize.transaction(async (transaction) => {
-    if (input.otherRouteId === routeId) throw new AppError('bad_request', 'A route cannot be joined to itself', { otherRouteId: ['Choose another route'] });
+    if (input.otherRouteId === routeId)
+      throw new AppError('bad_request', 'A route cannot be joined to itself', {
+        otherRouteId: ['Choose another route'],
+      });
     const first = await lockRoute(routeId, transaction);
     const other = await models().Route.findByPk(input.otherRouteId, { transaction });
     if (!other || other.projectId !== first.projectId) {
-      throw notInProject({ otherRouteId: ['Choose a route of this project'] }, 'There is no route with that id in this project');
+      throw notInProject(
+        { otherRouteId: ['Choose a route of this project'] },
+        'There is no route with that id in this project',
+      );
     }
     const a = await loadRoutePoints(first.id, transaction);
     const b = await loadRoutePoints(other.id, transaction);
@@ -96,7 +109,12 @@ export async function joinRoutesById(routeId: string, userId: string, input: Joi
         features: [...first.features, ...moveFeatures(other.features, (c) => c + shift)],
         importNotes:
           joined.heightStepM !== 0
-            ? [{ code: 'join-height-step', message: `where the routes meet, the second starts ${joined.heightStepM.toFixed(2)} m ${joined.heightStepM > 0 ? 'above' : 'below'} the end of the first; the first route's height was kept` }]
+            ? [
+                {
+                  code: 'join-height-step',
+                  message: `where the routes meet, the second starts ${joined.heightStepM.toFixed(2)} m ${joined.heightStepM > 0 ? 'above' : 'below'} the end of the first; the first route's height was kept`,
+                },
+              ]
             : [],
       },
       { transaction },

@@ -40,7 +40,10 @@ function storedContentType(fileName: string, declared: string): string {
 function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[] {
   if (warnings.length <= MAX_STORED_NOTES) return [...warnings];
   const rest = warnings.length - MAX_STORED_NOTES + 1;
-  return [...warnings.slice(0, MAX_STORED_NOTES - 1), { code: 'more-notes', message: `…and ${rest} more notes like these` }];
+  return [
+    ...warnings.slice(0, MAX_STORED_NOTES - 1),
+    { code: 'more-notes', message: `…and ${rest} more notes like these` },
+  ];
 }
 
 /**
@@ -52,13 +55,17 @@ function notesOf(warnings: readonly SurveyImportWarning[]): SurveyImportWarning[
 export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportResult> {
   // The route's id is chosen here so the worker can write the points as its rows.
   const routeId = randomUUID();
-  // Sniffing, parsing and writing the rows run on the worker pool: a large or hostile file never holds the request thread.
-  const { survey, rows, sha256 } = await runInWorker('survey.parse', { bytes: upload.bytes, fileName: upload.fileName, options: upload.options, routeId }).catch(
-    (error: unknown) => {
-      // The sniff's refusals already name the file; the parsers' do not.
-      throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
-    },
-  );
+  // Sniffing, parsing and writing the rows run on the worker pool: a large or hostile file never holds the request
+  // thread.
+  const { survey, rows, sha256 } = await runInWorker('survey.parse', {
+    bytes: upload.bytes,
+    fileName: upload.fileName,
+    options: upload.options,
+    routeId,
+  }).catch((error: unknown) => {
+    // The sniff's refusals already name the file; the parsers' do not.
+    throw error instanceof SurveyImportError && !SNIFF_CODES.has(error.code) ? error.inFile(upload.fileName) : error;
+  });
   const safeName = upload.fileName.replace(/[^\w.-]+/g, '_').slice(-100) || 'survey';
   const storageKey = `${projectStoragePrefix(upload.projectId)}survey-files/${randomUUID()}/${safeName}`;
   const contentType = storedContentType(upload.fileName, upload.contentType);
@@ -102,8 +109,13 @@ export async function importSurvey(upload: SurveyUpload): Promise<SurveyImportRe
       );
       await insertRouteRows(rows, transaction);
       await recordActivity(transaction, {
-        projectId: upload.projectId, actorUserId: upload.userId, kind: 'survey.imported', subjectType: 'route', subjectId: r.id,
-        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${rows.count} points)`, data: { fileName: upload.fileName, points: rows.count },
+        projectId: upload.projectId,
+        actorUserId: upload.userId,
+        kind: 'survey.imported',
+        subjectType: 'route',
+        subjectId: r.id,
+        summary: `Imported ${upload.fileName.slice(0, 120)} as route "${r.name}" (${rows.count} points)`,
+        data: { fileName: upload.fileName, points: rows.count },
       });
       const put = await stored;
       if (!put.ok) throw put.error;

@@ -118,12 +118,7 @@ function uuidBytes(uuid: string): Uint8Array {
 }
 
 /** One stored point as a row. */
-function writeRow(
-  w: RowWriter,
-  route: Uint8Array,
-  seq: number,
-  p: PointRecord,
-): void {
+function writeRow(w: RowWriter, route: Uint8Array, seq: number, p: PointRecord): void {
   w.int16(FIELDS);
   w.int32(16);
   w.raw(route);
@@ -171,7 +166,9 @@ export interface SurveyRows extends CopyRows {
   slopeLengthM: number;
 }
 
-/** A parsed survey's points as new points of route `routeId` (`surveyPointRecord`), slope chainage summed leg by leg. */
+/**
+ * A parsed survey's points as new points of route `routeId` (`surveyPointRecord`), slope chainage summed leg by leg.
+ */
 export function surveyRows(routeId: string, points: readonly SurveyPoint[]): SurveyRows {
   let slopeM = 0;
   const rows = rowsOf(routeId, points.length, (w, route, i) => {

@@ -35,7 +35,11 @@ export async function insertRouteRows(rows: CopyRows, transaction: Transaction):
 }
 
 /** Bulk insert of a route's points (seq = position in the list); see insertRouteRows. */
-export async function insertRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+export async function insertRoutePoints(
+  routeId: string,
+  records: readonly PointRecord[],
+  transaction: Transaction,
+): Promise<void> {
   await insertRouteRows(pointRows(routeId, records), transaction);
 }
 
@@ -78,16 +82,24 @@ function pointViewOf(r: PointRow): RoutePointView {
 
 /** A route's points in order, as plain objects. */
 export async function loadRoutePoints(routeId: string, transaction?: Transaction): Promise<RoutePointView[]> {
-  const rows = await models().sequelize.query<PointRow>(`SELECT ${POINT_COLUMNS} FROM route_points WHERE route_id = $1 ORDER BY seq`, {
-    bind: [routeId],
-    type: QueryTypes.SELECT,
-    transaction,
-  });
+  const rows = await models().sequelize.query<PointRow>(
+    `SELECT ${POINT_COLUMNS} FROM route_points WHERE route_id = $1 ORDER BY seq`,
+    {
+      bind: [routeId],
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   return rows.map(pointViewOf);
 }
 
 /** The points with seq from `offset` to `offset + limit - 1` (seq is the position along the route, 0..n-1). */
-export async function loadRoutePointsPage(routeId: string, offset: number, limit: number, transaction?: Transaction): Promise<RoutePointView[]> {
+export async function loadRoutePointsPage(
+  routeId: string,
+  offset: number,
+  limit: number,
+  transaction?: Transaction,
+): Promise<RoutePointView[]> {
   const rows = await models().sequelize.query<PointRow>(
     `SELECT ${POINT_COLUMNS} FROM route_points WHERE route_id = $1 AND seq >= $2 AND seq < $3 ORDER BY seq`,
     { bind: [routeId, offset, offset + limit], type: QueryTypes.SELECT, transaction },
@@ -96,7 +108,15 @@ export async function loadRoutePointsPage(routeId: string, offset: number, limit
 }
 
 /** Doubles per point in `loadCheckedPoints`' packed column, in this order. */
-const PACKED = ['chainage_m', 'elevation_m', 'raw_elevation_m', 'confidence_m', 'latitude', 'longitude', "date_part('epoch', recorded_at)"];
+const PACKED = [
+  'chainage_m',
+  'elevation_m',
+  'raw_elevation_m',
+  'confidence_m',
+  'latitude',
+  'longitude',
+  "date_part('epoch', recorded_at)",
+];
 
 /**
  * A route's points as the checks and the route view read them, fast enough for a 100,000-point
@@ -106,7 +126,13 @@ const PACKED = ['chainage_m', 'elevation_m', 'raw_elevation_m', 'confidence_m', 
  */
 export async function loadCheckedPoints(routeId: string, transaction?: Transaction): Promise<CheckedPoint[]> {
   const packed = PACKED.map((c) => `float8send(coalesce(${c}, 'NaN'))`).join(' || ');
-  const [row] = await models().sequelize.query<{ n: number; numbers: Buffer | null; excluded: string | null; sources: string | null; dismissed: Record<string, string[]> | null }>(
+  const [row] = await models().sequelize.query<{
+    n: number;
+    numbers: Buffer | null;
+    excluded: string | null;
+    sources: string | null;
+    dismissed: Record<string, string[]> | null;
+  }>(
     `SELECT count(*)::int AS n, string_agg(${packed}, ''::bytea) AS numbers,
             string_agg(CASE WHEN excluded THEN 't' ELSE 'f' END, '') AS excluded, string_agg(height_source, ',') AS sources,
             jsonb_object_agg(seq, dismissed_checks) FILTER (WHERE cardinality(dismissed_checks) > 0) AS dismissed
@@ -142,7 +168,11 @@ export async function loadCheckedPoints(routeId: string, transaction?: Transacti
 }
 
 /** Replaces every point of a route (the route is saved whole, inside the caller's transaction). */
-export async function replaceRoutePoints(routeId: string, records: readonly PointRecord[], transaction: Transaction): Promise<void> {
+export async function replaceRoutePoints(
+  routeId: string,
+  records: readonly PointRecord[],
+  transaction: Transaction,
+): Promise<void> {
   await models().RoutePoint.destroy({ where: { routeId }, transaction });
   await insertRoutePoints(routeId, records, transaction);
 }

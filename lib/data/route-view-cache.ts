@@ -12,7 +12,8 @@ const MAX_ROUTES = 16;
  */
 const views = new Map<string, { version: string; view: RouteView }>();
 
-export const routeViewVersion = (updatedAt: Date, profilePoints: number | undefined) => `${updatedAt.toISOString()}|${profilePoints ?? ''}`;
+export const routeViewVersion = (updatedAt: Date, profilePoints: number | undefined) =>
+  `${updatedAt.toISOString()}|${profilePoints ?? ''}`;
 
 export function cachedRouteView(routeId: string, version: string): RouteView | null {
   const entry = views.get(routeId);
@@ -35,7 +36,11 @@ const working = new Map<string, Promise<RouteView | null>>();
  * The view of this saved version, kept, being worked out (the import's warm-up and a first visit
  * at once share the one read), or worked out now by `compute`.
  */
-export function sharedRouteView(routeId: string, version: string, compute: () => Promise<RouteView | null>): Promise<RouteView | null> {
+export function sharedRouteView(
+  routeId: string,
+  version: string,
+  compute: () => Promise<RouteView | null>,
+): Promise<RouteView | null> {
   const kept = cachedRouteView(routeId, version);
   if (kept) return Promise.resolve(kept);
   const key = `${routeId}|${version}`;

@@ -22,7 +22,11 @@ export type PointDraftRecord = Omit<PointRecord, 'chainageM'> & { chainageM: num
  * Writes a route's points whole: chainage and lengths recomputed from the points, the old
  * points replaced and the route's totals updated, all inside the caller's transaction.
  */
-export async function writeRoutePoints(route: Route, records: readonly PointDraftRecord[], transaction: Transaction): Promise<void> {
+export async function writeRoutePoints(
+  route: Route,
+  records: readonly PointDraftRecord[],
+  transaction: Transaction,
+): Promise<void> {
   const geometry = computeRouteGeometry(records);
   await replaceRoutePoints(route.id, geometry.points, transaction);
   route.set({ pointCount: records.length, lengthM: geometry.lengthM, slopeLengthM: geometry.slopeLengthM });
@@ -37,8 +41,19 @@ export async function lockRoute(routeId: string, transaction: Transaction): Prom
   return route;
 }
 
-export async function createRoute(projectId: string, userId: string, input: CreateRouteInput, sourceFormat: RouteSourceFormat = 'sketch'): Promise<RouteSummary> {
-  const r = await models().Route.create({ projectId, name: input.name, notes: input.notes ?? '', createdBy: userId, sourceFormat });
+export async function createRoute(
+  projectId: string,
+  userId: string,
+  input: CreateRouteInput,
+  sourceFormat: RouteSourceFormat = 'sketch',
+): Promise<RouteSummary> {
+  const r = await models().Route.create({
+    projectId,
+    name: input.name,
+    notes: input.notes ?? '',
+    createdBy: userId,
+    sourceFormat,
+  });
   return toRouteSummary(r, null);
 }
 
@@ -77,21 +92,32 @@ export async function saveRoutePoints(routeId: string, input: SavePointsInput): 
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     if (input.baseUpdatedAt && route.updatedAt.toISOString() !== new Date(input.baseUpdatedAt).toISOString()) {
-      throw new AppError('conflict', 'Someone saved this route after you opened it; reload it and make your changes again.');
+      throw new AppError(
+        'conflict',
+        'Someone saved this route after you opened it; reload it and make your changes again.',
+      );
     }
     const stored = await loadRoutePoints(routeId, transaction);
     const fromSeq = input.window?.fromSeq ?? 0;
     const toSeq = input.window?.toSeq ?? stored.length;
     if (toSeq > stored.length) {
-      throw new AppError('bad_request', `The edited rows end at point ${toSeq}, but the route has ${stored.length}`, { 'window.toSeq': [`must be at most ${stored.length}`] });
+      throw new AppError('bad_request', `The edited rows end at point ${toSeq}, but the route has ${stored.length}`, {
+        'window.toSeq': [`must be at most ${stored.length}`],
+      });
     }
     const existing = new Map(stored.slice(fromSeq, toSeq).map((p) => [p.seq, p]));
     const used = new Set<number>();
     const edited: PointDraftRecord[] = input.points.map((p, i) => {
       const source = p.sourceSeq === null ? undefined : existing.get(p.sourceSeq);
       if (p.sourceSeq !== null && (!source || used.has(p.sourceSeq))) {
-        const why = source ? 'a point already used' : input.window ? 'a point outside the edited rows' : 'a point this route does not have';
-        throw new RouteEditError('sourceSeq', `refers to ${why} (${p.sourceSeq + 1})`, { pointNumber: fromSeq + i + 1 });
+        const why = source
+          ? 'a point already used'
+          : input.window
+            ? 'a point outside the edited rows'
+            : 'a point this route does not have';
+        throw new RouteEditError('sourceSeq', `refers to ${why} (${p.sourceSeq + 1})`, {
+          pointNumber: fromSeq + i + 1,
+        });
       }
       if (p.sourceSeq !== null) used.add(p.sourceSeq);
       return {
@@ -110,13 +136,21 @@ export async function saveRoutePoints(routeId: string, input: SavePointsInput): 
       };
     });
     const kept = (points: readonly RoutePointView[]): PointDraftRecord[] => points.map(recordOf);
-    await writeRoutePoints(route, [...kept(stored.slice(0, fromSeq)), ...edited, ...kept(stored.slice(toSeq))], transaction);
+    await writeRoutePoints(
+      route,
+      [...kept(stored.slice(0, fromSeq)), ...edited, ...kept(stored.slice(toSeq))],
+      transaction,
+    );
   });
   return (await getRouteView(routeId)) as RouteView;
 }
 
 /** Accepts and rejects clean-up proposals in one transaction. */
-export async function decideCleanup(routeId: string, input: CleanupDecision, actorUserId: string | null = null): Promise<RouteView> {
+export async function decideCleanup(
+  routeId: string,
+  input: CleanupDecision,
+  actorUserId: string | null = null,
+): Promise<RouteView> {
   await models().sequelize.transaction(async (transaction) => {
     const route = await lockRoute(routeId, transaction);
     const points = await loadRoutePoints(routeId, transaction);
@@ -125,8 +159,13 @@ export async function decideCleanup(routeId: string, input: CleanupDecision, act
     const accepted = input.accept?.length ?? 0;
     const rejected = input.reject?.length ?? 0;
     await recordActivity(transaction, {
-      projectId: route.projectId, actorUserId, kind: 'route.cleaned', subjectType: 'route', subjectId: route.id,
-      summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`, data: { accepted, rejected },
+      projectId: route.projectId,
+      actorUserId,
+      kind: 'route.cleaned',
+      subjectType: 'route',
+      subjectId: route.id,
+      summary: `Clean-up of route "${route.name}": ${accepted} proposal${accepted === 1 ? '' : 's'} accepted, ${rejected} rejected`,
+      data: { accepted, rejected },
     });
   });
   return (await getRouteView(routeId)) as RouteView;

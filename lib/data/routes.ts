@@ -33,7 +33,14 @@ const withFile = () => [{ model: models().Attachment, as: 'sourceAttachment' }];
 const fileOf = (r: Route) => (r as Route & { sourceAttachment?: Attachment | null }).sourceAttachment;
 
 export async function listRoutes(projectId: string): Promise<RouteSummary[]> {
-  const rows = await models().Route.findAll({ where: { projectId }, include: withFile(), order: [['createdAt', 'ASC'], ['name', 'ASC']] });
+  const rows = await models().Route.findAll({
+    where: { projectId },
+    include: withFile(),
+    order: [
+      ['createdAt', 'ASC'],
+      ['name', 'ASC'],
+    ],
+  });
   return rows.map((r) => toRouteSummary(r, fileOf(r)));
 }
 
@@ -48,7 +55,12 @@ export async function getRouteDetail(routeId: string): Promise<RouteDetail | nul
   if (!r) return null;
   const points = await loadRoutePoints(routeId);
   return {
-    route: { ...toRouteSummary(r, fileOf(r)), features: r.features, importNotes: r.importNotes, closureErrorM: r.closureErrorM ?? null },
+    route: {
+      ...toRouteSummary(r, fileOf(r)),
+      features: r.features,
+      importNotes: r.importNotes,
+      closureErrorM: r.closureErrorM ?? null,
+    },
     points,
     proposals: detectRouteProposals(points),
     gpsWarning: routeGpsWarning(points),
@@ -57,7 +69,10 @@ export async function getRouteDetail(routeId: string): Promise<RouteDetail | nul
 
 /** One snapshot of the database for a read of several statements, so they all see the same save. */
 const snapshot = <T>(read: (transaction: Transaction) => Promise<T>) =>
-  models().sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.REPEATABLE_READ, readOnly: true }, read);
+  models().sequelize.transaction(
+    { isolationLevel: Transaction.ISOLATION_LEVELS.REPEATABLE_READ, readOnly: true },
+    read,
+  );
 
 /**
  * What the route page draws above its table (header, thinned profile, plan, proposals): never the
@@ -73,8 +88,17 @@ export async function getRouteView(routeId: string, profilePoints?: number): Pro
     });
     if (!read) return null;
     const { r, points } = read;
-    const route = { ...toRouteSummary(r, fileOf(r)), features: r.features, importNotes: r.importNotes, closureErrorM: r.closureErrorM ?? null };
-    const view = routeViewOf({ route, proposals: detectRouteProposals(points), gpsWarning: routeGpsWarning(points) }, points, profilePoints);
+    const route = {
+      ...toRouteSummary(r, fileOf(r)),
+      features: r.features,
+      importNotes: r.importNotes,
+      closureErrorM: r.closureErrorM ?? null,
+    };
+    const view = routeViewOf(
+      { route, proposals: detectRouteProposals(points), gpsWarning: routeGpsWarning(points) },
+      points,
+      profilePoints,
+    );
     keepRouteView(routeId, routeViewVersion(r.updatedAt, profilePoints), view);
     return view;
   });
@@ -85,7 +109,9 @@ export async function getRouteView(routeId: string, profilePoints?: number): Pro
  * to opens warm on this instance; a failure only means that first visit works it out itself.
  */
 export function warmRouteView(routeId: string): void {
-  getRouteView(routeId).catch((err: unknown) => log().warn({ err }, 'working out a new route view ahead of its first visit'));
+  getRouteView(routeId).catch((err: unknown) =>
+    log().warn({ err }, 'working out a new route view ahead of its first visit'),
+  );
 }
 
 /** A page of the route's rows by seq (an offset past the end gives an empty page). */
@@ -100,9 +126,10 @@ export async function getRoutePointsPage(routeId: string, offset: number, limit:
 /** Smoothing or a benchmark offset proposed over the stored route, with where each proposal sits. */
 export async function routeProposals(routeId: string, query: RouteProposalsQuery): Promise<RouteProposalsAnswer> {
   const points = await loadCheckedPoints(routeId);
-  const proposals = 'smoothingWindow' in query
-    ? smoothingProposals(points, query.smoothingWindow)
-    : benchmarkProposals(points, query.benchmarkPoint - 1, query.benchmarkElevationM);
+  const proposals =
+    'smoothingWindow' in query
+      ? smoothingProposals(points, query.smoothingWindow)
+      : benchmarkProposals(points, query.benchmarkPoint - 1, query.benchmarkElevationM);
   return { proposals, places: proposalPlacesOf(points, proposals) };
 }
 

@@ -11,7 +11,9 @@ export async function listTanks(projectId: string): Promise<TankRecord[]> {
   return rows.map(tankRecord);
 }
 
-const sourceReference = (input: TankInput) => [{ field: 'supplySourceId', model: 'WaterSource' as const, id: input.supplySourceId, label: 'The supply source' }];
+const sourceReference = (input: TankInput) => [
+  { field: 'supplySourceId', model: 'WaterSource' as const, id: input.supplySourceId, label: 'The supply source' },
+];
 
 export async function createTank(projectId: string, userId: string, input: TankInput): Promise<TankRecord> {
   const { Tank, sequelize } = models();

@@ -5,13 +5,27 @@ import { AppError } from '../errors';
 import { can } from '../permissions';
 import type { Role } from '../roles';
 
-export interface TeamSummary { id: string; name: string; role: Role }
+export interface TeamSummary {
+  id: string;
+  name: string;
+  role: Role;
+}
 /** `email` is null where the caller may not see it (a client sees only their own). */
-export interface MemberSummary { userId: string; name: string; email: string | null; role: Role; joinedAt: string }
+export interface MemberSummary {
+  userId: string;
+  name: string;
+  email: string | null;
+  role: Role;
+  joinedAt: string;
+}
 
 export async function listTeamsOf(userId: string): Promise<TeamSummary[]> {
   const { Membership, Team } = models();
-  const rows = await Membership.findAll({ where: { userId }, include: [{ model: Team, as: 'team' }], order: [['createdAt', 'ASC']] });
+  const rows = await Membership.findAll({
+    where: { userId },
+    include: [{ model: Team, as: 'team' }],
+    order: [['createdAt', 'ASC']],
+  });
   return rows.map((m) => {
     const team = (m as unknown as { team: InstanceType<typeof Team> }).team;
     return { id: team.id, name: team.name, role: m.role };
@@ -52,18 +66,35 @@ export async function getTeam(teamId: string): Promise<{ id: string; name: strin
 export async function listMembers(teamId: string, viewer?: { userId: string; role: Role }): Promise<MemberSummary[]> {
   const showEmail = (userId: string) => !viewer || can(viewer.role, 'members.contact') || viewer.userId === userId;
   const { Membership, User } = models();
-  const rows = await Membership.findAll({ where: { teamId }, include: [{ model: User, as: 'user' }], order: [['createdAt', 'ASC']] });
+  const rows = await Membership.findAll({
+    where: { teamId },
+    include: [{ model: User, as: 'user' }],
+    order: [['createdAt', 'ASC']],
+  });
   return rows.map((m) => {
     const user = (m as unknown as { user: InstanceType<typeof User> }).user;
-    return { userId: user.id, name: user.name, email: showEmail(user.id) ? user.email : null, role: m.role, joinedAt: m.createdAt.toISOString() };
+    return {
+      userId: user.id,
+      name: user.name,
+      email: showEmail(user.id) ? user.email : null,
+      role: m.role,
+      joinedAt: m.createdAt.toISOString(),
+    };
   });
 }
 
 async function assertAnotherOwnerRemains(teamId: string, userId: string, transaction: import('sequelize').Transaction) {
   const { Membership } = models();
   // Lock the team's owner rows so two owners cannot demote each other at the same moment.
-  const owners = await Membership.findAll({ where: { teamId, role: 'owner', userId: { [Op.ne]: userId } }, transaction, lock: transaction.LOCK.UPDATE });
-  if (owners.length === 0) throw new AppError('conflict', 'A team needs at least one owner: make someone else owner first', { role: ['The last owner cannot be removed or demoted'] });
+  const owners = await Membership.findAll({
+    where: { teamId, role: 'owner', userId: { [Op.ne]: userId } },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
+  if (owners.length === 0)
+    throw new AppError('conflict', 'A team needs at least one owner: make someone else owner first', {
+      role: ['The last owner cannot be removed or demoted'],
+    });
 }
 
 /**

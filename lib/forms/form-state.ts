@@ -11,14 +11,30 @@ export interface FormNote {
   tone: 'ok' | 'error';
 }
 
-/** The screen's names of a form's fields and the project's units, so a bound reads "at most 29,528 ft", not the schema's metres. */
-export interface FormWords { table: FieldWordTable; units: UnitSystem }
+/**
+ * The screen's names of a form's fields and the project's units, so a bound reads "at most 29,528 ft", not the schema's
+ * metres.
+ */
+export interface FormWords {
+  table: FieldWordTable;
+  units: UnitSystem;
+}
 
-/** What the form's own check (the API's zod schema) makes of the input: the value, or errors beside the fields, worded with `words` when given. */
-export function checkInput<S extends z.ZodType>(schema: S, data: unknown, words?: FormWords): { value: z.output<S> | null; fields: FieldErrors } {
+/**
+ * What the form's own check (the API's zod schema) makes of the input: the value, or errors beside the fields, worded
+ * with `words` when given.
+ */
+export function checkInput<S extends z.ZodType>(
+  schema: S,
+  data: unknown,
+  words?: FormWords,
+): { value: z.output<S> | null; fields: FieldErrors } {
   const parsed = schema.safeParse(data);
   if (parsed.success) return { value: parsed.data, fields: {} };
-  return { value: null, fields: words ? fieldErrorsIn(parsed.error, words.units, words.table) : fieldErrorsOf(parsed.error) };
+  return {
+    value: null,
+    fields: words ? fieldErrorsIn(parsed.error, words.units, words.table) : fieldErrorsOf(parsed.error),
+  };
 }
 
 /** A refused save: the API's field errors beside the fields and its message under the form, else `fallback`. */

@@ -17,10 +17,23 @@ export interface MappingDraft {
   format: SurveyFormat;
   name: string;
   dialect: { delimiter: CsvDelimiter; decimalComma: boolean; hasHeader: boolean };
-  gps: { mapping: GpsColumnMapping; elevationUnit: LengthUnit; accuracyIsVertical: boolean; heightSource: HeightSource };
-  /** How times are read: the project's zone for times without an offset, and the order of an ambiguous date ('ask' until chosen). */
+  gps: {
+    mapping: GpsColumnMapping;
+    elevationUnit: LengthUnit;
+    accuracyIsVertical: boolean;
+    heightSource: HeightSource;
+  };
+  /**
+   * How times are read: the project's zone for times without an offset, and the order of an ambiguous date ('ask' until
+   * chosen).
+   */
   times: { timeZone: string; dateOrder: 'ask' | 'day-first' | 'month-first' };
-  station: { mapping: StationColumnMapping; chainageUnit: LengthUnit; elevationUnit: LengthUnit; heightSource: HeightSource };
+  station: {
+    mapping: StationColumnMapping;
+    chainageUnit: LengthUnit;
+    elevationUnit: LengthUnit;
+    heightSource: HeightSource;
+  };
   gpx: { useWaypointsAsRoute: boolean; heightSource: HeightSource };
   /** Field-book heights are typed in the project's units, as text until submitted. */
   fieldBook: {
@@ -36,25 +49,62 @@ export interface MappingDraft {
 
 /** A route name from a file name: “upper-spring_walk.gpx” → “upper spring walk”. */
 export function routeNameFromFile(fileName: string): string {
-  const base = fileName.replace(/\.[^.]+$/, '').replace(/[_-]+/g, ' ').trim();
+  const base = fileName
+    .replace(/\.[^.]+$/, '')
+    .replace(/[_-]+/g, ' ')
+    .trim();
   return (base || 'Imported route').slice(0, 120);
 }
 
-export function initialMappingDraft(inspection: SurveyInspection, fileName: string, projectTimeZone: string | null = null): MappingDraft {
+export function initialMappingDraft(
+  inspection: SurveyInspection,
+  fileName: string,
+  projectTimeZone: string | null = null,
+): MappingDraft {
   const csv = inspection.kind === 'csv' ? inspection : null;
   return {
     times: { timeZone: projectTimeZone ?? 'UTC', dateOrder: 'ask' },
     format: inspection.suggestedFormat,
     name: routeNameFromFile(fileName),
-    dialect: csv ? { delimiter: csv.dialect.delimiter, decimalComma: csv.dialect.decimalComma, hasHeader: csv.dialect.hasHeader } : { delimiter: ',', decimalComma: false, hasHeader: true },
+    dialect: csv
+      ? { delimiter: csv.dialect.delimiter, decimalComma: csv.dialect.decimalComma, hasHeader: csv.dialect.hasHeader }
+      : { delimiter: ',', decimalComma: false, hasHeader: true },
     gps: csv
-      ? { mapping: csv.gps.mapping, elevationUnit: csv.gps.elevationUnit, accuracyIsVertical: csv.gps.accuracyIsVertical, heightSource: 'gps' }
-      : { mapping: { latitude: null, longitude: null, elevation: null, time: null, name: null, accuracy: null }, elevationUnit: 'm', accuracyIsVertical: false, heightSource: 'gps' },
+      ? {
+          mapping: csv.gps.mapping,
+          elevationUnit: csv.gps.elevationUnit,
+          accuracyIsVertical: csv.gps.accuracyIsVertical,
+          heightSource: 'gps',
+        }
+      : {
+          mapping: { latitude: null, longitude: null, elevation: null, time: null, name: null, accuracy: null },
+          elevationUnit: 'm',
+          accuracyIsVertical: false,
+          heightSource: 'gps',
+        },
     station: csv
-      ? { mapping: csv.station.mapping, chainageUnit: csv.station.chainageUnit, elevationUnit: csv.station.elevationUnit, heightSource: 'typed' }
-      : { mapping: { chainage: null, elevation: null, name: null }, chainageUnit: 'm', elevationUnit: 'm', heightSource: 'typed' },
+      ? {
+          mapping: csv.station.mapping,
+          chainageUnit: csv.station.chainageUnit,
+          elevationUnit: csv.station.elevationUnit,
+          heightSource: 'typed',
+        }
+      : {
+          mapping: { chainage: null, elevation: null, name: null },
+          chainageUnit: 'm',
+          elevationUnit: 'm',
+          heightSource: 'typed',
+        },
     gpx: { useWaypointsAsRoute: false, heightSource: 'gps' },
-    fieldBook: { startElevation: '', startLabel: '', angleUnit: 'auto', distanceUnit: 'm', closingElevation: '', method: 'rise-and-fall', hoseLevel: false },
+    fieldBook: {
+      startElevation: '',
+      startLabel: '',
+      angleUnit: 'auto',
+      distanceUnit: 'm',
+      closingElevation: '',
+      method: 'rise-and-fall',
+      hoseLevel: false,
+    },
   };
 }
 
@@ -63,9 +113,23 @@ export function withInspection(draft: MappingDraft, inspection: SurveyInspection
   if (inspection.kind !== 'csv') return draft;
   return {
     ...draft,
-    dialect: { delimiter: inspection.dialect.delimiter, decimalComma: inspection.dialect.decimalComma, hasHeader: inspection.dialect.hasHeader },
-    gps: { ...draft.gps, mapping: inspection.gps.mapping, elevationUnit: inspection.gps.elevationUnit, accuracyIsVertical: inspection.gps.accuracyIsVertical },
-    station: { ...draft.station, mapping: inspection.station.mapping, chainageUnit: inspection.station.chainageUnit, elevationUnit: inspection.station.elevationUnit },
+    dialect: {
+      delimiter: inspection.dialect.delimiter,
+      decimalComma: inspection.dialect.decimalComma,
+      hasHeader: inspection.dialect.hasHeader,
+    },
+    gps: {
+      ...draft.gps,
+      mapping: inspection.gps.mapping,
+      elevationUnit: inspection.gps.elevationUnit,
+      accuracyIsVertical: inspection.gps.accuracyIsVertical,
+    },
+    station: {
+      ...draft.station,
+      mapping: inspection.station.mapping,
+      chainageUnit: inspection.station.chainageUnit,
+      elevationUnit: inspection.station.elevationUnit,
+    },
   };
 }
 
@@ -76,13 +140,20 @@ function typedHeightM(text: string, units: UnitSystem): number {
 }
 
 /** The draft as import options, checked by the same zod schema the server uses. */
-export function mappingToOptions(draft: MappingDraft, units: UnitSystem): { options: SurveyImportOptions } | { errors: FieldErrors } {
+export function mappingToOptions(
+  draft: MappingDraft,
+  units: UnitSystem,
+): { options: SurveyImportOptions } | { errors: FieldErrors } {
   const fb = draft.fieldBook;
   const raw = (() => {
     switch (draft.format) {
       case 'gps-csv':
         return {
-          format: draft.format, name: draft.name, ...draft.gps, dialect: draft.dialect, timeZone: draft.times.timeZone,
+          format: draft.format,
+          name: draft.name,
+          ...draft.gps,
+          dialect: draft.dialect,
+          timeZone: draft.times.timeZone,
           ...(draft.times.dateOrder === 'ask' ? {} : { dateOrder: draft.times.dateOrder }),
         };
       case 'station-csv':

@@ -21,7 +21,10 @@ export function buildImportPreview(survey: ParsedSurvey): ImportPreview {
     warnings: survey.warnings.slice(0, SHOWN_WARNINGS),
     warningCount: survey.warnings.length,
     features: survey.features ?? [],
-    profile: thinRouteProfile(points.map((p) => ({ chainageM: p.chainageM, elevationM: p.elevationM })), points),
+    profile: thinRouteProfile(
+      points.map((p) => ({ chainageM: p.chainageM, elevationM: p.elevationM })),
+      points,
+    ),
     proposals: detectRouteProposals(points),
     gpsWarning: routeGpsWarning(points),
   };

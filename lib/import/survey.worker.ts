@@ -13,7 +13,8 @@ let text = '';
 let hadByteOrderMark = false;
 
 function failure(error: unknown): ImportFailure {
-  if (error instanceof SurveyImportError) return { code: error.code, message: error.message, line: error.line, column: error.column };
+  if (error instanceof SurveyImportError)
+    return { code: error.code, message: error.message, line: error.line, column: error.column };
   return { code: 'unexpected', message: error instanceof Error ? error.message : 'the file could not be read' };
 }
 
@@ -30,10 +31,17 @@ scope.onmessage = (event: MessageEvent<WorkerRequest>) => {
       return;
     }
     if (request.type === 'reinspect') {
-      post({ type: 'inspected', id: request.id, inspection: inspectSurveyText(text, request.dialect), hadByteOrderMark });
+      post({
+        type: 'inspected',
+        id: request.id,
+        inspection: inspectSurveyText(text, request.dialect),
+        hadByteOrderMark,
+      });
       return;
     }
-    const survey = parseSurveyText(text, request.options, (fraction) => post({ type: 'progress', id: request.id, fraction }));
+    const survey = parseSurveyText(text, request.options, (fraction) =>
+      post({ type: 'progress', id: request.id, fraction }),
+    );
     post({ type: 'progress', id: request.id, fraction: 1 });
     post({ type: 'parsed', id: request.id, preview: buildImportPreview(survey) });
   } catch (error) {

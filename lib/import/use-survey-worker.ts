@@ -23,7 +23,8 @@ function readWithProgress(file: File, onProgress: (fraction: number) => void): P
       if (e.lengthComputable && e.total > 0) onProgress(e.loaded / e.total);
     };
     reader.onload = () => resolve(reader.result as ArrayBuffer);
-    reader.onerror = () => reject(new ImportProblem({ code: 'unexpected', message: `the browser could not read “${file.name}”` }));
+    reader.onerror = () =>
+      reject(new ImportProblem({ code: 'unexpected', message: `the browser could not read “${file.name}”` }));
     reader.readAsArrayBuffer(file);
   });
 }
@@ -38,28 +39,42 @@ export function useSurveyWorker() {
 
   useEffect(() => () => worker.current?.terminate(), []);
 
-  const send = useCallback(<T extends WorkerResponse['type']>(request: WorkerRequest, expect: T, onProgress?: (f: number) => void, transfer: Transferable[] = []) => {
-    worker.current ??= new Worker(new URL('./survey.worker.ts', import.meta.url));
-    const w = worker.current;
-    return new Promise<Extract<WorkerResponse, { type: T }>>((resolve, reject) => {
-      const listener = (event: MessageEvent<WorkerResponse>) => {
-        const m = event.data;
-        if (m.id !== request.id) return;
-        if (m.type === 'progress') return onProgress?.(m.fraction);
-        w.removeEventListener('message', listener);
-        if (m.type === 'failed') reject(new ImportProblem(m.error));
-        else if (m.type === expect) resolve(m as Extract<WorkerResponse, { type: T }>);
-      };
-      w.addEventListener('message', listener);
-      w.postMessage(request, transfer);
-    });
-  }, []);
+  const send = useCallback(
+    <T extends WorkerResponse['type']>(
+      request: WorkerRequest,
+      expect: T,
+      onProgress?: (f: number) => void,
+      transfer: Transferable[] = [],
+    ) => {
+      worker.current ??= new Worker(new URL('./survey.worker.ts', import.meta.url));
+      const w = worker.current;
+      return new Promise<Extract<WorkerResponse, { type: T }>>((resolve, reject) => {
+        const listener = (event: MessageEvent<WorkerResponse>) => {
+          const m = event.data;
+          if (m.id !== request.id) return;
+          if (m.type === 'progress') return onProgress?.(m.fraction);
+          w.removeEventListener('message', listener);
+          if (m.type === 'failed') reject(new ImportProblem(m.error));
+          else if (m.type === expect) resolve(m as Extract<WorkerResponse, { type: T }>);
+        };
+        w.addEventListener('message', listener);
+        w.postMessage(request, transfer);
+      });
+    },
+    [],
+  );
 
   const inspect = useCallback(
-    async (file: File, onReadProgress: (fraction: number) => void): Promise<{ inspection: SurveyInspection; hadByteOrderMark: boolean }> => {
+    async (
+      file: File,
+      onReadProgress: (fraction: number) => void,
+    ): Promise<{ inspection: SurveyInspection; hadByteOrderMark: boolean }> => {
       if (file.size > MAX_SURVEY_FILE_BYTES) {
         const mb = (n: number) => (n / (1024 * 1024)).toFixed(1);
-        throw new ImportProblem({ code: 'file-too-large', message: `the file “${file.name}” is ${mb(file.size)} MB; the limit is ${mb(MAX_SURVEY_FILE_BYTES)} MB` });
+        throw new ImportProblem({
+          code: 'file-too-large',
+          message: `the file “${file.name}” is ${mb(file.size)} MB; the limit is ${mb(MAX_SURVEY_FILE_BYTES)} MB`,
+        });
       }
       const bytes = await readWithProgress(file, onReadProgress);
       const id = nextId.current++;

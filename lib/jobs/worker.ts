@@ -24,5 +24,9 @@ const silent = new Logger(() => () => {});
 
 /** Runs every job that is due now, then returns (tests, and a one-off drain from a script). */
 export async function runDueJobs(options: { quiet?: boolean } = {}): Promise<void> {
-  await runOnce({ connectionString: env().DATABASE_URL, taskList: JOB_TASKS, ...(options.quiet ? { logger: silent } : {}) });
+  await runOnce({
+    connectionString: env().DATABASE_URL,
+    taskList: JOB_TASKS,
+    ...(options.quiet ? { logger: silent } : {}),
+  });
 }

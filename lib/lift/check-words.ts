@@ -28,12 +28,15 @@ function figures(system: UnitSystem) {
 type Figures = ReturnType<typeof figures>;
 type Wording = (v: PlanCheckValues, f: Figures) => PlanCheckText;
 
-const STANDPIPE_FIX = 'Put a standpipe or an open tank part-way down so the drive pipe below it has the right length (it ends the surge there).';
+const STANDPIPE_FIX =
+  'Put a standpipe or an open tank part-way down so the drive pipe below it has the right length (it ends the surge there).';
 
 const WORDING: Record<PlanCheckCode, Wording> = {
   'lift-ratio-beyond-table': (v, f) => ({
     message: `Delivery head is ${f.ratio(v.ratio)} times the fall, beyond the end of the table in use ("${v.tableLabel}", up to ${f.ratio(v.tableEndRatio, 0)}); ${
-      (v.tableEndEfficiency ?? 0) > 0 ? `its last efficiency (${f.percent(v.tableEndEfficiency)}) is held, not extrapolated` : 'it delivers nothing there'
+      (v.tableEndEfficiency ?? 0) > 0
+        ? `its last efficiency (${f.percent(v.tableEndEfficiency)}) is held, not extrapolated`
+        : 'it delivers nothing there'
     }.`,
     fix: v.widerTableLabel
       ? `Choose the "${v.widerTableLabel}" table, which reaches ${f.ratio(v.widerTableEndRatio, 0)}:1, or measure the efficiency at commissioning; gaining fall or lifting in two stages also helps.`
@@ -51,9 +54,10 @@ const WORDING: Record<PlanCheckCode, Wording> = {
     fix: 'Add a pump in parallel or choose the next size class.',
   }),
   'no-size-class': (v, f) => ({
-    message: v.drivePipeNominalMm !== undefined
-      ? `No size class chosen; ${f.flow(v.flowM3s)} per pump suits a ${f.ram(v.drivePipeNominalMm)} ram.`
-      : `No size class chosen, and ${f.flow(v.flowM3s)} per pump is outside every class in the table.`,
+    message:
+      v.drivePipeNominalMm !== undefined
+        ? `No size class chosen; ${f.flow(v.flowM3s)} per pump suits a ${f.ram(v.drivePipeNominalMm)} ram.`
+        : `No size class chosen, and ${f.flow(v.flowM3s)} per pump is outside every class in the table.`,
   }),
   'supply-below-7x-delivered': (v, f) => ({
     message: `The source gives ${f.ratio(v.ratio)} times the delivered flow; plan on at least ${f.ratio(v.minRatio, 0)} times, so the delivered figure is optimistic.`,
@@ -61,14 +65,17 @@ const WORDING: Record<PlanCheckCode, Wording> = {
   }),
   'drive-length-vs-fall': (v, f) => ({
     message: `Drive pipe is ${f.ratio(v.ratio)} times the fall; the usual range is ${f.ratio(v.minRatio, 0)} to ${f.ratio(v.maxRatio, 0)} (about 7).`,
-    fix: v.tooLong ? STANDPIPE_FIX : 'Lengthen the drive pipe, or take the drive water from closer to the pump with less fall.',
+    fix: v.tooLong
+      ? STANDPIPE_FIX
+      : 'Lengthen the drive pipe, or take the drive water from closer to the pump with less fall.',
   }),
   'drive-length-vs-diameter': (v, f) => ({
     message: `Drive pipe length is ${f.ratio(v.ratio, 0)} bores; the usual range is ${f.ratio(v.minRatio, 0)} to ${f.ratio(v.maxRatio, 0)}.`,
     fix: v.tooLong ? STANDPIPE_FIX : 'Lengthen the drive pipe or use a smaller bore.',
   }),
   'drive-pipe-not-rigid': () => ({
-    message: 'The drive pipe is not rigid: a flexible pipe swells with each beat, softens the surge and wastes the drive energy.',
+    message:
+      'The drive pipe is not rigid: a flexible pipe swells with each beat, softens the surge and wastes the drive energy.',
     fix: 'Use rigid pipe (galvanised steel) for the drive pipe, firmly anchored and straight.',
   }),
   'fall-too-small': (v, f) => ({
@@ -104,7 +111,8 @@ const WORDING: Record<PlanCheckCode, Wording> = {
     fix: 'Increase the supply (longer hours, more drive flow, another source) or reduce the demand.',
   }),
   'no-reserve': () => ({
-    message: 'No reserve days are held: the tank only carries the daily cycle, so any stop in supply leaves the outlets dry within hours.',
+    message:
+      'No reserve days are held: the tank only carries the daily cycle, so any stop in supply leaves the outlets dry within hours.',
     fix: 'Hold a reserve equal to the interval between checks of the system (3-4 days if checked every 3-4 days).',
   }),
   'tank-smaller-than-needed': (v, f) => ({
@@ -120,7 +128,8 @@ const WORDING: Record<PlanCheckCode, Wording> = {
     fix: 'Design on the dry-season figure unless storage carries the system through the dry season.',
   }),
   'no-dry-season-reading': () => ({
-    message: 'No recent dry-season reading: the lowest recent reading of any season is used, and the dry-season flow may be lower.',
+    message:
+      'No recent dry-season reading: the lowest recent reading of any season is used, and the dry-season flow may be lower.',
     fix: 'Measure the source in the driest weeks of the year.',
   }),
   'draw-exceeds-yield': (v, f) => ({

@@ -32,9 +32,16 @@ function formField(coreField: string | undefined): string | undefined {
 }
 
 /** Measured efficiency of one reading, compared with the plan (the table's efficiency, not an override). */
-export function commissioningOutcome(reading: CommissioningReadingInput, plan: RamPlanResult | null): Outcome<CommissioningView> {
+export function commissioningOutcome(
+  reading: CommissioningReadingInput,
+  plan: RamPlanResult | null,
+): Outcome<CommissioningView> {
   if (reading.driveMeasure === 'plan' && !plan) {
-    return { ok: false, error: 'The drive flow was not measured and the site has no plan to take it from; measure the waste flow.', field: 'driveMeasure' };
+    return {
+      ok: false,
+      error: 'The drive flow was not measured and the site has no plan to take it from; measure the waste flow.',
+      field: 'driveMeasure',
+    };
   }
   const deliveryHeadM = reading.deliveryHeadM ?? pressurePaToHeadM(reading.pressureAtPumpPa ?? Number.NaN);
   const drivePart = measurement(reading.driveBucketVolumeM3, reading.driveBucketSeconds, reading.driveFlowM3s);
@@ -46,15 +53,31 @@ export function commissioningOutcome(reading: CommissioningReadingInput, plan: R
     const result = commissioningResult({
       reading: {
         beatsPerMinute: reading.beatsPerMinute,
-        delivered: measurement(reading.deliveredBucketVolumeM3, reading.deliveredBucketSeconds, reading.deliveredFlowM3s),
+        delivered: measurement(
+          reading.deliveredBucketVolumeM3,
+          reading.deliveredBucketSeconds,
+          reading.deliveredFlowM3s,
+        ),
         drive,
         supplyHeadM: reading.supplyHeadM,
         deliveryHeadM,
       },
-      ...(plan && plan.efficiency > 0 ? { plannedEfficiency: plan.efficiency, plannedDeliveredFlowM3s: plan.deliveredFlowM3s } : {}),
+      ...(plan && plan.efficiency > 0
+        ? { plannedEfficiency: plan.efficiency, plannedDeliveredFlowM3s: plan.deliveredFlowM3s }
+        : {}),
     });
-    const driveBasis: CommissioningView['driveBasis'] = reading.driveMeasure === 'drive' ? 'measured-drive' : reading.driveMeasure === 'waste' ? 'measured-waste' : 'planned';
-    return { ...result, deliveryHeadM, driveBasis, plannedEfficiency: plan && plan.efficiency > 0 ? plan.efficiency : null };
+    const driveBasis: CommissioningView['driveBasis'] =
+      reading.driveMeasure === 'drive'
+        ? 'measured-drive'
+        : reading.driveMeasure === 'waste'
+          ? 'measured-waste'
+          : 'planned';
+    return {
+      ...result,
+      deliveryHeadM,
+      driveBasis,
+      plannedEfficiency: plan && plan.efficiency > 0 ? plan.efficiency : null,
+    };
   });
   return outcome.ok ? outcome : { ...outcome, field: formField(outcome.field) };
 }

@@ -25,7 +25,15 @@ export function publishedFigureOf(use: Pick<DemandUseInput, 'kind' | 'figureId' 
   switch (use.kind) {
     case 'people': {
       const figure = DEFAULT_DEMAND_FIGURES.perPerson.find((candidate) => candidate.id === use.figureId);
-      return figure ? { id: figure.id, label: figure.label, value: figure.perPersonM3PerDay, source: figure.source, note: figure.note } : null;
+      return figure
+        ? {
+            id: figure.id,
+            label: figure.label,
+            value: figure.perPersonM3PerDay,
+            source: figure.source,
+            note: figure.note,
+          }
+        : null;
     }
     case 'livestock': {
       const figure = DEFAULT_DEMAND_FIGURES.livestock.find((candidate) => candidate.id === use.figureId);
@@ -35,7 +43,9 @@ export function publishedFigureOf(use: Pick<DemandUseInput, 'kind' | 'figureId' 
     }
     case 'garden': {
       const figure = DEFAULT_DEMAND_FIGURES.garden.find((candidate) => candidate.id === use.figureId);
-      return figure ? { id: figure.id, label: figure.label, value: figure.depthMPerDay, source: figure.source, note: figure.note } : null;
+      return figure
+        ? { id: figure.id, label: figure.label, value: figure.depthMPerDay, source: figure.source, note: figure.note }
+        : null;
     }
     default:
       return null;
@@ -49,7 +59,11 @@ function deliveryOf(use: DemandUseInput): UseDelivery {
       return { kind: 'pattern', hourlyFractions: preset?.hourlyFractions ?? use.hourlyFractions ?? [] };
     }
     case 'delivery-hours':
-      return { kind: 'delivery-hours', hours: use.deliveryHours ?? Number.NaN, ...(use.startHour !== null ? { startHour: use.startHour } : {}) };
+      return {
+        kind: 'delivery-hours',
+        hours: use.deliveryHours ?? Number.NaN,
+        ...(use.startHour !== null ? { startHour: use.startHour } : {}),
+      };
     default:
       return { kind: 'peak-factor', peakFactor: use.peakFactor ?? Number.NaN };
   }
@@ -64,7 +78,14 @@ export function toWaterUse(use: DemandUseInput): WaterUse {
     case 'people':
       return { ...common, kind: 'people', count: use.count ?? Number.NaN, perPersonM3PerDay: own, figureId };
     case 'livestock':
-      return { ...common, kind: 'livestock', count: use.count ?? Number.NaN, season: use.season ?? 'summer', perHeadM3PerDay: own, figureId };
+      return {
+        ...common,
+        kind: 'livestock',
+        count: use.count ?? Number.NaN,
+        season: use.season ?? 'summer',
+        perHeadM3PerDay: own,
+        figureId,
+      };
     case 'garden':
       return { ...common, kind: 'garden', areaM2: use.areaM2 ?? Number.NaN, depthMPerDay: own, figureId };
     default:

@@ -21,7 +21,9 @@ export interface PumpOutletHead {
   efficiency: number;
   efficiencyBasis: 'table' | 'measured';
   efficiencySource: string;
-  /** Head the pump can build against a shut delivery line (fall + drive surge), m: rate the pipe near the pump for it. */
+  /**
+   * Head the pump can build against a shut delivery line (fall + drive surge), m: rate the pipe near the pump for it.
+   */
   peakHeadAtPumpM: number;
   /** The ram site's own delivery pipe rating as head, m (null when not known). */
   deliveryRatingHeadM: number | null;
@@ -29,7 +31,11 @@ export interface PumpOutletHead {
 }
 
 /** The line designer's view of a planned ram site. */
-export function pumpOutletHeadOf(site: RamSiteRecord, tank: { name: string } | null, plan: RamPlanResult): PumpOutletHead {
+export function pumpOutletHeadOf(
+  site: RamSiteRecord,
+  tank: { name: string } | null,
+  plan: RamPlanResult,
+): PumpOutletHead {
   return {
     ramSiteId: site.id,
     name: site.name,

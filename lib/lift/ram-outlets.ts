@@ -8,7 +8,7 @@ import type { LiftRecords } from './records';
  */
 export function ramOutletsOf(records: Pick<LiftRecords, 'ramSites' | 'tanks' | 'routes'>): PumpOutletHead[] {
   return records.ramSites.flatMap((site) => {
-    const tank = site.tankId ? records.tanks.find((candidate) => candidate.id === site.tankId) ?? null : null;
+    const tank = site.tankId ? (records.tanks.find((candidate) => candidate.id === site.tankId) ?? null) : null;
     const plan = planRamSite(site, { routes: records.routes, tankVolumeM3: tank?.volumeM3 ?? null });
     return plan.ok ? [pumpOutletHeadOf(site, tank, plan.value)] : [];
   });

@@ -19,7 +19,9 @@ export interface RamPlanContext {
 
 /** Delivery pipe length, m: the chosen route's surveyed length, else the length entered. */
 export function deliveryLengthM(site: RamSiteInput, routes: readonly RouteOption[]): number {
-  const route = site.deliveryPipe.routeId ? routes.find((candidate) => candidate.id === site.deliveryPipe.routeId) : undefined;
+  const route = site.deliveryPipe.routeId
+    ? routes.find((candidate) => candidate.id === site.deliveryPipe.routeId)
+    : undefined;
   return route?.lengthM ?? site.deliveryPipe.lengthM ?? 0;
 }
 
@@ -36,7 +38,11 @@ function deliveryPipeOf(site: RamSiteInput, lengthM: number): RamDeliveryPipe {
 }
 
 /** A stored or typed ram site as the planner's options (SI). */
-export function ramPlanOptions(site: RamSiteInput, context: RamPlanContext, overrides: { ignoreMeasuredEfficiency?: boolean } = {}): RamPlanOptions {
+export function ramPlanOptions(
+  site: RamSiteInput,
+  context: RamPlanContext,
+  overrides: { ignoreMeasuredEfficiency?: boolean } = {},
+): RamPlanOptions {
   const { drivePipe } = site;
   return {
     driveFlowM3s: site.driveFlowM3s,
@@ -52,7 +58,9 @@ export function ramPlanOptions(site: RamSiteInput, context: RamPlanContext, over
     ...(site.sizeClassId ? { sizeClassId: site.sizeClassId } : {}),
     pumpCount: site.pumpCount,
     efficiencyTable: RAM_EFFICIENCY_TABLES[site.efficiencyTableId],
-    ...(site.measuredEfficiency !== null && !overrides.ignoreMeasuredEfficiency ? { measuredEfficiency: site.measuredEfficiency } : {}),
+    ...(site.measuredEfficiency !== null && !overrides.ignoreMeasuredEfficiency
+      ? { measuredEfficiency: site.measuredEfficiency }
+      : {}),
     ...(context.tankVolumeM3 !== null ? { tankVolumeM3: context.tankVolumeM3 } : {}),
   };
 }

@@ -29,14 +29,19 @@ function toYieldReading(reading: YieldReadingRecord): YieldReading {
 }
 
 function choiceOf(source: WaterSourceRecord, readings: readonly YieldReadingRecord[]): DesignYieldChoice {
-  if (source.designYieldChoice === 'entered' && source.enteredYieldM3s !== null) return { kind: 'entered', flowM3s: source.enteredYieldM3s };
+  if (source.designYieldChoice === 'entered' && source.enteredYieldM3s !== null)
+    return { kind: 'entered', flowM3s: source.enteredYieldM3s };
   const index = readings.findIndex((reading) => reading.id === source.designReadingId);
   if (source.designYieldChoice === 'reading' && index >= 0) return { kind: 'reading', index };
   return { kind: 'lowest-recent-dry' };
 }
 
 /** Design yield of a source from its readings, and the warning when the design draws more. */
-export function sourceYieldView(source: WaterSourceRecord, allReadings: readonly YieldReadingRecord[], drawM3s: number): SourceYieldView {
+export function sourceYieldView(
+  source: WaterSourceRecord,
+  allReadings: readonly YieldReadingRecord[],
+  drawM3s: number,
+): SourceYieldView {
   const readings = allReadings
     .filter((reading) => reading.sourceId === source.id)
     .sort((a, b) => b.measuredOn.localeCompare(a.measuredOn));
@@ -45,10 +50,16 @@ export function sourceYieldView(source: WaterSourceRecord, allReadings: readonly
     const result = designYield({ readings: asYield, choice: choiceOf(source, readings) });
     return { ...result, readingId: result.readingIndex === null ? null : readings[result.readingIndex].id };
   });
-  const drawChecks = design.ok && drawM3s > 0 ? yieldDrawChecks({ designYieldM3s: design.value.designYieldM3s, designDrawM3s: drawM3s }) : [];
+  const drawChecks =
+    design.ok && drawM3s > 0
+      ? yieldDrawChecks({ designYieldM3s: design.value.designYieldM3s, designDrawM3s: drawM3s })
+      : [];
   return {
     source,
-    readings: readings.map((reading, index) => ({ ...reading, flowM3sMeasured: measuredFlowM3s(asYield[index].measurement) })),
+    readings: readings.map((reading, index) => ({
+      ...reading,
+      flowM3sMeasured: measuredFlowM3s(asYield[index].measurement),
+    })),
     design,
     drawM3s,
     drawChecks,

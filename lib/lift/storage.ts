@@ -42,12 +42,14 @@ export interface TankSizingView {
   checks: PlanCheck[];
 }
 
-const cumulative = (hourly: readonly number[]): number[] => hourly.reduce((sums, volume) => [...sums, sums[sums.length - 1] + volume], [0]);
+const cumulative = (hourly: readonly number[]): number[] =>
+  hourly.reduce((sums, volume) => [...sums, sums[sums.length - 1] + volume], [0]);
 
 function elevationOf(tank: TankRecord): TankSizingView['elevation'] {
   const required = tank.outlets.length > 0 ? requiredTankElevation({ outlets: tank.outlets }) : null;
   const lowestWaterLevelM = tank.baseElevationM === null ? null : tank.baseElevationM + tank.lowLevelM;
-  const shortfallM = required && lowestWaterLevelM !== null ? Math.max(0, required.minimumWaterLevelM - lowestWaterLevelM) : null;
+  const shortfallM =
+    required && lowestWaterLevelM !== null ? Math.max(0, required.minimumWaterLevelM - lowestWaterLevelM) : null;
   return { required, lowestWaterLevelM, shortfallM };
 }
 
@@ -77,12 +79,20 @@ function tankChecks(tank: TankRecord, view: Omit<TankSizingView, 'checks'>): Pla
 }
 
 /** Storage sizing of a tank against the project's daily demand. */
-export function tankSizingView(tank: TankRecord, supply: TankSupply, demandHourlyM3: readonly number[]): Outcome<TankSizingView> {
+export function tankSizingView(
+  tank: TankRecord,
+  supply: TankSupply,
+  demandHourlyM3: readonly number[],
+): Outcome<TankSizingView> {
   const flowM3s = supply.flowM3s;
   if (flowM3s === null || flowM3s <= 0) return { ok: false, error: supply.note, field: 'supplyKind' };
   return outcomeOf(() => {
     const supplyOptions = { flowM3s, hoursPerDay: tank.supplyHoursPerDay, startHour: tank.supplyStartHour };
-    const sizing = sizeStorage({ supply: supplyOptions, demand: { hourlyVolumeM3: demandHourlyM3 }, reserveDays: tank.reserveDays });
+    const sizing = sizeStorage({
+      supply: supplyOptions,
+      demand: { hourlyVolumeM3: demandHourlyM3 },
+      reserveDays: tank.reserveDays,
+    });
     const dailyDemandM3 = sizing.massCurve.dailyDemandM3;
     const supplyHourlyM3 = supplyHourlyVolumeM3(supplyOptions);
     const view = {

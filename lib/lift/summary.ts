@@ -2,7 +2,15 @@ import type { RamPlanResult } from '../../hydraulics/index';
 import { commissioningOutcome, type CommissioningView } from './commissioning';
 import { demandView, type DemandView } from './demand';
 import { deliveryLengthM, planRamSite, tablePlanOf } from './ram-plan';
-import type { CommissioningRecord, LiftRecords, Outcome, RamSiteRecord, RouteOption, SeasonalTaskRecord, TankRecord } from './records';
+import type {
+  CommissioningRecord,
+  LiftRecords,
+  Outcome,
+  RamSiteRecord,
+  RouteOption,
+  SeasonalTaskRecord,
+  TankRecord,
+} from './records';
 import { sourceYieldView, type SourceYieldView } from './source-yield';
 import { tankSizingView, type TankSizingView, type TankSupply } from './storage';
 
@@ -58,21 +66,45 @@ function ramSiteView(site: RamSiteRecord, records: LiftRecords): RamSiteView {
   };
 }
 
-function tankSupply(tank: TankRecord, ramSites: readonly RamSiteView[], sources: readonly SourceYieldView[]): TankSupply {
-  if (tank.supplyKind === 'entered') return { flowM3s: tank.supplyFlowM3s, basis: 'entered', note: 'Supply flow entered.' };
+function tankSupply(
+  tank: TankRecord,
+  ramSites: readonly RamSiteView[],
+  sources: readonly SourceYieldView[],
+): TankSupply {
+  if (tank.supplyKind === 'entered')
+    return { flowM3s: tank.supplyFlowM3s, basis: 'entered', note: 'Supply flow entered.' };
   if (tank.supplyKind === 'source') {
     const source = sources.find((view) => view.source.id === tank.supplySourceId);
     if (!source) return { flowM3s: null, basis: 'source', note: 'Choose the source that feeds this tank.' };
-    if (!source.design.ok) return { flowM3s: null, basis: 'source', note: `No design yield for ${source.source.name}: ${source.design.error}` };
-    return { flowM3s: source.design.value.designYieldM3s, basis: 'source', note: `Design yield of ${source.source.name}.` };
+    if (!source.design.ok)
+      return {
+        flowM3s: null,
+        basis: 'source',
+        note: `No design yield for ${source.source.name}: ${source.design.error}`,
+      };
+    return {
+      flowM3s: source.design.value.designYieldM3s,
+      basis: 'source',
+      note: `Design yield of ${source.source.name}.`,
+    };
   }
   const feeding = ramSites.filter((view) => view.site.tankId === tank.id);
   const planned = feeding.flatMap((view) => (view.plan.ok && view.plan.value.deliveredFlowM3s > 0 ? [view] : []));
   if (planned.length === 0) {
-    return { flowM3s: null, basis: 'ram-sites', note: feeding.length ? 'The ram sites that deliver here have no workable plan yet.' : 'No ram site delivers to this tank yet.' };
+    return {
+      flowM3s: null,
+      basis: 'ram-sites',
+      note: feeding.length
+        ? 'The ram sites that deliver here have no workable plan yet.'
+        : 'No ram site delivers to this tank yet.',
+    };
   }
   const flowM3s = planned.reduce((sum, view) => sum + (view.plan.ok ? view.plan.value.deliveredFlowM3s : 0), 0);
-  return { flowM3s, basis: 'ram-sites', note: `Planned delivery of ${planned.map((view) => view.site.name).join(', ')}.` };
+  return {
+    flowM3s,
+    basis: 'ram-sites',
+    note: `Planned delivery of ${planned.map((view) => view.site.name).join(', ')}.`,
+  };
 }
 
 /** Builds the lift summary; pure, so the page, the API and the tests compute the same thing. */
@@ -89,6 +121,8 @@ export function buildLiftSummary(records: LiftRecords): LiftSummary {
     const supply = tankSupply(tank, ramSites, sources);
     return { tank, supply, sizing: tankSizingView(tank, supply, demandHourlyM3) };
   });
-  const seasonalTasks = [...records.seasonalTasks].sort((a, b) => a.dueOn.localeCompare(b.dueOn) || a.title.localeCompare(b.title));
+  const seasonalTasks = [...records.seasonalTasks].sort(
+    (a, b) => a.dueOn.localeCompare(b.dueOn) || a.title.localeCompare(b.title),
+  );
   return { sources, ramSites, tanks, demand, seasonalTasks, routes: records.routes };
 }

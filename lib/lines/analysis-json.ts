@@ -9,6 +9,7 @@ export type LineAnalysisJson = Omit<LineAnalysis, 'points'> & { points: PointCol
 /** Converts an analysis for a JSON response. */
 export function analysisToJson(analysis: LineAnalysis): LineAnalysisJson {
   const points = {} as PointColumnsJson;
-  for (const key of Object.keys(analysis.points) as (keyof ProfilePoints)[]) points[key] = Array.from(analysis.points[key]);
+  for (const key of Object.keys(analysis.points) as (keyof ProfilePoints)[])
+    points[key] = Array.from(analysis.points[key]);
   return { ...analysis, points };
 }

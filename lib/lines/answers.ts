@@ -12,7 +12,9 @@ export interface LineAnswers {
   capacityM3s: number;
   /** The design flow is more than the line can carry. */
   overCapacity: boolean;
-  /** The flow is a schedule per piece (the network's): `flowM3s` is the flow at the start, dropping at each take-off. */
+  /**
+   * The flow is a schedule per piece (the network's): `flowM3s` is the flow at the start, dropping at each take-off.
+   */
   scheduled: boolean;
   /** The friction formula every figure was computed with. */
   frictionMethod: FrictionMethod | undefined;
@@ -32,8 +34,10 @@ type AnswerInput = ProfileChartData & {
 
 /** Which formula every figure on the page was computed with (profile-and-checks.md §5). */
 export const FRICTION_WORDS = {
-  'darcy-weisbach': 'Friction by Darcy-Weisbach with the Colebrook friction factor (roughness of each pipe); velocity head and entrance loss taken where water leaves a free surface.',
-  'hazen-williams': 'Friction by Hazen-Williams (C of each pipe); velocity head and entrance loss taken where water leaves a free surface.',
+  'darcy-weisbach':
+    'Friction by Darcy-Weisbach with the Colebrook friction factor (roughness of each pipe); velocity head and entrance loss taken where water leaves a free surface.',
+  'hazen-williams':
+    'Friction by Hazen-Williams (C of each pipe); velocity head and entrance loss taken where water leaves a free surface.',
 } as const;
 
 /** Picks the headline figures out of an analysis. */
@@ -60,12 +64,18 @@ export function lineAnswers(a: AnswerInput): LineAnswers {
     capacityM3s,
     // A reach's capacity is for one flow through the whole line; with a schedule the flow drops at each
     // take-off, so whether the water gets there is the end residual's answer, not this comparison.
-    overCapacity: !scheduled && (a.flowSource === 'design' || pieces.length > 0) && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
+    overCapacity:
+      !scheduled && (a.flowSource === 'design' || pieces.length > 0) && a.flowM3s > capacityM3s * (1 + 1e-6) + 1e-12,
     scheduled,
     frictionMethod: a.settings.frictionMethod,
     endResidualHeadM: a.end.residualHeadM,
     endTargetHeadM: a.end.targetResidualHeadM,
-    worstStatic: { headM: staticPressureHeadM[worst], chainageM: chainageM[worst], allowableHeadM: stretch.allowableHeadM, pipeLabel: stretch.pipe.label },
+    worstStatic: {
+      headM: staticPressureHeadM[worst],
+      chainageM: chainageM[worst],
+      allowableHeadM: stretch.allowableHeadM,
+      pipeLabel: stretch.pipe.label,
+    },
     lowestFlowing: { headM: pressureHeadM[lowest], chainageM: chainageM[lowest] },
     counts,
   };

@@ -9,7 +9,8 @@ export class DesignEditError extends Error {
   }
 }
 
-const byChainage = <T extends { chainageM: number }>(items: readonly T[]) => [...items].sort((a, b) => a.chainageM - b.chainageM);
+const byChainage = <T extends { chainageM: number }>(items: readonly T[]) =>
+  [...items].sort((a, b) => a.chainageM - b.chainageM);
 
 /** Splits the stretch that contains `chainageM` in two; both halves keep its pipe. */
 export function splitStretch(design: LineDesign, chainageM: number): LineDesign {
@@ -23,7 +24,8 @@ export function splitStretch(design: LineDesign, chainageM: number): LineDesign 
 
 /** Joins stretch `index` with the next one; the joined stretch keeps the first one's pipe. */
 export function mergeWithNext(design: LineDesign, index: number): LineDesign {
-  if (index < 0 || index >= design.stretches.length - 1) throw new DesignEditError('Only a stretch with another after it can be joined to it');
+  if (index < 0 || index >= design.stretches.length - 1)
+    throw new DesignEditError('Only a stretch with another after it can be joined to it');
   const stretches = [...design.stretches];
   stretches.splice(index, 2, { ...stretches[index], toM: stretches[index + 1].toM });
   return { ...design, stretches };
@@ -34,7 +36,8 @@ export function moveJoint(design: LineDesign, index: number, chainageM: number):
   const a = design.stretches[index];
   const b = design.stretches[index + 1];
   if (!a || !b) throw new DesignEditError('The last stretch ends where the line ends');
-  if (!(chainageM > a.fromM && chainageM < b.toM)) throw new DesignEditError(`The joint must lie between ${a.fromM} m and ${b.toM} m`);
+  if (!(chainageM > a.fromM && chainageM < b.toM))
+    throw new DesignEditError(`The joint must lie between ${a.fromM} m and ${b.toM} m`);
   const stretches = [...design.stretches];
   stretches.splice(index, 2, { ...a, toM: chainageM }, { ...b, fromM: chainageM });
   return { ...design, stretches };

@@ -3,7 +3,10 @@ import type { LineDesign } from '../validations/line-design';
 import type { LineSiteContext } from './ram-start';
 import { lineWinterPlan, winterWarnings, type LineWinterPlan } from './winter';
 
-/** What a line shows under "What to fix": the analysis's items and the winter findings, and the winter plan they came from. */
+/**
+ * What a line shows under "What to fix": the analysis's items and the winter findings, and the winter plan they came
+ * from.
+ */
 export interface LineFixItems {
   winter: LineWinterPlan;
   warnings: LineWarning[];
@@ -21,6 +24,14 @@ export function lineFixItems(
   context: Pick<LineSiteContext, 'frostDepthM' | 'overdueDrainDownOn'>,
   deeperCoverFixable: boolean,
 ): LineFixItems {
-  const plan = lineWinterPlan({ points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) }, winter, context.frostDepthM, deeperCoverFixable);
-  return { winter: plan, warnings: [...analysis.warnings, ...winterWarnings(plan, context.overdueDrainDownOn ?? null)] };
+  const plan = lineWinterPlan(
+    { points: analysis.points, airPointToleranceM: highLowToleranceM(analysis.settings) },
+    winter,
+    context.frostDepthM,
+    deeperCoverFixable,
+  );
+  return {
+    winter: plan,
+    warnings: [...analysis.warnings, ...winterWarnings(plan, context.overdueDrainDownOn ?? null)],
+  };
 }

@@ -22,11 +22,21 @@ export function record<T>(h: History<T>, value: T, label: string): History<T> {
 export function undo<T>(h: History<T>): History<T> {
   const previous = h.past[h.past.length - 1];
   if (!previous) return h;
-  return { past: h.past.slice(0, -1), present: previous.value, label: previous.label || null, future: [{ value: h.present, label: h.label ?? '' }, ...h.future] };
+  return {
+    past: h.past.slice(0, -1),
+    present: previous.value,
+    label: previous.label || null,
+    future: [{ value: h.present, label: h.label ?? '' }, ...h.future],
+  };
 }
 
 export function redo<T>(h: History<T>): History<T> {
   const next = h.future[0];
   if (!next) return h;
-  return { past: [...h.past, { value: h.present, label: h.label ?? '' }], present: next.value, label: next.label, future: h.future.slice(1) };
+  return {
+    past: [...h.past, { value: h.present, label: h.label ?? '' }],
+    present: next.value,
+    label: next.label,
+    future: h.future.slice(1),
+  };
 }

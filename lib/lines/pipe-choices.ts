@@ -43,7 +43,9 @@ export const PIPE_FAMILIES: readonly PipeFamily[] = (() => {
     family.classes.push({
       seriesId: series.id,
       label: classLabel(series.label),
-      pipes: [...series.pipes].sort((a, b) => a.insideDiameterM - b.insideDiameterM).map((p) => ({ id: p.id, size: p.nominalSize })),
+      pipes: [...series.pipes]
+        .sort((a, b) => a.insideDiameterM - b.insideDiameterM)
+        .map((p) => ({ id: p.id, size: p.nominalSize })),
     });
     families.set(id, family);
   }
@@ -53,7 +55,8 @@ export const PIPE_FAMILIES: readonly PipeFamily[] = (() => {
 /** Where a catalogue pipe sits in the pickers, or null for a custom pipe. */
 export function pipeChoiceOf(pipeId: string): { familyId: string; seriesId: string } | null {
   for (const family of PIPE_FAMILIES) {
-    for (const c of family.classes) if (c.pipes.some((p) => p.id === pipeId)) return { familyId: family.id, seriesId: c.seriesId };
+    for (const c of family.classes)
+      if (c.pipes.some((p) => p.id === pipeId)) return { familyId: family.id, seriesId: c.seriesId };
   }
   return null;
 }
@@ -63,7 +66,8 @@ export function closestInSeries(seriesId: string, current: PipeSpec | undefined)
   const series = PIPE_SERIES.find((s) => s.id === seriesId);
   if (!series || series.pipes.length === 0) throw new Error(`unknown pipe series ${seriesId}`);
   const bore = current?.insideDiameterM ?? 0.05;
-  return [...series.pipes].sort((a, b) => Math.abs(a.insideDiameterM - bore) - Math.abs(b.insideDiameterM - bore))[0].id;
+  return [...series.pipes].sort((a, b) => Math.abs(a.insideDiameterM - bore) - Math.abs(b.insideDiameterM - bore))[0]
+    .id;
 }
 
 /**
@@ -81,7 +85,9 @@ export function pipeForFamily(familyId: string, current: PipeSpec | undefined): 
   // Classes that offer (about) that size: bores of one nominal size differ by wall thickness only.
   const offering = nearest.filter((p) => Math.abs(p.insideDiameterM - bore) <= best + 0.1 * bore);
   const rating = current?.pressureRatingPa ?? 0;
-  const atOrAbove = offering.filter((p) => p.pressureRatingPa >= rating).sort((a, b) => a.pressureRatingPa - b.pressureRatingPa);
+  const atOrAbove = offering
+    .filter((p) => p.pressureRatingPa >= rating)
+    .sort((a, b) => a.pressureRatingPa - b.pressureRatingPa);
   const pick = atOrAbove[0] ?? [...offering].sort((a, b) => b.pressureRatingPa - a.pressureRatingPa)[0];
   return pick.id;
 }

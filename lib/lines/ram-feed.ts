@@ -23,7 +23,12 @@ interface AnalysisAtPump {
 }
 
 /** The ram figures for a line started at a ram site, or null for any other start (or a ram that cannot be read). */
-export function ramFeedAnswers(design: LineDesign, context: LineSiteContext, analysis: AnalysisAtPump, lineStartGroundM: number): RamFeedAnswers | null {
+export function ramFeedAnswers(
+  design: LineDesign,
+  context: LineSiteContext,
+  analysis: AnalysisAtPump,
+  lineStartGroundM: number,
+): RamFeedAnswers | null {
   let ram: RamLineStart | null;
   try {
     ram = ramStartOf(design.start, context, lineStartGroundM);

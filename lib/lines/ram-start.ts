@@ -51,7 +51,10 @@ export function lineStartFromRam(outlet: PumpOutletHead, lineStartGroundM: numbe
   };
 }
 
-/** The ram feeding a design, or null when the line is not fed by one. Throws when the ram site is gone or cannot be planned. */
+/**
+ * The ram feeding a design, or null when the line is not fed by one. Throws when the ram site is gone or cannot be
+ * planned.
+ */
 export function ramStartOf(
   start: LineStart | { kind: 'ram-site'; ramSiteId: string },
   context: LineSiteContext,
@@ -71,6 +74,10 @@ export function ramStartOf(
 /** The core's flow for a design: the ram's delivered flow when the design asks for it. */
 export function flowFromRam(flow: LineFlow | { kind: 'pump-delivery' }, ram: RamLineStart | null): LineFlow {
   if (flow.kind !== 'pump-delivery') return flow;
-  if (!ram) throw new HydraulicsInputError('flow.kind', 'the flow can come from the ram only when the line starts at a ram pump outlet');
+  if (!ram)
+    throw new HydraulicsInputError(
+      'flow.kind',
+      'the flow can come from the ram only when the line starts at a ram pump outlet',
+    );
   return { kind: 'design', flowM3s: ram.outlet.deliveredFlowM3s };
 }

@@ -9,7 +9,14 @@ import {
   type WarningSeverity,
   type WarningValues,
 } from '../../hydraulics/index';
-import { formatHeadPressure, formatNumber, formatQuantity, formatStation, type DisplayUnits, type UnitSystem } from '../units/index';
+import {
+  formatHeadPressure,
+  formatNumber,
+  formatQuantity,
+  formatStation,
+  type DisplayUnits,
+  type UnitSystem,
+} from '../units/index';
 
 /** Runnel's short titles for the core's warning codes. */
 export const WARNING_TITLES: Record<WarningCode, string> = {
@@ -75,7 +82,8 @@ function figures(u: DisplayUnits) {
   const n = (v: number | undefined) => v ?? Number.NaN;
   return {
     ch: (c: number | undefined) => `ch. ${formatQuantity('chainage', n(c), s)}`,
-    range: (a: number | undefined, b: number | undefined) => `ch. ${formatQuantity('chainage', n(a), s)} to ${formatQuantity('chainage', n(b), s)}`,
+    range: (a: number | undefined, b: number | undefined) =>
+      `ch. ${formatQuantity('chainage', n(a), s)} to ${formatQuantity('chainage', n(b), s)}`,
     head: (h: number | undefined) => formatHeadPressure(n(h), s),
     length: (h: number | undefined) => formatQuantity('head', n(h), s),
     depth: (d: number | undefined) => formatQuantity('depth', n(d), s),
@@ -133,8 +141,10 @@ const WORDING: Record<WarningCode, Wording> = {
     `At the design flow of ${f.flow(v.flowM3s)} the outlet has ${f.head(v.headM)} of pressure, below the ${f.head(v.limitHeadM)} it needs: friction and fittings use up too much of the available head.`,
     v.toPipeLabel
       ? `Change stretch ${(v.stretchIndex ?? 0) + 1} (${f.range(v.fromM, v.toM)}) from ${v.pipeLabel} to ${v.toPipeLabel}: the outlet then has ${f.head(v.fixedHeadM)}${
-        (v.alsoClears ?? []).length > 0 ? `, and the ${(v.alsoClears ?? []).map((c) => WARNING_TITLES[c].toLowerCase()).join(', ')} this flow causes clear with it` : ''
-      }.`
+          (v.alsoClears ?? []).length > 0
+            ? `, and the ${(v.alsoClears ?? []).map((c) => WARNING_TITLES[c].toLowerCase()).join(', ')} this flow causes clear with it`
+            : ''
+        }.`
       : `No single pipe change is enough: use larger pipe over several stretches, lower the design flow (the line carries ${f.flow(v.capacityM3s)} by gravity to this outlet), or set the outlet lower.`,
   ],
   'no-gravity-flow': (v, f) => [
@@ -173,21 +183,22 @@ const WORDING: Record<WarningCode, Wording> = {
     `The drain-down task due on ${v.dueOn} is not done, and this line needs draining before frost: water left in it can freeze.`,
     'Open the drains at the low points, then tick the task done on the lift page.',
   ],
-  'device-misplaced': (v, f) => v.deviceKind === 'air-release-valve'
-    ? [
-      `The air-release valve at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a low point of the pipe: air rises to the summits, so it vents nothing, and it may draw dirty water or air in.`,
-      `Move it to a summit; fit a washout here at ${f.ch(v.otherChainageM)} instead.`,
-    ]
-    : [
-      `The washout at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a high point of the pipe: silt settles at the sags, so it drains and flushes nothing.`,
-      `Move it to a sag; fit an air-release valve here at ${f.ch(v.otherChainageM)} instead.`,
-    ],
+  'device-misplaced': (v, f) =>
+    v.deviceKind === 'air-release-valve'
+      ? [
+          `The air-release valve at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a low point of the pipe: air rises to the summits, so it vents nothing, and it may draw dirty water or air in.`,
+          `Move it to a summit; fit a washout here at ${f.ch(v.otherChainageM)} instead.`,
+        ]
+      : [
+          `The washout at ${f.ch(v.chainageM)} (${f.level(v.elevationM)}) stands at a high point of the pipe: silt settles at the sags, so it drains and flushes nothing.`,
+          `Move it to a sag; fit an air-release valve here at ${f.ch(v.otherChainageM)} instead.`,
+        ],
   'site-altitude-assumed': (v, f) => [
-  `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
-    v.headM !== undefined ? ` where the line has suction (down to ${f.length(v.headM)} at ${f.ch(v.chainageM)})` : ''
-  }.`,
-  "Enter the site's altitude above sea level (from a map or a phone) under Settings, Site altitude.",
-],
+    `The heights of this route are on an assumed datum (a level book or hose level hung on a chosen start height), so the site altitude of ${f.level(v.siteAltitudeM)} taken from its highest ground is a guess, and the siphon and vapour limits that depend on it may be wrong${
+      v.headM !== undefined ? ` where the line has suction (down to ${f.length(v.headM)} at ${f.ch(v.chainageM)})` : ''
+    }.`,
+    "Enter the site's altitude above sea level (from a map or a phone) under Settings, Site altitude.",
+  ],
   'velocity-high': (v, f) => [
     `Water moves at ${f.speed(v.velocityMs)} in ${v.pipeLabel} from ${f.range(v.fromM, v.toM)}, above ${f.speed(v.limitVelocityMs)}: suspended sand wears the pipe and fittings, and a sudden stop gives a larger pressure surge.`,
     v.toPipeLabel ? `Use the next size up, ${v.toPipeLabel}.` : 'Use a larger pipe for this stretch.',
@@ -195,7 +206,13 @@ const WORDING: Record<WarningCode, Wording> = {
 };
 
 const PRESSURE_CODES: ReadonlySet<WarningCode> = new Set<WarningCode>([
-  'negative-pressure', 'true-siphon', 'siphon-limit', 'vapour-limit', 'static-over-rating', 'surge-over-rating', 'residual-below-target',
+  'negative-pressure',
+  'true-siphon',
+  'siphon-limit',
+  'vapour-limit',
+  'static-over-rating',
+  'surge-over-rating',
+  'residual-below-target',
 ]);
 
 /**
@@ -204,7 +221,11 @@ const PRESSURE_CODES: ReadonlySet<WarningCode> = new Set<WarningCode>([
  */
 export function warningText(w: LineWarning, u: DisplayUnits): WarningText {
   const [message, fix] = WORDING[w.code](w.values, figures(u), w);
-  return { title: WARNING_TITLES[w.code], message: PRESSURE_CODES.has(w.code) ? `${message} ${PRESSURE_CAUTION}` : message, fix };
+  return {
+    title: WARNING_TITLES[w.code],
+    message: PRESSURE_CODES.has(w.code) ? `${message} ${PRESSURE_CAUTION}` : message,
+    fix,
+  };
 }
 
 /** Every warning as CSV rows (papaparse), worded as on screen, with the place in the project's units. */
@@ -224,7 +245,10 @@ export function warningsCsv(warnings: readonly LineWarning[], u: DisplayUnits): 
  */
 export function gpsWarningText(warning: GpsHeightWarning, system: UnitSystem): string {
   const list = warning.affected
-    .map((a) => `${a.label} (${formatQuantity('length', a.elevationDifferenceM, system)}${a.withinGpsErrorBand ? ', smaller than the GPS error itself' : ''})`)
+    .map(
+      (a) =>
+        `${a.label} (${formatQuantity('length', a.elevationDifferenceM, system)}${a.withinGpsErrorBand ? ', smaller than the GPS error itself' : ''})`,
+    )
     .join('; ');
   return (
     `Heights from a consumer GPS can be wrong by ${formatQuantity('length', warning.verticalErrorM, system, 0)} or more, and these decisions depend on them: ${list}. ` +

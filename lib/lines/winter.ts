@@ -9,7 +9,10 @@ export type WinterTreatmentChoice = NonNullable<LineDesign['winter']>['treatment
 /** The pipe profile of an analysed line, as the winter plan reads it. */
 export interface WinterProfileInput {
   points: { chainageM: ArrayLike<number>; groundElevationM: ArrayLike<number>; pipeElevationM: ArrayLike<number> };
-  /** Rise or fall that counts as a high or low point, m (`highLowToleranceM` of the analysis, so drains sit where the washout check finds sags). */
+  /**
+   * Rise or fall that counts as a high or low point, m (`highLowToleranceM` of the analysis, so drains sit where the
+   * washout check finds sags).
+   */
   airPointToleranceM: number;
 }
 
@@ -35,7 +38,8 @@ function lowEndsOf(chainageM: ArrayLike<number>, pipeM: ArrayLike<number>): LowP
   const last = chainageM.length - 1;
   const ends: LowPoint[] = [];
   if (last >= 1 && pipeM[0] < pipeM[1]) ends.push({ index: 0, chainageM: chainageM[0], elevationM: pipeM[0] });
-  if (last >= 1 && pipeM[last] < pipeM[last - 1]) ends.push({ index: last, chainageM: chainageM[last], elevationM: pipeM[last] });
+  if (last >= 1 && pipeM[last] < pipeM[last - 1])
+    ends.push({ index: last, chainageM: chainageM[last], elevationM: pipeM[last] });
   return ends;
 }
 
@@ -54,15 +58,21 @@ export function lineWinterPlan(
   const { chainageM, groundElevationM, pipeElevationM } = profile.points;
   let shallowest = 0;
   for (let i = 1; i < chainageM.length; i++) {
-    if (groundElevationM[i] - pipeElevationM[i] < groundElevationM[shallowest] - pipeElevationM[shallowest]) shallowest = i;
+    if (groundElevationM[i] - pipeElevationM[i] < groundElevationM[shallowest] - pipeElevationM[shallowest])
+      shallowest = i;
   }
   const shallowestCoverM = groundElevationM[shallowest] - pipeElevationM[shallowest];
   const treatment: WinterTreatmentChoice = winter?.treatment ?? 'buried-below-frost';
   const drained = treatment === 'drained-for-winter';
   const tooShallow = frostDepthM !== null && shallowestCoverM <= frostDepthM;
-  const drainPoints = findLowPoints({ chainageM: Array.from(chainageM), elevationM: Array.from(pipeElevationM), prominenceM: profile.airPointToleranceM });
+  const drainPoints = findLowPoints({
+    chainageM: Array.from(chainageM),
+    elevationM: Array.from(pipeElevationM),
+    prominenceM: profile.airPointToleranceM,
+  });
   const fixes: WinterFix[] = [{ kind: 'drain-for-winter' }];
-  if (deeperCoverFixable && frostDepthM !== null) fixes.push({ kind: 'deeper-cover', coverM: Math.round((frostDepthM + FROST_COVER_MARGIN_M) * 100) / 100 });
+  if (deeperCoverFixable && frostDepthM !== null)
+    fixes.push({ kind: 'deeper-cover', coverM: Math.round((frostDepthM + FROST_COVER_MARGIN_M) * 100) / 100 });
   return {
     treatment,
     chosen: winter !== undefined,
@@ -71,9 +81,14 @@ export function lineWinterPlan(
     shallowestCoverAtM: chainageM[shallowest],
     drainPoints,
     lowEnds: lowEndsOf(chainageM, pipeElevationM),
-    warning: tooShallow && !drained
-      ? { message: 'The pipe lies no deeper than frost reaches: water left in it can freeze and split the pipe or its fittings.', fixes }
-      : null,
+    warning:
+      tooShallow && !drained
+        ? {
+            message:
+              'The pipe lies no deeper than frost reaches: water left in it can freeze and split the pipe or its fittings.',
+            fixes,
+          }
+        : null,
   };
 }
 
@@ -85,8 +100,16 @@ export interface DrainPoint {
 
 /** Every place a drained line is opened, by chainage: a low start, the low points, a low end. */
 export function drainPointsOf(plan: Pick<LineWinterPlan, 'drainPoints' | 'lowEnds'>): DrainPoint[] {
-  const ends = plan.lowEnds.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: p.index === 0 ? 'low start' : 'low end' }));
-  const lows = plan.drainPoints.map((p): DrainPoint => ({ chainageM: p.chainageM, elevationM: p.elevationM, place: 'low point' }));
+  const ends = plan.lowEnds.map((p): DrainPoint => ({
+    chainageM: p.chainageM,
+    elevationM: p.elevationM,
+    place: p.index === 0 ? 'low start' : 'low end',
+  }));
+  const lows = plan.drainPoints.map((p): DrainPoint => ({
+    chainageM: p.chainageM,
+    elevationM: p.elevationM,
+    place: 'low point',
+  }));
   return [...ends, ...lows].sort((a, b) => a.chainageM - b.chainageM);
 }
 
@@ -102,26 +125,40 @@ export function winterWarnings(plan: LineWinterPlan, overdueDrainDownOn: string 
   const at = { chainageM: plan.shallowestCoverAtM };
   if (plan.warning) {
     out.push({
-      code: 'winter-frost', severity: 'warning', at,
-      values: { chainageM: plan.shallowestCoverAtM, coverM: plan.shallowestCoverM, frostDepthM: plan.frostDepthM ?? undefined },
-      message: plan.warning.message, suggestedFix: 'Drain the line for winter, or lay it deeper (Winter panel).', fixes: [],
+      code: 'winter-frost',
+      severity: 'warning',
+      at,
+      values: {
+        chainageM: plan.shallowestCoverAtM,
+        coverM: plan.shallowestCoverM,
+        frostDepthM: plan.frostDepthM ?? undefined,
+      },
+      message: plan.warning.message,
+      suggestedFix: 'Drain the line for winter, or lay it deeper (Winter panel).',
+      fixes: [],
     });
   }
   if (plan.treatment === 'buried-below-frost' && plan.shallowestCoverM <= 1e-9) {
     out.push({
-      code: 'winter-cover-contradiction', severity: 'warning', at,
+      code: 'winter-cover-contradiction',
+      severity: 'warning',
+      at,
       values: { chainageM: plan.shallowestCoverAtM, coverM: plan.shallowestCoverM },
       message: 'The line is taken as buried below frost depth, but the pipe lies on the surface (no cover) here.',
-      suggestedFix: 'Give the stations their cover, or choose to drain the line for winter.', fixes: [],
+      suggestedFix: 'Give the stations their cover, or choose to drain the line for winter.',
+      fixes: [],
     });
   }
   const needsDraining = plan.treatment === 'drained-for-winter' || plan.warning !== null;
   if (overdueDrainDownOn && needsDraining) {
     out.push({
-      code: 'drain-down-overdue', severity: 'warning', at: { chainageM: plan.drainPoints[0]?.chainageM ?? plan.shallowestCoverAtM },
+      code: 'drain-down-overdue',
+      severity: 'warning',
+      at: { chainageM: plan.drainPoints[0]?.chainageM ?? plan.shallowestCoverAtM },
       values: { dueOn: overdueDrainDownOn },
       message: `The drain-down task due on ${overdueDrainDownOn} is not done: water left in this line can freeze.`,
-      suggestedFix: 'Open the drains at the low points and tick the task done on the lift page.', fixes: [],
+      suggestedFix: 'Open the drains at the low points and tick the task done on the lift page.',
+      fixes: [],
     });
   }
   return out;

@@ -1,7 +1,11 @@
 import type { LinkPieceResult } from './run-result';
 
 /** A stretch of one pipe along a line, SI chainage. */
-export interface ChosenStretch { fromM: number; toM: number; pipe: string }
+export interface ChosenStretch {
+  fromM: number;
+  toM: number;
+  pipe: string;
+}
 
 /** Chainages closer than this are the same point (the pieces were cut from the line's own stations). */
 const SAME_CHAINAGE_M = 1e-6;
@@ -11,7 +15,10 @@ const SAME_CHAINAGE_M = 1e-6;
  * with the same pipe joined into one stretch. Returns null when the pieces do not cover the line's
  * window end to end (the line changed since it was sized).
  */
-export function stretchesFromPieces(pieces: readonly LinkPieceResult[], window: { fromM: number; toM: number }): ChosenStretch[] | null {
+export function stretchesFromPieces(
+  pieces: readonly LinkPieceResult[],
+  window: { fromM: number; toM: number },
+): ChosenStretch[] | null {
   const sorted = [...pieces].sort((a, b) => (a.fromChainageM ?? 0) - (b.fromChainageM ?? 0));
   if (sorted.length === 0) return null;
   const stretches: ChosenStretch[] = [];

@@ -30,5 +30,7 @@ export interface NetworkContext {
   prices: { pipeId: string; costPerM: number }[];
 }
 
-/** What a network computation reads beyond the records, the lines and the lift records: a revision freezes exactly this. */
+/**
+ * What a network computation reads beyond the records, the lines and the lift records: a revision freezes exactly this.
+ */
 export type NetworkBasis = Pick<NetworkContext, 'ramOutlets' | 'sourceYieldsM3s' | 'prices'>;

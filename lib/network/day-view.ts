@@ -53,21 +53,34 @@ export function dayViewModel(view: NetworkView, day: DayRunResult): DayViewModel
     tanks: day.tanks.map((tank) => {
       const depthsM = tank.levelsM.map((level) => level - tank.floorM);
       return {
-        nodeId: tank.nodeId, name: nameOf(tank.nodeId), depthsM,
+        nodeId: tank.nodeId,
+        name: nameOf(tank.nodeId),
+        depthsM,
         overflowDepthM: tank.overflowM - tank.floorM,
-        lowestDepthM: Math.min(...depthsM), highestDepthM: Math.max(...depthsM),
+        lowestDepthM: Math.min(...depthsM),
+        highestDepthM: Math.max(...depthsM),
         storageNeededM3: tank.storageNeededM3,
       };
     }),
     outlets: (day.outlets ?? []).map((outlet) => ({
-      nodeId: outlet.nodeId, name: nameOf(outlet.nodeId), pressureHeadsM: outlet.pressureHeadsM,
-      wantedM: outlet.minPressureHeadM, lowest: outlet.lowest,
-      short: outlet.lowest !== null && outlet.minPressureHeadM !== null && outlet.lowest.pressureHeadM < outlet.minPressureHeadM - HEAD_TOLERANCE_M,
+      nodeId: outlet.nodeId,
+      name: nameOf(outlet.nodeId),
+      pressureHeadsM: outlet.pressureHeadsM,
+      wantedM: outlet.minPressureHeadM,
+      lowest: outlet.lowest,
+      short:
+        outlet.lowest !== null &&
+        outlet.minPressureHeadM !== null &&
+        outlet.lowest.pressureHeadM < outlet.minPressureHeadM - HEAD_TOLERANCE_M,
     })),
     sources: day.sources.map((source) => {
       const highestDrawM3s = Math.max(0, ...source.drawM3s);
       return {
-        nodeId: source.nodeId, name: nameOf(source.nodeId), drawM3s: source.drawM3s, yieldM3s: source.yieldM3s, highestDrawM3s,
+        nodeId: source.nodeId,
+        name: nameOf(source.nodeId),
+        drawM3s: source.drawM3s,
+        yieldM3s: source.yieldM3s,
+        highestDrawM3s,
         overYield: source.yieldM3s !== null && highestDrawM3s > source.yieldM3s + FLOW_TOLERANCE_M3S,
       };
     }),

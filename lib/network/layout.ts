@@ -49,10 +49,17 @@ export function layoutNetwork(view: NetworkView): NetworkLayout {
   const layout: NetworkLayout = { nodes: {}, courses: {} };
   const routeOf = new Map<string, { chainageM: number; x: number; y: number }[]>();
   for (const line of view.lines) {
-    const points = project ? line.plan.flatMap((p) => { const xy = project(p); return xy ? [{ chainageM: p.chainageM, ...xy }] : []; }) : [];
+    const points = project
+      ? line.plan.flatMap((p) => {
+          const xy = project(p);
+          return xy ? [{ chainageM: p.chainageM, ...xy }] : [];
+        })
+      : [];
     if (points.length >= 2) routeOf.set(line.id, points);
   }
-  for (const node of nodes) if (node.eastM !== null && node.northM !== null) layout.nodes[node.id] = { x: node.eastM, y: node.northM, from: 'placed' };
+  for (const node of nodes)
+    if (node.eastM !== null && node.northM !== null)
+      layout.nodes[node.id] = { x: node.eastM, y: node.northM, from: 'placed' };
   for (const link of links) {
     const route = link.lineId ? routeOf.get(link.lineId) : undefined;
     if (!route) continue;
@@ -61,7 +68,8 @@ export function layoutNetwork(view: NetworkView): NetworkLayout {
   }
   for (const node of nodes) {
     const route = node.lineId ? routeOf.get(node.lineId) : undefined;
-    if (route && node.chainageM !== null) layout.nodes[node.id] ??= { ...pointAt(route, node.chainageM), from: 'route' };
+    if (route && node.chainageM !== null)
+      layout.nodes[node.id] ??= { ...pointAt(route, node.chainageM), from: 'route' };
   }
 
   // Automatic: breadth-first from the water sources (or the first node), one column per step.
@@ -79,7 +87,11 @@ export function layoutNetwork(view: NetworkView): NetworkLayout {
   queue.forEach((id) => depth.set(id, 0));
   while (queue.length) {
     const id = queue.shift()!;
-    for (const next of neighbours.get(id) ?? []) if (!depth.has(next)) { depth.set(next, depth.get(id)! + 1); queue.push(next); }
+    for (const next of neighbours.get(id) ?? [])
+      if (!depth.has(next)) {
+        depth.set(next, depth.get(id)! + 1);
+        queue.push(next);
+      }
   }
   const rows = new Map<number, number>();
   for (const node of nodes) {
@@ -89,12 +101,18 @@ export function layoutNetwork(view: NetworkView): NetworkLayout {
     const row = rows.get(column) ?? 0;
     rows.set(column, row + 1);
     layout.nodes[node.id] = neighbour
-      ? { x: neighbour.x + AUTO_STEP_M * 0.6 * (row + 1), y: neighbour.y - AUTO_STEP_M * 0.6 * (row + 1), from: 'automatic' }
+      ? {
+          x: neighbour.x + AUTO_STEP_M * 0.6 * (row + 1),
+          y: neighbour.y - AUTO_STEP_M * 0.6 * (row + 1),
+          from: 'automatic',
+        }
       : { x: left + column * AUTO_STEP_M, y: bottom - row * AUTO_STEP_M, from: 'automatic' };
   }
   for (const link of links) {
     const route = link.lineId ? routeOf.get(link.lineId) : undefined;
-    layout.courses[link.id] = route ? route.map(({ x, y }) => ({ x, y })) : [layout.nodes[link.fromNodeId], layout.nodes[link.toNodeId]].filter(Boolean).map(({ x, y }) => ({ x, y }));
+    layout.courses[link.id] = route
+      ? route.map(({ x, y }) => ({ x, y }))
+      : [layout.nodes[link.fromNodeId], layout.nodes[link.toNodeId]].filter(Boolean).map(({ x, y }) => ({ x, y }));
   }
   return layout;
 }

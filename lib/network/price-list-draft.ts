@@ -16,7 +16,12 @@ export interface PriceRowDraft {
  * (A module-wide counter differs between the two and once gave a new row the id of the first.)
  */
 export function draftRowsOf(items: readonly PriceListItemRecord[]): PriceRowDraft[] {
-  return items.map((item, index) => ({ key: `saved-${index}`, pipeId: item.pipeId, costPerM: item.costPerM, notes: item.notes }));
+  return items.map((item, index) => ({
+    key: `saved-${index}`,
+    pipeId: item.pipeId,
+    costPerM: item.costPerM,
+    notes: item.notes,
+  }));
 }
 
 /** A new row for the first catalogue pipe not priced yet (a designer then picks the one they mean). */
@@ -27,8 +32,16 @@ export function newPriceRow(rows: readonly PriceRowDraft[], serial: number): Pri
 }
 
 /** What the API takes (a cost not typed stays out, so the schema names that row's field). */
-export function priceListCandidate(rows: readonly PriceRowDraft[]): { items: Partial<PriceListInput['items'][number]>[] } {
-  return { items: rows.map((row) => ({ pipeId: row.pipeId, ...(row.costPerM === undefined ? {} : { costPerM: row.costPerM }), notes: row.notes })) };
+export function priceListCandidate(rows: readonly PriceRowDraft[]): {
+  items: Partial<PriceListInput['items'][number]>[];
+} {
+  return {
+    items: rows.map((row) => ({
+      pipeId: row.pipeId,
+      ...(row.costPerM === undefined ? {} : { costPerM: row.costPerM }),
+      notes: row.notes,
+    })),
+  };
 }
 
 export const pipeLabelOf = (pipeId: string) => findPipe(pipeId)?.label ?? pipeId;

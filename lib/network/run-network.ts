@@ -1,10 +1,21 @@
-import { findPipe, runNetworkDay, sizeNetwork, sizeTankStorage, solveNetwork, tankFillNodeId, type SizingCandidate } from '../../hydraulics/index';
+import {
+  findPipe,
+  runNetworkDay,
+  sizeNetwork,
+  sizeTankStorage,
+  solveNetwork,
+  tankFillNodeId,
+  type SizingCandidate,
+} from '../../hydraulics/index';
 import type { NetworkContext } from './context';
 import { buildNetworkInput, type BuiltNetwork } from './network-input';
 import type { DayRunResult, SizeRunResult, SolveRunResult, TankStorageView } from './run-result';
 import { explainCoreError, recordWarning, solveRunResult } from './solve-result';
 
-/** One steady solve of the network at the peak hour (every outlet drawing its peak, tanks at their lowest working level). */
+/**
+ * One steady solve of the network at the peak hour (every outlet drawing its peak, tanks at their lowest working
+ * level).
+ */
 export function solveNetworkRun(context: NetworkContext): SolveRunResult {
   const built = buildNetworkInput(context);
   try {
@@ -18,16 +29,32 @@ export function solveNetworkRun(context: NetworkContext): SolveRunResult {
 export function sizingCandidates(context: NetworkContext): SizingCandidate[] {
   return context.prices.flatMap(({ pipeId, costPerM }) => {
     const pipe = findPipe(pipeId);
-    return pipe ? [{ pipe: { id: pipe.id, insideDiameterM: pipe.insideDiameterM, hazenWilliamsC: pipe.hazenWilliamsC, roughnessM: pipe.roughnessM, pressureRatingPa: pipe.pressureRatingPa, label: pipe.label }, costPerM }] : [];
+    return pipe
+      ? [
+          {
+            pipe: {
+              id: pipe.id,
+              insideDiameterM: pipe.insideDiameterM,
+              hazenWilliamsC: pipe.hazenWilliamsC,
+              roughnessM: pipe.roughnessM,
+              pressureRatingPa: pipe.pressureRatingPa,
+              label: pipe.label,
+            },
+            costPerM,
+          },
+        ]
+      : [];
   });
 }
 
 /** The built network with each link's pipe replaced by the one sizing chose. */
 function withChosenPipes(built: BuiltNetwork, pipeByLink: Record<string, string>): BuiltNetwork {
-  const pieces = Object.fromEntries(Object.entries(built.pieces).map(([coreId, piece]) => {
-    const chosen = pipeByLink[coreId] ? findPipe(pipeByLink[coreId]) : undefined;
-    return [coreId, chosen ? { ...piece, pipeId: chosen.id, pipeLabel: chosen.label } : piece];
-  }));
+  const pieces = Object.fromEntries(
+    Object.entries(built.pieces).map(([coreId, piece]) => {
+      const chosen = pipeByLink[coreId] ? findPipe(pipeByLink[coreId]) : undefined;
+      return [coreId, chosen ? { ...piece, pipeId: chosen.id, pipeLabel: chosen.label } : piece];
+    }),
+  );
   const links = built.input.links.map((link) => {
     const chosen = pipeByLink[link.id] ? findPipe(pipeByLink[link.id]) : undefined;
     return chosen ? { ...link, pipe: chosen } : link;
@@ -39,17 +66,39 @@ function withChosenPipes(built: BuiltNetwork, pipeByLink: Record<string, string>
  * Least-cost sizes from the team's price list: every outlet its residual at the peak hour, velocities
  * in band, static pressure within each class's rating (the core's sizing), compared with one size everywhere.
  */
-export async function sizeNetworkRun(context: NetworkContext, options: { onePipePerLink: boolean; timeLimitS: number }): Promise<SizeRunResult> {
+export async function sizeNetworkRun(
+  context: NetworkContext,
+  options: { onePipePerLink: boolean; timeLimitS: number },
+): Promise<SizeRunResult> {
   const built = buildNetworkInput(context);
   const candidates = sizingCandidates(context);
   if (candidates.length === 0) {
-    return { kind: 'size', feasible: false, cost: null, uniform: null, solution: null, warnings: [{ code: 'network.no-prices', severity: 'warning', message: "The team's price list is empty: price some pipes first" }] };
+    return {
+      kind: 'size',
+      feasible: false,
+      cost: null,
+      uniform: null,
+      solution: null,
+      warnings: [
+        {
+          code: 'network.no-prices',
+          severity: 'warning',
+          message: "The team's price list is empty: price some pipes first",
+        },
+      ],
+    };
   }
   const tankFillFlowsM3s = tankFillFlows(context, built);
-  for (const nodeId of Object.keys(tankFillFlowsM3s)) built.names[tankFillNodeId(nodeId)] = `${built.names[nodeId] ?? nodeId} inlet while filling`;
+  for (const nodeId of Object.keys(tankFillFlowsM3s))
+    built.names[tankFillNodeId(nodeId)] = `${built.names[nodeId] ?? nodeId} inlet while filling`;
   let result;
   try {
-    result = await sizeNetwork(built.input, { candidates, onePipePerLink: options.onePipePerLink, timeLimitS: options.timeLimitS, tankFillFlowsM3s });
+    result = await sizeNetwork(built.input, {
+      candidates,
+      onePipePerLink: options.onePipePerLink,
+      timeLimitS: options.timeLimitS,
+      tankFillFlowsM3s,
+    });
   } catch (error) {
     throw explainCoreError(built, context.records, error);
   }
@@ -59,7 +108,15 @@ export async function sizeNetworkRun(context: NetworkContext, options: { onePipe
     kind: 'size',
     feasible: result.feasible,
     cost: result.feasible ? result.cost : null,
-    uniform: single && result.singleSize.cost !== undefined ? { pipeId: single.id, pipeLabel: single.label, cost: result.singleSize.cost, feasible: result.singleSize.feasible } : null,
+    uniform:
+      single && result.singleSize.cost !== undefined
+        ? {
+            pipeId: single.id,
+            pipeLabel: single.label,
+            cost: result.singleSize.cost,
+            feasible: result.singleSize.feasible,
+          }
+        : null,
     solution: solveRunResult(sized, result.solution),
     warnings: result.warnings.map((warning) => recordWarning(built, warning)),
   };
@@ -93,7 +150,10 @@ function tankFillFlows(context: NetworkContext, built: BuiltNetwork): Record<str
  * Each tank's storage sized from the outlets it actually serves (traced along the flows solved at
  * the mean draw), with the reserve days of its tank record; keyed by the record nodes.
  */
-export function tankStorageRun(context: NetworkContext, built: BuiltNetwork = buildNetworkInput(context, 'day')): TankStorageView[] {
+export function tankStorageRun(
+  context: NetworkContext,
+  built: BuiltNetwork = buildNetworkInput(context, 'day'),
+): TankStorageView[] {
   const reserveDays: Record<string, number> = {};
   for (const node of context.records.nodes) {
     const tank = node.kind === 'tank' ? context.tanks.find((t) => t.id === node.tankId) : undefined;
@@ -121,7 +181,11 @@ export function tankStorageRun(context: NetworkContext, built: BuiltNetwork = bu
       reserveStorageM3: storage ? reserve : null,
       totalStorageM3: storage ? storage.cycleStorageM3 + reserve : null,
       fillTimeFromEmptyS: storage ? storage.fillTimeFromEmptyS : null,
-      problem: result.problem ? result.problem.replace(/"([^"]+)"/g, (quoted, key: string) => (built.names[key] ? `"${built.names[key]}"` : quoted)) : null,
+      problem: result.problem
+        ? result.problem.replace(/"([^"]+)"/g, (quoted, key: string) =>
+            built.names[key] ? `"${built.names[key]}"` : quoted,
+          )
+        : null,
     };
   });
 }
@@ -149,8 +213,18 @@ export function dayNetworkRun(context: NetworkContext): DayRunResult {
     kind: 'day',
     friction: { method: day.frictionMethod, freeSurfaceLosses: day.freeSurfaceLosses },
     hours: day.steps.map((step) => step.hour),
-    tanks: tanks.map((tank) => ({ nodeId: tank.id, levelsM: day.tankLevelsM[tank.id] ?? [], floorM: tank.elevationM, overflowM: tank.tank!.overflowLevelM, storageNeededM3: storage.get(tank.id) ?? null })),
-    sources: sources.map((source) => ({ nodeId: source.id, drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0), yieldM3s: source.yieldM3s ?? null })),
+    tanks: tanks.map((tank) => ({
+      nodeId: tank.id,
+      levelsM: day.tankLevelsM[tank.id] ?? [],
+      floorM: tank.elevationM,
+      overflowM: tank.tank!.overflowLevelM,
+      storageNeededM3: storage.get(tank.id) ?? null,
+    })),
+    sources: sources.map((source) => ({
+      nodeId: source.id,
+      drawM3s: day.steps.map((step) => step.sourceDrawM3s[source.id] ?? 0),
+      yieldM3s: source.yieldM3s ?? null,
+    })),
     outlets: outlets.map((outlet) => ({
       nodeId: outlet.id,
       pressureHeadsM: day.steps.map((step) => step.outletPressureHeadsM[outlet.id] ?? null),

@@ -68,7 +68,12 @@ export interface DayRunResult {
   tanks: { nodeId: string; levelsM: number[]; floorM: number; overflowM: number; storageNeededM3: number | null }[];
   sources: { nodeId: string; drawM3s: number[]; yieldM3s: number | null }[];
   /** Pressure head at each outlet in every step, and the lowest it saw against what it wants. */
-  outlets: { nodeId: string; pressureHeadsM: (number | null)[]; minPressureHeadM: number | null; lowest: { pressureHeadM: number; hour: number } | null }[];
+  outlets: {
+    nodeId: string;
+    pressureHeadsM: (number | null)[];
+    minPressureHeadM: number | null;
+    lowest: { pressureHeadM: number; hour: number } | null;
+  }[];
   warnings: NetworkRunWarning[];
 }
 

@@ -6,12 +6,19 @@ import type { LinkResult, NetworkRunWarning, NodeResult, SolveRunResult } from '
 /** A core finding placed on the record it is about (a line piece -> its line link and chainage). */
 export function recordWarning(built: BuiltNetwork, warning: NetworkWarning): NetworkRunWarning {
   // The core names elements by id; people read them by name.
-  const message = warning.message.replace(/"([^"]+)"/g, (quoted, key: string) => (built.names[key] ? `"${built.names[key]}"` : quoted));
+  const message = warning.message.replace(/"([^"]+)"/g, (quoted, key: string) =>
+    built.names[key] ? `"${built.names[key]}"` : quoted,
+  );
   const base = { code: warning.code, severity: warning.severity, message };
   const id = warning.elementId;
   if (!id) return base;
   const piece = built.pieces[id];
-  if (piece) return { ...base, linkId: piece.linkId, ...(piece.fromChainageM !== null ? { chainageM: piece.fromChainageM } : {}) };
+  if (piece)
+    return {
+      ...base,
+      linkId: piece.linkId,
+      ...(piece.fromChainageM !== null ? { chainageM: piece.fromChainageM } : {}),
+    };
   if (built.recordNodeIds.includes(id)) return { ...base, nodeId: id };
   const inside = /^(.+)@([\d.]+)$/.exec(id);
   if (inside) return { ...base, linkId: inside[1], chainageM: Number(inside[2]) };
@@ -58,7 +65,15 @@ export function solveRunResult(built: BuiltNetwork, solution: NetworkSolution): 
     ...built.notes.map((note) => ({ ...note, code: 'network.assumed-figure', severity: 'info' as const })),
     ...solution.warnings.map((warning) => recordWarning(built, warning)),
   ];
-  return { kind: 'solve', friction: { method: solution.frictionMethod, freeSurfaceLosses: solution.freeSurfaceLosses }, converged: solution.converged, iterations: solution.iterations, nodes, links, warnings };
+  return {
+    kind: 'solve',
+    friction: { method: solution.frictionMethod, freeSurfaceLosses: solution.freeSurfaceLosses },
+    converged: solution.converged,
+    iterations: solution.iterations,
+    nodes,
+    links,
+    warnings,
+  };
 }
 
 /** A core input error that names an array position, restated on the record it came from. */

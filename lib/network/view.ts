@@ -43,7 +43,10 @@ export interface NetworkView {
 const PLAN_POINTS = 120;
 
 /** A line's chainage window and thinned plan, from its stations (null when it has none). */
-export function lineSummaryOf(line: { id: string; name: string }, stations: readonly LineRouteStation[]): NetworkLineSummary | null {
+export function lineSummaryOf(
+  line: { id: string; name: string },
+  stations: readonly LineRouteStation[],
+): NetworkLineSummary | null {
   if (stations.length === 0) return null;
   const step = Math.max(1, Math.ceil(stations.length / PLAN_POINTS));
   const kept = stations.filter((_, index) => index % step === 0 || index === stations.length - 1);
@@ -52,6 +55,11 @@ export function lineSummaryOf(line: { id: string; name: string }, stations: read
     name: line.name,
     fromChainageM: stations[0].chainageM,
     toChainageM: stations[stations.length - 1].chainageM,
-    plan: kept.map((s) => ({ chainageM: s.chainageM, groundM: s.groundElevationM, latitudeDeg: s.latitudeDeg ?? null, longitudeDeg: s.longitudeDeg ?? null })),
+    plan: kept.map((s) => ({
+      chainageM: s.chainageM,
+      groundM: s.groundElevationM,
+      latitudeDeg: s.latitudeDeg ?? null,
+      longitudeDeg: s.longitudeDeg ?? null,
+    })),
   };
 }

@@ -30,7 +30,10 @@ const DEFAULT_AUDIENCE: Partial<Record<NotificationKind, Permission>> = {
   'revision-submitted': 'review.comment',
 };
 
-async function audience(transaction: Transaction, event: NotificationEvent): Promise<{ id: string; email: string; name: string }[]> {
+async function audience(
+  transaction: Transaction,
+  event: NotificationEvent,
+): Promise<{ id: string; email: string; name: string }[]> {
   const { Membership, User } = models();
   const permission = DEFAULT_AUDIENCE[event.kind];
   if (!event.recipientIds && !permission) return [];
@@ -51,7 +54,11 @@ async function audience(transaction: Transaction, event: NotificationEvent): Pro
  */
 export async function enqueueNotification(transaction: Transaction, event: NotificationEvent): Promise<number> {
   const people = await audience(transaction, event);
-  const off = await optedOut(transaction, people.map((p) => p.id), event.kind);
+  const off = await optedOut(
+    transaction,
+    people.map((p) => p.id),
+    event.kind,
+  );
   const settings = appLink('/account');
   let queued = 0;
   for (const person of people) {

@@ -24,10 +24,19 @@ function pathOf(projectId: string, activity: ActivityForNotice): string {
 }
 
 /** Which activity kinds people are told of, and who: the revision's author, those mentioned, or the reviewers. */
-const NOTICE_OF: Record<string, { kind: NotificationKind; recipients: (a: ActivityForNotice) => string[] | undefined }> = {
+const NOTICE_OF: Record<
+  string,
+  { kind: NotificationKind; recipients: (a: ActivityForNotice) => string[] | undefined }
+> = {
   'revision.submitted': { kind: 'revision-submitted', recipients: () => undefined },
-  'revision.approved': { kind: 'revision-approved', recipients: (a) => (a.data?.authorUserId ? [a.data.authorUserId] : []) },
-  'revision.changes-requested': { kind: 'revision-changes-requested', recipients: (a) => (a.data?.authorUserId ? [a.data.authorUserId] : []) },
+  'revision.approved': {
+    kind: 'revision-approved',
+    recipients: (a) => (a.data?.authorUserId ? [a.data.authorUserId] : []),
+  },
+  'revision.changes-requested': {
+    kind: 'revision-changes-requested',
+    recipients: (a) => (a.data?.authorUserId ? [a.data.authorUserId] : []),
+  },
   'comment.added': { kind: 'comment-mention', recipients: (a) => a.data?.mentions ?? [] },
 };
 
@@ -40,7 +49,10 @@ export async function notifyForActivity(transaction: Transaction, activity: Acti
   if (!notice) return 0;
   const recipientIds = notice.recipients(activity);
   if (recipientIds && recipientIds.length === 0) return 0;
-  const project = await models().Project.findByPk(activity.projectId, { attributes: ['id', 'teamId', 'name'], transaction });
+  const project = await models().Project.findByPk(activity.projectId, {
+    attributes: ['id', 'teamId', 'name'],
+    transaction,
+  });
   if (!project) return 0;
   return enqueueNotification(transaction, {
     kind: notice.kind,

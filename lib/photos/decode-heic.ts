@@ -17,9 +17,16 @@ export async function decodeHeic(bytes: Uint8Array, maxPixels: number): Promise<
   try {
     const primary = images[0];
     if (!primary || primary.width <= 0 || primary.height <= 0) throw new Error('the file holds no picture');
-    if (primary.width * primary.height > maxPixels) throw new Error(`the picture is ${primary.width} × ${primary.height} pixels, larger than the ${Math.round(maxPixels / 1e6)} megapixels allowed`);
+    if (primary.width * primary.height > maxPixels)
+      throw new Error(
+        `the picture is ${primary.width} × ${primary.height} pixels, larger than the ${Math.round(maxPixels / 1e6)} megapixels allowed`,
+      );
     const pixels = await primary.decode();
-    return { width: pixels.width, height: pixels.height, rgba: new Uint8Array(pixels.data.buffer, pixels.data.byteOffset, pixels.data.byteLength) };
+    return {
+      width: pixels.width,
+      height: pixels.height,
+      rgba: new Uint8Array(pixels.data.buffer, pixels.data.byteOffset, pixels.data.byteLength),
+    };
   } finally {
     images.dispose();
   }

@@ -2,15 +2,22 @@
  * The Exif block of a HEIF/HEIC photo, found by walking its boxes (ISO/IEC 14496-12 box layout
  * [R85], ISO/IEC 23008-12 items [R86]; docs/references/photos.md): the `Exif` item named in
  * `iinf`, located through `iloc` either in the file (construction method 0, as phones write it)
- * or inside the `idat` box (method 1, as some encoders write it). Returns the TIFF-headed bytes that Exif readers take, or null when the file
+ * or inside the `idat` box (method 1, as some encoders write it). Returns the TIFF-headed bytes that Exif readers take,
+ * or null when the file
  * has none or its boxes do not add up. Every offset is checked against the file's length, and the
  * walk visits each box once, so a crafted file cannot send it out of bounds or round in circles.
  */
-interface Box { type: string; start: number; end: number }
+interface Box {
+  type: string;
+  start: number;
+  end: number;
+}
 
 class Reader {
   constructor(private readonly bytes: Uint8Array) {}
-  get length() { return this.bytes.length; }
+  get length() {
+    return this.bytes.length;
+  }
   uint(at: number, size: number): number {
     if (size === 0) return 0;
     if (at < 0 || at + size > this.bytes.length) throw new RangeError('outside the file');
@@ -48,7 +55,8 @@ function boxesIn(r: Reader, from: number, to: number): Box[] {
   return boxes;
 }
 
-const child = (r: Reader, parent: Box, type: string, fullBox = false) => boxesIn(r, parent.start + (fullBox ? 4 : 0), parent.end).find((b) => b.type === type);
+const child = (r: Reader, parent: Box, type: string, fullBox = false) =>
+  boxesIn(r, parent.start + (fullBox ? 4 : 0), parent.end).find((b) => b.type === type);
 
 function exifItemId(r: Reader, iinf: Box): number | null {
   const version = r.uint(iinf.start, 1);

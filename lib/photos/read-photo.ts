@@ -14,7 +14,8 @@ export function sniffPhotoType(bytes: Uint8Array): PhotoType | 'heic' | null {
   if (starts([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return 'image/png';
   // ISO base media "ftyp" box with a HEIF brand.
   const brand = String.fromCharCode(...bytes.slice(8, 12));
-  if (starts([0x66, 0x74, 0x79, 0x70], 4) && ['heic', 'heix', 'hevc', 'heim', 'heis', 'mif1', 'msf1'].includes(brand)) return 'heic';
+  if (starts([0x66, 0x74, 0x79, 0x70], 4) && ['heic', 'heix', 'hevc', 'heim', 'heis', 'mif1', 'msf1'].includes(brand))
+    return 'heic';
   return null;
 }
 
@@ -41,7 +42,12 @@ type Tags = { latitude?: number; longitude?: number; DateTimeOriginal?: Date; Cr
 
 /** Position and time only: nothing else is read from the metadata. */
 const readTags = (bytes: Uint8Array): Promise<Tags> =>
-  exifr.parse(bytes, { gps: true, pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLatitudeRef', 'GPSLongitude', 'GPSLongitudeRef'] }).catch(() => null) as Promise<Tags>;
+  exifr
+    .parse(bytes, {
+      gps: true,
+      pick: ['DateTimeOriginal', 'CreateDate', 'GPSLatitude', 'GPSLatitudeRef', 'GPSLongitude', 'GPSLongitudeRef'],
+    })
+    .catch(() => null) as Promise<Tags>;
 
 const refuse = (message: string) => new AppError('unsupported_media_type', message, { file: [message] });
 
@@ -50,7 +56,10 @@ async function decodedHeic(bytes: Uint8Array, fileName: string) {
     return await runInWorker('photo.decode-heic', { bytes, maxPixels: MAX_HEIC_PIXELS });
   } catch (error) {
     if (error instanceof AppError) throw error;
-    const why = error instanceof Error && /megapixels/.test(error.message) ? error.message : 'it may be damaged, or coded in a way the decoder does not know';
+    const why =
+      error instanceof Error && /megapixels/.test(error.message)
+        ? error.message
+        : 'it may be damaged, or coded in a way the decoder does not know';
     throw refuse(`“${fileName}” is a HEIC photo that could not be decoded: ${why}. Export it as JPEG and upload that`);
   }
 }
@@ -66,7 +75,9 @@ export async function readPhoto(bytes: Uint8Array, fileName: string): Promise<Re
   // A HEIC photo is decoded to pixels (sharp as shipped cannot read HEVC) and stored as JPEG.
   const heic = type === 'heic' ? await decodedHeic(bytes, fileName) : null;
   const input = heic ? heic.rgba : bytes;
-  const options: sharp.SharpOptions = heic ? { raw: { width: heic.width, height: heic.height, channels: 4 }, limitInputPixels: MAX_PIXELS } : { limitInputPixels: MAX_PIXELS };
+  const options: sharp.SharpOptions = heic
+    ? { raw: { width: heic.width, height: heic.height, channels: 4 }, limitInputPixels: MAX_PIXELS }
+    : { limitInputPixels: MAX_PIXELS };
   const contentType: PhotoType = type === 'image/png' ? 'image/png' : 'image/jpeg';
   let meta: sharp.Metadata;
   try {
@@ -84,8 +95,15 @@ export async function readPhoto(bytes: Uint8Array, fileName: string): Promise<Re
     // rotate() applies the orientation tag; sharp writes no metadata unless asked, so all of it is dropped.
     // (HEIC pixels come out of the decoder upright already and carry no tag, so rotate() leaves them.)
     const upright = sharp(input, options).rotate();
-    const image = contentType === 'image/jpeg' ? await upright.clone().jpeg({ quality: 88 }).toBuffer({ resolveWithObject: true }) : await upright.clone().png().toBuffer({ resolveWithObject: true });
-    const thumbnail = await upright.clone().resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer();
+    const image =
+      contentType === 'image/jpeg'
+        ? await upright.clone().jpeg({ quality: 88 }).toBuffer({ resolveWithObject: true })
+        : await upright.clone().png().toBuffer({ resolveWithObject: true });
+    const thumbnail = await upright
+      .clone()
+      .resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: 'inside', withoutEnlargement: true })
+      .jpeg({ quality: 80 })
+      .toBuffer();
     return {
       contentType,
       image: new Uint8Array(image.data),

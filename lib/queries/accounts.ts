@@ -6,17 +6,23 @@ import { fetchJson } from './fetch-json';
 type CheckYourMail = { status: 'check-your-mail'; email: string };
 
 export function useSignUp() {
-  return useMutation({ mutationFn: (input: SignUpInput) => fetchJson<CheckYourMail>('/api/accounts', { method: 'POST', body: input }) });
+  return useMutation({
+    mutationFn: (input: SignUpInput) => fetchJson<CheckYourMail>('/api/accounts', { method: 'POST', body: input }),
+  });
 }
 
 export function useConfirmSignUp() {
   return useMutation({
-    mutationFn: (token: string) => fetchJson<{ confirmed: { email: string } }>('/api/accounts/confirm', { method: 'POST', body: { token } }),
+    mutationFn: (token: string) =>
+      fetchJson<{ confirmed: { email: string } }>('/api/accounts/confirm', { method: 'POST', body: { token } }),
   });
 }
 
 export function useRequestPasswordReset() {
-  return useMutation({ mutationFn: (email: string) => fetchJson<CheckYourMail>('/api/accounts/password-reset', { method: 'POST', body: { email } }) });
+  return useMutation({
+    mutationFn: (email: string) =>
+      fetchJson<CheckYourMail>('/api/accounts/password-reset', { method: 'POST', body: { email } }),
+  });
 }
 
 export function useResetPassword() {
@@ -28,7 +34,8 @@ export function useResetPassword() {
 
 export function useChangePassword() {
   return useMutation({
-    mutationFn: (input: PasswordChangeInput) => fetchJson<{ changed: true }>('/api/accounts/password', { method: 'PUT', body: input }),
+    mutationFn: (input: PasswordChangeInput) =>
+      fetchJson<{ changed: true }>('/api/accounts/password', { method: 'PUT', body: input }),
   });
 }
 
@@ -43,14 +50,20 @@ export const notificationKeys = { mine: ['accounts', 'me', 'notifications'] as c
 export const notificationPreferencesQuery = () =>
   queryOptions({
     queryKey: notificationKeys.mine,
-    queryFn: async () => (await fetchJson<{ preferences: NotificationPreferences }>('/api/accounts/notifications')).preferences,
+    queryFn: async () =>
+      (await fetchJson<{ preferences: NotificationPreferences }>('/api/accounts/notifications')).preferences,
   });
 
 export function useSetNotificationPreferences() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (changes: Partial<NotificationPreferences>) =>
-      (await fetchJson<{ preferences: NotificationPreferences }>('/api/accounts/notifications', { method: 'PUT', body: changes })).preferences,
+      (
+        await fetchJson<{ preferences: NotificationPreferences }>('/api/accounts/notifications', {
+          method: 'PUT',
+          body: changes,
+        })
+      ).preferences,
     onSuccess: (prefs) => client.setQueryData(notificationKeys.mine, prefs),
   });
 }

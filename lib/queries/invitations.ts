@@ -10,13 +10,15 @@ export const invitationKeys = { team: (teamId: string) => ['teams', teamId, 'inv
 export const teamInvitationsQuery = (teamId: string) =>
   queryOptions({
     queryKey: invitationKeys.team(teamId),
-    queryFn: async () => (await fetchJson<{ invitations: InvitationSummary[] }>(`/api/teams/${teamId}/invitations`)).invitations,
+    queryFn: async () =>
+      (await fetchJson<{ invitations: InvitationSummary[] }>(`/api/teams/${teamId}/invitations`)).invitations,
   });
 
 export function useInvite(teamId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: InviteMemberInput) => fetchJson<{ invitation: InvitationSummary }>(`/api/teams/${teamId}/invitations`, { method: 'POST', body: input }),
+    mutationFn: (input: InviteMemberInput) =>
+      fetchJson<{ invitation: InvitationSummary }>(`/api/teams/${teamId}/invitations`, { method: 'POST', body: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: invitationKeys.team(teamId) }),
   });
 }
@@ -24,7 +26,8 @@ export function useInvite(teamId: string) {
 export function useRevokeInvitation(teamId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (invitationId: string) => fetchJson<void>(`/api/teams/${teamId}/invitations/${invitationId}`, { method: 'DELETE' }),
+    mutationFn: (invitationId: string) =>
+      fetchJson<void>(`/api/teams/${teamId}/invitations/${invitationId}`, { method: 'DELETE' }),
     onSettled: () => client.invalidateQueries({ queryKey: invitationKeys.team(teamId) }),
   });
 }
@@ -32,6 +35,9 @@ export function useRevokeInvitation(teamId: string) {
 export function useAcceptInvitation() {
   return useMutation({
     mutationFn: (input: AcceptInvitationInput) =>
-      fetchJson<{ joined: { teamId: string; role: Role; email: string } }>('/api/invitations/accept', { method: 'POST', body: input }),
+      fetchJson<{ joined: { teamId: string; role: Role; email: string } }>('/api/invitations/accept', {
+        method: 'POST',
+        body: input,
+      }),
   });
 }

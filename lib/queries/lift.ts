@@ -2,7 +2,11 @@ import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query
 import type { LiftSummary } from '../lift/summary';
 import type { DemandUseInput } from '../validations/demand-uses';
 import type { CommissioningReadingInput, RamSiteInput } from '../validations/ram-sites';
-import type { GenerateSeasonalTasksInput, SeasonalTaskInput, UpdateSeasonalTaskInput } from '../validations/seasonal-tasks';
+import type {
+  GenerateSeasonalTasksInput,
+  SeasonalTaskInput,
+  UpdateSeasonalTaskInput,
+} from '../validations/seasonal-tasks';
 import type { TankInput } from '../validations/tanks';
 import type { WaterSourceInput, YieldReadingInput } from '../validations/water-sources';
 import { fetchJson } from './fetch-json';
@@ -18,7 +22,10 @@ export const liftSummaryQuery = (projectId: string) =>
   });
 
 /** Every lift write changes computed figures elsewhere on the page, so each one refetches the summary. */
-function useLiftWrite<V>(projectId: string, request: (variables: V) => { url: string; method: string; body?: unknown }) {
+function useLiftWrite<V>(
+  projectId: string,
+  request: (variables: V) => { url: string; method: string; body?: unknown },
+) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (variables: V) => {
@@ -30,21 +37,35 @@ function useLiftWrite<V>(projectId: string, request: (variables: V) => { url: st
 }
 
 type Save<T> = { id: string | null; input: T };
-const saveTo = <T,>(collection: string) => ({ id, input }: Save<T>) =>
-  id ? { url: `/${collection}/${id}`, method: 'PUT', body: input } : { url: `/${collection}`, method: 'POST', body: input };
+const saveTo =
+  <T>(collection: string) =>
+  ({ id, input }: Save<T>) =>
+    id
+      ? { url: `/${collection}/${id}`, method: 'PUT', body: input }
+      : { url: `/${collection}`, method: 'POST', body: input };
 const removeFrom = (collection: string) => (id: string) => ({ url: `/${collection}/${id}`, method: 'DELETE' });
 
 export const useSaveRamSite = (projectId: string) => useLiftWrite(projectId, saveTo<RamSiteInput>('ram-sites'));
 export const useDeleteRamSite = (projectId: string) => useLiftWrite(projectId, removeFrom('ram-sites'));
 export const useAddCommissioningReading = (projectId: string, siteId: string) =>
-  useLiftWrite(projectId, (input: CommissioningReadingInput) => ({ url: `/ram-sites/${siteId}/commissioning`, method: 'POST', body: input }));
-export const useDeleteCommissioningReading = (projectId: string, siteId: string) => useLiftWrite(projectId, removeFrom(`ram-sites/${siteId}/commissioning`));
+  useLiftWrite(projectId, (input: CommissioningReadingInput) => ({
+    url: `/ram-sites/${siteId}/commissioning`,
+    method: 'POST',
+    body: input,
+  }));
+export const useDeleteCommissioningReading = (projectId: string, siteId: string) =>
+  useLiftWrite(projectId, removeFrom(`ram-sites/${siteId}/commissioning`));
 
 export const useSaveSource = (projectId: string) => useLiftWrite(projectId, saveTo<WaterSourceInput>('sources'));
 export const useDeleteSource = (projectId: string) => useLiftWrite(projectId, removeFrom('sources'));
 export const useAddYieldReading = (projectId: string, sourceId: string) =>
-  useLiftWrite(projectId, (input: YieldReadingInput) => ({ url: `/sources/${sourceId}/yield-readings`, method: 'POST', body: input }));
-export const useDeleteYieldReading = (projectId: string, sourceId: string) => useLiftWrite(projectId, removeFrom(`sources/${sourceId}/yield-readings`));
+  useLiftWrite(projectId, (input: YieldReadingInput) => ({
+    url: `/sources/${sourceId}/yield-readings`,
+    method: 'POST',
+    body: input,
+  }));
+export const useDeleteYieldReading = (projectId: string, sourceId: string) =>
+  useLiftWrite(projectId, removeFrom(`sources/${sourceId}/yield-readings`));
 
 export const useSaveTank = (projectId: string) => useLiftWrite(projectId, saveTo<TankInput>('tanks'));
 export const useDeleteTank = (projectId: string) => useLiftWrite(projectId, removeFrom('tanks'));
@@ -55,7 +76,15 @@ export const useDeleteDemandUse = (projectId: string) => useLiftWrite(projectId,
 export const useAddSeasonalTask = (projectId: string) =>
   useLiftWrite(projectId, (input: SeasonalTaskInput) => ({ url: '/seasonal-tasks', method: 'POST', body: input }));
 export const useUpdateSeasonalTask = (projectId: string) =>
-  useLiftWrite(projectId, ({ id, input }: { id: string; input: UpdateSeasonalTaskInput }) => ({ url: `/seasonal-tasks/${id}`, method: 'PATCH', body: input }));
+  useLiftWrite(projectId, ({ id, input }: { id: string; input: UpdateSeasonalTaskInput }) => ({
+    url: `/seasonal-tasks/${id}`,
+    method: 'PATCH',
+    body: input,
+  }));
 export const useDeleteSeasonalTask = (projectId: string) => useLiftWrite(projectId, removeFrom('seasonal-tasks'));
 export const useGenerateSeasonalTasks = (projectId: string) =>
-  useLiftWrite(projectId, (input: GenerateSeasonalTasksInput) => ({ url: '/seasonal-tasks/generate', method: 'POST', body: input }));
+  useLiftWrite(projectId, (input: GenerateSeasonalTasksInput) => ({
+    url: '/seasonal-tasks/generate',
+    method: 'POST',
+    body: input,
+  }));

@@ -33,7 +33,10 @@ export const lineStationsQuery = (lineId: string) =>
     staleTime: 5 * 60_000,
   });
 
-/** Ram sites that can feed the line and the frost depth, read again when the window regains focus (the lift page may have changed them). */
+/**
+ * Ram sites that can feed the line and the frost depth, read again when the window regains focus (the lift page may
+ * have changed them).
+ */
 export const lineSiteContextQuery = (lineId: string) =>
   queryOptions({
     queryKey: lineKeys.siteContext(lineId),

@@ -15,7 +15,10 @@ export function useChangeRole(teamId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ userId, role }: { userId: string; role: Role }) =>
-      fetchJson<{ member: MemberSummary }>(`/api/teams/${teamId}/members/${userId}`, { method: 'PATCH', body: { role } }),
+      fetchJson<{ member: MemberSummary }>(`/api/teams/${teamId}/members/${userId}`, {
+        method: 'PATCH',
+        body: { role },
+      }),
     onSettled: () => client.invalidateQueries({ queryKey: memberKeys.team(teamId) }),
   });
 }

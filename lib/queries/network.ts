@@ -17,7 +17,10 @@ export const networkQuery = (projectId: string) =>
   });
 
 /** Every network write changes the page's data, so each refetches the view. */
-function useNetworkWrite<V>(projectId: string, request: (variables: V) => { url: string; method: string; body?: unknown }) {
+function useNetworkWrite<V>(
+  projectId: string,
+  request: (variables: V) => { url: string; method: string; body?: unknown },
+) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (variables: V) => {
@@ -31,22 +34,45 @@ function useNetworkWrite<V>(projectId: string, request: (variables: V) => { url:
 type Save<T> = { id: string | null; input: T };
 
 export const useSaveNetworkNode = (projectId: string) =>
-  useNetworkWrite(projectId, ({ id, input }: Save<NetworkNodeInput>) => (id ? { url: `/network/nodes/${id}`, method: 'PUT', body: input } : { url: '/network/nodes', method: 'POST', body: input }));
-export const useDeleteNetworkNode = (projectId: string) => useNetworkWrite(projectId, (id: string) => ({ url: `/network/nodes/${id}`, method: 'DELETE' }));
+  useNetworkWrite(projectId, ({ id, input }: Save<NetworkNodeInput>) =>
+    id
+      ? { url: `/network/nodes/${id}`, method: 'PUT', body: input }
+      : { url: '/network/nodes', method: 'POST', body: input },
+  );
+export const useDeleteNetworkNode = (projectId: string) =>
+  useNetworkWrite(projectId, (id: string) => ({ url: `/network/nodes/${id}`, method: 'DELETE' }));
 export const useSaveNetworkLink = (projectId: string) =>
-  useNetworkWrite(projectId, ({ id, input }: Save<NetworkLinkInput>) => (id ? { url: `/network/links/${id}`, method: 'PUT', body: input } : { url: '/network/links', method: 'POST', body: input }));
-export const useDeleteNetworkLink = (projectId: string) => useNetworkWrite(projectId, (id: string) => ({ url: `/network/links/${id}`, method: 'DELETE' }));
+  useNetworkWrite(projectId, ({ id, input }: Save<NetworkLinkInput>) =>
+    id
+      ? { url: `/network/links/${id}`, method: 'PUT', body: input }
+      : { url: '/network/links', method: 'POST', body: input },
+  );
+export const useDeleteNetworkLink = (projectId: string) =>
+  useNetworkWrite(projectId, (id: string) => ({ url: `/network/links/${id}`, method: 'DELETE' }));
 export const usePlaceTakeOff = (projectId: string) =>
-  useNetworkWrite(projectId, (input: { lineId: string; chainageM: number; name: string }) => ({ url: '/network/take-offs', method: 'POST', body: input }));
+  useNetworkWrite(projectId, (input: { lineId: string; chainageM: number; name: string }) => ({
+    url: '/network/take-offs',
+    method: 'POST',
+    body: input,
+  }));
 export const useTieDemandUse = (projectId: string) =>
-  useNetworkWrite(projectId, ({ useId, outletNodeId }: { useId: string; outletNodeId: string | null }) => ({ url: `/demand-uses/${useId}/outlet`, method: 'PUT', body: { outletNodeId } }));
+  useNetworkWrite(projectId, ({ useId, outletNodeId }: { useId: string; outletNodeId: string | null }) => ({
+    url: `/demand-uses/${useId}/outlet`,
+    method: 'PUT',
+    body: { outletNodeId },
+  }));
 
 /** Writes the pipes a finished sizing run chose to the network's pipes and lines (the line pages then show them). */
 export function useApplySizes(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (jobId: string) =>
-      (await fetchJson<{ applied: { pipes: number; lines: number } }>(`/api/projects/${projectId}/network/runs/${jobId}/apply`, { method: 'POST' })).applied,
+      (
+        await fetchJson<{ applied: { pipes: number; lines: number } }>(
+          `/api/projects/${projectId}/network/runs/${jobId}/apply`,
+          { method: 'POST' },
+        )
+      ).applied,
     onSuccess: async () => {
       await client.invalidateQueries({ queryKey: networkKeys.view(projectId) });
       await client.invalidateQueries({ queryKey: ['lines'] });
@@ -58,14 +84,20 @@ export function useApplySizes(projectId: string) {
 export const tankStorageQuery = (projectId: string) =>
   queryOptions({
     queryKey: ['projects', projectId, 'network', 'tank-storage'] as const,
-    queryFn: async () => (await fetchJson<{ storage: ProjectTankStorage }>(`/api/projects/${projectId}/network/tank-storage`)).storage,
+    queryFn: async () =>
+      (await fetchJson<{ storage: ProjectTankStorage }>(`/api/projects/${projectId}/network/tank-storage`)).storage,
   });
 
 /** Starts a run; the page then polls it until it is done. */
 export function useStartNetworkRun(projectId: string) {
   return useMutation({
     mutationFn: async (input: Partial<NetworkRunInput> & { kind: NetworkRunInput['kind'] }) =>
-      (await fetchJson<{ run: NetworkJobView }>(`/api/projects/${projectId}/network/runs`, { method: 'POST', body: input })).run,
+      (
+        await fetchJson<{ run: NetworkJobView }>(`/api/projects/${projectId}/network/runs`, {
+          method: 'POST',
+          body: input,
+        })
+      ).run,
   });
 }
 
@@ -77,9 +109,11 @@ export function useNetworkRun(projectId: string, runId: string | null) {
     enabled: runId !== null,
     queryFn: async () => {
       const run = (await fetchJson<{ run: NetworkJobView }>(`/api/projects/${projectId}/network/runs/${runId}`)).run;
-      if (run.status === 'done' || run.status === 'failed') await client.invalidateQueries({ queryKey: networkKeys.view(projectId), exact: true });
+      if (run.status === 'done' || run.status === 'failed')
+        await client.invalidateQueries({ queryKey: networkKeys.view(projectId), exact: true });
       return run;
     },
-    refetchInterval: (query) => (query.state.data && (query.state.data.status === 'done' || query.state.data.status === 'failed') ? false : 500),
+    refetchInterval: (query) =>
+      query.state.data && (query.state.data.status === 'done' || query.state.data.status === 'failed') ? false : 500,
   });
 }

@@ -21,7 +21,8 @@ export function useRoutePhotos(projectId: string, routeId: string | null): Numbe
   return useMemo(() => numberPhotos((data ?? []).filter((p) => p.routeId === routeId)), [data, routeId]);
 }
 
-export const photoImageUrl = (photoId: string, size: 'full' | 'thumbnail' = 'full') => `/api/photos/${photoId}/image${size === 'thumbnail' ? '?size=thumbnail' : ''}`;
+export const photoImageUrl = (photoId: string, size: 'full' | 'thumbnail' = 'full') =>
+  `/api/photos/${photoId}/image${size === 'thumbnail' ? '?size=thumbnail' : ''}`;
 
 export interface PhotoUploadInput {
   file: File;
@@ -38,7 +39,8 @@ export function useUploadPhoto(projectId: string) {
       form.append('file', file, file.name);
       if (routeId) form.append('routeId', routeId);
       if (chainageM !== undefined) form.append('chainageM', String(chainageM));
-      return (await fetchJson<{ photo: PhotoSummary }>(`/api/projects/${projectId}/photos`, { method: 'POST', form })).photo;
+      return (await fetchJson<{ photo: PhotoSummary }>(`/api/projects/${projectId}/photos`, { method: 'POST', form }))
+        .photo;
     },
     onSuccess: () => client.invalidateQueries({ queryKey: photoKeys.project(projectId) }),
   });
@@ -48,14 +50,30 @@ export function useUpdatePhoto(projectId: string) {
   const client = useQueryClient();
   const key = photoKeys.project(projectId);
   return useMutation({
-    mutationFn: ({ photoId, ...changes }: { photoId: string; caption?: string; inReport?: boolean; routeId?: string; chainageM?: number }) =>
-      fetchJson<{ photo: PhotoSummary }>(`/api/photos/${photoId}`, { method: 'PATCH', body: changes }),
-    // The report box and caption change at once on screen; the server's answer then replaces the list (or the old one comes back on an error).
+    mutationFn: ({
+      photoId,
+      ...changes
+    }: {
+      photoId: string;
+      caption?: string;
+      inReport?: boolean;
+      routeId?: string;
+      chainageM?: number;
+    }) => fetchJson<{ photo: PhotoSummary }>(`/api/photos/${photoId}`, { method: 'PATCH', body: changes }),
+    // The report box and caption change at once on screen; the server's answer then replaces the list (or the old one
+    // comes back on an error).
     onMutate: async ({ photoId, caption, inReport }) => {
       await client.cancelQueries({ queryKey: key });
       const before = client.getQueryData<PhotoSummary[]>(key);
       if (before) {
-        client.setQueryData<PhotoSummary[]>(key, before.map((p) => (p.id === photoId ? { ...p, ...(caption !== undefined ? { caption } : {}), ...(inReport !== undefined ? { inReport } : {}) } : p)));
+        client.setQueryData<PhotoSummary[]>(
+          key,
+          before.map((p) =>
+            p.id === photoId
+              ? { ...p, ...(caption !== undefined ? { caption } : {}), ...(inReport !== undefined ? { inReport } : {}) }
+              : p,
+          ),
+        );
       }
       return { before };
     },

@@ -16,7 +16,12 @@ export function useSavePriceList(teamId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: PriceListInput) =>
-      (await fetchJson<{ items: PriceListItemRecord[] }>(`/api/teams/${teamId}/price-list`, { method: 'PUT', body: input })).items,
+      (
+        await fetchJson<{ items: PriceListItemRecord[] }>(`/api/teams/${teamId}/price-list`, {
+          method: 'PUT',
+          body: input,
+        })
+      ).items,
     onSuccess: (items) => client.setQueryData(priceListKeys.team(teamId), items),
   });
 }

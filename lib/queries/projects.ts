@@ -24,7 +24,8 @@ export function useCreateProject(teamId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: CreateProjectInput) =>
-      (await fetchJson<{ project: ProjectSummary }>(`/api/teams/${teamId}/projects`, { method: 'POST', body: input })).project,
+      (await fetchJson<{ project: ProjectSummary }>(`/api/teams/${teamId}/projects`, { method: 'POST', body: input }))
+        .project,
     onSuccess: () => client.invalidateQueries({ queryKey: projectKeys.team(teamId) }),
   });
 }
@@ -33,7 +34,8 @@ export function useUpdateProject(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: UpdateProjectInput) =>
-      (await fetchJson<{ project: ProjectSummary }>(`/api/projects/${projectId}`, { method: 'PATCH', body: input })).project,
+      (await fetchJson<{ project: ProjectSummary }>(`/api/projects/${projectId}`, { method: 'PATCH', body: input }))
+        .project,
     onSuccess: (project) => {
       client.setQueryData(projectKeys.one(projectId), project);
       return client.invalidateQueries({ queryKey: projectKeys.team(project.teamId) });

@@ -14,20 +14,27 @@ export const reviewKeys = {
 export const projectRevisionsQuery = (projectId: string) =>
   queryOptions({
     queryKey: reviewKeys.revisions(projectId),
-    queryFn: async () => (await fetchJson<{ revisions: RevisionSummary[] }>(`/api/projects/${projectId}/revisions`)).revisions,
+    queryFn: async () =>
+      (await fetchJson<{ revisions: RevisionSummary[] }>(`/api/projects/${projectId}/revisions`)).revisions,
   });
 
 export const projectCommentsQuery = (projectId: string) =>
   queryOptions({
     queryKey: reviewKeys.comments(projectId),
-    queryFn: async () => (await fetchJson<{ comments: CommentRecord[] }>(`/api/projects/${projectId}/comments`)).comments,
+    queryFn: async () =>
+      (await fetchJson<{ comments: CommentRecord[] }>(`/api/projects/${projectId}/comments`)).comments,
   });
 
 export function useCreateRevision(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: CreateRevisionInput) =>
-      (await fetchJson<{ revision: RevisionSummary }>(`/api/projects/${projectId}/revisions`, { method: 'POST', body: input })).revision,
+      (
+        await fetchJson<{ revision: RevisionSummary }>(`/api/projects/${projectId}/revisions`, {
+          method: 'POST',
+          body: input,
+        })
+      ).revision,
     onSuccess: () => client.invalidateQueries({ queryKey: reviewKeys.revisions(projectId) }),
   });
 }
@@ -36,7 +43,12 @@ export function useRevisionAction(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async ({ revisionId, action, note }: { revisionId: string; action: RevisionAction; note?: string }) =>
-      (await fetchJson<{ revision: RevisionSummary }>(`/api/revisions/${revisionId}/${action}`, { method: 'POST', body: { note: note ?? '' } })).revision,
+      (
+        await fetchJson<{ revision: RevisionSummary }>(`/api/revisions/${revisionId}/${action}`, {
+          method: 'POST',
+          body: { note: note ?? '' },
+        })
+      ).revision,
     onSettled: () => client.invalidateQueries({ queryKey: reviewKeys.revisions(projectId) }),
   });
 }
@@ -45,7 +57,12 @@ export function useCreateComment(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async (input: CreateCommentInput) =>
-      (await fetchJson<{ comment: { id: string } }>(`/api/projects/${projectId}/comments`, { method: 'POST', body: input })).comment,
+      (
+        await fetchJson<{ comment: { id: string } }>(`/api/projects/${projectId}/comments`, {
+          method: 'POST',
+          body: input,
+        })
+      ).comment,
     onSuccess: () => client.invalidateQueries({ queryKey: reviewKeys.comments(projectId) }),
   });
 }
@@ -54,7 +71,12 @@ export function useResolveComment(projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: async ({ commentId, resolved }: { commentId: string; resolved: boolean }) =>
-      (await fetchJson<{ comment: { id: string; resolved: boolean } }>(`/api/comments/${commentId}`, { method: 'PATCH', body: { resolved } })).comment,
+      (
+        await fetchJson<{ comment: { id: string; resolved: boolean } }>(`/api/comments/${commentId}`, {
+          method: 'PATCH',
+          body: { resolved },
+        })
+      ).comment,
     onSuccess: () => client.invalidateQueries({ queryKey: reviewKeys.comments(projectId) }),
   });
 }

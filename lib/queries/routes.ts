@@ -3,7 +3,15 @@ import type { ApiErrorBody } from '../errors';
 import type { RoutePointsPage, RouteProposalsAnswer, RouteSummary, RouteView } from '../routes/types';
 import type { SurveyImportWarning } from '../survey/parsed-survey';
 import { ROUTE_PAGE_SIZE } from '../validations/routes';
-import type { CleanupDecisionInput, CreateRouteInput, JoinRoutesInput, SavePointsInput, SplitRouteInput, TrimRouteInput, UpdateRouteInput } from '../validations/routes';
+import type {
+  CleanupDecisionInput,
+  CreateRouteInput,
+  JoinRoutesInput,
+  SavePointsInput,
+  SplitRouteInput,
+  TrimRouteInput,
+  UpdateRouteInput,
+} from '../validations/routes';
 import type { SurveyImportOptions } from '../validations/survey-import';
 import { ApiError, fetchJson } from './fetch-json';
 
@@ -42,7 +50,9 @@ export const routePointsQuery = (routeId: string, offset: number, limit = ROUTE_
 export function useProposeCleanup(routeId: string) {
   return useMutation({
     mutationFn: (ask: { smoothingWindow: number } | { benchmarkPoint: number; benchmarkElevationM: number }) =>
-      fetchJson<RouteProposalsAnswer>(`/api/routes/${routeId}/proposals?${new URLSearchParams(Object.entries(ask).map(([k, v]) => [k, String(v)]))}`),
+      fetchJson<RouteProposalsAnswer>(
+        `/api/routes/${routeId}/proposals?${new URLSearchParams(Object.entries(ask).map(([k, v]) => [k, String(v)]))}`,
+      ),
   });
 }
 
@@ -66,15 +76,19 @@ function useRouteMutation<I, O>(projectId: string, run: (input: I) => Promise<O>
 }
 
 export function useCreateRoute(projectId: string) {
-  return useRouteMutation(projectId, async (input: CreateRouteInput) =>
-    (await fetchJson<{ route: RouteSummary }>(`/api/projects/${projectId}/routes`, { method: 'POST', body: input })).route,
+  return useRouteMutation(
+    projectId,
+    async (input: CreateRouteInput) =>
+      (await fetchJson<{ route: RouteSummary }>(`/api/projects/${projectId}/routes`, { method: 'POST', body: input }))
+        .route,
   );
 }
 
 export function useUpdateRoute(projectId: string, routeId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: async (input: UpdateRouteInput) => (await fetchJson<{ route: RouteSummary }>(`/api/routes/${routeId}`, { method: 'PATCH', body: input })).route,
+    mutationFn: async (input: UpdateRouteInput) =>
+      (await fetchJson<{ route: RouteSummary }>(`/api/routes/${routeId}`, { method: 'PATCH', body: input })).route,
     onSuccess: async () => {
       await client.invalidateQueries({ queryKey: routeKeys.one(routeId) });
       await client.invalidateQueries({ queryKey: routeKeys.project(projectId) });
@@ -89,25 +103,46 @@ export function useDeleteRoute(projectId: string, routeId: string) {
 const viewOf = (v: RouteView) => v;
 
 export function useSavePoints(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: SavePointsInput) => fetchJson<RouteView>(`/api/routes/${routeId}/points`, { method: 'PUT', body: input }), viewOf);
+  return useRouteMutation(
+    projectId,
+    (input: SavePointsInput) => fetchJson<RouteView>(`/api/routes/${routeId}/points`, { method: 'PUT', body: input }),
+    viewOf,
+  );
 }
 
 export function useCleanupDecision(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: CleanupDecisionInput) => fetchJson<RouteView>(`/api/routes/${routeId}/cleanup`, { method: 'POST', body: input }), viewOf);
+  return useRouteMutation(
+    projectId,
+    (input: CleanupDecisionInput) =>
+      fetchJson<RouteView>(`/api/routes/${routeId}/cleanup`, { method: 'POST', body: input }),
+    viewOf,
+  );
 }
 
 export function useReverseRoute(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, () => fetchJson<RouteView>(`/api/routes/${routeId}/reverse`, { method: 'POST' }), viewOf);
+  return useRouteMutation(
+    projectId,
+    () => fetchJson<RouteView>(`/api/routes/${routeId}/reverse`, { method: 'POST' }),
+    viewOf,
+  );
 }
 
 export function useTrimRoute(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, (input: TrimRouteInput) => fetchJson<RouteView>(`/api/routes/${routeId}/trim`, { method: 'POST', body: input }), viewOf);
+  return useRouteMutation(
+    projectId,
+    (input: TrimRouteInput) => fetchJson<RouteView>(`/api/routes/${routeId}/trim`, { method: 'POST', body: input }),
+    viewOf,
+  );
 }
 
 export function useSplitRoute(projectId: string, routeId: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: SplitRouteInput) => fetchJson<{ first: RouteSummary; second: RouteSummary }>(`/api/routes/${routeId}/split`, { method: 'POST', body: input }),
+    mutationFn: (input: SplitRouteInput) =>
+      fetchJson<{ first: RouteSummary; second: RouteSummary }>(`/api/routes/${routeId}/split`, {
+        method: 'POST',
+        body: input,
+      }),
     onSuccess: async () => {
       await client.invalidateQueries({ queryKey: routeKeys.one(routeId) });
       await client.invalidateQueries({ queryKey: routeKeys.project(projectId) });
@@ -116,8 +151,10 @@ export function useSplitRoute(projectId: string, routeId: string) {
 }
 
 export function useJoinRoutes(projectId: string, routeId: string) {
-  return useRouteMutation(projectId, async (input: JoinRoutesInput) =>
-    (await fetchJson<{ route: RouteSummary }>(`/api/routes/${routeId}/join`, { method: 'POST', body: input })).route,
+  return useRouteMutation(
+    projectId,
+    async (input: JoinRoutesInput) =>
+      (await fetchJson<{ route: RouteSummary }>(`/api/routes/${routeId}/join`, { method: 'POST', body: input })).route,
   );
 }
 
@@ -130,7 +167,12 @@ export interface ImportResult {
  * Uploads a survey file with the chosen options. XMLHttpRequest rather than fetch because only it
  * reports upload progress, which a 50 MB file over a slow link needs.
  */
-function uploadSurvey(projectId: string, file: File, options: SurveyImportOptions, onProgress: (fraction: number) => void): Promise<ImportResult> {
+function uploadSurvey(
+  projectId: string,
+  file: File,
+  options: SurveyImportOptions,
+  onProgress: (fraction: number) => void,
+): Promise<ImportResult> {
   const form = new FormData();
   form.append('file', file, file.name);
   form.append('options', JSON.stringify(options));
@@ -141,7 +183,8 @@ function uploadSurvey(projectId: string, file: File, options: SurveyImportOption
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable && e.total > 0) onProgress(e.loaded / e.total);
     };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'The upload did not reach the server; check the connection and try again'));
+    xhr.onerror = () =>
+      reject(new ApiError(0, 'network', 'The upload did not reach the server; check the connection and try again'));
     xhr.onload = () => {
       let data: unknown = null;
       try {
@@ -151,14 +194,18 @@ function uploadSurvey(projectId: string, file: File, options: SurveyImportOption
       }
       if (xhr.status >= 200 && xhr.status < 300) return resolve(data as ImportResult);
       const err = (data as ApiErrorBody | null)?.error;
-      reject(new ApiError(xhr.status, err?.code ?? 'internal', err?.message ?? `Upload failed (${xhr.status})`, err?.fields));
+      reject(
+        new ApiError(xhr.status, err?.code ?? 'internal', err?.message ?? `Upload failed (${xhr.status})`, err?.fields),
+      );
     };
     xhr.send(form);
   });
 }
 
 export function useImportSurvey(projectId: string) {
-  return useRouteMutation(projectId, (input: { file: File; options: SurveyImportOptions; onProgress: (fraction: number) => void }) =>
-    uploadSurvey(projectId, input.file, input.options, input.onProgress),
+  return useRouteMutation(
+    projectId,
+    (input: { file: File; options: SurveyImportOptions; onProgress: (fraction: number) => void }) =>
+      uploadSurvey(projectId, input.file, input.options, input.onProgress),
   );
 }

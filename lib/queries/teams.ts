@@ -4,13 +4,19 @@ import { fetchJson } from './fetch-json';
 
 export function useCreateTeam() {
   return useMutation({
-    mutationFn: async (name: string) => (await fetchJson<{ team: TeamSummary }>('/api/teams', { method: 'POST', body: { name } })).team,
+    mutationFn: async (name: string) =>
+      (await fetchJson<{ team: TeamSummary }>('/api/teams', { method: 'POST', body: { name } })).team,
   });
 }
 
 export function useRenameTeam(teamId: string) {
   return useMutation({
     mutationFn: async (name: string) =>
-      (await fetchJson<{ team: { id: string; name: string } }>(`/api/teams/${teamId}`, { method: 'PATCH', body: { name } })).team,
+      (
+        await fetchJson<{ team: { id: string; name: string } }>(`/api/teams/${teamId}`, {
+          method: 'PATCH',
+          body: { name },
+        })
+      ).team,
   });
 }

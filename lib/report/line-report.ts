@@ -31,9 +31,15 @@ export interface LineReportInput {
   startGroundM?: number;
   /** Which revision (or the working copy), its status, designer, reviewer and approval. */
   stamp: ReviewStamp;
-  /** Printed as the date and written as the file's creation date; a revision passes its own date so its PDF never changes. */
+  /**
+   * Printed as the date and written as the file's creation date; a revision passes its own date so its PDF never
+   * changes.
+   */
   generatedAt: Date;
-  /** Site photos chosen for the report, in the line's window: marked on the profile and printed with their thumbnails. @default none */
+  /**
+   * Site photos chosen for the report, in the line's window: marked on the profile and printed with their thumbnails.
+   * @default none
+   */
   photos?: readonly ReportPhoto[];
   /** The vertical exaggeration of the profile, as the screen shows it. @default 'auto' (the same on every width) */
   exaggeration?: number | 'auto';
@@ -53,12 +59,38 @@ function windowWords(line: LineRecord, analysis: LineAnalysis, units: ReturnType
 
 /** The report's photos as the drawings mark them (number, label, own position). */
 function chartPhotosOf(photos: readonly ReportPhoto[]): ChartPhoto[] {
-  return photos.map((p) => ({ id: p.id, chainageM: p.chainageM, number: p.number, label: p.caption || p.fileName, latitudeDeg: p.latitude, longitudeDeg: p.longitude }));
+  return photos.map((p) => ({
+    id: p.id,
+    chainageM: p.chainageM,
+    number: p.number,
+    label: p.caption || p.fileName,
+    latitudeDeg: p.latitude,
+    longitudeDeg: p.longitude,
+  }));
 }
 
-/** The report's profile: the screen's drawing at report width and the screen's exaggeration, with the chosen photos marked. */
-export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, unitSystem: UnitSystem, photos: readonly ReportPhoto[] = [], exaggeration: number | 'auto' = 'auto') {
-  return profileScene(analysis, { units: displayUnits(unitSystem), devices: line.design.devices, width: 1000, exaggeration, photos: chartPhotosOf(photos) }, 'report');
+/**
+ * The report's profile: the screen's drawing at report width and the screen's exaggeration, with the chosen photos
+ * marked.
+ */
+export function reportProfileScene(
+  analysis: LineAnalysis,
+  line: LineRecord,
+  unitSystem: UnitSystem,
+  photos: readonly ReportPhoto[] = [],
+  exaggeration: number | 'auto' = 'auto',
+) {
+  return profileScene(
+    analysis,
+    {
+      units: displayUnits(unitSystem),
+      devices: line.design.devices,
+      width: 1000,
+      exaggeration,
+      photos: chartPhotosOf(photos),
+    },
+    'report',
+  );
 }
 
 /**
@@ -66,9 +98,29 @@ export function reportProfileScene(analysis: LineAnalysis, line: LineRecord, uni
  * the screen, with the site photos chosen for it marked), stretch schedule, devices, warnings, the
  * chosen photos, assumptions and cautions. A4 landscape.
  */
-export async function lineReportPdf({ project, line, analysis, context = EMPTY_SITE_CONTEXT, startGroundM, stamp, generatedAt, photos = [], stations = [], exaggeration = 'auto' }: LineReportInput): Promise<Buffer> {
+export async function lineReportPdf({
+  project,
+  line,
+  analysis,
+  context = EMPTY_SITE_CONTEXT,
+  startGroundM,
+  stamp,
+  generatedAt,
+  photos = [],
+  stations = [],
+  exaggeration = 'auto',
+}: LineReportInput): Promise<Buffer> {
   const u = displayUnits(project.unitSystem);
-  const doc = new PDFDocument({ ...PAGE, bufferPages: true, info: { Title: `${line.name}: line design report`, Subject: project.name, Creator: 'Runnel', CreationDate: generatedAt } });
+  const doc = new PDFDocument({
+    ...PAGE,
+    bufferPages: true,
+    info: {
+      Title: `${line.name}: line design report`,
+      Subject: project.name,
+      Creator: 'Runnel',
+      CreationDate: generatedAt,
+    },
+  });
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
   const finished = new Promise<Buffer>((resolve, reject) => {
@@ -76,17 +128,30 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
     doc.on('error', reject);
   });
 
-  doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(pdfText(`${line.name}: line design report`));
-  doc.font('Helvetica').fontSize(9).fillColor('#215d75').text('Runnel \u00b7 gravity line design \u00b7 estimates for review, not a licensed design');
+  doc
+    .font('Helvetica-Bold')
+    .fontSize(16)
+    .fillColor(INK)
+    .text(pdfText(`${line.name}: line design report`));
+  doc
+    .font('Helvetica')
+    .fontSize(9)
+    .fillColor('#215d75')
+    .text('Runnel \u00b7 gravity line design \u00b7 estimates for review, not a licensed design');
   doc.moveDown(0.5);
-  labelGrid(doc, [
-    ['Project', project.name],
-    ['Line', line.name],
-    ['Route', windowWords(line, analysis, u)],
-    ...stampRows(stamp),
-    ['Date', generatedAt.toISOString().slice(0, 10)],
-    ['Units', unitSystemName(u.system)],
-  ], 5, CONTENT_WIDTH);
+  labelGrid(
+    doc,
+    [
+      ['Project', project.name],
+      ['Line', line.name],
+      ['Route', windowWords(line, analysis, u)],
+      ...stampRows(stamp),
+      ['Date', generatedAt.toISOString().slice(0, 10)],
+      ['Units', unitSystemName(u.system)],
+    ],
+    5,
+    CONTENT_WIDTH,
+  );
 
   // The winter findings stand with the line's other items, as on the screen.
   const { winter, warnings } = lineFixItems(analysis, line.design.winter, context, false);
@@ -96,14 +161,20 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   const flowWords = answers.overCapacity
     ? `at most ${formatQuantity('designFlow', answers.capacityM3s, u.system)} (the design flow of ${formatQuantity('designFlow', answers.flowM3s, u.system)} is more than the line carries by gravity)`
     : `${formatQuantity('designFlow', answers.flowM3s, u.system)} (${answers.scheduled ? "at the start, from the network's solve; it drops at each take-off" : answers.flowSource === 'design' ? 'design flow' : 'found by gravity'})`;
-  doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(pdfText(
-    `Flow delivered: ${flowWords}. ` +
-      `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
-      `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u.system, t)} at ch. ${formatQuantity('chainage', answers.worstStatic.chainageM, u.system)} ` +
-      `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u.system, t)}). ` +
-      `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice. ` +
-      (answers.frictionMethod ? FRICTION_WORDS[answers.frictionMethod] : ''),
-  ));
+  doc
+    .font('Helvetica')
+    .fontSize(9.5)
+    .fillColor(INK)
+    .text(
+      pdfText(
+        `Flow delivered: ${flowWords}. ` +
+          `Residual at the end: ${formatHeadPressure(answers.endResidualHeadM, u.system, t)} (wanted ${formatHeadPressure(answers.endTargetHeadM, u.system, t)}). ` +
+          `Worst static pressure: ${formatHeadPressure(answers.worstStatic.headM, u.system, t)} at ch. ${formatQuantity('chainage', answers.worstStatic.chainageM, u.system)} ` +
+          `(${answers.worstStatic.pipeLabel} allows ${formatHeadPressure(answers.worstStatic.allowableHeadM, u.system, t)}). ` +
+          `Warnings: ${answers.counts.danger} danger, ${answers.counts.warning} warning, ${answers.counts.info} advice. ` +
+          (answers.frictionMethod ? FRICTION_WORDS[answers.frictionMethod] : ''),
+      ),
+    );
   doc.moveDown(0.4);
 
   // The whole drawing (axes, chainage title and legend) on the page: scaled to the room left, never cut.
@@ -113,14 +184,28 @@ export async function lineReportPdf({ project, line, analysis, context = EMPTY_S
   doc.addPage();
   if (plan) {
     doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text('Plan of the line');
-    doc.font('Helvetica').fontSize(8.5).fillColor(INK).text(pdfText('North up, equal scale both ways, from the surveyed positions; warning ranges, devices and photos as on the profile.'));
+    doc
+      .font('Helvetica')
+      .fontSize(8.5)
+      .fillColor(INK)
+      .text(
+        pdfText(
+          'North up, equal scale both ways, from the surveyed positions; warning ranges, devices and photos as on the profile.',
+        ),
+      );
     doc.moveDown(0.3);
     drawSceneToFit(doc, svgToString(plan.root), PLAN_SIZE, { minHeight: 200 });
     doc.addPage();
   }
   const feed = ramFeedAnswers(line.design, context, analysis, startGroundM ?? analysis.points.groundElevationM[0]);
   if (feed) liftSection(doc, feed, u, t);
-  if (context.network) networkFeedSection(doc, context.network, { start: line.design.start.kind !== 'ram-site', flow: analysis.flowSchedule !== undefined }, u);
+  if (context.network)
+    networkFeedSection(
+      doc,
+      context.network,
+      { start: line.design.start.kind !== 'ram-site', flow: analysis.flowSchedule !== undefined },
+      u,
+    );
   stretchSchedule(doc, analysis, u);
   deviceList(doc, analysis, line.design.devices, u);
   warningList(doc, withWinter, u);

@@ -13,7 +13,12 @@ const HEADER_Y = 16;
  * than `minHeight` points are left, it starts a new page first. Moves the cursor below the drawing.
  * Returns the scale used (page points per drawing unit).
  */
-export function drawSceneToFit(doc: Doc, svg: string, size: { width: number; height: number }, { minHeight }: { minHeight: number }): number {
+export function drawSceneToFit(
+  doc: Doc,
+  svg: string,
+  size: { width: number; height: number },
+  { minHeight }: { minHeight: number },
+): number {
   const { margins } = doc.page;
   const contentWidth = doc.page.width - margins.left - margins.right;
   const bottom = doc.page.height - margins.bottom;
@@ -47,11 +52,15 @@ export function headEveryPage(doc: Doc, title: string): void {
     // Writing in the margin must not start a new page.
     doc.page.margins = { top: 0, bottom: 0, left: 0, right: 0 };
     // Leaves the right-hand 310 points to the "not for construction" band.
-    doc.font('Helvetica').fontSize(7.5).fillColor('#4b6b78').text(pdfText(title), margins.left, HEADER_Y, {
-      width: doc.page.width - margins.left - margins.right - 310,
-      lineBreak: false,
-      ellipsis: true,
-    });
+    doc
+      .font('Helvetica')
+      .fontSize(7.5)
+      .fillColor('#4b6b78')
+      .text(pdfText(title), margins.left, HEADER_Y, {
+        width: doc.page.width - margins.left - margins.right - 310,
+        lineBreak: false,
+        ellipsis: true,
+      });
     doc.page.margins = margins;
   }
 }

@@ -33,11 +33,23 @@ export function table(doc: Doc, columns: readonly PdfColumn[], givenRows: readon
   const drawHeader = () => {
     const y = doc.y;
     const h = fontSize + 2 * pad + 2;
-    doc.rect(left, y, columns.reduce((s, c) => s + c.width, 0), h).fill(SHADE);
+    doc
+      .rect(
+        left,
+        y,
+        columns.reduce((s, c) => s + c.width, 0),
+        h,
+      )
+      .fill(SHADE);
     let x = left;
     doc.font('Helvetica-Bold').fontSize(fontSize).fillColor(INK);
     for (const c of columns) {
-      doc.text(pdfText(c.heading), x + pad, y + pad, { width: c.width - 2 * pad, align: c.align ?? 'left', lineBreak: false, ellipsis: true });
+      doc.text(pdfText(c.heading), x + pad, y + pad, {
+        width: c.width - 2 * pad,
+        align: c.align ?? 'left',
+        lineBreak: false,
+        ellipsis: true,
+      });
       x += c.width;
     }
     doc.y = y + h;
@@ -59,7 +71,12 @@ export function table(doc: Doc, columns: readonly PdfColumn[], givenRows: readon
       doc.text(cell, x + pad, y + pad, { width: columns[i].width - 2 * pad, align: columns[i].align ?? 'left' });
       x += columns[i].width;
     });
-    doc.moveTo(left, y + h).lineTo(x, y + h).lineWidth(0.5).strokeColor(RULE).stroke();
+    doc
+      .moveTo(left, y + h)
+      .lineTo(x, y + h)
+      .lineWidth(0.5)
+      .strokeColor(RULE)
+      .stroke();
     doc.y = y + h;
   }
   doc.x = left;
@@ -76,9 +93,20 @@ export function labelGrid(doc: Doc, cells: readonly [string, string][], columns:
     const x = left + (i % columns) * cellWidth;
     const y = top + Math.floor(i / columns) * rowHeight;
     doc.rect(x, y, cellWidth, rowHeight).lineWidth(0.7).strokeColor(INK).stroke();
-    doc.font('Helvetica').fontSize(7).fillColor('#215d75').text(pdfText(label.toUpperCase()), x + 5, y + 4, { width: cellWidth - 10, height: 9, ellipsis: true });
+    doc
+      .font('Helvetica')
+      .fontSize(7)
+      .fillColor('#215d75')
+      .text(pdfText(label.toUpperCase()), x + 5, y + 4, { width: cellWidth - 10, height: 9, ellipsis: true });
     const fits = doc.font('Helvetica-Bold').fontSize(10).widthOfString(pdfText(value)) <= cellWidth - 10;
-    doc.fontSize(fits ? 10 : 8).fillColor(INK).text(pdfText(value), x + 5, y + (fits ? 14 : 13), { width: cellWidth - 10, height: fits ? 12 : 20, ellipsis: true });
+    doc
+      .fontSize(fits ? 10 : 8)
+      .fillColor(INK)
+      .text(pdfText(value), x + 5, y + (fits ? 14 : 13), {
+        width: cellWidth - 10,
+        height: fits ? 12 : 20,
+        ellipsis: true,
+      });
   });
   doc.x = left;
   doc.y = top + Math.ceil(cells.length / columns) * rowHeight + 8;

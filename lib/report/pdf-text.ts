@@ -4,7 +4,20 @@
  * maths signs outside it (σ, ≈, −, →); they are written out so no glyph prints as garbage.
  */
 const SPELLED: Record<string, string> = {
-  σ: 'sigma', ε: 'epsilon', ν: 'nu', ρ: 'rho', Δ: 'delta', '≈': '~', '≤': '<=', '≥': '>=', '−': '-', '→': '->', '√': 'sqrt', '₁': '1', '₂': '2', '∞': 'infinity',
+  σ: 'sigma',
+  ε: 'epsilon',
+  ν: 'nu',
+  ρ: 'rho',
+  Δ: 'delta',
+  '≈': '~',
+  '≤': '<=',
+  '≥': '>=',
+  '−': '-',
+  '→': '->',
+  '√': 'sqrt',
+  '₁': '1',
+  '₂': '2',
+  '∞': 'infinity',
 };
 
 /** Characters WinAnsi (code page 1252) can show beyond Latin-1. */

@@ -43,14 +43,24 @@ export function photoSection(doc: Doc, photos: readonly ReportPhoto[], u: Displa
     const top = doc.y;
     photos.slice(start, start + PER_ROW).forEach((p, k) => {
       const x = left + k * (cell + GAP);
-      if (p.thumbnail) doc.image(Buffer.from(p.thumbnail), x, top, { fit: [cell, IMAGE_HEIGHT], align: 'center', valign: 'center' });
-      else doc.font('Helvetica').fontSize(8).fillColor(INK).text('(image no longer stored)', x, top + IMAGE_HEIGHT / 2, { width: cell, align: 'center' });
+      if (p.thumbnail)
+        doc.image(Buffer.from(p.thumbnail), x, top, { fit: [cell, IMAGE_HEIGHT], align: 'center', valign: 'center' });
+      else
+        doc
+          .font('Helvetica')
+          .fontSize(8)
+          .fillColor(INK)
+          .text('(image no longer stored)', x, top + IMAGE_HEIGHT / 2, { width: cell, align: 'center' });
       const lines = [
         `Photo ${p.number} \u00b7 ${formatQuantity('chainage', p.chainageM, u.system)}`,
         p.caption || p.fileName,
         `Taken ${takenWords(p.takenAt)}; ${offLineWords(p, u.system)}`,
       ];
-      doc.font('Helvetica-Bold').fontSize(8.5).fillColor(INK).text(pdfText(lines[0]), x, top + IMAGE_HEIGHT + 4, { width: cell });
+      doc
+        .font('Helvetica-Bold')
+        .fontSize(8.5)
+        .fillColor(INK)
+        .text(pdfText(lines[0]), x, top + IMAGE_HEIGHT + 4, { width: cell });
       doc.font('Helvetica').fontSize(8).text(pdfText(lines[1]), { width: cell, height: 20, ellipsis: true });
       doc.text(pdfText(lines[2]), { width: cell, height: 20, ellipsis: true });
     });

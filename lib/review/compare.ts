@@ -41,7 +41,9 @@ export interface RevisionComparison {
   cost: { before: DesignCost | null; after: DesignCost | null; difference: number | null };
   /** Residual pressure head at each network outlet in each revision's frozen peak-hour solve. */
   outlets: OutletPressureChange[];
-  /** Why a side has no outlet pressures (no network, not solved, made before solves were frozen); null when it has them. */
+  /**
+   * Why a side has no outlet pressures (no network, not solved, made before solves were frozen); null when it has them.
+   */
   outletsMissing: { before: string | null; after: string | null };
 }
 
@@ -57,7 +59,8 @@ export interface OutletPressureChange {
 }
 
 const KEY_DECIMALS = 100;
-const sameNumber = (a: number | null, b: number | null) => (a === null || b === null ? a === b : Math.abs(a - b) < 1e-6);
+const sameNumber = (a: number | null, b: number | null) =>
+  a === null || b === null ? a === b : Math.abs(a - b) < 1e-6;
 
 function pipeRuns(a: LineAnalysis | null): { fromM: number; toM: number; label: string }[] {
   return a ? a.stretches.map((s) => ({ fromM: s.fromM, toM: s.toM, label: s.pipe.label })) : [];
@@ -90,12 +93,21 @@ export function deviceChanges(before: readonly LineDevice[], after: readonly Lin
   const was = new Set(before.map(deviceKey));
   const now = new Set(after.map(deviceKey));
   return [
-    ...before.filter((d) => !now.has(deviceKey(d))).map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'removed' as const })),
-    ...after.filter((d) => !was.has(deviceKey(d))).map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'added' as const })),
+    ...before
+      .filter((d) => !now.has(deviceKey(d)))
+      .map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'removed' as const })),
+    ...after
+      .filter((d) => !was.has(deviceKey(d)))
+      .map((d) => ({ kind: d.kind, chainageM: d.chainageM, change: 'added' as const })),
   ].sort((x, y) => x.chainageM - y.chainageM);
 }
 
-function compareLine(before: SnapshotLine | null, after: SnapshotLine | null, ab: LineAnalysis | null, aa: LineAnalysis | null): LineComparison {
+function compareLine(
+  before: SnapshotLine | null,
+  after: SnapshotLine | null,
+  ab: LineAnalysis | null,
+  aa: LineAnalysis | null,
+): LineComparison {
   const outlet = (a: LineAnalysis | null) => (a ? lineAnswers(a).endResidualHeadM : null);
   const result: LineComparison = {
     lineId: (after ?? before)!.id,
@@ -107,14 +119,21 @@ function compareLine(before: SnapshotLine | null, after: SnapshotLine | null, ab
     flowM3s: { before: ab?.flowM3s ?? null, after: aa?.flowM3s ?? null },
   };
   if (result.change === 'unchanged') {
-    const designMoved = JSON.stringify(before!.design) !== JSON.stringify(after!.design) || JSON.stringify(before!.stations) !== JSON.stringify(after!.stations);
-    const figuresMoved = !sameNumber(result.outletHeadM.before, result.outletHeadM.after) || !sameNumber(result.flowM3s.before, result.flowM3s.after);
+    const designMoved =
+      JSON.stringify(before!.design) !== JSON.stringify(after!.design) ||
+      JSON.stringify(before!.stations) !== JSON.stringify(after!.stations);
+    const figuresMoved =
+      !sameNumber(result.outletHeadM.before, result.outletHeadM.after) ||
+      !sameNumber(result.flowM3s.before, result.flowM3s.after);
     if (designMoved || figuresMoved || result.pipes.length > 0 || result.devices.length > 0) result.change = 'changed';
   }
   return result;
 }
 
-function compareNamed<T extends { id: string; name?: string; label?: string }>(before: readonly T[], after: readonly T[]) {
+function compareNamed<T extends { id: string; name?: string; label?: string }>(
+  before: readonly T[],
+  after: readonly T[],
+) {
   const name = (x: T) => x.name ?? x.label ?? x.id;
   const was = new Map(before.map((x) => [x.id, x]));
   const now = new Map(after.map((x) => [x.id, x]));
@@ -137,12 +156,27 @@ function outletsMissing(snapshot: DesignSnapshot): string | null {
   return snapshot.networkSolve.ok ? null : `the network did not solve: ${snapshot.networkSolve.problem}`;
 }
 
-function outletPressures(snapshot: DesignSnapshot): Map<string, { name: string; headM: number | null; minimumM: number | null }> {
-  const solved = snapshot.networkSolve?.ok ? new Map(snapshot.networkSolve.result.nodes.map((n) => [n.nodeId, n])) : null;
-  return new Map((snapshot.network?.nodes ?? []).filter((n) => n.kind === 'outlet').map((n) => {
-    const result = solved?.get(n.id);
-    return [n.id, { name: n.name, headM: result?.pressureHeadM ?? null, minimumM: result?.minPressureHeadM ?? n.data.residualHeadM ?? null }];
-  }));
+function outletPressures(
+  snapshot: DesignSnapshot,
+): Map<string, { name: string; headM: number | null; minimumM: number | null }> {
+  const solved = snapshot.networkSolve?.ok
+    ? new Map(snapshot.networkSolve.result.nodes.map((n) => [n.nodeId, n]))
+    : null;
+  return new Map(
+    (snapshot.network?.nodes ?? [])
+      .filter((n) => n.kind === 'outlet')
+      .map((n) => {
+        const result = solved?.get(n.id);
+        return [
+          n.id,
+          {
+            name: n.name,
+            headM: result?.pressureHeadM ?? null,
+            minimumM: result?.minPressureHeadM ?? n.data.residualHeadM ?? null,
+          },
+        ];
+      }),
+  );
 }
 
 /** Each network outlet's residual pressure head in the two frozen solves, outlets in the later revision first. */
@@ -154,7 +188,14 @@ export function compareOutlets(before: DesignSnapshot, after: DesignSnapshot): O
     const a = was.get(nodeId);
     const b = now.get(nodeId);
     const change = !a ? 'added' : !b ? 'removed' : sameNumber(a.headM, b.headM) ? 'unchanged' : 'changed';
-    return { nodeId, name: (b ?? a)!.name, before: a?.headM ?? null, after: b?.headM ?? null, minimumM: (b ?? a)!.minimumM, change };
+    return {
+      nodeId,
+      name: (b ?? a)!.name,
+      before: a?.headM ?? null,
+      after: b?.headM ?? null,
+      minimumM: (b ?? a)!.minimumM,
+      change,
+    };
   });
 }
 
@@ -163,7 +204,10 @@ function analysesOf(snapshot: DesignSnapshot): Map<string, LineAnalysis | null> 
   return new Map(snapshot.lines.map((line) => [line.id, analyseSnapshotLine(line)]));
 }
 
-/** What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram sites, demand, the network, its outlet pressures and the pipe cost. */
+/**
+ * What changed from `before` to `after`: lines (pipes, sizes and classes, devices, outlet pressure, flow), tanks, ram
+ * sites, demand, the network, its outlet pressures and the pipe cost.
+ */
 export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot): RevisionComparison {
   const ids = [...new Set([...before.lines.map((l) => l.id), ...after.lines.map((l) => l.id)])];
   const find = (s: DesignSnapshot, id: string) => s.lines.find((l) => l.id === id) ?? null;
@@ -172,13 +216,19 @@ export function compareSnapshots(before: DesignSnapshot, after: DesignSnapshot):
   const costBefore = designCost(before, analysedBefore);
   const costAfter = designCost(after, analysedAfter);
   return {
-    lines: ids.map((id) => compareLine(find(before, id), find(after, id), analysedBefore.get(id) ?? null, analysedAfter.get(id) ?? null)),
+    lines: ids.map((id) =>
+      compareLine(find(before, id), find(after, id), analysedBefore.get(id) ?? null, analysedAfter.get(id) ?? null),
+    ),
     tanks: compareNamed(before.lift.tanks, after.lift.tanks),
     ramSites: compareNamed(before.lift.ramSites, after.lift.ramSites),
     demandUses: compareNamed(before.lift.demandUses, after.lift.demandUses),
     networkNodes: compareNamed((before.network?.nodes ?? []).map(named), (after.network?.nodes ?? []).map(named)),
     networkLinks: compareNamed((before.network?.links ?? []).map(named), (after.network?.links ?? []).map(named)),
-    cost: { before: costBefore, after: costAfter, difference: costBefore && costAfter ? costAfter.total - costBefore.total : null },
+    cost: {
+      before: costBefore,
+      after: costAfter,
+      difference: costBefore && costAfter ? costAfter.total - costBefore.total : null,
+    },
     outlets: compareOutlets(before, after),
     outletsMissing: { before: outletsMissing(before), after: outletsMissing(after) },
   };

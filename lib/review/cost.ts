@@ -28,7 +28,10 @@ export interface DesignCost {
  * each at the price per metre of the price list the revision froze. Null when the revision froze no
  * price list (it was made before prices were part of a revision).
  */
-export function designCost(snapshot: DesignSnapshot, analyses: ReadonlyMap<string, LineAnalysis | null>): DesignCost | null {
+export function designCost(
+  snapshot: DesignSnapshot,
+  analyses: ReadonlyMap<string, LineAnalysis | null>,
+): DesignCost | null {
   if (!snapshot.networkBasis) return null;
   const price = new Map(snapshot.networkBasis.prices.map((p) => [p.pipeId, p.costPerM]));
   const laid = new Map<string, { label: string; lengthM: number }>();

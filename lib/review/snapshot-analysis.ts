@@ -2,7 +2,10 @@ import { analyzeLine, type LineAnalysis } from '../../hydraulics/index';
 import { lineInputOf } from '../lines/line-input';
 import type { DesignSnapshot, SnapshotLine } from './snapshot-types';
 
-/** A frozen line's analysis: the same core on the same frozen input, so it reads the same every time. Null when the line could not be frozen with stations. */
+/**
+ * A frozen line's analysis: the same core on the same frozen input, so it reads the same every time. Null when the line
+ * could not be frozen with stations.
+ */
 export function analyseSnapshotLine(line: SnapshotLine): LineAnalysis | null {
   if (line.problem || line.stations.length < 2) return null;
   return analyzeLine(lineInputOf(line.design, line.stations, line.context));
@@ -19,6 +22,7 @@ export function snapshotPartNames(snapshot: DesignSnapshot): Map<string, string>
     names.set(line.id, line.name);
     if (line.routeId && line.routeName) names.set(line.routeId, line.routeName);
   }
-  for (const part of [...(snapshot.network?.nodes ?? []), ...(snapshot.network?.links ?? [])]) names.set(part.id, part.name);
+  for (const part of [...(snapshot.network?.nodes ?? []), ...(snapshot.network?.links ?? [])])
+    names.set(part.id, part.name);
   return names;
 }

@@ -16,7 +16,13 @@ export function networkContextOfSnapshot(snapshot: DesignSnapshot): NetworkConte
     records: network,
     lines: snapshot.lines
       .filter((line) => linked.has(line.id) && line.routeId !== null && line.stations.length > 0)
-      .map((line) => ({ id: line.id, name: line.name, routeId: line.routeId, design: line.design, stations: line.stations })),
+      .map((line) => ({
+        id: line.id,
+        name: line.name,
+        routeId: line.routeId,
+        design: line.design,
+        stations: line.stations,
+      })),
     tanks: snapshot.lift.tanks,
     demandUses: snapshot.lift.demandUses,
     ...networkBasis,
@@ -35,7 +41,10 @@ export function snapshotNetworkView(snapshot: DesignSnapshot): NetworkView | nul
     projectId: network.projectId,
     unitSystem: snapshot.project.unitSystem,
     records: network,
-    lines: snapshot.lines.filter((line) => linked.has(line.id)).map((line) => lineSummaryOf(line, line.stations)).filter((line): line is NetworkLineSummary => line !== null),
+    lines: snapshot.lines
+      .filter((line) => linked.has(line.id))
+      .map((line) => lineSummaryOf(line, line.stations))
+      .filter((line): line is NetworkLineSummary => line !== null),
     tanks: snapshot.lift.tanks,
     ramSites: snapshot.lift.ramSites.map(({ id, name }) => ({ id, name })),
     waterSources: snapshot.lift.sources.map(({ id, name }) => ({ id, name })),

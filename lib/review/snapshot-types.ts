@@ -7,7 +7,10 @@ import type { LineRouteStation } from '../lines/route-stations';
 import type { LineDesign } from '../validations/line-design';
 import type { UnitSystem } from '../units/index';
 
-/** One line as a revision froze it: its design, the route's cleaned stations it followed, and what its analysis read from the rest of the project. */
+/**
+ * One line as a revision froze it: its design, the route's cleaned stations it followed, and what its analysis read
+ * from the rest of the project.
+ */
 export interface SnapshotLine {
   id: string;
   name: string;
@@ -17,7 +20,9 @@ export interface SnapshotLine {
   fromChainageM: number | null;
   toChainageM: number | null;
   design: LineDesign;
-  /** The route's cleaned stations inside the line's window; empty when the route could not give them (see `problem`). */
+  /**
+   * The route's cleaned stations inside the line's window; empty when the route could not give them (see `problem`).
+   */
   stations: LineRouteStation[];
   context: LineSiteContext;
   problem: string | null;
@@ -34,7 +39,10 @@ export interface DesignSnapshot {
   lift: Pick<LiftRecords, 'sources' | 'yieldReadings' | 'ramSites' | 'tanks' | 'demandUses'>;
   /** The network (nodes, links, which outlet each demand use feeds); absent in revisions made before it existed. */
   network?: NetworkRecords;
-  /** What the network's solve read beyond the records (planned ram outlets, design yields, the team's price list in force); absent in older revisions. */
+  /**
+   * What the network's solve read beyond the records (planned ram outlets, design yields, the team's price list in
+   * force); absent in older revisions.
+   */
   networkBasis?: NetworkBasis;
   /**
    * The network solved at the peak hour from this snapshot when the revision was made (on a worker

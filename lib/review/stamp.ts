@@ -49,7 +49,11 @@ export function revisionStamp(revision: {
     reviewer: revision.reviewerName,
     approvedOn: approved && revision.reviewedAt ? revision.reviewedAt.slice(0, 10) : null,
     forConstruction,
-    markReason: forConstruction ? null : revision.status === 'superseded' ? 'superseded by a later revision' : `${REVISION_STATUS_LABELS[revision.status].toLowerCase()}, not approved`,
+    markReason: forConstruction
+      ? null
+      : revision.status === 'superseded'
+        ? 'superseded by a later revision'
+        : `${REVISION_STATUS_LABELS[revision.status].toLowerCase()}, not approved`,
   };
 }
 

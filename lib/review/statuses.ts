@@ -1,5 +1,12 @@
 /** Where a revision stands in the review cycle. Client-safe: screens and the server share the words. */
-export const REVISION_STATUSES = ['draft', 'submitted', 'changes-requested', 'approved', 'issued', 'superseded'] as const;
+export const REVISION_STATUSES = [
+  'draft',
+  'submitted',
+  'changes-requested',
+  'approved',
+  'issued',
+  'superseded',
+] as const;
 export type RevisionStatus = (typeof REVISION_STATUSES)[number];
 
 export const REVISION_STATUS_LABELS: Record<RevisionStatus, string> = {

@@ -5,7 +5,9 @@ import type { CommentRecord } from './comment-types';
 export interface CommentThread {
   thread: CommentRecord;
   replies: CommentRecord[];
-  /** Number drawn in the thread's pin (on a profile or the schematic); null when the thread has no pin in this scope. */
+  /**
+   * Number drawn in the thread's pin (on a profile or the schematic); null when the thread has no pin in this scope.
+   */
   pin: string | null;
 }
 
@@ -13,7 +15,8 @@ export interface CommentThread {
  * What a screen lists: threads pinned on one line's profile, one route's profile or the network
  * schematic (these get numbered pins), and threads on the whole project (listed, never pinned).
  */
-export type ThreadScope = { kind: 'line'; lineId: string } | { kind: 'route'; routeId: string } | { kind: 'network' } | { kind: 'project' };
+export type ThreadScope =
+  { kind: 'line'; lineId: string } | { kind: 'route'; routeId: string } | { kind: 'network' } | { kind: 'project' };
 
 /** Chainage a comment is pinned at on `lineId`, or null. */
 export function pinChainage(comment: Pick<CommentRecord, 'anchor'>, lineId: string | null): number | null {
@@ -52,7 +55,12 @@ function pinned(anchor: CommentAnchor, scope: ThreadScope): boolean {
  * gets a number, one on the whole project is listed unnumbered when the project scope is asked for;
  * `listAll` keeps every other thread too (other lines, routes), unnumbered.
  */
-export function threadsOf(comments: readonly CommentRecord[], revisionId: string | null, scopes: readonly ThreadScope[], listAll = false): CommentThread[] {
+export function threadsOf(
+  comments: readonly CommentRecord[],
+  revisionId: string | null,
+  scopes: readonly ThreadScope[],
+  listAll = false,
+): CommentThread[] {
   const mine = comments.filter((c) => c.revisionId === revisionId);
   const listed = (c: CommentRecord) => scopes.some((scope) => pinned(c.anchor, scope));
   const hasPin = (c: CommentRecord) => scopes.some((scope) => scope.kind !== 'project' && pinned(c.anchor, scope));
@@ -67,10 +75,16 @@ export function threadsOf(comments: readonly CommentRecord[], revisionId: string
 }
 
 /** Pins on a long profile: `at` gives each thread's chainage there (a line's or a route's), or null. */
-export function pinsOf(threads: readonly CommentThread[], at: (comment: CommentRecord) => number | null, selectedId: string | null): ProfilePin[] {
+export function pinsOf(
+  threads: readonly CommentThread[],
+  at: (comment: CommentRecord) => number | null,
+  selectedId: string | null,
+): ProfilePin[] {
   return threads.flatMap(({ thread, pin }) => {
     const c = at(thread);
-    return c === null || pin === null ? [] : [{ id: thread.id, chainageM: c, label: pin, resolved: thread.resolved, selected: thread.id === selectedId }];
+    return c === null || pin === null
+      ? []
+      : [{ id: thread.id, chainageM: c, label: pin, resolved: thread.resolved, selected: thread.id === selectedId }];
   });
 }
 
@@ -87,6 +101,8 @@ export interface NetworkPin {
 export function networkPinsOf(threads: readonly CommentThread[], selectedId: string | null): NetworkPin[] {
   return threads.flatMap(({ thread, pin }) => {
     const part = networkPart(thread);
-    return part === null || pin === null ? [] : [{ id: thread.id, ...part, label: pin, resolved: thread.resolved, selected: thread.id === selectedId }];
+    return part === null || pin === null
+      ? []
+      : [{ id: thread.id, ...part, label: pin, resolved: thread.resolved, selected: thread.id === selectedId }];
   });
 }

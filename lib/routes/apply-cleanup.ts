@@ -23,16 +23,23 @@ export interface CleanupDecisions {
  * rejected findings of the automatic checks are remembered so they are not proposed again.
  * A proposal made on heights that have since changed is refused as a conflict.
  */
-export function applyCleanupDecisions(points: readonly RoutePointView[], decisions: CleanupDecisions): RoutePointView[] {
+export function applyCleanupDecisions(
+  points: readonly RoutePointView[],
+  decisions: CleanupDecisions,
+): RoutePointView[] {
   const bySeq = new Map(points.map((p, i) => [p.seq, i]));
   const out = points.map((p) => ({ ...p, dismissedChecks: [...p.dismissedChecks] }));
   const touched = new Map<number, 'accept' | 'reject'>();
   const heightSet = new Set<number>();
   const locate = (c: ProposedChange, verb: 'accept' | 'reject') => {
     const i = bySeq.get(c.index);
-    if (i === undefined) throw new RouteEditError('index', `there is no point ${c.index + 1} on this route`, { pointNumber: c.index + 1 });
+    if (i === undefined)
+      throw new RouteEditError('index', `there is no point ${c.index + 1} on this route`, { pointNumber: c.index + 1 });
     const other = touched.get(c.index);
-    if (other && other !== verb) throw new RouteEditError('index', 'a proposal for this point is both accepted and rejected', { pointNumber: c.index + 1 });
+    if (other && other !== verb)
+      throw new RouteEditError('index', 'a proposal for this point is both accepted and rejected', {
+        pointNumber: c.index + 1,
+      });
     touched.set(c.index, verb);
     return i;
   };
@@ -40,18 +47,26 @@ export function applyCleanupDecisions(points: readonly RoutePointView[], decisio
     const i = locate(c, 'accept');
     const p = out[i];
     if (p.excluded) {
-      throw new RouteEditError('index', 'this point is already out of the cleaned profile; reload the route', { pointNumber: i + 1, kind: 'conflict' });
+      throw new RouteEditError('index', 'this point is already out of the cleaned profile; reload the route', {
+        pointNumber: i + 1,
+        kind: 'conflict',
+      });
     }
     if (c.field === 'deleted') {
       p.excluded = true;
       continue;
     }
-    if (heightSet.has(i)) throw new RouteEditError('index', 'two height changes for one point; accept only one', { pointNumber: i + 1 });
+    if (heightSet.has(i))
+      throw new RouteEditError('index', 'two height changes for one point; accept only one', { pointNumber: i + 1 });
     if (Math.abs(points[i].elevationM - c.from) > SAME_HEIGHT_M) {
-      throw new RouteEditError('from', `the height changed to ${points[i].elevationM.toFixed(2)} m since this was proposed (from ${c.from.toFixed(2)} m); reload the route`, {
-        pointNumber: i + 1,
-        kind: 'conflict',
-      });
+      throw new RouteEditError(
+        'from',
+        `the height changed to ${points[i].elevationM.toFixed(2)} m since this was proposed (from ${c.from.toFixed(2)} m); reload the route`,
+        {
+          pointNumber: i + 1,
+          kind: 'conflict',
+        },
+      );
     }
     heightSet.add(i);
     p.elevationM = c.to;

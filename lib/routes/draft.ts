@@ -74,9 +74,15 @@ export function draftReducer(state: DraftState, action: DraftAction): DraftState
     case 'reset':
       return draftFromPoints(action.points);
     case 'edit':
-      return commit(state, state.points.map((p) => (p.key === action.key ? { ...p, ...action.patch } : p)));
+      return commit(
+        state,
+        state.points.map((p) => (p.key === action.key ? { ...p, ...action.patch } : p)),
+      );
     case 'delete':
-      return commit(state, state.points.filter((p) => p.key !== action.key));
+      return commit(
+        state,
+        state.points.filter((p) => p.key !== action.key),
+      );
     case 'move': {
       const i = state.points.findIndex((p) => p.key === action.key);
       const j = i + action.by;
@@ -96,12 +102,26 @@ export function draftReducer(state: DraftState, action: DraftAction): DraftState
       return draftReducer(state, {
         type: 'insert',
         at: at < 0 ? state.points.length : at,
-        point: { latitude: null, longitude: null, chainageM: action.chainageM, elevationM: action.elevationM, label: null, heightSource: action.heightSource, confidenceM: null, excluded: false },
+        point: {
+          latitude: null,
+          longitude: null,
+          chainageM: action.chainageM,
+          elevationM: action.elevationM,
+          label: null,
+          heightSource: action.heightSource,
+          confidenceM: null,
+          excluded: false,
+        },
       });
     }
     case 'undo': {
       if (state.past.length === 0) return state;
-      return { ...state, points: state.past[state.past.length - 1], past: state.past.slice(0, -1), dirty: state.past.length > 1 || state.historyCut };
+      return {
+        ...state,
+        points: state.past[state.past.length - 1],
+        past: state.past.slice(0, -1),
+        dirty: state.past.length > 1 || state.historyCut,
+      };
     }
   }
 }

@@ -30,7 +30,12 @@ function toRecords(stations: readonly Station[]): PointRecord[] {
   return stations.map((s) => {
     if (s.record) {
       previous = s.record;
-      return { ...s.record, chainageM: s.chainageM, latitude: s.latitudeDeg ?? null, longitude: s.longitudeDeg ?? null };
+      return {
+        ...s.record,
+        chainageM: s.chainageM,
+        latitude: s.latitudeDeg ?? null,
+        longitude: s.longitudeDeg ?? null,
+      };
     }
     return newPointRecord({
       latitude: s.latitudeDeg ?? null,
@@ -60,11 +65,19 @@ export interface SplitPoints {
 /** Splits at a chainage inside the route; both parts share the split station. */
 export function splitPoints(points: readonly RoutePointView[], chainageM: number): SplitPoints {
   const r = splitRoute(toStations(points), { chainageM });
-  return { first: toRecords(r.first), second: toRecords(r.second), splitStationInterpolated: r.splitStationInterpolated };
+  return {
+    first: toRecords(r.first),
+    second: toRecords(r.second),
+    splitStationInterpolated: r.splitStationInterpolated,
+  };
 }
 
 /** Keeps the part between two chainages, chainage restarting at 0. */
-export function trimPoints(points: readonly RoutePointView[], fromChainageM: number, toChainageM: number): PointRecord[] {
+export function trimPoints(
+  points: readonly RoutePointView[],
+  fromChainageM: number,
+  toChainageM: number,
+): PointRecord[] {
   return toRecords(trimRoute(toStations(points), { fromChainageM, toChainageM }));
 }
 
@@ -75,7 +88,11 @@ export interface JoinedPoints {
 }
 
 /** `second` joined onto the end of `first`; the gap defaults to the distance between the ends. */
-export function joinPoints(first: readonly RoutePointView[], second: readonly RoutePointView[], gapM?: number): JoinedPoints {
+export function joinPoints(
+  first: readonly RoutePointView[],
+  second: readonly RoutePointView[],
+  gapM?: number,
+): JoinedPoints {
   const r = joinRoutes(toStations(first), toStations(second), gapM === undefined ? {} : { gapM });
   return { points: toRecords(r.stations), gapM: r.gapM, heightStepM: r.heightStepM };
 }

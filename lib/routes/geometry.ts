@@ -33,7 +33,13 @@ export function computeRouteGeometry<T extends GeometryInput>(points: readonly T
   const slope = new Array<number>(points.length);
   if (positioned) {
     if (kept.length > 0) {
-      const track = chainageAlongTrack(kept.map(({ p }) => ({ latitudeDeg: p.latitude as number, longitudeDeg: p.longitude as number, elevationM: p.elevationM })));
+      const track = chainageAlongTrack(
+        kept.map(({ p }) => ({
+          latitudeDeg: p.latitude as number,
+          longitudeDeg: p.longitude as number,
+          elevationM: p.elevationM,
+        })),
+      );
       kept.forEach(({ i }, k) => {
         chainage[i] = track.horizontalChainageM[k];
         slope[i] = track.slopeChainageM[k];
@@ -42,16 +48,24 @@ export function computeRouteGeometry<T extends GeometryInput>(points: readonly T
   } else {
     points.forEach((p, i) => {
       if (p.chainageM === null) {
-        throw new RouteEditError('chainageM', 'needs a chainage (or every point needs a latitude and longitude)', { pointNumber: i + 1 });
+        throw new RouteEditError('chainageM', 'needs a chainage (or every point needs a latitude and longitude)', {
+          pointNumber: i + 1,
+        });
       }
     });
     let previous: { chainageM: number; elevationM: number; slopeM: number; n: number } | null = null;
     for (const { p, i } of kept) {
       const c = p.chainageM as number;
       if (previous && c < previous.chainageM) {
-        throw new RouteEditError('chainageM', `chainage ${c.toFixed(2)} m is less than ${previous.chainageM.toFixed(2)} m at point ${previous.n}; points must run in order along the route`, { pointNumber: i + 1 });
+        throw new RouteEditError(
+          'chainageM',
+          `chainage ${c.toFixed(2)} m is less than ${previous.chainageM.toFixed(2)} m at point ${previous.n}; points must run in order along the route`,
+          { pointNumber: i + 1 },
+        );
       }
-      const slopeM: number = previous ? previous.slopeM + Math.hypot(c - previous.chainageM, p.elevationM - previous.elevationM) : 0;
+      const slopeM: number = previous
+        ? previous.slopeM + Math.hypot(c - previous.chainageM, p.elevationM - previous.elevationM)
+        : 0;
       chainage[i] = c;
       slope[i] = slopeM;
       previous = { chainageM: c, elevationM: p.elevationM, slopeM, n: i + 1 };
@@ -64,7 +78,11 @@ export function computeRouteGeometry<T extends GeometryInput>(points: readonly T
       lastC = chainage[i];
       lastS = slope[i];
     }
-    return { ...p, chainageM: p.excluded ? (positioned ? lastC : (p.chainageM as number)) : chainage[i], slopeChainageM: p.excluded ? lastS : slope[i] };
+    return {
+      ...p,
+      chainageM: p.excluded ? (positioned ? lastC : (p.chainageM as number)) : chainage[i],
+      slopeChainageM: p.excluded ? lastS : slope[i],
+    };
   });
   const first = kept[0];
   const last = kept[kept.length - 1];

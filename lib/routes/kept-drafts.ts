@@ -14,7 +14,9 @@ export function keepDraft(routeId: string, baseUpdatedAt: string, state: DraftSt
   else kept.delete(routeId);
 }
 
-/** Where the kept edits of a route are (the seq their page starts at), so the page opens there again; null when none. */
+/**
+ * Where the kept edits of a route are (the seq their page starts at), so the page opens there again; null when none.
+ */
 export function keptDraftOffset(routeId: string): number | null {
   return kept.get(routeId)?.offset ?? null;
 }

@@ -4,7 +4,10 @@ import type { PointRecord } from './edit-ops';
 /** What a new point is given; the rest follows from it being new. */
 export type NewPointFields = Omit<PointRecord, 'rawElevationM' | 'excluded' | 'dismissedChecks'>;
 
-/** A point that enters a route: its height is both the surveyed and the cleaned one, it is kept and no check is dismissed yet. */
+/**
+ * A point that enters a route: its height is both the surveyed and the cleaned one, it is kept and no check is
+ * dismissed yet.
+ */
 export function newPointRecord(fields: NewPointFields): PointRecord {
   // Field by field, not by spreading: an import makes one per point of a 100,000-point file.
   return {

@@ -15,7 +15,11 @@ export const ROUTE_PROFILE_POINTS = 1500;
  * (`surveyHeightScatterM` of the points' stated confidence) is kept; the smaller ones are that
  * scatter, and keeping them would keep most of a walked GPS route.
  */
-export function thinRouteProfile<T extends ProfilePoint>(points: readonly T[], confidence: readonly HeightConfidence[], targetPoints = ROUTE_PROFILE_POINTS): T[] {
+export function thinRouteProfile<T extends ProfilePoint>(
+  points: readonly T[],
+  confidence: readonly HeightConfidence[],
+  targetPoints = ROUTE_PROFILE_POINTS,
+): T[] {
   return thinPoints(points, routeThinOptions(surveyHeightScatterM(confidence), targetPoints));
 }
 
@@ -37,8 +41,14 @@ export function routeProfileSeries(points: readonly PlacedPoint[]): { raw: Profi
   const surveyed = placed.filter((p) => p.rawElevationM !== null);
   const kept = placed.filter((p) => !p.excluded);
   return {
-    raw: thinRouteProfile(surveyed.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })), surveyed),
-    cleaned: thinRouteProfile(kept.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })), kept),
+    raw: thinRouteProfile(
+      surveyed.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.rawElevationM as number })),
+      surveyed,
+    ),
+    cleaned: thinRouteProfile(
+      kept.map((p) => ({ chainageM: p.chainageM as number, elevationM: p.elevationM })),
+      kept,
+    ),
   };
 }
 
@@ -47,7 +57,12 @@ export function routeProfileSeries(points: readonly PlacedPoint[]): { raw: Profi
  * within the page's stored chainage span give way to the page's own (thinned) points, so an edit
  * shows on the chart before it is saved.
  */
-export function withPageEdits(profile: readonly ProfilePoint[], span: { fromM: number; toM: number } | null, page: readonly ProfilePoint[]): ProfilePoint[] {
-  const outside = span === null ? [...profile] : profile.filter((p) => p.chainageM < span.fromM || p.chainageM > span.toM);
+export function withPageEdits(
+  profile: readonly ProfilePoint[],
+  span: { fromM: number; toM: number } | null,
+  page: readonly ProfilePoint[],
+): ProfilePoint[] {
+  const outside =
+    span === null ? [...profile] : profile.filter((p) => p.chainageM < span.fromM || p.chainageM > span.toM);
   return [...outside, ...page].sort((a, b) => a.chainageM - b.chainageM);
 }

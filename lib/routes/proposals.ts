@@ -64,7 +64,13 @@ export function detectRouteProposals(points: readonly CheckedPoint[]): ProposedC
     ...toSeq(detectOutOfOrder(stations), kept),
     ...toSeq(detectGradeSpikes(stations, { gradeThreshold: CHECK_SETTINGS.gradeThreshold }), kept),
     ...(scattered.length >= 3
-      ? toSeq(detectMedianOutliers(scatteredStations, { windowSize: CHECK_SETTINGS.medianWindow, toleranceM: CHECK_SETTINGS.medianToleranceM }), scattered)
+      ? toSeq(
+          detectMedianOutliers(scatteredStations, {
+            windowSize: CHECK_SETTINGS.medianWindow,
+            toleranceM: CHECK_SETTINGS.medianToleranceM,
+          }),
+          scattered,
+        )
       : []),
   ];
   // seq is the point's place along the route, so it indexes the ordered points.
@@ -90,7 +96,11 @@ export function smoothingProposals(points: readonly CheckedPoint[], windowSize: 
 }
 
 /** Shifts every kept height so the point `seq` takes the benchmark's known elevation. */
-export function benchmarkProposals(points: readonly CheckedPoint[], seq: number, knownElevationM: number): ProposedChange[] {
+export function benchmarkProposals(
+  points: readonly CheckedPoint[],
+  seq: number,
+  knownElevationM: number,
+): ProposedChange[] {
   const kept = points.filter((p) => !p.excluded);
   const index = kept.findIndex((p) => p.seq === seq);
   const label = kept[index]?.label ?? `point ${seq + 1}`;

@@ -4,7 +4,10 @@ import { ROUTE_PROFILE_POINTS, routeThinOptions } from './profile-series';
 import type { CheckedPoint, ProposalPlace, RouteDetail, RoutePlanStation, RouteProposal, RouteView } from './types';
 
 /** Where each proposal sits: its point's chainage and surveyed height. */
-export function proposalPlacesOf(points: readonly CheckedPoint[], proposals: readonly RouteProposal[]): ProposalPlace[] {
+export function proposalPlacesOf(
+  points: readonly CheckedPoint[],
+  proposals: readonly RouteProposal[],
+): ProposalPlace[] {
   // seq is the point's position along the route (0..n-1), so it indexes the ordered points.
   return proposals.map((p) => {
     const point = points[p.index]?.seq === p.index ? points[p.index] : points.find((q) => q.seq === p.index);
@@ -18,7 +21,11 @@ export function proposalPlacesOf(points: readonly CheckedPoint[], proposals: rea
  * profile's kept points, the height range of every kept point. Linear in the points (plus the
  * scatter's median), on typed arrays: a 100,000-point route is read on every first visit.
  */
-export function routeViewOf(detail: Omit<RouteDetail, 'points'>, points: readonly CheckedPoint[], profilePoints = ROUTE_PROFILE_POINTS): RouteView {
+export function routeViewOf(
+  detail: Omit<RouteDetail, 'points'>,
+  points: readonly CheckedPoint[],
+  profilePoints = ROUTE_PROFILE_POINTS,
+): RouteView {
   const n = points.length;
   const x = new Float64Array(n);
   const rawY = new Float64Array(n);
@@ -40,11 +47,16 @@ export function routeViewOf(detail: Omit<RouteDetail, 'points'>, points: readonl
   const keptX = Float64Array.from(kept, (p) => p.chainageM);
   const keptY = Float64Array.from(kept, (p) => p.elevationM);
   const rawAt = thinProfile(x, rawY, routeThinOptions(scatterM, profilePoints));
-  const keptAt = thinProfile(keptX, keptY, routeThinOptions(kept.length === n ? scatterM : surveyHeightScatterM(kept), profilePoints));
+  const keptAt = thinProfile(
+    keptX,
+    keptY,
+    routeThinOptions(kept.length === n ? scatterM : surveyHeightScatterM(kept), profilePoints),
+  );
   const plan: RoutePlanStation[] = [];
   for (const i of keptAt) {
     const p = kept[i];
-    if (p.latitude !== null && p.longitude !== null) plan.push({ chainageM: p.chainageM, latitudeDeg: p.latitude, longitudeDeg: p.longitude });
+    if (p.latitude !== null && p.longitude !== null)
+      plan.push({ chainageM: p.chainageM, latitudeDeg: p.latitude, longitudeDeg: p.longitude });
   }
   return {
     route: detail.route,

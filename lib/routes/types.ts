@@ -29,7 +29,19 @@ export interface RoutePointView {
  * point (`RoutePointView`) is one; the view's fast read builds these from columns, with the time
  * already in seconds.
  */
-export type CheckedPoint = Pick<RoutePointView, 'seq' | 'latitude' | 'longitude' | 'chainageM' | 'elevationM' | 'rawElevationM' | 'heightSource' | 'confidenceM' | 'excluded' | 'dismissedChecks'> & {
+export type CheckedPoint = Pick<
+  RoutePointView,
+  | 'seq'
+  | 'latitude'
+  | 'longitude'
+  | 'chainageM'
+  | 'elevationM'
+  | 'rawElevationM'
+  | 'heightSource'
+  | 'confidenceM'
+  | 'excluded'
+  | 'dismissedChecks'
+> & {
   /** When the point was recorded, seconds since 1970 (a stored point gives `recordedAt` instead). */
   timeS?: number | null;
   recordedAt?: string | null;

@@ -8,7 +8,14 @@ import {
 } from '../../hydraulics/index';
 import { MAX_ROUTE_POINTS } from '../validations/routes';
 import { SurveyImportError } from './errors';
-import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFormat, type SurveyImportWarning, type SurveyPoint } from './parsed-survey';
+import {
+  validateParsedSurvey,
+  type HeightSourceName,
+  type ParsedSurvey,
+  type SurveyFormat,
+  type SurveyImportWarning,
+  type SurveyPoint,
+} from './parsed-survey';
 
 /** A row read from a file, before chainage and checks. `line` is where it came from. */
 export interface DraftPoint {
@@ -54,9 +61,13 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
   let totalSlopeLengthM: number;
   if (drafts.every((d) => d.chainageM !== undefined)) {
     chainages = drafts.map((d) => d.chainageM as number);
-    totalSlopeLengthM = slopeLengthOfProfile(drafts.map((d, i) => ({ chainageM: chainages[i], elevationM: d.elevationM })));
+    totalSlopeLengthM = slopeLengthOfProfile(
+      drafts.map((d, i) => ({ chainageM: chainages[i], elevationM: d.elevationM })),
+    );
   } else if (positioned) {
-    const track = chainageAlongTrack(drafts.map((d) => ({ latitudeDeg: d.lat as number, longitudeDeg: d.lon as number, elevationM: d.elevationM })));
+    const track = chainageAlongTrack(
+      drafts.map((d) => ({ latitudeDeg: d.lat as number, longitudeDeg: d.lon as number, elevationM: d.elevationM })),
+    );
     chainages = track.horizontalChainageM;
     totalSlopeLengthM = track.totalSlopeM;
   } else {
@@ -90,7 +101,12 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
     );
   }
   for (const c of [...duplicates, ...detectOutOfOrder(stations).filter((c) => c.kind === 'time-backwards')]) {
-    warnings.push({ code: c.kind === 'duplicate' ? 'duplicate-point' : c.kind, message: c.reason, line: drafts[c.index].line, index: c.index });
+    warnings.push({
+      code: c.kind === 'duplicate' ? 'duplicate-point' : c.kind,
+      message: c.reason,
+      line: drafts[c.index].line,
+      index: c.index,
+    });
   }
   if (heightSource === 'gps') {
     warnings.push({

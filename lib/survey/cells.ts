@@ -42,17 +42,29 @@ export function readNumberCell(raw: string | undefined, decimalComma: boolean, p
     throw new SurveyImportError('missing-value', `no ${place.field} given`, place);
   }
   if (cell.length > MAX_NUMBER_CELL_CHARS) {
-    throw new SurveyImportError('not-a-number', `“${quoteCell(cell)}” is ${cell.length} characters long, too long to be a number (expected the ${place.field})`, place);
+    throw new SurveyImportError(
+      'not-a-number',
+      `“${quoteCell(cell)}” is ${cell.length} characters long, too long to be a number (expected the ${place.field})`,
+      place,
+    );
   }
   const normalised = decimalComma && COMMA_NUMBER.test(cell) ? cell.replace(',', '.') : cell;
   if (!NUMBER.test(normalised)) {
-    throw new SurveyImportError('not-a-number', `“${quoteCell(cell)}” is not a number (expected the ${place.field})`, place);
+    throw new SurveyImportError(
+      'not-a-number',
+      `“${quoteCell(cell)}” is not a number (expected the ${place.field})`,
+      place,
+    );
   }
   return Number(normalised);
 }
 
 /** Same as readNumberCell but an empty cell gives undefined. */
-export function readOptionalNumberCell(raw: string | undefined, decimalComma: boolean, place: CellPlace): number | undefined {
+export function readOptionalNumberCell(
+  raw: string | undefined,
+  decimalComma: boolean,
+  place: CellPlace,
+): number | undefined {
   return (raw ?? '').trim() === '' ? undefined : readNumberCell(raw, decimalComma, place);
 }
 
@@ -92,7 +104,11 @@ export function readTimeCell(raw: string | undefined, place: CellPlace, reading:
     ms = written.ok ? writtenDateToUtcMs(written.date, reading.timeZone ?? 'UTC') : Number.NaN;
   }
   if (!Number.isFinite(ms)) {
-    throw new SurveyImportError('bad-time', `“${quoteCell(cell)}” is not a date and time this importer can read (use ISO 8601, e.g. 2024-05-01T07:30:00Z)`, place);
+    throw new SurveyImportError(
+      'bad-time',
+      `“${quoteCell(cell)}” is not a date and time this importer can read (use ISO 8601, e.g. 2024-05-01T07:30:00Z)`,
+      place,
+    );
   }
   return new Date(ms).toISOString();
 }

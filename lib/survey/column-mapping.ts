@@ -28,10 +28,50 @@ export interface ColumnGuess<M> {
 const SYNONYMS: Record<keyof GpsColumnMapping | 'chainage', string[]> = {
   latitude: ['lat', 'latitude', 'latitudedeg', 'latdeg', 'y', 'breite', 'latitud'],
   longitude: ['lon', 'lng', 'long', 'longitude', 'longitudedeg', 'londeg', 'x', 'lange', 'laenge', 'longitud'],
-  elevation: ['ele', 'elev', 'elevation', 'alt', 'altitude', 'height', 'z', 'hohe', 'hoehe', 'altitud', 'elevationm', 'altitudem', 'rl', 'level', 'reducedlevel'],
+  elevation: [
+    'ele',
+    'elev',
+    'elevation',
+    'alt',
+    'altitude',
+    'height',
+    'z',
+    'hohe',
+    'hoehe',
+    'altitud',
+    'elevationm',
+    'altitudem',
+    'rl',
+    'level',
+    'reducedlevel',
+  ],
   time: ['time', 'timestamp', 'datetime', 'date', 'utc', 'timeutc', 'gpstime', 'zeit', 'fecha'],
-  name: ['name', 'label', 'desc', 'description', 'comment', 'note', 'notes', 'feature', 'id', 'point', 'station', 'remarks'],
-  accuracy: ['accuracy', 'acc', 'hacc', 'vacc', 'horizontalaccuracy', 'verticalaccuracy', 'altitudeaccuracy', 'hdop', 'precision', 'error'],
+  name: [
+    'name',
+    'label',
+    'desc',
+    'description',
+    'comment',
+    'note',
+    'notes',
+    'feature',
+    'id',
+    'point',
+    'station',
+    'remarks',
+  ],
+  accuracy: [
+    'accuracy',
+    'acc',
+    'hacc',
+    'vacc',
+    'horizontalaccuracy',
+    'verticalaccuracy',
+    'altitudeaccuracy',
+    'hdop',
+    'precision',
+    'error',
+  ],
   chainage: ['chainage', 'ch', 'station', 'sta', 'distance', 'dist', 'km', 'offset', 'along', 'chainagem', 'distancem'],
 };
 
@@ -89,7 +129,9 @@ export function guessGpsColumnMapping(headers: readonly string[]): ColumnGuess<G
 }
 
 /** Guesses the chainage, elevation and label columns of a station/elevation CSV. */
-export function guessStationColumnMapping(headers: readonly string[]): ColumnGuess<StationColumnMapping> & { chainageUnit: LengthUnit } {
+export function guessStationColumnMapping(
+  headers: readonly string[],
+): ColumnGuess<StationColumnMapping> & { chainageUnit: LengthUnit } {
   const taken = new Set<number>();
   const chainage = find(headers, 'chainage', taken);
   const elevation = find(headers, 'elevation', taken);
@@ -103,7 +145,10 @@ export function guessStationColumnMapping(headers: readonly string[]): ColumnGue
 }
 
 /** A mapping chosen on screen may point past the file's last column; say which and how many there are. */
-export function assertMappingInRange(mapping: Readonly<Record<string, number | null>>, headers: readonly string[]): void {
+export function assertMappingInRange(
+  mapping: Readonly<Record<string, number | null>>,
+  headers: readonly string[],
+): void {
   for (const [field, index] of Object.entries(mapping)) {
     if (index !== null && (index < 0 || index >= headers.length)) {
       throw new SurveyImportError(

@@ -120,8 +120,13 @@ export function detectCsvDialect(rawText: string): CsvDialect {
   const decimalComma = chosen.delimiter !== ',' && dataCells.some(isCommaDecimal);
   const first = rows[0];
   const second = rows[1];
-  const hasHeader = first.some(
-    (cell, i) => cell.trim() !== '' && !looksNumeric(cell, decimalComma) && (second === undefined || looksNumeric(second[i] ?? '', decimalComma)),
-  ) || (second === undefined && first.some((c) => c.trim() !== '' && !looksNumeric(c, decimalComma)));
+  const hasHeader =
+    first.some(
+      (cell, i) =>
+        cell.trim() !== '' &&
+        !looksNumeric(cell, decimalComma) &&
+        (second === undefined || looksNumeric(second[i] ?? '', decimalComma)),
+    ) ||
+    (second === undefined && first.some((c) => c.trim() !== '' && !looksNumeric(c, decimalComma)));
   return { delimiter: chosen.delimiter, decimalComma, hasHeader, lineEnding };
 }

@@ -7,7 +7,10 @@ export interface CsvTable {
   /** Column names from the header row, or “column 1”, “column 2”… when there is none. */
   headers: string[];
   /** Called once per data row with its cells and its 1-based line in the file. */
-  forEachRow(onRow: (cells: string[], line: number) => void, options?: { onProgress?: (fraction: number) => void }): number;
+  forEachRow(
+    onRow: (cells: string[], line: number) => void,
+    options?: { onProgress?: (fraction: number) => void },
+  ): number;
 }
 
 /**
@@ -44,7 +47,11 @@ export function openCsvTable(rawText: string, dialect: CsvDialect): CsvTable {
         skipEmptyLines: 'greedy',
         step(result) {
           // Blank lines before this row were skipped; move to the first character of the row.
-          while (rowStart < body.length && (body[rowStart] === '\n' || body[rowStart] === ' ' || body[rowStart] === '\t')) rowStart += 1;
+          while (
+            rowStart < body.length &&
+            (body[rowStart] === '\n' || body[rowStart] === ' ' || body[rowStart] === '\t')
+          )
+            rowStart += 1;
           const line = lineAt(rowStart);
           if (result.errors.length > 0) {
             const e = result.errors[0];

@@ -49,7 +49,10 @@ export class SurveyImportError extends Error {
   readonly field?: string;
 
   constructor(code: SurveyImportErrorCode, message: string, details: SurveyImportErrorDetails = {}) {
-    const where = [details.line !== undefined ? `line ${details.line}` : undefined, details.column !== undefined ? `column “${details.column}”` : undefined]
+    const where = [
+      details.line !== undefined ? `line ${details.line}` : undefined,
+      details.column !== undefined ? `column “${details.column}”` : undefined,
+    ]
       .filter(Boolean)
       .join(', ');
     super(where ? `${where}: ${message}` : message);

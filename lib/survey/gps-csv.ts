@@ -34,7 +34,11 @@ const VERTICAL_PER_HORIZONTAL = 1.5;
 const DELIMITER_NAMES: Record<string, string> = { ',': 'comma', ';': 'semicolon', '\t': 'tab', '|': 'bar' };
 
 /** Works out the dialect, headers and guessed mapping, for the mapping screen. */
-export function previewGpsCsv(text: string): { dialect: CsvDialect; headers: string[]; guess: ReturnType<typeof guessGpsColumnMapping> } {
+export function previewGpsCsv(text: string): {
+  dialect: CsvDialect;
+  headers: string[];
+  guess: ReturnType<typeof guessGpsColumnMapping>;
+} {
   const dialect = detectCsvDialect(text);
   const headers = openCsvTable(text, dialect).headers;
   return { dialect, headers, guess: guessGpsColumnMapping(headers) };
@@ -47,10 +51,20 @@ function resolveDialect(text: string, override: Partial<CsvDialect> | undefined)
   } catch (e) {
     if (!(override?.delimiter && e instanceof SurveyImportError && e.code === 'no-delimiter')) throw e;
   }
-  const dialect: CsvDialect = { delimiter: ',', decimalComma: false, hasHeader: true, lineEnding: 'lf', ...detected, ...override };
+  const dialect: CsvDialect = {
+    delimiter: ',',
+    decimalComma: false,
+    hasHeader: true,
+    lineEnding: 'lf',
+    ...detected,
+    ...override,
+  };
   const table = openCsvTable(text, dialect);
   if (override?.delimiter && table.headers.length < 2) {
-    const hint = detected && detected.delimiter !== override.delimiter ? `; the file looks ${DELIMITER_NAMES[detected.delimiter]}-separated` : '';
+    const hint =
+      detected && detected.delimiter !== override.delimiter
+        ? `; the file looks ${DELIMITER_NAMES[detected.delimiter]}-separated`
+        : '';
     throw new SurveyImportError(
       'wrong-delimiter',
       `splitting on ${DELIMITER_NAMES[override.delimiter]}s gives only one column${hint}`,
@@ -80,7 +94,8 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
     }
   }
   const col = (i: number | null) => (i === null ? '' : table.headers[i]);
-  // One place per field, its line set per row: no objects per cell on a 100,000-row file (an error copies what it needs).
+  // One place per field, its line set per row: no objects per cell on a 100,000-row file (an error copies what it
+  // needs).
   const place = (field: string, i: number | null) => ({ line: 0, column: col(i), field });
   const at = {
     latitude: place('latitude', mapping.latitude),
@@ -96,14 +111,25 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
       at.latitude.line = at.longitude.line = at.elevation.line = at.accuracy.line = at.time.line = line;
       const lat = readNumberCell(cells[mapping.latitude as number], dialect.decimalComma, at.latitude);
       if (lat < -90 || lat > 90) {
-        throw new SurveyImportError('latitude-out-of-range', `latitude ${lat} is outside −90 to 90 degrees`, at.latitude);
+        throw new SurveyImportError(
+          'latitude-out-of-range',
+          `latitude ${lat} is outside −90 to 90 degrees`,
+          at.latitude,
+        );
       }
       const lon = readNumberCell(cells[mapping.longitude as number], dialect.decimalComma, at.longitude);
       if (lon < -180 || lon > 180) {
-        throw new SurveyImportError('longitude-out-of-range', `longitude ${lon} is outside −180 to 180 degrees`, at.longitude);
+        throw new SurveyImportError(
+          'longitude-out-of-range',
+          `longitude ${lon} is outside −180 to 180 degrees`,
+          at.longitude,
+        );
       }
       const elevation = readNumberCell(cells[mapping.elevation as number], dialect.decimalComma, at.elevation);
-      const accuracy = mapping.accuracy === null ? undefined : readOptionalNumberCell(cells[mapping.accuracy], dialect.decimalComma, at.accuracy);
+      const accuracy =
+        mapping.accuracy === null
+          ? undefined
+          : readOptionalNumberCell(cells[mapping.accuracy], dialect.decimalComma, at.accuracy);
       if (accuracy !== undefined && accuracy < 0) {
         throw new SurveyImportError('not-a-number', `accuracy cannot be negative (${accuracy})`, at.accuracy);
       }
@@ -115,7 +141,11 @@ export function parseGpsCsv(text: string, options: GpsCsvOptions = {}): ParsedSu
         label: mapping.name === null ? undefined : (cells[mapping.name] ?? '').trim() || undefined,
         time: mapping.time === null ? undefined : readTimeCell(cells[mapping.time], at.time, timeReading),
         confidence:
-          accuracy === undefined ? undefined : accuracyIsVertical ? toMetres(accuracy, elevationUnit) : accuracy * VERTICAL_PER_HORIZONTAL,
+          accuracy === undefined
+            ? undefined
+            : accuracyIsVertical
+              ? toMetres(accuracy, elevationUnit)
+              : accuracy * VERTICAL_PER_HORIZONTAL,
       });
     },
     { onProgress: options.onProgress },

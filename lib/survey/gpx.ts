@@ -3,7 +3,13 @@ import { SaxesParser } from 'saxes';
 import { buildParsedSurvey, type DraftPoint } from './build-survey';
 import { readNumberCell, readTimeCell } from './cells';
 import { SurveyImportError } from './errors';
-import { validateParsedSurvey, type HeightSourceName, type ParsedSurvey, type SurveyFeature, type SurveyImportWarning } from './parsed-survey';
+import {
+  validateParsedSurvey,
+  type HeightSourceName,
+  type ParsedSurvey,
+  type SurveyFeature,
+  type SurveyImportWarning,
+} from './parsed-survey';
 import { snapToRoute } from './snap';
 
 /** Waypoints placed along one route as features: far more than any walk marks. */
@@ -40,7 +46,10 @@ function readXml<T>(read: () => T): T {
   } catch (error) {
     if (error instanceof SurveyImportError) throw error;
     const reason = error instanceof Error ? error.message.slice(0, 160) : 'unreadable';
-    throw new SurveyImportError('broken-xml', `the GPX file uses XML Runnel does not read (entity declarations, external entities or nesting too deep): ${reason}`);
+    throw new SurveyImportError(
+      'broken-xml',
+      `the GPX file uses XML Runnel does not read (entity declarations, external entities or nesting too deep): ${reason}`,
+    );
   }
 }
 
@@ -54,7 +63,8 @@ function pointLines(text: string): Record<'trkpt' | 'rtept' | 'wpt', number[]> {
   parser.on('opentagstart', (tag) => {
     const local = tag.name.slice(tag.name.indexOf(':') + 1);
     // The event comes after the character ending the name; a line break there belongs to the tag's line.
-    if (local === 'trkpt' || local === 'rtept' || local === 'wpt') lines[local].push(parser.columnIndex === 0 ? parser.line - 1 : parser.line);
+    if (local === 'trkpt' || local === 'rtept' || local === 'wpt')
+      lines[local].push(parser.columnIndex === 0 ? parser.line - 1 : parser.line);
   });
   parser.write(text).close();
   return lines;
@@ -63,9 +73,11 @@ function pointLines(text: string): Record<'trkpt' | 'rtept' | 'wpt', number[]> {
 function readPoint(p: GpxPoint, line: number | undefined, what: string, eleRequired = true): DraftPoint {
   const at = (field: string) => ({ line, column: what, field });
   const lat = readNumberCell(p.lat, false, at('lat'));
-  if (lat < -90 || lat > 90) throw new SurveyImportError('latitude-out-of-range', `lat="${lat}" is outside −90 to 90 degrees`, at('lat'));
+  if (lat < -90 || lat > 90)
+    throw new SurveyImportError('latitude-out-of-range', `lat="${lat}" is outside −90 to 90 degrees`, at('lat'));
   const lon = readNumberCell(p.lon, false, at('lon'));
-  if (lon < -180 || lon > 180) throw new SurveyImportError('longitude-out-of-range', `lon="${lon}" is outside −180 to 180 degrees`, at('lon'));
+  if (lon < -180 || lon > 180)
+    throw new SurveyImportError('longitude-out-of-range', `lon="${lon}" is outside −180 to 180 degrees`, at('lon'));
   // GPX 1.1 gives <ele> in metres.
   const elevationM = !eleRequired && (p.ele ?? '').trim() === '' ? NaN : readNumberCell(p.ele, false, at('ele'));
   return { line, lat, lon, elevationM, label: p.name?.trim() || undefined, time: readTimeCell(p.time, at('time')) };
@@ -79,19 +91,25 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
   const progress = options.onProgress ?? (() => undefined);
   const valid = XMLValidator.validate(text);
   if (valid !== true) {
-    throw new SurveyImportError('broken-xml', `the GPX file is not well-formed XML: ${valid.err.msg}`, { line: valid.err.line, column: `character ${valid.err.col}` });
+    throw new SurveyImportError('broken-xml', `the GPX file is not well-formed XML: ${valid.err.msg}`, {
+      line: valid.err.line,
+      column: `character ${valid.err.col}`,
+    });
   }
   progress(0.3);
-  const doc = readXml(() => new XMLParser({
-    ignoreAttributes: false,
-    attributeNamePrefix: '',
-    removeNSPrefix: true,
-    parseTagValue: false,
-    parseAttributeValue: false,
-    isArray: (name) => LISTS.has(name),
-  }).parse(text)) as { gpx?: { trk?: { trkseg?: { trkpt?: GpxPoint[] }[] }[]; rte?: { rtept?: GpxPoint[] }[]; wpt?: GpxPoint[] } };
+  const doc = readXml(() =>
+    new XMLParser({
+      ignoreAttributes: false,
+      attributeNamePrefix: '',
+      removeNSPrefix: true,
+      parseTagValue: false,
+      parseAttributeValue: false,
+      isArray: (name) => LISTS.has(name),
+    }).parse(text),
+  ) as { gpx?: { trk?: { trkseg?: { trkpt?: GpxPoint[] }[] }[]; rte?: { rtept?: GpxPoint[] }[]; wpt?: GpxPoint[] } };
   const gpx = doc.gpx;
-  if (!gpx || typeof gpx !== 'object') throw new SurveyImportError('not-gpx', 'the XML file has no <gpx> root element, so it is not a GPX file');
+  if (!gpx || typeof gpx !== 'object')
+    throw new SurveyImportError('not-gpx', 'the XML file has no <gpx> root element, so it is not a GPX file');
   progress(0.6);
 
   const warnings: SurveyImportWarning[] = [];
@@ -104,7 +122,10 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
     let k = 0;
     drafts = segments.flatMap((s) => (s.trkpt ?? []).map((p) => readPoint(p, trkLines[k++], 'trkpt')));
     if (segments.length > 1) {
-      warnings.push({ code: 'gpx-segments-joined', message: `${segments.length} track segments were joined end to start in file order; check the joins` });
+      warnings.push({
+        code: 'gpx-segments-joined',
+        message: `${segments.length} track segments were joined end to start in file order; check the joins`,
+      });
     }
   } else if ((gpx.rte ?? []).some((r) => (r.rtept ?? []).length > 0)) {
     let k = 0;
@@ -118,9 +139,18 @@ export function parseGpx(text: string, options: GpxOptions = {}): ParsedSurvey {
       `the GPX file has ${waypoints.length} waypoints but no track or route; import the waypoints as the route only if they were taken in order along it`,
     );
   } else {
-    throw new SurveyImportError('gpx-no-track', 'the GPX file has no track (<trk>), route (<rte>) or waypoints (<wpt>)');
+    throw new SurveyImportError(
+      'gpx-no-track',
+      'the GPX file has no track (<trk>), route (<rte>) or waypoints (<wpt>)',
+    );
   }
-  const survey = buildParsedSurvey({ format: 'gpx', drafts, heightSource: options.heightSource ?? 'gps', rowsRead: drafts.length, warnings });
+  const survey = buildParsedSurvey({
+    format: 'gpx',
+    drafts,
+    heightSource: options.heightSource ?? 'gps',
+    rowsRead: drafts.length,
+    warnings,
+  });
   progress(0.9);
   if (!routeFromWaypoints && waypoints.length > MAX_ROUTE_FEATURES) {
     throw new SurveyImportError(

@@ -19,7 +19,18 @@ export interface InclinometerCsvOptions {
 }
 
 const DISTANCE = ['slopedistance', 'sd', 'distance', 'tape', 'slope', 'length', 'dist', 'slopelength'];
-const ANGLE = ['verticalangle', 'va', 'angle', 'vangle', 'inclination', 'grade', 'percent', 'gradient', 'clinometer', 'abney'];
+const ANGLE = [
+  'verticalangle',
+  'va',
+  'angle',
+  'vangle',
+  'inclination',
+  'grade',
+  'percent',
+  'gradient',
+  'clinometer',
+  'abney',
+];
 const LABEL = ['to', 'station', 'name', 'label', 'point', 'remarks', 'note'];
 
 function findColumn(headers: readonly string[], names: readonly string[], skip: number[] = []): number | null {
@@ -34,22 +45,46 @@ function findColumn(headers: readonly string[], names: readonly string[], skip: 
  */
 export function parseInclinometerCsv(text: string, options: InclinometerCsvOptions): ParsedSurvey {
   if (!Number.isFinite(options.startElevationM)) {
-    throw new SurveyImportError('missing-value', 'give the height of the first mark (start elevation)', { field: 'startElevationM' });
+    throw new SurveyImportError('missing-value', 'give the height of the first mark (start elevation)', {
+      field: 'startElevationM',
+    });
   }
   const dialect = detectCsvDialect(text);
   const table = openCsvTable(text, dialect);
   const distanceCol = findColumn(table.headers, DISTANCE);
   const angleCol = findColumn(table.headers, ANGLE, distanceCol === null ? [] : [distanceCol]);
   const labelCol = findColumn(table.headers, LABEL);
-  if (distanceCol === null) throw new SurveyImportError('missing-column', 'no slope-distance column found (e.g. “slope_distance”)', { field: 'slopeDistance' });
-  if (angleCol === null) throw new SurveyImportError('missing-column', 'no vertical-angle column found (e.g. “vertical_angle” or “grade_%”)', { field: 'verticalAngle' });
+  if (distanceCol === null)
+    throw new SurveyImportError('missing-column', 'no slope-distance column found (e.g. “slope_distance”)', {
+      field: 'slopeDistance',
+    });
+  if (angleCol === null)
+    throw new SurveyImportError(
+      'missing-column',
+      'no vertical-angle column found (e.g. “vertical_angle” or “grade_%”)',
+      { field: 'verticalAngle' },
+    );
   const angleHeader = table.headers[angleCol];
-  const angleUnit: VerticalAngleUnit = options.angleUnit ?? (/%|percent|grade|gradient/i.test(angleHeader) ? 'percent' : 'degrees');
-  const drafts: DraftPoint[] = [{ line: undefined, chainageM: 0, elevationM: options.startElevationM, label: options.startLabel }];
+  const angleUnit: VerticalAngleUnit =
+    options.angleUnit ?? (/%|percent|grade|gradient/i.test(angleHeader) ? 'percent' : 'degrees');
+  const drafts: DraftPoint[] = [
+    { line: undefined, chainageM: 0, elevationM: options.startElevationM, label: options.startLabel },
+  ];
   const rowsRead = table.forEachRow(
     (cells, line) => {
-      const slope = toMetres(readNumberCell(cells[distanceCol], dialect.decimalComma, { line, column: table.headers[distanceCol], field: 'slope distance' }), options.distanceUnit ?? 'm');
-      const angle = readNumberCell(cells[angleCol], dialect.decimalComma, { line, column: angleHeader, field: 'vertical angle' });
+      const slope = toMetres(
+        readNumberCell(cells[distanceCol], dialect.decimalComma, {
+          line,
+          column: table.headers[distanceCol],
+          field: 'slope distance',
+        }),
+        options.distanceUnit ?? 'm',
+      );
+      const angle = readNumberCell(cells[angleCol], dialect.decimalComma, {
+        line,
+        column: angleHeader,
+        field: 'vertical angle',
+      });
       let leg;
       try {
         leg = reduceInclinometerLeg({ slopeDistanceM: slope, verticalAngle: angle, angleUnit });
@@ -73,6 +108,7 @@ export function parseInclinometerCsv(text: string, options: InclinometerCsvOptio
     },
     { onProgress: options.onProgress },
   );
-  if (rowsRead === 0) throw new SurveyImportError('no-data-rows', 'the field book has a header row but no legs', { line: 2 });
+  if (rowsRead === 0)
+    throw new SurveyImportError('no-data-rows', 'the field book has a header row but no legs', { line: 2 });
   return buildParsedSurvey({ format: 'inclinometer-csv', drafts, heightSource: 'inclinometer', rowsRead });
 }

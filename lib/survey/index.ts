@@ -6,7 +6,12 @@ export { detectCsvDialect, detectLineEnding, normaliseLineEndings } from './csv-
 export type { CsvDialect, CsvDelimiter, LineEnding } from './csv-dialect';
 export { openCsvTable } from './csv-rows';
 export type { CsvTable } from './csv-rows';
-export { guessGpsColumnMapping, guessStationColumnMapping, guessElevationUnit, normaliseHeader } from './column-mapping';
+export {
+  guessGpsColumnMapping,
+  guessStationColumnMapping,
+  guessElevationUnit,
+  normaliseHeader,
+} from './column-mapping';
 export type { GpsColumnMapping, StationColumnMapping, ColumnGuess } from './column-mapping';
 export { METRES_PER_FOOT, toMetres } from './cells';
 export type { LengthUnit } from './cells';
@@ -30,4 +35,11 @@ export {
   HeightSourceSchema,
   validateParsedSurvey,
 } from './parsed-survey';
-export type { ParsedSurvey, SurveyPoint, SurveyFeature, SurveyImportWarning, SurveyFormat, HeightSourceName } from './parsed-survey';
+export type {
+  ParsedSurvey,
+  SurveyPoint,
+  SurveyFeature,
+  SurveyImportWarning,
+  SurveyFormat,
+  HeightSourceName,
+} from './parsed-survey';

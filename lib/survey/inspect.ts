@@ -1,5 +1,11 @@
 import type { LengthUnit } from './cells';
-import { guessGpsColumnMapping, guessStationColumnMapping, normaliseHeader, type GpsColumnMapping, type StationColumnMapping } from './column-mapping';
+import {
+  guessGpsColumnMapping,
+  guessStationColumnMapping,
+  normaliseHeader,
+  type GpsColumnMapping,
+  type StationColumnMapping,
+} from './column-mapping';
 import { detectCsvDialect, normaliseLineEndings, splitRow, type CsvDialect } from './csv-dialect';
 import { looksLikeGpx } from './detect-format';
 import { openCsvTable } from './csv-rows';
@@ -26,7 +32,8 @@ const has = (names: string[], ...wanted: string[]) => wanted.some((w) => names.i
 function suggestCsvFormat(headers: readonly string[]): Exclude<SurveyFormat, 'gpx'> {
   const names = headers.map(normaliseHeader);
   if (has(names, 'bs', 'backsight') && has(names, 'fs', 'foresight')) return 'level-book-csv';
-  if (has(names, 'slopedistance', 'sd', 'tape') && has(names, 'verticalangle', 'va', 'angle', 'grade', 'inclination')) return 'inclinometer-csv';
+  if (has(names, 'slopedistance', 'sd', 'tape') && has(names, 'verticalangle', 'va', 'angle', 'grade', 'inclination'))
+    return 'inclinometer-csv';
   const gps = guessGpsColumnMapping(headers).mapping;
   if (gps.latitude !== null && gps.longitude !== null) return 'gps-csv';
   const station = guessStationColumnMapping(headers).mapping;

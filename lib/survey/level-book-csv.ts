@@ -40,7 +40,9 @@ const COLUMNS = {
  */
 export function parseLevelBookCsv(text: string, options: LevelBookCsvOptions): ParsedSurvey {
   if (!Number.isFinite(options.startElevationM)) {
-    throw new SurveyImportError('missing-value', 'give the reduced level of the first station (start elevation)', { field: 'startElevationM' });
+    throw new SurveyImportError('missing-value', 'give the reduced level of the first station (start elevation)', {
+      field: 'startElevationM',
+    });
   }
   const unit = options.unit ?? 'm';
   const dialect = detectCsvDialect(text);
@@ -55,17 +57,40 @@ export function parseLevelBookCsv(text: string, options: LevelBookCsvOptions): P
   const fs = col('foresight');
   const ch = col('chainage');
   const lb = col('label');
-  for (const [key, i] of [['backsight (BS)', bs], ['foresight (FS)', fs], ['chainage', ch]] as const) {
-    if (i === null) throw new SurveyImportError('missing-column', `no ${key} column found among ${table.headers.map((h) => `“${h}”`).join(', ')}`, { field: key });
+  for (const [key, i] of [
+    ['backsight (BS)', bs],
+    ['foresight (FS)', fs],
+    ['chainage', ch],
+  ] as const) {
+    if (i === null)
+      throw new SurveyImportError(
+        'missing-column',
+        `no ${key} column found among ${table.headers.map((h) => `“${h}”`).join(', ')}`,
+        { field: key },
+      );
   }
   const readings: LevelBookReading[] = [];
   const rows: { line: number; chainageM: number; label?: string }[] = [];
   table.forEachRow(
     (cells, line) => {
       const read = (i: number | null, field: string) =>
-        i === null ? undefined : readOptionalNumberCell(cells[i], dialect.decimalComma, { line, column: table.headers[i], field });
-      const chainageM = toMetres(readNumberCell(cells[ch as number], dialect.decimalComma, { line, column: table.headers[ch as number], field: 'chainage' }), unit);
-      if (chainageM < 0) throw new SurveyImportError('negative-chainage', `chainage ${chainageM} m is negative`, { line, column: table.headers[ch as number], field: 'chainage' });
+        i === null
+          ? undefined
+          : readOptionalNumberCell(cells[i], dialect.decimalComma, { line, column: table.headers[i], field });
+      const chainageM = toMetres(
+        readNumberCell(cells[ch as number], dialect.decimalComma, {
+          line,
+          column: table.headers[ch as number],
+          field: 'chainage',
+        }),
+        unit,
+      );
+      if (chainageM < 0)
+        throw new SurveyImportError('negative-chainage', `chainage ${chainageM} m is negative`, {
+          line,
+          column: table.headers[ch as number],
+          field: 'chainage',
+        });
       const backsight = read(bs, 'backsight');
       const intermediate = read(is, 'intermediate sight');
       const foresight = read(fs, 'foresight');
@@ -79,8 +104,10 @@ export function parseLevelBookCsv(text: string, options: LevelBookCsvOptions): P
     },
     { onProgress: options.onProgress },
   );
-  if (rows.length === 0) throw new SurveyImportError('no-data-rows', 'the level book has a header row but no readings', { line: 2 });
-  if (rows.length === 1) throw new SurveyImportError('too-few-points', 'a level book needs at least two lines', { line: rows[0].line });
+  if (rows.length === 0)
+    throw new SurveyImportError('no-data-rows', 'the level book has a header row but no readings', { line: 2 });
+  if (rows.length === 1)
+    throw new SurveyImportError('too-few-points', 'a level book needs at least two lines', { line: rows[0].line });
   let result;
   try {
     result = reduceLevelBook({
@@ -94,7 +121,13 @@ export function parseLevelBookCsv(text: string, options: LevelBookCsvOptions): P
     const row = e.index === undefined ? undefined : rows[e.index];
     const missingFs = /missing foresight/.test(e.message);
     const msg = e.message.replace(/^[^:]*: /, '');
-    const column = e.field.endsWith('foresightM') ? fs : e.field.endsWith('backsightM') ? bs : e.field.endsWith('intermediateM') ? is : null;
+    const column = e.field.endsWith('foresightM')
+      ? fs
+      : e.field.endsWith('backsightM')
+        ? bs
+        : e.field.endsWith('intermediateM')
+          ? is
+          : null;
     throw new SurveyImportError(missingFs ? 'level-book-missing-foresight' : 'level-book-order', msg, {
       line: row?.line,
       column: column === null ? undefined : table.headers[column],
@@ -108,14 +141,23 @@ export function parseLevelBookCsv(text: string, options: LevelBookCsvOptions): P
       message: `the run closes ${Math.abs(result.closureErrorM * 1000).toFixed(0)} mm ${result.closureErrorM >= 0 ? 'above' : 'below'} the known closing level`,
     });
   }
-  const drafts: DraftPoint[] = rows.map((r, i) => ({ line: r.line, chainageM: r.chainageM, elevationM: result.stations[i].reducedLevelM, label: r.label }));
+  const drafts: DraftPoint[] = rows.map((r, i) => ({
+    line: r.line,
+    chainageM: r.chainageM,
+    elevationM: result.stations[i].reducedLevelM,
+    label: r.label,
+  }));
   for (let i = 1; i < drafts.length; i += 1) {
     if ((drafts[i].chainageM as number) < (drafts[i - 1].chainageM as number)) {
-      throw new SurveyImportError('chainage-not-increasing', `chainage ${drafts[i].chainageM} m is less than ${drafts[i - 1].chainageM} m on the line before`, {
-        line: drafts[i].line,
-        column: table.headers[ch as number],
-        field: 'chainage',
-      });
+      throw new SurveyImportError(
+        'chainage-not-increasing',
+        `chainage ${drafts[i].chainageM} m is less than ${drafts[i - 1].chainageM} m on the line before`,
+        {
+          line: drafts[i].line,
+          column: table.headers[ch as number],
+          field: 'chainage',
+        },
+      );
     }
   }
   return buildParsedSurvey({

@@ -7,7 +7,14 @@
 /** Minutes the zone is ahead of UTC at an instant. */
 function zoneOffsetMinutes(timeZone: string, utcMs: number): number {
   const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+    timeZone,
+    hourCycle: 'h23',
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+    second: '2-digit',
   }).formatToParts(new Date(utcMs));
   const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
   const asUtc = Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second'));
@@ -15,8 +22,12 @@ function zoneOffsetMinutes(timeZone: string, utcMs: number): number {
 }
 
 /** The UTC instant (ms) of a wall-clock time in `timeZone` (two passes settle a daylight-saving change). */
-export function zonedTimeToUtcMs(fields: { year: number; month: number; day: number; hour: number; minute: number; second: number }, timeZone: string): number {
-  const wall = Date.UTC(fields.year, fields.month - 1, fields.day, fields.hour, fields.minute, 0) + fields.second * 1000;
+export function zonedTimeToUtcMs(
+  fields: { year: number; month: number; day: number; hour: number; minute: number; second: number },
+  timeZone: string,
+): number {
+  const wall =
+    Date.UTC(fields.year, fields.month - 1, fields.day, fields.hour, fields.minute, 0) + fields.second * 1000;
   let utc = wall - zoneOffsetMinutes(timeZone, wall) * 60_000;
   utc = wall - zoneOffsetMinutes(timeZone, utc) * 60_000;
   return utc;
@@ -35,9 +46,7 @@ export interface WrittenDate {
   offsetMinutes?: number;
 }
 
-export type DateReading =
-  | { ok: true; date: WrittenDate }
-  | { ok: false; reason: 'ambiguous-order' | 'unreadable' };
+export type DateReading = { ok: true; date: WrittenDate } | { ok: false; reason: 'ambiguous-order' | 'unreadable' };
 
 const TIME = String.raw`(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d+))?)?)?`;
 const OFFSET = String.raw`\s*(Z|[+-]\d{2}:?\d{2})?`;
@@ -55,7 +64,15 @@ function offsetOf(text: string | undefined): number | undefined {
 // Built as one literal (no spread) and checked without a Date: this runs once per fix of a 100,000-point walk.
 function withTime(year: number, month: number, day: number, m: RegExpExecArray, at: number): WrittenDate {
   const fraction = m[at + 3] ? Number(`0.${m[at + 3]}`) : 0;
-  return { year, month, day, hour: Number(m[at] ?? 0), minute: Number(m[at + 1] ?? 0), second: Number(m[at + 2] ?? 0) + fraction, offsetMinutes: offsetOf(m[at + 4]) };
+  return {
+    year,
+    month,
+    day,
+    hour: Number(m[at] ?? 0),
+    minute: Number(m[at + 1] ?? 0),
+    second: Number(m[at + 2] ?? 0) + fraction,
+    offsetMinutes: offsetOf(m[at + 4]),
+  };
 }
 
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
@@ -68,7 +85,15 @@ function daysInMonth(written: number, month: number): number {
 }
 
 function valid(d: WrittenDate): boolean {
-  return d.month >= 1 && d.month <= 12 && d.day >= 1 && d.day <= daysInMonth(d.year, d.month) && d.hour <= 23 && d.minute <= 59 && d.second < 61;
+  return (
+    d.month >= 1 &&
+    d.month <= 12 &&
+    d.day >= 1 &&
+    d.day <= daysInMonth(d.year, d.month) &&
+    d.hour <= 23 &&
+    d.minute <= 59 &&
+    d.second < 61
+  );
 }
 
 /**
@@ -96,7 +121,11 @@ export function readWrittenDate(text: string, order?: DateOrder): DateReading {
 /** The UTC instant of a written date: its own offset if it has one, else the given zone's wall clock. */
 export function writtenDateToUtcMs(date: WrittenDate, timeZone: string): number {
   if (date.offsetMinutes !== undefined) {
-    return Date.UTC(date.year, date.month - 1, date.day, date.hour, date.minute, 0) + date.second * 1000 - date.offsetMinutes * 60_000;
+    return (
+      Date.UTC(date.year, date.month - 1, date.day, date.hour, date.minute, 0) +
+      date.second * 1000 -
+      date.offsetMinutes * 60_000
+    );
   }
   return zonedTimeToUtcMs(date, timeZone);
 }

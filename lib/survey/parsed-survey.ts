@@ -74,7 +74,10 @@ export function validateParsedSurvey(value: unknown): ParsedSurvey {
   const r = ParsedSurveySchema.safeParse(value);
   if (!r.success) {
     const issue = r.error.issues[0];
-    throw new SurveyImportError('invalid-result', `the import produced an invalid survey at ${issue.path.join('.')}: ${issue.message}`);
+    throw new SurveyImportError(
+      'invalid-result',
+      `the import produced an invalid survey at ${issue.path.join('.')}: ${issue.message}`,
+    );
   }
   return r.data;
 }

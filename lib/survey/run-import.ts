@@ -12,17 +12,28 @@ import { parseStationCsv } from './station-csv';
  * Parses survey text with the options chosen on the import screens. The same function runs in
  * the browser's worker (for the preview) and in the upload handler (for the stored route).
  */
-export function parseSurveyText(text: string, options: SurveyImportOptions, onProgress?: (fraction: number) => void): ParsedSurvey {
+export function parseSurveyText(
+  text: string,
+  options: SurveyImportOptions,
+  onProgress?: (fraction: number) => void,
+): ParsedSurvey {
   const isGpx = looksLikeGpx(text);
   if (options.format === 'gpx' && !isGpx) {
-    throw new SurveyImportError('format-mismatch', 'the file was chosen as GPX but has no <gpx> root element; pick a CSV format instead');
+    throw new SurveyImportError(
+      'format-mismatch',
+      'the file was chosen as GPX but has no <gpx> root element; pick a CSV format instead',
+    );
   }
   if (options.format !== 'gpx' && isGpx) {
     throw new SurveyImportError('format-mismatch', 'the file is GPX (XML), not CSV; pick the GPX format instead');
   }
   switch (options.format) {
     case 'gpx':
-      return parseGpx(text, { heightSource: options.heightSource, useWaypointsAsRoute: options.useWaypointsAsRoute, onProgress });
+      return parseGpx(text, {
+        heightSource: options.heightSource,
+        useWaypointsAsRoute: options.useWaypointsAsRoute,
+        onProgress,
+      });
     case 'gps-csv':
       return parseGpsCsv(text, {
         mapping: options.mapping,

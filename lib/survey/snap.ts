@@ -12,7 +12,6 @@ interface PlanPoint {
   northM: number;
 }
 
-
 function nearestOnLeg(t: PlanPoint, a: PlanPoint, b: PlanPoint): { u: number; offsetM: number } {
   const dx = b.eastM - a.eastM;
   const dy = b.northM - a.northM;
@@ -36,20 +35,31 @@ export function snapToRoute(
   targets: readonly { lat: number; lon: number }[],
 ): SnapResult[] {
   if (targets.length === 0) return [];
-  const plan = projectToLocalPlan([...route, ...targets].map((p) => ({ latitudeDeg: p.lat, longitudeDeg: p.lon }))).points;
+  const plan = projectToLocalPlan(
+    [...route, ...targets].map((p) => ({ latitudeDeg: p.lat, longitudeDeg: p.lon })),
+  ).points;
   const routeXY = plan.slice(0, route.length);
   if (route.length < 2) {
-    return plan.slice(route.length).map((t) => ({ chainageM: route[0].chainageM, offsetM: Math.hypot(t.eastM - routeXY[0].eastM, t.northM - routeXY[0].northM) }));
+    return plan.slice(route.length).map((t) => ({
+      chainageM: route[0].chainageM,
+      offsetM: Math.hypot(t.eastM - routeXY[0].eastM, t.northM - routeXY[0].northM),
+    }));
   }
   const legs = new Flatbush(route.length - 1);
   for (let i = 1; i < route.length; i += 1) {
     const a = routeXY[i - 1];
     const b = routeXY[i];
-    legs.add(Math.min(a.eastM, b.eastM), Math.min(a.northM, b.northM), Math.max(a.eastM, b.eastM), Math.max(a.northM, b.northM));
+    legs.add(
+      Math.min(a.eastM, b.eastM),
+      Math.min(a.northM, b.northM),
+      Math.max(a.eastM, b.eastM),
+      Math.max(a.northM, b.northM),
+    );
   }
   legs.finish();
   let planLengthM = 0;
-  for (let i = 1; i < route.length; i += 1) planLengthM += Math.hypot(routeXY[i].eastM - routeXY[i - 1].eastM, routeXY[i].northM - routeXY[i - 1].northM);
+  for (let i = 1; i < route.length; i += 1)
+    planLengthM += Math.hypot(routeXY[i].eastM - routeXY[i - 1].eastM, routeXY[i].northM - routeXY[i - 1].northM);
   const firstRadiusM = Math.max(1, (2 * planLengthM) / (route.length - 1));
 
   return plan.slice(route.length).map((t) => {

@@ -41,12 +41,18 @@ export function sniffSurveyFile(bytes: Uint8Array, options: SniffOptions = {}): 
   const name = options.fileName ? `“${options.fileName}” ` : '';
   if (bytes.byteLength > maxBytes) {
     const mb = (n: number) => (n / (1024 * 1024)).toFixed(1);
-    throw new SurveyImportError('file-too-large', `the file ${name}is ${mb(bytes.byteLength)} MB; the limit is ${mb(maxBytes)} MB`);
+    throw new SurveyImportError(
+      'file-too-large',
+      `the file ${name}is ${mb(bytes.byteLength)} MB; the limit is ${mb(maxBytes)} MB`,
+    );
   }
   if (bytes.byteLength === 0) throw new SurveyImportError('empty-file', `the file ${name}is empty`);
   for (const m of MAGIC) {
     if (m.bytes.every((b, i) => bytes[i] === b)) {
-      throw new SurveyImportError('binary-content', `the file ${name}is ${m.name}, not a survey text file (CSV or GPX)`);
+      throw new SurveyImportError(
+        'binary-content',
+        `the file ${name}is ${m.name}, not a survey text file (CSV or GPX)`,
+      );
     }
   }
   const utf16 = utf16Encoding(bytes);
@@ -54,14 +60,20 @@ export function sniffSurveyFile(bytes: Uint8Array, options: SniffOptions = {}): 
     // A spreadsheet's "Unicode text" export: UTF-16 with a byte-order mark, full of NUL bytes that are not binary.
     const text = new TextDecoder(utf16, { fatal: false }).decode(bytes);
     if (text.includes('\ufffd')) {
-      throw new SurveyImportError('binary-content', `the file ${name}starts like UTF-16 text but holds bytes that are not text`);
+      throw new SurveyImportError(
+        'binary-content',
+        `the file ${name}starts like UTF-16 text but holds bytes that are not text`,
+      );
     }
     if (text.trim() === '') throw new SurveyImportError('empty-file', `the file ${name}holds no text`);
     return { text, hadByteOrderMark: true };
   }
   const nul = bytes.indexOf(0);
   if (nul >= 0) {
-    throw new SurveyImportError('binary-content', `the file ${name}contains binary data (a NUL byte at byte ${nul + 1}); it is not a text file`);
+    throw new SurveyImportError(
+      'binary-content',
+      `the file ${name}contains binary data (a NUL byte at byte ${nul + 1}); it is not a text file`,
+    );
   }
   let text: string;
   try {

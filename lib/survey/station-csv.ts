@@ -33,7 +33,11 @@ export function parseStationCsv(text: string, options: StationCsvOptions = {}): 
   if (options.mapping) assertMappingInRange({ ...options.mapping }, table.headers);
   for (const key of ['chainage', 'elevation'] as const) {
     if (mapping[key] === null) {
-      throw new SurveyImportError('missing-column', `no ${key} column found among ${table.headers.map((h) => `“${h}”`).join(', ')}`, { field: key });
+      throw new SurveyImportError(
+        'missing-column',
+        `no ${key} column found among ${table.headers.map((h) => `“${h}”`).join(', ')}`,
+        { field: key },
+      );
     }
   }
   const chainageCol = table.headers[mapping.chainage as number];
@@ -42,10 +46,29 @@ export function parseStationCsv(text: string, options: StationCsvOptions = {}): 
   const warnings: SurveyImportWarning[] = [];
   const rowsRead = table.forEachRow(
     (cells, line) => {
-      const chainageM = toMetres(readNumberCell(cells[mapping.chainage as number], dialect.decimalComma, { line, column: chainageCol, field: 'chainage' }), chainageUnit);
-      const elevationM = toMetres(readNumberCell(cells[mapping.elevation as number], dialect.decimalComma, { line, column: elevationCol, field: 'elevation' }), elevationUnit);
+      const chainageM = toMetres(
+        readNumberCell(cells[mapping.chainage as number], dialect.decimalComma, {
+          line,
+          column: chainageCol,
+          field: 'chainage',
+        }),
+        chainageUnit,
+      );
+      const elevationM = toMetres(
+        readNumberCell(cells[mapping.elevation as number], dialect.decimalComma, {
+          line,
+          column: elevationCol,
+          field: 'elevation',
+        }),
+        elevationUnit,
+      );
       const place = { line, column: chainageCol, field: 'chainage' };
-      if (chainageM < 0) throw new SurveyImportError('negative-chainage', `chainage ${chainageM} m is negative; a route starts at 0`, place);
+      if (chainageM < 0)
+        throw new SurveyImportError(
+          'negative-chainage',
+          `chainage ${chainageM} m is negative; a route starts at 0`,
+          place,
+        );
       const prev = drafts[drafts.length - 1];
       if (prev && chainageM <= (prev.chainageM as number)) {
         const repeat = chainageM === prev.chainageM && elevationM === prev.elevationM;
@@ -57,10 +80,22 @@ export function parseStationCsv(text: string, options: StationCsvOptions = {}): 
           );
         }
       }
-      drafts.push({ line, chainageM, elevationM, label: mapping.name === null ? undefined : (cells[mapping.name] ?? '').trim() || undefined });
+      drafts.push({
+        line,
+        chainageM,
+        elevationM,
+        label: mapping.name === null ? undefined : (cells[mapping.name] ?? '').trim() || undefined,
+      });
     },
     { onProgress: options.onProgress },
   );
-  if (rowsRead === 0) throw new SurveyImportError('no-data-rows', 'the file has a header row but no data rows', { line: 2 });
-  return buildParsedSurvey({ format: 'station-csv', drafts, heightSource: options.heightSource ?? 'typed', rowsRead, warnings });
+  if (rowsRead === 0)
+    throw new SurveyImportError('no-data-rows', 'the file has a header row but no data rows', { line: 2 });
+  return buildParsedSurvey({
+    format: 'station-csv',
+    drafts,
+    heightSource: options.heightSource ?? 'typed',
+    rowsRead,
+    warnings,
+  });
 }

@@ -7,5 +7,11 @@ declare module 'svg-to-pdfkit' {
     fontCallback?: (family: string, bold: boolean, italic: boolean) => string;
     warningCallback?: (message: string) => void;
   }
-  export default function SVGtoPDF(doc: PDFKit.PDFDocument, svg: string, x: number, y: number, options?: SvgToPdfOptions): void;
+  export default function SVGtoPDF(
+    doc: PDFKit.PDFDocument,
+    svg: string,
+    x: number,
+    y: number,
+    options?: SvgToPdfOptions,
+  ): void;
 }

@@ -20,7 +20,10 @@ export interface UnitDefaults {
   waterTemperatureC: number;
   /** Per-person daily use figure a new demand starts with (hydraulics/demand/per-person-figures.ts). */
   perPersonFigureId: string;
-  /** Decimal mark a new project reads typed numbers with: a point in a US project; a metric one follows the browser's language (null). */
+  /**
+   * Decimal mark a new project reads typed numbers with: a point in a US project; a metric one follows the browser's
+   * language (null).
+   */
   decimalMark: '.' | null;
 }
 
@@ -39,7 +42,7 @@ const DEFAULTS: Record<UnitSystem, UnitDefaults> = {
     pipeSeriesId: 'pe-d2239-sidr7',
     linePipeId: 'pe-d2239-sidr7-1.5in',
     networkPipeId: 'pe-d2239-sidr7-1in',
-    designFlowM3s: 15 * US_GALLON_M3 / 60,
+    designFlowM3s: (15 * US_GALLON_M3) / 60,
     coverM: 2.5 * FOOT_M,
     waterTemperatureC: 20,
     perPersonFigureId: 'us-rural-home',

@@ -1,6 +1,14 @@
 import { FOOT_M } from '../../hydraulics/index';
 import { formatNumber } from './number';
-import { pressureOfHead, toDisplay, unitDef, unitOf, type Decimals, type Quantity, type UnitSystem } from './quantities';
+import {
+  pressureOfHead,
+  toDisplay,
+  unitDef,
+  unitOf,
+  type Decimals,
+  type Quantity,
+  type UnitSystem,
+} from './quantities';
 
 /** A stored SI value in the project's unit, with the unit and the quantity's decimals: "2.60 L/min", "1,234.5 m". */
 export function formatQuantity(quantity: Quantity, valueSi: number, system: UnitSystem, decimals?: Decimals): string {
@@ -36,7 +44,9 @@ export function formatDistance(lengthM: number, system: UnitSystem): string {
 
 /** A water temperature in the project's unit: °F first in a US project, with °C alongside (the core's unit). */
 export function formatTemperature(c: number, system: UnitSystem): string {
-  return system === 'us' ? `${formatQuantity('temperature', c, system)} (${formatQuantity('temperature', c, 'metric')})` : formatQuantity('temperature', c, system);
+  return system === 'us'
+    ? `${formatQuantity('temperature', c, system)} (${formatQuantity('temperature', c, 'metric')})`
+    : formatQuantity('temperature', c, system);
 }
 
 /** A duration for people: minutes under 2 h, hours under 3 days, then hours and days. */

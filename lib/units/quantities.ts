@@ -14,7 +14,8 @@ import {
  * Project units at the edge: every figure is stored and computed in SI and shown (or typed) in the
  * project's unit system. One table, so every screen, the PDF and the CSV files show the same unit and
  * the same decimals for the same quantity (elevations, head losses and depths of cover to the
- * hundredth, as a level book and a friction table write them; heads to the tenth). Sizes come from the engineering core's unit tables (hydraulics/units.ts,
+ * hundredth, as a level book and a friction table write them; heads to the tenth). Sizes come from the engineering
+ * core's unit tables (hydraulics/units.ts,
  * hydraulics/constants.ts).
  */
 export type UnitSystem = 'metric' | 'us';
@@ -122,7 +123,10 @@ export function fromDisplay(quantity: Quantity, value: number, system: UnitSyste
   return (value - (def.offset ?? 0)) * def.si;
 }
 
-/** The gauge pressure of a head of water at `temperatureC` (the core's density; 20 °C by default), in the project's unit. */
+/**
+ * The gauge pressure of a head of water at `temperatureC` (the core's density; 20 °C by default), in the project's
+ * unit.
+ */
 export function pressureOfHead(headM: number, system: UnitSystem, temperatureC?: number): number {
   return toDisplay('pressure', headMToPressurePa(headM, temperatureC), system);
 }

@@ -30,7 +30,10 @@ export function parseTypedNumber(text: string, mark: DecimalMark): TypedNumber {
   else if (mark === ',' && PLAIN('.').test(body)) normal = body;
   else if (GROUPED(group, mark).test(body)) normal = body.split(group).join('').replace(mark, '.');
   if (normal === null) {
-    const hint = mark === '.' && /^\d+,\d+$/.test(body) ? ` (this project writes decimals with a point: ${body.replace(',', '.')})` : '';
+    const hint =
+      mark === '.' && /^\d+,\d+$/.test(body)
+        ? ` (this project writes decimals with a point: ${body.replace(',', '.')})`
+        : '';
     return { ok: false, error: `"${text.trim()}" is not a number${hint}` };
   }
   const value = sign * Number(normal);

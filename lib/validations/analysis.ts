@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { lineDesignParts, LineSettingsSchema, StandaloneLineFlowSchema, StandaloneLineStartSchema } from './line-design';
+import {
+  lineDesignParts,
+  LineSettingsSchema,
+  StandaloneLineFlowSchema,
+  StandaloneLineStartSchema,
+} from './line-design';
 import { elevation, metres, nonNegative } from './numbers';
 import { unitSystem } from './projects';
 
@@ -21,7 +26,12 @@ export const ANALYSIS_LIMIT = { name: 'analysis-user', points: 30, durationSecon
  */
 export const AnalysisQuerySchema = z.strictObject({
   units: unitSystem.default('metric'),
-  profilePoints: z.coerce.number({ error: 'profilePoints must be a whole number' }).int('profilePoints must be a whole number').min(50, 'profilePoints must be at least 50').max(20_000, 'profilePoints must be at most 20000').optional(),
+  profilePoints: z.coerce
+    .number({ error: 'profilePoints must be a whole number' })
+    .int('profilePoints must be a whole number')
+    .min(50, 'profilePoints must be at least 50')
+    .max(20_000, 'profilePoints must be at most 20000')
+    .optional(),
 });
 
 /** One station as a route gives it to a saved line (the same height range as a route point). */
@@ -32,7 +42,10 @@ const StationSchema = z.strictObject({
 });
 
 export const LineInputSchema = z.strictObject({
-  stations: z.array(StationSchema, { error: 'Stations must be a list' }).min(2, 'A line needs at least two stations').max(MAX_ANALYSIS_STATIONS, `At most ${MAX_ANALYSIS_STATIONS} stations`),
+  stations: z
+    .array(StationSchema, { error: 'Stations must be a list' })
+    .min(2, 'A line needs at least two stations')
+    .max(MAX_ANALYSIS_STATIONS, `At most ${MAX_ANALYSIS_STATIONS} stations`),
   start: StandaloneLineStartSchema,
   flow: StandaloneLineFlowSchema,
   ...lineDesignParts,

@@ -18,7 +18,9 @@ export const SignInSchema = z.strictObject({
 export type SignInInput = z.infer<typeof SignInSchema>;
 
 /** A token from a mailed link: base64url, 43 characters for 256 bits; anything else is refused as malformed. */
-export const linkToken = z.string({ error: 'The link token must be text' }).regex(/^[A-Za-z0-9_-]{20,100}$/, 'The link is incomplete or altered; open it again from the mail');
+export const linkToken = z
+  .string({ error: 'The link token must be text' })
+  .regex(/^[A-Za-z0-9_-]{20,100}$/, 'The link is incomplete or altered; open it again from the mail');
 
 export const ConfirmSignUpSchema = z.strictObject({ token: linkToken });
 export const PasswordResetRequestSchema = z.strictObject({ email });

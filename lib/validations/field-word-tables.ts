@@ -5,7 +5,9 @@ import type { FieldWordTable } from './field-words';
  * the forms print beside their boxes; `#` is a list position counted from 1.
  */
 
-/** The line designer: ends, flow, stretches, fittings, devices, custom pipes, settings; and the core's station fields. */
+/**
+ * The line designer: ends, flow, stretches, fittings, devices, custom pipes, settings; and the core's station fields.
+ */
 export const LINE_DESIGN_WORDS: FieldWordTable = {
   'start.levelM': { label: 'Start: water level', quantity: 'elevation' },
   'start.outletHeadM': { label: 'Start: grade at the pump outlet, pumping', quantity: 'elevation' },
@@ -58,7 +60,10 @@ export const LINE_DESIGN_WORDS: FieldWordTable = {
 export const CUSTOM_PIPE_WORDS: FieldWordTable = Object.fromEntries(
   Object.entries(LINE_DESIGN_WORDS)
     .filter(([key]) => key.startsWith('pipes.#.'))
-    .map(([key, word]) => [key.slice('pipes.#.'.length), { ...word, label: word.label.replace('Custom pipe #: ', '').replace(/^./, (c) => c.toUpperCase()) }]),
+    .map(([key, word]) => [
+      key.slice('pipes.#.'.length),
+      { ...word, label: word.label.replace('Custom pipe #: ', '').replace(/^./, (c) => c.toUpperCase()) },
+    ]),
 );
 
 /** A new line: its name and the chainage window it takes of its route. */
@@ -133,7 +138,10 @@ export const PHOTO_WORDS: FieldWordTable = {
   chainageM: { label: 'Chainage', quantity: 'chainage' },
 };
 
-/** A daily use on the Lift & storage page (lib/validations/demand-uses.ts); the amount's unit follows its kind, so only the garden's area is converted. */
+/**
+ * A daily use on the Lift & storage page (lib/validations/demand-uses.ts); the amount's unit follows its kind, so only
+ * the garden's area is converted.
+ */
 export const DEMAND_USE_WORDS: FieldWordTable = {
   label: { label: 'Label' },
   areaM2: { label: 'Garden area', quantity: 'area' },

@@ -16,19 +16,27 @@ export type FieldWordTable = Readonly<Record<string, FieldWord>>;
 
 type Issue = z.core.$ZodIssue;
 
-const patternOf = (path: readonly PropertyKey[]) => path.map((part) => (typeof part === 'number' ? '#' : String(part))).join('.');
+const patternOf = (path: readonly PropertyKey[]) =>
+  path.map((part) => (typeof part === 'number' ? '#' : String(part))).join('.');
 
 /**
  * The screen's name of a path: the table's label with its list positions filled in, or null when the
  * table does not know it. `firstNumber` is the number the screen gives a list's first item (1, or
  * 51 for a page of a route's rows that starts at its 51st point).
  */
-export function fieldLabel(path: readonly PropertyKey[], table: FieldWordTable, firstNumber = 1): { label: string; quantity?: Quantity } | null {
+export function fieldLabel(
+  path: readonly PropertyKey[],
+  table: FieldWordTable,
+  firstNumber = 1,
+): { label: string; quantity?: Quantity } | null {
   const word = table[patternOf(path)];
   if (!word) return null;
   const positions = path.filter((part): part is number => typeof part === 'number');
   let k = 0;
-  return { label: word.label.replace(/#/g, () => String((positions[k++] ?? 0) + firstNumber)), quantity: word.quantity };
+  return {
+    label: word.label.replace(/#/g, () => String((positions[k++] ?? 0) + firstNumber)),
+    quantity: word.quantity,
+  };
 }
 
 /**
@@ -59,7 +67,8 @@ export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTabl
   if (issue.message.startsWith(label)) return issue.message;
   // "Latitude must be …" under "Point 2: latitude" reads "Point 2: latitude must be …".
   const short = label.split(': ').pop() ?? label;
-  if (issue.message.toLowerCase().startsWith(short.toLowerCase())) return `${label}${issue.message.slice(short.length)}`;
+  if (issue.message.toLowerCase().startsWith(short.toLowerCase()))
+    return `${label}${issue.message.slice(short.length)}`;
   // "Safety factor must be …" under "Safety factor on ratings", "The highest velocity must …" under "Highest velocity".
   const verb = issue.message.indexOf(' must ');
   const subject = verb > 0 ? issue.message.slice(0, verb).replace(/^the /i, '').toLowerCase() : '';
@@ -74,12 +83,23 @@ function lowerFirst(text: string): string {
   return /^([A-Z][a-z]|[A-HJ-Z] )/.test(text) ? text[0].toLowerCase() + text.slice(1) : text;
 }
 
-/** zod issues -> `{ "field.path": [messages] }` (the keys fieldErrorsOf gives), worded for the screen in the project's units. */
-export function fieldErrorsIn(error: z.ZodError, system: UnitSystem, table: FieldWordTable, firstNumber = 1): FieldErrors {
+/**
+ * zod issues -> `{ "field.path": [messages] }` (the keys fieldErrorsOf gives), worded for the screen in the project's
+ * units.
+ */
+export function fieldErrorsIn(
+  error: z.ZodError,
+  system: UnitSystem,
+  table: FieldWordTable,
+  firstNumber = 1,
+): FieldErrors {
   const fields = new Map<string, string[]>();
   const add = (key: string, message: string) => fields.set(key, [...(fields.get(key) ?? []), message]);
   // A field's own range or type refusal says it best: a whole-object check on the same field adds nothing.
-  const ordered = [...error.issues.filter((i) => i.code !== 'custom'), ...error.issues.filter((i) => i.code === 'custom')];
+  const ordered = [
+    ...error.issues.filter((i) => i.code !== 'custom'),
+    ...error.issues.filter((i) => i.code === 'custom'),
+  ];
   for (const issue of ordered) {
     const key = issue.path.length > 0 ? issue.path.map(String).join('.') : '_';
     if (issue.code === 'custom' && fields.has(key)) continue;

@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { assertPipeSpec, HydraulicsInputError, WATER_TEMPERATURE_MAX_C, WATER_TEMPERATURE_MIN_C } from '../../hydraulics/index';
+import {
+  assertPipeSpec,
+  HydraulicsInputError,
+  WATER_TEMPERATURE_MAX_C,
+  WATER_TEMPERATURE_MIN_C,
+} from '../../hydraulics/index';
 import { safeText, uuid } from './common';
 import { between, metres, positive } from './numbers';
 
@@ -18,9 +23,13 @@ const PumpStartSchema = z.strictObject({
 /** A ram site of the project: its plan gives the outlet head at every analysis (lib/lines/ram-start.ts). */
 const RamSiteStartSchema = z.strictObject({ kind: z.literal('ram-site'), ramSiteId: uuid('Ram site') });
 
-export const LineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema, RamSiteStartSchema], {
-  error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")',
-});
+export const LineStartSchema = z.discriminatedUnion(
+  'kind',
+  [WaterLevelStartSchema, PumpStartSchema, RamSiteStartSchema],
+  {
+    error: 'Start must be a water level ("water-level"), a pump outlet ("pump") or a ram site ("ram-site")',
+  },
+);
 /** The starts a line given whole in a request can have: no project, so no ram site to read. */
 export const StandaloneLineStartSchema = z.discriminatedUnion('kind', [WaterLevelStartSchema, PumpStartSchema], {
   error: 'Start must be a water level ("water-level") or a pump outlet ("pump")',
@@ -53,7 +62,9 @@ export const StandaloneLineFlowSchema = z.discriminatedUnion('kind', [DesignFlow
   error: 'Flow must be a design flow ("design") or "find"',
 });
 
-const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], { error: 'Material must be pvc, pe, steel or custom' });
+const PipeMaterialSchema = z.enum(['pvc', 'pe', 'steel', 'custom'], {
+  error: 'Material must be pvc, pe, steel or custom',
+});
 
 /** A user's own pipe: the shape here, the engineering limits from the core's `assertPipeSpec`. */
 export const CustomPipeSchema = z
@@ -110,7 +121,9 @@ export const LineDeviceSchema = z.strictObject({
 
 export const LineSettingsSchema = z
   .strictObject({
-    frictionMethod: z.enum(['hazen-williams', 'darcy-weisbach'], { error: 'Friction method must be hazen-williams or darcy-weisbach' }).optional(),
+    frictionMethod: z
+      .enum(['hazen-williams', 'darcy-weisbach'], { error: 'Friction method must be hazen-williams or darcy-weisbach' })
+      .optional(),
     waterTemperatureC: between('Water temperature', WATER_TEMPERATURE_MIN_C, WATER_TEMPERATURE_MAX_C, '°C').optional(),
     safetyFactor: between('Safety factor', 1, 10).optional(),
     velocityMinMs: between('Lowest velocity', 0, 10, 'm/s').optional(),
@@ -142,25 +155,36 @@ export const LineWinterSchema = z.strictObject({
  */
 export const lineDesignParts = {
   end: LineEndSchema,
-  stretches: z.array(LineStretchSchema, { error: 'Stretches must be a list' }).min(1, 'A line needs at least one stretch').max(500, 'At most 500 stretches'),
-  fittings: z.array(LineFittingSchema, { error: 'Fittings must be a list' }).max(1000, 'At most 1000 fittings').default([]),
+  stretches: z
+    .array(LineStretchSchema, { error: 'Stretches must be a list' })
+    .min(1, 'A line needs at least one stretch')
+    .max(500, 'At most 500 stretches'),
+  fittings: z
+    .array(LineFittingSchema, { error: 'Fittings must be a list' })
+    .max(1000, 'At most 1000 fittings')
+    .default([]),
   devices: z.array(LineDeviceSchema, { error: 'Devices must be a list' }).max(1000, 'At most 1000 devices').default([]),
-  pipes: z.array(CustomPipeSchema, { error: 'Custom pipes must be a list' }).max(100, 'At most 100 custom pipes').default([]),
+  pipes: z
+    .array(CustomPipeSchema, { error: 'Custom pipes must be a list' })
+    .max(100, 'At most 100 custom pipes')
+    .default([]),
   settings: LineSettingsSchema.default({}),
 };
 
 const { end, ...restOfDesign } = lineDesignParts;
 
-export const LineDesignSchema = z.strictObject({
-  start: LineStartSchema,
-  end,
-  flow: LineFlowSchema,
-  ...restOfDesign,
-  winter: LineWinterSchema.optional(),
-}).refine((d) => d.flow.kind !== 'pump-delivery' || d.start.kind === 'ram-site', {
-  message: 'The flow can come from the ram only when the line starts at a ram pump outlet',
-  path: ['flow', 'kind'],
-});
+export const LineDesignSchema = z
+  .strictObject({
+    start: LineStartSchema,
+    end,
+    flow: LineFlowSchema,
+    ...restOfDesign,
+    winter: LineWinterSchema.optional(),
+  })
+  .refine((d) => d.flow.kind !== 'pump-delivery' || d.start.kind === 'ram-site', {
+    message: 'The flow can come from the ram only when the line starts at a ram pump outlet',
+    path: ['flow', 'kind'],
+  });
 
 export type LineDesign = z.output<typeof LineDesignSchema>;
 export type LineDesignInput = z.input<typeof LineDesignSchema>;

@@ -14,9 +14,19 @@ export const MAX_EXAGGERATION = 1000;
  */
 export const LineReportQuerySchema = z.strictObject({
   exaggeration: z
-    .union([z.literal('auto'), z.string().regex(/^\d{1,4}(\.\d{1,4})?$/, 'exaggeration must be auto or a number').transform(Number).pipe(positive('exaggeration', MAX_EXAGGERATION))], {
-      error: 'exaggeration must be auto or a number',
-    })
+    .union(
+      [
+        z.literal('auto'),
+        z
+          .string()
+          .regex(/^\d{1,4}(\.\d{1,4})?$/, 'exaggeration must be auto or a number')
+          .transform(Number)
+          .pipe(positive('exaggeration', MAX_EXAGGERATION)),
+      ],
+      {
+        error: 'exaggeration must be auto or a number',
+      },
+    )
     .default('auto'),
 });
 

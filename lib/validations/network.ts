@@ -17,7 +17,9 @@ export const DEMAND_FROM = ['uses', 'fixed', 'line'] as const;
 
 const NodeDataSchema = z.strictObject({
   waterLevelM: finite('Water level').nullable().optional(),
-  typedPumpHead: z.strictObject({ outletHeadM: finite('Pump outlet head'), shutoffHeadM: finite('Pump shut-off head').optional() }).optional(),
+  typedPumpHead: z
+    .strictObject({ outletHeadM: finite('Pump outlet head'), shutoffHeadM: finite('Pump shut-off head').optional() })
+    .optional(),
   inletFloatValve: z.boolean({ error: 'Float valve must be true or false' }).optional(),
   outletKind: z.enum(OUTLET_KINDS, { error: `Outlet must be one of ${OUTLET_KINDS.join(', ')}` }).optional(),
   residualHeadM: nonNegative('Residual head wanted', 200, 'm').nullable().optional(),
@@ -46,13 +48,15 @@ export const NetworkNodeSchema = z
         if (node.data.waterLevelM == null) issueAt(ctx, 'data.waterLevelM', 'Enter the water level of the source');
         break;
       case 'break-pressure-tank':
-        if (node.data.waterLevelM == null && node.elevationM === null) issueAt(ctx, 'data.waterLevelM', 'Enter the water level of the break-pressure tank');
+        if (node.data.waterLevelM == null && node.elevationM === null)
+          issueAt(ctx, 'data.waterLevelM', 'Enter the water level of the break-pressure tank');
         break;
       case 'ram-outlet':
         if (node.ramSiteId === null) issueAt(ctx, 'ramSiteId', 'Pick the ram site whose plan gives the outlet');
         break;
       case 'tank':
-        if (node.tankId === null) issueAt(ctx, 'tankId', 'Pick the tank (its size and levels are kept on the Lift & storage page)');
+        if (node.tankId === null)
+          issueAt(ctx, 'tankId', 'Pick the tank (its size and levels are kept on the Lift & storage page)');
         break;
       case 'junction':
         if (node.lineId === null) issueAt(ctx, 'lineId', 'Pick the line the take-off is on');
@@ -60,17 +64,25 @@ export const NetworkNodeSchema = z
         break;
       case 'outlet':
         if (!node.data.outletKind) issueAt(ctx, 'data.outletKind', 'Say what the outlet is');
-        if (node.data.outletKind !== 'free' && node.elevationM === null) issueAt(ctx, 'elevationM', 'Enter the outlet elevation');
-        if (node.data.demandFrom === 'fixed' && node.data.fixedDemandM3s == null) issueAt(ctx, 'data.fixedDemandM3s', 'Enter the fixed demand');
+        if (node.data.outletKind !== 'free' && node.elevationM === null)
+          issueAt(ctx, 'elevationM', 'Enter the outlet elevation');
+        if (node.data.demandFrom === 'fixed' && node.data.fixedDemandM3s == null)
+          issueAt(ctx, 'data.fixedDemandM3s', 'Enter the fixed demand');
         break;
     }
-    if (node.kind !== 'junction' && (node.lineId !== null || node.chainageM !== null)) issueAt(ctx, 'lineId', 'Only a take-off sits on a line');
+    if (node.kind !== 'junction' && (node.lineId !== null || node.chainageM !== null))
+      issueAt(ctx, 'lineId', 'Only a take-off sits on a line');
   });
 export type NetworkNodeInput = z.output<typeof NetworkNodeSchema>;
 
 const LinkDataSchema = z.strictObject({
   lengthM: positive('Pipe length', 100_000, 'm').optional(),
-  pipe: z.union([safeText('Pipe id', 80).pipe(z.string().min(1, 'Pick a pipe')), CustomPipeSchema], { error: 'Pipe must be a catalogue id or a pipe spec' }).nullable().optional(),
+  pipe: z
+    .union([safeText('Pipe id', 80).pipe(z.string().min(1, 'Pick a pipe')), CustomPipeSchema], {
+      error: 'Pipe must be a catalogue id or a pipe spec',
+    })
+    .nullable()
+    .optional(),
   insideDiameterM: positive('Inside diameter', 5, 'm').nullable().optional(),
   hazenC: positive('Hazen-Williams C', 200).nullable().optional(),
   minorK: nonNegative('Minor loss coefficient', 1000).optional(),
@@ -98,7 +110,8 @@ export const NetworkLinkSchema = z
     }
     if (link.kind === 'valve') {
       if (!link.data.valveKind) issueAt(ctx, 'data.valveKind', 'Say what the valve is');
-      if (link.data.valveKind === 'pressure-reducing' && link.data.setHeadM === undefined) issueAt(ctx, 'data.setHeadM', 'Enter the pressure the valve holds');
+      if (link.data.valveKind === 'pressure-reducing' && link.data.setHeadM === undefined)
+        issueAt(ctx, 'data.setHeadM', 'Enter the pressure the valve holds');
     }
   });
 export type NetworkLinkInput = z.output<typeof NetworkLinkSchema>;

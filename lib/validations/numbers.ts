@@ -10,7 +10,10 @@ import { z } from 'zod';
 
 /** Longest length or chainage taken, m (1000 km: beyond any line, and keeps sums finite). */
 export const MAX_LENGTH_M = 1e6;
-/** Lowest and highest ground a survey point or node may stand on, m above sea level (the Dead Sea shore is about -430 m, the highest summit 8,849 m; from memory). */
+/**
+ * Lowest and highest ground a survey point or node may stand on, m above sea level (the Dead Sea shore is about -430 m,
+ * the highest summit 8,849 m; from memory).
+ */
 export const MIN_ELEVATION_M = -500;
 export const MAX_ELEVATION_M = 9000;
 
@@ -45,7 +48,11 @@ export function whole(label: string, min: number, max?: number, unit = '') {
 
 /** A whole number written in an address's query (`?offset=200`): digits only, then `whole`'s range and words. */
 export function wholeInQuery(label: string, min: number, max?: number) {
-  return z.string().regex(/^\d{1,9}$/, `${label} must be a whole number`).transform(Number).pipe(whole(label, min, max));
+  return z
+    .string()
+    .regex(/^\d{1,9}$/, `${label} must be a whole number`)
+    .transform(Number)
+    .pipe(whole(label, min, max));
 }
 
 /** More than zero, at most one (an efficiency, a share). */

@@ -3,7 +3,9 @@ import { safeText, uuid } from './common';
 import { chainage } from './numbers';
 
 export const PhotoParams = z.strictObject({ photoId: uuid('Photo id') });
-export const PhotoImageQuery = z.strictObject({ size: z.enum(['full', 'thumbnail'], { error: 'Size is full or thumbnail' }).default('full') });
+export const PhotoImageQuery = z.strictObject({
+  size: z.enum(['full', 'thumbnail'], { error: 'Size is full or thumbnail' }).default('full'),
+});
 
 const chainageM = chainage('Chainage');
 
@@ -11,7 +13,13 @@ const chainageM = chainage('Chainage');
 export const PhotoUploadFieldsSchema = z.strictObject({
   caption: safeText('Caption', 500).default(''),
   routeId: uuid('Route id').optional(),
-  chainageM: z.string().trim().regex(/^\d+(\.\d+)?$/, 'Chainage must be a number (m)').transform(Number).pipe(chainageM).optional(),
+  chainageM: z
+    .string()
+    .trim()
+    .regex(/^\d+(\.\d+)?$/, 'Chainage must be a number (m)')
+    .transform(Number)
+    .pipe(chainageM)
+    .optional(),
 });
 
 export const PhotoUpdateSchema = z

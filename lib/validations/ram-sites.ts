@@ -22,17 +22,22 @@ const DeliveryPipeSchema = z
     lengthM: nonNegative('Delivery pipe length').nullable().default(null),
     pipeId: z.string({ error: 'Delivery pipe must be a catalogue pipe id' }).max(80).nullable().default(null),
     insideDiameterM: positive('Delivery pipe bore').nullable().default(null),
-    hazenWilliamsC: positive('Hazen-Williams C').max(200, 'Hazen-Williams C above 200 is not a real pipe').nullable().default(null),
+    hazenWilliamsC: positive('Hazen-Williams C')
+      .max(200, 'Hazen-Williams C above 200 is not a real pipe')
+      .nullable()
+      .default(null),
     pressureRatingPa: positive('Delivery pipe rating').nullable().default(null),
   })
   .superRefine((value, ctx) => {
-    if (value.routeId === null && value.lengthM === null) issueAt(ctx, 'lengthM', 'Give the delivery pipe length or choose a surveyed route');
+    if (value.routeId === null && value.lengthM === null)
+      issueAt(ctx, 'lengthM', 'Give the delivery pipe length or choose a surveyed route');
     if (value.pipeId !== null) {
       if (!findPipe(value.pipeId)) issueAt(ctx, 'pipeId', `"${value.pipeId}" is not a pipe in the catalogue`);
       return;
     }
     if (value.insideDiameterM === null) issueAt(ctx, 'insideDiameterM', 'Choose a catalogue pipe or give the bore');
-    if (value.hazenWilliamsC === null) issueAt(ctx, 'hazenWilliamsC', 'Choose a catalogue pipe or give its Hazen-Williams C');
+    if (value.hazenWilliamsC === null)
+      issueAt(ctx, 'hazenWilliamsC', 'Choose a catalogue pipe or give its Hazen-Williams C');
   });
 
 /** A ram site as the form and the API give it (SI). */
@@ -48,16 +53,25 @@ export const RamSiteSchema = z
     /** Elevation of the pump, m above the survey datum: a delivery line fed by this ram measures its head from here. */
     pumpElevationM: elevation('Pump elevation').nullable().default(null),
     deliveryPipe: DeliveryPipeSchema,
-    sizeClassId: z.enum(SIZE_CLASS_IDS, { error: `Size class must be one of ${SIZE_CLASS_IDS.join(', ')}` }).nullable().default(null),
+    sizeClassId: z
+      .enum(SIZE_CLASS_IDS, { error: `Size class must be one of ${SIZE_CLASS_IDS.join(', ')}` })
+      .nullable()
+      .default(null),
     pumpCount: whole('Pumps in parallel', 1, 20).default(1),
     measuredEfficiency: fraction('Measured efficiency').nullable().default(null),
     /** Published efficiency table the plan reads (shown with every plan). */
-    efficiencyTableId: z.enum(EFFICIENCY_TABLE_IDS, { error: `Efficiency table must be one of ${EFFICIENCY_TABLE_IDS.join(', ')}` }).default('trade-pocketbook'),
+    efficiencyTableId: z
+      .enum(EFFICIENCY_TABLE_IDS, { error: `Efficiency table must be one of ${EFFICIENCY_TABLE_IDS.join(', ')}` })
+      .default('trade-pocketbook'),
     notes: safeText('Notes', 4000).default(''),
   })
   .superRefine((value, ctx) => {
     if (value.liftM <= value.fallM) {
-      issueAt(ctx, 'liftM', 'Lift must be above the fall: water that only needs to go below the source can flow there by gravity');
+      issueAt(
+        ctx,
+        'liftM',
+        'Lift must be above the fall: water that only needs to go below the source can flow there by gravity',
+      );
     }
   });
 export type RamSiteInput = z.output<typeof RamSiteSchema>;
@@ -84,7 +98,11 @@ export const CommissioningReadingSchema = z
   .superRefine((value, ctx) => {
     const deliveredBucket = value.deliveredBucketVolumeM3 !== null || value.deliveredBucketSeconds !== null;
     if (deliveredBucket === (value.deliveredFlowM3s !== null)) {
-      issueAt(ctx, 'deliveredFlowM3s', 'Give the delivered flow as a timed bucket at the top or as a flow, one of the two');
+      issueAt(
+        ctx,
+        'deliveredFlowM3s',
+        'Give the delivered flow as a timed bucket at the top or as a flow, one of the two',
+      );
     } else if (deliveredBucket && (value.deliveredBucketVolumeM3 === null || value.deliveredBucketSeconds === null)) {
       issueAt(ctx, 'deliveredBucketSeconds', 'A timed bucket needs both its volume and its seconds');
     }
@@ -93,7 +111,8 @@ export const CommissioningReadingSchema = z
       issueAt(ctx, 'driveMeasure', 'Say whether the figure is the drive flow or the waste flow');
     }
     if (value.driveMeasure !== 'plan') {
-      if (driveBucket === (value.driveFlowM3s !== null)) issueAt(ctx, 'driveFlowM3s', 'Give the flow as a timed bucket or as a flow, one of the two');
+      if (driveBucket === (value.driveFlowM3s !== null))
+        issueAt(ctx, 'driveFlowM3s', 'Give the flow as a timed bucket or as a flow, one of the two');
       else if (driveBucket && (value.driveBucketVolumeM3 === null || value.driveBucketSeconds === null)) {
         issueAt(ctx, 'driveBucketSeconds', 'A timed bucket needs both its volume and its seconds');
       }

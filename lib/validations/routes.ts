@@ -1,7 +1,18 @@
 import { z } from 'zod';
 import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { nameText, safeText, uuid } from './common';
-import { between, chainage, elevation, finite, MAX_LENGTH_M, metres, nonNegative, positive, whole, wholeInQuery } from './numbers';
+import {
+  between,
+  chainage,
+  elevation,
+  finite,
+  MAX_LENGTH_M,
+  metres,
+  nonNegative,
+  positive,
+  whole,
+  wholeInQuery,
+} from './numbers';
 
 export const RouteParams = z.strictObject({ routeId: uuid('Route id') });
 
@@ -10,7 +21,9 @@ export const MAX_ROUTE_POINTS = 200_000;
 /** Largest JSON body of a points save, bytes: about 150 bytes a point. */
 export const MAX_POINTS_JSON_BYTES = 40 * 1024 * 1024;
 
-export const heightSource = z.enum(HEIGHT_SOURCES, { error: `Height source must be one of ${HEIGHT_SOURCES.join(', ')}` });
+export const heightSource = z.enum(HEIGHT_SOURCES, {
+  error: `Height source must be one of ${HEIGHT_SOURCES.join(', ')}`,
+});
 
 export const CreateRouteSchema = z.strictObject({
   name: nameText('Route name'),
@@ -55,19 +68,44 @@ export const SavePointsSchema = z.strictObject({
 export type SavePointsInput = z.infer<typeof SavePointsSchema>;
 
 const WindowStart = z.object({ window: z.object({ fromSeq: z.number().int().min(0).max(MAX_ROUTE_POINTS) }) });
-/** The route page's number of a save's first point: a page of rows (`window`) starts at its first seq + 1, so a refusal names the row as the table does. */
+/**
+ * The route page's number of a save's first point: a page of rows (`window`) starts at its first seq + 1, so a refusal
+ * names the row as the table does.
+ */
 export function firstPointNumberOf(data: unknown): number {
   const sent = WindowStart.safeParse(data);
   return sent.success ? sent.data.window.fromSeq + 1 : 1;
 }
 
-const CLEANUP_KINDS = ['grade-spike', 'median-outlier', 'duplicate', 'chainage-backwards', 'time-backwards', 'smoothing', 'benchmark-offset'] as const;
+const CLEANUP_KINDS = [
+  'grade-spike',
+  'median-outlier',
+  'duplicate',
+  'chainage-backwards',
+  'time-backwards',
+  'smoothing',
+  'benchmark-offset',
+] as const;
 const kind = z.enum(CLEANUP_KINDS, { error: `Kind must be one of ${CLEANUP_KINDS.join(', ')}` });
 const pointIndex = whole('Index', 0);
 
 export const ProposedChangeSchema = z.discriminatedUnion('field', [
-  z.strictObject({ kind, index: pointIndex, field: z.literal('elevationM'), from: finite('From'), to: finite('To'), reason: safeText('Reason', 500).default('') }),
-  z.strictObject({ kind, index: pointIndex, field: z.literal('deleted'), from: z.literal(false), to: z.literal(true), reason: safeText('Reason', 500).default('') }),
+  z.strictObject({
+    kind,
+    index: pointIndex,
+    field: z.literal('elevationM'),
+    from: finite('From'),
+    to: finite('To'),
+    reason: safeText('Reason', 500).default(''),
+  }),
+  z.strictObject({
+    kind,
+    index: pointIndex,
+    field: z.literal('deleted'),
+    from: z.literal(false),
+    to: z.literal(true),
+    reason: safeText('Reason', 500).default(''),
+  }),
 ]);
 
 export const CleanupDecisionSchema = z
@@ -87,7 +125,10 @@ export type SplitRouteInput = z.input<typeof SplitRouteSchema>;
 
 export const TrimRouteSchema = z
   .strictObject({ fromChainageM: chainage('Keep from'), toChainageM: metres('Keep to') })
-  .refine((v) => v.toChainageM > v.fromChainageM, { message: 'Keep to must be beyond keep from', path: ['toChainageM'] });
+  .refine((v) => v.toChainageM > v.fromChainageM, {
+    message: 'Keep to must be beyond keep from',
+    path: ['toChainageM'],
+  });
 export type TrimRouteInput = z.input<typeof TrimRouteSchema>;
 
 export const JoinRoutesSchema = z.strictObject({
@@ -122,14 +163,34 @@ export const RouteProposalsQuerySchema = z
   .strictObject({
     smoothingWindow: wholeInQuery('smoothingWindow', 3, 101).optional(),
     benchmarkPoint: wholeInQuery('benchmarkPoint', 1, MAX_ROUTE_POINTS).optional(),
-    benchmarkElevationM: z.string().regex(/^-?\d{1,5}(\.\d{1,6})?$/, 'benchmarkElevationM must be a number of metres').transform(Number).pipe(elevation('benchmarkElevationM')).optional(),
+    benchmarkElevationM: z
+      .string()
+      .regex(/^-?\d{1,5}(\.\d{1,6})?$/, 'benchmarkElevationM must be a number of metres')
+      .transform(Number)
+      .pipe(elevation('benchmarkElevationM'))
+      .optional(),
   })
   .transform((q, ctx): { smoothingWindow: number } | { benchmarkPoint: number; benchmarkElevationM: number } => {
     const benchmark = q.benchmarkPoint !== undefined || q.benchmarkElevationM !== undefined;
     if (!benchmark) return { smoothingWindow: q.smoothingWindow ?? 5 };
-    if (q.smoothingWindow !== undefined) ctx.addIssue({ code: 'custom', path: ['smoothingWindow'], message: 'Ask for smoothing or for a benchmark offset, not both' });
-    if (q.benchmarkPoint === undefined) ctx.addIssue({ code: 'custom', path: ['benchmarkPoint'], message: 'Give benchmarkPoint with benchmarkElevationM' });
-    if (q.benchmarkElevationM === undefined) ctx.addIssue({ code: 'custom', path: ['benchmarkElevationM'], message: 'Give benchmarkElevationM with benchmarkPoint' });
+    if (q.smoothingWindow !== undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['smoothingWindow'],
+        message: 'Ask for smoothing or for a benchmark offset, not both',
+      });
+    if (q.benchmarkPoint === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['benchmarkPoint'],
+        message: 'Give benchmarkPoint with benchmarkElevationM',
+      });
+    if (q.benchmarkElevationM === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['benchmarkElevationM'],
+        message: 'Give benchmarkElevationM with benchmarkPoint',
+      });
     return { benchmarkPoint: q.benchmarkPoint ?? 0, benchmarkElevationM: q.benchmarkElevationM ?? 0 };
   });
 export type RouteProposalsQuery = z.infer<typeof RouteProposalsQuerySchema>;

@@ -3,7 +3,14 @@ import { nameText, safeText } from './common';
 import { isoDate, monthDay } from './lift-common';
 import { whole } from './numbers';
 
-export const TASK_KINDS = ['drain-down', 'refill', 'silt-cleaning', 'intake-screen', 'valve-exercise', 'other'] as const;
+export const TASK_KINDS = [
+  'drain-down',
+  'refill',
+  'silt-cleaning',
+  'intake-screen',
+  'valve-exercise',
+  'other',
+] as const;
 
 export const SeasonalTaskSchema = z.strictObject({
   kind: z.enum(TASK_KINDS, { error: `Kind must be one of ${TASK_KINDS.join(', ')}` }).default('other'),

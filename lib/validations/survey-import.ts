@@ -23,7 +23,14 @@ const routeName = nameText('Route name');
 export const GpsCsvImportSchema = z.strictObject({
   format: z.literal('gps-csv'),
   name: routeName,
-  mapping: z.strictObject({ latitude: column, longitude: column, elevation: column, time: column, name: column, accuracy: column }),
+  mapping: z.strictObject({
+    latitude: column,
+    longitude: column,
+    elevation: column,
+    time: column,
+    name: column,
+    accuracy: column,
+  }),
   elevationUnit: lengthUnit,
   accuracyIsVertical: z.boolean().optional(),
   heightSource: heightSource.default('gps'),

@@ -20,7 +20,9 @@ export const TankSchema = z
     baseElevationM: finite('Tank floor elevation').nullable().default(null),
     lowLevelM: nonNegative('Lowest working level').default(0),
     overflowLevelM: positive('Overflow level').nullable().default(null),
-    supplyKind: z.enum(TANK_SUPPLY_KINDS, { error: 'Supply must be ram-sites, source or entered' }).default('ram-sites'),
+    supplyKind: z
+      .enum(TANK_SUPPLY_KINDS, { error: 'Supply must be ram-sites, source or entered' })
+      .default('ram-sites'),
     supplySourceId: uuid('Supply source').nullable().default(null),
     supplyFlowM3s: positive('Supply flow').nullable().default(null),
     supplyHoursPerDay: positive('Supply hours per day', 24, 'h').default(24),
@@ -33,7 +35,9 @@ export const TankSchema = z
     if (value.overflowLevelM !== null && value.overflowLevelM <= value.lowLevelM) {
       issueAt(ctx, 'overflowLevelM', 'Overflow level must be above the lowest working level');
     }
-    if (value.supplyKind === 'source' && value.supplySourceId === null) issueAt(ctx, 'supplySourceId', 'Choose the source that feeds the tank');
-    if (value.supplyKind === 'entered' && value.supplyFlowM3s === null) issueAt(ctx, 'supplyFlowM3s', 'Enter the supply flow');
+    if (value.supplyKind === 'source' && value.supplySourceId === null)
+      issueAt(ctx, 'supplySourceId', 'Choose the source that feeds the tank');
+    if (value.supplyKind === 'entered' && value.supplyFlowM3s === null)
+      issueAt(ctx, 'supplyFlowM3s', 'Enter the supply flow');
   });
 export type TankInput = z.output<typeof TankSchema>;

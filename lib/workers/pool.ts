@@ -14,7 +14,11 @@ export const DEFAULT_TASK_TIME_LIMIT_MS = 20_000;
 const MAX_QUEUED_TASKS = 64;
 
 /** Error classes a task may throw that callers catch by class; anything else comes back as a plain Error. */
-const KNOWN_ERRORS: Record<string, new (...args: never[]) => Error> = { SurveyImportError, HydraulicsInputError, AppError };
+const KNOWN_ERRORS: Record<string, new (...args: never[]) => Error> = {
+  SurveyImportError,
+  HydraulicsInputError,
+  AppError,
+};
 
 const holder = globalThis as unknown as { runnelPool?: Promise<Piscina> };
 
@@ -59,7 +63,11 @@ export interface RunOptions {
  * answering others. Errors the task throws come back as their own class; a task over its time
  * limit is stopped (422); a full queue is a 503 with Retry-After.
  */
-export async function runInWorker<K extends TaskName>(task: K, input: TaskInput<K>, options: RunOptions = {}): Promise<TaskOutput<K>> {
+export async function runInWorker<K extends TaskName>(
+  task: K,
+  input: TaskInput<K>,
+  options: RunOptions = {},
+): Promise<TaskOutput<K>> {
   const limitMs = options.timeLimitMs ?? DEFAULT_TASK_TIME_LIMIT_MS;
   const workers = await pool();
   let reply: WorkerReply;
@@ -68,10 +76,18 @@ export async function runInWorker<K extends TaskName>(task: K, input: TaskInput<
   } catch (error) {
     if (error instanceof Error && (error.name === 'AbortError' || error.name === 'TimeoutError')) {
       const seconds = Math.round(limitMs / 100) / 10;
-      throw new AppError('unprocessable', `Working on this took longer than ${seconds} s, so it was stopped; send a smaller file or a shorter line`);
+      throw new AppError(
+        'unprocessable',
+        `Working on this took longer than ${seconds} s, so it was stopped; send a smaller file or a shorter line`,
+      );
     }
     if (error instanceof Error && /queue is at limit/i.test(error.message)) {
-      throw new AppError('service_unavailable', 'The server is busy with other work; try again in a few seconds', undefined, { retryAfterSeconds: 5 });
+      throw new AppError(
+        'service_unavailable',
+        'The server is busy with other work; try again in a few seconds',
+        undefined,
+        { retryAfterSeconds: 5 },
+      );
     }
     throw error;
   }

@@ -26,7 +26,11 @@ export const TASKS = {
   'survey.parse': (input: { bytes: Uint8Array; fileName: string; options: SurveyImportOptions; routeId: string }) => {
     const { text } = sniffSurveyFile(input.bytes, { fileName: input.fileName });
     const { points, ...outline } = parseSurveyText(text, input.options);
-    return { survey: outline, rows: surveyRows(input.routeId, points), sha256: createHash('sha256').update(input.bytes).digest('hex') };
+    return {
+      survey: outline,
+      rows: surveyRows(input.routeId, points),
+      sha256: createHash('sha256').update(input.bytes).digest('hex'),
+    };
   },
   /** Analyses a whole line (the core's analyzeLine); `profilePoints` thins the profile for drawing. */
   'line.analyse': (input: { line: LineInput; profilePoints?: number }) => {
@@ -40,7 +44,8 @@ export const TASKS = {
   /** Each tank's storage from the outlets it serves (the Lift & storage page). */
   'network.tank-storage': (input: NetworkContext) => tankStorageRun(input),
   /** Least-cost pipe sizes from the team's price list (HiGHS, loaded in the worker). */
-  'network.size': (input: { context: NetworkContext; onePipePerLink: boolean; timeLimitS: number }) => sizeNetworkRun(input.context, input),
+  'network.size': (input: { context: NetworkContext; onePipePerLink: boolean; timeLimitS: number }) =>
+    sizeNetworkRun(input.context, input),
   /** Decodes a HEIC photo's picture to RGBA pixels (libheif as WebAssembly: CPU-bound, so off the request thread). */
   'photo.decode-heic': (input: { bytes: Uint8Array; maxPixels: number }) => decodeHeic(input.bytes, input.maxPixels),
   /** For the pool's own tests: burns CPU for `ms` milliseconds, then answers. */

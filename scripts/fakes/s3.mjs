@@ -10,7 +10,13 @@ const directory = path.resolve(process.env.RUNNEL_S3_DIR ?? '.runtime/s3');
 const bucket = process.env.RUNNEL_S3_BUCKET ?? 'runnel-files';
 
 fs.mkdirSync(directory, { recursive: true });
-const server = new S3rver({ address: '127.0.0.1', port, directory, silent: true, configureBuckets: [{ name: bucket, configs: [] }] });
+const server = new S3rver({
+  address: '127.0.0.1',
+  port,
+  directory,
+  silent: true,
+  configureBuckets: [{ name: bucket, configs: [] }],
+});
 await server.run();
 console.log(`[fake s3] http://127.0.0.1:${port} bucket ${bucket}, data in ${directory}`);
 

@@ -7,7 +7,10 @@ import { referenceLine } from './analysis-fixtures';
 /** A long rolling line on a falling grade (a few dozen highs and lows). */
 function longLine(stations: number) {
   const line = referenceLine();
-  const list = Array.from({ length: stations }, (_, i) => ({ chainageM: i * 2, groundElevationM: 30 - i * 0.004 + Math.sin(i / 50) * 1.5 }));
+  const list = Array.from({ length: stations }, (_, i) => ({
+    chainageM: i * 2,
+    groundElevationM: 30 - i * 0.004 + Math.sin(i / 50) * 1.5,
+  }));
   const endM = list[list.length - 1].chainageM;
   return { ...line, stations: list, stretches: [{ ...line.stretches[0], fromM: 0, toM: endM }] };
 }
@@ -17,7 +20,8 @@ describe('the stateless analysis endpoint is bounded', () => {
   beforeAll(async () => {
     userId = (await createUser('bounded-analyst')).id;
   });
-  const post = (body: unknown, query = '', who = userId) => call(POST, { method: 'POST', path: `/api/analysis/line${query}`, body, userId: who });
+  const post = (body: unknown, query = '', who = userId) =>
+    call(POST, { method: 'POST', path: `/api/analysis/line${query}`, body, userId: who });
 
   it(`refuses more than ${MAX_STATELESS_ANALYSIS_STATIONS} stations, naming the field`, async () => {
     const res = await post(longLine(MAX_STATELESS_ANALYSIS_STATIONS + 1));
@@ -51,7 +55,9 @@ describe('the stateless analysis endpoint is bounded', () => {
   it(`answers 429 with Retry-After after ${ANALYSIS_LIMIT.points} analyses a minute from one user, and only for that user`, async () => {
     const busy = (await createUser('busy-analyst')).id;
     const other = (await createUser('other-analyst')).id;
-    const answers = await Promise.all(Array.from({ length: ANALYSIS_LIMIT.points + 5 }, () => post(referenceLine(), '', busy)));
+    const answers = await Promise.all(
+      Array.from({ length: ANALYSIS_LIMIT.points + 5 }, () => post(referenceLine(), '', busy)),
+    );
     const statuses = answers.map((a) => a.status);
     expect(statuses.filter((s) => s === 200)).toHaveLength(ANALYSIS_LIMIT.points);
     expect(statuses.filter((s) => s === 429)).toHaveLength(5);

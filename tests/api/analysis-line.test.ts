@@ -11,7 +11,10 @@ describe('POST /api/analysis/line', () => {
   const post = (body: unknown) => call(POST, { method: 'POST', path: '/api/analysis/line', body, userId });
 
   it('analyses a reference line and returns plain JSON arrays', async () => {
-    const res = await post({ ...referenceLine(), settings: { ...referenceLine().settings, frictionMethod: 'hazen-williams', entranceLossK: 0 } });
+    const res = await post({
+      ...referenceLine(),
+      settings: { ...referenceLine().settings, frictionMethod: 'hazen-williams', entranceLossK: 0 },
+    });
     expect(res.status).toBe(200);
     const { analysis } = res.json;
     expect(analysis.settings.frictionMethod).toBe('hazen-williams');
@@ -28,7 +31,11 @@ describe('POST /api/analysis/line', () => {
   });
 
   it('finds the flow a line carries between fixed ends', async () => {
-    const res = await post({ ...referenceLine(), flow: { kind: 'find' }, end: { kind: 'tank-inlet', elevationM: 15.4 } });
+    const res = await post({
+      ...referenceLine(),
+      flow: { kind: 'find' },
+      end: { kind: 'tank-inlet', elevationM: 15.4 },
+    });
     expect(res.status).toBe(200);
     const hgl = res.json.analysis.points.hydraulicGradeM;
     expect(hgl[hgl.length - 1]).toBeCloseTo(15.4, 3);
@@ -36,14 +43,51 @@ describe('POST /api/analysis/line', () => {
 
   const bad: [string, unknown, string][] = [
     ['one station only', { ...referenceLine(), stations: [{ chainageM: 0, groundElevationM: 0 }] }, 'stations'],
-    ['text in a number', { ...referenceLine(), stations: [{ chainageM: 'ten', groundElevationM: 0 }, { chainageM: 10, groundElevationM: 0 }] }, 'stations.0.chainageM'],
+    [
+      'text in a number',
+      {
+        ...referenceLine(),
+        stations: [
+          { chainageM: 'ten', groundElevationM: 0 },
+          { chainageM: 10, groundElevationM: 0 },
+        ],
+      },
+      'stations.0.chainageM',
+    ],
     ['an unknown field', { ...referenceLine(), colour: 'blue' }, 'colour'],
     ['a negative design flow', { ...referenceLine(), flow: { kind: 'design', flowM3s: -1 } }, 'flow.flowM3s'],
-    ['a negative diameter', { ...referenceLine(), pipes: [{ ...referenceLine().pipes[0], insideDiameterM: -0.1 }] }, 'pipes.0.insideDiameterM'],
-    ['non-increasing chainage', { ...referenceLine(), stations: [{ chainageM: 0, groundElevationM: 0 }, { chainageM: 0, groundElevationM: 0 }, { chainageM: 1000, groundElevationM: 0 }] }, 'stations'],
-    ['an unknown pipe', { ...referenceLine(), stretches: [{ fromM: 0, toM: 1000, pipe: 'no-such-pipe' }] }, 'stretches'],
-    ['a stretch that does not cover the line', { ...referenceLine(), stretches: [{ fromM: 0, toM: 600, pipe: 'test-100mm-c150' }] }, 'stretches'],
-    ['a NUL byte in a label', { ...referenceLine(), devices: [{ kind: 'washout', chainageM: 10, label: 'a\u0000b' }] }, 'devices.0.label'],
+    [
+      'a negative diameter',
+      { ...referenceLine(), pipes: [{ ...referenceLine().pipes[0], insideDiameterM: -0.1 }] },
+      'pipes.0.insideDiameterM',
+    ],
+    [
+      'non-increasing chainage',
+      {
+        ...referenceLine(),
+        stations: [
+          { chainageM: 0, groundElevationM: 0 },
+          { chainageM: 0, groundElevationM: 0 },
+          { chainageM: 1000, groundElevationM: 0 },
+        ],
+      },
+      'stations',
+    ],
+    [
+      'an unknown pipe',
+      { ...referenceLine(), stretches: [{ fromM: 0, toM: 1000, pipe: 'no-such-pipe' }] },
+      'stretches',
+    ],
+    [
+      'a stretch that does not cover the line',
+      { ...referenceLine(), stretches: [{ fromM: 0, toM: 600, pipe: 'test-100mm-c150' }] },
+      'stretches',
+    ],
+    [
+      'a NUL byte in a label',
+      { ...referenceLine(), devices: [{ kind: 'washout', chainageM: 10, label: 'a\u0000b' }] },
+      'devices.0.label',
+    ],
   ];
 
   it.each(bad)('refuses %s with 400 naming the field', async (_name, body, field) => {
@@ -55,7 +99,12 @@ describe('POST /api/analysis/line', () => {
   });
 
   it('refuses malformed JSON', async () => {
-    const res = await call(POST, { method: 'POST', path: '/api/analysis/line', rawBody: '{"stations": [NaN]}', userId });
+    const res = await call(POST, {
+      method: 'POST',
+      path: '/api/analysis/line',
+      rawBody: '{"stations": [NaN]}',
+      userId,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.message).toMatch(/not valid JSON/);
   });

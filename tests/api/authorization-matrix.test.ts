@@ -57,8 +57,12 @@ describe('authorisation matrix', () => {
         headers: upload ? { 'content-type': upload.contentType } : undefined,
         userId,
       });
-      expect({ actor, status: res.status, body: res.status >= 400 ? res.json : undefined }).toMatchObject({ actor, status: endpoint.expect[actor] });
-      if (res.status >= 400) expect(res.json.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });
+      expect({ actor, status: res.status, body: res.status >= 400 ? res.json : undefined }).toMatchObject({
+        actor,
+        status: endpoint.expect[actor],
+      });
+      if (res.status >= 400)
+        expect(res.json.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });
     });
   });
 });

@@ -19,7 +19,14 @@ describe('bad input is refused with 400 and field errors, and nothing is written
   });
 
   const create = (body: unknown, rawBody?: string) =>
-    call(createProject, { method: 'POST', path: '/api/teams/x/projects', params: { teamId: f.teamId }, body, rawBody, userId: f.users.designer.id });
+    call(createProject, {
+      method: 'POST',
+      path: '/api/teams/x/projects',
+      params: { teamId: f.teamId },
+      body,
+      rawBody,
+      userId: f.users.designer.id,
+    });
 
   const cases: [string, unknown, string][] = [
     ['a missing name', { description: 'x' }, 'name'],
@@ -55,15 +62,23 @@ describe('bad input is refused with 400 and field errors, and nothing is written
   });
 
   it('a malformed id in the address is refused before the database is asked', async () => {
-    const res = await call(listProjects, { method: 'GET', path: '/api/teams/x/projects', params: { teamId: "1' OR '1'='1" }, userId: f.users.owner.id });
+    const res = await call(listProjects, {
+      method: 'GET',
+      path: '/api/teams/x/projects',
+      params: { teamId: "1' OR '1'='1" },
+      userId: f.users.owner.id,
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields)).toContain('teamId');
   });
 
   it('an array where one id belongs is refused', async () => {
     const res = await call(invite, {
-      method: 'POST', path: '/api/teams/x/invitations', params: { teamId: f.teamId },
-      body: { email: [f.users.outsider.email, 'x@example.test'], role: 'viewer' }, userId: f.users.owner.id,
+      method: 'POST',
+      path: '/api/teams/x/invitations',
+      params: { teamId: f.teamId },
+      body: { email: [f.users.outsider.email, 'x@example.test'], role: 'viewer' },
+      userId: f.users.owner.id,
     });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields)).toContain('email');
@@ -71,14 +86,27 @@ describe('bad input is refused with 400 and field errors, and nothing is written
 
   it('an empty update is refused and the project is unchanged', async () => {
     const before = await models().Project.findByPk(f.projectId);
-    const res = await call(patchProject, { method: 'PATCH', path: '/api/projects/x', params: { projectId: f.projectId }, body: {}, userId: f.users.designer.id });
+    const res = await call(patchProject, {
+      method: 'PATCH',
+      path: '/api/projects/x',
+      params: { projectId: f.projectId },
+      body: {},
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(400);
     const after = await models().Project.findByPk(f.projectId);
     expect(after!.updatedAt.getTime()).toBe(before!.updatedAt.getTime());
   });
 
   it('a project time zone: a real zone is kept, an unknown one is refused by name and nothing changes', async () => {
-    const patch = (body: unknown) => call(patchProject, { method: 'PATCH', path: '/api/projects/x', params: { projectId: f.projectId }, body, userId: f.users.designer.id });
+    const patch = (body: unknown) =>
+      call(patchProject, {
+        method: 'PATCH',
+        path: '/api/projects/x',
+        params: { projectId: f.projectId },
+        body,
+        userId: f.users.designer.id,
+      });
     const bad = await patch({ timeZone: 'Mars/Olympus' });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.json.error.fields)).toEqual(['timeZone']);
@@ -90,14 +118,22 @@ describe('bad input is refused with 400 and field errors, and nothing is written
 
   it('sign-up: a weak password and a bad e-mail are named, and no account is made', async () => {
     const email = `not-an-email-${Date.now()}`;
-    const res = await call(createAccount, { method: 'POST', path: '/api/accounts', body: { name: 'A', email, password: 'short' } });
+    const res = await call(createAccount, {
+      method: 'POST',
+      path: '/api/accounts',
+      body: { name: 'A', email, password: 'short' },
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields).sort()).toEqual(['email', 'password']);
     expect(await models().User.count({ where: { email } })).toBe(0);
   });
 
   it('sign-up: a taken e-mail gets the usual answer (no enumeration) and the existing account is untouched', async () => {
-    const res = await call(createAccount, { method: 'POST', path: '/api/accounts', body: { name: 'Copy', email: f.users.owner.email, password: 'a long enough passphrase' } });
+    const res = await call(createAccount, {
+      method: 'POST',
+      path: '/api/accounts',
+      body: { name: 'Copy', email: f.users.owner.email, password: 'a long enough passphrase' },
+    });
     expect(res.status).toBe(202);
     expect(res.json).toEqual({ status: 'check-your-mail', email: f.users.owner.email });
     const user = await models().User.findOne({ where: { email: f.users.owner.email } });

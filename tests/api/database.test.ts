@@ -29,7 +29,9 @@ describe('database', () => {
   it('models: the database refuses an unknown role even past the ORM', async () => {
     const f = await createTeamFixture();
     await expect(
-      db().query("UPDATE memberships SET role = 'admin' WHERE team_id = :teamId", { replacements: { teamId: f.teamId } }),
+      db().query("UPDATE memberships SET role = 'admin' WHERE team_id = :teamId", {
+        replacements: { teamId: f.teamId },
+      }),
     ).rejects.toThrow(/memberships_role_check/);
   });
 });

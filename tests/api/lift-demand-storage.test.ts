@@ -14,17 +14,42 @@ beforeAll(async () => {
 });
 
 const postUse = (body: unknown, fixture = f) =>
-  call(usesRoute.POST, { method: 'POST', path: 'x', params: { projectId: fixture.projectId }, body, userId: fixture.users.designer.id });
+  call(usesRoute.POST, {
+    method: 'POST',
+    path: 'x',
+    params: { projectId: fixture.projectId },
+    body,
+    userId: fixture.users.designer.id,
+  });
 const postTank = (body: unknown, fixture = f) =>
-  call(tanksRoute.POST, { method: 'POST', path: 'x', params: { projectId: fixture.projectId }, body, userId: fixture.users.designer.id });
+  call(tanksRoute.POST, {
+    method: 'POST',
+    path: 'x',
+    params: { projectId: fixture.projectId },
+    body,
+    userId: fixture.users.designer.id,
+  });
 
 describe('demand uses', () => {
   it('totals published defaults: 4 people x 50 US gal and 12 cow-calf pairs x 68 L in summer', async () => {
     const fixture = await createTeamFixture();
     expect((await postUse(demandUseBody(), fixture)).status).toBe(201);
-    const cattle = { kind: 'livestock', count: 12, figureId: 'cow-calf-pair', season: 'summer', deliveryKind: 'delivery-hours', deliveryHours: 4, startHour: 6 };
+    const cattle = {
+      kind: 'livestock',
+      count: 12,
+      figureId: 'cow-calf-pair',
+      season: 'summer',
+      deliveryKind: 'delivery-hours',
+      deliveryHours: 4,
+      startHour: 6,
+    };
     expect((await postUse(cattle, fixture)).status).toBe(201);
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
+    const res = await call(liftRoute.GET, {
+      method: 'GET',
+      path: 'x',
+      params: { projectId: fixture.projectId },
+      userId: fixture.users.reviewer.id,
+    });
     const { uses, total } = res.json.lift.demand;
     // J. Renewable Energy (Hindawi) 2017 art. 8504283 Table 1: 50 US gal/person/day for a rural home.
     expect(uses[0].published.value).toBeCloseTo(50 * US_GALLON_M3, 12);
@@ -41,9 +66,21 @@ describe('demand uses', () => {
     ['an unknown published figure', { figureId: 'astronaut' }, 'figureId'],
     ['livestock with no season', { kind: 'livestock', figureId: 'horse', season: null }, 'season'],
     ['a peak factor below 1', { peakFactor: 0.5 }, 'peakFactor'],
-    ['a pattern whose printed percentages sum to 95 %', { deliveryKind: 'pattern', patternPresetId: 'three-peaks-as-printed' }, 'patternPresetId'],
-    ['hourly fractions summing to 90 %', { deliveryKind: 'pattern', hourlyFractions: new Array(24).fill(0.9 / 24) }, 'hourlyFractions'],
-    ['23 hourly fractions', { deliveryKind: 'pattern', hourlyFractions: new Array(23).fill(1 / 23) }, 'hourlyFractions'],
+    [
+      'a pattern whose printed percentages sum to 95 %',
+      { deliveryKind: 'pattern', patternPresetId: 'three-peaks-as-printed' },
+      'patternPresetId',
+    ],
+    [
+      'hourly fractions summing to 90 %',
+      { deliveryKind: 'pattern', hourlyFractions: new Array(24).fill(0.9 / 24) },
+      'hourlyFractions',
+    ],
+    [
+      '23 hourly fractions',
+      { deliveryKind: 'pattern', hourlyFractions: new Array(23).fill(1 / 23) },
+      'hourlyFractions',
+    ],
   ];
   it.each(bad)('refuses %s (400) and writes nothing', async (_what, patch, field) => {
     const before = await models().DemandUse.count({ where: { projectId: f.projectId } });
@@ -57,10 +94,18 @@ describe('demand uses', () => {
 describe('tanks and storage sizing', () => {
   it('sizes storage against the demand: fill time is volume / supply, and the tank elevation is checked', async () => {
     const fixture = await createTeamFixture();
-    await postUse({ ...demandUseBody(), peakFactor: null, deliveryKind: 'pattern', patternPresetId: 'jordan-morning-evening' }, fixture);
+    await postUse(
+      { ...demandUseBody(), peakFactor: null, deliveryKind: 'pattern', patternPresetId: 'jordan-morning-evening' },
+      fixture,
+    );
     const created = await postTank(tankBody(), fixture);
     expect(created.status).toBe(201);
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
+    const res = await call(liftRoute.GET, {
+      method: 'GET',
+      path: 'x',
+      params: { projectId: fixture.projectId },
+      userId: fixture.users.reviewer.id,
+    });
     const [view] = res.json.lift.tanks;
     const supply = 2e-3 / 60;
     expect(view.supply.flowM3s).toBeCloseTo(supply, 15);
@@ -77,7 +122,11 @@ describe('tanks and storage sizing', () => {
     ['an overflow below the lowest working level', { lowLevelM: 1, overflowLevelM: 0.5 }, 'overflowLevelM'],
     ['a source supply with no source', { supplyKind: 'source', supplyFlowM3s: null }, 'supplySourceId'],
     ['supply for 25 hours a day', { supplyHoursPerDay: 25 }, 'supplyHoursPerDay'],
-    ['an outlet with a negative residual head', { outlets: [{ label: 'Tap', elevationM: 90, residualHeadM: -1, frictionLossM: 0 }] }, 'outlets.0.residualHeadM'],
+    [
+      'an outlet with a negative residual head',
+      { outlets: [{ label: 'Tap', elevationM: 90, residualHeadM: -1, frictionLossM: 0 }] },
+      'outlets.0.residualHeadM',
+    ],
   ];
   it.each(bad)('refuses %s (400) and writes nothing', async (_what, patch, field) => {
     const before = await models().Tank.count({ where: { projectId: f.projectId } });

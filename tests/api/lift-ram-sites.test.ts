@@ -40,8 +40,16 @@ describe('POST ram-sites', () => {
     ['a negative fall', { fallM: -2 }, 'fallM'],
     ['a lift below the fall', { liftM: 1.5 }, 'liftM'],
     ['a zero drive flow', { driveFlowM3s: 0 }, 'driveFlowM3s'],
-    ['a drive pipe of no length', { drivePipe: { lengthM: 0, insideDiameterM: 0.035, material: 'steel' } }, 'drivePipe.lengthM'],
-    ['a delivery pipe with neither length nor route', { deliveryPipe: { insideDiameterM: 0.02, hazenWilliamsC: 150 } }, 'deliveryPipe.lengthM'],
+    [
+      'a drive pipe of no length',
+      { drivePipe: { lengthM: 0, insideDiameterM: 0.035, material: 'steel' } },
+      'drivePipe.lengthM',
+    ],
+    [
+      'a delivery pipe with neither length nor route',
+      { deliveryPipe: { insideDiameterM: 0.02, hazenWilliamsC: 150 } },
+      'deliveryPipe.lengthM',
+    ],
     ['a pipe not in the catalogue', { deliveryPipe: { lengthM: 100, pipeId: 'gold-pipe-1in' } }, 'deliveryPipe.pipeId'],
     ['half a pump', { pumpCount: 1.5 }, 'pumpCount'],
     ['an efficiency above 1', { measuredEfficiency: 1.2 }, 'measuredEfficiency'],
@@ -71,8 +79,20 @@ describe('PUT ram-sites/[siteId]', () => {
   it('replaces the site and re-plans it; a higher lift delivers less', async () => {
     const site = await createRamSiteFixture(f.projectId, f.users.owner.id);
     const params = { projectId: f.projectId, siteId: site.id };
-    const low = await call(siteRoute.PUT, { method: 'PUT', path: `${path(f.projectId)}/${site.id}`, params, body: ramSiteBody(), userId: f.users.owner.id });
-    const high = await call(siteRoute.PUT, { method: 'PUT', path: `${path(f.projectId)}/${site.id}`, params, body: { ...ramSiteBody(), liftM: 16 }, userId: f.users.owner.id });
+    const low = await call(siteRoute.PUT, {
+      method: 'PUT',
+      path: `${path(f.projectId)}/${site.id}`,
+      params,
+      body: ramSiteBody(),
+      userId: f.users.owner.id,
+    });
+    const high = await call(siteRoute.PUT, {
+      method: 'PUT',
+      path: `${path(f.projectId)}/${site.id}`,
+      params,
+      body: { ...ramSiteBody(), liftM: 16 },
+      userId: f.users.owner.id,
+    });
     expect(high.status).toBe(200);
     expect(high.json.plan.deliveredFlowM3s).toBeLessThan(low.json.plan.deliveredFlowM3s);
     expect((await models().RamSite.findByPk(site.id))?.liftM).toBe(16);
@@ -81,7 +101,13 @@ describe('PUT ram-sites/[siteId]', () => {
   it('keeps the stored site when the new lift is below the fall (400)', async () => {
     const site = await createRamSiteFixture(f.projectId, f.users.owner.id);
     const params = { projectId: f.projectId, siteId: site.id };
-    const res = await call(siteRoute.PUT, { method: 'PUT', path: 'x', params, body: { ...ramSiteBody(), fallM: 3, liftM: 2.5 }, userId: f.users.designer.id });
+    const res = await call(siteRoute.PUT, {
+      method: 'PUT',
+      path: 'x',
+      params,
+      body: { ...ramSiteBody(), fallM: 3, liftM: 2.5 },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.fields.liftM[0]).toMatch(/above the fall/);
     const row = await models().RamSite.findByPk(site.id);
@@ -91,7 +117,13 @@ describe('PUT ram-sites/[siteId]', () => {
   it('answers 404 for a site of another project named under this one', async () => {
     const foreign = await createRamSiteFixture(other.projectId, other.users.owner.id);
     const params = { projectId: f.projectId, siteId: foreign.id };
-    const res = await call(siteRoute.PUT, { method: 'PUT', path: 'x', params, body: ramSiteBody(), userId: f.users.owner.id });
+    const res = await call(siteRoute.PUT, {
+      method: 'PUT',
+      path: 'x',
+      params,
+      body: ramSiteBody(),
+      userId: f.users.owner.id,
+    });
     expect(res.status).toBe(404);
     expect((await models().RamSite.findByPk(foreign.id))?.name).toBe('Fixture ram');
   });
@@ -99,7 +131,13 @@ describe('PUT ram-sites/[siteId]', () => {
 
 describe('POST ram-sites/[siteId]/commissioning', () => {
   const postReading = (siteId: string, body: unknown) =>
-    call(commissioningRoute.POST, { method: 'POST', path: 'x', params: { projectId: f.projectId, siteId }, body, userId: f.users.designer.id });
+    call(commissioningRoute.POST, {
+      method: 'POST',
+      path: 'x',
+      params: { projectId: f.projectId, siteId },
+      body,
+      userId: f.users.designer.id,
+    });
 
   it('logs the reading and answers the measured efficiency q·h/(Q·H), compared with the plan', async () => {
     const site = await createRamSiteFixture(f.projectId, f.users.owner.id);
@@ -109,7 +147,10 @@ describe('POST ram-sites/[siteId]/commissioning', () => {
     const q = 0.01 / 240;
     const Q = 0.01 / 30 + q;
     expect(res.json.result.measuredEfficiency).toBeCloseTo((q * 11) / (Q * 2), 12);
-    expect(res.json.result.efficiencyRatioToPlan).toBeCloseTo(res.json.result.measuredEfficiency / res.json.result.plannedEfficiency, 12);
+    expect(res.json.result.efficiencyRatioToPlan).toBeCloseTo(
+      res.json.result.measuredEfficiency / res.json.result.plannedEfficiency,
+      12,
+    );
     expect(await models().RamCommissioningReading.count({ where: { ramSiteId: site.id } })).toBe(1);
   });
 
@@ -117,7 +158,11 @@ describe('POST ram-sites/[siteId]/commissioning', () => {
     ['negative beats', { beatsPerMinute: -5 }, 'beatsPerMinute'],
     ['no delivery head and no gauge pressure', { deliveryHeadM: null }, 'deliveryHeadM'],
     ['a bucket with no seconds', { deliveredBucketSeconds: null }, 'deliveredBucketSeconds'],
-    ['a delivered flow at least the drive flow', { driveMeasure: 'drive', driveBucketSeconds: 500 }, 'deliveredFlowM3s'],
+    [
+      'a delivered flow at least the drive flow',
+      { driveMeasure: 'drive', driveBucketSeconds: 500 },
+      'deliveredFlowM3s',
+    ],
     ['an impossible date', { measuredOn: '2026-02-30' }, 'measuredOn'],
   ];
   it.each(bad)('refuses %s with a 400 and writes nothing', async (_what, patch, field) => {
@@ -134,9 +179,18 @@ describe('GET lift', () => {
     const fixture = await createTeamFixture();
     const site = await createRamSiteFixture(fixture.projectId, fixture.users.owner.id);
     await call(commissioningRoute.POST, {
-      method: 'POST', path: 'x', params: { projectId: fixture.projectId, siteId: site.id }, body: commissioningBody(), userId: fixture.users.owner.id,
+      method: 'POST',
+      path: 'x',
+      params: { projectId: fixture.projectId, siteId: site.id },
+      body: commissioningBody(),
+      userId: fixture.users.owner.id,
     });
-    const res = await call(liftRoute.GET, { method: 'GET', path: 'x', params: { projectId: fixture.projectId }, userId: fixture.users.reviewer.id });
+    const res = await call(liftRoute.GET, {
+      method: 'GET',
+      path: 'x',
+      params: { projectId: fixture.projectId },
+      userId: fixture.users.reviewer.id,
+    });
     expect(res.status).toBe(200);
     const [view] = res.json.lift.ramSites;
     expect(view.plan.ok).toBe(true);

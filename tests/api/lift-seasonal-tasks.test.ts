@@ -14,13 +14,21 @@ describe('seasonal tasks', () => {
     const first = await generate(f.projectId, f.users.designer.id, body);
     expect(first.status).toBe(201);
     const kinds = first.json.tasks.map((task: { kind: string }) => task.kind);
-    expect(kinds).toEqual(expect.arrayContaining(['drain-down', 'refill', 'silt-cleaning', 'intake-screen', 'valve-exercise']));
+    expect(kinds).toEqual(
+      expect.arrayContaining(['drain-down', 'refill', 'silt-cleaning', 'intake-screen', 'valve-exercise']),
+    );
     // Drain-down 14 days before the first frost (Runnel's default lead; common practice, no source).
     expect(first.json.tasks.find((task: { kind: string }) => task.kind === 'drain-down').dueOn).toBe('2027-10-01');
     const count = first.json.tasks.length;
 
     const done = first.json.tasks[0];
-    const patched = await call(taskRoute.PATCH, { method: 'PATCH', path: 'x', params: { projectId: f.projectId, taskId: done.id }, body: { done: true }, userId: f.users.owner.id });
+    const patched = await call(taskRoute.PATCH, {
+      method: 'PATCH',
+      path: 'x',
+      params: { projectId: f.projectId, taskId: done.id },
+      body: { done: true },
+      userId: f.users.owner.id,
+    });
     expect(patched.json.task.doneOn).toMatch(/^\d{4}-\d{2}-\d{2}$/);
 
     const again = await generate(f.projectId, f.users.designer.id, body);
@@ -39,7 +47,12 @@ describe('seasonal tasks', () => {
     ['an unknown hemisphere', { hemisphere: 'east' }, 'hemisphere'],
   ])('refuses %s (400) and writes nothing', async (_what, patch, field) => {
     const f = await createTeamFixture();
-    const res = await generate(f.projectId, f.users.owner.id, { year: 2027, hemisphere: 'north', firstFrost: '10-15', ...patch });
+    const res = await generate(f.projectId, f.users.owner.id, {
+      year: 2027,
+      hemisphere: 'north',
+      firstFrost: '10-15',
+      ...patch,
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields)).toContain(field);
     expect(await models().SeasonalTask.count({ where: { projectId: f.projectId } })).toBe(0);
@@ -51,7 +64,14 @@ describe('an overdue drain-down reaches the lines of the project', () => {
     const { lineSiteContext } = await import('@/lib/data/line-context');
     const f = await createTeamFixture();
     const task = (dueOn: string, done = false, kind: 'drain-down' | 'refill' = 'drain-down') =>
-      models().SeasonalTask.create({ projectId: f.projectId, kind, title: `${kind} ${dueOn}`, dueOn, done, doneOn: done ? dueOn : null });
+      models().SeasonalTask.create({
+        projectId: f.projectId,
+        kind,
+        title: `${kind} ${dueOn}`,
+        dueOn,
+        done,
+        doneOn: done ? dueOn : null,
+      });
     expect((await lineSiteContext(f.projectId, '2026-12-02')).overdueDrainDownOn).toBeNull();
     await task('2026-09-15', true);
     await task('2026-11-20', false, 'refill');

@@ -33,13 +33,42 @@ describe('a delivery line fed by a ram site', () => {
     foreignRamSiteId = (await createRamSiteFixture(other.projectId, other.users.owner.id)).id;
   });
 
-  const patch = (body: unknown) => call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, body, userId: f.users.designer.id });
-  const analyse = async () => (await call(analysisRoute.POST, { method: 'POST', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.reviewer.id })).json.analysis;
-  const siteContext = async () => (await call(siteContextRoute.GET, { method: 'GET', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.reviewer.id })).json;
+  const patch = (body: unknown) =>
+    call(lineRoute.PATCH, {
+      method: 'PATCH',
+      path: '/api/x',
+      params: { lineId: f.lineId },
+      body,
+      userId: f.users.designer.id,
+    });
+  const analyse = async () =>
+    (
+      await call(analysisRoute.POST, {
+        method: 'POST',
+        path: '/api/x',
+        params: { lineId: f.lineId },
+        userId: f.users.reviewer.id,
+      })
+    ).json.analysis;
+  const siteContext = async () =>
+    (
+      await call(siteContextRoute.GET, {
+        method: 'GET',
+        path: '/api/x',
+        params: { lineId: f.lineId },
+        userId: f.users.reviewer.id,
+      })
+    ).json;
   const putRam = (body: unknown) =>
-    call(ramSiteRoute.PUT, { method: 'PUT', path: '/api/x', params: { projectId: f.projectId, siteId: ramSiteId }, body, userId: f.users.designer.id });
+    call(ramSiteRoute.PUT, {
+      method: 'PUT',
+      path: '/api/x',
+      params: { projectId: f.projectId, siteId: ramSiteId },
+      body,
+      userId: f.users.designer.id,
+    });
 
-  it('lists the project\'s planned ram sites and its frost depth for the line', async () => {
+  it("lists the project's planned ram sites and its frost depth for the line", async () => {
     const context = await siteContext();
     expect(context.frostDepthM).toBeNull();
     expect(context.ramOutlets.map((o: { ramSiteId: string }) => o.ramSiteId)).toEqual([ramSiteId]);
@@ -78,10 +107,13 @@ describe('a delivery line fed by a ram site', () => {
     expect(after.startCondition).toEqual({ kind: 'ram-site', ramSiteId });
   });
 
-  it('refuses a new line fed by another project\'s ram site, and creates nothing', async () => {
+  it("refuses a new line fed by another project's ram site, and creates nothing", async () => {
     const count = await models().Line.count({ where: { projectId: f.projectId } });
     const res = await call(projectLines.POST, {
-      method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id,
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
       body: { name: 'Borrowed ram', routeId: f.lineRouteId, design: ramDesign(foreignRamSiteId) },
     });
     expect(res.status).toBe(404);
@@ -89,7 +121,7 @@ describe('a delivery line fed by a ram site', () => {
     expect(await models().Line.count({ where: { projectId: f.projectId } })).toBe(count);
   });
 
-  it('refuses the ram\'s flow on a line not fed by a ram (400 on flow.kind)', async () => {
+  it("refuses the ram's flow on a line not fed by a ram (400 on flow.kind)", async () => {
     const res = await patch({ design: ramDesign(ramSiteId, { start: { kind: 'water-level', levelM: 241 } }) });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields)).toContain('design.flow.kind');
@@ -101,9 +133,16 @@ describe('winter treatment per line, into the seasonal tasks', () => {
   beforeAll(async () => {
     f = await createTeamFixture();
   });
-  const patchProject = (body: unknown) => call(projectRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { projectId: f.projectId }, body, userId: f.users.owner.id });
+  const patchProject = (body: unknown) =>
+    call(projectRoute.PATCH, {
+      method: 'PATCH',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      body,
+      userId: f.users.owner.id,
+    });
 
-  it('keeps the project\'s frost depth, refusing a negative one', async () => {
+  it("keeps the project's frost depth, refusing a negative one", async () => {
     const bad = await patchProject({ frostDepthM: -0.2 });
     expect(bad.status).toBe(400);
     expect(bad.json.error.fields).toHaveProperty('frostDepthM');
@@ -112,19 +151,35 @@ describe('winter treatment per line, into the seasonal tasks', () => {
   });
 
   it('saves a drained line and lists its drain points by chainage in the drain-down task', async () => {
-    // Give the fixture route a sag (ground 240, 231, 220, 228, 200 m at 100 m spacing): its one low point is at ch. 200 m.
+    // Give the fixture route a sag (ground 240, 231, 220, 228, 200 m at 100 m spacing): its one low point is at ch. 200
+    // m.
     const { RoutePoint } = models();
     await RoutePoint.update({ elevationM: 220, rawElevationM: 220 }, { where: { routeId: f.lineRouteId, seq: 2 } });
     await RoutePoint.update({ elevationM: 228, rawElevationM: 228 }, { where: { routeId: f.lineRouteId, seq: 3 } });
     const line = (await models().Line.findByPk(f.lineId))!;
     const res = await call(lineRoute.PATCH, {
-      method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.designer.id,
-      body: { design: { start: line.startCondition, end: line.endCondition, flow: line.flow, stretches: line.stretches, settings: { defaultCoverM: 0.5 }, winter: { treatment: 'drained-for-winter' } } },
+      method: 'PATCH',
+      path: '/api/x',
+      params: { lineId: f.lineId },
+      userId: f.users.designer.id,
+      body: {
+        design: {
+          start: line.startCondition,
+          end: line.endCondition,
+          flow: line.flow,
+          stretches: line.stretches,
+          settings: { defaultCoverM: 0.5 },
+          winter: { treatment: 'drained-for-winter' },
+        },
+      },
     });
     expect(res.status).toBe(200);
     expect(res.json.line.design.winter).toEqual({ treatment: 'drained-for-winter' });
     const tasks = await call(generateTasks.POST, {
-      method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id,
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
       body: { year: 2027, hemisphere: 'north', firstFrost: '10-15', lastFrost: '04-20' },
     });
     expect(tasks.status).toBe(201);
@@ -136,8 +191,19 @@ describe('winter treatment per line, into the seasonal tasks', () => {
   it('rejects an unknown winter treatment with a 400 naming it', async () => {
     const line = (await models().Line.findByPk(f.lineId))!;
     const res = await call(lineRoute.PATCH, {
-      method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.designer.id,
-      body: { design: { start: line.startCondition, end: line.endCondition, flow: line.flow, stretches: line.stretches, winter: { treatment: 'heated' } } },
+      method: 'PATCH',
+      path: '/api/x',
+      params: { lineId: f.lineId },
+      userId: f.users.designer.id,
+      body: {
+        design: {
+          start: line.startCondition,
+          end: line.endCondition,
+          flow: line.flow,
+          stretches: line.stretches,
+          winter: { treatment: 'heated' },
+        },
+      },
     });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields)).toContain('design.winter.treatment');

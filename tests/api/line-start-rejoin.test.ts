@@ -14,14 +14,27 @@ describe("changing a line's start re-joins its network link", () => {
   beforeAll(async () => {
     f = await createTeamFixture();
     ramSiteId = (await createRamSiteFixture(f.projectId, f.users.owner.id)).id;
-    const res = await call(lineRoute.GET, { method: 'GET', path: '/api/x', params: { lineId: f.lineId }, userId: f.users.designer.id });
+    const res = await call(lineRoute.GET, {
+      method: 'GET',
+      path: '/api/x',
+      params: { lineId: f.lineId },
+      userId: f.users.designer.id,
+    });
     design = res.json.line.design;
     // The fixture writes its line straight to the table; join it as a line write would.
-    await models().sequelize.transaction((transaction) => linkLineIntoNetwork(models().sequelize, transaction, f.lineId));
+    await models().sequelize.transaction((transaction) =>
+      linkLineIntoNetwork(models().sequelize, transaction, f.lineId),
+    );
   });
 
   const patch = (changes: Record<string, unknown>) =>
-    call(lineRoute.PATCH, { method: 'PATCH', path: '/api/x', params: { lineId: f.lineId }, body: { design: { ...design, ...changes } }, userId: f.users.designer.id });
+    call(lineRoute.PATCH, {
+      method: 'PATCH',
+      path: '/api/x',
+      params: { lineId: f.lineId },
+      body: { design: { ...design, ...changes } },
+      userId: f.users.designer.id,
+    });
   const startNode = async () => {
     const link = await models().NetworkLink.findOne({ where: { lineId: f.lineId } });
     return models().NetworkNode.findByPk(link!.fromNodeId);
@@ -30,7 +43,11 @@ describe("changing a line's start re-joins its network link", () => {
   it('moves from its own intake to the ram site it now names, and the intake only it used goes', async () => {
     const intake = await startNode();
     expect(intake!.kind).toBe('source');
-    const res = await patch({ start: { kind: 'ram-site', ramSiteId }, end: { kind: 'tank-inlet', elevationM: 200 }, flow: { kind: 'pump-delivery' } });
+    const res = await patch({
+      start: { kind: 'ram-site', ramSiteId },
+      end: { kind: 'tank-inlet', elevationM: 200 },
+      flow: { kind: 'pump-delivery' },
+    });
     expect(res.status).toBe(200);
     const ram = await startNode();
     expect(ram!.kind).toBe('ram-outlet');

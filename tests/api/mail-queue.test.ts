@@ -56,7 +56,12 @@ describe('mail through the job queue', () => {
 
   it('a change rolled back leaves neither the message nor its job', async () => {
     const to = `rolled-back-${Date.now()}@fixture.test`;
-    const jobCount = async () => ((await models().sequelize.query('SELECT count(*)::int AS n FROM graphile_worker._private_jobs'))[0] as { n: number }[])[0].n;
+    const jobCount = async () =>
+      (
+        (await models().sequelize.query('SELECT count(*)::int AS n FROM graphile_worker._private_jobs'))[0] as {
+          n: number;
+        }[]
+      )[0].n;
     const jobsBefore = await jobCount();
     await expect(
       models().sequelize.transaction(async (transaction) => {
@@ -71,7 +76,12 @@ describe('mail through the job queue', () => {
   it('with the mail server down the job waits with a back-off; when it returns the message is delivered once', async () => {
     const to = `waiting-${Date.now()}@fixture.test`;
     const outboxId = await models().sequelize.transaction((transaction) =>
-      queueMail(transaction, { kind: 'test', to, subject: 'Spring box inspection', text: 'The intake screen needs clearing.' }),
+      queueMail(transaction, {
+        kind: 'test',
+        to,
+        subject: 'Spring box inspection',
+        text: 'The intake screen needs clearing.',
+      }),
     );
 
     // Server down: the attempt fails, nothing is lost, the job is kept for later.
@@ -83,17 +93,26 @@ describe('mail through the job queue', () => {
     let [job] = await jobFor(outboxId);
     expect(job.attempts).toBe(1);
     // graphile-worker's back-off: the next try is e^attempts seconds after the failure (its own SQL, sql/000003.sql).
-    const [[{ waitS }]] = (await models().sequelize.query('SELECT extract(epoch FROM run_at - updated_at)::float AS "waitS" FROM graphile_worker._private_jobs WHERE id = :id', { replacements: { id: job.id } })) as [{ waitS: number }[], unknown];
+    const [[{ waitS }]] = (await models().sequelize.query(
+      'SELECT extract(epoch FROM run_at - updated_at)::float AS "waitS" FROM graphile_worker._private_jobs WHERE id = :id',
+      { replacements: { id: job.id } },
+    )) as [{ waitS: number }[], unknown];
     expect(waitS).toBeGreaterThan(2);
 
-    // Server back, but the job's time has not come (held 10 minutes ahead, as a longer back-off would): nothing is sent.
+    // Server back, but the job's time has not come (held 10 minutes ahead, as a longer back-off would): nothing is
+    // sent.
     smtp = await startSmtp(received);
-    await models().sequelize.query("UPDATE graphile_worker._private_jobs SET run_at = now() + interval '10 minutes' WHERE id = :id", { replacements: { id: job.id } });
+    await models().sequelize.query(
+      "UPDATE graphile_worker._private_jobs SET run_at = now() + interval '10 minutes' WHERE id = :id",
+      { replacements: { id: job.id } },
+    );
     await runDueJobs({ quiet: true });
     expect(received.filter((r) => r.to === to)).toHaveLength(0);
 
     // The back-off passes (moved forward rather than waited for): delivered, once.
-    await models().sequelize.query('UPDATE graphile_worker._private_jobs SET run_at = now() WHERE id = :id', { replacements: { id: job.id } });
+    await models().sequelize.query('UPDATE graphile_worker._private_jobs SET run_at = now() WHERE id = :id', {
+      replacements: { id: job.id },
+    });
     await runDueJobs({ quiet: true });
     expect(received.filter((r) => r.to === to)).toHaveLength(1);
     expect(received.find((r) => r.to === to)!.raw).toContain('Spring box inspection');

@@ -22,7 +22,9 @@ async function analysisBeforeNetwork(lineId: string) {
   const line = (await getLine(lineId))!;
   const stations = await stationsOfLine(line.routeId!, line);
   const summary = buildLiftSummary(await loadLiftRecords(line.projectId));
-  const ramOutlets = summary.ramSites.flatMap(({ site, plan, tank }) => (plan.ok ? [pumpOutletHeadOf(site, tank, plan.value)] : []));
+  const ramOutlets = summary.ramSites.flatMap(({ site, plan, tank }) =>
+    plan.ok ? [pumpOutletHeadOf(site, tank, plan.value)] : [],
+  );
   const project = await models().Project.findByPk(line.projectId);
   return analyzeLine(lineInputOf(line.design, stations, { ramOutlets, frostDepthM: project?.frostDepthM ?? null }));
 }
@@ -37,11 +39,19 @@ describe('network migration of the demo', () => {
   it('joins every saved line, ram site and tank into one network per project and keeps every row', async () => {
     const m = models();
     const before = {
-      lines: await m.Line.count(), tanks: await m.Tank.count(), ramSites: await m.RamSite.count(), uses: await m.DemandUse.count(),
+      lines: await m.Line.count(),
+      tanks: await m.Tank.count(),
+      ramSites: await m.RamSite.count(),
+      uses: await m.DemandUse.count(),
     };
     await rebuild(BRACKWATER);
     await rebuild(KESTREL);
-    expect({ lines: await m.Line.count(), tanks: await m.Tank.count(), ramSites: await m.RamSite.count(), uses: await m.DemandUse.count() }).toEqual(before);
+    expect({
+      lines: await m.Line.count(),
+      tanks: await m.Tank.count(),
+      ramSites: await m.RamSite.count(),
+      uses: await m.DemandUse.count(),
+    }).toEqual(before);
 
     const brackwater = await readNetworkRecords(BRACKWATER);
     const lines = await m.Line.findAll({ where: { projectId: BRACKWATER } });
@@ -51,14 +61,20 @@ describe('network migration of the demo', () => {
     expect(ram?.ramSiteId).toBe('6f1c1e52-3a57-4c38-9b0e-0d5b1c7a4001');
     expect(tank?.tankId).not.toBeNull();
     // The ram's delivery pipe joins the ram outlet to its tank.
-    expect(brackwater.links.some((l) => l.kind === 'pipe' && l.fromNodeId === ram!.id && l.toNodeId === tank!.id)).toBe(true);
+    expect(brackwater.links.some((l) => l.kind === 'pipe' && l.fromNodeId === ram!.id && l.toNodeId === tank!.id)).toBe(
+      true,
+    );
     // Its uses could not be tied to an outlet they serve (the only line end is a tank inlet): the tank says so.
     expect(tank!.notes).toMatch(/not tied to an outlet/);
 
     const kestrel = await readNetworkRecords(KESTREL);
     expect(kestrel.links.filter((l) => l.kind === 'line')).toHaveLength(2);
     expect(kestrel.nodes.filter((n) => n.kind === 'source').map((n) => n.data.waterLevelM)).toEqual([412, 412]);
-    expect(kestrel.nodes.filter((n) => n.kind === 'outlet').every((n) => n.data.demandFrom === 'fixed' && n.data.fixedDemandM3s === 0.001)).toBe(true);
+    expect(
+      kestrel.nodes
+        .filter((n) => n.kind === 'outlet')
+        .every((n) => n.data.demandFrom === 'fixed' && n.data.fixedDemandM3s === 0.001),
+    ).toBe(true);
   });
 
   it('gives every demo line the same analysis as before the network, and the network carries each line its design flow', async () => {

@@ -24,17 +24,36 @@ import * as Report from '../../app/api/lines/[lineId]/report/route';
 import { readNetworkRecords } from '../../lib/data/network-records';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
-const PRICES: [string, number][] = [['pe100-iso4427-sdr11-20mm', 0.6], ['pe100-iso4427-sdr11-25mm', 0.9], ['pe100-iso4427-sdr11-32mm', 1.4], ['pe100-iso4427-sdr11-40mm', 2.2], ['pe100-iso4427-sdr11-50mm', 3.1]];
+const PRICES: [string, number][] = [
+  ['pe100-iso4427-sdr11-20mm', 0.6],
+  ['pe100-iso4427-sdr11-25mm', 0.9],
+  ['pe100-iso4427-sdr11-32mm', 1.4],
+  ['pe100-iso4427-sdr11-40mm', 2.2],
+  ['pe100-iso4427-sdr11-50mm', 3.1],
+];
 
 async function newProject(f: Fixture, name: string): Promise<string> {
-  return (await models().Project.create({ teamId: f.teamId, name, description: '', siteNotes: '', unitSystem: 'metric' })).id;
+  return (
+    await models().Project.create({ teamId: f.teamId, name, description: '', siteNotes: '', unitSystem: 'metric' })
+  ).id;
 }
 
 async function run(f: Fixture, projectId: string, kind: 'solve' | 'day' | 'size'): Promise<NetworkJobView> {
-  const started = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId }, body: { kind, timeLimitS: 10 }, userId: f.users.designer.id });
+  const started = await call(Runs.POST, {
+    method: 'POST',
+    path: '/runs',
+    params: { projectId },
+    body: { kind, timeLimitS: 10 },
+    userId: f.users.designer.id,
+  });
   expect(started.status).toBe(202);
   for (let i = 0; i < 300; i++) {
-    const res = await call(RunOne.GET, { method: 'GET', path: '/run', params: { projectId, jobId: started.json.run.id }, userId: f.users.designer.id });
+    const res = await call(RunOne.GET, {
+      method: 'GET',
+      path: '/run',
+      params: { projectId, jobId: started.json.run.id },
+      userId: f.users.designer.id,
+    });
     const polled = res.json.run as NetworkJobView;
     if (polled.status === 'done' || polled.status === 'failed') return polled;
     await new Promise((resolve) => setTimeout(resolve, 100));
@@ -48,28 +67,87 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
   const ids: Record<string, string> = {};
 
   async function post(projectId: string, handler: typeof Nodes.POST, body: object, key: string) {
-    const res = await call(handler, { method: 'POST', path: '/x', params: { projectId }, body, userId: f.users.designer.id });
+    const res = await call(handler, {
+      method: 'POST',
+      path: '/x',
+      params: { projectId },
+      body,
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(201);
     ids[key] = (res.json.node ?? res.json.link).id;
   }
 
   beforeAll(async () => {
     f = await createTeamFixture();
-    const put = await call(PriceList.PUT, { method: 'PUT', path: '/p', params: { teamId: f.teamId }, userId: f.users.designer.id, body: { items: PRICES.map(([pipeId, costPerM]) => ({ pipeId, costPerM })) } });
+    const put = await call(PriceList.PUT, {
+      method: 'PUT',
+      path: '/p',
+      params: { teamId: f.teamId },
+      userId: f.users.designer.id,
+      body: { items: PRICES.map(([pipeId, costPerM]) => ({ pipeId, costPerM })) },
+    });
     expect(put.status).toBe(200);
     // Invented: a spring at 130 m fills a 5 m³ tank (floor 120 m, 0.2-1.6 m working, 2 days' reserve)
     // that feeds one tap at 100 m drawing a steady 0.2 L/s.
     tankProject = await newProject(f, 'Tank fixture');
     const tank = await createTankFixture(tankProject, f.users.designer.id);
-    await post(tankProject, Nodes.POST, { kind: 'source', name: 'Spring', elevationM: 130, data: { waterLevelM: 130 } }, 'spring');
-    await post(tankProject, Nodes.POST, { kind: 'tank', name: 'Hill tank', tankId: tank.id, data: { inletFloatValve: true } }, 'tank');
-    await post(tankProject, Nodes.POST, { kind: 'outlet', name: 'Yard tap', elevationM: 100, data: { outletKind: 'tap', residualHeadM: 3, demandFrom: 'fixed', fixedDemandM3s: 0.0002 } }, 'tap');
-    await post(tankProject, Links.POST, { kind: 'pipe', name: 'Spring pipe', fromNodeId: ids.spring, toNodeId: ids.tank, data: { lengthM: 300, pipe: 'pe100-iso4427-sdr11-32mm' } }, 'inlet');
-    await post(tankProject, Links.POST, { kind: 'pipe', name: 'Tap pipe', fromNodeId: ids.tank, toNodeId: ids.tap, data: { lengthM: 200, pipe: 'pe100-iso4427-sdr11-50mm' } }, 'outlet');
+    await post(
+      tankProject,
+      Nodes.POST,
+      { kind: 'source', name: 'Spring', elevationM: 130, data: { waterLevelM: 130 } },
+      'spring',
+    );
+    await post(
+      tankProject,
+      Nodes.POST,
+      { kind: 'tank', name: 'Hill tank', tankId: tank.id, data: { inletFloatValve: true } },
+      'tank',
+    );
+    await post(
+      tankProject,
+      Nodes.POST,
+      {
+        kind: 'outlet',
+        name: 'Yard tap',
+        elevationM: 100,
+        data: { outletKind: 'tap', residualHeadM: 3, demandFrom: 'fixed', fixedDemandM3s: 0.0002 },
+      },
+      'tap',
+    );
+    await post(
+      tankProject,
+      Links.POST,
+      {
+        kind: 'pipe',
+        name: 'Spring pipe',
+        fromNodeId: ids.spring,
+        toNodeId: ids.tank,
+        data: { lengthM: 300, pipe: 'pe100-iso4427-sdr11-32mm' },
+      },
+      'inlet',
+    );
+    await post(
+      tankProject,
+      Links.POST,
+      {
+        kind: 'pipe',
+        name: 'Tap pipe',
+        fromNodeId: ids.tank,
+        toNodeId: ids.tap,
+        data: { lengthM: 200, pipe: 'pe100-iso4427-sdr11-50mm' },
+      },
+      'outlet',
+    );
   });
 
   it("sizes each tank's storage from the outlets it serves: the tap's day plus the tank record's reserve days", async () => {
-    const res = await call(TankStorage.GET, { method: 'GET', path: '/s', params: { projectId: tankProject }, userId: f.users.reviewer.id });
+    const res = await call(TankStorage.GET, {
+      method: 'GET',
+      path: '/s',
+      params: { projectId: tankProject },
+      userId: f.users.reviewer.id,
+    });
     expect(res.status).toBe(200);
     const storage = res.json.storage as ProjectTankStorage;
     expect(storage.reason).toBeNull();
@@ -115,54 +193,141 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
   it('applies the chosen sizes to the typed pipes in one go', async () => {
     // Invented: a spring at 140 m, a tee at 120 m, taps at 100 m and 105 m; every pipe typed as 50 mm.
     const pipes = await newProject(f, 'Pipes fixture');
-    await post(pipes, Nodes.POST, { kind: 'source', name: 'Spring', elevationM: 140, data: { waterLevelM: 140 } }, 'p-spring');
-    await post(pipes, Nodes.POST, { kind: 'outlet', name: 'Tee', elevationM: 120, data: { outletKind: 'free', demandFrom: 'fixed', fixedDemandM3s: 0 } }, 'p-tee');
-    await post(pipes, Nodes.POST, { kind: 'outlet', name: 'Tap one', elevationM: 100, data: { outletKind: 'tap', residualHeadM: 5, demandFrom: 'fixed', fixedDemandM3s: 0.0003 } }, 'p-one');
-    await post(pipes, Nodes.POST, { kind: 'outlet', name: 'Tap two', elevationM: 105, data: { outletKind: 'tap', residualHeadM: 5, demandFrom: 'fixed', fixedDemandM3s: 0.0002 } }, 'p-two');
-    for (const [name, from, to, lengthM] of [['Main', 'p-spring', 'p-tee', 300], ['Branch one', 'p-tee', 'p-one', 150], ['Branch two', 'p-tee', 'p-two', 120]] as const) {
-      await post(pipes, Links.POST, { kind: 'pipe', name, fromNodeId: ids[from], toNodeId: ids[to], data: { lengthM, pipe: 'pe100-iso4427-sdr11-50mm' } }, name);
+    await post(
+      pipes,
+      Nodes.POST,
+      { kind: 'source', name: 'Spring', elevationM: 140, data: { waterLevelM: 140 } },
+      'p-spring',
+    );
+    await post(
+      pipes,
+      Nodes.POST,
+      {
+        kind: 'outlet',
+        name: 'Tee',
+        elevationM: 120,
+        data: { outletKind: 'free', demandFrom: 'fixed', fixedDemandM3s: 0 },
+      },
+      'p-tee',
+    );
+    await post(
+      pipes,
+      Nodes.POST,
+      {
+        kind: 'outlet',
+        name: 'Tap one',
+        elevationM: 100,
+        data: { outletKind: 'tap', residualHeadM: 5, demandFrom: 'fixed', fixedDemandM3s: 0.0003 },
+      },
+      'p-one',
+    );
+    await post(
+      pipes,
+      Nodes.POST,
+      {
+        kind: 'outlet',
+        name: 'Tap two',
+        elevationM: 105,
+        data: { outletKind: 'tap', residualHeadM: 5, demandFrom: 'fixed', fixedDemandM3s: 0.0002 },
+      },
+      'p-two',
+    );
+    for (const [name, from, to, lengthM] of [
+      ['Main', 'p-spring', 'p-tee', 300],
+      ['Branch one', 'p-tee', 'p-one', 150],
+      ['Branch two', 'p-tee', 'p-two', 120],
+    ] as const) {
+      await post(
+        pipes,
+        Links.POST,
+        {
+          kind: 'pipe',
+          name,
+          fromNodeId: ids[from],
+          toNodeId: ids[to],
+          data: { lengthM, pipe: 'pe100-iso4427-sdr11-50mm' },
+        },
+        name,
+      );
     }
     const job = await run(f, pipes, 'size');
     const sized = job.result as SizeRunResult;
     expect(sized.feasible).toBe(true);
     // Least cost does not keep 50 mm everywhere for half a litre a second.
     expect(sized.solution!.links.some((link) => link.pieces[0].pipeId !== 'pe100-iso4427-sdr11-50mm')).toBe(true);
-    const res = await call(Apply.POST, { method: 'POST', path: '/a', params: { projectId: pipes, jobId: job.id }, userId: f.users.designer.id });
+    const res = await call(Apply.POST, {
+      method: 'POST',
+      path: '/a',
+      params: { projectId: pipes, jobId: job.id },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(200);
     for (const link of sized.solution!.links) {
       const row = await models().NetworkLink.findByPk(link.linkId);
       expect(row!.data.pipe).toBe(link.pieces[0].pipeId);
     }
     // The network report carries the schematic, the heads and pressures, flows and velocities, the sizes and the cost.
-    const report = await call(NetworkReport.GET, { method: 'GET', path: '/r', params: { projectId: pipes }, userId: f.users.reviewer.id });
+    const report = await call(NetworkReport.GET, {
+      method: 'GET',
+      path: '/r',
+      params: { projectId: pipes },
+      userId: f.users.reviewer.id,
+    });
     expect(report.status).toBe(200);
     expect(report.headers.get('content-type')).toBe('application/pdf');
     const text = (await new PDFParse({ data: new Uint8Array(report.bytes) }).getText()).text.replace(/\s+/g, ' ');
-    for (const words of ['Schematic at the peak hour', 'Nodes at the peak hour', 'Links at the peak hour', 'Least-cost sizes', 'Pressure head', 'Velocity', 'Tap one', 'Branch two', 'NOT FOR CONSTRUCTION']) {
+    for (const words of [
+      'Schematic at the peak hour',
+      'Nodes at the peak hour',
+      'Links at the peak hour',
+      'Least-cost sizes',
+      'Pressure head',
+      'Velocity',
+      'Tap one',
+      'Branch two',
+      'NOT FOR CONSTRUCTION',
+    ]) {
       expect(text, words).toContain(words);
     }
     // The main carries both taps' peak: 0.3 + 0.2 L/s; the cost is the sizing's, to the unit.
     expect(text).toContain('0.50 L/s');
     expect(text).toContain(`Material cost of the chosen pipes: ${Math.round(sized.cost!).toLocaleString('en-US')}`);
     // A reviewer may not write sizes.
-    const refused = await call(Apply.POST, { method: 'POST', path: '/a', params: { projectId: pipes, jobId: job.id }, userId: f.users.reviewer.id });
+    const refused = await call(Apply.POST, {
+      method: 'POST',
+      path: '/a',
+      params: { projectId: pipes, jobId: job.id },
+      userId: f.users.reviewer.id,
+    });
     expect(refused.status).toBe(403);
   });
 
-  it("applies sizes to a line: its stretches become the chosen pipes and its page shows them", async () => {
-    await models().sequelize.transaction((transaction) => linkLineIntoNetwork(models().sequelize, transaction, f.lineId));
-    const before = (await call(LineOne.GET, { method: 'GET', path: '/l', params: { lineId: f.lineId }, userId: f.users.designer.id })).json.line;
+  it('applies sizes to a line: its stretches become the chosen pipes and its page shows them', async () => {
+    await models().sequelize.transaction((transaction) =>
+      linkLineIntoNetwork(models().sequelize, transaction, f.lineId),
+    );
+    const before = (
+      await call(LineOne.GET, { method: 'GET', path: '/l', params: { lineId: f.lineId }, userId: f.users.designer.id })
+    ).json.line;
     const job = await run(f, f.projectId, 'size');
     expect(job.status).toBe('done');
     const sized = job.result as SizeRunResult;
     expect(sized.feasible).toBe(true);
     const pieces = sized.solution!.links.find((l) => l.pieces[0]?.fromChainageM !== null)!.pieces;
-    const res = await call(Apply.POST, { method: 'POST', path: '/a', params: { projectId: f.projectId, jobId: job.id }, userId: f.users.designer.id });
+    const res = await call(Apply.POST, {
+      method: 'POST',
+      path: '/a',
+      params: { projectId: f.projectId, jobId: job.id },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(200);
     expect(res.json.applied.lines).toBe(1);
-    const after = (await call(LineOne.GET, { method: 'GET', path: '/l', params: { lineId: f.lineId }, userId: f.users.designer.id })).json.line;
+    const after = (
+      await call(LineOne.GET, { method: 'GET', path: '/l', params: { lineId: f.lineId }, userId: f.users.designer.id })
+    ).json.line;
     expect(after.revision).toBe(before.revision + 1);
-    const pipeAt = (m: number) => after.design.stretches.find((s: { fromM: number; toM: number }) => m >= s.fromM && m <= s.toM).pipe;
+    const pipeAt = (m: number) =>
+      after.design.stretches.find((s: { fromM: number; toM: number }) => m >= s.fromM && m <= s.toM).pipe;
     for (const piece of pieces) expect(pipeAt((piece.fromChainageM! + piece.toChainageM!) / 2)).toBe(piece.pipeId);
     expect(after.design.stretches[0].fromM).toBe(0);
     expect(after.design.stretches.at(-1).toM).toBe(400);
@@ -170,15 +335,31 @@ describe('network results: day run, storage per tank, applying sizes, nothing to
 
   it('refuses to apply a run that is not a finished sizing', async () => {
     const solve = await run(f, tankProject, 'solve');
-    const res = await call(Apply.POST, { method: 'POST', path: '/a', params: { projectId: tankProject, jobId: solve.id }, userId: f.users.designer.id });
+    const res = await call(Apply.POST, {
+      method: 'POST',
+      path: '/a',
+      params: { projectId: tankProject, jobId: solve.id },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.fields).toHaveProperty('jobId');
   });
 
   it('answers sizing a one-node network with a 400 saying there is nothing to size', async () => {
     const lonely = await newProject(f, 'One node');
-    await post(lonely, Nodes.POST, { kind: 'source', name: 'Lone spring', elevationM: 50, data: { waterLevelM: 50 } }, 'lone');
-    const res = await call(Runs.POST, { method: 'POST', path: '/runs', params: { projectId: lonely }, body: { kind: 'size' }, userId: f.users.designer.id });
+    await post(
+      lonely,
+      Nodes.POST,
+      { kind: 'source', name: 'Lone spring', elevationM: 50, data: { waterLevelM: 50 } },
+      'lone',
+    );
+    const res = await call(Runs.POST, {
+      method: 'POST',
+      path: '/runs',
+      params: { projectId: lonely },
+      body: { kind: 'size' },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.message).toMatch(/^Nothing to size: the network has only one part/);
     expect(await models().NetworkJob.count({ where: { projectId: lonely } })).toBe(0);
@@ -196,14 +377,49 @@ describe("a line's own analysis reads what feeds it from the network", () => {
     const records = await readNetworkRecords(projectId);
     const sourceNode = records.nodes.find((n) => n.id === records.links.find((l) => l.lineId === lineId)!.fromNodeId)!;
     const asDesigner = { userId: f.users.designer.id };
-    const tee = await call(TakeOffs.POST, { method: 'POST', path: '/t', params: { projectId }, body: { lineId, chainageM: 200, name: 'Trough tee' }, ...asDesigner });
+    const tee = await call(TakeOffs.POST, {
+      method: 'POST',
+      path: '/t',
+      params: { projectId },
+      body: { lineId, chainageM: 200, name: 'Trough tee' },
+      ...asDesigner,
+    });
     expect(tee.status).toBe(201);
-    const trough = await call(Nodes.POST, { method: 'POST', path: '/n', params: { projectId }, body: { kind: 'outlet', name: 'Trough', elevationM: 215, data: { outletKind: 'trough', residualHeadM: 2, demandFrom: 'fixed', fixedDemandM3s: 0.0004 } }, ...asDesigner });
-    const branch = await call(Links.POST, { method: 'POST', path: '/l', params: { projectId }, body: { kind: 'pipe', name: 'Trough pipe', fromNodeId: tee.json.node.id, toNodeId: trough.json.node.id, data: { lengthM: 60, pipe: 'pe100-iso4427-sdr11-32mm' } }, ...asDesigner });
+    const trough = await call(Nodes.POST, {
+      method: 'POST',
+      path: '/n',
+      params: { projectId },
+      body: {
+        kind: 'outlet',
+        name: 'Trough',
+        elevationM: 215,
+        data: { outletKind: 'trough', residualHeadM: 2, demandFrom: 'fixed', fixedDemandM3s: 0.0004 },
+      },
+      ...asDesigner,
+    });
+    const branch = await call(Links.POST, {
+      method: 'POST',
+      path: '/l',
+      params: { projectId },
+      body: {
+        kind: 'pipe',
+        name: 'Trough pipe',
+        fromNodeId: tee.json.node.id,
+        toNodeId: trough.json.node.id,
+        data: { lengthM: 60, pipe: 'pe100-iso4427-sdr11-32mm' },
+      },
+      ...asDesigner,
+    });
     expect(branch.status).toBe(201);
     // The network's source is raised to 245 m: the line's own saved start (241 m) is no longer read.
     const sourceBody = { ...sourceNode, id: undefined };
-    const raised = await call(NodeOne.PUT, { method: 'PUT', path: '/n', params: { projectId, nodeId: sourceNode.id }, body: { ...sourceBody, elevationM: 245, data: { ...sourceBody.data, waterLevelM: 245 } }, ...asDesigner });
+    const raised = await call(NodeOne.PUT, {
+      method: 'PUT',
+      path: '/n',
+      params: { projectId, nodeId: sourceNode.id },
+      body: { ...sourceBody, elevationM: 245, data: { ...sourceBody.data, waterLevelM: 245 } },
+      ...asDesigner,
+    });
     expect(raised.status).toBe(200);
 
     const res = await call(Analysis.POST, { method: 'POST', path: '/a', params: { lineId }, ...asDesigner });
@@ -216,7 +432,8 @@ describe("a line's own analysis reads what feeds it from the network", () => {
     expect(profile.flowSchedule[1]).toMatchObject({ fromM: 200 });
     expect(profile.flowSchedule[1].flowM3s).toBeCloseTo(0.001, 9);
     expect(profile.flowM3s).toBeCloseTo(0.0014, 9);
-    // The grade starts at the network's 245 m less the entrance loss (1 + 0.5) v²/2g of a few centimetres, far from the saved 241 m.
+    // The grade starts at the network's 245 m less the entrance loss (1 + 0.5) v²/2g of a few centimetres, far from the
+    // saved 241 m.
     expect(profile.points.hydraulicGradeM[0]).toBeGreaterThan(244.8);
     expect(profile.points.hydraulicGradeM[0]).toBeLessThanOrEqual(245);
 

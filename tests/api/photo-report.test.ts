@@ -24,11 +24,29 @@ describe('site photos in the line report', () => {
   beforeAll(async () => {
     f = await createTeamFixture();
     lineId = f.lineId; // the fixture's line (tests/support/line-fixture.ts)
-    const chosen = await uploadPhoto({ projectId: f.projectId, userId: f.users.surveyor.id, fileName: 'IMG_0412.jpg', bytes: await jpegWithPosition(54.5 + 1.5 * STATION_DEG, -2.6), caption: 'Washout pit at the dip' });
-    const other = await uploadPhoto({ projectId: f.projectId, userId: f.users.surveyor.id, fileName: 'IMG_0413.jpg', bytes: await jpegWithPosition(54.5 + 3.2 * STATION_DEG, -2.6), caption: 'Gate left open' });
+    const chosen = await uploadPhoto({
+      projectId: f.projectId,
+      userId: f.users.surveyor.id,
+      fileName: 'IMG_0412.jpg',
+      bytes: await jpegWithPosition(54.5 + 1.5 * STATION_DEG, -2.6),
+      caption: 'Washout pit at the dip',
+    });
+    const other = await uploadPhoto({
+      projectId: f.projectId,
+      userId: f.users.surveyor.id,
+      fileName: 'IMG_0413.jpg',
+      bytes: await jpegWithPosition(54.5 + 3.2 * STATION_DEG, -2.6),
+      caption: 'Gate left open',
+    });
     chosenId = chosen.id;
     otherId = other.id;
-    const res = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: chosenId }, body: { inReport: true }, userId: f.users.designer.id });
+    const res = await call(updatePhoto, {
+      method: 'PATCH',
+      path: '/x',
+      params: { photoId: chosenId },
+      body: { inReport: true },
+      userId: f.users.designer.id,
+    });
     expect(res.status).toBe(200);
   });
 
@@ -66,7 +84,13 @@ describe('site photos in the line report', () => {
   });
 
   it('a photo taken off the chosen again leaves the report', async () => {
-    await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: chosenId }, body: { inReport: false }, userId: f.users.designer.id });
+    await call(updatePhoto, {
+      method: 'PATCH',
+      path: '/x',
+      params: { photoId: chosenId },
+      body: { inReport: false },
+      userId: f.users.designer.id,
+    });
     const res = await call(lineReport, { method: 'GET', path: '/x', params: { lineId }, userId: f.users.designer.id });
     const parser = new PDFParse({ data: new Uint8Array(res.bytes) });
     const text = (await parser.getText()).text;

@@ -30,15 +30,32 @@ describe('site photos', () => {
     // A walked route due north along 2.9° W, from 54.000° to 54.010° N (GPS CSV, chainage measured on import).
     const csv = 'lat,lon,ele\n54.000,-2.9,300\n54.005,-2.9,296\n54.010,-2.9,290\n';
     const imported = await importSurvey({
-      projectId: f.projectId, userId: f.users.surveyor.id, fileName: 'walk.csv', contentType: 'text/csv', bytes: new TextEncoder().encode(csv),
-      options: { format: 'gps-csv', name: 'North walk', elevationUnit: 'm', heightSource: 'gps', mapping: { latitude: 0, longitude: 1, elevation: 2, time: null, name: null, accuracy: null } },
+      projectId: f.projectId,
+      userId: f.users.surveyor.id,
+      fileName: 'walk.csv',
+      contentType: 'text/csv',
+      bytes: new TextEncoder().encode(csv),
+      options: {
+        format: 'gps-csv',
+        name: 'North walk',
+        elevationUnit: 'm',
+        heightSource: 'gps',
+        mapping: { latitude: 0, longitude: 1, elevation: 2, time: null, name: null, accuracy: null },
+      },
     });
     walkId = imported.route.id;
   });
 
   const upload = (bytes: Uint8Array, fileName: string, fields: Record<string, string> = {}, type = 'image/jpeg') => {
     const { body, contentType } = photoUpload(bytes, fileName, fields, type);
-    return call(uploadPhoto, { method: 'POST', path: '/x', params: { projectId: f.projectId }, rawBody: body, headers: { 'content-type': contentType }, userId: f.users.surveyor.id });
+    return call(uploadPhoto, {
+      method: 'POST',
+      path: '/x',
+      params: { projectId: f.projectId },
+      rawBody: body,
+      headers: { 'content-type': contentType },
+      userId: f.users.surveyor.id,
+    });
   };
 
   it('a JPEG with a position lands at the nearest chainage, with its distance off the line (computed by hand)', async () => {
@@ -50,7 +67,12 @@ describe('site photos', () => {
     const offsetByHand = primeVertical(54.0025) * Math.cos(rad(54.0025)) * rad(0.001); // ≈ 65.6 m
     expect(chainageByHand).toBeGreaterThan(277);
     expect(chainageByHand).toBeLessThan(279);
-    expect(photo).toMatchObject({ routeId: walkId, placement: 'position', caption: 'Spring box lid', takenAt: '2026-04-12T09:30:00.000Z' });
+    expect(photo).toMatchObject({
+      routeId: walkId,
+      placement: 'position',
+      caption: 'Spring box lid',
+      takenAt: '2026-04-12T09:30:00.000Z',
+    });
     expect(photo.chainageM).toBeCloseTo(chainageByHand, 1);
     expect(photo.offsetM).toBeCloseTo(offsetByHand, 1);
     expect(photo.latitude).toBeCloseTo(54.0025, 6);
@@ -59,10 +81,20 @@ describe('site photos', () => {
 
   it('the image served carries no metadata, though position and time are kept in Runnel', async () => {
     const res = await upload(await jpegWithPosition(54.006, -2.9), 'crossing.jpg');
-    const served = await call(image, { method: 'GET', path: `/api/photos/x/image`, params: { photoId: res.json.photo.id }, userId: f.users.reviewer.id });
+    const served = await call(image, {
+      method: 'GET',
+      path: `/api/photos/x/image`,
+      params: { photoId: res.json.photo.id },
+      userId: f.users.reviewer.id,
+    });
     expect(served.status).toBe(200);
     expect(served.headers.get('content-type')).toBe('image/jpeg');
-    const thumb = await call(image, { method: 'GET', path: '/api/photos/x/image?size=thumbnail', params: { photoId: res.json.photo.id }, userId: f.users.reviewer.id });
+    const thumb = await call(image, {
+      method: 'GET',
+      path: '/api/photos/x/image?size=thumbnail',
+      params: { photoId: res.json.photo.id },
+      userId: f.users.reviewer.id,
+    });
     expect(thumb.status).toBe(200);
     expect(thumb.headers.get('content-type')).toBe('image/jpeg');
     const stored = await models().SitePhoto.findByPk(res.json.photo.id);
@@ -101,12 +133,24 @@ describe('site photos', () => {
     const off = await upload(PLAIN_PNG, 'sketch.png', { routeId: walkId, chainageM: '5000' }, 'image/png');
     expect(off.status).toBe(400);
     expect(Object.keys(off.json.error.fields)).toEqual(['chainageM']);
-    const moved = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: res.json.photo.id }, body: { chainageM: 100, inReport: true }, userId: f.users.designer.id });
+    const moved = await call(updatePhoto, {
+      method: 'PATCH',
+      path: '/x',
+      params: { photoId: res.json.photo.id },
+      body: { chainageM: 100, inReport: true },
+      userId: f.users.designer.id,
+    });
     expect(moved.status).toBe(200);
     expect(moved.json.photo).toMatchObject({ chainageM: 100, inReport: true, placement: 'picked' });
     // A chainage beyond any line is refused in the project's units (1,000 km = 3,280,840 ft).
     await models().Project.update({ unitSystem: 'us' }, { where: { id: f.projectId } });
-    const far = await call(updatePhoto, { method: 'PATCH', path: '/x', params: { photoId: res.json.photo.id }, body: { chainageM: 2e6 }, userId: f.users.designer.id });
+    const far = await call(updatePhoto, {
+      method: 'PATCH',
+      path: '/x',
+      params: { photoId: res.json.photo.id },
+      body: { chainageM: 2e6 },
+      userId: f.users.designer.id,
+    });
     const farUpload = await upload(PLAIN_PNG, 'sketch.png', { routeId: walkId, chainageM: '2000000' }, 'image/png');
     await models().Project.update({ unitSystem: 'metric' }, { where: { id: f.projectId } });
     expect(far.status).toBe(400);
@@ -116,14 +160,22 @@ describe('site photos', () => {
 
   it('a HEIC photo (made by libheif’s encoder) is decoded, served as a metadata-free JPEG and lands at its chainage', async () => {
     // tests/fixtures/photos/README.md: 54.0075° N, 2.9015° W, taken 2026-04-12 10:15, Exif in the file's idat box.
-    const heic = new Uint8Array(fs.readFileSync(path.join(process.cwd(), 'tests/fixtures/photos/walk-54.0075N-2.9015W.heic')));
+    const heic = new Uint8Array(
+      fs.readFileSync(path.join(process.cwd(), 'tests/fixtures/photos/walk-54.0075N-2.9015W.heic')),
+    );
     const res = await upload(heic, 'IMG_2207.HEIC', { caption: 'Creek crossing' }, 'image/heic');
     expect(res.status).toBe(201);
     const chainageByHand = meridianRadius(54.00375) * rad(0.0075); // ≈ 834.1 m
     const offsetByHand = primeVertical(54.0075) * Math.cos(rad(54.0075)) * rad(0.0015); // ≈ 98.4 m
     expect(chainageByHand).toBeGreaterThan(833);
     expect(chainageByHand).toBeLessThan(835);
-    expect(res.json.photo).toMatchObject({ routeId: walkId, placement: 'position', width: 64, height: 48, takenAt: '2026-04-12T10:15:00.000Z' });
+    expect(res.json.photo).toMatchObject({
+      routeId: walkId,
+      placement: 'position',
+      width: 64,
+      height: 48,
+      takenAt: '2026-04-12T10:15:00.000Z',
+    });
     expect(res.json.photo.chainageM).toBeCloseTo(chainageByHand, 1);
     expect(res.json.photo.offsetM).toBeCloseTo(offsetByHand, 1);
     const stored = await models().SitePhoto.findByPk(res.json.photo.id);

@@ -20,13 +20,21 @@ const design = (settings: Record<string, unknown>) => ({
 });
 
 /** A refused line body names the field as the screen does, with its bound in the project's units (1 ft = 0.3048 m). */
-describe('refusals of the line endpoints speak the project\'s units', () => {
+describe("refusals of the line endpoints speak the project's units", () => {
   let f: Fixture;
   beforeAll(async () => {
     f = await createTeamFixture();
   });
-  const setUnits = (unitSystem: 'us' | 'metric') => models().Project.update({ unitSystem }, { where: { id: f.projectId } });
-  const create = (body: unknown) => call(projectLines.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, body, userId: f.users.designer.id });
+  const setUnits = (unitSystem: 'us' | 'metric') =>
+    models().Project.update({ unitSystem }, { where: { id: f.projectId } });
+  const create = (body: unknown) =>
+    call(projectLines.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      body,
+      userId: f.users.designer.id,
+    });
 
   it('a new line with a cover beyond the bound: feet in a US project, metres in a metric one; nothing written', async () => {
     const before = await models().Line.count({ where: { projectId: f.projectId } });
@@ -37,30 +45,63 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     expect(us.status).toBe(400);
     expect(us.json.error.fields).toEqual({ 'design.settings.defaultCoverM': ['Pipe cover must be at most 32.81 ft'] });
     expect(us.json.error.message).toBe('Some fields are not valid: Pipe cover must be at most 32.81 ft');
-    expect(metric.json.error.fields).toEqual({ 'design.settings.defaultCoverM': ['Pipe cover must be at most 10.00 m'] });
+    expect(metric.json.error.fields).toEqual({
+      'design.settings.defaultCoverM': ['Pipe cover must be at most 10.00 m'],
+    });
     expect(await models().Line.count({ where: { projectId: f.projectId } })).toBe(before);
   });
 
-  it('a saved line\'s update with a device far off: named by its place, chainage in feet', async () => {
+  it("a saved line's update with a device far off: named by its place, chainage in feet", async () => {
     await setUnits('us');
     const made = await create({ name: 'Main', routeId: f.lineRouteId });
     expect(made.status).toBe(201);
     const line = made.json.line;
     const res = await call(lineRoute.PATCH, {
-      method: 'PATCH', path: '/api/x', params: { lineId: line.id }, userId: f.users.designer.id,
-      body: { name: line.name, notes: '', routeId: line.routeId, fromChainageM: null, toChainageM: null, baseRevision: line.revision, design: { ...line.design, devices: [{ kind: 'washout', chainageM: 10 }, { kind: 'washout', chainageM: 2e6 }] } },
+      method: 'PATCH',
+      path: '/api/x',
+      params: { lineId: line.id },
+      userId: f.users.designer.id,
+      body: {
+        name: line.name,
+        notes: '',
+        routeId: line.routeId,
+        fromChainageM: null,
+        toChainageM: null,
+        baseRevision: line.revision,
+        design: {
+          ...line.design,
+          devices: [
+            { kind: 'washout', chainageM: 10 },
+            { kind: 'washout', chainageM: 2e6 },
+          ],
+        },
+      },
     });
     await setUnits('metric');
     expect(res.status).toBe(400);
     // 1,000 km = 3,280,840 ft.
-    expect(res.json.error.fields['design.devices.1.chainageM']).toEqual(['Device 2: chainage must be at most 3,280,840 ft']);
+    expect(res.json.error.fields['design.devices.1.chainageM']).toEqual([
+      'Device 2: chainage must be at most 3,280,840 ft',
+    ]);
     expect(JSON.stringify(res.json.error)).not.toMatch(/\d\.\d{4,}/);
   });
 
-  it('a tank and a network part under the project: their forms\' names, bounds in US units', async () => {
+  it("a tank and a network part under the project: their forms' names, bounds in US units", async () => {
     await setUnits('us');
-    const tank = await call(tanks.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { name: 'Top', volumeM3: -1, supplyHoursPerDay: 30 } });
-    const node = await call(nodes.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'outlet', name: 'Trough', elevationM: 9500 } });
+    const tank = await call(tanks.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
+      body: { name: 'Top', volumeM3: -1, supplyHoursPerDay: 30 },
+    });
+    const node = await call(nodes.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
+      body: { kind: 'outlet', name: 'Trough', elevationM: 9500 },
+    });
     await setUnits('metric');
     expect(tank.status).toBe(400);
     expect(tank.json.error.fields.volumeM3).toEqual(['Volume must be more than 0 US gal']);
@@ -69,13 +110,38 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
     expect(node.json.error.fields.elevationM).toEqual(['Elevation must be at most 29,527.56 ft']); // 9,000 m
   });
 
-  it('a daily use and a take-off: the garden\'s area in square feet, the take-off\'s chainage in feet; nothing written', async () => {
+  it("a daily use and a take-off: the garden's area in square feet, the take-off's chainage in feet; nothing written", async () => {
     await setUnits('us');
     const usesBefore = await models().DemandUse.count({ where: { projectId: f.projectId } });
-    const garden = await call(demandUses.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'garden', areaM2: -5, figureId: 'vegetables-inch-per-week', deliveryKind: 'delivery-hours', deliveryHours: 30, startHour: 6 } });
-    const takeOff = await call(takeOffs.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { lineId: f.lineId, chainageM: 2e6, name: 'Barn branch' } });
+    const garden = await call(demandUses.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
+      body: {
+        kind: 'garden',
+        areaM2: -5,
+        figureId: 'vegetables-inch-per-week',
+        deliveryKind: 'delivery-hours',
+        deliveryHours: 30,
+        startHour: 6,
+      },
+    });
+    const takeOff = await call(takeOffs.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
+      body: { lineId: f.lineId, chainageM: 2e6, name: 'Barn branch' },
+    });
     await setUnits('metric');
-    const metricGarden = await call(demandUses.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, userId: f.users.designer.id, body: { kind: 'garden', areaM2: -5, figureId: 'vegetables-inch-per-week' } });
+    const metricGarden = await call(demandUses.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      userId: f.users.designer.id,
+      body: { kind: 'garden', areaM2: -5, figureId: 'vegetables-inch-per-week' },
+    });
     expect(garden.status).toBe(400);
     expect(garden.json.error.fields.areaM2).toEqual(['Garden area must be at least 0 ft²']);
     expect(garden.json.error.fields.deliveryHours).toEqual(['Hours of delivery must be at most 24 h']);
@@ -87,17 +153,49 @@ describe('refusals of the line endpoints speak the project\'s units', () => {
 
   it('a route save with a height out of range names the point, the bound in feet', async () => {
     await setUnits('us');
-    const point = { sourceSeq: null, latitude: null, longitude: null, chainageM: 0, elevationM: 9500, label: null, heightSource: 'level', confidenceM: null, excluded: false };
-    const res = await call(points.PUT, { method: 'PUT', path: '/api/x', params: { routeId: f.lineRouteId }, userId: f.users.designer.id, body: { points: [{ ...point, elevationM: 100 }, point] } });
+    const point = {
+      sourceSeq: null,
+      latitude: null,
+      longitude: null,
+      chainageM: 0,
+      elevationM: 9500,
+      label: null,
+      heightSource: 'level',
+      confidenceM: null,
+      excluded: false,
+    };
+    const res = await call(points.PUT, {
+      method: 'PUT',
+      path: '/api/x',
+      params: { routeId: f.lineRouteId },
+      userId: f.users.designer.id,
+      body: { points: [{ ...point, elevationM: 100 }, point] },
+    });
     await setUnits('metric');
     expect(res.status).toBe(400);
     expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 2: elevation must be at most 29,527.56 ft']);
   });
 
   it('a page of rows saved from the route table names the point by its number in the table', async () => {
-    const point = { sourceSeq: null, latitude: null, longitude: null, chainageM: 0, elevationM: 9500, label: null, heightSource: 'level', confidenceM: null, excluded: false };
+    const point = {
+      sourceSeq: null,
+      latitude: null,
+      longitude: null,
+      chainageM: 0,
+      elevationM: 9500,
+      label: null,
+      heightSource: 'level',
+      confidenceM: null,
+      excluded: false,
+    };
     // The table's third page starts at point 101 (seq 100); its second row is point 102.
-    const res = await call(points.PUT, { method: 'PUT', path: '/api/x', params: { routeId: f.lineRouteId }, userId: f.users.designer.id, body: { points: [{ ...point, elevationM: 100 }, point], window: { fromSeq: 100, toSeq: 102 } } });
+    const res = await call(points.PUT, {
+      method: 'PUT',
+      path: '/api/x',
+      params: { routeId: f.lineRouteId },
+      userId: f.users.designer.id,
+      body: { points: [{ ...point, elevationM: 100 }, point], window: { fromSeq: 100, toSeq: 102 } },
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 102: elevation must be at most 9,000.00 m']);
     expect(res.json.error.message).toBe('Some fields are not valid: Point 102: elevation must be at most 9,000.00 m');

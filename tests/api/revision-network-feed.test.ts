@@ -16,7 +16,9 @@ describe('a revision freezes the network feed of its lines', () => {
   beforeAll(async () => {
     f = await createTeamFixture();
     // The fixture writes its line straight to the table; join it as a line write would.
-    const linkId = await models().sequelize.transaction((transaction) => linkLineIntoNetwork(models().sequelize, transaction, f.lineId));
+    const linkId = await models().sequelize.transaction((transaction) =>
+      linkLineIntoNetwork(models().sequelize, transaction, f.lineId),
+    );
     outletId = (await models().NetworkLink.findByPk(linkId!))!.toNodeId;
   });
 
@@ -26,13 +28,24 @@ describe('a revision freezes the network feed of its lines', () => {
     await outlet.save();
   };
   const frozenLine = async (revisionId: string): Promise<SnapshotLine> => {
-    const read = await call(revisionRoute.GET, { method: 'GET', path: '/api/x', params: { revisionId }, userId: f.users.reviewer.id });
+    const read = await call(revisionRoute.GET, {
+      method: 'GET',
+      path: '/api/x',
+      params: { revisionId },
+      userId: f.users.reviewer.id,
+    });
     return read.json.revision.snapshot.lines.find((l: SnapshotLine) => l.id === f.lineId);
   };
 
-  it("keeps the flow the network gave the line when the revision was made, after the network changes", async () => {
+  it('keeps the flow the network gave the line when the revision was made, after the network changes', async () => {
     await drawAtEnd(0.0004);
-    const made = await call(revisionsRoute.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, body: { note: 'With the network' }, userId: f.users.designer.id });
+    const made = await call(revisionsRoute.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      body: { note: 'With the network' },
+      userId: f.users.designer.id,
+    });
     expect(made.status).toBe(201);
     const revisionId = made.json.revision.id as string;
 

@@ -19,17 +19,34 @@ const WALK = 3000;
 beforeAll(async () => {
   f = await createTeamFixture();
   surveyor = f.users.surveyor.id;
-  const res = await importFile(surveyor, f.projectId, 'long.csv', gpsTrackCsv(WALK, { 900: 25, 2400: -20 }), { ...GPS_OPTIONS, name: 'Long walk' });
+  const res = await importFile(surveyor, f.projectId, 'long.csv', gpsTrackCsv(WALK, { 900: 25, 2400: -20 }), {
+    ...GPS_OPTIONS,
+    name: 'Long walk',
+  });
   expect(res.status).toBe(201);
   walkId = res.json.route.id;
 }, 60_000);
 
 const get = (handler: typeof viewRoute.GET, routeId: string, query = '', userId = surveyor) =>
   call(handler, { method: 'GET', path: `/api/routes/${routeId}/x${query}`, params: { routeId }, userId });
-const putPoints = (routeId: string, body: unknown) => call(pointsRoute.PUT, { method: 'PUT', path: `/api/routes/${routeId}/points`, params: { routeId }, body, userId: surveyor });
+const putPoints = (routeId: string, body: unknown) =>
+  call(pointsRoute.PUT, {
+    method: 'PUT',
+    path: `/api/routes/${routeId}/points`,
+    params: { routeId },
+    body,
+    userId: surveyor,
+  });
 const asInput = (p: any) => ({
-  sourceSeq: p.seq, latitude: p.latitude, longitude: p.longitude, chainageM: p.chainageM, elevationM: p.elevationM,
-  label: p.label, heightSource: p.heightSource, confidenceM: p.confidenceM, excluded: p.excluded,
+  sourceSeq: p.seq,
+  latitude: p.latitude,
+  longitude: p.longitude,
+  chainageM: p.chainageM,
+  elevationM: p.elevationM,
+  label: p.label,
+  heightSource: p.heightSource,
+  confidenceM: p.confidenceM,
+  excluded: p.excluded,
 });
 
 describe('the route view: what the page draws, never the points', () => {
@@ -45,11 +62,18 @@ describe('the route view: what the page draws, never the points', () => {
     expect(cleaned[0].chainageM).toBe(whole.points[0].chainageM);
     expect(cleaned.at(-1).chainageM).toBe(whole.points[WALK - 1].chainageM);
     // The spikes stand far out of the 4 m scatter, so the thinning keeps them.
-    for (const seq of [900, 2400]) expect(raw.some((p: any) => p.chainageM === whole.points[seq].chainageM && p.elevationM === whole.points[seq].rawElevationM)).toBe(true);
+    for (const seq of [900, 2400])
+      expect(
+        raw.some(
+          (p: any) => p.chainageM === whole.points[seq].chainageM && p.elevationM === whole.points[seq].rawElevationM,
+        ),
+      ).toBe(true);
     const heights = whole.points.map((p: any) => p.elevationM);
     expect(res.json.heightRangeM).toEqual({ lowM: Math.min(...heights), highM: Math.max(...heights) });
     expect(res.json.proposals).toEqual(whole.proposals);
-    expect(res.json.proposalPlaces.map((p: any) => p.chainageM)).toEqual(whole.proposals.map((p: any) => whole.points[p.index].chainageM));
+    expect(res.json.proposalPlaces.map((p: any) => p.chainageM)).toEqual(
+      whole.proposals.map((p: any) => whole.points[p.index].chainageM),
+    );
     expect(res.json.positioned).toBe(true);
     expect(res.json.plan.length).toBe(cleaned.length);
     // Smaller than the whole route's answer even at 3,000 points (at 100,000: about 300 kB, see route-read-100k).
@@ -130,7 +154,10 @@ describe('clean-up proposed on request', () => {
 
 describe('saving one page of rows', () => {
   it('replaces only the rows of the page: the rest of the route as stored, raw heights kept, the view of the new version', async () => {
-    const made = await importFile(surveyor, f.projectId, 'paged.csv', gpsTrackCsv(300), { ...GPS_OPTIONS, name: 'Paged edit' });
+    const made = await importFile(surveyor, f.projectId, 'paged.csv', gpsTrackCsv(300), {
+      ...GPS_OPTIONS,
+      name: 'Paged edit',
+    });
     const id = made.json.route.id;
     const before = await readRoute(surveyor, id);
     const viewBefore = await get(viewRoute.GET, id);
@@ -138,15 +165,27 @@ describe('saving one page of rows', () => {
     const rows = page.json.points.map(asInput);
     rows[10] = { ...rows[10], elevationM: 999, label: 'Trough' };
     rows.splice(20, 1); // delete seq 120
-    const res = await putPoints(id, { points: rows, baseUpdatedAt: page.json.updatedAt, window: { fromSeq: 100, toSeq: 150 } });
+    const res = await putPoints(id, {
+      points: rows,
+      baseUpdatedAt: page.json.updatedAt,
+      window: { fromSeq: 100, toSeq: 150 },
+    });
     expect(res.status).toBe(200);
     expect(res.json.points).toBeUndefined();
     const after = await readRoute(surveyor, id);
     expect(after.points).toHaveLength(299);
-    expect(after.points.slice(0, 100).map((p: any) => [p.elevationM, p.rawElevationM])).toEqual(before.points.slice(0, 100).map((p: any) => [p.elevationM, p.rawElevationM]));
-    expect(after.points[110]).toMatchObject({ elevationM: 999, rawElevationM: before.points[110].rawElevationM, label: 'Trough' });
+    expect(after.points.slice(0, 100).map((p: any) => [p.elevationM, p.rawElevationM])).toEqual(
+      before.points.slice(0, 100).map((p: any) => [p.elevationM, p.rawElevationM]),
+    );
+    expect(after.points[110]).toMatchObject({
+      elevationM: 999,
+      rawElevationM: before.points[110].rawElevationM,
+      label: 'Trough',
+    });
     expect(after.points[120].rawElevationM).toBe(before.points[121].rawElevationM);
-    expect(after.points.slice(149).map((p: any) => p.rawElevationM)).toEqual(before.points.slice(150).map((p: any) => p.rawElevationM));
+    expect(after.points.slice(149).map((p: any) => p.rawElevationM)).toEqual(
+      before.points.slice(150).map((p: any) => p.rawElevationM),
+    );
     // The view answered (and any later read) is of the new version, not the one kept before.
     expect(res.json.route.updatedAt).toBe(after.route.updatedAt);
     expect(res.json.route.updatedAt).not.toBe(viewBefore.json.route.updatedAt);
@@ -155,7 +194,10 @@ describe('saving one page of rows', () => {
   });
 
   it('refuses a row from outside the page and a page past the end, writing nothing', async () => {
-    const made = await importFile(surveyor, f.projectId, 'paged2.csv', gpsTrackCsv(60), { ...GPS_OPTIONS, name: 'Paged refusals' });
+    const made = await importFile(surveyor, f.projectId, 'paged2.csv', gpsTrackCsv(60), {
+      ...GPS_OPTIONS,
+      name: 'Paged refusals',
+    });
     const id = made.json.route.id;
     const before = await readRoute(surveyor, id);
     const rows = before.points.slice(0, 10).map(asInput);
@@ -176,13 +218,19 @@ describe('the view kept per saved version', () => {
     forgetRouteViews();
     const first = await getRouteView(walkId);
     expect(await getRouteView(walkId)).toBe(first);
-    const made = await importFile(surveyor, f.projectId, 'kept.csv', gpsTrackCsv(80), { ...GPS_OPTIONS, name: 'Kept view' });
+    const made = await importFile(surveyor, f.projectId, 'kept.csv', gpsTrackCsv(80), {
+      ...GPS_OPTIONS,
+      name: 'Kept view',
+    });
     const id = made.json.route.id;
     const before = await getRouteView(id);
     const page = await get(pointsRoute.GET, id, '?offset=0&limit=10');
     const rows = page.json.points.map(asInput);
     rows[3] = { ...rows[3], elevationM: 777 };
-    expect((await putPoints(id, { points: rows, baseUpdatedAt: page.json.updatedAt, window: { fromSeq: 0, toSeq: 10 } })).status).toBe(200);
+    expect(
+      (await putPoints(id, { points: rows, baseUpdatedAt: page.json.updatedAt, window: { fromSeq: 0, toSeq: 10 } }))
+        .status,
+    ).toBe(200);
     const after = await getRouteView(id);
     expect(after).not.toBe(before);
     expect(after!.heightRangeM!.highM).toBe(777);

@@ -26,10 +26,17 @@ describe('a database failure inside a handler', () => {
   it('is logged and answered with a generic 500 that leaks nothing', async () => {
     const f = await createTeamFixture();
     const secret = 'relation "projects" column "password_hash" detail';
-    const injected = failListReadOnce(new DatabaseError(Object.assign(new Error(secret), { sql: 'SELECT 1' }) as never));
+    const injected = failListReadOnce(
+      new DatabaseError(Object.assign(new Error(secret), { sql: 'SELECT 1' }) as never),
+    );
     const logged = vi.spyOn(log(), 'error').mockImplementation(() => undefined);
 
-    const res = await call(listProjects, { method: 'GET', path: '/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    const res = await call(listProjects, {
+      method: 'GET',
+      path: '/x',
+      params: { teamId: f.teamId },
+      userId: f.users.viewer.id,
+    });
     expect(injected.failed()).toBe(true);
     expect(res.status).toBe(500);
     expect(res.json.error.code).toBe('internal');
@@ -43,7 +50,12 @@ describe('a database failure inside a handler', () => {
     const injected = failListReadOnce(new ConnectionRefusedError(driver as never));
     vi.spyOn(log(), 'warn').mockImplementation(() => undefined);
 
-    const res = await call(listProjects, { method: 'GET', path: '/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    const res = await call(listProjects, {
+      method: 'GET',
+      path: '/x',
+      params: { teamId: f.teamId },
+      userId: f.users.viewer.id,
+    });
     expect(injected.failed()).toBe(true);
     expect(res.status).toBe(503);
     expect(res.json.error.code).toBe('service_unavailable');
@@ -53,7 +65,12 @@ describe('a database failure inside a handler', () => {
 
   it('marks API answers no-store', async () => {
     const f = await createTeamFixture();
-    const res = await call(listProjects, { method: 'GET', path: '/x', params: { teamId: f.teamId }, userId: f.users.viewer.id });
+    const res = await call(listProjects, {
+      method: 'GET',
+      path: '/x',
+      params: { teamId: f.teamId },
+      userId: f.users.viewer.id,
+    });
     expect(res.status).toBe(200);
     expect(res.headers.get('cache-control')).toBe('no-store');
   });

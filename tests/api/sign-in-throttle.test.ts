@@ -1,12 +1,24 @@
 import { describe, expect, it } from 'vitest';
-import { accountKey, admitSignIn, knownDeviceCookie, knownDeviceOf, signInSucceeded, type SignInAttempt } from '@/lib/auth/sign-in-throttle';
+import {
+  accountKey,
+  admitSignIn,
+  knownDeviceCookie,
+  knownDeviceOf,
+  signInSucceeded,
+  type SignInAttempt,
+} from '@/lib/auth/sign-in-throttle';
 import { clientAddress } from '@/lib/http/client-address';
 import { db } from '@/lib/db';
 
 const unique = () => `${Date.now()}-${Math.random().toString(36).slice(2, 8)}`;
 const email = () => `throttle-${unique()}@fixture.test`;
 /** A fresh client address per attempt unless one is given, so only the account limit is in play. */
-const attempt = (who: string, extra: Partial<SignInAttempt> = {}): SignInAttempt => ({ email: who, address: `addr-${unique()}`, knownDevice: null, ...extra });
+const attempt = (who: string, extra: Partial<SignInAttempt> = {}): SignInAttempt => ({
+  email: who,
+  address: `addr-${unique()}`,
+  knownDevice: null,
+  ...extra,
+});
 
 // The whole sign-in route (form, 429 answer, device cookie) runs against `next start` in tests/server.
 describe('sign-in throttle (counted in PostgreSQL before the password check)', () => {
@@ -22,9 +34,13 @@ describe('sign-in throttle (counted in PostgreSQL before the password check)', (
   it('keeps the counts in the database (shared by every instance), keyed by a hash, never the e-mail', async () => {
     const who = email();
     await admitSignIn(attempt(who));
-    const [rows] = await db().query(`SELECT key, points FROM rate_limits WHERE key = :key`, { replacements: { key: `signin-account:${accountKey(who)}` } });
+    const [rows] = await db().query(`SELECT key, points FROM rate_limits WHERE key = :key`, {
+      replacements: { key: `signin-account:${accountKey(who)}` },
+    });
     expect(rows).toEqual([{ key: `signin-account:${accountKey(who)}`, points: 1 }]);
-    const [leaks] = await db().query(`SELECT count(*)::int AS n FROM rate_limits WHERE key LIKE :pattern`, { replacements: { pattern: `%${who}%` } });
+    const [leaks] = await db().query(`SELECT count(*)::int AS n FROM rate_limits WHERE key LIKE :pattern`, {
+      replacements: { pattern: `%${who}%` },
+    });
     expect(leaks).toEqual([{ n: 0 }]);
   });
 
@@ -58,7 +74,9 @@ describe('sign-in throttle (counted in PostgreSQL before the password check)', (
 
   it('limits one client address across many accounts (30 attempts a window)', async () => {
     const from = `addr-${unique()}`;
-    const verdicts = await Promise.all(Array.from({ length: 35 }, () => admitSignIn(attempt(email(), { address: from }))));
+    const verdicts = await Promise.all(
+      Array.from({ length: 35 }, () => admitSignIn(attempt(email(), { address: from }))),
+    );
     expect(verdicts.filter((v) => v.allowed)).toHaveLength(30);
   });
 });

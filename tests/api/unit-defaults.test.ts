@@ -14,9 +14,15 @@ describe('new projects and lines take the defaults of their unit system', () => 
   });
 
   const newLine = (name: string) =>
-    call(projectLines.POST, { method: 'POST', path: '/api/x', params: { projectId: f.projectId }, body: { name, routeId: f.lineRouteId }, userId: f.users.designer.id });
+    call(projectLines.POST, {
+      method: 'POST',
+      path: '/api/x',
+      params: { projectId: f.projectId },
+      body: { name, routeId: f.lineRouteId },
+      userId: f.users.designer.id,
+    });
 
-  it('a line of a US project starts on ASTM pipe with 2.5 ft of cover; of a metric project on ISO pipe with the core\'s cover', async () => {
+  it("a line of a US project starts on ASTM pipe with 2.5 ft of cover; of a metric project on ISO pipe with the core's cover", async () => {
     await models().Project.update({ unitSystem: 'us' }, { where: { id: f.projectId } });
     const us = await newLine('US line');
     await models().Project.update({ unitSystem: 'metric' }, { where: { id: f.projectId } });
@@ -31,7 +37,13 @@ describe('new projects and lines take the defaults of their unit system', () => 
 
   it('a new US project writes decimals with a point; a metric one follows each browser until set', async () => {
     const make = (unitSystem: 'us' | 'metric') =>
-      call(createProject, { method: 'POST', path: '/api/x', params: { teamId: f.teamId }, body: { name: `New ${unitSystem} project`, description: '', unitSystem, siteNotes: '' }, userId: f.users.designer.id });
+      call(createProject, {
+        method: 'POST',
+        path: '/api/x',
+        params: { teamId: f.teamId },
+        body: { name: `New ${unitSystem} project`, description: '', unitSystem, siteNotes: '' },
+        userId: f.users.designer.id,
+      });
     const us = await make('us');
     const metric = await make('metric');
     expect(us.status).toBe(201);

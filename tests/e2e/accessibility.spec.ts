@@ -6,7 +6,9 @@ const PROJECT = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001';
 const DEMO_LINE = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a4001';
 
 async function firstLinkTo(page: Page, pattern: RegExp): Promise<string> {
-  const hrefs = await page.locator('a[href]').evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
+  const hrefs = await page
+    .locator('a[href]')
+    .evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
   const href = hrefs.find((candidate) => pattern.test(candidate));
   expect(href, `a link matching ${pattern}`).toBeTruthy();
   return href as string;
@@ -22,15 +24,21 @@ for (const path of SIGNED_OUT_PAGES) {
   });
 }
 
-test('no serious accessibility findings on any page an owner reaches, and a skip link leads to the content', async ({ page }) => {
+test('no serious accessibility findings on any page an owner reaches, and a skip link leads to the content', async ({
+  page,
+}) => {
   test.setTimeout(240_000);
   await signIn(page, 'owner@example.test');
 
   await page.goto(`/projects/${PROJECT}/routes`);
   const routePage = await firstLinkTo(page, new RegExp(`/projects/${PROJECT}/routes/[0-9a-f-]{36}$`));
   await page.goto(`/projects/${PROJECT}/reviews`);
-  const revisionLinks = await page.locator('a[href]').evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
-  const revisionPage = revisionLinks.find((href) => new RegExp(`/projects/${PROJECT}/reviews/[0-9a-f-]{36}$`).test(href));
+  const revisionLinks = await page
+    .locator('a[href]')
+    .evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
+  const revisionPage = revisionLinks.find((href) =>
+    new RegExp(`/projects/${PROJECT}/reviews/[0-9a-f-]{36}$`).test(href),
+  );
 
   const pages = [
     '/projects',

@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 import { signIn, watchConsole } from './fixtures';
 import { waitForMail } from './mail';
 
-test('a newcomer signs up, confirms the address from the mail, signs in, creates a project and finds it in the table', async ({ page }) => {
+test('a newcomer signs up, confirms the address from the mail, signs in, creates a project and finds it in the table', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   const email = `newcomer-${Date.now()}@example.test`;
   const password = 'a long passphrase for the spring';
@@ -27,7 +29,9 @@ test('a newcomer signs up, confirms the address from the mail, signs in, creates
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('not the passphrase');
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page.getByRole('alert').filter({ hasText: 'do not match' })).toHaveText('That e-mail and password do not match an account.');
+  await expect(page.getByRole('alert').filter({ hasText: 'do not match' })).toHaveText(
+    'That e-mail and password do not match an account.',
+  );
 
   await signIn(page, email, password);
   await expect(page.getByText("Water systems of Wren Alder's team.")).toBeVisible();

@@ -23,13 +23,21 @@ async function removeLine(page: Page, id: string) {
   expect([204, 404]).toContain(res.status());
 }
 
-test('lines are duplicated and deleted from the list and the line page; the dialog says what goes and gives focus back', async ({ page }) => {
+test('lines are duplicated and deleted from the list and the line page; the dialog says what goes and gives focus back', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await page.goto(`/projects/${PROJECT}/lines`);
   const rows = page.getByTestId('line-row').filter({ visible: true });
-  await rows.filter({ hasText: 'Spring box to house, PN 16 option' }).first().getByRole('button', { name: 'Duplicate Spring box to house, PN 16 option' }).click();
-  await expect(page.getByRole('status').filter({ hasText: 'as “Spring box to house, PN 16 option (copy)”' })).toBeVisible();
+  await rows
+    .filter({ hasText: 'Spring box to house, PN 16 option' })
+    .first()
+    .getByRole('button', { name: 'Duplicate Spring box to house, PN 16 option' })
+    .click();
+  await expect(
+    page.getByRole('status').filter({ hasText: 'as “Spring box to house, PN 16 option (copy)”' }),
+  ).toBeVisible();
   const copyRow = rows.filter({ hasText: 'PN 16 option (copy)' });
   await expect(copyRow).toHaveCount(1);
 
@@ -51,9 +59,19 @@ test('lines are duplicated and deleted from the list and the line page; the dial
   await del.click();
   await dialog.getByRole('button', { name: 'Delete line' }).click();
   await expect(copyRow).toHaveCount(0);
-  await expect(page.getByRole('status').filter({ hasText: 'Deleted “Spring box to house, PN 16 option (copy)”.' })).toBeVisible();
+  await expect(
+    page.getByRole('status').filter({ hasText: 'Deleted “Spring box to house, PN 16 option (copy)”.' }),
+  ).toBeVisible();
   // Focus comes back once the dialog has closed and the list re-rendered: wait for it rather than read it once.
-  await expect.poll(() => page.evaluate(() => document.activeElement !== document.body && document.activeElement?.closest('table, [role="region"], section, div') !== null)).toBe(true);
+  await expect
+    .poll(() =>
+      page.evaluate(
+        () =>
+          document.activeElement !== document.body &&
+          document.activeElement?.closest('table, [role="region"], section, div') !== null,
+      ),
+    )
+    .toBe(true);
 
   // From the line page: duplicate opens the copy; delete returns to the list.
   await page.goto(`/projects/${PROJECT}/lines/${PN16_LINE}`);
@@ -67,11 +85,20 @@ test('lines are duplicated and deleted from the list and the line page; the dial
   expect(errors).toEqual([]);
 });
 
-test('switching the material keeps the nearest bore; design flow saves nothing untyped; a refused value is never shown as saved', async ({ page }) => {
+test('switching the material keeps the nearest bore; design flow saves nothing untyped; a refused value is never shown as saved', async ({
+  page,
+}) => {
   await signIn(page, 'designer@example.test');
   const copy = await copyOfDemoLine(page, 'Edits spec line');
   try {
-    const found = await page.request.patch(`/api/lines/${copy.id}`, { data: { design: { ...(await (await page.request.get(`/api/lines/${copy.id}`)).json()).line.design, flow: { kind: 'find' } } } });
+    const found = await page.request.patch(`/api/lines/${copy.id}`, {
+      data: {
+        design: {
+          ...(await (await page.request.get(`/api/lines/${copy.id}`)).json()).line.design,
+          flow: { kind: 'find' },
+        },
+      },
+    });
     expect(found.ok()).toBe(true);
     await page.goto(`/projects/${PROJECT}/lines/${copy.id}`);
     const state = page.getByTestId('save-state').filter({ visible: true });
@@ -117,7 +144,7 @@ test('switching the material keeps the nearest bore; design flow saves nothing u
   }
 });
 
-test('a save conflict with one\'s own other tab says so and offers a reload', async ({ page, context }) => {
+test("a save conflict with one's own other tab says so and offers a reload", async ({ page, context }) => {
   await signIn(page, 'designer@example.test');
   const copy = await copyOfDemoLine(page, 'Two tabs line');
   try {
@@ -129,7 +156,9 @@ test('a save conflict with one\'s own other tab says so and offers a reload', as
     await flowIn(page).fill('0.7');
     await flowIn(page).press('Enter');
     // This tab's save is in (revision 2) before the other tab, still on revision 1, saves.
-    await expect.poll(async () => (await (await page.request.get(`/api/lines/${copy.id}`)).json()).line.revision).toBe(2);
+    await expect
+      .poll(async () => (await (await page.request.get(`/api/lines/${copy.id}`)).json()).line.revision)
+      .toBe(2);
     await expect(page.getByTestId('save-state').filter({ visible: true })).toHaveAttribute('data-state', 'saved');
 
     await flowIn(other).fill('0.9');
@@ -166,14 +195,18 @@ test('unsaved route-table edits survive a visit to another section', async ({ pa
   await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Survey routes' }).click();
   await page.getByRole('link', { name: 'Spring line design profile' }).first().click();
   await expect(page.getByText(/^Unsaved changes \(kept from before you left this page\)$/)).toBeVisible();
-  await expect(page.getByLabel('Elevation of point 2', { exact: true }).filter({ visible: true })).toHaveValue(/^123[.,]45$/);
+  await expect(page.getByLabel('Elevation of point 2', { exact: true }).filter({ visible: true })).toHaveValue(
+    /^123[.,]45$/,
+  );
 
   // Removing a row from the keyboard keeps focus in place: on the delete button of the row that moved up.
   const fourth = await page.getByLabel('Elevation of point 4', { exact: true }).filter({ visible: true }).inputValue();
   await page.getByRole('button', { name: 'Delete point 3', exact: true }).filter({ visible: true }).focus();
   await page.keyboard.press('Enter');
   await expect(page.getByLabel('Elevation of point 3', { exact: true }).filter({ visible: true })).toHaveValue(fourth);
-  await expect(page.getByRole('button', { name: 'Delete point 3', exact: true }).filter({ visible: true })).toBeFocused();
+  await expect(
+    page.getByRole('button', { name: 'Delete point 3', exact: true }).filter({ visible: true }),
+  ).toBeFocused();
 
   // Discarded, they are gone for good (nothing was saved).
   await page.getByRole('button', { name: 'Discard' }).click();
@@ -209,7 +242,11 @@ test('a new project leads on to importing its route', async ({ page }) => {
   await signIn(page, 'designer@example.test');
   const name = `Edits spec project ${Date.now()}`;
   await page.getByLabel('Name').first().fill(name);
-  await page.getByRole('button', { name: /Create|Start/ }).filter({ visible: true }).first().click();
+  await page
+    .getByRole('button', { name: /Create|Start/ })
+    .filter({ visible: true })
+    .first()
+    .click();
   const next = page.getByTestId('next-step');
   await expect(next).toContainText('Next: bring in the pipe route');
   await page.screenshot({ path: `${shots}/new-project-next-step.png` });

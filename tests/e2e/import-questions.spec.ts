@@ -6,7 +6,9 @@ import { signIn, watchConsole } from './fixtures';
 
 const SPRING_LINE = 'Kestrel Hollow spring line';
 
-/** A short phone walk logged with day-month dates (01.05.2026 could be either) and a ridge with GPS scatter (invented). */
+/**
+ * A short phone walk logged with day-month dates (01.05.2026 could be either) and a ridge with GPS scatter (invented).
+ */
 function ambiguousDatesCsv(): string {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'runnel-e2e-'));
   const file = path.join(dir, 'ridge-walk-dates.csv');
@@ -37,7 +39,9 @@ test('import asks the date order and the time zone, and offers smoothing for a G
 
   // Reading without answering stops with the question, naming the line.
   await page.getByRole('button', { name: 'Read the file with these settings' }).click();
-  await expect(page.getByText(/line 2, column “time”: “01\.05\.2026 07:00” could be day first or month first/)).toBeVisible();
+  await expect(
+    page.getByText(/line 2, column “time”: “01\.05\.2026 07:00” could be day first or month first/),
+  ).toBeVisible();
 
   await times.getByLabel('Day first (31.12.2024)').check();
   await expect(times.getByTestId('ask-date-order')).toHaveCount(0);

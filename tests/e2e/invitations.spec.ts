@@ -18,7 +18,10 @@ const stamp = Date.now();
 const surveyor = `field-surveyor-${stamp}@example.test`;
 const password = 'walked the line at first light';
 
-test('an owner invites a surveyor, who joins from the mailed link with that role; the owner is told', async ({ page, browser }) => {
+test('an owner invites a surveyor, who joins from the mailed link with that role; the owner is told', async ({
+  page,
+  browser,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'owner@example.test');
   await invite(page, surveyor, 'Surveyor');
@@ -71,15 +74,26 @@ test('a withdrawn invitation and an expired one are refused', async ({ page }) =
   await expireInvitation(late);
 
   await page.goto(withdrawnMail.link);
-  await expect(page.getByRole('alert').filter({ hasText: 'This invitation was withdrawn by the team owner.' })).toBeVisible();
+  await expect(
+    page.getByRole('alert').filter({ hasText: 'This invitation was withdrawn by the team owner.' }),
+  ).toBeVisible();
   await page.goto(lateMail.link);
-  await expect(page.getByRole('alert').filter({ hasText: 'This invitation has expired. Ask the team owner to invite you again.' })).toBeVisible();
+  await expect(
+    page.getByRole('alert').filter({ hasText: 'This invitation has expired. Ask the team owner to invite you again.' }),
+  ).toBeVisible();
   await page.goto('/invitations/accept?token=not-a-real-token-at-all-0000');
-  await expect(page.getByRole('alert').filter({ hasText: 'This invitation link is not valid. Check that the whole link was copied.' })).toBeVisible();
+  await expect(
+    page
+      .getByRole('alert')
+      .filter({ hasText: 'This invitation link is not valid. Check that the whole link was copied.' }),
+  ).toBeVisible();
   expect(errors).toEqual([]);
 });
 
-test('password reset by mail: the new password works, the old one and other sessions do not', async ({ page, browser }) => {
+test('password reset by mail: the new password works, the old one and other sessions do not', async ({
+  page,
+  browser,
+}) => {
   const errors = watchConsole(page);
   // Another device stays signed in with the old password until the reset.
   const other = await browser.newContext();

@@ -12,7 +12,9 @@ async function figureIn(readout: Locator, unit: string): Promise<number> {
   return Number(match[1].replace(/,/g, ''));
 }
 
-test('a designer enters a ram site, sees litres a day and the tank fill time, and logs a commissioning reading', async ({ page }) => {
+test('a designer enters a ram site, sees litres a day and the tank fill time, and logs a commissioning reading', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   const name = `Creek ram trial ${Date.now()}`;
@@ -50,7 +52,8 @@ test('a designer enters a ram site, sees litres a day and the tank fill time, an
 
   const answer = page.getByTestId('ram-answer');
   await expect(answer).toContainText('Delivered a day');
-  // A small creek ram lifting 10.7 m through 107 m of pipe: about 3,700 L a day, 1,250 L in about 8 h (common practice, no source).
+  // A small creek ram lifting 10.7 m through 107 m of pipe: about 3,700 L a day, 1,250 L in about 8 h (common practice,
+  // no source).
   const litresPerDay = await figureIn(answer, 'L/day');
   expect(litresPerDay).toBeGreaterThan(3000);
   expect(litresPerDay).toBeLessThan(4700);
@@ -91,13 +94,23 @@ test('a reviewer sees the lift figures without edit controls, and a direct write
   await expect(page.getByRole('checkbox')).toHaveCount(0);
 
   const put = await page.request.put(`/api/projects/${BRACKWATER}/ram-sites/${WEIR_RAM}`, {
-    data: { name: 'Taken over', driveFlowM3s: 0.001, fallM: 2, liftM: 10, drivePipe: { lengthM: 14, insideDiameterM: 0.035, material: 'steel' }, deliveryPipe: { lengthM: 100, pipeId: 'pe-d2239-sidr9-1in' } },
+    data: {
+      name: 'Taken over',
+      driveFlowM3s: 0.001,
+      fallM: 2,
+      liftM: 10,
+      drivePipe: { lengthM: 14, insideDiameterM: 0.035, material: 'steel' },
+      deliveryPipe: { lengthM: 100, pipeId: 'pe-d2239-sidr9-1in' },
+    },
   });
   expect(put.status()).toBe(403);
   expect((await put.json()).error.code).toBe('forbidden');
-  const reading = await page.request.post(`/api/projects/${BRACKWATER}/sources/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a3001/yield-readings`, {
-    data: { measuredOn: '2026-09-01', flowM3s: 0.01 },
-  });
+  const reading = await page.request.post(
+    `/api/projects/${BRACKWATER}/sources/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a3001/yield-readings`,
+    {
+      data: { measuredOn: '2026-09-01', flowM3s: 0.01 },
+    },
+  );
   expect(reading.status()).toBe(403);
   await page.reload();
   await expect(page.getByRole('heading', { name: 'Weir ram' })).toBeVisible();
@@ -112,9 +125,13 @@ test('a lift below the fall is refused beside the field and the site stays as it
   const form = page.getByRole('form', { name: 'Edit Weir ram' });
   await expect(form.getByLabel('Lift, pump to delivery outlet (ft)')).toHaveValue('70');
   await form.getByLabel('Lift, pump to delivery outlet (ft)').fill('3');
-  await expect(form.getByTestId('ram-preview')).toContainText('Cannot plan yet: Lift, pump to delivery outlet must be above the fall');
+  await expect(form.getByTestId('ram-preview')).toContainText(
+    'Cannot plan yet: Lift, pump to delivery outlet must be above the fall',
+  );
   await form.getByRole('button', { name: 'Save ram site' }).click();
-  await expect(form.getByRole('alert').filter({ hasText: 'Lift, pump to delivery outlet must be above the fall' })).toBeVisible();
+  await expect(
+    form.getByRole('alert').filter({ hasText: 'Lift, pump to delivery outlet must be above the fall' }),
+  ).toBeVisible();
   await page.reload();
   // Heads print with one decimal on every screen (lib/units quantity table).
   await expect(page.getByRole('region', { name: 'Ram pump' }).getByText('Fall 6.0 ft, lift 70.0 ft')).toBeVisible();

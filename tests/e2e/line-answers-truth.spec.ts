@@ -18,16 +18,23 @@ test('the flow card never shows a flow the line cannot carry, and names the fric
   const lineId = page.url().split('/').pop() as string;
   try {
     // Ask for a fifth more than this gravity line carries (about 2 L/s).
-    const patch = await page.request.patch(`/api/lines/${lineId}`, { data: { design: { ...line.design, devices: [], flow: { kind: 'design', flowM3s: 0.0024 } } } });
+    const patch = await page.request.patch(`/api/lines/${lineId}`, {
+      data: { design: { ...line.design, devices: [], flow: { kind: 'design', flowM3s: 0.0024 } } },
+    });
     expect(patch.ok()).toBe(true);
     await page.goto(`/projects/${PROJECT}/lines/${lineId}`);
     const answers = page.getByTestId('line-answers').filter({ visible: true });
     await expect(answers).toContainText('Flow delivered');
     await expect(answers).toContainText(/at most [\d.,]+ L\/s/);
     await expect(answers).toContainText('is more than this line carries by gravity');
-    await expect(answers.getByTestId('friction-basis')).toContainText('Darcy-Weisbach with the Colebrook friction factor');
+    await expect(answers.getByTestId('friction-basis')).toContainText(
+      'Darcy-Weisbach with the Colebrook friction factor',
+    );
     // One cause, one danger: the outlet item carries the pipe change that works.
-    const short = page.getByTestId('warnings').filter({ visible: true }).locator('li[data-code="residual-below-target"]');
+    const short = page
+      .getByTestId('warnings')
+      .filter({ visible: true })
+      .locator('li[data-code="residual-below-target"]');
     await expect(short).toHaveCount(1);
     await expect(short.getByTestId('apply-fix')).toContainText(/^Use .+ on stretch \d/);
     await page.screenshot({ path: test.info().outputPath('line-over-capacity.png'), fullPage: true });
@@ -37,7 +44,9 @@ test('the flow card never shows a flow the line cannot carry, and names the fric
   expect(errors).toEqual([]);
 });
 
-test('the demo\'s walked phone route lists a short "What to fix": the smooth ground\'s items and one it names as within the scatter', async ({ page }) => {
+test('the demo\'s walked phone route lists a short "What to fix": the smooth ground\'s items and one it names as within the scatter', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   // Larkspur Gill, Hobb spring to the village tank (seeders/20261202600001-demo-walked-route.cjs); the

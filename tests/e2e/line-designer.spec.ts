@@ -12,11 +12,15 @@ async function resetDemoLine(page: Page) {
   const res = await page.request.get(`/api/lines/${DEMO_LINE}`);
   expect(res.ok()).toBe(true);
   const { line } = await res.json();
-  const patch = await page.request.patch(`/api/lines/${DEMO_LINE}`, { data: { design: { ...line.design, devices: [] } } });
+  const patch = await page.request.patch(`/api/lines/${DEMO_LINE}`, {
+    data: { design: { ...line.design, devices: [] } },
+  });
   expect(patch.ok()).toBe(true);
 }
 
-test('a designer sees the over-pressure, applies the suggested break-pressure tank, and downloads the report', async ({ page }) => {
+test('a designer sees the over-pressure, applies the suggested break-pressure tank, and downloads the report', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await resetDemoLine(page);
@@ -36,14 +40,19 @@ test('a designer sees the over-pressure, applies the suggested break-pressure ta
 
   await overPressure.getByTestId('apply-fix').click();
   await expect(page.getByTestId('warnings').locator('li[data-code="static-over-rating"]')).toHaveCount(0);
-  await expect(page.getByTestId('profile-chart').locator('[data-layer="devices"] [data-kind="break-pressure-tank"]')).toHaveCount(1);
+  await expect(
+    page.getByTestId('profile-chart').locator('[data-layer="devices"] [data-kind="break-pressure-tank"]'),
+  ).toHaveCount(1);
   await expect(page.getByTestId('save-state')).toHaveAttribute('data-state', 'saved');
 
   // The saved line now carries the tank.
   const saved = await (await page.request.get(`/api/lines/${DEMO_LINE}`)).json();
   expect(saved.line.design.devices.map((d: { kind: string }) => d.kind)).toEqual(['break-pressure-tank']);
 
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'PDF report' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('link', { name: 'PDF report' }).click(),
+  ]);
   // The working copy is not a revision: its report says so in its name (and is marked not for construction).
   expect(download.suggestedFilename()).toBe('spring-box-to-house-working-copy.pdf');
   const file = await download.path();
@@ -86,16 +95,23 @@ test('a reviewer can view and export the working copy but not change it', async 
   await expect(page.getByLabel('Water level (m)')).toBeDisabled();
 
   // The exaggeration the screen prints is the one both exports draw and print: first as found (auto), then set to ×10.
-  const screenWords = () => page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]').textContent();
+  const screenWords = () =>
+    page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]').textContent();
   const exportedWords = async () => {
-    const [svg] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Profile as SVG' }).click()]);
+    const [svg] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Profile as SVG' }).click(),
+    ]);
     const svgText = fs.readFileSync((await svg.path())!, 'utf8');
     expect(svgText).toContain('<svg xmlns="http://www.w3.org/2000/svg"');
     expect(svgText).toContain('data-layer="grade"');
     return /data-role="exaggeration"[^>]*>([^<]*)</.exec(svgText)?.[1];
   };
   const pdfText = async () => {
-    const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'PDF report' }).click()]);
+    const [pdf] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'PDF report' }).click(),
+    ]);
     const bytes = fs.readFileSync((await pdf.path())!);
     expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
     const parser = new PDFParse({ data: new Uint8Array(bytes) });
@@ -108,11 +124,18 @@ test('a reviewer can view and export the working copy but not change it', async 
   expect(await exportedWords()).toBe(auto);
   expect(await pdfText()).toContain(auto!);
   await page.getByLabel('Vertical exaggeration').filter({ visible: true }).selectOption('10');
-  await expect(page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]')).toHaveText('Vertical exaggeration ×10');
+  await expect(
+    page.getByTestId('profile-chart').filter({ visible: true }).locator('[data-role="exaggeration"]'),
+  ).toHaveText('Vertical exaggeration ×10');
   expect(await exportedWords()).toBe('Vertical exaggeration ×10');
-  expect(await page.getByRole('link', { name: 'PDF report' }).getAttribute('href')).toBe(`/api/lines/${DEMO_LINE}/report?exaggeration=10`);
+  expect(await page.getByRole('link', { name: 'PDF report' }).getAttribute('href')).toBe(
+    `/api/lines/${DEMO_LINE}/report?exaggeration=10`,
+  );
   expect(await pdfText()).toContain('Vertical exaggeration ×10');
-  await page.getByTestId('profile-chart').filter({ visible: true }).screenshot({ path: 'test-results/line-exaggeration-x10.png' });
+  await page
+    .getByTestId('profile-chart')
+    .filter({ visible: true })
+    .screenshot({ path: 'test-results/line-exaggeration-x10.png' });
 
   const res = await page.request.patch(`/api/lines/${DEMO_LINE}`, { data: { notes: 'Taken over' } });
   expect(res.status()).toBe(403);

@@ -3,7 +3,13 @@ import pg from 'pg';
 /** The fake mail server's reading page (scripts/fakes/mail.mjs, maildev's REST list). */
 const MAIL_API = `http://127.0.0.1:${process.env.RUNNEL_MAIL_WEB_PORT ?? 1081}/api/email`;
 
-interface FakeMail { id: string; subject: string; text: string; to: { address: string }[]; time: string }
+interface FakeMail {
+  id: string;
+  subject: string;
+  text: string;
+  to: { address: string }[];
+  time: string;
+}
 
 async function mailTo(address: string): Promise<FakeMail[]> {
   const res = await fetch(MAIL_API);
@@ -16,7 +22,12 @@ async function mailTo(address: string): Promise<FakeMail[]> {
  * Waits for the `nth` message (1-based) to `address` whose subject matches, as the job queue
  * delivers it, and returns it with the first token link in its text and all its links.
  */
-export async function waitForMail(address: string, subject: RegExp, nth = 1, timeoutMs = 20_000): Promise<{ subject: string; text: string; link: string; links: string[] }> {
+export async function waitForMail(
+  address: string,
+  subject: RegExp,
+  nth = 1,
+  timeoutMs = 20_000,
+): Promise<{ subject: string; text: string; link: string; links: string[] }> {
   const until = Date.now() + timeoutMs;
   for (;;) {
     const found = (await mailTo(address)).filter((m) => subject.test(m.subject));
@@ -25,8 +36,15 @@ export async function waitForMail(address: string, subject: RegExp, nth = 1, tim
       const link = /https?:\/\/\S+token=[A-Za-z0-9_-]+/.exec(mail.text)?.[0];
       // The path and query of the mailed link (the test's own server answers it), or '' when none.
       // Every link in the text as a path and query, in order (a notification's "Open it" link first).
-      const links = [...mail.text.matchAll(/https?:\/\/\S+/g)].map(([url]) => new URL(url).pathname + new URL(url).search);
-      return { subject: mail.subject, text: mail.text, link: link ? new URL(link).pathname + new URL(link).search : '', links };
+      const links = [...mail.text.matchAll(/https?:\/\/\S+/g)].map(
+        ([url]) => new URL(url).pathname + new URL(url).search,
+      );
+      return {
+        subject: mail.subject,
+        text: mail.text,
+        link: link ? new URL(link).pathname + new URL(link).search : '',
+        links,
+      };
     }
     if (Date.now() > until) throw new Error(`no mail "${subject}" #${nth} to ${address} after ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 250));

@@ -7,7 +7,9 @@ const DISTRIBUTION_MAIN = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7b0012';
 /** Presses save and waits for the PUT and the page's refetch of the network after it. */
 async function saveAndReload(page: Page, press: () => Promise<void>) {
   const put = page.waitForResponse((r) => r.url().includes('/network/nodes/') && r.request().method() === 'PUT');
-  const refetch = page.waitForResponse((r) => new URL(r.url()).pathname.endsWith('/network') && r.request().method() === 'GET');
+  const refetch = page.waitForResponse(
+    (r) => new URL(r.url()).pathname.endsWith('/network') && r.request().method() === 'GET',
+  );
   await press();
   expect((await put).status()).toBe(200);
   await refetch;
@@ -15,7 +17,9 @@ async function saveAndReload(page: Page, press: () => Promise<void>) {
 
 const visible = (page: Page) => page.locator('main').filter({ visible: true });
 
-test('a designer edits the team price list: a bad cost is refused beside its box, a good one is saved, then removed again', async ({ page }) => {
+test('a designer edits the team price list: a bad cost is refused beside its box, a good one is saved, then removed again', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await page.goto('/team/prices');
@@ -52,7 +56,9 @@ test('a designer edits the team price list: a bad cost is refused beside its box
   expect(errors).toEqual([]);
 });
 
-test('the village network: a 24-hour day on screen, a tap stand edited, least-cost sizes applied and shown on the line', async ({ page }) => {
+test('the village network: a 24-hour day on screen, a tap stand edited, least-cost sizes applied and shown on the line', async ({
+  page,
+}) => {
   test.setTimeout(240_000);
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
@@ -84,7 +90,9 @@ test('the village network: a 24-hour day on screen, a tap stand edited, least-co
   // Saved; then the saved record comes back from the server and the form is drawn again from it.
   await saveAndReload(page, () => edit.getByRole('button', { name: 'Save Tap stand 8' }).click());
   await expect(page.getByTestId('part-as-saved')).toContainText(/wants 7(\.0+)? m/);
-  await expect(page.getByRole('form', { name: 'Edit Tap stand 8' }).getByLabel('Residual head wanted (m)')).toHaveValue('7');
+  await expect(page.getByRole('form', { name: 'Edit Tap stand 8' }).getByLabel('Residual head wanted (m)')).toHaveValue(
+    '7',
+  );
   const again = page.getByRole('form', { name: 'Edit Tap stand 8' });
   await again.getByLabel('Residual head wanted (m)').fill('5');
   await again.getByLabel('Residual head wanted (m)').press('Enter');

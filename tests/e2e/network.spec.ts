@@ -10,13 +10,15 @@ const ADDED = /^Orchard (tee|trough) \d+$/;
 async function removeLeftovers(page: Page) {
   const response = await page.request.get(`/api/projects/${KESTREL}/network`);
   expect(response.ok()).toBe(true);
-  const { network } = await response.json() as { network: { records: { nodes: { id: string; name: string }[] } } };
+  const { network } = (await response.json()) as { network: { records: { nodes: { id: string; name: string }[] } } };
   for (const node of network.records.nodes.filter((n) => ADDED.test(n.name))) {
     expect((await page.request.delete(`/api/projects/${KESTREL}/network/nodes/${node.id}`)).ok()).toBe(true);
   }
 }
 
-test('a designer builds a branched system with a take-off, solves it, sizes it, and sees sizes on the schematic and flows on the line', async ({ page }) => {
+test('a designer builds a branched system with a take-off, solves it, sizes it, and sees sizes on the schematic and flows on the line', async ({
+  page,
+}) => {
   test.setTimeout(180_000);
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
@@ -60,10 +62,16 @@ test('a designer builds a branched system with a take-off, solves it, sizes it, 
   expect(await runNetworkAndWait(page, 'Solve at the peak hour', 60_000)).toBe('done');
   await expect(page.getByTestId('solve-summary')).toContainText('Converged');
   // The result says which friction law it was solved with: the line analysis's own.
-  await expect(page.getByTestId('solve-friction')).toContainText('Friction by Darcy-Weisbach with the Colebrook friction factor');
-  const branchLabel = page.locator('[data-scene="network"] [data-link-label]').filter({ hasText: `Orchard branch ${stamp}` });
+  await expect(page.getByTestId('solve-friction')).toContainText(
+    'Friction by Darcy-Weisbach with the Colebrook friction factor',
+  );
+  const branchLabel = page
+    .locator('[data-scene="network"] [data-link-label]')
+    .filter({ hasText: `Orchard branch ${stamp}` });
   await expect(branchLabel).toContainText('0.30 L/s →');
-  await expect(page.locator('[data-scene="network"] [data-node-label]').filter({ hasText: trough })).toContainText('head');
+  await expect(page.locator('[data-scene="network"] [data-node-label]').filter({ hasText: trough })).toContainText(
+    'head',
+  );
 
   // Size for least cost from the team's price list: the chosen sizes are drawn on the schematic.
   expect(await runNetworkAndWait(page, 'Size for least cost', 120_000)).toBe('done');

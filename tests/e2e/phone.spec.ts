@@ -18,10 +18,16 @@ async function overflow(page: Page): Promise<{ pageWidth: number; viewport: numb
       let clipped = false;
       while (inside && inside !== document.body) {
         const style = getComputedStyle(inside);
-        if (/(auto|scroll|hidden)/.test(style.overflowX)) { clipped = true; break; }
+        if (/(auto|scroll|hidden)/.test(style.overflowX)) {
+          clipped = true;
+          break;
+        }
         inside = inside.parentElement;
       }
-      if (!clipped) widest.push(`${element.tagName.toLowerCase()}${element.id ? `#${element.id}` : ''}.${String(element.className).slice(0, 60)} → ${Math.round(box.right)} px`);
+      if (!clipped)
+        widest.push(
+          `${element.tagName.toLowerCase()}${element.id ? `#${element.id}` : ''}.${String(element.className).slice(0, 60)} → ${Math.round(box.right)} px`,
+        );
     }
     return { pageWidth: document.documentElement.scrollWidth, viewport, widest: widest.slice(0, 5) };
   });
@@ -31,7 +37,9 @@ test('the route, line, lift and network pages fit a 390 px phone: nothing widens
   test.setTimeout(180_000);
   await signIn(page, 'designer@example.test');
   await page.goto(`/projects/${PROJECT}/routes`);
-  const hrefs = await page.locator('a[href]').evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
+  const hrefs = await page
+    .locator('a[href]')
+    .evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
   const routePage = hrefs.find((href) => new RegExp(`/projects/${PROJECT}/routes/[0-9a-f-]{36}$`).test(href));
   expect(routePage).toBeTruthy();
 

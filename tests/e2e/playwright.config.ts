@@ -11,7 +11,11 @@ export default defineConfig({
   // Desktop for every spec; the phone project (390 px wide, touch) runs the phone-width checks.
   projects: [
     { name: 'desktop', testIgnore: '**/phone.spec.ts' },
-    { name: 'phone', testMatch: '**/phone.spec.ts', use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true } },
+    {
+      name: 'phone',
+      testMatch: '**/phone.spec.ts',
+      use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true },
+    },
   ],
   outputDir: path.join(root, 'test-results'),
   fullyParallel: false,
@@ -26,7 +30,16 @@ export default defineConfig({
     baseURL: process.env.E2E_BASE_URL ?? `http://127.0.0.1:${port}`,
     launchOptions: {
       executablePath: '/usr/bin/chromium',
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     },
     trace: 'off',
     screenshot: 'only-on-failure',

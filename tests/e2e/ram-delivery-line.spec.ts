@@ -7,16 +7,26 @@ const DELIVERY_LINE = '6f1c1e52-3a57-4c38-9b0e-0d5b1c7a8002';
 const FT = 0.3048;
 const US_GAL = 0.003785411784;
 
-/** Puts the delivery line back as seeded (typed pump heads, a design flow, no winter choice), whatever an earlier run left. */
+/**
+ * Puts the delivery line back as seeded (typed pump heads, a design flow, no winter choice), whatever an earlier run
+ * left.
+ */
 async function resetDeliveryLine(page: Page) {
   const { line } = await (await page.request.get(`/api/lines/${DELIVERY_LINE}`)).json();
-  const design = { ...line.design, start: { kind: 'pump', outletHeadM: 172.5 }, flow: { kind: 'design', flowM3s: (0.75 * US_GAL) / 60 }, settings: { defaultCoverM: 3 * FT, waterTemperatureC: 10 } };
+  const design = {
+    ...line.design,
+    start: { kind: 'pump', outletHeadM: 172.5 },
+    flow: { kind: 'design', flowM3s: (0.75 * US_GAL) / 60 },
+    settings: { defaultCoverM: 3 * FT, waterTemperatureC: 10 },
+  };
   delete design.winter;
   const patch = await page.request.patch(`/api/lines/${DELIVERY_LINE}`, { data: { design } });
   expect(patch.ok()).toBe(true);
 }
 
-test('a designer starts the Brackwater delivery line at the Weir ram and sees the pump head and delivered flow, then drains it for winter', async ({ page }) => {
+test('a designer starts the Brackwater delivery line at the Weir ram and sees the pump head and delivered flow, then drains it for winter', async ({
+  page,
+}) => {
   const errors = watchConsole(page);
   await signIn(page, 'designer@example.test');
   await resetDeliveryLine(page);
@@ -36,12 +46,14 @@ test('a designer starts the Brackwater delivery line at the Weir ram and sees th
   await expect(feed).toContainText('Weir ram');
   // Head at the pump: the ram's working head in feet; delivered per day in US gallons (the project is US customary).
   await expect(feed).toContainText(`${(weir.workingHeadM / FT).toFixed(1)} ft`);
-  const perDay = Math.round(weir.deliveredFlowM3s * 86_400 / US_GAL).toLocaleString('en-US');
+  const perDay = Math.round((weir.deliveredFlowM3s * 86_400) / US_GAL).toLocaleString('en-US');
   await expect(feed).toContainText(`${perDay} US gal/day`);
   await expect(feed).toContainText('Peak head at the pump, line shut');
   await expect(feed).toContainText('licensed practice');
   // The line now runs at what the ram delivers.
-  await expect(page.getByTestId('line-answers')).toContainText(`${(weir.deliveredFlowM3s / (US_GAL / 60)).toFixed(1)} US gpm`);
+  await expect(page.getByTestId('line-answers')).toContainText(
+    `${(weir.deliveredFlowM3s / (US_GAL / 60)).toFixed(1)} US gpm`,
+  );
   await expect(page.getByTestId('line-answers')).toContainText('what Weir ram delivers');
   await expect(page.getByTestId('save-state')).toHaveAttribute('data-state', 'saved');
   const saved = (await (await page.request.get(`/api/lines/${DELIVERY_LINE}`)).json()).line;

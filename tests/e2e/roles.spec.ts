@@ -51,7 +51,10 @@ test('signing out ends the session token, even if someone kept a copy of it', as
   await signIn(page, 'reviewer@example.test');
   const token = (await page.context().cookies()).find((c) => c.name === 'next-auth.session-token');
   expect(token).toBeDefined();
-  const copy = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { cookie: `next-auth.session-token=${token!.value}` } });
+  const copy = await playwright.request.newContext({
+    baseURL,
+    extraHTTPHeaders: { cookie: `next-auth.session-token=${token!.value}` },
+  });
   expect((await copy.get('/api/teams')).status()).toBe(200);
 
   await page.getByRole('button', { name: 'Account menu' }).click();

@@ -56,7 +56,9 @@ test('a surveyor imports a GPX track and sees its profile and features', async (
   await expect(preview.getByText('track segments were joined')).toBeVisible();
   await preview.getByRole('button', { name: 'Save route' }).click();
   await expect(page.getByRole('heading', { name: 'Alder Spring walk (GPX)' })).toBeVisible();
-  await expect(page.getByRole('img', { name: 'Ground profile of Alder Spring walk (GPX)' }).locator('path[data-series="cleaned"]')).toHaveCount(1);
+  await expect(
+    page.getByRole('img', { name: 'Ground profile of Alder Spring walk (GPX)' }).locator('path[data-series="cleaned"]'),
+  ).toHaveCount(1);
   await expect(page.getByText('Along the route: Alder Spring box at')).toBeVisible();
   const download = page.getByRole('link', { name: /Download original \(walked-route\.gpx/ });
   const res = await page.request.get((await download.getAttribute('href'))!);
@@ -64,7 +66,9 @@ test('a surveyor imports a GPX track and sees its profile and features', async (
   expect(errors).toEqual([]);
 });
 
-test('a surveyor maps the columns of a long CSV, watches the progress, fixes a spike and sees the profile', async ({ page }) => {
+test('a surveyor maps the columns of a long CSV, watches the progress, fixes a spike and sees the profile', async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   const errors = watchConsole(page);
   await signIn(page, 'surveyor@example.test');
@@ -75,7 +79,9 @@ test('a surveyor maps the columns of a long CSV, watches the progress, fixes a s
   await expect(page.getByLabel('Latitude *')).toHaveValue('1');
   await expect(page.getByLabel('Time', { exact: true })).toHaveValue('0');
   await expect(page.getByLabel('Elevation or altitude *')).toHaveValue('');
-  await expect(page.getByRole('table', { name: 'First rows of the file' }).getByRole('cell', { name: 'spring box' })).toBeVisible();
+  await expect(
+    page.getByRole('table', { name: 'First rows of the file' }).getByRole('cell', { name: 'spring box' }),
+  ).toBeVisible();
   await page.getByLabel('Elevation or altitude *').selectOption({ label: '4 · GPS height (ft)' });
   await page.getByLabel('Name or note').selectOption({ label: '5 · note' });
   await page.getByRole('radio', { name: 'feet' }).check();
@@ -93,7 +99,8 @@ test('a surveyor maps the columns of a long CSV, watches the progress, fixes a s
   const reads: string[] = [];
   page.on('request', (request) => {
     const url = new URL(request.url());
-    if (request.method() === 'GET' && url.pathname.startsWith('/api/routes/')) reads.push(`${url.pathname}${url.search}`);
+    if (request.method() === 'GET' && url.pathname.startsWith('/api/routes/'))
+      reads.push(`${url.pathname}${url.search}`);
   });
   await page.getByRole('button', { name: 'Save route' }).click();
 
@@ -134,7 +141,9 @@ test('a reviewer sees routes but cannot import or change them, and direct reques
   await expect(page.getByRole('img', { name: 'Ground profile of Upper spring to house' })).toBeVisible();
   await expect(page.getByRole('alert').filter({ hasText: 'Heights from a consumer GPS' })).toBeVisible();
   await expect(page.locator('[data-proposal="38"]')).toContainText('Spike');
-  await expect(page.getByRole('button', { name: /Accept|Reject|Reverse|Split|Trim|Join|Delete|Save points|Add point/ })).toHaveCount(0);
+  await expect(
+    page.getByRole('button', { name: /Accept|Reject|Reverse|Split|Trim|Join|Delete|Save points|Add point/ }),
+  ).toHaveCount(0);
   await expect(page.getByRole('table', { name: 'Route points' }).getByRole('textbox')).toHaveCount(0);
 
   const projectId = page.url().split('/projects/')[1].split('/')[0];
@@ -145,13 +154,19 @@ test('a reviewer sees routes but cannot import or change them, and direct reques
 
   const upload = await page.request.post(`/api/projects/${projectId}/routes/import`, {
     multipart: {
-      file: { name: 'walk.gpx', mimeType: 'application/gpx+xml', buffer: readFileSync(path.join(FIXTURES, 'walked-route.gpx')) },
+      file: {
+        name: 'walk.gpx',
+        mimeType: 'application/gpx+xml',
+        buffer: readFileSync(path.join(FIXTURES, 'walked-route.gpx')),
+      },
       options: JSON.stringify({ format: 'gpx', name: 'Reviewer walk' }),
     },
   });
   expect(upload.status()).toBe(403);
   expect((await upload.json()).error.code).toBe('forbidden');
-  const decide = await page.request.post(`/api/routes/${routeId}/cleanup`, { data: { reject: [{ kind: 'grade-spike', index: 37, field: 'elevationM', from: 1, to: 2 }] } });
+  const decide = await page.request.post(`/api/routes/${routeId}/cleanup`, {
+    data: { reject: [{ kind: 'grade-spike', index: 37, field: 'elevationM', from: 1, to: 2 }] },
+  });
   expect(decide.status()).toBe(403);
   await page.goto(`/projects/${projectId}/routes`);
   await expect(page.getByRole('link', { name: 'Reviewer walk' })).toHaveCount(0);

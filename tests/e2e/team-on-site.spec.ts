@@ -43,7 +43,11 @@ function files(): { csv: string; photos: string[]; notPhoto: string } {
   writeFileSync(csv, `lat,lon,ele\n${rows.join('\n')}\n`);
   const notPhoto = path.join(dir, 'notes.jpg');
   writeFileSync(notPhoto, 'walked 12 April, gate at the top field left open\n');
-  return { csv, notPhoto, photos: [path.join(dir, 'spring-box.jpg'), path.join(dir, 'crossing.jpg'), path.join(dir, 'trough.jpg')] };
+  return {
+    csv,
+    notPhoto,
+    photos: [path.join(dir, 'spring-box.jpg'), path.join(dir, 'crossing.jpg'), path.join(dir, 'trough.jpg')],
+  };
 }
 
 async function makePhotos(paths: string[]) {
@@ -54,10 +58,15 @@ async function makePhotos(paths: string[]) {
 
 /** Chainage of each photo mark drawn inside `scope`, by photo id. */
 async function markChainages(page: Page, selector: string): Promise<number[]> {
-  return page.locator(selector).evaluateAll((marks) => marks.map((m) => Number(m.getAttribute('data-chainage-m'))).sort((a, b) => a - b));
+  return page
+    .locator(selector)
+    .evaluateAll((marks) => marks.map((m) => Number(m.getAttribute('data-chainage-m'))).sort((a, b) => a - b));
 }
 
-test('an owner invites a surveyor, who joins, imports the walk and uploads its photos; they land at their chainages on the profile and the plan', async ({ page, browser }) => {
+test('an owner invites a surveyor, who joins, imports the walk and uploads its photos; they land at their chainages on the profile and the plan', async ({
+  page,
+  browser,
+}) => {
   test.setTimeout(150_000);
   const ownerErrors = watchConsole(page);
   await signIn(page, 'owner@example.test');
@@ -83,7 +92,10 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await makePhotos(photos);
   await field.goto('/projects');
   await field.getByRole('link', { name: 'Kestrel Hollow spring line' }).click();
-  await field.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Survey routes' }).click();
+  await field
+    .getByRole('navigation', { name: 'Project sections' })
+    .getByRole('link', { name: 'Survey routes' })
+    .click();
   await field.getByRole('link', { name: 'Import a survey file' }).click();
   await field.getByLabel('Survey file (CSV or GPX, up to 50 MB)').setInputFiles(csv);
   await field.getByLabel('Route name').fill(ROUTE);
@@ -147,7 +159,10 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   await field.reload();
   await expect(field.getByLabel('Show spring-box.jpg in the report')).toBeChecked();
   await expect(field.getByLabel('Caption of spring-box.jpg')).toHaveValue('Spring box lid, moss on the north side');
-  await field.getByTestId('route-profile').getByRole('button', { name: 'Photo 1: Spring box lid, moss on the north side' }).hover();
+  await field
+    .getByTestId('route-profile')
+    .getByRole('button', { name: 'Photo 1: Spring box lid, moss on the north side' })
+    .hover();
   await expect(field.getByTestId('photo-card')).toContainText('Spring box lid, moss on the north side');
   await context.close();
   expect(errors.filter((e) => !e.includes('415 (Unsupported Media Type)'))).toEqual([]);
@@ -155,18 +170,32 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   // A line laid along the walk shows the same photos on its long profile and its plan.
   await page.goto('/projects/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001/lines');
   await page.getByLabel('Line name').fill(`Beck line ${run}`);
-  const routeChoice = await page.getByLabel('Follows the route').locator('option', { hasText: ROUTE }).getAttribute('value');
+  const routeChoice = await page
+    .getByLabel('Follows the route')
+    .locator('option', { hasText: ROUTE })
+    .getAttribute('value');
   await page.getByLabel('Follows the route').selectOption(routeChoice!);
   await page.getByRole('button', { name: 'Start line' }).click();
   await expect(page).toHaveURL(/\/lines\/[0-9a-f-]{36}$/);
   const lineId = page.url().split('/').pop()!;
   const lineMarks = '[data-testid="profile-chart"] [data-layer="photos"] [data-photo-id]';
   await expect(page.locator(lineMarks).filter({ visible: true })).toHaveCount(3);
-  const onLine = await page.locator(lineMarks).filter({ visible: true }).evaluateAll((marks) => marks.map((m) => Number(m.getAttribute('data-chainage-m'))));
+  const onLine = await page
+    .locator(lineMarks)
+    .filter({ visible: true })
+    .evaluateAll((marks) => marks.map((m) => Number(m.getAttribute('data-chainage-m'))));
   expect(onLine).toEqual(onProfile);
-  await expect(page.locator('[data-testid="plan-view"] [data-layer="plan-photos"] [data-photo-id]').filter({ visible: true })).toHaveCount(3);
-  await page.getByTestId('profile-chart').filter({ visible: true }).getByRole('button', { name: 'Photo 3: crossing.jpg' }).click();
-  await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText(`Photo 3 · ${crossingM.toFixed(1)} m`);
+  await expect(
+    page.locator('[data-testid="plan-view"] [data-layer="plan-photos"] [data-photo-id]').filter({ visible: true }),
+  ).toHaveCount(3);
+  await page
+    .getByTestId('profile-chart')
+    .filter({ visible: true })
+    .getByRole('button', { name: 'Photo 3: crossing.jpg' })
+    .click();
+  await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText(
+    `Photo 3 · ${crossingM.toFixed(1)} m`,
+  );
   await expect(page.getByTestId('photo-card').filter({ visible: true })).toContainText('0.0 m off the line');
   await page.screenshot({ path: 'test-results/site-photos-line.png', fullPage: true });
   expect(await seriousFindings(page)).toEqual([]);
@@ -175,7 +204,9 @@ test('an owner invites a surveyor, who joins, imports the walk and uploads its p
   expect(ownerErrors).toEqual([]);
 });
 
-test('a designer submits a revision for review; the reviewer is told by mail, and the link opens that revision', async ({ browser }) => {
+test('a designer submits a revision for review; the reviewer is told by mail, and the link opens that revision', async ({
+  browser,
+}) => {
   test.setTimeout(120_000);
   const designerContext = await browser.newContext();
   const designer = await designerContext.newPage();
@@ -190,7 +221,10 @@ test('a designer submits a revision for review; the reviewer is told by mail, an
   const number = Number(/Revision (\d+)/.exec((await made.textContent())!)![1]);
   await designerContext.close();
 
-  const mail = await waitForMail('reviewer@example.test', new RegExp(`Kestrel Hollow spring line: .* submitted revision ${number} for review`));
+  const mail = await waitForMail(
+    'reviewer@example.test',
+    new RegExp(`Kestrel Hollow spring line: .* submitted revision ${number} for review`),
+  );
   expect(mail.text).toContain(`submitted revision ${number} for review`);
   const open = mail.links[0];
   expect(open).toMatch(/^\/projects\/6f1c1e52-3a57-4c38-9b0e-0d5b1c7a2001\/reviews\/[0-9a-f-]{36}$/);
@@ -202,7 +236,10 @@ test('a designer submits a revision for review; the reviewer is told by mail, an
   await reviewer.goto(open);
   await expect(reviewer.getByRole('heading', { name: new RegExp(`^Revision ${number}\\b`) })).toBeVisible();
   await expect(reviewer.getByText(note).filter({ visible: true }).first()).toBeVisible();
-  await expect(reviewer.getByTestId('revision-status').filter({ visible: true })).toHaveAttribute('data-status', 'submitted');
+  await expect(reviewer.getByTestId('revision-status').filter({ visible: true })).toHaveAttribute(
+    'data-status',
+    'submitted',
+  );
   await expect(reviewer.getByRole('button', { name: 'Approve' })).toBeVisible();
   await reviewer.screenshot({ path: 'test-results/review-mail-link.png', fullPage: true });
   await reviewerContext.close();

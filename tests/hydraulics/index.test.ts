@@ -223,8 +223,16 @@ describe('hydraulics/index.ts', () => {
   });
 
   it('exports the named entry points as functions', () => {
-    for (const name of ['hazenWilliamsHeadLoss', 'darcyWeisbachHeadLoss', 'colebrookFrictionFactor', 'swameeJainFrictionFactor',
-      'joukowskyHeadRise', 'pressureRatingFromSdr', 'analyzeLine', 'assertLineInput'] as const) {
+    for (const name of [
+      'hazenWilliamsHeadLoss',
+      'darcyWeisbachHeadLoss',
+      'colebrookFrictionFactor',
+      'swameeJainFrictionFactor',
+      'joukowskyHeadRise',
+      'pressureRatingFromSdr',
+      'analyzeLine',
+      'assertLineInput',
+    ] as const) {
       expect(typeof hydraulics[name]).toBe('function');
     }
   });

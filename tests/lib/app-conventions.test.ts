@@ -37,15 +37,37 @@ describe('the framework conventions every signed-in page follows', () => {
   // <Suspense> whose fallback is a skeleton of its shape, as the projects table does.
   const SELF_FETCHING = /\buse(Query|Queries|SuspenseQuery|CommentThreads|RoutePhotos)\(/;
   const widgetsOf = (page: string) =>
-    [...readFileSync(page, 'utf8').matchAll(/import \{ ([\w, ]+) \} from '@\/components\/([\w/-]+)'/g)].flatMap(([, names, file]) => {
-      const source = path.join(root, 'components', `${file}.tsx`);
-      if (!existsSync(source) || !SELF_FETCHING.test(readFileSync(source, 'utf8'))) return [];
-      return names.split(',').map((n) => n.trim()).filter((n) => /^[A-Z]/.test(n) && !n.endsWith('Skeleton') && new RegExp(`export function ${n}\\b`).test(readFileSync(source, 'utf8')));
-    });
-  const rendered = appPages.flatMap((dir) => widgetsOf(path.join(dir, 'page.tsx')).map((name) => [path.relative(root, dir), name]));
+    [...readFileSync(page, 'utf8').matchAll(/import \{ ([\w, ]+) \} from '@\/components\/([\w/-]+)'/g)].flatMap(
+      ([, names, file]) => {
+        const source = path.join(root, 'components', `${file}.tsx`);
+        if (!existsSync(source) || !SELF_FETCHING.test(readFileSync(source, 'utf8'))) return [];
+        return names
+          .split(',')
+          .map((n) => n.trim())
+          .filter(
+            (n) =>
+              /^[A-Z]/.test(n) &&
+              !n.endsWith('Skeleton') &&
+              new RegExp(`export function ${n}\\b`).test(readFileSync(source, 'utf8')),
+          );
+      },
+    );
+  const rendered = appPages.flatMap((dir) =>
+    widgetsOf(path.join(dir, 'page.tsx')).map((name) => [path.relative(root, dir), name]),
+  );
 
   it('finds the self-fetching widgets the pages render', () => {
-    expect(rendered.map(([, name]) => name)).toEqual(expect.arrayContaining(['ProjectsTable', 'RouteEditor', 'RoutePhotos', 'LineEditor', 'NetworkWorkspace', 'LiftWorkspace', 'MembersTable']));
+    expect(rendered.map(([, name]) => name)).toEqual(
+      expect.arrayContaining([
+        'ProjectsTable',
+        'RouteEditor',
+        'RoutePhotos',
+        'LineEditor',
+        'NetworkWorkspace',
+        'LiftWorkspace',
+        'MembersTable',
+      ]),
+    );
   });
 
   it.each(rendered)('%s wraps %s in <Suspense> with a skeleton of its shape', (rel, name) => {

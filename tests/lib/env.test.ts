@@ -30,7 +30,11 @@ describe('productionProblems', () => {
   });
 
   it("refuses the local fake's object storage key", () => {
-    const problems = productionProblems({ ...complete, RUNNEL_S3_ACCESS_KEY_ID: 'S3RVER', RUNNEL_S3_SECRET_ACCESS_KEY: 'S3RVER' });
+    const problems = productionProblems({
+      ...complete,
+      RUNNEL_S3_ACCESS_KEY_ID: 'S3RVER',
+      RUNNEL_S3_SECRET_ACCESS_KEY: 'S3RVER',
+    });
     expect(problems).toHaveLength(2);
     expect(problems[0]).toContain("RUNNEL_S3_ACCESS_KEY_ID: is the local fake's key");
   });

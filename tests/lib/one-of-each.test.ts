@@ -26,14 +26,20 @@ describe('one of each, on the screens', () => {
   });
 
   it('says a failed load only through LoadError (or a segment error boundary)', () => {
-    const own = screens.filter((f) => /could not be loaded/.test(f.text) && !['components/ui/load-error.tsx', 'components/ui/segment-error.tsx'].includes(f.rel));
+    const own = screens.filter(
+      (f) =>
+        /could not be loaded/.test(f.text) &&
+        !['components/ui/load-error.tsx', 'components/ui/segment-error.tsx'].includes(f.rel),
+    );
     expect(own.map((f) => f.rel)).toEqual([]);
   });
 
   it('runs every form the browser checks through the one form hook, useForm', () => {
     const clientForms = screens.filter((f) => /^'use client'/m.test(f.text) && /<form\b/.test(f.text));
     expect(clientForms.length).toBeGreaterThan(10);
-    const other = clientForms.filter((f) => /\bfieldErrorsOf\b|\.safeParse\(|useState<FieldErrors>/.test(f.text) && !/\buseForm\(/.test(f.text));
+    const other = clientForms.filter(
+      (f) => /\bfieldErrorsOf\b|\.safeParse\(|useState<FieldErrors>/.test(f.text) && !/\buseForm\(/.test(f.text),
+    );
     expect(other.map((f) => f.rel)).toEqual([]);
   });
 });

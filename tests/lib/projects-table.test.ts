@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_PROJECT_TABLE, projectTableParams, projectTableStateFromParams, sortedBy } from '../../lib/projects-table';
+import {
+  DEFAULT_PROJECT_TABLE,
+  projectTableParams,
+  projectTableStateFromParams,
+  sortedBy,
+} from '../../lib/projects-table';
 
 const read = (query: string) => projectTableStateFromParams(new URLSearchParams(query));
 

@@ -14,16 +14,21 @@ const TEXT_FILE = /\.(ts|tsx|mts|cts|js|mjs|cjs|md|json|css|sh|yml|yaml|sql|txt|
 
 function trackedTextFiles(): string[] {
   const listed = execFileSync('git', ['ls-files', '-z'], { cwd: ROOT, encoding: 'utf8' }).split('\0');
-  return listed.filter((file) => file && TEXT_FILE.test(file) && file !== 'package-lock.json' && existsSync(path.join(ROOT, file)));
+  return listed.filter(
+    (file) => file && TEXT_FILE.test(file) && file !== 'package-lock.json' && existsSync(path.join(ROOT, file)),
+  );
 }
 
 const referenceFiles = readdirSync(REFERENCES_DIR).filter((name) => name.endsWith('.md'));
-const referenceText = new Map(referenceFiles.map((name) => [name, readFileSync(path.join(REFERENCES_DIR, name), 'utf8')]));
+const referenceText = new Map(
+  referenceFiles.map((name) => [name, readFileSync(path.join(REFERENCES_DIR, name), 'utf8')]),
+);
 
 function definedKeys(): Map<string, string[]> {
   const keys = new Map<string, string[]>();
   for (const [name, text] of referenceText) {
-    for (const match of text.matchAll(/^- \*\*\[(R\d+)\]\*\*/gm)) keys.set(match[1], [...(keys.get(match[1]) ?? []), name]);
+    for (const match of text.matchAll(/^- \*\*\[(R\d+)\]\*\*/gm))
+      keys.set(match[1], [...(keys.get(match[1]) ?? []), name]);
   }
   return keys;
 }
@@ -66,7 +71,10 @@ describe('sources live in the repository (docs/references)', () => {
 
   it('no tracked file points to a reference document outside the repository', () => {
     // Built from parts so this file does not match itself.
-    const outside = new RegExp(['REFERENCES\\.md', 'REFERENCES' + ' §', '\\.\\./shared/', '/work/' + 'shared'].join('|'), 'g');
+    const outside = new RegExp(
+      ['REFERENCES\\.md', 'REFERENCES' + ' §', '\\.\\./shared/', '/work/' + 'shared'].join('|'),
+      'g',
+    );
     expect(findAll(outside, () => false)).toEqual([]);
   });
 

@@ -6,7 +6,15 @@ import type { LineInput, LineStation } from '../../hydraulics/index';
  * the only highs and lows are the intended ones. PE80 SDR 17 (PN 8) is over its static rating in
  * the sag; a 40 mm first stretch puts a short rise near the source above the grade line.
  */
-const CONTROL: [number, number][] = [[0, 411], [100, 403.5], [220, 408], [450, 352], [650, 300], [900, 322], [1400, 316]];
+const CONTROL: [number, number][] = [
+  [0, 411],
+  [100, 403.5],
+  [220, 408],
+  [450, 352],
+  [650, 300],
+  [900, 322],
+  [1400, 316],
+];
 
 export function referenceGroundM(chainageM: number): number {
   for (let i = 1; i < CONTROL.length; i++) {
@@ -22,7 +30,10 @@ export function referenceGroundM(chainageM: number): number {
 
 export function referenceStations(spacingM = 10, lengthM = 1400): LineStation[] {
   const n = Math.round(lengthM / spacingM) + 1;
-  return Array.from({ length: n }, (_, i) => ({ chainageM: i * spacingM, groundElevationM: Math.round(referenceGroundM(i * spacingM) * 100) / 100 }));
+  return Array.from({ length: n }, (_, i) => ({
+    chainageM: i * spacingM,
+    groundElevationM: Math.round(referenceGroundM(i * spacingM) * 100) / 100,
+  }));
 }
 
 export function referenceLine(): LineInput {

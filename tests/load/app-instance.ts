@@ -14,7 +14,8 @@ export interface AppInstance {
 export async function waitForOk(url: string, timeoutMs: number, child?: ChildProcess): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    if (child && child.exitCode !== null) throw new Error(`${url}: the server exited (code ${child.exitCode}) before it answered`);
+    if (child && child.exitCode !== null)
+      throw new Error(`${url}: the server exited (code ${child.exitCode}) before it answered`);
     try {
       const res = await fetch(url);
       if (res.ok) return;
@@ -29,11 +30,15 @@ export async function waitForOk(url: string, timeoutMs: number, child?: ChildPro
 /** Starts the built app (`.next`) on 127.0.0.1:`port` and waits until its health check answers. */
 export async function startAppInstance(port: number, env: NodeJS.ProcessEnv, logFile: string): Promise<AppInstance> {
   const log = fs.openSync(logFile, 'a');
-  const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '--hostname', '127.0.0.1', '--port', String(port)], {
-    env: { ...env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', PORT: String(port) },
-    stdio: ['ignore', log, log],
-    detached: true,
-  });
+  const child = spawn(
+    process.execPath,
+    ['node_modules/next/dist/bin/next', 'start', '--hostname', '127.0.0.1', '--port', String(port)],
+    {
+      env: { ...env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', PORT: String(port) },
+      stdio: ['ignore', log, log],
+      detached: true,
+    },
+  );
   fs.closeSync(log);
   const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
   try {

@@ -39,7 +39,13 @@ function mixedRequests(fixture: LoadFixture, writeEvery: number, ackedWrites: st
     setupRequest: (request, context) => {
       const ctx = context as Context;
       ctx.note = `${fixture.notePrefix} write ${++serial}`;
-      const body = { measuredOn: '2026-08-14', season: 'dry', bucketVolumeM3: 0.02, bucketSeconds: 31.5, note: ctx.note };
+      const body = {
+        measuredOn: '2026-08-14',
+        season: 'dry',
+        bucketVolumeM3: 0.02,
+        bucketSeconds: 31.5,
+        note: ctx.note,
+      };
       return { ...request, body: JSON.stringify(body) };
     },
     onResponse: (status, _body, context) => {
@@ -75,10 +81,18 @@ function collect(instance: autocannon.Instance, into: Collected): void {
   });
 }
 
-function summarise(collected: Collected, results: autocannon.Result[], durationS: number, ackedWrites: string[]): LoadResult {
+function summarise(
+  collected: Collected,
+  results: autocannon.Result[],
+  durationS: number,
+  ackedWrites: string[],
+): LoadResult {
   const sorted = collected.latencies.sort((a, b) => a - b);
   const timeouts = results.reduce((n, r) => n + r.timeouts, 0);
-  const errors = Math.max(collected.errors, results.reduce((n, r) => n + r.errors, 0));
+  const errors = Math.max(
+    collected.errors,
+    results.reduce((n, r) => n + r.errors, 0),
+  );
   return {
     requests: sorted.length,
     durationS,
@@ -93,13 +107,21 @@ function summarise(collected: Collected, results: autocannon.Result[], durationS
   };
 }
 
-const headers = (fixture: LoadFixture) => ({ cookie: fixture.cookie, 'content-type': 'application/json', accept: 'application/json' });
+const headers = (fixture: LoadFixture) => ({
+  cookie: fixture.cookie,
+  'content-type': 'application/json',
+  accept: 'application/json',
+});
 
 /**
  * `connections` closed-loop connections (each sends its next request when the last is answered) for
  * `durationS`; every `writeEvery`-th request is a write (0: reads only). @default writeEvery 4
  */
-export async function closedLoop(baseUrl: string, fixture: LoadFixture, options: { connections: number; durationS: number; writeEvery?: number }): Promise<LoadResult> {
+export async function closedLoop(
+  baseUrl: string,
+  fixture: LoadFixture,
+  options: { connections: number; durationS: number; writeEvery?: number },
+): Promise<LoadResult> {
   const ackedWrites: string[] = [];
   const collected: Collected = { latencies: [], non2xx: {}, errors: 0, timeouts: 0 };
   const started = performance.now();
@@ -121,7 +143,11 @@ export async function closedLoop(baseUrl: string, fixture: LoadFixture, options:
  * `users` users, each making one read per second for `durationS`, their starts spread evenly over
  * the first second (one autocannon instance of one connection per user), so the load is open-loop.
  */
-export async function usersPerSecond(baseUrl: string, fixture: LoadFixture, options: { users: number; durationS: number }): Promise<LoadResult> {
+export async function usersPerSecond(
+  baseUrl: string,
+  fixture: LoadFixture,
+  options: { users: number; durationS: number },
+): Promise<LoadResult> {
   const collected: Collected = { latencies: [], non2xx: {}, errors: 0, timeouts: 0 };
   const started = performance.now();
   const runs = Array.from({ length: options.users }, async (_, i) => {

@@ -1,7 +1,8 @@
 // `npm run test:scale` (scripts/scale.sh sets up the database and the build first): two stateless
 // instances behind nginx share PostgreSQL; 50 connections of mixed reads and writes for 30 s; one
 // instance is drained and stopped at 10 s (SIGTERM: it stops listening, so nginx sends new
-// requests to the other, and answers the ones in flight; see nginx.ts) and started again at 20 s. Passes with 0 errors (no
+// requests to the other, and answers the ones in flight; see nginx.ts) and started again at 20 s. Passes with 0 errors
+// (no
 // refused, reset or timed-out request, no answer outside 2xx) and 0 lost writes (every write
 // answered 201 is in the database).
 import os from 'node:os';
@@ -21,13 +22,16 @@ const databaseUrl = process.env.DATABASE_URL!;
 const secret = process.env.NEXTAUTH_SECRET!;
 
 const say = (message: string) => console.log(`[scale] ${new Date().toISOString().slice(11, 19)} ${message}`);
-const sleepUntil = (t0: number, seconds: number) => new Promise((resolve) => setTimeout(resolve, Math.max(0, t0 + seconds * 1000 - performance.now())));
+const sleepUntil = (t0: number, seconds: number) =>
+  new Promise((resolve) => setTimeout(resolve, Math.max(0, t0 + seconds * 1000 - performance.now())));
 
 async function storedNotes(prefix: string): Promise<Set<string>> {
   const client = new pg.Client({ connectionString: databaseUrl });
   await client.connect();
   try {
-    const { rows } = await client.query<{ note: string }>('SELECT note FROM yield_readings WHERE note LIKE $1', [`${prefix}%`]);
+    const { rows } = await client.query<{ note: string }>('SELECT note FROM yield_readings WHERE note LIKE $1', [
+      `${prefix}%`,
+    ]);
     return new Set(rows.map((r) => r.note));
   } finally {
     await client.end();
@@ -35,14 +39,18 @@ async function storedNotes(prefix: string): Promise<Set<string>> {
 }
 
 async function main(): Promise<number> {
-  if (!databaseUrl || !secret) throw new Error('DATABASE_URL and NEXTAUTH_SECRET must be set (run through `npm run test:scale`)');
+  if (!databaseUrl || !secret)
+    throw new Error('DATABASE_URL and NEXTAUTH_SECRET must be set (run through `npm run test:scale`)');
   const fixture = await createLoadFixture(databaseUrl, secret, 'scale');
   const log = (name: string) => path.join(runtime, `${name}.log`);
   let a: AppInstance | undefined;
   let b: AppInstance | undefined;
   let lb: Awaited<ReturnType<typeof startNginx>> | undefined;
   try {
-    [a, b] = await Promise.all([startAppInstance(portA, process.env, log('instance-a')), startAppInstance(portB, process.env, log('instance-b'))]);
+    [a, b] = await Promise.all([
+      startAppInstance(portA, process.env, log('instance-a')),
+      startAppInstance(portB, process.env, log('instance-b')),
+    ]);
     lb = await startNginx(path.join(os.tmpdir(), `runnel-nginx-${portLb}`), portLb, [portA, portB]);
     say(`instances on ${portA} and ${portB} behind nginx on ${portLb}; ${CONNECTIONS} connections for ${DURATION_S} s`);
 

@@ -20,7 +20,8 @@ const SESSION_COOKIE = /^(__Secure-)?next-auth\.session-token=/;
 export async function signInCookie(email: string): Promise<string> {
   const res = await signIn(email, KNOWN_PASSWORD);
   const cookie = res.cookies.find((c) => SESSION_COOKIE.test(c));
-  if (res.status !== 200 || !cookie) throw new Error(`sign-in of ${email} failed: ${res.status} ${res.text.slice(0, 200)}`);
+  if (res.status !== 200 || !cookie)
+    throw new Error(`sign-in of ${email} failed: ${res.status} ${res.text.slice(0, 200)}`);
   return cookie;
 }
 
@@ -43,7 +44,12 @@ export async function createCast(): Promise<Cast> {
   const cookies = { anonymous: undefined } as Record<Actor, string | undefined>;
   for (const actor of ACTORS) if (actor !== 'anonymous') cookies[actor] = await signInCookie(a.users[actor].email);
   await markTeam(b.teamId);
-  const secretsOfB = [MARKER, ...Object.entries(b.users).filter(([k]) => k !== 'outsider').map(([, u]) => u.email)];
+  const secretsOfB = [
+    MARKER,
+    ...Object.entries(b.users)
+      .filter(([k]) => k !== 'outsider')
+      .map(([, u]) => u.email),
+  ];
   return { a, b, cookies, secretsOfB };
 }
 
@@ -69,12 +75,18 @@ export async function markTeam(teamId: string): Promise<void> {
   );
   const q = (sql: string) => db().query(sql, { replacements: { teamId, marker: ` ${MARKER}`, like: `%${MARKER}%` } });
   await q(`UPDATE teams SET name = name || :marker WHERE id = :teamId AND name NOT LIKE :like`);
-  await q(`UPDATE users SET name = name || :marker WHERE id IN (SELECT user_id FROM memberships WHERE team_id = :teamId) AND name NOT LIKE :like`);
-  await q(`UPDATE projects SET name = name || :marker, description = description || :marker, site_notes = site_notes || :marker WHERE team_id = :teamId AND name NOT LIKE :like`);
+  await q(
+    `UPDATE users SET name = name || :marker WHERE id IN (SELECT user_id FROM memberships WHERE team_id = :teamId) AND name NOT LIKE :like`,
+  );
+  await q(
+    `UPDATE projects SET name = name || :marker, description = description || :marker, site_notes = site_notes || :marker WHERE team_id = :teamId AND name NOT LIKE :like`,
+  );
   for (const { table, column } of markable) {
     const t = `"${table}"`;
     const c = `"${column}"`;
-    await q(`UPDATE ${t} SET ${c} = ${c} || :marker WHERE project_id IN (SELECT id FROM projects WHERE team_id = :teamId) AND ${c} IS NOT NULL AND ${c} NOT LIKE :like`);
+    await q(
+      `UPDATE ${t} SET ${c} = ${c} || :marker WHERE project_id IN (SELECT id FROM projects WHERE team_id = :teamId) AND ${c} IS NOT NULL AND ${c} NOT LIKE :like`,
+    );
   }
 }
 
@@ -84,12 +96,25 @@ export async function markTeam(teamId: string): Promise<void> {
  */
 export async function freshFixture(cast: Cast): Promise<Fixture> {
   const { Project, Membership } = models();
-  const project = await Project.create({ teamId: cast.a.teamId, name: 'Live project', description: '', siteNotes: '', unitSystem: 'metric' });
+  const project = await Project.create({
+    teamId: cast.a.teamId,
+    name: 'Live project',
+    description: '',
+    siteNotes: '',
+    unitSystem: 'metric',
+  });
   const routes = await createRouteFixtures(project.id, cast.a.users.surveyor.id);
   const line = await createLineFixture(project.id);
   const extra = await createUser('extra');
   await Membership.create({ teamId: cast.a.teamId, userId: extra.id, role: 'viewer' });
-  return { ...cast.a, projectId: project.id, users: { ...cast.a.users, extra }, ...routes, lineRouteId: line.routeId, lineId: line.lineId };
+  return {
+    ...cast.a,
+    projectId: project.id,
+    users: { ...cast.a.users, extra },
+    ...routes,
+    lineRouteId: line.routeId,
+    lineId: line.lineId,
+  };
 }
 
 export interface CallInput {

@@ -15,10 +15,15 @@ function walk(dir: string): string[] {
 /** Names a module exports: `export const X`, `export async function X`, `export { a as X }`. */
 export function exportedNames(source: string): string[] {
   const names = new Set<string>();
-  for (const m of source.matchAll(/export\s+(?:async\s+)?(?:const|let|function\*?|class)\s+([A-Za-z_$][\w$]*)/g)) names.add(m[1]!);
+  for (const m of source.matchAll(/export\s+(?:async\s+)?(?:const|let|function\*?|class)\s+([A-Za-z_$][\w$]*)/g))
+    names.add(m[1]!);
   for (const m of source.matchAll(/export\s*\{([^}]*)\}/g)) {
     for (const part of m[1]!.split(',')) {
-      const name = part.trim().split(/\s+as\s+/).pop()?.trim();
+      const name = part
+        .trim()
+        .split(/\s+as\s+/)
+        .pop()
+        ?.trim();
       if (name) names.add(name);
     }
   }
@@ -58,7 +63,9 @@ export function discoverServerActions(): string[] {
 
 /** The build's id for a server action (Next's server reference manifest), by file and export. */
 export function serverActionId(file: string, exportName: string): string {
-  const manifest = JSON.parse(fs.readFileSync(path.join(ROOT, '.next/server/server-reference-manifest.json'), 'utf8')) as {
+  const manifest = JSON.parse(
+    fs.readFileSync(path.join(ROOT, '.next/server/server-reference-manifest.json'), 'utf8'),
+  ) as {
     node: Record<string, { filename?: string; exportedName?: string }>;
   };
   const hit = Object.entries(manifest.node).find(([, v]) => v.filename === file && v.exportedName === exportName);

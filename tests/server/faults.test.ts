@@ -35,7 +35,12 @@ function endpoint(file: string, method: EndpointCase['method']): EndpointCase {
 /** Makes what the call needs (its params may create rows), and returns the call to make later. */
 async function prepareCall(e: EndpointCase, f: Fixture, actor: Actor): Promise<() => Promise<LiveAnswer>> {
   const params = await e.params(f);
-  const input = { method: e.method, path: apiPath(e.file, params), body: e.body?.(f, ACTORS.indexOf(actor)), upload: e.upload?.(f) };
+  const input = {
+    method: e.method,
+    path: apiPath(e.file, params),
+    body: e.body?.(f, ACTORS.indexOf(actor)),
+    upload: e.upload?.(f),
+  };
   return () => request(cast, actor, input);
 }
 
@@ -50,9 +55,15 @@ const FAULT_FUNCTION = `CREATE OR REPLACE FUNCTION runnel_test_fault() RETURNS t
 const SLOW_FUNCTION = `CREATE OR REPLACE FUNCTION runnel_test_stall() RETURNS trigger LANGUAGE plpgsql AS $$
   BEGIN PERFORM pg_sleep(20); RETURN NULL; END $$`;
 
-async function withTrigger<T>(table: string, fn: 'runnel_test_fault' | 'runnel_test_stall', run: () => Promise<T>): Promise<T> {
+async function withTrigger<T>(
+  table: string,
+  fn: 'runnel_test_fault' | 'runnel_test_stall',
+  run: () => Promise<T>,
+): Promise<T> {
   const quoted = table.includes('.') ? table : `"${table}"`;
-  await db().query(`CREATE TRIGGER runnel_test_trigger BEFORE INSERT OR UPDATE OR DELETE ON ${quoted} FOR EACH STATEMENT EXECUTE FUNCTION ${fn}()`);
+  await db().query(
+    `CREATE TRIGGER runnel_test_trigger BEFORE INSERT OR UPDATE OR DELETE ON ${quoted} FOR EACH STATEMENT EXECUTE FUNCTION ${fn}()`,
+  );
   try {
     return await run();
   } finally {
@@ -77,8 +88,18 @@ const WRITES: MultiStepWrite[] = [
   { name: 'survey import', e: endpoint('projects/[projectId]/routes/import/route.ts', 'POST'), actor: 'surveyor' },
   { name: 'route clean-up', e: endpoint('routes/[routeId]/cleanup/route.ts', 'POST'), actor: 'surveyor' },
   { name: 'revision', e: endpoint('projects/[projectId]/revisions/route.ts', 'POST'), actor: 'designer' },
-  { name: 'member change (invitation accepted as a new account)', e: endpoint('invitations/accept/route.ts', 'POST'), actor: 'anonymous' },
-  { name: 'project delete', e: endpoint('projects/[projectId]/route.ts', 'DELETE'), actor: 'owner', alsoTouches: ['graphile_worker._private_jobs'], steps: ['projects', 'route_points', 'attachments', 'graphile_worker._private_jobs'] },
+  {
+    name: 'member change (invitation accepted as a new account)',
+    e: endpoint('invitations/accept/route.ts', 'POST'),
+    actor: 'anonymous',
+  },
+  {
+    name: 'project delete',
+    e: endpoint('projects/[projectId]/route.ts', 'DELETE'),
+    actor: 'owner',
+    alsoTouches: ['graphile_worker._private_jobs'],
+    steps: ['projects', 'route_points', 'attachments', 'graphile_worker._private_jobs'],
+  },
 ];
 
 describe('faults and races against the running app', () => {
@@ -113,7 +134,8 @@ describe('faults and races against the running app', () => {
         await settle();
         const changed = changedTables(before, await fingerprint());
         const keysAfter = await storedKeys(f);
-        outcomes[table] = `${res.status >= 400 ? 'refused' : `answered ${res.status}`}, changed: [${changed.join(', ')}], files ${keysAfter.length === keysBefore.length && keysAfter.every((k, i) => k === keysBefore[i]) ? 'unchanged' : 'CHANGED'}`;
+        outcomes[table] =
+          `${res.status >= 400 ? 'refused' : `answered ${res.status}`}, changed: [${changed.join(', ')}], files ${keysAfter.length === keysBefore.length && keysAfter.every((k, i) => k === keysBefore[i]) ? 'unchanged' : 'CHANGED'}`;
         if (res.status >= 400) expect(res.json?.error?.code).toEqual(expect.any(String));
       }
       expect(outcomes).toEqual(Object.fromEntries(touched.map((t) => [t, 'refused, changed: [], files unchanged'])));
@@ -145,7 +167,9 @@ describe('faults and races against the running app', () => {
     expect(changedTables(before, await fingerprint())).toEqual([]);
     expect(await storedKeys(f)).toEqual(keysBefore);
     // The app carries on: the next import of the same file succeeds.
-    expect((await callCase(endpoint('projects/[projectId]/routes/import/route.ts', 'POST'), f, 'surveyor')).status).toBe(201);
+    expect(
+      (await callCase(endpoint('projects/[projectId]/routes/import/route.ts', 'POST'), f, 'surveyor')).status,
+    ).toBe(201);
   }, 120_000);
 
   it('20 parallel saves of a line from one version: 1 succeeds, 19 answer 409', async () => {
@@ -154,7 +178,11 @@ describe('faults and races against the running app', () => {
     const base = line!.revision;
     const saves = await Promise.all(
       Array.from({ length: 20 }, (_, i) =>
-        request(cast, 'designer', { method: 'PATCH', path: `/api/lines/${f.lineId}`, body: { notes: `Save ${i}`, baseRevision: base } }),
+        request(cast, 'designer', {
+          method: 'PATCH',
+          path: `/api/lines/${f.lineId}`,
+          body: { notes: `Save ${i}`, baseRevision: base },
+        }),
       ),
     );
     const statuses = saves.map((s) => s.status).sort();
@@ -168,11 +196,18 @@ describe('faults and races against the running app', () => {
     const { Membership, Team } = models();
     const team = await Team.create({ name: 'Two owners' });
     const [a, b] = [f.users.owner, f.users.designer];
-    await Membership.bulkCreate([{ teamId: team.id, userId: a.id, role: 'owner' }, { teamId: team.id, userId: b.id, role: 'owner' }]);
+    await Membership.bulkCreate([
+      { teamId: team.id, userId: a.id, role: 'owner' },
+      { teamId: team.id, userId: b.id, role: 'owner' },
+    ]);
     for (let round = 0; round < 3; round++) {
       await Membership.update({ role: 'owner' }, { where: { teamId: team.id } });
       const demote = (by: 'owner' | 'designer', target: string) =>
-        request(cast, by, { method: 'PATCH', path: `/api/teams/${team.id}/members/${target}`, body: { role: 'designer' } });
+        request(cast, by, {
+          method: 'PATCH',
+          path: `/api/teams/${team.id}/members/${target}`,
+          body: { role: 'designer' },
+        });
       const answers = await Promise.all([demote('owner', b.id), demote('designer', a.id)]);
       // The loser is refused either way: 409 when both passed the role check and met at the lock,
       // 403 when the winner had already demoted it by the time its own role was read.
@@ -186,7 +221,13 @@ describe('faults and races against the running app', () => {
   it('one address signing up many times at once: every answer 202, never a server error', async () => {
     const email = `race-${randomUUID().slice(0, 8)}@fixture.test`;
     const answers = await Promise.all(
-      Array.from({ length: 8 }, () => live('/api/accounts', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: 'Race', email, password: 'a long enough passphrase' }) })),
+      Array.from({ length: 8 }, () =>
+        live('/api/accounts', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ name: 'Race', email, password: 'a long enough passphrase' }),
+        }),
+      ),
     );
     expect(answers.map((r) => r.status)).toEqual(Array(8).fill(202));
   });
@@ -196,10 +237,26 @@ describe('faults and races against the running app', () => {
     const tokens: string[] = [];
     for (let i = 0; i < 4; i++) {
       const { token, hash } = newLinkToken();
-      await models().AccountToken.create({ purpose: 'sign-up', email, userId: null, name: 'Race', passwordHash: 'x', tokenHash: hash, expiresAt: new Date(Date.now() + 3_600_000) });
+      await models().AccountToken.create({
+        purpose: 'sign-up',
+        email,
+        userId: null,
+        name: 'Race',
+        passwordHash: 'x',
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + 3_600_000),
+      });
       tokens.push(token);
     }
-    const answers = await Promise.all(tokens.map((token) => live('/api/accounts/confirm', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ token }) })));
+    const answers = await Promise.all(
+      tokens.map((token) =>
+        live('/api/accounts/confirm', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ token }),
+        }),
+      ),
+    );
     const statuses = answers.map((r) => r.status).sort();
     expect(statuses.filter((s) => s === 200)).toHaveLength(1);
     expect(statuses.filter((s) => s >= 500)).toEqual([]);
@@ -214,7 +271,13 @@ describe('faults and races against the running app', () => {
       tokens.push((await createInvitationToken(team.id, email, 'viewer', null)).token);
     }
     const answers = await Promise.all(
-      tokens.map((token) => live('/api/invitations/accept', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ token, name: 'Race', password: 'a long enough passphrase' }) })),
+      tokens.map((token) =>
+        live('/api/invitations/accept', {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ token, name: 'Race', password: 'a long enough passphrase' }),
+        }),
+      ),
     );
     expect(answers.map((r) => r.status).sort()).toEqual([200, 409, 409, 409]);
     expect(await models().User.count({ where: { email } })).toBe(1);
@@ -237,8 +300,13 @@ describe('faults and races against the running app', () => {
   });
 
   describe('object storage failing at the first, middle and last step of each write that stores or removes files', () => {
-    /** Fails the nth storage call of kind `op` on a key containing `match` (lib/storage-faults.ts), while `run` runs. */
-    async function withStorageFault<T>(plan: { match: string; op: 'put' | 'delete' | 'list'; nth: number }, run: () => Promise<T>): Promise<T> {
+    /**
+     * Fails the nth storage call of kind `op` on a key containing `match` (lib/storage-faults.ts), while `run` runs.
+     */
+    async function withStorageFault<T>(
+      plan: { match: string; op: 'put' | 'delete' | 'list'; nth: number },
+      run: () => Promise<T>,
+    ): Promise<T> {
       fs.writeFileSync(STORAGE_FAULTS_FILE, JSON.stringify(plan));
       try {
         return await run();
@@ -259,7 +327,11 @@ describe('faults and races against the running app', () => {
     }
 
     const photoPost = (f: Fixture) =>
-      request(cast, 'surveyor', { method: 'POST', path: `/api/projects/${f.projectId}/photos`, upload: photoUpload(PLAIN_PNG, 'gate.png', { caption: 'Gate' }, 'image/png') });
+      request(cast, 'surveyor', {
+        method: 'POST',
+        path: `/api/projects/${f.projectId}/photos`,
+        upload: photoUpload(PLAIN_PNG, 'gate.png', { caption: 'Gate' }, 'image/png'),
+      });
 
     // A photo upload stores the image, then the thumbnail, then writes its row.
     it.each([
@@ -271,7 +343,11 @@ describe('faults and races against the running app', () => {
       const before = await fingerprint();
       const keysBefore = await storedKeys(f);
       const res = await withStorageFault({ match: `projects/${f.projectId}/photos/`, ...fault }, () => photoPost(f));
-      expect([res.status, res.json?.error?.code, res.headers.get('retry-after')]).toEqual([503, 'service_unavailable', '5']);
+      expect([res.status, res.json?.error?.code, res.headers.get('retry-after')]).toEqual([
+        503,
+        'service_unavailable',
+        '5',
+      ]);
       await settle();
       expect(changedTables(before, await fingerprint())).toEqual([]);
       expect(await storedKeys(f)).toEqual(keysBefore);
@@ -312,35 +388,45 @@ describe('faults and races against the running app', () => {
       ['first file', { op: 'delete' as const, nth: 1 }],
       ['middle file', { op: 'delete' as const, nth: 2 }],
       ['last file', { op: 'delete' as const, nth: 4 }],
-    ])('project delete, store failing at the %s: the rows go, and every file after a retry', async (_step, fault) => {
-      const f = await freshFixture(cast);
-      await createPhotoFixture(f.projectId, f.users.surveyor.id);
-      const prefix = projectStoragePrefix(f.projectId);
-      expect((await storedKeys(f)).length).toBe(4);
-      await withStorageFault({ match: prefix, ...fault }, async () => {
-        const res = await request(cast, 'owner', { method: 'DELETE', path: `/api/projects/${f.projectId}` });
-        expect(res.status).toBe(204);
-        expect(await keysBecome(prefix, [])).toEqual([]);
-      });
-      expect(await models().Project.count({ where: { id: f.projectId } })).toBe(0);
-      expect(await models().Attachment.count({ where: { projectId: f.projectId } })).toBe(0);
-      expect(await models().SitePhoto.count({ where: { projectId: f.projectId } })).toBe(0);
-    }, 90_000);
+    ])(
+      'project delete, store failing at the %s: the rows go, and every file after a retry',
+      async (_step, fault) => {
+        const f = await freshFixture(cast);
+        await createPhotoFixture(f.projectId, f.users.surveyor.id);
+        const prefix = projectStoragePrefix(f.projectId);
+        expect((await storedKeys(f)).length).toBe(4);
+        await withStorageFault({ match: prefix, ...fault }, async () => {
+          const res = await request(cast, 'owner', { method: 'DELETE', path: `/api/projects/${f.projectId}` });
+          expect(res.status).toBe(204);
+          expect(await keysBecome(prefix, [])).toEqual([]);
+        });
+        expect(await models().Project.count({ where: { id: f.projectId } })).toBe(0);
+        expect(await models().Attachment.count({ where: { projectId: f.projectId } })).toBe(0);
+        expect(await models().SitePhoto.count({ where: { projectId: f.projectId } })).toBe(0);
+      },
+      90_000,
+    );
 
     it.each([
       ['first (the image)', 1],
       ['last (the thumbnail)', 2],
-    ])('photo delete, store failing at the %s: the row goes, and both files after a retry', async (_step, nth) => {
-      const f = await freshFixture(cast);
-      const photoId = await createPhotoFixture(f.projectId, f.users.surveyor.id);
-      const folder = (await models().SitePhoto.findByPk(photoId))!.imageKey.replace(/[^/]+$/, '');
-      expect((await listKeys(folder)).length).toBe(2);
-      await withStorageFault({ match: folder, op: 'delete', nth }, async () => {
-        expect((await request(cast, 'surveyor', { method: 'DELETE', path: `/api/photos/${photoId}` })).status).toBe(204);
-        expect(await keysBecome(folder, [])).toEqual([]);
-      });
-      expect(await models().SitePhoto.count({ where: { id: photoId } })).toBe(0);
-    }, 90_000);
+    ])(
+      'photo delete, store failing at the %s: the row goes, and both files after a retry',
+      async (_step, nth) => {
+        const f = await freshFixture(cast);
+        const photoId = await createPhotoFixture(f.projectId, f.users.surveyor.id);
+        const folder = (await models().SitePhoto.findByPk(photoId))!.imageKey.replace(/[^/]+$/, '');
+        expect((await listKeys(folder)).length).toBe(2);
+        await withStorageFault({ match: folder, op: 'delete', nth }, async () => {
+          expect((await request(cast, 'surveyor', { method: 'DELETE', path: `/api/photos/${photoId}` })).status).toBe(
+            204,
+          );
+          expect(await keysBecome(folder, [])).toEqual([]);
+        });
+        expect(await models().SitePhoto.count({ where: { id: photoId } })).toBe(0);
+      },
+      90_000,
+    );
 
     it('route delete, store failing to remove its survey file: the rows go, and the file after a retry', async () => {
       const f = await freshFixture(cast);
@@ -348,7 +434,9 @@ describe('faults and races against the running app', () => {
       const file = await models().Attachment.findByPk(route!.sourceAttachmentId!);
       expect(await listKeys(file!.storageKey)).toEqual([file!.storageKey]);
       await withStorageFault({ match: file!.storageKey, op: 'delete', nth: 1 }, async () => {
-        expect((await request(cast, 'surveyor', { method: 'DELETE', path: `/api/routes/${f.routeId}` })).status).toBe(204);
+        expect((await request(cast, 'surveyor', { method: 'DELETE', path: `/api/routes/${f.routeId}` })).status).toBe(
+          204,
+        );
         expect(await keysBecome(file!.storageKey, [])).toEqual([]);
       });
       expect(await models().Attachment.count({ where: { id: file!.id } })).toBe(0);

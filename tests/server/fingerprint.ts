@@ -12,7 +12,13 @@ let tables: string[] | undefined;
 
 async function dataTables(rows: ReadRows = appDatabase): Promise<string[]> {
   const read = async () =>
-    ((await rows(`SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)) as { name: string }[]).map((t) => t.name).filter((name) => !NOT_DATA.has(name));
+    (
+      (await rows(`SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)) as {
+        name: string;
+      }[]
+    )
+      .map((t) => t.name)
+      .filter((name) => !NOT_DATA.has(name));
   if (rows !== appDatabase) return read();
   tables ??= await read();
   return tables;
@@ -37,7 +43,9 @@ export async function fingerprint(rows: ReadRows = appDatabase): Promise<Record<
 
 /** Tables whose fingerprint differs, for a readable failure. */
 export function changedTables(before: Record<string, string>, after: Record<string, string>): string[] {
-  return [...new Set([...Object.keys(before), ...Object.keys(after)])].filter((name) => before[name] !== after[name]).sort();
+  return [...new Set([...Object.keys(before), ...Object.keys(after)])]
+    .filter((name) => before[name] !== after[name])
+    .sort();
 }
 
 /**
@@ -69,8 +77,13 @@ const LOG = 'runnel_harness';
 export async function startWriteLog(): Promise<number> {
   const q = (sql: string) => db().query(sql);
   await q(`CREATE SCHEMA IF NOT EXISTS ${LOG}`);
-  await q(`CREATE TABLE IF NOT EXISTS ${LOG}.writes (id bigserial PRIMARY KEY, table_name text NOT NULL, op text NOT NULL, row_count bigint NOT NULL)`);
-  for (const [name, rows] of [['note_new', 'new_rows'], ['note_old', 'old_rows']]) {
+  await q(
+    `CREATE TABLE IF NOT EXISTS ${LOG}.writes (id bigserial PRIMARY KEY, table_name text NOT NULL, op text NOT NULL, row_count bigint NOT NULL)`,
+  );
+  for (const [name, rows] of [
+    ['note_new', 'new_rows'],
+    ['note_old', 'old_rows'],
+  ]) {
     await q(`CREATE OR REPLACE FUNCTION ${LOG}.${name}() RETURNS trigger LANGUAGE plpgsql AS $$
       DECLARE n bigint;
       BEGIN
@@ -81,16 +94,24 @@ export async function startWriteLog(): Promise<number> {
   }
   for (const name of await dataTables()) {
     const t = `"${name.replace(/"/g, '""')}"`;
-    await q(`CREATE OR REPLACE TRIGGER ${LOG}_insert AFTER INSERT ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`);
-    await q(`CREATE OR REPLACE TRIGGER ${LOG}_update AFTER UPDATE ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`);
-    await q(`CREATE OR REPLACE TRIGGER ${LOG}_delete AFTER DELETE ON ${t} REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_old()`);
+    await q(
+      `CREATE OR REPLACE TRIGGER ${LOG}_insert AFTER INSERT ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`,
+    );
+    await q(
+      `CREATE OR REPLACE TRIGGER ${LOG}_update AFTER UPDATE ON ${t} REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_new()`,
+    );
+    await q(
+      `CREATE OR REPLACE TRIGGER ${LOG}_delete AFTER DELETE ON ${t} REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION ${LOG}.note_old()`,
+    );
   }
   return writeMark();
 }
 
 /** The newest note: pass it to `writesSince` after the next call. */
 export async function writeMark(): Promise<number> {
-  const [row] = await db().query<{ mark: string }>(`SELECT coalesce(max(id), 0)::text AS mark FROM ${LOG}.writes`, { type: QueryTypes.SELECT });
+  const [row] = await db().query<{ mark: string }>(`SELECT coalesce(max(id), 0)::text AS mark FROM ${LOG}.writes`, {
+    type: QueryTypes.SELECT,
+  });
   return Number(row!.mark);
 }
 
@@ -100,7 +121,10 @@ export async function writesSince(mark: number): Promise<{ writes: string[]; mar
     `SELECT id::text, table_name, op, row_count::text FROM ${LOG}.writes WHERE id > :mark ORDER BY id`,
     { type: QueryTypes.SELECT, replacements: { mark } },
   );
-  return { writes: rows.map((r) => `${r.op} ${r.table_name} ×${r.row_count}`), mark: rows.length ? Number(rows[rows.length - 1]!.id) : mark };
+  return {
+    writes: rows.map((r) => `${r.op} ${r.table_name} ×${r.row_count}`),
+    mark: rows.length ? Number(rows[rows.length - 1]!.id) : mark,
+  };
 }
 
 /** Removes the triggers and the log. */

@@ -20,16 +20,25 @@ export async function setup(): Promise<void> {
   fs.mkdirSync(path.dirname(logFile), { recursive: true });
   const out = fs.openSync(logFile, 'w');
   fs.rmSync(STORAGE_FAULTS_FILE, { force: true });
-  server = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '--hostname', '127.0.0.1', '--port', port], {
-    cwd: root,
-    detached: true,
-    stdio: ['ignore', out, out],
-    // RUNNEL_STORAGE_FAULTS: the file tests/server/faults.test.ts writes to fail one storage call (test env only).
-    env: {
-      ...process.env, NODE_ENV: 'production', NEXT_TELEMETRY_DISABLED: '1', NEXTAUTH_URL: base, RUNNEL_LOG_LEVEL: 'info',
-      RUNNEL_ENV: 'test', RUNNEL_STORAGE_FAULTS: STORAGE_FAULTS_FILE,
+  server = spawn(
+    process.execPath,
+    ['node_modules/next/dist/bin/next', 'start', '--hostname', '127.0.0.1', '--port', port],
+    {
+      cwd: root,
+      detached: true,
+      stdio: ['ignore', out, out],
+      // RUNNEL_STORAGE_FAULTS: the file tests/server/faults.test.ts writes to fail one storage call (test env only).
+      env: {
+        ...process.env,
+        NODE_ENV: 'production',
+        NEXT_TELEMETRY_DISABLED: '1',
+        NEXTAUTH_URL: base,
+        RUNNEL_LOG_LEVEL: 'info',
+        RUNNEL_ENV: 'test',
+        RUNNEL_STORAGE_FAULTS: STORAGE_FAULTS_FILE,
+      },
     },
-  });
+  );
   const deadline = Date.now() + 90_000;
   for (;;) {
     try {
@@ -37,7 +46,8 @@ export async function setup(): Promise<void> {
     } catch {
       // not listening yet
     }
-    if (Date.now() > deadline || server.exitCode !== null) throw new Error(`next start did not answer on ${base}; see ${logFile}`);
+    if (Date.now() > deadline || server.exitCode !== null)
+      throw new Error(`next start did not answer on ${base}; see ${logFile}`);
     await new Promise((r) => setTimeout(r, 300));
   }
 }

@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { live } from './live';
 
 function directives(policy: string): Map<string, string> {
-  return new Map(policy.split(';').map((d) => d.trim()).filter(Boolean).map((d) => [d.split(/\s+/)[0]!, d.slice(d.indexOf(' ') + 1)]));
+  return new Map(
+    policy
+      .split(';')
+      .map((d) => d.trim())
+      .filter(Boolean)
+      .map((d) => [d.split(/\s+/)[0]!, d.slice(d.indexOf(' ') + 1)]),
+  );
 }
 
 describe('security headers from the running app', () => {

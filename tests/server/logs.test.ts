@@ -22,11 +22,19 @@ describe('the server log after the run', () => {
     const planted = `planted-bind-${Date.now().toString(36)}`;
     // A failed write whose statement carries the planted value as a bind parameter, and a
     // failed sign-in whose form carries a password: both are logged, neither value may be.
-    await db().query(`CREATE OR REPLACE FUNCTION runnel_test_fault() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'injected fault on %', TG_TABLE_NAME; END $$`);
-    await db().query(`CREATE TRIGGER runnel_test_trigger BEFORE INSERT ON projects FOR EACH STATEMENT EXECUTE FUNCTION runnel_test_fault()`);
+    await db().query(
+      `CREATE OR REPLACE FUNCTION runnel_test_fault() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'injected fault on %', TG_TABLE_NAME; END $$`,
+    );
+    await db().query(
+      `CREATE TRIGGER runnel_test_trigger BEFORE INSERT ON projects FOR EACH STATEMENT EXECUTE FUNCTION runnel_test_fault()`,
+    );
     let failed;
     try {
-      failed = await live(`/api/teams/${cast.a.teamId}/projects`, { method: 'POST', headers: { cookie: cast.cookies.designer!, 'content-type': 'application/json' }, body: JSON.stringify({ name: planted }) });
+      failed = await live(`/api/teams/${cast.a.teamId}/projects`, {
+        method: 'POST',
+        headers: { cookie: cast.cookies.designer!, 'content-type': 'application/json' },
+        body: JSON.stringify({ name: planted }),
+      });
     } finally {
       await db().query(`DROP TRIGGER IF EXISTS runnel_test_trigger ON projects`);
     }
@@ -38,7 +46,9 @@ describe('the server log after the run', () => {
     const log = fs.readFileSync(LOG, 'utf8');
     expect(log).toContain('unexpected error in a request handler');
     const dbPassword = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
-    const cookieValues = Object.values(cast.cookies).filter(Boolean).map((c) => c!.slice(c!.indexOf('=') + 1));
+    const cookieValues = Object.values(cast.cookies)
+      .filter(Boolean)
+      .map((c) => c!.slice(c!.indexOf('=') + 1));
     const secrets: Record<string, string> = {
       'database password': dbPassword,
       'session secret': env().NEXTAUTH_SECRET,
@@ -48,7 +58,9 @@ describe('the server log after the run', () => {
       ...Object.fromEntries(cookieValues.map((c, i) => [`session cookie ${i}`, c])),
     };
     for (const [name, value] of Object.entries(secrets)) expect(value.length, name).toBeGreaterThanOrEqual(8);
-    const found = Object.entries(secrets).filter(([, value]) => log.includes(value)).map(([name]) => name);
+    const found = Object.entries(secrets)
+      .filter(([, value]) => log.includes(value))
+      .map(([name]) => name);
     expect(found).toEqual([]);
   }, 120_000);
 });

@@ -3,7 +3,17 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db';
 import { ENDPOINTS, EXEMPT, type EndpointCase } from '../api/endpoints';
 import { ACTORS, type Actor } from '../support/api';
-import { apiPath, createCast, freshFixture, markTeam, renewSession, request, type Cast, type Fixture, type SignedInActor } from './cast';
+import {
+  apiPath,
+  createCast,
+  freshFixture,
+  markTeam,
+  renewSession,
+  request,
+  type Cast,
+  type Fixture,
+  type SignedInActor,
+} from './cast';
 import { discoverRouteHandlers, discoverServerActions } from './discover';
 import { changedTables, fingerprint, settle, startWriteLog, stopWriteLog, writesSince } from './fingerprint';
 import { callServerAction } from './server-action';
@@ -48,7 +58,8 @@ const latin1 = (u: Upload) => Buffer.from(u.body).toString('latin1');
 function uploadIdsOf(u: Upload): Record<string, string> {
   const text = latin1(u);
   const found: Record<string, string> = {};
-  for (const m of text.matchAll(/name="([^"]+)"\r\n\r\n([0-9a-f-]{36})\r\n/gi)) if (UUID.test(m[2]!)) found[m[1]!] = m[2]!;
+  for (const m of text.matchAll(/name="([^"]+)"\r\n\r\n([0-9a-f-]{36})\r\n/gi))
+    if (UUID.test(m[2]!)) found[m[1]!] = m[2]!;
   const all = text.match(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/gi) ?? [];
   if (all.some((id) => !Object.values(found).includes(id))) found['?'] = 'an id outside a form field';
   return found;
@@ -56,12 +67,19 @@ function uploadIdsOf(u: Upload): Record<string, string> {
 
 function idAt(body: unknown, upload: Upload | undefined, path: string): string | undefined {
   if (upload) return uploadIdsOf(upload)[path];
-  const value = path.split('.').reduce<unknown>((v, k) => (v && typeof v === 'object' ? (v as Record<string, unknown>)[k] : undefined), body);
+  const value = path
+    .split('.')
+    .reduce<unknown>((v, k) => (v && typeof v === 'object' ? (v as Record<string, unknown>)[k] : undefined), body);
   return typeof value === 'string' ? value : undefined;
 }
 
 /** The body (or upload) with the id at `path` replaced. */
-function withIdAt(body: unknown, upload: Upload | undefined, path: string, id: string): { body?: unknown; upload?: Upload } {
+function withIdAt(
+  body: unknown,
+  upload: Upload | undefined,
+  path: string,
+  id: string,
+): { body?: unknown; upload?: Upload } {
   if (upload) {
     const old = uploadIdsOf(upload)[path]!;
     const text = latin1(upload).replace(`name="${path}"\r\n\r\n${old}\r\n`, `name="${path}"\r\n\r\n${id}\r\n`);
@@ -110,7 +128,8 @@ interface CasePlan {
 /** Plans a case's refused calls (as refused actors, and as the owner with each id swapped) on the shared project. */
 async function planRefused(e: EndpointCase, shared: Fixture): Promise<Omit<CasePlan, 'name' | 'answers' | 'writes'>> {
   const refused: Planned[] = [];
-  for (const actor of ACTORS.filter((a) => e.expect[a] >= 400)) refused.push(await plan(e, { ...shared }, actor, actor, e.expect[actor]));
+  for (const actor of ACTORS.filter((a) => e.expect[a] >= 400))
+    refused.push(await plan(e, { ...shared }, actor, actor, e.expect[actor]));
   const fa = { ...shared };
   const paramsA = await e.params(fa);
   const bodyA = e.body?.(fa, OWNER);
@@ -126,13 +145,22 @@ async function planRefused(e: EndpointCase, shared: Fixture): Promise<Omit<CaseP
   const uploadB = e.upload?.(fb);
   const variants = (a: string | undefined, b: string | undefined, what: string) => {
     if (!b || b === a) throw new Error(`${e.method} ${e.file}: no distinct team B value for ${what}`);
-    return [{ kind: 'team B' as const, value: b }, { kind: 'missing' as const, value: randomUUID() }];
+    return [
+      { kind: 'team B' as const, value: b },
+      { kind: 'missing' as const, value: randomUUID() },
+    ];
   };
   for (const key of pathKeys) {
     for (const v of variants(paramsA[key], paramsB[key], `[${key}]`)) {
       refused.push({
-        label: `owner with ${key} of ${v.kind}`, actor: 'owner', method: e.method, path: apiPath(e.file, { ...paramsA, [key]: v.value }),
-        body: bodyA, upload: uploadA, expect: 404, swap: { key, kind: v.kind },
+        label: `owner with ${key} of ${v.kind}`,
+        actor: 'owner',
+        method: e.method,
+        path: apiPath(e.file, { ...paramsA, [key]: v.value }),
+        body: bodyA,
+        upload: uploadA,
+        expect: 404,
+        swap: { key, kind: v.kind },
       });
     }
   }
@@ -141,8 +169,13 @@ async function planRefused(e: EndpointCase, shared: Fixture): Promise<Omit<CaseP
     const key = `body ${path}`;
     for (const v of variants(idAt(bodyA, uploadA, path), idAt(bodyB, uploadB, path), key)) {
       refused.push({
-        label: `owner with ${key} of ${v.kind}`, actor: 'owner', method: e.method, path: apiPath(e.file, paramsA),
-        ...withIdAt(bodyA, uploadA, path, v.value), expect: 404, swap: { key, kind: v.kind },
+        label: `owner with ${key} of ${v.kind}`,
+        actor: 'owner',
+        method: e.method,
+        path: apiPath(e.file, paramsA),
+        ...withIdAt(bodyA, uploadA, path, v.value),
+        expect: 404,
+        swap: { key, kind: v.kind },
       });
     }
   }
@@ -151,7 +184,8 @@ async function planRefused(e: EndpointCase, shared: Fixture): Promise<Omit<CaseP
 
 // A call that deletes or reshapes its object (a route split, a year's tasks made) needs its own;
 // other writes can share one fresh project per case.
-const needsOwnFixture = (e: EndpointCase) => e.method === 'DELETE' || /\/(split|trim|reverse|join|cleanup|points|generate)\/route\.ts$/.test(e.file);
+const needsOwnFixture = (e: EndpointCase) =>
+  e.method === 'DELETE' || /\/(split|trim|reverse|join|cleanup|points|generate)\/route\.ts$/.test(e.file);
 describe('authorisation matrix against the running app', () => {
   const plans: CasePlan[] = [];
   let before: Record<string, string> = {};
@@ -164,7 +198,8 @@ describe('authorisation matrix against the running app', () => {
   beforeAll(async () => {
     cast = await createCast();
     const shared = await freshFixture(cast);
-    for (const [n, e] of ENDPOINTS.entries()) plans.push({ ...(await planRefused(e, shared)), name: `${e.method} ${e.file} (#${n})`, answers: [], writes: [] });
+    for (const [n, e] of ENDPOINTS.entries())
+      plans.push({ ...(await planRefused(e, shared)), name: `${e.method} ${e.file} (#${n})`, answers: [], writes: [] });
     await markTeam(cast.b.teamId);
     await settle();
     let mark = await startWriteLog();
@@ -194,8 +229,14 @@ describe('authorisation matrix against the running app', () => {
     const served = discoverRouteHandlers();
     const tabled = new Set([...ENDPOINTS.map((e) => `${e.file} ${e.method}`), ...Object.keys(EXEMPT)]);
     expect(served.length).toBeGreaterThan(60);
-    expect(served.filter((key) => !tabled.has(key)), 'endpoints missing from the table').toEqual([]);
-    expect([...tabled].filter((key) => !served.includes(key)), 'table rows with no endpoint').toEqual([]);
+    expect(
+      served.filter((key) => !tabled.has(key)),
+      'endpoints missing from the table',
+    ).toEqual([]);
+    expect(
+      [...tabled].filter((key) => !served.includes(key)),
+      'table rows with no endpoint',
+    ).toEqual([]);
   });
 
   it('the write log notes a write made while it runs', () => {
@@ -212,23 +253,36 @@ describe('authorisation matrix against the running app', () => {
     const listed = plans.filter((p) => (p.e.bodyIds ?? []).length > 0);
     expect(listed.length).toBeGreaterThan(20);
     expect(listed.reduce((n, p) => n + p.e.bodyIds!.length, 0)).toBeGreaterThan(30);
-    for (const p of plans) expect([...p.bodyIdPaths].sort(), `${p.name}: ids in its body`).toEqual([...(p.e.bodyIds ?? [])].sort());
+    for (const p of plans)
+      expect([...p.bodyIdPaths].sort(), `${p.name}: ids in its body`).toEqual([...(p.e.bodyIds ?? [])].sort());
   });
 
-  it.each(ENDPOINTS.map((_e, n) => n))('refused: case #%i answers each refused caller and every swapped id exactly', (n) => {
-    const p = plans[n]!;
-    expect(p.answers.map((r, i) => `${p.refused[i]!.label}: ${r.status}`), p.name).toEqual(p.refused.map((c) => `${c.label}: ${c.expect}`));
-    // Checked per call, so a write names the call that made it.
-    expect(p.writes.flatMap((w, i) => (w.length ? [`${p.refused[i]!.label}: ${w.join(', ')}`] : [])), `${p.name} wrote`).toEqual([]);
-    expect(p.answers.filter((r) => !errorShapeOk(r)).map((r) => r.text.slice(0, 200)), 'every refusal has the one error shape').toEqual([]);
-    expect(p.answers.flatMap(leaksOfB), 'no answer carries team B').toEqual([]);
-    // A team B id and an id that does not exist answer alike: nothing tells the caller which.
-    for (const key of p.swapKeys) {
-      const pair = p.refused.map((c, i) => ({ c, a: p.answers[i]! })).filter(({ c }) => c.swap?.key === key);
-      expect(pair).toHaveLength(2);
-      expect(pair[0]!.a.json, `${p.name} [${key}] of team B vs missing`).toEqual(pair[1]!.a.json);
-    }
-  });
+  it.each(ENDPOINTS.map((_e, n) => n))(
+    'refused: case #%i answers each refused caller and every swapped id exactly',
+    (n) => {
+      const p = plans[n]!;
+      expect(
+        p.answers.map((r, i) => `${p.refused[i]!.label}: ${r.status}`),
+        p.name,
+      ).toEqual(p.refused.map((c) => `${c.label}: ${c.expect}`));
+      // Checked per call, so a write names the call that made it.
+      expect(
+        p.writes.flatMap((w, i) => (w.length ? [`${p.refused[i]!.label}: ${w.join(', ')}`] : [])),
+        `${p.name} wrote`,
+      ).toEqual([]);
+      expect(
+        p.answers.filter((r) => !errorShapeOk(r)).map((r) => r.text.slice(0, 200)),
+        'every refusal has the one error shape',
+      ).toEqual([]);
+      expect(p.answers.flatMap(leaksOfB), 'no answer carries team B').toEqual([]);
+      // A team B id and an id that does not exist answer alike: nothing tells the caller which.
+      for (const key of p.swapKeys) {
+        const pair = p.refused.map((c, i) => ({ c, a: p.answers[i]! })).filter(({ c }) => c.swap?.key === key);
+        expect(pair).toHaveLength(2);
+        expect(pair[0]!.a.json, `${p.name} [${key}] of team B vs missing`).toEqual(pair[1]!.a.json);
+      }
+    },
+  );
 
   it.each(ENDPOINTS.map((_e, n) => n))('allowed: case #%i answers each allowed caller with its status', async (n) => {
     const e = ENDPOINTS[n]!;
@@ -237,9 +291,12 @@ describe('authorisation matrix against the running app', () => {
       if (!fixture || needsOwnFixture(e)) fixture = await freshFixture(cast);
       const p = await plan(e, { ...fixture }, actor, actor, e.expect[actor]);
       const res = await send(p);
-      expect(`${actor}: ${res.status}${res.status >= 400 ? ` ${res.text.slice(0, 300)}` : ''}`, plans[n]!.name).toBe(`${actor}: ${p.expect}`);
+      expect(`${actor}: ${res.status}${res.status >= 400 ? ` ${res.text.slice(0, 300)}` : ''}`, plans[n]!.name).toBe(
+        `${actor}: ${p.expect}`,
+      );
       expect(leaksOfB(res), 'no answer carries team B').toEqual([]);
-      if (SESSION_SPENDING.has(`${e.file} ${e.method}`) && actor !== 'anonymous') await renewSession(cast, actor as SignedInActor);
+      if (SESSION_SPENDING.has(`${e.file} ${e.method}`) && actor !== 'anonymous')
+        await renewSession(cast, actor as SignedInActor);
     }
   });
 
@@ -259,16 +316,33 @@ describe('authorisation matrix against the running app', () => {
     await settle();
     const before = await fingerprint();
     const outcome: Record<string, string> = {};
-    for (const actor of ACTORS) outcome[actor] = (await callServerAction(cast, actor, 'app/actions/select-team.ts', 'selectTeam', { teamId: cast.a.teamId })).result;
-    const toB = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', { teamId: cast.b.teamId });
-    const missing = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', { teamId: randomUUID() });
-    const malformed = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', { teamId: 'x', more: 1 });
+    for (const actor of ACTORS)
+      outcome[actor] = (
+        await callServerAction(cast, actor, 'app/actions/select-team.ts', 'selectTeam', { teamId: cast.a.teamId })
+      ).result;
+    const toB = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', {
+      teamId: cast.b.teamId,
+    });
+    const missing = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', {
+      teamId: randomUUID(),
+    });
+    const malformed = await callServerAction(cast, 'owner', 'app/actions/select-team.ts', 'selectTeam', {
+      teamId: 'x',
+      more: 1,
+    });
     expect(await fingerprint()).toEqual(before);
-    expect(outcome).toEqual({ anonymous: 'unauthenticated', outsider: 'not_found', viewer: 'ok', reviewer: 'ok', surveyor: 'ok', designer: 'ok', owner: 'ok' });
+    expect(outcome).toEqual({
+      anonymous: 'unauthenticated',
+      outsider: 'not_found',
+      viewer: 'ok',
+      reviewer: 'ok',
+      surveyor: 'ok',
+      designer: 'ok',
+      owner: 'ok',
+    });
     expect([toB.status, toB.result, missing.status, missing.result]).toEqual([200, 'not_found', 200, 'not_found']);
     expect(toB.payload).toEqual(missing.payload);
     expect(malformed.result).toBe('bad_request');
     expect(cast.secretsOfB.filter((s) => toB.text.includes(s))).toEqual([]);
   });
-
 });

@@ -17,17 +17,26 @@ let f: Fixture;
 
 function outage(seconds: number): Promise<string> {
   return new Promise((resolve, reject) => {
-    const child = spawn('bash', [path.join(ROOT, 'scripts/pg-outage.sh'), String(seconds)], { cwd: ROOT, env: process.env, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn('bash', [path.join(ROOT, 'scripts/pg-outage.sh'), String(seconds)], {
+      cwd: ROOT,
+      env: process.env,
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let out = '';
     child.stdout.on('data', (d) => (out += d));
     child.stderr.on('data', (d) => (out += d));
-    child.on('exit', (code) => (code === 0 ? resolve(out) : reject(new Error(`pg-outage.sh failed (${code}): ${out}`))));
+    child.on('exit', (code) =>
+      code === 0 ? resolve(out) : reject(new Error(`pg-outage.sh failed (${code}): ${out}`)),
+    );
   });
 }
 
 // The driver's words, or the database's address (the app's own address may appear in a redirect).
 const dbPort = new URL(process.env.DATABASE_URL ?? 'postgres://x@127.0.0.1:5432/x').port || '5432';
-const DRIVER_WORDS = new RegExp(`ECONNREFUSED|:${dbPort}\\b|Sequelize|postgres|connect ECONN|terminating connection`, 'i');
+const DRIVER_WORDS = new RegExp(
+  `ECONNREFUSED|:${dbPort}\\b|Sequelize|postgres|connect ECONN|terminating connection`,
+  'i',
+);
 
 describe('database outage under load', () => {
   beforeAll(async () => {
@@ -47,7 +56,11 @@ describe('database outage under load', () => {
         const sentAt = Date.now();
         try {
           const r: LiveAnswer = write
-            ? await request(cast, 'designer', { method: 'POST', path: `/api/teams/${f.teamId}/projects`, body: { name } })
+            ? await request(cast, 'designer', {
+                method: 'POST',
+                path: `/api/teams/${f.teamId}/projects`,
+                body: { name },
+              })
             : await request(cast, 'viewer', { method: 'GET', path: `/api/teams/${f.teamId}/projects` });
           answers.push({ status: r.status, retryAfter: r.headers.get('retry-after'), text: r.text, sentAt });
           if (write && r.status === 201) created.push(r.json.project.id);
@@ -64,9 +77,14 @@ describe('database outage under load', () => {
     // Requests sent while the database is surely down, besides the workers' (which may all be waiting).
     const probes = Array.from({ length: 6 }, async (_, i) => {
       const sentAt = Date.now();
-      const r = i % 3 === 0
-        ? await request(cast, 'designer', { method: 'POST', path: `/api/teams/${f.teamId}/projects`, body: { name: `Outage probe ${i}` } })
-        : await request(cast, 'viewer', { method: 'GET', path: `/api/teams/${f.teamId}/projects` });
+      const r =
+        i % 3 === 0
+          ? await request(cast, 'designer', {
+              method: 'POST',
+              path: `/api/teams/${f.teamId}/projects`,
+              body: { name: `Outage probe ${i}` },
+            })
+          : await request(cast, 'viewer', { method: 'GET', path: `/api/teams/${f.teamId}/projects` });
       answers.push({ status: r.status, retryAfter: r.headers.get('retry-after'), text: r.text, sentAt });
       if (i % 3 === 0 && r.status === 201) created.push(r.json.project.id);
     });
@@ -85,7 +103,12 @@ describe('database outage under load', () => {
     expect(answers.length).toBeGreaterThan(50);
     const byStatus: Record<number, number> = {};
     for (const a of answers) byStatus[a.status] = (byStatus[a.status] ?? 0) + 1;
-    expect(Object.keys(byStatus).map(Number).filter((s) => ![200, 201, 503].includes(s)), JSON.stringify(byStatus)).toEqual([]);
+    expect(
+      Object.keys(byStatus)
+        .map(Number)
+        .filter((s) => ![200, 201, 503].includes(s)),
+      JSON.stringify(byStatus),
+    ).toEqual([]);
     for (const a of answers.filter((x) => x.status === 503)) {
       expect(Number(a.retryAfter)).toBeGreaterThan(0);
       expect(a.text).not.toMatch(DRIVER_WORDS);

@@ -27,7 +27,13 @@ function returnedValue(text: string): { ok?: boolean; code?: string } | null {
 }
 
 /** Calls a server action over HTTP as the browser does (Next-Action header, arguments as JSON). */
-export async function callServerAction(cast: Cast, actor: Actor, file: string, exportName: string, ...args: unknown[]): Promise<ActionAnswer> {
+export async function callServerAction(
+  cast: Cast,
+  actor: Actor,
+  file: string,
+  exportName: string,
+  ...args: unknown[]
+): Promise<ActionAnswer> {
   const headers: Record<string, string> = {
     'next-action': serverActionId(file, exportName),
     'content-type': 'text/plain;charset=UTF-8',
@@ -39,5 +45,10 @@ export async function callServerAction(cast: Cast, actor: Actor, file: string, e
   // A public page that uses the action (the signed-in areas redirect an anonymous caller first).
   const res = await live('/invitations/accept', { method: 'POST', headers, body: JSON.stringify(args) });
   const value = returnedValue(res.text);
-  return { status: res.status, result: value ? (value.ok ? 'ok' : (value.code ?? 'unknown')) : `no result (${res.status})`, payload: value, text: res.text };
+  return {
+    status: res.status,
+    result: value ? (value.ok ? 'ok' : (value.code ?? 'unknown')) : `no result (${res.status})`,
+    payload: value,
+    text: res.text,
+  };
 }

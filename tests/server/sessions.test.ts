@@ -25,7 +25,11 @@ function flip(s: string, at: number): string {
   return s.slice(0, i) + (s[i] === 'A' ? 'B' : 'A') + s.slice(i + 1);
 }
 
-async function tokenFor(claims: Record<string, unknown>, secret = env().NEXTAUTH_SECRET, maxAge?: number): Promise<string> {
+async function tokenFor(
+  claims: Record<string, unknown>,
+  secret = env().NEXTAUTH_SECRET,
+  maxAge?: number,
+): Promise<string> {
   return encode({ token: claims, secret, ...(maxAge !== undefined ? { maxAge } : {}) });
 }
 
@@ -69,7 +73,7 @@ describe('sessions against the running app', () => {
       'NUL bytes': 'a%00b.%00',
       '8 kB of letters': 'A'.repeat(8000),
       'signed with another secret': await tokenFor(claims, 'another secret that is long enough to be one'),
-      'expired': await tokenFor(claims, undefined, -60),
+      expired: await tokenFor(claims, undefined, -60),
       'user that does not exist': await tokenFor({ ...claims, sub: randomUUID() }),
       'subject not an id': await tokenFor({ ...claims, sub: "1' OR '1'='1" }),
       'older session version': await tokenFor({ ...claims, sv: user!.sessionVersion - 1 }),
@@ -95,13 +99,25 @@ describe('sessions against the running app', () => {
   it('a demotion and a removal take effect on the next request made with the old cookie', async () => {
     const owner = await signInCookie(team.users.owner.email);
     const designer = await signInCookie(team.users.designer.email);
-    const edit = () => live(`/api/projects/${team.projectId}`, { method: 'PATCH', headers: { cookie: designer, 'content-type': 'application/json' }, body: JSON.stringify({ siteNotes: 'Walked the line.' }) });
+    const edit = () =>
+      live(`/api/projects/${team.projectId}`, {
+        method: 'PATCH',
+        headers: { cookie: designer, 'content-type': 'application/json' },
+        body: JSON.stringify({ siteNotes: 'Walked the line.' }),
+      });
     expect((await edit()).status).toBe(200);
-    const demote = await live(`/api/teams/${team.teamId}/members/${team.users.designer.id}`, { method: 'PATCH', headers: { cookie: owner, 'content-type': 'application/json' }, body: JSON.stringify({ role: 'viewer' }) });
+    const demote = await live(`/api/teams/${team.teamId}/members/${team.users.designer.id}`, {
+      method: 'PATCH',
+      headers: { cookie: owner, 'content-type': 'application/json' },
+      body: JSON.stringify({ role: 'viewer' }),
+    });
     expect(demote.status).toBe(200);
     expect((await edit()).status).toBe(403);
     expect((await live(`/api/projects/${team.projectId}`, asCookie(designer))).status).toBe(200);
-    const remove = await live(`/api/teams/${team.teamId}/members/${team.users.designer.id}`, { method: 'DELETE', headers: { cookie: owner } });
+    const remove = await live(`/api/teams/${team.teamId}/members/${team.users.designer.id}`, {
+      method: 'DELETE',
+      headers: { cookie: owner },
+    });
     expect(remove.status).toBe(204);
     expect((await live(`/api/projects/${team.projectId}`, asCookie(designer))).status).toBe(404);
     expect((await edit()).status).toBe(404);

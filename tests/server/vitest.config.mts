@@ -5,7 +5,12 @@ import LogsLastSequencer from './sequencer';
 // Tests against a real `next start` on loopback (started by global-setup.ts after `next build`).
 export default defineConfig({
   root: path.resolve(import.meta.dirname, '../..'),
-  resolve: { alias: { '@': path.resolve(import.meta.dirname, '../..'), 'server-only': path.resolve(import.meta.dirname, '../support/server-only-stub.ts') } },
+  resolve: {
+    alias: {
+      '@': path.resolve(import.meta.dirname, '../..'),
+      'server-only': path.resolve(import.meta.dirname, '../support/server-only-stub.ts'),
+    },
+  },
   test: {
     include: ['tests/server/**/*.test.ts'],
     environment: 'node',

@@ -9,16 +9,25 @@ import { createLineFixture } from './line-fixture';
 import { createRouteFixtures } from './routes';
 
 // One argon2id hash reused by every fixture user: hashing per user would only slow the suite.
-const FIXTURE_HASH = '$argon2id$v=19$m=65536,t=3,p=4$ep57i7k5O57/C8UwlfRrPw$1xC2a4RhR8x32uTIA2yHhQXymRqQ+RHLaAHk6LuXN44';
+const FIXTURE_HASH =
+  '$argon2id$v=19$m=65536,t=3,p=4$ep57i7k5O57/C8UwlfRrPw$1xC2a4RhR8x32uTIA2yHhQXymRqQ+RHLaAHk6LuXN44';
 
 export type Actor = 'anonymous' | 'outsider' | Role;
 export const ACTORS: Actor[] = ['anonymous', 'outsider', 'viewer', 'reviewer', 'surveyor', 'designer', 'owner'];
 
-type RouteHandler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[] | undefined>> }) => Promise<Response>;
+type RouteHandler = (
+  req: NextRequest,
+  ctx: { params: Promise<Record<string, string | string[] | undefined>> },
+) => Promise<Response>;
 
 export async function createUser(label: string): Promise<{ id: string; email: string }> {
   const email = `${label}-${randomUUID().slice(0, 8)}@fixture.test`;
-  const user = await models().User.create({ email, name: `Fixture ${label}`, passwordHash: FIXTURE_HASH, emailVerifiedAt: new Date() });
+  const user = await models().User.create({
+    email,
+    name: `Fixture ${label}`,
+    passwordHash: FIXTURE_HASH,
+    emailVerifiedAt: new Date(),
+  });
   return { id: user.id, email };
 }
 
@@ -36,7 +45,13 @@ export async function createTeamFixture() {
   users.outsider = await createUser('outsider');
   const otherTeam = await Team.create({ name: 'Outsider team' });
   await Membership.create({ teamId: otherTeam.id, userId: users.outsider.id, role: 'owner' });
-  const project = await Project.create({ teamId: team.id, name: 'Fixture project', description: '', siteNotes: '', unitSystem: 'metric' });
+  const project = await Project.create({
+    teamId: team.id,
+    name: 'Fixture project',
+    description: '',
+    siteNotes: '',
+    unitSystem: 'metric',
+  });
   const routes = await createRouteFixtures(project.id, users.surveyor.id);
   const line = await createLineFixture(project.id);
   return { teamId: team.id, projectId: project.id, users, ...routes, lineRouteId: line.routeId, lineId: line.lineId };
@@ -64,13 +79,20 @@ export interface CallOptions {
   headers?: Record<string, string>;
 }
 
-export async function call(handler: RouteHandler, options: CallOptions): Promise<{ status: number; json: any; text: string; bytes: Buffer; headers: Headers }> {
+export async function call(
+  handler: RouteHandler,
+  options: CallOptions,
+): Promise<{ status: number; json: any; text: string; bytes: Buffer; headers: Headers }> {
   const headers: Record<string, string> = { ...(options.headers ?? {}) };
   const cookie = options.cookie ?? (options.userId ? await sessionCookie(options.userId) : undefined);
   if (cookie) headers.cookie = cookie;
   const bodyText = options.rawBody ?? (options.body === undefined ? undefined : JSON.stringify(options.body));
   if (bodyText !== undefined) headers['content-type'] ??= 'application/json';
-  const req = new NextRequest(new URL(options.path, 'http://127.0.0.1:3100'), { method: options.method, headers, body: bodyText as BodyInit | undefined });
+  const req = new NextRequest(new URL(options.path, 'http://127.0.0.1:3100'), {
+    method: options.method,
+    headers,
+    body: bodyText as BodyInit | undefined,
+  });
   const res = await handler(req, { params: Promise.resolve(options.params ?? {}) });
   const bytes = Buffer.from(await res.clone().arrayBuffer());
   const text = await res.text();

@@ -15,7 +15,13 @@ const L = 1e-3;
 
 /** Request bodies (SI) that the API accepts; tests spread and break them. */
 export const sourceBody = () => ({ name: 'Fixture creek', kind: 'creek', notes: '' });
-export const yieldReadingBody = () => ({ measuredOn: '2026-08-20', season: 'dry', bucketVolumeM3: 20 * L, bucketSeconds: 15, note: 'below the weir' });
+export const yieldReadingBody = () => ({
+  measuredOn: '2026-08-20',
+  season: 'dry',
+  bucketVolumeM3: 20 * L,
+  bucketSeconds: 15,
+  note: 'below the weir',
+});
 export const tankBody = () => ({
   name: 'Fixture tank',
   volumeM3: 5,
@@ -23,11 +29,17 @@ export const tankBody = () => ({
   lowLevelM: 0.2,
   overflowLevelM: 1.6,
   supplyKind: 'entered',
-  supplyFlowM3s: 2 * L / 60,
+  supplyFlowM3s: (2 * L) / 60,
   reserveDays: 2,
   outlets: [{ label: 'House', elevationM: 100, residualHeadM: 10, frictionLossM: 2 }],
 });
-export const demandUseBody = () => ({ kind: 'people', count: 4, figureId: 'us-rural-home', deliveryKind: 'peak-factor', peakFactor: 3 });
+export const demandUseBody = () => ({
+  kind: 'people',
+  count: 4,
+  figureId: 'us-rural-home',
+  deliveryKind: 'peak-factor',
+  peakFactor: 3,
+});
 export const seasonalTaskBody = () => ({ kind: 'silt-cleaning', title: 'Clean the settling box', dueOn: '2026-09-01' });
 
 export async function createSourceFixture(projectId: string, userId: string) {

@@ -35,6 +35,11 @@ export async function createRamSiteFixture(projectId: string, userId: string) {
 
 export async function createCommissioningFixture(projectId: string, userId: string) {
   const site = await createRamSiteFixture(projectId, userId);
-  const { reading } = await addCommissioningReading(projectId, site.id, userId, CommissioningReadingSchema.parse(commissioningBody()));
+  const { reading } = await addCommissioningReading(
+    projectId,
+    site.id,
+    userId,
+    CommissioningReadingSchema.parse(commissioningBody()),
+  );
   return { site, reading };
 }

@@ -6,12 +6,28 @@ import { models } from '@/models';
  */
 export async function createLineFixture(projectId: string): Promise<{ routeId: string; lineId: string }> {
   const { Route, RoutePoint, Line } = models();
-  const profile: [number, number][] = [[0, 240], [100, 231], [200, 226], [300, 214], [400, 200]];
+  const profile: [number, number][] = [
+    [0, 240],
+    [100, 231],
+    [200, 226],
+    [300, 214],
+    [400, 200],
+  ];
   const route = await Route.create({ projectId, name: 'Fixture route', pointCount: profile.length, lengthM: 400 });
   await RoutePoint.bulkCreate(
     profile.map(([chainageM, elevationM], seq) => ({
-      routeId: route.id, seq, chainageM, elevationM, rawElevationM: elevationM, heightSource: 'level' as const,
-      latitude: 54.5 + seq * 0.0009, longitude: -2.6, slopeChainageM: null, label: null, confidenceM: null, recordedAt: null,
+      routeId: route.id,
+      seq,
+      chainageM,
+      elevationM,
+      rawElevationM: elevationM,
+      heightSource: 'level' as const,
+      latitude: 54.5 + seq * 0.0009,
+      longitude: -2.6,
+      slopeChainageM: null,
+      label: null,
+      confidenceM: null,
+      recordedAt: null,
     })),
   );
   const line = await Line.create({

@@ -12,7 +12,10 @@ export function multipartBody(parts: readonly FormPart[]): { body: Uint8Array; c
   const enc = new TextEncoder();
   const chunks: Uint8Array[] = [];
   for (const p of parts) {
-    const disposition = p.fileName === undefined ? `form-data; name="${p.name}"` : `form-data; name="${p.name}"; filename="${p.fileName}"`;
+    const disposition =
+      p.fileName === undefined
+        ? `form-data; name="${p.name}"`
+        : `form-data; name="${p.name}"; filename="${p.fileName}"`;
     const type = p.fileName === undefined ? '' : `Content-Type: ${p.contentType ?? 'application/octet-stream'}\r\n`;
     chunks.push(enc.encode(`--${boundary}\r\nContent-Disposition: ${disposition}\r\n${type}\r\n`));
     chunks.push(typeof p.value === 'string' ? enc.encode(p.value) : p.value);
@@ -29,9 +32,18 @@ export function multipartBody(parts: readonly FormPart[]): { body: Uint8Array; c
 }
 
 /** A survey upload: the file and the import options, as the import screen sends them. */
-export function surveyUpload(fileName: string, content: string | Uint8Array, options: unknown): { body: Uint8Array; contentType: string } {
+export function surveyUpload(
+  fileName: string,
+  content: string | Uint8Array,
+  options: unknown,
+): { body: Uint8Array; contentType: string } {
   return multipartBody([
-    { name: 'file', value: content, fileName, contentType: fileName.endsWith('.gpx') ? 'application/gpx+xml' : 'text/csv' },
+    {
+      name: 'file',
+      value: content,
+      fileName,
+      contentType: fileName.endsWith('.gpx') ? 'application/gpx+xml' : 'text/csv',
+    },
     { name: 'options', value: JSON.stringify(options) },
   ]);
 }

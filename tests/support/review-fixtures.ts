@@ -10,7 +10,11 @@ export async function createRevisionFixture(
 ): Promise<{ id: string; number: number }> {
   const author = await models().User.findByPk(authorId);
   if (!author) throw new Error('fixture author is gone');
-  const made = await createRevision(f.projectId, { id: author.id, email: author.email, name: author.name, sessionVersion: author.sessionVersion }, { note: 'Fixture revision', submit: false });
+  const made = await createRevision(
+    f.projectId,
+    { id: author.id, email: author.email, name: author.name, sessionVersion: author.sessionVersion },
+    { note: 'Fixture revision', submit: false },
+  );
   const reviewed = ['approved', 'issued', 'superseded', 'changes-requested'].includes(status);
   await models().Revision.update(
     { status, ...(reviewed ? { reviewedBy: f.users.reviewer.id, reviewedAt: new Date('2026-12-01T09:00:00Z') } : {}) },
@@ -20,10 +24,18 @@ export async function createRevisionFixture(
 }
 
 /** A comment by the reviewer on the working copy, pinned at ch. 120 m of the fixture line. */
-export async function createCommentFixture(f: { projectId: string; lineId: string; users: Record<string, { id: string }> }): Promise<{ id: string }> {
+export async function createCommentFixture(f: {
+  projectId: string;
+  lineId: string;
+  users: Record<string, { id: string }>;
+}): Promise<{ id: string }> {
   const row = await models().Comment.create({
-    projectId: f.projectId, revisionId: null, parentId: null, authorId: f.users.reviewer.id,
-    body: 'Is the class right in the sag?', anchor: { kind: 'line-chainage', lineId: f.lineId, chainageM: 120 },
+    projectId: f.projectId,
+    revisionId: null,
+    parentId: null,
+    authorId: f.users.reviewer.id,
+    body: 'Is the class right in the sag?',
+    anchor: { kind: 'line-chainage', lineId: f.lineId, chainageM: 120 },
   });
   return { id: row.id };
 }

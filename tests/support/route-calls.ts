@@ -9,7 +9,14 @@ import { surveyUpload } from './multipart';
 export const fixtureText = (name: string) => readFileSync(path.join(__dirname, '../fixtures/survey', name), 'utf8');
 
 /** Uploads a survey file through the import handler as `userId`. */
-export async function importFile(userId: string, projectId: string, fileName: string, content: string | Uint8Array, options: Record<string, unknown>, headers: Record<string, string> = {}) {
+export async function importFile(
+  userId: string,
+  projectId: string,
+  fileName: string,
+  content: string | Uint8Array,
+  options: Record<string, unknown>,
+  headers: Record<string, string> = {},
+) {
   const upload = surveyUpload(fileName, content, options);
   return call(importRoute.POST, {
     method: 'POST',
@@ -22,7 +29,12 @@ export async function importFile(userId: string, projectId: string, fileName: st
 }
 
 export async function readRoute(userId: string, routeId: string) {
-  const res = await call(routeRoute.GET, { method: 'GET', path: `/api/routes/${routeId}`, params: { routeId }, userId });
+  const res = await call(routeRoute.GET, {
+    method: 'GET',
+    path: `/api/routes/${routeId}`,
+    params: { routeId },
+    userId,
+  });
   if (res.status !== 200) throw new Error(`reading route ${routeId} gave ${res.status}: ${JSON.stringify(res.json)}`);
   return res.json;
 }
@@ -39,7 +51,9 @@ export function gpsTrackCsv(count: number, spikes: Record<number, number> = {}):
   for (let i = 0; i < count; i += 1) {
     const lat = 54.2 + i * 0.00009; // ≈ 10 m north per fix
     const ele = 400 - i * 0.8 + (spikes[i] ?? 0);
-    rows.push(`${lat.toFixed(6)},-2.95,${ele.toFixed(2)},2025-06-01T08:${String(Math.floor(i / 60)).padStart(2, '0')}:${String(i % 60).padStart(2, '0')}Z`);
+    rows.push(
+      `${lat.toFixed(6)},-2.95,${ele.toFixed(2)},2025-06-01T08:${String(Math.floor(i / 60)).padStart(2, '0')}:${String(i % 60).padStart(2, '0')}Z`,
+    );
   }
   return `${rows.join('\n')}\n`;
 }

@@ -15,12 +15,17 @@ export const metadata: Metadata = { title: 'Your account' };
 export default async function AccountPage() {
   const user = await requireUser();
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: notificationKeys.mine, queryFn: () => getNotificationPreferences(user.id) });
+  await queryClient.prefetchQuery({
+    queryKey: notificationKeys.mine,
+    queryFn: () => getNotificationPreferences(user.id),
+  });
   return (
     <div className="max-w-2xl space-y-6">
       <div>
         <h1 className="text-2xl font-semibold text-creek-900">Your account</h1>
-        <p className="text-sm text-creek-700">{user.name} · {user.email}</p>
+        <p className="text-sm text-creek-700">
+          {user.name} · {user.email}
+        </p>
       </div>
       <Panel title="Mail you get">
         <HydrationBoundary state={dehydrate(queryClient)}>

@@ -4,7 +4,9 @@ export default function Loading() {
   return (
     <div className="space-y-3" aria-busy="true" aria-label="Loading team">
       <Skeleton className="h-8 w-56" />
-      {[0, 1, 2, 3].map((i) => <Skeleton key={i} className="h-10 w-full" />)}
+      {[0, 1, 2, 3].map((i) => (
+        <Skeleton key={i} className="h-10 w-full" />
+      ))}
     </div>
   );
 }

@@ -28,8 +28,15 @@ export default async function TeamPage() {
   const manage = can(role, 'team.manage');
 
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: memberKeys.team(team.id), queryFn: () => listMembers(team.id, { userId: user.id, role }) });
-  if (manage) await queryClient.prefetchQuery({ queryKey: invitationKeys.team(team.id), queryFn: () => listOpenInvitations(team.id) });
+  await queryClient.prefetchQuery({
+    queryKey: memberKeys.team(team.id),
+    queryFn: () => listMembers(team.id, { userId: user.id, role }),
+  });
+  if (manage)
+    await queryClient.prefetchQuery({
+      queryKey: invitationKeys.team(team.id),
+      queryFn: () => listOpenInvitations(team.id),
+    });
 
   return (
     <div className="space-y-6">
@@ -40,7 +47,9 @@ export default async function TeamPage() {
       <HydrationBoundary state={dehydrate(queryClient)}>
         {manage && (
           <Panel title="Invite someone">
-            <p className="mb-3 text-sm text-creek-700">People join only through an invitation: we mail them a link that works once, for 7 days.</p>
+            <p className="mb-3 text-sm text-creek-700">
+              People join only through an invitation: we mail them a link that works once, for 7 days.
+            </p>
             <InviteForm teamId={team.id} />
             <h3 className="mb-2 mt-5 text-sm font-semibold text-creek-900">Waiting for an answer</h3>
             <Suspense fallback={<InvitationsTableSkeleton />}>
@@ -54,7 +63,10 @@ export default async function TeamPage() {
       </HydrationBoundary>
       <Panel title="Pipe prices">
         <p className="text-sm text-creek-700">
-          Least-cost sizing chooses among the pipes the team has priced. <Link className="underline" href="/team/prices">Edit the price list</Link>
+          Least-cost sizing chooses among the pipes the team has priced.{' '}
+          <Link className="underline" href="/team/prices">
+            Edit the price list
+          </Link>
         </p>
       </Panel>
       <Panel title="Teams">
@@ -69,11 +81,22 @@ function RoleGuide() {
   return (
     <Panel title="What each role can do">
       <ul className="grid gap-2 text-sm text-creek-800 sm:grid-cols-2">
-        <li><strong>Owner</strong>: everything, including members, roles and deleting projects.</li>
-        <li><strong>Designer</strong>: creates and edits projects, lines, pipes and demands; runs analyses; exports.</li>
-        <li><strong>Surveyor</strong>: creates and edits survey routes and points; uploads files and photos; views designs.</li>
-        <li><strong>Reviewer</strong>: views everything; comments; approves or asks for changes on a revision.</li>
-        <li><strong>Viewer (client)</strong>: views and exports approved designs.</li>
+        <li>
+          <strong>Owner</strong>: everything, including members, roles and deleting projects.
+        </li>
+        <li>
+          <strong>Designer</strong>: creates and edits projects, lines, pipes and demands; runs analyses; exports.
+        </li>
+        <li>
+          <strong>Surveyor</strong>: creates and edits survey routes and points; uploads files and photos; views
+          designs.
+        </li>
+        <li>
+          <strong>Reviewer</strong>: views everything; comments; approves or asks for changes on a revision.
+        </li>
+        <li>
+          <strong>Viewer (client)</strong>: views and exports approved designs.
+        </li>
       </ul>
     </Panel>
   );

@@ -10,7 +10,9 @@ export default async function ConfirmEmailPage({ searchParams }: { searchParams:
   return (
     <>
       <h1 className="mb-2 text-xl font-semibold text-creek-900">Confirm your address</h1>
-      <p className="mb-4 text-sm text-creek-700">One click and your Runnel account is ready, with a team of your own.</p>
+      <p className="mb-4 text-sm text-creek-700">
+        One click and your Runnel account is ready, with a team of your own.
+      </p>
       <ConfirmEmailForm token={token} />
     </>
   );

@@ -6,7 +6,10 @@ import { readiness } from '@/lib/data/readiness';
 export const GET = publicRoute({}, async () => {
   const state = await readiness();
   if (!state.ready) {
-    const why = state.database === 'unreachable' ? 'the database cannot be reached' : `${state.pendingMigrations} migration(s) have not run`;
+    const why =
+      state.database === 'unreachable'
+        ? 'the database cannot be reached'
+        : `${state.pendingMigrations} migration(s) have not run`;
     throw new AppError('service_unavailable', `Not ready: ${why}`, undefined, { retryAfterSeconds: 5 });
   }
   return { status: 'ready', database: state.database, pendingMigrations: 0 };

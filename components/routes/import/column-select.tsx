@@ -11,7 +11,10 @@ export interface ColumnSelectProps {
 export function ColumnSelect({ id, label, headers, value, required, onChange }: ColumnSelectProps) {
   return (
     <div className="text-sm">
-      <label htmlFor={id} className="block font-medium text-creek-900">{label}{required && <span className="text-clay-600"> *</span>}</label>
+      <label htmlFor={id} className="block font-medium text-creek-900">
+        {label}
+        {required && <span className="text-clay-600"> *</span>}
+      </label>
       <select
         id={id}
         value={value === null ? '' : String(value)}
@@ -28,7 +31,17 @@ export function ColumnSelect({ id, label, headers, value, required, onChange }: 
   );
 }
 
-export function UnitToggle({ name, legend, value, onChange }: { name: string; legend: string; value: 'm' | 'ft'; onChange: (v: 'm' | 'ft') => void }) {
+export function UnitToggle({
+  name,
+  legend,
+  value,
+  onChange,
+}: {
+  name: string;
+  legend: string;
+  value: 'm' | 'ft';
+  onChange: (v: 'm' | 'ft') => void;
+}) {
   return (
     <fieldset className="text-sm">
       <legend className="font-medium text-creek-900">{legend}</legend>

@@ -22,23 +22,47 @@ const STATION_FIELDS: { key: keyof StationColumnMapping; label: string; required
 
 /** Column mapping of a phone or handheld GPS CSV, with height units and source. */
 export function GpsColumns({ draft, headers, update }: { draft: MappingDraft; headers: string[]; update: Update }) {
-  const setColumn = (key: keyof GpsColumnMapping, value: number | null) => update((d) => ({ ...d, gps: { ...d.gps, mapping: { ...d.gps.mapping, [key]: value } } }));
+  const setColumn = (key: keyof GpsColumnMapping, value: number | null) =>
+    update((d) => ({ ...d, gps: { ...d.gps, mapping: { ...d.gps.mapping, [key]: value } } }));
   return (
     <div className="space-y-3">
       <div className="grid gap-3 sm:grid-cols-3">
         {GPS_FIELDS.map((f) => (
-          <ColumnSelect key={f.key} id={`col-${f.key}`} label={f.label} headers={headers} value={draft.gps.mapping[f.key]} required={f.required} onChange={(v) => setColumn(f.key, v)} />
+          <ColumnSelect
+            key={f.key}
+            id={`col-${f.key}`}
+            label={f.label}
+            headers={headers}
+            value={draft.gps.mapping[f.key]}
+            required={f.required}
+            onChange={(v) => setColumn(f.key, v)}
+          />
         ))}
       </div>
       <div className="flex flex-wrap items-end gap-6">
-        <UnitToggle name="gps-elevation-unit" legend="Elevation is in" value={draft.gps.elevationUnit} onChange={(u) => update((d) => ({ ...d, gps: { ...d.gps, elevationUnit: u } }))} />
+        <UnitToggle
+          name="gps-elevation-unit"
+          legend="Elevation is in"
+          value={draft.gps.elevationUnit}
+          onChange={(u) => update((d) => ({ ...d, gps: { ...d.gps, elevationUnit: u } }))}
+        />
         {draft.gps.mapping.accuracy !== null && (
           <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={draft.gps.accuracyIsVertical} onChange={(e) => update((d) => ({ ...d, gps: { ...d.gps, accuracyIsVertical: e.target.checked } }))} />
+            <input
+              type="checkbox"
+              checked={draft.gps.accuracyIsVertical}
+              onChange={(e) => update((d) => ({ ...d, gps: { ...d.gps, accuracyIsVertical: e.target.checked } }))}
+            />
             Accuracy is vertical (otherwise horizontal, taken ×1.5 for height)
           </label>
         )}
-        <div className="w-64"><HeightSourceSelect id="gps-height-source" value={draft.gps.heightSource} onChange={(v) => update((d) => ({ ...d, gps: { ...d.gps, heightSource: v } }))} /></div>
+        <div className="w-64">
+          <HeightSourceSelect
+            id="gps-height-source"
+            value={draft.gps.heightSource}
+            onChange={(v) => update((d) => ({ ...d, gps: { ...d.gps, heightSource: v } }))}
+          />
+        </div>
       </div>
     </div>
   );
@@ -46,18 +70,43 @@ export function GpsColumns({ draft, headers, update }: { draft: MappingDraft; he
 
 /** Column mapping of a station/elevation table. */
 export function StationColumns({ draft, headers, update }: { draft: MappingDraft; headers: string[]; update: Update }) {
-  const setColumn = (key: keyof StationColumnMapping, value: number | null) => update((d) => ({ ...d, station: { ...d.station, mapping: { ...d.station.mapping, [key]: value } } }));
+  const setColumn = (key: keyof StationColumnMapping, value: number | null) =>
+    update((d) => ({ ...d, station: { ...d.station, mapping: { ...d.station.mapping, [key]: value } } }));
   return (
     <div className="space-y-3">
       <div className="grid gap-3 sm:grid-cols-3">
         {STATION_FIELDS.map((f) => (
-          <ColumnSelect key={f.key} id={`col-${f.key}`} label={f.label} headers={headers} value={draft.station.mapping[f.key]} required={f.required} onChange={(v) => setColumn(f.key, v)} />
+          <ColumnSelect
+            key={f.key}
+            id={`col-${f.key}`}
+            label={f.label}
+            headers={headers}
+            value={draft.station.mapping[f.key]}
+            required={f.required}
+            onChange={(v) => setColumn(f.key, v)}
+          />
         ))}
       </div>
       <div className="flex flex-wrap items-end gap-6">
-        <UnitToggle name="station-chainage-unit" legend="Chainage is in" value={draft.station.chainageUnit} onChange={(u) => update((d) => ({ ...d, station: { ...d.station, chainageUnit: u } }))} />
-        <UnitToggle name="station-elevation-unit" legend="Elevation is in" value={draft.station.elevationUnit} onChange={(u) => update((d) => ({ ...d, station: { ...d.station, elevationUnit: u } }))} />
-        <div className="w-64"><HeightSourceSelect id="station-height-source" value={draft.station.heightSource} onChange={(v) => update((d) => ({ ...d, station: { ...d.station, heightSource: v } }))} /></div>
+        <UnitToggle
+          name="station-chainage-unit"
+          legend="Chainage is in"
+          value={draft.station.chainageUnit}
+          onChange={(u) => update((d) => ({ ...d, station: { ...d.station, chainageUnit: u } }))}
+        />
+        <UnitToggle
+          name="station-elevation-unit"
+          legend="Elevation is in"
+          value={draft.station.elevationUnit}
+          onChange={(u) => update((d) => ({ ...d, station: { ...d.station, elevationUnit: u } }))}
+        />
+        <div className="w-64">
+          <HeightSourceSelect
+            id="station-height-source"
+            value={draft.station.heightSource}
+            onChange={(v) => update((d) => ({ ...d, station: { ...d.station, heightSource: v } }))}
+          />
+        </div>
       </div>
     </div>
   );
@@ -67,7 +116,8 @@ export function StationColumns({ draft, headers, update }: { draft: MappingDraft
 export function columnRoles(draft: MappingDraft): Record<number, string> {
   const roles: Record<number, string> = {};
   const fields = draft.format === 'gps-csv' ? GPS_FIELDS : draft.format === 'station-csv' ? STATION_FIELDS : [];
-  const mapping: Record<string, number | null> = draft.format === 'gps-csv' ? { ...draft.gps.mapping } : { ...draft.station.mapping };
+  const mapping: Record<string, number | null> =
+    draft.format === 'gps-csv' ? { ...draft.gps.mapping } : { ...draft.station.mapping };
   for (const f of fields) {
     const i = mapping[f.key];
     if (i !== null && i !== undefined) roles[i] = f.label.split(' ')[0].toLowerCase();

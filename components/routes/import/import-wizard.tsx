@@ -18,7 +18,11 @@ import { PreviewStep } from './preview-step';
 import { formatNumber } from '@/lib/units';
 
 type Phase = 'pick' | 'mapping' | 'preview';
-interface Progress { label: string; detail: string; fraction: number }
+interface Progress {
+  label: string;
+  detail: string;
+  fraction: number;
+}
 
 export interface ImportWizardProps {
   projectId: string;
@@ -57,7 +61,9 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
     setBusy(true);
     setProgress({ label: 'Reading the file', detail: `Reading “${chosen.name}”`, fraction: 0 });
     try {
-      const result = await worker.inspect(chosen, (fraction) => setProgress({ label: 'Reading the file', detail: `Reading “${chosen.name}”`, fraction }));
+      const result = await worker.inspect(chosen, (fraction) =>
+        setProgress({ label: 'Reading the file', detail: `Reading “${chosen.name}”`, fraction }),
+      );
       setInspection(result.inspection);
       setDraft(initialMappingDraft(result.inspection, chosen.name, timeZone));
       setPhase('mapping');
@@ -90,14 +96,17 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
     const label = 'Reading rows';
     setProgress({ label, detail: 'Reading rows', fraction: 0 });
     try {
-      const result = await worker.parse(built.options, (fraction) => setProgress({ label, detail: 'Reading rows', fraction }));
+      const result = await worker.parse(built.options, (fraction) =>
+        setProgress({ label, detail: 'Reading rows', fraction }),
+      );
       setOptions(built.options);
       setPreview(result);
       setProgress({ label, detail: `Read ${formatNumber(result.stats.rowsRead, 0)} rows`, fraction: 1 });
       setPhase('preview');
     } catch (error) {
       setProgress(null);
-      if (error instanceof ImportProblem) setProblem(`The file could not be read with these settings: ${error.message}`);
+      if (error instanceof ImportProblem)
+        setProblem(`The file could not be read with these settings: ${error.message}`);
       else report(error);
     } finally {
       setBusy(false);
@@ -110,7 +119,11 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
     const label = 'Uploading';
     setProgress({ label, detail: 'Uploading and saving', fraction: 0 });
     try {
-      const result = await upload.mutateAsync({ file, options, onProgress: (fraction) => setProgress({ label, detail: 'Uploading and saving', fraction }) });
+      const result = await upload.mutateAsync({
+        file,
+        options,
+        onProgress: (fraction) => setProgress({ label, detail: 'Uploading and saving', fraction }),
+      });
       router.push(`/projects/${projectId}/routes/${result.route.id}${smooth ? '?propose=smoothing' : ''}`);
     } catch (error) {
       setProgress(null);
@@ -121,7 +134,9 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
   return (
     <div className="space-y-5">
       <div>
-        <label htmlFor="survey-file" className="block text-sm font-medium text-creek-900">Survey file (CSV or GPX, up to 50 MB)</label>
+        <label htmlFor="survey-file" className="block text-sm font-medium text-creek-900">
+          Survey file (CSV or GPX, up to 50 MB)
+        </label>
         <input
           id="survey-file"
           type="file"
@@ -130,7 +145,10 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
           onChange={(e) => onFile(e.target.files?.[0])}
           className="mt-1 block text-sm file:mr-3 file:rounded-md file:border-0 file:bg-creek-700 file:px-3 file:py-2 file:text-white"
         />
-        <p className="mt-1 text-xs text-creek-600">Walked tracks from a phone or handheld receiver (CSV or GPX 1.1), station and height tables, clinometer traverses and level books. The file is read here first; nothing is saved until you say so.</p>
+        <p className="mt-1 text-xs text-creek-600">
+          Walked tracks from a phone or handheld receiver (CSV or GPX 1.1), station and height tables, clinometer
+          traverses and level books. The file is read here first; nothing is saved until you say so.
+        </p>
       </div>
       {progress && <ProgressBar label={progress.label} detail={progress.detail} fraction={progress.fraction} />}
       <FormMessage message={problem} />
@@ -138,16 +156,34 @@ export function ImportWizard({ projectId, units, timeZone = null }: ImportWizard
         <section aria-label="Mapping" className={phase === 'preview' ? 'opacity-60' : undefined}>
           <h2 className="mb-2 text-base font-semibold text-creek-900">Check the columns</h2>
           {phase === 'mapping' ? (
-            <MappingStep fileName={file.name} inspection={inspection} draft={draft} units={units} errors={errors} busy={busy} update={(change) => setDraft((d) => (d ? change(d) : d))} onDialect={onDialect} onSubmit={onRead} />
+            <MappingStep
+              fileName={file.name}
+              inspection={inspection}
+              draft={draft}
+              units={units}
+              errors={errors}
+              busy={busy}
+              update={(change) => setDraft((d) => (d ? change(d) : d))}
+              onDialect={onDialect}
+              onSubmit={onRead}
+            />
           ) : (
-            <p className="text-sm text-creek-700">“{draft.name}” from {file.name}.</p>
+            <p className="text-sm text-creek-700">
+              “{draft.name}” from {file.name}.
+            </p>
           )}
         </section>
       )}
       {phase === 'preview' && preview && (
         <section aria-label="Preview">
           <h2 className="mb-2 text-base font-semibold text-creek-900">Preview</h2>
-          <PreviewStep preview={preview} units={units} saving={upload.isPending} onBack={() => setPhase('mapping')} onSave={onSave} />
+          <PreviewStep
+            preview={preview}
+            units={units}
+            saving={upload.isPending}
+            onBack={() => setPhase('mapping')}
+            onSave={onSave}
+          />
         </section>
       )}
     </div>

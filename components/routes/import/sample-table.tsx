@@ -15,7 +15,11 @@ export function SampleTable({ headers, rows, roles }: SampleTableProps) {
           <tr>
             {headers.map((h, i) => (
               <th key={i} scope="col" className="px-2 py-1.5 align-bottom font-medium">
-                <span className={`block text-[10px] uppercase tracking-wide ${roles[i] ? 'text-moss-700' : 'text-creek-400'}`}>{roles[i] ?? 'not used'}</span>
+                <span
+                  className={`block text-[10px] uppercase tracking-wide ${roles[i] ? 'text-moss-700' : 'text-creek-400'}`}
+                >
+                  {roles[i] ?? 'not used'}
+                </span>
                 {h}
               </th>
             ))}
@@ -25,7 +29,9 @@ export function SampleTable({ headers, rows, roles }: SampleTableProps) {
           {rows.map((r, k) => (
             <tr key={k} className="border-t border-creek-50">
               {headers.map((_, i) => (
-                <td key={i} className={`tabular px-2 py-1 ${roles[i] ? 'text-creek-950' : 'text-creek-400'}`}>{r[i] ?? ''}</td>
+                <td key={i} className={`tabular px-2 py-1 ${roles[i] ? 'text-creek-950' : 'text-creek-400'}`}>
+                  {r[i] ?? ''}
+                </td>
               ))}
             </tr>
           ))}

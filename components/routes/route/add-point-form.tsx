@@ -32,10 +32,13 @@ export function AddPointForm({ offset = 0, count, units, positioned, dispatch }:
     const lon = num(form.get('lon'));
     const chainage = num(form.get('chainage'));
     if (!Number.isInteger(after) || after < offset || after > offset + count) {
-      return setError(`“After point” must be a whole number from ${offset} to ${offset + count}${offset > 0 || count > 0 ? ' (the points on this page)' : ''}`);
+      return setError(
+        `“After point” must be a whole number from ${offset} to ${offset + count}${offset > 0 || count > 0 ? ' (the points on this page)' : ''}`,
+      );
     }
     if (!Number.isFinite(elevation)) return setError('Give the elevation');
-    if (positioned && (!(Math.abs(lat) <= 90) || !(Math.abs(lon) <= 180))) return setError('Give a latitude (−90 to 90) and longitude (−180 to 180)');
+    if (positioned && (!(Math.abs(lat) <= 90) || !(Math.abs(lon) <= 180)))
+      return setError('Give a latitude (−90 to 90) and longitude (−180 to 180)');
     if (!positioned && !(chainage >= 0)) return setError('Give a chainage of zero or more');
     setError(null);
     dispatch({
@@ -57,19 +60,41 @@ export function AddPointForm({ offset = 0, count, units, positioned, dispatch }:
   const input = 'mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1 text-sm';
   return (
     <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3 text-sm" aria-label="Add a point" noValidate>
-      <label>After point<input key={offset + count} name="after" defaultValue={offset + count} inputMode="numeric" className={input} /></label>
+      <label>
+        After point
+        <input key={offset + count} name="after" defaultValue={offset + count} inputMode="numeric" className={input} />
+      </label>
       {positioned ? (
         <>
-          <label>Latitude<input name="lat" inputMode="decimal" className={input} /></label>
-          <label>Longitude<input name="lon" inputMode="decimal" className={input} /></label>
+          <label>
+            Latitude
+            <input name="lat" inputMode="decimal" className={input} />
+          </label>
+          <label>
+            Longitude
+            <input name="lon" inputMode="decimal" className={input} />
+          </label>
         </>
       ) : (
-        <label>Chainage ({u})<input name="chainage" inputMode="decimal" className={input} /></label>
+        <label>
+          Chainage ({u})<input name="chainage" inputMode="decimal" className={input} />
+        </label>
       )}
-      <label>Elevation ({u})<input name="elevation" inputMode="decimal" className={input} /></label>
-      <label>Label<input name="label" className={`${input} w-40`} /></label>
-      <Button type="submit" tone="quiet">Add point</Button>
-      {error && <p role="alert" className="w-full text-xs text-clay-600">{error}</p>}
+      <label>
+        Elevation ({u})<input name="elevation" inputMode="decimal" className={input} />
+      </label>
+      <label>
+        Label
+        <input name="label" className={`${input} w-40`} />
+      </label>
+      <Button type="submit" tone="quiet">
+        Add point
+      </Button>
+      {error && (
+        <p role="alert" className="w-full text-xs text-clay-600">
+          {error}
+        </p>
+      )}
     </form>
   );
 }

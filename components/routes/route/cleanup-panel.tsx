@@ -87,7 +87,10 @@ export function CleanupPanel({ view, units, editable, blocked, onShowPoint }: Cl
       if (kind === 'smoothing') return void ask({ smoothingWindow: whole('window', 'The window') });
       const elevationM = fromDisplay('length', typedNumber(String(form.get('benchmark-elevation') ?? '')), units);
       if (!Number.isFinite(elevationM)) throw new Error('Give the known elevation');
-      void ask({ benchmarkPoint: whole('benchmark-point', 'The point'), benchmarkElevationM: Number(elevationM.toFixed(6)) });
+      void ask({
+        benchmarkPoint: whole('benchmark-point', 'The point'),
+        benchmarkElevationM: Number(elevationM.toFixed(6)),
+      });
     } catch (error) {
       setMessage(error instanceof Error ? error.message : 'Could not propose that.');
     }
@@ -97,16 +100,32 @@ export function CleanupPanel({ view, units, editable, blocked, onShowPoint }: Cl
   const list = (items: RouteProposal[]) => (
     <ul>
       {items.slice(0, SHOWN).map((p) => (
-        <ProposalItem key={`${p.kind}-${p.index}`} proposal={p} chainageM={chainage.get(p.index)} units={units} editable={editable} disabled={disabled} onDecide={(d) => send(d === 'accept' ? [p] : [], d === 'reject' ? [p] : [])} onShow={() => onShowPoint(p.index)} />
+        <ProposalItem
+          key={`${p.kind}-${p.index}`}
+          proposal={p}
+          chainageM={chainage.get(p.index)}
+          units={units}
+          editable={editable}
+          disabled={disabled}
+          onDecide={(d) => send(d === 'accept' ? [p] : [], d === 'reject' ? [p] : [])}
+          onShow={() => onShowPoint(p.index)}
+        />
       ))}
     </ul>
   );
 
   return (
-    <Panel title="Clean-up" aside={<span className="text-xs text-creek-600">The surveyed heights are always kept.</span>}>
-      {blocked && editable && <p className="mb-2 text-sm text-ochre-700">Save or discard your table edits before deciding on clean-ups.</p>}
+    <Panel
+      title="Clean-up"
+      aside={<span className="text-xs text-creek-600">The surveyed heights are always kept.</span>}
+    >
+      {blocked && editable && (
+        <p className="mb-2 text-sm text-ochre-700">Save or discard your table edits before deciding on clean-ups.</p>
+      )}
       {view.proposals.length === 0 ? (
-        <p className="text-sm text-creek-700">The checks (spikes, outliers, duplicates, points out of order) found nothing to look at.</p>
+        <p className="text-sm text-creek-700">
+          The checks (spikes, outliers, duplicates, points out of order) found nothing to look at.
+        </p>
       ) : (
         <>
           <h3 className="text-sm font-medium text-creek-900">Found by the checks ({view.proposals.length})</h3>
@@ -116,13 +135,44 @@ export function CleanupPanel({ view, units, editable, blocked, onShowPoint }: Cl
       {editable && (
         <div className="mt-4 flex flex-wrap gap-6 border-t border-creek-100 pt-3 text-sm">
           <form onSubmit={(e) => propose(e, 'smoothing')} className="flex items-end gap-2" aria-label="Smoothing">
-            <label>Moving-median window (points)<input name="window" defaultValue={5} inputMode="numeric" className="mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1" /></label>
-            <Button type="submit" tone="quiet" disabled={disabled}>Propose smoothing</Button>
+            <label>
+              Moving-median window (points)
+              <input
+                name="window"
+                defaultValue={5}
+                inputMode="numeric"
+                className="mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1"
+              />
+            </label>
+            <Button type="submit" tone="quiet" disabled={disabled}>
+              Propose smoothing
+            </Button>
           </form>
-          <form onSubmit={(e) => propose(e, 'benchmark')} className="flex items-end gap-2" aria-label="Benchmark offset">
-            <label>Point of known height<input name="benchmark-point" defaultValue={1} inputMode="numeric" className="mt-1 block w-20 rounded-md border border-creek-200 px-2 py-1" /></label>
-            <label>Its known elevation ({u})<input name="benchmark-elevation" inputMode="decimal" className="mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1" /></label>
-            <Button type="submit" tone="quiet" disabled={disabled}>Propose offset</Button>
+          <form
+            onSubmit={(e) => propose(e, 'benchmark')}
+            className="flex items-end gap-2"
+            aria-label="Benchmark offset"
+          >
+            <label>
+              Point of known height
+              <input
+                name="benchmark-point"
+                defaultValue={1}
+                inputMode="numeric"
+                className="mt-1 block w-20 rounded-md border border-creek-200 px-2 py-1"
+              />
+            </label>
+            <label>
+              Its known elevation ({u})
+              <input
+                name="benchmark-elevation"
+                inputMode="decimal"
+                className="mt-1 block w-28 rounded-md border border-creek-200 px-2 py-1"
+              />
+            </label>
+            <Button type="submit" tone="quiet" disabled={disabled}>
+              Propose offset
+            </Button>
           </form>
         </div>
       )}
@@ -130,18 +180,25 @@ export function CleanupPanel({ view, units, editable, blocked, onShowPoint }: Cl
         <div className="mt-3">
           {proposedOnImport && (
             <p className="mb-2 text-sm text-creek-700" data-testid="import-smoothing-note">
-              Proposed on import: the heights come from a consumer GPS, so a moving median of {IMPORT_SMOOTHING_WINDOW} points is offered. Summits and lows that stand out of the survey&apos;s scatter keep their heights.
+              Proposed on import: the heights come from a consumer GPS, so a moving median of {IMPORT_SMOOTHING_WINDOW}{' '}
+              points is offered. Summits and lows that stand out of the survey&apos;s scatter keep their heights.
             </p>
           )}
           <div className="flex flex-wrap items-center gap-3">
             <h3 className="text-sm font-medium text-creek-900">Requested ({requested.proposals.length} changes)</h3>
-            <Button className="px-2.5 py-1" disabled={disabled} onClick={() => send(requested.proposals, [])}>Accept all {requested.proposals.length}</Button>
-            <Button tone="quiet" className="px-2.5 py-1" onClick={() => setRequested(() => [])}>Discard</Button>
+            <Button className="px-2.5 py-1" disabled={disabled} onClick={() => send(requested.proposals, [])}>
+              Accept all {requested.proposals.length}
+            </Button>
+            <Button tone="quiet" className="px-2.5 py-1" onClick={() => setRequested(() => [])}>
+              Discard
+            </Button>
           </div>
           {list(requested.proposals)}
         </div>
       )}
-      <div className="mt-2"><FormMessage message={message} /></div>
+      <div className="mt-2">
+        <FormMessage message={message} />
+      </div>
     </Panel>
   );
 }

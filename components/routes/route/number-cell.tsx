@@ -53,7 +53,11 @@ export function NumberCell({ label, value, digits, allowEmpty = false, onCommit 
         aria-invalid={error ? true : undefined}
         className="tabular w-24 rounded border border-creek-100 px-1.5 py-0.5 text-right text-sm aria-[invalid=true]:border-clay-500"
       />
-      {error && <span role="alert" className="block text-xs text-clay-600">{error}</span>}
+      {error && (
+        <span role="alert" className="block text-xs text-clay-600">
+          {error}
+        </span>
+      )}
     </span>
   );
 }

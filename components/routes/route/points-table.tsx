@@ -28,7 +28,20 @@ export interface PointsTableProps {
 }
 
 /** The route's stations, a page at a time as read from the server, with cleaned and surveyed heights side by side. */
-export function PointsTable({ points, offset, total, units, editable, positioned, flagged, page, pageCount, onPage, pagingBlocked, dispatch }: PointsTableProps) {
+export function PointsTable({
+  points,
+  offset,
+  total,
+  units,
+  editable,
+  positioned,
+  flagged,
+  page,
+  pageCount,
+  onPage,
+  pagingBlocked,
+  dispatch,
+}: PointsTableProps) {
   const current = Math.min(page, pageCount - 1);
   const u = unitOf('length', units);
   return (
@@ -37,15 +50,35 @@ export function PointsTable({ points, offset, total, units, editable, positioned
         <table className="w-full text-left text-sm" aria-label="Route points">
           <thead className="bg-creek-50 text-xs text-creek-800">
             <tr>
-              <th scope="col" className="px-2 py-1.5">#</th>
-              <th scope="col" className="px-2 py-1.5 text-right">Chainage ({u})</th>
-              <th scope="col" className="px-2 py-1.5 text-right">Elevation ({u})</th>
-              <th scope="col" className="px-2 py-1.5 text-right">As surveyed ({u})</th>
-              <th scope="col" className="px-2 py-1.5">Label</th>
-              <th scope="col" className="px-2 py-1.5">Height from</th>
-              <th scope="col" className="px-2 py-1.5">Position</th>
-              <th scope="col" className="px-2 py-1.5">{editable ? 'In profile' : 'State'}</th>
-              {editable && <th scope="col" className="px-2 py-1.5">Order</th>}
+              <th scope="col" className="px-2 py-1.5">
+                #
+              </th>
+              <th scope="col" className="px-2 py-1.5 text-right">
+                Chainage ({u})
+              </th>
+              <th scope="col" className="px-2 py-1.5 text-right">
+                Elevation ({u})
+              </th>
+              <th scope="col" className="px-2 py-1.5 text-right">
+                As surveyed ({u})
+              </th>
+              <th scope="col" className="px-2 py-1.5">
+                Label
+              </th>
+              <th scope="col" className="px-2 py-1.5">
+                Height from
+              </th>
+              <th scope="col" className="px-2 py-1.5">
+                Position
+              </th>
+              <th scope="col" className="px-2 py-1.5">
+                {editable ? 'In profile' : 'State'}
+              </th>
+              {editable && (
+                <th scope="col" className="px-2 py-1.5">
+                  Order
+                </th>
+              )}
             </tr>
           </thead>
           <tbody>
@@ -65,20 +98,46 @@ export function PointsTable({ points, offset, total, units, editable, positioned
               />
             ))}
             {points.length === 0 && (
-              <tr><td colSpan={9} className="px-3 py-5 text-center text-creek-600">No points yet.{editable ? ' Click on the profile to sketch, or add points below.' : ''}</td></tr>
+              <tr>
+                <td colSpan={9} className="px-3 py-5 text-center text-creek-600">
+                  No points yet.{editable ? ' Click on the profile to sketch, or add points below.' : ''}
+                </td>
+              </tr>
             )}
           </tbody>
         </table>
       </ScrollFrame>
       {pageCount > 1 && (
         <nav aria-label="Pages of points" className="flex flex-wrap items-center gap-2 text-sm">
-          <button type="button" onClick={() => onPage(current - 1)} disabled={current === 0 || pagingBlocked !== null} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Previous</button>
-          <span className="tabular">Points {formatNumber(offset + 1, 0)}–{formatNumber(offset + points.length, 0)} of {formatNumber(total, 0)}</span>
-          <button type="button" onClick={() => onPage(current + 1)} disabled={current >= pageCount - 1 || pagingBlocked !== null} className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40">Next</button>
-          {pagingBlocked && <span className="text-xs text-ochre-700" role="status">{pagingBlocked}</span>}
+          <button
+            type="button"
+            onClick={() => onPage(current - 1)}
+            disabled={current === 0 || pagingBlocked !== null}
+            className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40"
+          >
+            Previous
+          </button>
+          <span className="tabular">
+            Points {formatNumber(offset + 1, 0)}–{formatNumber(offset + points.length, 0)} of {formatNumber(total, 0)}
+          </span>
+          <button
+            type="button"
+            onClick={() => onPage(current + 1)}
+            disabled={current >= pageCount - 1 || pagingBlocked !== null}
+            className="rounded border border-creek-200 px-2 py-0.5 disabled:opacity-40"
+          >
+            Next
+          </button>
+          {pagingBlocked && (
+            <span className="text-xs text-ochre-700" role="status">
+              {pagingBlocked}
+            </span>
+          )}
         </nav>
       )}
-      {editable && <AddPointForm offset={offset} count={points.length} units={units} positioned={positioned} dispatch={dispatch} />}
+      {editable && (
+        <AddPointForm offset={offset} count={points.length} units={units} positioned={positioned} dispatch={dispatch} />
+      )}
     </div>
   );
 }

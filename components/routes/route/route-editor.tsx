@@ -33,7 +33,15 @@ export interface RouteEditorProps {
  * rows, each read from the server as needed; a fresh workspace each time the server's rows change;
  * the comments pinned on the route.
  */
-export function RouteEditor({ projectId, routeId, units, editable, canComment, canCommentAnywhere, members }: RouteEditorProps) {
+export function RouteEditor({
+  projectId,
+  routeId,
+  units,
+  editable,
+  canComment,
+  canCommentAnywhere,
+  members,
+}: RouteEditorProps) {
   const view = useQuery(routeViewQuery(routeId));
   const [sketchArea, setSketchArea] = useState({ lengthM: 1000, lowM: 0, highM: 100 });
   // Kept here so the table stays on its page when a decision brings a new version of the route;
@@ -43,7 +51,10 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
   const data = view.data;
   const [pickedM, setPickedM] = useState<number | null>(null);
   const comments = useCommentThreads(projectId, null, [{ kind: 'route', routeId }, { kind: 'project' }]);
-  const pins = useMemo(() => pinsOf(comments.threads, (c) => routePinChainage(c, routeId), comments.selectedId), [comments.threads, comments.selectedId, routeId]);
+  const pins = useMemo(
+    () => pinsOf(comments.threads, (c) => routePinChainage(c, routeId), comments.selectedId),
+    [comments.threads, comments.selectedId, routeId],
+  );
   const topRef = useRef<HTMLDivElement>(null);
   if (view.isError || rows.isError) {
     return <LoadError what="The route" onRetry={() => void (view.isError ? view.refetch() : rows.refetch())} />;
@@ -77,7 +88,9 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
         {canComment && (
           <div className="mb-2 flex flex-wrap items-end gap-3">
             <p className="text-xs text-creek-700" role="status" data-testid="picked-chainage">
-              {pickedM === null ? 'Click the ground profile, or type a chainage, to pin a comment on the route.' : `Picked ch. ${formatQuantity('chainage', pickedM, units)}.`}
+              {pickedM === null
+                ? 'Click the ground profile, or type a chainage, to pin a comment on the route.'
+                : `Picked ch. ${formatQuantity('chainage', pickedM, units)}.`}
             </p>
             <UnitNumberInput
               id="route-comment-chainage"
@@ -93,7 +106,8 @@ export function RouteEditor({ projectId, routeId, units, editable, canComment, c
                 }
                 const metres = fromDisplay('length', v, units);
                 const lengthM = data.route.lengthM ?? Infinity;
-                if (metres < 0 || metres > lengthM + 1e-6) return `The route runs from 0 to ${formatQuantity('chainage', lengthM, units)}`;
+                if (metres < 0 || metres > lengthM + 1e-6)
+                  return `The route runs from 0 to ${formatQuantity('chainage', lengthM, units)}`;
                 setPickedM(metres);
                 return null;
               }}

@@ -46,13 +46,29 @@ export interface RouteWorkspaceProps {
  * and one page of its rows, with the user's unsaved edits of that page on top. A save replaces the
  * page's stored rows only (the route is measured again whole on the server).
  */
-export function RouteWorkspace({ view, rows, loadingPage = false, units, editable, sketchArea, onSketchArea, page, onPage, pins, onPick }: RouteWorkspaceProps) {
+export function RouteWorkspace({
+  view,
+  rows,
+  loadingPage = false,
+  units,
+  editable,
+  sketchArea,
+  onSketchArea,
+  page,
+  onPage,
+  pins,
+  onPick,
+}: RouteWorkspaceProps) {
   const routeId = view.route.id;
   const baseUpdatedAt = rows.updatedAt;
   const offset = rows.offset;
   // Edits left unsaved when the person went to another section of the project come back.
   const [restored] = useState(() => keptDraft(routeId, baseUpdatedAt, offset) !== null);
-  const [draft, dispatch] = useReducer(draftReducer, rows.points, (points) => keptDraft(routeId, baseUpdatedAt, offset) ?? draftFromPoints(points));
+  const [draft, dispatch] = useReducer(
+    draftReducer,
+    rows.points,
+    (points) => keptDraft(routeId, baseUpdatedAt, offset) ?? draftFromPoints(points),
+  );
   useEffect(() => keepDraft(routeId, baseUpdatedAt, draft, offset), [routeId, baseUpdatedAt, draft, offset]);
   useLeaveWarning(editable && draft.dirty);
   const [message, setMessage] = useState<string | null>(null);
@@ -67,11 +83,21 @@ export function RouteWorkspace({ view, rows, loadingPage = false, units, editabl
   // The chart is the server's thinned profile; an unsaved edit of this page shows on it at once.
   const { raw, cleaned } = useMemo(() => {
     if (!draft.dirty) return view.profile;
-    const span = rows.points.length > 0 ? { fromM: rows.points[0].chainageM, toM: rows.points[rows.points.length - 1].chainageM } : null;
+    const span =
+      rows.points.length > 0
+        ? { fromM: rows.points[0].chainageM, toM: rows.points[rows.points.length - 1].chainageM }
+        : null;
     const edited = routeProfileSeries(draft.points);
-    return { raw: withPageEdits(view.profile.raw, span, edited.raw), cleaned: withPageEdits(view.profile.cleaned, span, edited.cleaned) };
+    return {
+      raw: withPageEdits(view.profile.raw, span, edited.raw),
+      cleaned: withPageEdits(view.profile.cleaned, span, edited.cleaned),
+    };
   }, [draft.dirty, draft.points, rows.points, view.profile]);
-  const markers = view.proposals.map((c, i) => ({ chainageM: view.proposalPlaces[i].chainageM, elevationM: view.proposalPlaces[i].rawElevationM, label: `Point ${c.index + 1}: ${c.reason}` }));
+  const markers = view.proposals.map((c, i) => ({
+    chainageM: view.proposalPlaces[i].chainageM,
+    elevationM: view.proposalPlaces[i].rawElevationM,
+    label: `Point ${c.index + 1}: ${c.reason}`,
+  }));
   const pageCount = Math.max(1, Math.ceil(rows.total / ROUTE_PAGE_SIZE));
 
   function showPoint(seq: number) {
@@ -89,7 +115,11 @@ export function RouteWorkspace({ view, rows, loadingPage = false, units, editabl
   async function onSave() {
     setMessage(null);
     try {
-      await save.mutateAsync({ points: draftToSaveInput(draft.points), baseUpdatedAt, window: { fromSeq: offset, toSeq: offset + rows.points.length } });
+      await save.mutateAsync({
+        points: draftToSaveInput(draft.points),
+        baseUpdatedAt,
+        window: { fromSeq: offset, toSeq: offset + rows.points.length },
+      });
     } catch (error) {
       setMessage(error instanceof Error ? error.message : 'Not saved.');
     }
@@ -100,42 +130,105 @@ export function RouteWorkspace({ view, rows, loadingPage = false, units, editabl
       <RouteHeader view={view} units={units} editable={editable} />
       {view.gpsWarning && <GpsWarningBanner units={units} warning={view.gpsWarning} />}
       <Panel title="Ground profile">
-        {sketching && <div className="mb-3"><SketchAreaForm area={sketchArea} units={units} onChange={onSketchArea} /></div>}
+        {sketching && (
+          <div className="mb-3">
+            <SketchAreaForm area={sketchArea} units={units} onChange={onSketchArea} />
+          </div>
+        )}
         {placed.length > 0 || sketching ? (
           <div className={planStations.length >= 2 ? 'grid gap-3 xl:grid-cols-[minmax(0,1fr)_322px]' : ''}>
-          <RouteProfile
-            raw={raw}
-            cleaned={cleaned}
-            markers={markers}
-            units={units}
-            title={`Ground profile of ${view.route.name}`}
-            pins={pins}
-            onPick={onPick}
-            sketch={sketching ? { ...sketchArea, onAdd: (chainageM, elevationM) => dispatch({ type: 'sketch', chainageM: Math.max(0, chainageM), elevationM, heightSource: 'map' }) } : undefined}
-            photos={photos}
-          />
-          {planStations.length >= 2 && (
-            <div className="space-y-1">
-              <PlanView stations={planStations} warnings={[]} devices={[]} units={displayUnits(units)} hoverM={planHoverM} onHover={setPlanHoverM} photos={photos} />
-              <p className="text-xs text-creek-600">Plan from the surveyed positions, north up{photos.length > 0 ? '; photos where they were taken' : ''}.</p>
-            </div>
-          )}
+            <RouteProfile
+              raw={raw}
+              cleaned={cleaned}
+              markers={markers}
+              units={units}
+              title={`Ground profile of ${view.route.name}`}
+              pins={pins}
+              onPick={onPick}
+              sketch={
+                sketching
+                  ? {
+                      ...sketchArea,
+                      onAdd: (chainageM, elevationM) =>
+                        dispatch({
+                          type: 'sketch',
+                          chainageM: Math.max(0, chainageM),
+                          elevationM,
+                          heightSource: 'map',
+                        }),
+                    }
+                  : undefined
+              }
+              photos={photos}
+            />
+            {planStations.length >= 2 && (
+              <div className="space-y-1">
+                <PlanView
+                  stations={planStations}
+                  warnings={[]}
+                  devices={[]}
+                  units={displayUnits(units)}
+                  hoverM={planHoverM}
+                  onHover={setPlanHoverM}
+                  photos={photos}
+                />
+                <p className="text-xs text-creek-600">
+                  Plan from the surveyed positions, north up{photos.length > 0 ? '; photos where they were taken' : ''}.
+                </p>
+              </div>
+            )}
           </div>
         ) : (
           <p className="text-sm text-creek-700">This route has no points yet.</p>
         )}
         {view.route.features.length > 0 && (
-          <p className="mt-2 text-xs text-creek-700">Along the route: {view.route.features.map((f) => `${f.label} at ${formatQuantity('length', f.chainageM, units, 0)}`).join(' · ')}</p>
+          <p className="mt-2 text-xs text-creek-700">
+            Along the route:{' '}
+            {view.route.features
+              .map((f) => `${f.label} at ${formatQuantity('length', f.chainageM, units, 0)}`)
+              .join(' · ')}
+          </p>
         )}
       </Panel>
-      {view.route.pointCount > 0 && <CleanupPanel view={view} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />}
-      <Panel title="Points" aside={positioned && editable ? <span className="text-xs text-creek-600">Chainage is measured on the WGS84 ellipsoid from the positions when you save.</span> : undefined}>
+      {view.route.pointCount > 0 && (
+        <CleanupPanel view={view} units={units} editable={editable} blocked={draft.dirty} onShowPoint={showPoint} />
+      )}
+      <Panel
+        title="Points"
+        aside={
+          positioned && editable ? (
+            <span className="text-xs text-creek-600">
+              Chainage is measured on the WGS84 ellipsoid from the positions when you save.
+            </span>
+          ) : undefined
+        }
+      >
         {editable && draft.dirty && (
-          <div className="mb-3 flex flex-wrap items-center gap-3 rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm" role="status">
-            <span className="font-medium text-ochre-700">Unsaved changes{restored ? ' (kept from before you left this page)' : ''}</span>
-            <Button tone="quiet" className="px-2.5 py-1" disabled={draft.past.length === 0} onClick={() => dispatch({ type: 'undo' })}>Undo</Button>
-            <Button tone="quiet" className="px-2.5 py-1" onClick={() => dispatch({ type: 'reset', points: rows.points })}>Discard</Button>
-            <Button className="px-2.5 py-1" disabled={save.isPending} onClick={onSave}>{save.isPending ? 'Saving…' : 'Save points'}</Button>
+          <div
+            className="mb-3 flex flex-wrap items-center gap-3 rounded-md border border-ochre-100 bg-ochre-50 px-3 py-2 text-sm"
+            role="status"
+          >
+            <span className="font-medium text-ochre-700">
+              Unsaved changes{restored ? ' (kept from before you left this page)' : ''}
+            </span>
+            <Button
+              tone="quiet"
+              className="px-2.5 py-1"
+              disabled={draft.past.length === 0}
+              onClick={() => dispatch({ type: 'undo' })}
+            >
+              Undo
+            </Button>
+            <Button
+              tone="quiet"
+              className="px-2.5 py-1"
+              onClick={() => dispatch({ type: 'reset', points: rows.points })}
+            >
+              Discard
+            </Button>
+            <Button className="px-2.5 py-1" disabled={save.isPending} onClick={onSave}>
+              {save.isPending ? 'Saving…' : 'Save points'}
+            </Button>
           </div>
         )}
         <FormMessage message={message} />
@@ -150,7 +243,13 @@ export function RouteWorkspace({ view, rows, loadingPage = false, units, editabl
           page={page}
           pageCount={pageCount}
           onPage={onPage}
-          pagingBlocked={editable && draft.dirty ? 'Save or discard the changes on this page to turn to another.' : loadingPage ? 'Reading the page…' : null}
+          pagingBlocked={
+            editable && draft.dirty
+              ? 'Save or discard the changes on this page to turn to another.'
+              : loadingPage
+                ? 'Reading the page…'
+                : null
+          }
           dispatch={dispatch}
         />
       </Panel>
@@ -158,7 +257,14 @@ export function RouteWorkspace({ view, rows, loadingPage = false, units, editabl
       {view.route.importNotes.some((n) => n.code !== 'consumer-gps-heights') && (
         <Panel title="Notes from the import">
           <ul className="list-disc space-y-0.5 pl-5 text-sm text-creek-800">
-            {view.route.importNotes.filter((n) => n.code !== 'consumer-gps-heights').map((n, i) => <li key={i}>{n.line !== undefined ? `line ${n.line}: ` : ''}{n.message}</li>)}
+            {view.route.importNotes
+              .filter((n) => n.code !== 'consumer-gps-heights')
+              .map((n, i) => (
+                <li key={i}>
+                  {n.line !== undefined ? `line ${n.line}: ` : ''}
+                  {n.message}
+                </li>
+              ))}
           </ul>
         </Panel>
       )}

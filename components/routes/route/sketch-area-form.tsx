@@ -11,7 +11,15 @@ export interface SketchArea {
 }
 
 /** The size of the empty chart a route is sketched on, in the project's units. */
-export function SketchAreaForm({ area, units, onChange }: { area: SketchArea; units: UnitSystem; onChange: (a: SketchArea) => void }) {
+export function SketchAreaForm({
+  area,
+  units,
+  onChange,
+}: {
+  area: SketchArea;
+  units: UnitSystem;
+  onChange: (a: SketchArea) => void;
+}) {
   const u = unitOf('length', units);
   const set = (key: keyof SketchArea, text: string) => {
     const v = typedNumber(text);
@@ -20,9 +28,30 @@ export function SketchAreaForm({ area, units, onChange }: { area: SketchArea; un
   const box = 'mt-1 block w-24 rounded-md border border-creek-200 px-2 py-1';
   return (
     <div className="flex flex-wrap items-end gap-3 text-sm" role="group" aria-label="Sketch area">
-      <label>Chart length ({u})<input defaultValue={toDisplay('length', area.lengthM, units).toFixed(0)} onBlur={(e) => set('lengthM', e.target.value)} className={box} /></label>
-      <label>Heights from ({u})<input defaultValue={toDisplay('length', area.lowM, units).toFixed(0)} onBlur={(e) => set('lowM', e.target.value)} className={box} /></label>
-      <label>to ({u})<input defaultValue={toDisplay('length', area.highM, units).toFixed(0)} onBlur={(e) => set('highM', e.target.value)} className={box} /></label>
+      <label>
+        Chart length ({u})
+        <input
+          defaultValue={toDisplay('length', area.lengthM, units).toFixed(0)}
+          onBlur={(e) => set('lengthM', e.target.value)}
+          className={box}
+        />
+      </label>
+      <label>
+        Heights from ({u})
+        <input
+          defaultValue={toDisplay('length', area.lowM, units).toFixed(0)}
+          onBlur={(e) => set('lowM', e.target.value)}
+          className={box}
+        />
+      </label>
+      <label>
+        to ({u})
+        <input
+          defaultValue={toDisplay('length', area.highM, units).toFixed(0)}
+          onBlur={(e) => set('highM', e.target.value)}
+          className={box}
+        />
+      </label>
     </div>
   );
 }

@@ -8,7 +8,8 @@
  * Minimum walls are not stored: the builder applies the same rule.
  * SDR 13.5 is listed for ½ in only (availability from memory; no average wall published there).
  */
-export const PVC_D2241_SOURCE = 'ASTM D2241 (PVC1120, HDS 2000 psi); OD per Table 1; average wall = minimum wall + half the wall tolerance';
+export const PVC_D2241_SOURCE =
+  'ASTM D2241 (PVC1120, HDS 2000 psi); OD per Table 1; average wall = minimum wall + half the wall tolerance';
 
 /** Hydrostatic design stress of PVC1120 / PVC1220 for water at 23 °C, psi (core.md §2.1). */
 export const PVC_D2241_HDS_PSI = 2000;

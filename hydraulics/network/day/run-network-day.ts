@@ -47,11 +47,19 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
   if (stepCount > 100_000) throw new HydraulicsInputError('stepS', `gives ${stepCount} steps; use a longer step`);
   const multipliers = new Map<string, number[]>();
   input.nodes.forEach((node, index) => {
-    if (node.hourlyFractions !== undefined) multipliers.set(node.id, hourlyMultipliers(node.hourlyFractions, `nodes[${index}].hourlyFractions`));
+    if (node.hourlyFractions !== undefined)
+      multipliers.set(node.id, hourlyMultipliers(node.hourlyFractions, `nodes[${index}].hourlyFractions`));
   });
   const tanks = input.nodes.filter((node) => node.kind === 'tank');
-  const levels = new Map(tanks.map((tank) => [tank.id, Math.min(tank.waterLevelM ?? tank.elevationM, tank.tank?.overflowLevelM ?? Infinity)]));
-  const history: Record<string, number[]> = Object.fromEntries(tanks.map((tank) => [tank.id, [levels.get(tank.id) as number]]));
+  const levels = new Map(
+    tanks.map((tank) => [
+      tank.id,
+      Math.min(tank.waterLevelM ?? tank.elevationM, tank.tank?.overflowLevelM ?? Infinity),
+    ]),
+  );
+  const history: Record<string, number[]> = Object.fromEntries(
+    tanks.map((tank) => [tank.id, [levels.get(tank.id) as number]]),
+  );
   const overflow: Record<string, number> = Object.fromEntries(tanks.map((tank) => [tank.id, 0]));
   const shortfall: Record<string, number> = Object.fromEntries(tanks.map((tank) => [tank.id, 0]));
   const emptiedAt = new Map<string, number>();
@@ -68,7 +76,9 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
     const nodes = input.nodes.map((node): NetworkNode => {
       if (node.kind === 'tank') return { ...node, waterLevelM: levels.get(node.id) };
       const factor = multipliers.get(node.id)?.[hour];
-      return factor === undefined || node.demandM3s === undefined ? node : { ...node, demandM3s: node.demandM3s * factor };
+      return factor === undefined || node.demandM3s === undefined
+        ? node
+        : { ...node, demandM3s: node.demandM3s * factor };
     });
     const solution = solveNetwork({ ...input, nodes });
     const tankNetInflowM3s: Record<string, number> = {};
@@ -100,7 +110,8 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
       const pressure = solution.pressureHeadsM[node.id];
       if (pressure === undefined) continue;
       outletPressureHeadsM[node.id] = pressure;
-      if (!(node.id in lowest) || pressure < lowest[node.id].pressureHeadM) lowest[node.id] = { pressureHeadM: pressure, hour };
+      if (!(node.id in lowest) || pressure < lowest[node.id].pressureHeadM)
+        lowest[node.id] = { pressureHeadM: pressure, hour };
       const peak = peakHourOf(multipliers.get(node.id) ?? new Array<number>(HOURS_PER_DAY).fill(1));
       const isPeakStep = hour === peak && timeS === Math.floor(timeS / 3600) * 3600;
       if (isPeakStep && node.minPressureHeadM !== undefined && pressure < node.minPressureHeadM) {
@@ -125,7 +136,15 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
         overYield.set(node.id, entry);
       }
     }
-    steps.push({ timeS, hour, tankLevelsM, tankNetInflowM3s, outletPressureHeadsM, sourceDrawM3s, ...(options.keepSolutions === false ? {} : { solution }) });
+    steps.push({
+      timeS,
+      hour,
+      tankLevelsM,
+      tankNetInflowM3s,
+      outletPressureHeadsM,
+      sourceDrawM3s,
+      ...(options.keepSolutions === false ? {} : { solution }),
+    });
   }
   const warnings: NetworkWarning[] = [];
   for (const [tankId, time] of emptiedAt) {
@@ -156,7 +175,16 @@ export function runNetworkDay(input: NetworkInput, options: NetworkDayOptions = 
     });
   }
   const { frictionMethod, freeSurfaceLosses } = resolveNetworkSettings(input.settings);
-  return { frictionMethod, freeSurfaceLosses, steps, tankLevelsM: history, tankOverflowM3: overflow, tankShortfallM3: shortfall, outletLowestPressureHeadM: lowest, warnings: [...warnings, ...shortAtPeak] };
+  return {
+    frictionMethod,
+    freeSurfaceLosses,
+    steps,
+    tankLevelsM: history,
+    tankOverflowM3: overflow,
+    tankShortfallM3: shortfall,
+    outletLowestPressureHeadM: lowest,
+    warnings: [...warnings, ...shortAtPeak],
+  };
 }
 
 function clock(timeS: number): string {

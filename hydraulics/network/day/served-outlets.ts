@@ -20,7 +20,10 @@ const STILL_FLOW_M3S = 1e-12;
  * Nodes are visited from the highest grade down, which is the order water flows. Solves the
  * network as given when no solution is passed.
  */
-export function servedOutletsByTank(input: NetworkInput, solution: NetworkSolution = solveNetwork(input)): Record<string, ServedOutlet[]> {
+export function servedOutletsByTank(
+  input: NetworkInput,
+  solution: NetworkSolution = solveNetwork(input),
+): Record<string, ServedOutlet[]> {
   const tanks = input.nodes.filter((node) => node.kind === 'tank').map((node) => node.id);
   const tankIndex = new Map(tanks.map((id, i) => [id, i]));
   const kindOf = new Map(input.nodes.map((node) => [node.id, node.kind]));
@@ -32,7 +35,9 @@ export function servedOutletsByTank(input: NetworkInput, solution: NetworkSoluti
     inflows.set(to, [...(inflows.get(to) ?? []), { from, q: Math.abs(q) }]);
   }
   const shares = new Map<string, Float64Array>();
-  const order = input.nodes.filter((node) => solution.headsM[node.id] !== undefined).sort((a, b) => solution.headsM[b.id] - solution.headsM[a.id]);
+  const order = input.nodes
+    .filter((node) => solution.headsM[node.id] !== undefined)
+    .sort((a, b) => solution.headsM[b.id] - solution.headsM[a.id]);
   for (const node of order) {
     const share = new Float64Array(tanks.length);
     const own = tankIndex.get(node.id);

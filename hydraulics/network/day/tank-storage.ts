@@ -53,8 +53,24 @@ export function sizeTankStorage(input: NetworkInput, options: TankStorageOptions
     }
     const supply = options.supplyByTank?.[tankId] ?? { flowM3s: inflow };
     if (!(supply.flowM3s > 0)) {
-      return { tankId, servedOutlets: outlets, demandHourlyM3, supply, problem: `Nothing flows into tank "${tankId}" in the network, so no storage can be sized for it: give it a supply.` };
+      return {
+        tankId,
+        servedOutlets: outlets,
+        demandHourlyM3,
+        supply,
+        problem: `Nothing flows into tank "${tankId}" in the network, so no storage can be sized for it: give it a supply.`,
+      };
     }
-    return { tankId, servedOutlets: outlets, demandHourlyM3, supply, storage: sizeStorage({ supply, demand: { hourlyVolumeM3: demandHourlyM3 }, reserveDays: options.reserveDays ?? 0 }) };
+    return {
+      tankId,
+      servedOutlets: outlets,
+      demandHourlyM3,
+      supply,
+      storage: sizeStorage({
+        supply,
+        demand: { hourlyVolumeM3: demandHourlyM3 },
+        reserveDays: options.reserveDays ?? 0,
+      }),
+    };
   });
 }

@@ -41,12 +41,14 @@ export function fastEvaluator(context: SizingContext): (design: Int32Array) => Q
       const candidate = context.candidates[design[i]];
       const lengthM = net.lengthM[k];
       const law = laws[design[i]];
-      net.laws[k] = law.kind === 'hazen-williams' ? { ...law, resistance: law.resistance * lengthM } : { ...law, lengthM };
+      net.laws[k] =
+        law.kind === 'hazen-williams' ? { ...law, resistance: law.resistance * lengthM } : { ...law, lengthM };
       net.minor[k] = minorLossCoefficient(net.minorK[k], candidate.pipe.insideDiameterM);
       net.diameterM[k] = candidate.pipe.insideDiameterM;
       net.linearBelowM3s[k] = LINEAR_BELOW_VELOCITY_MS * pipeAreaM2(candidate.pipe.insideDiameterM);
       cost += candidate.costPerM * lengthM;
-      if (!ratingHolds(candidate.pipe, context.staticByLink.get(net.linkIds[k]) ?? 0, net.settings.waterTemperatureC)) ratingsHold = false;
+      if (!ratingHolds(candidate.pipe, context.staticByLink.get(net.linkIds[k]) ?? 0, net.settings.waterTemperatureC))
+        ratingsHold = false;
     });
     const result = solver.solve(warmFlows);
     if (result.converged) warmFlows = result.flowM3s;
@@ -65,7 +67,8 @@ export function fastEvaluator(context: SizingContext): (design: Int32Array) => Q
     context.sized.forEach((k, i) => {
       const velocity = Math.abs(result.flowM3s[k]) / pipeAreaM2(net.diameterM[k]);
       if (velocity > context.rules.velocityMaxMs * (1 + 1e-9)) feasible = false;
-      if (context.rules.velocityMinMs > 0 && velocity > 0 && velocity < context.rules.velocityMinMs * (1 - 1e-9)) feasible = false;
+      if (context.rules.velocityMinMs > 0 && velocity > 0 && velocity < context.rules.velocityMinMs * (1 - 1e-9))
+        feasible = false;
       slope[k] = Math.abs(result.headM[net.from[k]] - result.headM[net.to[k]]) / Math.max(net.lengthM[k], 1e-9);
       void i;
     });

@@ -8,8 +8,8 @@ let loading: Promise<Highs> | undefined;
  * sizing never runs and the package's Node-only loader must not be pulled in.
  */
 export function loadHighs(): Promise<Highs> {
-  loading ??= import(/* webpackIgnore: true */ /* turbopackIgnore: true */ 'highs').then((module: { default: () => Promise<Highs> }) =>
-    module.default(),
+  loading ??= import(/* webpackIgnore: true */ /* turbopackIgnore: true */ 'highs').then(
+    (module: { default: () => Promise<Highs> }) => module.default(),
   );
   return loading;
 }

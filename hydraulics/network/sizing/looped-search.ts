@@ -36,7 +36,8 @@ function loopClosers(context: SizingContext, weight: (k: number) => number): Uin
   };
   for (let v = 0; v < net.nodeCount; v++) if (!Number.isNaN(net.fixedHeadM[v])) parent[find(v)] = root;
   const links: number[] = [];
-  for (let k = 0; k < net.linkCount; k++) if (!isShut(net, k) && !topology.isolated[net.from[k]] && !topology.isolated[net.to[k]]) links.push(k);
+  for (let k = 0; k < net.linkCount; k++)
+    if (!isShut(net, k) && !topology.isolated[net.from[k]] && !topology.isolated[net.to[k]]) links.push(k);
   // Hidden float valves of break-pressure tanks stay in the tree whatever their weight.
   links.sort((a, b) => Number(b >= net.visibleLinkCount) - Number(a >= net.visibleLinkCount) || weight(b) - weight(a));
   const left = new Uint8Array(net.linkCount);
@@ -62,10 +63,21 @@ async function treeStart(context: SizingContext, current: Trial, left: Uint8Arra
   const tree = treeFlows(net, context.topology, { links: left, extraDemandM3s });
   if (!tree) return undefined;
   const inTree = context.sized.map((k) => !left[k]);
-  const treeSized = { ...context, sized: context.sized.filter((_, i) => inTree[i]), ratedByLink: context.ratedByLink.filter((_, i) => inTree[i]) };
+  const treeSized = {
+    ...context,
+    sized: context.sized.filter((_, i) => inTree[i]),
+    ratedByLink: context.ratedByLink.filter((_, i) => inTree[i]),
+  };
   const choices = linkChoices(treeSized, (k) => tree.flowM3s[k], []);
   if (!choices) return undefined;
-  const program = treeProgram(net, tree, choices, context.candidates, (v) => requiredPressureHeadM(net, v, context.rules), true);
+  const program = treeProgram(
+    net,
+    tree,
+    choices,
+    context.candidates,
+    (v) => requiredPressureHeadM(net, v, context.rules),
+    true,
+  );
   if (program.impossible.length > 0) return undefined;
   const highs = await loadHighs();
   const seconds = Math.max(0.2, Math.min(5, (context.deadline - Date.now()) / 1000));
@@ -103,7 +115,11 @@ function repair(context: SizingContext, start: Trial, evaluate: (design: Int32Ar
     const next = rated[stepOf(context, i, design[i]) + 1];
     return (context.candidates[next].costPerM - context.candidates[design[i]].costPerM) * net.lengthM[context.sized[i]];
   };
-  for (let round = 0; !current.feasible && round < context.sized.length * context.candidates.length && Date.now() < context.deadline; round++) {
+  for (
+    let round = 0;
+    !current.feasible && round < context.sized.length * context.candidates.length && Date.now() < context.deadline;
+    round++
+  ) {
     const shortlist = context.sized
       .map((k, i) => ({ i, slope: current.slope[k] }))
       .filter(({ i }) => i !== frozen && stepOf(context, i, current.design[i]) < context.ratedByLink[i].length - 1)
@@ -146,7 +162,8 @@ function improve(context: SizingContext, start: Trial, evaluate: (design: Int32A
     design[i] = rated[at];
     return true;
   };
-  const costOf = (design: Int32Array): number => context.sized.reduce((sum, k, i) => sum + context.candidates[design[i]].costPerM * context.net.lengthM[k], 0);
+  const costOf = (design: Int32Array): number =>
+    context.sized.reduce((sum, k, i) => sum + context.candidates[design[i]].costPerM * context.net.lengthM[k], 0);
   const tryDesign = (design: Int32Array): boolean => {
     if (costOf(design) >= best.cost - 1e-9) return false;
     const candidate = evaluate(design);
@@ -206,7 +223,13 @@ export async function searchLooped(context: SizingContext): Promise<LoopedOutcom
   if (context.ratedByLink.some((rated) => rated.length === 0)) {
     const i = context.ratedByLink.findIndex((rated) => rated.length === 0);
     const id = context.net.linkIds[context.sized[i]];
-    warnings.push({ code: 'no-candidate-fits', severity: 'danger', message: `No candidate pipe is rated for the ${(context.staticByLink.get(id) ?? 0).toFixed(1)} m of static head on "${id}".`, values: { staticPressureHeadM: context.staticByLink.get(id) ?? 0 }, elementId: id });
+    warnings.push({
+      code: 'no-candidate-fits',
+      severity: 'danger',
+      message: `No candidate pipe is rated for the ${(context.staticByLink.get(id) ?? 0).toFixed(1)} m of static head on "${id}".`,
+      values: { staticPressureHeadM: context.staticByLink.get(id) ?? 0 },
+      elementId: id,
+    });
     return { best: undefined, warnings, evaluations: 0 };
   }
   const quick = fastEvaluator(context);
@@ -221,10 +244,21 @@ export async function searchLooped(context: SizingContext): Promise<LoopedOutcom
     return found;
   };
   // The widest bore, not the dearest: a price list may price a small pipe above a large one.
-  const widest = (rated: number[]) => rated.reduce((best, c) => (context.candidates[c].pipe.insideDiameterM > context.candidates[best].pipe.insideDiameterM ? c : best), rated[rated.length - 1]);
+  const widest = (rated: number[]) =>
+    rated.reduce(
+      (best, c) =>
+        context.candidates[c].pipe.insideDiameterM > context.candidates[best].pipe.insideDiameterM ? c : best,
+      rated[rated.length - 1],
+    );
   const largest = evaluate(Int32Array.from(context.ratedByLink, widest));
   if (!largest.feasible) {
-    warnings.push({ code: 'no-feasible-design', severity: 'danger', message: 'Even the largest candidate on every link leaves an outlet short of its residual or a pipe outside the velocity band: add larger candidates, lower the residual wanted, or raise the source.', values: { worstShortfallM: largest.worstShortfallM } });
+    warnings.push({
+      code: 'no-feasible-design',
+      severity: 'danger',
+      message:
+        'Even the largest candidate on every link leaves an outlet short of its residual or a pipe outside the velocity band: add larger candidates, lower the residual wanted, or raise the source.',
+      values: { worstShortfallM: largest.worstShortfallM },
+    });
     return { best: undefined, warnings, evaluations: seen.size };
   }
   let best: Trial = largest;
@@ -239,7 +273,9 @@ export async function searchLooped(context: SizingContext): Promise<LoopedOutcom
     if (!treesTried.has(treeKey)) {
       treesTried.add(treeKey);
       // Loop closers start at their smallest rated size; the tree is sized around their flows.
-      current = evaluate(Int32Array.from(largest.design, (c, i) => (left[context.sized[i]] ? context.ratedByLink[i][0] : c)));
+      current = evaluate(
+        Int32Array.from(largest.design, (c, i) => (left[context.sized[i]] ? context.ratedByLink[i][0] : c)),
+      );
       for (let round = 0; round < 2 && Date.now() < context.deadline; round++) {
         const design = await treeStart(context, current, left);
         if (!design) break;
@@ -252,7 +288,10 @@ export async function searchLooped(context: SizingContext): Promise<LoopedOutcom
       for (let kick = 0; kick < kicks; kick++) {
         const i = Math.floor(random() * context.sized.length);
         const rated = context.ratedByLink[i];
-        const at = Math.min(rated.length - 1, Math.max(0, stepOf(context, i, design[i]) + Math.floor(random() * 7) - 3));
+        const at = Math.min(
+          rated.length - 1,
+          Math.max(0, stepOf(context, i, design[i]) + Math.floor(random() * 7) - 3),
+        );
         design[i] = rated[at];
       }
       current = evaluate(design);

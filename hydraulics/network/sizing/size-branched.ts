@@ -17,7 +17,11 @@ export interface BranchedOutcome {
 }
 
 /** Allowed candidates of each sized link at the tree's flows; warnings for links nothing fits. */
-export function linkChoices(context: SizingContext, flowOf: (link: number) => number, warnings: NetworkWarning[]): LinkChoices[] | undefined {
+export function linkChoices(
+  context: SizingContext,
+  flowOf: (link: number) => number,
+  warnings: NetworkWarning[],
+): LinkChoices[] | undefined {
   const { net, candidates, rules } = context;
   let ok = true;
   const choices = context.sized.map((k, i) => {
@@ -25,7 +29,13 @@ export function linkChoices(context: SizingContext, flowOf: (link: number) => nu
     const id = net.linkIds[k];
     if ((net.status[k] === 'check-valve' || net.status[k] === 'float-valve') && flow < 0) {
       ok = false;
-      warnings.push({ code: 'flow-against-valve', severity: 'danger', message: `The demand below "${id}" must flow back through its ${net.status[k]}: no pipe size can serve it.`, values: { flowM3s: flow }, elementId: id });
+      warnings.push({
+        code: 'flow-against-valve',
+        severity: 'danger',
+        message: `The demand below "${id}" must flow back through its ${net.status[k]}: no pipe size can serve it.`,
+        values: { flowM3s: flow },
+        elementId: id,
+      });
     }
     const allowed = context.ratedByLink[i].filter((c) => velocityHolds(candidates[c].pipe, flow, rules));
     if (allowed.length === 0) {
@@ -56,9 +66,19 @@ function headNotEnough(nodeIds: string[]): NetworkWarning {
  * Least-cost sizing of a branched network solved exactly with HiGHS: an LP over lengths when links
  * may be split, a MIP over one choice per link otherwise (see `treeProgram`).
  */
-export async function sizeBranched(context: SizingContext, tree: TreeFlows, onePipePerLink: boolean): Promise<BranchedOutcome> {
+export async function sizeBranched(
+  context: SizingContext,
+  tree: TreeFlows,
+  onePipePerLink: boolean,
+): Promise<BranchedOutcome> {
   const warnings: NetworkWarning[] = [];
-  const empty: BranchedOutcome = { solved: false, provenOptimal: false, design: new Int32Array(context.sized.length), pieces: [], warnings };
+  const empty: BranchedOutcome = {
+    solved: false,
+    provenOptimal: false,
+    design: new Int32Array(context.sized.length),
+    pieces: [],
+    warnings,
+  };
   const choices = linkChoices(context, (k) => tree.flowM3s[k], warnings);
   if (!choices) return empty;
   const short = context.net.nodes
@@ -69,15 +89,28 @@ export async function sizeBranched(context: SizingContext, tree: TreeFlows, oneP
     warnings.push(headNotEnough(short));
     return empty;
   }
-  const program = treeProgram(context.net, tree, choices, context.candidates, (v) => requiredPressureHeadM(context.net, v, context.rules), onePipePerLink);
+  const program = treeProgram(
+    context.net,
+    tree,
+    choices,
+    context.candidates,
+    (v) => requiredPressureHeadM(context.net, v, context.rules),
+    onePipePerLink,
+  );
   if (program.impossible.length > 0) {
     warnings.push(headNotEnough(program.impossible));
     return empty;
   }
   const highs = await loadHighs();
   const timeLimit = Math.max(0.5, (context.deadline - Date.now()) / 1000);
-  const result = highs.solve(program.text, { output_flag: false, time_limit: timeLimit, mip_rel_gap: 0, mip_abs_gap: 0 });
-  const hasSolution = result.Status === 'Optimal' || (result.Status === 'Time limit reached' && Object.keys(result.Columns).length > 0);
+  const result = highs.solve(program.text, {
+    output_flag: false,
+    time_limit: timeLimit,
+    mip_rel_gap: 0,
+    mip_abs_gap: 0,
+  });
+  const hasSolution =
+    result.Status === 'Optimal' || (result.Status === 'Time limit reached' && Object.keys(result.Columns).length > 0);
   if (!hasSolution) {
     warnings.push({
       code: result.Status === 'Infeasible' ? 'no-feasible-design' : 'sizing-stopped',
@@ -95,8 +128,14 @@ export async function sizeBranched(context: SizingContext, tree: TreeFlows, oneP
     const laid = choice.allowed
       .map((c) => ({ candidate: c, value: result.Columns[program.column(i, c)]?.Primal ?? 0 }))
       .filter((entry) => entry.value > (onePipePerLink ? 0.5 : 1e-6))
-      .map((entry) => ({ candidate: entry.candidate, lengthM: onePipePerLink ? context.net.lengthM[choice.link] : entry.value }))
-      .sort((a, b) => context.candidates[b.candidate].pipe.insideDiameterM - context.candidates[a.candidate].pipe.insideDiameterM);
+      .map((entry) => ({
+        candidate: entry.candidate,
+        lengthM: onePipePerLink ? context.net.lengthM[choice.link] : entry.value,
+      }))
+      .sort(
+        (a, b) =>
+          context.candidates[b.candidate].pipe.insideDiameterM - context.candidates[a.candidate].pipe.insideDiameterM,
+      );
     const used = laid.length > 0 ? laid : [{ candidate: choice.allowed[0], lengthM: context.net.lengthM[choice.link] }];
     design[i] = used.reduce((best, piece) => (piece.lengthM > best.lengthM ? piece : best)).candidate;
     return used;
@@ -109,7 +148,11 @@ export async function sizeBranched(context: SizingContext, tree: TreeFlows, oneP
  * the first piece keeps the link's id, the rest are `<id>~2`, `<id>~3`, … joined at nodes
  * `<id>~1`, `<id>~2`, … whose elevations are taken on a straight grade between the link's ends.
  */
-export function splitInput(context: SizingContext, pieces: BranchedOutcome['pieces'], flowOf: (link: number) => number) {
+export function splitInput(
+  context: SizingContext,
+  pieces: BranchedOutcome['pieces'],
+  flowOf: (link: number) => number,
+) {
   const { input, net, candidates } = context;
   const nodes: NetworkNode[] = [...input.nodes];
   const links: NetworkLink[] = [...input.links];
@@ -133,10 +176,23 @@ export function splitInput(context: SizingContext, pieces: BranchedOutcome['piec
       const last = n === laid.length - 1;
       done += piece.lengthM;
       const next = last ? end : `${link.id}~${n + 1}`;
-      if (!last) nodes.push({ id: next, kind: 'junction', elevationM: startElevation + ((endElevation - startElevation) * done) / link.lengthM });
+      if (!last)
+        nodes.push({
+          id: next,
+          kind: 'junction',
+          elevationM: startElevation + ((endElevation - startElevation) * done) / link.lengthM,
+        });
       const id = n === 0 ? link.id : `${link.id}~${n + 1}`;
       const pipe = candidates[piece.candidate].pipe;
-      const laidLink: NetworkLink = { ...link, id, lengthM: piece.lengthM, pipe, from: forward ? previous : next, to: forward ? next : previous, minorK: n === 0 ? link.minorK : 0 };
+      const laidLink: NetworkLink = {
+        ...link,
+        id,
+        lengthM: piece.lengthM,
+        pipe,
+        from: forward ? previous : next,
+        to: forward ? next : previous,
+        minorK: n === 0 ? link.minorK : 0,
+      };
       if (n === 0) links[k] = laidLink;
       else links.push(laidLink);
       sizedPipes.set(id, pipe);

@@ -12,11 +12,15 @@ import type { SizedPiece, SizingOptions, SizingResult } from './types';
 
 function singleSizeOf(context: SizingContext): SizingResult['singleSize'] {
   const single = cheapestSingleSize(context);
-  return single ? { feasible: true, pipeId: context.candidates[single.design[0]].pipe.id, cost: single.cost } : { feasible: false };
+  return single
+    ? { feasible: true, pipeId: context.candidates[single.design[0]].pipe.id, cost: single.cost }
+    : { feasible: false };
 }
 
 function infeasible(context: SizingContext, method: SizingResult['method'], warnings: NetworkWarning[]): SizingResult {
-  const largest = Int32Array.from(context.ratedByLink, (rated) => (rated.length > 0 ? rated[rated.length - 1] : context.candidates.length - 1));
+  const largest = Int32Array.from(context.ratedByLink, (rated) =>
+    rated.length > 0 ? rated[rated.length - 1] : context.candidates.length - 1,
+  );
   const pipes = designPipes(context, largest);
   return {
     feasible: false,
@@ -43,7 +47,10 @@ function infeasible(context: SizingContext, method: SizingResult['method'], warn
  * `withTankFills`); otherwise a tank is a fixed level only.
  * Also returns the cheapest single size for comparison. Throws `HydraulicsInputError` for bad input.
  */
-export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], options: SizingOptions): Promise<SizingResult> {
+export async function sizeNetwork(
+  input: Parameters<typeof solveNetwork>[0],
+  options: SizingOptions,
+): Promise<SizingResult> {
   // Loading the WebAssembly solver is not part of the search's time budget.
   await loadHighs();
   const context = sizingContext(withTankFills(input, options.tankFillFlowsM3s), options);
@@ -52,7 +59,13 @@ export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], opt
   if (!tree) {
     const warnings: NetworkWarning[] = [];
     if (!onePipePerLink) {
-      warnings.push({ code: 'split-pipe-branched-only', severity: 'info', message: 'Links are split between sizes only in branched networks; this network has loops, so each link gets one size.', values: {} });
+      warnings.push({
+        code: 'split-pipe-branched-only',
+        severity: 'info',
+        message:
+          'Links are split between sizes only in branched networks; this network has loops, so each link gets one size.',
+        values: {},
+      });
     }
     const outcome = await searchLooped(context);
     warnings.push(...outcome.warnings);
@@ -68,7 +81,12 @@ export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], opt
       singleSize: singleSizeOf(context),
       warnings: [
         ...warnings,
-        { code: 'looped-best-found', severity: 'info', message: `Best design found in the time allowed (${outcome.evaluations} designs checked by the solver); a cheaper one may exist.`, values: { evaluations: outcome.evaluations } },
+        {
+          code: 'looped-best-found',
+          severity: 'info',
+          message: `Best design found in the time allowed (${outcome.evaluations} designs checked by the solver); a cheaper one may exist.`,
+          values: { evaluations: outcome.evaluations },
+        },
       ],
     };
   }
@@ -79,7 +97,12 @@ export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], opt
   const check = checkDesign(designInput, context.net, context.staticByLink, sizedPipes, context.rules);
   const warnings = [...outcome.warnings];
   if (!check.feasible) {
-    warnings.push({ code: 'design-check-failed', severity: 'danger', message: `The solver finds the sized design short by up to ${check.worstShortfallM.toFixed(3)} m of pressure: treat it as not feasible.`, values: { worstShortfallM: check.worstShortfallM } });
+    warnings.push({
+      code: 'design-check-failed',
+      severity: 'danger',
+      message: `The solver finds the sized design short by up to ${check.worstShortfallM.toFixed(3)} m of pressure: treat it as not feasible.`,
+      values: { worstShortfallM: check.worstShortfallM },
+    });
   }
   let cost = 0;
   const piecesByLink: Record<string, SizedPiece[]> = {};
@@ -87,7 +110,10 @@ export async function sizeNetwork(input: Parameters<typeof solveNetwork>[0], opt
   context.sized.forEach((k, i) => {
     const id = context.net.linkIds[k];
     pipeByLink[id] = context.candidates[outcome.design[i]].pipe.id;
-    piecesByLink[id] = outcome.pieces[i].map((piece) => ({ pipeId: context.candidates[piece.candidate].pipe.id, lengthM: piece.lengthM }));
+    piecesByLink[id] = outcome.pieces[i].map((piece) => ({
+      pipeId: context.candidates[piece.candidate].pipe.id,
+      lengthM: piece.lengthM,
+    }));
     for (const piece of outcome.pieces[i]) cost += context.candidates[piece.candidate].costPerM * piece.lengthM;
   });
   return {

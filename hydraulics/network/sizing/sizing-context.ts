@@ -28,12 +28,14 @@ export interface SizingContext {
 }
 
 function assertCandidates(candidates: readonly SizingCandidate[], method: string): void {
-  if (!Array.isArray(candidates) || candidates.length === 0) throw new HydraulicsInputError('candidates', 'needs at least one candidate pipe');
+  if (!Array.isArray(candidates) || candidates.length === 0)
+    throw new HydraulicsInputError('candidates', 'needs at least one candidate pipe');
   const ids = new Set<string>();
   candidates.forEach((candidate, index) => {
     resolveNetworkPipe(candidate.pipe, method, index);
     assertNonNegative(candidate.costPerM, 'candidates.costPerM', index);
-    if (ids.has(candidate.pipe.id)) throw new HydraulicsInputError('candidates.pipe.id', `"${candidate.pipe.id}" is listed twice`, index);
+    if (ids.has(candidate.pipe.id))
+      throw new HydraulicsInputError('candidates.pipe.id', `"${candidate.pipe.id}" is listed twice`, index);
     ids.add(candidate.pipe.id);
   });
 }
@@ -47,21 +49,26 @@ export function sizingContext(input: NetworkInput, options: SizingOptions): Sizi
   if (options.velocityMaxMs !== undefined) assertPositive(options.velocityMaxMs, 'velocityMaxMs');
   if (options.velocityMinMs !== undefined) assertNonNegative(options.velocityMinMs, 'velocityMinMs');
   const topology = networkTopology(net);
-  const candidates = [...options.candidates].sort((a, b) => a.costPerM - b.costPerM || a.pipe.insideDiameterM - b.pipe.insideDiameterM);
+  const candidates = [...options.candidates].sort(
+    (a, b) => a.costPerM - b.costPerM || a.pipe.insideDiameterM - b.pipe.insideDiameterM,
+  );
   const statics = staticHeadsM(net);
   const sized: number[] = [];
   const staticByLink = new Map<string, number>();
   const ratedByLink: number[][] = [];
   for (let k = 0; k < net.visibleLinkCount; k++) {
     const status = net.status[k];
-    if (status === 'prv' || status === 'closed' || topology.isolated[net.from[k]] || topology.isolated[net.to[k]]) continue;
+    if (status === 'prv' || status === 'closed' || topology.isolated[net.from[k]] || topology.isolated[net.to[k]])
+      continue;
     const atEnds = [net.from[k], net.to[k]].map((v) => statics[v] - net.elevationM[v]).filter((h) => !Number.isNaN(h));
     const route = input.links[k].maxRouteStaticPressureHeadM ?? -Infinity;
     const staticHeadM = Math.max(route, ...atEnds);
     staticByLink.set(net.linkIds[k], staticHeadM);
     sized.push(k);
     ratedByLink.push(
-      candidates.map((_, c) => c).filter((c) => ratingHolds(candidates[c].pipe, staticHeadM, net.settings.waterTemperatureC)),
+      candidates
+        .map((_, c) => c)
+        .filter((c) => ratingHolds(candidates[c].pipe, staticHeadM, net.settings.waterTemperatureC)),
     );
   }
   return {

@@ -25,17 +25,31 @@ export function withTankFills(input: NetworkInput, fills: Readonly<Record<string
   for (const [tankId, flowM3s] of entries) {
     assertNonNegative(flowM3s, `tankFillFlowsM3s.${tankId}`);
     const tank = byId.get(tankId);
-    if (!tank || tank.kind !== 'tank') throw new HydraulicsInputError(`tankFillFlowsM3s.${tankId}`, `"${tankId}" is not a tank of the network`);
+    if (!tank || tank.kind !== 'tank')
+      throw new HydraulicsInputError(`tankFillFlowsM3s.${tankId}`, `"${tankId}" is not a tank of the network`);
     if (!input.links.some((link) => link.to === tankId)) {
-      throw new HydraulicsInputError(`tankFillFlowsM3s.${tankId}`, `the tank "${tankId}" must be filled but no link is laid into it`);
+      throw new HydraulicsInputError(
+        `tankFillFlowsM3s.${tankId}`,
+        `the tank "${tankId}" must be filled but no link is laid into it`,
+      );
     }
     filled.add(tankId);
     const inletLevelM = tank.tank?.overflowLevelM ?? tank.waterLevelM ?? tank.elevationM;
-    extra.push({ id: tankFillNodeId(tankId), kind: 'outlet', elevationM: inletLevelM, demandM3s: flowM3s, minPressureHeadM: 0 });
+    extra.push({
+      id: tankFillNodeId(tankId),
+      kind: 'outlet',
+      elevationM: inletLevelM,
+      demandM3s: flowM3s,
+      minPressureHeadM: 0,
+    });
   }
   const links = input.links.map((link): NetworkLink => {
     if (!filled.has(link.to)) return link;
-    return { ...link, to: tankFillNodeId(link.to), ...(link.status === 'float-valve' ? { status: 'open' as const } : {}) };
+    return {
+      ...link,
+      to: tankFillNodeId(link.to),
+      ...(link.status === 'float-valve' ? { status: 'open' as const } : {}),
+    };
   });
   return { ...input, nodes: [...input.nodes, ...extra], links };
 }

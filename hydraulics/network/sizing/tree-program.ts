@@ -43,13 +43,22 @@ export function candidateLaw(net: CompiledNetwork, candidate: SizingCandidate): 
   const a = settings.hazenWilliamsFlowExponent;
   return {
     kind: 'hazen-williams',
-    resistance: settings.hazenWilliamsConstant / ((pipe.hazenWilliamsC as number) ** a * pipe.insideDiameterM ** settings.hazenWilliamsDiameterExponent),
+    resistance:
+      settings.hazenWilliamsConstant /
+      ((pipe.hazenWilliamsC as number) ** a * pipe.insideDiameterM ** settings.hazenWilliamsDiameterExponent),
     exponent: a,
   };
 }
 
 /** Loss per metre and minor loss of each allowed candidate at the link's design flow. */
-export function lossesOf(net: CompiledNetwork, link: number, allowed: number[], candidates: readonly SizingCandidate[], flowM3s: number, minorK: number) {
+export function lossesOf(
+  net: CompiledNetwork,
+  link: number,
+  allowed: number[],
+  candidates: readonly SizingCandidate[],
+  flowM3s: number,
+  minorK: number,
+) {
   const q = Math.abs(flowM3s);
   return {
     lossPerM: allowed.map((c) => frictionLossM(candidateLaw(net, candidates[c]), q)),
@@ -113,13 +122,16 @@ export function treeProgram(
       const extraMinor = onePipePerLink ? 0 : Math.max(0, ...choice.minorLossM);
       choice.allowed.forEach((c, j) => {
         const coefficient = onePipePerLink ? choice.lossPerM[j] * length + choice.minorLossM[j] : choice.lossPerM[j];
-        if (direction !== 0 && coefficient !== 0) terms.push(`${direction > 0 ? '+' : '-'} ${fmt(coefficient)} ${column(i, c)}`);
+        if (direction !== 0 && coefficient !== 0)
+          terms.push(`${direction > 0 ? '+' : '-'} ${fmt(coefficient)} ${column(i, c)}`);
         objective.push(`+ ${fmt(candidates[c].costPerM * (onePipePerLink ? length : 1))} ${column(i, c)}`);
         if (onePipePerLink) integers.push(column(i, c));
         else bounds.push(`0 <= ${column(i, c)} <= ${fmt(length)}`);
       });
       constant += direction * extraMinor;
-      rows.push(` n${i}: ${choice.allowed.map((c) => `+ ${column(i, c)}`).join(' ')} = ${onePipePerLink ? 1 : fmt(length)}`);
+      rows.push(
+        ` n${i}: ${choice.allowed.map((c) => `+ ${column(i, c)}`).join(' ')} = ${onePipePerLink ? 1 : fmt(length)}`,
+      );
     }
     // h_v - h_u + direction·loss = 0, with fixed heads moved to the right-hand side.
     let rhs = -constant;
@@ -155,4 +167,3 @@ export function treeProgram(
   ].join('\n');
   return { text, column, impossible };
 }
-

@@ -49,7 +49,10 @@ export interface SizingResult {
   pipeByLink: Record<string, string>;
   /** Pieces per link when `onePipePerLink` is false, upstream piece first. */
   piecesByLink?: Record<string, SizedPiece[]>;
-  /** The network solved with the chosen pipes (the check of the design); a filled tank's inlet is the node `<tank id>#fill`. */
+  /**
+   * The network solved with the chosen pipes (the check of the design); a filled tank's inlet is the node `<tank
+   * id>#fill`.
+   */
   solution: NetworkSolution;
   /** How the design was found. */
   method: 'branched-mip' | 'branched-lp' | 'looped-search';

@@ -54,7 +54,8 @@ class DegreeHeap {
         if (left >= size) break;
         const right = left + 1;
         let child = left;
-        if (right < size && (keys[right] < keys[left] || (keys[right] === keys[left] && nodes[right] < nodes[left]))) child = right;
+        if (right < size && (keys[right] < keys[left] || (keys[right] === keys[left] && nodes[right] < nodes[left])))
+          child = right;
         if (keys[child] > lastKey || (keys[child] === lastKey && nodes[child] >= lastNode)) break;
         keys[i] = keys[child];
         nodes[i] = nodes[child];

@@ -12,7 +12,11 @@ const DEVICE_KINDS = ['break-pressure-tank', 'air-release-valve', 'washout', 'is
 
 function assertOnLine(chainageM: number, firstM: number, lastM: number, field: string, index: number): void {
   if (chainageM < firstM || chainageM > lastM) {
-    throw new HydraulicsInputError(field, `${chainageM} m lies outside the line (${firstM} m to ${lastM} m)`, index, { chainageM, fromM: firstM, toM: lastM });
+    throw new HydraulicsInputError(field, `${chainageM} m lies outside the line (${firstM} m to ${lastM} m)`, index, {
+      chainageM,
+      fromM: firstM,
+      toM: lastM,
+    });
   }
 }
 
@@ -76,7 +80,8 @@ export function assertFlow(flow: unknown): void {
   if (flow.kind === 'design') assertNonNegative(flow.flowM3s, 'flow.flowM3s');
   if (flow.kind === 'schedule') {
     const pieces = flow.pieces;
-    if (!Array.isArray(pieces) || pieces.length === 0) throw new HydraulicsInputError('flow.pieces', 'needs at least one piece');
+    if (!Array.isArray(pieces) || pieces.length === 0)
+      throw new HydraulicsInputError('flow.pieces', 'needs at least one piece');
     pieces.forEach((piece: unknown, index: number) => {
       assertRecord(piece, 'flow.pieces');
       assertFinite(piece.fromM, 'flow.pieces.fromM', index);

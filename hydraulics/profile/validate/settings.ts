@@ -19,7 +19,13 @@ export function assertSettings(settings: unknown): void {
     assertOneOf(s.frictionMethod, ['hazen-williams', 'darcy-weisbach'] as const, 'settings.frictionMethod');
   }
   if (s.waterTemperatureC !== undefined) {
-    assertInRange(s.waterTemperatureC, 'settings.waterTemperatureC', WATER_TEMPERATURE_MIN_C, WATER_TEMPERATURE_MAX_C, 'C');
+    assertInRange(
+      s.waterTemperatureC,
+      'settings.waterTemperatureC',
+      WATER_TEMPERATURE_MIN_C,
+      WATER_TEMPERATURE_MAX_C,
+      'C',
+    );
   }
   optional(s.safetyFactor, assertPositive, 'settings.safetyFactor');
   optional(s.velocityMinMs, assertNonNegative, 'settings.velocityMinMs');

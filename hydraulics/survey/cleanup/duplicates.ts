@@ -2,7 +2,13 @@ import type { ProposedChange } from './proposed-change';
 import type { RouteStation } from '../types';
 
 function sameStation(a: RouteStation, b: RouteStation): boolean {
-  return a.chainageM === b.chainageM && a.elevationM === b.elevationM && a.latitudeDeg === b.latitudeDeg && a.longitudeDeg === b.longitudeDeg && a.timeS === b.timeS;
+  return (
+    a.chainageM === b.chainageM &&
+    a.elevationM === b.elevationM &&
+    a.latitudeDeg === b.latitudeDeg &&
+    a.longitudeDeg === b.longitudeDeg &&
+    a.timeS === b.timeS
+  );
 }
 
 /** Orders optional numbers: absent first, then by value (NaN last, so it never sits between equals). */
@@ -41,7 +47,14 @@ export function detectDuplicates(points: readonly RouteStation[]): ProposedChang
   for (let k = 1; k < order.length; k += 1) {
     const i = order[k];
     if (sameStation(points[first], points[i])) {
-      changes.push({ kind: 'duplicate', index: i, field: 'deleted', from: false, to: true, reason: `exact duplicate of point ${first + 1}` });
+      changes.push({
+        kind: 'duplicate',
+        index: i,
+        field: 'deleted',
+        from: false,
+        to: true,
+        reason: `exact duplicate of point ${first + 1}`,
+      });
     } else {
       first = i;
     }

@@ -14,7 +14,10 @@ import { assertFiniteNumber } from '../../input-guards';
  * real ground, and keeps its height, as the route's ends do. A lone spike leaves no high in the
  * smoothed profile and is smoothed away.
  */
-export function proposeSmoothing(points: readonly RouteStation[], options: { windowSize: number; keepTurningPointsM?: number }): ProposedChange[] {
+export function proposeSmoothing(
+  points: readonly RouteStation[],
+  options: { windowSize: number; keepTurningPointsM?: number },
+): ProposedChange[] {
   const heights = points.map((p) => p.elevationM);
   const smoothed = movingMedian(heights, options.windowSize);
   const toleranceM = options.keepTurningPointsM ?? DEFAULT_LINE_SETTINGS.airPointToleranceM;
@@ -22,7 +25,10 @@ export function proposeSmoothing(points: readonly RouteStation[], options: { win
   const still = findTurningPoints(smoothed, toleranceM);
   const half = (options.windowSize - 1) / 2;
   const near = (candidates: readonly number[], i: number) => candidates.some((j) => Math.abs(j - i) <= half);
-  const kept = new Set([...raw.highs.filter((i) => near(still.highs, i)), ...raw.lows.filter((i) => near(still.lows, i))]);
+  const kept = new Set([
+    ...raw.highs.filter((i) => near(still.highs, i)),
+    ...raw.lows.filter((i) => near(still.lows, i)),
+  ]);
   const changes: ProposedChange[] = [];
   points.forEach((p, i) => {
     if (smoothed[i] !== p.elevationM && !kept.has(i)) {

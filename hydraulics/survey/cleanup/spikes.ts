@@ -31,7 +31,11 @@ export function detectGradeSpikes(points: readonly RouteStation[], options: Grad
     if (runIn <= 0 || runOut <= 0) continue; // zero or backwards legs are reported by the order/duplicate checks
     const gradeIn = (p.elevationM - a.elevationM) / runIn;
     const gradeOut = (b.elevationM - p.elevationM) / runOut;
-    if (Math.abs(gradeIn) > options.gradeThreshold && Math.abs(gradeOut) > options.gradeThreshold && Math.sign(gradeIn) !== Math.sign(gradeOut)) {
+    if (
+      Math.abs(gradeIn) > options.gradeThreshold &&
+      Math.abs(gradeOut) > options.gradeThreshold &&
+      Math.sign(gradeIn) !== Math.sign(gradeOut)
+    ) {
       const to = a.elevationM + ((b.elevationM - a.elevationM) * runIn) / (runIn + runOut);
       changes.push({
         kind: 'grade-spike',
@@ -57,7 +61,10 @@ export interface MedianOutlierOptions {
 export function detectMedianOutliers(points: readonly RouteStation[], options: MedianOutlierOptions): ProposedChange[] {
   assertPositive(options.toleranceM, 'toleranceM');
   assertStations(points);
-  const medians = movingMedian(points.map((p) => p.elevationM), options.windowSize);
+  const medians = movingMedian(
+    points.map((p) => p.elevationM),
+    options.windowSize,
+  );
   const changes: ProposedChange[] = [];
   points.forEach((p, i) => {
     const offM = p.elevationM - medians[i];

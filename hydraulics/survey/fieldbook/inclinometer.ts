@@ -31,7 +31,11 @@ export function reduceInclinometerLeg(input: InclinometerLegInput, index?: numbe
   assertNonNegative(input.slopeDistanceM, 'slopeDistanceM', index);
   assertFiniteNumber(input.verticalAngle, 'verticalAngle', index);
   if (input.angleUnit !== 'degrees' && input.angleUnit !== 'percent') {
-    throw new HydraulicsInputError('angleUnit', `must be "degrees" or "percent", got ${String(input.angleUnit)}`, index);
+    throw new HydraulicsInputError(
+      'angleUnit',
+      `must be "degrees" or "percent", got ${String(input.angleUnit)}`,
+      index,
+    );
   }
   if (input.angleUnit === 'degrees' && Math.abs(input.verticalAngle) >= 90) {
     throw new HydraulicsInputError(
@@ -68,7 +72,9 @@ export function reduceInclinometerTraverse(input: InclinometerTraverseInput): Re
   assertFiniteNumber(input.startElevationM, 'startElevationM');
   const startChainageM = input.startChainageM ?? 0;
   assertFiniteNumber(startChainageM, 'startChainageM');
-  const stations: ReducedStation[] = [{ chainageM: startChainageM, elevationM: input.startElevationM, slopeChainageM: 0 }];
+  const stations: ReducedStation[] = [
+    { chainageM: startChainageM, elevationM: input.startElevationM, slopeChainageM: 0 },
+  ];
   input.legs.forEach((leg, i) => {
     const r = reduceInclinometerLeg(leg, i);
     const prev = stations[stations.length - 1];

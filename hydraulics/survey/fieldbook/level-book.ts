@@ -55,17 +55,30 @@ export function assertLevelBook(readings: readonly LevelBookReading[]): void {
     const first = i === 0;
     const last = i === readings.length - 1;
     if (first) {
-      if (!hasValue(r.backsightM)) throw new HydraulicsInputError('readings.backsightM', 'the first line must be a backsight to the starting mark', i);
+      if (!hasValue(r.backsightM))
+        throw new HydraulicsInputError(
+          'readings.backsightM',
+          'the first line must be a backsight to the starting mark',
+          i,
+        );
       if (hasValue(r.foresightM) || hasValue(r.intermediateM)) {
         throw new HydraulicsInputError('readings', 'the first line can only hold a backsight', i);
       }
       return;
     }
     if (hasValue(r.intermediateM) && (hasValue(r.foresightM) || hasValue(r.backsightM))) {
-      throw new HydraulicsInputError('readings.intermediateM', 'an intermediate sight cannot share a line with a backsight or foresight', i);
+      throw new HydraulicsInputError(
+        'readings.intermediateM',
+        'an intermediate sight cannot share a line with a backsight or foresight',
+        i,
+      );
     }
     if (hasValue(r.backsightM) && !hasValue(r.foresightM)) {
-      throw new HydraulicsInputError('readings.foresightM', 'missing foresight: a change point needs the foresight taken before the instrument moved', i);
+      throw new HydraulicsInputError(
+        'readings.foresightM',
+        'missing foresight: a change point needs the foresight taken before the instrument moved',
+        i,
+      );
     }
     if (!hasValue(r.intermediateM) && !hasValue(r.foresightM)) {
       throw new HydraulicsInputError('readings', 'line has no staff reading', i);
@@ -81,7 +94,9 @@ export function assertLevelBook(readings: readonly LevelBookReading[]): void {
 
 function reduceByCollimation(readings: readonly LevelBookReading[], startElevationM: number): ReducedLevel[] {
   let collimationM = startElevationM + (readings[0].backsightM as number);
-  const stations: ReducedLevel[] = [{ label: readings[0].label, reducedLevelM: startElevationM, heightOfCollimationM: collimationM }];
+  const stations: ReducedLevel[] = [
+    { label: readings[0].label, reducedLevelM: startElevationM, heightOfCollimationM: collimationM },
+  ];
   for (const r of readings.slice(1)) {
     const sight = (r.intermediateM ?? r.foresightM) as number;
     const reducedLevelM = collimationM - sight;
@@ -118,7 +133,10 @@ export function reduceLevelBook(input: LevelBookInput): LevelBookResult {
   assertFiniteNumber(input.startElevationM, 'startElevationM');
   if (input.closingElevationM !== undefined) assertFiniteNumber(input.closingElevationM, 'closingElevationM');
   if (input.method !== 'rise-and-fall' && input.method !== 'height-of-collimation') {
-    throw new HydraulicsInputError('method', `must be "rise-and-fall" or "height-of-collimation", got ${String(input.method)}`);
+    throw new HydraulicsInputError(
+      'method',
+      `must be "rise-and-fall" or "height-of-collimation", got ${String(input.method)}`,
+    );
   }
   assertLevelBook(input.readings);
   const stations =

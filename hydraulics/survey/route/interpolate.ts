@@ -9,7 +9,12 @@ export function interpolateStation(a: RouteStation, b: RouteStation, chainageM: 
   const run = b.chainageM - a.chainageM;
   const t = run === 0 ? 0 : (chainageM - a.chainageM) / run;
   const station: RouteStation = { chainageM, elevationM: a.elevationM + t * (b.elevationM - a.elevationM) };
-  if (a.latitudeDeg !== undefined && a.longitudeDeg !== undefined && b.latitudeDeg !== undefined && b.longitudeDeg !== undefined) {
+  if (
+    a.latitudeDeg !== undefined &&
+    a.longitudeDeg !== undefined &&
+    b.latitudeDeg !== undefined &&
+    b.longitudeDeg !== undefined
+  ) {
     const p = geodesicInterpolate({
       latitude1Deg: a.latitudeDeg,
       longitude1Deg: a.longitudeDeg,

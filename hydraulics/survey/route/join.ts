@@ -35,7 +35,10 @@ export function joinRoutes<T extends RouteStation>(
   const end = first[first.length - 1];
   const start = second[0];
   const bothPlaced =
-    end.latitudeDeg !== undefined && end.longitudeDeg !== undefined && start.latitudeDeg !== undefined && start.longitudeDeg !== undefined;
+    end.latitudeDeg !== undefined &&
+    end.longitudeDeg !== undefined &&
+    start.latitudeDeg !== undefined &&
+    start.longitudeDeg !== undefined;
   const gapM =
     options.gapM ??
     (bothPlaced

@@ -19,18 +19,25 @@ export interface SplitRouteResult<T extends RouteStation> {
  * share the split station; its height is interpolated on the grade between its neighbours when
  * no station stood there.
  */
-export function splitRoute<T extends RouteStation>(points: readonly T[], options: { chainageM: number }): SplitRouteResult<T> {
+export function splitRoute<T extends RouteStation>(
+  points: readonly T[],
+  options: { chainageM: number },
+): SplitRouteResult<T> {
   assertOrderedStations(points);
   const c = options.chainageM;
   assertFiniteNumber(c, 'chainageM');
   const startM = points[0].chainageM;
   const endM = points[points.length - 1].chainageM;
   if (c <= startM || c >= endM) {
-    throw new HydraulicsInputError('chainageM', `the split must fall inside the route (${startM} m to ${endM} m), got ${c} m`);
+    throw new HydraulicsInputError(
+      'chainageM',
+      `the split must fall inside the route (${startM} m to ${endM} m), got ${c} m`,
+    );
   }
   const exact = points.findIndex((p) => p.chainageM === c);
   const after = points.findIndex((p) => p.chainageM > c);
-  const splitStation: T | RouteStation = exact >= 0 ? points[exact] : interpolateStation(points[after - 1], points[after], c);
+  const splitStation: T | RouteStation =
+    exact >= 0 ? points[exact] : interpolateStation(points[after - 1], points[after], c);
   const before = points.filter((p) => p.chainageM < c);
   const rest = points.filter((p) => p.chainageM > c);
   return {

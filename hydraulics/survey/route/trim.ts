@@ -26,7 +26,10 @@ export function trimRoute<T extends RouteStation>(
   const startM = points[0].chainageM;
   const endM = points[points.length - 1].chainageM;
   if (from < startM || to > endM || from >= to) {
-    throw new HydraulicsInputError('fromChainageM', `the kept part must satisfy ${startM} ≤ from < to ≤ ${endM} m, got ${from} to ${to} m`);
+    throw new HydraulicsInputError(
+      'fromChainageM',
+      `the kept part must satisfy ${startM} ≤ from < to ≤ ${endM} m, got ${from} to ${to} m`,
+    );
   }
   const inner = points.filter((p) => p.chainageM > from && p.chainageM < to).map((p) => ({ ...p }));
   const kept = [stationAt(points, from), ...inner, stationAt(points, to)];

@@ -29,9 +29,20 @@ describe('catalogue integrity', () => {
   it('has the series the standards define', () => {
     expect(PIPE_SERIES_IDS).toEqual(
       expect.arrayContaining([
-        'pvc-d2241-sdr13.5', 'pvc-d2241-sdr17', 'pvc-d2241-sdr21', 'pvc-d2241-sdr26', 'pvc-d2241-sdr32.5', 'pvc-d2241-sdr41',
-        'pe-d2239-sidr7', 'pe-d2239-sidr9', 'pe-d2239-sidr11.5', 'pe-d2239-sidr15', 'pe-d2239-sidr19',
-        'pe100-iso4427-sdr11', 'pe80-iso4427-sdr11', 'steel-sch40',
+        'pvc-d2241-sdr13.5',
+        'pvc-d2241-sdr17',
+        'pvc-d2241-sdr21',
+        'pvc-d2241-sdr26',
+        'pvc-d2241-sdr32.5',
+        'pvc-d2241-sdr41',
+        'pe-d2239-sidr7',
+        'pe-d2239-sidr9',
+        'pe-d2239-sidr11.5',
+        'pe-d2239-sidr15',
+        'pe-d2239-sidr19',
+        'pe100-iso4427-sdr11',
+        'pe80-iso4427-sdr11',
+        'steel-sch40',
       ]),
     );
   });
@@ -72,7 +83,11 @@ describe('ASTM D2241 PVC dimensions', () => {
     expect(averageWall('pvc-d2241-sdr21-6in')).toBeCloseTo(0.335, 9);
   });
   it('SDR 26 2/4/6 in average walls 0.101/0.183/0.271 in (Available Plastics [R13])', () => {
-    for (const [size, wall] of [['2', 0.101], ['4', 0.183], ['6', 0.271]] as const) {
+    for (const [size, wall] of [
+      ['2', 0.101],
+      ['4', 0.183],
+      ['6', 0.271],
+    ] as const) {
       const pipe = findPipe(`pvc-d2241-sdr26-${size}in`)!;
       expect(inches(pipe.outsideDiameterM - pipe.insideDiameterM) / 2).toBeCloseTo(wall, 9);
     }
@@ -107,7 +122,8 @@ describe('ISO 4427 / EN 12201 metric PE', () => {
     expect(findPipe('pe100-iso4427-sdr11-75mm')!.wallM).toBeCloseTo(0.0068, 12);
   });
   it('bores use the mean outside diameter and the mean wall, not the minimum wall (core.md §2.7 [C]): 110 SDR 17 → 96.35 mm, not 96.8', () => {
-    // Mean OD 110 + 0.7/2; wall 6.6 + (0.1·6.6 + 0.1 → 0.8)/2 = 7.0 (tolerances of ISO 11922-1 grades B and V, from memory).
+    // Mean OD 110 + 0.7/2; wall 6.6 + (0.1·6.6 + 0.1 → 0.8)/2 = 7.0 (tolerances of ISO 11922-1 grades B and V, from
+    // memory).
     expect(findPipe('pe100-iso4427-sdr17-110mm')!.insideDiameterM * 1000).toBeCloseTo(96.35, 9);
     expect(findPipe('pe100-iso4427-sdr11-110mm')!.insideDiameterM * 1000).toBeCloseTo(110.35 - 2 * (10 + 1.1 / 2), 9);
     for (const id of ['pe100-iso4427-sdr11-20mm', 'pe100-iso4427-sdr17-160mm', 'pe80-iso4427-sdr7.4-63mm']) {
@@ -142,6 +158,9 @@ describe('steel Schedule 40', () => {
     expect(inches(findPipe('steel-sch40-2in')!.outsideDiameterM)).toBeCloseTo(2.375, 10);
   });
   it('rates threaded 2 in at 2·20000·(0.875·0.154 − 0.0696)/2.375 psi (Barlow, allowances from memory; regression)', () => {
-    expect(findPipe('steel-sch40-2in')!.pressureRatingPa / PSI).toBeCloseTo((40000 * (0.875 * 0.154 - 0.0696)) / 2.375, 6);
+    expect(findPipe('steel-sch40-2in')!.pressureRatingPa / PSI).toBeCloseTo(
+      (40000 * (0.875 * 0.154 - 0.0696)) / 2.375,
+      6,
+    );
   });
 });

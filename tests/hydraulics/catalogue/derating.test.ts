@@ -22,7 +22,9 @@ describe('plastic pipe temperature derating', () => {
   it('never increases with temperature', () => {
     fc.assert(
       fc.property(fc.double({ min: 0, max: 59.2, noNaN: true }), (t) => {
-        expect(plasticDeratingFactor({ temperatureC: t + 1 })).toBeLessThanOrEqual(plasticDeratingFactor({ temperatureC: t }));
+        expect(plasticDeratingFactor({ temperatureC: t + 1 })).toBeLessThanOrEqual(
+          plasticDeratingFactor({ temperatureC: t }),
+        );
       }),
     );
   });
@@ -37,7 +39,10 @@ describe('deratedPressureRatingPa', () => {
     expect(deratedPressureRatingPa(pe, 20)).toBe(pe.pressureRatingPa);
     expect(deratedPressureRatingPa(pe, 23)).toBeLessThan(pe.pressureRatingPa);
     expect(deratedPressureRatingPa(steel, 40)).toBe(steel.pressureRatingPa);
-    expect(deratedPressureRatingPa(pvc, 35)).toBeCloseTo(pvc.pressureRatingPa * plasticDeratingFactor({ temperatureC: 35 }), 6);
+    expect(deratedPressureRatingPa(pvc, 35)).toBeCloseTo(
+      pvc.pressureRatingPa * plasticDeratingFactor({ temperatureC: 35 }),
+      6,
+    );
   });
   it('rejects temperatures off the table and bad specs', () => {
     const pe = findPipe('pe100-iso4427-sdr11-63mm')!;
@@ -77,6 +82,8 @@ describe('PE derating follows the PE standard, not the PVC table', () => {
 
   it('PVC at the same temperature keeps less than PE (the PVC table is the harsher one)', () => {
     const pvc = findPipe('pvc-d2241-sdr21-2in')!;
-    expect(deratedPressureRatingPa(pvc, 40) / pvc.pressureRatingPa).toBeLessThan(deratedPressureRatingPa(pe, 40) / pe.pressureRatingPa);
+    expect(deratedPressureRatingPa(pvc, 40) / pvc.pressureRatingPa).toBeLessThan(
+      deratedPressureRatingPa(pe, 40) / pe.pressureRatingPa,
+    );
   });
 });

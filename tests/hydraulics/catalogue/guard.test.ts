@@ -16,7 +16,13 @@ function errorOf(value: unknown, index?: number): HydraulicsInputError {
 
 describe('assertPipeSpec', () => {
   it('accepts a custom pipe written as plain data', () => {
-    const custom: PipeSpec = { ...base, id: 'custom-1', label: 'Old black poly 1 in', material: 'custom', source: 'site measurement' };
+    const custom: PipeSpec = {
+      ...base,
+      id: 'custom-1',
+      label: 'Old black poly 1 in',
+      material: 'custom',
+      source: 'site measurement',
+    };
     expect(() => assertPipeSpec(custom)).not.toThrow();
   });
   it.each([

@@ -35,6 +35,8 @@ describe('Korteweg wave speed', () => {
     expect(Math.abs(findPipe('pvc-d2241-sdr21-4in')!.waveSpeedMs - 369) / 369).toBeLessThan(0.01);
   });
   it('rejects a non-positive wall', () => {
-    expect(() => kortewegWaveSpeedMs({ insideDiameterM: 0.1, wallM: 0, elasticModulusPa: 1e9 })).toThrow(/wallM: must be greater than 0/);
+    expect(() => kortewegWaveSpeedMs({ insideDiameterM: 0.1, wallM: 0, elasticModulusPa: 1e9 })).toThrow(
+      /wallM: must be greater than 0/,
+    );
   });
 });

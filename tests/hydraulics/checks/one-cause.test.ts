@@ -6,7 +6,13 @@ import { displayUnits } from '../../../lib/units';
 /** 1.6 km of 32 mm pipe over a rise at ch. 700 to a trough wanting 10 m of pressure (invented). */
 function line(flowM3s: number): LineInput {
   return {
-    stations: [[0, 200], [300, 150], [700, 170], [1200, 120], [1600, 100]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stations: [
+      [0, 200],
+      [300, 150],
+      [700, 170],
+      [1200, 120],
+      [1600, 100],
+    ].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
     stretches: [{ fromM: 0, toM: 1600, pipe: 'pe100-iso4427-sdr11-32mm' }],
     start: { kind: 'water-level', levelM: 201 },
     end: { kind: 'outlet', elevationM: 99, residualHeadM: 10 },

@@ -7,7 +7,13 @@ describe('rating warnings name the pipe that is over its rating (review defect, 
   // Falling to ch. 200 in PN 8 pipe, then rising in PN 16: the static pressure peaks AT the boundary,
   // inside the PN 8 stretch's range. Ratings: ISO 4427-2 PN = 20 e sigma / (d - e) via the catalogue [R12].
   const input: LineInput = {
-    stations: [[0, 300], [100, 250], [200, 200], [300, 230], [400, 260]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stations: [
+      [0, 300],
+      [100, 250],
+      [200, 200],
+      [300, 230],
+      [400, 260],
+    ].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
     stretches: [
       { fromM: 0, toM: 200, pipe: 'pe80-iso4427-sdr17-50mm' },
       { fromM: 200, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' },
@@ -38,7 +44,7 @@ describe('one rule for low points (review defect, issue 13)', () => {
   // nor a winter drain point; before, the drain-point finder used 0.5 m and found it.
   const profile = { chainageM: [0, 50, 100, 150, 200], elevationM: [110, 100, 99.3, 100, 95] };
 
-  it('findLowPoints defaults to the washout check\'s tolerance', () => {
+  it("findLowPoints defaults to the washout check's tolerance", () => {
     expect(findLowPoints(profile)).toEqual([]);
   });
 
@@ -82,7 +88,13 @@ describe('the static pressure arriving at a break-pressure tank counts (review d
   // Falls 100 m to a tank at ch. 200 whose water stands at the ground: the pipe just above the tank
   // holds the full 101 m of static head (hydrostatics: static head = water level above the pipe).
   const input: LineInput = {
-    stations: [[0, 200], [100, 150], [200, 100], [300, 90], [400, 80]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stations: [
+      [0, 200],
+      [100, 150],
+      [200, 100],
+      [300, 90],
+      [400, 80],
+    ].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
     stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }],
     devices: [{ kind: 'break-pressure-tank', chainageM: 200 }],
     start: { kind: 'water-level', levelM: 201 },
@@ -91,16 +103,21 @@ describe('the static pressure arriving at a break-pressure tank counts (review d
     settings: { defaultCoverM: 0 },
   };
 
-  it('the stretch\'s highest static head is the 101 m arriving at the tank, not the 51 m upstream', () => {
+  it("the stretch's highest static head is the 101 m arriving at the tank, not the 51 m upstream", () => {
     expect(analyzeLine(input).stretches[0].maxStaticPressureHeadM).toBeCloseTo(101, 9);
   });
 });
 
-describe('the practical siphon limit scales with the site\'s atmospheric head (review defect, issue 13)', () => {
-  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588 (docs/references/core.md §1.6).
+describe("the practical siphon limit scales with the site's atmospheric head (review defect, issue 13)", () => {
+  // 7.5 m of suction at sea level, where 1 atm = 10.33 m [R7]; ISA atmosphere p = 101325 (1 - 2.25577e-5 h)^5.25588
+  // (docs/references/core.md §1.6).
   const atSite = (siteAltitudeM: number) =>
     analyzeLine({
-      stations: [[0, 100], [100, 104], [200, 90]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+      stations: [
+        [0, 100],
+        [100, 104],
+        [200, 90],
+      ].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
       stretches: [{ fromM: 0, toM: 200, pipe: 'pe100-iso4427-sdr11-50mm' }],
       start: { kind: 'water-level', levelM: 99.5 },
       end: { kind: 'free-discharge' },
@@ -127,7 +144,10 @@ describe('the practical siphon limit scales with the site\'s atmospheric head (r
 describe('default pipe cover is common burial practice, not 0 m (review defect, issue 13)', () => {
   it('a station without cover puts the pipe 0.75 m below ground (common practice, no source)', () => {
     const analysis = analyzeLine({
-      stations: [{ chainageM: 0, groundElevationM: 100 }, { chainageM: 100, groundElevationM: 90 }],
+      stations: [
+        { chainageM: 0, groundElevationM: 100 },
+        { chainageM: 100, groundElevationM: 90 },
+      ],
       stretches: [{ fromM: 0, toM: 100, pipe: 'pe100-iso4427-sdr11-50mm' }],
       start: { kind: 'water-level', levelM: 101 },
       end: { kind: 'free-discharge' },
@@ -138,11 +158,15 @@ describe('default pipe cover is common burial practice, not 0 m (review defect, 
   });
 });
 
-describe('a summit above the source\'s water level is a true siphon (review defect, issue 13; profile-and-checks.md §2.2)', () => {
+describe("a summit above the source's water level is a true siphon (review defect, issue 13; profile-and-checks.md §2.2)", () => {
   // BC Factsheet 590.304-5 "Water Flow, Air Locks and Siphons" [R10]: a pipe above the hydraulic
   // (static) line only runs as a siphon, must be primed and loses its prime as air collects.
   const line = (flowM3s: number): LineInput => ({
-    stations: [[0, 100], [100, 103], [200, 80]].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
+    stations: [
+      [0, 100],
+      [100, 103],
+      [200, 80],
+    ].map(([chainageM, groundElevationM]) => ({ chainageM, groundElevationM })),
     stretches: [{ fromM: 0, toM: 200, pipe: 'pe100-iso4427-sdr11-50mm' }],
     start: { kind: 'water-level', levelM: 101 },
     end: { kind: 'free-discharge' },

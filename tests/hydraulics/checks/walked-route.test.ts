@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeLine, surveyHeightScatterM, type LineAnalysis, type LineInput, type LineWarning } from '../../../hydraulics/index';
+import {
+  analyzeLine,
+  surveyHeightScatterM,
+  type LineAnalysis,
+  type LineInput,
+  type LineWarning,
+} from '../../../hydraulics/index';
 import { ridgeWalk, SPIKE, STATED_ACCURACY_M, WALK_LINE } from '../../../lib/demo/ridge-walk.cjs';
 
 /**
@@ -12,7 +18,10 @@ const walk = ridgeWalk().filter((p) => p.seq !== SPIKE.seq); // the spike is tak
 function inputOn(heights: 'logged' | 'smooth', heightScatterM: number): LineInput {
   return {
     ...WALK_LINE,
-    stations: walk.map((p) => ({ chainageM: p.chainageM, groundElevationM: heights === 'logged' ? p.elevationM : p.groundM })),
+    stations: walk.map((p) => ({
+      chainageM: p.chainageM,
+      groundElevationM: heights === 'logged' ? p.elevationM : p.groundM,
+    })),
     settings: { ...WALK_LINE.settings, heightScatterM },
   };
 }
@@ -21,12 +30,14 @@ const of = (analysis: LineAnalysis, code: LineWarning['code']) => analysis.warni
 const pointOf = (w: LineWarning) => ('chainageM' in w.at ? w.at.chainageM : Number.NaN);
 
 describe('a walked GPS route (the demo walk)', () => {
-  const scatterM = surveyHeightScatterM(walk.map(() => ({ heightSource: 'gps' as const, confidenceM: STATED_ACCURACY_M })));
+  const scatterM = surveyHeightScatterM(
+    walk.map(() => ({ heightSource: 'gps' as const, confidenceM: STATED_ACCURACY_M })),
+  );
   const smooth = analyzeLine(inputOn('smooth', 0));
   const walked = analyzeLine(inputOn('logged', scatterM));
   const naive = analyzeLine(inputOn('logged', 0));
 
-  it('takes the phone\'s stated accuracy as the scatter', () => {
+  it("takes the phone's stated accuracy as the scatter", () => {
     expect(scatterM).toBe(STATED_ACCURACY_M);
   });
 
@@ -61,7 +72,9 @@ describe('a walked GPS route (the demo walk)', () => {
     const ridge = of(walked, 'air-release-needed').find((w) => Math.abs(pointOf(w) - 1650) < 100)!;
     expect(ridge.memberChainagesM!.length).toBeGreaterThan(1);
     expect(ridge.values.memberCount).toBe(ridge.memberChainagesM!.length);
-    expect(ridge.message).toMatch(/small highs between .* lie within the survey's height scatter of 4\.0 m; the real summit is at/);
+    expect(ridge.message).toMatch(
+      /small highs between .* lie within the survey's height scatter of 4\.0 m; the real summit is at/,
+    );
   });
 
   it('one over-pressure range, one siphon range, one suction range over the ridge', () => {
@@ -83,7 +96,7 @@ describe('a walked GPS route (the demo walk)', () => {
     }
   });
 
-  it('the whole list is short: the smooth ground\'s items plus at most the doubtful ones it names', () => {
+  it("the whole list is short: the smooth ground's items plus at most the doubtful ones it names", () => {
     const doubtful = walked.warnings.filter((w) => w.values.withinScatter).length;
     expect(walked.warnings.length).toBeLessThanOrEqual(smooth.warnings.length + doubtful);
     expect(walked.warnings.length).toBeLessThan(15);
@@ -91,7 +104,7 @@ describe('a walked GPS route (the demo walk)', () => {
 });
 
 describe('a levelled route: nothing changes', () => {
-  it('a level book\'s 1 cm gives the same findings as exact heights', () => {
+  it("a level book's 1 cm gives the same findings as exact heights", () => {
     const levelScatter = surveyHeightScatterM(walk.map(() => ({ heightSource: 'level' as const, confidenceM: null })));
     expect(levelScatter).toBe(0.01); // level default, hydraulics/survey/height-source.ts (common practice, no source)
     // A levelled route has the ground's own shape (no GPS wander): its heights taken as exact or as ±1 cm.

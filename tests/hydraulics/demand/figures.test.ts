@@ -33,7 +33,7 @@ describe('per-person demand defaults (core.md §3.5)', () => {
   });
 });
 
-describe('livestock defaults (AAFC / PFRA Stockman\'s Guide, core.md §3.6, imperial gallons)', () => {
+describe("livestock defaults (AAFC / PFRA Stockman's Guide, core.md §3.6, imperial gallons)", () => {
   it.each([
     // [id, winter L, summer L, winter imp gal, summer imp gal] as printed
     ['lactating-cow', 77, 95, 17, 21],
@@ -47,17 +47,23 @@ describe('livestock defaults (AAFC / PFRA Stockman\'s Guide, core.md §3.6, impe
     const figure = stock(id);
     expect(figure.winterPerHeadM3PerDay).toBeCloseTo(winterL / 1000, 12);
     expect(figure.summerPerHeadM3PerDay).toBeCloseTo(summerL / 1000, 12);
-    expect(figure.published).toEqual({ winterLitres: winterL, summerLitres: summerL, winterImperialGallons: winterGal, summerImperialGallons: summerGal });
+    expect(figure.published).toEqual({
+      winterLitres: winterL,
+      summerLitres: summerL,
+      winterImperialGallons: winterGal,
+      summerImperialGallons: summerGal,
+    });
     expect(figure.note).toMatch(/imperial gallons/);
   });
 
-  it('the printed litres are imperial, not US, gallons (each within the source\'s rounding of 1 L)', () => {
+  it("the printed litres are imperial, not US, gallons (each within the source's rounding of 1 L)", () => {
     for (const figure of LIVESTOCK_DEMAND_FIGURES) {
       const { winterLitres, winterImperialGallons, summerLitres, summerImperialGallons } = figure.published;
       expect(Math.abs(winterImperialGallons * IMPERIAL_GALLON_M3 * 1000 - winterLitres)).toBeLessThan(1);
       expect(Math.abs(summerImperialGallons * IMPERIAL_GALLON_M3 * 1000 - summerLitres)).toBeLessThan(1);
       // Read as US gallons the larger figures would be off by more than the rounding.
-      if (summerImperialGallons >= 12) expect(Math.abs(summerImperialGallons * US_GALLON_M3 * 1000 - summerLitres)).toBeGreaterThan(5);
+      if (summerImperialGallons >= 12)
+        expect(Math.abs(summerImperialGallons * US_GALLON_M3 * 1000 - summerLitres)).toBeGreaterThan(5);
     }
   });
 

@@ -16,7 +16,10 @@ describe('assertHourlyPattern', () => {
   });
 
   it('says how much is missing when the fractions sum to less than 100 %', () => {
-    const pattern = patternFromPercentByHour({ startHour: 5, percents: [5, 5, 10, 10, 5, 10, 5, 5, 5, 5, 10, 10, 5, 5] });
+    const pattern = patternFromPercentByHour({
+      startHour: 5,
+      percents: [5, 5, 10, 10, 5, 10, 5, 5, 5, 5, 10, 10, 5, 5],
+    });
     expect(() => assertHourlyPattern(pattern)).toThrow(/sum to 95 %, not 100 % \(5 % is missing\)/);
   });
 

@@ -13,7 +13,8 @@ function planIsFeasible(
   const eps = 1e-7;
   const at = (c: number): number => {
     for (let j = 0; j < chainage.length - 1; j++) {
-      if (c <= chainage[j + 1]) return elevation[j] + ((c - chainage[j]) / (chainage[j + 1] - chainage[j])) * (elevation[j + 1] - elevation[j]);
+      if (c <= chainage[j + 1])
+        return elevation[j] + ((c - chainage[j]) / (chainage[j + 1] - chainage[j])) * (elevation[j + 1] - elevation[j]);
     }
     return elevation[elevation.length - 1];
   };
@@ -38,13 +39,18 @@ function planIsFeasible(
 function bruteForceMinimum(chainage: number[], elevation: number[], allowableM: number, startLevelM: number): number {
   const n = chainage.length;
   const sites = Array.from({ length: n - 2 }, (_, i) => i + 1);
-  const tanksAt = (picks: number[]): PlannedTank[] => picks.map((k) => ({ chainageM: chainage[k], waterLevelM: elevation[k] }));
+  const tanksAt = (picks: number[]): PlannedTank[] =>
+    picks.map((k) => ({ chainageM: chainage[k], waterLevelM: elevation[k] }));
   if (planIsFeasible(chainage, elevation, allowableM, startLevelM, [])) return 0;
   for (const a of sites) if (planIsFeasible(chainage, elevation, allowableM, startLevelM, tanksAt([a]))) return 1;
-  for (const a of sites) for (const b of sites) if (b > a && planIsFeasible(chainage, elevation, allowableM, startLevelM, tanksAt([a, b]))) return 2;
   for (const a of sites)
     for (const b of sites)
-      for (const c of sites) if (b > a && c > b && planIsFeasible(chainage, elevation, allowableM, startLevelM, tanksAt([a, b, c]))) return 3;
+      if (b > a && planIsFeasible(chainage, elevation, allowableM, startLevelM, tanksAt([a, b]))) return 2;
+  for (const a of sites)
+    for (const b of sites)
+      for (const c of sites)
+        if (b > a && c > b && planIsFeasible(chainage, elevation, allowableM, startLevelM, tanksAt([a, b, c])))
+          return 3;
   return Infinity;
 }
 
@@ -132,7 +138,8 @@ describe('planBreakPressureTanks', () => {
             expect(plan.feasible).toBe(true);
             expect(plan.tanks.length).toBeLessThanOrEqual(best);
           }
-          if (plan.feasible) expect(planIsFeasible(chainage, elevation, allowableM, startLevelM, plan.tanks)).toBe(true);
+          if (plan.feasible)
+            expect(planIsFeasible(chainage, elevation, allowableM, startLevelM, plan.tanks)).toBe(true);
         },
       ),
       { numRuns: 300 },

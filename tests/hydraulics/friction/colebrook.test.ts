@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { colebrookFrictionFactor, colebrookResidual, colebrookUnchecked } from '../../../hydraulics/friction/colebrook';
 
-
 describe('Colebrook-White', () => {
   // Moody-chart spot values, Colebrook solved to 1e-15 (core.md §1.3 [C], regression; printed to
   // 5 decimals, so the tolerance is half a unit in the last place).
@@ -37,7 +36,9 @@ describe('Colebrook-White', () => {
     );
   });
   it('rejects bad input', () => {
-    expect(() => colebrookFrictionFactor({ reynolds: 0, relativeRoughness: 0 })).toThrow(/reynolds: must be greater than 0/);
+    expect(() => colebrookFrictionFactor({ reynolds: 0, relativeRoughness: 0 })).toThrow(
+      /reynolds: must be greater than 0/,
+    );
     expect(() => colebrookFrictionFactor({ reynolds: 1e5, relativeRoughness: -1e-4 })).toThrow(/relativeRoughness/);
     expect(() => colebrookFrictionFactor({ reynolds: Number.NaN, relativeRoughness: 0 })).toThrow(/reynolds/);
   });

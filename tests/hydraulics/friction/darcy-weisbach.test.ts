@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { colebrookFrictionFactor } from '../../../hydraulics/friction/colebrook';
-import { darcyFrictionFactor, darcyFrictionFactorUnchecked, darcyLossExponentUnchecked, darcyWeisbachHeadLoss } from '../../../hydraulics/friction/darcy-weisbach';
+import {
+  darcyFrictionFactor,
+  darcyFrictionFactorUnchecked,
+  darcyLossExponentUnchecked,
+  darcyWeisbachHeadLoss,
+} from '../../../hydraulics/friction/darcy-weisbach';
 
 describe('darcyFrictionFactor regimes', () => {
   it('laminar f = 64/Re: Re 128 → 0.5 (fluids friction_laminar docstring [R16])', () => {
@@ -43,7 +48,13 @@ describe('darcyWeisbachHeadLoss', () => {
     expect(darcyWeisbachHeadLoss({ ...options, flowM3s: 0.002, lengthM: 0 })).toBe(0);
   });
   it('laminar loss is 32 ν L V / (g D²)', () => {
-    const loss = darcyWeisbachHeadLoss({ flowM3s: 1e-6, lengthM: 10, diameterM: 0.02, roughnessM: 0, kinematicViscosityM2s: 1e-6 });
+    const loss = darcyWeisbachHeadLoss({
+      flowM3s: 1e-6,
+      lengthM: 10,
+      diameterM: 0.02,
+      roughnessM: 0,
+      kinematicViscosityM2s: 1e-6,
+    });
     const velocity = 1e-6 / (0.25 * Math.PI * 0.02 ** 2);
     expect(loss).toBeCloseTo((32 * 1e-6 * 10 * velocity) / (9.80665 * 0.02 ** 2), 14);
   });
@@ -61,7 +72,7 @@ describe('darcyLossExponentUnchecked (the slope the network solver steps with)',
   // d ln h / d ln Q against a central difference of the loss itself, h = f(Re)·(L/D)·V²/2g, in all three bands.
   const lossAt = (q: number, relativeRoughness: number) => {
     const d = 0.05;
-    const v = q / (Math.PI * d * d / 4);
+    const v = q / ((Math.PI * d * d) / 4);
     const re = (v * d) / 1.004e-6;
     return { h: (darcyFrictionFactorUnchecked(re, relativeRoughness) * v * v) / (d * 2 * 9.80665), re };
   };
@@ -76,7 +87,7 @@ describe('darcyLossExponentUnchecked (the slope the network solver steps with)',
     const down = lossAt(q * (1 - step), relativeRoughness).h;
     const numeric = (Math.log(up) - Math.log(down)) / (Math.log(1 + step) - Math.log(1 - step));
     const { h, re } = lossAt(q, relativeRoughness);
-    const f = (h * 0.05 * 2 * 9.80665) / (q / (Math.PI * 0.05 * 0.05 / 4)) ** 2;
+    const f = (h * 0.05 * 2 * 9.80665) / (q / ((Math.PI * 0.05 * 0.05) / 4)) ** 2;
     expect(darcyLossExponentUnchecked(re, relativeRoughness, f)).toBeCloseTo(numeric, 5);
   });
 });

@@ -45,14 +45,18 @@ describe('Hazen-Williams, exact SI form from k = 0.849', () => {
   });
   it('Engineering ToolBox example: 200 gpm, 3.048 in ID, C = 140 → 9 ft/100 ft and 2.7 ft over 30 ft [R20]', () => {
     // Published to 1-2 figures and with exponent 4.8655; the exact form is 1.2 % lower → 2 % tolerance.
-    const perHundredFt = hazenWilliamsHeadLoss({ flowM3s: 200 * GPM, lengthM: 100 * FT, diameterM: 3.048 * IN, c: 140 }) / FT;
-    const thirtyFt = hazenWilliamsHeadLoss({ flowM3s: 200 * GPM, lengthM: 30 * FT, diameterM: 3.048 * IN, c: 140 }) / FT;
+    const perHundredFt =
+      hazenWilliamsHeadLoss({ flowM3s: 200 * GPM, lengthM: 100 * FT, diameterM: 3.048 * IN, c: 140 }) / FT;
+    const thirtyFt =
+      hazenWilliamsHeadLoss({ flowM3s: 200 * GPM, lengthM: 30 * FT, diameterM: 3.048 * IN, c: 140 }) / FT;
     expect(rel(perHundredFt, 9)).toBeLessThan(0.02);
     expect(rel(thirtyFt, 2.7)).toBeLessThan(0.02);
   });
   it('SI regression values of core.md §1.2 #6 [C]: 14.629 m (exact form); 6.006 m with 10.67 form, ±0.3 % here', () => {
     expect(hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1000, diameterM: 0.1, c: 150 })).toBeCloseTo(14.629, 3);
-    expect(rel(hazenWilliamsHeadLoss({ flowM3s: 0.001, lengthM: 1000, diameterM: 0.05, c: 150 }), 6.006)).toBeLessThan(0.003);
+    expect(rel(hazenWilliamsHeadLoss({ flowM3s: 0.001, lengthM: 1000, diameterM: 0.05, c: 150 }), 6.006)).toBeLessThan(
+      0.003,
+    );
   });
   it('hydrauliclearning exercise inputs (700 gpm, 8500 ft, 8 in, C 150) → 61.5 ft (core.md §1.2 #5 [C], 4.727 form)', () => {
     const feet = hazenWilliamsHeadLoss({ flowM3s: 700 * GPM, lengthM: 8500 * FT, diameterM: 8 * IN, c: 150 }) / FT;
@@ -74,8 +78,14 @@ describe('Hazen-Williams, exact SI form from k = 0.849', () => {
   });
   it('rejects bad input naming the field', () => {
     expect(() => hazenWilliamsHeadLoss({ flowM3s: Number.NaN, lengthM: 1, diameterM: 0.1, c: 150 })).toThrow(/flowM3s/);
-    expect(() => hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: -1, diameterM: 0.1, c: 150 })).toThrow(/lengthM: must not be negative/);
-    expect(() => hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1, diameterM: 0, c: 150 })).toThrow(/diameterM: must be greater than 0/);
-    expect(() => hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1, diameterM: 0.1, c: Number.POSITIVE_INFINITY })).toThrow(/^c: /);
+    expect(() => hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: -1, diameterM: 0.1, c: 150 })).toThrow(
+      /lengthM: must not be negative/,
+    );
+    expect(() => hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1, diameterM: 0, c: 150 })).toThrow(
+      /diameterM: must be greater than 0/,
+    );
+    expect(() =>
+      hazenWilliamsHeadLoss({ flowM3s: 0.01, lengthM: 1, diameterM: 0.1, c: Number.POSITIVE_INFINITY }),
+    ).toThrow(/^c: /);
   });
 });

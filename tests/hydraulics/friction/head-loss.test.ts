@@ -26,11 +26,19 @@ describe('pipeHeadLossM', () => {
       12,
     );
     // Colder water is more viscous: more friction in a smooth pipe.
-    expect(cold).toBeGreaterThan(pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.002, lengthM: 500, pipe, temperatureC: 30 }));
+    expect(cold).toBeGreaterThan(
+      pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.002, lengthM: 500, pipe, temperatureC: 30 }),
+    );
   });
   it('Darcy-Weisbach and Hazen-Williams (C 150) agree within 2.5 % for 10 L/s in 100 mm smooth pipe (core.md §8.3 [C])', () => {
     const smooth = { insideDiameterM: 0.1, hazenWilliamsC: 150, roughnessM: 1.5e-6 };
-    const dw = pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.01, lengthM: 1000, pipe: smooth, temperatureC: 20 });
+    const dw = pipeHeadLossM({
+      method: 'darcy-weisbach',
+      flowM3s: 0.01,
+      lengthM: 1000,
+      pipe: smooth,
+      temperatureC: 20,
+    });
     const hw = pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.01, lengthM: 1000, pipe: smooth });
     expect(Math.abs(dw - hw) / hw).toBeLessThan(0.03);
   });
@@ -48,9 +56,9 @@ describe('pipeHeadLossM', () => {
     expect(() =>
       pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.001, lengthM: 5, pipe: { ...pipe, insideDiameterM: 0 } }),
     ).toThrow(/pipe.insideDiameterM/);
-    expect(() => pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.001, lengthM: 5, pipe, temperatureC: 80 })).toThrow(
-      /temperatureC/,
-    );
+    expect(() =>
+      pipeHeadLossM({ method: 'darcy-weisbach', flowM3s: 0.001, lengthM: 5, pipe, temperatureC: 80 }),
+    ).toThrow(/temperatureC/);
     expect(() => pipeHeadLossM({ method: 'manning' as never, flowM3s: 0.001, lengthM: 5, pipe })).toThrow(/method/);
   });
 });

@@ -27,11 +27,13 @@ describe('flowForHeadLoss', () => {
     expect(flowForHeadLoss({ method: 'hazen-williams', headLossM: 0, lengthM: 100, pipe })).toBe(0);
   });
   it('rejects bad input naming the field', () => {
-    expect(() => flowForHeadLoss({ method: 'hazen-williams', headLossM: Number.NaN, lengthM: 100, pipe })).toThrow(/headLossM/);
-    expect(() => flowForHeadLoss({ method: 'hazen-williams', headLossM: 1, lengthM: 0, pipe })).toThrow(/lengthM/);
-    expect(() => flowForHeadLoss({ method: 'hazen-williams', headLossM: 1, lengthM: 10, pipe: { ...pipe, hazenWilliamsC: -1 } })).toThrow(
-      /pipe.hazenWilliamsC/,
+    expect(() => flowForHeadLoss({ method: 'hazen-williams', headLossM: Number.NaN, lengthM: 100, pipe })).toThrow(
+      /headLossM/,
     );
+    expect(() => flowForHeadLoss({ method: 'hazen-williams', headLossM: 1, lengthM: 0, pipe })).toThrow(/lengthM/);
+    expect(() =>
+      flowForHeadLoss({ method: 'hazen-williams', headLossM: 1, lengthM: 10, pipe: { ...pipe, hazenWilliamsC: -1 } }),
+    ).toThrow(/pipe.hazenWilliamsC/);
   });
 });
 
@@ -39,16 +41,30 @@ describe('smallestPipeForFlow', () => {
   const series = pipesOfSeries('pvc-d2241-sdr21');
 
   it('picks the smallest size within the head budget, and the next one is not needlessly big', () => {
-    const result = smallestPipeForFlow({ method: 'hazen-williams', flowM3s: 0.003, lengthM: 1000, headBudgetM: 20, candidates: series })!;
+    const result = smallestPipeForFlow({
+      method: 'hazen-williams',
+      flowM3s: 0.003,
+      lengthM: 1000,
+      headBudgetM: 20,
+      candidates: series,
+    })!;
     expect(result.headLossM).toBeLessThanOrEqual(20);
     const smaller = series.filter((candidate) => candidate.insideDiameterM < result.pipe.insideDiameterM);
     for (const candidate of smaller) {
-      expect(pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.003, lengthM: 1000, pipe: candidate })).toBeGreaterThan(20);
+      expect(
+        pipeHeadLossM({ method: 'hazen-williams', flowM3s: 0.003, lengthM: 1000, pipe: candidate }),
+      ).toBeGreaterThan(20);
     }
     expect(result.velocityMs).toBeCloseTo(0.003 / (0.25 * Math.PI * result.pipe.insideDiameterM ** 2), 12);
   });
   it('counts fitting losses against the budget', () => {
-    const plain = smallestPipeForFlow({ method: 'darcy-weisbach', flowM3s: 0.002, lengthM: 50, headBudgetM: 2, candidates: series })!;
+    const plain = smallestPipeForFlow({
+      method: 'darcy-weisbach',
+      flowM3s: 0.002,
+      lengthM: 50,
+      headBudgetM: 2,
+      candidates: series,
+    })!;
     const withFittings = smallestPipeForFlow({
       method: 'darcy-weisbach',
       flowM3s: 0.002,
@@ -63,14 +79,20 @@ describe('smallestPipeForFlow', () => {
     const reversed = [...series].reverse();
     const before = reversed.map((candidate) => candidate.id);
     expect(
-      smallestPipeForFlow({ method: 'hazen-williams', flowM3s: 1, lengthM: 10_000, headBudgetM: 1, candidates: reversed }),
+      smallestPipeForFlow({
+        method: 'hazen-williams',
+        flowM3s: 1,
+        lengthM: 10_000,
+        headBudgetM: 1,
+        candidates: reversed,
+      }),
     ).toBeUndefined();
     expect(reversed.map((candidate) => candidate.id)).toEqual(before);
   });
   it('names a bad candidate by index', () => {
     const bad = [series[0], { ...series[1], insideDiameterM: Number.NaN }];
-    expect(() => smallestPipeForFlow({ method: 'hazen-williams', flowM3s: 0.001, lengthM: 10, headBudgetM: 1, candidates: bad })).toThrow(
-      /candidates.insideDiameterM\[1\]/,
-    );
+    expect(() =>
+      smallestPipeForFlow({ method: 'hazen-williams', flowM3s: 0.001, lengthM: 10, headBudgetM: 1, candidates: bad }),
+    ).toThrow(/candidates.insideDiameterM\[1\]/);
   });
 });

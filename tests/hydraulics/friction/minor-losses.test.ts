@@ -24,9 +24,12 @@ describe('fitting loss coefficients', () => {
     expect(FITTING_LOSS_COEFFICIENTS['entrance-projecting'].source).toMatch(/from memory/);
   });
   it('a gate valve closing raises K steeply (¼, ½, ¾ closed: 0.26, 2.1, 17)', () => {
-    const ks = ['gate-valve-open', 'gate-valve-quarter-closed', 'gate-valve-half-closed', 'gate-valve-three-quarters-closed'].map(
-      (kind) => FITTING_LOSS_COEFFICIENTS[kind as keyof typeof FITTING_LOSS_COEFFICIENTS].k,
-    );
+    const ks = [
+      'gate-valve-open',
+      'gate-valve-quarter-closed',
+      'gate-valve-half-closed',
+      'gate-valve-three-quarters-closed',
+    ].map((kind) => FITTING_LOSS_COEFFICIENTS[kind as keyof typeof FITTING_LOSS_COEFFICIENTS].k);
     expect(ks).toEqual([0.15, 0.26, 2.1, 17]);
   });
 });
@@ -42,7 +45,10 @@ describe('minorLossHeadM', () => {
     expect(minorLossHeadM({ kTotal, velocityMs: 1.5 })).toBeCloseTo((4.5 * 2.25) / (2 * 9.80665), 12);
   });
   it('is sign-aware and zero at rest', () => {
-    expect(minorLossHeadM({ kTotal: 3, velocityMs: -2 })).toBeCloseTo(-minorLossHeadM({ kTotal: 3, velocityMs: 2 }), 14);
+    expect(minorLossHeadM({ kTotal: 3, velocityMs: -2 })).toBeCloseTo(
+      -minorLossHeadM({ kTotal: 3, velocityMs: 2 }),
+      14,
+    );
     expect(minorLossHeadM({ kTotal: 3, velocityMs: 0 })).toBe(0);
   });
   it('sudden expansion K = (1 − (d₁/d₂)²)²: 0 for no change, → 1 into a tank', () => {
@@ -53,10 +59,17 @@ describe('minorLossHeadM', () => {
   it('rejects bad input naming the field and row', () => {
     expect(() => minorLossHeadM({ kTotal: -1, velocityMs: 1 })).toThrow(/kTotal/);
     expect(() => minorLossHeadM({ kTotal: 1, velocityMs: Number.NaN })).toThrow(/velocityMs/);
-    expect(() => totalLossCoefficient([{ kind: 'exit', count: 1 }, { kind: 'elbow-90-threaded', count: 1.5 }])).toThrow(
-      /fittings.count\[1\]: must be a whole number/,
+    expect(() =>
+      totalLossCoefficient([
+        { kind: 'exit', count: 1 },
+        { kind: 'elbow-90-threaded', count: 1.5 },
+      ]),
+    ).toThrow(/fittings.count\[1\]: must be a whole number/);
+    expect(() => totalLossCoefficient([{ kind: 'teapot' as never, count: 1 }])).toThrow(
+      /fittings.kind\[0\]: unknown fitting/,
     );
-    expect(() => totalLossCoefficient([{ kind: 'teapot' as never, count: 1 }])).toThrow(/fittings.kind\[0\]: unknown fitting/);
-    expect(() => suddenExpansionLossCoefficient({ smallDiameterM: 0.1, largeDiameterM: 0.05 })).toThrow(/largeDiameterM/);
+    expect(() => suddenExpansionLossCoefficient({ smallDiameterM: 0.1, largeDiameterM: 0.05 })).toThrow(
+      /largeDiameterM/,
+    );
   });
 });

@@ -15,12 +15,19 @@ const anyTemperature = fc.double({ min: 0, max: 40, noNaN: true });
 describe('friction properties', () => {
   it('head loss rises with flow (monotone through laminar, transition and turbulent)', () => {
     fc.assert(
-      fc.property(anyMethod, anyPipe, anyFlow, anyLength, anyTemperature, (method, pipe, flow, lengthM, temperatureC) => {
-        const lower = pipeHeadLossM({ method, flowM3s: flow, lengthM, pipe, temperatureC });
-        const higher = pipeHeadLossM({ method, flowM3s: flow * 1.01, lengthM, pipe, temperatureC });
-        expect(Number.isFinite(lower)).toBe(true);
-        expect(higher).toBeGreaterThan(lower);
-      }),
+      fc.property(
+        anyMethod,
+        anyPipe,
+        anyFlow,
+        anyLength,
+        anyTemperature,
+        (method, pipe, flow, lengthM, temperatureC) => {
+          const lower = pipeHeadLossM({ method, flowM3s: flow, lengthM, pipe, temperatureC });
+          const higher = pipeHeadLossM({ method, flowM3s: flow * 1.01, lengthM, pipe, temperatureC });
+          expect(Number.isFinite(lower)).toBe(true);
+          expect(higher).toBeGreaterThan(lower);
+        },
+      ),
       { numRuns: 1000 },
     );
   });
@@ -36,18 +43,27 @@ describe('friction properties', () => {
   });
   it('flowForHeadLoss inverts pipeHeadLossM (round trip)', () => {
     fc.assert(
-      fc.property(anyMethod, anyPipe, anyFlow, anyLength, anyTemperature, (method, pipe, flow, lengthM, temperatureC) => {
-        const loss = pipeHeadLossM({ method, flowM3s: flow, lengthM, pipe, temperatureC });
-        const back = flowForHeadLoss({ method, headLossM: loss, lengthM, pipe, temperatureC });
-        expect(Math.abs(back - flow) / flow).toBeLessThan(1e-9);
-      }),
+      fc.property(
+        anyMethod,
+        anyPipe,
+        anyFlow,
+        anyLength,
+        anyTemperature,
+        (method, pipe, flow, lengthM, temperatureC) => {
+          const loss = pipeHeadLossM({ method, flowM3s: flow, lengthM, pipe, temperatureC });
+          const back = flowForHeadLoss({ method, headLossM: loss, lengthM, pipe, temperatureC });
+          expect(Math.abs(back - flow) / flow).toBeLessThan(1e-9);
+        },
+      ),
       { numRuns: 1000 },
     );
   });
   it('odd in flow: reversing the flow reverses the loss', () => {
     fc.assert(
       fc.property(anyMethod, anyPipe, anyFlow, (method, pipe, flow) => {
-        expect(pipeHeadLossM({ method, flowM3s: -flow, lengthM: 100, pipe })).toBe(-pipeHeadLossM({ method, flowM3s: flow, lengthM: 100, pipe }));
+        expect(pipeHeadLossM({ method, flowM3s: -flow, lengthM: 100, pipe })).toBe(
+          -pipeHeadLossM({ method, flowM3s: flow, lengthM: 100, pipe }),
+        );
       }),
     );
   });

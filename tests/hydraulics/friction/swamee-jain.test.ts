@@ -10,12 +10,15 @@ describe('Swamee-Jain', () => {
     for (const reynolds of [1e5, 1e6, 1e7]) {
       for (const relativeRoughness of [1e-5, 1e-4, 1e-3, 1e-2]) {
         const ratio =
-          swameeJainFrictionFactor({ reynolds, relativeRoughness }) / colebrookFrictionFactor({ reynolds, relativeRoughness });
+          swameeJainFrictionFactor({ reynolds, relativeRoughness }) /
+          colebrookFrictionFactor({ reynolds, relativeRoughness });
         expect(Math.abs(ratio - 1)).toBeLessThan(0.015);
       }
     }
   });
   it('rejects relative roughness above 0.1', () => {
-    expect(() => swameeJainFrictionFactor({ reynolds: 1e5, relativeRoughness: 0.2 })).toThrow(/relativeRoughness: must be between 0 and 0.1/);
+    expect(() => swameeJainFrictionFactor({ reynolds: 1e5, relativeRoughness: 0.2 })).toThrow(
+      /relativeRoughness: must be between 0 and 0.1/,
+    );
   });
 });

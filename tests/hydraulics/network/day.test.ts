@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { runNetworkDay, servedOutletsByTank, sizeStorage, sizeTankStorage, solveNetwork, type NetworkInput } from '../../../hydraulics/index';
+import {
+  runNetworkDay,
+  servedOutletsByTank,
+  sizeStorage,
+  sizeTankStorage,
+  solveNetwork,
+  type NetworkInput,
+} from '../../../hydraulics/index';
 
 // C for Hazen-Williams, roughness for the default Darcy-Weisbach (PE, 0.0015 mm: catalogue value).
 const PIPE = { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140, roughnessM: 0.0000015 };
@@ -12,7 +19,14 @@ function ramTankHouse(): NetworkInput {
     nodes: [
       { id: 'ram', kind: 'ram-outlet', elevationM: 60, inflowM3s: 0.001 },
       { id: 'tank', kind: 'tank', elevationM: 100, waterLevelM: 101, tank: { overflowLevelM: 103, areaM2: 10 } },
-      { id: 'house', kind: 'outlet', elevationM: 80, demandM3s: 0.0005, hourlyFractions: TWO_PEAKS, minPressureHeadM: 10 },
+      {
+        id: 'house',
+        kind: 'outlet',
+        elevationM: 80,
+        demandM3s: 0.0005,
+        hourlyFractions: TWO_PEAKS,
+        minPressureHeadM: 10,
+      },
     ],
     links: [
       { id: 'delivery', from: 'ram', to: 'tank', lengthM: 400, pipe: PIPE },
@@ -32,7 +46,10 @@ describe('runNetworkDay', () => {
     const day = runNetworkDay(ramTankHouse());
     const levels = day.tankLevelsM.tank;
     expect(levels).toHaveLength(25);
-    const expected = [101, 101.36, 101.72, 102.08, 102.44, 102.8, 103, 102.28, 101.56, 101.92, 102.28, 102.64, 103, 103, 103, 103, 103, 103, 103, 102.28, 101.56, 101.92, 102.28, 102.64, 103];
+    const expected = [
+      101, 101.36, 101.72, 102.08, 102.44, 102.8, 103, 102.28, 101.56, 101.92, 102.28, 102.64, 103, 103, 103, 103, 103,
+      103, 103, 102.28, 101.56, 101.92, 102.28, 102.64, 103,
+    ];
     // Continuity holds to ~1e-13 m³/s, so levels agree to 1e-8 m.
     expected.forEach((level, i) => expect(levels[i]).toBeCloseTo(level, 8));
     expect(day.tankOverflowM3.tank).toBeCloseTo(1.6 + 6 * 3.6, 6);
@@ -42,7 +59,12 @@ describe('runNetworkDay', () => {
 
   it('flags a tank that runs empty, with the time and the water missing', () => {
     const input = ramTankHouse();
-    const small: NetworkInput = { ...input, nodes: input.nodes.map((node) => (node.id === 'tank' ? { ...node, waterLevelM: 100.2, tank: { overflowLevelM: 101, areaM2: 2 } } : node)) };
+    const small: NetworkInput = {
+      ...input,
+      nodes: input.nodes.map((node) =>
+        node.id === 'tank' ? { ...node, waterLevelM: 100.2, tank: { overflowLevelM: 101, areaM2: 2 } } : node,
+      ),
+    };
     const day = runNetworkDay(small);
     const empty = day.warnings.find((w) => w.code === 'tank-empties');
     expect(empty?.severity).toBe('danger');
@@ -57,9 +79,24 @@ describe('runNetworkDay', () => {
     const input: NetworkInput = {
       nodes: [
         { id: 'spring', kind: 'source', elevationM: 100, yieldM3s: 0.002 },
-        { id: 'garden', kind: 'outlet', elevationM: 85, demandM3s: 0.0005, hourlyFractions: TWO_PEAKS, minPressureHeadM: 12 },
+        {
+          id: 'garden',
+          kind: 'outlet',
+          elevationM: 85,
+          demandM3s: 0.0005,
+          hourlyFractions: TWO_PEAKS,
+          minPressureHeadM: 12,
+        },
       ],
-      links: [{ id: 'line', from: 'spring', to: 'garden', lengthM: 900, pipe: { id: 'p32', insideDiameterM: 0.032, hazenWilliamsC: 140, roughnessM: 0.0000015 } }],
+      links: [
+        {
+          id: 'line',
+          from: 'spring',
+          to: 'garden',
+          lengthM: 900,
+          pipe: { id: 'p32', insideDiameterM: 0.032, hazenWilliamsC: 140, roughnessM: 0.0000015 },
+        },
+      ],
     };
     const day = runNetworkDay(input);
     const codes = day.warnings.map((w) => w.code);
@@ -111,7 +148,11 @@ describe('servedOutletsByTank and sizeTankStorage', () => {
     expect(tank.servedOutlets.map((s) => s.outletId)).toEqual(['house']);
     expect(tank.supply.flowM3s).toBeCloseTo(0.001, 12);
     // The same sizing by hand through the storage core: 10.8 m³ in each of hours 06, 07, 18, 19.
-    const direct = sizeStorage({ supply: { flowM3s: 0.001 }, demand: { hourlyVolumeM3: TWO_PEAKS.map((f) => f * 0.0005 * 86400) }, reserveDays: 1 });
+    const direct = sizeStorage({
+      supply: { flowM3s: 0.001 },
+      demand: { hourlyVolumeM3: TWO_PEAKS.map((f) => f * 0.0005 * 86400) },
+      reserveDays: 1,
+    });
     expect(tank.storage?.totalStorageM3).toBeCloseTo(direct.totalStorageM3, 9);
     expect(tank.storage?.reserveStorageM3).toBeCloseTo(43.2, 9);
   });

@@ -69,7 +69,9 @@ describe('solveNetwork on random networks (property tests)', () => {
       fc.property(randomNetwork(), ({ input }) => {
         const solution = solveNetwork(input);
         for (const link of input.links) {
-          expect(Math.abs(solution.headLossesM[link.id] - (solution.headsM[link.from] - solution.headsM[link.to]))).toBeLessThan(1e-6);
+          expect(
+            Math.abs(solution.headLossesM[link.id] - (solution.headsM[link.from] - solution.headsM[link.to])),
+          ).toBeLessThan(1e-6);
         }
       }),
       { numRuns: 100 },

@@ -26,15 +26,30 @@ export const randomNetwork = (maxNodes = 30): fc.Arbitrary<RandomNetwork> =>
         nodes.push(
           isSource
             ? { id: `n${i}`, kind: 'tank', elevationM: 150 + 40 * next(), waterLevelM: 195 }
-            : { id: `n${i}`, kind: 'junction', elevationM: 50 + 100 * next(), demandM3s: next() < 0.3 ? 0 : 0.002 * next() },
+            : {
+                id: `n${i}`,
+                kind: 'junction',
+                elevationM: 50 + 100 * next(),
+                demandM3s: next() < 0.3 ? 0 : 0.002 * next(),
+              },
         );
       }
-      const pipe = (): NetworkLink['pipe'] => ({ id: 'p', insideDiameterM: 0.025 + 0.2 * next(), hazenWilliamsC: 100 + 50 * next() });
+      const pipe = (): NetworkLink['pipe'] => ({
+        id: 'p',
+        insideDiameterM: 0.025 + 0.2 * next(),
+        hazenWilliamsC: 100 + 50 * next(),
+      });
       const links: NetworkLink[] = [];
       for (let i = 1; i < size; i++) {
         const parent = Math.floor(next() * i);
         const forward = next() < 0.7;
-        links.push({ id: `t${i}`, from: forward ? `n${parent}` : `n${i}`, to: forward ? `n${i}` : `n${parent}`, lengthM: 10 + 990 * next(), pipe: pipe() });
+        links.push({
+          id: `t${i}`,
+          from: forward ? `n${parent}` : `n${i}`,
+          to: forward ? `n${i}` : `n${parent}`,
+          lengthM: 10 + 990 * next(),
+          pipe: pipe(),
+        });
       }
       const loopLinks: number[] = [];
       for (let e = 0; e < extra; e++) {
@@ -42,7 +57,14 @@ export const randomNetwork = (maxNodes = 30): fc.Arbitrary<RandomNetwork> =>
         const b = Math.floor(next() * size);
         if (a === b) continue;
         loopLinks.push(links.length);
-        links.push({ id: `x${e}`, from: `n${a}`, to: `n${b}`, lengthM: 10 + 990 * next(), pipe: pipe(), minorK: 5 * next() });
+        links.push({
+          id: `x${e}`,
+          from: `n${a}`,
+          to: `n${b}`,
+          lengthM: 10 + 990 * next(),
+          pipe: pipe(),
+          minorK: 5 * next(),
+        });
       }
       return { input: { nodes, links, settings: { frictionMethod: 'hazen-williams' } }, loopLinks };
     });

@@ -8,7 +8,13 @@ const CANDIDATES: SizingCandidate[] = [
   { pipe: { id: 'd63', insideDiameterM: 0.063, hazenWilliamsC: 140 }, costPerM: 7 },
   { pipe: { id: 'd75', insideDiameterM: 0.075, hazenWilliamsC: 140 }, costPerM: 10 },
 ];
-const SETTINGS = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const SETTINGS = {
+  frictionMethod: 'hazen-williams' as const,
+  freeSurfaceLosses: false,
+  hazenWilliamsConstant: 10.67,
+  hazenWilliamsFlowExponent: 1.852,
+  hazenWilliamsDiameterExponent: 4.87,
+};
 
 /** A spring feeding a tee, then a trough line and a house line (invented). */
 function farm(): NetworkInput {
@@ -38,8 +44,13 @@ function cheapestByEnumeration(input: NetworkInput): { cost: number; pipes: stri
     const picks = Array.from({ length: n }, (_, i) => Math.floor(code / CANDIDATES.length ** i) % CANDIDATES.length);
     const cost = picks.reduce((sum, c, i) => sum + CANDIDATES[c].costPerM * input.links[i].lengthM, 0);
     if (cost >= best.cost) continue;
-    const solution = solveNetwork({ ...input, links: input.links.map((link, i) => ({ ...link, pipe: CANDIDATES[picks[i]].pipe })) });
-    const ok = input.nodes.every((node) => node.minPressureHeadM === undefined || solution.pressureHeadsM[node.id] >= node.minPressureHeadM - 1e-9);
+    const solution = solveNetwork({
+      ...input,
+      links: input.links.map((link, i) => ({ ...link, pipe: CANDIDATES[picks[i]].pipe })),
+    });
+    const ok = input.nodes.every(
+      (node) => node.minPressureHeadM === undefined || solution.pressureHeadsM[node.id] >= node.minPressureHeadM - 1e-9,
+    );
     const velocityOk = input.links.every((link) => Math.abs(solution.velocitiesMs[link.id]) <= 3);
     if (ok && velocityOk) best = { cost, pipes: picks.map((c) => CANDIDATES[c].pipe.id) };
   }
@@ -82,7 +93,10 @@ describe('sizeNetwork: branched networks solved exactly [NET-KGM68]', () => {
   });
 
   it('keeps pipes whose rating is below the static head out of the design', async () => {
-    const low = CANDIDATES.map((candidate, index) => ({ ...candidate, pipe: { ...candidate.pipe, pressureRatingPa: index < 2 ? 2e5 : 1e6 } }));
+    const low = CANDIDATES.map((candidate, index) => ({
+      ...candidate,
+      pipe: { ...candidate.pipe, pressureRatingPa: index < 2 ? 2e5 : 1e6 },
+    }));
     // Static head at the house: 120 - 88 = 32 m, about 3.1 bar, above the 2 bar of the two cheapest.
     const result = await sizeNetwork(farm(), { candidates: low });
     expect(result.feasible).toBe(true);
@@ -91,7 +105,10 @@ describe('sizeNetwork: branched networks solved exactly [NET-KGM68]', () => {
 
   it('says so, naming the node, when no pipe can help', async () => {
     const input = farm();
-    const high: NetworkInput = { ...input, nodes: input.nodes.map((node) => (node.id === 'house' ? { ...node, minPressureHeadM: 40 } : node)) };
+    const high: NetworkInput = {
+      ...input,
+      nodes: input.nodes.map((node) => (node.id === 'house' ? { ...node, minPressureHeadM: 40 } : node)),
+    };
     const result = await sizeNetwork(high, { candidates: CANDIDATES });
     expect(result.feasible).toBe(false);
     expect(result.warnings[0].code).toBe('head-not-enough');
@@ -102,9 +119,15 @@ describe('sizeNetwork: branched networks solved exactly [NET-KGM68]', () => {
 describe('sizeNetwork on the default law counts the entrance at the spring', () => {
   it("gives a split-pipe design the solver confirms, the spring's entrance and velocity head included", async () => {
     // The farm above on the network's default (Darcy-Weisbach, K = 1.5 where water leaves the spring).
-    const pe = (id: string, mm: number, costPerM: number): SizingCandidate => ({ pipe: { id, insideDiameterM: mm / 1000, roughnessM: 1.5e-6, hazenWilliamsC: 150 }, costPerM });
+    const pe = (id: string, mm: number, costPerM: number): SizingCandidate => ({
+      pipe: { id, insideDiameterM: mm / 1000, roughnessM: 1.5e-6, hazenWilliamsC: 150 },
+      costPerM,
+    });
     const input: NetworkInput = { ...farm(), settings: undefined };
-    const result = await sizeNetwork(input, { candidates: [pe('d40', 40, 3), pe('d50', 50, 4.5), pe('d63', 63, 7), pe('d75', 75, 10)], onePipePerLink: false });
+    const result = await sizeNetwork(input, {
+      candidates: [pe('d40', 40, 3), pe('d50', 50, 4.5), pe('d63', 63, 7), pe('d75', 75, 10)],
+      onePipePerLink: false,
+    });
     expect(result.solution.freeSurfaceLosses).toBe(true);
     expect(result.warnings.map((w) => w.code)).not.toContain('design-check-failed');
     expect(result.feasible).toBe(true);

@@ -20,7 +20,14 @@ function hillFarm(): NetworkInput {
       { id: 'tap', kind: 'outlet', elevationM: 80, demandM3s: 0.0003, minPressureHeadM: 5 },
     ],
     links: [
-      { id: 'trunk', from: 'spring', to: 'tank', lengthM: 2000, pipe: 'pe100-iso4427-sdr11-32mm', status: 'float-valve' },
+      {
+        id: 'trunk',
+        from: 'spring',
+        to: 'tank',
+        lengthM: 2000,
+        pipe: 'pe100-iso4427-sdr11-32mm',
+        status: 'float-valve',
+      },
       { id: 'service', from: 'tank', to: 'tap', lengthM: 300, pipe: 'pe100-iso4427-sdr11-32mm' },
     ],
   };
@@ -47,7 +54,11 @@ describe('sizeNetwork fills each tank over its fill window', () => {
   });
 
   it("sizes the trunk to bring the tank's daily demand in through its fill window, at the least cost that does", async () => {
-    const result = await sizeNetwork(hillFarm(), { candidates: CANDIDATES, timeLimitS: 5, tankFillFlowsM3s: { tank: FILL_M3S } });
+    const result = await sizeNetwork(hillFarm(), {
+      candidates: CANDIDATES,
+      timeLimitS: 5,
+      tankFillFlowsM3s: { tank: FILL_M3S },
+    });
     expect(result.feasible).toBe(true);
     const chosen = result.pipeByLink.trunk;
     // The chosen trunk fills the full tank at no less than the fill flow ...
@@ -61,9 +72,13 @@ describe('sizeNetwork fills each tank over its fill window', () => {
   });
 
   it('names a tank to fill that nothing is laid into', async () => {
-    await expect(sizeNetwork(hillFarm(), { candidates: CANDIDATES, tankFillFlowsM3s: { tap: 0.001 } })).rejects.toThrow(/"tap" is not a tank/);
+    await expect(sizeNetwork(hillFarm(), { candidates: CANDIDATES, tankFillFlowsM3s: { tap: 0.001 } })).rejects.toThrow(
+      /"tap" is not a tank/,
+    );
     const noInlet = hillFarm();
     noInlet.links = noInlet.links.filter((l) => l.id !== 'trunk');
-    await expect(sizeNetwork(noInlet, { candidates: CANDIDATES, tankFillFlowsM3s: { tank: 0.001 } })).rejects.toThrow(/no link is laid into it/);
+    await expect(sizeNetwork(noInlet, { candidates: CANDIDATES, tankFillFlowsM3s: { tank: 0.001 } })).rejects.toThrow(
+      /no link is laid into it/,
+    );
   });
 });

@@ -3,7 +3,13 @@ import { pipeHeadLossM, solveNetwork, type NetworkInput } from '../../../hydraul
 import { TWO_LOOP_419K_DESIGN_IN, twoLoopNetwork } from './two-loop-fixture';
 
 /** Hazen-Williams with the textbook constants pinned for hand calculation: 10.67, 1.852, 4.87. */
-const HAND_SETTINGS = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const HAND_SETTINGS = {
+  frictionMethod: 'hazen-williams' as const,
+  freeSurfaceLosses: false,
+  hazenWilliamsConstant: 10.67,
+  hazenWilliamsFlowExponent: 1.852,
+  hazenWilliamsDiameterExponent: 4.87,
+};
 
 function branched(): NetworkInput {
   return {
@@ -14,9 +20,27 @@ function branched(): NetworkInput {
       { id: 'house', kind: 'outlet', elevationM: 70, demandM3s: 0.002 },
     ],
     links: [
-      { id: 'main', from: 'spring', to: 'tee', lengthM: 500, pipe: { id: 'p100', insideDiameterM: 0.1, hazenWilliamsC: 140 } },
-      { id: 'to-trough', from: 'tee', to: 'trough', lengthM: 300, pipe: { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140 } },
-      { id: 'to-house', from: 'house', to: 'tee', lengthM: 400, pipe: { id: 'p75', insideDiameterM: 0.075, hazenWilliamsC: 140 } },
+      {
+        id: 'main',
+        from: 'spring',
+        to: 'tee',
+        lengthM: 500,
+        pipe: { id: 'p100', insideDiameterM: 0.1, hazenWilliamsC: 140 },
+      },
+      {
+        id: 'to-trough',
+        from: 'tee',
+        to: 'trough',
+        lengthM: 300,
+        pipe: { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140 },
+      },
+      {
+        id: 'to-house',
+        from: 'house',
+        to: 'tee',
+        lengthM: 400,
+        pipe: { id: 'p75', insideDiameterM: 0.075, hazenWilliamsC: 140 },
+      },
     ],
     settings: HAND_SETTINGS,
   };
@@ -49,11 +73,19 @@ describe('solveNetwork: a branched network', () => {
     expect(solveNetwork(branched()).maxContinuityErrorM3s).toBeLessThan(1e-9);
   });
 
-  it('solves with Darcy-Weisbach too, and agrees with Hazen-Williams to within the laws\' spread', () => {
+  it("solves with Darcy-Weisbach too, and agrees with Hazen-Williams to within the laws' spread", () => {
     const input = branched();
     const darcy: NetworkInput = {
       ...input,
-      links: input.links.map((link) => ({ ...link, pipe: { ...(link.pipe as object), id: 'x', insideDiameterM: (link.pipe as { insideDiameterM: number }).insideDiameterM, roughnessM: 1.5e-6 } })),
+      links: input.links.map((link) => ({
+        ...link,
+        pipe: {
+          ...(link.pipe as object),
+          id: 'x',
+          insideDiameterM: (link.pipe as { insideDiameterM: number }).insideDiameterM,
+          roughnessM: 1.5e-6,
+        },
+      })),
       settings: { frictionMethod: 'darcy-weisbach' },
     };
     const solution = solveNetwork(darcy);
@@ -66,24 +98,43 @@ describe('solveNetwork: a branched network', () => {
 });
 
 describe('solveNetwork: the two-loop benchmark [NET-AS77]', () => {
-  // Heads of the 419,000 $ design with ω = 10.667, exponents 1.852 / 4.871 (docs/references/network.md, [NET-AS77] §"solved heads").
-  const PUBLISHED_HEADS_M: Record<string, number> = { '2': 203.247, '3': 190.462, '4': 198.449, '5': 183.803, '6': 195.445, '7': 190.552 };
-  const PUBLISHED_FLOWS_M3H: Record<string, number> = { '1': 1120.0, '2': 336.88, '3': 683.12, '4': 32.56, '5': 530.56, '6': 200.56, '7': 236.88, '8': -0.56 };
+  // Heads of the 419,000 $ design with ω = 10.667, exponents 1.852 / 4.871 (docs/references/network.md, [NET-AS77]
+  // §"solved heads").
+  const PUBLISHED_HEADS_M: Record<string, number> = {
+    '2': 203.247,
+    '3': 190.462,
+    '4': 198.449,
+    '5': 183.803,
+    '6': 195.445,
+    '7': 190.552,
+  };
+  const PUBLISHED_FLOWS_M3H: Record<string, number> = {
+    '1': 1120.0,
+    '2': 336.88,
+    '3': 683.12,
+    '4': 32.56,
+    '5': 530.56,
+    '6': 200.56,
+    '7': 236.88,
+    '8': -0.56,
+  };
 
   it('reproduces the published heads to 0.01 m with the constants pinned', () => {
     const solution = solveNetwork(twoLoopNetwork(TWO_LOOP_419K_DESIGN_IN));
     expect(solution.converged).toBe(true);
-    for (const [node, head] of Object.entries(PUBLISHED_HEADS_M)) expect(Math.abs(solution.headsM[node] - head)).toBeLessThan(0.01);
+    for (const [node, head] of Object.entries(PUBLISHED_HEADS_M))
+      expect(Math.abs(solution.headsM[node] - head)).toBeLessThan(0.01);
   });
 
   it('reproduces the published flows to 0.01 m³/h, pipe 8 nearly still and reversed', () => {
     const solution = solveNetwork(twoLoopNetwork(TWO_LOOP_419K_DESIGN_IN));
-    for (const [pipe, flow] of Object.entries(PUBLISHED_FLOWS_M3H)) expect(Math.abs(solution.flowsM3s[pipe] * 3600 - flow)).toBeLessThan(0.01);
+    for (const [pipe, flow] of Object.entries(PUBLISHED_FLOWS_M3H))
+      expect(Math.abs(solution.flowsM3s[pipe] * 3600 - flow)).toBeLessThan(0.01);
     expect(solution.maxContinuityErrorM3s).toBeLessThan(1e-9);
   });
 });
 
-describe('solveNetwork: the default friction law is the line analysis\'s', () => {
+describe("solveNetwork: the default friction law is the line analysis's", () => {
   // Spring at 100 m to a tank at 90 m through 800 m of 50 mm PE (invented). Energy between two free
   // surfaces, as the line analysis writes it (analyze-profile.ts, profile-and-checks.md §5.2):
   // Δz = (K_entrance 0.5 + f·L/D + 1)·v²/2g, f by Colebrook.
@@ -116,7 +167,18 @@ describe('solveNetwork: the default friction law is the line analysis\'s', () =>
   });
 
   it('reports Hazen-Williams when a network asks for it', () => {
-    const hw = solveNetwork({ ...input({ frictionMethod: 'hazen-williams' }), links: [{ id: 'trunk', from: 'spring', to: 'tank', lengthM: 800, pipe: { id: 'c140', insideDiameterM: 0.05, hazenWilliamsC: 140 } }] });
+    const hw = solveNetwork({
+      ...input({ frictionMethod: 'hazen-williams' }),
+      links: [
+        {
+          id: 'trunk',
+          from: 'spring',
+          to: 'tank',
+          lengthM: 800,
+          pipe: { id: 'c140', insideDiameterM: 0.05, hazenWilliamsC: 140 },
+        },
+      ],
+    });
     expect(hw.frictionMethod).toBe('hazen-williams');
   });
 });

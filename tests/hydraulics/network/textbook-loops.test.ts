@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { solveNetwork, waterKinematicViscosityM2s, type NetworkInput, type NetworkLink, type NetworkSolution } from '../../../hydraulics/index';
+import {
+  solveNetwork,
+  waterKinematicViscosityM2s,
+  type NetworkInput,
+  type NetworkLink,
+  type NetworkSolution,
+} from '../../../hydraulics/index';
 
 /**
  * Three looped networks from the example decks of Jeppson's pipe-network manual [NET-JE74]
@@ -42,9 +48,25 @@ const EXAMPLE_1_PIPES: readonly (readonly [string, string, string, number, numbe
   ['7', 'C', 'F', 10, 2000],
 ];
 /** Printed flows, cfs, positive from -> to [NET-JE74], independent program output. */
-const EXAMPLE_1_FLOWS_CFS: Record<string, number> = { '1': 6.8661, '2': 3.8331, '3': 0.63389, '4': 3.1339, '5': 3.033, '6': 0.53302, '7': 4.467 };
+const EXAMPLE_1_FLOWS_CFS: Record<string, number> = {
+  '1': 6.8661,
+  '2': 3.8331,
+  '3': 0.63389,
+  '4': 3.1339,
+  '5': 3.033,
+  '6': 0.53302,
+  '7': 4.467,
+};
 /** Printed head losses, ft, with the manual's US constant 4.73 [NET-JE74]. */
-const EXAMPLE_1_LOSSES_FT: Record<string, number> = { '1': 72.93, '2': 45.164, '3': 25.878, '4': 92.216, '5': 115.73, '6': 9.3865, '7': 79.949 };
+const EXAMPLE_1_LOSSES_FT: Record<string, number> = {
+  '1': 72.93,
+  '2': 45.164,
+  '3': 25.878,
+  '4': 92.216,
+  '5': 115.73,
+  '6': 9.3865,
+  '7': 79.949,
+};
 
 const HW_FLOW_EXPONENT = 1 / 0.54;
 const HW_DIAMETER_EXPONENT = 2.63 / 0.54;
@@ -97,7 +119,7 @@ describe('solveNetwork: Jeppson manual, chapter 6 deck (Hazen-Williams, two loop
     }
   });
 
-  it('reproduces the printed head losses to 1e-4 relative with the manual\'s constant 4.73 pinned', () => {
+  it("reproduces the printed head losses to 1e-4 relative with the manual's constant 4.73 pinned", () => {
     // Jeppson [NET-JE74] chapter 6 deck; the loss carries the constant, so it is pinned above.
     for (const [id, lossFt] of Object.entries(EXAMPLE_1_LOSSES_FT)) {
       expect(relativeError(solution.headLossesM[id] / FOOT_M, lossFt), `pipe ${id}`).toBeLessThan(1e-4);
@@ -106,8 +128,26 @@ describe('solveNetwork: Jeppson manual, chapter 6 deck (Hazen-Williams, two loop
 
   it('closes the head around both loops', () => {
     // Loops as the deck lists them: (1, 2, -3, -4) and (5, 6, -7, -2).
-    expect(Math.abs(loopHeadSumM(solution, [['1', 1], ['2', 1], ['3', -1], ['4', -1]]))).toBeLessThan(1e-6);
-    expect(Math.abs(loopHeadSumM(solution, [['5', 1], ['6', 1], ['7', -1], ['2', -1]]))).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['1', 1],
+          ['2', 1],
+          ['3', -1],
+          ['4', -1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['5', 1],
+          ['6', 1],
+          ['7', -1],
+          ['2', -1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
   });
 });
 
@@ -122,8 +162,24 @@ const EXAMPLE_2_PIPES: readonly (readonly [string, string, string, number, numbe
   ['6', 'E', 'F', 10, 2000],
   ['7', 'F', 'C', 12, 3000],
 ];
-const EXAMPLE_2_FLOWS_CFS: Record<string, number> = { '1': 1.7474, '2': 3.4873, '3': 0.9226, '4': 1.5926, '5': 1.7399, '6': 1.6001, '7': 0.71006 };
-const EXAMPLE_2_LOSSES_FT: Record<string, number> = { '1': 4.8817, '2': 5.6573, '3': 3.6113, '4': 6.9278, '5': 2.2054, '6': 6.9913, '7': 0.87151 };
+const EXAMPLE_2_FLOWS_CFS: Record<string, number> = {
+  '1': 1.7474,
+  '2': 3.4873,
+  '3': 0.9226,
+  '4': 1.5926,
+  '5': 1.7399,
+  '6': 1.6001,
+  '7': 0.71006,
+};
+const EXAMPLE_2_LOSSES_FT: Record<string, number> = {
+  '1': 4.8817,
+  '2': 5.6573,
+  '3': 3.6113,
+  '4': 6.9278,
+  '5': 2.2054,
+  '6': 6.9913,
+  '7': 0.87151,
+};
 const DECK_VISCOSITY_M2S = 1.217e-5 * FOOT_M ** 2;
 /** Water temperature at which the core's viscosity equals the deck's 1.217e-5 ft²/s (found by bisection) [C]. */
 const DECK_TEMPERATURE_C = 15.2886;
@@ -153,7 +209,7 @@ function example2(): NetworkInput {
 describe('solveNetwork: Jeppson manual, chapter 7 deck (Darcy-Weisbach, Hardy Cross example) [NET-JE74]', () => {
   const solution = solveNetwork(example2());
 
-  it('runs at the deck\'s viscosity', () => {
+  it("runs at the deck's viscosity", () => {
     expect(relativeError(waterKinematicViscosityM2s(DECK_TEMPERATURE_C), DECK_VISCOSITY_M2S)).toBeLessThan(1e-4);
   });
 
@@ -179,18 +235,48 @@ describe('solveNetwork: Jeppson manual, chapter 7 deck (Darcy-Weisbach, Hardy Cr
 
   it('closes the head around both loops', () => {
     // Loops as the deck lists them: (1, 2, -3, -4) and (-2, -5, 6, 7).
-    expect(Math.abs(loopHeadSumM(solution, [['1', 1], ['2', 1], ['3', -1], ['4', -1]]))).toBeLessThan(1e-6);
-    expect(Math.abs(loopHeadSumM(solution, [['2', -1], ['5', -1], ['6', 1], ['7', 1]]))).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['1', 1],
+          ['2', 1],
+          ['3', -1],
+          ['4', -1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['2', -1],
+          ['5', -1],
+          ['6', 1],
+          ['7', 1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
   });
 
   it('would notice a wrong friction law: Hazen-Williams C = 130 moves the flows by more than the tolerance', () => {
     const input = example2();
     const wrong = solveNetwork({
       ...input,
-      links: input.links.map((link) => ({ ...link, pipe: { ...(link.pipe as object), id: 'hw', insideDiameterM: (link.pipe as { insideDiameterM: number }).insideDiameterM, hazenWilliamsC: 130 } })),
+      links: input.links.map((link) => ({
+        ...link,
+        pipe: {
+          ...(link.pipe as object),
+          id: 'hw',
+          insideDiameterM: (link.pipe as { insideDiameterM: number }).insideDiameterM,
+          hazenWilliamsC: 130,
+        },
+      })),
       settings: { frictionMethod: 'hazen-williams', freeSurfaceLosses: false },
     });
-    const worst = Math.max(...Object.entries(EXAMPLE_2_FLOWS_CFS).map(([id, flowCfs]) => relativeError(wrong.flowsM3s[id] / CFS_M3S, flowCfs)));
+    const worst = Math.max(
+      ...Object.entries(EXAMPLE_2_FLOWS_CFS).map(([id, flowCfs]) =>
+        relativeError(wrong.flowsM3s[id] / CFS_M3S, flowCfs),
+      ),
+    );
     expect(worst).toBeGreaterThan(2e-4);
   });
 });
@@ -208,8 +294,24 @@ const EXAMPLE_3_PIPES: readonly (readonly [string, string, string, number, numbe
   ['6', 'J6', 'J5', 6, 600],
   ['7', 'J6', 'J3', 8, 800],
 ];
-const EXAMPLE_3_FLOWS_GPM: Record<string, number> = { '1': 463.45, '2': 294.2, '3': 536.55, '4': 1536.5, '5': 757.65, '6': 742.35, '7': 1257.7 };
-const EXAMPLE_3_LOSSES_FT: Record<string, number> = { '1': 5.0945, '2': 0.18879, '3': 1.9568, '4': 2.9497, '5': 4.565, '6': 30.637, '7': 25.885 };
+const EXAMPLE_3_FLOWS_GPM: Record<string, number> = {
+  '1': 463.45,
+  '2': 294.2,
+  '3': 536.55,
+  '4': 1536.5,
+  '5': 757.65,
+  '6': 742.35,
+  '7': 1257.7,
+};
+const EXAMPLE_3_LOSSES_FT: Record<string, number> = {
+  '1': 5.0945,
+  '2': 0.18879,
+  '3': 1.9568,
+  '4': 2.9497,
+  '5': 4.565,
+  '6': 30.637,
+  '7': 25.885,
+};
 
 function example3(): NetworkInput {
   return {
@@ -259,7 +361,25 @@ describe('solveNetwork: Jeppson manual, chapter 5 deck (Darcy-Weisbach, six junc
 
   it('closes the head around both loops', () => {
     // Loops as the deck lists them: (1, -2, -3, -4) and (5, -6, 7, 2).
-    expect(Math.abs(loopHeadSumM(solution, [['1', 1], ['2', -1], ['3', -1], ['4', -1]]))).toBeLessThan(1e-6);
-    expect(Math.abs(loopHeadSumM(solution, [['5', 1], ['6', -1], ['7', 1], ['2', 1]]))).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['1', 1],
+          ['2', -1],
+          ['3', -1],
+          ['4', -1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
+    expect(
+      Math.abs(
+        loopHeadSumM(solution, [
+          ['5', 1],
+          ['6', -1],
+          ['7', 1],
+          ['2', 1],
+        ]),
+      ),
+    ).toBeLessThan(1e-6);
   });
 });

@@ -5,7 +5,14 @@ import type { NetworkInput, NetworkLink } from '../../../hydraulics/index';
  * it (docs/references/network.md): reservoir 1 at 210 m, six junctions, eight 1000 m pipes with
  * C = 130, demands in m³/h, 30 m minimum pressure head, nominal diameter taken as inside diameter.
  */
-export const TWO_LOOP_DEMANDS_M3H: Record<string, number> = { '2': 100, '3': 100, '4': 120, '5': 270, '6': 330, '7': 200 };
+export const TWO_LOOP_DEMANDS_M3H: Record<string, number> = {
+  '2': 100,
+  '3': 100,
+  '4': 120,
+  '5': 270,
+  '6': 330,
+  '7': 200,
+};
 const ELEVATIONS_M: Record<string, number> = { '2': 150, '3': 160, '4': 155, '5': 150, '6': 165, '7': 160 };
 export const TWO_LOOP_PIPES: readonly (readonly [string, string, string])[] = [
   ['1', '1', '2'],
@@ -19,7 +26,20 @@ export const TWO_LOOP_PIPES: readonly (readonly [string, string, string])[] = [
 ];
 /** Candidate diameters (in) and costs ($/m) [NET-AS77]. */
 export const TWO_LOOP_CANDIDATES_IN_COST: readonly (readonly [number, number])[] = [
-  [1, 2], [2, 5], [3, 8], [4, 11], [6, 16], [8, 23], [10, 32], [12, 50], [14, 60], [16, 90], [18, 130], [20, 170], [22, 300], [24, 550],
+  [1, 2],
+  [2, 5],
+  [3, 8],
+  [4, 11],
+  [6, 16],
+  [8, 23],
+  [10, 32],
+  [12, 50],
+  [14, 60],
+  [16, 90],
+  [18, 130],
+  [20, 170],
+  [22, 300],
+  [24, 550],
 ];
 /** The best-known one-size-per-pipe design, 419,000 $ [NET-AS77]. */
 export const TWO_LOOP_419K_DESIGN_IN = [18, 10, 16, 4, 16, 10, 10, 1];

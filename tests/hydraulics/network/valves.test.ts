@@ -1,8 +1,20 @@
 import { describe, expect, it } from 'vitest';
-import { HydraulicsInputError, solveNetwork, type NetworkInput, type NetworkLink, type NetworkNode } from '../../../hydraulics/index';
+import {
+  HydraulicsInputError,
+  solveNetwork,
+  type NetworkInput,
+  type NetworkLink,
+  type NetworkNode,
+} from '../../../hydraulics/index';
 
 const PIPE = { id: 'p50', insideDiameterM: 0.05, hazenWilliamsC: 140 };
-const HAND = { frictionMethod: 'hazen-williams' as const, freeSurfaceLosses: false, hazenWilliamsConstant: 10.67, hazenWilliamsFlowExponent: 1.852, hazenWilliamsDiameterExponent: 4.87 };
+const HAND = {
+  frictionMethod: 'hazen-williams' as const,
+  freeSurfaceLosses: false,
+  hazenWilliamsConstant: 10.67,
+  hazenWilliamsFlowExponent: 1.852,
+  hazenWilliamsDiameterExponent: 4.87,
+};
 
 function net(nodes: NetworkNode[], links: Omit<NetworkLink, 'pipe'>[]): NetworkInput {
   return { nodes, links: links.map((link) => ({ pipe: PIPE, ...link })), settings: HAND };
@@ -185,10 +197,22 @@ describe('solveNetwork: bad networks are named', () => {
   });
 
   it('names a link that points at a missing node, and a duplicate id', () => {
-    const base = net([{ id: 'spring', kind: 'source', elevationM: 100 }, { id: 'tap', kind: 'outlet', elevationM: 60 }], [{ id: 'a', from: 'spring', to: 'tap', lengthM: 100 }]);
-    expect(() => solveNetwork({ ...base, links: [{ ...base.links[0], to: 'nowhere' }] })).toThrow(/links.to\[0\]: link "a" names no node "nowhere"/);
-    expect(() => solveNetwork({ ...base, nodes: [...base.nodes, base.nodes[1]] })).toThrow(/nodes.id\[2\]: "tap" is used twice/);
-    expect(() => solveNetwork({ ...base, links: [{ ...base.links[0], pipe: 'no-such-pipe' }] })).toThrow(/no catalogue pipe "no-such-pipe"/);
+    const base = net(
+      [
+        { id: 'spring', kind: 'source', elevationM: 100 },
+        { id: 'tap', kind: 'outlet', elevationM: 60 },
+      ],
+      [{ id: 'a', from: 'spring', to: 'tap', lengthM: 100 }],
+    );
+    expect(() => solveNetwork({ ...base, links: [{ ...base.links[0], to: 'nowhere' }] })).toThrow(
+      /links.to\[0\]: link "a" names no node "nowhere"/,
+    );
+    expect(() => solveNetwork({ ...base, nodes: [...base.nodes, base.nodes[1]] })).toThrow(
+      /nodes.id\[2\]: "tap" is used twice/,
+    );
+    expect(() => solveNetwork({ ...base, links: [{ ...base.links[0], pipe: 'no-such-pipe' }] })).toThrow(
+      /no catalogue pipe "no-such-pipe"/,
+    );
     expect(() => solveNetwork({ ...base, links: [{ ...base.links[0], lengthM: -3 }] })).toThrow(/links.lengthM\[0\]/);
   });
 

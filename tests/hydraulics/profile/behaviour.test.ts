@@ -4,7 +4,17 @@ import { simpleLine, testPipe } from './fixtures';
 
 describe('analyzeProfile behaviour', () => {
   it('computes friction on the 3-D slope length of the pipe (a 300 m run rising 400 m is 500 m of pipe)', () => {
-    const profile = analyzeProfile({ ...simpleLine([[0, 0], [300, 400]], 500, 0.005), settings: { frictionMethod: 'hazen-williams' } });
+    const profile = analyzeProfile({
+      ...simpleLine(
+        [
+          [0, 0],
+          [300, 400],
+        ],
+        500,
+        0.005,
+      ),
+      settings: { frictionMethod: 'hazen-williams' },
+    });
     expect(profile.totals.horizontalLengthM).toBe(300);
     expect(profile.totals.slopeLengthM).toBeCloseTo(500, 12);
     const expected = hazenWilliamsHeadLoss({ flowM3s: 0.005, lengthM: 500, diameterM: 0.1, c: 150 });
@@ -12,10 +22,20 @@ describe('analyzeProfile behaviour', () => {
   });
 
   it('lays the pipe at ground minus cover (station cover, else the default cover)', () => {
-    const line = simpleLine([[0, 100], [100, 90]], 105, 0);
+    const line = simpleLine(
+      [
+        [0, 100],
+        [100, 90],
+      ],
+      105,
+      0,
+    );
     const profile = analyzeProfile({
       ...line,
-      stations: [{ chainageM: 0, groundElevationM: 100, coverM: 1.2 }, { chainageM: 100, groundElevationM: 90 }],
+      stations: [
+        { chainageM: 0, groundElevationM: 100, coverM: 1.2 },
+        { chainageM: 100, groundElevationM: 90 },
+      ],
       settings: { defaultCoverM: 0.6 },
     });
     expect(Array.from(profile.points.pipeElevationM)).toEqual([98.8, 89.4]);
@@ -25,7 +45,14 @@ describe('analyzeProfile behaviour', () => {
   it('adds points at stretch ends and fittings between stations, and drops the grade by K v^2/2g there', () => {
     const small = testPipe({ id: 'small', insideDiameterM: 0.05, outsideDiameterM: 0.06, wallM: 0.005 });
     const profile = analyzeProfile({
-      ...simpleLine([[0, 100], [1000, 80]], 101, 0.002),
+      ...simpleLine(
+        [
+          [0, 100],
+          [1000, 80],
+        ],
+        101,
+        0.002,
+      ),
       stretches: [
         { fromM: 0, toM: 400, pipe: testPipe() },
         { fromM: 400, toM: 1000, pipe: small },
@@ -39,7 +66,8 @@ describe('analyzeProfile behaviour', () => {
     expect(p.groundElevationM[1]).toBeCloseTo(92, 12);
     const v = 0.002 / (Math.PI * 0.025 * 0.025);
     expect(p.velocityMs[2]).toBeCloseTo(v, 12);
-    // Velocity head and sharp entrance at the source in the 100 mm pipe (profile-and-checks.md §5.2), then K = 2 at the fitting.
+    // Velocity head and sharp entrance at the source in the 100 mm pipe (profile-and-checks.md §5.2), then K = 2 at the
+    // fitting.
     const entryM = minorLossHeadM({ kTotal: 1.5, velocityMs: 0.002 / (Math.PI * 0.05 * 0.05) });
     expect(p.minorLossM[0]).toBeCloseTo(entryM, 12);
     expect(p.minorLossM[2] - p.minorLossM[0]).toBeCloseTo(minorLossHeadM({ kTotal: 2, velocityMs: v }), 12);
@@ -50,14 +78,22 @@ describe('analyzeProfile behaviour', () => {
 
   it('a break-pressure tank resets the static line and the grade to its water level (ground by default)', () => {
     const profile = analyzeProfile({
-      ...simpleLine([[0, 300], [500, 200], [1000, 100]], 301, 0.001),
+      ...simpleLine(
+        [
+          [0, 300],
+          [500, 200],
+          [1000, 100],
+        ],
+        301,
+        0.001,
+      ),
       devices: [{ kind: 'break-pressure-tank', chainageM: 500 }],
     });
     const p = profile.points;
     expect(p.staticHeadM[0]).toBe(301);
     expect(p.staticHeadM[1]).toBe(200);
     // The tank's level less the velocity head and entrance loss of the pipe leaving it (§5.2).
-    expect(p.hydraulicGradeM[1]).toBeCloseTo(200 - 1.5 * p.velocityMs[1] ** 2 / (2 * 9.80665), 12);
+    expect(p.hydraulicGradeM[1]).toBeCloseTo(200 - (1.5 * p.velocityMs[1] ** 2) / (2 * 9.80665), 12);
     expect(p.staticPressureHeadM[2]).toBeCloseTo(100, 12);
     expect(profile.tanks).toEqual([{ chainageM: 500, waterLevelM: 200 }]);
     expect(profile.reaches).toHaveLength(2);
@@ -67,7 +103,15 @@ describe('analyzeProfile behaviour', () => {
 
   it('"find the flow" with a tank is limited by the weaker reach', () => {
     const profile = analyzeProfile({
-      ...simpleLine([[0, 300], [500, 290], [1000, 100]], 301, 0),
+      ...simpleLine(
+        [
+          [0, 300],
+          [500, 290],
+          [1000, 100],
+        ],
+        301,
+        0,
+      ),
       devices: [{ kind: 'break-pressure-tank', chainageM: 500 }],
       flow: { kind: 'find' },
     });
@@ -80,7 +124,14 @@ describe('analyzeProfile behaviour', () => {
 
   it('a pump start uses the outlet head while flowing and the shut-off head for the static line', () => {
     const profile = analyzeProfile({
-      ...simpleLine([[0, 100], [1000, 150]], 0, 0.003),
+      ...simpleLine(
+        [
+          [0, 100],
+          [1000, 150],
+        ],
+        0,
+        0.003,
+      ),
       start: { kind: 'pump', outletHeadM: 180, shutoffHeadM: 200 },
     });
     expect(profile.points.hydraulicGradeM[0]).toBe(180);
@@ -89,7 +140,14 @@ describe('analyzeProfile behaviour', () => {
   });
 
   it('a pump without a shut-off head is not taken to shut off at its duty head: 1.25 × its head above the pipe (common practice, no source)', () => {
-    const line = simpleLine([[0, 100], [1000, 150]], 0, 0.003);
+    const line = simpleLine(
+      [
+        [0, 100],
+        [1000, 150],
+      ],
+      0,
+      0.003,
+    );
     const profile = analyzeProfile({ ...line, start: { kind: 'pump', outletHeadM: 180 } });
     const pipeAtPump = profile.points.pipeElevationM[0];
     expect(profile.points.staticHeadM[0]).toBeCloseTo(pipeAtPump + 1.25 * (180 - pipeAtPump), 9);
@@ -97,13 +155,29 @@ describe('analyzeProfile behaviour', () => {
   });
 
   it('a shut-off head below the pumping head is refused on start.shutoffHeadM', () => {
-    const line = simpleLine([[0, 100], [1000, 150]], 0, 0.003);
-    expect(() => analyzeProfile({ ...line, start: { kind: 'pump', outletHeadM: 180, shutoffHeadM: 170 } })).toThrow(/start\.shutoffHeadM.*below the grade while pumping/);
+    const line = simpleLine(
+      [
+        [0, 100],
+        [1000, 150],
+      ],
+      0,
+      0.003,
+    );
+    expect(() => analyzeProfile({ ...line, start: { kind: 'pump', outletHeadM: 180, shutoffHeadM: 170 } })).toThrow(
+      /start\.shutoffHeadM.*below the grade while pumping/,
+    );
   });
 
   it('an outlet end reports its residual head against its target (default 3 m, Akvopedia [R2])', () => {
     const profile = analyzeProfile({
-      ...simpleLine([[0, 100], [1000, 60]], 101, 0.002),
+      ...simpleLine(
+        [
+          [0, 100],
+          [1000, 60],
+        ],
+        101,
+        0.002,
+      ),
       end: { kind: 'outlet', elevationM: 61 },
     });
     expect(profile.end.targetResidualHeadM).toBe(3);

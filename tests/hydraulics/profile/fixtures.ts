@@ -26,7 +26,10 @@ export function stationsOf(points: readonly (readonly [number, number])[], cover
   );
 }
 
-/** A one-pipe line from a water level to free discharge at a design flow, the pipe laid on the ground (cover 0) so heads read straight from the levels. */
+/**
+ * A one-pipe line from a water level to free discharge at a design flow, the pipe laid on the ground (cover 0) so heads
+ * read straight from the levels.
+ */
 export function simpleLine(
   points: readonly (readonly [number, number])[],
   levelM: number,

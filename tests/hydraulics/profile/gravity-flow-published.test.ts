@@ -10,10 +10,24 @@ const relative = (actual: number, expected: number) => Math.abs(actual - expecte
 const G = 9.80665;
 
 function findFlow(lengthM: number, diameterM: number, fallM: number, settings: Record<string, unknown> = {}) {
-  const base = simpleLine([[0, 100], [lengthM / 2, 100], [lengthM, 100]], 100 + fallM, 0, testPipe({ insideDiameterM: diameterM, outsideDiameterM: diameterM * 1.1, wallM: diameterM * 0.05 }));
+  const base = simpleLine(
+    [
+      [0, 100],
+      [lengthM / 2, 100],
+      [lengthM, 100],
+    ],
+    100 + fallM,
+    0,
+    testPipe({ insideDiameterM: diameterM, outsideDiameterM: diameterM * 1.1, wallM: diameterM * 0.05 }),
+  );
   // These checks are of the friction formulas: Hazen-Williams unless the test asks otherwise, no entrance loss K
   // (the velocity head itself, 1 × v²/2g, stays: under 0.3 % of these falls; line-ends-published.test.ts checks it).
-  return analyzeProfile({ ...base, end: { kind: 'tank-inlet', elevationM: 100 }, flow: { kind: 'find' }, settings: { frictionMethod: 'hazen-williams', entranceLossK: 0, ...settings } }).flowM3s;
+  return analyzeProfile({
+    ...base,
+    end: { kind: 'tank-inlet', elevationM: 100 },
+    flow: { kind: 'find' },
+    settings: { frictionMethod: 'hazen-williams', entranceLossK: 0, ...settings },
+  }).flowM3s;
 }
 
 describe('gravity flow between two levels against published flow formulas', () => {
@@ -39,7 +53,7 @@ describe('gravity flow between two levels against published flow formulas', () =
     expect(relative(findFlow(1000, d, 14.235, { frictionMethod: 'darcy-weisbach' }), hand)).toBeLessThan(0.01);
   });
 
-  it('doubling the fall raises the Hazen-Williams flow by 2^0.54 (the formula\'s slope exponent; ±0.5 %)', () => {
+  it("doubling the fall raises the Hazen-Williams flow by 2^0.54 (the formula's slope exponent; ±0.5 %)", () => {
     expect(relative(findFlow(1000, 0.1, 20) / findFlow(1000, 0.1, 10), 2 ** 0.54)).toBeLessThan(0.005);
   });
 });

@@ -18,15 +18,24 @@ interface LineOptions {
 function lineArbitrary({ fittings, tanks }: LineOptions): fc.Arbitrary<LineInput> {
   return fc
     .record({
-      steps: fc.array(fc.record({ dx: fc.double({ min: 1, max: 300, noNaN: true }), dz: fc.double({ min: -40, max: 25, noNaN: true }) }), {
-        minLength: 1,
-        maxLength: 25,
-      }),
+      steps: fc.array(
+        fc.record({
+          dx: fc.double({ min: 1, max: 300, noNaN: true }),
+          dz: fc.double({ min: -40, max: 25, noNaN: true }),
+        }),
+        {
+          minLength: 1,
+          maxLength: 25,
+        },
+      ),
       cuts: fc.array(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { maxLength: 3 }),
       pipeChoice: fc.array(fc.integer({ min: 0, max: PIPES.length - 1 }), { minLength: 4, maxLength: 4 }),
-      fittingsAt: fc.array(fc.record({ at: fc.double({ min: 0, max: 1, noNaN: true }), k: fc.double({ min: 0, max: 5, noNaN: true }) }), {
-        maxLength: fittings ? 4 : 0,
-      }),
+      fittingsAt: fc.array(
+        fc.record({ at: fc.double({ min: 0, max: 1, noNaN: true }), k: fc.double({ min: 0, max: 5, noNaN: true }) }),
+        {
+          maxLength: fittings ? 4 : 0,
+        },
+      ),
       tanksAt: fc.array(fc.double({ min: 0.05, max: 0.95, noNaN: true }), { maxLength: tanks ? 2 : 0 }),
       headroomM: fc.double({ min: 0, max: 60, noNaN: true }),
       flowM3s: fc.double({ min: 0, max: 0.02, noNaN: true }),
@@ -39,7 +48,9 @@ function lineArbitrary({ fittings, tanks }: LineOptions): fc.Arbitrary<LineInput
         stations.push({ chainageM: last.chainageM + step.dx, groundElevationM: last.groundElevationM + step.dz });
       }
       const lengthM = stations[stations.length - 1].chainageM;
-      const bounds = [...new Set(r.cuts.map((cut) => Math.round(cut * 100) / 100))].sort((a, b) => a - b).map((cut) => cut * lengthM);
+      const bounds = [...new Set(r.cuts.map((cut) => Math.round(cut * 100) / 100))]
+        .sort((a, b) => a - b)
+        .map((cut) => cut * lengthM);
       const edges = [0, ...bounds, lengthM];
       const stretches: LineStretch[] = edges.slice(0, -1).map((fromM, i) => ({
         fromM,
@@ -98,14 +109,22 @@ describe('line profile properties', () => {
 
   it('"find the flow" returns a flow whose head loss matches the available head', () => {
     fc.assert(
-      fc.property(lineArbitrary({ fittings: true, tanks: false }), fc.double({ min: 1, max: 80, noNaN: true }), (input, dropM) => {
-        const endElevationM = (input.start as { levelM: number }).levelM - dropM;
-        const profile = analyzeProfile({ ...input, end: { kind: 'tank-inlet', elevationM: endElevationM }, flow: { kind: 'find' } });
-        expect(profile.flowM3s).toBeGreaterThan(0);
-        const lossM = profile.totals.frictionLossM + profile.totals.minorLossM;
-        expect(Math.abs(lossM - dropM)).toBeLessThan(1e-8);
-        expect(Math.abs(profile.end.residualHeadM)).toBeLessThan(1e-8);
-      }),
+      fc.property(
+        lineArbitrary({ fittings: true, tanks: false }),
+        fc.double({ min: 1, max: 80, noNaN: true }),
+        (input, dropM) => {
+          const endElevationM = (input.start as { levelM: number }).levelM - dropM;
+          const profile = analyzeProfile({
+            ...input,
+            end: { kind: 'tank-inlet', elevationM: endElevationM },
+            flow: { kind: 'find' },
+          });
+          expect(profile.flowM3s).toBeGreaterThan(0);
+          const lossM = profile.totals.frictionLossM + profile.totals.minorLossM;
+          expect(Math.abs(lossM - dropM)).toBeLessThan(1e-8);
+          expect(Math.abs(profile.end.residualHeadM)).toBeLessThan(1e-8);
+        },
+      ),
       { numRuns: 100 },
     );
   });

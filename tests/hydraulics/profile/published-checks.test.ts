@@ -14,7 +14,10 @@ const FLAT_KM: readonly (readonly [number, number])[] = [
 
 describe('line profile against published check values', () => {
   it('core.md §8.2 (Hazen-Williams): 1 km of 100 mm, C = 150, at 10 L/s loses 14.60 m', () => {
-    const profile = analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0.01), settings: { frictionMethod: 'hazen-williams' } });
+    const profile = analyzeProfile({
+      ...simpleLine(FLAT_KM, 150, 0.01),
+      settings: { frictionMethod: 'hazen-williams' },
+    });
     // [C] 14.603 m with the 10.67 form, 14.629 m with the exact k = 0.849 form: ~1 % band.
     expect(relative(profile.totals.frictionLossM, 14.6)).toBeLessThan(0.01);
     // Independently of the core: the exact k = 0.849 form (constant 10.6742, exponents 1.85185 / 4.87037,
@@ -23,7 +26,7 @@ describe('line profile against published check values', () => {
     expect(relative(profile.points.frictionLossM[1], halfLossM)).toBeLessThan(1e-4);
   });
 
-  it('core.md §8.2: the same line runs at 1.273 m/s, inside Jordan\'s 0.7-3.0 m/s band (no velocity warning)', () => {
+  it("core.md §8.2: the same line runs at 1.273 m/s, inside Jordan's 0.7-3.0 m/s band (no velocity warning)", () => {
     const analysis = analyzeLine(simpleLine(FLAT_KM, 150, 0.01));
     expect(analysis.points.velocityMs[0]).toBeCloseTo(1.273, 3);
     expect(analysis.warnings.filter((w) => w.code.startsWith('velocity'))).toEqual([]);
@@ -44,7 +47,10 @@ describe('line profile against published check values', () => {
 
   it('core.md §1.6: atmospheric head of 20 °C water 10.351 m at sea level, 9.181 m at 1000 m, 8.638 m at 1500 m (ISA, ρ = 998.2 [C])', () => {
     const at = (siteAltitudeM: number, waterTemperatureC?: number) =>
-      analyzeProfile({ ...simpleLine(FLAT_KM, 150, 0), settings: { siteAltitudeM, ...(waterTemperatureC === undefined ? {} : { waterTemperatureC }) } }).limits;
+      analyzeProfile({
+        ...simpleLine(FLAT_KM, 150, 0),
+        settings: { siteAltitudeM, ...(waterTemperatureC === undefined ? {} : { waterTemperatureC }) },
+      }).limits;
     expect(at(0).atmosphericHeadM).toBeCloseTo(10.351, 3);
     expect(at(1000).atmosphericHeadM).toBeCloseTo(9.181, 3);
     expect(at(1500).atmosphericHeadM).toBeCloseTo(8.638, 3);
@@ -57,14 +63,35 @@ describe('line profile against published check values', () => {
   });
 
   it('defaults the site altitude to the highest ground of the line (lowest air pressure: the cautious choice)', () => {
-    const profile = analyzeProfile(simpleLine([[0, 1000], [100, 1500], [200, 1200]], 1600, 0));
+    const profile = analyzeProfile(
+      simpleLine(
+        [
+          [0, 1000],
+          [100, 1500],
+          [200, 1200],
+        ],
+        1600,
+        0,
+      ),
+    );
     expect(profile.limits.siteAltitudeM).toBe(1500);
     expect(profile.limits.atmosphericHeadM).toBeCloseTo(8.638, 3);
   });
 
   it('siphon limits [R7]: a summit at -7.6 m (course note "usually -7.6 m") passes the 7.5 m practical limit; -7.4 m does not', () => {
     const summit = (summitM: number) =>
-      analyzeProfile({ ...simpleLine([[0, 100], [500, summitM], [1000, 80]], 105, 0), settings: { siteAltitudeM: 0 } });
+      analyzeProfile({
+        ...simpleLine(
+          [
+            [0, 100],
+            [500, summitM],
+            [1000, 80],
+          ],
+          105,
+          0,
+        ),
+        settings: { siteAltitudeM: 0 },
+      });
     const deep = summit(112.6);
     expect(deep.points.pressureHeadM[1]).toBeCloseTo(-7.6, 10);
     const deepZone = deep.zones.find((zone) => zone.kind === 'siphon-limit');
@@ -79,7 +106,15 @@ describe('line profile against published check values', () => {
 
   it('vapour limit at 3000 m: atmospheric 7.15 m (core.md §1.6) less 0.24 m vapour head is passed by a -7 m summit', () => {
     const profile = analyzeProfile({
-      ...simpleLine([[0, 3000], [500, 3012], [1000, 2980]], 3005, 0),
+      ...simpleLine(
+        [
+          [0, 3000],
+          [500, 3012],
+          [1000, 2980],
+        ],
+        3005,
+        0,
+      ),
       settings: { siteAltitudeM: 3000 },
     });
     expect(profile.limits.atmosphericHeadM).toBeCloseTo(7.162, 3); // core.md §1.6 [C], 20 °C water
@@ -92,14 +127,24 @@ describe('line profile against published check values', () => {
   });
 
   it('Jordan p.52 via ITACA [R1] ("never negative"): the exact chainage where a flowing line goes below zero pressure', () => {
-    const profile = analyzeProfile(simpleLine([[0, 100], [1000, 100], [2000, 100]], 110, 0.01));
+    const profile = analyzeProfile(
+      simpleLine(
+        [
+          [0, 100],
+          [1000, 100],
+          [2000, 100],
+        ],
+        110,
+        0.01,
+      ),
+    );
     const gradient = profile.totals.frictionLossM / 2000;
     const crossing = profile.crossings.find((c) => c.kind === 'negative-pressure');
     expect(crossing?.entering).toBe(true);
     // Between stations (not snapped to one): 110 - (1 + 0.5)·v²/2g at the entrance - gradient * x = 100
     // (velocity head and sharp entrance, profile-and-checks.md §5.2).
     const entranceM = profile.points.minorLossM[0];
-    expect(entranceM).toBeCloseTo(1.5 * profile.points.velocityMs[0] ** 2 / (2 * 9.80665), 12);
+    expect(entranceM).toBeCloseTo((1.5 * profile.points.velocityMs[0] ** 2) / (2 * 9.80665), 12);
     expect(crossing!.chainageM).toBeCloseTo((10 - entranceM) / gradient, 6);
     expect(crossing!.chainageM).toBeGreaterThan(0);
     expect(crossing!.chainageM).toBeLessThan(1000);

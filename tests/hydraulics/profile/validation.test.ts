@@ -115,14 +115,21 @@ describe('assertLineInput / analyzeLine bad input', () => {
     expect(error.message).toMatch(/no-such-pipe/);
   });
 
-  it('resolves an id from the line\'s own pipes before the catalogue', () => {
-    const line = { ...base(), pipes: [testPipe({ id: 'my-pipe' })], stretches: [{ fromM: 0, toM: 200, pipe: 'my-pipe' }] };
+  it("resolves an id from the line's own pipes before the catalogue", () => {
+    const line = {
+      ...base(),
+      pipes: [testPipe({ id: 'my-pipe' })],
+      stretches: [{ fromM: 0, toM: 200, pipe: 'my-pipe' }],
+    };
     expect(analyzeLine(line).stretches[0].pipe.id).toBe('my-pipe');
   });
 
   it('fittings and devices off the line, unknown kinds, bad settings -> the field and index', () => {
     const fitting = errorFor((line) => {
-      line.fittings = [{ chainageM: 50, k: 1 }, { chainageM: 250, k: 1 }];
+      line.fittings = [
+        { chainageM: 50, k: 1 },
+        { chainageM: 250, k: 1 },
+      ];
     });
     expect([fitting.field, fitting.index]).toEqual(['fittings.chainageM', 1]);
     const k = errorFor((line) => {

@@ -13,7 +13,7 @@ const reading: CommissioningReading = {
 };
 
 describe('commissioningResult', () => {
-  it('drive flow = waste + delivered; D\'Aubuisson efficiency q·h/(Q·H)', () => {
+  it("drive flow = waste + delivered; D'Aubuisson efficiency q·h/(Q·H)", () => {
     const result = commissioningResult({ reading });
     const q = 0.01 / 250;
     const drive = 0.01 / 35 + q;
@@ -42,7 +42,9 @@ describe('commissioningResult', () => {
   });
 
   it('rejects a delivered flow at or above the drive flow and bad bucket times, naming the field', () => {
-    expect(() => commissioningResult({ reading: { ...reading, drive: { driveFlow: { flowM3s: 1e-6 } } } })).toThrow(HydraulicsInputError);
+    expect(() => commissioningResult({ reading: { ...reading, drive: { driveFlow: { flowM3s: 1e-6 } } } })).toThrow(
+      HydraulicsInputError,
+    );
     try {
       commissioningResult({ reading: { ...reading, delivered: { bucket: { volumeM3: 0.01, seconds: 0 } } } });
       expect.unreachable();
@@ -62,6 +64,7 @@ describe('commissioning checklist and troubleshooting notes (common practice, no
     expect(text).toMatch(/frost depth/);
   });
   it('every note has a source or says it has none', () => {
-    for (const note of [...RAM_COMMISSIONING_CHECKLIST, ...RAM_TROUBLESHOOTING_NOTES]) expect(note.source.length).toBeGreaterThan(5);
+    for (const note of [...RAM_COMMISSIONING_CHECKLIST, ...RAM_TROUBLESHOOTING_NOTES])
+      expect(note.source.length).toBeGreaterThan(5);
   });
 });

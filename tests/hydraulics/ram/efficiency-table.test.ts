@@ -1,11 +1,25 @@
 import { describe, expect, it } from 'vitest';
-import { BLAKE_RAM_EFFICIENCY_TABLE, RAM_EFFICIENCY_TABLE, RAM_EFFICIENCY_TABLES, ramEfficiencyForRatio } from '../../../hydraulics/ram/efficiency-table';
+import {
+  BLAKE_RAM_EFFICIENCY_TABLE,
+  RAM_EFFICIENCY_TABLE,
+  RAM_EFFICIENCY_TABLES,
+  ramEfficiencyForRatio,
+} from '../../../hydraulics/ram/efficiency-table';
 
 // Building Trades Pocketbook (International Textbook Co., c.1905), "The Hydraulic Ram" (core.md §4.1).
 describe('ram efficiency table', () => {
   it.each([
-    [4, 0.72], [6, 0.61], [8, 0.52], [10, 0.44], [12, 0.37], [14, 0.31],
-    [16, 0.25], [18, 0.19], [20, 0.14], [22, 0.09], [24, 0.04],
+    [4, 0.72],
+    [6, 0.61],
+    [8, 0.52],
+    [10, 0.44],
+    [12, 0.37],
+    [14, 0.31],
+    [16, 0.25],
+    [18, 0.19],
+    [20, 0.14],
+    [22, 0.09],
+    [24, 0.04],
   ])('lift/fall %d -> %d (Building Trades Pocketbook table)', (ratio, efficiency) => {
     expect(ramEfficiencyForRatio(ratio)).toEqual({ efficiency, position: 'in-table' });
   });
@@ -32,7 +46,8 @@ describe('ram efficiency table', () => {
 
   it('efficiency never rises with the ratio (monotone table)', () => {
     const { points } = RAM_EFFICIENCY_TABLE;
-    for (let index = 1; index < points.length; index += 1) expect(points[index].efficiency).toBeLessThan(points[index - 1].efficiency);
+    for (let index = 1; index < points.length; index += 1)
+      expect(points[index].efficiency).toBeLessThan(points[index - 1].efficiency);
   });
 });
 
@@ -41,7 +56,10 @@ describe('ram efficiency table', () => {
 describe('tested-ram table (Blake rams, Water for the World Table 1)', () => {
   it('a ram works at 40:1: 12.5 L/day per L/min at 1 m fall and 40 m lift is 35 % efficient; the table holds the 34 % of 15:1 there', () => {
     expect((12.5 * 40) / 1440).toBeCloseTo(0.347, 3);
-    expect(ramEfficiencyForRatio(40, BLAKE_RAM_EFFICIENCY_TABLE)).toEqual({ efficiency: (33 * 15) / 1440, position: 'in-table' });
+    expect(ramEfficiencyForRatio(40, BLAKE_RAM_EFFICIENCY_TABLE)).toEqual({
+      efficiency: (33 * 15) / 1440,
+      position: 'in-table',
+    });
     expect(ramEfficiencyForRatio(41, BLAKE_RAM_EFFICIENCY_TABLE).position).toBe('beyond-table');
   });
 
@@ -50,7 +68,8 @@ describe('tested-ram table (Blake rams, Water for the World Table 1)', () => {
     // 10 m lift prints 65 (45 %) after 7.5 m at 77 (40 %): the lower 40 % is kept.
     expect(ramEfficiencyForRatio(10, BLAKE_RAM_EFFICIENCY_TABLE).efficiency).toBeCloseTo((77 * 7.5) / 1440, 12);
     const { points } = BLAKE_RAM_EFFICIENCY_TABLE;
-    for (let index = 1; index < points.length; index += 1) expect(points[index].efficiency).toBeLessThanOrEqual(points[index - 1].efficiency);
+    for (let index = 1; index < points.length; index += 1)
+      expect(points[index].efficiency).toBeLessThanOrEqual(points[index - 1].efficiency);
   });
 
   it('both tables can be chosen by id, each naming its source', () => {

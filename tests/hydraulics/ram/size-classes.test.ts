@@ -5,7 +5,11 @@ const L_PER_MIN = 1e-3 / 60;
 
 describe('ram size classes (Water for the World RWS.4.D.5 pipe sizing table, core.md §4.2)', () => {
   it.each([
-    [30, 6, 36], [40, 37, 60], [50, 61, 90], [80, 91, 234], [100, 235, 360],
+    [30, 6, 36],
+    [40, 37, 60],
+    [50, 61, 90],
+    [80, 91, 234],
+    [100, 235, 360],
   ])('%d mm: %d-%d L/min', (mm, min, max) => {
     const sizeClass = RAM_SIZE_CLASSES.find((entry) => entry.drivePipeNominalMm === mm)!;
     expect(sizeClass.published).toEqual({ minLPerMin: min, maxLPerMin: max });

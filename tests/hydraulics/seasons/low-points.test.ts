@@ -39,21 +39,34 @@ describe('findLowPoints (drain points)', () => {
 
 describe('winterTreatment', () => {
   it('a line buried below frost depth stays full; a shallow one is drained at its low points', () => {
-    expect(winterTreatment({ label: 'Main', profile, coverDepthM: 1.2, frostDepthM: 0.9 })).toEqual({ label: 'Main', treatment: 'buried-below-frost', drainPoints: [] });
+    expect(winterTreatment({ label: 'Main', profile, coverDepthM: 1.2, frostDepthM: 0.9 })).toEqual({
+      label: 'Main',
+      treatment: 'buried-below-frost',
+      drainPoints: [],
+    });
     const shallow = winterTreatment({ label: 'Trough line', profile, coverDepthM: 0.3, frostDepthM: 0.9 });
     expect(shallow.treatment).toBe('drain-for-winter');
     expect(shallow.drainPoints.map((low) => low.chainageM)).toEqual([50, 250]);
   });
 
   it('a line the designer drains is drained at its low points even when it is buried deep enough', () => {
-    const drained = winterTreatment({ label: 'Main', profile, coverDepthM: 1.2, frostDepthM: 0.9, drainForWinter: true });
+    const drained = winterTreatment({
+      label: 'Main',
+      profile,
+      coverDepthM: 1.2,
+      frostDepthM: 0.9,
+      drainForWinter: true,
+    });
     expect(drained.treatment).toBe('drain-for-winter');
     expect(drained.drainPoints.map((low) => low.chainageM)).toEqual([50, 250]);
   });
 
   it('a bad profile is reported against its line', () => {
     try {
-      winterTreatment({ label: 'x', profile: { chainageM: [0, 5], elevationM: [1, Number.NaN] }, coverDepthM: 0, frostDepthM: 1 }, 3);
+      winterTreatment(
+        { label: 'x', profile: { chainageM: [0, 5], elevationM: [1, Number.NaN] }, coverDepthM: 0, frostDepthM: 1 },
+        3,
+      );
       expect.unreachable();
     } catch (error) {
       expect((error as HydraulicsInputError).field).toBe('lines[3].profile.elevationM');

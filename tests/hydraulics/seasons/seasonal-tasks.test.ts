@@ -13,7 +13,13 @@ const buriedMain = { ...troughLine, label: 'Main', coverDepthM: 1.2 };
 // The schedule is Runnel's (common practice, no source); the tests pin the date arithmetic.
 describe('seasonalTasks', () => {
   it('northern year: drain-down two weeks before first frost, listing the lines above frost depth and their drain points', () => {
-    const { tasks, winter } = seasonalTasks({ year: 2025, hemisphere: 'north', firstFrost: '10-15', lastFrost: '04-20', lines: [troughLine, buriedMain] });
+    const { tasks, winter } = seasonalTasks({
+      year: 2025,
+      hemisphere: 'north',
+      firstFrost: '10-15',
+      lastFrost: '04-20',
+      lines: [troughLine, buriedMain],
+    });
     const drain = tasks.find((task) => task.kind === 'drain-down')!;
     expect(drain.date).toBe('2025-10-01');
     expect(drain.lines!.map((line) => line.label)).toEqual(['Trough line']);
@@ -25,9 +31,20 @@ describe('seasonalTasks', () => {
 
   it('lists silt cleaning, intake screen and valve exercise, sorted by date and all in the year', () => {
     const { tasks } = seasonalTasks({ year: 2025, hemisphere: 'north', firstFrost: '10-15' });
-    expect(tasks.filter((task) => task.kind === 'intake-screen').map((task) => task.date)).toEqual(['2025-03-01', '2025-06-01', '2025-09-01', '2025-12-01']);
-    expect(tasks.filter((task) => task.kind === 'valve-exercise').map((task) => task.date)).toEqual(['2025-03-15', '2025-09-15']);
-    expect(tasks.filter((task) => task.kind === 'silt-cleaning').map((task) => task.date)).toEqual(['2025-06-15', '2025-09-24']);
+    expect(tasks.filter((task) => task.kind === 'intake-screen').map((task) => task.date)).toEqual([
+      '2025-03-01',
+      '2025-06-01',
+      '2025-09-01',
+      '2025-12-01',
+    ]);
+    expect(tasks.filter((task) => task.kind === 'valve-exercise').map((task) => task.date)).toEqual([
+      '2025-03-15',
+      '2025-09-15',
+    ]);
+    expect(tasks.filter((task) => task.kind === 'silt-cleaning').map((task) => task.date)).toEqual([
+      '2025-06-15',
+      '2025-09-24',
+    ]);
     expect(tasks.some((task) => task.kind === 'refill')).toBe(false);
     const dates = tasks.map((task) => task.date);
     expect([...dates].sort()).toEqual(dates);
@@ -38,8 +55,14 @@ describe('seasonalTasks', () => {
   it('southern hemisphere shifts the seasons by six months', () => {
     const { tasks, checks } = seasonalTasks({ year: 2025, hemisphere: 'south', firstFrost: '05-20' });
     expect(tasks.find((task) => task.kind === 'drain-down')!.date).toBe('2025-05-06');
-    expect(tasks.filter((task) => task.kind === 'valve-exercise').map((task) => task.date)).toEqual(['2025-03-15', '2025-09-15']);
-    expect(tasks.filter((task) => task.kind === 'silt-cleaning').map((task) => task.date)).toEqual(['2025-04-29', '2025-12-15']);
+    expect(tasks.filter((task) => task.kind === 'valve-exercise').map((task) => task.date)).toEqual([
+      '2025-03-15',
+      '2025-09-15',
+    ]);
+    expect(tasks.filter((task) => task.kind === 'silt-cleaning').map((task) => task.date)).toEqual([
+      '2025-04-29',
+      '2025-12-15',
+    ]);
     expect(checks).toEqual([]);
   });
 
@@ -49,7 +72,9 @@ describe('seasonalTasks', () => {
   });
 
   it('notes a first frost that is unusual for the hemisphere', () => {
-    expect(seasonalTasks({ year: 2025, hemisphere: 'south', firstFrost: '10-15' }).checks[0].code).toBe('frost-date-unusual-for-hemisphere');
+    expect(seasonalTasks({ year: 2025, hemisphere: 'south', firstFrost: '10-15' }).checks[0].code).toBe(
+      'frost-date-unusual-for-hemisphere',
+    );
   });
 
   it('29 February falls on the 28th in other years', () => {
@@ -67,8 +92,19 @@ describe('seasonalTasks', () => {
       return null;
     };
     expect(field(() => seasonalTasks({ year: 2025, hemisphere: 'north', firstFrost: '13-01' }))).toBe('firstFrost');
-    expect(field(() => seasonalTasks({ year: 2025, hemisphere: 'east' as never, firstFrost: '10-01' }))).toBe('hemisphere');
+    expect(field(() => seasonalTasks({ year: 2025, hemisphere: 'east' as never, firstFrost: '10-01' }))).toBe(
+      'hemisphere',
+    );
     expect(field(() => seasonalTasks({ year: 2025.5, hemisphere: 'north', firstFrost: '10-01' }))).toBe('year');
-    expect(field(() => seasonalTasks({ year: 2025, hemisphere: 'north', firstFrost: '10-01', lines: [{ ...troughLine, coverDepthM: -1 }] }))).toBe('lines.coverDepthM');
+    expect(
+      field(() =>
+        seasonalTasks({
+          year: 2025,
+          hemisphere: 'north',
+          firstFrost: '10-01',
+          lines: [{ ...troughLine, coverDepthM: -1 }],
+        }),
+      ),
+    ).toBe('lines.coverDepthM');
   });
 });

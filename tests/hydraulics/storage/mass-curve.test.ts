@@ -11,7 +11,10 @@ const scaled = (fractions: readonly number[], dailyM3: number) => fractions.map(
 describe('massCurveStorage against the published Jordan patterns (DCOM Table C.1; results computed from them)', () => {
   it('village of 2,400 L/day (Water for the World) on the morning/evening pattern with a steady 24 h supply: half a day, 1,200 L', () => {
     // Cumulative surplus peaks at +25 % at 06:00 (6 quiet hours) and bottoms at −25 % at 18:00.
-    const result = massCurveStorage({ supplyHourlyM3: even(2.4), demandHourlyM3: scaled(JORDAN_MORNING_EVENING_PATTERN.hourlyFractions, 2.4) });
+    const result = massCurveStorage({
+      supplyHourlyM3: even(2.4),
+      demandHourlyM3: scaled(JORDAN_MORNING_EVENING_PATTERN.hourlyFractions, 2.4),
+    });
     expect(result.cycleStorageM3).toBeCloseTo(1.2, 12);
     expect(Math.max(...result.cumulativeSurplusM3)).toBeCloseTo(0.6, 12);
     expect(Math.min(...result.cumulativeSurplusM3)).toBeCloseTo(-0.6, 12);
@@ -20,13 +23,22 @@ describe('massCurveStorage against the published Jordan patterns (DCOM Table C.1
   });
 
   it('mid-day pattern: 10/24 of the day (max +5/24 at 05:00, min −5/24 at 19:00)', () => {
-    const result = massCurveStorage({ supplyHourlyM3: even(1), demandHourlyM3: scaled(JORDAN_MIDDAY_PATTERN.hourlyFractions, 1) });
+    const result = massCurveStorage({
+      supplyHourlyM3: even(1),
+      demandHourlyM3: scaled(JORDAN_MIDDAY_PATTERN.hourlyFractions, 1),
+    });
     expect(result.cycleStorageM3).toBeCloseTo(10 / 24, 12);
   });
 
   it('balanced day: storage is max cumulative surplus minus min', () => {
-    const result = massCurveStorage({ supplyHourlyM3: even(3), demandHourlyM3: scaled(JORDAN_MIDDAY_PATTERN.hourlyFractions, 3) });
-    expect(result.cycleStorageM3).toBeCloseTo(Math.max(...result.cumulativeSurplusM3) - Math.min(...result.cumulativeSurplusM3), 12);
+    const result = massCurveStorage({
+      supplyHourlyM3: even(3),
+      demandHourlyM3: scaled(JORDAN_MIDDAY_PATTERN.hourlyFractions, 3),
+    });
+    expect(result.cycleStorageM3).toBeCloseTo(
+      Math.max(...result.cumulativeSurplusM3) - Math.min(...result.cumulativeSurplusM3),
+      12,
+    );
   });
 
   it('supply equal to demand every hour needs no storage', () => {
@@ -57,22 +69,37 @@ describe('massCurveStorage against the published Jordan patterns (DCOM Table C.1
 describe('massCurveStorage: properties (fast-check)', () => {
   const hourly = fc.array(fc.double({ min: 0, max: 10, noNaN: true }), { minLength: 24, maxLength: 24 });
   // Supply scaled so it at least meets demand over the day (the case a tank can serve).
-  const servedDay = fc.tuple(hourly, hourly, fc.double({ min: 1, max: 2, noNaN: true })).filter(([, demand]) => demand.some((v) => v > 0)).map(([supplyShape, demand, margin]) => {
-    const supplyTotal = supplyShape.reduce((a, b) => a + b, 0);
-    const demandTotal = demand.reduce((a, b) => a + b, 0);
-    const supply = supplyTotal > 0 ? supplyShape.map((v) => (v / supplyTotal) * demandTotal * margin) : even(demandTotal * margin);
-    return { supply, demand };
-  });
+  const servedDay = fc
+    .tuple(hourly, hourly, fc.double({ min: 1, max: 2, noNaN: true }))
+    .filter(([, demand]) => demand.some((v) => v > 0))
+    .map(([supplyShape, demand, margin]) => {
+      const supplyTotal = supplyShape.reduce((a, b) => a + b, 0);
+      const demandTotal = demand.reduce((a, b) => a + b, 0);
+      const supply =
+        supplyTotal > 0 ? supplyShape.map((v) => (v / supplyTotal) * demandTotal * margin) : even(demandTotal * margin);
+      return { supply, demand };
+    });
 
   it('storage is never negative', () => {
-    fc.assert(fc.property(hourly, hourly, (supply, demand) => massCurveStorage({ supplyHourlyM3: supply, demandHourlyM3: demand }).cycleStorageM3 >= 0));
+    fc.assert(
+      fc.property(
+        hourly,
+        hourly,
+        (supply, demand) => massCurveStorage({ supplyHourlyM3: supply, demandHourlyM3: demand }).cycleStorageM3 >= 0,
+      ),
+    );
   });
 
   it('a tank of that size, starting full, never runs dry over repeated days', () => {
     fc.assert(
       fc.property(servedDay, ({ supply, demand }) => {
         const { cycleStorageM3 } = massCurveStorage({ supplyHourlyM3: supply, demandHourlyM3: demand });
-        const run = simulateTank({ capacityM3: cycleStorageM3 * (1 + 1e-9) + 1e-9, supplyHourlyM3: supply, demandHourlyM3: demand, days: 4 });
+        const run = simulateTank({
+          capacityM3: cycleStorageM3 * (1 + 1e-9) + 1e-9,
+          supplyHourlyM3: supply,
+          demandHourlyM3: demand,
+          days: 4,
+        });
         return run.unmetDemandM3 < 1e-6 && run.lowestVolumeM3 > -1e-6;
       }),
       { numRuns: 200 },
@@ -84,7 +111,13 @@ describe('massCurveStorage: properties (fast-check)', () => {
       fc.property(servedDay, ({ supply, demand }) => {
         const { cycleStorageM3 } = massCurveStorage({ supplyHourlyM3: supply, demandHourlyM3: demand });
         fc.pre(cycleStorageM3 > 1e-3);
-        const run = simulateTank({ capacityM3: cycleStorageM3 * 0.98, supplyHourlyM3: supply, demandHourlyM3: demand, days: 4, stepsPerHour: 1 });
+        const run = simulateTank({
+          capacityM3: cycleStorageM3 * 0.98,
+          supplyHourlyM3: supply,
+          demandHourlyM3: demand,
+          days: 4,
+          stepsPerHour: 1,
+        });
         return run.unmetDemandM3 > 0;
       }),
       { numRuns: 200 },

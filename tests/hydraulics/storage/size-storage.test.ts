@@ -45,9 +45,14 @@ describe('sizeStorage', () => {
   });
 
   it('a supply that runs part of the day needs more storage', () => {
-    const partDay = sizeStorage({ supply: { flowM3s: 2.4 / (8 * 3600), hoursPerDay: 8, startHour: 8 }, demand: village });
+    const partDay = sizeStorage({
+      supply: { flowM3s: 2.4 / (8 * 3600), hoursPerDay: 8, startHour: 8 },
+      demand: village,
+    });
     expect(partDay.cycleStorageM3).toBeGreaterThan(1.2);
-    expect(supplyHourlyVolumeM3({ flowM3s: 2.4 / (8 * 3600), hoursPerDay: 8, startHour: 8 }).reduce((a, b) => a + b, 0)).toBeCloseTo(2.4, 12);
+    expect(
+      supplyHourlyVolumeM3({ flowM3s: 2.4 / (8 * 3600), hoursPerDay: 8, startHour: 8 }).reduce((a, b) => a + b, 0),
+    ).toBeCloseTo(2.4, 12);
   });
 
   it('supply below demand is an error check; no reserve is noted (Alberta Agriculture, McNaughton)', () => {
@@ -57,9 +62,14 @@ describe('sizeStorage', () => {
   });
 
   it('takes hourly volumes directly and validates the pattern', () => {
-    const direct = sizeStorage({ supply: steady(2.4), demand: { hourlyVolumeM3: village.hourlyFractions.map((f) => f * 2.4) } });
+    const direct = sizeStorage({
+      supply: steady(2.4),
+      demand: { hourlyVolumeM3: village.hourlyFractions.map((f) => f * 2.4) },
+    });
     expect(direct.cycleStorageM3).toBeCloseTo(1.2, 12);
-    expect(() => sizeStorage({ supply: steady(2.4), demand: { dailyVolumeM3: 2.4, hourlyFractions: [1] } })).toThrow(HydraulicsInputError);
+    expect(() => sizeStorage({ supply: steady(2.4), demand: { dailyVolumeM3: 2.4, hourlyFractions: [1] } })).toThrow(
+      HydraulicsInputError,
+    );
     expect(() => sizeStorage({ supply: { flowM3s: 0 }, demand: village })).toThrow(/supply.flowM3s/);
   });
 });
@@ -79,7 +89,12 @@ describe('requiredTankElevation', () => {
 
   it('names the outlet with a negative residual', () => {
     try {
-      requiredTankElevation({ outlets: [{ elevationM: 1, residualHeadM: 1, frictionLossM: 1 }, { elevationM: 1, residualHeadM: -1, frictionLossM: 0 }] });
+      requiredTankElevation({
+        outlets: [
+          { elevationM: 1, residualHeadM: 1, frictionLossM: 1 },
+          { elevationM: 1, residualHeadM: -1, frictionLossM: 0 },
+        ],
+      });
       expect.unreachable();
     } catch (error) {
       expect((error as HydraulicsInputError).field).toBe('outlets.residualHeadM');

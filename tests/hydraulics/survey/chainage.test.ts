@@ -35,7 +35,13 @@ describe('chainageAlongTrack', () => {
   });
 
   it('slopeLengthOfProfile adds √(Δchainage² + Δz²) per leg (3-4-5 triangles)', () => {
-    expect(slopeLengthOfProfile([{ chainageM: 0, elevationM: 0 }, { chainageM: 3, elevationM: 4 }, { chainageM: 6, elevationM: 0 }])).toBe(10);
+    expect(
+      slopeLengthOfProfile([
+        { chainageM: 0, elevationM: 0 },
+        { chainageM: 3, elevationM: 4 },
+        { chainageM: 6, elevationM: 0 },
+      ]),
+    ).toBe(10);
   });
 });
 
@@ -57,7 +63,10 @@ describe('projectToLocalPlan (equirectangular about the route centre)', () => {
     const plan = projectToLocalPlan(pts);
     expect(plan.originLatitudeDeg).toBeCloseTo(45.50055, 9);
     expect(plan.points[0].eastM).toBeCloseTo(-plan.points[1].eastM, 9);
-    const planLen = Math.hypot(plan.points[1].eastM - plan.points[0].eastM, plan.points[1].northM - plan.points[0].northM);
+    const planLen = Math.hypot(
+      plan.points[1].eastM - plan.points[0].eastM,
+      plan.points[1].northM - plan.points[0].northM,
+    );
     const geo = chainageAlongTrack(pts.map((p) => ({ ...p, elevationM: 0 }))).totalHorizontalM;
     expect(Math.abs(planLen / geo - 1)).toBeLessThan(0.005);
   });

@@ -18,7 +18,9 @@ describe('movingMedian', () => {
     expect(movingMedian([5, 1, 9, 2, 8, 3], 5)).toEqual([5, 5, 5, 3, 3, 3]);
   });
   it('rejects an even or too small window', () => {
-    expect(() => movingMedian([1, 2, 3], 4)).toThrow('windowSize: must be an odd whole number of points, 3 or more, got 4');
+    expect(() => movingMedian([1, 2, 3], 4)).toThrow(
+      'windowSize: must be an odd whole number of points, 3 or more, got 4',
+    );
     expect(() => movingMedian([1, 2, 3], 1)).toThrow(/odd whole number/);
   });
 });
@@ -28,7 +30,14 @@ describe('detectGradeSpikes', () => {
     const pts = profile([100, 99, 110, 97, 96]);
     const changes = detectGradeSpikes(pts, { gradeThreshold: 0.5 });
     expect(changes).toEqual([
-      { kind: 'grade-spike', index: 2, field: 'elevationM', from: 110, to: 98, reason: expect.stringContaining('spike: grade 110 % in and -130 % out') },
+      {
+        kind: 'grade-spike',
+        index: 2,
+        field: 'elevationM',
+        from: 110,
+        to: 98,
+        reason: expect.stringContaining('spike: grade 110 % in and -130 % out'),
+      },
     ]);
   });
   it('does not flag a steady steep slope (same sign both sides)', () => {
@@ -46,7 +55,10 @@ describe('detectGradeSpikes', () => {
 
 describe('detectMedianOutliers', () => {
   it('flags heights more than k metres from the moving median', () => {
-    const changes = detectMedianOutliers(profile([100, 100.5, 101, 108, 102, 102.5, 103]), { windowSize: 5, toleranceM: 3 });
+    const changes = detectMedianOutliers(profile([100, 100.5, 101, 108, 102, 102.5, 103]), {
+      windowSize: 5,
+      toleranceM: 3,
+    });
     expect(changes.map((c) => [c.index, c.from, c.to])).toEqual([[3, 108, 102]]);
     expect(changes[0].reason).toBe('outlier: 6.00 m from the median of 5 neighbouring points (limit 3 m)');
   });
@@ -59,10 +71,17 @@ describe('detectDuplicates and detectOutOfOrder', () => {
       { chainageM: 10, elevationM: 6, latitudeDeg: 45.5001, longitudeDeg: 11.8 },
       { chainageM: 10, elevationM: 6, latitudeDeg: 45.5001, longitudeDeg: 11.8 },
     ];
-    expect(detectDuplicates(pts)).toEqual([{ kind: 'duplicate', index: 2, field: 'deleted', from: false, to: true, reason: 'exact duplicate of point 2' }]);
+    expect(detectDuplicates(pts)).toEqual([
+      { kind: 'duplicate', index: 2, field: 'deleted', from: false, to: true, reason: 'exact duplicate of point 2' },
+    ]);
   });
   it('same place, different height is not a duplicate', () => {
-    expect(detectDuplicates([{ chainageM: 0, elevationM: 1 }, { chainageM: 0, elevationM: 2 }])).toEqual([]);
+    expect(
+      detectDuplicates([
+        { chainageM: 0, elevationM: 1 },
+        { chainageM: 0, elevationM: 2 },
+      ]),
+    ).toEqual([]);
   });
   it('flags chainage going backwards and GPS time going backwards', () => {
     const pts = [
@@ -89,10 +108,16 @@ describe('smoothing and benchmark offset', () => {
     ]);
   });
   it('offsets every height so the benchmark point takes its known level', () => {
-    const changes = proposeBenchmarkOffset(profile([812.4, 809.9, 806.1]), { index: 0, knownElevationM: 815, benchmarkLabel: 'spring box' });
+    const changes = proposeBenchmarkOffset(profile([812.4, 809.9, 806.1]), {
+      index: 0,
+      knownElevationM: 815,
+      benchmarkLabel: 'spring box',
+    });
     expect(changes.map((c) => c.to)).toEqual([815, expect.closeTo(812.5, 9), expect.closeTo(808.7, 9)]);
     expect(changes[0].reason).toBe('offset +2.600 m to tie spring box to its known elevation 815 m');
-    expect(() => proposeBenchmarkOffset(profile([1, 2]), { index: 5, knownElevationM: 1 })).toThrow('index: point 5 does not exist');
+    expect(() => proposeBenchmarkOffset(profile([1, 2]), { index: 5, knownElevationM: 1 })).toThrow(
+      'index: point 5 does not exist',
+    );
   });
 });
 
@@ -101,7 +126,10 @@ describe('applyAcceptedChanges', () => {
     const raw = profile([100, 99, 110, 97, 96]);
     const before = structuredClone(raw);
     const spikes = detectGradeSpikes(raw, { gradeThreshold: 0.5 });
-    const cleaned = applyAcceptedChanges(raw, [...spikes, { kind: 'duplicate', index: 4, field: 'deleted', from: false, to: true, reason: 'test' }]);
+    const cleaned = applyAcceptedChanges(raw, [
+      ...spikes,
+      { kind: 'duplicate', index: 4, field: 'deleted', from: false, to: true, reason: 'test' },
+    ]);
     expect(cleaned.map((p) => p.elevationM)).toEqual([100, 99, 98, 97]);
     expect(raw).toEqual(before);
   });
@@ -144,7 +172,10 @@ describe('properties (fast-check)', () => {
     fc.assert(
       fc.property(heights, (zs) => {
         const pts = profile(zs);
-        for (const c of [...detectGradeSpikes(pts, { gradeThreshold: 0.3 }), ...detectMedianOutliers(pts, { windowSize: 3, toleranceM: 1 })]) {
+        for (const c of [
+          ...detectGradeSpikes(pts, { gradeThreshold: 0.3 }),
+          ...detectMedianOutliers(pts, { windowSize: 3, toleranceM: 1 }),
+        ]) {
           expect(c.from).toBe(pts[c.index].elevationM);
         }
       }),

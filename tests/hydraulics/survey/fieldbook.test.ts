@@ -24,15 +24,21 @@ describe('reduceInclinometerLeg', () => {
   });
 
   it('downhill angles give negative height difference; 0° gives the tape length', () => {
-    expect(reduceInclinometerLeg({ slopeDistanceM: 20, verticalAngle: -30, angleUnit: 'degrees' }).heightDifferenceM).toBeCloseTo(-10, 12);
-    expect(reduceInclinometerLeg({ slopeDistanceM: 20, verticalAngle: 0, angleUnit: 'degrees' }).horizontalDistanceM).toBe(20);
+    expect(
+      reduceInclinometerLeg({ slopeDistanceM: 20, verticalAngle: -30, angleUnit: 'degrees' }).heightDifferenceM,
+    ).toBeCloseTo(-10, 12);
+    expect(
+      reduceInclinometerLeg({ slopeDistanceM: 20, verticalAngle: 0, angleUnit: 'degrees' }).horizontalDistanceM,
+    ).toBe(20);
   });
 
   it('rejects a vertical angle of 95° and a negative distance', () => {
     expect(() => reduceInclinometerLeg({ slopeDistanceM: 20, verticalAngle: 95, angleUnit: 'degrees' })).toThrow(
       'verticalAngle: a vertical angle must be between -90 and 90 degrees, got 95',
     );
-    expect(() => reduceInclinometerLeg({ slopeDistanceM: -1, verticalAngle: 5, angleUnit: 'degrees' })).toThrow(/slopeDistanceM: must not be negative/);
+    expect(() => reduceInclinometerLeg({ slopeDistanceM: -1, verticalAngle: 5, angleUnit: 'degrees' })).toThrow(
+      /slopeDistanceM: must not be negative/,
+    );
   });
 
   it('a traverse chains legs from the start mark', () => {
@@ -86,23 +92,44 @@ describe('reduceLevelBook against the published PNG Unitech example', () => {
   });
 
   it('closure error against a known closing level (closing level assumed 42.880 m for this test: +3 mm)', () => {
-    const r = reduceLevelBook({ readings: UNITECH_BOOK, startElevationM: 40, method: 'rise-and-fall', closingElevationM: 42.88 });
+    const r = reduceLevelBook({
+      readings: UNITECH_BOOK,
+      startElevationM: 40,
+      method: 'rise-and-fall',
+      closingElevationM: 42.88,
+    });
     expect(r.closureErrorM).toBeCloseTo(0.003, 9);
-    expect(reduceLevelBook({ readings: UNITECH_BOOK, startElevationM: 40, method: 'rise-and-fall' }).closureErrorM).toBeUndefined();
+    expect(
+      reduceLevelBook({ readings: UNITECH_BOOK, startElevationM: 40, method: 'rise-and-fall' }).closureErrorM,
+    ).toBeUndefined();
   });
 
   it('a missing foresight is named with its line index', () => {
     const book = UNITECH_BOOK.map((r) => ({ ...r }));
     delete book[5].foresightM;
-    expect(() => reduceLevelBook({ readings: book, startElevationM: 40, method: 'rise-and-fall' })).toThrow(/readings.foresightM\[5\]: missing foresight/);
+    expect(() => reduceLevelBook({ readings: book, startElevationM: 40, method: 'rise-and-fall' })).toThrow(
+      /readings.foresightM\[5\]: missing foresight/,
+    );
     const open = UNITECH_BOOK.slice(0, 7);
-    expect(() => reduceLevelBook({ readings: open, startElevationM: 40, method: 'rise-and-fall' })).toThrow(/\[6\]: missing foresight: the run must close/);
+    expect(() => reduceLevelBook({ readings: open, startElevationM: 40, method: 'rise-and-fall' })).toThrow(
+      /\[6\]: missing foresight: the run must close/,
+    );
   });
 
   it('rejects a first line that is not a backsight and an intermediate sharing a line', () => {
-    expect(() => reduceLevelBook({ readings: [{ foresightM: 1 }, { foresightM: 1 }], startElevationM: 0, method: 'rise-and-fall' })).toThrow(/first line must be a backsight/);
     expect(() =>
-      reduceLevelBook({ readings: [{ backsightM: 1 }, { intermediateM: 1, foresightM: 2 }], startElevationM: 0, method: 'rise-and-fall' }),
+      reduceLevelBook({
+        readings: [{ foresightM: 1 }, { foresightM: 1 }],
+        startElevationM: 0,
+        method: 'rise-and-fall',
+      }),
+    ).toThrow(/first line must be a backsight/);
+    expect(() =>
+      reduceLevelBook({
+        readings: [{ backsightM: 1 }, { intermediateM: 1, foresightM: 2 }],
+        startElevationM: 0,
+        method: 'rise-and-fall',
+      }),
     ).toThrow(/intermediate sight cannot share a line/);
   });
 });

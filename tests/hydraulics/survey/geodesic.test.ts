@@ -21,7 +21,12 @@ describe('geodesicInverse on WGS84', () => {
   });
 
   it('Wellington → Salamanca prints 19959679.267 m (geographiclib-geodesic README example) [P][R27]', () => {
-    const r = geodesicInverse({ latitude1Deg: -41.32, longitude1Deg: 174.81, latitude2Deg: 40.96, longitude2Deg: -5.5 });
+    const r = geodesicInverse({
+      latitude1Deg: -41.32,
+      longitude1Deg: 174.81,
+      latitude2Deg: 40.96,
+      longitude2Deg: -5.5,
+    });
     expect(r.distanceM.toFixed(3)).toBe('19959679.267');
   });
 
@@ -43,9 +48,15 @@ describe('geodesicInverse on WGS84', () => {
   });
 
   it('rejects latitude 91 and longitude 181 with the field named', () => {
-    expect(() => geodesicInverse({ latitude1Deg: 91, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(/latitude1Deg: must be between -90 and 90 degrees/);
-    expect(() => geodesicInverse({ latitude1Deg: 0, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 181 })).toThrow(HydraulicsInputError);
-    expect(() => geodesicInverse({ latitude1Deg: Number.NaN, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(/finite number/);
+    expect(() => geodesicInverse({ latitude1Deg: 91, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 })).toThrow(
+      /latitude1Deg: must be between -90 and 90 degrees/,
+    );
+    expect(() => geodesicInverse({ latitude1Deg: 0, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 181 })).toThrow(
+      HydraulicsInputError,
+    );
+    expect(() =>
+      geodesicInverse({ latitude1Deg: Number.NaN, longitude1Deg: 0, latitude2Deg: 0, longitude2Deg: 0 }),
+    ).toThrow(/finite number/);
   });
 });
 
@@ -73,7 +84,12 @@ describe('geodesicDirect on WGS84', () => {
 
   it('direct undoes inverse (round trip to 1 µm)', () => {
     const inv = geodesicInverse({ latitude1Deg: 40.6, longitude1Deg: -73.8, latitude2Deg: 51.6, longitude2Deg: -0.5 });
-    const dir = geodesicDirect({ latitudeDeg: 40.6, longitudeDeg: -73.8, azimuthDeg: inv.azimuth1Deg, distanceM: inv.distanceM });
+    const dir = geodesicDirect({
+      latitudeDeg: 40.6,
+      longitudeDeg: -73.8,
+      azimuthDeg: inv.azimuth1Deg,
+      distanceM: inv.distanceM,
+    });
     expect(dir.latitudeDeg).toBeCloseTo(51.6, 10);
     expect(dir.longitudeDeg).toBeCloseTo(-0.5, 10);
   });
@@ -84,7 +100,12 @@ describe('geodesicInterpolate', () => {
     const a = { latitude1Deg: 45.5, longitude1Deg: 11.8, latitude2Deg: 45.49, longitude2Deg: 11.82 };
     const m = geodesicInterpolate({ ...a, fraction: 0.5 });
     const total = geodesicInverse(a).distanceM;
-    const first = geodesicInverse({ latitude1Deg: 45.5, longitude1Deg: 11.8, latitude2Deg: m.latitudeDeg, longitude2Deg: m.longitudeDeg }).distanceM;
+    const first = geodesicInverse({
+      latitude1Deg: 45.5,
+      longitude1Deg: 11.8,
+      latitude2Deg: m.latitudeDeg,
+      longitude2Deg: m.longitudeDeg,
+    }).distanceM;
     expect(first).toBeCloseTo(total / 2, 6);
   });
 });

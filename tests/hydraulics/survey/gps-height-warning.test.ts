@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { consumerGpsHeightWarning } from '../../../hydraulics/survey/gps-height-warning';
-import { DEFAULT_VERTICAL_UNCERTAINTY, HEIGHT_SOURCES, defaultVerticalUncertaintyM } from '../../../hydraulics/survey/height-source';
+import {
+  DEFAULT_VERTICAL_UNCERTAINTY,
+  HEIGHT_SOURCES,
+  defaultVerticalUncertaintyM,
+} from '../../../hydraulics/survey/height-source';
 
 describe('consumerGpsHeightWarning', () => {
   it('warns loudly, citing the GPS performance standard, when a decision rests on GPS heights', () => {
@@ -13,7 +17,9 @@ describe('consumerGpsHeightWarning', () => {
     });
     expect(w?.severity).toBe('danger');
     expect(w?.verticalErrorM).toBe(15);
-    expect(w?.reference).toMatch(/^U\.S\. DoD, GPS Standard Positioning Service Performance Standard \(2020 ed\., §3\.4\)/);
+    expect(w?.reference).toMatch(
+      /^U\.S\. DoD, GPS Standard Positioning Service Performance Standard \(2020 ed\., §3\.4\)/,
+    );
     expect(w?.affected).toEqual([
       { label: 'break-pressure tank at the ridge', elevationDifferenceM: 12, withinGpsErrorBand: true },
       { label: 'pipe class at the trough', elevationDifferenceM: 60, withinGpsErrorBand: false },
@@ -24,14 +30,27 @@ describe('consumerGpsHeightWarning', () => {
   });
 
   it('returns null when the heights come from levelling', () => {
-    expect(consumerGpsHeightWarning({ heightSources: ['level', 'gnss'], decisions: [{ label: 'x', elevationDifferenceM: 5 }] })).toBeNull();
+    expect(
+      consumerGpsHeightWarning({
+        heightSources: ['level', 'gnss'],
+        decisions: [{ label: 'x', elevationDifferenceM: 5 }],
+      }),
+    ).toBeNull();
   });
 
   it('checks every point when a decision names none, and rejects a missing point', () => {
-    expect(consumerGpsHeightWarning({ heightSources: ['level', 'gps'], decisions: [{ label: 'x', elevationDifferenceM: 5 }] })).not.toBeNull();
-    expect(() => consumerGpsHeightWarning({ heightSources: ['gps'], decisions: [{ label: 'x', elevationDifferenceM: 5, pointIndices: [3] }] })).toThrow(
-      'decisions.pointIndices[0]: point 3 does not exist',
-    );
+    expect(
+      consumerGpsHeightWarning({
+        heightSources: ['level', 'gps'],
+        decisions: [{ label: 'x', elevationDifferenceM: 5 }],
+      }),
+    ).not.toBeNull();
+    expect(() =>
+      consumerGpsHeightWarning({
+        heightSources: ['gps'],
+        decisions: [{ label: 'x', elevationDifferenceM: 5, pointIndices: [3] }],
+      }),
+    ).toThrow('decisions.pointIndices[0]: point 3 does not exist');
   });
 });
 

@@ -30,7 +30,12 @@ describe('locateOnRoute', () => {
     const position = { latitudeDeg: 54.012, longitudeDeg: -2.9 };
     const found = locateOnRoute(meridianRoute, position)!;
     expect(found.chainageM).toBe(1000);
-    const direct = geodesicInverse({ latitude1Deg: 54.012, longitude1Deg: -2.9, latitude2Deg: 54.01, longitude2Deg: -2.9 }).distanceM;
+    const direct = geodesicInverse({
+      latitude1Deg: 54.012,
+      longitude1Deg: -2.9,
+      latitude2Deg: 54.01,
+      longitude2Deg: -2.9,
+    }).distanceM;
     expect(found.offsetM).toBeCloseTo(direct, 3);
   });
 

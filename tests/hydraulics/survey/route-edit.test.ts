@@ -44,15 +44,27 @@ describe('splitRoute', () => {
       { chainageM: 0, elevationM: 10, latitudeDeg: 45.5, longitudeDeg: 11.8 },
       { chainageM: 0, elevationM: 0, latitudeDeg: 45.49, longitudeDeg: 11.81 },
     ];
-    placed[1].chainageM = geodesicInverse({ latitude1Deg: 45.5, longitude1Deg: 11.8, latitude2Deg: 45.49, longitude2Deg: 11.81 }).distanceM;
+    placed[1].chainageM = geodesicInverse({
+      latitude1Deg: 45.5,
+      longitude1Deg: 11.8,
+      latitude2Deg: 45.49,
+      longitude2Deg: 11.81,
+    }).distanceM;
     const s = splitRoute(placed, { chainageM: placed[1].chainageM / 4 });
     const mid = s.first[1];
-    const d = geodesicInverse({ latitude1Deg: 45.5, longitude1Deg: 11.8, latitude2Deg: mid.latitudeDeg as number, longitude2Deg: mid.longitudeDeg as number });
+    const d = geodesicInverse({
+      latitude1Deg: 45.5,
+      longitude1Deg: 11.8,
+      latitude2Deg: mid.latitudeDeg as number,
+      longitude2Deg: mid.longitudeDeg as number,
+    });
     expect(d.distanceM).toBeCloseTo(placed[1].chainageM / 4, 6);
     expect(mid.elevationM).toBeCloseTo(7.5, 12);
   });
   it('refuses a split at or beyond the ends', () => {
-    expect(() => splitRoute(route, { chainageM: 0 })).toThrow('chainageM: the split must fall inside the route (0 m to 120 m), got 0 m');
+    expect(() => splitRoute(route, { chainageM: 0 })).toThrow(
+      'chainageM: the split must fall inside the route (0 m to 120 m), got 0 m',
+    );
     expect(() => splitRoute(route, { chainageM: 130 })).toThrow(/must fall inside/);
   });
 });
@@ -70,7 +82,14 @@ describe('joinRoutes', () => {
     expect(j.junctionIndex).toBe(3);
   });
   it('bridges a gap given by the user', () => {
-    const j = joinRoutes(route.slice(0, 2), [{ chainageM: 0, elevationM: 1 }, { chainageM: 10, elevationM: 2 }], { gapM: 5 });
+    const j = joinRoutes(
+      route.slice(0, 2),
+      [
+        { chainageM: 0, elevationM: 1 },
+        { chainageM: 10, elevationM: 2 },
+      ],
+      { gapM: 5 },
+    );
     expect(j.stations.map((p) => p.chainageM)).toEqual([0, 25, 30, 40]);
     expect(j.junctionIndex).toBe(2);
   });
@@ -81,7 +100,9 @@ describe('trimRoute', () => {
     const t = trimRoute(route, { fromChainageM: 10, toChainageM: 100 });
     expect(t.map((p) => p.chainageM)).toEqual([0, 15, 40, 70, 90]);
     expect(t[0].elevationM).toBeCloseTo(812.4 + (809.9 - 812.4) * 0.4, 12);
-    expect(trimRoute(route, { fromChainageM: 25, toChainageM: 80, rebase: false }).map((p) => p.chainageM)).toEqual([25, 50, 80]);
+    expect(trimRoute(route, { fromChainageM: 25, toChainageM: 80, rebase: false }).map((p) => p.chainageM)).toEqual([
+      25, 50, 80,
+    ]);
   });
   it('rejects an empty or outside range', () => {
     expect(() => trimRoute(route, { fromChainageM: 50, toChainageM: 50 })).toThrow(/0 ≤ from < to ≤ 120 m/);
@@ -90,7 +111,13 @@ describe('trimRoute', () => {
 
 describe('properties (fast-check)', () => {
   const routes = fc
-    .array(fc.record({ run: fc.double({ min: 0.5, max: 200, noNaN: true }), z: fc.double({ min: -100, max: 3000, noNaN: true }) }), { minLength: 2, maxLength: 40 })
+    .array(
+      fc.record({
+        run: fc.double({ min: 0.5, max: 200, noNaN: true }),
+        z: fc.double({ min: -100, max: 3000, noNaN: true }),
+      }),
+      { minLength: 2, maxLength: 40 },
+    )
     .map((legs) => {
       let c = 0;
       return legs.map((l, i) => {
@@ -113,16 +140,20 @@ describe('properties (fast-check)', () => {
 
   it('split at a station then join gives the original (to 1e-9 m)', () => {
     fc.assert(
-      fc.property(routes.filter((r) => r.length >= 3), fc.nat(), (r, k) => {
-        const at = 1 + (k % (r.length - 2));
-        const s = splitRoute(r, { chainageM: r[at].chainageM });
-        const j = joinRoutes(s.first, s.second).stations;
-        expect(j).toHaveLength(r.length);
-        j.forEach((p, i) => {
-          expect(p.chainageM).toBeCloseTo(r[i].chainageM, 9);
-          expect(p.elevationM).toBe(r[i].elevationM);
-        });
-      }),
+      fc.property(
+        routes.filter((r) => r.length >= 3),
+        fc.nat(),
+        (r, k) => {
+          const at = 1 + (k % (r.length - 2));
+          const s = splitRoute(r, { chainageM: r[at].chainageM });
+          const j = joinRoutes(s.first, s.second).stations;
+          expect(j).toHaveLength(r.length);
+          j.forEach((p, i) => {
+            expect(p.chainageM).toBeCloseTo(r[i].chainageM, 9);
+            expect(p.elevationM).toBe(r[i].elevationM);
+          });
+        },
+      ),
     );
   });
 
@@ -146,7 +177,8 @@ describe('properties (fast-check)', () => {
       fc.property(routes, (r) => {
         const copy = structuredClone(r);
         reverseRoute(r);
-        if (r[r.length - 1].chainageM > r[0].chainageM) trimRoute(r, { fromChainageM: r[0].chainageM, toChainageM: r[r.length - 1].chainageM });
+        if (r[r.length - 1].chainageM > r[0].chainageM)
+          trimRoute(r, { fromChainageM: r[0].chainageM, toChainageM: r[r.length - 1].chainageM });
         joinRoutes(r, r);
         expect(r).toEqual(copy);
       }),

@@ -62,8 +62,14 @@ describe('designYield', () => {
       return null;
     };
     expect(fieldAndIndex([readings[0], { ...readings[1], date: '2023-02-30' }])).toEqual(['readings.date', 1]);
-    expect(fieldAndIndex([readings[0], readings[1], { ...readings[2], measurement: bucket(10, 0) }])).toEqual(['readings.measurement.bucket.seconds', 2]);
-    expect(fieldAndIndex([{ ...readings[0], measurement: { flowM3s: 0 } }])).toEqual(['readings.measurement.flowM3s', 0]);
+    expect(fieldAndIndex([readings[0], readings[1], { ...readings[2], measurement: bucket(10, 0) }])).toEqual([
+      'readings.measurement.bucket.seconds',
+      2,
+    ]);
+    expect(fieldAndIndex([{ ...readings[0], measurement: { flowM3s: 0 } }])).toEqual([
+      'readings.measurement.flowM3s',
+      0,
+    ]);
     expect(fieldAndIndex([])).toEqual(['readings', undefined]);
   });
 });

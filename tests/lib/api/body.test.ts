@@ -17,7 +17,12 @@ function streamedRequest(totalBytes: number, contentType = 'application/json') {
       controller.enqueue(chunk);
     },
   });
-  const req = new NextRequest('http://127.0.0.1/api/x', { method: 'POST', headers: { 'content-type': contentType }, body, duplex: 'half' } as never);
+  const req = new NextRequest('http://127.0.0.1/api/x', {
+    method: 'POST',
+    headers: { 'content-type': contentType },
+    body,
+    duplex: 'half',
+  } as never);
   return { req, pulled: () => pulled };
 }
 
@@ -38,7 +43,11 @@ describe('JSON bodies are capped while they stream', () => {
   });
 
   it('refuses a declared length above the cap before reading anything', async () => {
-    const req = new NextRequest('http://127.0.0.1/api/x', { method: 'POST', headers: { 'content-type': 'application/json', 'content-length': '5000000' }, body: '{"a":1}' });
+    const req = new NextRequest('http://127.0.0.1/api/x', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'content-length': '5000000' },
+      body: '{"a":1}',
+    });
     expect((await refusal(readJsonBody(req, Schema, 1_000_000))).status).toBe(413);
   });
 
@@ -50,14 +59,27 @@ describe('JSON bodies are capped while they stream', () => {
         c.close();
       },
     });
-    const req = new NextRequest('http://127.0.0.1/api/x', { method: 'POST', headers: { 'content-type': 'application/json' }, body, duplex: 'half' } as never);
+    const req = new NextRequest('http://127.0.0.1/api/x', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body,
+      duplex: 'half',
+    } as never);
     expect(await readJsonBody(req, Schema, 1000)).toEqual({ a: 12 });
   });
 
   it('refuses a body that is not JSON by type (415) or not UTF-8 (400)', async () => {
-    const asForm = new NextRequest('http://127.0.0.1/api/x', { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: '{"a":1}' });
+    const asForm = new NextRequest('http://127.0.0.1/api/x', {
+      method: 'POST',
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+      body: '{"a":1}',
+    });
     expect((await refusal(readJsonBody(asForm, Schema))).status).toBe(415);
-    const badBytes = new NextRequest('http://127.0.0.1/api/x', { method: 'POST', headers: { 'content-type': 'application/json' }, body: new Uint8Array([0x7b, 0xff, 0xfe, 0x7d]) });
+    const badBytes = new NextRequest('http://127.0.0.1/api/x', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: new Uint8Array([0x7b, 0xff, 0xfe, 0x7d]),
+    });
     expect((await refusal(readJsonBody(badBytes, Schema))).status).toBe(400);
   });
 });

@@ -18,10 +18,19 @@ const input = referenceLine();
 const analysis = analyzeLine(input);
 const design = LineDesignSchema.parse(referenceDesignParts());
 const line: LineRecord = {
-  id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
-  routeName: 'Spring line design profile', name: 'Spring box to house', notes: '', fromChainageM: null, toChainageM: null,
-  revision: 40, preparedBy: 'Tobias Wren', design,
-  createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+  id: '00000000-0000-4000-8000-000000000001',
+  projectId: '00000000-0000-4000-8000-000000000002',
+  routeId: '00000000-0000-4000-8000-000000000003',
+  routeName: 'Spring line design profile',
+  name: 'Spring box to house',
+  notes: '',
+  fromChainageM: null,
+  toChainageM: null,
+  revision: 40,
+  preparedBy: 'Tobias Wren',
+  design,
+  createdAt: '2026-11-30T10:00:00.000Z',
+  updatedAt: '2026-12-01T10:00:00.000Z',
 };
 
 /** The exaggeration a drawing really has, from the numbers it writes on its elevation panel. */
@@ -39,8 +48,19 @@ const label = (file: string) => /data-role="exaggeration"[^>]*>([^<]*)</.exec(fi
 
 /** The three drawings of one line: the screen (at a phone's and a desk's width), the SVG file and the PDF's profile. */
 function files(exaggeration: number | 'auto') {
-  const screen = (width: number) => svgToString(profileScene(analysis, { units: metric, devices: input.devices ?? [], width, exaggeration }, 'screen').root);
-  const file = svgToString(svgExportScene(analysis, { units: metric, devices: input.devices ?? [], title: 'Spring box to house', stamp: workingCopyStamp('Tobias Wren'), exaggeration }).root);
+  const screen = (width: number) =>
+    svgToString(
+      profileScene(analysis, { units: metric, devices: input.devices ?? [], width, exaggeration }, 'screen').root,
+    );
+  const file = svgToString(
+    svgExportScene(analysis, {
+      units: metric,
+      devices: input.devices ?? [],
+      title: 'Spring box to house',
+      stamp: workingCopyStamp('Tobias Wren'),
+      exaggeration,
+    }).root,
+  );
   const report = svgToString(reportProfileScene(analysis, line, 'metric', [], exaggeration).root);
   return { phone: screen(390), desk: screen(1100), file, report };
 }
@@ -66,20 +86,31 @@ describe('one vertical exaggeration on screen, in the SVG file and in the PDF', 
   it('fits the whole profile at the set exaggeration: the elevation panel grows with the width instead of cutting the lines', () => {
     const { desk, file } = drawings('auto');
     const heights = [desk, file].map((svg) => {
-      const [bottom, top] = findAll(svg, (e) => e.attrs['data-panel'] === 'elevation')[0].attrs['data-y-range'].split(' ').map(Number);
+      const [bottom, top] = findAll(svg, (e) => e.attrs['data-panel'] === 'elevation')[0]
+        .attrs['data-y-range'].split(' ')
+        .map(Number);
       return bottom - top;
     });
     expect(heights[1]).toBeGreaterThan(heights[0]);
     const ground = Array.from(analysis.points.groundElevationM);
     for (const svg of [desk, file]) {
-      const [lo, hi] = findAll(svg, (e) => e.attrs['data-panel'] === 'elevation')[0].attrs['data-y-domain-m'].split(' ').map(Number);
+      const [lo, hi] = findAll(svg, (e) => e.attrs['data-panel'] === 'elevation')[0]
+        .attrs['data-y-domain-m'].split(' ')
+        .map(Number);
       expect(lo).toBeLessThan(Math.min(...ground));
       expect(hi).toBeGreaterThan(Math.max(...ground));
     }
   });
 
-  it('prints the screen\'s setting in the PDF report, and the report link carries it', async () => {
-    const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem: 'metric' }, line, analysis, stamp: workingCopyStamp('Tobias Wren'), generatedAt: new Date('2026-12-01T12:00:00Z'), exaggeration: 8 });
+  it("prints the screen's setting in the PDF report, and the report link carries it", async () => {
+    const pdf = await lineReportPdf({
+      project: { name: 'Kestrel Hollow spring line', unitSystem: 'metric' },
+      line,
+      analysis,
+      stamp: workingCopyStamp('Tobias Wren'),
+      generatedAt: new Date('2026-12-01T12:00:00Z'),
+      exaggeration: 8,
+    });
     const parser = new PDFParse({ data: new Uint8Array(pdf) });
     const text = (await parser.getText()).text.replace(/\s+/g, ' ');
     await parser.destroy();

@@ -12,8 +12,14 @@ function labels(root: SvgNode, attribute: string): { id: string; x: number; ys: 
     const translate = /translate\(0, ([-\d.]+)\)/.exec(String(node.attrs?.transform ?? ''));
     const dy = shift + (translate ? Number(translate[1]) : 0);
     if (node.attrs?.[attribute] !== undefined) {
-      const texts = (node.children ?? []).filter((c): c is SvgNode => typeof c === 'object' && c !== null && c.tag === 'text');
-      found.push({ id: String(node.attrs[attribute]), x: Number(texts[0].attrs!.x), ys: texts.map((t) => Number(t.attrs!.y) + dy) });
+      const texts = (node.children ?? []).filter(
+        (c): c is SvgNode => typeof c === 'object' && c !== null && c.tag === 'text',
+      );
+      found.push({
+        id: String(node.attrs[attribute]),
+        x: Number(texts[0].attrs!.x),
+        ys: texts.map((t) => Number(t.attrs!.y) + dy),
+      });
       return;
     }
     for (const child of node.children ?? []) walk(child as SvgNode, dy);
@@ -23,22 +29,40 @@ function labels(root: SvgNode, attribute: string): { id: string; x: number; ys: 
 }
 
 const overlaps = (a: { x: number; ys: number[] }, b: { x: number; ys: number[] }) =>
-  Math.abs(a.x - b.x) < 100 && Math.min(...a.ys) <= Math.max(...b.ys) + 10 && Math.min(...b.ys) <= Math.max(...a.ys) + 10;
+  Math.abs(a.x - b.x) < 100 &&
+  Math.min(...a.ys) <= Math.max(...b.ys) + 10 &&
+  Math.min(...b.ys) <= Math.max(...a.ys) + 10;
 
 describe('network schematic labels', () => {
   // Invented: two lines on one route from one spring box to one house (a design and its option).
-  const course = [{ x: 0, y: 0 }, { x: 100, y: 40 }, { x: 200, y: 60 }, { x: 300, y: 120 }, { x: 400, y: 140 }];
+  const course = [
+    { x: 0, y: 0 },
+    { x: 100, y: 40 },
+    { x: 200, y: 60 },
+    { x: 300, y: 120 },
+    { x: 400, y: 140 },
+  ];
   const view = {
     records: {
       nodes: [
-        { id: 'a', name: 'Spring box', kind: 'source' }, { id: 'b', name: 'Spring box (option)', kind: 'source' },
-        { id: 'c', name: 'House', kind: 'outlet' }, { id: 'd', name: 'House (option)', kind: 'outlet' },
+        { id: 'a', name: 'Spring box', kind: 'source' },
+        { id: 'b', name: 'Spring box (option)', kind: 'source' },
+        { id: 'c', name: 'House', kind: 'outlet' },
+        { id: 'd', name: 'House (option)', kind: 'outlet' },
       ],
-      links: [{ id: 'l1', name: 'Spring box to house', kind: 'line' }, { id: 'l2', name: 'PN 16 option', kind: 'line' }],
+      links: [
+        { id: 'l1', name: 'Spring box to house', kind: 'line' },
+        { id: 'l2', name: 'PN 16 option', kind: 'line' },
+      ],
     },
   } as unknown as NetworkView;
   const layout: NetworkLayout = {
-    nodes: { a: { x: 0, y: 0, from: 'route' }, b: { x: 0, y: 0, from: 'route' }, c: { x: 400, y: 140, from: 'route' }, d: { x: 400, y: 140, from: 'route' } },
+    nodes: {
+      a: { x: 0, y: 0, from: 'route' },
+      b: { x: 0, y: 0, from: 'route' },
+      c: { x: 400, y: 140, from: 'route' },
+      d: { x: 400, y: 140, from: 'route' },
+    },
     courses: { l1: course, l2: course },
   };
 

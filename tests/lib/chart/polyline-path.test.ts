@@ -7,9 +7,23 @@ describe('polyline path data', () => {
   it('writes exactly what d3-shape line().digits(2) writes', () => {
     const d3 = line<[number, number]>().digits(2);
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.double({ min: -5000, max: 5000, noNaN: true }), fc.double({ min: -5000, max: 5000, noNaN: true })), { minLength: 2, maxLength: 50 }), (pts) => {
-        expect(polylinePath(pts.map((p) => p[0]), pts.map((p) => p[1]))).toBe(d3(pts));
-      }),
+      fc.property(
+        fc.array(
+          fc.tuple(
+            fc.double({ min: -5000, max: 5000, noNaN: true }),
+            fc.double({ min: -5000, max: 5000, noNaN: true }),
+          ),
+          { minLength: 2, maxLength: 50 },
+        ),
+        (pts) => {
+          expect(
+            polylinePath(
+              pts.map((p) => p[0]),
+              pts.map((p) => p[1]),
+            ),
+          ).toBe(d3(pts));
+        },
+      ),
       { numRuns: 500 },
     );
   });

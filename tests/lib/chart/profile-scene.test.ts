@@ -49,7 +49,19 @@ describe('long profile drawing of the reference line', () => {
   const { svg, scene } = drawn(analysis, { devices: input.devices });
 
   it('has every layer', () => {
-    for (const name of ['background', 'zones', 'axes', 'ground', 'pipe', 'static', 'grade', 'pressure', 'devices', 'legend']) expect(() => layer(svg, name)).not.toThrow();
+    for (const name of [
+      'background',
+      'zones',
+      'axes',
+      'ground',
+      'pipe',
+      'static',
+      'grade',
+      'pressure',
+      'devices',
+      'legend',
+    ])
+      expect(() => layer(svg, name)).not.toThrow();
   });
 
   it('draws the ground, the hydraulic grade and the flowing pressure through the analysed points', () => {
@@ -108,7 +120,11 @@ describe('long profile drawing of the reference line', () => {
   it('places the devices and the ends as symbols at their chainages', () => {
     const devices = layer(svg, 'devices');
     const kinds = devices.children.map((g) => [g.attrs['data-kind'], Number(g.attrs['data-chainage-m'])]);
-    expect(kinds).toEqual([['air-release-valve', 900], ['source', 0], ['outlet', 1400]]);
+    expect(kinds).toEqual([
+      ['air-release-valve', 900],
+      ['source', 0],
+      ['outlet', 1400],
+    ]);
   });
 
   it('labels the axes in the project units and states the exaggeration in use', () => {
@@ -116,7 +132,10 @@ describe('long profile drawing of the reference line', () => {
     const axisText = svgToString(scene.root);
     expect(axisText).toContain('Chainage (m)');
     expect(axisText).toContain('Pressure (kPa)');
-    const ratio = (scene.frame.elevationBottom - scene.frame.elevationTop) / (scene.frame.elevationDomainM[1] - scene.frame.elevationDomainM[0]) / ((scene.frame.plotRight - scene.frame.plotLeft) / 1400);
+    const ratio =
+      (scene.frame.elevationBottom - scene.frame.elevationTop) /
+      (scene.frame.elevationDomainM[1] - scene.frame.elevationDomainM[0]) /
+      ((scene.frame.plotRight - scene.frame.plotLeft) / 1400);
     expect(scene.frame.exaggeration).toBeCloseTo(ratio, 9);
     expect(texts.some((t) => t.attrs['data-role'] === 'exaggeration')).toBe(true);
     const us = svgToString(profileScene(analysis, { units: displayUnits('us'), devices: [], width: 1000 }).root);
@@ -128,7 +147,10 @@ describe('long profile drawing of the reference line', () => {
   it('keeps a fixed vertical exaggeration: the elevation span is the panel height over (ratio x horizontal scale)', () => {
     const fixed = profileScene(analysis, { units: metric, devices: [], width: 1000, exaggeration: 10 }).frame;
     const pxPerM = (fixed.plotRight - fixed.plotLeft) / 1400;
-    expect(fixed.elevationDomainM[1] - fixed.elevationDomainM[0]).toBeCloseTo((fixed.elevationBottom - fixed.elevationTop) / (10 * pxPerM), 9);
+    expect(fixed.elevationDomainM[1] - fixed.elevationDomainM[0]).toBeCloseTo(
+      (fixed.elevationBottom - fixed.elevationTop) / (10 * pxPerM),
+      9,
+    );
   });
 });
 
@@ -143,16 +165,20 @@ describe('long profile with a break-pressure tank', () => {
     const e = scales(svg, 'elevation');
     const tank = analysis.tanks[0];
     const statics = findAll(layer(svg, 'static'), (n) => n.attrs['data-role'] === 'static');
-    expect(statics.map((n) => Number(n.attrs['data-level-m']))).toEqual([412, Math.round(tank.waterLevelM * 100) / 100]);
+    expect(statics.map((n) => Number(n.attrs['data-level-m']))).toEqual([
+      412,
+      Math.round(tank.waterLevelM * 100) / 100,
+    ]);
     expect(e.chainageOf(pathPoints(statics[1].attrs.d)[0][0])).toBeCloseTo(tank.chainageM, 1);
     const grades = findAll(layer(svg, 'grade'), (n) => n.tag === 'path');
     expect(grades).toHaveLength(2);
     const firstReach = pathPoints(grades[0].attrs.d);
     expect(firstReach[firstReach.length - 1][1]).toBeCloseTo(e.y(analysis.reaches[0].arrivingHeadM), 1);
-    // Below the tank the grade starts at its water level less the velocity head and entrance loss (profile-and-checks.md §5.2).
+    // Below the tank the grade starts at its water level less the velocity head and entrance loss
+    // (profile-and-checks.md §5.2).
     const tankPoint = Array.from(analysis.points.chainageM).findIndex((c) => Math.abs(c - tank.chainageM) < 1e-9);
     const entranceM = tank.waterLevelM - analysis.points.hydraulicGradeM[tankPoint];
-    expect(entranceM).toBeCloseTo(1.5 * analysis.points.velocityMs[tankPoint] ** 2 / (2 * 9.80665), 9);
+    expect(entranceM).toBeCloseTo((1.5 * analysis.points.velocityMs[tankPoint] ** 2) / (2 * 9.80665), 9);
     expect(pathPoints(grades[1].attrs.d)[0][1]).toBeCloseTo(e.y(analysis.points.hydraulicGradeM[tankPoint]), 1);
     const symbol = layer(svg, 'devices').children.find((g) => g.attrs['data-kind'] === 'break-pressure-tank');
     expect(Number(symbol!.attrs['data-chainage-m'])).toBeCloseTo(tank.chainageM, 2);
@@ -162,7 +188,10 @@ describe('long profile with a break-pressure tank', () => {
 describe('zoom and thinning of a long line', () => {
   it('draws about two points per pixel column and only the points inside the window', () => {
     const input = referenceLine();
-    const stations = Array.from({ length: 14001 }, (_, i) => ({ chainageM: i * 0.1, groundElevationM: input.stations[Math.min(Math.floor(i / 100), 140)].groundElevationM + 0.05 * Math.sin(i) }));
+    const stations = Array.from({ length: 14001 }, (_, i) => ({
+      chainageM: i * 0.1,
+      groundElevationM: input.stations[Math.min(Math.floor(i / 100), 140)].groundElevationM + 0.05 * Math.sin(i),
+    }));
     const analysis = analyzeLine({ ...input, stations, fittings: [], devices: [] });
     const whole = profileScene(analysis, { units: metric, devices: [], width: 1000 });
     expect(whole.drawnIndices.length).toBeLessThan(stations.length);

@@ -11,17 +11,36 @@ describe('profile exported as a standalone SVG file', () => {
   const input = referenceLine();
   const analysis = analyzeLine(input);
   const title = 'Kestrel Hollow <spring> line: Spring box & house, revision 3';
-  const file = standaloneSvg(profileScene(analysis, { units: displayUnits('metric'), devices: input.devices ?? [], width: 1200, title }, 'export').root);
+  const file = standaloneSvg(
+    profileScene(
+      analysis,
+      { units: displayUnits('metric'), devices: input.devices ?? [], width: 1200, title },
+      'export',
+    ).root,
+  );
 
   it('is well-formed XML with the SVG namespace and an XML declaration', () => {
-    expect(file.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(file.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg"')).toBe(
+      true,
+    );
     expect(XMLValidator.validate(file)).toBe(true);
   });
 
   it('carries the expected layers, in drawing order, with no styles from outside the file', () => {
     const svg = parseSvg(file);
     const layers = findAll(svg, (e) => e.attrs['data-layer'] !== undefined).map((e) => e.attrs['data-layer']);
-    expect(layers).toEqual(['background', 'zones', 'axes', 'ground', 'pipe', 'static', 'grade', 'pressure', 'devices', 'legend']);
+    expect(layers).toEqual([
+      'background',
+      'zones',
+      'axes',
+      'ground',
+      'pipe',
+      'static',
+      'grade',
+      'pressure',
+      'devices',
+      'legend',
+    ]);
     expect(findAll(svg, (e) => e.attrs.class !== undefined || e.tag === 'style')).toEqual([]);
     expect(svg.attrs.viewBox).toMatch(/^0 0 1200 \d+(\.\d+)?$/);
   });
@@ -35,6 +54,17 @@ describe('profile exported as a standalone SVG file', () => {
   it('names every pipe of the line and each device kind in the legend', () => {
     const svg = parseSvg(file);
     const legend = findAll(svg, (e) => e.attrs['data-legend'] !== undefined).map((e) => e.attrs['data-legend']);
-    expect(legend).toEqual(expect.arrayContaining(['ground', 'pipe:pe80-iso4427-sdr17-40mm', 'pipe:pe80-iso4427-sdr17-50mm', 'static', 'grade', 'allowable', 'danger', 'device:air-release-valve']));
+    expect(legend).toEqual(
+      expect.arrayContaining([
+        'ground',
+        'pipe:pe80-iso4427-sdr17-40mm',
+        'pipe:pe80-iso4427-sdr17-50mm',
+        'static',
+        'grade',
+        'allowable',
+        'danger',
+        'device:air-release-valve',
+      ]),
+    );
   });
 });

@@ -19,7 +19,12 @@ function convert(nodes: Ordered[]): XmlElement[] {
 
 /** Parses SVG text into a plain element tree (fast-xml-parser, document order kept). */
 export function parseSvg(text: string): XmlElement {
-  const parser = new XMLParser({ preserveOrder: true, ignoreAttributes: false, attributeNamePrefix: '', parseAttributeValue: false });
+  const parser = new XMLParser({
+    preserveOrder: true,
+    ignoreAttributes: false,
+    attributeNamePrefix: '',
+    parseAttributeValue: false,
+  });
   const roots = convert(parser.parse(text) as Ordered[]);
   const svg = roots.find((r) => r.tag === 'svg');
   if (!svg) throw new Error('no <svg> root');

@@ -26,7 +26,7 @@ function extremesByBruteForce(y: ArrayLike<number>): number[] {
 /** A 100 000-point survey-like route: a random walk with flats, steps and noise, from a seed. */
 function route(seed: number, noise: number, n = 100_000): { x: Float64Array; y: Float64Array } {
   let s = seed >>> 0;
-  const rand = () => ((s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 2 ** 32);
+  const rand = () => (s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 2 ** 32;
   const x = new Float64Array(n);
   const y = new Float64Array(n);
   let z = 400;
@@ -52,15 +52,21 @@ describe('thinning a long profile', () => {
 
   it('keeps every local high and low of a 100,000-point route, and both ends', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.constantFrom(0, 0.05, 0.6), fc.integer({ min: 200, max: 3000 }), (seed, noise, target) => {
-        const { x, y } = route(seed, noise);
-        const kept = thinProfile(x, y, { targetPoints: target });
-        const set = new Set(kept);
-        expect(kept[0]).toBe(0);
-        expect(kept[kept.length - 1]).toBe(y.length - 1);
-        for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
-        for (const i of extremesByBruteForce(y)) if (!set.has(i)) throw new Error(`extreme at index ${i} (${y[i]} m) was dropped`);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 2 ** 31 - 1 }),
+        fc.constantFrom(0, 0.05, 0.6),
+        fc.integer({ min: 200, max: 3000 }),
+        (seed, noise, target) => {
+          const { x, y } = route(seed, noise);
+          const kept = thinProfile(x, y, { targetPoints: target });
+          const set = new Set(kept);
+          expect(kept[0]).toBe(0);
+          expect(kept[kept.length - 1]).toBe(y.length - 1);
+          for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
+          for (const i of extremesByBruteForce(y))
+            if (!set.has(i)) throw new Error(`extreme at index ${i} (${y[i]} m) was dropped`);
+        },
+      ),
       { numRuns: 12 },
     );
   });
@@ -71,7 +77,9 @@ describe('thinning a long profile', () => {
     const y = Float64Array.from({ length: n }, (_, i) => 300 + 40 * Math.sin(i / 9000));
     const guard = Float64Array.from({ length: n }, (_, i) => y[i] - (i === 5_000 ? 3 : 0.6));
     const kept = thinProfile(x, y, { targetPoints: 1500, guardSeries: [guard], keep: [12_345] });
-    expect(kept.length).toBeLessThanOrEqual(1500 + extremesByBruteForce(y).length + extremesByBruteForce(guard).length + 1);
+    expect(kept.length).toBeLessThanOrEqual(
+      1500 + extremesByBruteForce(y).length + extremesByBruteForce(guard).length + 1,
+    );
     expect(kept.length).toBeGreaterThan(1000);
     expect(kept).toContain(12_345);
     for (const i of extremesByBruteForce(guard)) expect(kept).toContain(i);
@@ -93,21 +101,25 @@ describe('thinning a long profile', () => {
 describe('thinning with a height tolerance (reversalM)', () => {
   it('is every local high and low at 0, and with a tolerance hides nothing taller than it between two kept points', () => {
     fc.assert(
-      fc.property(fc.array(fc.integer({ min: -20, max: 20 }), { minLength: 0, maxLength: 80 }), fc.constantFrom(0, 0.5, 2, 7), (values, reversal) => {
-        if (reversal === 0) expect(turningIndices(values, 0)).toEqual(localExtremeIndices(values));
-        if (values.length < 2) return;
-        const kept = [0, ...turningIndices(values, reversal), values.length - 1];
-        for (let k = 1; k < kept.length; k++) {
-          const [a, b] = [kept[k - 1], kept[k]];
-          expect(b).toBeGreaterThan(a);
-          const lo = Math.min(values[a], values[b]);
-          const hi = Math.max(values[a], values[b]);
-          for (let j = a; j <= b; j++) {
-            expect(values[j]).toBeLessThanOrEqual(hi + reversal);
-            expect(values[j]).toBeGreaterThanOrEqual(lo - reversal);
+      fc.property(
+        fc.array(fc.integer({ min: -20, max: 20 }), { minLength: 0, maxLength: 80 }),
+        fc.constantFrom(0, 0.5, 2, 7),
+        (values, reversal) => {
+          if (reversal === 0) expect(turningIndices(values, 0)).toEqual(localExtremeIndices(values));
+          if (values.length < 2) return;
+          const kept = [0, ...turningIndices(values, reversal), values.length - 1];
+          for (let k = 1; k < kept.length; k++) {
+            const [a, b] = [kept[k - 1], kept[k]];
+            expect(b).toBeGreaterThan(a);
+            const lo = Math.min(values[a], values[b]);
+            const hi = Math.max(values[a], values[b]);
+            for (let j = a; j <= b; j++) {
+              expect(values[j]).toBeLessThanOrEqual(hi + reversal);
+              expect(values[j]).toBeGreaterThanOrEqual(lo - reversal);
+            }
           }
-        }
-      }),
+        },
+      ),
       { numRuns: 3000 },
     );
   });
@@ -133,13 +145,15 @@ describe('thinning to pixel columns (columns)', () => {
     const x0 = x[0];
     const width = (x[x.length - 1] - x0) / columns;
     const spans: { c: number; all: [number, number]; drawn: [number, number] }[] = [];
-    const yOn = (a: number, b: number, at: number) => (x[b] === x[a] ? y[a] : y[a] + ((y[b] - y[a]) * (at - x[a])) / (x[b] - x[a]));
+    const yOn = (a: number, b: number, at: number) =>
+      x[b] === x[a] ? y[a] : y[a] + ((y[b] - y[a]) * (at - x[a])) / (x[b] - x[a]);
     for (let c = 0; c < columns; c++) {
       const left = x0 + c * width;
       const right = c === columns - 1 ? x[x.length - 1] : x0 + (c + 1) * width;
       let lo = Infinity;
       let hi = -Infinity;
-      for (let i = 0; i < x.length; i++) if (x[i] >= left && x[i] <= right) [lo, hi] = [Math.min(lo, y[i]), Math.max(hi, y[i])];
+      for (let i = 0; i < x.length; i++)
+        if (x[i] >= left && x[i] <= right) [lo, hi] = [Math.min(lo, y[i]), Math.max(hi, y[i])];
       if (lo === Infinity) continue;
       let dlo = Infinity;
       let dhi = -Infinity;
@@ -158,16 +172,22 @@ describe('thinning to pixel columns (columns)', () => {
 
   it('every column still reaches the lowest and highest height of the series in it', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.constantFrom(0.05, 0.6, 3), fc.integer({ min: 20, max: 400 }), (seed, noise, columns) => {
-        const { x, y } = route(seed, noise, 6_000);
-        const kept = thinProfile(x, y, { targetPoints: 2 * columns, columns });
-        expect(kept[0]).toBe(0);
-        expect(kept[kept.length - 1]).toBe(y.length - 1);
-        for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
-        for (const { c, all, drawn } of columnSpans(x, y, kept, columns)) {
-          if (drawn[0] > all[0] + 1e-9 || drawn[1] < all[1] - 1e-9) throw new Error(`column ${c}: series spans ${all}, the drawn line ${drawn}`);
-        }
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 2 ** 31 - 1 }),
+        fc.constantFrom(0.05, 0.6, 3),
+        fc.integer({ min: 20, max: 400 }),
+        (seed, noise, columns) => {
+          const { x, y } = route(seed, noise, 6_000);
+          const kept = thinProfile(x, y, { targetPoints: 2 * columns, columns });
+          expect(kept[0]).toBe(0);
+          expect(kept[kept.length - 1]).toBe(y.length - 1);
+          for (let k = 1; k < kept.length; k++) expect(kept[k]).toBeGreaterThan(kept[k - 1]);
+          for (const { c, all, drawn } of columnSpans(x, y, kept, columns)) {
+            if (drawn[0] > all[0] + 1e-9 || drawn[1] < all[1] - 1e-9)
+              throw new Error(`column ${c}: series spans ${all}, the drawn line ${drawn}`);
+          }
+        },
+      ),
       { numRuns: 30 },
     );
   });

@@ -20,8 +20,17 @@ describe('form state', () => {
   });
 
   it('puts an API refusal beside the fields it names, and anything else under the form in the fallback words', () => {
-    const refused = refusalOf(new ApiError(400, 'bad_request', 'Some fields are not valid', { volumeM3: ['Too big'] }), 'Not saved.');
-    expect(refused).toEqual({ fields: { volumeM3: ['Too big'] }, note: { text: 'Some fields are not valid', tone: 'error' } });
-    expect(refusalOf(new TypeError('network down'), 'Not saved. Try again.')).toEqual({ fields: {}, note: { text: 'Not saved. Try again.', tone: 'error' } });
+    const refused = refusalOf(
+      new ApiError(400, 'bad_request', 'Some fields are not valid', { volumeM3: ['Too big'] }),
+      'Not saved.',
+    );
+    expect(refused).toEqual({
+      fields: { volumeM3: ['Too big'] },
+      note: { text: 'Some fields are not valid', tone: 'error' },
+    });
+    expect(refusalOf(new TypeError('network down'), 'Not saved. Try again.')).toEqual({
+      fields: {},
+      note: { text: 'Not saved. Try again.', tone: 'error' },
+    });
   });
 });

@@ -20,7 +20,12 @@ const troubledSite: RamPlanOptions = {
 };
 
 const allText = (checks: readonly PlanCheck[], system: 'metric' | 'us') =>
-  checks.map((check) => { const t = planCheckText(check, system); return `${t.message} ${t.fix ?? ''}`; }).join('\n');
+  checks
+    .map((check) => {
+      const t = planCheckText(check, system);
+      return `${t.message} ${t.fix ?? ''}`;
+    })
+    .join('\n');
 
 describe('lift checks worded from their figures (warnings as data, lib/lift/check-words.ts)', () => {
   it('a troubled ram site reports several checks, each carrying the figures its sentence needs', () => {
@@ -46,21 +51,36 @@ describe('lift checks worded from their figures (warnings as data, lib/lift/chec
 
   it('storage volumes read as US gallons with thousands separators', () => {
     // Supply 1 m³/day against 2.4 m³/day of use: the tank loses 1.4 m³ a day.
-    const result = sizeStorage({ supply: { flowM3s: 1 / 86_400 }, demand: { dailyVolumeM3: 2.4, hourlyFractions: Array(24).fill(1 / 24) } });
+    const result = sizeStorage({
+      supply: { flowM3s: 1 / 86_400 },
+      demand: { dailyVolumeM3: 2.4, hourlyFractions: Array(24).fill(1 / 24) },
+    });
     const short = result.checks.find((c) => c.code === 'supply-below-demand')!;
     const text = planCheckText(short, 'us').message;
     // 2.4 m³ = 634.0 US gal; 1 US gal = 3.785411784 L (docs/references/core.md §7).
     expect(text).toContain(`${Math.round(2.4 / US_GALLON_M3)} US gal`);
     expect(text).toContain(`${Math.round(1 / US_GALLON_M3)} US gal a day`);
     expect(text).not.toMatch(/m³/);
-    const big = sizeStorage({ supply: { flowM3s: 10 / 86_400 }, demand: { dailyVolumeM3: 24, hourlyFractions: Array(24).fill(1 / 24) } });
-    expect(planCheckText(big.checks.find((c) => c.code === 'supply-below-demand')!, 'us').message).toMatch(/2,642 US gal a day/);
+    const big = sizeStorage({
+      supply: { flowM3s: 10 / 86_400 },
+      demand: { dailyVolumeM3: 24, hourlyFractions: Array(24).fill(1 / 24) },
+    });
+    expect(
+      planCheckText(
+        big.checks.find((c) => c.code === 'supply-below-demand')!,
+        'us',
+      ).message,
+    ).toMatch(/2,642 US gal a day/);
   });
 
   it('a draw above the yield reads in US gpm for a US project and L/min for a metric one', () => {
     const [check] = yieldDrawChecks({ designYieldM3s: 10 * L_PER_MIN, designDrawM3s: 20 * L_PER_MIN });
-    expect(planCheckText(check, 'metric').message).toMatch(/design draw \(20\.0 L\/min\) exceeds the design yield \(10\.0 L\/min\)/);
+    expect(planCheckText(check, 'metric').message).toMatch(
+      /design draw \(20\.0 L\/min\) exceeds the design yield \(10\.0 L\/min\)/,
+    );
     // 20 L/min = 5.28 US gpm.
-    expect(planCheckText(check, 'us').message).toMatch(/design draw \(5\.28 US gpm\) exceeds the design yield \(2\.64 US gpm\)/);
+    expect(planCheckText(check, 'us').message).toMatch(
+      /design draw \(5\.28 US gpm\) exceeds the design yield \(2\.64 US gpm\)/,
+    );
   });
 });

@@ -6,17 +6,56 @@ import { buildLiftSummary } from '@/lib/lift/summary';
 
 const L_PER_MIN = 1e-3 / 60;
 const site = (id: string, patch: Partial<RamSiteRecord> = {}): RamSiteRecord => ({
-  id, name: id, sourceId: null, tankId: 'tank', driveFlowM3s: 20 * L_PER_MIN, fallM: 2,
-  drivePipe: { lengthM: 14, insideDiameterM: 0.03505, material: 'steel', rigid: null }, liftM: 10.7, pumpElevationM: null,
-  deliveryPipe: { routeId: null, lengthM: 107, pipeId: null, insideDiameterM: 0.02093, hazenWilliamsC: 150, pressureRatingPa: 689_476 },
-  sizeClassId: null, pumpCount: 1, measuredEfficiency: null, efficiencyTableId: 'trade-pocketbook', notes: '', ...patch,
+  id,
+  name: id,
+  sourceId: null,
+  tankId: 'tank',
+  driveFlowM3s: 20 * L_PER_MIN,
+  fallM: 2,
+  drivePipe: { lengthM: 14, insideDiameterM: 0.03505, material: 'steel', rigid: null },
+  liftM: 10.7,
+  pumpElevationM: null,
+  deliveryPipe: {
+    routeId: null,
+    lengthM: 107,
+    pipeId: null,
+    insideDiameterM: 0.02093,
+    hazenWilliamsC: 150,
+    pressureRatingPa: 689_476,
+  },
+  sizeClassId: null,
+  pumpCount: 1,
+  measuredEfficiency: null,
+  efficiencyTableId: 'trade-pocketbook',
+  notes: '',
+  ...patch,
 });
 const tank: TankRecord = {
-  id: 'tank', name: 'Tank', volumeM3: 1.25, baseElevationM: null, lowLevelM: 0, overflowLevelM: null, supplyKind: 'ram-sites', supplySourceId: null,
-  supplyFlowM3s: null, supplyHoursPerDay: 24, supplyStartHour: 0, reserveDays: 0, outlets: [], notes: '',
+  id: 'tank',
+  name: 'Tank',
+  volumeM3: 1.25,
+  baseElevationM: null,
+  lowLevelM: 0,
+  overflowLevelM: null,
+  supplyKind: 'ram-sites',
+  supplySourceId: null,
+  supplyFlowM3s: null,
+  supplyHoursPerDay: 24,
+  supplyStartHour: 0,
+  reserveDays: 0,
+  outlets: [],
+  notes: '',
 };
 const records = (patch: Partial<LiftRecords>): LiftRecords => ({
-  sources: [], yieldReadings: [], ramSites: [], commissioning: [], tanks: [tank], demandUses: [], seasonalTasks: [], routes: [], ...patch,
+  sources: [],
+  yieldReadings: [],
+  ramSites: [],
+  commissioning: [],
+  tanks: [tank],
+  demandUses: [],
+  seasonalTasks: [],
+  routes: [],
+  ...patch,
 });
 
 describe('ram plan from a stored site', () => {
@@ -56,8 +95,21 @@ describe('lift summary', () => {
   it('compares commissioning with the table plan even when the site plans with a measured efficiency', () => {
     const measured = site('a', { measuredEfficiency: 0.3 });
     const reading = {
-      id: 'r', ramSiteId: 'a', measuredOn: '2026-09-12', beatsPerMinute: 60, deliveredBucketVolumeM3: 0.01, deliveredBucketSeconds: 240, deliveredFlowM3s: null,
-      driveMeasure: 'waste' as const, driveBucketVolumeM3: 0.01, driveBucketSeconds: 30, driveFlowM3s: null, pressureAtPumpPa: null, supplyHeadM: 2, deliveryHeadM: 11, notes: '',
+      id: 'r',
+      ramSiteId: 'a',
+      measuredOn: '2026-09-12',
+      beatsPerMinute: 60,
+      deliveredBucketVolumeM3: 0.01,
+      deliveredBucketSeconds: 240,
+      deliveredFlowM3s: null,
+      driveMeasure: 'waste' as const,
+      driveBucketVolumeM3: 0.01,
+      driveBucketSeconds: 30,
+      driveFlowM3s: null,
+      pressureAtPumpPa: null,
+      supplyHeadM: 2,
+      deliveryHeadM: 11,
+      notes: '',
     };
     const [view] = buildLiftSummary(records({ ramSites: [measured], commissioning: [reading] })).ramSites;
     expect(view.plan.ok && view.plan.value.efficiency).toBe(0.3);
@@ -68,8 +120,21 @@ describe('lift summary', () => {
 
   it('takes the drive flow from the plan when the reading did not measure it, and says so', () => {
     const reading = {
-      id: 'r', ramSiteId: 'a', measuredOn: '2026-09-12', beatsPerMinute: 60, deliveredBucketVolumeM3: null, deliveredBucketSeconds: null, deliveredFlowM3s: 2 * L_PER_MIN,
-      driveMeasure: 'plan' as const, driveBucketVolumeM3: null, driveBucketSeconds: null, driveFlowM3s: null, pressureAtPumpPa: 110_000, supplyHeadM: 2, deliveryHeadM: null, notes: '',
+      id: 'r',
+      ramSiteId: 'a',
+      measuredOn: '2026-09-12',
+      beatsPerMinute: 60,
+      deliveredBucketVolumeM3: null,
+      deliveredBucketSeconds: null,
+      deliveredFlowM3s: 2 * L_PER_MIN,
+      driveMeasure: 'plan' as const,
+      driveBucketVolumeM3: null,
+      driveBucketSeconds: null,
+      driveFlowM3s: null,
+      pressureAtPumpPa: 110_000,
+      supplyHeadM: 2,
+      deliveryHeadM: null,
+      notes: '',
     };
     const [view] = buildLiftSummary(records({ ramSites: [site('a')], commissioning: [reading] })).ramSites;
     const result = view.commissioning[0].result;

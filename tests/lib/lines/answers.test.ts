@@ -5,7 +5,11 @@ import { FRICTION_WORDS, lineAnswers } from '../../../lib/lines/answers';
 /** 800 m of 25 mm pipe falling 20 m to a trough that wants 5 m of pressure (invented). */
 function line(flowM3s: number): LineInput {
   return {
-    stations: [{ chainageM: 0, groundElevationM: 120 }, { chainageM: 400, groundElevationM: 110 }, { chainageM: 800, groundElevationM: 100 }],
+    stations: [
+      { chainageM: 0, groundElevationM: 120 },
+      { chainageM: 400, groundElevationM: 110 },
+      { chainageM: 800, groundElevationM: 100 },
+    ],
     stretches: [{ fromM: 0, toM: 800, pipe: 'pe100-iso4427-sdr11-25mm' }],
     start: { kind: 'water-level', levelM: 121 },
     end: { kind: 'outlet', elevationM: 100, residualHeadM: 5 },
@@ -32,7 +36,16 @@ describe('the flow-delivered answer never shows a flow the line cannot carry', (
   it("a network's flow that drops at a take-off is judged by the end residual, not by the start flow against one-flow capacity", () => {
     const found = analyzeLine({ ...line(0), flow: { kind: 'find' } });
     // Twice the gravity flow for the first 50 m (a take-off there draws most of it), then well below it.
-    const scheduled = analyzeLine({ ...line(0), flow: { kind: 'schedule', pieces: [{ fromM: 0, flowM3s: found.flowM3s * 2 }, { fromM: 50, flowM3s: found.flowM3s * 0.5 }] } });
+    const scheduled = analyzeLine({
+      ...line(0),
+      flow: {
+        kind: 'schedule',
+        pieces: [
+          { fromM: 0, flowM3s: found.flowM3s * 2 },
+          { fromM: 50, flowM3s: found.flowM3s * 0.5 },
+        ],
+      },
+    });
     const answers = lineAnswers(scheduled);
     expect(answers.scheduled).toBe(true);
     expect(answers.overCapacity).toBe(false);
@@ -44,6 +57,8 @@ describe('the flow-delivered answer never shows a flow the line cannot carry', (
     const answers = lineAnswers(analyzeLine(line(0.0002)));
     expect(answers.frictionMethod).toBe('darcy-weisbach');
     expect(FRICTION_WORDS[answers.frictionMethod!]).toMatch(/Darcy-Weisbach with the Colebrook/);
-    expect(lineAnswers(analyzeLine({ ...line(0.0002), settings: { frictionMethod: 'hazen-williams' } })).frictionMethod).toBe('hazen-williams');
+    expect(
+      lineAnswers(analyzeLine({ ...line(0.0002), settings: { frictionMethod: 'hazen-williams' } })).frictionMethod,
+    ).toBe('hazen-williams');
   });
 });

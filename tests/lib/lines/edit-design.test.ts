@@ -1,10 +1,24 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeLine, applyLineFixes, findPipe } from '../../../hydraulics/index';
 import { lineAnswers } from '../../../lib/lines/answers';
-import { addDevice, DesignEditError, mergeWithNext, moveJoint, removeDevice, setStretchPipe, splitStretch } from '../../../lib/lines/edit-design';
+import {
+  addDevice,
+  DesignEditError,
+  mergeWithNext,
+  moveJoint,
+  removeDevice,
+  setStretchPipe,
+  splitStretch,
+} from '../../../lib/lines/edit-design';
 import { record, redo, startHistory, undo } from '../../../lib/lines/history';
 import { designWithInput, lineInputOf } from '../../../lib/lines/line-input';
-import { closestInSeries, familyIdOf, PIPE_FAMILIES, pipeChoiceOf, pipeForFamily } from '../../../lib/lines/pipe-choices';
+import {
+  closestInSeries,
+  familyIdOf,
+  PIPE_FAMILIES,
+  pipeChoiceOf,
+  pipeForFamily,
+} from '../../../lib/lines/pipe-choices';
 import { lineStationsOf } from '../../../lib/lines/route-stations';
 import { LineDesignSchema, type LineDesign } from '../../../lib/validations/line-design';
 import { referenceDesignParts, referenceLine } from '../../lines/reference-line';
@@ -35,13 +49,19 @@ describe('editing the stretches', () => {
 
   it('moves a joint only between the neighbouring ends, and sets a pipe', () => {
     const d = referenceDesign();
-    expect(moveJoint(d, 0, 450).stretches.map((s) => [s.fromM, s.toM])).toEqual([[0, 450], [450, 1400]]);
+    expect(moveJoint(d, 0, 450).stretches.map((s) => [s.fromM, s.toM])).toEqual([
+      [0, 450],
+      [450, 1400],
+    ]);
     expect(() => moveJoint(d, 0, 1400)).toThrow(/between 0 m and 1400 m/);
     expect(setStretchPipe(d, 1, 'pe100-iso4427-sdr11-63mm').stretches[1].pipe).toBe('pe100-iso4427-sdr11-63mm');
   });
 
   it('keeps devices in chainage order', () => {
-    const d = addDevice(addDevice(referenceDesign(), { kind: 'washout', chainageM: 650 }), { kind: 'washout', chainageM: 100 });
+    const d = addDevice(addDevice(referenceDesign(), { kind: 'washout', chainageM: 650 }), {
+      kind: 'washout',
+      chainageM: 100,
+    });
     expect(d.devices.map((x) => x.chainageM)).toEqual([100, 650, 900]);
     expect(removeDevice(d, 0).devices.map((x) => x.chainageM)).toEqual([650, 900]);
   });
@@ -81,24 +101,37 @@ describe('headline answers', () => {
 
 describe('pipe pickers from the catalogue', () => {
   it('groups every series by material and standard and keeps the bore when the class changes', () => {
-    expect(PIPE_FAMILIES.map((f) => f.id)).toEqual(['pvc-d2241', 'pe-d2239', 'pe100-iso4427', 'pe80-iso4427', 'steel-sch40']);
+    expect(PIPE_FAMILIES.map((f) => f.id)).toEqual([
+      'pvc-d2241',
+      'pe-d2239',
+      'pe100-iso4427',
+      'pe80-iso4427',
+      'steel-sch40',
+    ]);
     expect(familyIdOf('pe100-iso4427-sdr13.6')).toBe('pe100-iso4427');
-    expect(pipeChoiceOf('pe80-iso4427-sdr17-50mm')).toEqual({ familyId: 'pe80-iso4427', seriesId: 'pe80-iso4427-sdr17' });
+    expect(pipeChoiceOf('pe80-iso4427-sdr17-50mm')).toEqual({
+      familyId: 'pe80-iso4427',
+      seriesId: 'pe80-iso4427-sdr17',
+    });
     expect(pipeChoiceOf('old-barn-pipe')).toBeNull();
     // 50 mm PE80 SDR 17 has a 44.0 mm bore; the nearest PE100 SDR 11 bore is the 50 mm one (40.8 mm, not 51.4 mm).
-    expect(closestInSeries('pe100-iso4427-sdr11', findPipe('pe80-iso4427-sdr17-50mm'))).toBe('pe100-iso4427-sdr11-50mm');
+    expect(closestInSeries('pe100-iso4427-sdr11', findPipe('pe80-iso4427-sdr17-50mm'))).toBe(
+      'pe100-iso4427-sdr11-50mm',
+    );
     // With no pipe yet the picker aims at a 50 mm bore: the 63 mm pipe's 51.4 mm.
     expect(closestInSeries('pe100-iso4427-sdr11', undefined)).toBe('pe100-iso4427-sdr11-63mm');
   });
 
-  it('a change of material keeps the nearest bore (and a class rated at least as high), never the family\'s smallest pipe', () => {
+  it("a change of material keeps the nearest bore (and a class rated at least as high), never the family's smallest pipe", () => {
     const from = findPipe('pe100-iso4427-sdr11-50mm')!;
     for (const family of PIPE_FAMILIES) {
       const picked = findPipe(pipeForFamily(family.id, from))!;
       const bores = family.classes.flatMap((c) => c.pipes).map((p) => findPipe(p.id)!.insideDiameterM);
       const nearest = Math.min(...bores.map((b) => Math.abs(b - from.insideDiameterM)));
       // Within 10 % of the bore of the nearest size the family makes.
-      expect(Math.abs(picked.insideDiameterM - from.insideDiameterM), family.id).toBeLessThanOrEqual(nearest + 0.1 * from.insideDiameterM);
+      expect(Math.abs(picked.insideDiameterM - from.insideDiameterM), family.id).toBeLessThanOrEqual(
+        nearest + 0.1 * from.insideDiameterM,
+      );
       expect(picked.insideDiameterM, family.id).toBeGreaterThan(0.03);
     }
     // PVC (ASTM D2241): SDR 13.5 is made in 1/2 in only; the 40.8 mm bore of 50 mm PE100 SDR 11 (16 bar) becomes
@@ -117,7 +150,12 @@ describe('pipe pickers from the catalogue', () => {
 });
 
 describe('stations of a line from its route', () => {
-  const columns = { chainageM: [0, 100, 100, 200, 300], elevationM: [50, 45, 45, 40, 30], latitude: [54.5, 54.501, 54.501, 54.502, null], longitude: [-2.6, -2.6, -2.6, -2.6, null] };
+  const columns = {
+    chainageM: [0, 100, 100, 200, 300],
+    elevationM: [50, 45, 45, 40, 30],
+    latitude: [54.5, 54.501, 54.501, 54.502, null],
+    longitude: [-2.6, -2.6, -2.6, -2.6, null],
+  };
 
   it('drops a repeated chainage and keeps map positions where surveyed', () => {
     const s = lineStationsOf(columns, { fromChainageM: null, toChainageM: null });
@@ -128,6 +166,11 @@ describe('stations of a line from its route', () => {
 
   it('cuts a window with interpolated ends on the route chainage', () => {
     const s = lineStationsOf(columns, { fromChainageM: 50, toChainageM: 250 });
-    expect(s.map((x) => [x.chainageM, x.groundElevationM])).toEqual([[50, 47.5], [100, 45], [200, 40], [250, 35]]);
+    expect(s.map((x) => [x.chainageM, x.groundElevationM])).toEqual([
+      [50, 47.5],
+      [100, 45],
+      [200, 40],
+      [250, 35],
+    ]);
   });
 });

@@ -15,8 +15,17 @@ describe('results tables and their CSV files', () => {
     expect(parsed.errors).toEqual([]);
     const [header, ...body] = parsed.data;
     expect(header).toEqual([
-      'Chainage (m)', 'Ground (m)', 'Pipe (m)', 'Static head (m)', 'Hydraulic grade (m)', 'Static pressure head (m)',
-      'Static pressure (kPa)', 'Flowing pressure head (m)', 'Flowing pressure (kPa)', 'Velocity (m/s)', 'Stretch',
+      'Chainage (m)',
+      'Ground (m)',
+      'Pipe (m)',
+      'Static head (m)',
+      'Hydraulic grade (m)',
+      'Static pressure head (m)',
+      'Static pressure (kPa)',
+      'Flowing pressure head (m)',
+      'Flowing pressure (kPa)',
+      'Velocity (m/s)',
+      'Stretch',
     ]);
     expect(body).toHaveLength(analysis.points.chainageM.length);
     const sag = body.find((r) => r[0] === '650.0')!;
@@ -42,9 +51,18 @@ describe('results CSV and formula injection', () => {
       { key: 'pipe', heading: 'Pipe', value: (r: { label: string; head: number }) => r.label },
       { key: 'head', heading: 'Head (m)', value: (r: { label: string; head: number }) => r.head, decimals: 2 },
     ];
-    const rows = ['=HYPERLINK("http://x.test","y")', '+1+1', '-2+3', '@SUM(A1)', '\tTAB', 'PE 32 PN 8'].map((label, i) => ({ label, head: -1.5 * i }));
+    const rows = ['=HYPERLINK("http://x.test","y")', '+1+1', '-2+3', '@SUM(A1)', '\tTAB', 'PE 32 PN 8'].map(
+      (label, i) => ({ label, head: -1.5 * i }),
+    );
     const parsed = (await import('papaparse')).default.parse<string[]>(tableCsv(columns, rows)).data.slice(1);
-    expect(parsed.map((r) => r[0])).toEqual(["'=HYPERLINK(\"http://x.test\",\"y\")", "'+1+1", "'-2+3", "'@SUM(A1)", "'\tTAB", 'PE 32 PN 8']);
+    expect(parsed.map((r) => r[0])).toEqual([
+      '\'=HYPERLINK("http://x.test","y")',
+      "'+1+1",
+      "'-2+3",
+      "'@SUM(A1)",
+      "'\tTAB",
+      'PE 32 PN 8',
+    ]);
     expect(parsed.map((r) => r[1])).toEqual(['0.00', '-1.50', '-3.00', '-4.50', '-6.00', '-7.50']);
   });
 });

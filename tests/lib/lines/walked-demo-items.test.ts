@@ -27,7 +27,10 @@ function pageItems(heights: 'walked' | 'smooth' | 'point-by-point'): LineWarning
   return lineFixItems(analysis, design.winter, EMPTY_SITE_CONTEXT, true).warnings;
 }
 
-const interior = CONTROL.slice(1, -1).map((point, i) => ({ chainageM: point[0], high: point[1] > CONTROL[i][1] && point[1] > CONTROL[i + 2][1] }));
+const interior = CONTROL.slice(1, -1).map((point, i) => ({
+  chainageM: point[0],
+  high: point[1] > CONTROL[i][1] && point[1] > CONTROL[i + 2][1],
+}));
 const summits = interior.filter((p) => p.high).map((p) => p.chainageM); // 420, 1650, 2200
 const sags = interior.filter((p) => !p.high).map((p) => p.chainageM); // 330, 1000, 2040
 const placeOf = (w: LineWarning) => ('chainageM' in w.at ? w.at.chainageM : (w.at.fromM + w.at.toM) / 2);
@@ -45,7 +48,7 @@ describe('the demo walk\'s "What to fix" under Darcy-Weisbach', () => {
     expect(ofCode(smooth, 'washout-needed').map(placeOf)).toEqual(sags);
   });
 
-  it('the walk lists the smooth ground\'s air valves and washouts, each within 100 m of its turning point', () => {
+  it("the walk lists the smooth ground's air valves and washouts, each within 100 m of its turning point", () => {
     const air = ofCode(walked, 'air-release-needed').map(placeOf);
     const wash = ofCode(walked, 'washout-needed').map(placeOf);
     expect(air).toHaveLength(summits.length);
@@ -54,7 +57,7 @@ describe('the demo walk\'s "What to fix" under Darcy-Weisbach', () => {
     wash.forEach((c, i) => expect(Math.abs(c - sags[i])).toBeLessThan(100));
   });
 
-  it('every item of the smooth ground is on the walk\'s list, and the walk adds only items it names as within the scatter', () => {
+  it("every item of the smooth ground is on the walk's list, and the walk adds only items it names as within the scatter", () => {
     const unmatched = [...walked];
     for (const expected of smooth) {
       const k = unmatched.findIndex((w) => w.code === expected.code && Math.abs(placeOf(w) - placeOf(expected)) < 150);

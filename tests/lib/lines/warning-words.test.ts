@@ -19,7 +19,15 @@ const metric = displayUnits('metric');
 describe('warnings worded from code and values (issue 13, point 2)', () => {
   it('covers every code the two lines raise', () => {
     const codes = new Set(all.map((w) => w.code));
-    for (const code of ['static-over-rating', 'surge-over-rating', 'siphon-limit', 'negative-pressure', 'air-release-needed', 'washout-needed', 'velocity-low']) {
+    for (const code of [
+      'static-over-rating',
+      'surge-over-rating',
+      'siphon-limit',
+      'negative-pressure',
+      'air-release-needed',
+      'washout-needed',
+      'velocity-low',
+    ]) {
       expect(codes).toContain(code);
     }
   });
@@ -56,8 +64,11 @@ describe('warnings worded from code and values (issue 13, point 2)', () => {
     expect(csv[1]).toContain('static-over-rating');
   });
 
-  it('the consumer-GPS height warning reads in the project\'s units', () => {
-    const warning = consumerGpsHeightWarning({ heightSources: ['gps', 'gps'], decisions: [{ label: 'fall from start to end', elevationDifferenceM: 1234.5 }] })!;
+  it("the consumer-GPS height warning reads in the project's units", () => {
+    const warning = consumerGpsHeightWarning({
+      heightSources: ['gps', 'gps'],
+      decisions: [{ label: 'fall from start to end', elevationDifferenceM: 1234.5 }],
+    })!;
     expect(gpsWarningText(warning, 'us')).toContain('fall from start to end (4,050.2 ft)'); // 1234.5 m / 0.3048 m per ft
     expect(gpsWarningText(warning, 'us')).toContain('wrong by 49 ft'); // 15 m
     expect(gpsWarningText(warning, 'metric')).toContain('(1,234.5 m)');

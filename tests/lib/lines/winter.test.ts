@@ -59,23 +59,31 @@ describe('winter plan of a line', () => {
   });
 });
 
-describe('winter findings stand with the line\'s other items (common practice, no source)', () => {
+describe("winter findings stand with the line's other items (common practice, no source)", () => {
   it('a line shallower than frost and not drained gives one winter item that counts in the answers', () => {
     const plan = lineWinterPlan(profile(), { treatment: 'buried-below-frost' }, 1.0, true);
     const items = winterWarnings(plan);
     expect(items.map((w) => w.code)).toEqual(['winter-frost']);
     expect(items[0].values).toMatchObject({ coverM: expect.closeTo(0.6, 9), frostDepthM: 1.0, chainageM: 80 });
     const analysis = analyzeLine({
-      stations: [{ chainageM: 0, groundElevationM: 100 }, { chainageM: 100, groundElevationM: 90 }],
+      stations: [
+        { chainageM: 0, groundElevationM: 100 },
+        { chainageM: 100, groundElevationM: 90 },
+      ],
       stretches: [{ fromM: 0, toM: 100, pipe: 'pe100-iso4427-sdr11-32mm' }],
-      start: { kind: 'water-level', levelM: 101 }, end: { kind: 'free-discharge' }, flow: { kind: 'design', flowM3s: 0.0003 },
+      start: { kind: 'water-level', levelM: 101 },
+      end: { kind: 'free-discharge' },
+      flow: { kind: 'design', flowM3s: 0.0003 },
     });
     const before = lineAnswers(analysis).counts.warning;
     expect(lineAnswers({ ...analysis, warnings: [...analysis.warnings, ...items] }).counts.warning).toBe(before + 1);
   });
 
   it('a line "buried below frost" whose pipe lies on the surface is a contradiction, even without a frost depth', () => {
-    const surface: WinterProfileInput = { points: { chainageM: [0, 50, 100], groundElevationM: [100, 95, 90], pipeElevationM: [100, 95, 90] }, airPointToleranceM: 1 };
+    const surface: WinterProfileInput = {
+      points: { chainageM: [0, 50, 100], groundElevationM: [100, 95, 90], pipeElevationM: [100, 95, 90] },
+      airPointToleranceM: 1,
+    };
     const items = winterWarnings(lineWinterPlan(surface, undefined, null, true));
     expect(items.map((w) => w.code)).toEqual(['winter-cover-contradiction']);
     expect(warningText(items[0], displayUnits('us')).message).toMatch(/on the surface \(cover 0\.00 ft\)/);

@@ -14,12 +14,23 @@ const TWO_HOURS = Array.from({ length: 24 }, (_, hour) => (hour === 7 || hour ==
 
 /** Intake -> 250 m pipe -> tap with a fixed draw of 0.2 L/s (its peak), with or without a use tied to it. */
 function context(tied: boolean): NetworkContext {
-  const use = DemandUseSchema.parse({ kind: 'people', count: 4, figureId: 'us-rural-home', deliveryKind: 'pattern', hourlyFractions: TWO_HOURS });
+  const use = DemandUseSchema.parse({
+    kind: 'people',
+    count: 4,
+    figureId: 'us-rural-home',
+    deliveryKind: 'pattern',
+    hourlyFractions: TWO_HOURS,
+  });
   return {
     records: {
       projectId: 'p',
-      nodes: [{ id: SOURCE_ID, ...NetworkNodeSchema.parse(sourceNodeBody()) }, { id: OUTLET_ID, ...NetworkNodeSchema.parse(outletNodeBody()) }],
-      links: [{ id: '00000000-0000-4000-8000-0000000000e4', ...NetworkLinkSchema.parse(pipeLinkBody(SOURCE_ID, OUTLET_ID)) }],
+      nodes: [
+        { id: SOURCE_ID, ...NetworkNodeSchema.parse(sourceNodeBody()) },
+        { id: OUTLET_ID, ...NetworkNodeSchema.parse(outletNodeBody()) },
+      ],
+      links: [
+        { id: '00000000-0000-4000-8000-0000000000e4', ...NetworkLinkSchema.parse(pipeLinkBody(SOURCE_ID, OUTLET_ID)) },
+      ],
       demandUseTies: tied ? [{ demandUseId: USE_ID, outletNodeId: OUTLET_ID }] : [],
     },
     lines: [],

@@ -4,7 +4,9 @@ import { networkFrictionWords } from '@/lib/network/friction-words';
 
 describe('which friction law a network run used', () => {
   it("reads as a line's page does for the default law", () => {
-    expect(networkFrictionWords({ method: 'darcy-weisbach', freeSurfaceLosses: true })).toBe(FRICTION_WORDS['darcy-weisbach']);
+    expect(networkFrictionWords({ method: 'darcy-weisbach', freeSurfaceLosses: true })).toBe(
+      FRICTION_WORDS['darcy-weisbach'],
+    );
   });
   it('names Hazen-Williams and says when no entrance loss was taken', () => {
     const words = networkFrictionWords({ method: 'hazen-williams', freeSurfaceLosses: false });

@@ -4,7 +4,9 @@ import exifr from 'exifr';
 import { describe, expect, it } from 'vitest';
 import { heifExifBlock } from '@/lib/photos/heif-exif';
 
-const heic = new Uint8Array(fs.readFileSync(path.join(process.cwd(), 'tests/fixtures/photos/walk-54.0075N-2.9015W.heic')));
+const heic = new Uint8Array(
+  fs.readFileSync(path.join(process.cwd(), 'tests/fixtures/photos/walk-54.0075N-2.9015W.heic')),
+);
 
 describe('the Exif block of a HEIC photo', () => {
   it('is found in the idat box where libheif’s encoder puts it, and reads as the position and time written (tests/fixtures/photos/README.md)', async () => {

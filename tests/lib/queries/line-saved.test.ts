@@ -8,7 +8,12 @@ describe('after a line is saved (autosave)', () => {
   it("marks the line's network flows, the line list and the network view stale, and keeps the saved line", async () => {
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
     const line = { id: 'line-1', projectId: 'project-1', revision: 4 } as unknown as LineRecord;
-    const cached = [lineKeys.siteContext('line-1'), lineKeys.project('project-1'), networkKeys.view('project-1'), lineKeys.stations('line-1')];
+    const cached = [
+      lineKeys.siteContext('line-1'),
+      lineKeys.project('project-1'),
+      networkKeys.view('project-1'),
+      lineKeys.stations('line-1'),
+    ];
     for (const key of cached) client.setQueryData(key, { cached: true });
     await afterLineSaved(client, line);
     expect(client.getQueryState(lineKeys.siteContext('line-1'))?.isInvalidated).toBe(true);

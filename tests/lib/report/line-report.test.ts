@@ -13,18 +13,50 @@ import { referenceDesignParts, referenceLine } from '../../lines/reference-line'
 
 const squash = (text: string) => text.replace(/\s+/g, ' ');
 
-async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnType<typeof referenceLine>) => ReturnType<typeof referenceLine> = (i) => i, withPlan = false) {
+async function reportText(
+  unitSystem: 'metric' | 'us',
+  change: (input: ReturnType<typeof referenceLine>) => ReturnType<typeof referenceLine> = (i) => i,
+  withPlan = false,
+) {
   const input = change(referenceLine());
   const design = LineDesignSchema.parse(referenceDesignParts());
   const line: LineRecord = {
-    id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
-    routeName: 'Spring line design profile', name: 'Spring box to house', notes: '', fromChainageM: null, toChainageM: null,
-    revision: 40, preparedBy: 'Tobias Wren', design,
-    createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+    id: '00000000-0000-4000-8000-000000000001',
+    projectId: '00000000-0000-4000-8000-000000000002',
+    routeId: '00000000-0000-4000-8000-000000000003',
+    routeName: 'Spring line design profile',
+    name: 'Spring box to house',
+    notes: '',
+    fromChainageM: null,
+    toChainageM: null,
+    revision: 40,
+    preparedBy: 'Tobias Wren',
+    design,
+    createdAt: '2026-11-30T10:00:00.000Z',
+    updatedAt: '2026-12-01T10:00:00.000Z',
   };
   const analysis = analyzeLine(input);
-  const stations = withPlan ? Array.from(analysis.points.chainageM, (c) => ({ chainageM: c, latitudeDeg: 54.2 + c / 111_000, longitudeDeg: -2.9 + Math.sin(c / 300) / 400 })) : [];
-  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, stations, stamp: revisionStamp({ number: 7, status: 'approved', designerName: 'Tobias Wren', reviewerName: 'Dara Okafor', reviewedAt: '2026-11-30T15:20:00.000Z' }), generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const stations = withPlan
+    ? Array.from(analysis.points.chainageM, (c) => ({
+        chainageM: c,
+        latitudeDeg: 54.2 + c / 111_000,
+        longitudeDeg: -2.9 + Math.sin(c / 300) / 400,
+      }))
+    : [];
+  const pdf = await lineReportPdf({
+    project: { name: 'Kestrel Hollow spring line', unitSystem },
+    line,
+    analysis,
+    stations,
+    stamp: revisionStamp({
+      number: 7,
+      status: 'approved',
+      designerName: 'Tobias Wren',
+      reviewerName: 'Dara Okafor',
+      reviewedAt: '2026-11-30T15:20:00.000Z',
+    }),
+    generatedAt: new Date('2026-12-01T12:00:00Z'),
+  });
   const parser = new PDFParse({ data: new Uint8Array(pdf) });
   const result = await parser.getText();
   await parser.destroy();
@@ -34,8 +66,13 @@ async function reportText(unitSystem: 'metric' | 'us', change: (input: ReturnTyp
 describe('line design report (PDF)', () => {
   it('never reports a design flow the line cannot carry as delivered, and names the friction formula', async () => {
     const found = analyzeLine({ ...referenceLine(), flow: { kind: 'find' } });
-    const { text } = await reportText('metric', (input) => ({ ...input, flow: { kind: 'design', flowM3s: found.flowM3s * 1.5 } }));
-    expect(text).toMatch(/Flow delivered: at most [\d.,]+ L\/s \(the design flow of [\d.,]+ L\/s is more than the line carries by gravity\)/);
+    const { text } = await reportText('metric', (input) => ({
+      ...input,
+      flow: { kind: 'design', flowM3s: found.flowM3s * 1.5 },
+    }));
+    expect(text).toMatch(
+      /Flow delivered: at most [\d.,]+ L\/s \(the design flow of [\d.,]+ L\/s is more than the line carries by gravity\)/,
+    );
     expect(text).toMatch(/Friction by (Hazen-Williams|Darcy-Weisbach)/);
   });
 
@@ -43,7 +80,16 @@ describe('line design report (PDF)', () => {
     const { pdf, text, pages } = await reportText('metric');
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     expect(pages).toBeGreaterThanOrEqual(2);
-    for (const words of ['Spring box to house: line design report', 'Kestrel Hollow spring line', 'Tobias Wren', 'Dara Okafor', 'Revision 7', 'Approved', '2026-11-30', '2026-12-01']) {
+    for (const words of [
+      'Spring box to house: line design report',
+      'Kestrel Hollow spring line',
+      'Tobias Wren',
+      'Dara Okafor',
+      'Revision 7',
+      'Approved',
+      '2026-11-30',
+      '2026-12-01',
+    ]) {
       expect(text).toContain(words);
     }
   });
@@ -56,7 +102,15 @@ describe('line design report (PDF)', () => {
       // The report words each warning from its code and values, as the screen does.
       expect(text).toContain(squash(warningText(w, displayUnits('metric')).message).slice(0, 60));
     }
-    for (const words of ['Stretch schedule', '40 mm PE80 SDR 17 (PN 8)', 'Devices by chainage', 'Air-release valve', 'Assumptions', 'Hazen-Williams', '20 °C']) {
+    for (const words of [
+      'Stretch schedule',
+      '40 mm PE80 SDR 17 (PN 8)',
+      'Devices by chainage',
+      'Air-release valve',
+      'Assumptions',
+      'Hazen-Williams',
+      '20 °C',
+    ]) {
       expect(text).toContain(words);
     }
   });

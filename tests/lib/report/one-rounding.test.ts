@@ -19,16 +19,39 @@ const squash = (text: string) => text.replace(/\s+/g, ' ');
 const analysis = analyzeLine(referenceLine());
 
 const pdfCache = new Map<UnitSystem, Promise<string>>();
-const pdfText = (unitSystem: UnitSystem) => pdfCache.get(unitSystem) ?? (pdfCache.set(unitSystem, makePdfText(unitSystem)), pdfCache.get(unitSystem)!);
+const pdfText = (unitSystem: UnitSystem) =>
+  pdfCache.get(unitSystem) ?? (pdfCache.set(unitSystem, makePdfText(unitSystem)), pdfCache.get(unitSystem)!);
 
 async function makePdfText(unitSystem: UnitSystem): Promise<string> {
   const design = LineDesignSchema.parse(referenceDesignParts());
   const line: LineRecord = {
-    id: '00000000-0000-4000-8000-000000000001', projectId: '00000000-0000-4000-8000-000000000002', routeId: '00000000-0000-4000-8000-000000000003',
-    routeName: 'Spring line design profile', name: 'Spring box to house', notes: '', fromChainageM: null, toChainageM: null,
-    revision: 3, preparedBy: 'Tobias Wren', design, createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+    id: '00000000-0000-4000-8000-000000000001',
+    projectId: '00000000-0000-4000-8000-000000000002',
+    routeId: '00000000-0000-4000-8000-000000000003',
+    routeName: 'Spring line design profile',
+    name: 'Spring box to house',
+    notes: '',
+    fromChainageM: null,
+    toChainageM: null,
+    revision: 3,
+    preparedBy: 'Tobias Wren',
+    design,
+    createdAt: '2026-11-30T10:00:00.000Z',
+    updatedAt: '2026-12-01T10:00:00.000Z',
   };
-  const pdf = await lineReportPdf({ project: { name: 'Kestrel Hollow spring line', unitSystem }, line, analysis, stamp: revisionStamp({ number: 3, status: 'approved', designerName: 'Tobias Wren', reviewerName: 'Dara Okafor', reviewedAt: '2026-11-30T15:20:00.000Z' }), generatedAt: new Date('2026-12-01T12:00:00Z') });
+  const pdf = await lineReportPdf({
+    project: { name: 'Kestrel Hollow spring line', unitSystem },
+    line,
+    analysis,
+    stamp: revisionStamp({
+      number: 3,
+      status: 'approved',
+      designerName: 'Tobias Wren',
+      reviewerName: 'Dara Okafor',
+      reviewedAt: '2026-11-30T15:20:00.000Z',
+    }),
+    generatedAt: new Date('2026-12-01T12:00:00Z'),
+  });
   const parser = new PDFParse({ data: new Uint8Array(pdf) });
   const result = await parser.getText();
   await parser.destroy();
@@ -38,12 +61,17 @@ async function makePdfText(unitSystem: UnitSystem): Promise<string> {
 describe.each(['us', 'metric'] as const)('one rounding rule on screen, in the PDF and in the CSV (%s)', (system) => {
   const u = displayUnits(system);
 
-  it('a stretch\'s figures: the stretch table cell, the CSV cell and the PDF stretch schedule agree', async () => {
+  it("a stretch's figures: the stretch table cell, the CSV cell and the PDF stretch schedule agree", async () => {
     const text = await pdfText(system);
     const columns = stretchColumns(u, analysis.settings.waterTemperatureC);
     const [header, ...rows] = Papa.parse<string[]>(tableCsv(columns, analysis.stretches).trim()).data;
     const second = analysis.stretches[1];
-    for (const [key, quantity, si] of [['to', 'chainage', second.toM], ['length', 'length', second.slopeLengthM], ['friction', 'headLoss', second.frictionLossM], ['velocity', 'velocity', second.velocityMs]] as const) {
+    for (const [key, quantity, si] of [
+      ['to', 'chainage', second.toM],
+      ['length', 'length', second.slopeLengthM],
+      ['friction', 'headLoss', second.frictionLossM],
+      ['velocity', 'velocity', second.velocityMs],
+    ] as const) {
       const column = columns.find((c) => c.key === key)!;
       const screen = formatQuantity(quantity, si, system);
       expect(`${cellText(column, second)} ${screen.split(' ').slice(1).join(' ')}`).toBe(screen);

@@ -3,7 +3,8 @@ import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
 import { drawSceneToFit, headEveryPage } from '../../../lib/report/page-furniture';
 
-const SVG = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 1000 800" width="1000" height="800"><rect x="0" y="0" width="1000" height="800" fill="#eee"/></svg>';
+const SVG =
+  '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 1000 800" width="1000" height="800"><rect x="0" y="0" width="1000" height="800" fill="#eee"/></svg>';
 
 function landscapeDoc() {
   return new PDFDocument({ size: 'A4', layout: 'landscape', margin: 40, bufferPages: true });

@@ -18,10 +18,21 @@ function snapshot(line: Partial<SnapshotLine['design']>, tanks: DesignSnapshot['
   return {
     format: 1,
     project: { name: 'Invented project', description: '', unitSystem: 'metric', siteNotes: '', frostDepthM: null },
-    lines: [{
-      id: LINE_ID, name: 'Spring box to house', notes: '', routeId: null, routeName: 'Reference route', fromChainageM: null, toChainageM: null,
-      design, stations: referenceStations(), context: EMPTY_SITE_CONTEXT, problem: null,
-    }],
+    lines: [
+      {
+        id: LINE_ID,
+        name: 'Spring box to house',
+        notes: '',
+        routeId: null,
+        routeName: 'Reference route',
+        fromChainageM: null,
+        toChainageM: null,
+        design,
+        stations: referenceStations(),
+        context: EMPTY_SITE_CONTEXT,
+        problem: null,
+      },
+    ],
     lift: { sources: [], yieldReadings: [], ramSites: [], tanks, demandUses: [] },
   };
 }
@@ -31,21 +42,25 @@ const label = (id: string) => findPipe(id)!.label;
 // Revision 1: the reference line (PE80 SDR 17, 40 mm to ch. 300 then 50 mm; an air-release valve at 900).
 // Revision 2: PE100 SDR 11 50 mm from 300 to 900 m, the valve at 900 taken out, a washout added at 650, a tank added.
 const before = snapshot({});
-const after = snapshot({
-  stretches: [
-    { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
-    { fromM: 300, toM: 900, pipe: 'pe100-iso4427-sdr11-50mm' },
-    { fromM: 900, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
-  ],
-  devices: [{ kind: 'washout', chainageM: 650 }],
-}, [{ id: '00000000-0000-4000-8000-0000000000b1', name: 'Knoll tank' } as DesignSnapshot['lift']['tanks'][number]]);
-
+const after = snapshot(
+  {
+    stretches: [
+      { fromM: 0, toM: 300, pipe: 'pe80-iso4427-sdr17-40mm' },
+      { fromM: 300, toM: 900, pipe: 'pe100-iso4427-sdr11-50mm' },
+      { fromM: 900, toM: 1400, pipe: 'pe80-iso4427-sdr17-50mm' },
+    ],
+    devices: [{ kind: 'washout', chainageM: 650 }],
+  },
+  [{ id: '00000000-0000-4000-8000-0000000000b1', name: 'Knoll tank' } as DesignSnapshot['lift']['tanks'][number]],
+);
 
 describe('revision compare', () => {
   it('lists exactly the pipe, class and device changes written into the pair', () => {
     const [line] = compareSnapshots(before, after).lines;
     expect(line.change).toBe('changed');
-    expect(line.pipes).toEqual([{ fromM: 300, toM: 900, before: label('pe80-iso4427-sdr17-50mm'), after: label('pe100-iso4427-sdr11-50mm') }]);
+    expect(line.pipes).toEqual([
+      { fromM: 300, toM: 900, before: label('pe80-iso4427-sdr17-50mm'), after: label('pe100-iso4427-sdr11-50mm') },
+    ]);
     expect(line.devices).toEqual([
       { kind: 'washout', chainageM: 650, change: 'added' },
       { kind: 'air-release-valve', chainageM: 900, change: 'removed' },
@@ -67,8 +82,15 @@ describe('revision compare', () => {
 
   it('names network parts added between revisions (a take-off junction)', () => {
     const node = { id: '00000000-0000-4000-8000-0000000000c1', kind: 'junction', name: 'Take-off T1' };
-    const withNode = { ...after, network: { projectId: 'p', nodes: [node], links: [], demandUseTies: [] } } as unknown as DesignSnapshot;
-    expect(compareSnapshots(before, withNode).networkNodes).toEqual({ added: ['Take-off T1 (junction)'], removed: [], changed: [] });
+    const withNode = {
+      ...after,
+      network: { projectId: 'p', nodes: [node], links: [], demandUseTies: [] },
+    } as unknown as DesignSnapshot;
+    expect(compareSnapshots(before, withNode).networkNodes).toEqual({
+      added: ['Take-off T1 (junction)'],
+      removed: [],
+      changed: [],
+    });
   });
 
   it('reports a line only in the later revision as added, and one only in the earlier as removed', () => {
@@ -91,14 +113,25 @@ const PRICES = [
   { pipeId: 'pe100-iso4427-sdr11-40mm', costPerM: 3.4 },
 ];
 
-/** A revision with the reference line plus a small network (intake at 120 m, 250 m of `pipeId`, a tap at 100 m drawing 0.2 L/s), solved as a revision freezes it. */
+/**
+ * A revision with the reference line plus a small network (intake at 120 m, 250 m of `pipeId`, a tap at 100 m drawing
+ * 0.2 L/s), solved as a revision freezes it.
+ */
 function withNetwork(base: DesignSnapshot, pipeId: string): DesignSnapshot {
   const snap: DesignSnapshot = {
     ...base,
     network: {
       projectId: 'p',
-      nodes: [{ id: SOURCE_ID, ...NetworkNodeSchema.parse(sourceNodeBody()) }, { id: OUTLET_ID, ...NetworkNodeSchema.parse(outletNodeBody()) }],
-      links: [{ id: PIPE_LINK_ID, ...NetworkLinkSchema.parse({ ...pipeLinkBody(SOURCE_ID, OUTLET_ID), data: { lengthM: 250, pipe: pipeId } }) }],
+      nodes: [
+        { id: SOURCE_ID, ...NetworkNodeSchema.parse(sourceNodeBody()) },
+        { id: OUTLET_ID, ...NetworkNodeSchema.parse(outletNodeBody()) },
+      ],
+      links: [
+        {
+          id: PIPE_LINK_ID,
+          ...NetworkLinkSchema.parse({ ...pipeLinkBody(SOURCE_ID, OUTLET_ID), data: { lengthM: 250, pipe: pipeId } }),
+        },
+      ],
       demandUseTies: [],
     },
     networkBasis: { prices: PRICES, ramOutlets: [], sourceYieldsM3s: {} },
@@ -110,7 +143,8 @@ function withNetwork(base: DesignSnapshot, pipeId: string): DesignSnapshot {
 function slopeLength(fromM: number, toM: number): number {
   const s = referenceStations().filter((st) => st.chainageM >= fromM && st.chainageM <= toM);
   let sum = 0;
-  for (let i = 1; i < s.length; i++) sum += Math.hypot(s[i].chainageM - s[i - 1].chainageM, s[i].groundElevationM - s[i - 1].groundElevationM);
+  for (let i = 1; i < s.length; i++)
+    sum += Math.hypot(s[i].chainageM - s[i - 1].chainageM, s[i].groundElevationM - s[i - 1].groundElevationM);
   return sum;
 }
 
@@ -134,27 +168,40 @@ describe('revision compare: pipe cost and network outlet pressures', () => {
     // Revision 1: 40 mm PE80 0-300, 50 mm PE80 300-1400, 250 m of 32 mm PE100 on the network.
     const expectedBefore = slopeLength(0, 300) * 1.9 + slopeLength(300, 1400) * 2.6 + 250 * 2.1;
     // Revision 2: 300-900 becomes PE100 SDR 11 50 mm, and the network pipe 40 mm.
-    const expectedAfter = slopeLength(0, 300) * 1.9 + slopeLength(300, 900) * 3.8 + slopeLength(900, 1400) * 2.6 + 250 * 3.4;
+    const expectedAfter =
+      slopeLength(0, 300) * 1.9 + slopeLength(300, 900) * 3.8 + slopeLength(900, 1400) * 2.6 + 250 * 3.4;
     expect(comparison.cost.before!.total).toBeCloseTo(expectedBefore, 6);
     expect(comparison.cost.after!.total).toBeCloseTo(expectedAfter, 6);
     expect(comparison.cost.difference).toBeCloseTo(expectedAfter - expectedBefore, 6);
     // The change costs about 600 m x 1.2 + 250 m x 1.3 = 1045 more on plan; the sag's slope adds a few per cent.
     expect(comparison.cost.difference!).toBeGreaterThan(1045);
     expect(comparison.cost.difference!).toBeLessThan(1045 * 1.03);
-    expect(comparison.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-50mm')).toMatchObject({ costPerM: 3.8 });
+    expect(comparison.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-50mm')).toMatchObject({
+      costPerM: 3.8,
+    });
     expect(comparison.cost.after!.unpricedLengthM).toBe(0);
   });
 
   it('leaves unpriced pipe out of the total and says how much, and has no cost for a revision that kept no price list', () => {
-    const unpriced = compareSnapshots(before, { ...costAfter, networkBasis: { ...costAfter.networkBasis!, prices: PRICES.filter((p) => p.pipeId !== 'pe100-iso4427-sdr11-40mm') } });
+    const unpriced = compareSnapshots(before, {
+      ...costAfter,
+      networkBasis: {
+        ...costAfter.networkBasis!,
+        prices: PRICES.filter((p) => p.pipeId !== 'pe100-iso4427-sdr11-40mm'),
+      },
+    });
     expect(unpriced.cost.after!.unpricedLengthM).toBeCloseTo(250, 9);
-    expect(unpriced.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-40mm')).toMatchObject({ costPerM: null, cost: null });
+    expect(unpriced.cost.after!.rows.find((r) => r.pipeId === 'pe100-iso4427-sdr11-40mm')).toMatchObject({
+      costPerM: null,
+      cost: null,
+    });
     expect(unpriced.cost.before).toBeNull();
     expect(unpriced.cost.difference).toBeNull();
   });
 
   it('gives each outlet its residual pressure in both solves, matching the loss worked out beside it', () => {
-    // Intake water level 120 m, tap at 100 m: 20 m static, less the loss of 250 m at 0.2 L/s (friction plus the intake's entrance).
+    // Intake water level 120 m, tap at 100 m: 20 m static, less the loss of 250 m at 0.2 L/s (friction plus the
+    // intake's entrance).
     const [tap] = comparison.outlets;
     expect(tap).toMatchObject({ nodeId: OUTLET_ID, name: 'Fixture tap', change: 'changed', minimumM: 3 });
     expect(tap.before!).toBeCloseTo(20 - lossFromIntakeM(250, 0.0002, 'pe100-iso4427-sdr11-32mm'), 3);
@@ -166,10 +213,18 @@ describe('revision compare: pipe cost and network outlet pressures', () => {
 
   it('says why a side has no outlet pressures: a revision from before solves were kept, or a network that did not solve', () => {
     const old = compareSnapshots(before, costAfter);
-    expect(old.outlets[0]).toMatchObject({ before: null, after: costAfter.networkSolve!.ok ? expect.any(Number) : null });
+    expect(old.outlets[0]).toMatchObject({
+      before: null,
+      after: costAfter.networkSolve!.ok ? expect.any(Number) : null,
+    });
     expect(old.outletsMissing.before).toMatch(/before network solves were kept/);
-    const failed = compareSnapshots(costBefore, { ...costAfter, networkSolve: { ok: false, problem: 'Outlet "Fixture tap" is not joined to any source' } });
-    expect(failed.outletsMissing.after).toBe('the network did not solve: Outlet "Fixture tap" is not joined to any source');
+    const failed = compareSnapshots(costBefore, {
+      ...costAfter,
+      networkSolve: { ok: false, problem: 'Outlet "Fixture tap" is not joined to any source' },
+    });
+    expect(failed.outletsMissing.after).toBe(
+      'the network did not solve: Outlet "Fixture tap" is not joined to any source',
+    );
     expect(failed.outlets[0].after).toBeNull();
   });
 });

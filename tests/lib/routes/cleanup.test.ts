@@ -5,8 +5,20 @@ import { benchmarkProposals, detectRouteProposals, smoothingProposals } from '..
 import type { RoutePointView } from '../../../lib/routes/types';
 
 const pt = (seq: number, z: number, extra: Partial<RoutePointView> = {}): RoutePointView => ({
-  seq, latitude: null, longitude: null, chainageM: seq * 10, slopeChainageM: null, elevationM: z, rawElevationM: z, label: null,
-  heightSource: 'gps', confidenceM: 15, recordedAt: null, excluded: false, dismissedChecks: [], ...extra,
+  seq,
+  latitude: null,
+  longitude: null,
+  chainageM: seq * 10,
+  slopeChainageM: null,
+  elevationM: z,
+  rawElevationM: z,
+  label: null,
+  heightSource: 'gps',
+  confidenceM: 15,
+  recordedAt: null,
+  excluded: false,
+  dismissedChecks: [],
+  ...extra,
 });
 const walk = (zs: number[]) => zs.map((z, i) => pt(i, z));
 
@@ -32,7 +44,9 @@ describe('detectRouteProposals', () => {
 
   it('does not second-guess levelled heights with the moving median', () => {
     // A real 8 m knoll on a level run: steeper than nothing, off the median by more than 6 m.
-    const points = [0, 2, 4, 6, 8, 6, 4, 2, 0].map((z, i) => pt(i, 100 + z, { heightSource: 'level', chainageM: i * 20 }));
+    const points = [0, 2, 4, 6, 8, 6, 4, 2, 0].map((z, i) =>
+      pt(i, 100 + z, { heightSource: 'level', chainageM: i * 20 }),
+    );
     expect(detectRouteProposals(points)).toEqual([]);
   });
 });
@@ -52,14 +66,20 @@ describe('applyCleanupDecisions', () => {
   const spike = { kind: 'grade-spike' as const, index: 2, field: 'elevationM' as const, from: 30, to: 10, reason: '' };
 
   it('accepting sets the cleaned height and keeps the raw one; deleting excludes without removing', () => {
-    const out = applyCleanupDecisions(walk([10, 10, 30, 10]), { accept: [spike, { kind: 'duplicate', index: 3, field: 'deleted', from: false, to: true, reason: '' }], reject: [] });
+    const out = applyCleanupDecisions(walk([10, 10, 30, 10]), {
+      accept: [spike, { kind: 'duplicate', index: 3, field: 'deleted', from: false, to: true, reason: '' }],
+      reject: [],
+    });
     expect(out[2]).toMatchObject({ elevationM: 10, rawElevationM: 30 });
     expect(out[3]).toMatchObject({ excluded: true, elevationM: 10 });
     expect(out).toHaveLength(4);
   });
 
   it('rejecting a height finding dismisses both height checks at that point; requested kinds are not remembered', () => {
-    const out = applyCleanupDecisions(walk([10, 10, 30, 10]), { accept: [], reject: [spike, { ...spike, kind: 'smoothing', index: 1 }] });
+    const out = applyCleanupDecisions(walk([10, 10, 30, 10]), {
+      accept: [],
+      reject: [spike, { ...spike, kind: 'smoothing', index: 1 }],
+    });
     expect(out[2].dismissedChecks).toEqual(['grade-spike', 'median-outlier']);
     expect(out[1].dismissedChecks).toEqual([]);
   });
@@ -76,10 +96,33 @@ describe('applyCleanupDecisions', () => {
         expect((e as RouteEditError).kind).toBe(kind);
       }
     };
-    expectRefusal(() => applyCleanupDecisions(points, { accept: [spike], reject: [] }), 'point 3: the height changed to 29.00 m since this was proposed (from 30.00 m); reload the route', 'conflict');
-    expectRefusal(() => applyCleanupDecisions(points, { accept: [{ ...spike, from: 29 }], reject: [{ ...spike, from: 29 }] }), 'point 3: a proposal for this point is both accepted and rejected', 'invalid');
-    expectRefusal(() => applyCleanupDecisions(points, { accept: [{ ...spike, from: 29 }, { ...spike, from: 29, kind: 'smoothing' }], reject: [] }), 'point 3: two height changes for one point; accept only one', 'invalid');
-    expectRefusal(() => applyCleanupDecisions(points, { accept: [{ ...spike, index: 9 }], reject: [] }), 'point 10: there is no point 10 on this route', 'invalid');
+    expectRefusal(
+      () => applyCleanupDecisions(points, { accept: [spike], reject: [] }),
+      'point 3: the height changed to 29.00 m since this was proposed (from 30.00 m); reload the route',
+      'conflict',
+    );
+    expectRefusal(
+      () => applyCleanupDecisions(points, { accept: [{ ...spike, from: 29 }], reject: [{ ...spike, from: 29 }] }),
+      'point 3: a proposal for this point is both accepted and rejected',
+      'invalid',
+    );
+    expectRefusal(
+      () =>
+        applyCleanupDecisions(points, {
+          accept: [
+            { ...spike, from: 29 },
+            { ...spike, from: 29, kind: 'smoothing' },
+          ],
+          reject: [],
+        }),
+      'point 3: two height changes for one point; accept only one',
+      'invalid',
+    );
+    expectRefusal(
+      () => applyCleanupDecisions(points, { accept: [{ ...spike, index: 9 }], reject: [] }),
+      'point 10: there is no point 10 on this route',
+      'invalid',
+    );
   });
 
   it('never changes its input', () => {

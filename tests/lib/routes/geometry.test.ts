@@ -3,8 +3,20 @@ import { Geodesic } from 'geographiclib-geodesic';
 import { computeRouteGeometry, type GeometryInput } from '../../../lib/routes/geometry';
 import { RouteEditError } from '../../../lib/routes/errors';
 
-const station = (c: number | null, z: number, excluded = false): GeometryInput => ({ latitude: null, longitude: null, chainageM: c, elevationM: z, excluded });
-const placed = (lat: number, lon: number, z: number, excluded = false): GeometryInput => ({ latitude: lat, longitude: lon, chainageM: null, elevationM: z, excluded });
+const station = (c: number | null, z: number, excluded = false): GeometryInput => ({
+  latitude: null,
+  longitude: null,
+  chainageM: c,
+  elevationM: z,
+  excluded,
+});
+const placed = (lat: number, lon: number, z: number, excluded = false): GeometryInput => ({
+  latitude: lat,
+  longitude: lon,
+  chainageM: null,
+  elevationM: z,
+  excluded,
+});
 
 describe('computeRouteGeometry', () => {
   it('station profiles keep their chainage; slope length is the sum of √(run² + rise²)', () => {
@@ -36,7 +48,9 @@ describe('computeRouteGeometry', () => {
   });
 
   it('refuses chainage going backwards or missing, naming the point', () => {
-    expect(() => computeRouteGeometry([station(0, 1), station(50, 2), station(40, 3)])).toThrow('point 3: chainage 40.00 m is less than 50.00 m at point 2; points must run in order along the route');
+    expect(() => computeRouteGeometry([station(0, 1), station(50, 2), station(40, 3)])).toThrow(
+      'point 3: chainage 40.00 m is less than 50.00 m at point 2; points must run in order along the route',
+    );
     expect(() => computeRouteGeometry([station(0, 1), station(null, 2)])).toThrow(RouteEditError);
     // An excluded point out of order does not block the save.
     expect(computeRouteGeometry([station(0, 1), station(40, 3, true), station(30, 2)]).lengthM).toBe(30);

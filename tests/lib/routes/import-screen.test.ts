@@ -13,12 +13,19 @@ describe('the import screens’ logic', () => {
   it('inspects a semicolon CSV, guesses the mapping, and the options it builds parse the file', () => {
     const text = fixture('handheld-semicolon.csv').replace(/^\uFEFF/, '');
     const inspection = inspectSurveyText(text);
-    expect(inspection).toMatchObject({ kind: 'csv', suggestedFormat: 'gps-csv', dialect: { delimiter: ';', decimalComma: true, hasHeader: true } });
+    expect(inspection).toMatchObject({
+      kind: 'csv',
+      suggestedFormat: 'gps-csv',
+      dialect: { delimiter: ';', decimalComma: true, hasHeader: true },
+    });
     if (inspection.kind !== 'csv') throw new Error('csv expected');
     expect(inspection.sampleRows[0]).toEqual(['45,501200', '11,802400', '2665,4', '2024-05-04T07:10:00Z']);
     const draft = initialMappingDraft(inspection, 'handheld_walk-may.csv');
     expect(draft.name).toBe('handheld walk may');
-    expect(draft.gps).toMatchObject({ mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3 }, elevationUnit: 'ft' });
+    expect(draft.gps).toMatchObject({
+      mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3 },
+      elevationUnit: 'ft',
+    });
     const built = mappingToOptions(draft, 'metric');
     if (!('options' in built)) throw new Error(JSON.stringify(built.errors));
     const preview = buildImportPreview(parseSurveyText(text, built.options));
@@ -33,16 +40,25 @@ describe('the import screens’ logic', () => {
     expect(inspectSurveyText(fixture('stations.csv')).suggestedFormat).toBe('station-csv');
     expect(inspectSurveyText(fixture('walked-route.gpx')).kind).toBe('gpx');
     const draft = initialMappingDraft(level, 'book.csv');
-    expect(mappingToOptions(draft, 'us')).toEqual({ errors: { startElevationM: ['Reduced level of the first station must be a number'] } });
+    expect(mappingToOptions(draft, 'us')).toEqual({
+      errors: { startElevationM: ['Reduced level of the first station must be a number'] },
+    });
     // Typed with the project's decimal mark: "131,234" in a comma project, "131.234" in a point project.
     setProjectDecimalMark(',');
     const typed = mappingToOptions({ ...draft, fieldBook: { ...draft.fieldBook, startElevation: '131,234' } }, 'us');
     setProjectDecimalMark('.');
-    const pointTyped = mappingToOptions({ ...draft, fieldBook: { ...draft.fieldBook, startElevation: '131.234' } }, 'us');
+    const pointTyped = mappingToOptions(
+      { ...draft, fieldBook: { ...draft.fieldBook, startElevation: '131.234' } },
+      'us',
+    );
     setProjectDecimalMark(null);
     // 131.234 ft × 0.3048 m/ft = 40.0001232 m
-    expect('options' in typed && typed.options.format === 'level-book-csv' && typed.options.startElevationM).toBeCloseTo(40.0001232, 7);
-    expect('options' in pointTyped && pointTyped.options.format === 'level-book-csv' && pointTyped.options.startElevationM).toBeCloseTo(40.0001232, 7);
+    expect(
+      'options' in typed && typed.options.format === 'level-book-csv' && typed.options.startElevationM,
+    ).toBeCloseTo(40.0001232, 7);
+    expect(
+      'options' in pointTyped && pointTyped.options.format === 'level-book-csv' && pointTyped.options.startElevationM,
+    ).toBeCloseTo(40.0001232, 7);
   });
 
   it('a delimiter chosen on screen overrides the detected one', () => {

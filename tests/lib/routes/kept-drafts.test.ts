@@ -4,7 +4,18 @@ import { keepDraft, keptDraft } from '../../../lib/routes/kept-drafts';
 import type { RoutePointView } from '../../../lib/routes/types';
 
 const point = (seq: number, elevationM: number) =>
-  ({ seq, latitude: null, longitude: null, chainageM: seq * 10, elevationM, rawElevationM: elevationM, label: null, heightSource: 'gps', confidenceM: null, excluded: false }) as unknown as RoutePointView;
+  ({
+    seq,
+    latitude: null,
+    longitude: null,
+    chainageM: seq * 10,
+    elevationM,
+    rawElevationM: elevationM,
+    label: null,
+    heightSource: 'gps',
+    confidenceM: null,
+    excluded: false,
+  }) as unknown as RoutePointView;
 
 describe('route-table edits kept across a section change', () => {
   const saved = draftFromPoints([point(0, 100), point(1, 98)]);

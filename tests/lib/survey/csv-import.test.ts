@@ -9,7 +9,8 @@ import { ParsedSurveySchema } from '../../../lib/survey/parsed-survey';
 import { sniffSurveyFile } from '../../../lib/survey/sniff';
 import { parseStationCsv } from '../../../lib/survey/station-csv';
 
-const fixtureBytes = (name: string) => new Uint8Array(readFileSync(path.join(__dirname, '../../fixtures/survey', name)));
+const fixtureBytes = (name: string) =>
+  new Uint8Array(readFileSync(path.join(__dirname, '../../fixtures/survey', name)));
 
 describe('CSV dialect detection', () => {
   it.each([
@@ -35,7 +36,14 @@ describe('CSV dialect detection', () => {
 
 describe('column mapping guess (separate from parsing, for the mapping screen)', () => {
   it('maps common phone-app headers', () => {
-    const g = guessGpsColumnMapping(['Time (UTC)', 'Latitude', 'Longitude', 'Altitude (ft)', 'Name', 'Vertical accuracy']);
+    const g = guessGpsColumnMapping([
+      'Time (UTC)',
+      'Latitude',
+      'Longitude',
+      'Altitude (ft)',
+      'Name',
+      'Vertical accuracy',
+    ]);
     expect(g.mapping).toEqual({ time: 0, latitude: 1, longitude: 2, elevation: 3, name: 4, accuracy: 5 });
     expect(g.elevationUnit).toBe('ft');
     expect(g.accuracyIsVertical).toBe(true);
@@ -66,13 +74,31 @@ describe('parseGpsCsv', () => {
     const s = parseGpsCsv(text);
     expect(ParsedSurveySchema.safeParse(s).success).toBe(true);
     expect(s.points).toHaveLength(8);
-    expect(s.points[0]).toMatchObject({ order: 0, lat: 45.5012, lon: 11.8024, chainageM: 0, elevationM: 812.4, label: 'Alder Spring intake', heightSource: 'gps', time: '2024-05-04T07:10:00.000Z' });
+    expect(s.points[0]).toMatchObject({
+      order: 0,
+      lat: 45.5012,
+      lon: 11.8024,
+      chainageM: 0,
+      elevationM: 812.4,
+      label: 'Alder Spring intake',
+      heightSource: 'gps',
+      time: '2024-05-04T07:10:00.000Z',
+    });
     // Horizontal accuracy 3.9 m × 1.5 (consumer vertical/horizontal ratio, core.md §6.4 [R28], low authority).
     expect(s.points[0].confidence).toBeCloseTo(5.85, 12);
-    const track = chainageAlongTrack(s.points.map((p) => ({ latitudeDeg: p.lat as number, longitudeDeg: p.lon as number, elevationM: p.elevationM })));
+    const track = chainageAlongTrack(
+      s.points.map((p) => ({ latitudeDeg: p.lat as number, longitudeDeg: p.lon as number, elevationM: p.elevationM })),
+    );
     expect(s.points[7].chainageM).toBeCloseTo(track.totalHorizontalM, 9);
     expect(s.stats.totalSlopeLengthM).toBeCloseTo(track.totalSlopeM, 9);
-    expect(s.stats).toMatchObject({ format: 'gps-csv', pointCount: 8, rowsRead: 8, minElevationM: 790.7, maxElevationM: 812.4, duplicateCount: 0 });
+    expect(s.stats).toMatchObject({
+      format: 'gps-csv',
+      pointCount: 8,
+      rowsRead: 8,
+      minElevationM: 790.7,
+      maxElevationM: 812.4,
+      duplicateCount: 0,
+    });
     expect(s.warnings.map((w) => w.code)).toContain('consumer-gps-heights');
   });
 
@@ -97,14 +123,23 @@ describe('parseGpsCsv', () => {
   });
 
   it('duplicate points are kept and flagged with their line', () => {
-    const s = parseGpsCsv('lat,lon,ele\n45.5,11.8,800\n45.5001,11.8001,799\n45.5001,11.8001,799\n45.5002,11.8002,798\n');
+    const s = parseGpsCsv(
+      'lat,lon,ele\n45.5,11.8,800\n45.5001,11.8001,799\n45.5001,11.8001,799\n45.5002,11.8002,798\n',
+    );
     expect(s.points).toHaveLength(4);
     expect(s.stats.duplicateCount).toBe(1);
-    expect(s.warnings.find((w) => w.code === 'duplicate-point')).toEqual({ code: 'duplicate-point', message: 'exact duplicate of point 2', line: 4, index: 2 });
+    expect(s.warnings.find((w) => w.code === 'duplicate-point')).toEqual({
+      code: 'duplicate-point',
+      message: 'exact duplicate of point 2',
+      line: 4,
+      index: 2,
+    });
   });
 
   it('GPS time going backwards is flagged, not dropped', () => {
-    const s = parseGpsCsv('lat,lon,ele,time\n45.5,11.8,800,2024-05-04T07:10:00Z\n45.5001,11.8001,799,2024-05-04T07:09:00Z\n');
+    const s = parseGpsCsv(
+      'lat,lon,ele,time\n45.5,11.8,800,2024-05-04T07:10:00Z\n45.5001,11.8001,799,2024-05-04T07:09:00Z\n',
+    );
     expect(s.warnings.find((w) => w.code === 'time-backwards')?.line).toBe(3);
   });
 

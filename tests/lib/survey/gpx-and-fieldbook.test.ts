@@ -80,9 +80,17 @@ describe('parseGpx (GPX 1.1)', () => {
 
 describe('field-book CSVs', () => {
   it('inclinometer traverse: legs reduced to chainage and height from the first mark', () => {
-    const s = parseInclinometerCsv(fixture('inclinometer.csv'), { startElevationM: 812.4, startLabel: 'Alder Spring intake' });
+    const s = parseInclinometerCsv(fixture('inclinometer.csv'), {
+      startElevationM: 812.4,
+      startLabel: 'Alder Spring intake',
+    });
     expect(s.points).toHaveLength(6);
-    expect(s.points[0]).toMatchObject({ chainageM: 0, elevationM: 812.4, label: 'Alder Spring intake', heightSource: 'inclinometer' });
+    expect(s.points[0]).toMatchObject({
+      chainageM: 0,
+      elevationM: 812.4,
+      label: 'Alder Spring intake',
+      heightSource: 'inclinometer',
+    });
     const rad = Math.PI / 180;
     expect(s.points[1].chainageM).toBeCloseTo(30 * Math.cos(4.5 * rad), 12);
     expect(s.points[1].elevationM).toBeCloseTo(812.4 - 30 * Math.sin(4.5 * rad), 12);
@@ -96,13 +104,19 @@ describe('field-book CSVs', () => {
   });
 
   it('level book: the published PNG Unitech example (Level Books & Arithmetic Checks) reduces to its levels, with closure', () => {
-    const s = parseLevelBookCsv(fixture('level-book.csv'), { startElevationM: 40, method: 'height-of-collimation', closingElevationM: 42.88 });
+    const s = parseLevelBookCsv(fixture('level-book.csv'), {
+      startElevationM: 40,
+      method: 'height-of-collimation',
+      closingElevationM: 42.88,
+    });
     const published = [40.0, 44.323, 47.026, 53.123, 44.567, 42.849, 44.132, 42.883];
     s.points.forEach((p, i) => expect(p.elevationM).toBeCloseTo(published[i], 3));
     expect(s.points[3].label).toBe('D');
     expect(s.points[0].heightSource).toBe('level');
     expect(s.stats.closureErrorM).toBeCloseTo(0.003, 9);
-    expect(s.warnings.find((w) => w.code === 'level-closure')?.message).toBe('the run closes 3 mm above the known closing level');
+    expect(s.warnings.find((w) => w.code === 'level-closure')?.message).toBe(
+      'the run closes 3 mm above the known closing level',
+    );
   });
 
   it('level book by rise and fall, hose level', () => {

@@ -47,12 +47,18 @@ describe('dates in either order are asked, never guessed', () => {
   });
 });
 
-describe('times without an offset are read in the project\'s zone, the same everywhere', () => {
+describe("times without an offset are read in the project's zone, the same everywhere", () => {
   it('wall-clock time in a zone, across a daylight-saving change (IANA tz rules via Intl)', () => {
     // Denver: MST (UTC−7) in January, MDT (UTC−6) in July.
-    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 1, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver'))).toBe('2024-01-15T14:30:00.000Z');
-    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver'))).toBe('2024-07-15T13:30:00.000Z');
-    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'UTC'))).toBe('2024-07-15T07:30:00.000Z');
+    expect(
+      iso(zonedTimeToUtcMs({ year: 2024, month: 1, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver')),
+    ).toBe('2024-01-15T14:30:00.000Z');
+    expect(
+      iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'America/Denver')),
+    ).toBe('2024-07-15T13:30:00.000Z');
+    expect(iso(zonedTimeToUtcMs({ year: 2024, month: 7, day: 15, hour: 7, minute: 30, second: 0 }, 'UTC'))).toBe(
+      '2024-07-15T07:30:00.000Z',
+    );
   });
 
   it('a time with its own offset keeps it, whatever zone is chosen', () => {
@@ -63,7 +69,12 @@ describe('times without an offset are read in the project\'s zone, the same ever
   const csv = 'lat,lon,ele,time\n46.10000,7.20000,812.4,01.05.2024 07:30\n46.10010,7.20010,811.9,01.05.2024 07:31\n';
 
   it('a phone CSV with an ambiguous date stops with a clear question naming the line and column', () => {
-    const options = SurveyImportOptionsSchema.parse({ format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm' });
+    const options = SurveyImportOptionsSchema.parse({
+      format: 'gps-csv',
+      name: 'walk',
+      mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null },
+      elevationUnit: 'm',
+    });
     try {
       parseSurveyText(csv, options);
       throw new Error('expected an ambiguous-date error');
@@ -78,8 +89,12 @@ describe('times without an offset are read in the project\'s zone, the same ever
 
   it('with the order and the project zone chosen, the same file gives the same UTC times wherever it is read', () => {
     const options = SurveyImportOptionsSchema.parse({
-      format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm',
-      timeZone: 'Europe/Vienna', dateOrder: 'day-first',
+      format: 'gps-csv',
+      name: 'walk',
+      mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null },
+      elevationUnit: 'm',
+      timeZone: 'Europe/Vienna',
+      dateOrder: 'day-first',
     });
     const survey = parseSurveyText(csv, options);
     // 1 May 2024 07:30 in Vienna (CEST, UTC+2) is 05:30 UTC.
@@ -87,7 +102,13 @@ describe('times without an offset are read in the project\'s zone, the same ever
   });
 
   it('refuses a time zone the platform does not know, naming the field', () => {
-    const result = SurveyImportOptionsSchema.safeParse({ format: 'gps-csv', name: 'walk', mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null }, elevationUnit: 'm', timeZone: 'Mars/Olympus' });
+    const result = SurveyImportOptionsSchema.safeParse({
+      format: 'gps-csv',
+      name: 'walk',
+      mapping: { latitude: 0, longitude: 1, elevation: 2, time: 3, name: null, accuracy: null },
+      elevationUnit: 'm',
+      timeZone: 'Mars/Olympus',
+    });
     expect(result.success).toBe(false);
     expect(result.error?.issues[0].path).toEqual(['timeZone']);
   });

@@ -53,15 +53,24 @@ describe('number cells are read without backtracking', () => {
 
   it('still reads every ordinary way of writing a number', () => {
     const cases: [string, boolean, number][] = [
-      ['12', false, 12], ['-1.5e3', false, -1500], ['.5', false, 0.5], ['5.', false, 5], ['+7.25', false, 7.25],
-      ['512,4', true, 512.4], [',5', true, 0.5], ['1E-2', false, 0.01],
+      ['12', false, 12],
+      ['-1.5e3', false, -1500],
+      ['.5', false, 0.5],
+      ['5.', false, 5],
+      ['+7.25', false, 7.25],
+      ['512,4', true, 512.4],
+      [',5', true, 0.5],
+      ['1E-2', false, 0.01],
     ];
     for (const [cell, comma, value] of cases) expect(readNumberCell(cell, comma, place)).toBeCloseTo(value, 12);
-    for (const bad of ['1,234.5', 'NaN', 'Infinity', '1e', '--1', '1.2.3', '0x10', '١٢']) expect(() => readNumberCell(bad, false, place)).toThrow(SurveyImportError);
+    for (const bad of ['1,234.5', 'NaN', 'Infinity', '1e', '--1', '1.2.3', '0x10', '١٢'])
+      expect(() => readNumberCell(bad, false, place)).toThrow(SurveyImportError);
   });
 
   it(`refuses a cell longer than ${MAX_NUMBER_CELL_CHARS} characters even when it is all digits`, () => {
-    expect(() => readNumberCell('9'.repeat(MAX_NUMBER_CELL_CHARS + 1), false, place)).toThrow(/too long to be a number/);
+    expect(() => readNumberCell('9'.repeat(MAX_NUMBER_CELL_CHARS + 1), false, place)).toThrow(
+      /too long to be a number/,
+    );
     expect(readNumberCell('9'.repeat(MAX_NUMBER_CELL_CHARS), false, place)).toBeGreaterThan(1e63);
   });
 
@@ -75,7 +84,11 @@ describe('dialect and header guessing stay fast on hostile first lines', () => {
   it('guesses the dialect of a file whose cells are 40 kB digit runs in well under a second', () => {
     const text = `lat;lon;ele\n${hostileCell(40_000)};${hostileCell(40_000)};${hostileCell(40_000)}\n52,1;-1,2;100,5\n`;
     expect(timeMs(() => detectCsvDialect(text))).toBeLessThan(100);
-    expect(detectCsvDialect('lat;lon;ele\n52,1;-1,2;100,5\n52,2;-1,3;101,5\n')).toMatchObject({ delimiter: ';', decimalComma: true, hasHeader: true });
+    expect(detectCsvDialect('lat;lon;ele\n52,1;-1,2;100,5\n52,2;-1,3;101,5\n')).toMatchObject({
+      delimiter: ';',
+      decimalComma: true,
+      hasHeader: true,
+    });
   });
 
   it('normalises a 40 kB header of unclosed brackets and separators quickly', () => {
@@ -87,8 +100,12 @@ describe('dialect and header guessing stay fast on hostile first lines', () => {
   it('refuses a whole 40 kB hostile survey file in well under a second', () => {
     const text = `lat,lon,ele\n52.1,-1.2,${hostileCell(40_000)}\n`;
     const mapping = { latitude: 0, longitude: 1, elevation: 2, time: null, name: null, accuracy: null };
-    expect(timeMs(() => parseGpsCsv(text, { mapping, elevationUnit: 'm', heightSource: 'gps' } as never))).toBeLessThan(200);
-    expect(() => parseGpsCsv(text, { mapping, elevationUnit: 'm', heightSource: 'gps' } as never)).toThrow(SurveyImportError);
+    expect(timeMs(() => parseGpsCsv(text, { mapping, elevationUnit: 'm', heightSource: 'gps' } as never))).toBeLessThan(
+      200,
+    );
+    expect(() => parseGpsCsv(text, { mapping, elevationUnit: 'm', heightSource: 'gps' } as never)).toThrow(
+      SurveyImportError,
+    );
   });
 });
 
@@ -97,6 +114,8 @@ describe('imports have a point cap', () => {
     const { buildParsedSurvey } = await import('@/lib/survey/build-survey');
     const { MAX_ROUTE_POINTS } = await import('@/lib/validations/routes');
     const drafts = Array.from({ length: MAX_ROUTE_POINTS + 1 }, (_, i) => ({ chainageM: i, elevationM: 100 }));
-    expect(() => buildParsedSurvey({ format: 'station-csv', drafts, heightSource: 'typed', rowsRead: drafts.length })).toThrow(/200,001 points; a route can hold at most 200,000/);
+    expect(() =>
+      buildParsedSurvey({ format: 'station-csv', drafts, heightSource: 'typed', rowsRead: drafts.length }),
+    ).toThrow(/200,001 points; a route can hold at most 200,000/);
   });
 });

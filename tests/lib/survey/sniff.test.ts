@@ -8,7 +8,11 @@ describe('sniffSurveyFile', () => {
     expect(r).toEqual({ text: 'lat,lon,ele\n', hadByteOrderMark: true });
   });
   it('falls back to Windows-1252 for older exports that are not valid UTF-8', () => {
-    const latin = new Uint8Array([...new TextEncoder().encode('name,lat,lon,ele\nSource '), 0xe9, ...new TextEncoder().encode(',45.5,11.8,800\n')]);
+    const latin = new Uint8Array([
+      ...new TextEncoder().encode('name,lat,lon,ele\nSource '),
+      0xe9,
+      ...new TextEncoder().encode(',45.5,11.8,800\n'),
+    ]);
     const r = sniffSurveyFile(latin);
     expect(r.text).toContain('Source é');
   });
@@ -16,7 +20,9 @@ describe('sniffSurveyFile', () => {
     expect(() => sniffSurveyFile(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 1, 2]), { maxBytes: 4 })).toThrow(/limit/);
   });
   it('sniffed text goes straight into a parser', () => {
-    const { text } = sniffSurveyFile(new TextEncoder().encode('\ufefflat,lon,ele\r\n45.5,11.8,800\r\n45.6,11.9,790\r\n'));
+    const { text } = sniffSurveyFile(
+      new TextEncoder().encode('\ufefflat,lon,ele\r\n45.5,11.8,800\r\n45.6,11.9,790\r\n'),
+    );
     expect(parseGpsCsv(text).points).toHaveLength(2);
   });
   it('reads a spreadsheet\'s "Unicode text" export (UTF-16 LE with a byte-order mark, tab separated) instead of refusing it as binary', () => {

@@ -25,10 +25,16 @@ describe('every number box reads with the project decimal mark', () => {
 
   it('no component or helper reads typed numbers its own way (one parser: lib/units/typed-number.ts)', () => {
     const root = path.resolve(__dirname, '../../..');
-    const files = execFileSync('git', ['ls-files', 'components', 'app', 'lib'], { cwd: root, encoding: 'utf8' }).split('\n').filter((file) => /\.tsx?$/.test(file));
-    // Survey files have their own per-file decimal-comma dialect (lib/survey); display formatting strips grouping commas.
+    const files = execFileSync('git', ['ls-files', 'components', 'app', 'lib'], { cwd: root, encoding: 'utf8' })
+      .split('\n')
+      .filter((file) => /\.tsx?$/.test(file));
+    // Survey files have their own per-file decimal-comma dialect (lib/survey); display formatting strips grouping
+    // commas.
     const allowed = new Set(['lib/units/typed-number.ts', 'lib/survey/cells.ts', 'lib/units/number.ts']);
-    const adHoc = files.filter((file) => !allowed.has(file) && /replace\((',', '\.'|\/,\/g, '')\)/.test(readFileSync(path.join(root, file), 'utf8')));
+    const adHoc = files.filter(
+      (file) =>
+        !allowed.has(file) && /replace\((',', '\.'|\/,\/g, '')\)/.test(readFileSync(path.join(root, file), 'utf8')),
+    );
     expect(adHoc).toEqual([]);
   });
 });

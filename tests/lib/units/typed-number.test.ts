@@ -50,7 +50,7 @@ describe('parseTypedNumber: one reading of typed numbers, by the project decimal
     expect(value(formatTypedNumber(-0.25, '.'), '.')).toBe(-0.25);
   });
 
-  it('reads a locale\'s decimal mark from Intl: de-DE comma, en-US point', () => {
+  it("reads a locale's decimal mark from Intl: de-DE comma, en-US point", () => {
     expect(localeDecimalMark('de-DE')).toBe(',');
     expect(localeDecimalMark('en-US')).toBe('.');
   });

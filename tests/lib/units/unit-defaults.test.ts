@@ -34,14 +34,23 @@ describe('defaults by unit system', () => {
     expect(formatQuantity('temperature', metric.waterTemperatureC, 'metric')).toBe('20 °C');
   });
 
-  it('a person\'s daily use starts on the figure printed in the project\'s units', () => {
+  it("a person's daily use starts on the figure printed in the project's units", () => {
     expect(PER_PERSON_DEMAND_FIGURES.find((f) => f.id === us.perPersonFigureId)?.published.unit).toMatch(/US gal/);
     expect(PER_PERSON_DEMAND_FIGURES.find((f) => f.id === metric.perPersonFigureId)?.published.unit).toMatch(/^L\//);
   });
 
-  it('a new line\'s starting design follows the project\'s units', () => {
-    const stations = [{ chainageM: 0, groundElevationM: 240 }, { chainageM: 400, groundElevationM: 200 }];
-    expect(startingDesign(stations, 'us')).toMatchObject({ stretches: [{ fromM: 0, toM: 400, pipe: 'pe-d2239-sidr7-1.5in' }], settings: { defaultCoverM: 0.762 } });
-    expect(startingDesign(stations, 'metric')).toMatchObject({ stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }], settings: {} });
+  it("a new line's starting design follows the project's units", () => {
+    const stations = [
+      { chainageM: 0, groundElevationM: 240 },
+      { chainageM: 400, groundElevationM: 200 },
+    ];
+    expect(startingDesign(stations, 'us')).toMatchObject({
+      stretches: [{ fromM: 0, toM: 400, pipe: 'pe-d2239-sidr7-1.5in' }],
+      settings: { defaultCoverM: 0.762 },
+    });
+    expect(startingDesign(stations, 'metric')).toMatchObject({
+      stretches: [{ fromM: 0, toM: 400, pipe: 'pe100-iso4427-sdr11-50mm' }],
+      settings: {},
+    });
   });
 });

@@ -22,8 +22,21 @@ import {
 } from '@/lib/units';
 
 const QUANTITIES: Quantity[] = [
-  'length', 'chainage', 'elevation', 'head', 'diameter', 'velocity', 'designFlow', 'flow',
-  'flowPerHour', 'flowPerDay', 'volume', 'pressure', 'area', 'depthPerDay', 'volumePerDay',
+  'length',
+  'chainage',
+  'elevation',
+  'head',
+  'diameter',
+  'velocity',
+  'designFlow',
+  'flow',
+  'flowPerHour',
+  'flowPerDay',
+  'volume',
+  'pressure',
+  'area',
+  'depthPerDay',
+  'volumePerDay',
 ];
 
 /** |a - b| relative to b, for factors that are exact by definition but pass through binary floating point. */
@@ -72,10 +85,15 @@ describe('unit sizes against their exact definitions', () => {
 
   it('round-trips every quantity in both systems', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...QUANTITIES), fc.constantFrom(...UNIT_SYSTEMS), fc.double({ min: -1e6, max: 1e6, noNaN: true }), (quantity, system, valueSi) => {
-        const back = fromDisplay(quantity, toDisplay(quantity, valueSi, system), system);
-        expect(Math.abs(back - valueSi)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(valueSi)));
-      }),
+      fc.property(
+        fc.constantFrom(...QUANTITIES),
+        fc.constantFrom(...UNIT_SYSTEMS),
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        (quantity, system, valueSi) => {
+          const back = fromDisplay(quantity, toDisplay(quantity, valueSi, system), system);
+          expect(Math.abs(back - valueSi)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(valueSi)));
+        },
+      ),
     );
   });
 });
@@ -85,17 +103,51 @@ describe('unit words', () => {
     const metric = Object.fromEntries(QUANTITIES.map((q) => [q, unitOf(q, 'metric')]));
     const us = Object.fromEntries(QUANTITIES.map((q) => [q, unitOf(q, 'us')]));
     expect(metric).toEqual({
-      length: 'm', chainage: 'm', elevation: 'm', head: 'm', diameter: 'mm', velocity: 'm/s', designFlow: 'L/s', flow: 'L/min',
-      flowPerHour: 'L/h', flowPerDay: 'L/day', volume: 'L', pressure: 'kPa', area: 'm²', depthPerDay: 'mm/day', volumePerDay: 'L/day',
+      length: 'm',
+      chainage: 'm',
+      elevation: 'm',
+      head: 'm',
+      diameter: 'mm',
+      velocity: 'm/s',
+      designFlow: 'L/s',
+      flow: 'L/min',
+      flowPerHour: 'L/h',
+      flowPerDay: 'L/day',
+      volume: 'L',
+      pressure: 'kPa',
+      area: 'm²',
+      depthPerDay: 'mm/day',
+      volumePerDay: 'L/day',
     });
     expect(us).toEqual({
-      length: 'ft', chainage: 'ft', elevation: 'ft', head: 'ft', diameter: 'in', velocity: 'ft/s', designFlow: 'US gpm', flow: 'US gpm',
-      flowPerHour: 'US gal/h', flowPerDay: 'US gal/day', volume: 'US gal', pressure: 'psi', area: 'ft²', depthPerDay: 'in/week', volumePerDay: 'US gal/day',
+      length: 'ft',
+      chainage: 'ft',
+      elevation: 'ft',
+      head: 'ft',
+      diameter: 'in',
+      velocity: 'ft/s',
+      designFlow: 'US gpm',
+      flow: 'US gpm',
+      flowPerHour: 'US gal/h',
+      flowPerDay: 'US gal/day',
+      volume: 'US gal',
+      pressure: 'psi',
+      area: 'ft²',
+      depthPerDay: 'in/week',
+      volumePerDay: 'US gal/day',
     });
   });
 
   it('gives the line designer its labels from the same table', () => {
-    expect(displayUnits('us')).toEqual({ system: 'us', length: 'ft', head: 'ft', pressure: 'psi', flow: 'US gpm', diameter: 'in', velocity: 'ft/s' });
+    expect(displayUnits('us')).toEqual({
+      system: 'us',
+      length: 'ft',
+      head: 'ft',
+      pressure: 'psi',
+      flow: 'US gpm',
+      diameter: 'in',
+      velocity: 'ft/s',
+    });
     expect(displayUnits('metric').flow).toBe(unitOf('designFlow', 'metric'));
     expect(unitSystemName('metric')).toBe('Metric (m, L/s, kPa)');
     expect(unitSystemName('us')).toBe('US customary (ft, US gpm, psi)');
@@ -118,16 +170,30 @@ describe('the one number rule', () => {
   });
 
   it('picks fewer decimals as the number grows when asked for auto', () => {
-    expect([0.12345, 1.2345, 12.345, 123.45, 12_345.6].map((v) => formatNumber(v))).toEqual(['0.123', '1.23', '12.3', '123', '12,346']);
+    expect([0.12345, 1.2345, 12.345, 123.45, 12_345.6].map((v) => formatNumber(v))).toEqual([
+      '0.123',
+      '1.23',
+      '12.3',
+      '123',
+      '12,346',
+    ]);
   });
 
   it('always prints text that reads back to the value within half the last place', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e9, max: 1e9, noNaN: true }), fc.integer({ min: 0, max: 4 }), (value, decimals) => {
-        const text = formatNumber(value, decimals);
-        expect(text).toMatch(decimals === 0 ? /^-?\d{1,3}(,\d{3})*$/ : new RegExp(`^-?\\d{1,3}(,\\d{3})*\\.\\d{${decimals}}$`));
-        expect(Math.abs(Number(text.replace(/,/g, '')) - value)).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9) + Math.abs(value) * 1e-15);
-      }),
+      fc.property(
+        fc.double({ min: -1e9, max: 1e9, noNaN: true }),
+        fc.integer({ min: 0, max: 4 }),
+        (value, decimals) => {
+          const text = formatNumber(value, decimals);
+          expect(text).toMatch(
+            decimals === 0 ? /^-?\d{1,3}(,\d{3})*$/ : new RegExp(`^-?\\d{1,3}(,\\d{3})*\\.\\d{${decimals}}$`),
+          );
+          expect(Math.abs(Number(text.replace(/,/g, '')) - value)).toBeLessThanOrEqual(
+            0.5 * 10 ** -decimals * (1 + 1e-9) + Math.abs(value) * 1e-15,
+          );
+        },
+      ),
     );
   });
 });

@@ -1,6 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { between, chainage, elevation, finite, fraction, hourOfDay, metres, nonNegative, positive, whole } from '@/lib/validations/numbers';
+import {
+  between,
+  chainage,
+  elevation,
+  finite,
+  fraction,
+  hourOfDay,
+  metres,
+  nonNegative,
+  positive,
+  whole,
+} from '@/lib/validations/numbers';
 import { frostDepth } from '@/lib/validations/projects';
 import { RoutePointInputSchema } from '@/lib/validations/routes';
 import { TankSchema } from '@/lib/validations/tanks';
@@ -53,12 +64,27 @@ describe('the one set of number helpers', () => {
   });
 
   it('is the wording of the schemas that use it (route points, tanks, project frost depth)', () => {
-    const point = { sourceSeq: null, latitude: 95, longitude: 0, chainageM: -1, elevationM: 0, label: null, heightSource: 'gps', confidenceM: null, excluded: false };
+    const point = {
+      sourceSeq: null,
+      latitude: 95,
+      longitude: 0,
+      chainageM: -1,
+      elevationM: 0,
+      label: null,
+      heightSource: 'gps',
+      confidenceM: null,
+      excluded: false,
+    };
     const r = RoutePointInputSchema.safeParse(point);
     expect(r.success).toBe(false);
-    expect(r.error?.issues.map((i) => i.message)).toEqual(['Latitude must be at most 90 degrees', 'Chainage must be at least 0 m']);
+    expect(r.error?.issues.map((i) => i.message)).toEqual([
+      'Latitude must be at most 90 degrees',
+      'Chainage must be at least 0 m',
+    ]);
     expect(words(frostDepth, 11)).toEqual(['Frost depth must be at most 10 m']);
     const tank = TankSchema.safeParse({ name: 'Header tank', volumeM3: 0 });
-    expect(tank.error?.issues.find((i) => i.path.join('.') === 'volumeM3')?.message).toBe('Tank volume must be more than 0');
+    expect(tank.error?.issues.find((i) => i.path.join('.') === 'volumeM3')?.message).toBe(
+      'Tank volume must be more than 0',
+    );
   });
 });

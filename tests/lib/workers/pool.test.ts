@@ -27,7 +27,9 @@ describe('the worker pool', () => {
 
   it('stops a task at its time limit and says so (422)', async () => {
     const started = Date.now();
-    const error = await runInWorker('test.spin', { ms: 10_000, answer: 0 }, { timeLimitMs: 300 }).catch((e: unknown) => e);
+    const error = await runInWorker('test.spin', { ms: 10_000, answer: 0 }, { timeLimitMs: 300 }).catch(
+      (e: unknown) => e,
+    );
     expect(error).toBeInstanceOf(AppError);
     expect((error as AppError).status).toBe(422);
     expect(Date.now() - started).toBeLessThan(3000);
@@ -37,7 +39,12 @@ describe('the worker pool', () => {
 
   it('gives back a survey refusal as its own class, with its line and code', async () => {
     const bytes = new TextEncoder().encode('lat,lon,ele\n52.1,-1.2,100\n52.2,x,101\n');
-    const error = await runInWorker('survey.parse', { bytes, fileName: 'walk.csv', options: gpsOptions as never, routeId: '00000000-0000-4000-8000-000000000000' }).catch((e: unknown) => e);
+    const error = await runInWorker('survey.parse', {
+      bytes,
+      fileName: 'walk.csv',
+      options: gpsOptions as never,
+      routeId: '00000000-0000-4000-8000-000000000000',
+    }).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(SurveyImportError);
     expect((error as SurveyImportError).code).toBe('not-a-number');
     expect((error as SurveyImportError).line).toBe(3);

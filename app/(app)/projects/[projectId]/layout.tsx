@@ -4,7 +4,13 @@ import { DecimalMarkScope } from '@/components/ui/decimal-mark';
 import { RoleBadge } from '@/components/ui/role-badge';
 import { requireProjectPage } from '@/lib/auth/project-page';
 
-export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ projectId: string }> }) {
+export default async function ProjectLayout({
+  children,
+  params,
+}: {
+  children: ReactNode;
+  params: Promise<{ projectId: string }>;
+}) {
   const { project, role } = await requireProjectPage(params);
   return (
     <div className="space-y-5">

@@ -24,7 +24,11 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
       </Panel>
       <UpcomingSections />
       {(can(role, 'project.edit') || can(role, 'project.delete')) && (
-        <ProjectDangerZone project={project} canArchive={can(role, 'project.edit')} canDelete={can(role, 'project.delete')} />
+        <ProjectDangerZone
+          project={project}
+          canArchive={can(role, 'project.edit')}
+          canDelete={can(role, 'project.delete')}
+        />
       )}
     </div>
   );

@@ -26,8 +26,15 @@ export default async function PricesPage() {
       <div>
         <h1 className="text-2xl font-semibold text-creek-900">Pipe prices</h1>
         <p className="text-sm text-creek-700">
-          What {team.name} pays per metre of each pipe. Least-cost sizing on a project&apos;s <Link className="underline" href="/projects">network</Link> chooses
-          only among the pipes priced here. Back to the <Link className="underline" href="/team">team</Link>.
+          What {team.name} pays per metre of each pipe. Least-cost sizing on a project&apos;s{' '}
+          <Link className="underline" href="/projects">
+            network
+          </Link>{' '}
+          chooses only among the pipes priced here. Back to the{' '}
+          <Link className="underline" href="/team">
+            team
+          </Link>
+          .
         </p>
       </div>
       <Panel title="Price list">

@@ -18,7 +18,11 @@ export default async function AcceptInvitationPage({ searchParams }: { searchPar
       <div className="space-y-3 text-sm text-creek-800">
         <h1 className="text-xl font-semibold text-creek-900">This invitation cannot be used</h1>
         <p role="alert">{INVITATION_REFUSALS[view && view.state !== 'open' ? view.state : 'unknown']}</p>
-        <p><Link className="font-medium text-creek-600 underline" href="/sign-in">Go to sign-in</Link></p>
+        <p>
+          <Link className="font-medium text-creek-600 underline" href="/sign-in">
+            Go to sign-in
+          </Link>
+        </p>
       </div>
     );
   }
@@ -27,8 +31,8 @@ export default async function AcceptInvitationPage({ searchParams }: { searchPar
     <>
       <h1 className="mb-2 text-xl font-semibold text-creek-900">Join {view.teamName}</h1>
       <p className="mb-4 text-sm text-creek-700">
-        {view.inviterName ?? 'The team owner'} invites <strong>{view.email}</strong> to work on the team&apos;s water systems as{' '}
-        <strong>{ROLE_LABELS[view.role!]}</strong>.
+        {view.inviterName ?? 'The team owner'} invites <strong>{view.email}</strong> to work on the team&apos;s water
+        systems as <strong>{ROLE_LABELS[view.role!]}</strong>.
       </p>
       <AcceptInvitation token={token} email={view.email!} signedInAs={user?.email ?? null} />
     </>

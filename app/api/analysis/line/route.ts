@@ -5,13 +5,23 @@ import { userRoute } from '@/lib/api/route';
 import { AppError } from '@/lib/errors';
 import { enforce } from '@/lib/rate-limits';
 import { analysisToJson } from '@/lib/lines/analysis-json';
-import { ANALYSIS_LIMIT, AnalysisQuerySchema, LineInputSchema, MAX_STATELESS_ANALYSIS_BYTES, MAX_STATELESS_ANALYSIS_STATIONS } from '@/lib/validations/analysis';
+import {
+  ANALYSIS_LIMIT,
+  AnalysisQuerySchema,
+  LineInputSchema,
+  MAX_STATELESS_ANALYSIS_BYTES,
+  MAX_STATELESS_ANALYSIS_STATIONS,
+} from '@/lib/validations/analysis';
 import { LINE_DESIGN_WORDS } from '@/lib/validations/field-word-tables';
 import { parseOrThrow } from '@/lib/api/body';
 import { runInWorker } from '@/lib/workers/pool';
 
 const queryOf = (req: NextRequest) =>
-  parseOrThrow(AnalysisQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+  parseOrThrow(
+    AnalysisQuerySchema,
+    Object.fromEntries(req.nextUrl.searchParams),
+    'The address has options that are not valid',
+  );
 
 /**
  * Analyses a line given whole in the request (stations, stretches, ends, flow, settings; SI units)
@@ -21,7 +31,11 @@ const queryOf = (req: NextRequest) =>
  * through the same table and mapping, in the unit system `?units=` names (metric by default).
  */
 export const POST = userRoute(
-  { body: LineInputSchema, maxBodyBytes: MAX_STATELESS_ANALYSIS_BYTES, bodyWords: { table: LINE_DESIGN_WORDS, unitsOf: (_params, req) => queryOf(req).units } },
+  {
+    body: LineInputSchema,
+    maxBodyBytes: MAX_STATELESS_ANALYSIS_BYTES,
+    bodyWords: { table: LINE_DESIGN_WORDS, unitsOf: (_params, req) => queryOf(req).units },
+  },
   async ({ req, body, user }) => {
     const query = queryOf(req);
     if (body.stations.length > MAX_STATELESS_ANALYSIS_STATIONS) {
@@ -29,9 +43,11 @@ export const POST = userRoute(
       throw new AppError('bad_request', message, { stations: [message] });
     }
     await enforce(ANALYSIS_LIMIT, `user:${user.id}`, 'Too many analyses in a short time; wait a little and try again');
-    const analysis = await runInWorker('line.analyse', { line: body, profilePoints: query.profilePoints }).catch((error: unknown) => {
-      throw error instanceof HydraulicsInputError ? lineDesignRefusal(error, query.units, '') : error;
-    });
+    const analysis = await runInWorker('line.analyse', { line: body, profilePoints: query.profilePoints }).catch(
+      (error: unknown) => {
+        throw error instanceof HydraulicsInputError ? lineDesignRefusal(error, query.units, '') : error;
+      },
+    );
     return { analysis: analysisToJson(analysis) };
   },
 );

@@ -16,7 +16,11 @@ export const POST = publicRoute({ body: AcceptInvitationSchema }, async ({ req, 
     const fields: Record<string, string[]> = {};
     if (!body.name) fields.name = ['Enter your name'];
     if (!body.password) fields.password = ['Choose a password'];
-    throw new AppError('bad_request', 'Enter your name and a password to create your account, or sign in first', fields);
+    throw new AppError(
+      'bad_request',
+      'Enter your name and a password to create your account, or sign in first',
+      fields,
+    );
   }
   const passwordHash = await hashPassword(body.password);
   return { joined: await acceptInvitation(body.token, { as: 'new-account', name: body.name, passwordHash }) };

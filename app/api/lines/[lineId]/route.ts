@@ -13,7 +13,13 @@ export const GET = teamRoute({ params: LineParams, permission: 'design.view', te
 });
 
 export const PATCH = teamRoute(
-  { params: LineParams, body: UpdateLineSchema, permission: 'design.edit', teamOf, bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ lineId }) => unitSystemOfLine(lineId) } },
+  {
+    params: LineParams,
+    body: UpdateLineSchema,
+    permission: 'design.edit',
+    teamOf,
+    bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ lineId }) => unitSystemOfLine(lineId) },
+  },
   async ({ params, user, body }) => ({ line: await updateLine(params.lineId, user.id, body) }),
 );
 

@@ -10,7 +10,13 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'project.view'
 }));
 
 export const PATCH = teamRoute(
-  { params: ProjectParams, body: UpdateProjectSchema, bodyWords: inProjectUnits(PROJECT_WORDS), permission: 'project.edit', teamOf },
+  {
+    params: ProjectParams,
+    body: UpdateProjectSchema,
+    bodyWords: inProjectUnits(PROJECT_WORDS),
+    permission: 'project.edit',
+    teamOf,
+  },
   async ({ params, body }) => ({ project: await updateProject(params.projectId, body) }),
 );
 

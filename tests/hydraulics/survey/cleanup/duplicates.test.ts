@@ -10,7 +10,13 @@ function bruteForce(points: readonly RouteStation[]): { index: number; of: numbe
   points.forEach((p, i) => {
     const j = kept.find((k) => {
       const q = points[k];
-      return q.chainageM === p.chainageM && q.elevationM === p.elevationM && q.latitudeDeg === p.latitudeDeg && q.longitudeDeg === p.longitudeDeg && q.timeS === p.timeS;
+      return (
+        q.chainageM === p.chainageM &&
+        q.elevationM === p.elevationM &&
+        q.latitudeDeg === p.latitudeDeg &&
+        q.longitudeDeg === p.longitudeDeg &&
+        q.timeS === p.timeS
+      );
     });
     if (j === undefined) kept.push(i);
     else found.push({ index: i, of: j });
@@ -31,7 +37,10 @@ describe('detectDuplicates', () => {
   it('agrees with the point-by-point definition on random routes full of repeats', () => {
     fc.assert(
       fc.property(fc.array(station, { maxLength: 60 }), (points) => {
-        const got = detectDuplicates(points).map((c) => ({ index: c.index, of: Number(/point (\d+)/.exec(c.reason)![1]) - 1 }));
+        const got = detectDuplicates(points).map((c) => ({
+          index: c.index,
+          of: Number(/point (\d+)/.exec(c.reason)![1]) - 1,
+        }));
         expect(got).toEqual(bruteForce(points));
       }),
       { numRuns: 300 },
@@ -49,7 +58,12 @@ describe('detectDuplicates', () => {
 
   it('handles 64 000 points on one chainage (all different heights) in well under a second', () => {
     // Before: about 10 s (each point compared with every earlier point of the same chainage).
-    const points = Array.from({ length: 64_000 }, (_, i) => ({ chainageM: 0, elevationM: i * 0.01, latitudeDeg: 52, longitudeDeg: -1 }));
+    const points = Array.from({ length: 64_000 }, (_, i) => ({
+      chainageM: 0,
+      elevationM: i * 0.01,
+      latitudeDeg: 52,
+      longitudeDeg: -1,
+    }));
     const start = performance.now();
     expect(detectDuplicates(points)).toHaveLength(0);
     expect(performance.now() - start).toBeLessThan(1000);

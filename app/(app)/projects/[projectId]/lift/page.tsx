@@ -16,7 +16,10 @@ export default async function LiftPage({ params }: { params: Promise<{ projectId
   const { project, role } = await requireProjectPage(params, 'design.view');
 
   const queryClient = getQueryClient();
-  await queryClient.prefetchQuery({ queryKey: liftKeys.summary(project.id), queryFn: () => getLiftSummary(project.id) });
+  await queryClient.prefetchQuery({
+    queryKey: liftKeys.summary(project.id),
+    queryFn: () => getLiftSummary(project.id),
+  });
 
   return (
     <div className="space-y-5">
@@ -25,12 +28,18 @@ export default async function LiftPage({ params }: { params: Promise<{ projectId
         <RoleBadge role={role} />
       </div>
       <p className="max-w-3xl text-sm text-creek-700">
-        How much the ram delivers and how long it takes to fill the tank, from the fall, lift and pipes; what the source reliably gives;
-        what the uses take each day; and the tank that carries them. Figures in {project.unitSystem === 'us' ? 'US customary units' : 'metric units'}.
+        How much the ram delivers and how long it takes to fill the tank, from the fall, lift and pipes; what the source
+        reliably gives; what the uses take each day; and the tank that carries them. Figures in{' '}
+        {project.unitSystem === 'us' ? 'US customary units' : 'metric units'}.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <Suspense fallback={<LiftWorkspaceSkeleton />}>
-          <LiftWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canLogYield={can(role, 'yield.log')} />
+          <LiftWorkspace
+            projectId={project.id}
+            units={project.unitSystem}
+            canEdit={can(role, 'design.edit')}
+            canLogYield={can(role, 'yield.log')}
+          />
         </Suspense>
       </HydrationBoundary>
     </div>

@@ -25,7 +25,10 @@ export default async function LinesPage({ params }: { params: Promise<{ projectI
     <div className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold text-creek-900">Lines</h1>
-        <p className="text-sm text-creek-700">Pipelines laid along the surveyed routes: pipe and class per stretch, valves and tanks, checked on the long profile.</p>
+        <p className="text-sm text-creek-700">
+          Pipelines laid along the surveyed routes: pipe and class per stretch, valves and tanks, checked on the long
+          profile.
+        </p>
       </div>
       {editable && (
         <Panel title="Start a line">

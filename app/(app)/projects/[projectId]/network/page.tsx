@@ -19,7 +19,10 @@ export default async function NetworkPage({ params }: { params: Promise<{ projec
   const queryClient = getQueryClient();
   await Promise.all([
     queryClient.prefetchQuery({ queryKey: networkKeys.view(project.id), queryFn: () => networkView(project.id) }),
-    queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) }),
+    queryClient.prefetchQuery({
+      queryKey: reviewKeys.comments(project.id),
+      queryFn: () => listComments(project.id, role),
+    }),
   ]);
   const canComment = can(role, 'review.comment');
   const members = canComment ? await mentionableMembers(project.teamId, user, role) : [];
@@ -30,12 +33,19 @@ export default async function NetworkPage({ params }: { params: Promise<{ projec
         <RoleBadge role={role} />
       </div>
       <p className="max-w-3xl text-sm text-creek-700">
-        The whole water system: sources, ram outlets, tanks, take-offs and outlets joined by lines, pipes and valves. Solve it at the
-        peak hour to see every flow and pressure, or let Runnel choose the least-cost pipe sizes from the team&apos;s price list.
+        The whole water system: sources, ram outlets, tanks, take-offs and outlets joined by lines, pipes and valves.
+        Solve it at the peak hour to see every flow and pressure, or let Runnel choose the least-cost pipe sizes from
+        the team&apos;s price list.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <Suspense fallback={<NetworkWorkspaceSkeleton />}>
-          <NetworkWorkspace projectId={project.id} units={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+          <NetworkWorkspace
+            projectId={project.id}
+            units={project.unitSystem}
+            canEdit={can(role, 'design.edit')}
+            canComment={canComment}
+            members={members}
+          />
         </Suspense>
       </HydrationBoundary>
     </div>

@@ -21,8 +21,16 @@ export default async function ReviewsPage({ params }: { params: Promise<{ projec
   const queryClient = getQueryClient();
   const client = !can(role, 'design.view');
   await Promise.all([
-    queryClient.prefetchQuery({ queryKey: reviewKeys.revisions(project.id), queryFn: () => listRevisions(project.id, role) }),
-    client ? null : queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) }),
+    queryClient.prefetchQuery({
+      queryKey: reviewKeys.revisions(project.id),
+      queryFn: () => listRevisions(project.id, role),
+    }),
+    client
+      ? null
+      : queryClient.prefetchQuery({
+          queryKey: reviewKeys.comments(project.id),
+          queryFn: () => listComments(project.id, role),
+        }),
   ]);
 
   return (

@@ -25,10 +25,15 @@ export default async function RoutesPage({ params }: { params: Promise<{ project
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-2xl font-semibold text-creek-900">Survey routes</h1>
-          <p className="text-sm text-creek-700">The ground the lines are laid on: walked tracks, levelled runs and sketches.</p>
+          <p className="text-sm text-creek-700">
+            The ground the lines are laid on: walked tracks, levelled runs and sketches.
+          </p>
         </div>
         {editable && (
-          <Link href={`/projects/${project.id}/routes/import`} className="rounded-md bg-creek-700 px-3.5 py-2 text-sm font-medium text-white hover:bg-creek-800">
+          <Link
+            href={`/projects/${project.id}/routes/import`}
+            className="rounded-md bg-creek-700 px-3.5 py-2 text-sm font-medium text-white hover:bg-creek-800"
+          >
             Import a survey file
           </Link>
         )}
@@ -40,7 +45,10 @@ export default async function RoutesPage({ params }: { params: Promise<{ project
       </HydrationBoundary>
       {editable && (
         <Panel title="No survey yet?">
-          <p className="mb-3 text-sm text-creek-700">Start an empty route and sketch it on the profile from a map or what you know of the ground; replace it with a survey later.</p>
+          <p className="mb-3 text-sm text-creek-700">
+            Start an empty route and sketch it on the profile from a map or what you know of the ground; replace it with
+            a survey later.
+          </p>
           <NewSketchRouteForm projectId={project.id} />
         </Panel>
       )}

@@ -11,19 +11,35 @@ import { LineParams, LineReportQuerySchema } from '@/lib/validations/lines';
 import { parseOrThrow } from '@/lib/api/body';
 
 /**
- * The working copy's design report as a PDF, marked not for construction, with the site photos chosen for it; the team (not the
+ * The working copy's design report as a PDF, marked not for construction, with the site photos chosen for it; the team
+ * (not the
  * client) may export it. `?exaggeration=auto|N` draws the profile at the screen's vertical exaggeration.
  */
 export const GET = teamRoute(
   { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ req, params }) => {
-    const query = parseOrThrow(LineReportQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+    const query = parseOrThrow(
+      LineReportQuerySchema,
+      Object.fromEntries(req.nextUrl.searchParams),
+      'The address has options that are not valid',
+    );
     const { line, analysis, context, stations } = await analyseSavedLine(params.lineId);
     const project = await getProject(line.projectId);
     if (!project) throw notFound();
     const c = analysis.points.chainageM;
     const photos = await reportPhotosForLine(line.routeId, { fromM: c[0], toM: c[c.length - 1] });
-    const pdf = await lineReportPdf({ project, line, analysis, context, startGroundM: stations[0].groundElevationM, stamp: workingCopyStamp(line.preparedBy), generatedAt: new Date(), photos, stations, exaggeration: query.exaggeration });
+    const pdf = await lineReportPdf({
+      project,
+      line,
+      analysis,
+      context,
+      startGroundM: stations[0].groundElevationM,
+      stamp: workingCopyStamp(line.preparedBy),
+      generatedAt: new Date(),
+      photos,
+      stations,
+      exaggeration: query.exaggeration,
+    });
     return new Response(new Uint8Array(pdf), {
       status: 200,
       headers: {

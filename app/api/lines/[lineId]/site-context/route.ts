@@ -4,7 +4,10 @@ import { lineFeedContext } from '@/lib/data/line-context';
 import { getLine, teamOfLine } from '@/lib/data/lines';
 import { LineParams } from '@/lib/validations/lines';
 
-/** What the line reads from the rest of its project: the planned ram sites, the site's frost depth, and what the network says feeds it. */
+/**
+ * What the line reads from the rest of its project: the planned ram sites, the site's frost depth, and what the network
+ * says feeds it.
+ */
 export const GET = teamRoute(
   { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ params }) => {

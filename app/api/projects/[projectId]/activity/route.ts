@@ -9,7 +9,11 @@ import { ProjectParams } from '@/lib/validations/projects';
 export const GET = teamRoute(
   { params: ProjectParams, permission: 'design.view', teamOf: ({ projectId }) => teamOfProject(projectId) },
   async ({ params, req }) => {
-    const query = parseOrThrow(ActivityQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The feed filters are not valid');
+    const query = parseOrThrow(
+      ActivityQuerySchema,
+      Object.fromEntries(req.nextUrl.searchParams),
+      'The feed filters are not valid',
+    );
     return listActivity(params.projectId, query);
   },
 );

@@ -7,9 +7,12 @@ import { ProjectParams } from '@/lib/validations/projects';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 /** Review comments; a client reads those on approved and issued revisions only. */
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params, role }) => ({
-  comments: await listComments(params.projectId, role),
-}));
+export const GET = teamRoute(
+  { params: ProjectParams, permission: 'project.view', teamOf },
+  async ({ params, role }) => ({
+    comments: await listComments(params.projectId, role),
+  }),
+);
 
 /** Owners, designers and reviewers comment anywhere; surveyors on routes (checked with the anchor). */
 export const POST = teamRoute(

@@ -12,6 +12,13 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: DemandUseSchema, bodyWords: inProjectUnits(DEMAND_USE_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: DemandUseSchema,
+    bodyWords: inProjectUnits(DEMAND_USE_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body }) => ({ use: await createDemandUse(params.projectId, body) }),
 );

@@ -12,6 +12,13 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: CreateLineSchema, permission: 'design.edit', teamOf, status: 201, bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ projectId }) => unitSystemOfProject(projectId) } },
+  {
+    params: ProjectParams,
+    body: CreateLineSchema,
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+    bodyWords: { table: NEW_LINE_WORDS, unitsOf: ({ projectId }) => unitSystemOfProject(projectId) },
+  },
   async ({ params, user, body }) => ({ line: await createLine(params.projectId, user.id, body) }),
 );

@@ -13,16 +13,35 @@ const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId
 
 export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params, req }) => {
   const routeId = req.nextUrl.searchParams.get('routeId') ?? undefined;
-  return { photos: await listPhotos(params.projectId, routeId && /^[0-9a-f-]{36}$/i.test(routeId) ? routeId : undefined) };
+  return {
+    photos: await listPhotos(params.projectId, routeId && /^[0-9a-f-]{36}$/i.test(routeId) ? routeId : undefined),
+  };
 });
 
 /**
  * Uploads a site photo: multipart/form-data with `file` (JPEG or PNG) and optional `caption`,
  * `routeId` and `chainageM` (used when the photo carries no position).
  */
-export const POST = teamRoute({ params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 }, async ({ req, params, user }) => {
-  const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: env().RUNNEL_PHOTO_MAX_BYTES, what: 'a photo' });
-  const system = await unitSystemOfProject(params.projectId);
-  const fields = parseOrThrow(PhotoUploadFieldsSchema, upload.fields, 'Some photo details are not valid', (error) => fieldErrorsIn(error, system, PHOTO_WORDS));
-  return { photo: await uploadPhoto({ projectId: params.projectId, userId: user.id, fileName: upload.fileName, bytes: upload.bytes, ...fields }) };
-});
+export const POST = teamRoute(
+  { params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 },
+  async ({ req, params, user }) => {
+    const upload = await readFileUpload(req, {
+      fileField: 'file',
+      maxFileBytes: env().RUNNEL_PHOTO_MAX_BYTES,
+      what: 'a photo',
+    });
+    const system = await unitSystemOfProject(params.projectId);
+    const fields = parseOrThrow(PhotoUploadFieldsSchema, upload.fields, 'Some photo details are not valid', (error) =>
+      fieldErrorsIn(error, system, PHOTO_WORDS),
+    );
+    return {
+      photo: await uploadPhoto({
+        projectId: params.projectId,
+        userId: user.id,
+        fileName: upload.fileName,
+        bytes: upload.bytes,
+        ...fields,
+      }),
+    };
+  },
+);

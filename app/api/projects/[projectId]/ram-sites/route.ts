@@ -12,6 +12,13 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: RamSiteSchema, bodyWords: inProjectUnits(RAM_SITE_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: RamSiteSchema,
+    bodyWords: inProjectUnits(RAM_SITE_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body, user }) => createRamSite(params.projectId, user.id, body),
 );

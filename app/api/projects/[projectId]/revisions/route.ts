@@ -7,9 +7,12 @@ import { CreateRevisionSchema } from '@/lib/validations/revisions';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 /** The project's revisions; a client sees the approved and issued ones only. */
-export const GET = teamRoute({ params: ProjectParams, permission: 'project.view', teamOf }, async ({ params, role }) => ({
-  revisions: await listRevisions(params.projectId, role),
-}));
+export const GET = teamRoute(
+  { params: ProjectParams, permission: 'project.view', teamOf },
+  async ({ params, role }) => ({
+    revisions: await listRevisions(params.projectId, role),
+  }),
+);
 
 export const POST = teamRoute(
   { params: ProjectParams, body: CreateRevisionSchema, permission: 'design.edit', teamOf, status: 201 },

@@ -12,6 +12,13 @@ export const GET = teamRoute({ params: ProjectParams, permission: 'design.view',
 }));
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: TankSchema, bodyWords: inProjectUnits(TANK_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: TankSchema,
+    bodyWords: inProjectUnits(TANK_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body, user }) => ({ tank: await createTank(params.projectId, user.id, body) }),
 );

@@ -7,6 +7,12 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 /** Accepts and rejects clean-up proposals (height fixes, exclusions, smoothing, benchmark offsets). */
 export const POST = teamRoute(
-  { params: RouteParams, body: CleanupDecisionSchema, permission: 'survey.edit', teamOf, maxBodyBytes: MAX_POINTS_JSON_BYTES },
+  {
+    params: RouteParams,
+    body: CleanupDecisionSchema,
+    permission: 'survey.edit',
+    teamOf,
+    maxBodyBytes: MAX_POINTS_JSON_BYTES,
+  },
   async ({ params, body, user }) => decideCleanup(params.routeId, body, user.id),
 );

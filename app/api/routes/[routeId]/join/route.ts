@@ -9,6 +9,13 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 /** A new route (201): this one with the other joined onto its end. */
 export const POST = teamRoute(
-  { params: RouteParams, body: JoinRoutesSchema, bodyWords: inRouteUnits(ROUTE_WORDS), permission: 'survey.edit', teamOf, status: 201 },
+  {
+    params: RouteParams,
+    body: JoinRoutesSchema,
+    bodyWords: inRouteUnits(ROUTE_WORDS),
+    permission: 'survey.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body, user }) => ({ route: await joinRoutesById(params.routeId, user.id, body) }),
 );

@@ -4,13 +4,26 @@ import { ROUTE_WORDS } from '@/lib/validations/field-word-tables';
 import { teamRoute } from '@/lib/api/route';
 import { getRoutePointsPage, teamOfRoute } from '@/lib/data/routes';
 import { saveRoutePoints } from '@/lib/data/route-writes';
-import { firstPointNumberOf, MAX_POINTS_JSON_BYTES, RouteParams, RoutePointsQuerySchema, SavePointsSchema } from '@/lib/validations/routes';
+import {
+  firstPointNumberOf,
+  MAX_POINTS_JSON_BYTES,
+  RouteParams,
+  RoutePointsQuerySchema,
+  SavePointsSchema,
+} from '@/lib/validations/routes';
 
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
-/** A page of the route's rows by seq (`?offset=0&limit=50`, at most 500): the route table reads these, never the whole route. */
+/**
+ * A page of the route's rows by seq (`?offset=0&limit=50`, at most 500): the route table reads these, never the whole
+ * route.
+ */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(RoutePointsQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+  const query = parseOrThrow(
+    RoutePointsQuerySchema,
+    Object.fromEntries(req.nextUrl.searchParams),
+    'The address has options that are not valid',
+  );
   return getRoutePointsPage(params.routeId, query.offset, query.limit);
 });
 
@@ -19,6 +32,13 @@ export const GET = teamRoute({ params: RouteParams, permission: 'design.view', t
  * survey heights are kept from the stored points. Answers with the route's view, not its points.
  */
 export const PUT = teamRoute(
-  { params: RouteParams, body: SavePointsSchema, bodyWords: { ...inRouteUnits(ROUTE_WORDS), firstNumberOf: firstPointNumberOf }, permission: 'survey.edit', teamOf, maxBodyBytes: MAX_POINTS_JSON_BYTES },
+  {
+    params: RouteParams,
+    body: SavePointsSchema,
+    bodyWords: { ...inRouteUnits(ROUTE_WORDS), firstNumberOf: firstPointNumberOf },
+    permission: 'survey.edit',
+    teamOf,
+    maxBodyBytes: MAX_POINTS_JSON_BYTES,
+  },
   async ({ params, body }) => saveRoutePoints(params.routeId, body),
 );

@@ -6,10 +6,15 @@ import { RouteParams, RouteProposalsQuerySchema } from '@/lib/validations/routes
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 /**
- * Clean-up proposed on request over the stored route (`?smoothingWindow=5`, or `?benchmarkPoint=12&benchmarkElevationM=402.5`),
+ * Clean-up proposed on request over the stored route (`?smoothingWindow=5`, or
+ * `?benchmarkPoint=12&benchmarkElevationM=402.5`),
  * each with its place on the profile. Nothing is written: the user accepts or rejects them through `cleanup`.
  */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(RouteProposalsQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+  const query = parseOrThrow(
+    RouteProposalsQuerySchema,
+    Object.fromEntries(req.nextUrl.searchParams),
+    'The address has options that are not valid',
+  );
   return routeProposals(params.routeId, query);
 });

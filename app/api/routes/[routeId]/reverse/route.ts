@@ -5,4 +5,6 @@ import { RouteParams } from '@/lib/validations/routes';
 
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
-export const POST = teamRoute({ params: RouteParams, permission: 'survey.edit', teamOf }, async ({ params }) => reverseRouteById(params.routeId));
+export const POST = teamRoute({ params: RouteParams, permission: 'survey.edit', teamOf }, async ({ params }) =>
+  reverseRouteById(params.routeId),
+);

@@ -9,6 +9,13 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 /** This route keeps the part before the chainage; a new route (201) holds the rest. */
 export const POST = teamRoute(
-  { params: RouteParams, body: SplitRouteSchema, bodyWords: inRouteUnits(ROUTE_WORDS), permission: 'survey.edit', teamOf, status: 201 },
+  {
+    params: RouteParams,
+    body: SplitRouteSchema,
+    bodyWords: inRouteUnits(ROUTE_WORDS),
+    permission: 'survey.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body, user }) => splitRouteById(params.routeId, user.id, body),
 );

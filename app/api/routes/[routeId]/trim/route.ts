@@ -8,6 +8,12 @@ import { RouteParams, TrimRouteSchema } from '@/lib/validations/routes';
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
 export const POST = teamRoute(
-  { params: RouteParams, body: TrimRouteSchema, bodyWords: inRouteUnits(ROUTE_WORDS), permission: 'survey.edit', teamOf },
+  {
+    params: RouteParams,
+    body: TrimRouteSchema,
+    bodyWords: inRouteUnits(ROUTE_WORDS),
+    permission: 'survey.edit',
+    teamOf,
+  },
   async ({ params, body }) => trimRouteById(params.routeId, body),
 );

@@ -6,9 +6,16 @@ import { RouteParams, RouteViewQuerySchema } from '@/lib/validations/routes';
 
 const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
 
-/** What the route page draws above its table: header, profile thinned on the server (`?profilePoints=N`), plan, proposals. */
+/**
+ * What the route page draws above its table: header, profile thinned on the server (`?profilePoints=N`), plan,
+ * proposals.
+ */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(RouteViewQuerySchema, Object.fromEntries(req.nextUrl.searchParams), 'The address has options that are not valid');
+  const query = parseOrThrow(
+    RouteViewQuerySchema,
+    Object.fromEntries(req.nextUrl.searchParams),
+    'The address has options that are not valid',
+  );
   const view = await getRouteView(params.routeId, query.profilePoints);
   if (!view) throw notFound('Route not found');
   return view;

@@ -36,14 +36,24 @@ export default async function LinePage({ params }: { params: Promise<{ projectId
     const stations = await stationsOfLine(line.routeId, line).catch(() => []);
     queryClient.setQueryData(lineKeys.stations(line.id), stations);
   }
-  await queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) });
+  await queryClient.prefetchQuery({
+    queryKey: reviewKeys.comments(project.id),
+    queryFn: () => listComments(project.id, role),
+  });
   const canComment = can(role, 'review.comment');
   const members = canComment ? await mentionableMembers(project.teamId, user, role) : [];
 
   return (
     <HydrationBoundary state={dehydrate(queryClient)}>
       <Suspense fallback={<LineEditorSkeleton />}>
-        <LineEditor lineId={line.id} projectName={project.name} unitSystem={project.unitSystem} canEdit={can(role, 'design.edit')} canComment={canComment} members={members} />
+        <LineEditor
+          lineId={line.id}
+          projectName={project.name}
+          unitSystem={project.unitSystem}
+          canEdit={can(role, 'design.edit')}
+          canComment={canComment}
+          members={members}
+        />
       </Suspense>
     </HydrationBoundary>
   );

@@ -32,27 +32,48 @@ export default async function RoutePage({ params }: { params: Promise<{ projectI
   const role = await requireTeamRole(user, project?.teamId ?? null, 'design.view');
   // What the first screen draws, never the whole route: the view (header, thinned profile, plan,
   // proposals) and the first page of rows.
-  const [view, firstPage] = await Promise.all([getRouteView(parsed.data.routeId), getRoutePointsPage(parsed.data.routeId, 0, ROUTE_PAGE_SIZE)]);
+  const [view, firstPage] = await Promise.all([
+    getRouteView(parsed.data.routeId),
+    getRoutePointsPage(parsed.data.routeId, 0, ROUTE_PAGE_SIZE),
+  ]);
   if (!project || !view || view.route.projectId !== project.id) notFound();
   const queryClient = getQueryClient();
   queryClient.setQueryData(routeKeys.view(view.route.id), view);
   queryClient.setQueryData(routeKeys.page(view.route.id, 0, ROUTE_PAGE_SIZE), firstPage);
   await Promise.all([
     queryClient.prefetchQuery({ queryKey: photoKeys.project(project.id), queryFn: () => listPhotos(project.id) }),
-    queryClient.prefetchQuery({ queryKey: reviewKeys.comments(project.id), queryFn: () => listComments(project.id, role) }),
+    queryClient.prefetchQuery({
+      queryKey: reviewKeys.comments(project.id),
+      queryFn: () => listComments(project.id, role),
+    }),
   ]);
   const canComment = can(role, 'comment.route');
   const members = await mentionableMembers(project.teamId, user, role);
 
   return (
     <div className="space-y-4">
-      <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
+      <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">
+        ← Survey routes
+      </Link>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <Suspense fallback={<RouteEditorSkeleton />}>
-          <RouteEditor projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} canComment={canComment} canCommentAnywhere={can(role, 'review.comment')} members={members} />
+          <RouteEditor
+            projectId={project.id}
+            routeId={view.route.id}
+            units={project.unitSystem}
+            editable={can(role, 'survey.edit')}
+            canComment={canComment}
+            canCommentAnywhere={can(role, 'review.comment')}
+            members={members}
+          />
         </Suspense>
         <Suspense fallback={<RoutePhotosSkeleton />}>
-          <RoutePhotos projectId={project.id} routeId={view.route.id} units={project.unitSystem} editable={can(role, 'survey.edit')} />
+          <RoutePhotos
+            projectId={project.id}
+            routeId={view.route.id}
+            units={project.unitSystem}
+            editable={can(role, 'survey.edit')}
+          />
         </Suspense>
       </HydrationBoundary>
     </div>

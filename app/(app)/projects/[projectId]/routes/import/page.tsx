@@ -14,7 +14,9 @@ export default async function ImportPage({ params }: { params: Promise<{ project
   return (
     <div className="space-y-4">
       <div>
-        <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">← Survey routes</Link>
+        <Link href={`/projects/${project.id}/routes`} className="text-sm text-creek-600 underline">
+          ← Survey routes
+        </Link>
         <h1 className="text-2xl font-semibold text-creek-900">Import a survey</h1>
       </div>
       {can(role, 'survey.edit') ? (
@@ -23,7 +25,8 @@ export default async function ImportPage({ params }: { params: Promise<{ project
         </Panel>
       ) : (
         <p role="status" className="rounded-md border border-creek-100 bg-white p-4 text-sm text-creek-700">
-          As {ROLE_LABELS[role].toLowerCase()} you can look at the routes of this project, but importing surveys is for surveyors, designers and owners.
+          As {ROLE_LABELS[role].toLowerCase()} you can look at the routes of this project, but importing surveys is for
+          surveyors, designers and owners.
         </p>
       )}
     </div>

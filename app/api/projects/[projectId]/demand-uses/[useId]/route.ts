@@ -8,7 +8,13 @@ import { DemandUseParams } from '@/lib/validations/lift-common';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const PUT = teamRoute(
-  { params: DemandUseParams, body: DemandUseSchema, bodyWords: inProjectUnits(DEMAND_USE_WORDS), permission: 'design.edit', teamOf },
+  {
+    params: DemandUseParams,
+    body: DemandUseSchema,
+    bodyWords: inProjectUnits(DEMAND_USE_WORDS),
+    permission: 'design.edit',
+    teamOf,
+  },
   async ({ params, body }) => ({ use: await updateDemandUse(params.projectId, params.useId, body) }),
 );
 

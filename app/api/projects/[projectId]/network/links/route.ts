@@ -8,6 +8,13 @@ import { ProjectParams } from '@/lib/validations/projects';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: NetworkLinkSchema, bodyWords: inProjectUnits(NETWORK_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: NetworkLinkSchema,
+    bodyWords: inProjectUnits(NETWORK_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body }) => ({ link: await createNetworkLink(params.projectId, body) }),
 );

@@ -8,6 +8,13 @@ import { ProjectParams } from '@/lib/validations/projects';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const POST = teamRoute(
-  { params: ProjectParams, body: NetworkNodeSchema, bodyWords: inProjectUnits(NETWORK_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: NetworkNodeSchema,
+    bodyWords: inProjectUnits(NETWORK_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body }) => ({ node: await createNetworkNode(params.projectId, body) }),
 );

@@ -5,7 +5,10 @@ import { ProjectParams } from '@/lib/validations/projects';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
-/** The working copy's network as a PDF (schematic, heads and pressures, flows and velocities, sizes and cost), marked not for construction. */
+/**
+ * The working copy's network as a PDF (schematic, heads and pressures, flows and velocities, sizes and cost), marked
+ * not for construction.
+ */
 export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params, user }) => {
   const pdf = await networkReport(params.projectId, user.name ?? null);
   return new Response(new Uint8Array(pdf), {

@@ -9,11 +9,28 @@ const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId
 
 /** A take-off placed on a line's long profile: a junction node on the line at that chainage. */
 export const POST = teamRoute(
-  { params: ProjectParams, body: TakeOffSchema, bodyWords: inProjectUnits(TAKE_OFF_WORDS), permission: 'design.edit', teamOf, status: 201 },
+  {
+    params: ProjectParams,
+    body: TakeOffSchema,
+    bodyWords: inProjectUnits(TAKE_OFF_WORDS),
+    permission: 'design.edit',
+    teamOf,
+    status: 201,
+  },
   async ({ params, body }) => ({
     node: await createNetworkNode(params.projectId, {
-      kind: 'junction', name: body.name, elevationM: null, waterSourceId: null, ramSiteId: null, tankId: null,
-      lineId: body.lineId, chainageM: body.chainageM, eastM: null, northM: null, data: {}, notes: '',
+      kind: 'junction',
+      name: body.name,
+      elevationM: null,
+      waterSourceId: null,
+      ramSiteId: null,
+      tankId: null,
+      lineId: body.lineId,
+      chainageM: body.chainageM,
+      eastM: null,
+      northM: null,
+      data: {},
+      notes: '',
     }),
   }),
 );

@@ -9,7 +9,13 @@ const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId
 
 /** Replaces the whole site: the form always sends every field, so lift and fall are checked together. */
 export const PUT = teamRoute(
-  { params: RamSiteParams, body: RamSiteSchema, bodyWords: inProjectUnits(RAM_SITE_WORDS), permission: 'design.edit', teamOf },
+  {
+    params: RamSiteParams,
+    body: RamSiteSchema,
+    bodyWords: inProjectUnits(RAM_SITE_WORDS),
+    permission: 'design.edit',
+    teamOf,
+  },
   async ({ params, body }) => updateRamSite(params.projectId, params.siteId, body),
 );
 

@@ -12,11 +12,16 @@ import { SurveyImportOptionsSchema } from '@/lib/validations/survey-import';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 function readOptions(raw: string | undefined): unknown {
-  if (raw === undefined) throw new AppError('bad_request', 'The import options are missing', { options: ['Send the import options as JSON'] });
+  if (raw === undefined)
+    throw new AppError('bad_request', 'The import options are missing', {
+      options: ['Send the import options as JSON'],
+    });
   try {
     return JSON.parse(raw);
   } catch {
-    throw new AppError('bad_request', 'The import options are not valid JSON', { options: ['Send the import options as JSON'] });
+    throw new AppError('bad_request', 'The import options are not valid JSON', {
+      options: ['Send the import options as JSON'],
+    });
   }
 }
 
@@ -24,11 +29,25 @@ function readOptions(raw: string | undefined): unknown {
  * Uploads a survey file and imports it as a new route, all or nothing. multipart/form-data with
  * `file` (the survey file, ≤ 50 MB) and `options` (JSON, see lib/validations/survey-import.ts).
  */
-export const POST = teamRoute({ params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 }, async ({ req, params, user }) => {
-  const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: MAX_SURVEY_FILE_BYTES });
-  const options = parseOrThrow(SurveyImportOptionsSchema, readOptions(upload.fields.options), 'Some import options are not valid');
-  const imported = await importSurvey({ projectId: params.projectId, userId: user.id, fileName: upload.fileName, contentType: upload.contentType, bytes: upload.bytes, options });
-  // The browser goes to the route's page next: its view is worked out meanwhile (not awaited).
-  warmRouteView(imported.route.id);
-  return imported;
-});
+export const POST = teamRoute(
+  { params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 },
+  async ({ req, params, user }) => {
+    const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: MAX_SURVEY_FILE_BYTES });
+    const options = parseOrThrow(
+      SurveyImportOptionsSchema,
+      readOptions(upload.fields.options),
+      'Some import options are not valid',
+    );
+    const imported = await importSurvey({
+      projectId: params.projectId,
+      userId: user.id,
+      fileName: upload.fileName,
+      contentType: upload.contentType,
+      bytes: upload.bytes,
+      options,
+    });
+    // The browser goes to the route's page next: its view is worked out meanwhile (not awaited).
+    warmRouteView(imported.route.id);
+    return imported;
+  },
+);

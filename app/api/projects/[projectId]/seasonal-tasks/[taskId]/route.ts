@@ -11,6 +11,9 @@ export const PATCH = teamRoute(
   async ({ params, body }) => ({ task: await updateSeasonalTask(params.projectId, params.taskId, body) }),
 );
 
-export const DELETE = teamRoute({ params: SeasonalTaskParams, permission: 'design.edit', teamOf }, async ({ params }) => {
-  await deleteSeasonalTask(params.projectId, params.taskId);
-});
+export const DELETE = teamRoute(
+  { params: SeasonalTaskParams, permission: 'design.edit', teamOf },
+  async ({ params }) => {
+    await deleteSeasonalTask(params.projectId, params.taskId);
+  },
+);

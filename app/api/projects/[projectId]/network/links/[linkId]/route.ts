@@ -7,10 +7,19 @@ import { NetworkLinkParams, NetworkLinkSchema } from '@/lib/validations/network'
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const PUT = teamRoute(
-  { params: NetworkLinkParams, body: NetworkLinkSchema, bodyWords: inProjectUnits(NETWORK_WORDS), permission: 'design.edit', teamOf },
+  {
+    params: NetworkLinkParams,
+    body: NetworkLinkSchema,
+    bodyWords: inProjectUnits(NETWORK_WORDS),
+    permission: 'design.edit',
+    teamOf,
+  },
   async ({ params, body }) => ({ link: await updateNetworkLink(params.projectId, params.linkId, body) }),
 );
 
-export const DELETE = teamRoute({ params: NetworkLinkParams, permission: 'design.edit', teamOf }, async ({ params }) => {
-  await deleteNetworkLink(params.projectId, params.linkId);
-});
+export const DELETE = teamRoute(
+  { params: NetworkLinkParams, permission: 'design.edit', teamOf },
+  async ({ params }) => {
+    await deleteNetworkLink(params.projectId, params.linkId);
+  },
+);

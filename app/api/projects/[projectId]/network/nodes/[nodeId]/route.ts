@@ -7,10 +7,19 @@ import { NetworkNodeParams, NetworkNodeSchema } from '@/lib/validations/network'
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const PUT = teamRoute(
-  { params: NetworkNodeParams, body: NetworkNodeSchema, bodyWords: inProjectUnits(NETWORK_WORDS), permission: 'design.edit', teamOf },
+  {
+    params: NetworkNodeParams,
+    body: NetworkNodeSchema,
+    bodyWords: inProjectUnits(NETWORK_WORDS),
+    permission: 'design.edit',
+    teamOf,
+  },
   async ({ params, body }) => ({ node: await updateNetworkNode(params.projectId, params.nodeId, body) }),
 );
 
-export const DELETE = teamRoute({ params: NetworkNodeParams, permission: 'design.edit', teamOf }, async ({ params }) => {
-  await deleteNetworkNode(params.projectId, params.nodeId);
-});
+export const DELETE = teamRoute(
+  { params: NetworkNodeParams, permission: 'design.edit', teamOf },
+  async ({ params }) => {
+    await deleteNetworkNode(params.projectId, params.nodeId);
+  },
+);

@@ -5,6 +5,12 @@ import { RamSiteParams } from '@/lib/validations/lift-common';
 import { CommissioningReadingSchema } from '@/lib/validations/ram-sites';
 
 export const POST = teamRoute(
-  { params: RamSiteParams, body: CommissioningReadingSchema, permission: 'design.edit', teamOf: ({ projectId }) => teamOfProject(projectId), status: 201 },
+  {
+    params: RamSiteParams,
+    body: CommissioningReadingSchema,
+    permission: 'design.edit',
+    teamOf: ({ projectId }) => teamOfProject(projectId),
+    status: 201,
+  },
   async ({ params, body, user }) => addCommissioningReading(params.projectId, params.siteId, user.id, body),
 );

@@ -6,6 +6,14 @@ import { YieldReadingSchema } from '@/lib/validations/water-sources';
 
 /** Surveyors log yield readings too ('yield.log'): measuring a source is field work. */
 export const POST = teamRoute(
-  { params: SourceParams, body: YieldReadingSchema, permission: 'yield.log', teamOf: ({ projectId }) => teamOfProject(projectId), status: 201 },
-  async ({ params, body, user }) => ({ reading: await addYieldReading(params.projectId, params.sourceId, user.id, body) }),
+  {
+    params: SourceParams,
+    body: YieldReadingSchema,
+    permission: 'yield.log',
+    teamOf: ({ projectId }) => teamOfProject(projectId),
+    status: 201,
+  },
+  async ({ params, body, user }) => ({
+    reading: await addYieldReading(params.projectId, params.sourceId, user.id, body),
+  }),
 );

@@ -6,6 +6,9 @@ import { NetworkJobParams } from '@/lib/validations/network';
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 /** Writes the pipes a finished sizing run chose to the network's pipes and lines, in one transaction. */
-export const POST = teamRoute({ params: NetworkJobParams, permission: 'design.edit', teamOf }, async ({ params, user }) => ({
-  applied: await applyChosenSizes(params.projectId, user.id, params.jobId),
-}));
+export const POST = teamRoute(
+  { params: NetworkJobParams, permission: 'design.edit', teamOf },
+  async ({ params, user }) => ({
+    applied: await applyChosenSizes(params.projectId, user.id, params.jobId),
+  }),
+);
