@@ -1,10 +1,11 @@
 import type { DemandUseInput } from '@/lib/validations/demand-uses';
 import { DAILY_USE_PATTERN_PRESETS } from '@/hydraulics/index';
+import { demandUseWords } from '@/lib/validations/field-word-tables';
 import { formatNumber, formatQuantity, type Quantity, type UnitSystem } from '@/lib/units';
 
-/** The quantity a use's per-unit figure is shown in. */
+/** The quantity a use's per-unit figure is shown in (the one its refusals state their bounds in). */
 export function figureQuantity(kind: DemandUseInput['kind']): Quantity {
-  return kind === 'garden' ? 'depthPerDay' : 'volumePerDay';
+  return demandUseWords({ kind }).ownFigure?.quantity ?? 'volumePerDay';
 }
 
 export const PER_UNIT: Record<DemandUseInput['kind'], string> = {

@@ -10,8 +10,8 @@ import type { DemandUseRecord } from '@/lib/lift/records';
 import { useSaveDemandUse } from '@/lib/queries/lift';
 import { formatQuantity, fromDisplay, inputValue, unitDefaults, unitOf, type UnitSystem } from '@/lib/units';
 import { DemandUseSchema, type DemandUseInput } from '@/lib/validations/demand-uses';
-import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
-import { figureQuantity, PER_UNIT } from './demand-format';
+import { demandUseWords } from '@/lib/validations/field-word-tables';
+import { figureQuantity } from './demand-format';
 import { NumberField } from './number-field';
 import { useForm } from '@/lib/forms/use-form';
 import { numberFrom, numberOrNull } from './typed-number';
@@ -65,15 +65,17 @@ export function DemandUseForm({
   const [state, setState] = useState(() => initialState(use, units));
   const set = (key: keyof typeof state, value: string) => setState((previous) => ({ ...previous, [key]: value }));
   const save = useSaveDemandUse(projectId);
+  const kind = state.kind as Kind;
+  // The own figure's name and unit follow the kind, on screen and in its refusals alike.
+  const words = demandUseWords({ kind });
   const form = useForm(
     {
       schema: DemandUseSchema,
       save: (input) => save.mutateAsync({ id: use?.id ?? null, input }),
       savedText: use ? 'Use saved.' : 'Use added.',
     },
-    { table: DEMAND_USE_WORDS, units },
+    { table: words, units },
   );
-  const kind = state.kind as Kind;
   const published = publishedFigureOf({
     kind,
     figureId: state.figureId || null,
@@ -184,7 +186,7 @@ export function DemandUseForm({
       )}
       <NumberField
         id={id('own')}
-        label={kind === 'fixed' ? 'Daily volume' : `Own figure ${PER_UNIT[kind]}`}
+        label={words.ownFigure?.label ?? 'Own figure'}
         unit={unitOf(figureQuantity(kind), units)}
         value={state.own}
         onChange={(value) => set('own', value)}

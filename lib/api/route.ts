@@ -43,7 +43,8 @@ interface TeamSpec<P extends z.ZodType | undefined, B extends z.ZodType | undefi
  * takes the system the request names. The same input in the same units gets the same words.
  */
 export interface BodyWords<P> {
-  table: FieldWordTable;
+  /** The screen's names; a function of the body as sent where a field's name and unit follow another field (a kind). */
+  table: FieldWordTable | ((data: unknown) => FieldWordTable);
   unitsOf: (params: P, req: NextRequest) => Promise<UnitSystem> | UnitSystem;
   /**
    * The number the screen gives the body's first list item, read from the body as sent (a page of rows starts past 1).
@@ -100,7 +101,13 @@ async function fieldsOfBody<P>(
 ): Promise<FieldsOf | undefined> {
   if (!words) return undefined;
   const system = await words.unitsOf(params, req);
-  return (error, data) => fieldErrorsIn(error, system, words.table, words.firstNumberOf?.(data) ?? 1);
+  return (error, data) =>
+    fieldErrorsIn(
+      error,
+      system,
+      typeof words.table === 'function' ? words.table(data) : words.table,
+      words.firstNumberOf?.(data) ?? 1,
+    );
 }
 
 async function signedInUser(req: NextRequest): Promise<SessionUser> {

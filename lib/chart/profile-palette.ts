@@ -1,4 +1,5 @@
 import type { LineDeviceKind, WarningSeverity } from '../../hydraulics/index';
+import { DEVICE_KIND_NAMES } from '../validations/line-design';
 
 /**
  * Runnel's colours for the long profile, from the app palette (tailwind.config.ts): earth for the
@@ -41,10 +42,10 @@ export const PIPE_CLASS_COLOURS = [
 
 /** How each device is drawn: colour and the words of its legend entry. */
 export const DEVICE_STYLE: Record<LineDeviceKind, { colour: string; label: string }> = {
-  'break-pressure-tank': { colour: '#1c4b5f', label: 'Break-pressure tank' },
-  'air-release-valve': { colour: '#48702b', label: 'Air-release valve' },
-  washout: { colour: '#7d5410', label: 'Washout' },
-  'isolation-valve': { colour: '#122e3a', label: 'Isolation valve' },
+  'break-pressure-tank': { colour: '#1c4b5f', label: DEVICE_KIND_NAMES['break-pressure-tank'] },
+  'air-release-valve': { colour: '#48702b', label: DEVICE_KIND_NAMES['air-release-valve'] },
+  washout: { colour: '#7d5410', label: DEVICE_KIND_NAMES.washout },
+  'isolation-valve': { colour: '#122e3a', label: DEVICE_KIND_NAMES['isolation-valve'] },
 };
 
 export const FONT_FAMILY = 'Inter, Helvetica, Arial, sans-serif';

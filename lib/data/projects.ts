@@ -113,7 +113,7 @@ export async function unitSystemOfProject(projectId: string): Promise<UnitSystem
 }
 
 /** A route's `bodyWords` for a handler under /projects/[projectId]: refusals worded in that project's units. */
-export function inProjectUnits(table: FieldWordTable) {
+export function inProjectUnits(table: FieldWordTable | ((data: unknown) => FieldWordTable)) {
   return { table, unitsOf: ({ projectId }: { projectId: string }) => unitSystemOfProject(projectId) };
 }
 

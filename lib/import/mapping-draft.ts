@@ -7,7 +7,8 @@ import type { GpsColumnMapping, StationColumnMapping } from '../survey/column-ma
 import type { CsvDelimiter } from '../survey/csv-dialect';
 import type { SurveyInspection } from '../survey/inspect';
 import type { SurveyFormat } from '../survey/parsed-survey';
-import { fieldErrorsOf } from '../validations/common';
+import { surveyImportWords } from '../validations/field-word-tables';
+import { fieldErrorsIn } from '../validations/field-words';
 import { SurveyImportOptionsSchema, type SurveyImportOptions } from '../validations/survey-import';
 import { typedNumber } from '../units/decimal-mark-store';
 import { readWrittenDate } from '../survey/local-time';
@@ -182,7 +183,9 @@ export function mappingToOptions(
     }
   })();
   const parsed = SurveyImportOptionsSchema.safeParse(raw);
-  return parsed.success ? { options: parsed.data } : { errors: fieldErrorsOf(parsed.error) };
+  return parsed.success
+    ? { options: parsed.data }
+    : { errors: fieldErrorsIn(parsed.error, units, surveyImportWords(raw)) };
 }
 
 /**

@@ -1,6 +1,7 @@
 import type PDFDocument from 'pdfkit';
 import { DEFAULT_LINE_SETTINGS, type LineAnalysis, type LineDevice } from '../../hydraulics/index';
 import { LINE_CAUTIONS } from '../lines/cautions';
+import { DEVICE_KIND_NAMES } from '../validations/line-design';
 import { placeWords, SEVERITY_WORDS, warningText } from '../lines/warning-words';
 import {
   formatHeadPressure,
@@ -14,13 +15,6 @@ import { heading, INK, table } from './pdf-table';
 import { pdfText } from './pdf-text';
 
 type Doc = InstanceType<typeof PDFDocument>;
-
-const DEVICE_NAMES: Record<LineDevice['kind'], string> = {
-  'break-pressure-tank': 'Break-pressure tank',
-  'air-release-valve': 'Air-release valve',
-  washout: 'Washout',
-  'isolation-valve': 'Isolation valve',
-};
 
 export function stretchSchedule(doc: Doc, a: LineAnalysis, u: DisplayUnits): void {
   heading(doc, 'Stretch schedule');
@@ -84,7 +78,7 @@ export function deviceList(doc: Doc, a: LineAnalysis, devices: readonly LineDevi
           .join('; ');
         return [
           formatQuantity('chainage', d.chainageM, u.system),
-          DEVICE_NAMES[d.kind],
+          DEVICE_KIND_NAMES[d.kind],
           formatQuantity('length', pipeAt(d.chainageM), u.system),
           notes,
         ];

@@ -1,4 +1,4 @@
-import type { FieldWordTable } from './field-words';
+import type { FieldWord, FieldWordTable } from './field-words';
 
 /**
  * The screen's names and quantities of each form's fields (see field-words.ts). Labels are the ones
@@ -28,7 +28,8 @@ export const LINE_DESIGN_WORDS: FieldWordTable = {
   devices: { label: 'Devices' },
   'devices.#.chainageM': { label: 'Device #: chainage', quantity: 'chainage' },
   'devices.#.waterLevelM': { label: 'Device #: tank water level', quantity: 'elevation' },
-  'devices.#.kind': { label: 'Device #: kind' },
+  // The kind's refusal is a choice to make ("Device 2: choose a kind: …"), so it names the device alone.
+  'devices.#.kind': { label: 'Device #' },
   'devices.#.label': { label: 'Device #: name' },
   'pipes.#.label': { label: 'Custom pipe #: name' },
   'pipes.#.nominalSize': { label: 'Custom pipe #: nominal size' },
@@ -148,6 +149,39 @@ export const DEMAND_USE_WORDS: FieldWordTable = {
   peakFactor: { label: 'Peak factor' },
   deliveryHours: { label: 'Hours of delivery' },
 };
+
+/** A use's own figure as the form names it for each kind: a volume a day per person, per head or in all; a depth. */
+const OWN_FIGURE_WORDS: Readonly<Record<string, FieldWord>> = {
+  people: { label: 'Own figure per person', quantity: 'volumePerDay' },
+  livestock: { label: 'Own figure per head', quantity: 'volumePerDay' },
+  garden: { label: 'Own figure of depth', quantity: 'depthPerDay' },
+  fixed: { label: 'Daily volume', quantity: 'volumePerDay' },
+};
+
+/** A field of a body as sent (not yet checked), or undefined. */
+const sent = (body: unknown, key: string): unknown =>
+  typeof body === 'object' && body !== null ? (body as Record<string, unknown>)[key] : undefined;
+
+/** A daily use's words for the kind the body names (an unknown kind keeps the plain table). */
+export function demandUseWords(body: unknown): FieldWordTable {
+  const kind = sent(body, 'kind');
+  const ownFigure = typeof kind === 'string' ? OWN_FIGURE_WORDS[kind] : undefined;
+  return ownFigure ? { ...DEMAND_USE_WORDS, ownFigure } : DEMAND_USE_WORDS;
+}
+
+/**
+ * The survey import's options (lib/validations/survey-import.ts) for the format the body names: the field books' typed
+ * levels, named as the import screen names them, are in the project's units.
+ */
+export function surveyImportWords(body: unknown): FieldWordTable {
+  const first =
+    sent(body, 'format') === 'inclinometer-csv' ? 'Height of the first mark' : 'Reduced level of the first station';
+  return {
+    name: { label: 'Route name' },
+    startElevationM: { label: first, quantity: 'elevation' },
+    closingElevationM: { label: 'Known level of the last station', quantity: 'elevation' },
+  };
+}
 
 /** A route's points and its tools (save, split, trim, join), labels as on the route page. */
 export const ROUTE_WORDS: FieldWordTable = {

@@ -61,7 +61,9 @@ export function issueText(issue: Issue, system: UnitSystem, table: FieldWordTabl
   if (issue.code === 'too_big' && issue.origin === 'number' && quantity) {
     return `${label} must be ${issue.inclusive ? 'at most' : 'less than'} ${figure(issue.maximum)}`;
   }
-  if (issue.code === 'invalid_type' && issue.expected === 'number') {
+  // A figure sent as text (a multipart upload's chainage) that is no number reads like a number refused by type.
+  const textNotANumber = issue.code === 'invalid_format' && quantity !== undefined;
+  if ((issue.code === 'invalid_type' && issue.expected === 'number') || textNotANumber) {
     return `${label} must be a number${quantity ? ` (${formatQuantity(quantity, 0, system).split(' ').slice(1).join(' ')})` : ''}`;
   }
   if (issue.message.startsWith(label)) return issue.message;

@@ -112,8 +112,22 @@ export const LineFittingSchema = z.strictObject({
 
 export const DEVICE_KINDS = ['break-pressure-tank', 'air-release-valve', 'washout', 'isolation-valve'] as const;
 
+/** Each device kind as the screens, the report and refusals name it. */
+export const DEVICE_KIND_NAMES: Record<(typeof DEVICE_KINDS)[number], string> = {
+  'break-pressure-tank': 'Break-pressure tank',
+  'air-release-valve': 'Air-release valve',
+  washout: 'Washout',
+  'isolation-valve': 'Isolation valve',
+};
+
+/** "break-pressure tank, air-release valve, washout or isolation valve": the choices a refusal offers. */
+const deviceChoices = (() => {
+  const names = DEVICE_KINDS.map((kind) => DEVICE_KIND_NAMES[kind].toLowerCase());
+  return `${names.slice(0, -1).join(', ')} or ${names[names.length - 1]}`;
+})();
+
 export const LineDeviceSchema = z.strictObject({
-  kind: z.enum(DEVICE_KINDS, { error: `Device must be one of ${DEVICE_KINDS.join(', ')}` }),
+  kind: z.enum(DEVICE_KINDS, { error: `Choose a kind: ${deviceChoices}` }),
   chainageM: metres('Device chainage'),
   waterLevelM: metres('Tank water level').optional(),
   label: safeText('Device label', 80).optional(),

@@ -16,7 +16,8 @@ export const PhotoUploadFieldsSchema = z.strictObject({
   chainageM: z
     .string()
     .trim()
-    .regex(/^\d+(\.\d+)?$/, 'Chainage must be a number (m)')
+    // Metres as sent; refused, the screen words it in the project's unit ("Chainage must be a number (ft)").
+    .regex(/^\d+(\.\d+)?$/, 'Chainage must be a number')
     .transform(Number)
     .pipe(chainageM)
     .optional(),

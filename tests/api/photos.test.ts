@@ -158,6 +158,19 @@ describe('site photos', () => {
     expect(farUpload.json.error.fields.chainageM).toEqual(['Chainage must be at most 3,280,840 ft']);
   });
 
+  it("an upload's chainage that is no number is refused in the project's unit: feet in a US project, metres in metric", async () => {
+    const count = await models().SitePhoto.count({ where: { projectId: f.projectId } });
+    await models().Project.update({ unitSystem: 'us' }, { where: { id: f.projectId } });
+    const us = await upload(PLAIN_PNG, 'sketch.png', { routeId: walkId, chainageM: '12+50' }, 'image/png');
+    await models().Project.update({ unitSystem: 'metric' }, { where: { id: f.projectId } });
+    const metric = await upload(PLAIN_PNG, 'sketch.png', { routeId: walkId, chainageM: '12+50' }, 'image/png');
+    expect(us.status).toBe(400);
+    expect(us.json.error.fields.chainageM).toEqual(['Chainage must be a number (ft)']);
+    expect(us.json.error.message).toBe('Some photo details are not valid: Chainage must be a number (ft)');
+    expect(metric.json.error.fields.chainageM).toEqual(['Chainage must be a number (m)']);
+    expect(await models().SitePhoto.count({ where: { projectId: f.projectId } })).toBe(count);
+  });
+
   it('a HEIC photo (made by libheif’s encoder) is decoded, served as a metadata-free JPEG and lands at its chainage', async () => {
     // tests/fixtures/photos/README.md: 54.0075° N, 2.9015° W, taken 2026-04-12 10:15, Exif in the file's idat box.
     const heic = new Uint8Array(

@@ -8,6 +8,7 @@ import * as takeOffs from '@/app/api/projects/[projectId]/network/take-offs/rout
 import * as points from '@/app/api/routes/[routeId]/points/route';
 import { models } from '@/models';
 import { call, createTeamFixture } from '../support/api';
+import { fixtureText, importFile, surveyTableCounts } from '../support/route-calls';
 
 type Fixture = Awaited<ReturnType<typeof createTeamFixture>>;
 
@@ -71,7 +72,7 @@ describe("refusals of the line endpoints speak the project's units", () => {
         design: {
           ...line.design,
           devices: [
-            { kind: 'washout', chainageM: 10 },
+            { kind: 'valve', chainageM: 10 },
             { kind: 'washout', chainageM: 2e6 },
           ],
         },
@@ -84,6 +85,10 @@ describe("refusals of the line endpoints speak the project's units", () => {
       'Device 2: chainage must be at most 3,280,840 ft',
     ]);
     expect(JSON.stringify(res.json.error)).not.toMatch(/\d\.\d{4,}/);
+    // A kind the line has no device for: a choice to make, in the names the device list shows.
+    expect(res.json.error.fields['design.devices.0.kind']).toEqual([
+      'Device 1: choose a kind: break-pressure tank, air-release valve, washout or isolation valve',
+    ]);
   });
 
   it("a tank and a network part under the project: their forms' names, bounds in US units", async () => {
@@ -199,5 +204,65 @@ describe("refusals of the line endpoints speak the project's units", () => {
     expect(res.status).toBe(400);
     expect(res.json.error.fields['points.1.elevationM']).toEqual(['Point 102: elevation must be at most 9,000.00 m']);
     expect(res.json.error.message).toBe('Some fields are not valid: Point 102: elevation must be at most 9,000.00 m');
+  });
+
+  it("a use's own figure: named as the form names it for its kind, its unit the project's", async () => {
+    const use = (kind: string, ownFigure: unknown) =>
+      call(demandUses.POST, {
+        method: 'POST',
+        path: '/api/x',
+        params: { projectId: f.projectId },
+        userId: f.users.designer.id,
+        body: { kind, count: kind === 'fixed' ? null : 4, areaM2: kind === 'garden' ? 100 : null, ownFigure },
+      });
+    const usesBefore = await models().DemandUse.count({ where: { projectId: f.projectId } });
+    await setUnits('us');
+    const people = await use('people', -1);
+    const garden = await use('garden', 'lots');
+    const fixed = await use('fixed', -3);
+    await setUnits('metric');
+    const metricPeople = await use('people', -1);
+    const metricGarden = await use('garden', 'lots');
+    expect(people.status).toBe(400);
+    expect(people.json.error.fields.ownFigure).toEqual(['Own figure per person must be at least 0 US gal/day']);
+    expect(garden.json.error.fields.ownFigure).toEqual(['Own figure of depth must be a number (in/week)']);
+    expect(fixed.json.error.fields.ownFigure).toEqual(['Daily volume must be at least 0 US gal/day']);
+    expect(metricPeople.json.error.fields.ownFigure).toEqual(['Own figure per person must be at least 0 L/day']);
+    expect(metricGarden.json.error.fields.ownFigure).toEqual(['Own figure of depth must be a number (mm/day)']);
+    expect(await models().DemandUse.count({ where: { projectId: f.projectId } })).toBe(usesBefore);
+  });
+
+  it("a level book's start height out of range: the import screen's name, the bound in the project's units", async () => {
+    const before = await surveyTableCounts();
+    const book = (startElevationM: number) =>
+      importFile(f.users.surveyor.id, f.projectId, 'book.csv', fixtureText('level-book.csv'), {
+        format: 'level-book-csv',
+        name: 'Level run',
+        startElevationM,
+        closingElevationM: -900,
+      });
+    await setUnits('us');
+    const us = await book(12_000);
+    const clino = await importFile(f.users.surveyor.id, f.projectId, 'clino.csv', fixtureText('inclinometer.csv'), {
+      format: 'inclinometer-csv',
+      name: 'Clino walk',
+      startElevationM: -600,
+    });
+    await setUnits('metric');
+    const metric = await book(12_000);
+    expect(us.status).toBe(400);
+    // 9,000 m = 29,527.56 ft; -500 m = -1,640.42 ft.
+    expect(us.json.error.fields).toEqual({
+      startElevationM: ['Reduced level of the first station must be at most 29,527.56 ft'],
+      closingElevationM: ['Known level of the last station must be at least -1,640.42 ft'],
+    });
+    expect(us.json.error.message).toBe(
+      'Some import options are not valid: Reduced level of the first station must be at most 29,527.56 ft',
+    );
+    expect(clino.json.error.fields.startElevationM).toEqual(['Height of the first mark must be at least -1,640.42 ft']);
+    expect(metric.json.error.fields.startElevationM).toEqual([
+      'Reduced level of the first station must be at most 9,000.00 m',
+    ]);
+    expect(await surveyTableCounts()).toEqual(before);
   });
 });

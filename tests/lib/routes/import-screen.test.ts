@@ -41,7 +41,18 @@ describe('the import screens’ logic', () => {
     expect(inspectSurveyText(fixture('walked-route.gpx')).kind).toBe('gpx');
     const draft = initialMappingDraft(level, 'book.csv');
     expect(mappingToOptions(draft, 'us')).toEqual({
-      errors: { startElevationM: ['Reduced level of the first station must be a number'] },
+      errors: { startElevationM: ['Reduced level of the first station must be a number (ft)'] },
+    });
+    expect(mappingToOptions(draft, 'metric')).toEqual({
+      errors: { startElevationM: ['Reduced level of the first station must be a number (m)'] },
+    });
+    // Out of range, the bound is stated in the project's units too (9,000 m = 29,527.56 ft).
+    const high = { ...draft, fieldBook: { ...draft.fieldBook, startElevation: '30000' } };
+    expect(mappingToOptions(high, 'us')).toEqual({
+      errors: { startElevationM: ['Reduced level of the first station must be at most 29,527.56 ft'] },
+    });
+    expect(mappingToOptions({ ...high, fieldBook: { ...high.fieldBook, startElevation: '9500' } }, 'metric')).toEqual({
+      errors: { startElevationM: ['Reduced level of the first station must be at most 9,000.00 m'] },
     });
     // Typed with the project's decimal mark: "131,234" in a comma project, "131.234" in a point project.
     setProjectDecimalMark(',');

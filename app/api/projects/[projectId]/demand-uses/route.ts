@@ -1,7 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { createDemandUse, listDemandUses } from '@/lib/data/demand-uses';
 import { inProjectUnits, teamOfProject } from '@/lib/data/projects';
-import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
+import { demandUseWords } from '@/lib/validations/field-word-tables';
 import { DemandUseSchema } from '@/lib/validations/demand-uses';
 import { ProjectParams } from '@/lib/validations/projects';
 
@@ -15,7 +15,7 @@ export const POST = teamRoute(
   {
     params: ProjectParams,
     body: DemandUseSchema,
-    bodyWords: inProjectUnits(DEMAND_USE_WORDS),
+    bodyWords: inProjectUnits(demandUseWords),
     permission: 'design.edit',
     teamOf,
     status: 201,

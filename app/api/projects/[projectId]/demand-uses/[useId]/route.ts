@@ -1,7 +1,7 @@
 import { teamRoute } from '@/lib/api/route';
 import { deleteDemandUse, updateDemandUse } from '@/lib/data/demand-uses';
 import { inProjectUnits, teamOfProject } from '@/lib/data/projects';
-import { DEMAND_USE_WORDS } from '@/lib/validations/field-word-tables';
+import { demandUseWords } from '@/lib/validations/field-word-tables';
 import { DemandUseSchema } from '@/lib/validations/demand-uses';
 import { DemandUseParams } from '@/lib/validations/lift-common';
 
@@ -11,7 +11,7 @@ export const PUT = teamRoute(
   {
     params: DemandUseParams,
     body: DemandUseSchema,
-    bodyWords: inProjectUnits(DEMAND_USE_WORDS),
+    bodyWords: inProjectUnits(demandUseWords),
     permission: 'design.edit',
     teamOf,
   },

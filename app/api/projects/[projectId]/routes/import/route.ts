@@ -2,11 +2,13 @@ import { teamRoute } from '@/lib/api/route';
 import { parseOrThrow } from '@/lib/api/body';
 import { readFileUpload } from '@/lib/api/upload';
 import { AppError } from '@/lib/errors';
-import { teamOfProject } from '@/lib/data/projects';
+import { teamOfProject, unitSystemOfProject } from '@/lib/data/projects';
 import { importSurvey } from '@/lib/data/route-import';
 import { warmRouteView } from '@/lib/data/routes';
 import { MAX_SURVEY_FILE_BYTES } from '@/lib/survey/sniff';
 import { ProjectParams } from '@/lib/validations/projects';
+import { surveyImportWords } from '@/lib/validations/field-word-tables';
+import { fieldErrorsIn } from '@/lib/validations/field-words';
 import { SurveyImportOptionsSchema } from '@/lib/validations/survey-import';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
@@ -33,10 +35,10 @@ export const POST = teamRoute(
   { params: ProjectParams, permission: 'survey.edit', teamOf, status: 201 },
   async ({ req, params, user }) => {
     const upload = await readFileUpload(req, { fileField: 'file', maxFileBytes: MAX_SURVEY_FILE_BYTES });
-    const options = parseOrThrow(
-      SurveyImportOptionsSchema,
-      readOptions(upload.fields.options),
-      'Some import options are not valid',
+    const raw = readOptions(upload.fields.options);
+    const system = await unitSystemOfProject(params.projectId);
+    const options = parseOrThrow(SurveyImportOptionsSchema, raw, 'Some import options are not valid', (error) =>
+      fieldErrorsIn(error, system, surveyImportWords(raw)),
     );
     const imported = await importSurvey({
       projectId: params.projectId,
