@@ -8,8 +8,13 @@ export interface TankPlanInput {
   groundElevationM: ArrayLike<number>;
   /** Pipe elevation at each point, m (static pressure is measured at the pipe). */
   pipeElevationM: ArrayLike<number>;
-  /** Allowable static pressure head, one value or one per piece (point j to j+1), m. */
+  /**
+   * Allowable static pressure head, one value or one per piece (point j to j+1), or one per stretch
+   * with `pieceStretch`, m.
+   */
   allowableHeadM: number | ArrayLike<number>;
+  /** When given, `allowableHeadM` is indexed by stretch and this maps each piece to its stretch. */
+  pieceStretch?: ArrayLike<number>;
   /** Static level at the first point planned (start level or the last tank's level), m. */
   startLevelM: number;
   /** Height of a new tank's water level above the ground at its site, m. @default 0 */
@@ -105,6 +110,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
       pipeElevationM,
       planner.allowFixed,
       planner.allowByPiece,
+      planner.pieceStretch,
       at,
       level,
       to,
@@ -141,6 +147,7 @@ class TankPlanner {
   readonly pipeElevationM: ArrayLike<number>;
   readonly allowFixed: number;
   readonly allowByPiece: ArrayLike<number> | null;
+  readonly pieceStretch: ArrayLike<number> | null;
   readonly lossTo: ArrayLike<number> | null;
   readonly raise: number;
   readonly clearance: number;
@@ -166,6 +173,7 @@ class TankPlanner {
     this.pipeElevationM = input.pipeElevationM;
     this.allowFixed = typeof input.allowableHeadM === 'number' ? input.allowableHeadM : 0;
     this.allowByPiece = typeof input.allowableHeadM === 'number' ? null : input.allowableHeadM;
+    this.pieceStretch = input.pieceStretch ?? null;
     this.lossTo = input.headLossToPointM ?? null;
     this.raise = input.tankWaterAboveGroundM ?? 0;
     this.clearance = input.summitClearanceM ?? 0;
@@ -195,7 +203,11 @@ class TankPlanner {
   consider(piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void {
     const siteLevel = groundM + this.raise;
     if (siteLevel < floorM - EPS_M || siteLevel >= this.level - EPS_M) return;
-    if (siteLevel - pipeM > (this.allowByPiece === null ? this.allowFixed : this.allowByPiece[piece]) + EPS_M) return;
+    const allow =
+      this.allowByPiece === null
+        ? this.allowFixed
+        : this.allowByPiece[this.pieceStretch === null ? piece : this.pieceStretch[piece]];
+    if (siteLevel - pipeM > allow + EPS_M) return;
     if (!this.found || siteLevel <= this.bestGroundM + this.raise) {
       this.found = true;
       this.bestPiece = piece;
@@ -263,12 +275,13 @@ function firstOverRating(
   pipeElevationM: ArrayLike<number>,
   allowFixed: number,
   allowByPiece: ArrayLike<number> | null,
+  pieceStretch: ArrayLike<number> | null,
   at: Position,
   level: number,
   to: number,
 ): Position | null {
   for (let j = at.piece; j < to; j++) {
-    const limit = allowByPiece === null ? allowFixed : allowByPiece[j];
+    const limit = allowByPiece === null ? allowFixed : allowByPiece[pieceStretch === null ? j : pieceStretch[j]];
     const first = j === at.piece;
     const z0 = first ? at.pipeM : pipeElevationM[j];
     const startExcess = level - z0 - limit;
