@@ -291,10 +291,14 @@ function firstOverRating(
   level: number,
   to: number,
 ): Position | null {
+  // The fixed limit and the start's pipe elevation read from typed arrays like the per-point values: a
+  // number that is either an argument (or a field) or an array element is boxed at every point.
+  const allowAt = allowByPiece ?? Float64Array.of(allowFixed);
+  const atPipeM = Float64Array.of(at.pipeM);
   for (let j = at.piece; j < to; j++) {
-    const limit = allowByPiece === null ? allowFixed : allowByPiece[pieceStretch === null ? j : pieceStretch[j]];
+    const limit = allowAt[allowByPiece === null ? 0 : pieceStretch === null ? j : pieceStretch[j]];
     const first = j === at.piece;
-    const z0 = first ? at.pipeM : pipeElevationM[j];
+    const z0 = first ? atPipeM[0] : pipeElevationM[j];
     const startExcess = level - z0 - limit;
     if (startExcess > EPS_M)
       return {

@@ -183,8 +183,12 @@ function sweep(
   sign: number,
 ): void {
   const n = chainageM.length;
+  // A limit array of one value per piece even for a fixed limit: a number that is either an
+  // argument or an array element is boxed at every point by the engine's optimised code.
+  const limitAt = limits ?? new Float64Array(1).fill(fixedLimit);
+  const byStretch = limits !== null && pieceStretch !== null;
   for (let j = 0; j < n - 1; j++) {
-    const limit = limits === null ? fixedLimit : limits[pieceStretch === null ? j : pieceStretch[j]];
+    const limit = limitAt[limits === null ? 0 : byStretch ? pieceStretch[j] : j];
     const a = sign * (valueM[j] - limit);
     const b = sign * (valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]) - limit);
     r.fastStep(a, b, chainageM[j], chainageM[j + 1]);
