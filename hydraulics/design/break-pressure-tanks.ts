@@ -8,8 +8,13 @@ export interface TankPlanInput {
   groundElevationM: ArrayLike<number>;
   /** Pipe elevation at each point, m (static pressure is measured at the pipe). */
   pipeElevationM: ArrayLike<number>;
-  /** Allowable static pressure head, one value or one per piece (point j to j+1), m. */
+  /**
+   * Allowable static pressure head, one value or one per piece (point j to j+1), or one per stretch
+   * with `pieceStretch`, m.
+   */
   allowableHeadM: number | ArrayLike<number>;
+  /** When given, `allowableHeadM` is indexed by stretch and this maps each piece to its stretch. */
+  pieceStretch?: ArrayLike<number>;
   /** Static level at the first point planned (start level or the last tank's level), m. */
   startLevelM: number;
   /** Height of a new tank's water level above the ground at its site, m. @default 0 */
@@ -81,6 +86,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   const to = input.toPoint ?? input.chainageM.length - 1;
   if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
   const planner = new TankPlanner(input, from, to);
+  keptPlanner = planner;
   const tanks: PlannedTank[] = [];
   const { chainageM, groundElevationM, pipeElevationM } = input;
   let level = input.startLevelM;
@@ -105,6 +111,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
       pipeElevationM,
       planner.allowFixed,
       planner.allowByPiece,
+      planner.pieceStretch,
       at,
       level,
       to,
@@ -131,6 +138,16 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
 }
 
 /**
+ * The last planner, kept alive until the next plan. The engine ties its optimised code and type
+ * feedback for the per-point loops to the planner's object shape, and a shape no live object has
+ * is dropped at the next garbage collection: with every planner gone, each 100,000-point plan
+ * started again in unoptimised code that boxes every number (measured: bailouts on most calls of
+ * the profile-100k benchmark, a few after keeping one). It holds one plan's arrays meanwhile.
+ */
+// eslint-disable-next-line @typescript-eslint/no-unused-vars
+let keptPlanner: TankPlanner | null = null;
+
+/**
  * The planner's per-point work. A class with its figures as fields, not closures made per call: a
  * closure made anew each call is a new call target for the engine's optimised code, and the
  * numbers passing through it end up boxed, megabytes per plan on a 100,000-station line.
@@ -141,6 +158,7 @@ class TankPlanner {
   readonly pipeElevationM: ArrayLike<number>;
   readonly allowFixed: number;
   readonly allowByPiece: ArrayLike<number> | null;
+  readonly pieceStretch: ArrayLike<number> | null;
   readonly lossTo: ArrayLike<number> | null;
   readonly raise: number;
   readonly clearance: number;
@@ -166,6 +184,7 @@ class TankPlanner {
     this.pipeElevationM = input.pipeElevationM;
     this.allowFixed = typeof input.allowableHeadM === 'number' ? input.allowableHeadM : 0;
     this.allowByPiece = typeof input.allowableHeadM === 'number' ? null : input.allowableHeadM;
+    this.pieceStretch = input.pieceStretch ?? null;
     this.lossTo = input.headLossToPointM ?? null;
     this.raise = input.tankWaterAboveGroundM ?? 0;
     this.clearance = input.summitClearanceM ?? 0;
@@ -195,7 +214,11 @@ class TankPlanner {
   consider(piece: number, siteChainageM: number, pipeM: number, groundM: number, floorM: number): void {
     const siteLevel = groundM + this.raise;
     if (siteLevel < floorM - EPS_M || siteLevel >= this.level - EPS_M) return;
-    if (siteLevel - pipeM > (this.allowByPiece === null ? this.allowFixed : this.allowByPiece[piece]) + EPS_M) return;
+    const allow =
+      this.allowByPiece === null
+        ? this.allowFixed
+        : this.allowByPiece[this.pieceStretch === null ? piece : this.pieceStretch[piece]];
+    if (siteLevel - pipeM > allow + EPS_M) return;
     if (!this.found || siteLevel <= this.bestGroundM + this.raise) {
       this.found = true;
       this.bestPiece = piece;
@@ -263,14 +286,19 @@ function firstOverRating(
   pipeElevationM: ArrayLike<number>,
   allowFixed: number,
   allowByPiece: ArrayLike<number> | null,
+  pieceStretch: ArrayLike<number> | null,
   at: Position,
   level: number,
   to: number,
 ): Position | null {
+  // The fixed limit and the start's pipe elevation read from typed arrays like the per-point values: a
+  // number that is either an argument (or a field) or an array element is boxed at every point.
+  const allowAt = allowByPiece ?? Float64Array.of(allowFixed);
+  const atPipeM = Float64Array.of(at.pipeM);
   for (let j = at.piece; j < to; j++) {
-    const limit = allowByPiece === null ? allowFixed : allowByPiece[j];
+    const limit = allowAt[allowByPiece === null ? 0 : pieceStretch === null ? j : pieceStretch[j]];
     const first = j === at.piece;
-    const z0 = first ? at.pipeM : pipeElevationM[j];
+    const z0 = first ? atPipeM[0] : pipeElevationM[j];
     const startExcess = level - z0 - limit;
     if (startExcess > EPS_M)
       return {

@@ -21,8 +21,6 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
   const { points } = profile;
   const n = points.chainageM.length;
   const allowableByStretch = Float64Array.from(profile.stretches, (s) => s.allowableHeadM);
-  const allowableByPiece = new Float64Array(n - 1);
-  for (let j = 0; j < n - 1; j++) allowableByPiece[j] = allowableByStretch[points.stretchIndex[j]];
   const lossToPoint = new Float64Array(n);
   for (let j = 0; j < n; j++) lossToPoint[j] = points.frictionLossM[j] + points.minorLossM[j];
   const tanks: PlannedTank[] = [];
@@ -39,7 +37,9 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
       chainageM: points.chainageM,
       groundElevationM: points.groundElevationM,
       pipeElevationM: points.pipeElevationM,
-      allowableHeadM: allowableByPiece,
+      // stretchIndex[j] is the stretch of the piece from point j to j+1.
+      allowableHeadM: allowableByStretch,
+      pieceStretch: points.stretchIndex,
       startLevelM: points.staticHeadM[fromPoint],
       tankWaterAboveGroundM,
       fromPoint,

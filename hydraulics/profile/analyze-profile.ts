@@ -117,13 +117,18 @@ export function profileModel(input: LineInput): ProfileModel {
   const staticPressureHeadM = new Float64Array(n);
   const velocityMs = new Float64Array(n);
   const stretchIndex = new Int32Array(n);
+  // One sweep, its arrays and branches hoisted: the loop runs once per point of a long line.
+  const { pieceStretch, pipeElevationM } = grid;
+  const { hydraulicGradeM, staticHeadM } = lines;
+  const velocityBy = schedule ? schedule.segments.velocityMs : hydraulics.velocityMs;
+  const velocityIndex = schedule ? schedule.pieceSegment : pieceStretch;
   for (let j = 0; j < n; j++) {
-    stretchIndex[j] = grid.pieceStretch[j < n - 1 ? j : n - 2];
-    pressureHeadM[j] = lines.hydraulicGradeM[j] - grid.pipeElevationM[j];
-    staticPressureHeadM[j] = lines.staticHeadM[j] - grid.pipeElevationM[j];
-    velocityMs[j] = schedule
-      ? schedule.segments.velocityMs[schedule.pieceSegment[j < n - 1 ? j : n - 2]]
-      : hydraulics.velocityMs[stretchIndex[j]];
+    const piece = j < n - 1 ? j : n - 2;
+    stretchIndex[j] = pieceStretch[piece];
+    const pipeM = pipeElevationM[j];
+    pressureHeadM[j] = hydraulicGradeM[j] - pipeM;
+    staticPressureHeadM[j] = staticHeadM[j] - pipeM;
+    velocityMs[j] = velocityBy[velocityIndex[piece]];
   }
   const stretches = stretchResults(
     input.stretches,

@@ -50,8 +50,11 @@ export function computeGradeLines(
   const minorLossM = new Float64Array(n);
   const hydraulicDropAtPointM = new Float64Array(n);
   const staticDropAtPointM = new Float64Array(n);
-  let grade = startHeadM;
-  let level = staticStartM;
+  // Start values read from a typed array like every other number in the loop: a loop variable that
+  // starts as an argument is boxed at every point by the engine's optimised code.
+  const starts = Float64Array.of(startHeadM, staticStartM);
+  let grade = starts[0];
+  let level = starts[1];
   let friction = 0;
   let minor = 0;
   let tankDrop = 0;

@@ -97,37 +97,132 @@ class RangeCollector {
     this.recoveryM = Math.max(this.recoveryM, byM);
     if (this.recoveryM > this.mergeWithinM) this.flush();
   }
+
+  /** One piece from c0 to c1, with the excess a just downstream of its start and b arriving at its end. */
+  step(a: number, b: number, c0: number, c1: number): void {
+    if (a > 0 && !this.open) this.openAt(c0);
+    else if (a <= 0 && this.open) this.close(c0);
+    if (a <= 0) this.inside(-a);
+    if (this.open) this.note(a, c0);
+    if (a > 0 && b <= 0) {
+      this.close(c0 + ((c1 - c0) * a) / (a - b));
+      this.inside(-b);
+    } else if (a <= 0 && b > 0) {
+      this.openAt(c0 + ((c1 - c0) * -a) / (b - a));
+    } else if (b <= 0) {
+      this.inside(-b);
+    }
+    if (this.open) this.note(b, c1);
+  }
+
+  /**
+   * `step` for the two common cases, without a call: a piece wholly inside the limit with nothing
+   * pending (no change at all), or wholly past it inside an open range (only the worst excess). A
+   * call that is not inlined passes its numbers boxed, megabytes per 100,000-point sweep.
+   */
+  fastStep(a: number, b: number, c0: number, c1: number): void {
+    if (a <= 0 && b <= 0 && !this.open && this.pending === null) return;
+    if (a > 0 && b > 0 && this.open) {
+      if (a > this.worstExcessM) {
+        this.worstExcessM = a;
+        this.worstChainageM = c0;
+      }
+      if (b > this.worstExcessM) {
+        this.worstExcessM = b;
+        this.worstChainageM = c1;
+      }
+      return;
+    }
+    this.step(a, b, c0, c1);
+  }
+
+  finish(lastM: number): LimitRange[] {
+    if (this.open) this.close(lastM);
+    this.flush();
+    return this.ranges;
+  }
 }
 
+/**
+ * The last collector, kept alive between analyses so its object shape survives a garbage
+ * collection: the optimised code of the per-point sweeps depends on it (see `keptPlanner` in
+ * design/break-pressure-tanks.ts).
+ */
+// eslint-disable-next-line @typescript-eslint/no-unused-vars
+let keptCollector: RangeCollector | null = null;
+
 export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
-  const { chainageM, valueM, dropAtPointM, limitM, side } = args;
-  const sign = side === 'below' ? -1 : 1;
+  const { limitM } = args;
   const r = new RangeCollector(args.toleranceM ?? 1e-6, Math.max(args.mergeWithinM ?? 0, 0));
+  keptCollector = r;
+  sweep(
+    r,
+    args.chainageM,
+    args.valueM,
+    args.dropAtPointM,
+    typeof limitM === 'number' ? limitM : 0,
+    typeof limitM === 'number' ? null : limitM,
+    args.pieceStretch ?? null,
+    args.side === 'below' ? -1 : 1,
+  );
+  return r.finish(args.chainageM[args.chainageM.length - 1]);
+}
+
+/**
+ * The per-point loop of `findLimitRanges`, apart from its argument object: callers pass objects
+ * of different shapes, and the loop's optimised code should not depend on them.
+ */
+function sweep(
+  r: RangeCollector,
+  chainageM: Float64Array,
+  valueM: Float64Array,
+  dropAtPointM: Float64Array | null,
+  fixedLimit: number,
+  limits: Float64Array | null,
+  pieceStretch: Int32Array | null,
+  sign: number,
+): void {
   const n = chainageM.length;
-  const fixedLimit = typeof limitM === 'number' ? limitM : 0;
-  const limits = typeof limitM === 'number' ? null : limitM;
-  const pieceStretch = args.pieceStretch ?? null;
+  // A limit array of one value per piece even for a fixed limit: a number that is either an
+  // argument or an array element is boxed at every point by the engine's optimised code.
+  const limitAt = limits ?? new Float64Array(1).fill(fixedLimit);
+  const byStretch = limits !== null && pieceStretch !== null;
   for (let j = 0; j < n - 1; j++) {
-    const limit = limits === null ? fixedLimit : limits[pieceStretch === null ? j : pieceStretch[j]];
-    const c0 = chainageM[j];
-    const c1 = chainageM[j + 1];
+    const limit = limitAt[limits === null ? 0 : byStretch ? pieceStretch[j] : j];
     const a = sign * (valueM[j] - limit);
     const b = sign * (valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]) - limit);
-    if (a > 0 && !r.open) r.openAt(c0);
-    else if (a <= 0 && r.open) r.close(c0);
-    if (a <= 0) r.inside(-a);
-    if (r.open) r.note(a, c0);
-    if (a > 0 && b <= 0) {
-      r.close(c0 + ((c1 - c0) * a) / (a - b));
-      r.inside(-b);
-    } else if (a <= 0 && b > 0) {
-      r.openAt(c0 + ((c1 - c0) * -a) / (b - a));
-    } else if (b <= 0) {
-      r.inside(-b);
-    }
-    if (r.open) r.note(b, c1);
+    r.fastStep(a, b, chainageM[j], chainageM[j + 1]);
   }
-  if (r.open) r.close(chainageM[n - 1]);
-  r.flush();
-  return r.ranges;
+}
+
+/**
+ * `findLimitRanges` for three fixed limits on the same quantity, in one pass: the flowing
+ * pressure against zero, the siphon limit and the vapour limit read the same two values per piece.
+ * Same arithmetic, same ranges as three separate calls.
+ */
+export function findThreeLimitRanges(
+  args: Omit<LimitRangeArgs, 'limitM' | 'pieceStretch'>,
+  limits: readonly [number, number, number],
+): [LimitRange[], LimitRange[], LimitRange[]] {
+  const { chainageM, valueM, dropAtPointM } = args;
+  const sign = args.side === 'below' ? -1 : 1;
+  const tolerance = args.toleranceM ?? 1e-6;
+  const merge = Math.max(args.mergeWithinM ?? 0, 0);
+  const r0 = new RangeCollector(tolerance, merge);
+  const r1 = new RangeCollector(tolerance, merge);
+  const r2 = new RangeCollector(tolerance, merge);
+  keptCollector = r2;
+  const [l0, l1, l2] = limits;
+  const n = chainageM.length;
+  for (let j = 0; j < n - 1; j++) {
+    const start = valueM[j];
+    const end = valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]);
+    const c0 = chainageM[j];
+    const c1 = chainageM[j + 1];
+    r0.fastStep(sign * (start - l0), sign * (end - l0), c0, c1);
+    r1.fastStep(sign * (start - l1), sign * (end - l1), c0, c1);
+    r2.fastStep(sign * (start - l2), sign * (end - l2), c0, c1);
+  }
+  const lastM = chainageM[n - 1];
+  return [r0.finish(lastM), r1.finish(lastM), r2.finish(lastM)];
 }

@@ -1,6 +1,6 @@
 import type { GradeLines } from './grade-lines';
 import type { ProfileGrid } from './grid';
-import { findLimitRanges } from './limit-zones';
+import { findLimitRanges, findThreeLimitRanges } from './limit-zones';
 import type { LimitCrossing, LimitKind, LimitZone, PressureLimits } from './result-types';
 
 /** Inputs of `computeZones`. */
@@ -32,10 +32,15 @@ export function computeZones(z: ZoneInputs): LimitZone[] {
   const tag =
     (kind: LimitKind) =>
     (range: Omit<LimitZone, 'kind'>): LimitZone => ({ kind, ...range });
+  const [negative, siphon, vapour] = findThreeLimitRanges({ ...flowing, side: 'below' }, [
+    0,
+    -z.limits.siphonLimitHeadM,
+    -z.limits.vapourLimitHeadM,
+  ]);
   const zones: LimitZone[] = [
-    ...findLimitRanges({ ...flowing, limitM: 0, side: 'below' }).map(tag('negative-pressure')),
-    ...findLimitRanges({ ...flowing, limitM: -z.limits.siphonLimitHeadM, side: 'below' }).map(tag('siphon-limit')),
-    ...findLimitRanges({ ...flowing, limitM: -z.limits.vapourLimitHeadM, side: 'below' }).map(tag('vapour-limit')),
+    ...negative.map(tag('negative-pressure')),
+    ...siphon.map(tag('siphon-limit')),
+    ...vapour.map(tag('vapour-limit')),
     ...findLimitRanges({ ...still, limitM: z.allowableHeadM, pieceStretch: grid.pieceStretch, side: 'above' }).map(
       tag('static-over-rating'),
     ),
