@@ -1,4 +1,4 @@
-import { geodesicInverse } from './geodesic';
+import { geodesicDistanceM } from './geodesic';
 import { assertFiniteNumber, assertLatitude, assertLongitude } from '../input-guards';
 import type { GeoPosition } from './types';
 import { HydraulicsInputError } from '../errors';
@@ -34,12 +34,8 @@ export function chainageAlongTrack(points: readonly GeoPosition[]): TrackChainag
   for (let i = 1; i < points.length; i += 1) {
     const a = points[i - 1];
     const b = points[i];
-    const horizontal = geodesicInverse({
-      latitude1Deg: a.latitudeDeg,
-      longitude1Deg: a.longitudeDeg,
-      latitude2Deg: b.latitudeDeg,
-      longitude2Deg: b.longitudeDeg,
-    }).distanceM;
+    // Every point was checked above.
+    const horizontal = geodesicDistanceM(a.latitudeDeg, a.longitudeDeg, b.latitudeDeg, b.longitudeDeg);
     const slope = Math.hypot(horizontal, b.elevationM - a.elevationM);
     legHorizontalM.push(horizontal);
     legSlopeM.push(slope);

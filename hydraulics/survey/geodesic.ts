@@ -38,6 +38,20 @@ export function geodesicInverse(input: GeodesicInverseInput): GeodesicInverseRes
   return { distanceM: r.s12 ?? 0, azimuth1Deg: r.azi1 ?? 0, azimuth2Deg: r.azi2 ?? 0, arcDeg: r.a12 };
 }
 
+/**
+ * Only the distance between two points on the WGS84 ellipsoid, metres: the same inverse problem as
+ * `geodesicInverse`, asking the library for the distance alone (no azimuths) and building no objects
+ * of its own, for loops over whole tracks. Inputs are assumed checked by the caller.
+ */
+export function geodesicDistanceM(
+  latitude1Deg: number,
+  longitude1Deg: number,
+  latitude2Deg: number,
+  longitude2Deg: number,
+): number {
+  return WGS84.Inverse(latitude1Deg, longitude1Deg, latitude2Deg, longitude2Deg, Geodesic.DISTANCE).s12 ?? 0;
+}
+
 export interface GeodesicDirectInput {
   latitudeDeg: number;
   longitudeDeg: number;

@@ -88,6 +88,12 @@ export function readTimeCell(raw: string | undefined, place: CellPlace, reading:
   if (cell.length > MAX_NUMBER_CELL_CHARS) {
     throw new SurveyImportError('bad-time', `“${quoteCell(cell)}” is too long to be a date and time`, place);
   }
+  // Phones mostly write UTC in the very form returned below: such a cell is its own answer, once it is known to
+  // name a real instant (read back, it prints the same). Saves reading the date piece by piece 100,000 times.
+  if (cell.length === 24 && cell.charCodeAt(23) === 90 /* Z */) {
+    const read = Date.parse(cell);
+    if (Number.isFinite(read) && new Date(read).toISOString() === cell) return cell;
+  }
   let ms: number;
   if (/^\d+(?:\.\d+)?$/.test(cell)) {
     const n = Number(cell);

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { geodesicDirect, geodesicInverse, geodesicInterpolate } from '../../../hydraulics/survey/geodesic';
+import {
+  geodesicDirect,
+  geodesicDistanceM,
+  geodesicInverse,
+  geodesicInterpolate,
+} from '../../../hydraulics/survey/geodesic';
 import { HydraulicsInputError } from '../../../hydraulics/errors';
 
 // Source for every [P] value below: core.md §6.2, [R27] C.F.F. Karney, GeographicLib
@@ -107,5 +112,24 @@ describe('geodesicInterpolate', () => {
       longitude2Deg: m.longitudeDeg,
     }).distanceM;
     expect(first).toBeCloseTo(total / 2, 6);
+  });
+});
+
+describe('geodesicDistanceM (the distance alone, for whole tracks)', () => {
+  it('JFK → LHR: s12 = 5 551 759.400318679 m as published [P][R27]', () => {
+    expect(Math.abs(geodesicDistanceM(40.6, -73.8, 51.6, -0.5) - 5_551_759.400318679)).toBeLessThan(1e-6);
+  });
+  it('equals geodesicInverse to the last bit on short walked legs, long legs and near-antipodal pairs', () => {
+    const pairs: [number, number, number, number][] = [
+      [54.2, -2.9, 54.200027, -2.899994],
+      [-33.9, 151.2, -33.899981, 151.200013],
+      [0, 0, 0.5, 179.5],
+      [10, 20, 10, 20],
+      [89.9, 0, -89.9, 180],
+    ];
+    for (const [a, b, c, d] of pairs) {
+      const full = geodesicInverse({ latitude1Deg: a, longitude1Deg: b, latitude2Deg: c, longitude2Deg: d }).distanceM;
+      expect(geodesicDistanceM(a, b, c, d)).toBe(full);
+    }
   });
 });

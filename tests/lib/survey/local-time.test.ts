@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { readTimeCell } from '../../../lib/survey/cells';
 import { readWrittenDate, writtenDateToUtcMs, zonedTimeToUtcMs } from '../../../lib/survey/local-time';
 import { parseSurveyText } from '../../../lib/survey/run-import';
 import { SurveyImportError } from '../../../lib/survey/errors';
@@ -112,4 +113,24 @@ describe("times without an offset are read in the project's zone, the same every
     expect(result.success).toBe(false);
     expect(result.error?.issues[0].path).toEqual(['timeZone']);
   });
+});
+
+describe('UTC times already in the stored form are kept as written, and only real instants are', () => {
+  const place = { column: 'time', field: 'time' };
+  it.each([
+    ['2026-04-18T06:00:03.000Z', '2026-04-18T06:00:03.000Z'],
+    ['2024-02-29T23:59:59.999Z', '2024-02-29T23:59:59.999Z'],
+    ['2026-04-18T06:00:03.000+00:00', '2026-04-18T06:00:03.000Z'],
+    ['2026-04-18T06:00:03Z', '2026-04-18T06:00:03.000Z'],
+  ])('%s reads as %s', (cell, expected) => {
+    expect(readTimeCell(cell, place)).toBe(expected);
+    const written = readWrittenDate(cell);
+    expect(written.ok && new Date(writtenDateToUtcMs(written.date, 'UTC')).toISOString()).toBe(expected);
+  });
+  it.each(['2026-02-30T06:00:00.000Z', '2026-13-01T06:00:00.000Z', '2026-04-18T25:00:00.000Z'])(
+    '%s, a date that does not exist, is refused as before',
+    (cell) => {
+      expect(() => readTimeCell(cell, place)).toThrow(SurveyImportError);
+    },
+  );
 });
