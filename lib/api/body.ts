@@ -81,6 +81,18 @@ export async function readJsonBody<S extends z.ZodType>(
   return parseOrThrow(schema, data, 'Some fields are not valid', fieldsOf);
 }
 
+/**
+ * A request's query string checked by `schema`: the one way a handler reads its address options (a refusal is a 400
+ * naming each bad option, as a body's are).
+ */
+export function parseQuery<S extends z.ZodType>(
+  req: NextRequest,
+  schema: S,
+  message = 'The address has options that are not valid',
+): z.output<S> {
+  return parseOrThrow(schema, Object.fromEntries(req.nextUrl.searchParams), message);
+}
+
 export function parseOrThrow<S extends z.ZodType>(
   schema: S,
   data: unknown,

@@ -3,6 +3,8 @@ import { safeText, uuid } from './common';
 import { chainage } from './numbers';
 
 export const PhotoParams = z.strictObject({ photoId: uuid('Photo id') });
+/** A project's photos, optionally those of one route only (`?routeId=`). */
+export const PhotoListQuery = z.strictObject({ routeId: uuid('Route id').optional() });
 export const PhotoImageQuery = z.strictObject({
   size: z.enum(['full', 'thumbnail'], { error: 'Size is full or thumbnail' }).default('full'),
 });

@@ -4,7 +4,7 @@ import exifr from 'exifr';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { GET as image } from '@/app/api/photos/[photoId]/image/route';
 import { PATCH as updatePhoto } from '@/app/api/photos/[photoId]/route';
-import { POST as uploadPhoto } from '@/app/api/projects/[projectId]/photos/route';
+import { GET as listPhotos, POST as uploadPhoto } from '@/app/api/projects/[projectId]/photos/route';
 import { importSurvey } from '@/lib/data/route-import';
 import { getObject, listKeys } from '@/lib/storage';
 import { models } from '@/models';
@@ -197,5 +197,30 @@ describe('site photos', () => {
     expect([...object!.bytes.subarray(0, 3)]).toEqual([0xff, 0xd8, 0xff]);
     expect(Buffer.from(object!.bytes).includes(Buffer.from('Private Camera Owner'))).toBe(false);
     expect(await exifr.parse(Buffer.from(object!.bytes)).catch(() => undefined)).toBeUndefined();
+  });
+
+  it("lists a route's photos by ?routeId=, and refuses a route id that is not one (400, not every photo)", async () => {
+    await upload(await jpegWithPosition(54.005, -2.9), 'trough.jpg');
+    const list = (query: string) =>
+      call(listPhotos, {
+        method: 'GET',
+        path: `/x${query}`,
+        params: { projectId: f.projectId },
+        userId: f.users.surveyor.id,
+      });
+    const all = await list('');
+    expect(all.status).toBe(200);
+    expect(all.json.photos.length).toBeGreaterThan(0);
+    const onWalk = await list(`?routeId=${walkId}`);
+    expect(onWalk.json.photos.length).toBe(
+      all.json.photos.filter((p: { routeId: string }) => p.routeId === walkId).length,
+    );
+    const none = await list('?routeId=00000000-0000-4000-8000-000000000000');
+    expect(none.json.photos).toEqual([]);
+    const bad = await list('?routeId=not-a-route');
+    expect(bad.status).toBe(400);
+    expect(bad.json.error.fields.routeId).toBeDefined();
+    const unknown = await list('?colour=red');
+    expect(unknown.status).toBe(400);
   });
 });

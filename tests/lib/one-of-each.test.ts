@@ -43,3 +43,16 @@ describe('one of each, on the screens', () => {
     expect(other.map((f) => f.rel)).toEqual([]);
   });
 });
+
+describe('one of each, in the route handlers', () => {
+  const handlers = screens.filter((f) => f.rel.startsWith('app/api/') && f.rel.endsWith('route.ts'));
+
+  it('finds the handlers that read their address options', () => {
+    expect(handlers.filter((f) => /\bparseQuery\(/.test(f.text)).length).toBeGreaterThanOrEqual(7);
+  });
+
+  it('reads a query string only through parseQuery, so every option is checked and refused the same way', () => {
+    const own = handlers.filter((f) => /searchParams/.test(f.text));
+    expect(own.map((f) => f.rel)).toEqual([]);
+  });
+});

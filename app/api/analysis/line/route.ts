@@ -13,15 +13,10 @@ import {
   MAX_STATELESS_ANALYSIS_STATIONS,
 } from '@/lib/validations/analysis';
 import { LINE_DESIGN_WORDS } from '@/lib/validations/field-word-tables';
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { runInWorker } from '@/lib/workers/pool';
 
-const queryOf = (req: NextRequest) =>
-  parseOrThrow(
-    AnalysisQuerySchema,
-    Object.fromEntries(req.nextUrl.searchParams),
-    'The address has options that are not valid',
-  );
+const queryOf = (req: NextRequest) => parseQuery(req, AnalysisQuerySchema);
 
 /**
  * Analyses a line given whole in the request (stations, stretches, ends, flow, settings; SI units)

@@ -8,7 +8,7 @@ import { reportFileName } from '@/lib/lines/file-names';
 import { lineReportPdf } from '@/lib/report/line-report';
 import { workingCopyStamp } from '@/lib/review/stamp';
 import { LineParams, LineReportQuerySchema } from '@/lib/validations/lines';
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 
 /**
  * The working copy's design report as a PDF, marked not for construction, with the site photos chosen for it; the team
@@ -18,11 +18,7 @@ import { parseOrThrow } from '@/lib/api/body';
 export const GET = teamRoute(
   { params: LineParams, permission: 'design.view', teamOf: ({ lineId }) => teamOfLine(lineId) },
   async ({ req, params }) => {
-    const query = parseOrThrow(
-      LineReportQuerySchema,
-      Object.fromEntries(req.nextUrl.searchParams),
-      'The address has options that are not valid',
-    );
+    const query = parseQuery(req, LineReportQuerySchema);
     const { line, analysis, context, stations } = await analyseSavedLine(params.lineId);
     const project = await getProject(line.projectId);
     if (!project) throw notFound();

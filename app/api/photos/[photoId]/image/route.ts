@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { teamRoute } from '@/lib/api/route';
 import { photoRow, teamOfPhoto } from '@/lib/data/photos';
 import { notFound } from '@/lib/errors';
@@ -9,11 +9,7 @@ const teamOf = ({ photoId }: { photoId: string }) => teamOfPhoto(photoId);
 
 /** The stored image (`?size=thumbnail` for the small one): re-encoded on upload, so it carries no metadata. */
 export const GET = teamRoute({ params: PhotoParams, permission: 'design.view', teamOf }, async ({ params, req }) => {
-  const { size } = parseOrThrow(
-    PhotoImageQuery,
-    Object.fromEntries(req.nextUrl.searchParams),
-    'The image size is not valid',
-  );
+  const { size } = parseQuery(req, PhotoImageQuery, 'The image size is not valid');
   const photo = await photoRow(params.photoId);
   const stored = await getObject(size === 'thumbnail' ? photo.thumbnailKey : photo.imageKey);
   if (!stored) throw notFound('The image file is missing from storage');

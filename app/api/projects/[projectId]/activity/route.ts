@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { teamRoute } from '@/lib/api/route';
 import { listActivity } from '@/lib/data/activity';
 import { teamOfProject } from '@/lib/data/projects';
@@ -9,11 +9,7 @@ import { ProjectParams } from '@/lib/validations/projects';
 export const GET = teamRoute(
   { params: ProjectParams, permission: 'design.view', teamOf: ({ projectId }) => teamOfProject(projectId) },
   async ({ params, req }) => {
-    const query = parseOrThrow(
-      ActivityQuerySchema,
-      Object.fromEntries(req.nextUrl.searchParams),
-      'The feed filters are not valid',
-    );
+    const query = parseQuery(req, ActivityQuerySchema, 'The feed filters are not valid');
     return listActivity(params.projectId, query);
   },
 );

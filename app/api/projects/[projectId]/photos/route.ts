@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseOrThrow, parseQuery } from '@/lib/api/body';
 import { teamRoute } from '@/lib/api/route';
 import { readFileUpload } from '@/lib/api/upload';
 import { env } from '@/lib/env';
@@ -6,16 +6,14 @@ import { listPhotos, uploadPhoto } from '@/lib/data/photos';
 import { teamOfProject, unitSystemOfProject } from '@/lib/data/projects';
 import { PHOTO_WORDS } from '@/lib/validations/field-word-tables';
 import { fieldErrorsIn } from '@/lib/validations/field-words';
-import { PhotoUploadFieldsSchema } from '@/lib/validations/photos';
+import { PhotoListQuery, PhotoUploadFieldsSchema } from '@/lib/validations/photos';
 import { ProjectParams } from '@/lib/validations/projects';
 
 const teamOf = ({ projectId }: { projectId: string }) => teamOfProject(projectId);
 
 export const GET = teamRoute({ params: ProjectParams, permission: 'design.view', teamOf }, async ({ params, req }) => {
-  const routeId = req.nextUrl.searchParams.get('routeId') ?? undefined;
-  return {
-    photos: await listPhotos(params.projectId, routeId && /^[0-9a-f-]{36}$/i.test(routeId) ? routeId : undefined),
-  };
+  const { routeId } = parseQuery(req, PhotoListQuery);
+  return { photos: await listPhotos(params.projectId, routeId) };
 });
 
 /**

@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { inRouteUnits } from '@/lib/data/line-routes';
 import { ROUTE_WORDS } from '@/lib/validations/field-word-tables';
 import { teamRoute } from '@/lib/api/route';
@@ -19,11 +19,7 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
  * route.
  */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(
-    RoutePointsQuerySchema,
-    Object.fromEntries(req.nextUrl.searchParams),
-    'The address has options that are not valid',
-  );
+  const query = parseQuery(req, RoutePointsQuerySchema);
   return getRoutePointsPage(params.routeId, query.offset, query.limit);
 });
 

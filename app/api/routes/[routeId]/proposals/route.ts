@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { teamRoute } from '@/lib/api/route';
 import { routeProposals, teamOfRoute } from '@/lib/data/routes';
 import { RouteParams, RouteProposalsQuerySchema } from '@/lib/validations/routes';
@@ -11,10 +11,6 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
  * each with its place on the profile. Nothing is written: the user accepts or rejects them through `cleanup`.
  */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(
-    RouteProposalsQuerySchema,
-    Object.fromEntries(req.nextUrl.searchParams),
-    'The address has options that are not valid',
-  );
+  const query = parseQuery(req, RouteProposalsQuerySchema);
   return routeProposals(params.routeId, query);
 });

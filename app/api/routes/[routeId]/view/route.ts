@@ -1,4 +1,4 @@
-import { parseOrThrow } from '@/lib/api/body';
+import { parseQuery } from '@/lib/api/body';
 import { teamRoute } from '@/lib/api/route';
 import { getRouteView, teamOfRoute } from '@/lib/data/routes';
 import { notFound } from '@/lib/errors';
@@ -11,11 +11,7 @@ const teamOf = ({ routeId }: { routeId: string }) => teamOfRoute(routeId);
  * proposals.
  */
 export const GET = teamRoute({ params: RouteParams, permission: 'design.view', teamOf }, async ({ req, params }) => {
-  const query = parseOrThrow(
-    RouteViewQuerySchema,
-    Object.fromEntries(req.nextUrl.searchParams),
-    'The address has options that are not valid',
-  );
+  const query = parseQuery(req, RouteViewQuerySchema);
   const view = await getRouteView(params.routeId, query.profilePoints);
   if (!view) throw notFound('Route not found');
   return view;
