@@ -86,7 +86,7 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   const to = input.toPoint ?? input.chainageM.length - 1;
   if (!(to > from)) throw new HydraulicsInputError('toPoint', `must be after fromPoint (${from}), got ${to}`);
   const planner = new TankPlanner(input, from, to);
-  keptPlanner = planner;
+
   const tanks: PlannedTank[] = [];
   const { chainageM, groundElevationM, pipeElevationM } = input;
   let level = input.startLevelM;
@@ -136,16 +136,6 @@ export function planBreakPressureTanks(input: TankPlanInput): TankPlan {
   }
   return fail(at.chainageM, 'tank planning did not converge');
 }
-
-/**
- * The last planner, kept alive until the next plan. The engine ties its optimised code and type
- * feedback for the per-point loops to the planner's object shape, and a shape no live object has
- * is dropped at the next garbage collection: with every planner gone, each 100,000-point plan
- * started again in unoptimised code that boxes every number (measured: bailouts on most calls of
- * the profile-100k benchmark, a few after keeping one). It holds one plan's arrays meanwhile.
- */
-// eslint-disable-next-line @typescript-eslint/no-unused-vars
-let keptPlanner: TankPlanner | null = null;
 
 /**
  * The planner's per-point work. A class with its figures as fields, not closures made per call: a

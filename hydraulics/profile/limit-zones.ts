@@ -143,18 +143,10 @@ class RangeCollector {
   }
 }
 
-/**
- * The last collector, kept alive between analyses so its object shape survives a garbage
- * collection: the optimised code of the per-point sweeps depends on it (see `keptPlanner` in
- * design/break-pressure-tanks.ts).
- */
-// eslint-disable-next-line @typescript-eslint/no-unused-vars
-let keptCollector: RangeCollector | null = null;
-
 export function findLimitRanges(args: LimitRangeArgs): LimitRange[] {
   const { limitM } = args;
   const r = new RangeCollector(args.toleranceM ?? 1e-6, Math.max(args.mergeWithinM ?? 0, 0));
-  keptCollector = r;
+
   sweep(
     r,
     args.chainageM,
@@ -211,7 +203,7 @@ export function findThreeLimitRanges(
   const r0 = new RangeCollector(tolerance, merge);
   const r1 = new RangeCollector(tolerance, merge);
   const r2 = new RangeCollector(tolerance, merge);
-  keptCollector = r2;
+
   const [l0, l1, l2] = limits;
   const n = chainageM.length;
   for (let j = 0; j < n - 1; j++) {
