@@ -69,56 +69,19 @@ export type SurveyFeature = z.infer<typeof SurveyFeatureSchema>;
 export type SurveyFormat = z.infer<typeof SurveyFormatSchema>;
 export type ParsedSurvey = z.infer<typeof ParsedSurveySchema>;
 
-/** The pattern `SurveyPointSchema.time` checks (zod's own ISO 8601 date-time with an offset). */
-const ISO_TIME = z.regexes.datetime({ offset: true, local: false, precision: null });
-const HEIGHT_SOURCE_NAMES: ReadonlySet<unknown> = new Set(HEIGHT_SOURCES);
-
-const isNumberIn = (v: unknown, min: number, max: number) => typeof v === 'number' && v >= min && v <= max;
-const isOptionalNumberIn = (v: unknown, min: number, max: number) => v === undefined || isNumberIn(v, min, max);
-
 /**
- * The first rule of SurveyPointSchema that point `p` breaks, or null. The same rules as the schema, checked field
- * by field: the points are the parser's own objects (the file was read and checked cell by cell before), and zod
- * building and copying 100,000 of them was a tenth of a large import's time.
+ * Last gate before a result leaves the parser: a shape error here is a bug, reported plainly. The one
+ * schema checks it; a hand-written copy of the point rules was faster by about 50 ms on 100,000 points
+ * and was dropped, as two sets of rules drift.
  */
-function pointFault(p: unknown): { field: string; message: string } | null {
-  if (typeof p !== 'object' || p === null) return { field: '', message: 'not an object' };
-  const q = p as Record<string, unknown>;
-  if (!Number.isInteger(q.order) || (q.order as number) < 0)
-    return { field: 'order', message: 'expected a whole number ≥ 0' };
-  if (!isOptionalNumberIn(q.lat, -90, 90)) return { field: 'lat', message: 'expected a number from -90 to 90' };
-  if (!isOptionalNumberIn(q.lon, -180, 180)) return { field: 'lon', message: 'expected a number from -180 to 180' };
-  if (!isNumberIn(q.chainageM, 0, Number.MAX_VALUE))
-    return { field: 'chainageM', message: 'expected a finite number ≥ 0' };
-  if (!isNumberIn(q.elevationM, -Number.MAX_VALUE, Number.MAX_VALUE))
-    return { field: 'elevationM', message: 'expected a finite number' };
-  if (q.label !== undefined && typeof q.label !== 'string') return { field: 'label', message: 'expected text' };
-  if (!HEIGHT_SOURCE_NAMES.has(q.heightSource))
-    return { field: 'heightSource', message: `expected one of ${HEIGHT_SOURCES.join(', ')}` };
-  if (!isOptionalNumberIn(q.confidence, 0, Number.MAX_VALUE))
-    return { field: 'confidence', message: 'expected a finite number ≥ 0' };
-  if (q.time !== undefined && !(typeof q.time === 'string' && ISO_TIME.test(q.time)))
-    return { field: 'time', message: 'expected an ISO 8601 date-time with an offset' };
-  return null;
-}
-
-const OutlineSchema = ParsedSurveySchema.omit({ points: true });
-
-/** Last gate before a result leaves the parser: a shape error here is a bug, reported plainly. */
 export function validateParsedSurvey(value: unknown): ParsedSurvey {
-  const invalid = (path: string, message: string) =>
-    new SurveyImportError('invalid-result', `the import produced an invalid survey at ${path}: ${message}`);
-  if (typeof value !== 'object' || value === null) throw invalid('', 'not an object');
-  const { points, ...outline } = value as { points?: unknown };
-  if (!Array.isArray(points) || points.length < 2) throw invalid('points', 'expected at least two points');
-  for (let i = 0; i < points.length; i++) {
-    const fault = pointFault(points[i]);
-    if (fault) throw invalid(`points.${i}${fault.field ? `.${fault.field}` : ''}`, fault.message);
-  }
-  const r = OutlineSchema.safeParse(outline);
+  const r = ParsedSurveySchema.safeParse(value);
   if (!r.success) {
     const issue = r.error.issues[0];
-    throw invalid(issue.path.join('.'), issue.message);
+    throw new SurveyImportError(
+      'invalid-result',
+      `the import produced an invalid survey at ${issue.path.join('.')}: ${issue.message}`,
+    );
   }
-  return { ...r.data, points: points as SurveyPoint[] };
+  return r.data;
 }
