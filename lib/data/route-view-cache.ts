@@ -15,7 +15,7 @@ const views = new Map<string, { version: string; view: RouteView }>();
 export const routeViewVersion = (updatedAt: Date, profilePoints: number | undefined) =>
   `${updatedAt.toISOString()}|${profilePoints ?? ''}`;
 
-export function cachedRouteView(routeId: string, version: string): RouteView | null {
+function cachedRouteView(routeId: string, version: string): RouteView | null {
   const entry = views.get(routeId);
   if (!entry || entry.version !== version) return null;
   // Map order is the order of use: the least recently used route goes first.

@@ -4,7 +4,7 @@ import type { ReviewStamp } from '../review/stamp';
 import type { DisplayUnits } from '../units';
 
 /** Width of the profile drawn into the SVG file, px (the PDF draws at 1000, `reportProfileScene`). */
-export const SVG_EXPORT_WIDTH = 1200;
+const SVG_EXPORT_WIDTH = 1200;
 
 /** The vertical exaggeration as the screen's setting says it: `auto` or the number. */
 export type ExaggerationSetting = number | 'auto';

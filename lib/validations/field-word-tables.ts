@@ -143,7 +143,7 @@ export const PHOTO_WORDS: FieldWordTable = {
  * A daily use on the Lift & storage page (lib/validations/demand-uses.ts); the amount's unit follows its kind, so only
  * the garden's area is converted.
  */
-export const DEMAND_USE_WORDS: FieldWordTable = {
+const DEMAND_USE_WORDS: FieldWordTable = {
   label: { label: 'Label' },
   areaM2: { label: 'Garden area', quantity: 'area' },
   peakFactor: { label: 'Peak factor' },

@@ -6,7 +6,7 @@ import { chainage, positive, whole } from './numbers';
 export const LineParams = z.strictObject({ lineId: uuid('Line id') });
 
 /** Largest vertical exaggeration a drawing takes. */
-export const MAX_EXAGGERATION = 1000;
+const MAX_EXAGGERATION = 1000;
 
 /**
  * `GET /api/lines/:id/report?exaggeration=auto|8`: the vertical exaggeration the screen shows (its

@@ -139,7 +139,7 @@ export const JoinRoutesSchema = z.strictObject({
 export type JoinRoutesInput = z.input<typeof JoinRoutesSchema>;
 
 /** Rows a page of the route table may ask for at once. */
-export const MAX_POINTS_PAGE = 500;
+const MAX_POINTS_PAGE = 500;
 /** Rows the route table shows and edits at once (one request each); the default page. */
 export const ROUTE_PAGE_SIZE = 50;
 
