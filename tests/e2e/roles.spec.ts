@@ -35,7 +35,10 @@ test('a designer edits project details and sees them saved', async ({ page }) =>
   await page.getByRole('button', { name: 'Save details' }).click();
   await expect(page.getByRole('status')).toHaveText('Saved.');
   await page.reload();
-  await expect(page.getByLabel('Site notes')).toHaveValue('Weir pool checked after the October rain.');
+  // A label finds hidden elements too, and the page streams in with a hidden copy for a moment: read the shown box.
+  await expect(page.getByLabel('Site notes').filter({ visible: true })).toHaveValue(
+    'Weir pool checked after the October rain.',
+  );
 });
 
 test('the owner manages members and cannot demote the last owner', async ({ page }) => {
