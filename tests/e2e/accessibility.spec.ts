@@ -20,6 +20,8 @@ for (const path of SIGNED_OUT_PAGES) {
   test(`no serious accessibility findings on ${path}`, async ({ page }) => {
     await page.goto(path);
     await expect(page.locator('main')).toBeVisible();
+    // Checked as a person meets the form: once its script runs and the submit button takes its working colour.
+    await expect(page.locator('main button[type=submit]').first()).toBeEnabled();
     expect(await seriousFindings(page)).toEqual([]);
   });
 }
