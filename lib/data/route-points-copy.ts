@@ -1,5 +1,6 @@
 import type { PointRecord } from '../routes/edit-ops';
 import { surveyPointRecord } from '../routes/new-point';
+import { utcInstantMs } from '../survey/local-time';
 import type { SurveyPoint } from '../survey/parsed-survey';
 
 /**
@@ -82,7 +83,7 @@ class RowWriter {
   /** timestamptz from ISO 8601 text (the stored form has milliseconds), or NULL. */
   timeOrNull(iso: string | null): void {
     if (iso === null) return this.int32(-1);
-    const ms = Date.parse(iso);
+    const ms = utcInstantMs(iso);
     if (!Number.isFinite(ms)) throw new Error(`not a time: ${iso}`);
     // Microseconds stay below 2^53, so the split into two 32-bit halves is exact.
     const us = (ms - PG_EPOCH_MS) * 1000;

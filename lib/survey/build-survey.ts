@@ -5,9 +5,12 @@ import {
   detectDuplicates,
   detectOutOfOrder,
   slopeLengthOfProfile,
+  type GeoPosition,
+  type RouteStation,
 } from '../../hydraulics/index';
 import { MAX_ROUTE_POINTS } from '../validations/routes';
 import { SurveyImportError } from './errors';
+import { utcInstantMs } from './local-time';
 import {
   validateParsedSurvey,
   type HeightSourceName,
@@ -57,6 +60,14 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
   }
   const warnings: SurveyImportWarning[] = [...(input.warnings ?? [])];
   const positioned = drafts.every((d) => d.lat !== undefined && d.lon !== undefined);
+  // One object per point serves the chainage (when positioned) and the order checks; chainage is filled in below.
+  const stations: RouteStation[] = drafts.map((d) => ({
+    chainageM: 0,
+    elevationM: d.elevationM,
+    latitudeDeg: d.lat,
+    longitudeDeg: d.lon,
+    timeS: d.time === undefined ? undefined : utcInstantMs(d.time) / 1000,
+  }));
   let chainages: number[];
   let totalSlopeLengthM: number;
   if (drafts.every((d) => d.chainageM !== undefined)) {
@@ -65,9 +76,8 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
       drafts.map((d, i) => ({ chainageM: chainages[i], elevationM: d.elevationM })),
     );
   } else if (positioned) {
-    const track = chainageAlongTrack(
-      drafts.map((d) => ({ latitudeDeg: d.lat as number, longitudeDeg: d.lon as number, elevationM: d.elevationM })),
-    );
+    // Positioned: every station has its latitude and longitude.
+    const track = chainageAlongTrack(stations as GeoPosition[]);
     chainages = track.horizontalChainageM;
     totalSlopeLengthM = track.totalSlopeM;
   } else {
@@ -85,13 +95,7 @@ export function buildParsedSurvey(input: BuildSurveyInput): ParsedSurvey {
     if (d.time !== undefined) point.time = d.time;
     return point;
   });
-  const stations = drafts.map((d, i) => ({
-    chainageM: chainages[i],
-    elevationM: d.elevationM,
-    latitudeDeg: d.lat,
-    longitudeDeg: d.lon,
-    timeS: d.time === undefined ? undefined : Date.parse(d.time) / 1000,
-  }));
+  for (let i = 0; i < stations.length; i++) stations[i].chainageM = chainages[i];
   const duplicates = detectDuplicates(stations);
   if (drafts.length - duplicates.length < 2) {
     throw new SurveyImportError(

@@ -1,5 +1,5 @@
 import { SurveyImportError } from './errors';
-import { readWrittenDate, writtenDateToUtcMs, type DateOrder } from './local-time';
+import { isCanonicalUtcInstant, readWrittenDate, writtenDateToUtcMs, type DateOrder } from './local-time';
 
 /** International foot, exactly 0.3048 m (international yard and pound agreement, 1959). */
 export const METRES_PER_FOOT = 0.3048;
@@ -90,10 +90,7 @@ export function readTimeCell(raw: string | undefined, place: CellPlace, reading:
   }
   // Phones mostly write UTC in the very form returned below: such a cell is its own answer, once it is known to
   // name a real instant (read back, it prints the same). Saves reading the date piece by piece 100,000 times.
-  if (cell.length === 24 && cell.charCodeAt(23) === 90 /* Z */) {
-    const read = Date.parse(cell);
-    if (Number.isFinite(read) && new Date(read).toISOString() === cell) return cell;
-  }
+  if (isCanonicalUtcInstant(cell)) return cell;
   let ms: number;
   if (/^\d+(?:\.\d+)?$/.test(cell)) {
     const n = Number(cell);

@@ -84,6 +84,64 @@ function daysInMonth(written: number, month: number): number {
   return month === 2 && leap ? 29 : DAYS_IN_MONTH[month - 1];
 }
 
+/** `YYYY-MM-DDTHH:MM:SS.sssZ`: where its separators stand, and their character codes (- - T : : . Z). */
+const ISO_INSTANT_MARK_AT = Int32Array.of(4, 7, 10, 13, 16, 19, 23);
+const ISO_INSTANT_MARK_CODE = Int32Array.of(45, 45, 84, 58, 58, 46, 90);
+
+/** Digits of `text` from `from` to `to` (exclusive) as a number, or -1 when any is not a digit. */
+function digitsAt(text: string, from: number, to: number): number {
+  let value = 0;
+  for (let i = from; i < to; i++) {
+    const digit = text.charCodeAt(i) - 48;
+    if (digit < 0 || digit > 9) return -1;
+    value = value * 10 + digit;
+  }
+  return value;
+}
+
+/**
+ * True when `text` is an instant written exactly as `Date.prototype.toISOString` writes it
+ * (`2024-05-01T07:30:00.000Z`, a real day of a real month, hours 00-23): such a cell is its own stored form. Read
+ * with character codes, not `Date`: the engine's reader accepts 30 February and 24:00, and a Date and a string per
+ * row was a tenth of a 100,000-fix import.
+ */
+export function isCanonicalUtcInstant(text: string): boolean {
+  if (text.length !== 24) return false;
+  for (let i = 0; i < ISO_INSTANT_MARK_AT.length; i++) {
+    if (text.charCodeAt(ISO_INSTANT_MARK_AT[i]) !== ISO_INSTANT_MARK_CODE[i]) return false;
+  }
+  const year = digitsAt(text, 0, 4);
+  const month = digitsAt(text, 5, 7);
+  const day = digitsAt(text, 8, 10);
+  const hour = digitsAt(text, 11, 13);
+  const minute = digitsAt(text, 14, 16);
+  const second = digitsAt(text, 17, 19);
+  if (year < 0 || digitsAt(text, 20, 23) < 0 || month < 1 || month > 12 || day < 1) return false;
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+  const days = month === 2 && leap ? 29 : DAYS_IN_MONTH[month - 1];
+  return day <= days && hour >= 0 && hour <= 23 && minute >= 0 && minute <= 59 && second >= 0 && second <= 59;
+}
+
+/**
+ * Milliseconds since the Unix epoch of an instant in the stored form (`isCanonicalUtcInstant`), read from its
+ * digits; any other text goes to `Date.parse`. Each fix's time is read twice per import (order checks, database
+ * rows), and the digits are read in a third of the engine's time.
+ */
+export function utcInstantMs(text: string): number {
+  const year = digitsAt(text, 0, 4);
+  // Date.UTC reads years 0-99 as 1900-1999; the engine's reader of the text does not.
+  if (!isCanonicalUtcInstant(text) || year < 100) return Date.parse(text);
+  return Date.UTC(
+    year,
+    digitsAt(text, 5, 7) - 1,
+    digitsAt(text, 8, 10),
+    digitsAt(text, 11, 13),
+    digitsAt(text, 14, 16),
+    digitsAt(text, 17, 19),
+    digitsAt(text, 20, 23),
+  );
+}
+
 function valid(d: WrittenDate): boolean {
   return (
     d.month >= 1 &&

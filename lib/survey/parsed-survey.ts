@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { HEIGHT_SOURCES } from '../../hydraulics/index';
 import { SurveyImportError } from './errors';
+import { isCanonicalUtcInstant } from './local-time';
 
 export const HeightSourceSchema = z.enum(HEIGHT_SOURCES);
 
@@ -16,8 +17,12 @@ export const SurveyPointSchema = z.object({
   heightSource: HeightSourceSchema,
   /** Vertical uncertainty, metres. */
   confidence: z.number().nonnegative().finite().optional(),
-  /** ISO 8601 time of the fix. */
-  time: z.iso.datetime({ offset: true }).optional(),
+  /**
+   * Time of the fix in UTC, in the one form every reader writes (`2024-05-01T07:30:00.000Z`, as toISOString): a
+   * stricter rule than any ISO 8601 text, and checked from character codes rather than a pattern, which was half
+   * of this gate's time on a 100,000-fix walk.
+   */
+  time: z.string().refine(isCanonicalUtcInstant, 'must be a UTC time as 2024-05-01T07:30:00.000Z').optional(),
 });
 
 export const SurveyImportWarningSchema = z.object({

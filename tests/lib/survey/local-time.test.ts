@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { readTimeCell } from '../../../lib/survey/cells';
-import { readWrittenDate, writtenDateToUtcMs, zonedTimeToUtcMs } from '../../../lib/survey/local-time';
+import {
+  isCanonicalUtcInstant,
+  readWrittenDate,
+  utcInstantMs,
+  writtenDateToUtcMs,
+  zonedTimeToUtcMs,
+} from '../../../lib/survey/local-time';
 import { parseSurveyText } from '../../../lib/survey/run-import';
 import { SurveyImportError } from '../../../lib/survey/errors';
 import { sampleDatesAmbiguous } from '../../../lib/import/mapping-draft';
@@ -133,4 +139,43 @@ describe('UTC times already in the stored form are kept as written, and only rea
       expect(() => readTimeCell(cell, place)).toThrow(SurveyImportError);
     },
   );
+
+  it('a cell is taken as its own stored form exactly when the engine reads it back to the same text, at the same instant', () => {
+    // The oracle: Date.parse, then toISOString, as the fast path did before it read character codes.
+    const roundTrips = (cell: string) => {
+      const ms = Date.parse(cell);
+      return Number.isFinite(ms) && new Date(ms).toISOString() === cell;
+    };
+    let state = 20261203;
+    const random = (n: number) => {
+      state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+      return state % n;
+    };
+    const two = (n: number) => String(n).padStart(2, '0');
+    const cells = ['2024-02-29T00:00:00.000Z', '2023-02-29T00:00:00.000Z', '2000-02-29T12:00:00.000Z'];
+    cells.push('1900-02-29T12:00:00.000Z', '0000-01-01T00:00:00.000Z', '0050-06-01T00:00:00.000Z');
+    cells.push('2026-04-18T24:00:00.000Z');
+    cells.push('2026-04-18T06:60:00.000Z', '2026-04-18T06:00:60.000Z', '2026-04-18 06:00:00.000Z');
+    cells.push('2026-04-18T06:00:00,000Z', '+026-04-18T06:00:00.000Z', '2026-04-18T06:00:00.00AZ');
+    for (let i = 0; i < 20_000; i++) {
+      const year = [1999, 2000, 2024, 2026, 2100, 1600][random(6)];
+      const cell = `${year}-${two(random(14))}-${two(random(33))}T${two(random(26))}:${two(random(62))}:${two(random(62))}.${String(random(1000)).padStart(3, '0')}Z`;
+      cells.push(cell);
+    }
+    let canonical = 0;
+    for (const cell of cells) {
+      expect(isCanonicalUtcInstant(cell), cell).toBe(roundTrips(cell));
+      // Read from its digits, the instant is the engine's own reading of the text.
+      if (roundTrips(cell)) expect(utcInstantMs(cell), cell).toBe(Date.parse(cell));
+      if (roundTrips(cell)) canonical++;
+    }
+    // Both kinds are well represented, so agreement is not agreement on "no" alone.
+    expect(canonical).toBeGreaterThan(2_000);
+    expect(cells.length - canonical).toBeGreaterThan(2_000);
+  });
+
+  it('a time in any other form is read by the engine: offsets, no milliseconds', () => {
+    for (const cell of ['2026-04-18T06:00:03+02:00', '2026-04-18T06:00:03Z', '2026-04-18T06:00:03.5Z'])
+      expect(utcInstantMs(cell)).toBe(Date.parse(cell));
+  });
 });
