@@ -30,17 +30,17 @@ END $$;
 CREATE TRIGGER route_points_route_exists AFTER INSERT ON route_points
   REFERENCING NEW TABLE AS written_points FOR EACH STATEMENT EXECUTE FUNCTION route_points_check_routes();
 
-CREATE FUNCTION route_points_refuse_move() RETURNS trigger LANGUAGE plpgsql AS $$
+CREATE FUNCTION refuse_key_change() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
   RAISE EXCEPTION '%: % may not change', TG_TABLE_NAME, TG_ARGV[0]
     USING ERRCODE = 'foreign_key_violation', TABLE = TG_TABLE_NAME, COLUMN = TG_ARGV[0];
 END $$;
 
 CREATE TRIGGER route_points_stay_on_route BEFORE UPDATE OF route_id ON route_points
-  FOR EACH ROW WHEN (OLD.route_id IS DISTINCT FROM NEW.route_id) EXECUTE FUNCTION route_points_refuse_move('route_id');
+  FOR EACH ROW WHEN (OLD.route_id IS DISTINCT FROM NEW.route_id) EXECUTE FUNCTION refuse_key_change('route_id');
 
 CREATE TRIGGER routes_keep_id BEFORE UPDATE OF id ON routes
-  FOR EACH ROW WHEN (OLD.id IS DISTINCT FROM NEW.id) EXECUTE FUNCTION route_points_refuse_move('id');
+  FOR EACH ROW WHEN (OLD.id IS DISTINCT FROM NEW.id) EXECUTE FUNCTION refuse_key_change('id');
 
 CREATE FUNCTION routes_delete_points() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
@@ -61,7 +61,7 @@ DROP TRIGGER routes_delete_points ON routes;
 DROP FUNCTION routes_delete_points();
 DROP TRIGGER routes_keep_id ON routes;
 DROP TRIGGER route_points_stay_on_route ON route_points;
-DROP FUNCTION route_points_refuse_move();
+DROP FUNCTION refuse_key_change();
 DROP TRIGGER route_points_route_exists ON route_points;
 DROP FUNCTION route_points_check_routes();
 `;

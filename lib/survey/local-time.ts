@@ -77,11 +77,15 @@ function withTime(year: number, month: number, day: number, m: RegExpExecArray, 
 
 const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 
-/** Days in a month as Date.UTC counts them (Gregorian; years 0-99 taken as 1900-1999, as Date.UTC takes them). */
-function daysInMonth(written: number, month: number): number {
-  const year = written >= 0 && written <= 99 ? 1900 + written : written;
+/** Days in a month of the (proleptic) Gregorian calendar. */
+function gregorianDaysInMonth(year: number, month: number): number {
   const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
   return month === 2 && leap ? 29 : DAYS_IN_MONTH[month - 1];
+}
+
+/** Days in a month as Date.UTC counts them (years 0-99 taken as 1900-1999, as Date.UTC takes them). */
+function daysInMonth(written: number, month: number): number {
+  return gregorianDaysInMonth(written >= 0 && written <= 99 ? 1900 + written : written, month);
 }
 
 /** `YYYY-MM-DDTHH:MM:SS.sssZ`: where its separators stand, and their character codes (- - T : : . Z). */
@@ -117,9 +121,15 @@ export function isCanonicalUtcInstant(text: string): boolean {
   const minute = digitsAt(text, 14, 16);
   const second = digitsAt(text, 17, 19);
   if (year < 0 || digitsAt(text, 20, 23) < 0 || month < 1 || month > 12 || day < 1) return false;
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  const days = month === 2 && leap ? 29 : DAYS_IN_MONTH[month - 1];
-  return day <= days && hour >= 0 && hour <= 23 && minute >= 0 && minute <= 59 && second >= 0 && second <= 59;
+  return (
+    day <= gregorianDaysInMonth(year, month) &&
+    hour >= 0 &&
+    hour <= 23 &&
+    minute >= 0 &&
+    minute <= 59 &&
+    second >= 0 &&
+    second <= 59
+  );
 }
 
 /**

@@ -3,34 +3,31 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { insertRoutePoints } from '@/lib/data/route-points-store';
 import type { PointRecord } from '@/lib/routes/edit-ops';
+import { newPointRecord } from '@/lib/routes/new-point';
+import { serializeError } from '@/lib/log';
 import { models } from '@/models';
 import { createTeamFixture } from '../support/api';
 
 // Route points keep to their route through statement triggers (migration 20261203000001), not a per-row foreign
 // key. These checks hold the triggers to every promise the key made.
 
-const point = (chainageM: number): PointRecord => ({
-  latitude: null,
-  longitude: null,
-  chainageM,
-  slopeChainageM: null,
-  elevationM: 400 - chainageM / 100,
-  rawElevationM: 400 - chainageM / 100,
-  label: null,
-  heightSource: 'typed',
-  confidenceM: null,
-  recordedAt: null,
-  excluded: false,
-  dismissedChecks: [],
-});
+const point = (chainageM: number): PointRecord =>
+  newPointRecord({
+    latitude: null,
+    longitude: null,
+    chainageM,
+    slopeChainageM: null,
+    elevationM: 400 - chainageM / 100,
+    label: null,
+    heightSource: 'typed',
+    confidenceM: null,
+    recordedAt: null,
+  });
 
 const points = (count: number) => Array.from({ length: count }, (_, i) => point(i * 10));
 
-/** The database error under Sequelize's wrapper (or the driver's own, from the COPY stream). */
-function sqlState(error: unknown): string | undefined {
-  const e = error as { parent?: { code?: string }; original?: { code?: string }; code?: string };
-  return e.parent?.code ?? e.original?.code ?? e.code;
-}
+/** The database's error code, as the log reads it (Sequelize's wrapper or the driver's own error). */
+const sqlState = (error: unknown) => serializeError(error).code;
 
 async function newRoute(projectId: string, createdBy: string): Promise<string> {
   const route = await models().Route.create({
