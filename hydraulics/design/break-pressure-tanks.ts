@@ -182,9 +182,13 @@ class TankPlanner {
     this.to = to;
     const { pipeElevationM, lossTo } = this;
     const highestAhead = new Float64Array(to + 1);
-    highestAhead[to] = pipeElevationM[to] + (lossTo === null ? 0 : lossTo[to]);
-    for (let k = to - 1; k >= from; k--)
-      highestAhead[k] = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highestAhead[k + 1]);
+    // The running highest kept in a local: read back from the array, each point would wait on the store before it.
+    let highest = pipeElevationM[to] + (lossTo === null ? 0 : lossTo[to]);
+    highestAhead[to] = highest;
+    for (let k = to - 1; k >= from; k--) {
+      highest = Math.max(pipeElevationM[k] + (lossTo === null ? 0 : lossTo[k]), highest);
+      highestAhead[k] = highest;
+    }
     this.highestAhead = highestAhead;
   }
 
@@ -219,43 +223,86 @@ class TankPlanner {
   }
 
   /**
+   * The sites of piece k between `at` and `over`: its start point (not the start of the window)
+   * and the point inside it where the tank level on the ground comes down to the floor set by the
+   * summits ahead (both vary linearly along the piece): the lowest usable site.
+   */
+  considerPiece(at: Position, over: Position, k: number): void {
+    const { chainageM, groundElevationM, pipeElevationM, highestAhead, raise } = this;
+    const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
+    if (k > at.piece) {
+      this.consider(
+        k,
+        chainageM[k],
+        pipeElevationM[k],
+        groundElevationM[k],
+        this.floorAt(highestAhead[k], k, chainageM[k]),
+      );
+    }
+    const c0 = k === at.piece ? at.chainageM : chainageM[k];
+    const g0 = k === at.piece ? at.groundM : groundElevationM[k];
+    const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
+    const f0 = g0 + raise - this.floorAt(highestAhead[k + 1], k, c0);
+    const f1 = g1 + raise - this.floorAt(highestAhead[k + 1], k, pieceEndM);
+    if (f0 * f1 < 0) {
+      const t = f0 / (f0 - f1);
+      const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
+      const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
+      const c = lerp(c0, pieceEndM, t);
+      this.consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), this.floorAt(highestAhead[k + 1], k, c));
+    }
+  }
+
+  /**
+   * `considerPiece` for the whole pieces strictly inside the window, with the loss at their ends
+   * read from the points (the same numbers `lossAt` gives there): a window can hold most of a
+   * 100,000-point line, and this loop is the planner's cost.
+   */
+  considerInnerPieces(fromPiece: number, toPiece: number): void {
+    const { chainageM, groundElevationM, pipeElevationM, highestAhead, raise, clearance, lossTo } = this;
+    for (let k = fromPiece; k < toPiece; k++) {
+      const lossStart = lossTo === null ? 0 : lossTo[k];
+      // lerp(loss[k], loss[k + 1], 1), written out so the sums match `lossAt` to the last bit.
+      const lossEnd = lossTo === null ? 0 : lossStart + (lossTo[k + 1] - lossStart);
+      const g0 = groundElevationM[k];
+      const g1 = groundElevationM[k + 1];
+      const pointFloor = highestAhead[k] - lossStart + clearance;
+      const siteLevel = g0 + raise;
+      // The common case on a long window, a site that fails the first two tests of `consider`, costs no call.
+      if (!(siteLevel < pointFloor - EPS_M || siteLevel >= this.level - EPS_M)) {
+        this.consider(k, chainageM[k], pipeElevationM[k], g0, pointFloor);
+      }
+      const aheadM = highestAhead[k + 1];
+      const f0 = g0 + raise - (aheadM - lossStart + clearance);
+      const f1 = g1 + raise - (aheadM - lossEnd + clearance);
+      if (f0 * f1 < 0) {
+        const t = f0 / (f0 - f1);
+        const c = lerp(chainageM[k], chainageM[k + 1], t);
+        this.consider(
+          k,
+          c,
+          lerp(pipeElevationM[k], pipeElevationM[k + 1], t),
+          lerp(g0, g1, t),
+          this.floorAt(aheadM, k, c),
+        );
+      }
+    }
+  }
+
+  /**
    * The lowest usable tank site from `at` to `over` with the static line at `level` (the latest
    * one on a tie), or null when there is none.
    */
   lowestSite(at: Position, over: Position, level: number): Position | null {
-    const { chainageM, groundElevationM, pipeElevationM, highestAhead, raise } = this;
     this.found = false;
     this.level = level;
-    for (let k = at.piece; k <= over.piece; k++) {
-      const pieceEndM = k === over.piece ? over.chainageM : chainageM[k + 1];
-      if (k > at.piece) {
-        this.consider(
-          k,
-          chainageM[k],
-          pipeElevationM[k],
-          groundElevationM[k],
-          this.floorAt(highestAhead[k], k, chainageM[k]),
-        );
-      }
-      // Where the tank level on the ground inside this piece comes down to the floor set by the
-      // summits ahead (both vary linearly along the piece): the lowest usable site.
-      const c0 = k === at.piece ? at.chainageM : chainageM[k];
-      const g0 = k === at.piece ? at.groundM : groundElevationM[k];
-      const g1 = k === over.piece ? over.groundM : groundElevationM[k + 1];
-      const f0 = g0 + raise - this.floorAt(highestAhead[k + 1], k, c0);
-      const f1 = g1 + raise - this.floorAt(highestAhead[k + 1], k, pieceEndM);
-      if (f0 * f1 < 0) {
-        const t = f0 / (f0 - f1);
-        const z0 = k === at.piece ? at.pipeM : pipeElevationM[k];
-        const z1 = k === over.piece ? over.pipeM : pipeElevationM[k + 1];
-        const c = lerp(c0, pieceEndM, t);
-        this.consider(k, c, lerp(z0, z1, t), lerp(g0, g1, t), this.floorAt(highestAhead[k + 1], k, c));
-      }
-    }
+    this.considerPiece(at, over, at.piece);
+    this.considerInnerPieces(at.piece + 1, over.piece);
+    if (over.piece > at.piece) this.considerPiece(at, over, over.piece);
     const overLoss = this.lossAt(over.piece, over.chainageM);
     const aheadOfOver = Math.max(
       over.pipeM + overLoss,
-      over.piece + 1 <= this.to ? highestAhead[over.piece + 1] : over.pipeM + overLoss,
+      over.piece + 1 <= this.to ? this.highestAhead[over.piece + 1] : over.pipeM + overLoss,
     );
     this.consider(
       over.piece,

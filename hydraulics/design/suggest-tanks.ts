@@ -17,22 +17,32 @@ export function suggestBreakPressureTanks(profile: LineProfile, tankWaterAboveGr
   return withFlow.feasible ? withFlow : planAllReaches(profile, tankWaterAboveGroundM, false);
 }
 
+/**
+ * A new tank's outlet loses the velocity head and the entrance loss (profile-and-checks.md §5.2):
+ * keep that much more above the summits, at the fastest water of the reach (on the safe side).
+ */
+function entranceHeadM(profile: LineProfile, fromPoint: number, toPoint: number): number {
+  const { velocityMs } = profile.points;
+  let fastestMs = 0;
+  for (let j = fromPoint; j < toPoint; j++) fastestMs = Math.max(fastestMs, velocityMs[j]);
+  return ((1 + profile.settings.entranceLossK) * fastestMs * fastestMs) / (2 * GRAVITY_MS2);
+}
+
 function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, keepFlowing: boolean): TankPlan {
   const { points } = profile;
   const n = points.chainageM.length;
   const allowableByStretch = Float64Array.from(profile.stretches, (s) => s.allowableHeadM);
-  const lossToPoint = new Float64Array(n);
-  for (let j = 0; j < n; j++) lossToPoint[j] = points.frictionLossM[j] + points.minorLossM[j];
+  // Only the plan that keeps the flow going needs the losses.
+  const lossToPoint = keepFlowing ? new Float64Array(n) : null;
+  if (lossToPoint !== null) {
+    const { frictionLossM, minorLossM } = points;
+    for (let j = 0; j < n; j++) lossToPoint[j] = frictionLossM[j] + minorLossM[j];
+  }
   const tanks: PlannedTank[] = [];
   for (const reach of profile.reaches) {
     const fromPoint = pointIndexAt(points.chainageM, reach.fromM);
     const toPoint = pointIndexAt(points.chainageM, reach.toM);
     if (toPoint <= fromPoint) continue;
-    // A new tank's outlet loses the velocity head and the entrance loss (profile-and-checks.md §5.2):
-    // keep that much more above the summits, at the fastest water of the reach (on the safe side).
-    let fastestMs = 0;
-    for (let j = fromPoint; j < toPoint; j++) fastestMs = Math.max(fastestMs, points.velocityMs[j]);
-    const entranceM = ((1 + profile.settings.entranceLossK) * fastestMs * fastestMs) / (2 * GRAVITY_MS2);
     const plan = planBreakPressureTanks({
       chainageM: points.chainageM,
       groundElevationM: points.groundElevationM,
@@ -44,8 +54,11 @@ function planAllReaches(profile: LineProfile, tankWaterAboveGroundM: number, kee
       tankWaterAboveGroundM,
       fromPoint,
       toPoint,
-      ...(keepFlowing
-        ? { headLossToPointM: lossToPoint, summitClearanceM: profile.settings.minResidualHeadM + entranceM }
+      ...(lossToPoint !== null
+        ? {
+            headLossToPointM: lossToPoint,
+            summitClearanceM: profile.settings.minResidualHeadM + entranceHeadM(profile, fromPoint, toPoint),
+          }
         : {}),
     });
     tanks.push(...plan.tanks);

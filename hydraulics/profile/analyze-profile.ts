@@ -1,11 +1,12 @@
 import { seriesCriticalClosureTimeS } from '../surge/series-closure-time';
-import { computeGradeLines } from './grade-lines';
+import { computeGradeLines, type PointEvents } from './grade-lines';
 import type { PipeSpec } from '../catalogue/pipe-spec';
 import { buildProfileGrid, type ProfileGrid } from './grid';
-import { eventChainages, pointEvents, tanksOf } from './line-events';
+import { addKAtPoint, eventChainages, pointEvents, tanksOf } from './line-events';
 import { pressureLimits } from './pressure-limits';
 import { pumpShutoffGradeM } from './pump-shutoff';
 import { findGravityFlow } from './find-flow';
+import { float64Arrays } from './point-arrays';
 import { buildReaches, type Reach } from './reaches';
 import { resolveStretchPipes } from './resolve-pipes';
 import type { LineProfile, ReachResult } from './result-types';
@@ -31,15 +32,17 @@ function startHeads(start: LineStart, pumpPipeElevationM: number): { flowingM: n
  * Δz = (K_entrance + f·L/D + ΣK + 1)·v²/2g (profile-and-checks.md §5.2).
  */
 function addFreeSurfaceEntrances(
-  events: { kAtPoint: Float64Array; tankLevelAtPoint: Float64Array },
+  events: PointEvents,
   start: LineStart,
   entranceLossK: number,
+  pointCount: number,
 ): void {
   const k = 1 + entranceLossK;
-  if (start.kind === 'water-level') events.kAtPoint[0] += k;
-  for (let j = 1; j < events.tankLevelAtPoint.length - 1; j++) {
-    if (events.tankLevelAtPoint[j] === events.tankLevelAtPoint[j]) events.kAtPoint[j] += k;
-  }
+  if (start.kind === 'water-level') addKAtPoint(events, 0, k);
+  events.points.forEach((point, e) => {
+    const tankLevel = events.tankLevelM[e];
+    if (point > 0 && point < pointCount - 1 && tankLevel === tankLevel) events.kAt[e] += k;
+  });
 }
 
 function endTarget(end: LineEnd, lastPipeElevationM: number, defaultResidualM: number) {
@@ -84,7 +87,7 @@ export function profileModel(input: LineInput): ProfileModel {
   );
   const n = grid.chainageM.length;
   const { events, tanks } = pointEvents(grid, input, declaredTanks);
-  addFreeSurfaceEntrances(events, input.start, settings.entranceLossK);
+  addFreeSurfaceEntrances(events, input.start, settings.entranceLossK, n);
   const heads = startHeads(input.start, grid.pipeElevationM[0]);
   const target = endTarget(input.end, grid.pipeElevationM[n - 1], settings.minResidualHeadM);
   const reaches = buildReaches(grid, events, pipes.length, heads.flowingM, target.elevationM + target.residualM);
@@ -113,9 +116,7 @@ export function profileModel(input: LineInput): ProfileModel {
     anyFlowM3s === 0 ? heads.staticM : heads.flowingM,
     heads.staticM,
   );
-  const pressureHeadM = new Float64Array(n);
-  const staticPressureHeadM = new Float64Array(n);
-  const velocityMs = new Float64Array(n);
+  const [pressureHeadM, staticPressureHeadM, velocityMs] = float64Arrays(n, 3);
   const stretchIndex = new Int32Array(n);
   // One sweep, its arrays and branches hoisted: the loop runs once per point of a long line.
   const { pieceStretch, pipeElevationM } = grid;
@@ -138,7 +139,7 @@ export function profileModel(input: LineInput): ProfileModel {
     staticPressureHeadM,
     temperatureC,
     settings.safetyFactor,
-    lines.staticDropAtPointM,
+    lines.drops,
   );
   const limits = pressureLimits(settings, grid.groundElevationM);
   const surgeOn = settings.checkSurge && anyFlowM3s > 0;

@@ -1,11 +1,27 @@
 import type { ProfileGrid } from './grid';
+import { float64Arrays } from './point-arrays';
 
-/** Where the line's head is reset or lost locally, point by point (dense, length n). */
+/**
+ * Where the line's head is reset or lost locally: the few points that carry a fitting or a
+ * break-pressure tank, in chainage order. Kept sparse: a 100,000-point line has a handful.
+ */
 export interface PointEvents {
-  /** Sum of fitting K at each point (applied with the velocity of the pipe leaving the point). */
-  kAtPoint: Float64Array;
-  /** Water level of a break-pressure tank at each point, NaN where there is none. */
-  tankLevelAtPoint: Float64Array;
+  /** Grid points with an event, strictly increasing. */
+  points: number[];
+  /** Sum of fitting K at each event point (applied with the velocity of the pipe leaving the point). */
+  kAt: number[];
+  /** Water level of a break-pressure tank at each event point, NaN where there is none. */
+  tankLevelM: number[];
+}
+
+/** Head lost AT the event points, m: the line just upstream of a point is its value there plus the drop. */
+export interface PointDrops {
+  /** The event points (`PointEvents.points`); the drop is zero at every other point. */
+  points: readonly number[];
+  /** Fitting losses plus a tank reset of the hydraulic grade, m. */
+  hydraulicM: number[];
+  /** Tank reset of the static line, m. */
+  staticM: number[];
 }
 
 /** Static line and hydraulic grade line along the grid, with the local drops that make them. */
@@ -18,10 +34,8 @@ export interface GradeLines {
   frictionLossM: Float64Array;
   /** Cumulative fitting loss from the start, m. */
   minorLossM: Float64Array;
-  /** Head lost AT each point (fitting losses plus a tank reset), m: HGL upstream = HGL + drop. */
-  hydraulicDropAtPointM: Float64Array;
-  /** Static head lost at each point (tank resets), m. */
-  staticDropAtPointM: Float64Array;
+  /** Head lost at the event points. */
+  drops: PointDrops;
   /** Head dissipated in break-pressure tanks, m (sum). */
   breakPressureDropM: number;
   /** Hydraulic grade arriving at each tank point (before its reset), in chainage order. */
@@ -43,13 +57,13 @@ export function computeGradeLines(
 ): GradeLines {
   const n = grid.chainageM.length;
   const { pieceStretch, pieceSlopeLengthM } = grid;
-  const { kAtPoint, tankLevelAtPoint } = events;
-  const staticHeadM = new Float64Array(n);
-  const hydraulicGradeM = new Float64Array(n);
-  const frictionLossM = new Float64Array(n);
-  const minorLossM = new Float64Array(n);
-  const hydraulicDropAtPointM = new Float64Array(n);
-  const staticDropAtPointM = new Float64Array(n);
+  const [staticHeadM, hydraulicGradeM, frictionLossM, minorLossM] = float64Arrays(n, 4);
+  const eventCount = events.points.length;
+  const drops: PointDrops = {
+    points: events.points,
+    hydraulicM: new Array<number>(eventCount).fill(0),
+    staticM: new Array<number>(eventCount).fill(0),
+  };
   // Start values read from a typed array like every other number in the loop: a loop variable that
   // starts as an argument is boxed at every point by the engine's optimised code.
   const starts = Float64Array.of(startHeadM, staticStartM);
@@ -59,45 +73,42 @@ export function computeGradeLines(
   let minor = 0;
   let tankDrop = 0;
   const tankArrivals: { point: number; headM: number }[] = [];
+  let e = 0;
+  let nextEvent = eventCount > 0 ? events.points[0] : -1;
   for (let j = 0; j < n; j++) {
     if (j > 0) {
       const loss = frictionGradient[pieceStretch[j - 1]] * pieceSlopeLengthM[j - 1];
       friction += loss;
       grade -= loss;
     }
-    const arriving = grade;
-    const tankLevel = tankLevelAtPoint[j];
-    if (tankLevel === tankLevel) {
-      tankArrivals.push({ point: j, headM: grade });
-      if (grade > tankLevel) {
-        tankDrop += grade - tankLevel;
-        grade = tankLevel;
+    if (j === nextEvent) {
+      const arriving = grade;
+      const tankLevel = events.tankLevelM[e];
+      if (tankLevel === tankLevel) {
+        tankArrivals.push({ point: j, headM: grade });
+        if (grade > tankLevel) {
+          tankDrop += grade - tankLevel;
+          grade = tankLevel;
+        }
+        if (level > tankLevel) {
+          drops.staticM[e] = level - tankLevel;
+          level = tankLevel;
+        }
       }
-      if (level > tankLevel) {
-        staticDropAtPointM[j] = level - tankLevel;
-        level = tankLevel;
+      const k = events.kAt[e];
+      if (k !== 0) {
+        const fitting = k * velocityHeadM[pieceStretch[j < n - 1 ? j : n - 2]];
+        minor += fitting;
+        grade -= fitting;
       }
+      drops.hydraulicM[e] = arriving - grade;
+      e++;
+      nextEvent = e < eventCount ? events.points[e] : -1;
     }
-    const k = kAtPoint[j];
-    if (k !== 0) {
-      const fitting = k * velocityHeadM[pieceStretch[j < n - 1 ? j : n - 2]];
-      minor += fitting;
-      grade -= fitting;
-    }
-    hydraulicDropAtPointM[j] = arriving - grade;
     hydraulicGradeM[j] = grade;
     staticHeadM[j] = level;
     frictionLossM[j] = friction;
     minorLossM[j] = minor;
   }
-  return {
-    staticHeadM,
-    hydraulicGradeM,
-    frictionLossM,
-    minorLossM,
-    hydraulicDropAtPointM,
-    staticDropAtPointM,
-    breakPressureDropM: tankDrop,
-    tankArrivals,
-  };
+  return { staticHeadM, hydraulicGradeM, frictionLossM, minorLossM, drops, breakPressureDropM: tankDrop, tankArrivals };
 }

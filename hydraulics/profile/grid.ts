@@ -1,4 +1,5 @@
 import { STRETCH_JOIN_TOLERANCE_M } from './validate/stretches';
+import { float64Arrays, int32Arrays } from './point-arrays';
 import type { LineStation, LineStretch } from './types';
 
 /**
@@ -22,13 +23,30 @@ export interface ProfileGrid {
   pieceSlopeLengthM: Float64Array;
 }
 
-/** Sorted, de-duplicated extra chainages that do not already sit on a station. */
+/** Index of the last station at or before `chainageM`, searching from `from` on (0 when it lies before them all). */
+function lastStationAtOrBefore(stations: readonly LineStation[], chainageM: number, from: number): number {
+  let lo = from;
+  let hi = stations.length - 1;
+  if (stations[hi].chainageM <= chainageM) return hi;
+  // Invariant: stations[lo] is at or before the chainage (or lo is the start), stations[hi] after it.
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (stations[mid].chainageM <= chainageM) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * Sorted, de-duplicated extra chainages that do not already sit on a station. Each is found by
+ * bisection: a handful of extras on a 100,000-station line should not walk the stations.
+ */
 function extraChainages(stations: readonly LineStation[], wanted: readonly number[]): number[] {
   const sorted = [...wanted].sort((a, b) => a - b);
   const out: number[] = [];
   let k = 0;
   for (const c of sorted) {
-    while (k < stations.length - 1 && stations[k + 1].chainageM <= c) k++;
+    k = lastStationAtOrBefore(stations, c, k);
     const nearStation =
       Math.abs(stations[k].chainageM - c) <= STRETCH_JOIN_TOLERANCE_M ||
       (k + 1 < stations.length && Math.abs(stations[k + 1].chainageM - c) <= STRETCH_JOIN_TOLERANCE_M);
@@ -51,10 +69,8 @@ export function buildProfileGrid(
 ): ProfileGrid {
   const extras = extraChainages(stations, extraChainagesM);
   const n = stations.length + extras.length;
-  const chainageM = new Float64Array(n);
-  const groundElevationM = new Float64Array(n);
-  const pipeElevationM = new Float64Array(n);
-  const stationIndex = new Int32Array(n);
+  const [chainageM, groundElevationM, pipeElevationM, slopeLengths] = float64Arrays(n, 4);
+  const [stationIndex, stretchOfPiece] = int32Arrays(n, 2);
   let e = 0;
   let p = 0;
   for (let i = 0; i < stations.length; i++) {
@@ -80,15 +96,17 @@ export function buildProfileGrid(
     stationIndex[p] = i;
     p++;
   }
-  const pieceStretch = new Int32Array(n - 1);
-  const pieceSlopeLengthM = new Float64Array(n - 1);
+  const pieceStretch = stretchOfPiece.subarray(0, n - 1);
+  const pieceSlopeLengthM = slopeLengths.subarray(0, n - 1);
+  const lastStretch = stretches.length - 1;
   let s = 0;
+  let stretchEndM = stretches[0].toM;
   for (let j = 0; j < n - 1; j++) {
     const dx = chainageM[j + 1] - chainageM[j];
     const dz = pipeElevationM[j + 1] - pipeElevationM[j];
     pieceSlopeLengthM[j] = Math.sqrt(dx * dx + dz * dz);
     const midM = chainageM[j] + 0.5 * dx;
-    while (s < stretches.length - 1 && stretches[s].toM <= midM) s++;
+    while (s < lastStretch && stretchEndM <= midM) stretchEndM = stretches[++s].toM;
     pieceStretch[j] = s;
   }
   return { chainageM, groundElevationM, pipeElevationM, stationIndex, pieceStretch, pieceSlopeLengthM };

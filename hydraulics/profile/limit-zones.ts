@@ -1,3 +1,5 @@
+import type { PointDrops } from './grade-lines';
+
 /** A chainage range where a quantity passes a limit, with exact (interpolated) ends. */
 export interface LimitRange {
   /** Where the quantity first passes the limit, m. */
@@ -136,6 +138,11 @@ class RangeCollector {
     this.step(a, b, c0, c1);
   }
 
+  /** Nothing open and nothing waiting to merge: a piece wholly inside the limit changes nothing. */
+  idle(): boolean {
+    return !this.open && this.pending === null;
+  }
+
   finish(lastM: number): LimitRange[] {
     if (this.open) this.close(lastM);
     this.flush();
@@ -187,34 +194,87 @@ function sweep(
   }
 }
 
+/** Arguments of `findProfileLimitRanges`. */
+export interface ProfileLimitArgs {
+  chainageM: Float64Array;
+  /** Stretch of each piece (point j to j+1). */
+  pieceStretch: Int32Array;
+  /** The flowing pressure just downstream of each point, checked for falling below three fixed limits. */
+  flowingM: Float64Array;
+  flowingLimitsM: readonly [number, number, number];
+  /** The static pressure just downstream of each point, checked for rising above per-stretch limits. */
+  stillM: Float64Array;
+  stillLimitsByStretchM: readonly Float64Array[];
+  /** Drops at the event points: `hydraulicM` for the flowing pressure, `staticM` for the static. */
+  drops: PointDrops;
+  /** As in `findLimitRanges`. */
+  toleranceM?: number;
+  mergeWithinM?: number;
+}
+
 /**
- * `findLimitRanges` for three fixed limits on the same quantity, in one pass: the flowing
- * pressure against zero, the siphon limit and the vapour limit read the same two values per piece.
- * Same arithmetic, same ranges as three separate calls.
+ * Every limit range of a profile in one pass: the flowing pressure below three fixed limits (zero,
+ * the siphon limit, the vapour limit) and the static pressure above one or more per-stretch limits
+ * (the allowable head, and with surge the allowable head less the surge). Same arithmetic, same
+ * ranges as one `findLimitRanges` call per limit; one pass reads each value once.
  */
-export function findThreeLimitRanges(
-  args: Omit<LimitRangeArgs, 'limitM' | 'pieceStretch'>,
-  limits: readonly [number, number, number],
-): [LimitRange[], LimitRange[], LimitRange[]] {
-  const { chainageM, valueM, dropAtPointM } = args;
-  const sign = args.side === 'below' ? -1 : 1;
+export function findProfileLimitRanges(args: ProfileLimitArgs): { flowing: LimitRange[][]; still: LimitRange[][] } {
+  const { chainageM, pieceStretch, flowingM: flowValue, stillM: stillValue, stillLimitsByStretchM, drops } = args;
   const tolerance = args.toleranceM ?? 1e-6;
   const merge = Math.max(args.mergeWithinM ?? 0, 0);
-  const r0 = new RangeCollector(tolerance, merge);
-  const r1 = new RangeCollector(tolerance, merge);
-  const r2 = new RangeCollector(tolerance, merge);
-
-  const [l0, l1, l2] = limits;
+  const collector = () => new RangeCollector(tolerance, merge);
+  const [below0, below1, below2] = [collector(), collector(), collector()];
+  const [above0, above1] = [collector(), collector()];
+  const [l0, l1, l2] = args.flowingLimitsM;
+  const aboveCount = stillLimitsByStretchM.length;
+  if (aboveCount < 1 || aboveCount > 2) throw new RangeError(`one or two static limits, got ${aboveCount}`);
+  const limitA = stillLimitsByStretchM[0];
+  // With one static limit the second collector follows the same limit and is dropped below.
+  const limitB = stillLimitsByStretchM[aboveCount - 1];
+  const dropPoints = drops.points;
+  let e = 0;
+  while (e < dropPoints.length && dropPoints[e] < 1) e++;
+  const highestFlowingLimit = Float64Array.of(Math.max(l0, l1, l2));
   const n = chainageM.length;
+  // While every collector is idle (nothing open, nothing waiting to merge), a piece inside all
+  // five limits changes nothing: it is passed over without a call. On most lines that is most pieces.
+  let quiet = true;
   for (let j = 0; j < n - 1; j++) {
-    const start = valueM[j];
-    const end = valueM[j + 1] + (dropAtPointM === null ? 0 : dropAtPointM[j + 1]);
+    const start = flowValue[j];
+    let end = flowValue[j + 1];
+    const stillStart = stillValue[j];
+    let stillEnd = stillValue[j + 1];
+    // The value arriving at an event point is its value there plus the drop at it.
+    if (e < dropPoints.length && dropPoints[e] === j + 1) {
+      end += drops.hydraulicM[e];
+      stillEnd += drops.staticM[e];
+      e++;
+    }
+    const stretch = pieceStretch[j];
+    const a = limitA[stretch];
+    const b = limitB[stretch];
+    if (
+      quiet &&
+      start >= highestFlowingLimit[0] &&
+      end >= highestFlowingLimit[0] &&
+      stillStart <= a &&
+      stillEnd <= a &&
+      stillStart <= b &&
+      stillEnd <= b
+    )
+      continue;
     const c0 = chainageM[j];
     const c1 = chainageM[j + 1];
-    r0.fastStep(sign * (start - l0), sign * (end - l0), c0, c1);
-    r1.fastStep(sign * (start - l1), sign * (end - l1), c0, c1);
-    r2.fastStep(sign * (start - l2), sign * (end - l2), c0, c1);
+    below0.fastStep(-(start - l0), -(end - l0), c0, c1);
+    below1.fastStep(-(start - l1), -(end - l1), c0, c1);
+    below2.fastStep(-(start - l2), -(end - l2), c0, c1);
+    above0.fastStep(stillStart - a, stillEnd - a, c0, c1);
+    if (aboveCount === 2) above1.fastStep(stillStart - b, stillEnd - b, c0, c1);
+    quiet = below0.idle() && below1.idle() && below2.idle() && above0.idle() && above1.idle();
   }
   const lastM = chainageM[n - 1];
-  return [r0.finish(lastM), r1.finish(lastM), r2.finish(lastM)];
+  return {
+    flowing: [below0.finish(lastM), below1.finish(lastM), below2.finish(lastM)],
+    still: aboveCount === 2 ? [above0.finish(lastM), above1.finish(lastM)] : [above0.finish(lastM)],
+  };
 }

@@ -33,25 +33,52 @@ export function eventChainages(input: LineInput, tanks: readonly PlacedTank[]): 
 }
 
 /**
- * Dense per-point K and tank levels. A tank without a stated level gets the ground elevation at
- * its chainage (a tank standing on the ground). Returns the tanks with their levels filled in.
+ * The event points of the line: fittings' K and tank levels by grid point. A tank without a
+ * stated level gets the ground elevation at its chainage (a tank standing on the ground). Returns
+ * the tanks with their levels filled in.
  */
 export function pointEvents(
   grid: ProfileGrid,
   input: LineInput,
   tanks: readonly PlacedTank[],
 ): { events: PointEvents; tanks: { chainageM: number; waterLevelM: number }[] } {
-  const n = grid.chainageM.length;
-  const kAtPoint = new Float64Array(n);
-  const tankLevelAtPoint = new Float64Array(n).fill(Number.NaN);
-  for (const fitting of input.fittings ?? []) kAtPoint[pointIndexAt(grid.chainageM, fitting.chainageM)] += fitting.k;
+  const byPoint = new Map<number, { k: number; tankLevelM: number }>();
+  const eventAt = (point: number) => {
+    let event = byPoint.get(point);
+    if (event === undefined) {
+      event = { k: 0, tankLevelM: Number.NaN };
+      byPoint.set(point, event);
+    }
+    return event;
+  };
+  for (const fitting of input.fittings ?? []) eventAt(pointIndexAt(grid.chainageM, fitting.chainageM)).k += fitting.k;
   const placed = tanks.map((tank) => {
     const point = pointIndexAt(grid.chainageM, tank.chainageM);
     const waterLevelM = tank.waterLevelM ?? grid.groundElevationM[point];
     // Two tanks at one point: the lower level governs, as it would on site.
-    const existing = tankLevelAtPoint[point];
-    tankLevelAtPoint[point] = existing === existing ? Math.min(existing, waterLevelM) : waterLevelM;
+    const event = eventAt(point);
+    event.tankLevelM = event.tankLevelM === event.tankLevelM ? Math.min(event.tankLevelM, waterLevelM) : waterLevelM;
     return { chainageM: tank.chainageM, waterLevelM };
   });
-  return { events: { kAtPoint, tankLevelAtPoint }, tanks: placed };
+  const points = [...byPoint.keys()].sort((a, b) => a - b);
+  return {
+    events: {
+      points,
+      kAt: points.map((point) => byPoint.get(point)!.k),
+      tankLevelM: points.map((point) => byPoint.get(point)!.tankLevelM),
+    },
+    tanks: placed,
+  };
+}
+
+/** Adds K at a point, making it an event point when it is not one yet. */
+export function addKAtPoint(events: PointEvents, point: number, k: number): void {
+  let e = 0;
+  while (e < events.points.length && events.points[e] < point) e++;
+  if (events.points[e] !== point) {
+    events.points.splice(e, 0, point);
+    events.kAt.splice(e, 0, 0);
+    events.tankLevelM.splice(e, 0, Number.NaN);
+  }
+  events.kAt[e] += k;
 }

@@ -41,8 +41,10 @@ export function buildReaches(
   });
   let current = open(0, startHeadM);
   reaches.push(current);
-  for (let j = 0; j < n; j++) {
-    const tankLevel = events.tankLevelAtPoint[j];
+  const { points, kAt, tankLevelM } = events;
+  for (let e = 0; e < points.length; e++) {
+    const j = points[e];
+    const tankLevel = tankLevelM[e];
     if (tankLevel === tankLevel && j > 0) {
       current.toPoint = j;
       current.requiredEndHeadM = tankLevel;
@@ -51,9 +53,14 @@ export function buildReaches(
     } else if (tankLevel === tankLevel) {
       current.startHeadM = Math.min(current.startHeadM, tankLevel);
     }
-    const stretch = grid.pieceStretch[j < n - 1 ? j : n - 2];
-    current.kByStretch[stretch] += events.kAtPoint[j];
-    if (j < n - 1) current.lengthByStretchM[stretch] += grid.pieceSlopeLengthM[j];
+    current.kByStretch[grid.pieceStretch[j < n - 1 ? j : n - 2]] += kAt[e];
+  }
+  // Lengths by stretch, reach by reach: pieces from one reach's first point to the next one's.
+  const { pieceStretch, pieceSlopeLengthM } = grid;
+  for (const reach of reaches) {
+    const lengths = reach.lengthByStretchM;
+    const last = Math.min(reach.toPoint, n - 1);
+    for (let j = reach.fromPoint; j < last; j++) lengths[pieceStretch[j]] += pieceSlopeLengthM[j];
   }
   return reaches;
 }

@@ -2,6 +2,7 @@ import { deratedPressureRatingPa } from '../catalogue/derating';
 import type { PipeSpec } from '../catalogue/pipe-spec';
 import { joukowskyHeadRise } from '../surge/joukowsky';
 import { pressurePaToHeadM } from '../units';
+import type { PointDrops } from './grade-lines';
 import type { ProfileGrid } from './grid';
 import type { StretchResult } from './result-types';
 import type { StretchHydraulics } from './stretch-hydraulics';
@@ -29,16 +30,36 @@ export function stretchResults(
   staticPressureHeadM: Float64Array,
   temperatureC: number,
   safetyFactor: number,
-  staticDropAtPointM: Float64Array | null = null,
+  staticDrops: PointDrops | null = null,
 ): StretchResult[] {
   const count = stretches.length;
   const slopeLengthM = new Float64Array(count);
   const maxStatic = new Float64Array(count).fill(-Infinity);
-  for (let j = 0; j < grid.pieceStretch.length; j++) {
-    const s = grid.pieceStretch[j];
-    slopeLengthM[s] += grid.pieceSlopeLengthM[j];
-    const arriving = staticPressureHeadM[j + 1] + (staticDropAtPointM === null ? 0 : staticDropAtPointM[j + 1]);
-    const high = Math.max(staticPressureHeadM[j], arriving);
+  const { pieceStretch, pieceSlopeLengthM } = grid;
+  // Running sums in locals, stored when the stretch changes: a sum kept in the array itself is
+  // a store and a load of one slot at every point, each waiting on the last.
+  const running = Float64Array.of(0, -Infinity);
+  let s = pieceStretch.length > 0 ? pieceStretch[0] : 0;
+  let length = running[0];
+  let high = running[1];
+  const dropPoints = staticDrops?.points ?? [];
+  let e = 0;
+  while (e < dropPoints.length && dropPoints[e] < 1) e++;
+  for (let j = 0; j < pieceStretch.length; j++) {
+    if (pieceStretch[j] !== s) {
+      slopeLengthM[s] += length;
+      if (high > maxStatic[s]) maxStatic[s] = high;
+      s = pieceStretch[j];
+      length = running[0];
+      high = running[1];
+    }
+    length += pieceSlopeLengthM[j];
+    let arriving = staticPressureHeadM[j + 1];
+    if (e < dropPoints.length && dropPoints[e] === j + 1) arriving += staticDrops!.staticM[e++];
+    high = Math.max(high, staticPressureHeadM[j], arriving);
+  }
+  if (pieceStretch.length > 0) {
+    slopeLengthM[s] += length;
     if (high > maxStatic[s]) maxStatic[s] = high;
   }
   return stretches.map((stretch, s) => ({

@@ -1,6 +1,6 @@
 import type { GradeLines } from './grade-lines';
 import type { ProfileGrid } from './grid';
-import { findLimitRanges, findThreeLimitRanges } from './limit-zones';
+import { findProfileLimitRanges } from './limit-zones';
 import type { LimitCrossing, LimitKind, LimitZone, PressureLimits } from './result-types';
 
 /** Inputs of `computeZones`. */
@@ -25,35 +25,31 @@ export interface ZoneInputs {
  */
 export function computeZones(z: ZoneInputs): LimitZone[] {
   const { grid, lines } = z;
-  const chainageM = grid.chainageM;
-  const mergeWithinM = z.heightScatterM ?? 0;
-  const flowing = { chainageM, valueM: z.pressureHeadM, dropAtPointM: lines.hydraulicDropAtPointM, mergeWithinM };
-  const still = { chainageM, valueM: z.staticPressureHeadM, dropAtPointM: lines.staticDropAtPointM, mergeWithinM };
+  const surgeOn = z.surgeHeadM.some((head) => head > 0);
   const tag =
     (kind: LimitKind) =>
     (range: Omit<LimitZone, 'kind'>): LimitZone => ({ kind, ...range });
-  const [negative, siphon, vapour] = findThreeLimitRanges({ ...flowing, side: 'below' }, [
-    0,
-    -z.limits.siphonLimitHeadM,
-    -z.limits.vapourLimitHeadM,
-  ]);
-  const zones: LimitZone[] = [
+  const { flowing, still } = findProfileLimitRanges({
+    chainageM: grid.chainageM,
+    pieceStretch: grid.pieceStretch,
+    flowingM: z.pressureHeadM,
+    flowingLimitsM: [0, -z.limits.siphonLimitHeadM, -z.limits.vapourLimitHeadM],
+    stillM: z.staticPressureHeadM,
+    drops: lines.drops,
+    stillLimitsByStretchM: surgeOn
+      ? [z.allowableHeadM, z.allowableHeadM.map((allowable, s) => allowable - z.surgeHeadM[s])]
+      : [z.allowableHeadM],
+    mergeWithinM: z.heightScatterM ?? 0,
+  });
+  const [negative, siphon, vapour] = flowing;
+  const [overRating, surgeOverRating = []] = still;
+  return [
     ...negative.map(tag('negative-pressure')),
     ...siphon.map(tag('siphon-limit')),
     ...vapour.map(tag('vapour-limit')),
-    ...findLimitRanges({ ...still, limitM: z.allowableHeadM, pieceStretch: grid.pieceStretch, side: 'above' }).map(
-      tag('static-over-rating'),
-    ),
+    ...overRating.map(tag('static-over-rating')),
+    ...surgeOverRating.map(tag('surge-over-rating')),
   ];
-  if (z.surgeHeadM.some((head) => head > 0)) {
-    const surgeLimit = z.allowableHeadM.map((allowable, s) => allowable - z.surgeHeadM[s]);
-    zones.push(
-      ...findLimitRanges({ ...still, limitM: surgeLimit, pieceStretch: grid.pieceStretch, side: 'above' }).map(
-        tag('surge-over-rating'),
-      ),
-    );
-  }
-  return zones;
 }
 
 /** Zone ends that lie inside the line, as crossings in chainage order. */
