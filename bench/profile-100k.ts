@@ -61,8 +61,10 @@ function profileBenchmark(name: string, method: FrictionMethod): Benchmark {
     name,
     run: () => analyzeLine(get()),
     floor: () => sumDistances(get().stations),
-    // Enough warm-up for the optimising compiler to settle on the hot loops.
-    warmUps: 10,
+    // Enough warm-up for the optimising compiler to settle on the hot loops: traced, it still
+    // optimised and re-optimised parts of the analysis up to about the 25th run, and each run
+    // before that was slower by up to half.
+    warmUps: 40,
     runs: 31,
   };
 }

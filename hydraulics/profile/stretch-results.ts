@@ -56,7 +56,9 @@ export function stretchResults(
     length += pieceSlopeLengthM[j];
     let arriving = staticPressureHeadM[j + 1];
     if (e < dropPoints.length && dropPoints[e] === j + 1) arriving += staticDrops!.staticM[e++];
-    high = Math.max(high, staticPressureHeadM[j], arriving);
+    const leaving = staticPressureHeadM[j];
+    if (leaving > high) high = leaving;
+    if (arriving > high) high = arriving;
   }
   if (pieceStretch.length > 0) {
     slopeLengthM[s] += length;
