@@ -38,9 +38,14 @@ export function openCsvTable(rawText: string, dialect: CsvDialect): CsvTable {
       let scanLine = startLine;
       let rowStart = 0;
       let lastReported = -1;
+      // Line breaks counted by searching from one to the next, not by reading every character.
       const lineAt = (pos: number): number => {
-        for (; scanPos < pos; scanPos += 1) if (body.charCodeAt(scanPos) === 10) scanLine += 1;
-        return scanLine;
+        for (;;) {
+          const lineBreak = body.indexOf('\n', scanPos);
+          if (lineBreak < 0 || lineBreak >= pos) return scanLine;
+          scanLine += 1;
+          scanPos = lineBreak + 1;
+        }
       };
       Papa.parse<string[]>(body, {
         delimiter: dialect.delimiter,
