@@ -73,3 +73,56 @@ function profileBenchmark(name: string, method: FrictionMethod): Benchmark {
 export const profile100k: Benchmark = profileBenchmark('profile-100k', 'hazen-williams');
 /** The same with Darcy-Weisbach friction. */
 export const profile100kDw: Benchmark = profileBenchmark('profile-100k-dw', 'darcy-weisbach');
+
+/**
+ * A reference, not a target: what writing the analysis's per-point results alone costs on this machine, over the
+ * same floor. One fused pass reads each station and writes the twelve arrays a profile returns (chainage, ground,
+ * pipe, static line, grade line, flowing and static pressure, velocity, friction and fitting losses, station and
+ * stretch index) with placeholder hydraulics: no checks, no zones, no planning. The gap between its ratio and
+ * `profile-100k`'s is what the checks cost.
+ */
+function writeResultArrays(stations: readonly LineStation[]): Float64Array[] {
+  const n = stations.length;
+  const floats = Array.from({ length: 10 }, () => new Float64Array(n));
+  const [chainage, ground, pipe, staticLine, grade, pressure, staticPressure, velocity, friction, fittings] = floats;
+  const stationIndex = new Int32Array(n);
+  const stretchIndex = new Int32Array(n);
+  let gradeM = 901;
+  let frictionM = 0;
+  for (let j = 0; j < n; j++) {
+    const station = stations[j];
+    chainage[j] = station.chainageM;
+    ground[j] = station.groundElevationM;
+    const pipeM = station.groundElevationM - (station.coverM ?? 0.75);
+    pipe[j] = pipeM;
+    if (j > 0) {
+      const dx = chainage[j] - chainage[j - 1];
+      const dz = pipeM - pipe[j - 1];
+      const loss = 0.001 * Math.sqrt(dx * dx + dz * dz);
+      frictionM += loss;
+      gradeM -= loss;
+    }
+    staticLine[j] = 901;
+    grade[j] = gradeM;
+    pressure[j] = gradeM - pipeM;
+    staticPressure[j] = 901 - pipeM;
+    velocity[j] = 0.4;
+    friction[j] = frictionM;
+    fittings[j] = 0;
+    stationIndex[j] = j;
+    stretchIndex[j] = j >> 11;
+  }
+  return floats;
+}
+
+let referenceLine: LineInput | undefined;
+const referenceStations = () => (referenceLine ??= benchmarkLine('hazen-williams')).stations;
+
+/** `profile-100k-results`: the cost of the results alone (see `writeResultArrays`), with the same floor. */
+export const profile100kResults: Benchmark = {
+  name: 'profile-100k-results',
+  run: () => writeResultArrays(referenceStations()),
+  floor: () => sumDistances(referenceStations()),
+  warmUps: 40,
+  runs: 31,
+};

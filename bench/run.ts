@@ -4,6 +4,7 @@ import { runBenchmark, type Benchmark } from './harness';
 const REGISTRY: Record<string, () => Promise<Benchmark>> = {
   'profile-100k': async () => (await import('./profile-100k')).profile100k,
   'profile-100k-dw': async () => (await import('./profile-100k')).profile100kDw,
+  'profile-100k-results': async () => (await import('./profile-100k')).profile100kResults,
   'line-5k': async () => (await import('./line-5k')).line5k,
   'line-5k-draw': async () => (await import('./line-5k')).line5kDraw,
   'draw-100k': async () => (await import('./line-5k')).draw100k,
