@@ -145,4 +145,54 @@ describe('planBreakPressureTanks', () => {
       { numRuns: 300 },
     );
   });
+
+  it('with a design flow, the grade from each new tank keeps the clearance over the pipe at every point after it', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.integer({ min: -60, max: 30 }), { minLength: 2, maxLength: 10 }),
+        fc.array(fc.integer({ min: 0, max: 20 }), { minLength: 10, maxLength: 10 }),
+        fc.integer({ min: 40, max: 90 }),
+        fc.integer({ min: 0, max: 6 }),
+        fc.integer({ min: 0, max: 3 }),
+        (steps, lossSteps, allowableM, clearanceM, raiseM) => {
+          const chainage = [0];
+          const ground = [500];
+          for (const step of steps) {
+            chainage.push(chainage[chainage.length - 1] + 100);
+            ground.push(ground[ground.length - 1] + step);
+          }
+          // Cover between 0.5 and 1.5 m; the loss grows along the line (friction and fittings).
+          const pipe = ground.map((z, j) => z - 0.5 - (j % 3) * 0.5);
+          const loss = [0];
+          for (let j = 1; j < chainage.length; j++) loss.push(loss[j - 1] + lossSteps[j - 1] / 4);
+          const plan = planBreakPressureTanks({
+            chainageM: chainage,
+            groundElevationM: ground,
+            pipeElevationM: pipe,
+            allowableHeadM: allowableM,
+            startLevelM: Math.max(...ground) + 2,
+            tankWaterAboveGroundM: raiseM,
+            headLossToPointM: loss,
+            summitClearanceM: clearanceM,
+          });
+          if (!plan.feasible) return;
+          const lossAt = (c: number): number => {
+            const j = Math.min(chainage.length - 2, Math.floor(c / 100));
+            return loss[j] + ((c - chainage[j]) / 100) * (loss[j + 1] - loss[j]);
+          };
+          for (const tank of plan.tanks) {
+            const lossAtTank = lossAt(tank.chainageM);
+            chainage.forEach((c, j) => {
+              if (c < tank.chainageM) return;
+              const grade = tank.waterLevelM - (loss[j] - lossAtTank);
+              expect(grade, `tank at ${tank.chainageM}, point ${c}`).toBeGreaterThanOrEqual(
+                pipe[j] + clearanceM - 1e-6,
+              );
+            });
+          }
+        },
+      ),
+      { numRuns: 400 },
+    );
+  });
 });
