@@ -6,7 +6,6 @@ import { addKAtPoint, eventChainages, pointEvents, tanksOf } from './line-events
 import { pressureLimits } from './pressure-limits';
 import { pumpShutoffGradeM } from './pump-shutoff';
 import { findGravityFlow } from './find-flow';
-import { float64Arrays } from './point-arrays';
 import { buildReaches, type Reach } from './reaches';
 import { resolveStretchPipes } from './resolve-pipes';
 import type { LineProfile, ReachResult } from './result-types';
@@ -116,7 +115,9 @@ export function profileModel(input: LineInput): ProfileModel {
     anyFlowM3s === 0 ? heads.staticM : heads.flowingM,
     heads.staticM,
   );
-  const [pressureHeadM, staticPressureHeadM, velocityMs] = float64Arrays(n, 3);
+  const pressureHeadM = new Float64Array(n);
+  const staticPressureHeadM = new Float64Array(n);
+  const velocityMs = new Float64Array(n);
   const stretchIndex = new Int32Array(n);
   // One sweep, its arrays and branches hoisted: the loop runs once per point of a long line.
   const { pieceStretch, pipeElevationM } = grid;

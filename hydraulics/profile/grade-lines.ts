@@ -1,5 +1,4 @@
 import type { ProfileGrid } from './grid';
-import { float64Arrays } from './point-arrays';
 
 /**
  * Where the line's head is reset or lost locally: the few points that carry a fitting or a
@@ -57,7 +56,10 @@ export function computeGradeLines(
 ): GradeLines {
   const n = grid.chainageM.length;
   const { pieceStretch, pieceSlopeLengthM } = grid;
-  const [staticHeadM, hydraulicGradeM, frictionLossM, minorLossM] = float64Arrays(n, 4);
+  const staticHeadM = new Float64Array(n);
+  const hydraulicGradeM = new Float64Array(n);
+  const frictionLossM = new Float64Array(n);
+  const minorLossM = new Float64Array(n);
   const eventCount = events.points.length;
   const drops: PointDrops = {
     points: events.points,

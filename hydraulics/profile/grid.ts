@@ -1,5 +1,4 @@
 import { STRETCH_JOIN_TOLERANCE_M } from './validate/stretches';
-import { float64Arrays, int32Arrays } from './point-arrays';
 import type { LineStation, LineStretch } from './types';
 
 /**
@@ -69,8 +68,10 @@ export function buildProfileGrid(
 ): ProfileGrid {
   const extras = extraChainages(stations, extraChainagesM);
   const n = stations.length + extras.length;
-  const [chainageM, groundElevationM, pipeElevationM, slopeLengths] = float64Arrays(n, 4);
-  const [stationIndex, stretchOfPiece] = int32Arrays(n, 2);
+  const chainageM = new Float64Array(n);
+  const groundElevationM = new Float64Array(n);
+  const pipeElevationM = new Float64Array(n);
+  const stationIndex = new Int32Array(n);
   let e = 0;
   let p = 0;
   for (let i = 0; i < stations.length; i++) {
@@ -96,8 +97,8 @@ export function buildProfileGrid(
     stationIndex[p] = i;
     p++;
   }
-  const pieceStretch = stretchOfPiece.subarray(0, n - 1);
-  const pieceSlopeLengthM = slopeLengths.subarray(0, n - 1);
+  const pieceStretch = new Int32Array(n - 1);
+  const pieceSlopeLengthM = new Float64Array(n - 1);
   const lastStretch = stretches.length - 1;
   let s = 0;
   let stretchEndM = stretches[0].toM;

@@ -51,12 +51,8 @@ class RangeCollector {
   readonly ranges: LimitRange[] = [];
   open = false;
   fromM = 0;
-  /**
-   * The open range's worst excess (m) and its chainage (m). Held in a typed array: on falling
-   * ground nearly every piece of a long range is a new worst, and a number stored in an object's
-   * field was measured to cost a fresh heap box per store here (half a megabyte per sweep).
-   */
-  readonly worst = new Float64Array(2);
+  worstExcessM = 0;
+  worstChainageM = 0;
   /** A closed range waits here until the value has come back inside by more than mergeWithinM. */
   pending: LimitRange | null = null;
   recoveryM = 0;
@@ -67,9 +63,9 @@ class RangeCollector {
   ) {}
 
   note(excess: number, atM: number): void {
-    if (excess > this.worst[0]) {
-      this.worst[0] = excess;
-      this.worst[1] = atM;
+    if (excess > this.worstExcessM) {
+      this.worstExcessM = excess;
+      this.worstChainageM = atM;
     }
   }
 
@@ -82,7 +78,7 @@ class RangeCollector {
   close(toM: number): void {
     this.open = false;
     if (!(toM > this.fromM)) return;
-    this.pending = { fromM: this.fromM, toM, worstExcessM: this.worst[0], worstChainageM: this.worst[1] };
+    this.pending = { fromM: this.fromM, toM, worstExcessM: this.worstExcessM, worstChainageM: this.worstChainageM };
     this.recoveryM = 0;
     if (this.mergeWithinM === 0) this.flush();
   }
@@ -90,13 +86,11 @@ class RangeCollector {
   openAt(atM: number): void {
     this.open = true;
     if (this.pending !== null) {
-      this.fromM = this.pending.fromM;
-      this.worst[0] = this.pending.worstExcessM;
-      this.worst[1] = this.pending.worstChainageM;
+      ({ fromM: this.fromM, worstExcessM: this.worstExcessM, worstChainageM: this.worstChainageM } = this.pending);
       this.pending = null;
     } else {
       this.fromM = atM;
-      this.worst[0] = 0;
+      this.worstExcessM = 0;
     }
   }
 
@@ -131,14 +125,13 @@ class RangeCollector {
   fastStep(a: number, b: number, c0: number, c1: number): void {
     if (a <= 0 && b <= 0 && !this.open && this.pending === null) return;
     if (a > 0 && b > 0 && this.open) {
-      const { worst } = this;
-      if (a > worst[0]) {
-        worst[0] = a;
-        worst[1] = c0;
+      if (a > this.worstExcessM) {
+        this.worstExcessM = a;
+        this.worstChainageM = c0;
       }
-      if (b > worst[0]) {
-        worst[0] = b;
-        worst[1] = c1;
+      if (b > this.worstExcessM) {
+        this.worstExcessM = b;
+        this.worstChainageM = c1;
       }
       return;
     }

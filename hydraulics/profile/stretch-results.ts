@@ -38,10 +38,9 @@ export function stretchResults(
   const { pieceStretch, pieceSlopeLengthM } = grid;
   // Running sums in locals, stored when the stretch changes: a sum kept in the array itself is
   // a store and a load of one slot at every point, each waiting on the last.
-  const running = Float64Array.of(0, -Infinity);
   let s = pieceStretch.length > 0 ? pieceStretch[0] : 0;
-  let length = running[0];
-  let high = running[1];
+  let length = 0;
+  let high = -Infinity;
   const dropPoints = staticDrops?.points ?? [];
   let e = 0;
   while (e < dropPoints.length && dropPoints[e] < 1) e++;
@@ -50,8 +49,8 @@ export function stretchResults(
       slopeLengthM[s] += length;
       if (high > maxStatic[s]) maxStatic[s] = high;
       s = pieceStretch[j];
-      length = running[0];
-      high = running[1];
+      length = 0;
+      high = -Infinity;
     }
     length += pieceSlopeLengthM[j];
     let arriving = staticPressureHeadM[j + 1];

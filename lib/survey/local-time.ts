@@ -114,6 +114,7 @@ function daysFromCivil(year: number, month: number, day: number): number {
   const yearOfEra = y - era * 400;
   const dayOfYear = Math.floor((153 * (month > 2 ? month - 3 : month + 9) + 2) / 5) + day - 1;
   const dayOfEra = yearOfEra * 365 + Math.floor(yearOfEra / 4) - Math.floor(yearOfEra / 100) + dayOfYear;
+  // 719,468 days run from 0000-03-01, where the cycles are counted from, to 1970-01-01.
   return era * 146097 + dayOfEra - 719468;
 }
 
